@@ -1,0 +1,90 @@
+using GemIndex.Core.Observations;
+using GemIndex.Core.Optics.Indicatrix;
+
+namespace GemIndex.Core.Catalogue;
+
+/// <summary>
+/// One catalogue entry: a gem material (species and variety, or a man-made material) with the ranges and
+/// usual reactions the bench tests can observe, how often it reaches a bench, and where its numbers come
+/// from. Indices are at 589.3 nm. Immutable; checked as a whole by the catalogue check.
+/// </summary>
+public sealed record Material
+{
+    /// <summary>A unique display name within the catalogue ("ruby", "flame-fusion synthetic ruby").</summary>
+    public required string Name { get; init; }
+
+    /// <summary>Lower-case mineral species, or the trade's plain name for a man-made or non-mineral material.</summary>
+    public required string Species { get; init; }
+
+    /// <summary>Variety or trade name ("ruby", "hessonite"); may equal the species.</summary>
+    public required string Variety { get; init; }
+
+    /// <summary>The family file this entry came from ("corundum", "glass-and-plastics").</summary>
+    public string Family { get; init; } = "";
+
+    /// <summary>Natural, synthetic, imitation, treated or composite.</summary>
+    public required OriginClass Origin { get; init; }
+
+    /// <summary>Crystal system, or amorphous.</summary>
+    public required CrystalSystem CrystalSystem { get; init; }
+
+    /// <summary>Principal index ranges at 589.3 nm, which also fix the optic character.</summary>
+    public required OpticalIndices Indices { get; init; }
+
+    /// <summary>Optic sign (None for single-index characters).</summary>
+    public OpticSign Sign { get; init; } = OpticSign.None;
+
+    /// <summary>Birefringence range; null for single-index characters.</summary>
+    public PropertyRange? Birefringence { get; init; }
+
+    /// <summary>Specific gravity range.</summary>
+    public required PropertyRange SpecificGravity { get; init; }
+
+    /// <summary>Dispersion nG − nB (430.8 nm and 686.7 nm), where known.</summary>
+    public double? Dispersion { get; init; }
+
+    /// <summary>Mohs hardness range, where known.</summary>
+    public PropertyRange? Hardness { get; init; }
+
+    /// <summary>Usual strength of pleochroism in coloured stones.</summary>
+    public PleochroismStrength Pleochroism { get; init; } = PleochroismStrength.None;
+
+    /// <summary>The polariscope reactions this material usually shows (one or more).</summary>
+    public IReadOnlyList<PolariscopeReaction> Polariscope { get; init; } = [];
+
+    /// <summary>What a heat-conduction probe usually reads.</summary>
+    public ThermalProbeResult ThermalProbe { get; init; } = ThermalProbeResult.Negative;
+
+    /// <summary>What a conductivity tester usually reads.</summary>
+    public ElectricalResult Electrical { get; init; } = ElectricalResult.Insulating;
+
+    /// <summary>Usual long-wave (365 nm) fluorescence strengths; empty when not known.</summary>
+    public IReadOnlyList<FluorescenceStrength> UvLong { get; init; } = [];
+
+    /// <summary>Usual short-wave (254 nm) fluorescence strengths; empty when not known.</summary>
+    public IReadOnlyList<FluorescenceStrength> UvShort { get; init; } = [];
+
+    /// <summary>Diagnostic absorption lines or band centres seen in a hand spectroscope, nm.</summary>
+    public IReadOnlyList<double> AbsorptionLinesNanometres { get; init; } = [];
+
+    /// <summary>Usual colours, plain lower-case words.</summary>
+    public IReadOnlyList<string> Colours { get; init; } = [];
+
+    /// <summary>How often it reaches a bench (the prior).</summary>
+    public BenchFrequency Frequency { get; init; } = BenchFrequency.Occasional;
+
+    /// <summary>Porous, fragile or treated with something that immersion would harm: do not weigh in water.</summary>
+    public bool DoNotImmerse { get; init; }
+
+    /// <summary>Short notes for the bench user.</summary>
+    public string Notes { get; init; } = "";
+
+    /// <summary>The published source of the numbers, or "from memory of standard handbook values".</summary>
+    public required string Provenance { get; init; }
+
+    /// <summary>True for an entry from the user's own catalogue rather than the shipped one.</summary>
+    public bool IsUserEntry { get; init; }
+
+    /// <summary>Optic character, from the indices.</summary>
+    public OpticCharacter OpticCharacter => Indices.Character;
+}

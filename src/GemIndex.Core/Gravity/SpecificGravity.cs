@@ -1,0 +1,39 @@
+using System.Globalization;
+using GemIndex.Core.Quantities;
+
+namespace GemIndex.Core.Gravity;
+
+/// <summary>
+/// Specific gravity (relative density against water at 4 °C, dimensionless) with its standard
+/// uncertainty. Allowed 0.5 to 25 (lighter than any cork-like organic, heavier than any gem metal or
+/// oxide); uncertainty 0 to 5. <c>default</c> is not valid and must not be used.
+/// </summary>
+public readonly record struct SpecificGravity
+{
+    /// <summary>Lowest SG accepted.</summary>
+    public const double Minimum = 0.5;
+
+    /// <summary>Highest SG accepted.</summary>
+    public const double Maximum = 25;
+
+    /// <summary>Creates an SG, checking both numbers.</summary>
+    /// <exception cref="QuantityOutOfRangeException">SG outside 0.5–25, or uncertainty outside 0–5.</exception>
+    public SpecificGravity(double value, double standardUncertainty = 0)
+    {
+        QuantityOutOfRangeException.ThrowIfOutside("specific gravity", value, Minimum, Maximum);
+        QuantityOutOfRangeException.ThrowIfOutside("specific gravity uncertainty", standardUncertainty, 0, 5);
+        Value = value;
+        StandardUncertainty = standardUncertainty;
+    }
+
+    /// <summary>The SG.</summary>
+    public double Value { get; }
+
+    /// <summary>Standard uncertainty (k = 1).</summary>
+    public double StandardUncertainty { get; }
+
+    /// <inheritdoc />
+    public override string ToString() => StandardUncertainty == 0
+        ? Value.ToString("0.00", CultureInfo.InvariantCulture)
+        : $"{Value.ToString("0.00", CultureInfo.InvariantCulture)} ± {StandardUncertainty.ToString("0.00", CultureInfo.InvariantCulture)}";
+}

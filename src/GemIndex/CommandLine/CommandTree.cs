@@ -1,0 +1,18 @@
+using System.CommandLine;
+
+namespace GemIndex.Cli.CommandLine;
+
+/// <summary>The whole command line: one file per command group, assembled here.</summary>
+internal static class CommandTree
+{
+    public static RootCommand Build()
+    {
+        var root = new RootCommand("gemindex: identify gem materials from bench readings (refractometer, SG, polariscope, spectroscope, UV, probes)");
+        root.SetAction(pr =>
+        {
+            pr.InvocationConfiguration.Output.WriteLine("The text UI is not built yet; try 'gemindex --help'.");
+            return ExitCodes.Ok;
+        });
+        return root;
+    }
+}
