@@ -1,0 +1,21 @@
+using GemIndex.Core.Readings;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>A bench sheet with its material-independent analysis done once (the rotation series).</summary>
+public sealed record AnalysedSheet
+{
+    /// <summary>Analyses the sheet.</summary>
+    public AnalysedSheet(BenchSheet sheet)
+    {
+        Sheet = sheet;
+        if (sheet.Refractometer is { Steps.Count: > 0 } r)
+            Series = RotationSeriesAnalysis.Analyse(r.Steps, r.ReadingPrecision, r.CalibrationOffset);
+    }
+
+    /// <summary>The sheet as entered.</summary>
+    public BenchSheet Sheet { get; }
+
+    /// <summary>The rotation series' analysis, when there are readings.</summary>
+    public RotationSeriesResult? Series { get; }
+}

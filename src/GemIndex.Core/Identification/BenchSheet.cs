@@ -1,0 +1,50 @@
+using GemIndex.Core.Gravity;
+using GemIndex.Core.Observations;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>
+/// Everything observed on one stone. Every test is optional: a null field is a test not done (and so a
+/// candidate for the next test to suggest).
+/// </summary>
+public sealed record BenchSheet
+{
+    /// <summary>The stone's reference.</summary>
+    public string Id { get; init; } = "";
+
+    /// <summary>Refractometer readings.</summary>
+    public RefractometerObservation? Refractometer { get; init; }
+
+    /// <summary>Specific gravity with its standard uncertainty (direct or from hydrostatic weighing).</summary>
+    public SpecificGravity? SpecificGravity { get; init; }
+
+    /// <summary>Heavy-liquid results (bounds on SG).</summary>
+    public IReadOnlyList<HeavyLiquidObservation> HeavyLiquids { get; init; } = [];
+
+    /// <summary>Reaction between crossed polarisers.</summary>
+    public PolariscopeReaction? Polariscope { get; init; }
+
+    /// <summary>Colours seen in the dichroscope.</summary>
+    public PleochroismObservation? Pleochroism { get; init; }
+
+    /// <summary>Dispersion, by eye or measured.</summary>
+    public DispersionObservation? Dispersion { get; init; }
+
+    /// <summary>Heat-conduction probe.</summary>
+    public ThermalProbeResult? ThermalProbe { get; init; }
+
+    /// <summary>Electrical conductivity tester.</summary>
+    public ElectricalResult? Electrical { get; init; }
+
+    /// <summary>Long-wave UV (365 nm) fluorescence.</summary>
+    public FluorescenceStrength? UvLong { get; init; }
+
+    /// <summary>Short-wave UV (254 nm) fluorescence.</summary>
+    public FluorescenceStrength? UvShort { get; init; }
+
+    /// <summary>Lines or band centres seen in a hand spectroscope, nm; empty = looked and saw none; null = not looked.</summary>
+    public IReadOnlyList<double>? AbsorptionLinesNanometres { get; init; }
+
+    /// <summary>The body colour in a plain word or two ("blue", "greenish yellow").</summary>
+    public string? Colour { get; init; }
+}

@@ -1,0 +1,257 @@
+using System.Globalization;
+using GemIndex.Core.Catalogue;
+using GemIndex.Core.Observations;
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Readings;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>
+/// The likelihood of a bench sheet under one catalogue material, test by test (docs/ranking.md gives the
+/// model): continuous readings by the range-convolved likelihood of <see cref="RangeLikelihood"/>, bounds by
+/// its tails, reactions by small tables that admit misreadings.
+/// </summary>
+public static class EvidenceLikelihood
+{
+    /// <summary>Extra SG spread beyond the catalogue range and the weighing (inclusions, natural variation), σ.</summary>
+    public const double SpecificGravityFloor = 0.005;
+
+    /// <summary>Half-width of the window within which a seen absorption line matches a catalogue line, nm (hand spectroscope).</summary>
+    public const double AbsorptionWindowNanometres = 8;
+
+    /// <summary>Weighs every test on the sheet for <paramref name="material"/>.</summary>
+    /// <param name="material">The candidate.</param>
+    /// <param name="sheet">The analysed sheet.</param>
+    /// <param name="explain">Also produce the contributions in words (slower).</param>
+    public static CandidateEvaluation Evaluate(Material material, AnalysedSheet sheet, bool explain = false)
+    {
+        var acc = new EvidenceAccumulator(explain);
+        RefractometerEvidence.Add(material, sheet, acc);
+        var s = sheet.Sheet;
+        if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc);
+        foreach (var liquid in s.HeavyLiquids) HeavyLiquid(material, liquid, acc);
+        if (s.Polariscope is { } pol) Polariscope(material, pol, acc);
+        if (s.Pleochroism is { } pl) Pleochroism(material, pl, IsColourless(s.Colour), acc);
+        if (s.Dispersion is { } d) Dispersion(material, d, acc);
+        if (s.ThermalProbe is { } t) Thermal(material, t, acc);
+        if (s.Electrical is { } e) Electrical(material, e, acc);
+        if (s.UvLong is { } ul) Fluorescence("uv_long", "long-wave UV", material.UvLong, ul, acc);
+        if (s.UvShort is { } us) Fluorescence("uv_short", "short-wave UV", material.UvShort, us, acc);
+        if (s.AbsorptionLinesNanometres is { } lines) Absorption(material, lines, acc);
+        if (!string.IsNullOrWhiteSpace(s.Colour)) Colour(material, s.Colour, acc);
+        return acc.Result();
+    }
+
+    private static void SpecificGravity(Material m, double value, double sigma, EvidenceAccumulator acc)
+    {
+        double s = double.Hypot(sigma, SpecificGravityFloor);
+        var range = m.SpecificGravity;
+        double z = RangeLikelihood.StandardDeviationsOutside(value, range, s);
+        acc.Add("sg", RangeLikelihood.Density(value, range, s), BroadDensities.SpecificGravity, RangeLikelihood.TwoSidedTail(z), robust: true);
+        if (acc.Explaining)
+            acc.Say($"SG {F2(value)} ± {F2(sigma)} {Where(value, range, s, "0.00")}");
+    }
+
+    private static void HeavyLiquid(Material m, HeavyLiquidObservation liquid, EvidenceAccumulator acc)
+    {
+        const double sigma = 0.01;
+        var range = m.SpecificGravity;
+        double density = liquid.Density;
+        (double f, double g, double tail) = liquid.Outcome switch
+        {
+            HeavyLiquidOutcome.Floats => (RangeLikelihood.ProbabilityBelow(density, range, sigma), 0.5,
+                RangeLikelihood.TwoSidedTail(Math.Max(0, range.Minimum - density) / sigma)),
+            HeavyLiquidOutcome.Sinks => (RangeLikelihood.ProbabilityAbove(density, range, sigma), 0.5,
+                RangeLikelihood.TwoSidedTail(Math.Max(0, density - range.Maximum) / sigma)),
+            _ => (RangeLikelihood.Density(density, range, 2 * sigma) * 4 * sigma, 4 * sigma * BroadDensities.SpecificGravity,
+                RangeLikelihood.TwoSidedTail(RangeLikelihood.StandardDeviationsOutside(density, range, 2 * sigma))),
+        };
+        acc.Add("heavy_liquids", f, g, tail, robust: true);
+        if (acc.Explaining)
+            acc.Say($"{Word(liquid.Outcome)} in liquid of density {F2(density)}: SG {range.ToString("0.00")} expected");
+    }
+
+    private static void Polariscope(Material m, PolariscopeReaction seen, EvidenceAccumulator acc)
+    {
+        IReadOnlyList<PolariscopeReaction> usual = m.Polariscope.Count > 0 ? m.Polariscope : DefaultReactions(m.OpticCharacter);
+        const double error = 0.015; // per wrong reaction: a skilled person still misreads now and then
+        double inList = (1 - 4 * error) / usual.Count;
+        double f = (usual.Contains(seen) ? inList : 0) + error;
+        acc.Add("polariscope", f, 0.25, f / (inList + error), robust: false);
+        if (acc.Explaining)
+            acc.Say($"polariscope {Word(seen)}{(usual.Contains(seen) ? ", as expected" : $", where {string.Join(" or ", usual.Select(Word))} is usual")}");
+    }
+
+    private static IReadOnlyList<PolariscopeReaction> DefaultReactions(OpticCharacter c) => c switch
+    {
+        OpticCharacter.Uniaxial or OpticCharacter.Biaxial => [PolariscopeReaction.DoublyRefractive],
+        OpticCharacter.Aggregate => [PolariscopeReaction.Aggregate],
+        _ => [PolariscopeReaction.SinglyRefractive, PolariscopeReaction.Anomalous],
+    };
+
+    private static void Pleochroism(Material m, PleochroismObservation seen, bool colourless, EvidenceAccumulator acc)
+    {
+        double[] row = PleochroismRow(m.OpticCharacter, colourless ? PleochroismStrength.None : m.Pleochroism);
+        double f = row[(int)seen];
+        acc.Add("pleochroism", f, 1 / 3.0, f / row.Max(), robust: false);
+        if (acc.Explaining)
+        {
+            string expected = m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial
+                ? $"{m.Pleochroism.ToString().ToLowerInvariant()} pleochroism ({(m.OpticCharacter == OpticCharacter.Biaxial ? "up to three colours" : "two colours at most")}) expected"
+                : "none expected (singly refractive)";
+            acc.Say($"pleochroism {seen.ToString().ToLowerInvariant()}; {expected}");
+        }
+    }
+
+    // Rows: P(none, dichroic, trichroic | character, strength). Weak pleochroism is often missed; a uniaxial stone cannot
+    // show three colours, so "trichroic" there is a misreading.
+    private static double[] PleochroismRow(OpticCharacter c, PleochroismStrength s) => (c, s) switch
+    {
+        (OpticCharacter.Uniaxial, PleochroismStrength.None) => [0.90, 0.09, 0.01],
+        (OpticCharacter.Uniaxial, PleochroismStrength.Weak) => [0.50, 0.48, 0.02],
+        (OpticCharacter.Uniaxial, PleochroismStrength.Moderate) => [0.20, 0.77, 0.03],
+        (OpticCharacter.Uniaxial, PleochroismStrength.Strong) => [0.08, 0.89, 0.03],
+        (OpticCharacter.Biaxial, PleochroismStrength.None) => [0.90, 0.07, 0.03],
+        (OpticCharacter.Biaxial, PleochroismStrength.Weak) => [0.50, 0.30, 0.20],
+        (OpticCharacter.Biaxial, PleochroismStrength.Moderate) => [0.20, 0.40, 0.40],
+        (OpticCharacter.Biaxial, PleochroismStrength.Strong) => [0.08, 0.37, 0.55],
+        _ => [0.95, 0.04, 0.01],
+    };
+
+    private static void Dispersion(Material m, DispersionObservation d, EvidenceAccumulator acc)
+    {
+        if (d.Measured is { } measured)
+        {
+            if (m.Dispersion is not { } known) { acc.Add("dispersion", BroadDensities.Dispersion, BroadDensities.Dispersion, 1, false); return; }
+            var range = new PropertyRange(0.9 * known, 1.1 * known);
+            double sigma = 0.0015;
+            double z = RangeLikelihood.StandardDeviationsOutside(measured, range, sigma);
+            acc.Add("dispersion", RangeLikelihood.Density(measured, range, sigma), BroadDensities.Dispersion, RangeLikelihood.TwoSidedTail(z), robust: true);
+            if (acc.Explaining) acc.Say($"dispersion nG − nB {F3(measured)} {Where(measured, range, sigma, "0.000")}");
+            return;
+        }
+        var seen = d.Seen!.Value;
+        if (m.Dispersion is not { } value)
+        {
+            acc.Add("dispersion", 0.2, 0.2, 1, robust: false);
+            if (acc.Explaining) acc.Say($"dispersion {Word(seen)}; not known for this material");
+            return;
+        }
+        int expected = (int)DispersionBand(value);
+        double[] weights = [.. Enumerable.Range(0, 5).Select(i => Math.Abs(i - expected) switch { 0 => 0.6, 1 => 0.15, 2 => 0.04, _ => 0.01 })];
+        double f = weights[(int)seen] / weights.Sum();
+        acc.Add("dispersion", f, 0.2, weights[(int)seen] / 0.6, robust: false);
+        if (acc.Explaining) acc.Say($"dispersion {Word(seen)}; nG − nB {F3(value)} ({Word(DispersionBand(value))}) expected");
+    }
+
+    /// <summary>The words a bench user gives the dispersion nG − nB (bands of <see cref="DispersionStrength"/>).</summary>
+    public static DispersionStrength DispersionBand(double nGminusB) => nGminusB switch
+    {
+        < 0.010 => DispersionStrength.None,
+        < 0.020 => DispersionStrength.Weak,
+        < 0.035 => DispersionStrength.Moderate,
+        < 0.070 => DispersionStrength.Strong,
+        _ => DispersionStrength.VeryStrong,
+    };
+
+    private static void Thermal(Material m, ThermalProbeResult seen, EvidenceAccumulator acc)
+    {
+        bool expectedPositive = m.ThermalProbe == ThermalProbeResult.Positive;
+        double pPositive = expectedPositive ? 0.97 : 0.02;
+        double f = seen == ThermalProbeResult.Positive ? pPositive : 1 - pPositive;
+        double g = seen == ThermalProbeResult.Positive ? 0.05 : 0.95;
+        acc.Add("thermal_probe", f, g, f / Math.Max(pPositive, 1 - pPositive), robust: false);
+        if (acc.Explaining) acc.Say($"thermal probe {Word(seen)}, {(seen == m.ThermalProbe ? "as expected" : $"where {Word(m.ThermalProbe)} is expected")}");
+    }
+
+    private static void Electrical(Material m, ElectricalResult seen, EvidenceAccumulator acc)
+    {
+        double pConductive = m.Electrical == ElectricalResult.Conductive ? 0.9 : 0.03;
+        double f = seen == ElectricalResult.Conductive ? pConductive : 1 - pConductive;
+        double g = seen == ElectricalResult.Conductive ? 0.1 : 0.9;
+        acc.Add("electrical", f, g, f / Math.Max(pConductive, 1 - pConductive), robust: false);
+        if (acc.Explaining) acc.Say($"electrically {Word(seen)}, {(seen == m.Electrical ? "as expected" : $"where {Word(m.Electrical)} is expected")}");
+    }
+
+    private static void Fluorescence(string test, string lamp, IReadOnlyList<FluorescenceStrength> usual, FluorescenceStrength seen, EvidenceAccumulator acc)
+    {
+        if (usual.Count == 0)
+        {
+            acc.Add(test, 0.25, 0.25, 1, robust: false);
+            if (acc.Explaining) acc.Say($"{lamp} {Word(seen)}; not recorded for this material");
+            return;
+        }
+        // A listed strength takes most of the mass; a neighbouring strength is a common judgement slip.
+        double Weight(FluorescenceStrength s) =>
+            (usual.Contains(s) ? 0.8 / usual.Count : 0) + (usual.Any(u => Math.Abs((int)u - (int)s) == 1) ? 0.06 : 0) + 0.02;
+        double total = Weight(FluorescenceStrength.Inert) + Weight(FluorescenceStrength.Weak) + Weight(FluorescenceStrength.Moderate) + Weight(FluorescenceStrength.Strong);
+        double f = Weight(seen) / total;
+        double best = usual.Max(Weight) / total;
+        acc.Add(test, f, 0.25, f / best, robust: false);
+        if (acc.Explaining) acc.Say($"{lamp} {Word(seen)}; {string.Join(" or ", usual.Select(Word))} usual");
+    }
+
+    private static void Absorption(Material m, IReadOnlyList<double> seen, EvidenceAccumulator acc)
+    {
+        var listed = m.AbsorptionLinesNanometres;
+        double f = 1, g = seen.Count == 0 ? 0.6 : 1;
+        int unexplained = 0;
+        foreach (double line in seen)
+        {
+            bool matched = listed.Any(l => Math.Abs(l - line) <= AbsorptionWindowNanometres);
+            f *= matched ? 0.7 : 0.05;
+            g *= 0.1;
+            if (!matched) unexplained++;
+        }
+        int missed = listed.Count(l => !seen.Any(line => Math.Abs(l - line) <= AbsorptionWindowNanometres));
+        f *= Math.Pow(0.6, missed); // faint lines are often not seen, so a missing line is weak evidence
+        acc.Add("absorption_nm", f, g, Math.Pow(0.07, unexplained), robust: false);
+        if (acc.Explaining)
+        {
+            string expected = listed.Count == 0 ? "no diagnostic lines listed" : "lines at " + string.Join(", ", listed.Select(l => l.ToString("0.#", CultureInfo.InvariantCulture))) + " nm listed";
+            string observed = seen.Count == 0 ? "no lines seen" : "lines seen at " + string.Join(", ", seen.Select(l => l.ToString("0.#", CultureInfo.InvariantCulture))) + " nm";
+            acc.Say($"{observed}; {expected}");
+        }
+    }
+
+    private static void Colour(Material m, string colour, EvidenceAccumulator acc)
+    {
+        var match = ColourWords.Compare(colour, m.Colours);
+        int n = Math.Max(1, m.Colours.Count);
+        const double elsewhere = 0.1 / 15; // a colour the catalogue does not list for it (bench colour words are loose)
+        double f = match switch
+        {
+            ColourMatch.Same => 0.8 / n + elsewhere,
+            ColourMatch.Neighbour => 0.1 / n + elsewhere,
+            _ => elsewhere,
+        };
+        if (m.Colours.Count == 0) f = 1 / 15.0;
+        acc.Add("colour", f, 1 / 15.0, f / (0.8 / n + elsewhere), robust: false);
+        if (acc.Explaining)
+            acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : string.Join(", ", m.Colours) + " usual")}");
+    }
+
+    private static bool IsColourless(string? colour) => colour is not null && ColourWords.IsColourless(colour);
+
+    /// <summary>Where a value lies against a range: "lies in 3.95–4.05" or "lies 0.12 below 3.95–4.05 (8σ)".</summary>
+    internal static string Where(double value, PropertyRange range, double sigma, string format)
+    {
+        if (range.Contains(value)) return $"lies in {range.ToString(format)}";
+        double below = range.Minimum - value, above = value - range.Maximum;
+        double distance = Math.Max(below, above);
+        string side = below > 0 ? "below" : "above";
+        return $"lies {distance.ToString(format, CultureInfo.InvariantCulture)} {side} {range.ToString(format)} ({(distance / sigma).ToString("0.#", CultureInfo.InvariantCulture)}σ)";
+    }
+
+    internal static string Word<T>(T value) where T : struct, Enum => value.ToString() switch
+    {
+        "SinglyRefractive" => "singly refractive",
+        "DoublyRefractive" => "doubly refractive",
+        "VeryStrong" => "very strong",
+        var s => s.ToLowerInvariant(),
+    };
+
+    private static string F2(double v) => v.ToString("0.00", CultureInfo.InvariantCulture);
+
+    private static string F3(double v) => v.ToString("0.000", CultureInfo.InvariantCulture);
+}

@@ -1,0 +1,28 @@
+using GemIndex.Core.Readings;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>The answer for one stone: ranked candidates, the rest of the probability, the next test and warnings.</summary>
+public sealed record IdentificationResult
+{
+    /// <summary>The stone's reference.</summary>
+    public required string Id { get; init; }
+
+    /// <summary>Candidates, best first (at most the number asked for).</summary>
+    public required IReadOnlyList<RankedCandidate> Candidates { get; init; }
+
+    /// <summary>Posterior probability that the stone is something the catalogue does not hold.</summary>
+    public required double NotInCatalogue { get; init; }
+
+    /// <summary>True when no catalogue material fits the evidence: say "nothing fits" rather than name the least bad.</summary>
+    public required bool NoGoodMatch { get; init; }
+
+    /// <summary>The most informative test not yet done, or null when none would help.</summary>
+    public NextTestAdvice? NextTest { get; init; }
+
+    /// <summary>What a bench user must know (misreadings, porous candidates, natural versus synthetic, …).</summary>
+    public required IReadOnlyList<string> Warnings { get; init; }
+
+    /// <summary>The rotation series' analysis, when there were readings.</summary>
+    public RotationSeriesResult? Series { get; init; }
+}

@@ -1,0 +1,85 @@
+using GemIndex.Core.Catalogue;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>
+/// Ranks the catalogue's materials for a bench sheet by posterior probability (docs/ranking.md):
+/// P(m | evidence) ∝ prior(m) · Π_tests P(reading | m), with "not in the catalogue" as one more outcome whose
+/// likelihood is the broad density of each reading and whose prior is <see cref="BroadDensities.NotInCataloguePrior"/>.
+/// Immutable and thread-safe once built.
+/// </summary>
+public sealed class Identifier
+{
+    /// <summary>Below this fit the best candidate is not offered as an answer.</summary>
+    public const double MinimumFit = 0.005;
+
+    private readonly Material[] _materials;
+    private readonly double[] _logPriors;
+    private readonly double _logPriorNotInCatalogue;
+
+    /// <summary>Prepares the ranking over a catalogue (at least one material).</summary>
+    /// <exception cref="ArgumentException">The catalogue is empty.</exception>
+    public Identifier(IReadOnlyList<Material> catalogue)
+    {
+        if (catalogue.Count == 0) throw new ArgumentException("the catalogue has no materials", nameof(catalogue));
+        _materials = [.. catalogue];
+        double total = _materials.Sum(m => BenchFrequencyWeights.Of(m.Frequency));
+        double inCatalogue = 1 - BroadDensities.NotInCataloguePrior;
+        _logPriors = [.. _materials.Select(m => Math.Log(inCatalogue * BenchFrequencyWeights.Of(m.Frequency) / total))];
+        _logPriorNotInCatalogue = Math.Log(BroadDensities.NotInCataloguePrior);
+    }
+
+    /// <summary>The catalogue ranked over.</summary>
+    public IReadOnlyList<Material> Materials => _materials;
+
+    /// <summary>Ranks the catalogue for one sheet.</summary>
+    /// <param name="sheet">The readings.</param>
+    /// <param name="maximumCandidates">How many candidates to return (1–1000).</param>
+    /// <param name="explainTop">For how many leading candidates to write the reasons in words.</param>
+    /// <param name="adviseNextTest">Whether to work out the next test (costs a little time).</param>
+    public IdentificationResult Identify(BenchSheet sheet, int maximumCandidates = 10, int explainTop = 3, bool adviseNextTest = true)
+    {
+        var analysed = new AnalysedSheet(sheet);
+        int n = _materials.Length;
+        var logPosterior = new double[n];
+        var fits = new double[n];
+        double logOther = 0, max = double.NegativeInfinity;
+        for (int i = 0; i < n; i++)
+        {
+            var e = EvidenceLikelihood.Evaluate(_materials[i], analysed);
+            logPosterior[i] = _logPriors[i] + e.LogLikelihood;
+            fits[i] = e.Fit;
+            logOther = e.LogLikelihoodNotInCatalogue;
+            max = Math.Max(max, logPosterior[i]);
+        }
+        logOther += _logPriorNotInCatalogue;
+        max = Math.Max(max, logOther);
+        double sum = Math.Exp(logOther - max);
+        var posterior = new double[n];
+        for (int i = 0; i < n; i++) sum += posterior[i] = Math.Exp(logPosterior[i] - max);
+        for (int i = 0; i < n; i++) posterior[i] /= sum;
+        double other = Math.Exp(logOther - max) / sum;
+
+        int[] order = [.. Enumerable.Range(0, n).OrderByDescending(i => posterior[i])];
+        var candidates = order.Take(Math.Clamp(maximumCandidates, 1, 1000)).Select((i, rank) => new RankedCandidate
+        {
+            Material = _materials[i],
+            Confidence = posterior[i],
+            Fit = fits[i],
+            Reasons = rank < explainTop ? EvidenceLikelihood.Evaluate(_materials[i], analysed, explain: true).Contributions : [],
+        }).ToList();
+        var best = candidates[0];
+        bool noGoodMatch = best.Fit < MinimumFit || other > best.Confidence;
+        var weighted = order.Where(i => posterior[i] >= 1e-3).Select(i => (_materials[i], posterior[i])).ToList();
+        return new IdentificationResult
+        {
+            Id = sheet.Id,
+            Candidates = candidates,
+            NotInCatalogue = other,
+            NoGoodMatch = noGoodMatch,
+            NextTest = adviseNextTest ? NextTestAdvisor.Advise(sheet, weighted) : null,
+            Warnings = BenchWarnings.For(analysed, candidates, other, noGoodMatch),
+            Series = analysed.Series,
+        };
+    }
+}

@@ -1,0 +1,165 @@
+using System.Globalization;
+using GemIndex.Core.Catalogue;
+using GemIndex.Core.Observations;
+using GemIndex.Core.Optics.Indicatrix;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>
+/// Picks the test not yet done whose outcome is expected to tell the leading candidates apart best: the mutual
+/// information I(material; outcome) = Σ_m Σ_o π(m) P(o|m) log₂(P(o|m)/P(o)) over the current posterior π, which is
+/// the expected drop in the posterior's entropy. Continuous readings are binned at about their precision.
+/// </summary>
+public static class NextTestAdvisor
+{
+    /// <summary>Below this expected gain no test is suggested.</summary>
+    public const double MinimumGainBits = 0.05;
+
+    /// <summary>Suggests the next test, or null when none would help.</summary>
+    /// <param name="sheet">What has been done.</param>
+    /// <param name="candidates">Materials with their posterior probabilities (need not sum to 1).</param>
+    public static NextTestAdvice? Advise(BenchSheet sheet, IReadOnlyList<(Material Material, double Probability)> candidates)
+    {
+        if (candidates.Count < 2) return null;
+        double total = candidates.Sum(c => c.Probability);
+        var weighted = candidates.Select(c => (c.Material, P: c.Probability / total)).ToList();
+        (string Test, double Gain)? best = null;
+        foreach (var (test, outcomes) in TestsNotDone(sheet))
+        {
+            double gain = MutualInformation(weighted, outcomes);
+            if (best is null || gain > best.Value.Gain + 1e-9) best = (test, gain);
+        }
+        if (best is not { } chosen || chosen.Gain < MinimumGainBits) return null;
+        var leaders = weighted.Where(c => c.P >= 0.02).Take(5).ToList();
+        return new NextTestAdvice
+        {
+            Test = chosen.Test,
+            GainBits = Math.Round(chosen.Gain, 3),
+            Separates = [.. leaders.Select(c => c.Material.Name)],
+            Expectations = [.. leaders.Select(c => $"{c.Material.Name}: {Expected(chosen.Test, c.Material)}")],
+        };
+    }
+
+    private static IEnumerable<(string, Func<Material, IEnumerable<(long, double)>>)> TestsNotDone(BenchSheet s)
+    {
+        if (s.Refractometer is null) yield return ("refractometer", Refractometer);
+        if (s.SpecificGravity is null) yield return ("sg", SpecificGravity);
+        if (s.Polariscope is null) yield return ("polariscope", Polariscope);
+        if (s.Pleochroism is null) yield return ("pleochroism", Pleochroism);
+        if (s.Dispersion is null) yield return ("dispersion", Dispersion);
+        if (s.ThermalProbe is null) yield return ("thermal_probe", m => Binary(m.ThermalProbe == ThermalProbeResult.Positive ? 0.97 : 0.02));
+        if (s.Electrical is null) yield return ("electrical", m => Binary(m.Electrical == ElectricalResult.Conductive ? 0.9 : 0.03));
+        if (s.UvLong is null) yield return ("uv_long", m => Fluorescence(m.UvLong));
+        if (s.UvShort is null) yield return ("uv_short", m => Fluorescence(m.UvShort));
+        if (s.AbsorptionLinesNanometres is null) yield return ("absorption_nm", Absorption);
+    }
+
+    private static double MutualInformation(List<(Material Material, double P)> candidates, Func<Material, IEnumerable<(long, double)>> outcomes)
+    {
+        var perMaterial = candidates.Select(c => (c.P, Outcomes: outcomes(c.Material).ToList())).ToList();
+        var marginal = new Dictionary<long, double>();
+        foreach (var (p, list) in perMaterial)
+            foreach (var (o, q) in list)
+                marginal[o] = marginal.GetValueOrDefault(o) + p * q;
+        double information = 0;
+        foreach (var (p, list) in perMaterial)
+            foreach (var (o, q) in list)
+                if (q > 0) information += p * q * Math.Log2(q / marginal[o]);
+        return Math.Max(0, information);
+    }
+
+    private static IEnumerable<(long, double)> Binary(double pFirst) => [(0, pFirst), (1, 1 - pFirst)];
+
+    private static IEnumerable<(long, double)> SpecificGravity(Material m) => Binned(m.SpecificGravity, 0.01, 0.03, 0);
+
+    private static IEnumerable<(long, double)> Refractometer(Material m)
+    {
+        var lowest = m.Indices.Lowest;
+        double over = RangeLikelihood.ProbabilityAbove(RefractometerObservation.DefaultLiquidLimit, lowest, 0.002);
+        if (over > 0.999) return [(-1, 1)];
+        // Readable: the lowest index binned at 0.004, times the birefringence binned at 0.004 (edges read at ±0.001).
+        var birefringence = RefractometerEvidence.BirefringenceRange(m);
+        var indexBins = Binned(lowest, 0.0015, 0.004, 0).ToList();
+        var birefringenceBins = Binned(birefringence, 0.0015, 0.004, 0).ToList();
+        var result = new List<(long, double)> { (-1, over) };
+        foreach (var (i, p) in indexBins)
+            foreach (var (b, q) in birefringenceBins)
+                result.Add((i * 1000 + b + 1, (1 - over) * p * q));
+        return result;
+    }
+
+    /// <summary>Probability of each bin of width <paramref name="width"/> for a reading with noise σ of a value in the range.</summary>
+    private static IEnumerable<(long, double)> Binned(PropertyRange range, double sigma, double width, long offset)
+    {
+        long first = (long)Math.Floor((range.Minimum - 3 * sigma) / width), last = (long)Math.Floor((range.Maximum + 3 * sigma) / width);
+        for (long k = first; k <= last; k++)
+        {
+            double p = RangeLikelihood.ProbabilityAbove(k * width, range, sigma) - RangeLikelihood.ProbabilityAbove((k + 1) * width, range, sigma);
+            if (p > 1e-6) yield return (k + offset, p);
+        }
+    }
+
+    private static IEnumerable<(long, double)> Polariscope(Material m)
+    {
+        var usual = m.Polariscope.Count > 0 ? m.Polariscope : [DefaultReaction(m.OpticCharacter)];
+        for (int o = 0; o < 4; o++)
+            yield return (o, (usual.Contains((PolariscopeReaction)o) ? 0.94 / usual.Count : 0) + 0.015);
+    }
+
+    private static PolariscopeReaction DefaultReaction(OpticCharacter c) => c switch
+    {
+        OpticCharacter.Uniaxial or OpticCharacter.Biaxial => PolariscopeReaction.DoublyRefractive,
+        OpticCharacter.Aggregate => PolariscopeReaction.Aggregate,
+        _ => PolariscopeReaction.SinglyRefractive,
+    };
+
+    private static IEnumerable<(long, double)> Pleochroism(Material m)
+    {
+        // Same tables as the likelihood, through a sheet with one observation each.
+        foreach (PleochroismObservation o in Enum.GetValues<PleochroismObservation>())
+        {
+            var e = EvidenceLikelihood.Evaluate(m, new AnalysedSheet(new BenchSheet { Pleochroism = o }));
+            yield return ((long)o, Math.Exp(e.LogLikelihood));
+        }
+    }
+
+    private static IEnumerable<(long, double)> Dispersion(Material m)
+    {
+        if (m.Dispersion is not { } d) return Enumerable.Range(0, 5).Select(o => ((long)o, 0.2));
+        int expected = (int)EvidenceLikelihood.DispersionBand(d);
+        double[] w = [.. Enumerable.Range(0, 5).Select(i => Math.Abs(i - expected) switch { 0 => 0.6, 1 => 0.15, 2 => 0.04, _ => 0.01 })];
+        double sum = w.Sum();
+        return Enumerable.Range(0, 5).Select(o => ((long)o, w[o] / sum));
+    }
+
+    private static IEnumerable<(long, double)> Fluorescence(IReadOnlyList<FluorescenceStrength> usual)
+    {
+        if (usual.Count == 0) return Enumerable.Range(0, 4).Select(o => ((long)o, 0.25));
+        return Enumerable.Range(0, 4).Select(o => ((long)o, usual.Contains((FluorescenceStrength)o) ? 0.85 / usual.Count + 0.0375 : 0.0375));
+    }
+
+    private static IEnumerable<(long, double)> Absorption(Material m)
+    {
+        if (m.AbsorptionLinesNanometres.Count == 0) return [(0, 1.0)];
+        // Outcome: the material's own pattern (lines rounded to 10 nm) seen, or nothing seen.
+        long signature = m.AbsorptionLinesNanometres.Aggregate(17L, (h, l) => h * 31 + (long)Math.Round(l / 10));
+        return [(signature, 0.6), (0, 0.4)];
+    }
+
+    private static string Expected(string test, Material m) => test switch
+    {
+        "sg" => $"SG {m.SpecificGravity.ToString("0.00")}",
+        "refractometer" => m.Indices.Lowest.Minimum > RefractometerObservation.DefaultLiquidLimit
+            ? "over the limit"
+            : string.Join(", ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString("0.000")}")),
+        "polariscope" => string.Join(" or ", (m.Polariscope.Count > 0 ? m.Polariscope : [DefaultReaction(m.OpticCharacter)]).Select(EvidenceLikelihood.Word)),
+        "pleochroism" => m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial ? $"{EvidenceLikelihood.Word(m.Pleochroism)} pleochroism" : "none",
+        "dispersion" => m.Dispersion is { } d ? $"nG − nB {d.ToString("0.000", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(EvidenceLikelihood.DispersionBand(d))})" : "not known",
+        "thermal_probe" => EvidenceLikelihood.Word(m.ThermalProbe),
+        "electrical" => EvidenceLikelihood.Word(m.Electrical),
+        "uv_long" => m.UvLong.Count == 0 ? "not known" : string.Join(" or ", m.UvLong.Select(EvidenceLikelihood.Word)),
+        "uv_short" => m.UvShort.Count == 0 ? "not known" : string.Join(" or ", m.UvShort.Select(EvidenceLikelihood.Word)),
+        "absorption_nm" => m.AbsorptionLinesNanometres.Count == 0 ? "no diagnostic lines" : "lines at " + string.Join(", ", m.AbsorptionLinesNanometres.Select(l => l.ToString("0.#", CultureInfo.InvariantCulture))) + " nm",
+        _ => "",
+    };
+}

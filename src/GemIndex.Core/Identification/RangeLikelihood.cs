@@ -1,0 +1,51 @@
+using GemIndex.Core.Catalogue;
+using MathNet.Numerics;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>
+/// Likelihoods of a measurement given a catalogue range: the material's true value lies anywhere in
+/// [a, b] (uniform) and is observed with Gaussian noise σ. The density is the uniform range convolved
+/// with the noise, f(x) = [Φ((b − x)/σ) − Φ((a − x)/σ)] / (b − a), with the normal density as the
+/// zero-width limit; censored observations ("above 1.79", "floats in 3.32") use the tail probability
+/// of the same convolution, P(X &gt; L) = σ/(b − a) · [G((b − L)/σ) − G((a − L)/σ)], G(t) = tΦ(t) + φ(t).
+/// </summary>
+public static class RangeLikelihood
+{
+    private const double InverseSqrtTwoPi = 0.3989422804014327;
+
+    /// <summary>Standard normal cumulative distribution Φ(z).</summary>
+    public static double Phi(double z) => 0.5 * SpecialFunctions.Erfc(-z / Math.Sqrt(2));
+
+    /// <summary>Standard normal density φ(z).</summary>
+    public static double PhiDensity(double z) => InverseSqrtTwoPi * Math.Exp(-0.5 * z * z);
+
+    /// <summary>Density of observing <paramref name="observed"/> when the truth is uniform on <paramref name="range"/> and the noise has standard deviation <paramref name="sigma"/> (&gt; 0).</summary>
+    public static double Density(double observed, PropertyRange range, double sigma)
+    {
+        double width = range.Width;
+        if (width < 1e-3 * sigma) return PhiDensity((observed - range.Centre) / sigma) / sigma;
+        return (Phi((range.Maximum - observed) / sigma) - Phi((range.Minimum - observed) / sigma)) / width;
+    }
+
+    /// <summary>Probability that the observed value exceeds <paramref name="bound"/> (truth uniform on the range, Gaussian noise σ).</summary>
+    public static double ProbabilityAbove(double bound, PropertyRange range, double sigma)
+    {
+        double width = range.Width;
+        if (width < 1e-3 * sigma) return Phi((range.Centre - bound) / sigma);
+        double g(double t) => t * Phi(t) + PhiDensity(t);
+        double p = sigma / width * (g((range.Maximum - bound) / sigma) - g((range.Minimum - bound) / sigma));
+        return Math.Clamp(p, 0, 1); // rounding only: the exact value is a probability
+    }
+
+    /// <summary>Probability that the observed value is below <paramref name="bound"/>.</summary>
+    public static double ProbabilityBelow(double bound, PropertyRange range, double sigma) =>
+        1 - ProbabilityAbove(bound, range, sigma);
+
+    /// <summary>How many standard deviations <paramref name="observed"/> lies outside the range (0 inside).</summary>
+    public static double StandardDeviationsOutside(double observed, PropertyRange range, double sigma) =>
+        Math.Max(0, Math.Max(range.Minimum - observed, observed - range.Maximum)) / sigma;
+
+    /// <summary>Two-sided tail probability of a distance of <paramref name="standardDeviations"/> σ: 2(1 − Φ(z)).</summary>
+    public static double TwoSidedTail(double standardDeviations) => SpecialFunctions.Erfc(standardDeviations / Math.Sqrt(2));
+}

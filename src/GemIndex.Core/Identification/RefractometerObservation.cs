@@ -1,0 +1,76 @@
+using GemIndex.Core.Quantities;
+using GemIndex.Core.Readings;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>
+/// What was read on the refractometer: a rotation series (facet method), a spot reading, or "over the limit"
+/// (no stone edge below the contact liquid's index: a censored observation, n &gt; limit).
+/// </summary>
+public sealed record RefractometerObservation
+{
+    /// <summary>Standard uncertainty of one facet reading in sodium light (common practice: ±0.001 on a good facet).</summary>
+    public const double DefaultFacetPrecision = 0.001;
+
+    /// <summary>Standard uncertainty of a spot reading: "about ±0.01" taken as a 90 % bound (common practice), σ ≈ 0.006.</summary>
+    public const double DefaultSpotPrecision = 0.006;
+
+    /// <summary>The usual contact liquid's index (common practice: 1.78–1.81).</summary>
+    public const double DefaultLiquidLimit = 1.79;
+
+    /// <summary>Sodium D light, nm.</summary>
+    public const double SodiumLightNanometres = 589.3;
+
+    /// <summary>Creates an observation, checking every number.</summary>
+    /// <exception cref="QuantityOutOfRangeException">A value out of range, or nothing observed at all.</exception>
+    public RefractometerObservation(RefractometerMethod method, IReadOnlyList<ShadowEdgeStep>? steps = null, double? spot = null,
+        bool overLimit = false, double lightNanometres = SodiumLightNanometres, double liquidLimit = DefaultLiquidLimit,
+        double? readingPrecision = null, double calibrationOffset = 0)
+    {
+        QuantityOutOfRangeException.ThrowIfOutside("light", lightNanometres, 380, 780, "nm");
+        QuantityOutOfRangeException.ThrowIfOutside("liquid limit", liquidLimit, 1.5, 2.2);
+        QuantityOutOfRangeException.ThrowIfOutside("calibration offset", calibrationOffset, -0.05, 0.05);
+        if (spot is { } x) QuantityOutOfRangeException.ThrowIfOutside("spot reading", x, 1.3, liquidLimit);
+        steps ??= [];
+        foreach (var step in steps)
+            if (step.High is { } h && h > liquidLimit + 0.005 || step.Low > liquidLimit + 0.005)
+                throw new QuantityOutOfRangeException("edge reading", Math.Max(step.Low, step.High ?? 0),
+                    $"at most the liquid limit {liquidLimit:0.000} (no stone edge can be seen above it)");
+        double precision = readingPrecision ?? (method == RefractometerMethod.Spot ? DefaultSpotPrecision : DefaultFacetPrecision);
+        QuantityOutOfRangeException.ThrowIfOutside("reading precision", precision, 0.0001, 0.05);
+        if (steps.Count == 0 && spot is null && !overLimit)
+            throw new QuantityOutOfRangeException("refractometer readings", 0, "at least one reading, a spot reading, or over the limit");
+        Method = method;
+        Steps = steps;
+        Spot = spot;
+        OverLimit = overLimit;
+        LightNanometres = lightNanometres;
+        LiquidLimit = liquidLimit;
+        ReadingPrecision = precision;
+        CalibrationOffset = calibrationOffset;
+    }
+
+    /// <summary>Facet or spot.</summary>
+    public RefractometerMethod Method { get; }
+
+    /// <summary>The rotation series (facet method); may be empty.</summary>
+    public IReadOnlyList<ShadowEdgeStep> Steps { get; }
+
+    /// <summary>The spot reading, if one was taken.</summary>
+    public double? Spot { get; }
+
+    /// <summary>True when no stone edge was seen below the liquid's edge (or, with readings, the high edge was not).</summary>
+    public bool OverLimit { get; }
+
+    /// <summary>The light the readings were taken in, nm.</summary>
+    public double LightNanometres { get; }
+
+    /// <summary>The contact liquid's index: nothing above it can be read.</summary>
+    public double LiquidLimit { get; }
+
+    /// <summary>Standard uncertainty of one reading.</summary>
+    public double ReadingPrecision { get; }
+
+    /// <summary>Added to every reading (from a calibration on a standard).</summary>
+    public double CalibrationOffset { get; }
+}

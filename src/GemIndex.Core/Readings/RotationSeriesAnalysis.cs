@@ -1,0 +1,245 @@
+using System.Globalization;
+using GemIndex.Core.Optics;
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Quantities;
+
+namespace GemIndex.Core.Readings;
+
+/// <summary>
+/// Turns a refractometer rotation series into optic character, principal indices, birefringence and sign
+/// (the section model of the indicatrix: every section's semi-axes satisfy α ≤ low ≤ β ≤ high ≤ γ;
+/// a uniaxial stone always shows ω as one edge; see docs/ranking.md).
+/// <list type="bullet">
+/// <item>One edge, constant: isotropic.</item>
+/// <item>Two edges, one constant: uniaxial, the constant edge ω (sign from which edge moves); both constant: uniaxial
+/// with the facet across the optic axis, sign undecided, both signs carried.</item>
+/// <item>Both edges moving: biaxial, α = lowest low, γ = highest high, β = the highest low or the lowest high — the
+/// series cannot tell which, so both hypotheses are carried with equal weight.</item>
+/// <item>Steps covering less than half the half-turn (largest gap over 90°): character undetermined; only the bounds
+/// low ∈ [α, β], high ∈ [β, γ] are used.</item>
+/// </list>
+/// An edge is "constant" when all its readings but at most one lie within 4σ of their median; a lone reading
+/// outside that band is reported as a likely misreading and left out. Low edges above the high edges of other steps
+/// (impossible for any orientation) are reported too.
+/// </summary>
+public static class RotationSeriesAnalysis
+{
+    /// <summary>Band (in reading standard deviations) within which an edge counts as constant.</summary>
+    public const double ConstantBandSigmas = 4;
+
+    /// <summary>Largest gap between steps (degrees) for which the optic character is decided.</summary>
+    public const double MaximumGapForCharacter = 90;
+
+    /// <summary>Analyses a rotation series.</summary>
+    /// <param name="steps">The steps in any order; at least one.</param>
+    /// <param name="readingPrecision">Standard uncertainty of one reading (0.0001–0.05).</param>
+    /// <param name="calibrationOffset">Added to every reading (−0.05 to 0.05).</param>
+    /// <exception cref="QuantityOutOfRangeException">No steps, or precision or offset out of range.</exception>
+    public static RotationSeriesResult Analyse(IReadOnlyList<ShadowEdgeStep> steps, double readingPrecision, double calibrationOffset = 0)
+    {
+        QuantityOutOfRangeException.ThrowIfOutside("number of rotation steps", steps.Count, 1, 1000);
+        QuantityOutOfRangeException.ThrowIfOutside("reading precision", readingPrecision, 0.0001, 0.05);
+        QuantityOutOfRangeException.ThrowIfOutside("calibration offset", calibrationOffset, -0.05, 0.05);
+        var s = steps.Select(x => new ShadowEdgeStep(x.RotationDegrees, x.Low + calibrationOffset, x.High + calibrationOffset)).ToList();
+        double sigma = readingPrecision;
+        double band = ConstantBandSigmas * sigma;
+        double gap = LargestGap(s.Select(x => x.RotationDegrees));
+        var misreadings = new List<string>();
+
+        bool twoEdges = s.Any(x => x.High is { } h && h - x.Low > band);
+        if (!twoEdges)
+            return SingleEdge(s, sigma, band, gap, misreadings);
+
+        var both = s.Where(x => x.High is not null).ToList();
+        if (gap > MaximumGapForCharacter || both.Count < 2)
+            return Partial(both, sigma, gap, misreadings);
+
+        var lows = EdgeValues(both, x => x.Low, band, "low", misreadings);
+        var highs = EdgeValues(both, x => x.High!.Value, band, "high", misreadings);
+        bool lowConstant = Spread(lows) <= band;
+        bool highConstant = Spread(highs) <= band;
+        double shortfall = Math.Pow(Math.Sin(gap * Math.PI / 360), 2);
+        if (lowConstant || highConstant)
+            return Uniaxial(lows, highs, lowConstant, highConstant, sigma, shortfall, gap, misreadings);
+        return Biaxial(both, lows, highs, sigma, band, shortfall, gap, misreadings);
+    }
+
+    private static RotationSeriesResult SingleEdge(List<ShadowEdgeStep> s, double sigma, double band, double gap, List<string> misreadings)
+    {
+        // Edges that coincide within the band count as one edge: their mean.
+        var values = EdgeValues(s, x => x.High is { } h ? (x.Low + h) / 2 : x.Low, band, "single", misreadings);
+        if (Spread(values) > band)
+        {
+            // One edge that moves: a doubly refractive stone read on one edge only, or misread.
+            double lo = values.Min(v => v.Value), hi = values.Max(v => v.Value);
+            return new RotationSeriesResult
+            {
+                Character = null,
+                UndeterminedReason = $"only one shadow edge was recorded and it moves from {F(lo)} to {F(hi)}: a doubly refractive stone needs both edges",
+                Interpretations = [new SeriesInterpretation
+                {
+                    Character = null, Lowest = Index(lo, Extreme(sigma)), Highest = Index(hi, Extreme(sigma)),
+                    Birefringence = new Birefringence(hi - lo, sigma * Math.Sqrt(2)), SamplingShortfall = 1,
+                    Description = $"one moving edge {F(lo)}–{F(hi)}: birefringence at least {F(hi - lo)}",
+                }],
+                Misreadings = misreadings,
+                LargestGapDegrees = gap,
+            };
+        }
+        double mean = values.Average(v => v.Value);
+        var n = Index(mean, Mean(sigma, values.Count));
+        return new RotationSeriesResult
+        {
+            Character = OpticCharacter.Isotropic,
+            Interpretations = [new SeriesInterpretation
+            {
+                Character = OpticCharacter.Isotropic, Constant = n, Lowest = n, Highest = n,
+                Birefringence = new Birefringence(0, sigma * Math.Sqrt(2)),
+                Description = $"one constant edge: n {F(mean)} (singly refractive)",
+            }],
+            Misreadings = misreadings,
+            LargestGapDegrees = gap,
+        };
+    }
+
+    private static RotationSeriesResult Partial(List<ShadowEdgeStep> both, double sigma, double gap, List<string> misreadings)
+    {
+        double lo = both.Min(x => x.Low), hi = both.Max(x => x.High!.Value);
+        return new RotationSeriesResult
+        {
+            Character = null,
+            UndeterminedReason = both.Count < 2
+                ? "a single rotation step cannot show which edge moves"
+                : $"the steps leave a gap of {gap.ToString("0", CultureInfo.InvariantCulture)}° in the half turn: rotate through 180° to fix the optic character",
+            Interpretations = [new SeriesInterpretation
+            {
+                Character = null, Lowest = Index(lo, Extreme(sigma)), Highest = Index(hi, Extreme(sigma)),
+                Birefringence = new Birefringence(hi - lo, sigma * Math.Sqrt(2)), SamplingShortfall = 1,
+                Description = $"two edges {F(lo)} and {F(hi)}: doubly refractive, birefringence at least {F(hi - lo)}",
+            }],
+            Misreadings = misreadings,
+            LargestGapDegrees = gap,
+        };
+    }
+
+    private static RotationSeriesResult Uniaxial(List<EdgeValue> lows, List<EdgeValue> highs, bool lowConstant, bool highConstant,
+        double sigma, double shortfall, double gap, List<string> misreadings)
+    {
+        var interpretations = new List<SeriesInterpretation>();
+        double lowMean = lows.Average(v => v.Value), highMean = highs.Average(v => v.Value);
+        double weight = lowConstant && highConstant ? 0.5 : 1;
+        if (lowConstant)
+        {
+            // ω is the constant low edge; ε is the highest reading of the moving (or, if both are constant, the other) edge.
+            double epsilon = highConstant ? highMean : highs.Max(v => v.Value);
+            var omega = Index(lowMean, Mean(sigma, lows.Count));
+            interpretations.Add(new SeriesInterpretation
+            {
+                Character = OpticCharacter.Uniaxial, Weight = weight, Sign = OpticSign.Positive, Constant = omega, Lowest = omega,
+                Highest = Index(epsilon, highConstant ? Mean(sigma, highs.Count) : Extreme(sigma)),
+                Birefringence = new Birefringence(epsilon - lowMean, sigma * Math.Sqrt(2)),
+                SamplingShortfall = highConstant ? 0 : shortfall,
+                Description = $"uniaxial positive: ω {F(lowMean)} constant, ε {F(epsilon)}, birefringence {F(epsilon - lowMean)}",
+            });
+        }
+        if (highConstant)
+        {
+            double epsilon = lowConstant ? lowMean : lows.Min(v => v.Value);
+            var omega = Index(highMean, Mean(sigma, highs.Count));
+            interpretations.Add(new SeriesInterpretation
+            {
+                Character = OpticCharacter.Uniaxial, Weight = weight, Sign = OpticSign.Negative, Constant = omega, Highest = omega,
+                Lowest = Index(epsilon, lowConstant ? Mean(sigma, lows.Count) : Extreme(sigma)),
+                Birefringence = new Birefringence(highMean - epsilon, sigma * Math.Sqrt(2)),
+                SamplingShortfall = lowConstant ? 0 : shortfall,
+                Description = $"uniaxial negative: ω {F(highMean)} constant, ε {F(epsilon)}, birefringence {F(highMean - epsilon)}",
+            });
+        }
+        return new RotationSeriesResult
+        {
+            Character = OpticCharacter.Uniaxial,
+            Interpretations = interpretations,
+            Misreadings = misreadings,
+            LargestGapDegrees = gap,
+        };
+    }
+
+    private static RotationSeriesResult Biaxial(List<ShadowEdgeStep> both, List<EdgeValue> lows, List<EdgeValue> highs,
+        double sigma, double band, double shortfall, double gap, List<string> misreadings)
+    {
+        double alpha = lows.Min(v => v.Value), gamma = highs.Max(v => v.Value);
+        double lowMax = lows.Max(v => v.Value), highMin = highs.Min(v => v.Value);
+        if (lowMax > highMin + band)
+        {
+            // Every low edge lies at or below β and every high edge at or above it: no orientation gives this.
+            var lowStep = lows.First(v => v.Value == lowMax);
+            var highStep = highs.First(v => v.Value == highMin);
+            misreadings.Add($"step at {D(lowStep.Rotation)}: low edge {F(lowMax)} lies above the high edge {F(highMin)} of the step at {D(highStep.Rotation)}; no orientation of any crystal gives that: re-read both steps");
+        }
+        var birefringence = new Birefringence(gamma - alpha, sigma * Math.Sqrt(2));
+        SeriesInterpretation With(double beta, string which) => new()
+        {
+            Character = OpticCharacter.Biaxial, Weight = 0.5,
+            Sign = gamma - beta > beta - alpha ? OpticSign.Positive : OpticSign.Negative,
+            Lowest = Index(alpha, Extreme(sigma)), Highest = Index(gamma, Extreme(sigma)), Beta = Index(beta, Extreme(sigma)),
+            Birefringence = birefringence, SamplingShortfall = shortfall,
+            Description = $"biaxial {(gamma - beta > beta - alpha ? "positive" : "negative")} if β is the {which}: α {F(alpha)}, β {F(beta)}, γ {F(gamma)}, birefringence {F(gamma - alpha)}",
+        };
+        return new RotationSeriesResult
+        {
+            Character = OpticCharacter.Biaxial,
+            Interpretations = [With(lowMax, "highest low edge"), With(highMin, "lowest high edge")],
+            Misreadings = misreadings,
+            LargestGapDegrees = gap,
+        };
+    }
+
+    private readonly record struct EdgeValue(double Rotation, double Value);
+
+    /// <summary>The edge's readings, less a lone reading far from an otherwise constant edge (reported as a misreading).</summary>
+    private static List<EdgeValue> EdgeValues(List<ShadowEdgeStep> steps, Func<ShadowEdgeStep, double> edge, double band, string name, List<string> misreadings)
+    {
+        var values = steps.Select(x => new EdgeValue(x.RotationDegrees, edge(x))).ToList();
+        if (values.Count < 4) return values;
+        double median = Median(values.Select(v => v.Value));
+        var outside = values.Where(v => Math.Abs(v.Value - median) > band).ToList();
+        if (outside.Count != 1) return values;
+        var odd = outside[0];
+        var rest = values.Where(v => v != odd).ToList();
+        if (Spread(rest) > band) return values; // a moving edge, not a constant one with a stray reading
+        misreadings.Add($"step at {D(odd.Rotation)}: {name} edge {F(odd.Value)} departs by {F(Math.Abs(odd.Value - median))} from an edge otherwise constant at {F(median)}; likely misread, left out");
+        values.Remove(odd);
+        return values;
+    }
+
+    private static double Spread(List<EdgeValue> values) => values.Max(v => v.Value) - values.Min(v => v.Value);
+
+    private static double Median(IEnumerable<double> values)
+    {
+        var sorted = values.Order().ToArray();
+        int m = sorted.Length / 2;
+        return sorted.Length % 2 == 1 ? sorted[m] : (sorted[m - 1] + sorted[m]) / 2;
+    }
+
+    /// <summary>Largest gap between rotation angles taken modulo 180° (the series repeats every half turn).</summary>
+    internal static double LargestGap(IEnumerable<double> rotationsDegrees)
+    {
+        var angles = rotationsDegrees.Select(a => ((a % 180) + 180) % 180).Distinct().Order().ToArray();
+        if (angles.Length < 2) return 180;
+        double largest = 180 - angles[^1] + angles[0];
+        for (int i = 1; i < angles.Length; i++) largest = Math.Max(largest, angles[i] - angles[i - 1]);
+        return largest;
+    }
+
+    // A mean of k readings keeps a share of the instrument's systematic error (calibration, liquid film):
+    // taken as half a reading's σ, which does not average away.
+    private static double Mean(double sigma, int count) => Math.Sqrt(sigma * sigma / count + sigma * sigma / 4);
+
+    private static double Extreme(double sigma) => sigma * Math.Sqrt(1.25);
+
+    private static RefractiveIndex Index(double value, double sigma) => new(value, sigma);
+
+    private static string F(double v) => v.ToString("0.000", CultureInfo.InvariantCulture);
+
+    private static string D(double degrees) => degrees.ToString("0.#", CultureInfo.InvariantCulture) + "°";
+}

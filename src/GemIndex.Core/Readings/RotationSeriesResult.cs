@@ -1,0 +1,22 @@
+using GemIndex.Core.Optics.Indicatrix;
+
+namespace GemIndex.Core.Readings;
+
+/// <summary>What a rotation series says: its interpretations (weights sum to 1) and any likely misreadings.</summary>
+public sealed record RotationSeriesResult
+{
+    /// <summary>The optic character when the series fixes it; null when undetermined (see <see cref="UndeterminedReason"/>).</summary>
+    public OpticCharacter? Character { get; init; }
+
+    /// <summary>Why the character could not be fixed, or empty.</summary>
+    public string UndeterminedReason { get; init; } = "";
+
+    /// <summary>Every interpretation the readings allow, weighted.</summary>
+    public required IReadOnlyList<SeriesInterpretation> Interpretations { get; init; }
+
+    /// <summary>Likely misreadings, each naming its step ("step at 90°: low edge 1.560 …").</summary>
+    public IReadOnlyList<string> Misreadings { get; init; } = [];
+
+    /// <summary>The largest gap between rotation steps over a half turn, degrees (180 for a single step).</summary>
+    public double LargestGapDegrees { get; init; }
+}
