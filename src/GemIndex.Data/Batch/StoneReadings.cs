@@ -1,0 +1,51 @@
+namespace GemIndex.Data.Batch;
+
+/// <summary>
+/// One stone's readings exactly as the batch format holds them (README "Batch format"), before they are checked
+/// and turned into a Core bench sheet by <see cref="StoneReadingsConverter"/>. Every field but the id is optional.
+/// Enumerated answers are kept as the batch format's words ("singly_refractive", "floats", …).
+/// </summary>
+public sealed record StoneReadings
+{
+    public string Id { get; init; } = "";
+    public RefractometerReadings? Refractometer { get; init; }
+    /// <summary>SG given directly.</summary>
+    public double? Sg { get; init; }
+    /// <summary>SG from hydrostatic weighing.</summary>
+    public HydrostaticReadings? SgWeighing { get; init; }
+    public IReadOnlyList<HeavyLiquidReading> HeavyLiquids { get; init; } = [];
+    public string? Polariscope { get; init; }
+    public string? Pleochroism { get; init; }
+    /// <summary>Dispersion judged by eye (none | weak | moderate | strong | very_strong).</summary>
+    public string? Dispersion { get; init; }
+    /// <summary>Dispersion measured: nB and nG.</summary>
+    public (double NB, double NG)? DispersionIndices { get; init; }
+    public string? ThermalProbe { get; init; }
+    public string? Electrical { get; init; }
+    public string? UvLong { get; init; }
+    public string? UvShort { get; init; }
+    /// <summary>Null: not looked; empty: looked and saw none.</summary>
+    public IReadOnlyList<double>? AbsorptionNm { get; init; }
+    public string? Colour { get; init; }
+}
+
+/// <summary>The refractometer part of <see cref="StoneReadings"/>.</summary>
+public sealed record RefractometerReadings
+{
+    /// <summary>"facet" or "spot".</summary>
+    public string Method { get; init; } = "facet";
+    public double? LightNm { get; init; }
+    public double? LiquidLimit { get; init; }
+    public IReadOnlyList<EdgeReadingEntry> Readings { get; init; } = [];
+    public double? Spot { get; init; }
+    public bool OverLimit { get; init; }
+}
+
+/// <summary>One rotation step as entered.</summary>
+public sealed record EdgeReadingEntry(double RotationDeg, double Low, double? High);
+
+/// <summary>Hydrostatic weights in carats and the water temperature.</summary>
+public sealed record HydrostaticReadings(double AirCt, double WaterCt, double? WaterC);
+
+/// <summary>One heavy-liquid result: the liquid's density and "floats", "sinks" or "suspends".</summary>
+public sealed record HeavyLiquidReading(double Density, string Result);
