@@ -1,0 +1,61 @@
+using GemIndex.Core.Gravity;
+using GemIndex.Core.Quantities;
+
+namespace GemIndex.Core.Tests.Gravity;
+
+public class HeavyLiquidResultTests
+{
+    [Fact]
+    public void A_stone_that_floats_is_lighter_than_the_liquid()
+    {
+        var result = new HeavyLiquidResult(new SpecificGravity(3.32), HeavyLiquidOutcome.Floats);
+        Assert.Equal(SpecificGravity.Minimum, result.LowestSpecificGravity);
+        Assert.Equal(3.32, result.HighestSpecificGravity);
+        Assert.True(result.Allows(new SpecificGravity(3.0)));
+        Assert.False(result.Allows(new SpecificGravity(3.32)));
+        Assert.False(result.Allows(new SpecificGravity(3.5)));
+    }
+
+    [Fact]
+    public void A_stone_that_sinks_is_heavier_than_the_liquid()
+    {
+        var result = new HeavyLiquidResult(new SpecificGravity(2.65), HeavyLiquidOutcome.Sinks);
+        Assert.Equal(2.65, result.LowestSpecificGravity);
+        Assert.Equal(SpecificGravity.Maximum, result.HighestSpecificGravity);
+        Assert.True(result.Allows(new SpecificGravity(4.0)));
+        Assert.False(result.Allows(new SpecificGravity(2.6)));
+    }
+
+    [Fact]
+    public void A_suspended_stone_matches_the_liquid_within_the_tolerance()
+    {
+        var result = new HeavyLiquidResult(new SpecificGravity(3.05), HeavyLiquidOutcome.Suspends);
+        Assert.Equal(3.04, result.LowestSpecificGravity, 1e-12);
+        Assert.Equal(3.06, result.HighestSpecificGravity, 1e-12);
+        Assert.True(result.Allows(new SpecificGravity(3.055)));
+        Assert.False(result.Allows(new SpecificGravity(3.07)));
+    }
+
+    [Fact]
+    public void A_poorly_known_liquid_widens_the_suspended_interval()
+    {
+        var result = new HeavyLiquidResult(new SpecificGravity(3.05, 0.03), HeavyLiquidOutcome.Suspends);
+        Assert.Equal(0.03, result.Tolerance);
+        Assert.Equal(3.02, result.LowestSpecificGravity, 1e-12);
+        Assert.Equal(3.08, result.HighestSpecificGravity, 1e-12);
+    }
+
+    [Fact]
+    public void A_default_liquid_is_refused()
+    {
+        var error = Assert.Throws<QuantityOutOfRangeException>(() => new HeavyLiquidResult(default, HeavyLiquidOutcome.Sinks));
+        Assert.Equal("heavy liquid density is 0; allowed: 0.5 to 25.", error.Message);
+    }
+
+    [Fact]
+    public void An_undefined_outcome_is_refused()
+    {
+        var error = Assert.Throws<ArgumentOutOfRangeException>(() => new HeavyLiquidResult(new SpecificGravity(3.32), (HeavyLiquidOutcome)7));
+        Assert.StartsWith("heavy liquid outcome must be floats, suspends or sinks.", error.Message);
+    }
+}

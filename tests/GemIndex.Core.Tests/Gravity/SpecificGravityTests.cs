@@ -1,0 +1,37 @@
+using GemIndex.Core.Gravity;
+using GemIndex.Core.Quantities;
+
+namespace GemIndex.Core.Tests.Gravity;
+
+public class SpecificGravityTests
+{
+    [Fact]
+    public void A_specific_gravity_keeps_its_value_and_uncertainty()
+    {
+        var sg = new SpecificGravity(3.52, 0.01);
+        Assert.Equal(3.52, sg.Value);
+        Assert.Equal(0.01, sg.StandardUncertainty);
+        Assert.Equal("3.52 ± 0.01", sg.ToString());
+        Assert.Equal("2.65", new SpecificGravity(2.65).ToString());
+    }
+
+    [Theory]
+    [InlineData(0.4, "specific gravity is 0.4; allowed: 0.5 to 25.")]
+    [InlineData(25.5, "specific gravity is 25.5; allowed: 0.5 to 25.")]
+    [InlineData(double.NaN, "specific gravity is not a finite number; allowed: 0.5 to 25.")]
+    [InlineData(double.PositiveInfinity, "specific gravity is not a finite number; allowed: 0.5 to 25.")]
+    public void A_value_outside_the_range_is_refused(double value, string message)
+    {
+        var error = Assert.Throws<QuantityOutOfRangeException>(() => new SpecificGravity(value));
+        Assert.Equal(message, error.Message);
+    }
+
+    [Theory]
+    [InlineData(-0.01, "specific gravity uncertainty is -0.01; allowed: 0 to 5.")]
+    [InlineData(6, "specific gravity uncertainty is 6; allowed: 0 to 5.")]
+    public void An_uncertainty_outside_the_range_is_refused(double uncertainty, string message)
+    {
+        var error = Assert.Throws<QuantityOutOfRangeException>(() => new SpecificGravity(3, uncertainty));
+        Assert.Equal(message, error.Message);
+    }
+}
