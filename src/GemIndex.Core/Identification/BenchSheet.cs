@@ -19,7 +19,7 @@ public sealed record BenchSheet
     public SpecificGravity? SpecificGravity { get; init; }
 
     /// <summary>Heavy-liquid results (bounds on SG).</summary>
-    public IReadOnlyList<HeavyLiquidObservation> HeavyLiquids { get; init; } = [];
+    public IReadOnlyList<HeavyLiquidResult> HeavyLiquids { get; init; } = [];
 
     /// <summary>Reaction between crossed polarisers.</summary>
     public PolariscopeReaction? Polariscope { get; init; }

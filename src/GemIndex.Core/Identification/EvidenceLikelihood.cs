@@ -1,5 +1,6 @@
 using System.Globalization;
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Gravity;
 using GemIndex.Core.Observations;
 using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Readings;
@@ -52,11 +53,11 @@ public static class EvidenceLikelihood
             acc.Say($"SG {F2(value)} ± {F2(sigma)} {Where(value, range, s, "0.00")}");
     }
 
-    private static void HeavyLiquid(Material m, HeavyLiquidObservation liquid, EvidenceAccumulator acc)
+    private static void HeavyLiquid(Material m, HeavyLiquidResult liquid, EvidenceAccumulator acc)
     {
         const double sigma = 0.01;
         var range = m.SpecificGravity;
-        double density = liquid.Density;
+        double density = liquid.Liquid.Value;
         (double f, double g, double tail) = liquid.Outcome switch
         {
             HeavyLiquidOutcome.Floats => (RangeLikelihood.ProbabilityBelow(density, range, sigma), 0.5,
