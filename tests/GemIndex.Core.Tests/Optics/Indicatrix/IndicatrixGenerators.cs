@@ -44,6 +44,8 @@ internal static class IndicatrixGenerators
 
     public static Arbitrary<Indicatrix> Uniaxial => UniaxialGen.ToArbitrary();
 
+    public static Arbitrary<Indicatrix> Biaxial => BiaxialGen.ToArbitrary();
+
     public static Arbitrary<Indicatrix> Any => Gen.OneOf(Isotropic, UniaxialGen, BiaxialGen).ToArbitrary();
 
     public static Arbitrary<Direction> FacetNormal => FacetNormalGen.ToArbitrary();

@@ -164,4 +164,18 @@ public partial class IndicatrixTests
             IndicatrixSection b = stone.Section(normal, Angle.FromDegrees(rotation.Degrees + 180));
             return (Math.Abs(a.Low.Value - b.Low.Value) <= Rounding && Math.Abs(a.High.Value - b.High.Value) <= Rounding).Label($"{a} {b}");
         });
+
+    [Property(MaxTest = 300)]
+    public Property Optic_axes_from_the_optic_axial_angle_give_circular_sections_and_the_sign() =>
+        // Independent of the 2Vz formula: travel along an optic axis (in the XZ plane, Vz from Z; facet N = y)
+        // must see a circle of radius β. Tolerance 1e-9: acos near cos²Vz = 1 (2Vz near 0°) loses digits, and
+        // the edge split grows only linearly with that angle error times the birefringence (≤ 0.6).
+        Prop.ForAll(IndicatrixGenerators.Biaxial, stone =>
+        {
+            Angle twoVz = stone.OpticAxialAngle!.Value;
+            IndicatrixSection s = stone.Section(Direction.AlongY, Angle.FromRadians(twoVz.Radians / 2));
+            bool circular = Math.Abs(s.Low.Value - stone.Beta.Value) <= 1e-9 && Math.Abs(s.High.Value - stone.Beta.Value) <= 1e-9;
+            bool signMatches = (stone.Sign == OpticSign.Positive) == (twoVz.Degrees < 90);
+            return (circular && signMatches && twoVz.Degrees is > 0 and < 180).Label($"{stone.Alpha} {stone.Beta} {stone.Gamma} 2Vz={twoVz} {s}");
+        });
 }
