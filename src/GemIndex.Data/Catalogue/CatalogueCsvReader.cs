@@ -53,8 +53,11 @@ public static class CatalogueCsvReader
             }
             var row = new CsvCells(header, cells, n, errors);
             EntryDocument entry = row.ToEntry();
-            var material = EntryMapping.ToMaterial(entry, row.Text("family") ?? "user",
-                (field, problem) => errors.Add(new(n, ColumnsOf(field), problem)));
+            var material = EntryMapping.ToMaterial(entry, row.Text("family") ?? "user", (field, problem) =>
+            {
+                // A cell that did not parse already has its error; the mapping would only add "required" for it.
+                if (!row.HasErrorIn(field)) errors.Add(new(n, ColumnsOf(field), problem));
+            });
             if (material is not null && !row.HasErrors) rows.Add(new(n, material));
         }
         if (header is null) errors.Add(new(1, "(header)", "the file is empty; the first line must name the columns"));
@@ -109,8 +112,13 @@ public static class CatalogueCsvReader
             return i < 0 || cells[i].Trim().Length == 0 ? null : cells[i].Trim();
         }
 
+        private readonly HashSet<string> _badFields = [];
+
+        public bool HasErrorIn(string field) => _badFields.Contains(field);
+
         private void Error(string column, string problem)
         {
+            _badFields.Add(column.Split('/')[0].Replace("_min", "", StringComparison.Ordinal).Replace("_max", "", StringComparison.Ordinal));
             HasErrors = true;
             errors.Add(new(line, column, problem));
         }

@@ -67,10 +67,10 @@ internal static class EntryMapping
         bool ok = true;
         foreach (string field in IndexFields)
         {
-            if (needed.Contains(field) && given[field] is null) { fail(field, $"required for a {CatalogueWords.Of(character)} material"); ok = false; }
+            if (needed.Contains(field) && given[field] is null) { fail(field, $"required for {Article(character)} material"); ok = false; }
             if (!needed.Contains(field) && given[field] is not null)
             {
-                fail(field, $"not allowed for a {CatalogueWords.Of(character)} material, which uses {string.Join(", ", needed)}");
+                fail(field, $"not allowed for {Article(character)} material, which uses {string.Join(", ", needed)}");
                 ok = false;
             }
         }
@@ -83,6 +83,12 @@ internal static class EntryMapping
             OpticCharacter.Biaxial => OpticalIndices.Biaxial(r[0]!.Value, r[1]!.Value, r[2]!.Value),
             _ => OpticalIndices.SingleIndex(r[0]!.Value, character),
         };
+    }
+
+    private static string Article(OpticCharacter character)
+    {
+        string word = CatalogueWords.Of(character);
+        return (word[0] is 'a' or 'i' ? "an " : "a ") + word; // "a uniaxial", "an isotropic"
     }
 
     public static PropertyRange? Range(string field, double[]? pair, Action<string, string> fail)
