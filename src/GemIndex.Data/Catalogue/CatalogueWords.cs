@@ -5,8 +5,9 @@ namespace GemIndex.Data.Catalogue;
 /// <summary>
 /// The lower-case words the catalogue files and database use for enumerations: VeryCommon ⇔ "very_common".
 /// </summary>
-internal static class CatalogueWords
+public static class CatalogueWords
 {
+    /// <summary>The word for a value: VeryCommon → "very_common".</summary>
     public static string Of<T>(T value) where T : struct, Enum
     {
         string name = value.ToString();
@@ -19,8 +20,10 @@ internal static class CatalogueWords
         return b.ToString();
     }
 
+    /// <summary>Every word of an enumeration, in declaration order.</summary>
     public static IEnumerable<string> All<T>() where T : struct, Enum => Enum.GetValues<T>().Select(Of);
 
+    /// <summary>The value for a word (exact, lower-case); false for anything else, numbers included.</summary>
     public static bool TryParse<T>(string? word, out T value) where T : struct, Enum
     {
         foreach (T candidate in Enum.GetValues<T>())
@@ -32,9 +35,10 @@ internal static class CatalogueWords
     }
 
     /// <summary>Parses a word read from our own database, which the schema and the writer keep valid.</summary>
-    public static T Stored<T>(string word) where T : struct, Enum =>
+    internal static T Stored<T>(string word) where T : struct, Enum =>
         TryParse(word, out T value) ? value
             : throw new CatalogueStoreException($"unknown {typeof(T).Name} '{word}' in the catalogue file; rebuild it");
 
+    /// <summary>The allowed words, comma-separated, for error messages.</summary>
     public static string Expected<T>() where T : struct, Enum => string.Join(", ", All<T>());
 }

@@ -16,7 +16,7 @@ public static class ShippedCatalogue
     public static IReadOnlyList<FamilySource> Sources { get; } = LoadSources();
 
     /// <summary>The first 16 hex digits of the SHA-256 of the embedded schema and family files (names and bytes).</summary>
-    public static string ContentHash { get; } = Hash();
+    public static string ContentHash { get; } = HashOf(Sources);
 
     /// <summary>The built file's path inside a cache folder.</summary>
     public static string PathIn(string cacheDirectory) => Path.Combine(cacheDirectory, $"catalogue-{ContentHash}.db");
@@ -56,11 +56,12 @@ public static class ShippedCatalogue
             .Select(n => new FamilySource(n[MaterialsPrefix.Length..],
                 System.Text.Encoding.UTF8.GetString(CatalogueSchema.EmbeddedBytes(n))))];
 
-    private static string Hash()
+    /// <summary>The first 16 hex digits of the SHA-256 of the schema and the given family files (names and text).</summary>
+    public static string HashOf(IReadOnlyList<FamilySource> sources)
     {
         using var sha = IncrementalHash.CreateHash(HashAlgorithmName.SHA256);
         sha.AppendData(System.Text.Encoding.UTF8.GetBytes($"schema {CatalogueSchema.Version}\n{CatalogueSchema.Sql}\n"));
-        foreach (FamilySource s in Sources)
+        foreach (FamilySource s in sources)
             sha.AppendData(System.Text.Encoding.UTF8.GetBytes($"{s.FileName}\n{s.Json.Length}\n{s.Json}\n"));
         return Convert.ToHexStringLower(sha.GetHashAndReset())[..16];
     }
