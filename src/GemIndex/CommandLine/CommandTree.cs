@@ -13,6 +13,7 @@ internal static class CommandTree
             pr.InvocationConfiguration.Output.WriteLine("The text UI is not built yet; try 'gemindex --help'.");
             return ExitCodes.Ok;
         });
+        root.Subcommands.Add(CatalogueCommand.Create());
         return root;
     }
 }

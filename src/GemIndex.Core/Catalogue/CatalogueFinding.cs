@@ -1,0 +1,14 @@
+namespace GemIndex.Core.Catalogue;
+
+/// <summary>
+/// One problem the catalogue check found: which entry, which field (named as in the catalogue's source
+/// files: <c>sg</c>, <c>omega</c>, <c>optic_sign</c>…) and what is wrong with it.
+/// </summary>
+/// <param name="Entry">The entry's name as written in the catalogue.</param>
+/// <param name="Field">The source-file field at fault.</param>
+/// <param name="Problem">One sentence saying what is wrong, with the values involved.</param>
+public sealed record CatalogueFinding(string Entry, string Field, string Problem)
+{
+    /// <summary>"entry 'ruby', field sg: …".</summary>
+    public override string ToString() => $"entry '{Entry}', field {Field}: {Problem}";
+}

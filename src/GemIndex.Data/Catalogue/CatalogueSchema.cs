@@ -1,0 +1,46 @@
+using Microsoft.Data.Sqlite;
+
+namespace GemIndex.Data.Catalogue;
+
+/// <summary>The catalogue database schema (reference-db/schema.sql, embedded) and its version.</summary>
+public static class CatalogueSchema
+{
+    /// <summary>The schema version this build reads and writes (PRAGMA user_version and meta 'schema_version').</summary>
+    public const int Version = 1;
+
+    /// <summary>The schema's SQL text.</summary>
+    public static string Sql { get; } = EmbeddedText("GemIndex.Catalogue.schema.sql");
+
+    /// <summary>Creates the tables and records the version and kind ("shipped" or "user"), inside <paramref name="transaction"/>.</summary>
+    public static void Create(SqliteConnection connection, SqliteTransaction transaction, string kind, string sourceHash)
+    {
+        Execute(connection, transaction, Sql);
+        Execute(connection, transaction, $"PRAGMA user_version = {Version}"); // a constant: PRAGMA takes no parameters
+        using SqliteCommand meta = connection.CreateCommand();
+        meta.Transaction = transaction;
+        meta.CommandText = "INSERT INTO meta(key, value) VALUES ('schema_version', $v), ('kind', $kind), ('source_hash', $hash)";
+        meta.Parameters.AddWithValue("$v", Version.ToString(System.Globalization.CultureInfo.InvariantCulture));
+        meta.Parameters.AddWithValue("$kind", kind);
+        meta.Parameters.AddWithValue("$hash", sourceHash);
+        meta.ExecuteNonQuery();
+    }
+
+    internal static byte[] EmbeddedBytes(string name)
+    {
+        using Stream stream = typeof(CatalogueSchema).Assembly.GetManifestResourceStream(name)
+            ?? throw new InvalidOperationException($"resource {name} is not embedded in GemIndex.Data");
+        using var buffer = new MemoryStream();
+        stream.CopyTo(buffer);
+        return buffer.ToArray();
+    }
+
+    private static string EmbeddedText(string name) => System.Text.Encoding.UTF8.GetString(EmbeddedBytes(name));
+
+    private static void Execute(SqliteConnection connection, SqliteTransaction transaction, string sql)
+    {
+        using SqliteCommand cmd = connection.CreateCommand();
+        cmd.Transaction = transaction;
+        cmd.CommandText = sql;
+        cmd.ExecuteNonQuery();
+    }
+}

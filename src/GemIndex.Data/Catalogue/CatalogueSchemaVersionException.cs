@@ -1,0 +1,20 @@
+namespace GemIndex.Data.Catalogue;
+
+/// <summary>A catalogue file written with another schema version than <see cref="CatalogueSchema.Version"/>.</summary>
+public sealed class CatalogueSchemaVersionException : Exception
+{
+    /// <summary>Creates the exception for a file and the version found in it.</summary>
+    public CatalogueSchemaVersionException(string path, long found)
+        : base($"{path}: catalogue schema version {found}, but this GemIndex reads version {CatalogueSchema.Version}; " +
+               "rebuild it ('gemindex catalogue build --output FILE') or use a matching GemIndex")
+    {
+        Path = path;
+        Found = found;
+    }
+
+    /// <summary>The file.</summary>
+    public string Path { get; }
+
+    /// <summary>The version found in it.</summary>
+    public long Found { get; }
+}

@@ -1,0 +1,118 @@
+using GemIndex.Core.Catalogue;
+using GemIndex.Core.Observations;
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Quantities;
+
+namespace GemIndex.Data.Catalogue;
+
+/// <summary>
+/// Turns an <see cref="EntryDocument"/> into a Core <see cref="Material"/>, reporting every field that cannot be
+/// read (unknown word, a range that is not [min, max], indices that do not fit the optic character) by its
+/// source-file field name. Consistency between fields is the <see cref="CatalogueCheck"/>'s job.
+/// </summary>
+internal static class EntryMapping
+{
+    private static readonly string[] IndexFields = ["n", "omega", "epsilon", "alpha", "beta", "gamma"];
+
+    public static Material? ToMaterial(EntryDocument e, string family, Action<string, string> error)
+    {
+        bool failed = false;
+        void Fail(string field, string problem) { failed = true; error(field, problem); }
+
+        OriginClass origin = Word<OriginClass>("origin", e.Origin, Fail);
+        CrystalSystem system = Word<CrystalSystem>("crystal_system", e.CrystalSystem, Fail);
+        OpticCharacter character = Word<OpticCharacter>("optic_character", e.OpticCharacter, Fail);
+        OpticSign sign = e.OpticSign is null ? OpticSign.None : Word<OpticSign>("optic_sign", e.OpticSign, Fail);
+        OpticalIndices? indices = failed ? null : Indices(e, character, Fail);
+        PropertyRange? sg = Range("sg", e.Sg, Fail);
+        var material = new
+        {
+            Birefringence = Range("birefringence", e.Birefringence, Fail),
+            Hardness = Range("hardness", e.Hardness, Fail),
+            Pleochroism = e.Pleochroism is null ? PleochroismStrength.None : Word<PleochroismStrength>("pleochroism", e.Pleochroism, Fail),
+            Polariscope = Words<PolariscopeReaction>("polariscope", e.Polariscope, Fail),
+            ThermalProbe = e.ThermalProbe is null ? ThermalProbeResult.Negative : Word<ThermalProbeResult>("thermal_probe", e.ThermalProbe, Fail),
+            Electrical = e.Electrical is null ? ElectricalResult.Insulating : Word<ElectricalResult>("electrical", e.Electrical, Fail),
+            UvLong = Words<FluorescenceStrength>("uv_long", e.UvLong ?? [], Fail),
+            UvShort = Words<FluorescenceStrength>("uv_short", e.UvShort ?? [], Fail),
+            Frequency = Word<BenchFrequency>("frequency", e.Frequency, Fail),
+        };
+        if (e.Colours.Any(c => string.IsNullOrWhiteSpace(c) || c != c.ToLowerInvariant()))
+            Fail("colours", $"colours must be non-empty lower-case words; got [{string.Join(", ", e.Colours)}]");
+        if (failed || indices is null || sg is null) return null;
+        return new Material
+        {
+            Name = e.Name, Species = e.Species, Variety = e.Variety, Family = family, Origin = origin,
+            CrystalSystem = system, Indices = indices, Sign = sign, Birefringence = material.Birefringence,
+            SpecificGravity = sg.Value, Dispersion = e.Dispersion, Hardness = material.Hardness,
+            Pleochroism = material.Pleochroism, Polariscope = material.Polariscope, ThermalProbe = material.ThermalProbe,
+            Electrical = material.Electrical, UvLong = material.UvLong, UvShort = material.UvShort,
+            AbsorptionLinesNanometres = e.AbsorptionNm ?? [], Colours = e.Colours, Frequency = material.Frequency,
+            DoNotImmerse = e.DoNotImmerse ?? false, Notes = e.Notes ?? "", Provenance = e.Provenance,
+        };
+    }
+
+    private static OpticalIndices? Indices(EntryDocument e, OpticCharacter character, Action<string, string> fail)
+    {
+        string[] needed = character switch
+        {
+            OpticCharacter.Uniaxial => ["omega", "epsilon"],
+            OpticCharacter.Biaxial => ["alpha", "beta", "gamma"],
+            _ => ["n"],
+        };
+        var given = new Dictionary<string, double[]?>
+        {
+            ["n"] = e.N, ["omega"] = e.Omega, ["epsilon"] = e.Epsilon, ["alpha"] = e.Alpha, ["beta"] = e.Beta, ["gamma"] = e.Gamma,
+        };
+        bool ok = true;
+        foreach (string field in IndexFields)
+        {
+            if (needed.Contains(field) && given[field] is null) { fail(field, $"required for {Article(character)} material"); ok = false; }
+            if (!needed.Contains(field) && given[field] is not null)
+            {
+                fail(field, $"not allowed for {Article(character)} material, which uses {string.Join(", ", needed)}");
+                ok = false;
+            }
+        }
+        if (!ok) return null;
+        PropertyRange?[] r = [.. needed.Select(f => Range(f, given[f], fail))];
+        if (r.Any(x => x is null)) return null;
+        return character switch
+        {
+            OpticCharacter.Uniaxial => OpticalIndices.Uniaxial(r[0]!.Value, r[1]!.Value),
+            OpticCharacter.Biaxial => OpticalIndices.Biaxial(r[0]!.Value, r[1]!.Value, r[2]!.Value),
+            _ => OpticalIndices.SingleIndex(r[0]!.Value, character),
+        };
+    }
+
+    private static string Article(OpticCharacter character)
+    {
+        string word = CatalogueWords.Of(character);
+        return (word[0] is 'a' or 'i' ? "an " : "a ") + word; // "a uniaxial", "an isotropic"
+    }
+
+    public static PropertyRange? Range(string field, double[]? pair, Action<string, string> fail)
+    {
+        if (pair is null) return null;
+        if (pair.Length != 2) { fail(field, $"expected [min, max] (two numbers), got {pair.Length}"); return null; }
+        try
+        {
+            return new PropertyRange(pair[0], pair[1], field);
+        }
+        catch (QuantityOutOfRangeException ex)
+        {
+            fail(field, ex.Message);
+            return null;
+        }
+    }
+
+    private static T Word<T>(string field, string? word, Action<string, string> fail) where T : struct, Enum
+    {
+        if (CatalogueWords.TryParse(word, out T value)) return value;
+        fail(field, $"'{word}' is not one of {CatalogueWords.Expected<T>()}");
+        return default;
+    }
+
+    private static T[] Words<T>(string field, string[] words, Action<string, string> fail) where T : struct, Enum =>
+        [.. words.Select(w => Word<T>(field, w, fail))];
+}

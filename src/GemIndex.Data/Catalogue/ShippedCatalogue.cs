@@ -1,0 +1,68 @@
+using System.Security.Cryptography;
+using GemIndex.Core.Catalogue;
+
+namespace GemIndex.Data.Catalogue;
+
+/// <summary>
+/// The catalogue that ships inside GemIndex.Data: its family files and schema are embedded resources, and on
+/// first use they are built into a SQLite file in the cache folder, named by a hash of those sources, so an
+/// edited catalogue (or schema) rebuilds itself and an old cache file is simply never opened again.
+/// </summary>
+public static class ShippedCatalogue
+{
+    private const string MaterialsPrefix = "GemIndex.Catalogue.materials.";
+
+    /// <summary>The embedded family files, in ordinal file-name order.</summary>
+    public static IReadOnlyList<FamilySource> Sources { get; } = LoadSources();
+
+    /// <summary>The first 16 hex digits of the SHA-256 of the embedded schema and family files (names and bytes).</summary>
+    public static string ContentHash { get; } = HashOf(Sources);
+
+    /// <summary>The built file's path inside a cache folder.</summary>
+    public static string PathIn(string cacheDirectory) => Path.Combine(cacheDirectory, $"catalogue-{ContentHash}.db");
+
+    /// <summary>Builds the catalogue into the cache folder unless a readable build of the same sources is there; returns its path.</summary>
+    /// <exception cref="CatalogueFormatException">An embedded family file cannot be read.</exception>
+    public static string EnsureBuilt(string cacheDirectory)
+    {
+        string path = PathIn(cacheDirectory);
+        if (File.Exists(path))
+        {
+            try
+            {
+                using CatalogueStore store = CatalogueStore.Open(path);
+                return path;
+            }
+            catch (Exception e) when (e is CatalogueStoreException or CatalogueSchemaVersionException)
+            {
+                // Our own cache from another version or damaged: rebuilt below, never patched.
+            }
+        }
+        CatalogueBuilder.Build(Sources, path, ContentHash);
+        return path;
+    }
+
+    /// <summary>Every shipped material, building the cache file first if needed.</summary>
+    public static IReadOnlyList<Material> Load(string cacheDirectory)
+    {
+        using CatalogueStore store = CatalogueStore.Open(EnsureBuilt(cacheDirectory));
+        return store.LoadAll();
+    }
+
+    private static IReadOnlyList<FamilySource> LoadSources() =>
+        [.. typeof(ShippedCatalogue).Assembly.GetManifestResourceNames()
+            .Where(n => n.StartsWith(MaterialsPrefix, StringComparison.Ordinal))
+            .Order(StringComparer.Ordinal)
+            .Select(n => new FamilySource(n[MaterialsPrefix.Length..],
+                System.Text.Encoding.UTF8.GetString(CatalogueSchema.EmbeddedBytes(n))))];
+
+    /// <summary>The first 16 hex digits of the SHA-256 of the schema and the given family files (names and text).</summary>
+    public static string HashOf(IReadOnlyList<FamilySource> sources)
+    {
+        using var sha = IncrementalHash.CreateHash(HashAlgorithmName.SHA256);
+        sha.AppendData(System.Text.Encoding.UTF8.GetBytes($"schema {CatalogueSchema.Version}\n{CatalogueSchema.Sql}\n"));
+        foreach (FamilySource s in sources)
+            sha.AppendData(System.Text.Encoding.UTF8.GetBytes($"{s.FileName}\n{s.Json.Length}\n{s.Json}\n"));
+        return Convert.ToHexStringLower(sha.GetHashAndReset())[..16];
+    }
+}

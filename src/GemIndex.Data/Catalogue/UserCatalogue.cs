@@ -1,0 +1,89 @@
+using GemIndex.Core.Catalogue;
+using Microsoft.Data.Sqlite;
+
+namespace GemIndex.Data.Catalogue;
+
+/// <summary>
+/// The user's own catalogue: a SQLite file with the shipped catalogue's schema, created on the first import.
+/// Imports are all-or-nothing; a name already used by the shipped catalogue or by an earlier user entry is refused.
+/// </summary>
+public sealed class UserCatalogue(string path)
+{
+    /// <summary>The file (it may not exist yet).</summary>
+    public string Path { get; } = System.IO.Path.GetFullPath(path);
+
+    /// <summary>The user's entries (IsUserEntry set); none when the file does not exist yet.</summary>
+    /// <exception cref="CatalogueStoreException">The file is not a user catalogue or cannot be read.</exception>
+    /// <exception cref="CatalogueSchemaVersionException">The file has another schema version (never rebuilt: it is user data).</exception>
+    public IReadOnlyList<Material> Load()
+    {
+        if (!File.Exists(Path)) return [];
+        using CatalogueStore store = CatalogueStore.Open(Path);
+        if (store.Kind != "user") throw new CatalogueStoreException($"{Path}: this is a {store.Kind} catalogue, not a user catalogue");
+        return store.LoadAll();
+    }
+
+    /// <summary>Reads, checks and adds every row of a CSV file in one transaction, or nothing if any row is bad.</summary>
+    /// <param name="csv">The CSV text (reference-db/README.md, "User catalogue CSV").</param>
+    /// <param name="shipped">The shipped catalogue, whose names a user entry may not take.</param>
+    public CatalogueImportResult Import(TextReader csv, IReadOnlyList<Material> shipped)
+    {
+        (IReadOnlyList<CatalogueCsvRow> rows, IReadOnlyList<CatalogueImportError> readErrors) = CatalogueCsvReader.Read(csv);
+        var errors = new List<CatalogueImportError>(readErrors);
+        IReadOnlyList<Material> existing = Load();
+        errors.AddRange(CheckRows(rows, shipped, existing));
+        if (errors.Count > 0) return new(0, [.. errors.OrderBy(e => e.Line)]);
+        Write(rows.Select(r => r.Material with { IsUserEntry = true }).ToList());
+        return new(rows.Count, []);
+    }
+
+    private static IEnumerable<CatalogueImportError> CheckRows(IReadOnlyList<CatalogueCsvRow> rows, IReadOnlyList<Material> shipped, IReadOnlyList<Material> existing)
+    {
+        var shippedNames = shipped.Select(m => m.Name).ToHashSet(StringComparer.OrdinalIgnoreCase);
+        var userNames = existing.Select(m => m.Name).ToHashSet(StringComparer.OrdinalIgnoreCase);
+        var seen = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
+        foreach (CatalogueCsvRow row in rows)
+        {
+            foreach (CatalogueFinding f in CatalogueCheck.CheckEntry(row.Material))
+                yield return new(row.Line, CatalogueCsvReader.ColumnsOf(f.Field), f.Problem);
+            string name = row.Material.Name;
+            if (shippedNames.Contains(name))
+                yield return new(row.Line, "name", $"'{name}' is the name of a shipped catalogue entry; give your entry another name");
+            else if (userNames.Contains(name))
+                yield return new(row.Line, "name", $"'{name}' is already in your catalogue");
+            else if (seen.TryGetValue(name, out int first))
+                yield return new(row.Line, "name", $"'{name}' is also on line {first} (names are compared ignoring case)");
+            else seen[name] = row.Line;
+        }
+    }
+
+    private void Write(IReadOnlyList<Material> materials)
+    {
+        Directory.CreateDirectory(System.IO.Path.GetDirectoryName(Path)!);
+        try
+        {
+            using SqliteConnection c = CatalogueStore.Connect(Path, SqliteOpenMode.ReadWriteCreate);
+            using SqliteTransaction tx = c.BeginTransaction();
+            if (IsEmptyFile(c, tx)) CatalogueSchema.Create(c, tx, "user", "");
+            else
+            {
+                long version = CatalogueStore.ReadVersion(c, Path);
+                if (version != CatalogueSchema.Version) throw new CatalogueSchemaVersionException(Path, version);
+            }
+            CatalogueWriter.Insert(c, tx, materials);
+            tx.Commit();
+        }
+        catch (SqliteException e)
+        {
+            throw new CatalogueStoreException($"{Path}: cannot write the user catalogue: {e.Message}", e);
+        }
+    }
+
+    private static bool IsEmptyFile(SqliteConnection c, SqliteTransaction tx)
+    {
+        using SqliteCommand cmd = c.CreateCommand();
+        cmd.Transaction = tx;
+        cmd.CommandText = "SELECT count(*) FROM sqlite_schema";
+        return (long)cmd.ExecuteScalar()! == 0;
+    }
+}

@@ -1,0 +1,33 @@
+using System.CommandLine;
+using GemIndex.Data.Catalogue;
+
+namespace GemIndex.Cli.CommandLine;
+
+/// <summary>The <c>catalogue</c> group: list, show, check, import and build, sharing <c>--catalogue-dir</c>.</summary>
+internal static class CatalogueCommand
+{
+    public static Command Create()
+    {
+        var directory = new Option<DirectoryInfo?>("--catalogue-dir")
+        {
+            Description = "Folder for user-catalogue.db and the built shipped catalogue (cache/ inside it); " +
+                "default: the user's data and cache folders",
+            Recursive = true,
+        };
+        return new Command("catalogue", "The reference catalogue of gem materials and your own entries")
+        {
+            directory,
+            CatalogueListCommand.Create(directory),
+            CatalogueShowCommand.Create(directory),
+            CatalogueCheckCommand.Create(directory),
+            CatalogueImportCommand.Create(directory),
+            CatalogueBuildCommand.Create(), // reads no user data and no cache
+        };
+    }
+
+    /// <summary>Where the catalogue files are for this invocation.</summary>
+    public static CatalogueLocations Locations(ParseResult parseResult, Option<DirectoryInfo?> directory) =>
+        parseResult.GetValue(directory) is { } dir ? CatalogueLocations.Under(dir.FullName) : CatalogueLocations.FromEnvironment();
+
+    public static Option<bool> JsonOption() => new("--json") { Description = "Write the result as JSON on standard output" };
+}

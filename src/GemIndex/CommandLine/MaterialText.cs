@@ -1,0 +1,64 @@
+using System.Globalization;
+using GemIndex.Core.Catalogue;
+using GemIndex.Data.Catalogue;
+
+namespace GemIndex.Cli.CommandLine;
+
+/// <summary>How catalogue entries read on a terminal: a table for lists, labelled lines for one entry.</summary>
+internal static class MaterialText
+{
+    private const string IndexFormat = "0.000";
+
+    public static void WriteTable(TextWriter output, IReadOnlyList<Material> materials)
+    {
+        string[] header = ["name", "character", "RI at 589.3 nm", "birefringence", "SG", "origin", "source"];
+        List<string[]> rows = [header, .. materials.Select(m => new[]
+        {
+            m.Name, Character(m), Indices(m), m.Birefringence?.ToString(IndexFormat) ?? "-",
+            m.SpecificGravity.ToString("0.00"), Word(m.Origin), m.IsUserEntry ? "user" : m.Family,
+        })];
+        int[] widths = [.. Enumerable.Range(0, header.Length).Select(c => rows.Max(r => r[c].Length))];
+        foreach (string[] row in rows)
+            output.WriteLine(string.Join("  ", row.Select((cell, c) => c == row.Length - 1 ? cell : cell.PadRight(widths[c]))).TrimEnd());
+    }
+
+    public static void WriteDetails(TextWriter output, Material m)
+    {
+        var lines = new List<(string Label, string Value)>
+        {
+            ("name", m.Name), ("species", m.Species), ("variety", m.Variety), ("family", m.Family),
+            ("origin", Word(m.Origin)), ("crystal system", Word(m.CrystalSystem)), ("optic character", Character(m)),
+        };
+        lines.AddRange(m.Indices.Named().Select(x => ($"{x.Name} at 589.3 nm", x.Range.ToString(IndexFormat))));
+        lines.Add(("birefringence", m.Birefringence?.ToString(IndexFormat) ?? "none (one index)"));
+        lines.Add(("specific gravity", m.SpecificGravity.ToString("0.00")));
+        lines.Add(("dispersion", m.Dispersion is { } d ? $"{d.ToString("0.000", CultureInfo.InvariantCulture)} (nG − nB, 430.8 and 686.7 nm)" : "not given"));
+        lines.Add(("hardness", m.Hardness is { } h ? $"{h.ToString("0.#")} (Mohs)" : "not given"));
+        lines.Add(("pleochroism", Word(m.Pleochroism)));
+        lines.Add(("polariscope", string.Join(", ", m.Polariscope.Select(Word))));
+        lines.Add(("thermal probe", Word(m.ThermalProbe)));
+        lines.Add(("electrical", Word(m.Electrical)));
+        lines.Add(("UV long (365 nm)", List(m.UvLong.Select(Word))));
+        lines.Add(("UV short (254 nm)", List(m.UvShort.Select(Word))));
+        lines.Add(("absorption", m.AbsorptionLinesNanometres.Count == 0 ? "none given"
+            : string.Join(", ", m.AbsorptionLinesNanometres.Select(x => x.ToString("0.#", CultureInfo.InvariantCulture))) + " nm"));
+        lines.Add(("colours", string.Join(", ", m.Colours)));
+        lines.Add(("frequency", Word(m.Frequency)));
+        lines.Add(("do not immerse", m.DoNotImmerse ? "yes: never weigh in water" : "no"));
+        lines.Add(("notes", m.Notes.Length == 0 ? "-" : m.Notes));
+        lines.Add(("provenance", m.Provenance));
+        lines.Add(("entry", m.IsUserEntry ? "your own (user catalogue)" : "shipped catalogue"));
+        int width = lines.Max(l => l.Label.Length);
+        foreach ((string label, string value) in lines) output.WriteLine($"{label.PadRight(width)}  {value}");
+    }
+
+    public static string Character(Material m) =>
+        m.Sign == Core.Optics.Indicatrix.OpticSign.None ? Word(m.OpticCharacter) : $"{Word(m.OpticCharacter)} {Word(m.Sign)}";
+
+    private static string Indices(Material m) =>
+        string.Join(" ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString(IndexFormat)}"));
+
+    private static string List(IEnumerable<string> words) => words.ToList() is { Count: > 0 } l ? string.Join(", ", l) : "not known";
+
+    private static string Word<T>(T value) where T : struct, Enum => CatalogueWords.Of(value).Replace('_', ' ');
+}

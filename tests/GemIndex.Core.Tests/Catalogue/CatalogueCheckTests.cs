@@ -1,0 +1,232 @@
+using GemIndex.Core.Catalogue;
+using GemIndex.Core.Observations;
+using GemIndex.Core.Optics.Indicatrix;
+
+namespace GemIndex.Core.Tests.Catalogue;
+
+public class CatalogueCheckTests
+{
+    // Invented test entries shaped like real ones; the numbers only need to be self-consistent.
+    private static Material Uniaxial(string name = "test quartz") => new()
+    {
+        Name = name,
+        Species = "quartz",
+        Variety = "rock crystal",
+        Origin = OriginClass.Natural,
+        CrystalSystem = CrystalSystem.Trigonal,
+        Indices = OpticalIndices.Uniaxial(new(1.544, 1.544), new(1.553, 1.553)),
+        Sign = OpticSign.Positive,
+        Birefringence = new(0.009, 0.009),
+        SpecificGravity = new(2.65, 2.66),
+        Polariscope = [PolariscopeReaction.DoublyRefractive],
+        Provenance = "test fixture",
+    };
+
+    private static Material Biaxial() => new()
+    {
+        Name = "test peridot",
+        Species = "olivine",
+        Variety = "peridot",
+        Origin = OriginClass.Natural,
+        CrystalSystem = CrystalSystem.Orthorhombic,
+        Indices = OpticalIndices.Biaxial(new(1.650, 1.654), new(1.665, 1.670), new(1.686, 1.690)),
+        Sign = OpticSign.Positive,
+        Birefringence = new(0.035, 0.038),
+        SpecificGravity = new(3.32, 3.37),
+        Polariscope = [PolariscopeReaction.DoublyRefractive],
+        Provenance = "test fixture",
+    };
+
+    private static Material Isotropic() => new()
+    {
+        Name = "test spinel",
+        Species = "spinel",
+        Variety = "spinel",
+        Origin = OriginClass.Natural,
+        CrystalSystem = CrystalSystem.Cubic,
+        Indices = OpticalIndices.SingleIndex(new(1.712, 1.720)),
+        SpecificGravity = new(3.58, 3.61),
+        Polariscope = [PolariscopeReaction.SinglyRefractive, PolariscopeReaction.Anomalous],
+        Provenance = "test fixture",
+    };
+
+    private static void AssertOnlyFinding(Material m, string field)
+    {
+        IReadOnlyList<CatalogueFinding> findings = CatalogueCheck.CheckEntry(m);
+        CatalogueFinding f = Assert.Single(findings);
+        Assert.Equal(m.Name, f.Entry);
+        Assert.Equal(field, f.Field);
+    }
+
+    [Fact]
+    public void Consistent_entries_of_each_character_have_no_findings()
+    {
+        Assert.Empty(CatalogueCheck.Check([Uniaxial(), Biaxial(), Isotropic()]));
+    }
+
+    [Theory]
+    [InlineData(1.0, 1.2)]
+    [InlineData(3.4, 3.5)]
+    public void An_index_outside_1_to_3_5_is_reported_on_its_field(double min, double max)
+    {
+        AssertOnlyFinding(Isotropic() with { Indices = OpticalIndices.SingleIndex(new(min, max)) }, "n");
+    }
+
+    [Theory]
+    [InlineData(0.4, 0.6)]
+    [InlineData(20, 25)]
+    public void A_specific_gravity_outside_0_5_to_25_is_reported(double min, double max)
+    {
+        AssertOnlyFinding(Isotropic() with { SpecificGravity = new(min, max) }, "sg");
+    }
+
+    [Fact]
+    public void A_range_written_backwards_never_becomes_a_material()
+    {
+        // PropertyRange refuses it at construction, so the check never sees an unordered range.
+        Assert.Throws<GemIndex.Core.Quantities.QuantityOutOfRangeException>(() => new PropertyRange(2.7, 2.6, "sg"));
+    }
+
+    [Fact]
+    public void Birefringence_beyond_what_the_index_ranges_allow_is_reported()
+    {
+        // ω 1.544, ε 1.553 allow exactly 0.009; 0.020 cannot be.
+        AssertOnlyFinding(Uniaxial() with { Birefringence = new(0.020, 0.020) }, "birefringence");
+    }
+
+    [Fact]
+    public void Birefringence_below_what_the_index_ranges_allow_is_reported()
+    {
+        AssertOnlyFinding(Biaxial() with { Birefringence = new(0.001, 0.002) }, "birefringence");
+    }
+
+    [Fact]
+    public void Birefringence_overlapping_the_allowed_span_is_accepted()
+    {
+        // Allowed span: max(0, 1.686 − 1.654) = 0.032 to 1.690 − 1.650 = 0.040.
+        Assert.Empty(CatalogueCheck.CheckEntry(Biaxial() with { Birefringence = new(0.039, 0.045) }));
+    }
+
+    [Fact]
+    public void A_doubly_refractive_material_without_birefringence_is_reported()
+    {
+        AssertOnlyFinding(Uniaxial() with { Birefringence = null }, "birefringence");
+    }
+
+    [Fact]
+    public void A_single_index_material_with_birefringence_is_reported()
+    {
+        AssertOnlyFinding(Isotropic() with { Birefringence = new(0.001, 0.002) }, "birefringence");
+    }
+
+    [Fact]
+    public void A_single_index_material_with_a_sign_is_reported()
+    {
+        AssertOnlyFinding(Isotropic() with { Sign = OpticSign.Positive }, "optic_sign");
+    }
+
+    [Fact]
+    public void A_uniaxial_material_without_a_sign_is_reported()
+    {
+        AssertOnlyFinding(Uniaxial() with { Sign = OpticSign.None }, "optic_sign");
+    }
+
+    [Fact]
+    public void A_uniaxial_sign_that_contradicts_epsilon_and_omega_is_reported()
+    {
+        AssertOnlyFinding(Uniaxial() with { Sign = OpticSign.Negative }, "optic_sign");
+    }
+
+    [Fact]
+    public void A_biaxial_sign_that_contradicts_the_indices_is_reported()
+    {
+        // Centres 1.652, 1.6675, 1.688: γ − β = 0.0205 > β − α = 0.0155, so positive.
+        AssertOnlyFinding(Biaxial() with { Sign = OpticSign.Negative }, "optic_sign");
+    }
+
+    [Fact]
+    public void Either_sign_is_accepted_whatever_the_indices()
+    {
+        Assert.Empty(CatalogueCheck.CheckEntry(Uniaxial() with { Sign = OpticSign.Either }));
+        Assert.Empty(CatalogueCheck.CheckEntry(Biaxial() with { Sign = OpticSign.Either }));
+    }
+
+    [Fact]
+    public void A_biaxial_beta_outside_alpha_and_gamma_is_reported()
+    {
+        Material m = Biaxial() with
+        {
+            Indices = OpticalIndices.Biaxial(new(1.650, 1.654), new(1.660, 1.695), new(1.686, 1.690)),
+            Sign = OpticSign.Either,
+        };
+        AssertOnlyFinding(m, "beta");
+    }
+
+    [Fact]
+    public void A_cubic_material_must_be_isotropic()
+    {
+        AssertOnlyFinding(Uniaxial() with { CrystalSystem = CrystalSystem.Cubic, Polariscope = [PolariscopeReaction.SinglyRefractive] }, "optic_character");
+    }
+
+    [Fact]
+    public void A_cubic_material_cannot_be_doubly_refractive_in_the_polariscope()
+    {
+        AssertOnlyFinding(Isotropic() with { Polariscope = [PolariscopeReaction.DoublyRefractive] }, "polariscope");
+    }
+
+    [Fact]
+    public void An_amorphous_material_must_have_the_amorphous_character()
+    {
+        AssertOnlyFinding(Isotropic() with { CrystalSystem = CrystalSystem.Amorphous }, "optic_character");
+    }
+
+    [Fact]
+    public void A_biaxial_material_in_a_uniaxial_crystal_system_is_reported()
+    {
+        AssertOnlyFinding(Biaxial() with { CrystalSystem = CrystalSystem.Hexagonal }, "optic_character");
+    }
+
+    [Fact]
+    public void An_aggregate_is_allowed_in_any_crystal_system()
+    {
+        Material m = Isotropic() with
+        {
+            CrystalSystem = CrystalSystem.Trigonal,
+            Indices = OpticalIndices.SingleIndex(new(1.53, 1.54), OpticCharacter.Aggregate),
+            Polariscope = [PolariscopeReaction.Aggregate],
+        };
+        Assert.Empty(CatalogueCheck.CheckEntry(m));
+    }
+
+    [Fact]
+    public void Names_differing_only_in_case_are_duplicates()
+    {
+        CatalogueFinding f = Assert.Single(CatalogueCheck.Check([Uniaxial("Test Quartz"), Uniaxial("test quartz")]));
+        Assert.Equal("name", f.Field);
+        Assert.Contains("Test Quartz", f.Problem, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void An_empty_provenance_is_reported()
+    {
+        AssertOnlyFinding(Uniaxial() with { Provenance = "  " }, "provenance");
+    }
+
+    [Fact]
+    public void A_species_with_capitals_is_reported()
+    {
+        AssertOnlyFinding(Uniaxial() with { Species = "Quartz" }, "species");
+    }
+
+    [Fact]
+    public void An_entry_without_polariscope_reactions_is_reported()
+    {
+        AssertOnlyFinding(Uniaxial() with { Polariscope = [] }, "polariscope");
+    }
+
+    [Fact]
+    public void A_finding_reads_as_entry_field_and_problem()
+    {
+        Assert.Equal("entry 'x', field sg: too low", new CatalogueFinding("x", "sg", "too low").ToString());
+    }
+}

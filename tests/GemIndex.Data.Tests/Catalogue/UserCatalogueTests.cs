@@ -1,0 +1,120 @@
+using GemIndex.Core.Catalogue;
+using GemIndex.Data.Catalogue;
+
+namespace GemIndex.Data.Tests.Catalogue;
+
+public class UserCatalogueTests
+{
+    private static CatalogueImportResult Import(UserCatalogue user, string fixture, IReadOnlyList<Material>? shipped = null)
+    {
+        using var reader = new StreamReader(Fixtures.File(fixture));
+        return user.Import(reader, shipped ?? []);
+    }
+
+    private static CatalogueImportResult ImportText(UserCatalogue user, string csv, IReadOnlyList<Material>? shipped = null) =>
+        user.Import(new StringReader(csv), shipped ?? []);
+
+    [Fact]
+    public void A_good_file_is_imported_and_its_entries_are_marked_as_user_entries()
+    {
+        using var temp = new TempDirectory();
+        var user = new UserCatalogue(temp.File("user-catalogue.db"));
+        CatalogueImportResult result = Import(user, "user-good.csv");
+        Assert.True(result.Succeeded, string.Join("\n", result.Errors));
+        Assert.Equal(2, result.Imported);
+        IReadOnlyList<Material> loaded = user.Load();
+        Assert.Equal(["my test citrine", "my test glass"], loaded.Select(m => m.Name));
+        Assert.All(loaded, m => Assert.True(m.IsUserEntry));
+        Assert.Equal("heated, from a test parcel", loaded[0].Notes);
+        Assert.Equal(["yellow", "orange"], loaded[0].Colours);
+        Assert.Equal("user", loaded[0].Family);
+    }
+
+    [Fact]
+    public void A_file_with_bad_rows_imports_nothing_and_names_each_line_and_field()
+    {
+        using var temp = new TempDirectory();
+        var user = new UserCatalogue(temp.File("user-catalogue.db"));
+        CatalogueImportResult result = Import(user, "user-bad.csv");
+        Assert.False(result.Succeeded);
+        Assert.Equal(0, result.Imported);
+        Assert.Equal(
+        [
+            "line 3, field n_min: '1,50' has a comma: use a dot as the decimal mark (1.544)",
+            "line 4, field sg_min/sg_max: specific gravity 2.3–40 is outside the physical range 0.5 to 25 (both excluded)",
+            "line 5, field origin: 'imitaton' is not one of natural, synthetic, imitation, treated, composite",
+        ], result.Errors.Select(e => e.ToString()));
+        Assert.False(File.Exists(user.Path));
+        Assert.Empty(user.Load());
+    }
+
+    [Fact]
+    public void A_bad_row_in_a_second_import_leaves_the_first_import_untouched()
+    {
+        using var temp = new TempDirectory();
+        var user = new UserCatalogue(temp.File("user-catalogue.db"));
+        Assert.True(Import(user, "user-good.csv").Succeeded);
+        Assert.False(Import(user, "user-bad.csv").Succeeded);
+        Assert.Equal(2, user.Load().Count);
+    }
+
+    [Fact]
+    public void A_name_used_by_the_shipped_catalogue_is_refused()
+    {
+        using var temp = new TempDirectory();
+        var user = new UserCatalogue(temp.File("user-catalogue.db"));
+        IReadOnlyList<Material> shipped = [FamilyFileReader.ReadAll(Fixtures.FamilySources)[0] with { Name = "My Test Citrine" }];
+        CatalogueImportResult result = Import(user, "user-good.csv", shipped);
+        CatalogueImportError e = Assert.Single(result.Errors);
+        Assert.Equal("line 2, field name: 'my test citrine' is the name of a shipped catalogue entry; give your entry another name", e.ToString());
+        Assert.False(File.Exists(user.Path));
+    }
+
+    [Fact]
+    public void Importing_the_same_entries_twice_is_refused()
+    {
+        using var temp = new TempDirectory();
+        var user = new UserCatalogue(temp.File("user-catalogue.db"));
+        Assert.True(Import(user, "user-good.csv").Succeeded);
+        CatalogueImportResult again = Import(user, "user-good.csv");
+        Assert.Equal(["line 2, field name: 'my test citrine' is already in your catalogue", "line 4, field name: 'my test glass' is already in your catalogue"],
+            again.Errors.Select(e => e.ToString()));
+    }
+
+    [Fact]
+    public void A_check_rule_broken_in_a_row_is_reported_with_its_line()
+    {
+        using var temp = new TempDirectory();
+        var user = new UserCatalogue(temp.File("user-catalogue.db"));
+        string csv = File.ReadAllLines(Fixtures.File("user-good.csv"))[0] + "\n"
+            + "bad sign,quartz,citrine,treated,trigonal,uniaxial,negative,1.544,1.544,1.553,1.553,0.009,0.009,,,2.65,2.66,doubly_refractive,yellow,common,,own\n";
+        CatalogueImportError e = Assert.Single(ImportText(user, csv).Errors);
+        Assert.Equal(2, e.Line);
+        Assert.Equal("optic_sign", e.Field);
+    }
+
+    [Fact]
+    public void Merged_loading_returns_shipped_entries_then_user_entries()
+    {
+        using var temp = new TempDirectory();
+        CatalogueLocations locations = CatalogueLocations.Under(temp.Path);
+        Assert.True(Import(new UserCatalogue(locations.UserCataloguePath), "user-good.csv").Succeeded);
+        IReadOnlyList<Material> all = MergedCatalogue.Load(locations);
+        int shipped = ShippedCatalogue.Sources.Count == 0 ? 0 : FamilyFileReader.ReadAll(ShippedCatalogue.Sources).Count;
+        Assert.Equal(shipped + 2, all.Count);
+        Assert.All(all.Take(shipped), m => Assert.False(m.IsUserEntry));
+        Assert.All(all.Skip(shipped), m => Assert.True(m.IsUserEntry));
+        Assert.StartsWith(temp.Path, ShippedCatalogue.EnsureBuilt(locations.CacheDirectory), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_user_catalogue_of_another_schema_version_is_refused_not_rebuilt()
+    {
+        using var temp = new TempDirectory();
+        var user = new UserCatalogue(temp.File("user-catalogue.db"));
+        Assert.True(Import(user, "user-good.csv").Succeeded);
+        CatalogueStoreTests.SetUserVersion(user.Path, 99);
+        Assert.Throws<CatalogueSchemaVersionException>(user.Load);
+        Assert.Throws<CatalogueSchemaVersionException>(() => Import(user, "user-good.csv"));
+    }
+}
