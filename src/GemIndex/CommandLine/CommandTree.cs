@@ -14,6 +14,7 @@ internal static class CommandTree
             return ExitCodes.Ok;
         });
         root.Subcommands.Add(CatalogueCommand.Create());
+        root.Subcommands.Add(IdentifyCommand.Create(CatalogueCommand.DirectoryOption()));
         return root;
     }
 }
