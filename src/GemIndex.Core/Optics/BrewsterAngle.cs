@@ -4,7 +4,7 @@ namespace GemIndex.Core.Optics;
 
 /// <summary>
 /// The Brewster (polarising) angle, where p-polarised light is not reflected: tan θB = n₂ / n₁
-/// (Hecht, <i>Optics</i>, ch. 4), and the index of a stone from a measured Brewster angle.
+/// (Hecht, <i>Optics</i>, ch. 4, from memory), and the index of a stone from a measured Brewster angle.
 /// </summary>
 public static class BrewsterAngle
 {

@@ -4,7 +4,7 @@ namespace GemIndex.Core.Optics;
 
 /// <summary>
 /// The critical angle between a denser and a rarer medium: sin θc = n_rarer / n_denser (Snell's law with a
-/// 90° refraction angle; Hecht, <i>Optics</i>, ch. 4). Past it, light from the denser side is totally reflected.
+/// 90° refraction angle; Hecht, <i>Optics</i>, ch. 4, from memory). Past it, light from the denser side is totally reflected.
 /// </summary>
 public static class CriticalAngle
 {

@@ -3,7 +3,7 @@ using GemIndex.Core.Quantities;
 namespace GemIndex.Core.Optics;
 
 /// <summary>
-/// Fresnel reflectance at a smooth interface between two absorption-free media (Hecht, <i>Optics</i>, ch. 4),
+/// Fresnel reflectance at a smooth interface between two absorption-free media (Hecht, <i>Optics</i>, ch. 4, from memory),
 /// and the index of a stone estimated back from its normal-incidence reflectance.
 /// </summary>
 public static class Fresnel
@@ -30,14 +30,11 @@ public static class Fresnel
     }
 
     /// <summary>
-    /// Normal-incidence reflectance R = ((n₁ − n₂)/(n₁ + n₂))² (Hecht, <i>Optics</i>, ch. 4), the same for all
+    /// Normal-incidence reflectance R = ((n₁ − n₂)/(n₁ + n₂))² (Hecht, <i>Optics</i>, ch. 4, from memory), the same for all
     /// polarisations.
     /// </summary>
-    public static double AtNormalIncidence(RefractiveIndex surrounding, RefractiveIndex stone)
-    {
-        double r = (surrounding.Value - stone.Value) / (surrounding.Value + stone.Value);
-        return r * r;
-    }
+    public static double AtNormalIncidence(RefractiveIndex surrounding, RefractiveIndex stone) =>
+        NormalReflectance(surrounding.Value, stone.Value);
 
     /// <summary>
     /// The index of a stone from its normal-incidence reflectance R in a surrounding medium of index m,
@@ -57,7 +54,7 @@ public static class Fresnel
         double reflectanceUncertainty = 0)
     {
         double m = surrounding.Value;
-        double highest = Math.Pow((RefractiveIndex.Maximum - m) / (RefractiveIndex.Maximum + m), 2);
+        double highest = NormalReflectance(m, RefractiveIndex.Maximum); // same arithmetic as AtNormalIncidence, so its top value passes
         QuantityOutOfRangeException.ThrowIfNotAbove("normal-incidence reflectance", reflectance, 0);
         QuantityOutOfRangeException.ThrowIfOutside("normal-incidence reflectance", reflectance, 0, highest);
         QuantityOutOfRangeException.ThrowIfOutside("reflectance uncertainty", reflectanceUncertainty, 0, 1);
@@ -66,5 +63,11 @@ public static class Fresnel
         double sigma = double.Hypot(m * reflectanceUncertainty / (r * (1 - r) * (1 - r)),
             (1 + r) / (1 - r) * surrounding.StandardUncertainty);
         return new RefractiveIndex(n, sigma);
+    }
+
+    private static double NormalReflectance(double n1, double n2)
+    {
+        double r = (n1 - n2) / (n1 + n2);
+        return r * r;
     }
 }

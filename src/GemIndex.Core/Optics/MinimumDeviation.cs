@@ -5,7 +5,7 @@ namespace GemIndex.Core.Optics;
 /// <summary>
 /// The minimum-deviation method: a prism of apex angle A (two facets of a cut stone serve) deviates light
 /// least, by Dmin, when it passes symmetrically; then n = sin((A + Dmin)/2) / sin(A/2)
-/// (Hecht, <i>Optics</i>, ch. 5). The index is relative to the surrounding medium (air for bench work).
+/// (Hecht, <i>Optics</i>, ch. 5, from memory). The index is relative to the surrounding medium (air for bench work).
 /// </summary>
 public static class MinimumDeviation
 {

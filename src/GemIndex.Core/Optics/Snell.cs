@@ -3,7 +3,7 @@ using GemIndex.Core.Quantities;
 namespace GemIndex.Core.Optics;
 
 /// <summary>
-/// Snell's law of refraction, n₁ sin θ₁ = n₂ sin θ₂ (Hecht, <i>Optics</i>, ch. 4), both ways.
+/// Snell's law of refraction, n₁ sin θ₁ = n₂ sin θ₂ (Hecht, <i>Optics</i>, ch. 4, from memory), both ways.
 /// Angles are measured from the interface normal, 0°–90°.
 /// </summary>
 public static class Snell

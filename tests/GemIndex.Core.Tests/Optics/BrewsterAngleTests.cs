@@ -13,7 +13,7 @@ public class BrewsterAngleTests
     [Fact]
     public void Glass_of_index_1_5_in_air_has_a_Brewster_angle_of_56_3_degrees()
     {
-        // Source: Hecht, Optics, ch. 4: θB = 56.3° for n 1.5 from air. Tolerance: printed to 0.1°, so ±0.05°.
+        // Source: Hecht, Optics, as cited in DOMAIN.md §7: θB = 56.3° for n 1.5 from air. Tolerance: printed to 0.1°, so ±0.05°.
         Assert.Equal(56.3, BrewsterAngle.Of(Air, new RefractiveIndex(1.5)).Degrees, 0.05);
     }
 

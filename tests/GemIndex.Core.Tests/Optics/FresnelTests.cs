@@ -14,7 +14,7 @@ public class FresnelTests
     [Fact]
     public void Glass_of_index_1_5_reflects_4_percent_at_normal_incidence()
     {
-        // Source: Hecht, Optics, ch. 4: R = 4.0% for n 1.5 at normal incidence. Tolerance: printed to 0.1%, so ±0.05%.
+        // Source: Hecht, Optics, as cited in DOMAIN.md §7: R = 4.0% for n 1.5 at normal incidence. Tolerance: printed to 0.1%, so ±0.05%.
         Assert.Equal(0.040, Fresnel.AtNormalIncidence(Air, Glass), 0.0005);
         Reflectance r = Fresnel.At(Air, Glass, Angle.FromDegrees(0));
         Assert.Equal(0.040, r.S, 0.0005);
@@ -67,6 +67,16 @@ public class FresnelTests
         Assert.Equal(0.0078125, n.StandardUncertainty, 1e-12);
     }
 
+    [Fact]
+    public void The_reflectance_of_an_index_4_stone_is_accepted_at_the_top_of_the_range()
+    {
+        // Regression: FsCheck found (medium 1.737, stone 4.000) refused as "0.15564; allowed 0 to 0.15564" when the
+        // range top was computed with other arithmetic than the reflectance itself.
+        var medium = new RefractiveIndex(1.737);
+        double r = Fresnel.AtNormalIncidence(medium, new RefractiveIndex(4.0));
+        Assert.Equal(4.0, Fresnel.IndexFromNormalReflectance(r, medium).Value, 1e-9);
+    }
+
     [Theory]
     [InlineData(0)]
     [InlineData(-0.01)]
@@ -85,7 +95,8 @@ public class FresnelTests
 
     [Property]
     public Property Reflectances_are_fractions_and_p_never_exceeds_s() =>
-        // For absorption-free media |rp| ≤ |rs| at every angle, external or internal (Hecht, ch. 4 figures).
+        // For absorption-free media |rp| ≤ |rs| at every angle, external or internal:
+        // rp/rs = −cos(θi + θt)/cos(θi − θt) and |cos(θi + θt)| ≤ cos(θi − θt) for angles in 0°–90°.
         Prop.ForAll(OpticsArbitraries.AnyRay, ray =>
         {
             Reflectance r = Fresnel.At(ray.From, ray.To, ray.Incidence);

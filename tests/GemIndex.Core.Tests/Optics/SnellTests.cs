@@ -55,6 +55,27 @@ public class SnellTests
     }
 
     [Fact]
+    public void Grazing_emergence_reports_the_whole_range_as_its_uncertainty()
+    {
+        // At the critical angle sin θ₂ = 1 and d asin/ds is unbounded: first order gives no bound, reported as 90°.
+        var water = new RefractiveIndex(1.333, 0.001);
+        Refraction r = Snell.Refract(water, Air, Angle.FromRadians(Math.Asin(1 / 1.333)));
+        Assert.Equal(90, r.RefractedAngle.Degrees, 1e-6);
+        Assert.Equal(90, r.RefractedAngle.StandardUncertaintyDegrees, 1e-12);
+    }
+
+    [Property]
+    public Property Light_is_totally_reflected_exactly_past_the_critical_angle() =>
+        Prop.ForAll(OpticsArbitraries.AnyRay, ray =>
+        {
+            Angle? critical = CriticalAngle.Between(ray.From, ray.To);
+            bool reflected = Snell.Refract(ray.From, ray.To, ray.Incidence).IsTotallyReflected;
+            bool past = critical is { } c && ray.Incidence.Radians > c.Radians + 1e-12;
+            bool before = critical is not { } d || ray.Incidence.Radians < d.Radians - 1e-12;
+            return ((past && reflected) || (before && !reflected) || (!past && !before)).Label($"{ray}: critical {critical}, reflected {reflected}");
+        });
+
+    [Fact]
     public void Incidence_for_a_refraction_angle_inverts_the_worked_example()
     {
         Angle incidence = Snell.IncidenceFor(Air, Glass, Angle.FromDegrees(19.4712206));

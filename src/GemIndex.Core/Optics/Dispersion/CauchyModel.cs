@@ -5,8 +5,8 @@ using MathNet.Numerics.LinearRegression;
 namespace GemIndex.Core.Optics.Dispersion;
 
 /// <summary>
-/// Cauchy's dispersion formula n(λ) = A + B/λ² + C/λ⁴, λ in µm (Cauchy 1836; Jenkins &amp; White,
-/// <i>Fundamentals of Optics</i>, ch. 23), with C = 0 for the two-term form. A fair description across the visible
+/// Cauchy's dispersion formula n(λ) = A + B/λ² + C/λ⁴, λ in µm (the form in DOMAIN.md §4), with C = 0 for the
+/// two-term form. A fair description across the visible
 /// for transparent materials away from absorption; not for extrapolation into the ultraviolet or infrared.
 /// </summary>
 public sealed record CauchyModel : IDispersionModel

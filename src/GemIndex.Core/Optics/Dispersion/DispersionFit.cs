@@ -7,11 +7,11 @@ namespace GemIndex.Core.Optics.Dispersion;
 /// <typeparam name="TModel">The model fitted.</typeparam>
 public sealed class DispersionFit<TModel> where TModel : IDispersionModel
 {
-    internal DispersionFit(TModel model, IReadOnlyList<double> residuals)
+    internal DispersionFit(TModel model, double[] residuals)
     {
         Model = model;
-        Residuals = residuals;
-        RootMeanSquareResidual = Math.Sqrt(residuals.Sum(r => r * r) / residuals.Count);
+        Residuals = Array.AsReadOnly(residuals);
+        RootMeanSquareResidual = Math.Sqrt(residuals.Sum(r => r * r) / residuals.Length);
     }
 
     /// <summary>The fitted model.</summary>

@@ -1,4 +1,5 @@
 using GemIndex.Core.Quantities;
+using MathNet.Numerics;
 using MathNet.Numerics.LinearAlgebra;
 using MathNet.Numerics.Optimization;
 
@@ -6,12 +7,12 @@ namespace GemIndex.Core.Optics.Dispersion;
 
 /// <summary>
 /// The Sellmeier dispersion equation n²(λ) = 1 + Σ Bᵢ λ² / (λ² − Cᵢ), λ in µm, with one to three terms
-/// (Sellmeier 1871; the form used by Malitson 1965, J. Opt. Soc. Am. 55, 1205). Valid between the resonances it
+/// (the form used by Malitson 1965, J. Opt. Soc. Am. 55, 1205). Valid between the resonances it
 /// models, i.e. for λ² well away from every Cᵢ.
 /// </summary>
 public sealed class SellmeierModel : IDispersionModel
 {
-    private readonly SellmeierTerm[] _terms;
+    private readonly double[] _coefficients; // B₁, C₁, B₂, C₂, …: the layout the fit uses
 
     /// <summary>Creates a model from one to three terms.</summary>
     /// <exception cref="QuantityOutOfRangeException">Fewer than one or more than three terms.</exception>
@@ -19,11 +20,12 @@ public sealed class SellmeierModel : IDispersionModel
     {
         ArgumentNullException.ThrowIfNull(terms);
         QuantityOutOfRangeException.ThrowIfOutside("number of Sellmeier terms", terms.Count, 1, 3);
-        _terms = [.. terms];
+        Terms = Array.AsReadOnly(terms.ToArray());
+        _coefficients = [.. Terms.SelectMany(t => new[] { t.Strength, t.ResonanceSquareMicrometres })];
     }
 
     /// <summary>The terms, in the order given.</summary>
-    public IReadOnlyList<SellmeierTerm> Terms => _terms;
+    public IReadOnlyList<SellmeierTerm> Terms { get; }
 
     /// <summary>n = √(1 + Σ Bᵢ λ²/(λ² − Cᵢ)), λ in µm.</summary>
     /// <exception cref="QuantityOutOfRangeException">
@@ -32,7 +34,7 @@ public sealed class SellmeierModel : IDispersionModel
     public double IndexAt(Wavelength wavelength)
     {
         DispersionChecks.Wavelength(wavelength);
-        double squared = IndexSquared(_terms.SelectMany(t => new[] { t.Strength, t.ResonanceSquareMicrometres }).ToArray(), wavelength.Micrometres);
+        double squared = IndexSquared(_coefficients, wavelength.Micrometres);
         return DispersionChecks.ModelIndex(squared >= 0 ? Math.Sqrt(squared) : double.NaN, wavelength);
     }
 
@@ -60,21 +62,36 @@ public sealed class SellmeierModel : IDispersionModel
         (double[] um, double[] n) = DispersionChecks.FitPoints(points, 2 * terms, "Sellmeier");
         double[] guess = start is null
             ? DefaultStart.Take(2 * terms).ToArray()
-            : start.Terms.SelectMany(t => new[] { t.Strength, t.ResonanceSquareMicrometres }).ToArray();
+            : [.. start._coefficients]; // a copy: DenseOfArray wraps the array it is given
         IObjectiveModel objective = ObjectiveFunction.NonlinearModel(
             (p, l) => Math.Sqrt(IndexSquared(p.AsArray() ?? p.ToArray(), l)),
             (p, l) => Gradient(p, l),
             Vector<double>.Build.DenseOfArray(um), Vector<double>.Build.DenseOfArray(n));
-        NonlinearMinimizationResult result = new LevenbergMarquardtMinimizer(functionTolerance: FunctionTolerance, maximumIterations: 1000)
-            .FindMinimum(objective, Vector<double>.Build.DenseOfArray(guess));
-        if (result.ReasonForExit is ExitCondition.ExceedIterations or ExitCondition.InvalidValues
-            or ExitCondition.ManuallyStopped or ExitCondition.None)
-            throw new InvalidOperationException(
-                $"The {terms}-term Sellmeier fit did not converge ({result.ReasonForExit}); try a start nearer the expected coefficients or fewer terms.");
-        double[] q = result.MinimizingPoint.ToArray();
+        double[] q = Minimise(objective, guess, terms);
         var model = new SellmeierModel(Enumerable.Range(0, terms).Select(i => new SellmeierTerm(q[2 * i], q[2 * i + 1])).ToArray());
         return new DispersionFit<SellmeierModel>(model, points.Select(p => p.Index - model.IndexAt(p.Wavelength)).ToArray());
     }
+
+    private static double[] Minimise(IObjectiveModel objective, double[] guess, int terms)
+    {
+        var minimiser = new LevenbergMarquardtMinimizer(functionTolerance: FunctionTolerance, maximumIterations: 1000);
+        NonlinearMinimizationResult result;
+        try
+        {
+            result = minimiser.FindMinimum(objective, Vector<double>.Build.DenseOfArray(guess));
+        }
+        catch (NonConvergenceException e) // MathNet throws this itself when the model is not finite at the start
+        {
+            throw NotConverged(terms, e.Message, e);
+        }
+        if (result.ReasonForExit is ExitCondition.ExceedIterations or ExitCondition.InvalidValues
+            or ExitCondition.ManuallyStopped or ExitCondition.None)
+            throw NotConverged(terms, result.ReasonForExit.ToString(), null);
+        return result.MinimizingPoint.ToArray();
+    }
+
+    private static InvalidOperationException NotConverged(int terms, string reason, Exception? inner) =>
+        new($"The {terms}-term Sellmeier fit did not converge ({reason}); try a start nearer the expected coefficients or fewer terms.", inner);
 
     // Stop when ½ Σ residual² falls below this: residuals near 1e-12, far under any measured index's precision.
     // MathNet's default (1e-15) stops exact data at residuals near 4e-8, leaving coefficients off in the 7th digit.

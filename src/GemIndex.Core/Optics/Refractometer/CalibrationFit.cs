@@ -10,11 +10,11 @@ namespace GemIndex.Core.Optics.Refractometer;
 /// </summary>
 public sealed class CalibrationFit
 {
-    private CalibrationFit(double offset, double standardUncertainty, IReadOnlyList<double> residuals)
+    private CalibrationFit(double offset, double standardUncertainty, double[] residuals)
     {
         Offset = offset;
         StandardUncertainty = standardUncertainty;
-        Residuals = residuals;
+        Residuals = Array.AsReadOnly(residuals);
     }
 
     /// <summary>The fitted offset, added to raw readings.</summary>

@@ -5,7 +5,7 @@ namespace GemIndex.Core.Optics.Refractometer;
 /// <summary>
 /// The geometry of a hemicylinder critical-angle refractometer: light leaves the glass radially, so the angle
 /// seen is the internal angle at the glass–stone interface, and the shadow edge sits at the critical angle,
-/// sin θ = n_stone / n_glass (Snell's law at 90° refraction; Hecht, <i>Optics</i>, ch. 4).
+/// sin θ = n_stone / n_glass (Snell's law at 90° refraction; Hecht, <i>Optics</i>, ch. 4, from memory).
 /// </summary>
 public static class Hemicylinder
 {

@@ -69,6 +69,31 @@ public class SellmeierModelTests
     }
 
     [Fact]
+    public void A_fit_started_on_a_resonance_reports_that_it_did_not_converge()
+    {
+        // A start with C = 0.25 µm² puts a pole exactly on the 0.5 µm point: the model is infinite there and the
+        // minimiser exits with InvalidValues, which must surface as an error, not as a model.
+        DispersionPoint[] points = Points(DispersionModels.FusedSilica, 0.4, 0.5, 0.6, 0.7);
+        var e = Assert.Throws<InvalidOperationException>(() => SellmeierModel.Fit(points, 1, new SellmeierModel(new SellmeierTerm(1.0, 0.25))));
+        Assert.Contains("1-term Sellmeier fit did not converge", e.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_start_with_the_wrong_number_of_terms_is_refused() =>
+        OutOfRangeAssert.Throws(() => SellmeierModel.Fit(Points(DispersionModels.FusedSilica, 0.4, 0.5, 0.6, 0.7, 0.8), 1, DispersionModels.Diamond),
+            "number of terms in the Sellmeier start", "1 to 1");
+
+    [Fact]
+    public void A_model_cannot_be_changed_through_its_terms()
+    {
+        var terms = new[] { new SellmeierTerm(1.1, 0.01) };
+        var model = new SellmeierModel(terms);
+        terms[0] = new SellmeierTerm(2.0, 0.01);
+        Assert.Equal(1.1, model.Terms[0].Strength);
+        Assert.False(model.Terms is SellmeierTerm[]);
+    }
+
+    [Fact]
     public void A_fit_with_no_more_points_than_parameters_is_refused()
     {
         DispersionPoint[] points = Points(DispersionModels.FusedSilica, 0.4, 0.5, 0.6, 0.7);
