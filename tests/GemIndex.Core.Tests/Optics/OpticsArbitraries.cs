@@ -67,4 +67,14 @@ public static class OpticsArbitraries
          from share in Between(0, 1)
          let steepest = 2 * Math.Asin(1 / n) * 180 / Math.PI
          select (Angle.FromDegrees(5 + share * (0.95 * steepest - 5)), new RefractiveIndex(n))).ToArbitrary();
+
+    /// <summary>
+    /// A calibration offset (±0.01) and one to six standards (known 1.40–1.75) read exactly that much low, all on the
+    /// default instrument's scale.
+    /// </summary>
+    public static Arbitrary<(double Offset, double[] Known)> ExactCalibration =>
+        (from offset in Between(-0.01, 0.01)
+         from count in Gen.Choose(1, 6)
+         from known in Between(1.40, 1.75).ArrayOf(count)
+         select (offset, known)).ToArbitrary();
 }

@@ -1,3 +1,6 @@
+using FsCheck;
+using FsCheck.Fluent;
+using FsCheck.Xunit;
 using GemIndex.Core.Optics.Refractometer;
 
 namespace GemIndex.Core.Tests.Optics.Refractometer;
@@ -47,4 +50,17 @@ public class CalibrationFitTests
     [Fact]
     public void A_standard_with_an_impossible_index_is_refused() =>
         OutOfRangeAssert.Throws(() => new StandardReading(0.9, 1.5), "standard's known index", "1 to 4");
+
+    [Property]
+    public Property Readings_off_by_a_constant_give_that_constant_back() =>
+        Prop.ForAll(OpticsArbitraries.ExactCalibration, c =>
+        {
+            StandardReading[] readings = c.Known.Select(k => new StandardReading(k, k - c.Offset)).ToArray();
+            CalibrationFit fit = CalibrationFit.From(readings, RefractometerProfile.Default);
+            // Tolerance: differences of numbers near 1.5 carry rounding of a few 1e-16.
+            bool offsetBack = Math.Abs(fit.Offset - c.Offset) < 1e-12;
+            bool uncertainty = c.Known.Length == 1 ? fit.StandardUncertainty == 0.001 : fit.StandardUncertainty < 1e-12;
+            return (offsetBack && uncertainty && fit.Residuals.All(r => Math.Abs(r) < 1e-12))
+                .Label($"offset {c.Offset}, {c.Known.Length} standards: fit {fit.Offset} ± {fit.StandardUncertainty}");
+        });
 }
