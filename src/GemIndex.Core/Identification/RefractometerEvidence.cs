@@ -1,6 +1,9 @@
 using System.Globalization;
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Optics;
+using GemIndex.Core.Optics.Dispersion;
 using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Quantities;
 using GemIndex.Core.Readings;
 
 namespace GemIndex.Core.Identification;
@@ -36,16 +39,14 @@ internal static class RefractometerEvidence
         if (r.OverLimit) OverLimit(m, r, hasReadings: sheet.Series is not null || r.Spot is not null, acc);
     }
 
-    /// <summary>n(589.3) − n(λ) for the material, by the two-term Cauchy model through its nG − nB.</summary>
+    /// <summary>n(589.3) − n(λ) for the material, by the two-term Cauchy model through its n and nG − nB.</summary>
     internal static double WavelengthShift(Material m, double lightNanometres, out double sigma)
     {
         sigma = 0;
         if (Math.Abs(lightNanometres - RefractometerObservation.SodiumLightNanometres) < 0.5) return 0;
         double dispersion = m.Dispersion ?? AssumedDispersion;
-        // n = A + B/λ²; nG − nB = B (1/λG² − 1/λB²) with λ in µm.
-        double b = dispersion / (1 / (0.4308 * 0.4308) - 1 / (0.6867 * 0.6867));
-        double lambda = lightNanometres / 1000;
-        double shift = b * (1 / (0.5893 * 0.5893) - 1 / (lambda * lambda));
+        var model = CauchyModel.FromIndexAndDispersion(new RefractiveIndex(m.Indices.Lowest.Centre), dispersion);
+        double shift = model.IndexAt(ReferenceWavelengths.D) - model.IndexAt(Wavelength.FromNanometres(lightNanometres));
         if (m.Dispersion is null) sigma = Math.Abs(shift) / 2;
         return shift;
     }
