@@ -14,6 +14,7 @@ internal static class CommandTree
             return ExitCodes.Ok;
         });
         root.Subcommands.Add(CatalogueCommand.Create());
+        root.Subcommands.Add(ReportCommand.Create(() => GemIndex.Data.Catalogue.MergedCatalogue.Load(GemIndex.Data.Catalogue.CatalogueLocations.FromEnvironment())));
         return root;
     }
 }
