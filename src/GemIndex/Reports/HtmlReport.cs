@@ -80,7 +80,7 @@ internal static class HtmlReport
         foreach (var c in report.Candidates.Where(c => c.Reasons.Count > 0))
         {
             h.Append("<h3>Reasons for ").Append(E(c.Name)).AppendLine("</h3>");
-            List(h, [.. c.Reasons.Select(r => $"{(r.Agrees ? "agrees" : "against")} ({r.Test}, {ReportNumbers.Bits(r.WeightBits)}): {r.Text}")], "");
+            List(h, [.. c.Reasons.Select(r => $"{(r.Agrees ? "agrees" : "against")} ({StoneReport.Word(r.Test)}, {ReportNumbers.Bits(r.WeightBits)}): {r.Text}")], "");
         }
     }
 

@@ -52,7 +52,7 @@ internal static class MarkdownReport
         {
             md.Append("Reasons for ").Append(Escape(c.Name)).AppendLine(":").AppendLine();
             foreach (var r in c.Reasons)
-                md.AppendLine($"- {(r.Agrees ? "agrees" : "against")} ({Escape(r.Test)}, {ReportNumbers.Bits(r.WeightBits)}): {Escape(r.Text)}");
+                md.AppendLine($"- {(r.Agrees ? "agrees" : "against")} ({Escape(StoneReport.Word(r.Test))}, {ReportNumbers.Bits(r.WeightBits)}): {Escape(r.Text)}");
             md.AppendLine();
         }
     }
