@@ -6,10 +6,10 @@ using GemIndex.Data.Catalogue;
 // anything else goes to BenchmarkDotNet, e.g. -- --filter '*' --job short
 if (args.Length > 0 && args[0] == "accuracy")
 {
-    int stones = args.Length > 1 ? int.Parse(args[1], System.Globalization.CultureInfo.InvariantCulture) : 3000;
-    int seed = args.Length > 2 ? int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture) : 1;
+    int stones = args.Length > 1 && args[1] != "--failures" ? int.Parse(args[1], System.Globalization.CultureInfo.InvariantCulture) : 3000;
+    int seed = args.Length > 2 && args[2] != "--failures" ? int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture) : 1;
     string cache = Path.Combine(Path.GetTempPath(), "gemindex-bench-cache");
-    AccuracyRun.Run(ShippedCatalogue.Load(cache), stones, seed, Console.Out);
+    AccuracyRun.Run(ShippedCatalogue.Load(cache), stones, seed, Console.Out, args.Contains("--failures") ? Console.Error : null);
     return 0;
 }
 BenchmarkSwitcher.FromAssembly(typeof(AccuracyRun).Assembly).Run(args);

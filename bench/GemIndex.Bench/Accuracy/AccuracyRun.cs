@@ -13,7 +13,7 @@ namespace GemIndex.Bench.Accuracy;
 /// </summary>
 internal static class AccuracyRun
 {
-    public static void Run(IReadOnlyList<Material> catalogue, int stones, int seed, TextWriter o)
+    public static void Run(IReadOnlyList<Material> catalogue, int stones, int seed, TextWriter o, TextWriter? failures = null)
     {
         var random = new Random(seed);
         var simulator = new StoneSimulator(random);
@@ -42,6 +42,8 @@ internal static class AccuracyRun
             base3 += baseline.Take(3).Any(m => m.Name == truth.Name) ? 1 : 0;
             var partners = catalogue.Where(m => m.Name != truth.Name && Inseparable(m, truth)).Select(m => m.Name).ToHashSet();
             if (partners.Count == 0) { separableCount++; separableTop1 += first ? 1 : 0; separableBase1 += baseFirst ? 1 : 0; }
+            if (!first && partners.Count == 0 && failures is not null)
+                failures.WriteLine($"{truth.Name}: " + string.Join(" | ", result.Candidates.Take(3).Select(c => $"{c.Material.Name} {c.Confidence:0.00}")) + " <- " + Describe(sheet));
             groupTop1 += first || partners.Contains(names[0]) ? 1 : 0;
             falseAlarms += result.NoGoodMatch ? 1 : 0;
             int bin = Math.Min(9, (int)(result.Candidates[0].Confidence * 10));
@@ -98,6 +100,13 @@ internal static class AccuracyRun
         o.WriteLine($"Ranking only (no next test, no reasons): {(rankOnly / sheets.Count * 1e6).ToString("0", CultureInfo.InvariantCulture)} µs a stone; " +
             $"10,000 stones would take {(rankOnly / sheets.Count * 10000).ToString("0.00", CultureInfo.InvariantCulture)} s on one core.");
     }
+
+    private static string Describe(BenchSheet s) => string.Join("; ", new[]
+    {
+        s.Refractometer is { } r ? (r.Spot is { } spot ? $"spot {spot}" : string.Join(" ", r.Steps.Select(x => $"{x.RotationDegrees:0}:{x.Low:0.000}/{x.High:0.000}"))) + (r.OverLimit ? " OTL" : "") : null,
+        s.SpecificGravity is { } g ? $"SG {g.Value}" : null, s.Polariscope?.ToString(), s.Pleochroism?.ToString(), s.Colour,
+        s.UvLong is { } u ? $"LW {u}" : null, s.AbsorptionLinesNanometres is { } l ? "lines " + string.Join(",", l) : null,
+    }.Where(x => x is not null));
 
     /// <summary>Two materials the bench tests cannot tell apart: same optic character, overlapping index and SG ranges.</summary>
     internal static bool Inseparable(Material a, Material b) =>

@@ -43,29 +43,43 @@ internal sealed class StoneSimulator(Random random)
         };
     }
 
+    /// <summary>
+    /// True indices uniform in the material's ranges and consistent with its birefringence range (rejection sampling:
+    /// a material's indices move together, so γ − α must also lie in its birefringence range).
+    /// </summary>
     private IndicatrixModel TrueIndicatrix(Material m)
     {
         var ix = m.Indices;
-        switch (m.OpticCharacter)
+        var bire = m.Birefringence;
+        for (int attempt = 0; ; attempt++)
         {
-            case OpticCharacter.Uniaxial:
+            bool last = attempt >= 200; // ranges that barely agree: accept the last draw
+            switch (m.OpticCharacter)
             {
-                double omega = Uniform(ix.Omega!.Value);
-                double epsilon = Uniform(ix.Epsilon!.Value);
-                if (Math.Abs(epsilon - omega) < 1e-4) epsilon = omega + (m.Sign == OpticSign.Negative ? -1e-4 : 1e-4);
-                return IndicatrixModel.Uniaxial(new RefractiveIndex(omega), new RefractiveIndex(epsilon));
+                case OpticCharacter.Uniaxial:
+                {
+                    double omega = Uniform(ix.Omega!.Value), epsilon = Uniform(ix.Epsilon!.Value);
+                    if (bire is { } b && !b.Contains(Math.Abs(epsilon - omega)) && !last) continue;
+                    if (Math.Abs(epsilon - omega) < 1e-4) epsilon = omega + (m.Sign == OpticSign.Negative ? -1e-4 : 1e-4);
+                    return IndicatrixModel.Uniaxial(new RefractiveIndex(omega), new RefractiveIndex(epsilon));
+                }
+                case OpticCharacter.Biaxial:
+                {
+                    double a = Uniform(ix.Alpha!.Value), g = Uniform(ix.Gamma!.Value);
+                    if (bire is { } b && !b.Contains(g - a) && !last) continue;
+                    var betaRange = ix.Beta!.Value;
+                    double lo = Math.Max(betaRange.Minimum, a + 1e-4), hi = Math.Min(betaRange.Maximum, g - 1e-4);
+                    if (lo > hi && !last) continue;
+                    double beta = lo <= hi ? lo + random.NextDouble() * (hi - lo) : (a + g) / 2;
+                    double[] s = [a, beta, g];
+                    Array.Sort(s);
+                    if (s[1] - s[0] < 1e-4) s[1] = s[0] + 1e-4;
+                    if (s[2] - s[1] < 1e-4) s[2] = s[1] + 1e-4;
+                    return IndicatrixModel.Biaxial(new RefractiveIndex(s[0]), new RefractiveIndex(s[1]), new RefractiveIndex(s[2]));
+                }
+                default:
+                    return IndicatrixModel.Isotropic(new RefractiveIndex(Uniform(ix.Single!.Value)));
             }
-            case OpticCharacter.Biaxial:
-            {
-                double a = Uniform(ix.Alpha!.Value), b = Uniform(ix.Beta!.Value), g = Uniform(ix.Gamma!.Value);
-                double[] s = [a, b, g];
-                Array.Sort(s);
-                if (s[1] - s[0] < 1e-4) s[1] = s[0] + 1e-4;
-                if (s[2] - s[1] < 1e-4) s[2] = s[1] + 1e-4;
-                return IndicatrixModel.Biaxial(new RefractiveIndex(s[0]), new RefractiveIndex(s[1]), new RefractiveIndex(s[2]));
-            }
-            default:
-                return IndicatrixModel.Isotropic(new RefractiveIndex(Uniform(ix.Single!.Value)));
         }
     }
 
