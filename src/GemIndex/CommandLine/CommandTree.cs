@@ -15,6 +15,7 @@ internal static class CommandTree
         });
         root.Subcommands.Add(CatalogueCommand.Create());
         root.Subcommands.Add(IdentifyCommand.Create(CatalogueCommand.DirectoryOption()));
+        root.Subcommands.Add(Calc.CalcCommand.Create());
         return root;
     }
 }
