@@ -69,7 +69,8 @@ internal static class CalcDispersionCommand
             DispersionFit<CauchyModel> cauchy = Named("--point, --terms", () => CauchyModel.Fit(points, terms ?? 2));
             CoefficientJson[] coefficients =
             [
-                new("A", cauchy.Model.A, NoUnit), new("B", cauchy.Model.BSquareMicrometres, "µm²"), new("C", cauchy.Model.CQuarticMicrometres, "µm⁴"),
+                new("A", cauchy.Model.A, NoUnit), new("B", cauchy.Model.BSquareMicrometres, "µm²"),
+                .. (terms == 3 ? [new CoefficientJson("C", cauchy.Model.CQuarticMicrometres, "µm⁴")] : Array.Empty<CoefficientJson>()),
             ];
             return Describe($"Cauchy, {terms ?? 2} terms", cauchy.Model, coefficients, points, cauchy.Residuals, cauchy.RootMeanSquareResidual);
         }

@@ -21,6 +21,12 @@ internal static class CalcFailure
             error.WriteLine($"gemindex calc: {e.Message}");
             return ExitCodes.BadInput;
         }
+        catch (Exception e) when (e is ArgumentException or InvalidOperationException)
+        {
+            // A Core call not wrapped in Named: still one line, without an option name.
+            error.WriteLine($"gemindex calc: {e.Message}");
+            return ExitCodes.BadInput;
+        }
     }
 
     /// <summary>Runs a Core call whose inputs came from <paramref name="options"/>, naming them in any domain error.</summary>

@@ -17,7 +17,7 @@ internal static class CalcIndicatrixCommand
     internal sealed record SectionJson(double RotationDegrees, double LowIndex, double HighIndex, double Birefringence);
 
     internal sealed record IndicatrixResult(string Character, double Alpha, double Beta, double Gamma, double Birefringence,
-        string Sign, double? OpticAxialAngleDegrees, double[]? Facet, SectionJson[]? Rotation);
+        string Sign, double? OpticAxialAngleDegrees, double? Omega, double? Epsilon, double[]? Facet, SectionJson[]? Rotation);
 
     public static Command Create()
     {
@@ -34,8 +34,8 @@ internal static class CalcIndicatrixCommand
         command.SetAction(pr => Guard(pr, output =>
         {
             IndicatrixModel indicatrix = Build(pr.GetValue(alpha), pr.GetValue(beta), pr.GetValue(gamma), pr.GetValue(omega), pr.GetValue(epsilon));
-            IndicatrixResult result = Describe(indicatrix);
-            if (pr.GetValue(facet) is { } xyz) result = Rotate(result, indicatrix, xyz, pr.GetValue(step));
+            IndicatrixResult result = Describe(indicatrix, pr.GetValue(omega), pr.GetValue(epsilon));
+            if (pr.GetValue(facet) is { Length: 3 } xyz) result = Rotate(result, indicatrix, xyz, pr.GetValue(step));
             if (pr.GetValue(json)) CalcJson.Write(output, result);
             else Write(output, result);
             return ExitCodes.Ok;
@@ -53,9 +53,9 @@ internal static class CalcIndicatrixCommand
             _ => throw Input("give either --alpha, --beta and --gamma (biaxial) or --omega and --epsilon (uniaxial)"),
         };
 
-    private static IndicatrixResult Describe(IndicatrixModel x) => new(x.Character.ToString().ToLowerInvariant(),
+    private static IndicatrixResult Describe(IndicatrixModel x, double? omega, double? epsilon) => new(x.Character.ToString().ToLowerInvariant(),
         x.Alpha.Value, x.Beta.Value, x.Gamma.Value, x.Birefringence.Value, x.Sign.ToString().ToLowerInvariant(),
-        x.OpticAxialAngle?.Degrees, null, null);
+        x.OpticAxialAngle?.Degrees, omega, epsilon, null, null);
 
     private static IndicatrixResult Rotate(IndicatrixResult result, IndicatrixModel indicatrix, double[] xyz, double stepDegrees)
     {
@@ -67,8 +67,8 @@ internal static class CalcIndicatrixCommand
 
     private static void Write(TextWriter output, IndicatrixResult r)
     {
-        output.WriteLine(r.Character == "uniaxial"
-            ? $"uniaxial: ω {Index(r.Alpha == r.Beta ? r.Alpha : r.Gamma)}, ε {Index(r.Alpha == r.Beta ? r.Gamma : r.Alpha)} {NoUnit}"
+        output.WriteLine(r is { Omega: { } o, Epsilon: { } e }
+            ? $"uniaxial: ω {Index(o)}, ε {Index(e)} {NoUnit}"
             : $"biaxial: α {Index(r.Alpha)}, β {Index(r.Beta)}, γ {Index(r.Gamma)} {NoUnit}");
         output.WriteLine($"birefringence {Fixed(r.Birefringence, "0.0000")} {NoUnit}; optic sign {r.Sign}" +
             (r.OpticAxialAngleDegrees is { } v ? $"; 2Vz {Degrees(v)}" : ""));

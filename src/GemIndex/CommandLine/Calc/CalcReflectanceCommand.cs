@@ -57,11 +57,15 @@ internal static class CalcReflectanceCommand
 
     private static void Write(TextWriter output, ReflectanceResult r)
     {
-        output.WriteLine($"from n1 {Index(r.IndexFrom)} into n2 {Index(new RefractiveIndex(r.IndexTo, r.IndexToUncertainty))} {NoUnit}, " +
-            $"incidence {Degrees(r.IncidenceDegrees)}");
         if (r.SPercent is { } s && r.PPercent is { } p)
+        {
+            output.WriteLine($"from n1 {Index(r.IndexFrom)} into n2 {Index(r.IndexTo)} {NoUnit}, incidence {Degrees(r.IncidenceDegrees)}");
             output.WriteLine($"reflectance: s-polarised {Percent(s / 100)}, p-polarised {Percent(p / 100)}, unpolarised {Percent(r.UnpolarisedPercent / 100)}");
+        }
         else
-            output.WriteLine($"from a normal-incidence reflectance of {Percent(r.UnpolarisedPercent / 100)}");
+        {
+            output.WriteLine($"normal-incidence reflectance {Percent(r.UnpolarisedPercent / 100)} in n1 {Index(r.IndexFrom)} {NoUnit}: " +
+                $"stone index {Index(new RefractiveIndex(r.IndexTo, r.IndexToUncertainty))} {NoUnit}");
+        }
     }
 }
