@@ -13,7 +13,7 @@ namespace GemIndex.Cli.CommandLine.Calc;
 internal static class CalcSpecificGravityCommand
 {
     internal sealed record SpecificGravityResult(double WaterCelsius, double WaterDensityKilogramsPerCubicMetre,
-        string? Unit, double? WeightInAir, double? WeightInWater, double? BalanceResolution,
+        string? EnteredUnit, double? WeightInAirCarats, double? WeightInWaterCarats, double? BalanceResolutionCarats,
         double? SpecificGravity, double? SpecificGravityUncertainty);
 
     public static Command Create()
@@ -47,10 +47,11 @@ internal static class CalcSpecificGravityCommand
         Func<double, Mass> mass = unit == "g" ? g => Mass.FromGrams(g) : ct => Mass.FromCarats(ct);
         Mass a = Named("--in-air", () => mass(air));
         Mass w = Named("--in-water", () => mass(inWater));
-        SpecificGravity sg = resolution is { } step
-            ? Named("--in-air, --in-water, --resolution", () => HydrostaticWeighing.SpecificGravityOf(a, w, t, Named("--resolution", () => mass(step))))
+        Mass? delta = resolution is { } step ? Named("--resolution", () => mass(step)) : null;
+        SpecificGravity sg = delta is { } d
+            ? Named("--in-air, --in-water, --resolution", () => HydrostaticWeighing.SpecificGravityOf(a, w, t, d))
             : Named("--in-air, --in-water", () => HydrostaticWeighing.SpecificGravityOf(a, w, t));
-        return result with { Unit = unit, WeightInAir = air, WeightInWater = inWater, BalanceResolution = resolution,
+        return result with { EnteredUnit = unit, WeightInAirCarats = a.Carats, WeightInWaterCarats = w.Carats, BalanceResolutionCarats = delta?.Carats,
             SpecificGravity = sg.Value, SpecificGravityUncertainty = sg.StandardUncertainty };
     }
 
@@ -58,9 +59,9 @@ internal static class CalcSpecificGravityCommand
     {
         output.WriteLine($"water at {Fixed(r.WaterCelsius, "0.##")} °C: density {Fixed(r.WaterDensityKilogramsPerCubicMetre, "0.0000")} kg/m³");
         if (r.SpecificGravity is not { } sg) return;
-        string u = r.Unit!;
-        output.WriteLine($"in air {Fixed(r.WeightInAir!.Value, "0.#####")} {u}, in water {Fixed(r.WeightInWater!.Value, "0.#####")} {u}" +
-            (r.BalanceResolution is { } step ? $", balance resolution {Fixed(step, "0.#####")} {u}" : ""));
+        Func<double, string> weight = r.EnteredUnit == "g" ? ct => Grams(Mass.FromCarats(ct).Grams) : Carats;
+        output.WriteLine($"in air {weight(r.WeightInAirCarats!.Value)}, in water {weight(r.WeightInWaterCarats!.Value)}" +
+            (r.BalanceResolutionCarats is { } step ? $", balance resolution {weight(step)}" : ""));
         output.WriteLine($"specific gravity {Fixed(sg, "0.000")} ± {Fixed(r.SpecificGravityUncertainty!.Value, "0.000")} " +
             "(relative to water at 4 °C, no unit)");
     }
