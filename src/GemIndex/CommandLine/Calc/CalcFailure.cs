@@ -39,7 +39,12 @@ internal static class CalcFailure
         catch (Exception e) when (e is ArgumentException or InvalidOperationException)
         {
             // QuantityOutOfRangeException is an ArgumentException; its Message is already one sentence.
-            string message = e is QuantityOutOfRangeException ? e.Message : FirstLine(e.Message);
+            string message = e switch
+            {
+                QuantityOutOfRangeException => e.Message,
+                ArgumentException { ParamName: { } name } => FirstLine(e.Message).Replace($" (Parameter '{name}')", "", StringComparison.Ordinal),
+                _ => FirstLine(e.Message),
+            };
             throw new CalcInputException($"{options}: {message}", e);
         }
     }

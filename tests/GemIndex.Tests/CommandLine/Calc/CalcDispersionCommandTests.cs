@@ -68,6 +68,24 @@ public class CalcDispersionCommandTests
     }
 
     [Fact]
+    public void A_wavelength_given_twice_is_one_line_without_the_parameter_name()
+    {
+        string line = OneErrorLine("dispersion", "--point", "500:1.5", "--point", "500:1.5", "--point", "600:1.4");
+        Assert.StartsWith("gemindex calc: --point, --terms: wavelength 500 nm is given 2 times", line, StringComparison.Ordinal);
+        Assert.DoesNotContain("(Parameter", line, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_sellmeier_fit_that_does_not_converge_is_one_line()
+    {
+        // Invented zig-zag indices no 3-term Sellmeier curve can follow; the minimiser stops without converging.
+        string line = OneErrorLine("dispersion", "--model", "sellmeier", "--terms", "3", "--point", "430:1.6", "--point", "450:1.4",
+            "--point", "500:1.9", "--point", "550:1.2", "--point", "600:1.7", "--point", "650:1.3", "--point", "700:1.8", "--point", "750:1.5");
+        Assert.StartsWith("gemindex calc: --point, --terms: ", line, StringComparison.Ordinal);
+        Assert.Contains("did not converge", line, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_comma_inside_a_point_is_a_usage_error()
     {
         var (exit, _, error) = Text("dispersion", "--point", "500:1,5", "--point", "600:1.49", "--point", "700:1.48");
