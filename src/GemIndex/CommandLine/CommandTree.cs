@@ -16,6 +16,7 @@ internal static class CommandTree
         root.Subcommands.Add(CatalogueCommand.Create());
         root.Subcommands.Add(IdentifyCommand.Create(CatalogueCommand.DirectoryOption()));
         root.Subcommands.Add(ReportCommand.Create(() => GemIndex.Data.Catalogue.MergedCatalogue.Load(GemIndex.Data.Catalogue.CatalogueLocations.FromEnvironment())));
+        root.Subcommands.Add(Calc.CalcCommand.Create());
         return root;
     }
 }
