@@ -3,7 +3,7 @@ using GemIndex.Bench.Accuracy;
 using GemIndex.Data.Catalogue;
 
 // accuracy [STONES] [SEED]: the accuracy benchmark (README "Accuracy benchmark");
-// anything else goes to BenchmarkDotNet, e.g. -- --filter '*' --job short
+// anything else goes to BenchmarkDotNet: dotnet run -c Release --project bench/GemIndex.Bench -- --filter '*' --job short
 if (args.Length > 0 && args[0] == "accuracy")
 {
     int stones = args.Length > 1 && args[1] != "--failures" ? int.Parse(args[1], System.Globalization.CultureInfo.InvariantCulture) : 3000;
