@@ -9,12 +9,16 @@ public sealed record AnalysedSheet
     public AnalysedSheet(BenchSheet sheet)
     {
         Sheet = sheet;
+        if (!string.IsNullOrWhiteSpace(sheet.Colour)) ColourHues = ColourWords.Hues(sheet.Colour).ToHashSet();
         if (sheet.Refractometer is { Steps.Count: > 0 } r)
             Series = RotationSeriesAnalysis.Analyse(r.Steps, r.ReadingPrecision, r.CalibrationOffset);
     }
 
     /// <summary>The sheet as entered.</summary>
     public BenchSheet Sheet { get; }
+
+    /// <summary>The colour seen, as normalised hue words; empty when no colour was given.</summary>
+    public IReadOnlySet<string> ColourHues { get; } = new HashSet<string>();
 
     /// <summary>The rotation series' analysis, when there are readings.</summary>
     public RotationSeriesResult? Series { get; }

@@ -36,10 +36,12 @@ public static class ColourWords
     public static bool IsColourless(string colour) => Hues(colour).All(h => h == "colourless") && Hues(colour).Any();
 
     /// <summary>Compares a seen colour with a material's usual colours.</summary>
-    public static ColourMatch Compare(string seen, IReadOnlyList<string> usual)
+    public static ColourMatch Compare(string seen, IReadOnlyList<string> usual) =>
+        Compare(Hues(seen).ToHashSet(), usual.SelectMany(Hues).ToHashSet());
+
+    /// <summary>Compares hue words already normalised by <see cref="Hues"/>.</summary>
+    public static ColourMatch Compare(IReadOnlySet<string> seenHues, IReadOnlySet<string> usualHues)
     {
-        var seenHues = Hues(seen).ToHashSet();
-        var usualHues = usual.SelectMany(Hues).ToHashSet();
         if (seenHues.Overlaps(usualHues)) return ColourMatch.Same;
         foreach (string hue in seenHues)
             if (Neighbours.TryGetValue(hue, out var near) && near.Any(usualHues.Contains)) return ColourMatch.Neighbour;

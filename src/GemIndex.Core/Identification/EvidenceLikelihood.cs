@@ -24,10 +24,15 @@ public static class EvidenceLikelihood
     /// <param name="material">The candidate.</param>
     /// <param name="sheet">The analysed sheet.</param>
     /// <param name="explain">Also produce the contributions in words (slower).</param>
-    public static CandidateEvaluation Evaluate(Material material, AnalysedSheet sheet, bool explain = false)
+    public static CandidateEvaluation Evaluate(Material material, AnalysedSheet sheet, bool explain = false) =>
+        Evaluate(new MaterialProfile(material), sheet, explain);
+
+    /// <summary>Weighs every test on the sheet for a prepared material (the ranking's fast path).</summary>
+    public static CandidateEvaluation Evaluate(MaterialProfile profile, AnalysedSheet sheet, bool explain = false)
     {
+        var material = profile.Material;
         var acc = new EvidenceAccumulator(explain);
-        RefractometerEvidence.Add(material, sheet, acc);
+        RefractometerEvidence.Add(profile, sheet, acc);
         var s = sheet.Sheet;
         if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc);
         foreach (var liquid in s.HeavyLiquids) HeavyLiquid(material, liquid, acc);
@@ -39,7 +44,7 @@ public static class EvidenceLikelihood
         if (s.UvLong is { } ul) Fluorescence("uv_long", "long-wave UV", material.UvLong, ul, acc);
         if (s.UvShort is { } us) Fluorescence("uv_short", "short-wave UV", material.UvShort, us, acc);
         if (s.AbsorptionLinesNanometres is { } lines) Absorption(material, lines, acc);
-        if (!string.IsNullOrWhiteSpace(s.Colour)) Colour(material, s.Colour, acc);
+        if (sheet.ColourHues.Count > 0) Colour(profile, s.Colour!, sheet.ColourHues, acc);
         return acc.Result();
     }
 
@@ -83,11 +88,16 @@ public static class EvidenceLikelihood
             acc.Say($"polariscope {Word(seen)}{(usual.Contains(seen) ? ", as expected" : $", where {string.Join(" or ", usual.Select(Word))} is usual")}");
     }
 
-    private static IReadOnlyList<PolariscopeReaction> DefaultReactions(OpticCharacter c) => c switch
+    private static readonly PolariscopeReaction[] DoublyRefractiveOnly = [PolariscopeReaction.DoublyRefractive];
+    private static readonly PolariscopeReaction[] AggregateOnly = [PolariscopeReaction.Aggregate];
+    private static readonly PolariscopeReaction[] SinglyRefractiveOrAnomalous = [PolariscopeReaction.SinglyRefractive, PolariscopeReaction.Anomalous];
+
+    /// <summary>The reactions a material of this character shows when the catalogue lists none.</summary>
+    internal static IReadOnlyList<PolariscopeReaction> DefaultReactions(OpticCharacter c) => c switch
     {
-        OpticCharacter.Uniaxial or OpticCharacter.Biaxial => [PolariscopeReaction.DoublyRefractive],
-        OpticCharacter.Aggregate => [PolariscopeReaction.Aggregate],
-        _ => [PolariscopeReaction.SinglyRefractive, PolariscopeReaction.Anomalous],
+        OpticCharacter.Uniaxial or OpticCharacter.Biaxial => DoublyRefractiveOnly,
+        OpticCharacter.Aggregate => AggregateOnly,
+        _ => SinglyRefractiveOrAnomalous,
     };
 
     private static void Pleochroism(Material m, PleochroismObservation seen, bool colourless, EvidenceAccumulator acc)
@@ -105,19 +115,31 @@ public static class EvidenceLikelihood
     }
 
     // Rows: P(none, dichroic, trichroic | character, strength). Weak pleochroism is often missed; a uniaxial stone cannot
-    // show three colours, so "trichroic" there is a misreading.
-    private static double[] PleochroismRow(OpticCharacter c, PleochroismStrength s) => (c, s) switch
+    // show three colours, so "trichroic" there is a misreading. Judgements (docs/ranking.md).
+    private static readonly double[][] UniaxialPleochroism = [[0.90, 0.09, 0.01], [0.50, 0.48, 0.02], [0.20, 0.77, 0.03], [0.08, 0.89, 0.03]];
+    private static readonly double[][] BiaxialPleochroism = [[0.90, 0.07, 0.03], [0.50, 0.30, 0.20], [0.20, 0.40, 0.40], [0.08, 0.37, 0.55]];
+    private static readonly double[] SingleIndexPleochroism = [0.95, 0.04, 0.01];
+
+    /// <summary>P(none, dichroic, trichroic) for a material of this character and pleochroism strength.</summary>
+    internal static double[] PleochroismRow(OpticCharacter c, PleochroismStrength s) => c switch
     {
-        (OpticCharacter.Uniaxial, PleochroismStrength.None) => [0.90, 0.09, 0.01],
-        (OpticCharacter.Uniaxial, PleochroismStrength.Weak) => [0.50, 0.48, 0.02],
-        (OpticCharacter.Uniaxial, PleochroismStrength.Moderate) => [0.20, 0.77, 0.03],
-        (OpticCharacter.Uniaxial, PleochroismStrength.Strong) => [0.08, 0.89, 0.03],
-        (OpticCharacter.Biaxial, PleochroismStrength.None) => [0.90, 0.07, 0.03],
-        (OpticCharacter.Biaxial, PleochroismStrength.Weak) => [0.50, 0.30, 0.20],
-        (OpticCharacter.Biaxial, PleochroismStrength.Moderate) => [0.20, 0.40, 0.40],
-        (OpticCharacter.Biaxial, PleochroismStrength.Strong) => [0.08, 0.37, 0.55],
-        _ => [0.95, 0.04, 0.01],
+        OpticCharacter.Uniaxial => UniaxialPleochroism[(int)s],
+        OpticCharacter.Biaxial => BiaxialPleochroism[(int)s],
+        _ => SingleIndexPleochroism,
     };
+
+    // P(band seen | expected band) by distance between the bands: 0, 1, 2, 3 or more.
+    private static readonly double[] DispersionSlip = [0.6, 0.15, 0.04, 0.01];
+
+    /// <summary>P(each of the five dispersion words) when the material's nG − nB is in <paramref name="expected"/>.</summary>
+    internal static double[] DispersionRow(DispersionStrength expected)
+    {
+        var row = new double[5];
+        double sum = 0;
+        for (int i = 0; i < 5; i++) sum += row[i] = DispersionSlip[Math.Min(3, Math.Abs(i - (int)expected))];
+        for (int i = 0; i < 5; i++) row[i] /= sum;
+        return row;
+    }
 
     private static void Dispersion(Material m, DispersionObservation d, EvidenceAccumulator acc)
     {
@@ -138,10 +160,10 @@ public static class EvidenceLikelihood
             if (acc.Explaining) acc.Say($"dispersion {Word(seen)}; not known for this material");
             return;
         }
-        int expected = (int)DispersionBand(value);
-        double[] weights = [.. Enumerable.Range(0, 5).Select(i => Math.Abs(i - expected) switch { 0 => 0.6, 1 => 0.15, 2 => 0.04, _ => 0.01 })];
-        double f = weights[(int)seen] / weights.Sum();
-        acc.Add("dispersion", f, 0.2, weights[(int)seen] / 0.6, robust: false);
+        var expected = DispersionBand(value);
+        double[] row = DispersionRow(expected);
+        double f = row[(int)seen];
+        acc.Add("dispersion", f, 0.2, f / row[(int)expected], robust: false);
         if (acc.Explaining) acc.Say($"dispersion {Word(seen)}; nG − nB {F3(value)} ({Word(DispersionBand(value))}) expected");
     }
 
@@ -182,14 +204,33 @@ public static class EvidenceLikelihood
             if (acc.Explaining) acc.Say($"{lamp} {Word(seen)}; not recorded for this material");
             return;
         }
-        // A listed strength takes most of the mass; a neighbouring strength is a common judgement slip.
-        double Weight(FluorescenceStrength s) =>
-            (usual.Contains(s) ? 0.8 / usual.Count : 0) + (usual.Any(u => Math.Abs((int)u - (int)s) == 1) ? 0.06 : 0) + 0.02;
-        double total = Weight(FluorescenceStrength.Inert) + Weight(FluorescenceStrength.Weak) + Weight(FluorescenceStrength.Moderate) + Weight(FluorescenceStrength.Strong);
-        double f = Weight(seen) / total;
-        double best = usual.Max(Weight) / total;
+        double f = FluorescenceProbability(usual, seen);
+        double best = 0;
+        foreach (var u in usual) best = Math.Max(best, FluorescenceProbability(usual, u));
         acc.Add(test, f, 0.25, f / best, robust: false);
         if (acc.Explaining) acc.Say($"{lamp} {Word(seen)}; {string.Join(" or ", usual.Select(Word))} usual");
+    }
+
+    /// <summary>
+    /// P(strength seen | usual strengths): a listed strength takes most of the mass (0.8 shared), a neighbouring strength
+    /// is a common judgement slip (0.06), anything else 0.02; normalised over the four strengths.
+    /// </summary>
+    internal static double FluorescenceProbability(IReadOnlyList<FluorescenceStrength> usual, FluorescenceStrength seen)
+    {
+        double total = 0, mine = 0;
+        for (var s = FluorescenceStrength.Inert; s <= FluorescenceStrength.Strong; s++)
+        {
+            bool listed = false, neighbour = false;
+            foreach (var u in usual)
+            {
+                listed |= u == s;
+                neighbour |= Math.Abs((int)u - (int)s) == 1;
+            }
+            double w = (listed ? 0.8 / usual.Count : 0) + (neighbour ? 0.06 : 0) + 0.02;
+            total += w;
+            if (s == seen) mine = w;
+        }
+        return mine / total;
     }
 
     private static void Absorption(Material m, IReadOnlyList<double> seen, EvidenceAccumulator acc)
@@ -215,9 +256,10 @@ public static class EvidenceLikelihood
         }
     }
 
-    private static void Colour(Material m, string colour, EvidenceAccumulator acc)
+    private static void Colour(MaterialProfile profile, string colour, IReadOnlySet<string> seen, EvidenceAccumulator acc)
     {
-        var match = ColourWords.Compare(colour, m.Colours);
+        var m = profile.Material;
+        var match = ColourWords.Compare(seen, profile.Hues);
         int n = Math.Max(1, m.Colours.Count);
         const double elsewhere = 0.1 / 15; // a colour the catalogue does not list for it (bench colour words are loose)
         double f = match switch

@@ -11,9 +11,10 @@ namespace GemIndex.Core.Identification;
 public sealed class Identifier
 {
     /// <summary>Below this fit the best candidate is not offered as an answer.</summary>
-    public const double MinimumFit = 0.005;
+    public const double MinimumFit = 0.03;
 
     private readonly Material[] _materials;
+    private readonly MaterialProfile[] _profiles;
     private readonly double[] _logPriors;
     private readonly double _logPriorNotInCatalogue;
 
@@ -23,6 +24,7 @@ public sealed class Identifier
     {
         if (catalogue.Count == 0) throw new ArgumentException("the catalogue has no materials", nameof(catalogue));
         _materials = [.. catalogue];
+        _profiles = [.. _materials.Select(m => new MaterialProfile(m))];
         double total = _materials.Sum(m => BenchFrequencyWeights.Of(m.Frequency));
         double inCatalogue = 1 - BroadDensities.NotInCataloguePrior;
         _logPriors = [.. _materials.Select(m => Math.Log(inCatalogue * BenchFrequencyWeights.Of(m.Frequency) / total))];
@@ -46,7 +48,7 @@ public sealed class Identifier
         double logOther = 0, max = double.NegativeInfinity;
         for (int i = 0; i < n; i++)
         {
-            var e = EvidenceLikelihood.Evaluate(_materials[i], analysed);
+            var e = EvidenceLikelihood.Evaluate(_profiles[i], analysed);
             logPosterior[i] = _logPriors[i] + e.LogLikelihood;
             fits[i] = e.Fit;
             logOther = e.LogLikelihoodNotInCatalogue;
@@ -66,7 +68,7 @@ public sealed class Identifier
             Material = _materials[i],
             Confidence = posterior[i],
             Fit = fits[i],
-            Reasons = rank < explainTop ? EvidenceLikelihood.Evaluate(_materials[i], analysed, explain: true).Contributions : [],
+            Reasons = rank < explainTop ? EvidenceLikelihood.Evaluate(_profiles[i], analysed, explain: true).Contributions : [],
         }).ToList();
         var best = candidates[0];
         bool noGoodMatch = best.Fit < MinimumFit || other > best.Confidence;

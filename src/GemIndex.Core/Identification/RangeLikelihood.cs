@@ -14,8 +14,22 @@ public static class RangeLikelihood
 {
     private const double InverseSqrtTwoPi = 0.3989422804014327;
 
-    /// <summary>Standard normal cumulative distribution Φ(z).</summary>
-    public static double Phi(double z) => 0.5 * SpecialFunctions.Erfc(-z / Math.Sqrt(2));
+    /// <summary>
+    /// Standard normal cumulative distribution Φ(z), by Abramowitz and Stegun (1964), <i>Handbook of Mathematical
+    /// Functions</i>, 26.2.17: absolute error below 7.5·10⁻⁸, ample for likelihoods that are mixed with a floor of about
+    /// 10⁻² (<see cref="BroadDensities.MisreadingShare"/>), and several times faster than a full-precision erfc, which
+    /// matters when every stone is ranked against the whole catalogue.
+    /// </summary>
+    public static double Phi(double z)
+    {
+        if (z < -38) return 0;
+        if (z > 38) return 1;
+        double x = Math.Abs(z);
+        double t = 1 / (1 + 0.2316419 * x);
+        double poly = t * (0.319381530 + t * (-0.356563782 + t * (1.781477937 + t * (-1.821255978 + t * 1.330274429))));
+        double upper = PhiDensity(x) * poly; // 1 − Φ(|z|)
+        return z >= 0 ? 1 - upper : upper;
+    }
 
     /// <summary>Standard normal density φ(z).</summary>
     public static double PhiDensity(double z) => InverseSqrtTwoPi * Math.Exp(-0.5 * z * z);
@@ -47,5 +61,6 @@ public static class RangeLikelihood
         Math.Max(0, Math.Max(range.Minimum - observed, observed - range.Maximum)) / sigma;
 
     /// <summary>Two-sided tail probability of a distance of <paramref name="standardDeviations"/> σ: 2(1 − Φ(z)).</summary>
-    public static double TwoSidedTail(double standardDeviations) => SpecialFunctions.Erfc(standardDeviations / Math.Sqrt(2));
+    public static double TwoSidedTail(double standardDeviations) =>
+        standardDeviations <= 0 ? 1 : SpecialFunctions.Erfc(standardDeviations / Math.Sqrt(2));
 }

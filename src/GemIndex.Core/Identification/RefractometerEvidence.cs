@@ -30,11 +30,12 @@ internal static class RefractometerEvidence
     // "Not in the catalogue": uniaxial and biaxial equally likely, either sign.
     private const double CharacterBroad = 0.25;
 
-    public static void Add(Material m, AnalysedSheet sheet, EvidenceAccumulator acc)
+    public static void Add(MaterialProfile profile, AnalysedSheet sheet, EvidenceAccumulator acc)
     {
         if (sheet.Sheet.Refractometer is not { } r) return;
+        var m = profile.Material;
         double shift = WavelengthShift(m, r.LightNanometres, out double shiftSigma);
-        if (sheet.Series is { } series) Series(m, series, r, shift, shiftSigma, acc);
+        if (sheet.Series is { } series) Series(profile, series, r, shift, shiftSigma, acc);
         if (r.Spot is { } spot) Spot(m, spot, r.ReadingPrecision, shift, shiftSigma, acc);
         if (r.OverLimit) OverLimit(m, r, hasReadings: sheet.Series is not null || r.Spot is not null, acc);
     }
@@ -51,14 +52,15 @@ internal static class RefractometerEvidence
         return shift;
     }
 
-    private static void Series(Material m, RotationSeriesResult series, RefractometerObservation r, double shift, double shiftSigma, EvidenceAccumulator acc)
+    private static void Series(MaterialProfile profile, RotationSeriesResult series, RefractometerObservation r, double shift, double shiftSigma, EvidenceAccumulator acc)
     {
+        var m = profile.Material;
         double f = 0, g = 0, bestWeighted = -1, bestTail = 1;
         Part[] best = [];
         SeriesInterpretation? bestInterpretation = null;
         foreach (var h in series.Interpretations)
         {
-            Part[] parts = Parts(m, h, r.ReadingPrecision, shift, shiftSigma, acc.Explaining, out double factor, out double broadFactor);
+            Part[] parts = Parts(m, profile.Birefringence, h, r.ReadingPrecision, shift, shiftSigma, acc.Explaining, out double factor, out double broadFactor);
             double fh = factor, gh = broadFactor;
             foreach (var p in parts) { fh *= p.Likelihood; gh *= p.Broad; }
             f += h.Weight * fh;
@@ -90,10 +92,9 @@ internal static class RefractometerEvidence
 
     private readonly record struct Part(double Likelihood, double Broad, double Tail, string Text);
 
-    private static Part[] Parts(Material m, SeriesInterpretation h, double sigma, double shift, double shiftSigma, bool words, out double factor, out double broadFactor)
+    private static Part[] Parts(Material m, PropertyRange birefringence, SeriesInterpretation h, double sigma, double shift, double shiftSigma, bool words, out double factor, out double broadFactor)
     {
         var indices = m.Indices;
-        var birefringence = BirefringenceRange(m);
         factor = 1;
         broadFactor = 1;
         if (h.Character is null)

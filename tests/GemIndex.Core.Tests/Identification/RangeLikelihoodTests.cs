@@ -70,3 +70,18 @@ public class RangeLikelihoodTests
         Assert.Equal(product * (1 - Math.Log(product)), EvidenceAccumulator.FisherCombination(-Math.Log(product), 2), 1e-12);
     }
 }
+
+public class NormalDistributionTests
+{
+    private static readonly Arbitrary<double> Z = Gen.Choose(-800000, 800000).Select(i => i / 100000.0).ToArbitrary();
+
+    [Property(MaxTest = 1000)]
+    public Property Phi_agrees_with_a_full_precision_normal_cdf_to_its_stated_error() =>
+        // Abramowitz and Stegun 26.2.17 state |ε| < 7.5e-8; MathNet's Normal.CDF is the full-precision reference.
+        Prop.ForAll(Z, z => Math.Abs(RangeLikelihood.Phi(z) - MathNet.Numerics.Distributions.Normal.CDF(0, 1, z)) < 7.5e-8);
+
+    [Fact]
+    public void Phi_of_1_96_is_0_975() =>
+        // Standard normal table value: Φ(1.96) = 0.9750021 (any statistics table).
+        Assert.Equal(0.9750021, RangeLikelihood.Phi(1.96), 1e-7);
+}

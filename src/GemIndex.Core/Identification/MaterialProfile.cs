@@ -1,0 +1,27 @@
+using GemIndex.Core.Catalogue;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>
+/// What the likelihood needs of a material that costs time to work out (its colours as hue words, its birefringence
+/// range), computed once per catalogue rather than once per stone.
+/// </summary>
+public sealed class MaterialProfile
+{
+    /// <summary>Prepares the profile of one material.</summary>
+    public MaterialProfile(Material material)
+    {
+        Material = material;
+        Hues = material.Colours.SelectMany(ColourWords.Hues).ToHashSet();
+        Birefringence = RefractometerEvidence.BirefringenceRange(material);
+    }
+
+    /// <summary>The material.</summary>
+    public Material Material { get; }
+
+    /// <summary>Its usual colours as normalised hue words.</summary>
+    public IReadOnlySet<string> Hues { get; }
+
+    /// <summary>Its birefringence range (derived from the index ranges where the catalogue gives none).</summary>
+    public PropertyRange Birefringence { get; }
+}
