@@ -20,6 +20,7 @@ internal sealed partial class BenchAssessor(Identifier? identifier)
     {
         var errors = new Dictionary<string, string>();
         StoneReadings readings = new FormReader(form, errors).Read();
+        CheckWeight(form, errors);
         BenchSheet? sheet = null;
         StoneReadings usable = readings;
         for (int attempt = 0; attempt < MostRetries && sheet is null; attempt++)
@@ -54,6 +55,13 @@ internal sealed partial class BenchAssessor(Identifier? identifier)
             errors[e.Message.StartsWith("calibration", StringComparison.Ordinal) ? BenchFields.CalibrationOffset : BenchFields.Precision] = e.Message;
             return sheet;
         }
+    }
+
+    private static void CheckWeight(BenchSnapshot form, Dictionary<string, string> errors)
+    {
+        if (Number(form, BenchFields.Weight, errors) is not { } carats) return;
+        try { _ = Mass.FromCarats(carats); }
+        catch (QuantityOutOfRangeException e) { errors[BenchFields.Weight] = e.Message; }
     }
 
     internal static double? Number(BenchSnapshot form, string field, Dictionary<string, string> errors)

@@ -12,7 +12,7 @@ namespace GemIndex.Cli.TextUi.Results;
 /// <summary>The identification panel's text: derived properties, ranked candidates, next test and warnings. Numbers are formatted here only.</summary>
 internal static class ResultText
 {
-    public const int BarWidth = 10;
+    public const int BarWidth = 8;
 
     public static string Index(double n) => n.ToString("0.000", CultureInfo.InvariantCulture);
 
@@ -65,7 +65,10 @@ internal static class ResultText
 
     /// <summary>One line per candidate: rank, name, confidence as number and bar, fit.</summary>
     public static string Candidate(int rank, RankedCandidate c, int nameWidth) =>
-        $"{rank}. {Clip(c.Material.Name, nameWidth).PadRight(nameWidth)} {Percent(c.Confidence),4} {Bar(c.Confidence)} fit {c.Fit.ToString("0.00", CultureInfo.InvariantCulture)}";
+        $"{rank,1} {Clip(c.Material.Name, nameWidth).PadRight(nameWidth)} {Percent(c.Confidence),4} {Bar(c.Confidence)} {c.Fit.ToString("0.00", CultureInfo.InvariantCulture)}";
+
+    /// <summary>The column heads above <see cref="Candidate"/> lines.</summary>
+    public static string CandidateHeader(int nameWidth) => $"  {"candidate".PadRight(nameWidth)} conf {"".PadRight(BarWidth)} fit";
 
     public static string Headline(IdentificationResult r) => r.NoGoodMatch
         ? $"!! NO GOOD MATCH: nothing fits well (not in catalogue {Percent(r.NotInCatalogue)})"

@@ -6,7 +6,7 @@ namespace GemIndex.Cli.TextUi.Results;
 /// <summary>The live identification panel: the lines to show for an assessment, and which candidate is selected for detail.</summary>
 internal sealed class ResultsModel
 {
-    public const int NameWidth = 20;
+    public const int NameWidth = 14;
 
     public BenchAssessment? Latest { get; private set; }
 
@@ -24,6 +24,8 @@ internal sealed class ResultsModel
 
     public string Headline => Latest?.Result is { } r ? ResultText.Headline(r)
         : Latest is null ? "working…" : "Enter readings: the candidates appear here.";
+
+    public string CandidateHeader => ResultText.CandidateHeader(NameWidth);
 
     public IReadOnlyList<string> CandidateLines => [.. Candidates.Take(8).Select((c, i) => ResultText.Candidate(i + 1, c, NameWidth))];
 

@@ -1,0 +1,17 @@
+namespace GemIndex.Cli.TextUi.Bench;
+
+/// <summary>Polariscope, dichroscope, fire, probes, UV lamps and the spectroscope.</summary>
+internal sealed class TestsPage : BenchPage
+{
+    public TestsPage() : base("Tests", "letter picks  Space clears")
+    {
+        AddChoice(BenchFields.Polariscope);
+        AddChoice(BenchFields.Pleochroism);
+        AddChoice(BenchFields.Dispersion);
+        AddChoice(BenchFields.ThermalProbe);
+        AddChoice(BenchFields.Electrical);
+        AddChoice(BenchFields.UvLong);
+        AddChoice(BenchFields.UvShort);
+        AddField(BenchFields.Absorption, "Absorption nm", 16, "or none");
+    }
+}
