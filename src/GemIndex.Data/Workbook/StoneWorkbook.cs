@@ -44,6 +44,9 @@ public sealed class StoneWorkbook : IDisposable
         CREATE TABLE setting(key TEXT PRIMARY KEY, value TEXT NOT NULL);
         """;
 
+    /// <summary>Edits to one field closer together than this are kept as one history entry.</summary>
+    public static readonly TimeSpan EditMergeWindow = TimeSpan.FromMinutes(2);
+
     private readonly SqliteConnection _db;
     private readonly TimeProvider _clock;
 
@@ -188,7 +191,8 @@ public sealed class StoneWorkbook : IDisposable
         cmd.Parameters.AddWithValue("$now", Stamp(now));
         cmd.Parameters.AddWithValue("$id", stone.Id);
         cmd.ExecuteNonQuery();
-        foreach (var (old, updated) in changes) AddEdit(stone.Id, now, old.Field, old.Value, updated.Value);
+        foreach (var (old, updated) in changes)
+            if (!ExtendLastEdit(stone.Id, now, old.Field, updated.Value)) AddEdit(stone.Id, now, old.Field, old.Value, updated.Value);
         tx.Commit();
         return Get(stone.Id)!;
     }
@@ -272,6 +276,25 @@ public sealed class StoneWorkbook : IDisposable
         cmd.Parameters.AddWithValue("$colour", s.Readings.Colour ?? "");
         cmd.Parameters.AddWithValue("$notes", s.Notes);
         cmd.Parameters.AddWithValue("$readings", StoneReadingsJson.Write(s.Readings with { Id = s.Reference }));
+    }
+
+    /// <summary>
+    /// Typing saves on every keystroke; keystrokes to the same field within <see cref="EditMergeWindow"/> of the
+    /// stone's last edit make one history entry (before = the value before the first, after = the latest).
+    /// </summary>
+    private bool ExtendLastEdit(long id, DateTimeOffset now, string field, string after)
+    {
+        using var cmd = _db.CreateCommand();
+        cmd.CommandText = """
+            UPDATE stone_edit SET after = $after, at = $at
+            WHERE id = (SELECT max(id) FROM stone_edit WHERE stone_id = $id) AND field = $field AND at >= $since
+            """;
+        cmd.Parameters.AddWithValue("$after", after);
+        cmd.Parameters.AddWithValue("$at", Stamp(now));
+        cmd.Parameters.AddWithValue("$id", id);
+        cmd.Parameters.AddWithValue("$field", field);
+        cmd.Parameters.AddWithValue("$since", Stamp(now - EditMergeWindow));
+        return cmd.ExecuteNonQuery() == 1;
     }
 
     private void AddEdit(long id, DateTimeOffset at, string field, string before, string after)

@@ -53,6 +53,19 @@ public class StoneWorkbookTests
     }
 
     [Fact]
+    public void Keystrokes_to_one_field_in_quick_succession_make_one_history_entry()
+    {
+        using var dir = new TempDirectory();
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());   // one minute per reading: inside the window
+        StoneSheet s = wb.Create(Quartz() with { Notes = "" });
+        foreach (string typed in new[] { "c", "cl", "cle", "clean" }) s = wb.Save(s with { Notes = typed });
+        wb.Save(s with { Shape = "round" });
+        IReadOnlyList<StoneEdit> history = wb.History(s.Id);
+        Assert.Equal(["created", "notes", "shape"], history.Select(e => e.Field));
+        Assert.Equal(("", "clean"), (history[1].Before, history[1].After));
+    }
+
+    [Fact]
     public void Saving_without_changes_adds_no_history()
     {
         using var dir = new TempDirectory();

@@ -79,6 +79,18 @@ internal sealed class BenchModel
         Version++;
     }
 
+    /// <summary>Puts back the texts of a saved draft (see <see cref="BenchDraft"/>) over a loaded stone.</summary>
+    public bool ApplyDraft(string? json)
+    {
+        if (json is null || BenchDraft.Read(json) is not { } draft) return false;
+        var bench = _texts.Where(p => p.Key is BenchFields.Precision or BenchFields.CalibrationOffset);
+        _texts = draft.Texts.RemoveRange([BenchFields.Precision, BenchFields.CalibrationOffset]).SetItems(bench);
+        _choices = draft.Choices;
+        _steps = draft.Steps;
+        Version++;
+        return true;
+    }
+
     /// <summary>The stone to store: the description as typed and the readings that parse (the rest stay in the form).</summary>
     public static StoneSheet ToStoneSheet(BenchSnapshot s, StoneReadings readings) => new()
     {

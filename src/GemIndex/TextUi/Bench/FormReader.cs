@@ -11,7 +11,7 @@ internal sealed class FormReader(BenchSnapshot form, Dictionary<string, string> 
         Id = form.Text(BenchFields.Reference).Trim(),
         Refractometer = Refractometer(),
         Sg = Number(BenchFields.Sg),
-        SgWeighing = string.IsNullOrWhiteSpace(form.Text(BenchFields.Sg)) ? Weighing() : null,
+        SgWeighing = Weighing() is { } weighing && string.IsNullOrWhiteSpace(form.Text(BenchFields.Sg)) ? weighing : null,
         HeavyLiquids = HeavyLiquids(),
         Polariscope = form.Choice(BenchFields.Polariscope),
         Pleochroism = form.Choice(BenchFields.Pleochroism),

@@ -18,7 +18,7 @@ internal sealed class GravityPage : BenchPage
         Result = AddNote("SG -");
         NextRow();
         AddField(BenchFields.HeavyLiquids, "Heavy liquid", 14, "3.32 floats;");
-        AddNote("  results: floats | sinks | suspends, ';' between");
+        AddNote("  floats | sinks | suspends; ';' between");
     }
 
     public Label Caution { get; }

@@ -18,7 +18,7 @@ internal sealed class RefractometerPage : BenchPage
     public RefractometerPage() : base("RI", "Enter store step  Del remove step  F6 plot")
     {
         NextRow();
-        Add(new Label { Y = 0, Text = "Rot °    Low      High       (Enter stores)" });
+        Add(new Label { Y = 0, Text = "Rot °    Low      High     Enter stores" });
         Rotation = new TextField { X = 0, Y = NextRow(), Width = 6 };
         Low = new TextField { X = 9, Y = Pos.Top(Rotation), Width = 7 };
         High = new TextField { X = 18, Y = Pos.Top(Rotation), Width = 7 };

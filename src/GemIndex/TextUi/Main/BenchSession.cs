@@ -38,21 +38,30 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
             Form.SetText(BenchFields.Precision, workbook.Setting(PrecisionSetting) ?? "");
             Form.SetText(BenchFields.CalibrationOffset, workbook.Setting(CalibrationSetting) ?? "");
             StoneSummary? latest = workbook.List().FirstOrDefault();
-            Form.Load(latest is null ? NewStone() : workbook.Get(latest.Id)!);
+            Load(latest is null ? NewStone() : workbook.Get(latest.Id)!);
         }
         Changed();
     }
 
     public void Open(long id)
     {
-        lock (_gate) Form.Load(workbook.Get(id) ?? throw new WorkbookException($"{workbook.Path}: no stone with id {id}"));
+        lock (_gate) Load(workbook.Get(id) ?? throw new WorkbookException($"{workbook.Path}: no stone with id {id}"));
         Changed();
     }
 
     public void New()
     {
-        lock (_gate) Form.Load(NewStone());
+        lock (_gate) Load(NewStone());
         Changed();
+    }
+
+    /// <summary>The setting that holds a stone's form as typed.</summary>
+    public static string DraftSetting(long id) => $"draft.{id}";
+
+    private void Load(StoneSheet stone)
+    {
+        Form.Load(stone);
+        Form.ApplyDraft(workbook.Setting(DraftSetting(stone.Id)));
     }
 
     private StoneSheet NewStone() => workbook.Create(new StoneSheet { Reference = $"stone {workbook.List().Count + 1}" });
@@ -87,6 +96,8 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
             if (snapshot.StoneId == _lastSaved.Id && snapshot.Version <= _lastSaved.Version) return null;  // overtaken by a newer save
             try
             {
+                // The draft first: if the process dies between the two commits, the draft is the newer of the two.
+                Setting(DraftSetting(snapshot.StoneId), BenchDraft.Write(snapshot));
                 workbook.Save(BenchModel.ToStoneSheet(snapshot, assessment.Readings));
                 Setting(PrecisionSetting, snapshot.Text(BenchFields.Precision));
                 Setting(CalibrationSetting, snapshot.Text(BenchFields.CalibrationOffset));

@@ -6,7 +6,7 @@ namespace GemIndex.Cli.TextUi.Results;
 /// <summary>The live identification panel: the lines to show for an assessment, and which candidate is selected for detail.</summary>
 internal sealed class ResultsModel
 {
-    public const int NameWidth = 14;
+    public const int NameWidth = 13;
 
     public BenchAssessment? Latest { get; private set; }
 
