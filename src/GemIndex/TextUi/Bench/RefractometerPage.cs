@@ -15,7 +15,7 @@ internal sealed class RefractometerPage : BenchPage
     private readonly ObservableCollection<string> _rows = [];
     private int? _editing;
 
-    public RefractometerPage() : base("RI", "Enter store step  Del remove step  F6 plot")
+    public RefractometerPage() : base("Refractometer", "Enter stores, Del removes")
     {
         NextRow();
         Add(new Label { Y = 0, Text = "Rot °    Low      High     Enter stores" });

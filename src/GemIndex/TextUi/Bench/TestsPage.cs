@@ -3,7 +3,7 @@ namespace GemIndex.Cli.TextUi.Bench;
 /// <summary>Polariscope, dichroscope, fire, probes, UV lamps and the spectroscope.</summary>
 internal sealed class TestsPage : BenchPage
 {
-    public TestsPage() : base("Tests", "letter picks  Space clears")
+    public TestsPage() : base("Tests", "a letter picks, Space clears")
     {
         AddChoice(BenchFields.Polariscope);
         AddChoice(BenchFields.Pleochroism);

@@ -19,7 +19,7 @@ namespace GemIndex.Cli.TextUi.Main;
 internal sealed class MainWindow : Window
 {
     public const int FormWidth = 44;
-    private const string GlobalKeys = "F1 help  F2-F5 pages  F7 catalogue  F8 stones  F9 detail  ^N new  ^Q quit";
+    private const string GlobalKeys = "F1 help F2-5 pages F6 plot F7 catalogue F8 stones F9 detail ^N new ^Q quit";
     private readonly BenchSession _session;
     private readonly IReadOnlyList<Material> _catalogue;
     private readonly Label _pageBar;
@@ -85,12 +85,17 @@ internal sealed class MainWindow : Window
     {
         CurrentPage = index;
         for (int i = 0; i < Pages.Count; i++) Pages[i].Visible = i == index;
-        _left.Title = Pages[index].Title;
-        _pageBar.Text = string.Join(" ", PageNames.Select((n, i) => i == index ? $"[{n}]" : $" {n} "))
-            + $"  {_session.Form.Text(BenchFields.Reference)}";
-        _keyLine.Text = _session.SaveProblem ?? $"{Pages[index].Keys}  {GlobalKeys}";
+        _left.Title = $"{Pages[index].Title}: {Pages[index].Keys}";
+        ShowBars();
         if (index == 1 && _left.HasFocus is false) Refractometer.Low.SetFocus();
         else Pages[index].SetFocus();
+    }
+
+    private void ShowBars()
+    {
+        _pageBar.Text = string.Join(" ", PageNames.Select((n, i) => i == CurrentPage ? $"[{n}]" : $" {n} "))
+            + $"  {_session.Form.Text(BenchFields.Reference)}";
+        _keyLine.Text = _session.SaveProblem ?? GlobalKeys;
     }
 
     private void Wire()
@@ -153,7 +158,7 @@ internal sealed class MainWindow : Window
         Gravity.Result.Text = ResultText.Gravity(a.SpecificGravity);
         Gravity.Caution.Text = _session.Results.ImmersionCaution is { } c ? "!! " + c : "";
         Results.Refresh();
-        _keyLine.Text = _session.SaveProblem ?? $"{Pages[CurrentPage].Keys}  {GlobalKeys}";
+        ShowBars();
     }
 
     private void ShowDetail(int index)
