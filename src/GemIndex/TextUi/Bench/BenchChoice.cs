@@ -8,7 +8,7 @@ internal sealed record BenchChoice(string Field, string Label, IReadOnlyList<(ch
 {
     public static IReadOnlyList<BenchChoice> All { get; } =
     [
-        new(BenchFields.OverLimit, "Over limit", [('y', "yes", "yes: no edge below the liquid")]),
+        new(BenchFields.OverLimit, "Over limit", [('y', "yes", "yes")]),
         new(BenchFields.Polariscope, "Polariscope", [('s', "singly_refractive", "singly refractive"), ('d', "doubly_refractive", "doubly refractive"), ('a', "aggregate", "aggregate"), ('n', "anomalous", "anomalous (strain)")]),
         new(BenchFields.Pleochroism, "Pleochroism", [('n', "none", "none"), ('d', "dichroic", "dichroic"), ('t', "trichroic", "trichroic")]),
         new(BenchFields.Dispersion, "Fire (eye)", [('n', "none", "none"), ('w', "weak", "weak"), ('m', "moderate", "moderate"), ('s', "strong", "strong"), ('v', "very_strong", "very strong")]),

@@ -6,17 +6,17 @@ internal static class HelpText
     public static IReadOnlyList<(string Key, string Does)> Keys { get; } =
     [
         ("F1", "this help"),
-        ("F2 / F3 / F4 / F5", "stone sheet / refractometer / SG and liquids / other tests"),
+        ("F2 F3 F4 F5", "stone sheet / refractometer / SG and liquids / other tests"),
         ("F6", "edge plot (two shadow edges against rotation)"),
         ("F7", "catalogue browser (type a name, an index or an SG)"),
         ("F8", "stones in the workbook (open, search, new, duplicate, delete)"),
-        ("F9 or Enter on a candidate", "candidate detail: reasons and catalogue entry"),
+        ("F9, Enter", "on a candidate: its detail: reasons and catalogue entry"),
         ("Ctrl+N", "new stone"),
         ("Ctrl+Q", "quit (everything is already saved)"),
-        ("Tab / Shift+Tab", "next / previous field"),
-        ("Refractometer: Enter", "store the step being typed; rotation moves on by 15°"),
-        ("Refractometer: Enter on a step", "edit that step; Delete removes it"),
-        ("Choice fields", "one letter picks the answer shown in brackets; Space or Backspace clears"),
+        ("Tab, Shift+Tab", "next / previous field"),
+        ("RI: Enter", "store the step being typed; rotation moves on by 15°"),
+        ("RI: Enter on step", "edit that step; Delete removes it"),
+        ("Choices", "one letter picks the answer shown in brackets; Space or Backspace clears"),
         ("Mouse", "click a field or a tab; click a choice to cycle it"),
     ];
 

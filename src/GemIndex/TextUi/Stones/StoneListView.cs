@@ -23,17 +23,19 @@ internal sealed class StoneListView : Dialog
         List = new ListView { Y = 1, Width = Dim.Fill(), Height = Dim.Fill() };
         List.SetSource(_rows);
         Search.TextChanged += (_, _) => { _model.Search(Search.Text); Fill(); };
-        KeyDown += (_, key) =>
+        EventHandler<Key> keys = (sender, key) =>
         {
             long? id = Selected;
             if (key == Key.Enter && id is not null) { Chosen = id; App!.RequestStop(); }
             else if (key == Key.N.WithCtrl) { WantsNew = true; App!.RequestStop(); }
             else if (key == Key.D.WithCtrl && id is { } d) { duplicate(d); Reload(); }
-            else if (key == Key.Delete && List.HasFocus && id is { } x && MessageBox.Query(App!, "Delete stone",
+            else if (key == Key.Delete && sender == List && id is { } x && MessageBox.Query(App!, "Delete stone",
                          $"Delete '{_model.Shown[List.SelectedItem!.Value].Reference}' and its history?", "Keep", "Delete") == 1) { delete(x); Reload(); }
             else return;
             key.Handled = true;
         };
+        List.KeyDown += keys;      // on the focused views: Enter would otherwise close the dialog first
+        Search.KeyDown += keys;
         Add(label, Search, List);
         Fill();
     }
