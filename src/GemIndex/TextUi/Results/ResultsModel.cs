@@ -38,6 +38,6 @@ internal sealed class ResultsModel
 
     /// <summary>The caution to show before a weight in water is typed, or null when no top candidate forbids immersion.</summary>
     public string? ImmersionCaution => Latest?.DoNotImmerse is { Count: > 0 } names
-        ? $"Do not immerse: {string.Join(", ", names)} {(names.Count == 1 ? "is" : "are")} among the top candidates. Water or heavy liquids can damage porous or soluble stones. Use the SG from a heavy-liquid-free method, or none."
+        ? $"Do not immerse: {string.Join(", ", names)} {(names.Count == 1 ? "is" : "are")} among the top candidates. Water or heavy liquids can damage porous or soluble stones: skip the weighing in water and the heavy liquids, and rely on the other tests."
         : null;
 }

@@ -97,6 +97,26 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void A_mouse_click_on_the_page_bar_changes_page_and_a_click_on_a_choice_cycles_it()
+    {
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(_session, TestMaterials.All);
+        _session.Start();
+        window.FillFromModel();
+        SessionToken token = app.Begin(window)!;
+        app.LayoutAndDraw();
+        app.InjectSequence(InputInjectionExtensions.LeftButtonClick(new System.Drawing.Point(33, 0)));   // " F5 Tests "
+        Assert.Equal(3, window.CurrentPage);
+        app.LayoutAndDraw();
+        ChoiceField polariscope = window.Pages[3].Choices[0];
+        System.Drawing.Point at = polariscope.ViewportToScreen(new System.Drawing.Point(2, 0));
+        app.InjectSequence(InputInjectionExtensions.LeftButtonClick(at));
+        Settle();
+        Assert.Equal("singly_refractive", _session.Form.Choice(BenchFields.Polariscope));
+        app.End(token);
+    }
+
+    [Fact]
     public void A_choice_is_picked_with_one_letter()
     {
         using IApplication app = Headless.Start();
