@@ -6,9 +6,9 @@ namespace GemIndex.Core.Identification;
 /// </summary>
 internal sealed class EvidenceAccumulator(bool explaining)
 {
-    private readonly List<double> _tails = [];
     private readonly List<EvidenceContribution>? _contributions = explaining ? [] : null;
-    private double _logLikelihood, _logOther, _lastBits, _lastTail;
+    private double _logLikelihood, _logOther, _lastBits, _lastTail, _sumLogTails;
+    private int _tests;
     private string _lastTest = "";
 
     public bool Explaining => _contributions is not null;
@@ -25,7 +25,8 @@ internal sealed class EvidenceAccumulator(bool explaining)
         mixed = Math.Max(mixed, 1e-300);
         _logLikelihood += Math.Log(mixed);
         _logOther += Math.Log(broad);
-        _tails.Add(Math.Clamp(tail, 1e-300, 1));
+        _sumLogTails += Math.Log(Math.Clamp(tail, 1e-300, 1));
+        _tests++;
         _lastTest = test;
         _lastBits = Math.Log2(mixed / broad);
         _lastTail = tail;
@@ -41,7 +42,7 @@ internal sealed class EvidenceAccumulator(bool explaining)
     {
         LogLikelihood = _logLikelihood,
         LogLikelihoodNotInCatalogue = _logOther,
-        Fit = FisherCombination(_tails),
+        Fit = FisherCombination(-_sumLogTails, _tests),
         Contributions = _contributions ?? (IReadOnlyList<EvidenceContribution>)[],
     };
 
@@ -49,13 +50,14 @@ internal sealed class EvidenceAccumulator(bool explaining)
     /// Fisher's method: X = −2 Σ ln pᵢ follows χ² with 2k degrees of freedom when every pᵢ is uniform;
     /// the combined tail is P(χ²₂ₖ ≥ X) = e^(−X/2) Σ_{j&lt;k} (X/2)^j / j! (closed form for even degrees of freedom).
     /// </summary>
-    internal static double FisherCombination(IReadOnlyList<double> tails)
+    /// <param name="minusSumLogTails">−Σ ln pᵢ (= X/2).</param>
+    /// <param name="count">k, the number of tail probabilities.</param>
+    internal static double FisherCombination(double minusSumLogTails, int count)
     {
-        if (tails.Count == 0) return 1;
-        double half = 0;
-        foreach (double p in tails) half -= Math.Log(p);
+        if (count == 0) return 1;
+        double half = minusSumLogTails;
         double term = 1, sum = 1;
-        for (int j = 1; j < tails.Count; j++) { term *= half / j; sum += term; }
+        for (int j = 1; j < count; j++) { term *= half / j; sum += term; }
         return Math.Clamp(Math.Exp(-half) * sum, 0, 1);
     }
 }

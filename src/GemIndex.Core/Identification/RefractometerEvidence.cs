@@ -1,6 +1,9 @@
 using System.Globalization;
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Optics;
+using GemIndex.Core.Optics.Dispersion;
 using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Quantities;
 using GemIndex.Core.Readings;
 
 namespace GemIndex.Core.Identification;
@@ -36,16 +39,14 @@ internal static class RefractometerEvidence
         if (r.OverLimit) OverLimit(m, r, hasReadings: sheet.Series is not null || r.Spot is not null, acc);
     }
 
-    /// <summary>n(589.3) − n(λ) for the material, by the two-term Cauchy model through its nG − nB.</summary>
+    /// <summary>n(589.3) − n(λ) for the material, by the two-term Cauchy model through its n and nG − nB.</summary>
     internal static double WavelengthShift(Material m, double lightNanometres, out double sigma)
     {
         sigma = 0;
         if (Math.Abs(lightNanometres - RefractometerObservation.SodiumLightNanometres) < 0.5) return 0;
         double dispersion = m.Dispersion ?? AssumedDispersion;
-        // n = A + B/λ²; nG − nB = B (1/λG² − 1/λB²) with λ in µm.
-        double b = dispersion / (1 / (0.4308 * 0.4308) - 1 / (0.6867 * 0.6867));
-        double lambda = lightNanometres / 1000;
-        double shift = b * (1 / (0.5893 * 0.5893) - 1 / (lambda * lambda));
+        var model = CauchyModel.FromIndexAndDispersion(new RefractiveIndex(m.Indices.Lowest.Centre), dispersion);
+        double shift = model.IndexAt(ReferenceWavelengths.D) - model.IndexAt(Wavelength.FromNanometres(lightNanometres));
         if (m.Dispersion is null) sigma = Math.Abs(shift) / 2;
         return shift;
     }
@@ -57,7 +58,7 @@ internal static class RefractometerEvidence
         SeriesInterpretation? bestInterpretation = null;
         foreach (var h in series.Interpretations)
         {
-            Part[] parts = Parts(m, h, r.ReadingPrecision, shift, shiftSigma, out double factor, out double broadFactor);
+            Part[] parts = Parts(m, h, r.ReadingPrecision, shift, shiftSigma, acc.Explaining, out double factor, out double broadFactor);
             double fh = factor, gh = broadFactor;
             foreach (var p in parts) { fh *= p.Likelihood; gh *= p.Broad; }
             f += h.Weight * fh;
@@ -89,7 +90,7 @@ internal static class RefractometerEvidence
 
     private readonly record struct Part(double Likelihood, double Broad, double Tail, string Text);
 
-    private static Part[] Parts(Material m, SeriesInterpretation h, double sigma, double shift, double shiftSigma, out double factor, out double broadFactor)
+    private static Part[] Parts(Material m, SeriesInterpretation h, double sigma, double shift, double shiftSigma, bool words, out double factor, out double broadFactor)
     {
         var indices = m.Indices;
         var birefringence = BirefringenceRange(m);
@@ -99,9 +100,9 @@ internal static class RefractometerEvidence
         {
             // Too few steps: each edge lies between the lowest and highest index, and the edges' separation is at most the birefringence.
             var span = new PropertyRange(indices.Lowest.Minimum, indices.Highest.Maximum);
-            return [Index("low edge", h.Lowest.Value, h.Lowest.StandardUncertainty, span, shift, shiftSigma),
-                    Index("high edge", h.Highest.Value, h.Highest.StandardUncertainty, span, shift, shiftSigma),
-                    Birefringence(h.Birefringence.Value, h.Birefringence.StandardUncertainty, new PropertyRange(0, birefringence.Maximum), "at most")];
+            return [Index("low edge", h.Lowest.Value, h.Lowest.StandardUncertainty, span, shift, shiftSigma, words),
+                    Index("high edge", h.Highest.Value, h.Highest.StandardUncertainty, span, shift, shiftSigma, words),
+                    Birefringence(h.Birefringence.Value, h.Birefringence.StandardUncertainty, new PropertyRange(0, birefringence.Maximum), "at most", words)];
         }
         if (h.Character == OpticCharacter.Isotropic)
         {
@@ -109,45 +110,45 @@ internal static class RefractometerEvidence
             double band = RotationSeriesAnalysis.ConstantBandSigmas * sigma;
             double noSecondEdge = RangeLikelihood.ProbabilityBelow(band, birefringence, h.Birefringence.StandardUncertainty);
             double tail = birefringence.Minimum <= band ? 1 : RangeLikelihood.TwoSidedTail((birefringence.Minimum - band) / h.Birefringence.StandardUncertainty);
-            return [Index("n", h.Lowest.Value, h.Lowest.StandardUncertainty, span, shift, shiftSigma),
-                    new Part(noSecondEdge, BroadDensities.SingleEdge, tail,
+            return [Index("n", h.Lowest.Value, h.Lowest.StandardUncertainty, span, shift, shiftSigma, words),
+                    new Part(noSecondEdge, BroadDensities.SingleEdge, tail, !words ? "" :
                         birefringence.Maximum <= band ? "no second edge, as expected" : $"no second edge where birefringence {birefringence.ToString("0.000")} is expected")];
         }
         broadFactor = CharacterBroad;
         var bire = Birefringence(h.Birefringence.Value, h.Birefringence.StandardUncertainty,
-            new PropertyRange(birefringence.Minimum * (1 - h.SamplingShortfall), birefringence.Maximum), "expected");
+            new PropertyRange(birefringence.Minimum * (1 - h.SamplingShortfall), birefringence.Maximum), "expected", words);
         if (h.Character == OpticCharacter.Uniaxial)
         {
             if (m.OpticCharacter == OpticCharacter.Uniaxial)
             {
                 factor = m.Sign == OpticSign.Either ? 0.5 : h.Sign == m.Sign ? 1 - SignMisread : SignMisread;
-                return [Index("ω", h.Constant!.Value.Value, h.Constant.Value.StandardUncertainty, indices.Omega!.Value, shift, shiftSigma), bire];
+                return [Index("ω", h.Constant!.Value.Value, h.Constant.Value.StandardUncertainty, indices.Omega!.Value, shift, shiftSigma, words), bire];
             }
             if (m.OpticCharacter == OpticCharacter.Biaxial) factor = BiaxialLooksUniaxial;
             var constantRange = h.Sign == OpticSign.Negative ? indices.Highest : indices.Lowest;
-            return [Index(h.Sign == OpticSign.Negative ? "highest index" : "lowest index", h.Constant!.Value.Value, h.Constant.Value.StandardUncertainty, constantRange, shift, shiftSigma), bire];
+            return [Index(h.Sign == OpticSign.Negative ? "highest index" : "lowest index", h.Constant!.Value.Value, h.Constant.Value.StandardUncertainty, constantRange, shift, shiftSigma, words), bire];
         }
         // Biaxial readings.
         if (m.OpticCharacter == OpticCharacter.Biaxial)
-            return [Index("α", h.Lowest.Value, h.Lowest.StandardUncertainty, indices.Alpha!.Value, shift, shiftSigma),
-                    Index("β", h.Beta!.Value.Value, h.Beta.Value.StandardUncertainty, indices.Beta!.Value, shift, shiftSigma), bire];
+            return [Index("α", h.Lowest.Value, h.Lowest.StandardUncertainty, indices.Alpha!.Value, shift, shiftSigma, words),
+                    Index("β", h.Beta!.Value.Value, h.Beta.Value.StandardUncertainty, indices.Beta!.Value, shift, shiftSigma, words), bire];
         if (m.OpticCharacter == OpticCharacter.Uniaxial) factor = UniaxialLooksBiaxial;
-        return [Index("lowest index", h.Lowest.Value, h.Lowest.StandardUncertainty, indices.Lowest, shift, shiftSigma), bire];
+        return [Index("lowest index", h.Lowest.Value, h.Lowest.StandardUncertainty, indices.Lowest, shift, shiftSigma, words), bire];
     }
 
-    private static Part Index(string symbol, double observed, double sigma, PropertyRange range, double shift, double shiftSigma)
+    private static Part Index(string symbol, double observed, double sigma, PropertyRange range, double shift, double shiftSigma, bool words)
     {
         double x = observed + shift;
         double s = double.Hypot(sigma, shiftSigma);
         double z = RangeLikelihood.StandardDeviationsOutside(x, range, s);
-        return new Part(RangeLikelihood.Density(x, range, s), BroadDensities.Index, RangeLikelihood.TwoSidedTail(z),
+        return new Part(RangeLikelihood.Density(x, range, s), BroadDensities.Index, RangeLikelihood.TwoSidedTail(z), !words ? "" :
             $"{symbol} {x.ToString("0.000", CultureInfo.InvariantCulture)} {EvidenceLikelihood.Where(x, range, s, "0.000")}");
     }
 
-    private static Part Birefringence(double observed, double sigma, PropertyRange range, string how)
+    private static Part Birefringence(double observed, double sigma, PropertyRange range, string how, bool words)
     {
         double z = RangeLikelihood.StandardDeviationsOutside(observed, range, sigma);
-        string text = range.Contains(observed) || z < 2
+        string text = !words ? "" : range.Contains(observed) || z < 2
             ? $"birefringence {observed.ToString("0.000", CultureInfo.InvariantCulture)}, {how} {range.ToString("0.000")}"
             : $"birefringence {observed.ToString("0.000", CultureInfo.InvariantCulture)} where {range.ToString("0.000")} is expected";
         return new Part(RangeLikelihood.Density(observed, range, sigma), BroadDensities.Birefringence, RangeLikelihood.TwoSidedTail(z), text);
@@ -170,7 +171,7 @@ internal static class RefractometerEvidence
     {
         // A spot reading on a doubly refractive stone averages its edges: anywhere from the lowest to the highest index.
         var span = new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum);
-        var part = Index("spot reading", spot, sigma, span, shift, shiftSigma);
+        var part = Index("spot reading", spot, sigma, span, shift, shiftSigma, acc.Explaining);
         acc.Add("refractometer", part.Likelihood, part.Broad, part.Tail, robust: true);
         if (acc.Explaining) acc.Say(part.Text);
     }

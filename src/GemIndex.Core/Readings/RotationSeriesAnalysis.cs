@@ -58,10 +58,11 @@ public static class RotationSeriesAnalysis
         var highs = EdgeValues(both, x => x.High!.Value, band, "high", misreadings);
         bool lowConstant = Spread(lows) <= band;
         bool highConstant = Spread(highs) <= band;
-        double shortfall = Math.Pow(Math.Sin(gap * Math.PI / 360), 2);
+        var lowEdge = MovingEdge.Of(lows, sigma, gap);
+        var highEdge = MovingEdge.Of(highs, sigma, gap);
         if (lowConstant || highConstant)
-            return Uniaxial(lows, highs, lowConstant, highConstant, sigma, shortfall, gap, misreadings);
-        return Biaxial(both, lows, highs, sigma, band, shortfall, gap, misreadings);
+            return Uniaxial(lows, highs, lowEdge, highEdge, lowConstant, highConstant, sigma, gap, misreadings);
+        return Biaxial(lows, highs, lowEdge, highEdge, sigma, band, gap, misreadings);
     }
 
     private static RotationSeriesResult SingleEdge(List<ShadowEdgeStep> s, double sigma, double band, double gap, List<string> misreadings)
@@ -122,37 +123,35 @@ public static class RotationSeriesAnalysis
         };
     }
 
-    private static RotationSeriesResult Uniaxial(List<EdgeValue> lows, List<EdgeValue> highs, bool lowConstant, bool highConstant,
-        double sigma, double shortfall, double gap, List<string> misreadings)
+    private static RotationSeriesResult Uniaxial(List<EdgeValue> lows, List<EdgeValue> highs, MovingEdge lowEdge, MovingEdge highEdge,
+        bool lowConstant, bool highConstant, double sigma, double gap, List<string> misreadings)
     {
         var interpretations = new List<SeriesInterpretation>();
         double lowMean = lows.Average(v => v.Value), highMean = highs.Average(v => v.Value);
         double weight = lowConstant && highConstant ? 0.5 : 1;
         if (lowConstant)
         {
-            // ω is the constant low edge; ε is the highest reading of the moving (or, if both are constant, the other) edge.
-            double epsilon = highConstant ? highMean : highs.Max(v => v.Value);
+            // ω is the constant low edge; ε is the extreme of the moving (or, if both are constant, the other) edge.
+            var epsilon = highConstant ? Index(highMean, Mean(sigma, highs.Count)) : highEdge.Maximum;
             var omega = Index(lowMean, Mean(sigma, lows.Count));
             interpretations.Add(new SeriesInterpretation
             {
-                Character = OpticCharacter.Uniaxial, Weight = weight, Sign = OpticSign.Positive, Constant = omega, Lowest = omega,
-                Highest = Index(epsilon, highConstant ? Mean(sigma, highs.Count) : Extreme(sigma)),
-                Birefringence = new Birefringence(epsilon - lowMean, sigma * Math.Sqrt(2)),
-                SamplingShortfall = highConstant ? 0 : shortfall,
-                Description = $"uniaxial positive: ω {F(lowMean)} constant, ε {F(epsilon)}, birefringence {F(epsilon - lowMean)}",
+                Character = OpticCharacter.Uniaxial, Weight = weight, Sign = OpticSign.Positive, Constant = omega, Lowest = omega, Highest = epsilon,
+                Birefringence = new Birefringence(Math.Max(0, epsilon.Value - lowMean), double.Hypot(epsilon.StandardUncertainty, sigma / 2)),
+                SamplingShortfall = highConstant ? 0 : highEdge.Shortfall,
+                Description = $"uniaxial positive: ω {F(lowMean)} constant, ε {F(epsilon.Value)}, birefringence {F(epsilon.Value - lowMean)}",
             });
         }
         if (highConstant)
         {
-            double epsilon = lowConstant ? lowMean : lows.Min(v => v.Value);
+            var epsilon = lowConstant ? Index(lowMean, Mean(sigma, lows.Count)) : lowEdge.Minimum;
             var omega = Index(highMean, Mean(sigma, highs.Count));
             interpretations.Add(new SeriesInterpretation
             {
-                Character = OpticCharacter.Uniaxial, Weight = weight, Sign = OpticSign.Negative, Constant = omega, Highest = omega,
-                Lowest = Index(epsilon, lowConstant ? Mean(sigma, lows.Count) : Extreme(sigma)),
-                Birefringence = new Birefringence(highMean - epsilon, sigma * Math.Sqrt(2)),
-                SamplingShortfall = lowConstant ? 0 : shortfall,
-                Description = $"uniaxial negative: ω {F(highMean)} constant, ε {F(epsilon)}, birefringence {F(highMean - epsilon)}",
+                Character = OpticCharacter.Uniaxial, Weight = weight, Sign = OpticSign.Negative, Constant = omega, Highest = omega, Lowest = epsilon,
+                Birefringence = new Birefringence(Math.Max(0, highMean - epsilon.Value), double.Hypot(epsilon.StandardUncertainty, sigma / 2)),
+                SamplingShortfall = lowConstant ? 0 : lowEdge.Shortfall,
+                Description = $"uniaxial negative: ω {F(highMean)} constant, ε {F(epsilon.Value)}, birefringence {F(highMean - epsilon.Value)}",
             });
         }
         return new RotationSeriesResult
@@ -164,10 +163,11 @@ public static class RotationSeriesAnalysis
         };
     }
 
-    private static RotationSeriesResult Biaxial(List<ShadowEdgeStep> both, List<EdgeValue> lows, List<EdgeValue> highs,
-        double sigma, double band, double shortfall, double gap, List<string> misreadings)
+    private static RotationSeriesResult Biaxial(List<EdgeValue> lows, List<EdgeValue> highs, MovingEdge lowEdge, MovingEdge highEdge,
+        double sigma, double band, double gap, List<string> misreadings)
     {
-        double alpha = lows.Min(v => v.Value), gamma = highs.Max(v => v.Value);
+        var alpha = lowEdge.Minimum;
+        var gamma = highEdge.Maximum;
         double lowMax = lows.Max(v => v.Value), highMin = highs.Min(v => v.Value);
         if (lowMax > highMin + band)
         {
@@ -176,22 +176,52 @@ public static class RotationSeriesAnalysis
             var highStep = highs.First(v => v.Value == highMin);
             misreadings.Add($"step at {D(lowStep.Rotation)}: low edge {F(lowMax)} lies above the high edge {F(highMin)} of the step at {D(highStep.Rotation)}; no orientation of any crystal gives that: re-read both steps");
         }
-        var birefringence = new Birefringence(gamma - alpha, sigma * Math.Sqrt(2));
-        SeriesInterpretation With(double beta, string which) => new()
+        var birefringence = new Birefringence(Math.Max(0, gamma.Value - alpha.Value), double.Hypot(alpha.StandardUncertainty, gamma.StandardUncertainty));
+        double shortfall = Math.Max(lowEdge.Shortfall, highEdge.Shortfall);
+        SeriesInterpretation With(RefractiveIndex beta, string which)
         {
-            Character = OpticCharacter.Biaxial, Weight = 0.5,
-            Sign = gamma - beta > beta - alpha ? OpticSign.Positive : OpticSign.Negative,
-            Lowest = Index(alpha, Extreme(sigma)), Highest = Index(gamma, Extreme(sigma)), Beta = Index(beta, Extreme(sigma)),
-            Birefringence = birefringence, SamplingShortfall = shortfall,
-            Description = $"biaxial {(gamma - beta > beta - alpha ? "positive" : "negative")} if β is the {which}: α {F(alpha)}, β {F(beta)}, γ {F(gamma)}, birefringence {F(gamma - alpha)}",
-        };
+            bool positive = gamma.Value - beta.Value > beta.Value - alpha.Value;
+            return new()
+            {
+                Character = OpticCharacter.Biaxial, Weight = 0.5, Sign = positive ? OpticSign.Positive : OpticSign.Negative,
+                Lowest = alpha, Highest = gamma, Beta = beta, Birefringence = birefringence, SamplingShortfall = shortfall,
+                Description = $"biaxial {(positive ? "positive" : "negative")} if β is the {which}: α {F(alpha.Value)}, β {F(beta.Value)}, γ {F(gamma.Value)}, birefringence {F(gamma.Value - alpha.Value)}",
+            };
+        }
         return new RotationSeriesResult
         {
             Character = OpticCharacter.Biaxial,
-            Interpretations = [With(lowMax, "highest low edge"), With(highMin, "lowest high edge")],
+            Interpretations = [With(lowEdge.Maximum, "highest low edge"), With(highEdge.Minimum, "lowest high edge")],
             Misreadings = misreadings,
             LargestGapDegrees = gap,
         };
+    }
+
+    /// <summary>
+    /// The extremes of one edge over the half turn. With four or more rotation angles and no gap over 90°, the edge is fitted
+    /// by least squares with n(φ) = a + b·cos 2φ + c·sin 2φ (exact for 1/n² of a uniaxial stone's moving edge, and close for
+    /// small birefringence), and the extremes are a ± √(b² + c²): all readings count, so neither noise (the largest of k
+    /// noisy readings overshoots) nor coarse steps (the true extreme falls between steps) bias them. When the fit is poor
+    /// (residuals over 2σ, as near a biaxial stone's optic axis) the largest and smallest readings are used, with the
+    /// sampling shortfall sin²(g/2) carried into the likelihood.
+    /// </summary>
+    private readonly record struct MovingEdge(RefractiveIndex Minimum, RefractiveIndex Maximum, double Shortfall)
+    {
+        public static MovingEdge Of(List<EdgeValue> values, double sigma, double gap)
+        {
+            double min = values.Min(v => v.Value), max = values.Max(v => v.Value);
+            var raw = new MovingEdge(Index(min, Extreme(sigma)), Index(max, Extreme(sigma)), Math.Pow(Math.Sin(gap * Math.PI / 360), 2));
+            int distinct = values.Select(v => Math.Round(((v.Rotation % 180) + 180) % 180, 6)).Distinct().Count();
+            if (distinct < 4) return raw;
+            double[] x = [.. values.Select(v => v.Rotation * Math.PI / 90)];
+            double[] y = [.. values.Select(v => v.Value)];
+            double[] p = MathNet.Numerics.Fit.LinearCombination(x, y, _ => 1.0, Math.Cos, Math.Sin);
+            double rms = Math.Sqrt(x.Select((t, i) => Math.Pow(y[i] - (p[0] + p[1] * Math.Cos(t) + p[2] * Math.Sin(t)), 2)).Average());
+            if (rms > 2 * sigma) return raw;
+            double amplitude = double.Hypot(p[1], p[2]);
+            double s = Math.Sqrt(3 * sigma * sigma / values.Count + sigma * sigma / 4);
+            return new MovingEdge(Index(p[0] - amplitude, s), Index(p[0] + amplitude, s), 0);
+        }
     }
 
     private readonly record struct EdgeValue(double Rotation, double Value);

@@ -61,8 +61,8 @@ public static class StoneReadingsConverter
     {
         var air = Field("sg.air_ct", () => Mass.FromCarats(w.AirCt, WeighingUncertaintyCarats));
         var water = Field("sg.water_ct", () => Mass.FromCarats(w.WaterCt, WeighingUncertaintyCarats));
-        var temperature = Field("sg.water_c", () => Temperature.FromCelsius(w.WaterC ?? DefaultWaterCelsius));
-        return HydrostaticWeighing.SpecificGravityOf(air, water, temperature);
+        var temperature = Field("sg.water_c", () => WaterDensity.At(Temperature.FromCelsius(w.WaterC ?? DefaultWaterCelsius)).Temperature);
+        return Field("sg.water_ct", () => HydrostaticWeighing.SpecificGravityOf(air, water, temperature));
     }
 
     private static T? Optional<T>(string field, string? word) where T : struct, Enum =>

@@ -1,3 +1,4 @@
+using System.Collections.Frozen;
 using System.Text;
 
 namespace GemIndex.Data.Catalogue;
@@ -8,17 +9,8 @@ namespace GemIndex.Data.Catalogue;
 public static class CatalogueWords
 {
     /// <summary>The word for a value: VeryCommon → "very_common".</summary>
-    public static string Of<T>(T value) where T : struct, Enum
-    {
-        string name = value.ToString();
-        var b = new StringBuilder(name.Length + 4);
-        for (int i = 0; i < name.Length; i++)
-        {
-            if (i > 0 && char.IsUpper(name[i])) b.Append('_');
-            b.Append(char.ToLowerInvariant(name[i]));
-        }
-        return b.ToString();
-    }
+    public static string Of<T>(T value) where T : struct, Enum =>
+        Table<T>.ByValue.TryGetValue(value, out string? word) ? word : Spell(value.ToString());
 
     /// <summary>Every word of an enumeration, in declaration order.</summary>
     public static IEnumerable<string> All<T>() where T : struct, Enum => Enum.GetValues<T>().Select(Of);
@@ -26,10 +18,7 @@ public static class CatalogueWords
     /// <summary>The value for a word (exact, lower-case); false for anything else, numbers included.</summary>
     public static bool TryParse<T>(string? word, out T value) where T : struct, Enum
     {
-        foreach (T candidate in Enum.GetValues<T>())
-        {
-            if (string.Equals(Of(candidate), word, StringComparison.Ordinal)) { value = candidate; return true; }
-        }
+        if (word is not null && Table<T>.ByWord.TryGetValue(word, out value)) return true;
         value = default;
         return false;
     }
@@ -41,4 +30,25 @@ public static class CatalogueWords
 
     /// <summary>The allowed words, comma-separated, for error messages.</summary>
     public static string Expected<T>() where T : struct, Enum => string.Join(", ", All<T>());
+
+    private static string Spell(string name)
+    {
+        var b = new StringBuilder(name.Length + 4);
+        for (int i = 0; i < name.Length; i++)
+        {
+            if (i > 0 && char.IsUpper(name[i])) b.Append('_');
+            b.Append(char.ToLowerInvariant(name[i]));
+        }
+        return b.ToString();
+    }
+
+    // Immutable lookup tables, built once per enumeration (loading 10,000 entries parses ~100,000 words).
+    private static class Table<T> where T : struct, Enum
+    {
+        public static readonly FrozenDictionary<T, string> ByValue =
+            Enum.GetValues<T>().ToFrozenDictionary(v => v, v => Spell(v.ToString()));
+
+        public static readonly FrozenDictionary<string, T> ByWord =
+            ByValue.ToFrozenDictionary(p => p.Value, p => p.Key, StringComparer.Ordinal);
+    }
 }

@@ -19,15 +19,18 @@ internal static class EntryMapping
         bool failed = false;
         void Fail(string field, string problem) { failed = true; error(field, problem); }
 
-        OriginClass origin = Word<OriginClass>("origin", e.Origin, Fail);
-        CrystalSystem system = Word<CrystalSystem>("crystal_system", e.CrystalSystem, Fail);
         OpticCharacter character = Word<OpticCharacter>("optic_character", e.OpticCharacter, Fail);
-        OpticSign sign = e.OpticSign is null ? OpticSign.None : Word<OpticSign>("optic_sign", e.OpticSign, Fail);
-        OpticalIndices? indices = failed ? null : Indices(e, character, Fail);
-        PropertyRange? sg = Range("sg", e.Sg, Fail);
-        var material = new
+        OpticalIndices? indices = failed ? null : Indices(e, character, Fail); // which indices are needed depends on the character
+        var material = new Material
         {
+            Name = e.Name, Species = e.Species, Variety = e.Variety, Family = family,
+            Origin = Word<OriginClass>("origin", e.Origin, Fail),
+            CrystalSystem = Word<CrystalSystem>("crystal_system", e.CrystalSystem, Fail),
+            Indices = indices ?? OpticalIndices.SingleIndex(default), // replaced by null below when anything failed
+            Sign = e.OpticSign is null ? OpticSign.None : Word<OpticSign>("optic_sign", e.OpticSign, Fail),
             Birefringence = Range("birefringence", e.Birefringence, Fail),
+            SpecificGravity = Range("sg", e.Sg, Fail) ?? default,
+            Dispersion = e.Dispersion,
             Hardness = Range("hardness", e.Hardness, Fail),
             Pleochroism = e.Pleochroism is null ? PleochroismStrength.None : Word<PleochroismStrength>("pleochroism", e.Pleochroism, Fail),
             Polariscope = Words<PolariscopeReaction>("polariscope", e.Polariscope, Fail),
@@ -35,21 +38,16 @@ internal static class EntryMapping
             Electrical = e.Electrical is null ? ElectricalResult.Insulating : Word<ElectricalResult>("electrical", e.Electrical, Fail),
             UvLong = Words<FluorescenceStrength>("uv_long", e.UvLong ?? [], Fail),
             UvShort = Words<FluorescenceStrength>("uv_short", e.UvShort ?? [], Fail),
+            AbsorptionLinesNanometres = e.AbsorptionNm ?? [],
+            Colours = e.Colours,
             Frequency = Word<BenchFrequency>("frequency", e.Frequency, Fail),
+            DoNotImmerse = e.DoNotImmerse ?? false,
+            Notes = e.Notes ?? "",
+            Provenance = e.Provenance,
         };
         if (e.Colours.Any(c => string.IsNullOrWhiteSpace(c) || c != c.ToLowerInvariant()))
             Fail("colours", $"colours must be non-empty lower-case words; got [{string.Join(", ", e.Colours)}]");
-        if (failed || indices is null || sg is null) return null;
-        return new Material
-        {
-            Name = e.Name, Species = e.Species, Variety = e.Variety, Family = family, Origin = origin,
-            CrystalSystem = system, Indices = indices, Sign = sign, Birefringence = material.Birefringence,
-            SpecificGravity = sg.Value, Dispersion = e.Dispersion, Hardness = material.Hardness,
-            Pleochroism = material.Pleochroism, Polariscope = material.Polariscope, ThermalProbe = material.ThermalProbe,
-            Electrical = material.Electrical, UvLong = material.UvLong, UvShort = material.UvShort,
-            AbsorptionLinesNanometres = e.AbsorptionNm ?? [], Colours = e.Colours, Frequency = material.Frequency,
-            DoNotImmerse = e.DoNotImmerse ?? false, Notes = e.Notes ?? "", Provenance = e.Provenance,
-        };
+        return failed || indices is null ? null : material;
     }
 
     private static OpticalIndices? Indices(EntryDocument e, OpticCharacter character, Action<string, string> fail)

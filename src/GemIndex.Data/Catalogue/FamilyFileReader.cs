@@ -1,4 +1,5 @@
 using System.Text.Json;
+using System.Text.RegularExpressions;
 using GemIndex.Core.Catalogue;
 
 namespace GemIndex.Data.Catalogue;
@@ -61,8 +62,7 @@ public static class FamilyFileReader
     private static string Describe(string? path)
     {
         if (path is null || path == "$") return "top level";
-        System.Text.RegularExpressions.Match m =
-            System.Text.RegularExpressions.Regex.Match(path, @"^\$\.materials\[(\d+)\](?:\.(\w+))?");
+        Match m = Regex.Match(path, @"^\$\.materials\[(\d+)\](?:\.(\w+))?");
         if (!m.Success) return $"at {path}";
         return m.Groups[2].Success ? $"entry {m.Groups[1].Value}, field {m.Groups[2].Value}" : $"entry {m.Groups[1].Value}";
     }

@@ -6,15 +6,18 @@ namespace GemIndex.Cli.CommandLine;
 /// <summary>The <c>catalogue</c> group: list, show, check, import and build, sharing <c>--catalogue-dir</c>.</summary>
 internal static class CatalogueCommand
 {
-    public static Command Create()
-    {
-        var directory = new Option<DirectoryInfo?>("--catalogue-dir")
+    public static Command Create() => Create(DirectoryOption());
+
+    /// <summary>The <c>--catalogue-dir</c> option (recursive, so the subcommands see it too).</summary>
+    public static Option<DirectoryInfo?> DirectoryOption() => new("--catalogue-dir")
         {
             Description = "Folder for user-catalogue.db and the built shipped catalogue (cache/ inside it); " +
                 "default: the user's data and cache folders",
             Recursive = true,
         };
-        return new Command("catalogue", "The reference catalogue of gem materials and your own entries")
+
+    private static Command Create(Option<DirectoryInfo?> directory) =>
+        new Command("catalogue", "The reference catalogue of gem materials and your own entries")
         {
             directory,
             CatalogueListCommand.Create(directory),
@@ -23,7 +26,6 @@ internal static class CatalogueCommand
             CatalogueImportCommand.Create(directory),
             CatalogueBuildCommand.Create(), // reads no user data and no cache
         };
-    }
 
     /// <summary>Where the catalogue files are for this invocation.</summary>
     public static CatalogueLocations Locations(ParseResult parseResult, Option<DirectoryInfo?> directory) =>

@@ -14,11 +14,11 @@ internal static class CatalogueListCommand
     {
         var index = NumberOption.Optional("--index", "Only entries with a principal-index range within --tolerance of this refractive index",
             v => _ = new RefractiveIndex(v));
-        var tolerance = NumberOption.WithDefault("--tolerance", "Refractive-index tolerance (default 0.01)", 0.01,
+        var tolerance = NumberOption.WithDefault("--tolerance", "Refractive-index tolerance", 0.01,
             NumberOption.Within("refractive-index tolerance", 0, 0.5));
         var sg = NumberOption.Optional("--sg", "Only entries whose SG range is within --sg-tolerance of this specific gravity",
             v => _ = new SpecificGravity(v));
-        var sgTolerance = NumberOption.WithDefault("--sg-tolerance", "Specific-gravity tolerance (default 0.05)", 0.05,
+        var sgTolerance = NumberOption.WithDefault("--sg-tolerance", "Specific-gravity tolerance", 0.05,
             NumberOption.Within("specific-gravity tolerance", 0, 5));
         var character = new Option<string?>("--optic-character") { Description = "Only entries of this optic character" };
         character.AcceptOnlyFromAmong([.. CatalogueWords.All<OpticCharacter>()]);
@@ -36,8 +36,8 @@ internal static class CatalogueListCommand
             if (pr.GetValue(json)) CommandJson.Write(output, new CatalogueListJson(shown.Length, [.. shown.Select(MaterialJson.From)]));
             else
             {
-                MaterialText.WriteTable(output, shown);
-                output.WriteLine($"{shown.Length} of {all.Count} entries");
+                if (shown.Length > 0) MaterialText.WriteTable(output, shown);
+                output.WriteLine(all.Count == 0 ? "the catalogue is empty" : $"{shown.Length} of {all.Count} entries");
             }
             return ExitCodes.Ok;
         }));

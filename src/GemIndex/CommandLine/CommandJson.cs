@@ -18,15 +18,3 @@ internal sealed partial class CommandJson : JsonSerializerContext
     public static void Write<T>(TextWriter output, T value) =>
         output.WriteLine(JsonSerializer.Serialize(value, (System.Text.Json.Serialization.Metadata.JsonTypeInfo<T>)Default.GetTypeInfo(typeof(T))!));
 }
-
-internal sealed record CatalogueListJson(int Count, MaterialJson[] Materials);
-
-internal sealed record FindingJson(string Entry, string Field, string Problem);
-
-internal sealed record CatalogueCheckJson(int Entries, FindingJson[] Findings);
-
-internal sealed record ImportErrorJson(int Line, string Field, string Problem);
-
-internal sealed record CatalogueImportJson(string File, string UserCatalogue, int Imported, ImportErrorJson[] Errors);
-
-internal sealed record CatalogueBuildJson(string Output, int Entries, string SourceHash);

@@ -229,4 +229,28 @@ public class CatalogueCheckTests
     {
         Assert.Equal("entry 'x', field sg: too low", new CatalogueFinding("x", "sg", "too low").ToString());
     }
+
+    [Fact]
+    public void A_hardness_outside_the_Mohs_scale_is_reported()
+    {
+        AssertOnlyFinding(Uniaxial() with { Hardness = new(7, 11) }, "hardness");
+    }
+
+    [Fact]
+    public void A_negative_dispersion_is_reported()
+    {
+        AssertOnlyFinding(Uniaxial() with { Dispersion = -0.01 }, "dispersion");
+    }
+
+    [Fact]
+    public void An_absorption_line_outside_the_visible_spectroscope_range_is_reported()
+    {
+        AssertOnlyFinding(Isotropic() with { AbsorptionLinesNanometres = [685, 1200] }, "absorption_nm");
+    }
+
+    [Fact]
+    public void An_empty_name_is_reported()
+    {
+        AssertOnlyFinding(Uniaxial() with { Name = "" }, "name");
+    }
 }

@@ -131,4 +131,17 @@ public class FamilyFileReaderTests
         Assert.StartsWith("a.json", e.Errors[0], StringComparison.Ordinal);
         Assert.StartsWith("b.json", e.Errors[1], StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Every_bad_field_of_every_entry_is_reported_not_just_the_first()
+    {
+        var e = Assert.Throws<CatalogueFormatException>(() => FamilyFileReader.Read(new FamilySource("fam.json",
+            Second("\"omega\": [1.544, 1.544], ", "").Replace("\"common\"", "\"often\"", StringComparison.Ordinal))));
+        Assert.Equal(
+        [
+            "fam.json: entry 0 't', field frequency: 'often' is not one of very_common, common, occasional, rare, very_rare",
+            "fam.json: entry 1 't2', field omega: required for a uniaxial material",
+            "fam.json: entry 1 't2', field frequency: 'often' is not one of very_common, common, occasional, rare, very_rare",
+        ], e.Errors);
+    }
 }

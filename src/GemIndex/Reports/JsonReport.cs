@@ -1,0 +1,166 @@
+using System.Text;
+using System.Text.Json;
+
+namespace GemIndex.Cli.Reports;
+
+/// <summary>
+/// A report as JSON: stable snake_case field names, units in the names (<c>weight_carats</c>), finite numbers only
+/// (a non-finite number is a bug upstream and throws rather than being written), absent values as null.
+/// Version 1 of the shape; add fields, never rename them.
+/// </summary>
+internal static class JsonReport
+{
+    public const int ShapeVersion = 1;
+
+    public static string Write(StoneReport report)
+    {
+        using var stream = new MemoryStream();
+        using (var w = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        {
+            w.WriteStartObject();
+            w.WriteNumber("report_version", ShapeVersion);
+            Stone(w, report);
+            Readings(w, report);
+            Derived(w, report);
+            Candidates(w, report);
+            Number(w, "not_in_catalogue", report.NotInCatalogue);
+            w.WriteBoolean("no_good_match", report.NoGoodMatch);
+            if (report.NoGoodMatch) w.WriteString("no_good_match_statement", StoneReport.NoGoodMatchStatement);
+            else w.WriteNull("no_good_match_statement");
+            NextTest(w, report);
+            Strings(w, "warnings", report.Warnings);
+            Strings(w, "cautions", report.Cautions);
+            w.WriteEndObject();
+        }
+        return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
+    }
+
+    private static void Stone(Utf8JsonWriter w, StoneReport report)
+    {
+        w.WriteStartObject("stone");
+        w.WriteString("reference", report.Reference);
+        Number(w, "weight_carats", report.WeightCarats);
+        foreach (var f in report.Description.Where(f => f.Key is not ("reference" or "weight")))
+            w.WriteString(f.Key, f.Value == StoneReport.NotRecorded ? null : f.Value);
+        w.WriteEndObject();
+    }
+
+    private static void Readings(Utf8JsonWriter w, StoneReport report)
+    {
+        w.WriteStartObject("readings");
+        w.WriteStartArray("rotation_series");
+        foreach (var s in report.Readings.Refractometer?.Readings ?? [])
+        {
+            w.WriteStartObject();
+            Number(w, "rotation_degrees", s.RotationDeg);
+            Number(w, "low_index", s.Low);
+            Number(w, "high_index", s.High);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+        Number(w, "spot_index", report.Readings.Refractometer?.Spot);
+        w.WriteBoolean("over_limit", report.Readings.Refractometer?.OverLimit ?? false);
+        Number(w, "specific_gravity_given", report.Readings.Sg);
+        if (report.Readings.SgWeighing is { } sg)
+        {
+            w.WriteStartObject("hydrostatic");
+            Number(w, "weight_in_air_carats", sg.AirCt);
+            Number(w, "weight_in_water_carats", sg.WaterCt);
+            Number(w, "water_celsius", sg.WaterC);
+            w.WriteEndObject();
+        }
+        else w.WriteNull("hydrostatic");
+        w.WriteStartArray("all");
+        foreach (var f in report.ReadingFields)
+        {
+            w.WriteStartObject();
+            w.WriteString("field", f.Key);
+            w.WriteString("label", f.Label);
+            w.WriteString("value", f.Value);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+        w.WriteEndObject();
+    }
+
+    private static void Derived(Utf8JsonWriter w, StoneReport report)
+    {
+        w.WriteStartObject("derived");
+        w.WriteString("optic_character", report.Character);
+        w.WriteString("undetermined_reason", report.UndeterminedReason.Length > 0 ? report.UndeterminedReason : null);
+        w.WriteStartArray("interpretations");
+        foreach (var i in report.Interpretations)
+        {
+            w.WriteStartObject();
+            w.WriteString("optic_character", i.Character);
+            w.WriteString("optic_sign", i.Sign);
+            Number(w, "weight", i.Weight);
+            Number(w, "lowest_index", i.Lowest);
+            Number(w, "beta_index", i.Beta);
+            Number(w, "highest_index", i.Highest);
+            Number(w, "birefringence", i.Birefringence);
+            Number(w, "birefringence_uncertainty", i.BirefringenceUncertainty);
+            w.WriteString("description", i.Description);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+        Strings(w, "misreadings", report.Misreadings);
+        Number(w, "specific_gravity", report.SpecificGravity?.Value);
+        Number(w, "specific_gravity_uncertainty", report.SpecificGravity?.StandardUncertainty);
+        w.WriteEndObject();
+    }
+
+    private static void Candidates(Utf8JsonWriter w, StoneReport report)
+    {
+        w.WriteStartArray("candidates");
+        foreach (var c in report.Candidates)
+        {
+            w.WriteStartObject();
+            w.WriteNumber("rank", c.Rank);
+            w.WriteString("material", c.Name);
+            w.WriteString("origin", c.Origin);
+            Number(w, "confidence", c.Confidence);
+            Number(w, "fit", c.Fit);
+            w.WriteStartArray("reasons");
+            foreach (var r in c.Reasons)
+            {
+                w.WriteStartObject();
+                w.WriteString("test", r.Test);
+                w.WriteString("text", r.Text);
+                Number(w, "weight_bits", r.WeightBits);
+                w.WriteBoolean("agrees", r.Agrees);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+    }
+
+    private static void NextTest(Utf8JsonWriter w, StoneReport report)
+    {
+        if (report.NextTest is not { } n) { w.WriteNull("next_test"); return; }
+        w.WriteStartObject("next_test");
+        w.WriteString("test", n.Test);
+        Number(w, "gain_bits", n.GainBits);
+        Strings(w, "separates", n.Separates);
+        Strings(w, "expectations", n.Expectations);
+        w.WriteEndObject();
+    }
+
+    private static void Strings(Utf8JsonWriter w, string name, IReadOnlyList<string> items)
+    {
+        w.WriteStartArray(name);
+        foreach (string s in items) w.WriteStringValue(s);
+        w.WriteEndArray();
+    }
+
+    /// <summary>Writes a finite number, or null when absent.</summary>
+    /// <exception cref="InvalidOperationException">The number is NaN or infinite (never written as JSON).</exception>
+    private static void Number(Utf8JsonWriter w, string name, double? value)
+    {
+        if (value is not { } v) { w.WriteNull(name); return; }
+        if (!double.IsFinite(v)) throw new InvalidOperationException($"report field {name} is {v}, not a finite number; it cannot be written as JSON");
+        w.WriteNumber(name, v);
+    }
+}

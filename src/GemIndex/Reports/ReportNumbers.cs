@@ -1,0 +1,37 @@
+using System.Globalization;
+
+namespace GemIndex.Cli.Reports;
+
+/// <summary>Every number a report prints, in the invariant culture and with its unit, formatted in this one place.</summary>
+internal static class ReportNumbers
+{
+    /// <summary>A refractive index to the refractometer's printed precision: 1.544.</summary>
+    public static string Index(double value) => Fixed(value, "0.000");
+
+    /// <summary>A specific gravity (dimensionless): 3.99.</summary>
+    public static string Gravity(double value) => Fixed(value, "0.00");
+
+    /// <summary>A mass in carats: 1.27 ct.</summary>
+    public static string Carats(double value) => Fixed(value, "0.00#") + " ct";
+
+    /// <summary>An angle of rotation: 45°.</summary>
+    public static string Degrees(double value) => Fixed(value, "0.#") + "°";
+
+    /// <summary>A wavelength: 589.3 nm.</summary>
+    public static string Nanometres(double value) => Fixed(value, "0.#") + " nm";
+
+    /// <summary>A temperature: 20 °C.</summary>
+    public static string Celsius(double value) => Fixed(value, "0.#") + " °C";
+
+    /// <summary>A density of a heavy liquid: 3.32 g/cm³.</summary>
+    public static string Density(double value) => Fixed(value, "0.00") + " g/cm³";
+
+    /// <summary>A probability (0–1) as a percentage: 87.3 %.</summary>
+    public static string Percent(double probability) => Fixed(probability * 100, "0.0") + " %";
+
+    /// <summary>An information quantity: 1.25 bits.</summary>
+    public static string Bits(double value) => Fixed(value, "+0.00;-0.00;0.00") + " bits";
+
+    /// <summary>A plain number with the given format, invariant culture.</summary>
+    public static string Fixed(double value, string format) => value.ToString(format, CultureInfo.InvariantCulture);
+}

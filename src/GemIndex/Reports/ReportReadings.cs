@@ -1,0 +1,48 @@
+using GemIndex.Data.Batch;
+
+namespace GemIndex.Cli.Reports;
+
+/// <summary>The readings of a stone other than the rotation series table, as labelled lines in words with units.</summary>
+internal static class ReportReadings
+{
+    public static List<ReportField> Fields(StoneReadings r)
+    {
+        var fields = new List<ReportField>();
+        if (r.Refractometer is { } rf)
+        {
+            fields.Add(new("refractometer_method", "Refractometer method", StoneReport.Word(rf.Method)));
+            if (rf.LightNm is { } light) fields.Add(new("light", "Light", ReportNumbers.Nanometres(light)));
+            if (rf.LiquidLimit is { } limit) fields.Add(new("liquid_limit", "Contact-liquid limit", $"refractive index {ReportNumbers.Index(limit)}"));
+            if (rf.Spot is { } spot) fields.Add(new("spot", "Spot reading", $"refractive index {ReportNumbers.Index(spot)}"));
+            if (rf.OverLimit) fields.Add(new("over_limit", "Over the limit", "yes: no shadow edge below the contact liquid's limit"));
+        }
+        if (r.Sg is { } sg) fields.Add(new("sg_given", "Specific gravity (given)", ReportNumbers.Gravity(sg)));
+        if (r.SgWeighing is { } w)
+        {
+            fields.Add(new("weight_in_air", "Weight in air", ReportNumbers.Carats(w.AirCt)));
+            fields.Add(new("weight_in_water", "Weight in water", ReportNumbers.Carats(w.WaterCt)));
+            fields.Add(new("water_temperature", "Water temperature", w.WaterC is { } t ? ReportNumbers.Celsius(t)
+                : $"not given ({ReportNumbers.Celsius(StoneReadingsConverter.DefaultWaterCelsius)} assumed)"));
+        }
+        foreach (var (h, i) in r.HeavyLiquids.Select((h, i) => (h, i)))
+            fields.Add(new($"heavy_liquid_{i + 1}", $"Heavy liquid {i + 1}", $"{ReportNumbers.Density(h.Density)}: {StoneReport.Word(h.Result)}"));
+        AddWord(fields, "polariscope", "Polariscope", r.Polariscope);
+        AddWord(fields, "pleochroism", "Pleochroism (dichroscope)", r.Pleochroism);
+        if (r.DispersionIndices is { } d)
+            fields.Add(new("dispersion", "Dispersion", $"nB {ReportNumbers.Index(d.NB)}, nG {ReportNumbers.Index(d.NG)} (refractive indices)"));
+        else AddWord(fields, "dispersion", "Dispersion (by eye)", r.Dispersion);
+        AddWord(fields, "thermal_probe", "Thermal probe", r.ThermalProbe);
+        AddWord(fields, "electrical", "Electrical conductivity", r.Electrical);
+        AddWord(fields, "uv_long", "Long-wave UV (365 nm)", r.UvLong);
+        AddWord(fields, "uv_short", "Short-wave UV (254 nm)", r.UvShort);
+        if (r.AbsorptionNm is { } lines)
+            fields.Add(new("absorption", "Spectroscope", lines.Count == 0 ? "looked; no lines seen"
+                : "lines or bands at " + string.Join(", ", lines.Select(ReportNumbers.Nanometres))));
+        return fields;
+    }
+
+    private static void AddWord(List<ReportField> fields, string key, string label, string? word)
+    {
+        if (!string.IsNullOrWhiteSpace(word)) fields.Add(new(key, label, StoneReport.Word(word.Trim())));
+    }
+}

@@ -1,0 +1,101 @@
+using GemIndex.Core.Gravity;
+using GemIndex.Core.Identification;
+using GemIndex.Core.Readings;
+using GemIndex.Data.Batch;
+using GemIndex.Data.Workbook;
+
+namespace GemIndex.Cli.Reports;
+
+/// <summary>
+/// Everything a printed report of one identified stone says, worked out once from the stone sheet and its
+/// identification; the formats (<see cref="MarkdownReport"/>, <see cref="HtmlReport"/>, <see cref="JsonReport"/>)
+/// only lay it out. No calculation happens here beyond choosing what to show: the derived values come from Core.
+/// </summary>
+internal sealed record StoneReport
+{
+    /// <summary>What the report says when nothing in the catalogue fits.</summary>
+    public const string NoGoodMatchStatement =
+        "No good match: no catalogue material fits these readings well. The stone may be something the catalogue does not hold, " +
+        "or a reading may be wrong; the candidates below are the least unlikely, not an answer.";
+
+    public required string Reference { get; init; }
+    /// <summary>Weight in carats, when weighed.</summary>
+    public double? WeightCarats { get; init; }
+    /// <summary>The stone's description: reference, weight, dimensions, shape, cutting style, colour, transparency, notes.</summary>
+    public required IReadOnlyList<ReportField> Description { get; init; }
+    /// <summary>The readings as entered (numbers kept for the machine-readable format).</summary>
+    public required StoneReadings Readings { get; init; }
+    /// <summary>Every reading but the rotation series table, in words with units.</summary>
+    public required IReadOnlyList<ReportField> ReadingFields { get; init; }
+    /// <summary>Optic character from the series, or null when it does not fix one.</summary>
+    public string? Character { get; init; }
+    /// <summary>Why the character could not be fixed, or empty.</summary>
+    public string UndeterminedReason { get; init; } = "";
+    /// <summary>The rotation series' interpretations, heaviest first.</summary>
+    public required IReadOnlyList<ReportInterpretation> Interpretations { get; init; }
+    /// <summary>Likely misreadings in the series.</summary>
+    public required IReadOnlyList<string> Misreadings { get; init; }
+    /// <summary>The SG used in the ranking, with its standard uncertainty.</summary>
+    public SpecificGravity? SpecificGravity { get; init; }
+    /// <summary>How the SG was obtained ("given directly", "hydrostatic weighing").</summary>
+    public string SpecificGravitySource { get; init; } = "";
+    public required IReadOnlyList<ReportCandidate> Candidates { get; init; }
+    public required double NotInCatalogue { get; init; }
+    public required bool NoGoodMatch { get; init; }
+    public NextTestAdvice? NextTest { get; init; }
+    public required IReadOnlyList<string> Warnings { get; init; }
+    public IReadOnlyList<string> Cautions => ReportCautions.All;
+
+    /// <summary>Builds the report of one stone.</summary>
+    /// <exception cref="BatchInputException">The sheet's readings do not convert (they converted when the stone was identified).</exception>
+    public static StoneReport Build(StoneSheet sheet, IdentificationResult result)
+    {
+        BenchSheet bench = StoneReadingsConverter.ToBenchSheet(sheet.Readings);
+        RotationSeriesResult? series = result.Series;
+        return new StoneReport
+        {
+            Reference = sheet.Reference,
+            WeightCarats = sheet.WeightCarats,
+            Description = DescriptionOf(sheet),
+            Readings = sheet.Readings,
+            ReadingFields = ReportReadings.Fields(sheet.Readings),
+            Character = series?.Character is { } c ? Word(c.ToString()) : null,
+            UndeterminedReason = series?.UndeterminedReason ?? "",
+            Interpretations = [.. (series?.Interpretations ?? []).OrderByDescending(i => i.Weight).Select(Interpretation)],
+            Misreadings = series?.Misreadings ?? [],
+            SpecificGravity = bench.SpecificGravity,
+            SpecificGravitySource = sheet.Readings.Sg is not null ? "given directly" : sheet.Readings.SgWeighing is not null ? "hydrostatic weighing" : "",
+            Candidates = [.. result.Candidates.Select((c, i) => new ReportCandidate(i + 1, c.Material.Name, Word(c.Material.Origin.ToString()),
+                c.Confidence, c.Fit, c.Reasons))],
+            NotInCatalogue = result.NotInCatalogue,
+            NoGoodMatch = result.NoGoodMatch,
+            NextTest = result.NextTest,
+            Warnings = result.Warnings,
+        };
+    }
+
+    private static List<ReportField> DescriptionOf(StoneSheet sheet) =>
+    [
+        new("reference", "Reference", Shown(sheet.Reference)),
+        new("weight", "Weight", sheet.WeightCarats is { } ct ? ReportNumbers.Carats(ct) : NotRecorded),
+        new("dimensions", "Dimensions", Shown(sheet.Dimensions)),
+        new("shape", "Shape", Shown(sheet.Shape)),
+        new("cutting_style", "Cutting style", Shown(sheet.CuttingStyle)),
+        new("colour", "Colour", Shown(sheet.Readings.Colour)),
+        new("transparency", "Transparency", Shown(sheet.Transparency)),
+        new("notes", "Notes", Shown(sheet.Notes)),
+    ];
+
+    private static ReportInterpretation Interpretation(SeriesInterpretation i) => new(
+        i.Character is { } c ? Word(c.ToString()) : "undetermined", Word(i.Sign.ToString()), i.Weight,
+        i.Lowest.Value, i.Highest.Value, i.Beta?.Value, i.Birefringence.Value, i.Birefringence.StandardUncertainty, i.Description);
+
+    /// <summary>Shown for a description field left empty.</summary>
+    public const string NotRecorded = "not recorded";
+
+    private static string Shown(string? text) => string.IsNullOrWhiteSpace(text) ? NotRecorded : text.Trim();
+
+    /// <summary>An enum name or batch word as plain lower-case words: SinglyRefractive / singly_refractive → "singly refractive".</summary>
+    public static string Word(string name) => string.Concat(name.Replace('_', ' ').Select((ch, i) =>
+        i > 0 && char.IsUpper(ch) && name[i - 1] != ' ' ? " " + char.ToLowerInvariant(ch) : char.ToLowerInvariant(ch).ToString()));
+}

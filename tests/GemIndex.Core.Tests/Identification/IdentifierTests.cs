@@ -1,0 +1,144 @@
+using GemIndex.Core.Catalogue;
+using GemIndex.Core.Gravity;
+using GemIndex.Core.Identification;
+using GemIndex.Core.Observations;
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Readings;
+
+namespace GemIndex.Core.Tests.Identification;
+
+public class IdentifierTests
+{
+    // A small catalogue of standard handbook values (from memory; the shipped catalogue is tested separately).
+    private static Material Make(string name, string species, OpticalIndices indices, double sgLow, double sgHigh, OpticSign sign = OpticSign.None,
+        PropertyRange? bire = null, ThermalProbeResult thermal = ThermalProbeResult.Negative, double? dispersion = null, bool porous = false,
+        BenchFrequency frequency = BenchFrequency.Common, OriginClass origin = OriginClass.Natural) => new()
+    {
+        Name = name, Species = species, Variety = name, Origin = origin, CrystalSystem = CrystalSystem.Cubic, Indices = indices, Sign = sign,
+        Birefringence = bire, SpecificGravity = new PropertyRange(sgLow, sgHigh), ThermalProbe = thermal, Dispersion = dispersion,
+        DoNotImmerse = porous, Frequency = frequency, Provenance = "from memory of standard handbook values",
+        Polariscope = indices.Character is OpticCharacter.Uniaxial or OpticCharacter.Biaxial ? [PolariscopeReaction.DoublyRefractive] : [PolariscopeReaction.SinglyRefractive],
+    };
+
+    private static readonly Material[] Catalogue =
+    [
+        Make("rock crystal", "quartz", OpticalIndices.Uniaxial(new(1.543, 1.545), new(1.552, 1.554)), 2.65, 2.66, OpticSign.Positive, new(0.009, 0.009), frequency: BenchFrequency.VeryCommon),
+        Make("sapphire", "corundum", OpticalIndices.Uniaxial(new(1.767, 1.772), new(1.759, 1.763)), 3.99, 4.01, OpticSign.Negative, new(0.008, 0.009)),
+        Make("synthetic sapphire", "corundum", OpticalIndices.Uniaxial(new(1.767, 1.770), new(1.759, 1.762)), 3.99, 4.01, OpticSign.Negative, new(0.008, 0.009), origin: OriginClass.Synthetic),
+        Make("spinel", "spinel", OpticalIndices.SingleIndex(new(1.712, 1.736)), 3.58, 3.61),
+        Make("diamond", "diamond", OpticalIndices.SingleIndex(new(2.417, 2.419)), 3.51, 3.53, thermal: ThermalProbeResult.Positive, dispersion: 0.044),
+        Make("cubic zirconia", "cubic zirconia", OpticalIndices.SingleIndex(new(2.15, 2.18)), 5.6, 6.0, dispersion: 0.060, frequency: BenchFrequency.VeryCommon),
+        Make("crown glass", "glass", OpticalIndices.SingleIndex(new(1.50, 1.53), OpticCharacter.Amorphous), 2.4, 2.6, frequency: BenchFrequency.VeryCommon),
+        Make("opal", "opal", OpticalIndices.SingleIndex(new(1.43, 1.46), OpticCharacter.Amorphous), 1.98, 2.20, porous: true),
+    ];
+
+    private static readonly Identifier Engine = new(Catalogue);
+
+    private static RefractometerObservation Facet(params (double Rotation, double Low, double High)[] steps) =>
+        new(RefractometerMethod.Facet, [.. steps.Select(s => new ShadowEdgeStep(s.Rotation, s.Low, s.High))]);
+
+    [Fact]
+    public void A_quartz_rotation_series_names_quartz_with_high_confidence()
+    {
+        // Quartz ω 1.544, ε 1.553, uniaxial + (Handbook of Mineralogy, from memory), read every 30°.
+        var sheet = new BenchSheet
+        {
+            Refractometer = Facet((0, 1.544, 1.553), (30, 1.544, 1.552), (60, 1.544, 1.550), (90, 1.544, 1.548), (120, 1.544, 1.549), (150, 1.544, 1.551)),
+            SpecificGravity = new SpecificGravity(2.65, 0.01),
+        };
+        var result = Engine.Identify(sheet);
+        Assert.Equal("quartz", result.Candidates[0].Material.Species);
+        Assert.True(result.Candidates[0].Confidence > 0.9);
+        Assert.False(result.NoGoodMatch);
+    }
+
+    [Fact]
+    public void A_corundum_series_reads_negative_and_names_corundum_and_warns_about_synthetics()
+    {
+        // Corundum ω 1.770, ε 1.762 (common practice); natural and synthetic cannot be separated by these tests.
+        var sheet = new BenchSheet { Refractometer = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770)) };
+        var result = Engine.Identify(sheet);
+        Assert.Equal("corundum", result.Candidates[0].Material.Species);
+        Assert.Equal("corundum", result.Candidates[1].Material.Species);
+        Assert.Contains(result.Warnings, w => w.Contains("cannot be separated", StringComparison.Ordinal));
+        Assert.Equal(OpticCharacter.Uniaxial, result.Series!.Character);
+        Assert.Equal(OpticSign.Negative, Assert.Single(result.Series.Interpretations).Sign);
+    }
+
+    [Fact]
+    public void Over_the_limit_with_a_positive_thermal_probe_and_SG_3_52_is_diamond()
+    {
+        // Diamond n 2.417, SG 3.52, heat conduction (common practice).
+        var sheet = new BenchSheet
+        {
+            Refractometer = new RefractometerObservation(RefractometerMethod.Facet, overLimit: true),
+            ThermalProbe = ThermalProbeResult.Positive,
+            SpecificGravity = new SpecificGravity(3.52, 0.01),
+        };
+        var result = Engine.Identify(sheet);
+        Assert.Equal("diamond", result.Candidates[0].Material.Name);
+        Assert.True(result.Candidates[0].Confidence > 0.95);
+        Assert.Contains(result.Warnings, w => w.StartsWith("Over the limit", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Readings_that_fit_nothing_say_so_instead_of_naming_the_least_bad()
+    {
+        // n 1.61 singly refractive with SG 1.20 matches no entry of this catalogue (an invented, impossible-here stone).
+        var sheet = new BenchSheet
+        {
+            Refractometer = Facet((0, 1.610, 1.610), (90, 1.610, 1.610)),
+            SpecificGravity = new SpecificGravity(1.20, 0.01),
+        };
+        var result = Engine.Identify(sheet);
+        Assert.True(result.NoGoodMatch);
+        Assert.True(result.NotInCatalogue > result.Candidates[0].Confidence);
+        Assert.StartsWith("Nothing in the catalogue fits", result.Warnings[0]);
+    }
+
+    [Fact]
+    public void Confidences_and_the_not_in_catalogue_share_sum_to_one()
+    {
+        var result = Engine.Identify(new BenchSheet { SpecificGravity = new SpecificGravity(3.6, 0.02) }, maximumCandidates: 100);
+        Assert.Equal(1, result.Candidates.Sum(c => c.Confidence) + result.NotInCatalogue, 1e-9);
+    }
+
+    [Fact]
+    public void The_next_test_separates_the_leading_candidates()
+    {
+        // A singly refractive stone over the limit: diamond or cubic zirconia; SG or the thermal probe decide.
+        var sheet = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Facet, overLimit: true) };
+        var result = Engine.Identify(sheet);
+        var next = Assert.IsType<NextTestAdvice>(result.NextTest);
+        Assert.Contains(next.Test, new[] { "sg", "thermal_probe", "dispersion" });
+        Assert.True(next.GainBits > 0.5);
+        Assert.Contains("diamond", next.Separates);
+        Assert.Contains("cubic zirconia", next.Separates);
+    }
+
+    [Fact]
+    public void Reasons_give_the_numbers_in_plain_words()
+    {
+        var sheet = new BenchSheet { SpecificGravity = new SpecificGravity(3.99, 0.01), Refractometer = Facet((0, 1.762, 1.770), (90, 1.767, 1.770)) };
+        var reasons = Engine.Identify(sheet).Candidates[0].Reasons;
+        Assert.Contains(reasons, r => r.Text == "SG 3.99 ± 0.01 lies in 3.99–4.01");
+    }
+
+    [Fact]
+    public void A_porous_candidate_brings_the_do_not_immerse_warning()
+    {
+        var sheet = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.45) };
+        var result = Engine.Identify(sheet);
+        Assert.Equal("opal", result.Candidates[0].Material.Name);
+        Assert.Contains(result.Warnings, w => w.StartsWith("Possible opal: do not immerse", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void A_reading_in_other_light_is_moved_to_589_nm_with_the_candidates_dispersion()
+    {
+        // Diamond's two-term Cauchy through nD 2.418 and nG − nB 0.044 gives about 2.436 at 486 nm (computed by hand:
+        // B = 0.044 / (1/0.4308² − 1/0.6867²) = 0.01357 µm²; n(0.486) − n(0.5893) = B (1/0.486² − 1/0.5893²) ≈ 0.0184).
+        var shift = RefractometerEvidence.WavelengthShift(Catalogue[4], 486.1, out _);
+        Assert.Equal(-0.0184, shift, 0.0005);
+    }
+}

@@ -1,0 +1,124 @@
+using GemIndex.Core.Optics;
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Quantities;
+using GemIndex.Core.Readings;
+
+namespace GemIndex.Core.Tests.Readings;
+
+using IndicatrixModel = GemIndex.Core.Optics.Indicatrix.Indicatrix;
+
+public class RotationSeriesAnalysisTests
+{
+    // Readings are simulated from the indicatrix section model (Optics/Indicatrix) on random facets, rounded to 0.001
+    // as a bench reading is; the analysis must recover what the published indices say.
+    private static List<ShadowEdgeStep> Series(IndicatrixModel truth, Direction facet, double stepDegrees = 15, bool singleEdge = false) =>
+        [.. RotationSeries.Simulate(truth, facet, Angle.FromDegrees(stepDegrees)).Select(s => new ShadowEdgeStep(
+            s.Rotation.Degrees, Math.Round(s.Low.Value, 3), singleEdge ? null : Math.Round(s.High.Value, 3)))];
+
+    [Theory]
+    [InlineData(1)]
+    [InlineData(2)]
+    [InlineData(3)]
+    public void Quartz_reads_uniaxial_positive_with_omega_1_544(int seed)
+    {
+        // Quartz ω 1.544, ε 1.553, uniaxial + (Handbook of Mineralogy, from memory).
+        var quartz = IndicatrixModel.Uniaxial(new RefractiveIndex(1.544), new RefractiveIndex(1.553));
+        var result = RotationSeriesAnalysis.Analyse(Series(quartz, Direction.RandomUniform(new Random(seed))), 0.001);
+        Assert.Equal(OpticCharacter.Uniaxial, result.Character);
+        var h = Assert.Single(result.Interpretations);
+        Assert.Equal(OpticSign.Positive, h.Sign);
+        // Tolerance: rounding to 0.001 moves a reading by at most 0.0005.
+        Assert.Equal(1.544, h.Constant!.Value.Value, 0.0006);
+        Assert.Equal(0.009, h.Birefringence.Value, 0.0011);
+    }
+
+    [Fact]
+    public void Corundum_reads_uniaxial_negative_with_omega_1_770()
+    {
+        // Corundum ω 1.770, ε 1.762, uniaxial − (common practice, from memory).
+        var corundum = IndicatrixModel.Uniaxial(new RefractiveIndex(1.770), new RefractiveIndex(1.762));
+        var result = RotationSeriesAnalysis.Analyse(Series(corundum, new Direction(1, 0.3, 0.4)), 0.001);
+        var h = Assert.Single(result.Interpretations);
+        Assert.Equal(OpticSign.Negative, h.Sign);
+        Assert.Equal(1.770, h.Constant!.Value.Value, 0.0006);
+        Assert.Equal(1.762, h.Lowest.Value, 0.0011);
+    }
+
+    [Fact]
+    public void A_facet_across_the_optic_axis_carries_both_signs()
+    {
+        // Both edges constant (ω and ε): the sign needs more evidence (DOMAIN.md §3).
+        var quartz = IndicatrixModel.Uniaxial(new RefractiveIndex(1.544), new RefractiveIndex(1.553));
+        var result = RotationSeriesAnalysis.Analyse(Series(quartz, Direction.AlongZ), 0.001);
+        Assert.Equal(OpticCharacter.Uniaxial, result.Character);
+        Assert.Equal([OpticSign.Positive, OpticSign.Negative], result.Interpretations.Select(h => h.Sign));
+        Assert.All(result.Interpretations, h => Assert.Equal(0.5, h.Weight));
+    }
+
+    [Fact]
+    public void A_biaxial_series_carries_both_beta_hypotheses_and_one_is_right()
+    {
+        // Peridot-like α 1.654, β 1.672, γ 1.690 (from memory); β is either the highest low or the lowest high edge.
+        var truth = IndicatrixModel.Biaxial(new RefractiveIndex(1.654), new RefractiveIndex(1.672), new RefractiveIndex(1.690));
+        var result = RotationSeriesAnalysis.Analyse(Series(truth, new Direction(0.3, 0.5, 0.8), 10), 0.001);
+        Assert.Equal(OpticCharacter.Biaxial, result.Character);
+        Assert.Equal(2, result.Interpretations.Count);
+        Assert.Contains(result.Interpretations, h => Math.Abs(h.Beta!.Value.Value - 1.672) <= 0.0006);
+        Assert.All(result.Interpretations, h => Assert.Equal(1.654, h.Lowest.Value, 0.0011));
+    }
+
+    [Fact]
+    public void One_constant_edge_is_isotropic()
+    {
+        // Spinel n 1.718 (from memory).
+        var spinel = IndicatrixModel.Isotropic(new RefractiveIndex(1.718));
+        var result = RotationSeriesAnalysis.Analyse(Series(spinel, Direction.AlongX, 30, singleEdge: true), 0.001);
+        Assert.Equal(OpticCharacter.Isotropic, result.Character);
+        Assert.Equal(1.718, Assert.Single(result.Interpretations).Lowest.Value, 0.0006);
+    }
+
+    [Fact]
+    public void A_lone_stray_reading_on_a_constant_edge_is_named_as_a_misreading()
+    {
+        List<ShadowEdgeStep> steps =
+        [
+            new(0, 1.544, 1.553), new(30, 1.544, 1.552), new(60, 1.534, 1.550), new(90, 1.544, 1.548), new(120, 1.544, 1.549), new(150, 1.544, 1.551),
+        ];
+        var result = RotationSeriesAnalysis.Analyse(steps, 0.001);
+        var warning = Assert.Single(result.Misreadings);
+        Assert.Contains("step at 60°", warning);
+        Assert.Equal(OpticSign.Positive, Assert.Single(result.Interpretations).Sign);
+    }
+
+    [Fact]
+    public void Low_edges_above_other_steps_high_edges_are_impossible_and_reported()
+    {
+        List<ShadowEdgeStep> steps = [new(0, 1.600, 1.640), new(45, 1.630, 1.650), new(90, 1.610, 1.620), new(135, 1.605, 1.645)];
+        var result = RotationSeriesAnalysis.Analyse(steps, 0.001);
+        Assert.Contains(result.Misreadings, m => m.Contains("no orientation", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void A_single_step_leaves_the_character_undetermined_with_a_reason()
+    {
+        var result = RotationSeriesAnalysis.Analyse([new ShadowEdgeStep(0, 1.544, 1.553)], 0.001);
+        Assert.Null(result.Character);
+        Assert.Contains("single rotation step", result.UndeterminedReason);
+    }
+
+    [Fact]
+    public void The_largest_gap_wraps_around_the_half_turn() =>
+        // Steps at 0, 45, 90, 135: gaps of 45° including 135 → 180 (= 0).
+        Assert.Equal(45, RotationSeriesAnalysis.LargestGap([0, 45, 90, 135]), 9);
+
+    [Fact]
+    public void A_high_edge_below_the_low_edge_is_refused_naming_both()
+    {
+        var e = Assert.Throws<QuantityOutOfRangeException>(() => new ShadowEdgeStep(0, 1.553, 1.544));
+        Assert.Equal("high edge is 1.544; allowed: not below the low edge 1.5530 of the same step.", e.Message);
+    }
+
+    [Fact]
+    public void No_steps_is_refused() =>
+        Assert.Contains("number of rotation steps", Assert.Throws<QuantityOutOfRangeException>(() => RotationSeriesAnalysis.Analyse([], 0.001)).Message);
+}

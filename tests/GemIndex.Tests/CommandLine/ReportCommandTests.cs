@@ -1,0 +1,94 @@
+using System.CommandLine;
+using GemIndex.Cli.CommandLine;
+using GemIndex.Tests.Reports;
+
+namespace GemIndex.Tests.CommandLine;
+
+public sealed class ReportCommandTests : IDisposable
+{
+    private readonly string _dir = Directory.CreateTempSubdirectory("gemindex-report-").FullName;
+
+    public void Dispose() => Directory.Delete(_dir, recursive: true);
+
+    private (int Exit, string Out, string Err) Run(params string[] args)
+    {
+        var root = new RootCommand { ReportCommand.Create(() => ReportFixtures.Catalogue) };
+        var o = new StringWriter();
+        var e = new StringWriter();
+        int exit = root.Parse(args).Invoke(new InvocationConfiguration { Output = o, Error = e });
+        return (exit, o.ToString(), e.ToString());
+    }
+
+    private string Batch(params string[] lines)
+    {
+        string path = Path.Combine(_dir, "stones.jsonl");
+        File.WriteAllText(path, string.Join("\n", lines) + "\n");
+        return path;
+    }
+
+    [Theory]
+    [InlineData("html", "<!DOCTYPE html>")]
+    [InlineData("markdown", "# Stone report: lot 7 / 2")]
+    [InlineData("json", "\"report_version\": 1")]
+    public void Report_stone_writes_the_chosen_format_to_the_output_file(string format, string expected)
+    {
+        string output = Path.Combine(_dir, "report.out");
+        var (exit, stdout, err) = Run("report", "stone", "--readings", Batch("""{"id":"first"}""", ReportFixtures.QuartzLine),
+            "--line", "2", "--format", format, "--output", output);
+        Assert.Equal("", err);
+        Assert.Equal(ExitCodes.Ok, exit);
+        Assert.Contains(output, stdout);
+        string text = File.ReadAllText(output);
+        Assert.Contains(expected, text);
+        Assert.Contains("quartz", text);
+    }
+
+    [Fact]
+    public void Without_output_the_report_goes_to_standard_output()
+    {
+        var (exit, stdout, _) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine));
+        Assert.Equal(ExitCodes.Ok, exit);
+        Assert.Contains("## Candidates", stdout);
+    }
+
+    [Fact]
+    public void A_bad_line_is_reported_with_its_field_and_a_non_zero_exit()
+    {
+        string output = Path.Combine(_dir, "never.md");
+        var (exit, _, err) = Run("report", "stone", "--readings",
+            Batch("""{"id":"bad","refractometer":{"readings":[{"rotation_deg":0,"low":"1.54"}]}}"""), "--output", output);
+        Assert.Equal(ExitCodes.BadInput, exit);
+        Assert.Contains("line 1", err);
+        Assert.Contains("refractometer.readings[0].low", err);
+        Assert.False(File.Exists(output));
+    }
+
+    [Fact]
+    public void An_out_of_range_value_names_its_field()
+    {
+        var (exit, _, err) = Run("report", "stone", "--readings", Batch("""{"id":"bad","sg":80}"""));
+        Assert.Equal(ExitCodes.BadInput, exit);
+        Assert.Contains("sg:", err);
+        Assert.Contains("80", err);
+    }
+
+    [Fact]
+    public void A_line_beyond_the_file_is_refused_with_the_allowed_range()
+    {
+        var (exit, _, err) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine), "--line", "3");
+        Assert.Equal(ExitCodes.BadInput, exit);
+        Assert.Contains("--line: 3", err);
+        Assert.Contains("1–1", err);
+    }
+
+    [Theory]
+    [InlineData("--line", "0")]
+    [InlineData("--line", "two")]
+    [InlineData("--format", "pdf")]
+    public void Bad_options_are_parse_errors(string option, string value)
+    {
+        var (exit, _, err) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine), option, value);
+        Assert.Equal(ExitCodes.Usage, exit);
+        Assert.Contains(value, err);
+    }
+}

@@ -1,0 +1,94 @@
+using System.Text.Json;
+using GemIndex.Cli.Reports;
+
+namespace GemIndex.Tests.Reports;
+
+public class StoneReportTests
+{
+    [Fact]
+    public void A_quartz_reading_ranks_quartz_first_with_its_derived_properties()
+    {
+        var report = ReportFixtures.Report(ReportFixtures.QuartzLine);
+        Assert.Equal("quartz", report.Candidates[0].Name);
+        Assert.Equal("uniaxial", report.Character);
+        Assert.NotNull(report.SpecificGravity);
+        // 2.650 / (2.650 − 1.650) = 2.650 times the water density at 20 °C (0.9982 g/cm³): 2.645, before any correction.
+        Assert.Equal(2.645, report.SpecificGravity!.Value.Value, 0.005);
+    }
+
+    public static TheoryData<string> Formats => new() { "markdown", "html", "json" };
+
+    [Theory]
+    [MemberData(nameof(Formats))]
+    public void Every_format_carries_the_reference_candidates_confidence_and_cautions(string format)
+    {
+        var report = ReportFixtures.Report(ReportFixtures.QuartzLine);
+        string text = Render(format, report);
+        Assert.Contains("lot 7 / 2", text);
+        foreach (var c in report.Candidates) Assert.Contains(c.Name, text);
+        string confidence = format == "json"
+            ? report.Candidates[0].Confidence.ToString("R", System.Globalization.CultureInfo.InvariantCulture)
+            : ReportNumbers.Percent(report.Candidates[0].Confidence);
+        Assert.Contains(confidence, text);
+        foreach (string caution in ReportCautions.All) Assert.Contains(format == "html" ? HtmlReport.E(caution) : caution, text);
+        Assert.Contains("1.553", text); // a high edge of the rotation series
+        Assert.Contains(format == "json" ? "weight_carats" : "2.65 ct", text);
+    }
+
+    [Fact]
+    public void Html_escapes_markup_in_the_reference()
+    {
+        string html = HtmlReport.Write(ReportFixtures.Report(ReportFixtures.QuartzLine, "<b>&\""));
+        Assert.Contains("&lt;b&gt;&amp;&quot;", html);
+        Assert.DoesNotContain("<b>", html);
+        Assert.DoesNotContain("<script", html);
+        Assert.DoesNotContain("http", html); // no external assets
+        Assert.Contains("@media print", html);
+    }
+
+    [Fact]
+    public void Markdown_escapes_table_and_emphasis_characters()
+    {
+        string md = MarkdownReport.Write(ReportFixtures.Report(ReportFixtures.QuartzLine, "a|b*c"));
+        Assert.Contains(@"a\|b\*c", md);
+    }
+
+    [Fact]
+    public void Json_parses_back_with_stable_names_and_finite_numbers()
+    {
+        var report = ReportFixtures.Report(ReportFixtures.QuartzLine);
+        string json = JsonReport.Write(report);
+        Assert.DoesNotContain("NaN", json);
+        Assert.DoesNotContain("Infinity", json);
+        using var doc = JsonDocument.Parse(json);
+        var root = doc.RootElement;
+        Assert.Equal("lot 7 / 2", root.GetProperty("stone").GetProperty("reference").GetString());
+        Assert.Equal(2.65, root.GetProperty("stone").GetProperty("weight_carats").GetDouble());
+        var first = root.GetProperty("candidates")[0];
+        Assert.Equal("quartz", first.GetProperty("material").GetString());
+        Assert.Equal(report.Candidates[0].Confidence, first.GetProperty("confidence").GetDouble());
+        Assert.Equal(4, root.GetProperty("readings").GetProperty("rotation_series").GetArrayLength());
+        Assert.Equal(4, root.GetProperty("cautions").GetArrayLength());
+        Assert.Equal(JsonValueKind.False, root.GetProperty("no_good_match").ValueKind);
+    }
+
+    [Fact]
+    public void A_stone_nothing_fits_says_so_plainly_in_every_format()
+    {
+        // An invented reading far from all three materials: index 2.40 over a wide range, SG 7.0.
+        const string line = """{"id":"odd one","refractometer":{"method":"spot","spot":1.60},"sg":7.0,"polariscope":"doubly_refractive"}""";
+        var report = ReportFixtures.Report(line);
+        Assert.True(report.NoGoodMatch);
+        Assert.Contains("No good match", MarkdownReport.Write(report));
+        Assert.Contains("No good match", HtmlReport.Write(report));
+        using var doc = JsonDocument.Parse(JsonReport.Write(report));
+        Assert.True(doc.RootElement.GetProperty("no_good_match").GetBoolean());
+    }
+
+    private static string Render(string format, StoneReport report) => format switch
+    {
+        "html" => HtmlReport.Write(report),
+        "json" => JsonReport.Write(report),
+        _ => MarkdownReport.Write(report),
+    };
+}
