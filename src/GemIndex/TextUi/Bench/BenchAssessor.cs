@@ -85,6 +85,7 @@ internal sealed partial class BenchAssessor(Identifier? identifier)
         }
         if (e.Field == "refractometer" && r.Refractometer is { } rf) return WithoutRefractometerPart(r, rf, problem, errors);
         string key = e.Field.StartsWith("sg", StringComparison.Ordinal) ? (e.Field == "sg" && r.SgWeighing is not null ? BenchFields.WaterCt : e.Field)
+            : e.Field == "dispersion" && r.DispersionIndices is not null ? BenchFields.IndexAtG
             : e.Field.Split('[', '.')[0];
         errors.TryAdd(key, problem);
         return key switch
@@ -94,7 +95,7 @@ internal sealed partial class BenchAssessor(Identifier? identifier)
             _ when key.StartsWith("sg", StringComparison.Ordinal) => r with { Sg = null, SgWeighing = null },
             BenchFields.Polariscope => r with { Polariscope = null },
             BenchFields.Pleochroism => r with { Pleochroism = null },
-            BenchFields.Dispersion => r with { Dispersion = null, DispersionIndices = null },
+            BenchFields.Dispersion or BenchFields.IndexAtG => r with { Dispersion = null, DispersionIndices = null },
             BenchFields.ThermalProbe => r with { ThermalProbe = null },
             BenchFields.Electrical => r with { Electrical = null },
             BenchFields.UvLong => r with { UvLong = null },

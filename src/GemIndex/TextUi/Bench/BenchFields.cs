@@ -31,6 +31,8 @@ internal static class BenchFields
     public const string Polariscope = "polariscope";
     public const string Pleochroism = "pleochroism";
     public const string Dispersion = "dispersion";
+    public const string IndexAtB = "dispersion.nB";
+    public const string IndexAtG = "dispersion.nG";
     public const string ThermalProbe = "thermal_probe";
     public const string Electrical = "electrical";
     public const string UvLong = "uv_long";

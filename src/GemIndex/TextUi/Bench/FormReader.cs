@@ -16,6 +16,7 @@ internal sealed class FormReader(BenchSnapshot form, Dictionary<string, string> 
         Polariscope = form.Choice(BenchFields.Polariscope),
         Pleochroism = form.Choice(BenchFields.Pleochroism),
         Dispersion = form.Choice(BenchFields.Dispersion),
+        DispersionIndices = Number(BenchFields.IndexAtB) is { } nB && Number(BenchFields.IndexAtG) is { } nG ? (nB, nG) : null,
         ThermalProbe = form.Choice(BenchFields.ThermalProbe),
         Electrical = form.Choice(BenchFields.Electrical),
         UvLong = form.Choice(BenchFields.UvLong),

@@ -31,6 +31,8 @@ internal static class StoneFormText
         yield return new(BenchFields.WaterCt, r.SgWeighing is { } b ? Number(b.WaterCt) : "");
         yield return new(BenchFields.WaterC, r.SgWeighing?.WaterC is { } c ? Number(c) : "");
         yield return new(BenchFields.HeavyLiquids, string.Join("; ", r.HeavyLiquids.Select(h => $"{Number(h.Density)} {h.Result}")));
+        yield return new(BenchFields.IndexAtB, r.DispersionIndices is { } d ? Number(d.NB) : "");
+        yield return new(BenchFields.IndexAtG, r.DispersionIndices is { } g ? Number(g.NG) : "");
         yield return new(BenchFields.Absorption, r.AbsorptionNm is { } lines ? string.Join(" ", lines.Select(Number)) : "");
     }
 

@@ -8,6 +8,8 @@ internal sealed class TestsPage : BenchPage
         AddChoice(BenchFields.Polariscope);
         AddChoice(BenchFields.Pleochroism);
         AddChoice(BenchFields.Dispersion);
+        AddField(BenchFields.IndexAtB, "  or nB", 7, "index at 686.7 nm");
+        AddField(BenchFields.IndexAtG, "     nG", 7, "index at 430.8 nm");
         AddChoice(BenchFields.ThermalProbe);
         AddChoice(BenchFields.Electrical);
         AddChoice(BenchFields.UvLong);

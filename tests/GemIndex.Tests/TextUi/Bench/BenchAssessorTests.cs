@@ -138,4 +138,19 @@ public class BenchAssessorTests
         Assert.Contains("calibration offset", a.Errors[BenchFields.CalibrationOffset]);
         Assert.Equal("quartz", a.Result!.Candidates[0].Material.Name);
     }
+
+    [Fact]
+    public void Measured_dispersion_indices_go_into_the_readings_and_a_reversed_pair_is_marked()
+    {
+        BenchModel form = QuartzForm();
+        form.SetText(BenchFields.IndexAtB, "1.541");
+        form.SetText(BenchFields.IndexAtG, "1.554");
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.Equal((1.541, 1.554), a.Readings.DispersionIndices);
+        Assert.Empty(a.Errors);
+        form.SetText(BenchFields.IndexAtG, "1.530");   // nG below nB by more than Core allows
+        BenchAssessment reversed = Assessor.Assess(form.Snapshot());
+        Assert.True(reversed.Errors.ContainsKey(BenchFields.IndexAtG), string.Join("; ", reversed.Errors));
+        Assert.Equal("quartz", reversed.Result!.Candidates[0].Material.Name);
+    }
 }
