@@ -9,7 +9,7 @@ internal static class HelpText
         ("F2 F3 F4 F5", "stone sheet / refractometer / SG and liquids / other tests"),
         ("F6", "edge plot (two shadow edges against rotation)"),
         ("F7", "catalogue browser (type a name, an index or an SG)"),
-        ("F8", "stones in the workbook (open, search, new, duplicate, delete)"),
+        ("F8", "stones in the workbook (open, search, new, duplicate, delete; F3 there shows a stone's edit history)"),
         ("F9, Enter", "on a candidate: its detail: reasons and catalogue entry"),
         ("Ctrl+N", "new stone"),
         ("Ctrl+Q", "quit (everything is already saved)"),

@@ -188,7 +188,8 @@ internal sealed class MainWindow : Window
     private void ShowStones()
     {
         var model = new StoneListModel(q => _session.WithWorkbook(w => w.List(q)));
-        using var view = new StoneListView(model, id => _session.WithWorkbook(w => w.Duplicate(id).Id), id => _session.WithWorkbook(w => w.Delete(id)));
+        using var view = new StoneListView(model, id => _session.WithWorkbook(w => w.Duplicate(id).Id), id => _session.WithWorkbook(w => w.Delete(id)),
+            id => _session.WithWorkbook(w => StoneHistoryText.Lines(w.Get(id)?.Reference ?? "", w.History(id))));
         App!.Run(view);
         if (view.WantsNew) { _session.New(); FillFromModel(); ShowPage(0); }
         else if (view.Chosen is { } id) { _session.Open(id); FillFromModel(); }

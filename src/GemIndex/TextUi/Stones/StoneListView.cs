@@ -12,10 +12,10 @@ internal sealed class StoneListView : Dialog
     private readonly StoneListModel _model;
     private readonly ObservableCollection<string> _rows = [];
 
-    public StoneListView(StoneListModel model, Func<long, long> duplicate, Func<long, bool> delete)
+    public StoneListView(StoneListModel model, Func<long, long> duplicate, Func<long, bool> delete, Func<long, IReadOnlyList<string>> history)
     {
         _model = model;
-        Title = "Stones (Enter open, ^N new, ^D duplicate, Del delete, Esc back)";
+        Title = "Stones: Enter open ^N new ^D duplicate F3 history Del delete";
         Width = Dim.Fill();
         Height = Dim.Fill();
         var label = new Label { Text = "Search:" };
@@ -29,6 +29,7 @@ internal sealed class StoneListView : Dialog
             if (key == Key.Enter && id is not null) { Chosen = id; App!.RequestStop(); }
             else if (key == Key.N.WithCtrl) { WantsNew = true; App!.RequestStop(); }
             else if (key == Key.D.WithCtrl && id is { } d) { duplicate(d); Reload(); }
+            else if (key == Key.F3 && id is { } h) Main.TextScreen.Show(App!, "Edit history", string.Join('\n', history(h)));
             else if (key == Key.Delete && sender == List && id is { } x && MessageBox.Query(App!, "Delete stone",
                          $"Delete '{_model.Shown[List.SelectedItem!.Value].Reference}' and its history?", "Keep", "Delete") == 1) { delete(x); Reload(); }
             else return;
