@@ -1,4 +1,5 @@
 using System.CommandLine;
+using GemIndex.Data.Workbook;
 
 namespace GemIndex.Cli.CommandLine;
 
@@ -8,11 +9,11 @@ internal static class CommandTree
     public static RootCommand Build()
     {
         var root = new RootCommand("gemindex: identify gem materials from bench readings (refractometer, SG, polariscope, spectroscope, UV, probes)");
-        root.SetAction(pr =>
-        {
-            pr.InvocationConfiguration.Output.WriteLine("The text UI is not built yet; try 'gemindex --help'.");
-            return ExitCodes.Ok;
-        });
+        var workbook = new Option<string?>("--workbook") { Description = "The workbook file of your stones (default: your data folder, gemindex/workbook.db)" };
+        var demo = new Option<bool>("--demo") { Description = "Add the invented demo stones to the workbook, then exit (open it with --workbook PATH)" };
+        root.Options.Add(workbook);
+        root.Options.Add(demo);
+        root.SetAction(pr => TextUiCommand.Run(pr, pr.GetValue(workbook) ?? WorkbookLocation.Default(), pr.GetValue(demo)));
         root.Subcommands.Add(CatalogueCommand.Create());
         root.Subcommands.Add(IdentifyCommand.Create(CatalogueCommand.DirectoryOption()));
         root.Subcommands.Add(ReportCommand.Create(() => GemIndex.Data.Catalogue.MergedCatalogue.Load(GemIndex.Data.Catalogue.CatalogueLocations.FromEnvironment())));

@@ -1,0 +1,114 @@
+using System.Collections.Immutable;
+using System.Globalization;
+using GemIndex.Core.Identification;
+using GemIndex.Data.Batch;
+using GemIndex.Data.Workbook;
+
+namespace GemIndex.Cli.TextUi.Bench;
+
+/// <summary>
+/// The stone being worked on, exactly as typed: every field keeps its text even when it does not parse, so nothing
+/// typed is lost. Changes bump <see cref="Version"/>; <see cref="Snapshot"/> hands an immutable copy to the
+/// assessor and the workbook. No Terminal.Gui here.
+/// </summary>
+internal sealed class BenchModel
+{
+    /// <summary>Rotation step suggested between readings, degrees (common practice: 10°–30° steps over 180°).</summary>
+    public const double RotationStepDegrees = 15;
+
+    private ImmutableDictionary<string, string> _texts = ImmutableDictionary<string, string>.Empty;
+    private ImmutableDictionary<string, string> _choices = ImmutableDictionary<string, string>.Empty;
+    private ImmutableList<StepText> _steps = [];
+    private DateTimeOffset _created;
+
+    public long StoneId { get; private set; }
+
+    public int Version { get; private set; }
+
+    public IReadOnlyList<StepText> Steps => _steps;
+
+    public string Text(string field) => _texts.GetValueOrDefault(field, "");
+
+    public string? Choice(string field) => _choices.GetValueOrDefault(field);
+
+    public void SetText(string field, string text)
+    {
+        if (Text(field) == text) return;
+        _texts = _texts.SetItem(field, text);
+        Version++;
+    }
+
+    public void Choose(string field, string? word)
+    {
+        if (Choice(field) == word) return;
+        _choices = word is null ? _choices.Remove(field) : _choices.SetItem(field, word);
+        Version++;
+    }
+
+    /// <summary>Replaces step <paramref name="index"/>, or adds one when index is the count.</summary>
+    public void PutStep(int index, StepText step)
+    {
+        _steps = index == _steps.Count ? _steps.Add(step) : _steps.SetItem(index, step);
+        Version++;
+    }
+
+    public void RemoveStep(int index)
+    {
+        _steps = _steps.RemoveAt(index);
+        Version++;
+    }
+
+    /// <summary>The rotation to offer for the next step: 0, then the last rotation plus <see cref="RotationStepDegrees"/>.</summary>
+    public string NextRotation() =>
+        _steps.Count == 0 ? "0"
+        : double.TryParse(_steps[^1].Rotation, NumberStyles.Float, CultureInfo.InvariantCulture, out double last)
+            ? (last + RotationStepDegrees).ToString("0.##", CultureInfo.InvariantCulture) : "";
+
+    public BenchSnapshot Snapshot() => new(StoneId, Version, _texts, _choices, _steps);
+
+    /// <summary>Fills the form from a stored stone; bench settings (precision, calibration) are kept.</summary>
+    public void Load(StoneSheet stone)
+    {
+        StoneId = stone.Id;
+        _created = stone.Created;
+        var keep = _texts.Where(p => p.Key is BenchFields.Precision or BenchFields.CalibrationOffset);
+        _texts = ImmutableDictionary.CreateRange(keep.Concat(StoneFormText.From(stone)).Where(p => p.Value.Length > 0));
+        _choices = ImmutableDictionary.CreateRange(StoneFormText.Choices(stone.Readings));
+        _steps = [.. (stone.Readings.Refractometer?.Readings ?? []).Select(s =>
+            new StepText(StoneFormText.Number(s.RotationDeg), StoneFormText.Number(s.Low), s.High is { } h ? StoneFormText.Number(h) : ""))];
+        Version++;
+    }
+
+    /// <summary>Puts back the texts of a saved draft (see <see cref="BenchDraft"/>) over a loaded stone.</summary>
+    public bool ApplyDraft(string? json)
+    {
+        if (json is null || BenchDraft.Read(json) is not { } draft) return false;
+        var bench = _texts.Where(p => p.Key is BenchFields.Precision or BenchFields.CalibrationOffset);
+        _texts = draft.Texts.RemoveRange([BenchFields.Precision, BenchFields.CalibrationOffset]).SetItems(bench);
+        _choices = draft.Choices;
+        _steps = draft.Steps;
+        Version++;
+        return true;
+    }
+
+    /// <summary>The stone to store: the description as typed and the readings that parse (the rest stay in the form).</summary>
+    public static StoneSheet ToStoneSheet(BenchSnapshot s, StoneReadings readings) => new()
+    {
+        Id = s.StoneId,
+        Reference = s.Text(BenchFields.Reference).Trim(),
+        WeightCarats = StoneFormText.TryNumber(s.Text(BenchFields.Weight)),
+        Dimensions = s.Text(BenchFields.Dimensions),
+        Shape = s.Text(BenchFields.Shape),
+        CuttingStyle = s.Text(BenchFields.CuttingStyle),
+        Transparency = s.Text(BenchFields.Transparency),
+        Notes = s.Text(BenchFields.Notes),
+        Readings = readings,
+    };
+
+    /// <summary>Applies the bench settings that the batch format does not hold (precision, calibration offset) to a converted sheet.</summary>
+    public static BenchSheet WithInstrument(BenchSheet sheet, double? precision, double offset) =>
+        sheet.Refractometer is not { } r ? sheet : sheet with
+        {
+            Refractometer = new RefractometerObservation(r.Method, r.Steps, r.Spot, r.OverLimit, r.LightNanometres, r.LiquidLimit, precision, offset),
+        };
+}

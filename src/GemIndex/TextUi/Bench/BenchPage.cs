@@ -1,0 +1,79 @@
+using Terminal.Gui.Drawing;
+using Terminal.Gui.Configuration;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace GemIndex.Cli.TextUi.Bench;
+
+/// <summary>One page of the bench form: rows of fields and choices, and at the bottom the full reasons of any refused entries.</summary>
+internal class BenchPage : View
+{
+    public const int LabelWidth = 13;
+    private readonly Label _problems;
+    private int _row;
+
+    public BenchPage(string title, string keys)
+    {
+        Title = title;
+        Keys = keys;
+        Width = Dim.Fill();
+        Height = Dim.Fill();
+        CanFocus = true;
+        _problems = new Label { X = 0, Y = Pos.AnchorEnd(4), Width = Dim.Fill(), Height = 4 };
+        _problems.SchemeName = SchemeManager.SchemesToSchemeName(Schemes.Error);
+        Add(_problems);
+    }
+
+    /// <summary>The keys that matter on this page, for the key line.</summary>
+    public string Keys { get; }
+
+    public List<FormField> Fields { get; } = [];
+
+    public List<ChoiceField> Choices { get; } = [];
+
+    protected int NextRow(int rows = 1)
+    {
+        int row = _row;
+        _row += rows;
+        return row;
+    }
+
+    public FormField AddField(string field, string label, int editWidth, string hint = "")
+    {
+        var f = new FormField(field, label, LabelWidth, editWidth, hint) { Y = NextRow() };
+        Fields.Add(f);
+        Add(f);
+        return f;
+    }
+
+    public ChoiceField AddChoice(string field)
+    {
+        var c = new ChoiceField(BenchChoice.For(field), LabelWidth) { Y = NextRow() };
+        Choices.Add(c);
+        Add(c);
+        return c;
+    }
+
+    public Label AddNote(string text = "")
+    {
+        var l = new Label { Y = NextRow(), Width = Dim.Fill(), Text = text };
+        Add(l);
+        return l;
+    }
+
+    /// <summary>Marks each field with its error and lists the reasons at the bottom.</summary>
+    public virtual void ShowErrors(IReadOnlyDictionary<string, string> errors)
+    {
+        var mine = new List<string>();
+        foreach (FormField f in Fields)
+        {
+            string? reason = errors.GetValueOrDefault(f.Field);
+            f.ShowError(reason);
+            if (reason is not null) mine.Add(reason);
+        }
+        mine.AddRange(OwnErrors(errors));
+        _problems.Text = string.Join('\n', mine.Select(m => "! " + m));
+    }
+
+    protected virtual IEnumerable<string> OwnErrors(IReadOnlyDictionary<string, string> errors) => [];
+}

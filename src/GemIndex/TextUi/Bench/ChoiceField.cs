@@ -1,0 +1,57 @@
+using Terminal.Gui.Input;
+using Terminal.Gui.ViewBase;
+
+namespace GemIndex.Cli.TextUi.Bench;
+
+/// <summary>An answer picked with one letter (Space, Backspace or Delete clears); a mouse click moves to the next answer.</summary>
+internal sealed class ChoiceField : View
+{
+    private readonly int _labelWidth;
+
+    public ChoiceField(BenchChoice choice, int labelWidth)
+    {
+        Choice = choice;
+        _labelWidth = labelWidth;
+        Width = Dim.Fill();
+        Height = 1;
+        CanFocus = true;
+        Show(null);
+        MouseEvent += (_, m) =>
+        {
+            if (!m.IsSingleClicked) return;
+            SetFocus();
+            int at = choice.Options.Select(o => o.Word).ToList().IndexOf(Word ?? "");
+            Pick(at + 1 < choice.Options.Count ? choice.Options[at + 1].Word : null);
+            m.Handled = true;
+        };
+    }
+
+    public BenchChoice Choice { get; }
+
+    public string? Word { get; private set; }
+
+    /// <summary>Raised when the user picks or clears the answer.</summary>
+    public event Action<ChoiceField>? Picked;
+
+    /// <summary>Shows a word without raising <see cref="Picked"/> (when a stone is loaded).</summary>
+    public void Show(string? word)
+    {
+        Word = word;
+        Text = $"{Choice.Label.PadRight(_labelWidth)}[{Choice.Show(word)}]  {Choice.KeyHint}";
+    }
+
+    private void Pick(string? word)
+    {
+        Show(word);
+        Picked?.Invoke(this);
+    }
+
+    protected override bool OnKeyDown(Key key)
+    {
+        if (key == Key.Space || key == Key.Backspace || key == Key.Delete) { Pick(null); return true; }
+        if (key.IsCtrl || key.IsAlt || !key.TryGetPrintableRune(out var rune) || !rune.IsBmp) return false;
+        if (Choice.WordFor((char)rune.Value) is not { } word) return false;
+        Pick(word);
+        return true;
+    }
+}

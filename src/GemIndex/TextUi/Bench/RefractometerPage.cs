@@ -1,0 +1,92 @@
+using System.Collections.ObjectModel;
+using Terminal.Gui.Input;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace GemIndex.Cli.TextUi.Bench;
+
+/// <summary>
+/// Rotation steps typed on one line (rotation, low edge, high edge; Enter stores) into a grid below; spot reading,
+/// over the limit and the instrument settings under it.
+/// </summary>
+internal sealed class RefractometerPage : BenchPage
+{
+    public const int GridRows = 6;
+    private readonly ObservableCollection<string> _rows = [];
+    private int? _editing;
+
+    public RefractometerPage() : base("Refractometer", "Enter stores, Del removes")
+    {
+        NextRow();
+        Add(new Label { Y = 0, Text = "Rot °    Low      High     Enter stores" });
+        Rotation = new TextField { X = 0, Y = NextRow(), Width = 6 };
+        Low = new TextField { X = 9, Y = Pos.Top(Rotation), Width = 7 };
+        High = new TextField { X = 18, Y = Pos.Top(Rotation), Width = 7 };
+        Editing = new Label { X = 27, Y = Pos.Top(Rotation), Width = Dim.Fill() };
+        Grid = new ListView { X = 0, Y = NextRow(GridRows), Width = Dim.Fill(), Height = GridRows };
+        Grid.SetSource(_rows);
+        Add(Rotation, Low, High, Editing, Grid);
+        AddField(BenchFields.Spot, "Spot reading", 7, "(no steps)");
+        AddChoice(BenchFields.OverLimit);
+        AddField(BenchFields.LiquidLimit, "Liquid limit", 6, "default 1.79");
+        AddField(BenchFields.LightNm, "Light nm", 6, "default 589.3");
+        AddField(BenchFields.Precision, "Precision", 6, "default 0.001");
+        AddField(BenchFields.CalibrationOffset, "Calibration", 6, "offset, default 0");
+        foreach (TextField box in new[] { Rotation, Low, High })
+            box.KeyDown += (_, key) =>
+            {
+                if (key != Key.Enter) return;
+                StoreRequested?.Invoke(_editing, new StepText(Rotation.Text.Trim(), Low.Text.Trim(), High.Text.Trim()));
+                key.Handled = true;
+            };
+        Grid.KeyDown += (_, key) =>
+        {
+            if (Grid.SelectedItem is not { } i || i >= _rows.Count) return;
+            if (key == Key.Enter) { EditRequested?.Invoke(i); key.Handled = true; }
+            else if (key == Key.Delete) { RemoveRequested?.Invoke(i); key.Handled = true; }
+        };
+    }
+
+    public TextField Rotation { get; }
+
+    public TextField Low { get; }
+
+    public TextField High { get; }
+
+    public Label Editing { get; }
+
+    public ListView Grid { get; }
+
+    /// <summary>(index being edited or null for a new step, the step typed).</summary>
+    public event Action<int?, StepText>? StoreRequested;
+
+    public event Action<int>? EditRequested;
+
+    public event Action<int>? RemoveRequested;
+
+    /// <summary>Puts a step on the edit line (null: an empty new step at <paramref name="nextRotation"/>).</summary>
+    public void BeginStep(int? index, StepText? step, string nextRotation)
+    {
+        _editing = index;
+        Rotation.Text = step?.Rotation ?? nextRotation;
+        Low.Text = step?.Low ?? "";
+        High.Text = step?.High ?? "";
+        Editing.Text = index is { } i ? $"editing step {i + 1}" : "";
+        Low.SetFocus();
+    }
+
+    public void ShowSteps(IReadOnlyList<StepText> steps, IReadOnlyDictionary<string, string> errors)
+    {
+        int? selected = Grid.SelectedItem;
+        _rows.Clear();
+        for (int i = 0; i < steps.Count; i++)
+            _rows.Add($"{steps[i].Rotation,5}°  {steps[i].Low,-7}  {steps[i].High,-7}{(errors.TryGetValue(BenchFields.Step(i), out string? e) ? " ! " + e : "")}");
+        if (_rows.Count == 0) _rows.Add("(no steps yet: type low and high, Enter)");
+        if (selected is { } s) Grid.SelectedItem = Math.Min(s, _rows.Count - 1);
+    }
+
+    protected override IEnumerable<string> OwnErrors(IReadOnlyDictionary<string, string> errors) =>
+        errors.Where(p => p.Key.StartsWith("refractometer.readings[", StringComparison.Ordinal))
+            .Select(p => $"step {int.Parse(p.Key[23..p.Key.IndexOf(']')], System.Globalization.CultureInfo.InvariantCulture) + 1}: {p.Value}")
+            .Concat(errors.Where(p => p.Key == BenchFields.OverLimit).Select(p => p.Value));
+}

@@ -1,0 +1,49 @@
+using System.Globalization;
+using GemIndex.Core.Quantities;
+using GemIndex.Data.Batch;
+using GemIndex.Data.Workbook;
+
+namespace GemIndex.Cli.TextUi.Bench;
+
+/// <summary>Turns a stored stone back into the form's texts and choices.</summary>
+internal static class StoneFormText
+{
+    public static string Number(double v) => v.ToString("0.#####", CultureInfo.InvariantCulture);
+
+    public static double? TryNumber(string text) => BenchNumber.TryParse(text, out double v, out _) ? v : null;
+
+    public static IEnumerable<KeyValuePair<string, string>> From(StoneSheet s)
+    {
+        StoneReadings r = s.Readings;
+        yield return new(BenchFields.Reference, s.Reference);
+        yield return new(BenchFields.Weight, s.WeightCarats is { } w ? Number(w) : "");
+        yield return new(BenchFields.Dimensions, s.Dimensions);
+        yield return new(BenchFields.Shape, s.Shape);
+        yield return new(BenchFields.CuttingStyle, s.CuttingStyle);
+        yield return new(BenchFields.Transparency, s.Transparency);
+        yield return new(BenchFields.Notes, s.Notes);
+        yield return new(BenchFields.Colour, r.Colour ?? "");
+        yield return new(BenchFields.Spot, r.Refractometer?.Spot is { } spot ? Number(spot) : "");
+        yield return new(BenchFields.LiquidLimit, r.Refractometer?.LiquidLimit is { } ll ? Number(ll) : "");
+        yield return new(BenchFields.LightNm, r.Refractometer?.LightNm is { } nm ? Number(nm) : "");
+        yield return new(BenchFields.Sg, r.Sg is { } sg ? Number(sg) : "");
+        yield return new(BenchFields.AirCt, r.SgWeighing is { } a ? Number(a.AirCt) : "");
+        yield return new(BenchFields.WaterCt, r.SgWeighing is { } b ? Number(b.WaterCt) : "");
+        yield return new(BenchFields.WaterC, r.SgWeighing?.WaterC is { } c ? Number(c) : "");
+        yield return new(BenchFields.HeavyLiquids, string.Join("; ", r.HeavyLiquids.Select(h => $"{Number(h.Density)} {h.Result}")));
+        yield return new(BenchFields.IndexAtB, r.DispersionIndices is { } d ? Number(d.NB) : "");
+        yield return new(BenchFields.IndexAtG, r.DispersionIndices is { } g ? Number(g.NG) : "");
+        yield return new(BenchFields.Absorption, r.AbsorptionNm is { } lines ? string.Join(" ", lines.Select(Number)) : "");
+    }
+
+    public static IEnumerable<KeyValuePair<string, string>> Choices(StoneReadings r)
+    {
+        if (r.Refractometer is { OverLimit: true }) yield return new(BenchFields.OverLimit, "yes");
+        foreach (var (field, word) in new[]
+        {
+            (BenchFields.Polariscope, r.Polariscope), (BenchFields.Pleochroism, r.Pleochroism), (BenchFields.Dispersion, r.Dispersion),
+            (BenchFields.ThermalProbe, r.ThermalProbe), (BenchFields.Electrical, r.Electrical), (BenchFields.UvLong, r.UvLong), (BenchFields.UvShort, r.UvShort),
+        })
+            if (word is { Length: > 0 }) yield return new(field, word);
+    }
+}

@@ -1,0 +1,59 @@
+using System.Collections.ObjectModel;
+using Terminal.Gui.App;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+using GemIndex.Cli.TextUi.Main;
+
+namespace GemIndex.Cli.TextUi.CatalogueBrowser;
+
+/// <summary>Search the catalogue by name or colour, or type an index (below 2.5) or an SG; the entry of the selected line shows below.</summary>
+internal sealed class CatalogueBrowserView : Dialog
+{
+    private readonly CatalogueBrowserModel _model;
+    private readonly ObservableCollection<string> _rows = [];
+
+    public CatalogueBrowserView(CatalogueBrowserModel model)
+    {
+        _model = model;
+        Title = "Catalogue (type to search, ↑↓ select, Esc closes)";
+        Width = Dim.Fill();
+        Height = Dim.Fill();
+        var label = new Label { Text = "Search:" };
+        Search = new TextField { X = 8, Width = 24 };
+        Count = new Label { X = Pos.Right(Search) + 2, Width = Dim.Fill() };
+        List = new ListView { Y = 1, Width = Dim.Fill(), Height = Dim.Percent(40) };
+        List.SetSource(_rows);
+        Entry = new WrappedText { Y = Pos.Bottom(List), Width = Dim.Fill(), Height = Dim.Fill() };
+        Search.TextChanged += (_, _) => Fill();
+        List.ValueChanged += (_, _) => ShowEntry();
+        Add(label, Search, Count, List, Entry);
+        Fill();
+    }
+
+    public TextField Search { get; }
+
+    public Label Count { get; }
+
+    public ListView List { get; }
+
+    public WrappedText Entry { get; }
+
+    private void Fill()
+    {
+        _model.Search(Search.Text);
+        _rows.Clear();
+        foreach (var m in _model.Shown) _rows.Add(_model.Line(m));
+        Count.Text = $"{_model.Shown.Count} entries";
+        if (_rows.Count > 0) List.SelectedItem = 0;
+        ShowEntry();
+    }
+
+    private void ShowEntry() =>
+        Entry.Lines = List.SelectedItem is { } i && i < _model.Shown.Count ? [CatalogueBrowserModel.Details(_model.Shown[i])] : [];
+
+    public static void Show(IApplication app, CatalogueBrowserModel model)
+    {
+        using var view = new CatalogueBrowserView(model);
+        app.Run(view);
+    }
+}

@@ -1,0 +1,38 @@
+namespace GemIndex.Cli.TextUi.Help;
+
+/// <summary>The help screen: every key, then the cautions.</summary>
+internal static class HelpText
+{
+    public static IReadOnlyList<(string Key, string Does)> Keys { get; } =
+    [
+        ("F1", "this help"),
+        ("F2 F3 F4 F5", "stone sheet / refractometer / SG and liquids / other tests"),
+        ("F6", "edge plot (two shadow edges against rotation)"),
+        ("F7", "catalogue browser (type a name, an index or an SG)"),
+        ("F8", "stones in the workbook (open, search, new, duplicate, delete; F3 there shows a stone's edit history)"),
+        ("F9, Enter", "on a candidate: its detail: reasons and catalogue entry"),
+        ("Ctrl+N", "new stone"),
+        ("Ctrl+Q", "quit (everything is already saved)"),
+        ("Tab, Shift+Tab", "next / previous field"),
+        ("RI: Enter", "store the step being typed; rotation moves on by 15°"),
+        ("RI: Enter on step", "edit that step; Delete removes it"),
+        ("Choices", "one letter picks the answer shown in brackets; Space or Backspace clears"),
+        ("Mouse", "click a field or a tab; click a choice to cycle it"),
+    ];
+
+    public static IReadOnlyList<string> Cautions { get; } =
+    [
+        "Contact liquids for refractometers (and heavy liquids for SG) are toxic: use little, keep the room aired, wear gloves, never let them touch skin, wash off spills at once.",
+        "Ultraviolet lamps harm eyes and skin: never look into the lamp, use the viewing cabinet or UV-blocking glasses.",
+        "Do not immerse porous, soluble or fragile stones (opal, turquoise, pearl, amber and the like) in water or heavy liquids; the SG screen warns when such a stone is among the top candidates.",
+        "An identification here is an aid to your own judgement, not a certificate. Defer to local rules and licensed practice; refer valuable or doubtful stones to a qualified laboratory.",
+    ];
+
+    public static string Render()
+    {
+        int width = Keys.Max(k => k.Key.Length);
+        return string.Join('\n', [
+            "KEYS", .. Keys.Select(k => $"  {k.Key.PadRight(width)}  {k.Does}"), "",
+            "CAUTIONS", .. Cautions.Select(c => "  * " + c)]);
+    }
+}

@@ -1,0 +1,198 @@
+using GemIndex.Cli.TextUi.Bench;
+using GemIndex.Cli.TextUi.CatalogueBrowser;
+using GemIndex.Cli.TextUi.Help;
+using GemIndex.Cli.TextUi.Plot;
+using GemIndex.Cli.TextUi.Results;
+using GemIndex.Cli.TextUi.Stones;
+using GemIndex.Core.Catalogue;
+using Terminal.Gui.Drawing;
+using Terminal.Gui.Input;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace GemIndex.Cli.TextUi.Main;
+
+/// <summary>
+/// The bench: on the left one page of the form (stone, refractometer, SG, other tests), on the right the live
+/// identification, at the top the pages, at the bottom the keys. Wiring only: the models do the work.
+/// </summary>
+internal sealed class MainWindow : Window
+{
+    public const int FormWidth = 44;
+    private const string GlobalKeys = "F1 help F2-5 pages F6 plot F7 catalogue F8 stones F9 detail ^N new ^Q quit";
+    private readonly BenchSession _session;
+    private readonly IReadOnlyList<Material> _catalogue;
+    private readonly Label _pageBar;
+    private readonly FrameView _left;
+    private readonly Label _keyLine;
+    private bool _filling;
+    private long _cautionShownFor;
+
+    public MainWindow(BenchSession session, IReadOnlyList<Material> catalogue)
+    {
+        _session = session;
+        _catalogue = catalogue;
+        Title = "GemIndex";
+        BorderStyle = LineStyle.None;
+        if (Monochrome.Wanted) Monochrome.Apply(this);
+        Pages = [new StonePage(), new RefractometerPage(), new GravityPage(), new TestsPage()];
+        _pageBar = new Label { Width = Dim.Fill() };
+        _pageBar.MouseEvent += (_, m) =>
+        {
+            if (!m.IsSingleClicked || m.Position is not { } p) return;
+            int page = PageAt(p.X);
+            if (page >= 0) ShowPage(page);
+            m.Handled = true;
+        };
+        _left = new FrameView { Y = 1, Width = FormWidth, Height = Dim.Fill(1) };
+        foreach (BenchPage page in Pages) _left.Add(page);
+        Results = new ResultsView(session.Results) { X = FormWidth, Y = 1, Width = Dim.Fill(), Height = Dim.Fill(1) };
+        _keyLine = new Label { Y = Pos.AnchorEnd(1), Width = Dim.Fill() };
+        Add(_pageBar, _left, Results, _keyLine);
+        Wire();
+        session.Assessed += ShowAssessment;
+        Results.DetailRequested += ShowDetail;
+        KeyDown += OnGlobalKey;
+        ShowPage(1);
+    }
+
+    public IReadOnlyList<BenchPage> Pages { get; }
+
+    public RefractometerPage Refractometer => (RefractometerPage)Pages[1];
+
+    public GravityPage Gravity => (GravityPage)Pages[2];
+
+    public ResultsView Results { get; }
+
+    public int CurrentPage { get; private set; }
+
+    public string KeyLine => _keyLine.Text;
+
+    private static readonly string[] PageNames = ["F2 Stone", "F3 RI", "F4 SG", "F5 Tests"];
+
+    private int PageAt(int x)
+    {
+        int at = 0;
+        for (int i = 0; i < PageNames.Length; i++)
+        {
+            at += PageNames[i].Length + 3;
+            if (x < at) return i;
+        }
+        return -1;
+    }
+
+    public void ShowPage(int index)
+    {
+        CurrentPage = index;
+        for (int i = 0; i < Pages.Count; i++) Pages[i].Visible = i == index;
+        _left.Title = $"{Pages[index].Title}: {Pages[index].Keys}";
+        ShowBars();
+        if (index == 1 && _left.HasFocus is false) Refractometer.Low.SetFocus();
+        else Pages[index].SetFocus();
+    }
+
+    private void ShowBars()
+    {
+        _pageBar.Text = string.Join(" ", PageNames.Select((n, i) => i == CurrentPage ? $"[{n}]" : $" {n} "))
+            + $"  {_session.Form.Text(BenchFields.Reference)}";
+        _keyLine.Text = _session.SaveProblem ?? GlobalKeys;
+    }
+
+    private void Wire()
+    {
+        foreach (BenchPage page in Pages)
+        {
+            foreach (FormField f in page.Fields)
+                f.Edit.TextChanged += (_, _) =>
+                {
+                    if (_filling) return;
+                    _session.Form.SetText(f.Field, f.Edit.Text);
+                    _session.Changed();
+                };
+            foreach (ChoiceField c in page.Choices)
+                c.Picked += picked => { _session.Form.Choose(picked.Choice.Field, picked.Word); _session.Changed(); };
+        }
+        RefractometerPage rf = Refractometer;
+        rf.StoreRequested += (index, step) =>
+        {
+            if (step.Low.Length == 0) return;
+            _session.Form.PutStep(index ?? _session.Form.Steps.Count, step);
+            _session.Changed();
+            rf.ShowSteps(_session.Form.Steps, _session.Results.Latest?.Errors ?? new Dictionary<string, string>());
+            rf.BeginStep(null, null, _session.Form.NextRotation());
+        };
+        rf.EditRequested += i => rf.BeginStep(i, _session.Form.Steps[i], _session.Form.NextRotation());
+        rf.RemoveRequested += i => { _session.Form.RemoveStep(i); _session.Changed(); rf.ShowSteps(_session.Form.Steps, new Dictionary<string, string>()); };
+        Gravity.WaterField.Edit.HasFocusChanged += (_, _) =>
+        {
+            if (!Gravity.WaterField.Edit.HasFocus || _session.Results.ImmersionCaution is not { } caution || _cautionShownFor == _session.Form.StoneId) return;
+            _cautionShownFor = _session.Form.StoneId;
+            App?.Invoke(() => MessageBox.Query(App!, "Do not immerse", caution, "Understood"));
+        };
+    }
+
+    /// <summary>Puts the model's texts into the fields (after a stone is opened), without echoing them back as edits.</summary>
+    public void FillFromModel()
+    {
+        _filling = true;
+        try
+        {
+            foreach (BenchPage page in Pages)
+            {
+                foreach (FormField f in page.Fields) f.Edit.Text = _session.Form.Text(f.Field);
+                foreach (ChoiceField c in page.Choices) c.Show(_session.Form.Choice(c.Choice.Field));
+            }
+            Refractometer.ShowSteps(_session.Form.Steps, new Dictionary<string, string>());
+            Refractometer.BeginStep(null, null, _session.Form.NextRotation());
+        }
+        finally { _filling = false; }
+        ShowPage(CurrentPage);
+    }
+
+    private void ShowAssessment()
+    {
+        BenchAssessment? a = _session.Results.Latest;
+        if (a is null) return;
+        foreach (BenchPage page in Pages) page.ShowErrors(a.Errors);
+        Refractometer.ShowSteps(_session.Form.Steps, a.Errors);
+        Gravity.Result.Text = ResultText.Gravity(a.SpecificGravity);
+        Gravity.Caution.Text = _session.Results.ImmersionCaution is { } c ? "!! " + c : "";
+        Results.Refresh();
+        ShowBars();
+    }
+
+    private void ShowDetail(int index)
+    {
+        if (index >= _session.Results.Candidates.Count) return;
+        TextScreen.Show(App!, "Candidate", CandidateDetail.Render(_session.Results.Candidates[index], index + 1));
+    }
+
+    private void OnGlobalKey(object? sender, Key key)
+    {
+        if (key == Key.F1) TextScreen.Show(App!, "Help", HelpText.Render());
+        else if (key == Key.F2) ShowPage(0);
+        else if (key == Key.F3) ShowPage(1);
+        else if (key == Key.F4) ShowPage(2);
+        else if (key == Key.F5) ShowPage(3);
+        else if (key == Key.F6) EdgePlotView.Show(App!, new EdgePlotModel(_session.Results.Latest?.Readings.Refractometer?.Readings ?? []));
+        else if (key == Key.F7) CatalogueBrowserView.Show(App!, new CatalogueBrowserModel(_catalogue));
+        else if (key == Key.F8) ShowStones();
+        else if (key == Key.F9) ShowDetail(Results.SelectedCandidate);
+        else if (key == Key.N.WithCtrl) { _session.New(); FillFromModel(); ShowPage(0); }
+        else if (key == Key.Q.WithCtrl) App!.RequestStop();
+        else if (key == Key.Esc) { }                       // Esc quits the application by default: keep the bench open
+        else return;
+        key.Handled = true;
+    }
+
+    private void ShowStones()
+    {
+        var model = new StoneListModel(q => _session.WithWorkbook(w => w.List(q)));
+        using var view = new StoneListView(model, id => _session.WithWorkbook(w => w.Duplicate(id).Id), id => _session.WithWorkbook(w => w.Delete(id)),
+            id => _session.WithWorkbook(w => StoneHistoryText.Lines(w.Get(id)?.Reference ?? "", w.History(id))));
+        App!.Run(view);
+        if (view.WantsNew) { _session.New(); FillFromModel(); ShowPage(0); }
+        else if (view.Chosen is { } id) { _session.Open(id); FillFromModel(); }
+        else if (_session.WithWorkbook(w => w.Get(_session.Form.StoneId)) is null) { _session.Start(); FillFromModel(); }  // the open stone was deleted
+    }
+}

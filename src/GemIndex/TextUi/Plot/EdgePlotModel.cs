@@ -1,0 +1,29 @@
+using GemIndex.Data.Batch;
+
+namespace GemIndex.Cli.TextUi.Plot;
+
+/// <summary>The two shadow edges against rotation, and the index window that frames them (with a margin of one reading step).</summary>
+internal sealed class EdgePlotModel(IReadOnlyList<EdgeReadingEntry> steps)
+{
+    /// <summary>Margin above and below the edges, in index units (a few thousandths: the reading precision of a bench refractometer).</summary>
+    public const double Margin = 0.004;
+
+    public IReadOnlyList<(double Rotation, double Index)> Low { get; } = [.. steps.OrderBy(s => s.RotationDeg).Select(s => (s.RotationDeg, s.Low))];
+
+    public IReadOnlyList<(double Rotation, double Index)> High { get; } =
+        [.. steps.Where(s => s.High is not null).OrderBy(s => s.RotationDeg).Select(s => (s.RotationDeg, s.High!.Value))];
+
+    public bool IsEmpty => Low.Count == 0;
+
+    public double Bottom => IsEmpty ? 1.5 : Low.Concat(High).Min(p => p.Index) - Margin;
+
+    public double Top => IsEmpty ? 1.6 : Low.Concat(High).Max(p => p.Index) + Margin;
+
+    /// <summary>Rotation shown: 0–180° unless readings go beyond.</summary>
+    public double RightEdge => IsEmpty ? 180 : Math.Max(180, Low.Max(p => p.Rotation));
+
+    public double LeftEdge => IsEmpty ? 0 : Math.Min(0, Low.Min(p => p.Rotation));
+
+    /// <summary>A label increment giving about <paramref name="rows"/>/2 labels between bottom and top.</summary>
+    public double IndexStep(int rows) => Math.Max(0.0005, (Top - Bottom) / Math.Max(2, rows));
+}

@@ -1,0 +1,66 @@
+using System.Collections.ObjectModel;
+using Terminal.Gui.App;
+using Terminal.Gui.Input;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace GemIndex.Cli.TextUi.Stones;
+
+/// <summary>The workbook's stones: search, Enter opens, Ctrl+N new, Ctrl+D duplicate, Delete deletes (after asking).</summary>
+internal sealed class StoneListView : Dialog
+{
+    private readonly StoneListModel _model;
+    private readonly ObservableCollection<string> _rows = [];
+
+    public StoneListView(StoneListModel model, Func<long, long> duplicate, Func<long, bool> delete, Func<long, IReadOnlyList<string>> history)
+    {
+        _model = model;
+        Title = "Stones: Enter open ^N new ^D duplicate F3 history Del delete";
+        Width = Dim.Fill();
+        Height = Dim.Fill();
+        var label = new Label { Text = "Search:" };
+        Search = new TextField { X = 8, Width = 24 };
+        List = new ListView { Y = 1, Width = Dim.Fill(), Height = Dim.Fill() };
+        List.SetSource(_rows);
+        Search.TextChanged += (_, _) => { _model.Search(Search.Text); Fill(); };
+        EventHandler<Key> keys = (sender, key) =>
+        {
+            long? id = Selected;
+            if (key == Key.Enter && id is not null) { Chosen = id; App!.RequestStop(); }
+            else if (key == Key.N.WithCtrl) { WantsNew = true; App!.RequestStop(); }
+            else if (key == Key.D.WithCtrl && id is { } d) { duplicate(d); Reload(); }
+            else if (key == Key.F3 && id is { } h) Main.TextScreen.Show(App!, "Edit history", string.Join('\n', history(h)));
+            else if (key == Key.Delete && sender == List && id is { } x && MessageBox.Query(App!, "Delete stone",
+                         $"Delete '{_model.Shown[List.SelectedItem!.Value].Reference}' and its history?", "Keep", "Delete") == 1) { delete(x); Reload(); }
+            else return;
+            key.Handled = true;
+        };
+        List.KeyDown += keys;      // on the focused views: Enter would otherwise close the dialog first
+        Search.KeyDown += keys;
+        Add(label, Search, List);
+        Fill();
+    }
+
+    public TextField Search { get; }
+
+    public ListView List { get; }
+
+    public long? Chosen { get; private set; }
+
+    public bool WantsNew { get; private set; }
+
+    private long? Selected => List.SelectedItem is { } i && i < _model.Shown.Count ? _model.Shown[i].Id : null;
+
+    private void Reload()
+    {
+        _model.Refresh();
+        Fill();
+    }
+
+    private void Fill()
+    {
+        _rows.Clear();
+        foreach (var s in _model.Shown) _rows.Add(StoneListModel.Line(s));
+        if (_rows.Count > 0) List.SelectedItem = 0;
+    }
+}

@@ -1,0 +1,185 @@
+using GemIndex.Data.Batch;
+using GemIndex.Data.Workbook;
+using Microsoft.Data.Sqlite;
+
+namespace GemIndex.Data.Tests.Workbook;
+
+public class StoneWorkbookTests
+{
+    private static StoneSheet Quartz(string reference = "lot 7 / 1") => new()
+    {
+        Reference = reference, WeightCarats = 2.31, Dimensions = "9.1 x 7.0 x 5.2 mm", Shape = "oval", CuttingStyle = "mixed cut",
+        Transparency = "transparent", Notes = "two-phase inclusion near girdle",
+        Readings = new StoneReadings
+        {
+            Id = reference, Colour = "pale yellow", Sg = 2.65,
+            Refractometer = new RefractometerReadings { Readings = [new EdgeReadingEntry(0, 1.544, 1.553), new EdgeReadingEntry(90, 1.544, 1.549)] },
+        },
+    };
+
+    [Fact]
+    public void A_created_stone_reads_back_intact_after_reopening_the_file()
+    {
+        using var dir = new TempDirectory();
+        long id;
+        using (var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock())) id = wb.Create(Quartz()).Id;
+        using var again = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());
+        StoneSheet s = again.Get(id)!;
+        Assert.Equal("lot 7 / 1", s.Reference);
+        Assert.Equal(2.31, s.WeightCarats);
+        Assert.Equal("mixed cut", s.CuttingStyle);
+        Assert.Equal("pale yellow", s.Readings.Colour);
+        Assert.Equal(2.65, s.Readings.Sg);
+        Assert.Equal(new EdgeReadingEntry(90, 1.544, 1.549), s.Readings.Refractometer!.Readings[1]);
+    }
+
+    [Fact]
+    public void The_default_path_follows_XDG_DATA_HOME_when_it_is_absolute() =>
+        Assert.EndsWith(Path.Combine("gemindex", "workbook.db"), WorkbookLocation.Default());
+
+    [Fact]
+    public void Saving_records_each_changed_field_with_its_time_before_and_after()
+    {
+        using var dir = new TempDirectory();
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());
+        StoneSheet s = wb.Create(Quartz());
+        wb.Save(s with { Shape = "cushion", WeightCarats = 2.30 });
+        IReadOnlyList<StoneEdit> history = wb.History(s.Id);
+        Assert.Equal(["created", "weight_ct", "shape"], history.Select(e => e.Field));
+        Assert.Equal(("oval", "cushion"), (history[2].Before, history[2].After));
+        Assert.Equal(("2.31", "2.3"), (history[1].Before, history[1].After));
+        Assert.True(history[1].At > history[0].At);
+        Assert.Equal(history[1].At, wb.Get(s.Id)!.Modified);
+    }
+
+    [Fact]
+    public void Keystrokes_to_one_field_in_quick_succession_make_one_history_entry()
+    {
+        using var dir = new TempDirectory();
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());   // one minute per reading: inside the window
+        StoneSheet s = wb.Create(Quartz() with { Notes = "" });
+        foreach (string typed in new[] { "c", "cl", "cle", "clean" }) s = wb.Save(s with { Notes = typed });
+        wb.Save(s with { Shape = "round" });
+        IReadOnlyList<StoneEdit> history = wb.History(s.Id);
+        Assert.Equal(["created", "notes", "shape"], history.Select(e => e.Field));
+        Assert.Equal(("", "clean"), (history[1].Before, history[1].After));
+    }
+
+    [Fact]
+    public void Saving_without_changes_adds_no_history()
+    {
+        using var dir = new TempDirectory();
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());
+        StoneSheet s = wb.Create(Quartz());
+        wb.Save(s);
+        Assert.Single(wb.History(s.Id));
+    }
+
+    [Fact]
+    public void Search_finds_stones_by_reference_colour_or_notes_in_any_case()
+    {
+        using var dir = new TempDirectory();
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());
+        wb.Create(Quartz("lot 7 / 1"));
+        wb.Create(Quartz("brooch centre") with { Notes = "chipped culet", Readings = new StoneReadings { Colour = "deep red" } });
+        Assert.Equal(2, wb.List().Count);
+        Assert.Equal(["brooch centre"], wb.List("RED").Select(s => s.Reference));
+        Assert.Equal(["brooch centre"], wb.List("culet").Select(s => s.Reference));
+        Assert.Equal(["lot 7 / 1"], wb.List("LOT 7").Select(s => s.Reference));
+        Assert.Empty(wb.List("emerald"));
+    }
+
+    [Fact]
+    public void Duplicate_copies_the_readings_under_a_new_reference_and_delete_removes_only_that_stone()
+    {
+        using var dir = new TempDirectory();
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());
+        StoneSheet s = wb.Create(Quartz());
+        StoneSheet copy = wb.Duplicate(s.Id);
+        Assert.NotEqual(s.Id, copy.Id);
+        Assert.Equal("lot 7 / 1 (copy)", copy.Reference);
+        Assert.Equal(s.Readings.Refractometer!.Readings, copy.Readings.Refractometer!.Readings);
+        Assert.True(wb.Delete(s.Id));
+        Assert.Null(wb.Get(s.Id));
+        Assert.Empty(wb.History(s.Id));
+        Assert.NotNull(wb.Get(copy.Id));
+        Assert.False(wb.Delete(s.Id));
+    }
+
+    [Fact]
+    public void Settings_are_kept_between_openings()
+    {
+        using var dir = new TempDirectory();
+        using (var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock())) wb.SetSetting("calibration_offset", "0.002");
+        using var again = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());
+        Assert.Equal("0.002", again.Setting("calibration_offset"));
+        Assert.Null(again.Setting("light_nm"));
+    }
+
+    [Fact]
+    public void A_text_file_is_refused_with_a_clear_message_and_left_untouched()
+    {
+        using var dir = new TempDirectory();
+        string path = dir.File("notes.db");
+        File.WriteAllText(path, "shopping list: loupe, tweezers, cloth\n");
+        byte[] before = File.ReadAllBytes(path);
+        var e = Assert.Throws<WorkbookException>(() => StoneWorkbook.Open(path, new SteppingClock()));
+        Assert.Contains("notes.db", e.Message);
+        Assert.Contains("not a database", e.Message);
+        Assert.Equal(before, File.ReadAllBytes(path));
+    }
+
+    [Fact]
+    public void Another_applications_sqlite_file_is_refused_and_left_untouched()
+    {
+        using var dir = new TempDirectory();
+        string path = dir.File("other.db");
+        using (var other = new SqliteConnection($"Data Source={path};Pooling=False"))
+        {
+            other.Open();
+            using var cmd = other.CreateCommand();
+            cmd.CommandText = "CREATE TABLE invoice(id INTEGER PRIMARY KEY, total REAL); INSERT INTO invoice(total) VALUES (12.5);";
+            cmd.ExecuteNonQuery();
+        }
+        byte[] before = File.ReadAllBytes(path);
+        var e = Assert.Throws<WorkbookException>(() => StoneWorkbook.Open(path, new SteppingClock()));
+        Assert.Contains("not a GemIndex workbook", e.Message);
+        Assert.Equal(before, File.ReadAllBytes(path));
+    }
+
+    [Fact]
+    public void A_workbook_from_a_newer_schema_is_refused_and_left_untouched()
+    {
+        using var dir = new TempDirectory();
+        string path = dir.File("newer.db");
+        using (StoneWorkbook.Open(path, new SteppingClock())) { }
+        using (var raw = new SqliteConnection($"Data Source={path};Pooling=False"))
+        {
+            raw.Open();
+            using var cmd = raw.CreateCommand();
+            cmd.CommandText = $"PRAGMA user_version = {StoneWorkbook.SchemaVersion + 1}";
+            cmd.ExecuteNonQuery();
+        }
+        byte[] before = File.ReadAllBytes(path);
+        var e = Assert.Throws<WorkbookException>(() => StoneWorkbook.Open(path, new SteppingClock()));
+        Assert.Contains("newer GemIndex", e.Message);
+        Assert.Contains($"schema {StoneWorkbook.SchemaVersion + 1}", e.Message);
+        Assert.Equal(before, File.ReadAllBytes(path));
+    }
+
+    [Fact]
+    public void Each_save_is_on_disk_when_the_call_returns()
+    {
+        using var dir = new TempDirectory();
+        string path = dir.File("wb.db");
+        using var wb = StoneWorkbook.Open(path, new SteppingClock());
+        StoneSheet s = wb.Create(Quartz());
+        wb.Save(s with { Notes = "typed just before the terminal closed" });
+        // A second, independent connection sees the committed change while the first is still open.
+        using var reader = new SqliteConnection($"Data Source={path};Pooling=False;Mode=ReadOnly");
+        reader.Open();
+        using var cmd = reader.CreateCommand();
+        cmd.CommandText = "SELECT notes FROM stone WHERE id = " + s.Id;
+        Assert.Equal("typed just before the terminal closed", cmd.ExecuteScalar());
+    }
+}

@@ -1,0 +1,156 @@
+using GemIndex.Cli.TextUi.Bench;
+using GemIndex.Cli.TextUi.Results;
+using GemIndex.Core.Identification;
+
+namespace GemIndex.Tests.TextUi.Bench;
+
+public class BenchAssessorTests
+{
+    private static readonly BenchAssessor Assessor = new(new Identifier(TestMaterials.All));
+
+    private static BenchModel QuartzForm()
+    {
+        var form = new BenchModel();
+        // An invented quartz-like series: ω constant at 1.544, ε reaching 1.553 (values from memory for quartz).
+        foreach (var (rotation, high) in new[] { ("0", "1.553"), ("45", "1.551"), ("90", "1.548"), ("135", "1.551"), ("180", "1.553") })
+            form.PutStep(form.Steps.Count, new StepText(rotation, "1.544", high));
+        form.SetText(BenchFields.Sg, "2.65");
+        return form;
+    }
+
+    [Fact]
+    public void Quartz_readings_put_quartz_first_and_show_the_indices_and_birefringence()
+    {
+        BenchAssessment a = Assessor.Assess(QuartzForm().Snapshot());
+        Assert.Empty(a.Errors);
+        Assert.Equal("quartz", a.Result!.Candidates[0].Material.Name);
+        Assert.False(a.Result.NoGoodMatch);
+        IReadOnlyList<string> derived = ResultText.Derived(a);
+        Assert.Contains("n 1.544 – 1.553", derived);
+        Assert.Contains("birefringence 0.009", derived);
+        Assert.Contains("SG 2.650 ± 0.010", derived);
+    }
+
+    [Fact]
+    public void A_step_that_does_not_parse_is_marked_at_its_row_and_the_rest_still_ranks()
+    {
+        BenchModel form = QuartzForm();
+        form.PutStep(1, new StepText("45", "1.5x", "1.551"));
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.Equal("low: '1.5x' is not a number", a.Errors[BenchFields.Step(1)]);
+        Assert.Single(a.Errors);
+        Assert.Equal("quartz", a.Result!.Candidates[0].Material.Name);
+        Assert.Equal(4, a.Readings.Refractometer!.Readings.Count);
+    }
+
+    [Fact]
+    public void A_high_edge_below_the_low_edge_is_refused_at_that_step_with_Cores_reason()
+    {
+        BenchModel form = QuartzForm();
+        form.PutStep(2, new StepText("90", "1.548", "1.544"));
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.Contains("not below the low edge", a.Errors[BenchFields.Step(2)]);
+        Assert.NotNull(a.Result);
+    }
+
+    [Fact]
+    public void A_weight_in_water_not_below_the_weight_in_air_is_marked_at_the_water_field()
+    {
+        BenchModel form = QuartzForm();
+        form.SetText(BenchFields.Sg, "");
+        form.SetText(BenchFields.AirCt, "3.12");
+        form.SetText(BenchFields.WaterCt, "3.50");
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.True(a.Errors.ContainsKey(BenchFields.WaterCt), string.Join("; ", a.Errors));
+        Assert.Null(a.SpecificGravity);
+        Assert.Equal("quartz", a.Result!.Candidates[0].Material.Name);   // the refractometer still ranks
+    }
+
+    [Fact]
+    public void Hydrostatic_weights_give_an_SG_with_its_uncertainty()
+    {
+        var form = new BenchModel();
+        form.SetText(BenchFields.AirCt, "3.120");
+        form.SetText(BenchFields.WaterCt, "1.943");
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        // 3.120 / (3.120 − 1.943) = 2.651 before the water-density correction (worked by hand); the correction at 20 °C is −0.2 %.
+        Assert.InRange(a.SpecificGravity!.Value.Value, 2.640, 2.652);
+        Assert.InRange(a.SpecificGravity.Value.StandardUncertainty, 0.001, 0.02);
+    }
+
+    [Fact]
+    public void A_comma_as_decimal_mark_is_refused_with_the_reason_at_the_field()
+    {
+        var form = new BenchModel();
+        form.SetText(BenchFields.Sg, "2,65");
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.Contains("comma", a.Errors[BenchFields.Sg]);
+        Assert.Null(a.Result);
+    }
+
+    [Fact]
+    public void A_porous_candidate_near_the_top_raises_the_immersion_caution()
+    {
+        var form = new BenchModel();
+        form.SetText(BenchFields.Spot, "1.45");
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.Contains("opal", a.DoNotImmerse);
+        var results = new ResultsModel();
+        results.Accept(a);
+        Assert.StartsWith("Do not immerse: opal", results.ImmersionCaution);
+        var quartz = new ResultsModel();
+        quartz.Accept(Assessor.Assess(QuartzForm().Snapshot()));
+        Assert.Null(quartz.ImmersionCaution);
+    }
+
+    [Fact]
+    public void Readings_nothing_in_the_catalogue_fits_give_the_no_good_match_state()
+    {
+        var form = new BenchModel();
+        form.PutStep(0, new StepText("0", "2.05", ""));
+        form.SetText(BenchFields.LiquidLimit, "2.1");
+        form.SetText(BenchFields.Sg, "7.0");
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.True(a.Result!.NoGoodMatch);
+        var results = new ResultsModel();
+        results.Accept(a);
+        Assert.StartsWith("!! NO GOOD MATCH", results.Headline);
+    }
+
+    [Fact]
+    public void An_edge_above_the_liquid_limit_is_marked_at_its_step()
+    {
+        var form = new BenchModel();
+        form.PutStep(0, new StepText("0", "1.544", "1.553"));
+        form.PutStep(1, new StepText("15", "1.544", "1.85"));
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.Contains("liquid limit", a.Errors[BenchFields.Step(1)]);
+        Assert.False(a.Errors.ContainsKey(BenchFields.Step(0)));
+        Assert.NotNull(a.Result);
+    }
+
+    [Fact]
+    public void A_calibration_offset_outside_its_range_is_marked_and_ignored()
+    {
+        BenchModel form = QuartzForm();
+        form.SetText(BenchFields.CalibrationOffset, "0.2");
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.Contains("calibration offset", a.Errors[BenchFields.CalibrationOffset]);
+        Assert.Equal("quartz", a.Result!.Candidates[0].Material.Name);
+    }
+
+    [Fact]
+    public void Measured_dispersion_indices_go_into_the_readings_and_a_reversed_pair_is_marked()
+    {
+        BenchModel form = QuartzForm();
+        form.SetText(BenchFields.IndexAtB, "1.541");
+        form.SetText(BenchFields.IndexAtG, "1.554");
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.Equal((1.541, 1.554), a.Readings.DispersionIndices);
+        Assert.Empty(a.Errors);
+        form.SetText(BenchFields.IndexAtG, "1.530");   // nG below nB by more than Core allows
+        BenchAssessment reversed = Assessor.Assess(form.Snapshot());
+        Assert.True(reversed.Errors.ContainsKey(BenchFields.IndexAtG), string.Join("; ", reversed.Errors));
+        Assert.Equal("quartz", reversed.Result!.Candidates[0].Material.Name);
+    }
+}

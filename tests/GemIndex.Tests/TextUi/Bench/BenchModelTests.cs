@@ -1,0 +1,85 @@
+using GemIndex.Cli.TextUi.Bench;
+using GemIndex.Data.Batch;
+using GemIndex.Data.Workbook;
+
+namespace GemIndex.Tests.TextUi.Bench;
+
+public class BenchModelTests
+{
+    [Fact]
+    public void The_next_rotation_moves_on_by_the_step_from_the_last_one()
+    {
+        var form = new BenchModel();
+        Assert.Equal("0", form.NextRotation());
+        form.PutStep(0, new StepText("0", "1.544", "1.553"));
+        form.PutStep(1, new StepText("30", "1.544", "1.552"));
+        Assert.Equal("45", form.NextRotation());
+    }
+
+    [Fact]
+    public void Every_change_bumps_the_version_and_a_repeat_does_not()
+    {
+        var form = new BenchModel();
+        int v = form.Version;
+        form.SetText(BenchFields.Sg, "2.65");
+        form.SetText(BenchFields.Sg, "2.65");
+        form.Choose(BenchFields.Polariscope, "doubly_refractive");
+        Assert.Equal(v + 2, form.Version);
+    }
+
+    [Fact]
+    public void A_loaded_stone_fills_the_form_and_goes_back_unchanged()
+    {
+        var stone = new StoneSheet
+        {
+            Id = 4, Reference = "lot 2", WeightCarats = 1.05, Shape = "cushion", Notes = "loose",
+            Readings = new StoneReadings
+            {
+                Id = "lot 2", Colour = "red", Sg = 3.6, Polariscope = "singly_refractive", UvLong = "moderate", AbsorptionNm = [685, 656],
+                Refractometer = new RefractometerReadings { Readings = [new EdgeReadingEntry(0, 1.718, null)], LiquidLimit = 1.81 },
+                HeavyLiquids = [new HeavyLiquidReading(3.32, "floats")],
+            },
+        };
+        var form = new BenchModel();
+        form.Load(stone);
+        Assert.Equal("red", form.Text(BenchFields.Colour));
+        Assert.Equal("685 656", form.Text(BenchFields.Absorption));
+        Assert.Equal("3.32 floats", form.Text(BenchFields.HeavyLiquids));
+        Assert.Equal("singly_refractive", form.Choice(BenchFields.Polariscope));
+        var assessor = new BenchAssessor(null);
+        BenchAssessment a = assessor.Assess(form.Snapshot());
+        Assert.Empty(a.Errors);
+        StoneSheet back = BenchModel.ToStoneSheet(form.Snapshot(), a.Readings);
+        Assert.Equal(StoneReadingsJson.Write(stone.Readings), StoneReadingsJson.Write(back.Readings));
+        Assert.Equal((4L, "lot 2", 1.05, "cushion", "loose"), (back.Id, back.Reference, back.WeightCarats!.Value, back.Shape, back.Notes));
+    }
+
+    [Fact]
+    public void A_draft_keeps_text_that_does_not_parse_yet()
+    {
+        var form = new BenchModel();
+        form.SetText(BenchFields.AirCt, "3.1");
+        form.SetText(BenchFields.WaterC, "2x");
+        form.PutStep(0, new StepText("0", "1.5x", ""));
+        form.Choose(BenchFields.OverLimit, "yes");
+        string draft = BenchDraft.Write(form.Snapshot());
+        var again = new BenchModel();
+        Assert.True(again.ApplyDraft(draft));
+        Assert.Equal("3.1", again.Text(BenchFields.AirCt));
+        Assert.Equal("2x", again.Text(BenchFields.WaterC));
+        Assert.Equal(new StepText("0", "1.5x", ""), again.Steps[0]);
+        Assert.Equal("yes", again.Choice(BenchFields.OverLimit));
+        Assert.False(again.ApplyDraft("not json"));
+    }
+
+    [Fact]
+    public void A_choice_takes_one_letter_and_refuses_others()
+    {
+        BenchChoice polariscope = BenchChoice.For(BenchFields.Polariscope);
+        Assert.Equal("doubly_refractive", polariscope.WordFor('d'));
+        Assert.Equal("singly_refractive", polariscope.WordFor('S'));
+        Assert.Null(polariscope.WordFor('x'));
+        Assert.Equal("s/d/a/n", polariscope.KeyHint);
+        Assert.All(BenchChoice.All, c => Assert.Equal(c.Options.Count, c.Options.Select(o => o.Key).Distinct().Count()));
+    }
+}

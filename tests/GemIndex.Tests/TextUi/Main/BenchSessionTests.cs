@@ -1,0 +1,71 @@
+using GemIndex.Cli.TextUi.Bench;
+using GemIndex.Cli.TextUi.Main;
+using GemIndex.Core.Identification;
+using GemIndex.Data.Workbook;
+
+namespace GemIndex.Tests.TextUi.Main;
+
+public class BenchSessionTests
+{
+    private static string TempFile() => Path.Combine(Path.GetTempPath(), "gemindex-tests-" + Guid.NewGuid().ToString("N") + ".db");
+
+    [Fact]
+    public async Task Every_change_is_saved_and_survives_reopening_including_text_that_does_not_parse()
+    {
+        string path = TempFile();
+        try
+        {
+            long id;
+            using (var wb = StoneWorkbook.Open(path, TimeProvider.System))
+            {
+                var session = new BenchSession(wb, new BenchAssessor(new Identifier(TestMaterials.All)), a => a());
+                session.Start();
+                id = session.Form.StoneId;
+                session.Form.SetText(BenchFields.Reference, "ring 3");
+                session.Form.PutStep(0, new StepText("0", "1.544", "1.553"));
+                session.Form.SetText(BenchFields.Sg, "2.65");
+                session.Form.SetText(BenchFields.WaterC, "2x");
+                await session.Changed();
+                Assert.Equal("quartz", session.Results.Candidates[0].Material.Name);
+                Assert.Null(session.SaveProblem);
+            }
+            using (var wb = StoneWorkbook.Open(path, TimeProvider.System))
+            {
+                StoneSheet stored = wb.Get(id)!;
+                Assert.Equal("ring 3", stored.Reference);
+                Assert.Equal(2.65, stored.Readings.Sg);
+                Assert.Equal(1.553, stored.Readings.Refractometer!.Readings[0].High);
+                var session = new BenchSession(wb, new BenchAssessor(null), a => a());
+                session.Start();
+                Assert.Equal(id, session.Form.StoneId);
+                Assert.Equal("2x", session.Form.Text(BenchFields.WaterC));
+            }
+        }
+        finally
+        {
+            foreach (string f in new[] { path, path + "-wal", path + "-shm" }) File.Delete(f);
+        }
+    }
+
+    [Fact]
+    public async Task An_older_snapshot_never_overwrites_a_newer_save()
+    {
+        string path = TempFile();
+        try
+        {
+            using var wb = StoneWorkbook.Open(path, TimeProvider.System);
+            var session = new BenchSession(wb, new BenchAssessor(null), a => a());
+            session.Start();
+            session.Form.SetText(BenchFields.Notes, "first");
+            await session.Changed();
+            session.Form.SetText(BenchFields.Notes, "second");
+            await session.Changed();
+            await session.Changed();   // same version again: skipped
+            Assert.Equal("second", wb.Get(session.Form.StoneId)!.Notes);
+        }
+        finally
+        {
+            foreach (string f in new[] { path, path + "-wal", path + "-shm" }) File.Delete(f);
+        }
+    }
+}

@@ -1,0 +1,136 @@
+using System.Collections.Concurrent;
+using GemIndex.Cli.TextUi.Bench;
+using GemIndex.Cli.TextUi.Main;
+using GemIndex.Core.Identification;
+using GemIndex.Data.Workbook;
+using Terminal.Gui.App;
+using Terminal.Gui.Input;
+using Terminal.Gui.Testing;
+
+namespace GemIndex.Tests.TextUi.Main;
+
+/// <summary>The bench drawn headless. One class, so the Terminal.Gui instances never run in parallel.</summary>
+public sealed class MainWindowTests : IDisposable
+{
+    private readonly string _path = Path.Combine(Path.GetTempPath(), "gemindex-tests-" + Guid.NewGuid().ToString("N") + ".db");
+    private readonly ConcurrentQueue<Action> _uiQueue = new();
+    private readonly StoneWorkbook _workbook;
+    private readonly BenchSession _session;
+
+    public MainWindowTests()
+    {
+        _workbook = StoneWorkbook.Open(_path, TimeProvider.System);
+        _session = new BenchSession(_workbook, new BenchAssessor(new Identifier(TestMaterials.All)), _uiQueue.Enqueue);
+    }
+
+    public void Dispose()
+    {
+        _session.Flush();
+        _workbook.Dispose();
+        foreach (string f in new[] { _path, _path + "-wal", _path + "-shm" }) File.Delete(f);
+    }
+
+    /// <summary>Waits for the background assessments, then runs their UI updates here (the test is the UI thread).</summary>
+    private void Settle()
+    {
+        Assert.True(_session.Flush());
+        while (_uiQueue.TryDequeue(out Action? a)) a();
+    }
+
+    private static void Type(IApplication app, string text)
+    {
+        foreach (char c in text) app.InjectKey(new Key(c));
+    }
+
+    [Theory]
+    [InlineData(80, 24)]
+    [InlineData(100, 30)]
+    public void Typing_quartz_readings_shows_the_step_grid_and_ranks_quartz_first(int columns, int rows)
+    {
+        using IApplication app = Headless.Start(columns, rows);
+        using var window = new MainWindow(_session, TestMaterials.All);
+        _session.Start();
+        window.FillFromModel();
+        SessionToken token = app.Begin(window)!;
+        window.ShowPage(1);
+        window.Refractometer.Low.SetFocus();
+        Type(app, "1.544");
+        app.InjectKey(Key.Tab);
+        Type(app, "1.553");
+        app.InjectKey(Key.Enter);
+        app.LayoutAndDraw();
+        Assert.Contains("0°  1.544    1.553", app.Driver!.ToString()!);
+        app.InjectKey(Key.F4);
+        Type(app, "2.65");
+        Settle();
+        app.LayoutAndDraw();
+        string screen = app.Driver!.ToString()!;
+        Assert.Contains("[F4 SG]", screen);
+        Assert.Contains("SG 2.650 ± 0.010", screen);
+        Assert.Contains("1 quartz", screen);
+        Assert.Contains("F1 help", screen);
+        Assert.Equal("15", window.Refractometer.Rotation.Text);
+        app.End(token);
+    }
+
+    [Fact]
+    public void A_bad_entry_is_marked_at_its_field_and_the_candidates_stay()
+    {
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(_session, TestMaterials.All);
+        _session.Start();
+        window.FillFromModel();
+        SessionToken token = app.Begin(window)!;
+        window.ShowPage(2);
+        Type(app, "2.65");
+        app.InjectKey(Key.Tab);             // weight in air
+        app.InjectKey(Key.Tab);             // weight in water
+        app.InjectKey(Key.Tab);             // water temperature
+        Type(app, "2x");
+        Settle();
+        app.LayoutAndDraw();
+        string screen = app.Driver!.ToString()!;
+        Assert.Contains("! '2x' is not a number", screen);
+        Assert.Contains("SG 2.650 ± 0.010", screen);
+        Assert.Equal("2x", _session.Form.Text(BenchFields.WaterC));
+        app.End(token);
+    }
+
+    [Fact]
+    public void A_mouse_click_on_the_page_bar_changes_page_and_a_click_on_a_choice_cycles_it()
+    {
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(_session, TestMaterials.All);
+        _session.Start();
+        window.FillFromModel();
+        SessionToken token = app.Begin(window)!;
+        app.LayoutAndDraw();
+        app.InjectSequence(InputInjectionExtensions.LeftButtonClick(new System.Drawing.Point(33, 0)));   // " F5 Tests "
+        Assert.Equal(3, window.CurrentPage);
+        app.LayoutAndDraw();
+        ChoiceField polariscope = window.Pages[3].Choices[0];
+        System.Drawing.Point at = polariscope.ViewportToScreen(new System.Drawing.Point(2, 0));
+        app.InjectSequence(InputInjectionExtensions.LeftButtonClick(at));
+        Settle();
+        Assert.Equal("singly_refractive", _session.Form.Choice(BenchFields.Polariscope));
+        app.End(token);
+    }
+
+    [Fact]
+    public void A_choice_is_picked_with_one_letter()
+    {
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(_session, TestMaterials.All);
+        _session.Start();
+        window.FillFromModel();
+        SessionToken token = app.Begin(window)!;
+        window.ShowPage(3);
+        window.Pages[3].Choices[0].SetFocus();
+        app.InjectKey(new Key('d'));
+        Settle();
+        app.LayoutAndDraw();
+        Assert.Equal("doubly_refractive", _session.Form.Choice(BenchFields.Polariscope));
+        Assert.Contains("[doubly refractive]", app.Driver!.ToString()!);
+        app.End(token);
+    }
+}
