@@ -6,6 +6,9 @@ public sealed record NextTestAdvice
     /// <summary>The test, as named in the batch format ("sg", "polariscope", "refractometer", …).</summary>
     public required string Test { get; init; }
 
+    /// <summary>The test in plain words ("hand spectroscope (absorption lines)").</summary>
+    public string Description => BenchTestNames.Describe(Test);
+
     /// <summary>Expected information gain over the current candidates, bits.</summary>
     public required double GainBits { get; init; }
 

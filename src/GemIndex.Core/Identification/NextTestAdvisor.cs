@@ -8,7 +8,8 @@ namespace GemIndex.Core.Identification;
 /// <summary>
 /// Picks the test not yet done whose outcome is expected to tell the leading candidates apart best: the mutual
 /// information I(material; outcome) = Σ_m Σ_o π(m) P(o|m) log₂(P(o|m)/P(o)) over the current posterior π, which is
-/// the expected drop in the posterior's entropy. Continuous readings are binned at about their precision.
+/// the expected drop in the posterior's entropy. Continuous readings are binned at about their precision. Weighing in
+/// water is not suggested while a porous or fragile material is among the leading candidates.
 /// </summary>
 public static class NextTestAdvisor
 {
@@ -24,7 +25,9 @@ public static class NextTestAdvisor
         double total = candidates.Sum(c => c.Probability);
         var weighted = candidates.Select(c => (c.Material, P: c.Probability / total)).ToList();
         (string Test, double Gain)? best = null;
-        foreach (var (test, outcomes) in TestsNotDone(sheet))
+        // Never suggest weighing in water while a porous or fragile material is a serious candidate.
+        bool immersionUnsafe = weighted.Any(c => c.P >= BenchWarnings.Relevant && c.Material.DoNotImmerse);
+        foreach (var (test, outcomes) in TestsNotDone(sheet, immersionUnsafe))
         {
             double gain = MutualInformation(weighted, outcomes);
             if (best is null || gain > best.Value.Gain + 1e-9) best = (test, gain);
@@ -40,10 +43,10 @@ public static class NextTestAdvisor
         };
     }
 
-    private static IEnumerable<(string, Func<Material, IEnumerable<(long, double)>>)> TestsNotDone(BenchSheet s)
+    private static IEnumerable<(string, Func<Material, IEnumerable<(long, double)>>)> TestsNotDone(BenchSheet s, bool immersionUnsafe)
     {
         if (s.Refractometer is null) yield return ("refractometer", Refractometer);
-        if (s.SpecificGravity is null) yield return ("sg", SpecificGravity);
+        if (s.SpecificGravity is null && s.HeavyLiquids.Count == 0 && !immersionUnsafe) yield return ("sg", SpecificGravity);
         if (s.Polariscope is null) yield return ("polariscope", Polariscope);
         if (s.Pleochroism is null) yield return ("pleochroism", Pleochroism);
         if (s.Dispersion is null) yield return ("dispersion", Dispersion);

@@ -25,7 +25,7 @@ internal static class IdentificationText
         o.WriteLine($"Not in the catalogue: {Percent(result.NotInCatalogue)}");
         if (result.NextTest is { } next)
         {
-            o.WriteLine($"Next test: {next.Test} (expected gain {next.GainBits.ToString("0.00", CultureInfo.InvariantCulture)} bits)");
+            o.WriteLine($"Next test: {next.Description} (expected gain {next.GainBits.ToString("0.00", CultureInfo.InvariantCulture)} bits)");
             foreach (string e in next.Expectations) o.WriteLine($"  {e}");
         }
         foreach (string w in result.Warnings) o.WriteLine($"Warning: {w}");

@@ -27,6 +27,6 @@ internal static class ReportDerived
         $"{i.Character}, sign {i.Sign} (weight {ReportNumbers.Percent(i.Weight)}): {i.Description}";
 
     public static string NextTestLine(StoneReport report) => report.NextTest is { } n
-        ? $"{StoneReport.Word(n.Test)}: expected gain {ReportNumbers.Fixed(n.GainBits, "0.00")} bits; separates {string.Join(", ", n.Separates)}."
+        ? $"{n.Description}: expected gain {ReportNumbers.Fixed(n.GainBits, "0.00")} bits; separates {string.Join(", ", n.Separates)}."
         : "None suggested: no remaining test would separate the candidates.";
 }

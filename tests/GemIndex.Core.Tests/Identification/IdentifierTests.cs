@@ -141,4 +141,17 @@ public class IdentifierTests
         var shift = RefractometerEvidence.WavelengthShift(Catalogue[4], 486.1, out _);
         Assert.Equal(-0.0184, shift, 0.0005);
     }
+
+    [Fact]
+    public void Weighing_in_water_is_never_suggested_while_a_porous_material_leads()
+    {
+        // Spot 1.45: opal (porous) leads; SG would separate it but must not be suggested.
+        var sheet = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.45) };
+        var next = Engine.Identify(sheet).NextTest;
+        Assert.NotEqual("sg", next?.Test);
+    }
+
+    [Fact]
+    public void The_next_test_is_named_in_plain_words() =>
+        Assert.Equal("hand spectroscope (absorption lines)", BenchTestNames.Describe("absorption_nm"));
 }

@@ -58,11 +58,11 @@ internal sealed class BenchModel
         Version++;
     }
 
-    /// <summary>The rotation to offer for the next step: 0, then the last rotation plus <see cref="RotationStepDegrees"/>.</summary>
+    /// <summary>The rotation to offer for the next step: 0, then the last rotation plus <see cref="RotationStepDegrees"/>, round a full turn.</summary>
     public string NextRotation() =>
         _steps.Count == 0 ? "0"
         : double.TryParse(_steps[^1].Rotation, NumberStyles.Float, CultureInfo.InvariantCulture, out double last)
-            ? (last + RotationStepDegrees).ToString("0.##", CultureInfo.InvariantCulture) : "";
+            ? ((last + RotationStepDegrees) % 360).ToString("0.##", CultureInfo.InvariantCulture) : "";
 
     public BenchSnapshot Snapshot() => new(StoneId, Version, _texts, _choices, _steps);
 

@@ -156,7 +156,9 @@ internal sealed class MainWindow : Window
         foreach (BenchPage page in Pages) page.ShowErrors(a.Errors);
         Refractometer.ShowSteps(_session.Form.Steps, a.Errors);
         Gravity.Result.Text = ResultText.Gravity(a.SpecificGravity);
-        Gravity.Caution.Text = _session.Results.ImmersionCaution is { } c ? "!! " + c : "";
+        Gravity.Caution.Text = _session.Results.ImmersionCaution is { } c
+            ? string.Join('\n', TextWrap.Lines(["!! " + c], Math.Max(20, Gravity.Viewport.Width)))
+            : "";
         Results.Refresh();
         ShowBars();
     }

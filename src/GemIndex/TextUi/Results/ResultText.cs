@@ -76,7 +76,7 @@ internal static class ResultText
 
     public static IReadOnlyList<string> NextTest(NextTestAdvice? advice) => advice is null ? [] :
     [
-        $"Next: {advice.Test} ({advice.GainBits.ToString("0.0", CultureInfo.InvariantCulture)} bits)",
+        $"Next: {advice.Description} ({advice.GainBits.ToString("0.0", CultureInfo.InvariantCulture)} bits)",
         .. advice.Separates.Count > 0 ? [$"  separates {string.Join(", ", advice.Separates)}"] : Array.Empty<string>(),
         .. advice.Expectations.Select(e => "  " + e),
     ];
