@@ -191,7 +191,8 @@ public static class RotationSeriesAnalysis
         return new RotationSeriesResult
         {
             Character = OpticCharacter.Biaxial,
-            Interpretations = [With(lowEdge.Maximum, "highest low edge"), With(highEdge.Minimum, "lowest high edge")],
+            // β is an inner extreme, where the edges can turn sharply (near an optic axis): the readings themselves serve best.
+            Interpretations = [With(Index(lowMax, Extreme(sigma)), "highest low edge"), With(Index(highMin, Extreme(sigma)), "lowest high edge")],
             Misreadings = misreadings,
             LargestGapDegrees = gap,
         };
