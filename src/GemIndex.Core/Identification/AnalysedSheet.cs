@@ -9,7 +9,11 @@ public sealed record AnalysedSheet
     public AnalysedSheet(BenchSheet sheet)
     {
         Sheet = sheet;
-        if (!string.IsNullOrWhiteSpace(sheet.Colour)) ColourHues = ColourWords.Hues(sheet.Colour).ToHashSet();
+        if (!string.IsNullOrWhiteSpace(sheet.Colour))
+        {
+            ColourHues = ColourWords.Hues(sheet.Colour).ToHashSet();
+            IsColourless = ColourWords.IsColourless(sheet.Colour);
+        }
         if (sheet.Refractometer is { Steps.Count: > 0 } r)
             Series = RotationSeriesAnalysis.Analyse(r.Steps, r.ReadingPrecision, r.CalibrationOffset);
     }
@@ -19,6 +23,9 @@ public sealed record AnalysedSheet
 
     /// <summary>The colour seen, as normalised hue words; empty when no colour was given.</summary>
     public IReadOnlySet<string> ColourHues { get; } = new HashSet<string>();
+
+    /// <summary>True when the colour given describes a colourless stone (which shows no pleochroism).</summary>
+    public bool IsColourless { get; }
 
     /// <summary>The rotation series' analysis, when there are readings.</summary>
     public RotationSeriesResult? Series { get; }

@@ -28,8 +28,7 @@ internal sealed class EvidenceAccumulator(bool explaining)
         _sumLogTails += Math.Log(Math.Clamp(tail, 1e-300, 1));
         _tests++;
         _lastTest = test;
-        _lastBits = Math.Log2(mixed / broad);
-        _lastTail = tail;
+        if (_contributions is not null) { _lastBits = Math.Log2(mixed / broad); _lastTail = tail; }
     }
 
     /// <summary>Words for the test added last.</summary>

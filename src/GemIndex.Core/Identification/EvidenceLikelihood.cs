@@ -37,7 +37,7 @@ public static class EvidenceLikelihood
         if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc);
         foreach (var liquid in s.HeavyLiquids) HeavyLiquid(material, liquid, acc);
         if (s.Polariscope is { } pol) Polariscope(material, pol, acc);
-        if (s.Pleochroism is { } pl) Pleochroism(material, pl, IsColourless(s.Colour), acc);
+        if (s.Pleochroism is { } pl) Pleochroism(material, pl, sheet.IsColourless, acc);
         if (s.Dispersion is { } d) Dispersion(material, d, acc);
         if (s.ThermalProbe is { } t) Thermal(material, t, acc);
         if (s.Electrical is { } e) Electrical(material, e, acc);
@@ -273,8 +273,6 @@ public static class EvidenceLikelihood
         if (acc.Explaining)
             acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : string.Join(", ", m.Colours) + " usual")}");
     }
-
-    private static bool IsColourless(string? colour) => colour is not null && ColourWords.IsColourless(colour);
 
     /// <summary>Where a value lies against a range: "lies in 3.95–4.05" or "lies 0.12 below 3.95–4.05 (8σ)".</summary>
     internal static string Where(double value, PropertyRange range, double sigma, string format)

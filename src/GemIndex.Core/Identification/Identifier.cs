@@ -62,7 +62,9 @@ public sealed class Identifier
         for (int i = 0; i < n; i++) posterior[i] /= sum;
         double other = Math.Exp(logOther - max) / sum;
 
-        int[] order = [.. Enumerable.Range(0, n).OrderByDescending(i => posterior[i])];
+        int[] order = [.. Enumerable.Range(0, n)];
+        var keys = posterior.Select(p => -p).ToArray();
+        Array.Sort(keys, order);
         var candidates = order.Take(Math.Clamp(maximumCandidates, 1, 1000)).Select((i, rank) => new RankedCandidate
         {
             Material = _materials[i],

@@ -60,7 +60,19 @@ public static class RangeLikelihood
     public static double StandardDeviationsOutside(double observed, PropertyRange range, double sigma) =>
         Math.Max(0, Math.Max(range.Minimum - observed, observed - range.Maximum)) / sigma;
 
-    /// <summary>Two-sided tail probability of a distance of <paramref name="standardDeviations"/> σ: 2(1 − Φ(z)).</summary>
-    public static double TwoSidedTail(double standardDeviations) =>
-        standardDeviations <= 0 ? 1 : SpecialFunctions.Erfc(standardDeviations / Math.Sqrt(2));
+    /// <summary>
+    /// Two-sided tail probability of a distance of <paramref name="standardDeviations"/> σ: 2(1 − Φ(z)). Below 5σ by the
+    /// full-precision erfc; beyond, by the asymptotic series of Mills' ratio, 1 − Φ(z) ≈ φ(z)/z · (1 − 1/z² + 3/z⁴ − 15/z⁶)
+    /// (Abramowitz and Stegun 1964, 26.2.12), relative error below 0.2 % there, and far cheaper for the many catalogue
+    /// entries a reading misses by a wide margin.
+    /// </summary>
+    public static double TwoSidedTail(double standardDeviations)
+    {
+        double z = standardDeviations;
+        if (z <= 0) return 1;
+        if (z < 5) return SpecialFunctions.Erfc(z / Math.Sqrt(2));
+        if (z > 38) return 0;
+        double inverseSquare = 1 / (z * z);
+        return 2 * PhiDensity(z) / z * (1 - inverseSquare * (1 - inverseSquare * (3 - 15 * inverseSquare)));
+    }
 }

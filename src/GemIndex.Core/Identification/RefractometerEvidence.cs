@@ -56,13 +56,14 @@ internal static class RefractometerEvidence
     {
         var m = profile.Material;
         double f = 0, g = 0, bestWeighted = -1, bestTail = 1;
-        Part[] best = [];
+        PartSet best = default;
         SeriesInterpretation? bestInterpretation = null;
-        foreach (var h in series.Interpretations)
+        var interpretations = series.Interpretations;
+        for (int i = 0; i < interpretations.Count; i++)
         {
-            Part[] parts = Parts(m, profile.Birefringence, h, r.ReadingPrecision, shift, shiftSigma, acc.Explaining, out double factor, out double broadFactor);
-            double fh = factor, gh = broadFactor;
-            foreach (var p in parts) { fh *= p.Likelihood; gh *= p.Broad; }
+            var h = interpretations[i];
+            var parts = Parts(m, profile.Birefringence, h, r.ReadingPrecision, shift, shiftSigma, acc.Explaining, out double factor, out double broadFactor);
+            double fh = factor * parts.Likelihood, gh = broadFactor * parts.Broad;
             f += h.Weight * fh;
             g += h.Weight * gh;
             if (h.Weight * fh > bestWeighted)
@@ -73,11 +74,9 @@ internal static class RefractometerEvidence
                 bestTail = factor >= 0.5 ? 1 : factor * 2;
             }
         }
-        double tail = bestTail;
-        foreach (var p in best) tail *= p.Tail;
-        acc.Add("refractometer", f, g, tail, robust: true);
+        acc.Add("refractometer", f, g, bestTail * best.Tail, robust: true);
         if (acc.Explaining && bestInterpretation is not null)
-            acc.Say($"{bestInterpretation.Description}; " + string.Join("; ", best.Select(p => p.Text)) + Character(m, bestInterpretation));
+            acc.Say($"{bestInterpretation.Description}; " + string.Join("; ", best.Texts) + Character(m, bestInterpretation));
     }
 
     private static string Character(Material m, SeriesInterpretation h)
@@ -92,7 +91,26 @@ internal static class RefractometerEvidence
 
     private readonly record struct Part(double Likelihood, double Broad, double Tail, string Text);
 
-    private static Part[] Parts(Material m, PropertyRange birefringence, SeriesInterpretation h, double sigma, double shift, double shiftSigma, bool words, out double factor, out double broadFactor)
+    /// <summary>Two or three parts of one interpretation's evidence, without a heap allocation per material.</summary>
+    private readonly struct PartSet
+    {
+        private readonly Part _a, _b, _c;
+        private readonly bool _three;
+
+        public PartSet(Part a, Part b) => (_a, _b) = (a, b);
+
+        public PartSet(Part a, Part b, Part c) => (_a, _b, _c, _three) = (a, b, c, true);
+
+        public double Likelihood => _a.Likelihood * _b.Likelihood * (_three ? _c.Likelihood : 1);
+
+        public double Broad => _a.Broad * _b.Broad * (_three ? _c.Broad : 1);
+
+        public double Tail => _a.Tail * _b.Tail * (_three ? _c.Tail : 1);
+
+        public IEnumerable<string> Texts => _three ? [_a.Text, _b.Text, _c.Text] : [_a.Text, _b.Text];
+    }
+
+    private static PartSet Parts(Material m, PropertyRange birefringence, SeriesInterpretation h, double sigma, double shift, double shiftSigma, bool words, out double factor, out double broadFactor)
     {
         var indices = m.Indices;
         factor = 1;
@@ -101,9 +119,9 @@ internal static class RefractometerEvidence
         {
             // Too few steps: each edge lies between the lowest and highest index, and the edges' separation is at most the birefringence.
             var span = new PropertyRange(indices.Lowest.Minimum, indices.Highest.Maximum);
-            return [Index("low edge", h.Lowest.Value, h.Lowest.StandardUncertainty, span, shift, shiftSigma, words),
+            return new(Index("low edge", h.Lowest.Value, h.Lowest.StandardUncertainty, span, shift, shiftSigma, words),
                     Index("high edge", h.Highest.Value, h.Highest.StandardUncertainty, span, shift, shiftSigma, words),
-                    Birefringence(h.Birefringence.Value, h.Birefringence.StandardUncertainty, new PropertyRange(0, birefringence.Maximum), "at most", words)];
+                    Birefringence(h.Birefringence.Value, h.Birefringence.StandardUncertainty, new PropertyRange(0, birefringence.Maximum), "at most", words));
         }
         if (h.Character == OpticCharacter.Isotropic)
         {
@@ -111,9 +129,9 @@ internal static class RefractometerEvidence
             double band = RotationSeriesAnalysis.ConstantBandSigmas * sigma;
             double noSecondEdge = RangeLikelihood.ProbabilityBelow(band, birefringence, h.Birefringence.StandardUncertainty);
             double tail = birefringence.Minimum <= band ? 1 : RangeLikelihood.TwoSidedTail((birefringence.Minimum - band) / h.Birefringence.StandardUncertainty);
-            return [Index("n", h.Lowest.Value, h.Lowest.StandardUncertainty, span, shift, shiftSigma, words),
+            return new(Index("n", h.Lowest.Value, h.Lowest.StandardUncertainty, span, shift, shiftSigma, words),
                     new Part(noSecondEdge, BroadDensities.SingleEdge, tail, !words ? "" :
-                        birefringence.Maximum <= band ? "no second edge, as expected" : $"no second edge where birefringence {birefringence.ToString("0.000")} is expected")];
+                        birefringence.Maximum <= band ? "no second edge, as expected" : $"no second edge where birefringence {birefringence.ToString("0.000")} is expected"));
         }
         broadFactor = CharacterBroad;
         var bire = Birefringence(h.Birefringence.Value, h.Birefringence.StandardUncertainty,
@@ -123,18 +141,18 @@ internal static class RefractometerEvidence
             if (m.OpticCharacter == OpticCharacter.Uniaxial)
             {
                 factor = m.Sign == OpticSign.Either ? 0.5 : h.Sign == m.Sign ? 1 - SignMisread : SignMisread;
-                return [Index("ω", h.Constant!.Value.Value, h.Constant.Value.StandardUncertainty, indices.Omega!.Value, shift, shiftSigma, words), bire];
+                return new(Index("ω", h.Constant!.Value.Value, h.Constant.Value.StandardUncertainty, indices.Omega!.Value, shift, shiftSigma, words), bire);
             }
             if (m.OpticCharacter == OpticCharacter.Biaxial) factor = BiaxialLooksUniaxial;
             var constantRange = h.Sign == OpticSign.Negative ? indices.Highest : indices.Lowest;
-            return [Index(h.Sign == OpticSign.Negative ? "highest index" : "lowest index", h.Constant!.Value.Value, h.Constant.Value.StandardUncertainty, constantRange, shift, shiftSigma, words), bire];
+            return new(Index(h.Sign == OpticSign.Negative ? "highest index" : "lowest index", h.Constant!.Value.Value, h.Constant.Value.StandardUncertainty, constantRange, shift, shiftSigma, words), bire);
         }
         // Biaxial readings.
         if (m.OpticCharacter == OpticCharacter.Biaxial)
-            return [Index("α", h.Lowest.Value, h.Lowest.StandardUncertainty, indices.Alpha!.Value, shift, shiftSigma, words),
-                    Index("β", h.Beta!.Value.Value, h.Beta.Value.StandardUncertainty, indices.Beta!.Value, shift, shiftSigma, words), bire];
+            return new(Index("α", h.Lowest.Value, h.Lowest.StandardUncertainty, indices.Alpha!.Value, shift, shiftSigma, words),
+                    Index("β", h.Beta!.Value.Value, h.Beta.Value.StandardUncertainty, indices.Beta!.Value, shift, shiftSigma, words), bire);
         if (m.OpticCharacter == OpticCharacter.Uniaxial) factor = UniaxialLooksBiaxial;
-        return [Index("lowest index", h.Lowest.Value, h.Lowest.StandardUncertainty, indices.Lowest, shift, shiftSigma, words), bire];
+        return new(Index("lowest index", h.Lowest.Value, h.Lowest.StandardUncertainty, indices.Lowest, shift, shiftSigma, words), bire);
     }
 
     private static Part Index(string symbol, double observed, double sigma, PropertyRange range, double shift, double shiftSigma, bool words)

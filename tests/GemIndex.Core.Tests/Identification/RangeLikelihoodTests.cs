@@ -85,3 +85,23 @@ public class NormalDistributionTests
         // Standard normal table value: Φ(1.96) = 0.9750021 (any statistics table).
         Assert.Equal(0.9750021, RangeLikelihood.Phi(1.96), 1e-7);
 }
+
+public class TailTests
+{
+    [Theory]
+    [InlineData(5.0)]
+    [InlineData(6.5)]
+    [InlineData(9.0)]
+    [InlineData(20.0)]
+    public void Far_tails_agree_with_erfc_to_a_fifth_of_a_percent(double z)
+    {
+        // Reference: the full-precision complementary error function, 2(1 − Φ(z)) = erfc(z/√2).
+        double exact = MathNet.Numerics.SpecialFunctions.Erfc(z / Math.Sqrt(2));
+        Assert.InRange(RangeLikelihood.TwoSidedTail(z) / exact, 0.998, 1.002);
+    }
+
+    [Fact]
+    public void The_tail_at_1_96_sigma_is_five_percent() =>
+        // Standard normal table: P(|Z| > 1.96) = 0.0500 (to 4 decimals).
+        Assert.Equal(0.05, RangeLikelihood.TwoSidedTail(1.96), 0.00005);
+}
