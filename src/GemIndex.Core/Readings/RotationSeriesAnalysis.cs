@@ -206,7 +206,7 @@ public static class RotationSeriesAnalysis
     /// (residuals over 2σ, as near a biaxial stone's optic axis) the largest and smallest readings are used, with the
     /// sampling shortfall sin²(g/2) carried into the likelihood.
     /// </summary>
-    private readonly record struct MovingEdge(RefractiveIndex Minimum, RefractiveIndex Maximum, double Shortfall)
+    internal readonly record struct MovingEdge(RefractiveIndex Minimum, RefractiveIndex Maximum, double Shortfall)
     {
         public static MovingEdge Of(List<EdgeValue> values, double sigma, double gap)
         {
@@ -216,16 +216,41 @@ public static class RotationSeriesAnalysis
             if (distinct < 4) return raw;
             double[] x = [.. values.Select(v => v.Rotation * Math.PI / 90)];
             double[] y = [.. values.Select(v => v.Value)];
-            double[] p = MathNet.Numerics.Fit.LinearCombination(x, y, _ => 1.0, Math.Cos, Math.Sin);
+            double[] p = HarmonicFit(x, y);
             double rms = Math.Sqrt(x.Select((t, i) => Math.Pow(y[i] - (p[0] + p[1] * Math.Cos(t) + p[2] * Math.Sin(t)), 2)).Average());
             if (rms > 2 * sigma) return raw;
             double amplitude = double.Hypot(p[1], p[2]);
             double s = Math.Sqrt(3 * sigma * sigma / values.Count + sigma * sigma / 4);
             return new MovingEdge(Index(p[0] - amplitude, s), Index(p[0] + amplitude, s), 0);
         }
+
+        /// <summary>
+        /// Least squares y ≈ a + b·cos x + c·sin x through the 3×3 normal equations, solved by Cramer's rule (the same
+        /// solution as MathNet's Fit.LinearCombination, which the tests compare against, without its allocations:
+        /// this runs on every keystroke).
+        /// </summary>
+        internal static double[] HarmonicFit(double[] x, double[] y)
+        {
+            double n = x.Length, sc = 0, ss = 0, scc = 0, sss = 0, scs = 0, sy = 0, syc = 0, sys = 0;
+            for (int i = 0; i < x.Length; i++)
+            {
+                double c = Math.Cos(x[i]), s = Math.Sin(x[i]);
+                sc += c; ss += s; scc += c * c; sss += s * s; scs += c * s;
+                sy += y[i]; syc += y[i] * c; sys += y[i] * s;
+            }
+            double Det(double a, double b, double c, double d, double e, double f, double g, double h, double k) =>
+                a * (e * k - f * h) - b * (d * k - f * g) + c * (d * h - e * g);
+            double det = Det(n, sc, ss, sc, scc, scs, ss, scs, sss);
+            return
+            [
+                Det(sy, sc, ss, syc, scc, scs, sys, scs, sss) / det,
+                Det(n, sy, ss, sc, syc, scs, ss, sys, sss) / det,
+                Det(n, sc, sy, sc, scc, syc, ss, scs, sys) / det,
+            ];
+        }
     }
 
-    private readonly record struct EdgeValue(double Rotation, double Value);
+    internal readonly record struct EdgeValue(double Rotation, double Value);
 
     /// <summary>The edge's readings, less a lone reading far from an otherwise constant edge (reported as a misreading).</summary>
     private static List<EdgeValue> EdgeValues(List<ShadowEdgeStep> steps, Func<ShadowEdgeStep, double> edge, double band, string name, List<string> misreadings)

@@ -122,3 +122,17 @@ public class RotationSeriesAnalysisTests
     public void No_steps_is_refused() =>
         Assert.Contains("number of rotation steps", Assert.Throws<QuantityOutOfRangeException>(() => RotationSeriesAnalysis.Analyse([], 0.001)).Message);
 }
+
+public class HarmonicFitTests
+{
+    [Fact]
+    public void The_harmonic_fit_matches_MathNets_general_least_squares()
+    {
+        // Independent reference: MathNet.Numerics Fit.LinearCombination with the basis 1, cos, sin (QR least squares).
+        double[] x = [.. new[] { 0.0, 30, 60, 90, 120, 150 }.Select(d => d * Math.PI / 90)];
+        double[] y = [1.5440, 1.5482, 1.5517, 1.5530, 1.5511, 1.5473];
+        double[] expected = MathNet.Numerics.Fit.LinearCombination(x, y, _ => 1.0, Math.Cos, Math.Sin);
+        double[] actual = RotationSeriesAnalysis.MovingEdge.HarmonicFit(x, y);
+        for (int i = 0; i < 3; i++) Assert.Equal(expected[i], actual[i], 1e-12);
+    }
+}
