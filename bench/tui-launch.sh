@@ -1,11 +1,14 @@
 #!/usr/bin/env bash
 # Launch-to-first-screen benchmark of the text UI: starts the built app in tmux (80x24) N times with a fresh
 # workbook and a warm catalogue cache, and reports the time until the bench screen is drawn. Usage:
-#   dotnet build GemIndex.sln -c Release && bench/tui-launch.sh [N]
+#   dotnet build GemIndex.sln -c Release && bench/tui-launch.sh [N] [PATH/gemindex.dll]
+# For the ahead-of-time compiled (ReadyToRun) build that the README's install step makes:
+#   dotnet publish src/GemIndex -c Release -r linux-x64 --self-contained false -p:PublishReadyToRun=true -o /tmp/gi
+#   bench/tui-launch.sh 10 /tmp/gi/gemindex.dll
 set -euo pipefail
 cd "$(dirname "$0")/.."
 runs=${1:-10}
-dll=src/GemIndex/bin/Release/net10.0/gemindex.dll
+dll=${2:-src/GemIndex/bin/Release/net10.0/gemindex.dll}
 [[ -f "$dll" ]] || { echo "build first: dotnet build GemIndex.sln -c Release"; exit 1; }
 tmp=$(mktemp -d); trap 'tmux kill-session -t gi-launch 2>/dev/null || true; rm -rf "$tmp"' EXIT
 env XDG_CACHE_HOME="$tmp/cache" XDG_DATA_HOME="$tmp/data" dotnet "$dll" catalogue check >/dev/null   # warm the catalogue cache
