@@ -63,8 +63,8 @@ public sealed class Identifier
         double other = Math.Exp(logOther - max) / sum;
 
         int[] order = [.. Enumerable.Range(0, n)];
-        var keys = posterior.Select(p => -p).ToArray();
-        Array.Sort(keys, order);
+        // Ties (materials the evidence cannot tell apart) keep the catalogue's order, so answers are reproducible.
+        Array.Sort(order, (a, b) => posterior[a] != posterior[b] ? posterior[b].CompareTo(posterior[a]) : a.CompareTo(b));
         var candidates = order.Take(Math.Clamp(maximumCandidates, 1, 1000)).Select((i, rank) => new RankedCandidate
         {
             Material = _materials[i],
