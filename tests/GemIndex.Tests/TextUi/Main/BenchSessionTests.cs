@@ -28,6 +28,7 @@ public class BenchSessionTests
                 await session.Changed();
                 Assert.Equal("quartz", session.Results.Candidates[0].Material.Name);
                 Assert.Null(session.SaveProblem);
+                Assert.True(session.Flush());
             }
             using (var wb = StoneWorkbook.Open(path, TimeProvider.System))
             {
@@ -39,6 +40,7 @@ public class BenchSessionTests
                 session.Start();
                 Assert.Equal(id, session.Form.StoneId);
                 Assert.Equal("2x", session.Form.Text(BenchFields.WaterC));
+                Assert.True(session.Flush()); // the background save Start began must end before the workbook closes
             }
         }
         finally
@@ -61,6 +63,7 @@ public class BenchSessionTests
             session.Form.SetText(BenchFields.Notes, "second");
             await session.Changed();
             await session.Changed();   // same version again: skipped
+            Assert.True(session.Flush());
             Assert.Equal("second", wb.Get(session.Form.StoneId)!.Notes);
         }
         finally
