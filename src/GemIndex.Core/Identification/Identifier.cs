@@ -11,7 +11,7 @@ namespace GemIndex.Core.Identification;
 public sealed class Identifier
 {
     /// <summary>Below this fit the best candidate is not offered as an answer.</summary>
-    public const double MinimumFit = 0.03;
+    public const double MinimumFit = 0.02;
 
     private readonly Material[] _materials;
     private readonly MaterialProfile[] _profiles;

@@ -64,7 +64,7 @@ public static class StoneReadingsJson
             Method = Optional(e, "method", x => Word(x, "refractometer.method")) ?? "facet",
             LightNm = Optional(e, "light_nm", x => (double?)Number(x, "refractometer.light_nm")),
             LiquidLimit = Optional(e, "liquid_limit", x => (double?)Number(x, "refractometer.liquid_limit")),
-            Readings = Optional(e, "readings", x => Array(x, "refractometer.readings", Step)) ?? [],
+            Readings = EvenlySpreadWhenUnrotated(e, Optional(e, "readings", x => Array(x, "refractometer.readings", Step)) ?? []),
             Spot = Optional(e, "spot", x => (double?)Number(x, "refractometer.spot")),
             OverLimit = Optional(e, "over_limit", x => x.ValueKind switch
             {
@@ -73,6 +73,17 @@ public static class StoneReadingsJson
                 _ => throw new BatchInputException("refractometer.over_limit", "must be true or false"),
             }) ?? false,
         };
+    }
+
+    /// <summary>
+    /// Steps given with no rotation angle at all are taken as read in order, evenly over a half turn (i·180°/n), the
+    /// usual way of reading a series; one angle given anywhere means the angles are the user's own (missing ones 0°).
+    /// </summary>
+    private static List<EdgeReadingEntry> EvenlySpreadWhenUnrotated(JsonElement refractometer, List<EdgeReadingEntry> steps)
+    {
+        if (!refractometer.TryGetProperty("readings", out var list) || list.ValueKind != JsonValueKind.Array) return steps;
+        bool anyRotation = list.EnumerateArray().Any(x => x.ValueKind == JsonValueKind.Object && x.TryGetProperty("rotation_deg", out var r) && r.ValueKind != JsonValueKind.Null);
+        return anyRotation ? steps : [.. steps.Select((s, i) => s with { RotationDeg = i * 180.0 / steps.Count })];
     }
 
     private static EdgeReadingEntry Step(JsonElement e, string path)

@@ -90,4 +90,16 @@ public class IdentifyCommandTests
         Assert.Equal(3, exit);
         Assert.Contains("--edge #1 low edge: '1,544' has a comma", error, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Steps_without_rotation_angles_are_read_as_evenly_spread_over_a_half_turn()
+    {
+        using var run = new CommandRun();
+        // Corundum ω 1.770, ε 1.762 (common practice), four steps in order with no angles given.
+        string file = Batch(run, """{"id":"C-1","refractometer":{"readings":[{"low":1.762,"high":1.770},{"low":1.764,"high":1.770},{"low":1.768,"high":1.770},{"low":1.765,"high":1.770}]}}""");
+        var (exit, output, error) = Identify(run, "--batch", file, "--explain");
+        Assert.True(exit == 0, error);
+        Assert.Contains("uniaxial negative", output, StringComparison.Ordinal);
+        Assert.DoesNotContain("undetermined", output, StringComparison.Ordinal);
+    }
 }
