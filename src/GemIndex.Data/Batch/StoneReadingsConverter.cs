@@ -53,8 +53,11 @@ public static class StoneReadingsConverter
     {
         var method = Word<RefractometerMethod>("refractometer.method", rf.Method);
         var steps = rf.Readings.Select((s, i) => Field($"refractometer.readings[{i}]", () => new ShadowEdgeStep(s.RotationDeg, s.Low, s.High))).ToList();
+        // With no liquid stated, the usual 1.79 is assumed, unless the readings themselves show a denser liquid was used.
+        double highest = steps.Select(x => x.High ?? x.Low).Append(rf.Spot ?? 0).Max();
+        double liquid = rf.LiquidLimit ?? Math.Max(RefractometerObservation.DefaultLiquidLimit, Math.Min(highest, 2.2));
         return Field("refractometer", () => new RefractometerObservation(method, steps, rf.Spot, rf.OverLimit,
-            rf.LightNm ?? RefractometerObservation.SodiumLightNanometres, rf.LiquidLimit ?? RefractometerObservation.DefaultLiquidLimit));
+            rf.LightNm ?? RefractometerObservation.SodiumLightNanometres, liquid));
     }
 
     private static SpecificGravity Weighing(HydrostaticReadings w)
