@@ -1,3 +1,5 @@
+using GemIndex.Core.Optics;
+using GemIndex.Core.Optics.Refractometer;
 using GemIndex.Core.Quantities;
 using GemIndex.Core.Readings;
 
@@ -21,7 +23,7 @@ public sealed record RefractometerObservation
     /// <summary>Sodium D light, nm.</summary>
     public const double SodiumLightNanometres = 589.3;
 
-    /// <summary>Creates an observation, checking every number.</summary>
+    /// <summary>Creates an observation, checking every number (the instrument's through <see cref="RefractometerProfile"/>).</summary>
     /// <exception cref="QuantityOutOfRangeException">A value out of range, or nothing observed at all.</exception>
     public RefractometerObservation(RefractometerMethod method, IReadOnlyList<ShadowEdgeStep>? steps = null, double? spot = null,
         bool overLimit = false, double lightNanometres = SodiumLightNanometres, double liquidLimit = DefaultLiquidLimit,
@@ -29,29 +31,30 @@ public sealed record RefractometerObservation
     {
         QuantityOutOfRangeException.ThrowIfOutside("light", lightNanometres, 380, 780, "nm");
         QuantityOutOfRangeException.ThrowIfOutside("liquid limit", liquidLimit, 1.5, 2.2);
-        QuantityOutOfRangeException.ThrowIfOutside("calibration offset", calibrationOffset, -0.05, 0.05);
-        if (spot is { } x) QuantityOutOfRangeException.ThrowIfOutside("spot reading", x, 1.3, liquidLimit);
+        double precision = readingPrecision ?? (method == RefractometerMethod.Spot ? DefaultSpotPrecision : DefaultFacetPrecision);
+        // The glass index does not enter an identification; the usual high-lead glass, or one just above a denser liquid.
+        double glass = Math.Max(RefractometerProfile.Default.GlassIndex.Value, liquidLimit + 0.02);
+        Profile = new RefractometerProfile(new RefractiveIndex(glass), new RefractiveIndex(liquidLimit),
+            Wavelength.FromNanometres(lightNanometres), precision, calibrationOffset);
+        if (spot is { } x) QuantityOutOfRangeException.ThrowIfOutside("spot reading", x, RefractometerProfile.ScaleBottom, liquidLimit);
         steps ??= [];
         foreach (var step in steps)
             if (step.High is { } h && h > liquidLimit + 0.005 || step.Low > liquidLimit + 0.005)
                 throw new QuantityOutOfRangeException("edge reading", Math.Max(step.Low, step.High ?? 0),
                     $"at most the liquid limit {liquidLimit:0.000} (no stone edge can be seen above it)");
-        double precision = readingPrecision ?? (method == RefractometerMethod.Spot ? DefaultSpotPrecision : DefaultFacetPrecision);
-        QuantityOutOfRangeException.ThrowIfOutside("reading precision", precision, 0.0001, 0.05);
         if (steps.Count == 0 && spot is null && !overLimit)
             throw new QuantityOutOfRangeException("refractometer readings", 0, "at least one reading, a spot reading, or over the limit");
         Method = method;
         Steps = steps;
         Spot = spot;
         OverLimit = overLimit;
-        LightNanometres = lightNanometres;
-        LiquidLimit = liquidLimit;
-        ReadingPrecision = precision;
-        CalibrationOffset = calibrationOffset;
     }
 
     /// <summary>Facet or spot.</summary>
     public RefractometerMethod Method { get; }
+
+    /// <summary>The instrument as used: contact liquid, light, reading precision and calibration offset.</summary>
+    public RefractometerProfile Profile { get; }
 
     /// <summary>The rotation series (facet method); may be empty.</summary>
     public IReadOnlyList<ShadowEdgeStep> Steps { get; }
@@ -63,14 +66,14 @@ public sealed record RefractometerObservation
     public bool OverLimit { get; }
 
     /// <summary>The light the readings were taken in, nm.</summary>
-    public double LightNanometres { get; }
+    public double LightNanometres => Profile.Wavelength.Nanometres;
 
     /// <summary>The contact liquid's index: nothing above it can be read.</summary>
-    public double LiquidLimit { get; }
+    public double LiquidLimit => Profile.ContactLiquidIndex.Value;
 
     /// <summary>Standard uncertainty of one reading.</summary>
-    public double ReadingPrecision { get; }
+    public double ReadingPrecision => Profile.ReadingPrecision;
 
     /// <summary>Added to every reading (from a calibration on a standard).</summary>
-    public double CalibrationOffset { get; }
+    public double CalibrationOffset => Profile.CalibrationOffset;
 }

@@ -38,7 +38,8 @@ internal sealed class FormReader(BenchSnapshot form, Dictionary<string, string> 
         {
             Method = spot is not null && steps.Count == 0 ? "spot" : "facet",
             LightNm = Number(BenchFields.LightNm),
-            LiquidLimit = Number(BenchFields.LiquidLimit),
+            // The form shows "default 1.79": an edge typed above it is flagged at its step, not taken as a denser liquid.
+            LiquidLimit = Number(BenchFields.LiquidLimit) ?? GemIndex.Core.Identification.RefractometerObservation.DefaultLiquidLimit,
             Readings = steps,
             Spot = spot,
             OverLimit = over,
