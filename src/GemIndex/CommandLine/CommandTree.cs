@@ -16,7 +16,7 @@ internal static class CommandTree
         root.SetAction(pr => TextUiCommand.Run(pr, pr.GetValue(workbook) ?? WorkbookLocation.Default(), pr.GetValue(demo)));
         root.Subcommands.Add(CatalogueCommand.Create());
         root.Subcommands.Add(IdentifyCommand.Create(CatalogueCommand.DirectoryOption()));
-        root.Subcommands.Add(ReportCommand.Create(() => GemIndex.Data.Catalogue.MergedCatalogue.Load(GemIndex.Data.Catalogue.CatalogueLocations.FromEnvironment())));
+        root.Subcommands.Add(ReportCommand.Create(CatalogueCommand.DirectoryOption()));
         root.Subcommands.Add(Calc.CalcCommand.Create());
         return root;
     }

@@ -1,3 +1,4 @@
+using GemIndex.Data.Catalogue;
 using System.CommandLine;
 using System.CommandLine.Parsing;
 using System.Globalization;
@@ -18,7 +19,13 @@ internal static class ReportCommand
 {
     public static readonly string[] Formats = ["markdown", "html", "json"];
 
-    public static Command Create(Func<IReadOnlyList<Material>> materials)
+    public static Command Create(Func<IReadOnlyList<Material>> materials) => Create(_ => materials(), null);
+
+    /// <summary>The report group with the catalogue chosen per invocation (<c>--catalogue-dir</c>, as for the other commands).</summary>
+    public static Command Create(Option<DirectoryInfo?> catalogueDirectory) =>
+        Create(pr => MergedCatalogue.Load(CatalogueCommand.Locations(pr, catalogueDirectory)), catalogueDirectory);
+
+    private static Command Create(Func<ParseResult, IReadOnlyList<Material>> catalogue, Option<DirectoryInfo?>? catalogueDirectory)
     {
         var readings = new Option<FileInfo>("--readings") { Description = "Batch file of readings (JSON, one stone per line)" };
         readings.AcceptExistingOnly();
@@ -45,14 +52,16 @@ internal static class ReportCommand
             else if (fromWorkbook && string.IsNullOrWhiteSpace(r.GetValue(reference))) r.AddError("--workbook needs --stone REFERENCE");
         });
         stone.SetAction(pr => CatalogueFailure.Guard(pr, (o, e) => pr.GetValue(workbook) is { } book
-            ? WorkbookStone(book, pr.GetValue(reference)!, pr.GetRequiredValue(format), pr.GetValue(output), materials, o, e)
-            : Stone(pr.GetValue(readings)!, pr.GetValue(line), pr.GetRequiredValue(format), pr.GetValue(output), materials, o, e)));
+            ? WorkbookStone(book, pr.GetValue(reference)!, pr.GetRequiredValue(format), pr.GetValue(output), () => catalogue(pr), o, e)
+            : Stone(pr.GetValue(readings)!, pr.GetValue(line), pr.GetRequiredValue(format), pr.GetValue(output), () => catalogue(pr), o, e)));
         var wholeBook = new Option<FileInfo>("--workbook") { Description = "The workbook file", Required = true };
         wholeBook.AcceptExistingOnly();
         var csv = new Option<FileInfo?>("--output") { Description = "CSV file to write (default: standard output)" };
         var all = new Command("workbook", "Every stone of a workbook as CSV, one row each, with its best candidate") { wholeBook, csv };
-        all.SetAction(pr => CatalogueFailure.Guard(pr, (o, e) => Workbook(pr.GetRequiredValue(wholeBook), pr.GetValue(csv), materials, o, e)));
-        return new Command("report", "Printable reports of identified stones, and the workbook as CSV") { stone, all };
+        all.SetAction(pr => CatalogueFailure.Guard(pr, (o, e) => Workbook(pr.GetRequiredValue(wholeBook), pr.GetValue(csv), () => catalogue(pr), o, e)));
+        var report = new Command("report", "Printable reports of identified stones, and the workbook as CSV") { stone, all };
+        if (catalogueDirectory is not null) report.Options.Add(catalogueDirectory);
+        return report;
     }
 
     private static int WorkbookStone(FileInfo book, string reference, string format, FileInfo? output, Func<IReadOnlyList<Material>> materials,
