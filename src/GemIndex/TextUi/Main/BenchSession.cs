@@ -11,6 +11,8 @@ namespace GemIndex.Cli.TextUi.Main;
 /// </summary>
 internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assessor, Action<Action> toUi)
 {
+    private volatile BenchAssessor _assessor = assessor;
+
     public const string PrecisionSetting = "refractometer.precision";
     public const string CalibrationSetting = "refractometer.calibration_offset";
 
@@ -75,12 +77,25 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
         return task;
     }
 
+    /// <summary>Assesses a snapshot with the current catalogue (any thread; the assessor keeps no state).</summary>
+    public BenchAssessment Assess(BenchSnapshot snapshot) => _assessor.Assess(snapshot);
+
+    /// <summary>True once a catalogue is in use (see <see cref="UseAssessor"/>).</summary>
+    public bool HasCatalogue => _assessor.HasCatalogue;
+
+    /// <summary>Swaps in the assessor with the catalogue (loaded in the background at start) and re-ranks the open stone.</summary>
+    public Task UseAssessor(BenchAssessor ready)
+    {
+        _assessor = ready;
+        return Changed();
+    }
+
     /// <summary>Waits for the background saves still running (at exit), at most five seconds.</summary>
     public bool Flush() => _pending.Wait(TimeSpan.FromSeconds(5));
 
     private void Process(BenchSnapshot snapshot)
     {
-        BenchAssessment assessment = assessor.Assess(snapshot);
+        BenchAssessment assessment = Assess(snapshot);
         string? problem = Save(snapshot, assessment);
         toUi(() =>
         {

@@ -1,10 +1,14 @@
 using GemIndex.Cli.TextUi.Bench;
 using GemIndex.Cli.TextUi.CatalogueBrowser;
+using GemIndex.Cli.TextUi.Export;
 using GemIndex.Cli.TextUi.Help;
 using GemIndex.Cli.TextUi.Plot;
 using GemIndex.Cli.TextUi.Results;
 using GemIndex.Cli.TextUi.Stones;
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Quantities;
+using GemIndex.Data.Batch;
+using Terminal.Gui.App;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
@@ -19,7 +23,7 @@ namespace GemIndex.Cli.TextUi.Main;
 internal sealed class MainWindow : Window
 {
     public const int FormWidth = 44;
-    private const string GlobalKeys = "F1 help F2-5 pages F6 plot F7 catalogue F8 stones F9 detail ^N new ^Q quit";
+    private const string GlobalKeys = "F1 help F6 plot ^R scales F7 gems F8 stones F9 detail ^E export ^N new ^Q quit";
     private readonly BenchSession _session;
     private readonly IReadOnlyList<Material> _catalogue;
     private readonly Label _pageBar;
@@ -180,11 +184,46 @@ internal sealed class MainWindow : Window
         else if (key == Key.F7) CatalogueBrowserView.Show(App!, new CatalogueBrowserModel(_catalogue));
         else if (key == Key.F8) ShowStones();
         else if (key == Key.F9) ShowDetail(Results.SelectedCandidate);
+        else if (key == Key.E.WithCtrl) Export();
         else if (key == Key.N.WithCtrl) { _session.New(); FillFromModel(); ShowPage(0); }
         else if (key == Key.Q.WithCtrl) App!.RequestStop();
         else if (key == Key.Esc) { }                       // Esc quits the application by default: keep the bench open
         else return;
         key.Handled = true;
+    }
+
+    /// <summary>Writes the open stone's reports beside the workbook off the UI thread, then shows where they went (or why not).</summary>
+    private void Export()
+    {
+        IApplication app = App!;
+        BenchSnapshot snapshot = _session.Form.Snapshot();
+        string workbook = _session.Workbook.Path;
+        _keyLine.Text = "writing the reports…";
+        _ = Task.Run(() =>
+        {
+            (string title, string text) = ExportNow(snapshot, workbook);
+            app.Invoke(() =>
+            {
+                ShowBars();
+                MessageBox.Query(app, title, text, "OK");
+            });
+        });
+    }
+
+    private (string Title, string Text) ExportNow(BenchSnapshot snapshot, string workbook)
+    {
+        try
+        {
+            BenchAssessment a = _session.Assess(snapshot);
+            if (a.Result is null)
+                return ("Nothing to export", "No identification yet: enter readings first" + (_session.HasCatalogue ? "." : " (the catalogue is still loading)."));
+            IReadOnlyList<string> paths = StoneReportFiles.Write(workbook, BenchModel.ToStoneSheet(snapshot, a.Readings), a.Result);
+            return ("Reports written", string.Join('\n', paths));
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or BatchInputException or QuantityOutOfRangeException)
+        {
+            return ("Export failed", $"The reports were not written to {StoneReportFiles.FolderFor(workbook)}:\n{e.Message}");
+        }
     }
 
     private void ShowStones()
