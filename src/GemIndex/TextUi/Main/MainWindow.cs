@@ -54,6 +54,7 @@ internal sealed class MainWindow : Window
         _keyLine = new Label { Y = Pos.AnchorEnd(1), Width = Dim.Fill() };
         Add(_pageBar, _left, Results, _keyLine);
         Wire();
+        FreeExportKey(this);
         session.Assessed += ShowAssessment;
         Results.DetailRequested += ShowDetail;
         KeyDown += OnGlobalKey;
@@ -61,6 +62,13 @@ internal sealed class MainWindow : Window
     }
 
     public IReadOnlyList<BenchPage> Pages { get; }
+
+    /// <summary>A text field takes Ctrl+E as "end of line" (End does the same): let it reach the window as "export".</summary>
+    private static void FreeExportKey(View view)
+    {
+        if (view is TextField field) field.KeyBindings.Remove(Key.E.WithCtrl);
+        foreach (View sub in view.SubViews) FreeExportKey(sub);
+    }
 
     public RefractometerPage Refractometer => (RefractometerPage)Pages[1];
 
@@ -181,6 +189,7 @@ internal sealed class MainWindow : Window
         else if (key == Key.F4) ShowPage(2);
         else if (key == Key.F5) ShowPage(3);
         else if (key == Key.F6) EdgePlotView.Show(App!, new EdgePlotModel(_session.Results.Latest?.Readings.Refractometer?.Readings ?? []));
+        else if (key == Key.R.WithCtrl) ScaleView.Show(App!, new ScaleModel(_session.Results.Latest));
         else if (key == Key.F7) CatalogueBrowserView.Show(App!, new CatalogueBrowserModel(_catalogue));
         else if (key == Key.F8) ShowStones();
         else if (key == Key.F9) ShowDetail(Results.SelectedCandidate);
