@@ -25,7 +25,7 @@ internal sealed class MainWindow : Window
     public const int FormWidth = 44;
     private const string GlobalKeys = "F1 help F6 plot ^R scales F7 gems F8 stones F9 detail ^E export ^N new ^Q quit";
     private readonly BenchSession _session;
-    private readonly IReadOnlyList<Material> _catalogue;
+    private IReadOnlyList<Material> _catalogue;
     private readonly Label _pageBar;
     private readonly FrameView _left;
     private readonly Label _keyLine;
@@ -62,6 +62,22 @@ internal sealed class MainWindow : Window
     }
 
     public IReadOnlyList<BenchPage> Pages { get; }
+
+    /// <summary>Says in the identification panel that the catalogue is loading, or why it could not be loaded.</summary>
+    public void ShowCatalogueState(string text)
+    {
+        _session.Results.Waiting = text;
+        Results.Refresh();
+    }
+
+    /// <summary>Hands over the catalogue loaded in the background: the browser gets it and the open stone is re-ranked.</summary>
+    public void UseCatalogue(IReadOnlyList<Material> catalogue, BenchAssessor assessor)
+    {
+        _catalogue = catalogue;
+        _session.Results.Waiting = null;
+        Results.Refresh();
+        _session.UseAssessor(assessor);
+    }
 
     /// <summary>A text field takes Ctrl+E as "end of line" (End does the same): let it reach the window as "export".</summary>
     private static void FreeExportKey(View view)
@@ -190,6 +206,7 @@ internal sealed class MainWindow : Window
         else if (key == Key.F5) ShowPage(3);
         else if (key == Key.F6) EdgePlotView.Show(App!, new EdgePlotModel(_session.Results.Latest?.Readings.Refractometer?.Readings ?? []));
         else if (key == Key.R.WithCtrl) ScaleView.Show(App!, new ScaleModel(_session.Results.Latest));
+        else if (key == Key.F7 && _catalogue.Count == 0) MessageBox.Query(App!, "Catalogue", _session.Results.Waiting ?? "The catalogue is empty.", "OK");
         else if (key == Key.F7) CatalogueBrowserView.Show(App!, new CatalogueBrowserModel(_catalogue));
         else if (key == Key.F8) ShowStones();
         else if (key == Key.F9) ShowDetail(Results.SelectedCandidate);

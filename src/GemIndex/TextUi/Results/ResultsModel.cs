@@ -22,7 +22,11 @@ internal sealed class ResultsModel
 
     public bool NoGoodMatch => Latest?.Result?.NoGoodMatch ?? false;
 
-    public string Headline => Latest?.Result is { } r ? ResultText.Headline(r)
+    /// <summary>Shown instead of the headline while there is nothing to rank against ("loading catalogue…", or why it failed).</summary>
+    public string? Waiting { get; set; }
+
+    public string Headline => Waiting is { } w ? w
+        : Latest?.Result is { } r ? ResultText.Headline(r)
         : Latest is null ? "working…" : "Enter readings: the candidates appear here.";
 
     public string CandidateHeader => ResultText.CandidateHeader(NameWidth);

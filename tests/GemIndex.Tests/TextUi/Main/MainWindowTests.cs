@@ -176,4 +176,39 @@ public sealed class MainWindowTests : IDisposable
         Assert.True(window.Refractometer.Low.KeyBindings.TryGet(Key.End, out _));   // End still moves to the end of the line
         Assert.Contains("^E export", window.KeyLine);
     }
+
+    [Fact]
+    public void The_bench_draws_while_the_catalogue_loads_and_ranks_once_it_arrives()
+    {
+        var session = new BenchSession(_workbook, new BenchAssessor(null), _uiQueue.Enqueue);
+        void SettleThis()
+        {
+            Assert.True(session.Flush());
+            while (_uiQueue.TryDequeue(out Action? a)) a();
+        }
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(session, []);
+        window.ShowCatalogueState(TextUiLauncher.LoadingCatalogue);
+        session.Start();
+        window.FillFromModel();
+        foreach (var (rotation, high) in new[] { ("0", "1.553"), ("45", "1.551"), ("90", "1.548") })
+            session.Form.PutStep(session.Form.Steps.Count, new StepText(rotation, "1.544", high));
+        session.Changed();
+        SessionToken token = app.Begin(window)!;
+        SettleThis();
+        app.LayoutAndDraw();
+        string screen = app.Driver!.ToString()!;
+        Assert.Contains(TextUiLauncher.LoadingCatalogue, screen);
+        Assert.DoesNotContain("1 quartz", screen);
+        Assert.Contains("0°  1.544    1.553", screen);   // the form works meanwhile
+
+        window.UseCatalogue(TestMaterials.All, new BenchAssessor(new Identifier(TestMaterials.All)));
+        SettleThis();
+        app.LayoutAndDraw();
+        screen = app.Driver!.ToString()!;
+        Assert.DoesNotContain(TextUiLauncher.LoadingCatalogue, screen);
+        Assert.Contains("1 quartz", screen);
+        Assert.Contains("Best: quartz", screen);
+        app.End(token);
+    }
 }
