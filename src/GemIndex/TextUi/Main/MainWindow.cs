@@ -64,9 +64,10 @@ internal sealed class MainWindow : Window
     public IReadOnlyList<BenchPage> Pages { get; }
 
     /// <summary>Says in the identification panel that the catalogue is loading, or why it could not be loaded.</summary>
-    public void ShowCatalogueState(string text)
+    public void ShowCatalogueState(string text, string? reason = null)
     {
         _session.Results.Waiting = text;
+        _session.Results.WaitingReason = reason;
         Results.Refresh();
     }
 
@@ -75,6 +76,7 @@ internal sealed class MainWindow : Window
     {
         _catalogue = catalogue;
         _session.Results.Waiting = null;
+        _session.Results.WaitingReason = null;
         Results.Refresh();
         _session.UseAssessor(assessor);
     }
@@ -206,7 +208,7 @@ internal sealed class MainWindow : Window
         else if (key == Key.F5) ShowPage(3);
         else if (key == Key.F6) EdgePlotView.Show(App!, new EdgePlotModel(_session.Results.Latest?.Readings.Refractometer?.Readings ?? []));
         else if (key == Key.R.WithCtrl) ScaleView.Show(App!, new ScaleModel(_session.Results.Latest));
-        else if (key == Key.F7 && _catalogue.Count == 0) MessageBox.Query(App!, "Catalogue", _session.Results.Waiting ?? "The catalogue is empty.", "OK");
+        else if (key == Key.F7 && _catalogue.Count == 0) MessageBox.Query(App!, "Catalogue", _session.Results.WaitingReason ?? _session.Results.Waiting ?? "The catalogue is empty.", "OK");
         else if (key == Key.F7) CatalogueBrowserView.Show(App!, new CatalogueBrowserModel(_catalogue));
         else if (key == Key.F8) ShowStones();
         else if (key == Key.F9) ShowDetail(Results.SelectedCandidate);

@@ -21,6 +21,8 @@ internal static class TextUiLauncher
             error.WriteLine("gemindex: the text UI needs a terminal; try 'gemindex --help'");
             return ExitCodes.NoTerminal;
         }
+        // Read the catalogue (the slow part of a start) while the workbook opens and the window is drawn.
+        Task<IReadOnlyList<Material>> loading = Task.Run(() => MergedCatalogue.Load(CatalogueLocations.FromEnvironment()));
         StoneWorkbook workbook;
         try { workbook = StoneWorkbook.Open(workbookPath, TimeProvider.System); }
         catch (WorkbookException e)
@@ -37,21 +39,21 @@ internal static class TextUiLauncher
             window.ShowCatalogueState(LoadingCatalogue);
             session.Start();
             window.FillFromModel();
-            // The window is drawn first; the catalogue (the slow part of a start) arrives when it is read.
-            _ = Task.Run(() =>
+            _ = loading.ContinueWith(done =>
             {
-                try
+                if (done.IsCompletedSuccessfully)
                 {
-                    IReadOnlyList<Material> catalogue = MergedCatalogue.Load(CatalogueLocations.FromEnvironment());
-                    var assessor = new BenchAssessor(new Identifier(catalogue));
-                    app.Invoke(() => window.UseCatalogue(catalogue, assessor));
+                    var assessor = new BenchAssessor(new Identifier(done.Result));
+                    app.Invoke(() => window.UseCatalogue(done.Result, assessor));
+                    return;
                 }
-                catch (Exception e) when (e is CatalogueStoreException or CatalogueSchemaVersionException or CatalogueFormatException)
-                {
-                    catalogueProblem = $"cannot load the catalogue: {e.Message}";
-                    app.Invoke(() => window.ShowCatalogueState("!! " + catalogueProblem + " (readings are still saved)"));
-                }
-            });
+                Exception e = done.Exception?.InnerException ?? new InvalidOperationException("the catalogue load was cancelled");
+                catalogueProblem = e is CatalogueStoreException or CatalogueSchemaVersionException or CatalogueFormatException
+                    ? $"cannot load the catalogue: {e.Message}"
+                    : $"cannot load the catalogue ({e.GetType().Name}): {e.Message}";
+                string reason = catalogueProblem;
+                app.Invoke(() => window.ShowCatalogueState("!! no catalogue: nothing can be ranked (readings are still saved)", reason));
+            }, TaskScheduler.Default);
             app.Run(window);
             session.Flush();
         }
