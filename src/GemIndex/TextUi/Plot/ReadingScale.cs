@@ -8,7 +8,7 @@ namespace GemIndex.Cli.TextUi.Plot;
 /// <summary>
 /// One measured quantity drawn as a horizontal character scale against the candidates' ranges: the reading's row shows
 /// the value as '*' with its ± standard uncertainty as '&lt;---&gt;', each candidate's row shows its range as '=' on a '.'
-/// track with the value's '*' on top, and a word says whether the reading falls in the range. Shapes only, no colour.
+/// track with the value's '*' on top ('#' where it falls on the bar), and a word says whether the reading falls in the range. Shapes only, no colour.
 /// </summary>
 /// <param name="title">What is measured, e.g. "lowest index".</param>
 /// <param name="format">Number format of the axis labels and the reading.</param>
@@ -19,6 +19,8 @@ internal sealed class ReadingScale(string title, string format, double value, do
     public const char Track = '.';
     public const char Bar = '=';
     public const char Marker = '*';
+    /// <summary>The marker where it falls on a candidate's bar (so a bar one cell wide does not vanish under it).</summary>
+    public const char MarkerOnBar = '#';
     public const int NameWidth = ResultsModel.NameWidth + 2;
     public const int VerdictWidth = 5;
     public const int NarrowestTrack = 12;
@@ -85,7 +87,7 @@ internal sealed class ReadingScale(string title, string format, double value, do
                 if (right < 0) row[0] = '<';
                 if (left >= track) row[track - 1] = '>';
             }
-            if (at >= 0 && at < track) row[at] = Marker;
+            if (at >= 0 && at < track) row[at] = row[at] == Bar ? MarkerOnBar : Marker;
             string label = $"{i + 1} {ResultText.Clip(name, NameWidth - 3)}";
             lines.Add(label.PadRight(NameWidth) + row + " " + Verdict(range));
         }

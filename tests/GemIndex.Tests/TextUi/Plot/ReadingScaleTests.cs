@@ -20,7 +20,7 @@ public class ReadingScaleTests
     private static string Track(string row, int width) => row.Substring(ReadingScale.NameWidth, width - ReadingScale.NameWidth - ReadingScale.VerdictWidth);
 
     private static (int Marker, int First, int Last) Positions(string track) =>
-        (track.IndexOf(ReadingScale.Marker), track.IndexOf(ReadingScale.Bar), track.LastIndexOf(ReadingScale.Bar));
+        (track.IndexOfAny([ReadingScale.Marker, ReadingScale.MarkerOnBar]), track.IndexOf(ReadingScale.Bar), track.LastIndexOf(ReadingScale.Bar));
 
     [Theory]
     [InlineData(76)]
@@ -32,8 +32,10 @@ public class ReadingScaleTests
         (int at, int first, int last) = Positions(Track(lines[2], width));
         Assert.True(at >= first && at <= last, lines[2]);
         Assert.True(first < at && at < last, lines[2]);   // bar on both sides: the marker sits well inside
+        Assert.Equal(ReadingScale.MarkerOnBar, Track(lines[2], width)[at]);
         (at, first, last) = Positions(Track(lines[3], width));
         Assert.True(at >= 0 && at < first, lines[3]);      // reading left of the higher range
+        Assert.Equal(ReadingScale.Marker, Track(lines[3], width)[at]);
         (at, first, last) = Positions(Track(lines[4], width));
         Assert.True(at > last && last >= 0, lines[4]);     // reading right of the lower range
     }
@@ -42,9 +44,17 @@ public class ReadingScaleTests
     public void The_marker_is_in_the_same_column_on_every_row()
     {
         IReadOnlyList<string> lines = Scale().Render(76);
-        int[] columns = [.. lines.Skip(1).Select(l => l.IndexOf(ReadingScale.Marker, ReadingScale.NameWidth))];
+        int[] columns = [.. lines.Skip(1).Select(l => l.IndexOfAny([ReadingScale.Marker, ReadingScale.MarkerOnBar], ReadingScale.NameWidth))];
         Assert.All(columns, c => Assert.Equal(columns[0], c));
         Assert.True(columns[0] > ReadingScale.NameWidth);
+    }
+
+    [Fact]
+    public void A_range_one_cell_wide_stays_visible_under_the_marker()
+    {
+        var scale = new ReadingScale("birefringence", "0.000", 0.0094, 0.001, ScaleModel.WidestBirefringence, [("point", new PropertyRange(0.009, 0.009))]);
+        string track = Track(scale.Render(76)[2], 76);
+        Assert.True(track.Contains(ReadingScale.MarkerOnBar) || (track.Contains(ReadingScale.Bar) && track.Contains(ReadingScale.Marker)), track);
     }
 
     [Fact]
