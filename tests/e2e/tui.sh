@@ -58,6 +58,21 @@ until screen | grep -qE "^.*│1 (rock crystal|quartz|synthetic colo)" && ! scre
 done
 screen | grep -qF "n 1.544 – 1.553" || fail "the derived indices are not shown"
 echo "---- 80x24 after entering the stone ----"; screen
+# Scales (Ctrl+R): the readings against the top candidates' ranges.
+keys C-r
+wait_for "lowest index"
+wait_for "birefringence"
+screen | grep -qE "^.1 (rock crystal|quartz|synthetic co).*=#=.* in " || fail "the first candidate's range does not hold the reading on the scales"
+echo "---- 80x24 scales ----"; screen
+keys Escape
+# Export (Ctrl+E): three reports beside the workbook, named after the reference.
+keys C-e
+wait_for "Reports written"
+for ext in md html json; do
+  [[ -s "$tmp/reports/e2e_ring.$ext" ]] || fail "no $tmp/reports/e2e_ring.$ext"
+  grep -qF "e2e ring" "$tmp/reports/e2e_ring.$ext" || fail "e2e_ring.$ext does not name the stone"
+done
+keys Enter
 keys C-q
 wait_for "EXIT=0" 15
 
@@ -72,4 +87,4 @@ keys F2
 wait_for "colourless"
 keys C-q
 wait_for "EXIT=0" 15
-echo "PASS tui e2e: stone entered, identified, saved and reopened intact"
+echo "PASS tui e2e: stone entered, identified, scaled, exported, saved and reopened intact"

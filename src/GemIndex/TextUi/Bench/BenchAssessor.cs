@@ -16,6 +16,9 @@ internal sealed partial class BenchAssessor(Identifier? identifier)
 
     private const int MostRetries = 40;
 
+    /// <summary>False when built without a catalogue (nothing is ranked then).</summary>
+    public bool HasCatalogue => identifier is not null;
+
     public BenchAssessment Assess(BenchSnapshot form)
     {
         var errors = new Dictionary<string, string>();

@@ -64,6 +64,9 @@ internal sealed class BenchModel
         : double.TryParse(_steps[^1].Rotation, NumberStyles.Float, CultureInfo.InvariantCulture, out double last)
             ? ((last + RotationStepDegrees) % 360).ToString("0.##", CultureInfo.InvariantCulture) : "";
 
+    /// <summary>Bumps <see cref="Version"/> without an edit, so that results worked out before (with an older catalogue) count as stale.</summary>
+    public void Renew() => Version++;
+
     public BenchSnapshot Snapshot() => new(StoneId, Version, _texts, _choices, _steps);
 
     /// <summary>Fills the form from a stored stone; bench settings (precision, calibration) are kept.</summary>

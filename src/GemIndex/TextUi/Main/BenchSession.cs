@@ -11,6 +11,8 @@ namespace GemIndex.Cli.TextUi.Main;
 /// </summary>
 internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assessor, Action<Action> toUi)
 {
+    private volatile BenchAssessor _assessor = assessor;
+
     public const string PrecisionSetting = "refractometer.precision";
     public const string CalibrationSetting = "refractometer.calibration_offset";
 
@@ -70,7 +72,27 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     public Task Changed()
     {
         BenchSnapshot snapshot = Form.Snapshot();
-        Task task = Task.Run(() => Process(snapshot));
+        Task task = Task.Run(() => Process(snapshot, save: true));
+        _pending = Task.WhenAll(_pending, task);
+        return task;
+    }
+
+    /// <summary>Assesses a snapshot with the current catalogue (any thread; the assessor keeps no state).</summary>
+    public BenchAssessment Assess(BenchSnapshot snapshot) => _assessor.Assess(snapshot);
+
+    /// <summary>True once a catalogue is in use (see <see cref="UseAssessor"/>).</summary>
+    public bool HasCatalogue => _assessor.HasCatalogue;
+
+    /// <summary>
+    /// Swaps in the assessor with the catalogue (loaded in the background at start) and re-ranks the open stone (on the
+    /// UI thread). Nothing is saved: the form did not change, and any result still coming from the old assessor is stale.
+    /// </summary>
+    public Task UseAssessor(BenchAssessor ready)
+    {
+        _assessor = ready;
+        Form.Renew();
+        BenchSnapshot snapshot = Form.Snapshot();
+        Task task = Task.Run(() => Process(snapshot, save: false));
         _pending = Task.WhenAll(_pending, task);
         return task;
     }
@@ -78,13 +100,13 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     /// <summary>Waits for the background saves still running (at exit), at most five seconds.</summary>
     public bool Flush() => _pending.Wait(TimeSpan.FromSeconds(5));
 
-    private void Process(BenchSnapshot snapshot)
+    private void Process(BenchSnapshot snapshot, bool save)
     {
-        BenchAssessment assessment = assessor.Assess(snapshot);
-        string? problem = Save(snapshot, assessment);
+        BenchAssessment assessment = Assess(snapshot);
+        string? problem = save ? Save(snapshot, assessment) : SaveProblem;
         toUi(() =>
         {
-            SaveProblem = problem;
+            if (save) SaveProblem = problem;
             if (Results.Accept(assessment)) Assessed?.Invoke();
         });
     }

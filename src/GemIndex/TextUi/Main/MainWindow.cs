@@ -1,10 +1,14 @@
 using GemIndex.Cli.TextUi.Bench;
 using GemIndex.Cli.TextUi.CatalogueBrowser;
+using GemIndex.Cli.TextUi.Export;
 using GemIndex.Cli.TextUi.Help;
 using GemIndex.Cli.TextUi.Plot;
 using GemIndex.Cli.TextUi.Results;
 using GemIndex.Cli.TextUi.Stones;
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Quantities;
+using GemIndex.Data.Batch;
+using Terminal.Gui.App;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
@@ -19,9 +23,9 @@ namespace GemIndex.Cli.TextUi.Main;
 internal sealed class MainWindow : Window
 {
     public const int FormWidth = 44;
-    private const string GlobalKeys = "F1 help F2-5 pages F6 plot F7 catalogue F8 stones F9 detail ^N new ^Q quit";
+    private const string GlobalKeys = "F1 help F6 plot ^R scales F7 gems F8 stones F9 detail ^E export ^N new ^Q quit";
     private readonly BenchSession _session;
-    private readonly IReadOnlyList<Material> _catalogue;
+    private IReadOnlyList<Material> _catalogue;
     private readonly Label _pageBar;
     private readonly FrameView _left;
     private readonly Label _keyLine;
@@ -50,6 +54,7 @@ internal sealed class MainWindow : Window
         _keyLine = new Label { Y = Pos.AnchorEnd(1), Width = Dim.Fill() };
         Add(_pageBar, _left, Results, _keyLine);
         Wire();
+        FreeExportKey(this);
         session.Assessed += ShowAssessment;
         Results.DetailRequested += ShowDetail;
         KeyDown += OnGlobalKey;
@@ -57,6 +62,31 @@ internal sealed class MainWindow : Window
     }
 
     public IReadOnlyList<BenchPage> Pages { get; }
+
+    /// <summary>Says in the identification panel that the catalogue is loading, or why it could not be loaded.</summary>
+    public void ShowCatalogueState(string text, string? reason = null)
+    {
+        _session.Results.Waiting = text;
+        _session.Results.WaitingReason = reason;
+        Results.Refresh();
+    }
+
+    /// <summary>Hands over the catalogue loaded in the background: the browser gets it and the open stone is re-ranked.</summary>
+    public void UseCatalogue(IReadOnlyList<Material> catalogue, BenchAssessor assessor)
+    {
+        _catalogue = catalogue;
+        _session.Results.Waiting = null;
+        _session.Results.WaitingReason = null;
+        Results.Refresh();
+        _session.UseAssessor(assessor);
+    }
+
+    /// <summary>A text field takes Ctrl+E as "end of line" (End does the same): let it reach the window as "export".</summary>
+    private static void FreeExportKey(View view)
+    {
+        if (view is TextField field) field.KeyBindings.Remove(Key.E.WithCtrl);
+        foreach (View sub in view.SubViews) FreeExportKey(sub);
+    }
 
     public RefractometerPage Refractometer => (RefractometerPage)Pages[1];
 
@@ -177,14 +207,51 @@ internal sealed class MainWindow : Window
         else if (key == Key.F4) ShowPage(2);
         else if (key == Key.F5) ShowPage(3);
         else if (key == Key.F6) EdgePlotView.Show(App!, new EdgePlotModel(_session.Results.Latest?.Readings.Refractometer?.Readings ?? []));
+        else if (key == Key.R.WithCtrl) ScaleView.Show(App!, new ScaleModel(_session.Results.Latest));
+        else if (key == Key.F7 && _catalogue.Count == 0) MessageBox.Query(App!, "Catalogue", _session.Results.WaitingReason ?? _session.Results.Waiting ?? "The catalogue is empty.", "OK");
         else if (key == Key.F7) CatalogueBrowserView.Show(App!, new CatalogueBrowserModel(_catalogue));
         else if (key == Key.F8) ShowStones();
         else if (key == Key.F9) ShowDetail(Results.SelectedCandidate);
+        else if (key == Key.E.WithCtrl) Export();
         else if (key == Key.N.WithCtrl) { _session.New(); FillFromModel(); ShowPage(0); }
         else if (key == Key.Q.WithCtrl) App!.RequestStop();
         else if (key == Key.Esc) { }                       // Esc quits the application by default: keep the bench open
         else return;
         key.Handled = true;
+    }
+
+    /// <summary>Writes the open stone's reports beside the workbook off the UI thread, then shows where they went (or why not).</summary>
+    private void Export()
+    {
+        IApplication app = App!;
+        BenchSnapshot snapshot = _session.Form.Snapshot();
+        string workbook = _session.Workbook.Path;
+        _keyLine.Text = "writing the reports…";
+        _ = Task.Run(() =>
+        {
+            (string title, string text) = ExportNow(snapshot, workbook);
+            app.Invoke(() =>
+            {
+                ShowBars();
+                MessageBox.Query(app, title, text, "OK");
+            });
+        });
+    }
+
+    private (string Title, string Text) ExportNow(BenchSnapshot snapshot, string workbook)
+    {
+        try
+        {
+            BenchAssessment a = _session.Assess(snapshot);
+            if (a.Result is null)
+                return ("Nothing to export", "No identification yet: enter readings first" + (_session.HasCatalogue ? "." : " (the catalogue is still loading)."));
+            IReadOnlyList<string> paths = StoneReportFiles.Write(workbook, BenchModel.ToStoneSheet(snapshot, a.Readings), a.Result);
+            return ("Reports written", string.Join('\n', paths));
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or BatchInputException or QuantityOutOfRangeException)
+        {
+            return ("Export failed", $"The reports were not written to {StoneReportFiles.FolderFor(workbook)}:\n{e.Message}");
+        }
     }
 
     private void ShowStones()

@@ -8,9 +8,12 @@ using Terminal.Gui.App;
 
 namespace GemIndex.Cli.TextUi.Main;
 
-/// <summary>Opens the workbook and the catalogue, then runs the bench until Ctrl+Q; everything is saved as it is typed.</summary>
+/// <summary>Opens the workbook, draws the bench and reads the catalogue in the background, then runs until Ctrl+Q; everything is saved as it is typed.</summary>
 internal static class TextUiLauncher
 {
+    /// <summary>Shown in the identification panel until the catalogue is read.</summary>
+    public const string LoadingCatalogue = "loading catalogue…";
+
     public static int Run(string workbookPath, TextWriter error)
     {
         if (Console.IsInputRedirected || Console.IsOutputRedirected)
@@ -18,13 +21,8 @@ internal static class TextUiLauncher
             error.WriteLine("gemindex: the text UI needs a terminal; try 'gemindex --help'");
             return ExitCodes.NoTerminal;
         }
-        IReadOnlyList<Material> catalogue;
-        try { catalogue = MergedCatalogue.Load(CatalogueLocations.FromEnvironment()); }
-        catch (Exception e) when (e is CatalogueStoreException or CatalogueSchemaVersionException or CatalogueFormatException)
-        {
-            error.WriteLine($"gemindex: cannot load the catalogue: {e.Message}");
-            return ExitCodes.BadFile;
-        }
+        // Read the catalogue (the slow part of a start) while the workbook opens and the window is drawn.
+        Task<IReadOnlyList<Material>> loading = Task.Run(() => MergedCatalogue.Load(CatalogueLocations.FromEnvironment()));
         StoneWorkbook workbook;
         try { workbook = StoneWorkbook.Open(workbookPath, TimeProvider.System); }
         catch (WorkbookException e)
@@ -32,15 +30,37 @@ internal static class TextUiLauncher
             error.WriteLine("gemindex: " + e.Message);
             return ExitCodes.BadFile;
         }
+        string? catalogueProblem = null;
         using (workbook)
         {
             using IApplication app = Application.Create().Init();
-            var session = new BenchSession(workbook, new BenchAssessor(new Identifier(catalogue)), action => app.Invoke(action));
-            using var window = new MainWindow(session, catalogue);
+            var session = new BenchSession(workbook, new BenchAssessor(null), action => app.Invoke(action));
+            using var window = new MainWindow(session, []);
+            window.ShowCatalogueState(LoadingCatalogue);
             session.Start();
             window.FillFromModel();
+            _ = loading.ContinueWith(done =>
+            {
+                if (done.IsCompletedSuccessfully)
+                {
+                    var assessor = new BenchAssessor(new Identifier(done.Result));
+                    app.Invoke(() => window.UseCatalogue(done.Result, assessor));
+                    return;
+                }
+                Exception e = done.Exception?.InnerException ?? new InvalidOperationException("the catalogue load was cancelled");
+                catalogueProblem = e is CatalogueStoreException or CatalogueSchemaVersionException or CatalogueFormatException
+                    ? $"cannot load the catalogue: {e.Message}"
+                    : $"cannot load the catalogue ({e.GetType().Name}): {e.Message}";
+                string reason = catalogueProblem;
+                app.Invoke(() => window.ShowCatalogueState("!! no catalogue: nothing can be ranked (readings are still saved)", reason));
+            }, TaskScheduler.Default);
             app.Run(window);
             session.Flush();
+        }
+        if (catalogueProblem is not null)
+        {
+            error.WriteLine("gemindex: " + catalogueProblem);
+            return ExitCodes.BadFile;
         }
         return ExitCodes.Ok;
     }

@@ -22,15 +22,23 @@ internal sealed class ResultsModel
 
     public bool NoGoodMatch => Latest?.Result?.NoGoodMatch ?? false;
 
-    public string Headline => Latest?.Result is { } r ? ResultText.Headline(r)
+    /// <summary>Shown instead of the headline while there is nothing to rank against ("loading catalogue…", or why it failed).</summary>
+    public string? Waiting { get; set; }
+
+    /// <summary>Why <see cref="Waiting"/> lasts (a catalogue that failed to load), shown in full above the details.</summary>
+    public string? WaitingReason { get; set; }
+
+    public string Headline => Waiting is { } w ? w
+        : Latest?.Result is { } r ? ResultText.Headline(r)
         : Latest is null ? "working…" : "Enter readings: the candidates appear here.";
 
     public string CandidateHeader => ResultText.CandidateHeader(NameWidth);
 
     public IReadOnlyList<string> CandidateLines => [.. Candidates.Take(8).Select((c, i) => ResultText.Candidate(i + 1, c, NameWidth))];
 
-    public IReadOnlyList<string> DetailLines => Latest is not { } a ? [] :
+    public IReadOnlyList<string> DetailLines => Latest is not { } a ? (WaitingReason is { } w ? [w] : []) :
     [
+        .. WaitingReason is { } reason ? [reason] : Array.Empty<string>(),
         .. ResultText.Derived(a),
         .. a.Result is { } r ? ResultText.NextTest(r.NextTest) : [],
         .. (a.Result?.Warnings ?? []).Select(w => "! " + w),

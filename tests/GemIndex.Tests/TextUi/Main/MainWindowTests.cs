@@ -133,4 +133,82 @@ public sealed class MainWindowTests : IDisposable
         Assert.Contains("[doubly refractive]", app.Driver!.ToString()!);
         app.End(token);
     }
+
+    [Theory]
+    [InlineData(80, 24, 3)]
+    [InlineData(100, 30, 5)]
+    [InlineData(80, 20, 2)]
+    public void The_scales_screen_shows_each_reading_against_the_top_candidates(int columns, int rows, int candidates)
+    {
+        using IApplication app = Headless.Start(columns, rows);
+        using var window = new MainWindow(_session, TestMaterials.All);
+        _session.Start();
+        window.FillFromModel();
+        foreach (var (rotation, high) in new[] { ("0", "1.553"), ("45", "1.551"), ("90", "1.548"), ("135", "1.551") })
+            _session.Form.PutStep(_session.Form.Steps.Count, new StepText(rotation, "1.544", high));
+        _session.Form.SetText(BenchFields.Sg, "2.65");
+        _session.Changed();
+        Settle();
+        using var scales = new GemIndex.Cli.TextUi.Plot.ScaleView(new GemIndex.Cli.TextUi.Plot.ScaleModel(_session.Results.Latest));
+        SessionToken token = app.Begin(scales)!;
+        app.LayoutAndDraw();
+        string screen = app.Driver!.ToString()!;
+        Assert.Contains("lowest index", screen);
+        Assert.Contains("birefringence", screen);
+        Assert.Contains("SG", screen);
+        Assert.Contains("1.544 ± ", screen);
+        Assert.Contains("1 quartz", screen);
+        int shown = Math.Min(candidates, _session.Results.Candidates.Count);   // the test catalogue holds four materials
+        string[] lines = screen.Split('\n');
+        int RowsOfRank(int rank) => lines.Count(l => System.Text.RegularExpressions.Regex.IsMatch(l, $@"^\W*{rank} \S.*\.\.\..* (in|near|out|-)\W*$"));
+        Assert.Equal(3, RowsOfRank(shown));
+        Assert.Equal(0, RowsOfRank(shown + 1));
+        Assert.Contains(GemIndex.Cli.TextUi.Plot.ScaleModel.Legend, screen);   // everything fits: the legend is the last line
+        Assert.Equal(3, lines.Count(l => l.Contains("1 quartz", StringComparison.Ordinal)));
+        app.End(token);
+    }
+
+    [Fact]
+    public void Ctrl_E_is_left_to_the_window_as_export_rather_than_taken_by_the_text_fields()
+    {
+        using var window = new MainWindow(_session, TestMaterials.All);
+        Assert.False(window.Refractometer.Low.KeyBindings.TryGet(Key.E.WithCtrl, out _));
+        Assert.True(window.Refractometer.Low.KeyBindings.TryGet(Key.End, out _));   // End still moves to the end of the line
+        Assert.Contains("^E export", window.KeyLine);
+    }
+
+    [Fact]
+    public void The_bench_draws_while_the_catalogue_loads_and_ranks_once_it_arrives()
+    {
+        var session = new BenchSession(_workbook, new BenchAssessor(null), _uiQueue.Enqueue);
+        void SettleThis()
+        {
+            Assert.True(session.Flush());
+            while (_uiQueue.TryDequeue(out Action? a)) a();
+        }
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(session, []);
+        window.ShowCatalogueState(TextUiLauncher.LoadingCatalogue);
+        session.Start();
+        window.FillFromModel();
+        foreach (var (rotation, high) in new[] { ("0", "1.553"), ("45", "1.551"), ("90", "1.548") })
+            session.Form.PutStep(session.Form.Steps.Count, new StepText(rotation, "1.544", high));
+        session.Changed();
+        SessionToken token = app.Begin(window)!;
+        SettleThis();
+        app.LayoutAndDraw();
+        string screen = app.Driver!.ToString()!;
+        Assert.Contains(TextUiLauncher.LoadingCatalogue, screen);
+        Assert.DoesNotContain("1 quartz", screen);
+        Assert.Contains("0°  1.544    1.553", screen);   // the form works meanwhile
+
+        window.UseCatalogue(TestMaterials.All, new BenchAssessor(new Identifier(TestMaterials.All)));
+        SettleThis();
+        app.LayoutAndDraw();
+        screen = app.Driver!.ToString()!;
+        Assert.DoesNotContain(TextUiLauncher.LoadingCatalogue, screen);
+        Assert.Contains("1 quartz", screen);
+        Assert.Contains("Best: quartz", screen);
+        app.End(token);
+    }
 }

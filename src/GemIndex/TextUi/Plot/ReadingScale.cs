@@ -1,0 +1,110 @@
+using System.Globalization;
+using System.Text;
+using GemIndex.Core.Catalogue;
+using GemIndex.Cli.TextUi.Results;
+
+namespace GemIndex.Cli.TextUi.Plot;
+
+/// <summary>
+/// One measured quantity drawn as a horizontal character scale against the candidates' ranges: the reading's row shows
+/// the value as '*' with its ± standard uncertainty as '&lt;---&gt;', each candidate's row shows its range as '=' on a '.'
+/// track with the value's '*' on top ('#' where it falls on the bar), and a word says whether the reading falls in the range. Shapes only, no colour.
+/// </summary>
+/// <param name="title">What is measured, e.g. "lowest index".</param>
+/// <param name="format">Number format of the axis labels and the reading.</param>
+/// <param name="widest">The widest window shown; wider ranges are cut at the edges and marked '&lt;' or '&gt;'.</param>
+internal sealed class ReadingScale(string title, string format, double value, double uncertainty, double widest,
+    IReadOnlyList<(string Name, PropertyRange? Range)> candidates)
+{
+    public const char Track = '.';
+    public const char Bar = '=';
+    public const char Marker = '*';
+    /// <summary>The marker where it falls on a candidate's bar (so a bar one cell wide does not vanish under it).</summary>
+    public const char MarkerOnBar = '#';
+    public const int NameWidth = ResultsModel.NameWidth + 2;
+    public const int VerdictWidth = 5;
+    public const int NarrowestTrack = 12;
+
+    /// <summary>Said when the range holds the value.</summary>
+    public const string In = "in";
+    /// <summary>Said when the range misses the value but comes within two standard uncertainties of it.</summary>
+    public const string Near = "near";
+    /// <summary>Said when the range is further away.</summary>
+    public const string Out = "out";
+
+    public string Title => title;
+    public double Value => value;
+    public IReadOnlyList<(string Name, PropertyRange? Range)> Candidates => candidates;
+
+    /// <summary>In, near or out (see the constants); "-" when the candidate has no range for this quantity.</summary>
+    public string Verdict(PropertyRange? range) => range is not { } r ? "-"
+        : r.Contains(value) ? In
+        : value + 2 * uncertainty >= r.Minimum && value - 2 * uncertainty <= r.Maximum ? Near
+        : Out;
+
+    /// <summary>The window shown: every range and the reading ± 2u, with a small margin, at most <c>widest</c> wide around the value.</summary>
+    public (double Low, double High) Window()
+    {
+        double low = value - 2 * uncertainty, high = value + 2 * uncertainty;
+        foreach ((_, PropertyRange? r) in candidates)
+            if (r is { } range) { low = Math.Min(low, range.Minimum); high = Math.Max(high, range.Maximum); }
+        double margin = Math.Max((high - low) * 0.05, widest / 200);
+        (low, high) = (low - margin, high + margin);
+        if (high - low > widest)
+        {
+            double left = Math.Clamp(value - widest / 2, low, high - widest);
+            (low, high) = (left, left + widest);
+        }
+        return (low, high);
+    }
+
+    /// <summary>The lines of this scale for <paramref name="width"/> columns: title with the axis labels, the reading (value ± u), one row per candidate.</summary>
+    public IReadOnlyList<string> Render(int width)
+    {
+        int track = Math.Max(NarrowestTrack, width - NameWidth - VerdictWidth);
+        (double low, double high) = Window();
+        int Column(double x) => (int)Math.Round((x - low) / (high - low) * (track - 1), MidpointRounding.AwayFromZero);
+        string Number(double x) => x.ToString(format, CultureInfo.InvariantCulture);
+
+        var lines = new List<string> { ResultText.Clip(title, NameWidth - 1).PadRight(NameWidth) + Axis(track, Number(low), Number((low + high) / 2), Number(high)) };
+        var reading = new StringBuilder(new string(' ', track));
+        int from = Math.Max(0, Column(value - uncertainty)), to = Math.Min(track - 1, Column(value + uncertainty));
+        for (int c = from; c <= to; c++) reading[c] = '-';
+        if (to > from) { reading[from] = '<'; reading[to] = '>'; }
+        int at = Column(value);
+        if (at >= 0 && at < track) reading[at] = Marker;
+        lines.Add(ResultText.Clip($"{Number(value)} ± {Number(uncertainty)}", NameWidth - 1).PadRight(NameWidth) + reading);
+        for (int i = 0; i < candidates.Count; i++)
+        {
+            (string name, PropertyRange? range) = candidates[i];
+            var row = new StringBuilder(new string(Track, track));
+            if (range is { } r)
+            {
+                int left = Column(r.Minimum), right = Column(r.Maximum);
+                for (int c = Math.Max(0, left); c <= Math.Min(track - 1, right); c++) row[c] = Bar;
+                if (left < 0) row[0] = '<';
+                if (right >= track) row[track - 1] = '>';
+                if (right < 0) row[0] = '<';
+                if (left >= track) row[track - 1] = '>';
+            }
+            if (at >= 0 && at < track) row[at] = row[at] == Bar ? MarkerOnBar : Marker;
+            string label = $"{i + 1} {ResultText.Clip(name, NameWidth - 3)}";
+            lines.Add(label.PadRight(NameWidth) + row + " " + Verdict(range));
+        }
+        return lines;
+    }
+
+    /// <summary>Three labels: left-aligned at the start, centred in the middle, right-aligned at the end of the track.</summary>
+    private static string Axis(int track, string left, string middle, string right)
+    {
+        var axis = new StringBuilder(new string(' ', track));
+        void Put(int start, string text)
+        {
+            for (int i = 0; i < text.Length && start + i < track; i++) if (start + i >= 0) axis[start + i] = text[i];
+        }
+        Put(0, left);
+        if (track >= left.Length + middle.Length + right.Length + 4) Put((track - middle.Length) / 2, middle);
+        Put(track - right.Length, right);
+        return axis.ToString();
+    }
+}

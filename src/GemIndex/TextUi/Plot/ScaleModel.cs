@@ -1,0 +1,69 @@
+using GemIndex.Cli.TextUi.Bench;
+using GemIndex.Core.Catalogue;
+using GemIndex.Core.Identification;
+using GemIndex.Core.Readings;
+
+namespace GemIndex.Cli.TextUi.Plot;
+
+/// <summary>
+/// The scales screen: the lowest index, the birefringence and the SG as read, each against the ranges of the top
+/// candidates (<see cref="ReadingScale"/>), as many candidates as the height allows (between one and five).
+/// </summary>
+internal sealed class ScaleModel
+{
+    public const int MostCandidates = 5;
+
+    /// <summary>Widest windows shown: a refractometer's useful span, a typical birefringence span, and SG 1.5 either side.</summary>
+    public const double WidestIndex = 0.12, WidestBirefringence = 0.06, WidestGravity = 1.5;
+
+    public const string Legend = "* reading (# on a range)  <-> ± std. uncertainty u  === range  near: 2u";
+
+    private readonly IReadOnlyList<Func<int, ReadingScale>> _scales;
+
+    public ScaleModel(BenchAssessment? assessment)
+    {
+        var scales = new List<Func<int, ReadingScale>>();
+        IReadOnlyList<Material> top = [.. (assessment?.Result?.Candidates ?? []).Take(MostCandidates).Select(c => c.Material)];
+        if (top.Count > 0 && assessment is { } a)
+        {
+            if (a.Result?.Series?.Interpretations.MaxBy(i => i.Weight) is SeriesInterpretation best)
+            {
+                scales.Add(n => new ReadingScale("lowest index", "0.000", best.Lowest.Value, best.Lowest.StandardUncertainty, WidestIndex,
+                    [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)m.Indices.Lowest))]));
+                if (best.Birefringence.Value > 0)
+                    scales.Add(n => new ReadingScale("birefringence", "0.000", best.Birefringence.Value, best.Birefringence.StandardUncertainty, WidestBirefringence,
+                        [.. top.Take(n).Select(m => (m.Name, m.Birefringence ?? new PropertyRange(0, 0)))]));
+            }
+            if (a.SpecificGravity is { } sg)
+                scales.Add(n => new ReadingScale("SG", "0.00", sg.Value, sg.StandardUncertainty, WidestGravity,
+                    [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)m.SpecificGravity))]));
+        }
+        _scales = scales;
+    }
+
+    public bool IsEmpty => _scales.Count == 0;
+
+    /// <summary>How many candidates per scale fit in <paramref name="height"/> rows (two rows, the candidates and a blank line per scale, then the legend).</summary>
+    public int CandidatesFor(int height)
+    {
+        for (int n = MostCandidates; n > 1; n--)
+            if (_scales.Count * (3 + n) + 1 <= height) return n;
+        return 1;
+    }
+
+    public IReadOnlyList<ReadingScale> Scales(int candidates) => [.. _scales.Select(s => s(candidates))];
+
+    /// <summary>Every line of the screen for the given size.</summary>
+    public IReadOnlyList<string> Lines(int width, int height)
+    {
+        if (IsEmpty) return ["No reading to scale yet: the scales need a rotation series (F3) or an SG (F4), and a ranked candidate."];
+        var lines = new List<string>();
+        foreach (ReadingScale scale in Scales(CandidatesFor(height)))
+        {
+            lines.AddRange(scale.Render(width));
+            lines.Add("");
+        }
+        lines.Add(Legend);
+        return lines;
+    }
+}

@@ -1,0 +1,128 @@
+using GemIndex.Cli.TextUi.Bench;
+using GemIndex.Cli.TextUi.Plot;
+using GemIndex.Core.Catalogue;
+using GemIndex.Core.Identification;
+
+namespace GemIndex.Tests.TextUi.Plot;
+
+public class ReadingScaleTests
+{
+    // Invented ranges around an invented reading of 1.544 ± 0.001; only their positions matter here.
+    private static ReadingScale Scale(double value = 1.544, double u = 0.001) => new("lowest index", "0.000", value, u, ScaleModel.WidestIndex,
+    [
+        ("holds it", new PropertyRange(1.540, 1.548)),
+        ("above it", new PropertyRange(1.560, 1.570)),
+        ("just below", new PropertyRange(1.530, 1.5425)),
+        ("no range", null),
+    ]);
+
+    /// <summary>The track part of a candidate row (after the name column, before the verdict).</summary>
+    private static string Track(string row, int width) => row.Substring(ReadingScale.NameWidth, width - ReadingScale.NameWidth - ReadingScale.VerdictWidth);
+
+    private static (int Marker, int First, int Last) Positions(string track) =>
+        (track.IndexOfAny([ReadingScale.Marker, ReadingScale.MarkerOnBar]), track.IndexOf(ReadingScale.Bar), track.LastIndexOf(ReadingScale.Bar));
+
+    [Theory]
+    [InlineData(76)]
+    [InlineData(96)]
+    [InlineData(40)]
+    public void The_marker_falls_inside_a_range_that_holds_the_value_and_outside_one_that_does_not(int width)
+    {
+        IReadOnlyList<string> lines = Scale().Render(width);
+        (int at, int first, int last) = Positions(Track(lines[2], width));
+        Assert.True(at >= first && at <= last, lines[2]);
+        Assert.True(first < at && at < last, lines[2]);   // bar on both sides: the marker sits well inside
+        Assert.Equal(ReadingScale.MarkerOnBar, Track(lines[2], width)[at]);
+        (at, first, last) = Positions(Track(lines[3], width));
+        Assert.True(at >= 0 && at < first, lines[3]);      // reading left of the higher range
+        Assert.Equal(ReadingScale.Marker, Track(lines[3], width)[at]);
+        (at, first, last) = Positions(Track(lines[4], width));
+        Assert.True(at > last && last >= 0, lines[4]);     // reading right of the lower range
+    }
+
+    [Fact]
+    public void The_marker_is_in_the_same_column_on_every_row()
+    {
+        IReadOnlyList<string> lines = Scale().Render(76);
+        int[] columns = [.. lines.Skip(1).Select(l => l.IndexOfAny([ReadingScale.Marker, ReadingScale.MarkerOnBar], ReadingScale.NameWidth))];
+        Assert.All(columns, c => Assert.Equal(columns[0], c));
+        Assert.True(columns[0] > ReadingScale.NameWidth);
+    }
+
+    [Fact]
+    public void A_range_one_cell_wide_stays_visible_under_the_marker()
+    {
+        var scale = new ReadingScale("birefringence", "0.000", 0.0094, 0.001, ScaleModel.WidestBirefringence, [("point", new PropertyRange(0.009, 0.009))]);
+        string track = Track(scale.Render(76)[2], 76);
+        Assert.True(track.Contains(ReadingScale.MarkerOnBar) || (track.Contains(ReadingScale.Bar) && track.Contains(ReadingScale.Marker)), track);
+    }
+
+    [Fact]
+    public void The_verdicts_say_in_near_and_out()
+    {
+        IReadOnlyList<string> lines = Scale().Render(76);
+        Assert.EndsWith(" " + ReadingScale.In, lines[2]);
+        Assert.EndsWith(" " + ReadingScale.Out, lines[3]);
+        Assert.EndsWith(" " + ReadingScale.Near, lines[4]);   // 1.5425 is within 2 × 0.001 of 1.544
+        Assert.EndsWith(" -", lines[5]);
+        Assert.StartsWith("4 no range", lines[5]);
+        Assert.DoesNotContain(ReadingScale.Bar, Track(lines[5], 76));
+    }
+
+    [Theory]
+    [InlineData(76)]
+    [InlineData(96)]
+    public void Every_line_fits_the_width_and_the_reading_shows_its_uncertainty(int width)
+    {
+        IReadOnlyList<string> lines = Scale(u: 0.004).Render(width);
+        Assert.All(lines, l => Assert.True(l.Length <= width, $"{l.Length}: {l}"));
+        Assert.StartsWith("lowest index", lines[0]);
+        Assert.Contains("1.544 ± 0.004", lines[1]);
+        string reading = Track(lines[1], width);
+        Assert.True(reading.IndexOf('<') < reading.IndexOf('*') && reading.IndexOf('*') < reading.IndexOf('>'), reading);
+    }
+
+    [Fact]
+    public void A_range_wider_than_the_window_is_cut_and_marked_at_the_edges()
+    {
+        var scale = new ReadingScale("SG", "0.00", 2.65, 0.01, ScaleModel.WidestGravity,
+            [("wide glass", new PropertyRange(1.0, 6.0)), ("far away", new PropertyRange(5.5, 5.6))]);
+        IReadOnlyList<string> lines = scale.Render(76);
+        string wide = Track(lines[2], 76), far = Track(lines[3], 76);
+        Assert.Equal('<', wide[0]);
+        Assert.Equal('>', wide[^1]);
+        Assert.Equal('>', far[^1]);
+        Assert.True(scale.Window().High - scale.Window().Low <= ScaleModel.WidestGravity + 1e-12);
+    }
+
+    [Fact]
+    public void The_model_scales_index_birefringence_and_SG_of_a_quartz_like_stone()
+    {
+        var form = new BenchModel();
+        // An invented quartz-like series (values from memory for quartz), as in BenchAssessorTests.
+        foreach (var (rotation, high) in new[] { ("0", "1.553"), ("45", "1.551"), ("90", "1.548"), ("135", "1.551"), ("180", "1.553") })
+            form.PutStep(form.Steps.Count, new StepText(rotation, "1.544", high));
+        form.SetText(BenchFields.Sg, "2.65");
+        BenchAssessment a = new BenchAssessor(new Identifier(TestMaterials.All)).Assess(form.Snapshot());
+        var model = new ScaleModel(a);
+
+        IReadOnlyList<ReadingScale> scales = model.Scales(3);
+        Assert.Equal(["lowest index", "birefringence", "SG"], scales.Select(s => s.Title));
+        Assert.Equal("quartz", scales[0].Candidates[0].Name);
+        Assert.Equal(ReadingScale.In, scales[2].Verdict(scales[2].Candidates[0].Range));   // SG 2.65 in quartz's 2.65-2.66
+        Assert.Equal(ReadingScale.Out, scales[2].Verdict(TestMaterials.All[1].SpecificGravity));   // not in spinel's 3.58-3.61
+        Assert.Equal(3, model.CandidatesFor(20));   // 80x24: three scales of three candidates
+        Assert.Equal(5, model.CandidatesFor(26));   // 100x30
+        IReadOnlyList<string> screen = model.Lines(76, 20);
+        Assert.True(screen.Count <= 20, string.Join('\n', screen));
+        Assert.Equal(ScaleModel.Legend, screen[^1]);
+    }
+
+    [Fact]
+    public void Without_readings_the_model_says_what_it_needs()
+    {
+        var model = new ScaleModel(null);
+        Assert.True(model.IsEmpty);
+        Assert.Contains("F3", Assert.Single(model.Lines(76, 20)));
+    }
+}
