@@ -24,6 +24,9 @@ internal sealed class MainWindow : Window
 {
     public const int FormWidth = 44;
     private const string GlobalKeys = "F1 help F6 plot ^R scales F7 gems F8 stones F9 detail ^E export ^N new ^Q quit";
+
+    // At 80 columns the page's own keys come first and the rest of the line keeps the keys used most; F1 lists them all.
+    private const string ShortGlobalKeys = "F1 keys F6 plot F8 stones F9 detail ^E export ^Q quit";
     private readonly BenchSession _session;
     private IReadOnlyList<Material> _catalogue;
     private readonly Label _pageBar;
@@ -125,7 +128,14 @@ internal sealed class MainWindow : Window
     {
         _pageBar.Text = string.Join(" ", PageNames.Select((n, i) => i == CurrentPage ? $"[{n}]" : $" {n} "))
             + $"  {_session.Form.Text(BenchFields.Reference)}";
-        _keyLine.Text = _session.SaveProblem ?? GlobalKeys;
+        _keyLine.Text = _session.SaveProblem ?? KeysFor(Pages[CurrentPage]);
+    }
+
+    /// <summary>The key line: the page's own keys, then the window's (all of them when the screen is wide enough).</summary>
+    private string KeysFor(BenchPage page)
+    {
+        string full = $"{page.Keys} │ {GlobalKeys}";
+        return full.Length <= Math.Max(80, Viewport.Width) - 1 ? full : $"{page.Keys} │ {ShortGlobalKeys}";
     }
 
     private void Wire()
