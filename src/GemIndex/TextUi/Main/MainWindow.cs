@@ -26,7 +26,7 @@ internal sealed class MainWindow : Window
     private const string GlobalKeys = "F1 help F6 plot ^R scales F7 gems F8 stones F9 detail ^E export ^N new ^Q quit";
 
     // At 80 columns the page's own keys come first and the rest of the line keeps the keys used most; F1 lists them all.
-    private const string ShortGlobalKeys = "F1 keys F6 plot F8 stones F9 detail ^E export ^Q quit";
+    private const string ShortGlobalKeys = "F1 keys F6 plot F9 detail ^E export ^Q quit";
     private readonly BenchSession _session;
     private IReadOnlyList<Material> _catalogue;
     private readonly Label _pageBar;
