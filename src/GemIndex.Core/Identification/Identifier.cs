@@ -31,6 +31,25 @@ public sealed class Identifier
         _logPriorNotInCatalogue = Math.Log(BroadDensities.NotInCataloguePrior);
     }
 
+    /// <summary>
+    /// Material indices best first. Ties (materials the evidence cannot tell apart) keep the catalogue's order, so
+    /// answers are reproducible: a fast sort on the keys, then each run of equal keys put back in index order.
+    /// </summary>
+    private static int[] Ranked(double[] posterior)
+    {
+        int n = posterior.Length;
+        int[] order = new int[n];
+        double[] keys = new double[n];
+        for (int i = 0; i < n; i++) { order[i] = i; keys[i] = -posterior[i]; }
+        Array.Sort(keys, order);
+        for (int start = 0, end; start < n; start = end)
+        {
+            for (end = start + 1; end < n && keys[end] == keys[start]; end++) { }
+            if (end - start > 1) Array.Sort(order, start, end - start);
+        }
+        return order;
+    }
+
     /// <summary>The catalogue ranked over.</summary>
     public IReadOnlyList<Material> Materials => _materials;
 
@@ -62,9 +81,7 @@ public sealed class Identifier
         for (int i = 0; i < n; i++) posterior[i] /= sum;
         double other = Math.Exp(logOther - max) / sum;
 
-        int[] order = [.. Enumerable.Range(0, n)];
-        // Ties (materials the evidence cannot tell apart) keep the catalogue's order, so answers are reproducible.
-        Array.Sort(order, (a, b) => posterior[a] != posterior[b] ? posterior[b].CompareTo(posterior[a]) : a.CompareTo(b));
+        int[] order = Ranked(posterior);
         var candidates = order.Take(Math.Clamp(maximumCandidates, 1, 1000)).Select((i, rank) => new RankedCandidate
         {
             Material = _materials[i],
