@@ -143,7 +143,16 @@ internal static class RefractometerEvidence
                 factor = m.Sign == OpticSign.Either ? 0.5 : h.Sign == m.Sign ? 1 - SignMisread : SignMisread;
                 return new(Index("ω", h.Constant!.Value.Value, h.Constant.Value.StandardUncertainty, indices.Omega!.Value, shift, shiftSigma, words), bire);
             }
-            if (m.OpticCharacter == OpticCharacter.Biaxial) factor = BiaxialLooksUniaxial;
+            if (m.OpticCharacter == OpticCharacter.Biaxial)
+            {
+                // A biaxial stone whose β lies within the constant band of α (or of γ) shows that edge constant on every
+                // facet: it looks uniaxial by nature, not by a rare orientation.
+                double band = RotationSeriesAnalysis.ConstantBandSigmas * sigma;
+                double gap = h.Sign == OpticSign.Negative
+                    ? indices.Gamma!.Value.Centre - indices.Beta!.Value.Centre
+                    : indices.Beta!.Value.Centre - indices.Alpha!.Value.Centre;
+                factor = gap <= band ? 1 : BiaxialLooksUniaxial;
+            }
             var constantRange = h.Sign == OpticSign.Negative ? indices.Highest : indices.Lowest;
             return new(Index(h.Sign == OpticSign.Negative ? "highest index" : "lowest index", h.Constant!.Value.Value, h.Constant.Value.StandardUncertainty, constantRange, shift, shiftSigma, words), bire);
         }
