@@ -6,7 +6,7 @@ using Color = Terminal.Gui.Drawing.Color;
 
 namespace GemIndex.Cli.TextUi.Main;
 
-/// <summary>NO_COLOR: black and white only; focus in reverse video, hot keys underlined. Errors stay readable through their "!" marks.</summary>
+/// <summary>NO_COLOR: black and white only; focus shown inverted, hot keys underlined. Errors stay readable through their "!" marks.</summary>
 internal static class Monochrome
 {
     public static bool Wanted => Environment.GetEnvironmentVariable("NO_COLOR") is { Length: > 0 };
