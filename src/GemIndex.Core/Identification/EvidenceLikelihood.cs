@@ -79,13 +79,22 @@ public static class EvidenceLikelihood
 
     private static void Polariscope(Material m, PolariscopeReaction seen, EvidenceAccumulator acc)
     {
-        IReadOnlyList<PolariscopeReaction> usual = m.Polariscope.Count > 0 ? m.Polariscope : DefaultReactions(m.OpticCharacter);
-        const double error = 0.015; // per wrong reaction: a skilled person still misreads now and then
-        double inList = (1 - 4 * error) / usual.Count;
-        double f = (usual.Contains(seen) ? inList : 0) + error;
-        acc.Add("polariscope", f, 0.25, f / (inList + error), robust: false);
+        var usual = UsualReactions(m);
+        double f = PolariscopeProbability(usual, seen);
+        acc.Add("polariscope", f, 0.25, f / PolariscopeProbability(usual, usual[0]), robust: false);
         if (acc.Explaining)
             acc.Say($"polariscope {Word(seen)}{(usual.Contains(seen) ? ", as expected" : $", where {string.Join(" or ", usual.Select(Word))} is usual")}");
+    }
+
+    /// <summary>The reactions the catalogue lists for the material, or those of its optic character when it lists none.</summary>
+    internal static IReadOnlyList<PolariscopeReaction> UsualReactions(Material m) =>
+        m.Polariscope.Count > 0 ? m.Polariscope : DefaultReactions(m.OpticCharacter);
+
+    /// <summary>P(reaction seen | usual reactions): 0.94 shared among the usual ones, 0.015 for each reaction (misreadings).</summary>
+    internal static double PolariscopeProbability(IReadOnlyList<PolariscopeReaction> usual, PolariscopeReaction seen)
+    {
+        const double error = 0.015; // per reaction: a skilled person still misreads now and then
+        return (usual.Contains(seen) ? (1 - 4 * error) / usual.Count : 0) + error;
     }
 
     private static readonly PolariscopeReaction[] DoublyRefractiveOnly = [PolariscopeReaction.DoublyRefractive];

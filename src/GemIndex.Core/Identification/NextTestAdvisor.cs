@@ -102,44 +102,23 @@ public static class NextTestAdvisor
         }
     }
 
+    // The outcome tables below are the likelihood's own (EvidenceLikelihood), so advice and ranking never disagree.
     private static IEnumerable<(long, double)> Polariscope(Material m)
     {
-        var usual = m.Polariscope.Count > 0 ? m.Polariscope : [DefaultReaction(m.OpticCharacter)];
-        for (int o = 0; o < 4; o++)
-            yield return (o, (usual.Contains((PolariscopeReaction)o) ? 0.94 / usual.Count : 0) + 0.015);
+        var usual = EvidenceLikelihood.UsualReactions(m);
+        for (int o = 0; o < 4; o++) yield return (o, EvidenceLikelihood.PolariscopeProbability(usual, (PolariscopeReaction)o));
     }
 
-    private static PolariscopeReaction DefaultReaction(OpticCharacter c) => c switch
-    {
-        OpticCharacter.Uniaxial or OpticCharacter.Biaxial => PolariscopeReaction.DoublyRefractive,
-        OpticCharacter.Aggregate => PolariscopeReaction.Aggregate,
-        _ => PolariscopeReaction.SinglyRefractive,
-    };
+    private static IEnumerable<(long, double)> Pleochroism(Material m) =>
+        EvidenceLikelihood.PleochroismRow(m.OpticCharacter, m.Pleochroism).Select((p, o) => ((long)o, p));
 
-    private static IEnumerable<(long, double)> Pleochroism(Material m)
-    {
-        // Same tables as the likelihood, through a sheet with one observation each.
-        foreach (PleochroismObservation o in Enum.GetValues<PleochroismObservation>())
-        {
-            var e = EvidenceLikelihood.Evaluate(m, new AnalysedSheet(new BenchSheet { Pleochroism = o }));
-            yield return ((long)o, Math.Exp(e.LogLikelihood));
-        }
-    }
+    private static IEnumerable<(long, double)> Dispersion(Material m) => m.Dispersion is { } d
+        ? EvidenceLikelihood.DispersionRow(EvidenceLikelihood.DispersionBand(d)).Select((p, o) => ((long)o, p))
+        : Enumerable.Range(0, 5).Select(o => ((long)o, 0.2));
 
-    private static IEnumerable<(long, double)> Dispersion(Material m)
-    {
-        if (m.Dispersion is not { } d) return Enumerable.Range(0, 5).Select(o => ((long)o, 0.2));
-        int expected = (int)EvidenceLikelihood.DispersionBand(d);
-        double[] w = [.. Enumerable.Range(0, 5).Select(i => Math.Abs(i - expected) switch { 0 => 0.6, 1 => 0.15, 2 => 0.04, _ => 0.01 })];
-        double sum = w.Sum();
-        return Enumerable.Range(0, 5).Select(o => ((long)o, w[o] / sum));
-    }
-
-    private static IEnumerable<(long, double)> Fluorescence(IReadOnlyList<FluorescenceStrength> usual)
-    {
-        if (usual.Count == 0) return Enumerable.Range(0, 4).Select(o => ((long)o, 0.25));
-        return Enumerable.Range(0, 4).Select(o => ((long)o, usual.Contains((FluorescenceStrength)o) ? 0.85 / usual.Count + 0.0375 : 0.0375));
-    }
+    private static IEnumerable<(long, double)> Fluorescence(IReadOnlyList<FluorescenceStrength> usual) => usual.Count == 0
+        ? Enumerable.Range(0, 4).Select(o => ((long)o, 0.25))
+        : Enumerable.Range(0, 4).Select(o => ((long)o, EvidenceLikelihood.FluorescenceProbability(usual, (FluorescenceStrength)o)));
 
     private static IEnumerable<(long, double)> Absorption(Material m)
     {
@@ -155,7 +134,7 @@ public static class NextTestAdvisor
         "refractometer" => m.Indices.Lowest.Minimum > RefractometerObservation.DefaultLiquidLimit
             ? "over the limit"
             : string.Join(", ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString("0.000")}")),
-        "polariscope" => string.Join(" or ", (m.Polariscope.Count > 0 ? m.Polariscope : [DefaultReaction(m.OpticCharacter)]).Select(EvidenceLikelihood.Word)),
+        "polariscope" => string.Join(" or ", EvidenceLikelihood.UsualReactions(m).Select(EvidenceLikelihood.Word)),
         "pleochroism" => m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial ? $"{EvidenceLikelihood.Word(m.Pleochroism)} pleochroism" : "none",
         "dispersion" => m.Dispersion is { } d ? $"nG − nB {d.ToString("0.000", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(EvidenceLikelihood.DispersionBand(d))})" : "not known",
         "thermal_probe" => EvidenceLikelihood.Word(m.ThermalProbe),
