@@ -21,7 +21,7 @@ public static class SyntheticCatalogue
                 Origin = OriginClass.Synthetic, CrystalSystem = CrystalSystem.Cubic,
                 Indices = OpticalIndices.SingleIndex(new(n, n + width)), SpecificGravity = new(sg, sg + 0.05),
                 Polariscope = [PolariscopeReaction.SinglyRefractive], UvLong = [FluorescenceStrength.Inert],
-                AbsorptionLinesNanometres = [500 + random.Next(100)], Colours = ["colourless", "blue"],
+                AbsorptionLines = [new(500 + random.Next(100))], Colours = ["colourless", "blue"],
                 Provenance = "generated for benchmarking",
             };
             materials.Add((i % 3) switch

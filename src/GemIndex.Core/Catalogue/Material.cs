@@ -64,14 +64,29 @@ public sealed record Material
     /// <summary>Usual short-wave (254 nm) fluorescence strengths; empty when not known.</summary>
     public IReadOnlyList<FluorescenceStrength> UvShort { get; init; } = [];
 
-    /// <summary>Diagnostic absorption lines or band centres seen in a hand spectroscope, nm.</summary>
-    public IReadOnlyList<double> AbsorptionLinesNanometres { get; init; } = [];
+    /// <summary>Diagnostic absorption lines or band centres seen in a hand spectroscope, with how plainly each shows.</summary>
+    public IReadOnlyList<AbsorptionLine> AbsorptionLines { get; init; } = [];
+
+    /// <summary>The wavelengths of <see cref="AbsorptionLines"/>, nm.</summary>
+    public IReadOnlyList<double> AbsorptionLinesNanometres => [.. AbsorptionLines.Select(l => l.Nanometres)];
 
     /// <summary>Usual colours, plain lower-case words.</summary>
     public IReadOnlyList<string> Colours { get; init; } = [];
 
-    /// <summary>How often it reaches a bench (the prior).</summary>
+    /// <summary>
+    /// How common this variety or origin is among stones of its species (its share of the species' prior). For a
+    /// species with one entry it is the species' own frequency.
+    /// </summary>
     public BenchFrequency Frequency { get; init; } = BenchFrequency.Occasional;
+
+    /// <summary>How often the species reaches a bench: the prior sits on the species and is split among its entries by <see cref="Frequency"/>.</summary>
+    public BenchFrequency SpeciesFrequency { get; init; } = BenchFrequency.Occasional;
+
+    /// <summary>The forms it is met in (single crystal, aggregate, amorphous).</summary>
+    public MaterialForm Forms { get; init; } = MaterialForm.Crystal;
+
+    /// <summary>Opaque: no light passes, so polariscope and dichroscope cannot be used.</summary>
+    public bool IsOpaque { get; init; }
 
     /// <summary>Porous, fragile or treated with something that immersion would harm: do not weigh in water.</summary>
     public bool DoNotImmerse { get; init; }

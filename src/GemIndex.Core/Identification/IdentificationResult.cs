@@ -8,6 +8,9 @@ public sealed record IdentificationResult
     /// <summary>The stone's reference.</summary>
     public required string Id { get; init; }
 
+    /// <summary>Species best first, each with its total over the whole catalogue and its split by origin.</summary>
+    public IReadOnlyList<SpeciesResult> Species { get; init; } = [];
+
     /// <summary>Candidates, best first (at most the number asked for).</summary>
     public required IReadOnlyList<RankedCandidate> Candidates { get; init; }
 

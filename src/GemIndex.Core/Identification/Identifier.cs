@@ -50,6 +50,21 @@ public sealed class Identifier
         return order;
     }
 
+    /// <summary>Posterior totals per species over the whole catalogue, best first; ties keep the catalogue's order.</summary>
+    private List<SpeciesResult> SpeciesTotals(double[] posterior)
+    {
+        var totals = new Dictionary<string, (int First, double Total, Dictionary<OriginClass, double> Origins)>();
+        for (int i = 0; i < posterior.Length; i++)
+        {
+            var m = _materials[i];
+            if (!totals.TryGetValue(m.Species, out var t)) t = (i, 0, []);
+            t.Origins[m.Origin] = t.Origins.GetValueOrDefault(m.Origin) + posterior[i];
+            totals[m.Species] = (t.First, t.Total + posterior[i], t.Origins);
+        }
+        return [.. totals.OrderByDescending(kv => kv.Value.Total).ThenBy(kv => kv.Value.First)
+            .Select(kv => new SpeciesResult { Species = kv.Key, Confidence = kv.Value.Total, Origins = kv.Value.Origins })];
+    }
+
     /// <summary>The catalogue ranked over.</summary>
     public IReadOnlyList<Material> Materials => _materials;
 
@@ -95,6 +110,7 @@ public sealed class Identifier
         return new IdentificationResult
         {
             Id = sheet.Id,
+            Species = SpeciesTotals(posterior),
             Candidates = candidates,
             NotInCatalogue = other,
             NoGoodMatch = noGoodMatch,

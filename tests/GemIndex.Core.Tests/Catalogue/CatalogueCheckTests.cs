@@ -245,7 +245,7 @@ public class CatalogueCheckTests
     [Fact]
     public void An_absorption_line_outside_the_visible_spectroscope_range_is_reported()
     {
-        AssertOnlyFinding(Isotropic() with { AbsorptionLinesNanometres = [685, 1200] }, "absorption_nm");
+        AssertOnlyFinding(Isotropic() with { AbsorptionLines = [new(685), new(1200)] }, "absorption_nm");
     }
 
     [Fact]

@@ -53,6 +53,20 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void Species_totals_cover_the_whole_catalogue_and_split_by_origin()
+    {
+        // Corundum ω 1.770, ε 1.762 (common practice): natural and synthetic sapphire share the species' total.
+        var sheet = new BenchSheet { Refractometer = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770)) };
+        var result = Engine.Identify(sheet, maximumCandidates: 1);
+        var corundum = result.Species[0];
+        Assert.Equal("corundum", corundum.Species);
+        Assert.Equal(2, corundum.Origins.Count);
+        Assert.Equal(corundum.Confidence, corundum.Origins.Values.Sum(), 12);
+        Assert.True(corundum.Confidence > result.Candidates[0].Confidence);   // the total is over both entries, not the one shown
+        Assert.Equal(1 - result.NotInCatalogue, result.Species.Sum(s => s.Confidence), 9);
+    }
+
+    [Fact]
     public void A_corundum_series_reads_negative_and_names_corundum_and_warns_about_synthetics()
     {
         // Corundum ω 1.770, ε 1.762 (common practice); natural and synthetic cannot be separated by these tests.

@@ -37,7 +37,7 @@ public class CatalogueRoundTripProperties
             ThermalProbe = Pick<ThermalProbeResult>(r), Electrical = Pick<ElectricalResult>(r),
             UvLong = [.. Enumerable.Range(0, r.Next(3)).Select(_ => Pick<FluorescenceStrength>(r))],
             UvShort = [.. Enumerable.Range(0, r.Next(3)).Select(_ => Pick<FluorescenceStrength>(r))],
-            AbsorptionLinesNanometres = [.. Enumerable.Range(0, r.Next(4)).Select(_ => 400 + r.NextDouble() * 300)],
+            AbsorptionLines = [.. Enumerable.Range(0, r.Next(4)).Select(_ => new AbsorptionLine(400 + r.NextDouble() * 300))],
             Colours = [.. Enumerable.Range(0, r.Next(3)).Select(k => "colour" + k)], Frequency = Pick<BenchFrequency>(r),
             DoNotImmerse = r.Next(2) == 0, Notes = r.Next(2) == 0 ? "" : "note; with, punctuation", Provenance = "p",
         };
