@@ -41,14 +41,13 @@ internal static class EntryMapping
             AbsorptionLines = [.. (e.AbsorptionNm ?? []).Select(nm => new AbsorptionLine(nm))],
             Colours = e.Colours,
             Frequency = Word<BenchFrequency>("frequency", e.Frequency, Fail),
-            SpeciesFrequency = Word<BenchFrequency>("frequency", e.Frequency, Fail),
             DoNotImmerse = e.DoNotImmerse ?? false,
             Notes = e.Notes ?? "",
             Provenance = e.Provenance,
         };
         if (e.Colours.Any(c => string.IsNullOrWhiteSpace(c) || c != c.ToLowerInvariant()))
             Fail("colours", $"colours must be non-empty lower-case words; got [{string.Join(", ", e.Colours)}]");
-        return failed || indices is null ? null : material;
+        return failed || indices is null ? null : material with { SpeciesFrequency = material.Frequency };
     }
 
     private static OpticalIndices? Indices(EntryDocument e, OpticCharacter character, Action<string, string> fail)
