@@ -1,0 +1,17 @@
+namespace GemIndex.Core.Magnification;
+
+/// <summary>The kinds of features a loupe shows, grouped as a bench user looks for them.</summary>
+public enum FeatureGroup
+{
+    /// <summary>Growth features: striae, zoning, banding.</summary>
+    Growth,
+
+    /// <summary>Inclusions: bubbles, flux, crystals, fluids, needles.</summary>
+    Inclusion,
+
+    /// <summary>Signs of a treatment: fillers, surface colour, dye, coatings.</summary>
+    Treatment,
+
+    /// <summary>Signs of an assembled stone: joins, cement, two lustres.</summary>
+    Composite,
+}

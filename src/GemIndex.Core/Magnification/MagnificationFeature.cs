@@ -1,0 +1,71 @@
+namespace GemIndex.Core.Magnification;
+
+/// <summary>
+/// What a loupe or microscope shows inside or on a stone. Names are the trade's terms; the description, the lighting
+/// that shows each one and what it means are in <see cref="MagnificationVocabulary"/>.
+/// </summary>
+public enum MagnificationFeature
+{
+    /// <summary>Curved growth lines or curved colour bands (melt growth: flame fusion, pulling).</summary>
+    CurvedStriae,
+
+    /// <summary>Straight, angular growth or colour zoning that follows crystal faces.</summary>
+    AngularGrowthZoning,
+
+    /// <summary>Chevron, zigzag or "hound's-tooth" growth (hydrothermal growth).</summary>
+    ChevronGrowth,
+
+    /// <summary>Straight colour banding in bands of different colour or depth.</summary>
+    ColourBanding,
+
+    /// <summary>Round gas bubbles, singly or in clouds.</summary>
+    RoundGasBubbles,
+
+    /// <summary>Elongated, tear-drop or worm-like gas bubbles.</summary>
+    ElongatedGasBubbles,
+
+    /// <summary>Flux residues: wispy veils, "fingerprints" and networks of trapped flux.</summary>
+    FluxResidue,
+
+    /// <summary>Reflective metal platelets (triangular or hexagonal) from a crucible, or metallic inclusions from a metal solvent.</summary>
+    MetalPlatelets,
+
+    /// <summary>Fine needles or "silk", often in oriented sets.</summary>
+    NeedlesAndSilk,
+
+    /// <summary>Included crystals of other minerals (or of the host).</summary>
+    CrystalInclusions,
+
+    /// <summary>Fluid, two-phase or three-phase inclusions (liquid with a bubble, sometimes a crystal).</summary>
+    MultiPhaseInclusions,
+
+    /// <summary>Healed fractures ("fingerprints" of tiny fluid drops) as nature heals them.</summary>
+    HealedFractures,
+
+    /// <summary>Nail-head spicules: wedge-shaped two-phase inclusions capped by a crystal (rapid, disturbed growth).</summary>
+    NailHeadSpicules,
+
+    /// <summary>Coloured flashes (blue, orange) along fractures filled with glass, resin or oil: the flash effect.</summary>
+    FilledFractureFlash,
+
+    /// <summary>Flattened gas bubbles or voids trapped in the filler of a fracture.</summary>
+    FlattenedBubblesInFiller,
+
+    /// <summary>Colour concentrated at facet junctions, the girdle or surface-reaching fractures (surface colouring).</summary>
+    SurfaceColourConcentration,
+
+    /// <summary>Dye gathered in fractures and between grains.</summary>
+    DyeInFractures,
+
+    /// <summary>A coating's wear: abraded facet edges or patches where a surface layer is missing.</summary>
+    CoatingWear,
+
+    /// <summary>A join plane where two parts are fixed together.</summary>
+    JoinPlane,
+
+    /// <summary>A different lustre above and below the girdle (two materials).</summary>
+    LustreChangeAtGirdle,
+
+    /// <summary>Flattened bubbles in one plane: the cement layer of an assembled stone.</summary>
+    CementLayerBubbles,
+}

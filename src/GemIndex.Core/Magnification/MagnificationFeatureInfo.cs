@@ -1,0 +1,18 @@
+namespace GemIndex.Core.Magnification;
+
+/// <summary>One feature of the magnification vocabulary, in the words shown to a bench user.</summary>
+/// <param name="Feature">The feature.</param>
+/// <param name="Group">Growth, inclusion, treatment or composite.</param>
+/// <param name="Word">The word on the command line and in the batch format ("curved_striae").</param>
+/// <param name="Name">The display name ("curved striae").</param>
+/// <param name="LookFor">One plain line: what to look for.</param>
+/// <param name="Lighting">The lighting that shows it best.</param>
+/// <param name="Meaning">What it says about origin or treatment.</param>
+/// <param name="Source">Where that meaning comes from: a published work, or "common practice".</param>
+/// <param name="Visibility">
+/// The chance that an examiner who looks for the feature with a loupe or microscope sees it when the stone has it:
+/// a judgement (docs/ranking.md, "Magnification").
+/// </param>
+public sealed record MagnificationFeatureInfo(
+    MagnificationFeature Feature, FeatureGroup Group, string Word, string Name, string LookFor, string Lighting,
+    string Meaning, string Source, double Visibility);

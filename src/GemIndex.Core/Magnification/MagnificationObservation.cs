@@ -1,0 +1,29 @@
+namespace GemIndex.Core.Magnification;
+
+/// <summary>
+/// What was looked for under magnification: features seen and features looked for but not seen. A feature in
+/// neither set was not looked for, which is no evidence at all.
+/// </summary>
+public sealed record MagnificationObservation
+{
+    /// <summary>Creates an observation; a feature cannot be both seen and not seen.</summary>
+    /// <exception cref="ArgumentException">A feature is in both sets (the message names it).</exception>
+    public MagnificationObservation(IEnumerable<MagnificationFeature> present, IEnumerable<MagnificationFeature> absent)
+    {
+        Present = present.ToHashSet();
+        Absent = absent.ToHashSet();
+        var both = Present.Intersect(Absent).ToList();
+        if (both.Count > 0)
+            throw new ArgumentException(
+                $"'{MagnificationVocabulary.Of(both[0]).Word}' is given both as seen and as looked for but not seen");
+    }
+
+    /// <summary>Features seen.</summary>
+    public IReadOnlySet<MagnificationFeature> Present { get; }
+
+    /// <summary>Features looked for and not seen.</summary>
+    public IReadOnlySet<MagnificationFeature> Absent { get; }
+
+    /// <summary>True when nothing was looked for.</summary>
+    public bool IsEmpty => Present.Count == 0 && Absent.Count == 0;
+}

@@ -1,0 +1,51 @@
+namespace GemIndex.Core.Magnification;
+
+/// <summary>The published works the magnification vocabulary and its probabilities cite (each one read).</summary>
+public static class MagnificationSources
+{
+    /// <summary>Curved growth lines and gas bubbles of flame-fusion corundum.</summary>
+    public const string HughesKoivula2005 =
+        "Hughes R.W., Koivula J.I. (2005) Verneuil synthetic corundum: dangerous curves (Lotus Gemology / ruby-sapphire.com)";
+
+    /// <summary>Curved lines (flame fusion), hound's-tooth growth (hydrothermal), wispy veils (flux); nail-head spicules.</summary>
+    public const string ChoudharyGolecha2007 =
+        "Choudhary G., Golecha C. (2007) A study of nail-head spicule inclusions in natural gemstones. Gems & Gemology 43(3), 228-235";
+
+    /// <summary>Zigzag growth of hydrothermal synthetics; hexagonal platinum platelets and flux residue of flux synthetics.</summary>
+    public const string SunDeGhionno2014 =
+        "Sun Z., DeGhionno D. (2014) Flux-grown synthetic ruby with hydrothermal synthetic seed crystal. Gems & Gemology 50(2), Lab Notes";
+
+    /// <summary>Platinum platelet and flux fingerprints in a flux-grown synthetic sapphire.</summary>
+    public const string GiaLabNotes2019FluxSapphire =
+        "Gems & Gemology (2019) Summer, Lab Notes: Exsolved particles with natural appearance within flux-grown pink synthetic sapphire";
+
+    /// <summary>
+    /// Lead-glass filled ruby: low-relief fractures, blue and orange flashes, flattened gas bubbles (after McClure et
+    /// al. 2006); and the typical inclusions of natural ruby: rutile silk, particulate clouds, twinning, planar zoning.
+    /// </summary>
+    public const string GiaLabNotes2014BurmeseRubies =
+        "Gems & Gemology (2014) Winter, Lab Notes: Lead-glass-filled Burmese rubies (citing McClure et al. 2006, Gems & Gemology 42(1), 22-34)";
+
+    /// <summary>Flash effect and flattened gas bubbles in a lead-glass filled laboratory-grown ruby.</summary>
+    public const string Zandi2021 =
+        "Zandi F. (2021) Lead glass-filled laboratory-grown ruby. Gems & Gemology 57(1), Lab Notes";
+
+    /// <summary>Flash effect of oil- and resin-filled fissures in emerald: blue in brightfield, orange in darkfield.</summary>
+    public const string GaajEmeraldFilling =
+        "Gemmological Association of All Japan, research report: Detection of filling material in natural emerald (grjapan.ddo.jp)";
+
+    /// <summary>Shallow diffusion colour seen immersed in diffused light; Plato lines of a flame-fusion synthetic.</summary>
+    public const string GiaGemNews2015DiffusionStar =
+        "Gems & Gemology (2015) Summer, Gem News International: Synthetic sapphire with diffusion-induced color and star";
+
+    /// <summary>Gas bubbles in the glass part of a garnet-topped doublet.</summary>
+    public const string GiaMicroWorld2023Doublet =
+        "Gems & Gemology (2023) Fall, Micro-World: A red herring in a red garnet";
+
+    /// <summary>The lustre of a doublet's two parts, and its join near the girdle.</summary>
+    public const string Wade1918 =
+        "Wade F.B. (1918) A Text-Book of Precious Stones for Jewelers and the Gem-Loving Public, Lesson on doublets";
+
+    /// <summary>A fact of the trade with no single source.</summary>
+    public const string CommonPractice = "common practice";
+}

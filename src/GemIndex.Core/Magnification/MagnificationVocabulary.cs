@@ -1,0 +1,102 @@
+using static GemIndex.Core.Magnification.MagnificationSources;
+
+namespace GemIndex.Core.Magnification;
+
+/// <summary>
+/// The magnification vocabulary: every feature with its word, what to look for, the lighting, its meaning and source,
+/// and how visible it is when present (docs/ranking.md, "Magnification").
+/// </summary>
+public static class MagnificationVocabulary
+{
+    // Visibility judgements (common practice): how often a trained eye with a 10x loupe or a microscope finds the
+    // feature when the stone has it. Subtle growth features need the right direction and often immersion.
+    private const double Subtle = 0.5;
+    private const double Plain = 0.75;
+    private const double Obvious = 0.9;
+
+    private static readonly MagnificationFeatureInfo[] Table =
+    [
+        new(MagnificationFeature.CurvedStriae, FeatureGroup.Growth, "curved_striae", "curved striae",
+            "fine curved growth lines or curved colour bands, like the grooves of a record", "diffused light, or brightfield through the pavilion; immersion helps",
+            "melt growth: flame-fusion or pulled synthetic; never in natural corundum or spinel", HughesKoivula2005, Subtle),
+        new(MagnificationFeature.AngularGrowthZoning, FeatureGroup.Growth, "angular_zoning", "straight angular zoning",
+            "straight growth or colour lines meeting at the angles of crystal faces", "diffused light; immersion helps",
+            "growth in nature (or flux growth, which also follows crystal faces)", ChoudharyGolecha2007, Plain),
+        new(MagnificationFeature.ChevronGrowth, FeatureGroup.Growth, "chevron_growth", "chevron or zigzag growth",
+            "a zigzag, chevron or hound's-tooth pattern of growth lines", "diffused light or darkfield",
+            "hydrothermal synthetic (emerald, ruby, quartz)", SunDeGhionno2014, Plain),
+        new(MagnificationFeature.ColourBanding, FeatureGroup.Growth, "colour_banding", "colour banding",
+            "straight parallel bands of stronger and weaker colour", "diffused light against white; immersion helps",
+            "common in natural stones; curved bands belong to curved striae instead", CommonPractice, Plain),
+        new(MagnificationFeature.RoundGasBubbles, FeatureGroup.Inclusion, "round_bubbles", "round gas bubbles",
+            "perfectly round inclusions with a dark rim and a bright centre, alone or in clouds", "brightfield or darkfield",
+            "melt growth or man-made glass: flame-fusion synthetic, glass, plastic; not in natural crystals", HughesKoivula2005, Obvious),
+        new(MagnificationFeature.ElongatedGasBubbles, FeatureGroup.Inclusion, "elongated_bubbles", "elongated gas bubbles",
+            "tear-drop, tube or worm-like bubbles, often lined up", "brightfield or darkfield",
+            "flame-fusion synthetic, glass (drawn out as it flowed)", HughesKoivula2005, Plain),
+        new(MagnificationFeature.FluxResidue, FeatureGroup.Inclusion, "flux_residue", "flux residue",
+            "wispy veils, fingerprint-like networks or droplets of trapped flux, often whitish, yellowish or orange", "darkfield and fibre-optic light",
+            "flux-grown synthetic (ruby, sapphire, emerald, spinel, alexandrite)", ChoudharyGolecha2007, Plain),
+        new(MagnificationFeature.MetalPlatelets, FeatureGroup.Inclusion, "metal_platelets", "metal platelets",
+            "bright reflective triangular or hexagonal flakes; in diamond, black metallic inclusions that a magnet may pull", "reflected light; fibre-optic",
+            "flux-grown synthetic (platinum from the crucible); metal-solvent grown synthetic diamond", GiaLabNotes2019FluxSapphire, Plain),
+        new(MagnificationFeature.NeedlesAndSilk, FeatureGroup.Inclusion, "needles_silk", "needles and silk",
+            "fine needles, often in sets crossing at 60° or 120°, giving a silky sheen", "fibre-optic light from the side",
+            "natural stone (rutile silk in corundum and garnet); heating may leave it broken up", GiaLabNotes2014BurmeseRubies, Plain),
+        new(MagnificationFeature.CrystalInclusions, FeatureGroup.Inclusion, "crystals", "crystal inclusions",
+            "small included crystals with straight edges, colourless or coloured", "darkfield",
+            "natural stone as a rule; synthetics seldom hold crystals of other minerals", CommonPractice, Plain),
+        new(MagnificationFeature.MultiPhaseInclusions, FeatureGroup.Inclusion, "fluid_inclusions", "fluid or multi-phase inclusions",
+            "cavities with liquid and a gas bubble, sometimes a small crystal as well", "darkfield; tilt the stone to see the bubble move",
+            "natural stone (three-phase inclusions of emerald); hydrothermal synthetics may hold two-phase ones", CommonPractice, Plain),
+        new(MagnificationFeature.HealedFractures, FeatureGroup.Inclusion, "healed_fractures", "healed fractures",
+            "fingerprint-like planes of tiny fluid drops where a crack healed", "darkfield",
+            "natural stone as a rule; flux-healed cracks in synthetics look alike but hold flux", CommonPractice, Plain),
+        new(MagnificationFeature.NailHeadSpicules, FeatureGroup.Inclusion, "nail_head_spicules", "nail-head spicules",
+            "wedge or cone-shaped inclusions capped by a small crystal, like a nail", "darkfield",
+            "rapid growth: typical of hydrothermal synthetic emerald and quartz, though also found in some natural stones", ChoudharyGolecha2007, Plain),
+        new(MagnificationFeature.FilledFractureFlash, FeatureGroup.Treatment, "flash_effect", "flash effect in fractures",
+            "blue or orange flashes along a fracture that change as the stone is rocked", "darkfield (orange) and brightfield (blue)",
+            "fracture filled with glass, resin or oil (ruby, emerald, diamond)", GaajEmeraldFilling, Plain),
+        new(MagnificationFeature.FlattenedBubblesInFiller, FeatureGroup.Treatment, "flattened_bubbles", "flattened bubbles in fractures",
+            "flat gas bubbles or voids lying in the plane of a fracture", "darkfield; reflected light for the filled patches",
+            "fracture filled with glass or resin", GiaLabNotes2014BurmeseRubies, Plain),
+        new(MagnificationFeature.SurfaceColourConcentration, FeatureGroup.Treatment, "surface_colour", "colour at facet junctions",
+            "colour concentrated along facet edges, the girdle or in surface-reaching cracks; a pale core", "immersion with diffused light",
+            "surface colouring by diffusion, or a coating", GiaGemNews2015DiffusionStar, Plain),
+        new(MagnificationFeature.DyeInFractures, FeatureGroup.Treatment, "dye_in_fractures", "dye in fractures",
+            "colour gathered in cracks, pits and between grains, paler between them", "diffused light; a cotton bud with solvent may take colour (with the owner's consent)",
+            "dyed stone (jade, quartzite, chalcedony, coral, pearl, howlite, magnesite)", CommonPractice, Plain),
+        new(MagnificationFeature.CoatingWear, FeatureGroup.Treatment, "coating_wear", "worn coating",
+            "abraded facet edges or patches where a thin surface layer is missing; an iridescent or uneven surface", "reflected light",
+            "coated stone", CommonPractice, Plain),
+        new(MagnificationFeature.JoinPlane, FeatureGroup.Composite, "join_plane", "join plane",
+            "a flat plane where two pieces meet, often at or near the girdle", "reflected light along the girdle; immersion shows the parts' colours",
+            "assembled stone: doublet or triplet", Wade1918, Obvious),
+        new(MagnificationFeature.LustreChangeAtGirdle, FeatureGroup.Composite, "two_lustres", "different lustre above and below",
+            "the crown reflects with another lustre than the pavilion", "reflected light, tilting the stone",
+            "assembled stone: a harder top on a glass or other base", Wade1918, Plain),
+        new(MagnificationFeature.CementLayerBubbles, FeatureGroup.Composite, "cement_bubbles", "bubbles in a cement layer",
+            "flattened bubbles all in one plane, in a thin layer of cement", "darkfield, looking through the girdle",
+            "assembled stone joined with cement", GiaMicroWorld2023Doublet, Plain),
+    ];
+
+    private static readonly Dictionary<MagnificationFeature, MagnificationFeatureInfo> ByFeature = Table.ToDictionary(i => i.Feature);
+    private static readonly Dictionary<string, MagnificationFeatureInfo> ByWord = Table.ToDictionary(i => i.Word, StringComparer.OrdinalIgnoreCase);
+
+    /// <summary>Every feature, grouped as the bench looks for them (growth, inclusions, treatment, composite).</summary>
+    public static IReadOnlyList<MagnificationFeatureInfo> All => Table;
+
+    /// <summary>The words accepted, in table order.</summary>
+    public static IReadOnlyList<string> Words => [.. Table.Select(i => i.Word)];
+
+    /// <summary>The entry of one feature.</summary>
+    public static MagnificationFeatureInfo Of(MagnificationFeature feature) => ByFeature[feature];
+
+    /// <summary>The feature named by a word (case and spaces or hyphens for underscores ignored), or null.</summary>
+    public static MagnificationFeature? Find(string word)
+    {
+        string key = word.Trim().Replace(' ', '_').Replace('-', '_');
+        return ByWord.TryGetValue(key, out var info) ? info.Feature : null;
+    }
+}

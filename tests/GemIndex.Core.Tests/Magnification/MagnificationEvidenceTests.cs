@@ -1,0 +1,65 @@
+using FsCheck;
+using FsCheck.Fluent;
+using FsCheck.Xunit;
+using GemIndex.Core.Catalogue;
+using GemIndex.Core.Magnification;
+
+namespace GemIndex.Core.Tests.Magnification;
+
+public class MagnificationEvidenceTests
+{
+    // Curved growth lines are "a prominent feature of virtually all Verneuil synthetic corundums" (Hughes & Koivula
+    // 2005): listed here as 0.9; natural corundum takes the natural default (curved striae foreign to it).
+    private static readonly MagnificationProfile FlameFusion = new(OriginClass.Synthetic,
+        new Dictionary<MagnificationFeature, double> { [MagnificationFeature.CurvedStriae] = 0.9, [MagnificationFeature.RoundGasBubbles] = 0.5 });
+    private static readonly MagnificationProfile Natural = new(OriginClass.Natural);
+
+    private static double LogRatio(MagnificationObservation seen) =>
+        MagnificationEvidence.LogLikelihood(seen, FlameFusion) - MagnificationEvidence.LogLikelihood(seen, Natural);
+
+    [Fact]
+    public void Curved_striae_seen_favour_flame_fusion_over_natural_by_more_than_ten_to_one()
+    {
+        double ratio = LogRatio(new([MagnificationFeature.CurvedStriae], []));
+        Assert.True(ratio > Math.Log(10), $"log ratio {ratio}");
+    }
+
+    [Fact]
+    public void Looked_for_and_not_seen_is_weaker_evidence_than_seen()
+    {
+        double seen = LogRatio(new([MagnificationFeature.CurvedStriae], []));
+        double notSeen = LogRatio(new([], [MagnificationFeature.CurvedStriae]));
+        Assert.True(notSeen < 0, "not seeing the striae counts against flame fusion");
+        Assert.True(Math.Abs(notSeen) < Math.Abs(seen) / 2);
+    }
+
+    [Fact]
+    public void Nothing_looked_for_is_no_evidence() =>
+        Assert.Equal(0, MagnificationEvidence.LogLikelihood(new([], []), FlameFusion));
+
+    [Fact]
+    public void A_natural_stone_with_crystals_and_healed_fractures_leans_natural()
+    {
+        double ratio = LogRatio(new([MagnificationFeature.CrystalInclusions, MagnificationFeature.HealedFractures], []));
+        Assert.True(ratio < -Math.Log(10), $"log ratio {ratio}");
+    }
+
+    [Fact]
+    public void A_listed_probability_outside_zero_to_one_is_refused()
+    {
+        var e = Assert.Throws<ArgumentOutOfRangeException>(() => new MagnificationProfile(OriginClass.Natural,
+            new Dictionary<MagnificationFeature, double> { [MagnificationFeature.FluxResidue] = 1.2 }));
+        Assert.Contains("flux_residue", e.Message);
+    }
+
+    [Property]
+    public Property Seen_and_not_seen_are_the_two_outcomes_of_one_look() =>
+        Prop.ForAll(Gen.Elements(Enum.GetValues<MagnificationFeature>()).ToArbitrary(),
+            Gen.Elements(Enum.GetValues<OriginClass>()).ToArbitrary(), (feature, origin) =>
+        {
+            var profile = new MagnificationProfile(origin);
+            double seen = Math.Exp(MagnificationEvidence.LogLikelihood(new([feature], []), profile));
+            double notSeen = Math.Exp(MagnificationEvidence.LogLikelihood(new([], [feature]), profile));
+            return Math.Abs(seen + notSeen - 1) < 1e-12 && seen > 0 && notSeen > 0;
+        });
+}
