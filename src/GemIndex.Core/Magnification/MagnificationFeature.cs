@@ -18,6 +18,9 @@ public enum MagnificationFeature
     /// <summary>Straight colour banding in bands of different colour or depth.</summary>
     ColourBanding,
 
+    /// <summary>A mosaic of play-of-colour patches with a scaly or "chicken-wire" outline (made opal).</summary>
+    MosaicColourPatches,
+
     /// <summary>Round gas bubbles, singly or in clouds.</summary>
     RoundGasBubbles,
 

@@ -46,6 +46,10 @@ public static class MagnificationSources
     public const string Wade1918 =
         "Wade F.B. (1918) A Text-Book of Precious Stones for Jewelers and the Gem-Loving Public, Lesson on doublets";
 
+    /// <summary>Metallic inclusions (often making the stone magnetic), colour zoning and graining of synthetic diamond.</summary>
+    public const string Shigley1995 =
+        "Shigley J.E., Fritsch E., Reinitz I., Moses T.M. (1995) A chart for the separation of natural and synthetic diamonds. Gems & Gemology 31(4), 256-264";
+
     /// <summary>A fact of the trade with no single source.</summary>
     public const string CommonPractice = "common practice";
 }
