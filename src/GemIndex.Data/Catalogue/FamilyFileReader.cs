@@ -129,19 +129,49 @@ public static class FamilyFileReader
         catch (JsonException e)
         {
             string line = e.LineNumber is { } l ? $"line {l + 1}, " : "";
-            errors.Add($"{source.FileName}: {line}{Describe(e.Path)}: {e.Message.Split(" Path: ")[0]}");
+            errors.Add($"{source.FileName}: {line}{Describe(e.Path, source.Json)}: {e.Message.Split(" Path: ")[0]}");
             return null;
         }
     }
 
-    // "$.species[3].varieties[1].sg" → "species 3, variety 1, field sg".
-    private static string Describe(string? path)
+    // "$.species[3].varieties[1].sg" → "species 3 'beryl', variety 1 'emerald', field sg" (names when the text is
+    // still well-formed JSON, as for an unknown field or a wrong type; indices alone otherwise).
+    private static string Describe(string? path, string json)
     {
         if (path is null || path == "$") return "top level";
         Match m = Regex.Match(path, @"^\$\.(species|references)\[(\d+)\](?:\.varieties\[(\d+)\])?(?:\.(\w+))?");
         if (!m.Success) return $"at {path}";
-        string text = $"{(m.Groups[1].Value == "species" ? "species" : "reference")} {m.Groups[2].Value}";
-        if (m.Groups[3].Success) text += $", variety {m.Groups[3].Value}";
+        int first = int.Parse(m.Groups[2].Value, System.Globalization.CultureInfo.InvariantCulture);
+        int? second = m.Groups[3].Success ? int.Parse(m.Groups[3].Value, System.Globalization.CultureInfo.InvariantCulture) : null;
+        (string? outer, string? inner) = NamesAt(json, m.Groups[1].Value, first, second);
+        string text = $"{(m.Groups[1].Value == "species" ? "species" : "reference")} {first}{Quoted(outer)}";
+        if (second is { } j) text += $", variety {j}{Quoted(inner)}";
         return m.Groups[4].Success ? $"{text}, field {m.Groups[4].Value}" : text;
     }
+
+    private static string Quoted(string? name) => name is null ? "" : $" '{name}'";
+
+    private static (string? Outer, string? Inner) NamesAt(string json, string list, int first, int? second)
+    {
+        try
+        {
+            using JsonDocument doc = JsonDocument.Parse(json);
+            if (!doc.RootElement.TryGetProperty(list, out JsonElement items) || items.ValueKind != JsonValueKind.Array || items.GetArrayLength() <= first)
+                return (null, null);
+            JsonElement outer = items[first];
+            string? outerName = Text(outer, list == "species" ? "species" : "key");
+            if (second is not { } j || !outer.TryGetProperty("varieties", out JsonElement varieties)
+                || varieties.ValueKind != JsonValueKind.Array || varieties.GetArrayLength() <= j)
+                return (outerName, null);
+            return (outerName, Text(varieties[j], "name"));
+        }
+        catch (JsonException)
+        {
+            return (null, null);
+        }
+    }
+
+    private static string? Text(JsonElement element, string property) =>
+        element.ValueKind == JsonValueKind.Object && element.TryGetProperty(property, out JsonElement v) && v.ValueKind == JsonValueKind.String
+            ? v.GetString() : null;
 }

@@ -95,7 +95,7 @@ public class FamilyFileReaderTests
     public void A_number_too_large_for_a_double_is_refused_not_read_as_infinity()
     {
         string e = ErrorOf(With("\"sg\": [2.65, 2.66]", "\"sg\": [2.65, 1e400]"));
-        Assert.Contains("species 0, field sg", e, StringComparison.Ordinal);
+        Assert.Contains("species 0 'quartz', field sg", e, StringComparison.Ordinal);
         Assert.Contains("number out of range: 1e400", e, StringComparison.Ordinal);
     }
 
@@ -109,7 +109,7 @@ public class FamilyFileReaderTests
     public void An_unknown_field_of_a_variety_is_refused_naming_species_and_variety()
     {
         string e = ErrorOf(With("\"share\": \"occasional\"", "\"share\": \"occasional\", \"colour\": \"red\""));
-        Assert.Contains("species 0, variety 1", e, StringComparison.Ordinal);
+        Assert.Contains("species 0 'quartz', variety 1 't2'", e, StringComparison.Ordinal);
         Assert.Contains("'colour'", e, StringComparison.Ordinal);
     }
 
@@ -117,7 +117,7 @@ public class FamilyFileReaderTests
     public void A_variety_cannot_restate_a_species_only_field()
     {
         string e = ErrorOf(With("\"share\": \"occasional\"", "\"share\": \"occasional\", \"optic_character\": \"biaxial\""));
-        Assert.Contains("species 0, variety 1", e, StringComparison.Ordinal);
+        Assert.Contains("species 0 'quartz', variety 1 't2', field optic_character", e, StringComparison.Ordinal);
         Assert.Contains("'optic_character'", e, StringComparison.Ordinal);
     }
 
