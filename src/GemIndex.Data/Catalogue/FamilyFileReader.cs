@@ -70,12 +70,22 @@ public static class FamilyFileReader
         if (s.Varieties.Length == 0) errors.Add($"{where}, field varieties: at least one variety is required (a species with one has one entry)");
         Func<string, ValueSource?> speciesSource = field => Resolve(s.Sources, field, references);
         var own = new EntryIdentity(s.Species, s.Species, s.Species, "natural", s.Frequency, s.CrystalSystem, s.OpticCharacter, s.Frequency, family);
-        if (EntryMapping.Flatten(own, null, speciesSource, s, speciesSource, (_, _) => { }) is { } whole) species[s.Species] = whole;
+        // The species' own fields are read as an entry of their own: a problem there is reported once, on the species,
+        // and not again for each variety that inherits the field ("share" is the frequency here, reported as such).
+        var speciesProblems = new HashSet<(string Field, string Problem)>();
+        void SpeciesFail(string field, string problem)
+        {
+            if (field != "share" && speciesProblems.Add((field, problem))) errors.Add($"{where}, field {field}: {problem}");
+        }
+        if (EntryMapping.Flatten(own, null, speciesSource, s, speciesSource, SpeciesFail) is { } whole) species[s.Species] = whole;
         foreach (VarietyDocument v in s.Varieties)
         {
             string at = $"{where}, variety '{v.Name}'";
-            void Fail(string field, string problem) => errors.Add($"{at}, field {field}: {problem}");
             HashSet<string> stated = [.. v.Stated()];
+            void Fail(string field, string problem)
+            {
+                if (!speciesProblems.Contains((field, problem))) errors.Add($"{at}, field {field}: {problem}");
+            }
             CheckSources(v.Sources, stated, references, Fail);
             var id = new EntryIdentity(v.Name, s.Species, v.Variety, v.Origin, v.Share, s.CrystalSystem, s.OpticCharacter, s.Frequency, family);
             if (EntryMapping.Flatten(id, s, speciesSource, v, field => Resolve(v.Sources, field, references), Fail) is { } m) materials.Add(m);

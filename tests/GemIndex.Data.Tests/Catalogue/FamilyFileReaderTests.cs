@@ -142,28 +142,37 @@ public class FamilyFileReaderTests
     }
 
     [Fact]
-    public void A_range_of_three_numbers_is_refused_for_every_variety_that_inherits_it()
+    public void A_range_of_three_numbers_is_refused_once_on_the_species_not_on_each_variety_that_inherits_it()
     {
-        IReadOnlyList<string> e = ErrorsOf(new FamilySource("fam.json", With("[2.65, 2.66]", "[2.65, 2.66, 2.67]")));
-        Assert.Equal(
-        [
-            "fam.json: species 'quartz', variety 't', field sg: expected [min, max] (two numbers), got 3",
-            "fam.json: species 'quartz', variety 't2', field sg: expected [min, max] (two numbers), got 3",
-        ], e);
+        Assert.Equal("fam.json: species 'quartz', field sg: expected [min, max] (two numbers), got 3",
+            ErrorOf(With("[2.65, 2.66]", "[2.65, 2.66, 2.67]")));
+    }
+
+    [Fact]
+    public void A_field_the_species_must_have_is_refused_on_the_species_even_when_every_variety_states_it()
+    {
+        Assert.Equal("fam.json: species 'quartz', field colours: required: one or more plain lower-case colour words",
+            ErrorOf(With("\"colours\": [\"colourless\"], ", "").Replace("\"share\": \"common\" }", "\"share\": \"common\", \"colours\": [\"grey\"], \"sources\": { \"*\": \"memory\" } }", StringComparison.Ordinal)));
+    }
+
+    [Fact]
+    public void A_bad_range_a_variety_states_is_refused_on_that_variety()
+    {
+        Assert.Equal("fam.json: species 'quartz', variety 't2', field sg: expected [min, max] (two numbers), got 1",
+            ErrorOf(With("\"colours\": [\"purple\"]", "\"colours\": [\"purple\"], \"sg\": [2.65]").Replace("{ \"colours\": \"practice\" }", "{ \"*\": \"practice\" }", StringComparison.Ordinal)));
     }
 
     [Fact]
     public void A_range_written_backwards_is_refused()
     {
-        string e = ErrorsOf(new FamilySource("fam.json", With("[2.65, 2.66]", "[2.66, 2.65]")))[0];
-        Assert.StartsWith("fam.json: species 'quartz', variety 't', field sg: sg upper end is 2.65", e, StringComparison.Ordinal);
+        Assert.StartsWith("fam.json: species 'quartz', field sg: sg upper end is 2.65", ErrorOf(With("[2.65, 2.66]", "[2.66, 2.65]")), StringComparison.Ordinal);
     }
 
     [Fact]
     public void An_index_the_optic_character_does_not_use_is_refused()
     {
-        string e = ErrorsOf(new FamilySource("fam.json", With("\"omega\"", "\"n\": [1.5, 1.5], \"omega\"")))[0];
-        Assert.Equal("fam.json: species 'quartz', variety 't', field n: not allowed for a uniaxial material, which uses omega, epsilon", e);
+        Assert.Equal("fam.json: species 'quartz', field n: not allowed for a uniaxial material, which uses omega, epsilon",
+            ErrorOf(With("\"omega\"", "\"n\": [1.5, 1.5], \"omega\"")));
     }
 
     [Fact]
@@ -250,8 +259,7 @@ public class FamilyFileReaderTests
         IReadOnlyList<string> e = ErrorsOf(new FamilySource("fam.json", With("\"omega\": [1.544, 1.544], ", "").Replace("\"occasional\"", "\"often\"", StringComparison.Ordinal)));
         Assert.Equal(
         [
-            "fam.json: species 'quartz', variety 't', field omega: required for a uniaxial material",
-            "fam.json: species 'quartz', variety 't2', field omega: required for a uniaxial material",
+            "fam.json: species 'quartz', field omega: required for a uniaxial material",
             "fam.json: species 'quartz', variety 't2', field share: 'often' is not one of very_common, common, occasional, rare, very_rare",
         ], e);
     }
