@@ -27,10 +27,13 @@ CREATE TABLE material (
     pleochroism       TEXT NOT NULL,
     thermal_probe     TEXT NOT NULL,
     electrical        TEXT NOT NULL,
-    frequency         TEXT NOT NULL,
+    frequency         TEXT NOT NULL,  -- the species' frequency at a bench (the prior)
+    share             TEXT NOT NULL,  -- how common this variety is among stones of its species
+    forms             TEXT NOT NULL,  -- space-separated: 'crystal', 'aggregate', 'amorphous'
+    opaque            INTEGER NOT NULL CHECK (opaque IN (0, 1)),
     do_not_immerse    INTEGER NOT NULL CHECK (do_not_immerse IN (0, 1)),
     notes             TEXT NOT NULL,
-    provenance        TEXT NOT NULL,
+    stated_fields     TEXT NOT NULL,  -- space-separated field names the variety states instead of inheriting
     CHECK (sg_min <= sg_max)
 ) STRICT;
 
@@ -64,6 +67,7 @@ CREATE TABLE material_absorption (
     material_id INTEGER NOT NULL REFERENCES material (id) ON DELETE CASCADE,
     position    INTEGER NOT NULL,
     nanometres  REAL NOT NULL,
+    strength    TEXT NOT NULL CHECK (strength IN ('weak', 'moderate', 'strong')),
     PRIMARY KEY (material_id, position)
 ) STRICT;
 
@@ -72,4 +76,19 @@ CREATE TABLE material_colour (
     position    INTEGER NOT NULL,
     colour      TEXT NOT NULL,
     PRIMARY KEY (material_id, position)
+) STRICT;
+
+-- The references values name: a published work, 'from_memory' or 'common_practice', with its citation.
+CREATE TABLE reference (
+    key      TEXT PRIMARY KEY,
+    kind     TEXT NOT NULL CHECK (kind IN ('published', 'from_memory', 'common_practice')),
+    citation TEXT NOT NULL
+) STRICT;
+
+-- The source of each of an entry's values, by field name as the family files spell it ('omega', 'sg', 'uv_long').
+CREATE TABLE material_source (
+    material_id   INTEGER NOT NULL REFERENCES material (id) ON DELETE CASCADE,
+    field         TEXT NOT NULL,
+    reference_key TEXT NOT NULL REFERENCES reference (key),
+    PRIMARY KEY (material_id, field)
 ) STRICT;

@@ -22,7 +22,6 @@ public static class SyntheticCatalogue
                 Indices = OpticalIndices.SingleIndex(new(n, n + width)), SpecificGravity = new(sg, sg + 0.05),
                 Polariscope = [PolariscopeReaction.SinglyRefractive], UvLong = [FluorescenceStrength.Inert],
                 AbsorptionLines = [new(500 + random.Next(100))], Colours = ["colourless", "blue"],
-                Provenance = "generated for benchmarking",
             };
             materials.Add((i % 3) switch
             {

@@ -6,11 +6,14 @@ namespace GemIndex.Core.Catalogue;
 
 /// <summary>
 /// Consistency rules every catalogue entry must meet before the ranking may trust it: physical ranges,
-/// birefringence that agrees with the index ranges, an optic sign that agrees with the indices, an optic
-/// character that agrees with the crystal system, unique names, a named source and at least one polariscope
-/// reaction. The rules are common practice in mineral optics (uniaxial positive when ε &gt; ω; biaxial
-/// positive when γ − β &gt; β − α); the numeric bounds are our own sanity limits, wide enough for any gem
-/// material. Pure: the same list always gives the same findings, in entry order.
+/// birefringence that agrees with the index ranges, β within α..γ, an optic sign that agrees with the indices,
+/// an optic character that agrees with the crystal system, a dispersion in plausible proportion to the index,
+/// no polariscope or pleochroism reaction on an opaque entry, a source for every number, a variety that states
+/// only what differs from its species and stays inside its species' ranges, and unique names. The sign rules are
+/// common practice in mineral optics (uniaxial positive when ε &gt; ω; biaxial positive when γ − β &gt; β − α);
+/// the numeric bounds are our own sanity limits, wide enough for any gem material; the dispersion constants are
+/// explained where they are declared and in reference-db/README.md ("Check rules"). Pure: the same list always
+/// gives the same findings, in entry order.
 /// </summary>
 public static class CatalogueCheck
 {
@@ -26,37 +29,116 @@ public static class CatalogueCheck
     /// <summary>Specific gravities must lie strictly below this (our sanity bound, above any gem material).</summary>
     public const double SpecificGravityUpperBound = 25;
 
-    /// <summary>Every finding for a whole catalogue: each entry's own rules, then names used more than once (case-insensitive).</summary>
+    /// <summary>
+    /// The least dispersive power (nG − nB)/(n − 1) an ordinary optical material shows: the G–B to C–F ratio
+    /// <see cref="GeeBeeToCeeEffRatio"/> over the highest Abbe number a bench meets, about 95 for calcium fluoride
+    /// (from memory), taken as 120 because the trade's figures for weakly dispersive minerals are rough (enstatite's
+    /// 0.010 at n 1.66 implies about 110). A C–F value given where nG − nB is meant still falls below this for
+    /// low-dispersion materials (fluorite's C–F value 0.0045 at n 1.434 gives 0.010).
+    /// </summary>
+    public const double LeastDispersivePower = GeeBeeToCeeEffRatio / 120;
+
+    /// <summary>
+    /// The greatest dispersive power (nG − nB)/(n − 1): the ratio over the lowest Abbe number, about 9 to 10 for rutile
+    /// (from memory), taken as 7 because near an absorption edge the blue end disperses faster than the ratio says.
+    /// </summary>
+    public const double GreatestDispersivePower = GeeBeeToCeeEffRatio / 7;
+
+    /// <summary>
+    /// nG − nB over nF − nC for ordinary optical materials: 1.70 for fused silica (Malitson 1965, J. Opt. Soc. Am. 55,
+    /// 1205, Sellmeier evaluated at 430.8/686.7 and 486.1/656.3 nm), 1.70 for sapphire's ordinary ray and 1.73 for
+    /// diamond (Sellmeier coefficients from memory, DOMAIN.md §7). A C–F value is about 1/1.7 of the G–B value.
+    /// </summary>
+    public const double GeeBeeToCeeEffRatio = 1.70;
+
+    /// <summary>
+    /// Two entries of one species whose dispersions differ by this factor or more: the lower is likely a C–F value
+    /// (a factor of about 1.7). 1.4 lies above the spread between real varieties (synthetic rutile 0.33 against
+    /// natural 0.28 is 1.18) and below 1.7 less the rounding of figures quoted to three decimals (a judgement).
+    /// </summary>
+    public const double DispersionSpreadWithinSpecies = 1.4;
+
+    /// <summary>Half a unit in the third decimal: the rounding of catalogue dispersions, allowed in the band check.</summary>
+    public const double DispersionRounding = 0.0005;
+
+    /// <summary>
+    /// Every finding for a whole catalogue: each entry's own rules, each variety against its species' own values
+    /// (when <paramref name="species"/> is given), dispersions within one species, then names used more than once.
+    /// </summary>
     /// <param name="materials">The entries, in catalogue order.</param>
-    public static IReadOnlyList<CatalogueFinding> Check(IReadOnlyList<Material> materials)
+    /// <param name="species">The species' own values by species name (a material built from the species fields alone).</param>
+    public static IReadOnlyList<CatalogueFinding> Check(IReadOnlyList<Material> materials, IReadOnlyDictionary<string, Material>? species = null)
     {
         ArgumentNullException.ThrowIfNull(materials);
         var findings = new List<CatalogueFinding>();
-        foreach (Material m in materials) findings.AddRange(CheckEntry(m));
+        foreach (Material m in materials)
+        {
+            findings.AddRange(CheckEntry(m));
+            if (species is not null && species.TryGetValue(m.Species, out Material? own)) findings.AddRange(CheckAgainstSpecies(m, own));
+        }
+        findings.AddRange(CheckDispersionWithinSpecies(materials));
         var seen = new Dictionary<string, string>(StringComparer.OrdinalIgnoreCase);
         foreach (Material m in materials)
         {
             if (seen.TryGetValue(m.Name, out string? first))
-                findings.Add(new(m.Name, "name", $"the name is already used by entry '{first}' (names are compared ignoring case)"));
+                findings.Add(new(m.Name, "name", $"the name is already used by entry '{first}' (names are compared ignoring case)", FileOf(m)));
             else seen[m.Name] = m.Name;
         }
         return findings;
     }
 
-    /// <summary>The findings for one entry on its own (every rule except duplicate names).</summary>
+    /// <summary>The findings for one entry on its own (every rule that needs no other entry).</summary>
     /// <param name="material">The entry.</param>
     public static IReadOnlyList<CatalogueFinding> CheckEntry(Material material)
     {
         ArgumentNullException.ThrowIfNull(material);
         var f = new List<CatalogueFinding>();
-        void Add(string field, string problem) => f.Add(new(material.Name, field, problem));
+        void Add(string field, string problem) => f.Add(new(material.Name, field, problem, FileOf(material)));
         CheckText(material, Add);
         CheckRanges(material, Add);
         CheckBirefringence(material, Add);
         CheckSign(material, Add);
         CheckCharacter(material, Add);
-        if (material.Polariscope.Count == 0) Add("polariscope", "no polariscope reaction is given; list at least one");
+        CheckDispersionBand(material, Add);
+        CheckOpaque(material, Add);
+        CheckSources(material, Add);
         return f;
+    }
+
+    /// <summary>
+    /// A variety against its species: every field it states must differ from the species' value, and a stated range
+    /// must lie inside the species' range.
+    /// </summary>
+    /// <param name="variety">The flattened variety (its <see cref="Material.StatedFields"/> say what it states itself).</param>
+    /// <param name="species">The species' own values.</param>
+    public static IReadOnlyList<CatalogueFinding> CheckAgainstSpecies(Material variety, Material species)
+    {
+        ArgumentNullException.ThrowIfNull(variety);
+        ArgumentNullException.ThrowIfNull(species);
+        var f = new List<CatalogueFinding>();
+        foreach (string field in variety.StatedFields)
+        {
+            string own = MaterialFieldText.Of(variety, field), inherited = MaterialFieldText.Of(species, field);
+            if (own == inherited)
+                f.Add(new(variety.Name, field, $"repeats its species' value {own}; state only what differs from species '{species.Name}'", FileOf(variety)));
+            else if (MaterialFieldText.RangeOf(variety, field) is { } r && MaterialFieldText.RangeOf(species, field) is { } whole
+                && (r.Minimum < whole.Minimum || r.Maximum > whole.Maximum))
+                f.Add(new(variety.Name, field, $"{r.ToString("0.####")} lies outside its species' range {whole.ToString("0.####")}", FileOf(variety)));
+        }
+        return f;
+    }
+
+    private static IEnumerable<CatalogueFinding> CheckDispersionWithinSpecies(IReadOnlyList<Material> materials)
+    {
+        foreach (IGrouping<string, Material> group in materials.Where(m => m.Dispersion > 0).GroupBy(m => m.Species))
+        {
+            Material most = group.MaxBy(m => m.Dispersion!.Value)!;
+            foreach (Material m in group.Where(m => most.Dispersion!.Value / m.Dispersion!.Value >= DispersionSpreadWithinSpecies))
+                yield return new(m.Name, "dispersion",
+                    $"{Format(m.Dispersion!.Value)} is {Format(most.Dispersion!.Value / m.Dispersion.Value)} times below " +
+                    $"'{most.Name}' ({Format(most.Dispersion.Value)}) of the same species; a C–F value (nF − nC) is about " +
+                    $"1/{Format(GeeBeeToCeeEffRatio)} of nG − nB, which the field holds", FileOf(m));
+        }
     }
 
     private static void CheckText(Material m, Action<string, string> add)
@@ -64,19 +146,53 @@ public static class CatalogueCheck
         if (string.IsNullOrWhiteSpace(m.Name)) add("name", "the name is empty");
         if (string.IsNullOrWhiteSpace(m.Species)) add("species", "the species is empty");
         else if (m.Species != m.Species.ToLowerInvariant()) add("species", $"'{m.Species}' must be lower-case");
-        if (string.IsNullOrWhiteSpace(m.Provenance)) add("provenance", "no source is named for the numbers");
     }
+
+    private static void CheckSources(Material m, Action<string, string> add)
+    {
+        foreach (string field in CatalogueFields.NumericOf(m).Where(f => !m.Sources.ContainsKey(f)))
+            add(field, "no source is named for this number; name a reference in \"sources\"");
+    }
+
+    private static void CheckOpaque(Material m, Action<string, string> add)
+    {
+        if (!m.IsOpaque)
+        {
+            if (m.Polariscope.Count == 0) add("polariscope", "no polariscope reaction is given; list at least one (or mark the entry opaque)");
+            return;
+        }
+        if (m.Polariscope.Count > 0)
+            add("polariscope", $"[{string.Join(", ", m.Polariscope.Select(Word))}] is given for an opaque entry, which no polariscope can test; give []");
+        if (m.Pleochroism != PleochroismStrength.None)
+            add("pleochroism", $"{Word(m.Pleochroism)} is given for an opaque entry, which no dichroscope can test; give none");
+    }
+
+    private static void CheckDispersionBand(Material m, Action<string, string> add)
+    {
+        if (m.Dispersion is not { } d || !(d >= 0 && d < 1)) return; // outside 0..1 is the range check's finding
+        double lowest = m.Indices.Lowest.Minimum - 1, highest = m.Indices.Highest.Maximum - 1;
+        if (!(lowest > 0)) return; // an index at or below 1 is the range check's finding
+        double least = LeastDispersivePower * highest, most = GreatestDispersivePower * lowest;
+        if (d + DispersionRounding < least)
+            add("dispersion", $"{Format(d)} is below {Format(least)}, the least nG − nB an ordinary material of index " +
+                $"{Format(highest + 1)} shows (dispersive power {Format(LeastDispersivePower)}); is it a C–F value (nF − nC)?");
+        else if (d - DispersionRounding > most)
+            add("dispersion", $"{Format(d)} is above {Format(most)}, the most nG − nB a material of index {Format(lowest + 1)} " +
+                $"shows (dispersive power {Format(GreatestDispersivePower)})");
+    }
+
+    private static string FileOf(Material m) => m.IsUserEntry ? "user catalogue" : m.Family.Length > 0 ? $"{m.Family}.json" : "";
 
     private static void CheckRanges(Material m, Action<string, string> add)
     {
         foreach ((string name, PropertyRange range) in m.Indices.Named())
-            CheckInside(add, FieldOf(name), range, IndexLowerBound, IndexUpperBound, "refractive index");
+            CheckInside(add, CatalogueFields.IndexField(name), range, IndexLowerBound, IndexUpperBound, "refractive index");
         CheckInside(add, "sg", m.SpecificGravity, SpecificGravityLowerBound, SpecificGravityUpperBound, "specific gravity");
         if (m.Birefringence is { Minimum: < 0 } b) add("birefringence", $"{b} is negative; birefringence is 0 or more");
         if (m.Hardness is { } h && !(h.Minimum >= 1 && h.Maximum <= 10)) add("hardness", $"{h} is outside the Mohs scale 1 to 10");
         if (m.Dispersion is { } d && !(d >= 0 && d < 1)) add("dispersion", $"{Format(d)} is outside 0 to below 1");
         foreach (double nm in m.AbsorptionLinesNanometres.Where(nm => !(nm >= 300 && nm <= 1000)))
-            add("absorption_nm", $"{Format(nm)} nm is outside the 300 to 1000 nm a hand spectroscope shows");
+            add("absorption", $"{Format(nm)} nm is outside the 300 to 1000 nm a hand spectroscope shows");
     }
 
     private static void CheckInside(Action<string, string> add, string field, PropertyRange r, double low, double high, string quantity)
@@ -153,11 +269,6 @@ public static class CatalogueCheck
         if (m.CrystalSystem == CrystalSystem.Cubic && m.Polariscope.Contains(PolariscopeReaction.DoublyRefractive))
             add("polariscope", "a cubic material cannot be doubly refractive; strain shows as anomalous");
     }
-
-    private static string FieldOf(string indexSymbol) => indexSymbol switch
-    {
-        "ω" => "omega", "ε" => "epsilon", "α" => "alpha", "β" => "beta", "γ" => "gamma", _ => "n",
-    };
 
     private static string Word<T>(T value) where T : struct, Enum => value.ToString().ToLowerInvariant();
 

@@ -7,8 +7,9 @@ namespace GemIndex.Core.Catalogue;
 /// <param name="Entry">The entry's name as written in the catalogue.</param>
 /// <param name="Field">The source-file field at fault.</param>
 /// <param name="Problem">One sentence saying what is wrong, with the values involved.</param>
-public sealed record CatalogueFinding(string Entry, string Field, string Problem)
+/// <param name="File">The file the entry comes from ("corundum.json"), or "" when not known.</param>
+public sealed record CatalogueFinding(string Entry, string Field, string Problem, string File = "")
 {
-    /// <summary>"entry 'ruby', field sg: …".</summary>
-    public override string ToString() => $"entry '{Entry}', field {Field}: {Problem}";
+    /// <summary>"corundum.json: entry 'ruby', field sg: …".</summary>
+    public override string ToString() => (File.Length > 0 ? $"{File}: " : "") + $"entry '{Entry}', field {Field}: {Problem}";
 }

@@ -5,8 +5,8 @@ namespace GemIndex.Core.Catalogue;
 
 /// <summary>
 /// One catalogue entry: a gem material (species and variety, or a man-made material) with the ranges and
-/// usual reactions the bench tests can observe, how often it reaches a bench, and where its numbers come
-/// from. Indices are at 589.3 nm. Immutable; checked as a whole by the catalogue check.
+/// usual reactions the bench tests can observe, how often it reaches a bench, and the source of each value.
+/// Indices are at 589.3 nm. Immutable; checked as a whole by the catalogue check.
 /// </summary>
 public sealed record Material
 {
@@ -74,8 +74,8 @@ public sealed record Material
     public IReadOnlyList<string> Colours { get; init; } = [];
 
     /// <summary>
-    /// How common this variety or origin is among stones of its species (its share of the species' prior). For a
-    /// species with one entry it is the species' own frequency.
+    /// How common this variety or origin is among stones of its species (its share of the species' prior: the
+    /// variety's "share" in the family file).
     /// </summary>
     public BenchFrequency Frequency { get; init; } = BenchFrequency.Occasional;
 
@@ -94,8 +94,17 @@ public sealed record Material
     /// <summary>Short notes for the bench user.</summary>
     public string Notes { get; init; } = "";
 
-    /// <summary>The published source of the numbers, or "from memory of standard handbook values".</summary>
-    public required string Provenance { get; init; }
+    /// <summary>
+    /// The source of each value, by field name as the family files spell it ("omega", "sg", "uv_long"); a field
+    /// missing here has no source. Keys are <see cref="CatalogueFields"/> names.
+    /// </summary>
+    public IReadOnlyDictionary<string, ValueSource> Sources { get; init; } = new Dictionary<string, ValueSource>();
+
+    /// <summary>
+    /// The fields this entry states itself instead of inheriting them from its species (a variety's own colours, a
+    /// synthetic's narrower range); empty for an entry that inherits everything or stands alone.
+    /// </summary>
+    public IReadOnlyList<string> StatedFields { get; init; } = [];
 
     /// <summary>True for an entry from the user's own catalogue rather than the shipped one.</summary>
     public bool IsUserEntry { get; init; }

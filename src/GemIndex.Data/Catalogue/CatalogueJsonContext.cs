@@ -15,4 +15,5 @@ namespace GemIndex.Data.Catalogue;
     DefaultIgnoreCondition = JsonIgnoreCondition.WhenWritingNull,
     Converters = [typeof(FiniteDoubleConverter)])]
 [JsonSerializable(typeof(FamilyDocument))]
+[JsonSerializable(typeof(SharedReferencesDocument))]
 internal sealed partial class CatalogueJsonContext : JsonSerializerContext;

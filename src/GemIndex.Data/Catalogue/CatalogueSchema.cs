@@ -6,7 +6,7 @@ namespace GemIndex.Data.Catalogue;
 public static class CatalogueSchema
 {
     /// <summary>The schema version this build reads and writes (PRAGMA user_version and meta 'schema_version').</summary>
-    public const int Version = 1;
+    public const int Version = 2;
 
     /// <summary>The schema's SQL text.</summary>
     public static string Sql { get; } = EmbeddedText("GemIndex.Catalogue.schema.sql");

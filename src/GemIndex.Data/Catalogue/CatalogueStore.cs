@@ -97,13 +97,18 @@ public sealed class CatalogueStore : IDisposable
             r => CatalogueWords.Stored<PolariscopeReaction>(r.GetString(1)));
         var uv = Children(c, "SELECT material_id, wave, strength FROM material_uv ORDER BY material_id, wave, position",
             r => (Wave: r.GetString(1), Strength: CatalogueWords.Stored<FluorescenceStrength>(r.GetString(2))));
-        var absorption = Children(c, "SELECT material_id, nanometres FROM material_absorption ORDER BY material_id, position", r => r.GetDouble(1));
+        var absorption = Children(c, "SELECT material_id, nanometres, strength FROM material_absorption ORDER BY material_id, position",
+            r => new AbsorptionLine(r.GetDouble(1), CatalogueWords.Stored<LineStrength>(r.GetString(2))));
+        var sources = Children(c, """
+            SELECT s.material_id, s.field, r.key, r.kind, r.citation FROM material_source s JOIN reference r ON r.key = s.reference_key
+            ORDER BY s.material_id, s.field
+            """, r => (Field: r.GetString(1), Source: new ValueSource(r.GetString(2), CatalogueWords.Stored<SourceKind>(r.GetString(3)), r.GetString(4))));
         var colours = Children(c, "SELECT material_id, colour FROM material_colour ORDER BY material_id, position", r => r.GetString(1));
         using SqliteCommand cmd = c.CreateCommand();
         cmd.CommandText = """
             SELECT id, name, species, variety, family, origin, crystal_system, optic_character, optic_sign,
                    birefringence_min, birefringence_max, sg_min, sg_max, dispersion, hardness_min, hardness_max,
-                   pleochroism, thermal_probe, electrical, frequency, do_not_immerse, notes, provenance
+                   pleochroism, thermal_probe, electrical, frequency, share, forms, opaque, do_not_immerse, notes, stated_fields
             FROM material ORDER BY id
             """;
         using SqliteDataReader r = cmd.ExecuteReader();
@@ -127,15 +132,19 @@ public sealed class CatalogueStore : IDisposable
                 Pleochroism = CatalogueWords.Stored<PleochroismStrength>(r.GetString(16)),
                 ThermalProbe = CatalogueWords.Stored<ThermalProbeResult>(r.GetString(17)),
                 Electrical = CatalogueWords.Stored<ElectricalResult>(r.GetString(18)),
-                Frequency = CatalogueWords.Stored<BenchFrequency>(r.GetString(19)),
                 SpeciesFrequency = CatalogueWords.Stored<BenchFrequency>(r.GetString(19)),
-                DoNotImmerse = r.GetInt64(20) != 0,
-                Notes = r.GetString(21),
-                Provenance = r.GetString(22),
+                Frequency = CatalogueWords.Stored<BenchFrequency>(r.GetString(20)),
+                Forms = r.GetString(21).Split(' ', StringSplitOptions.RemoveEmptyEntries)
+                    .Aggregate(MaterialForm.None, (all, word) => all | CatalogueWords.Stored<MaterialForm>(word)),
+                IsOpaque = r.GetInt64(22) != 0,
+                DoNotImmerse = r.GetInt64(23) != 0,
+                Notes = r.GetString(24),
+                StatedFields = r.GetString(25).Split(' ', StringSplitOptions.RemoveEmptyEntries),
+                Sources = (sources.GetValueOrDefault(id) ?? []).ToDictionary(x => x.Field, x => x.Source, StringComparer.Ordinal),
                 Polariscope = polariscope.GetValueOrDefault(id) ?? [],
                 UvLong = [.. own.Where(u => u.Wave == "long").Select(u => u.Strength)],
                 UvShort = [.. own.Where(u => u.Wave == "short").Select(u => u.Strength)],
-                AbsorptionLines = [.. (absorption.GetValueOrDefault(id) ?? []).Select(nm => new AbsorptionLine(nm))],
+                AbsorptionLines = absorption.GetValueOrDefault(id) ?? [],
                 Colours = colours.GetValueOrDefault(id) ?? [],
                 IsUserEntry = isUser,
             });

@@ -12,6 +12,10 @@ public static class CatalogueWords
     public static string Of<T>(T value) where T : struct, Enum =>
         Table<T>.ByValue.TryGetValue(value, out string? word) ? word : Spell(value.ToString());
 
+    /// <summary>The words of a set of forms, in declaration order: Crystal | Aggregate → crystal, aggregate.</summary>
+    public static IEnumerable<string> OfForms(GemIndex.Core.Catalogue.MaterialForm forms) =>
+        Enum.GetValues<GemIndex.Core.Catalogue.MaterialForm>().Where(f => f != GemIndex.Core.Catalogue.MaterialForm.None && forms.HasFlag(f)).Select(Of);
+
     /// <summary>Every word of an enumeration, in declaration order.</summary>
     public static IEnumerable<string> All<T>() where T : struct, Enum => Enum.GetValues<T>().Select(Of);
 

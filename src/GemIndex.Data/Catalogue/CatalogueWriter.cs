@@ -9,15 +9,16 @@ internal static class CatalogueWriter
     private const string InsertMaterial = """
         INSERT INTO material(name, species, variety, family, origin, crystal_system, optic_character, optic_sign,
             birefringence_min, birefringence_max, sg_min, sg_max, dispersion, hardness_min, hardness_max,
-            pleochroism, thermal_probe, electrical, frequency, do_not_immerse, notes, provenance)
+            pleochroism, thermal_probe, electrical, frequency, share, forms, opaque, do_not_immerse, notes, stated_fields)
         VALUES ($name, $species, $variety, $family, $origin, $system, $character, $sign,
             $bmin, $bmax, $sgmin, $sgmax, $dispersion, $hmin, $hmax,
-            $pleochroism, $thermal, $electrical, $frequency, $immerse, $notes, $provenance)
+            $pleochroism, $thermal, $electrical, $frequency, $share, $forms, $opaque, $immerse, $notes, $stated)
         RETURNING id
         """;
 
-    public static void Insert(SqliteConnection connection, SqliteTransaction transaction, IEnumerable<Material> materials)
+    public static void Insert(SqliteConnection connection, SqliteTransaction transaction, IReadOnlyList<Material> materials)
     {
+        InsertReferences(connection, transaction, materials.SelectMany(m => m.Sources.Values).Distinct());
         using SqliteCommand cmd = connection.CreateCommand();
         cmd.Transaction = transaction;
         cmd.CommandText = InsertMaterial;
@@ -51,10 +52,13 @@ internal static class CatalogueWriter
         p.AddWithValue("$pleochroism", CatalogueWords.Of(m.Pleochroism));
         p.AddWithValue("$thermal", CatalogueWords.Of(m.ThermalProbe));
         p.AddWithValue("$electrical", CatalogueWords.Of(m.Electrical));
-        p.AddWithValue("$frequency", CatalogueWords.Of(m.Frequency));
+        p.AddWithValue("$frequency", CatalogueWords.Of(m.SpeciesFrequency));
+        p.AddWithValue("$share", CatalogueWords.Of(m.Frequency));
+        p.AddWithValue("$forms", string.Join(' ', CatalogueWords.OfForms(m.Forms)));
+        p.AddWithValue("$opaque", m.IsOpaque ? 1 : 0);
         p.AddWithValue("$immerse", m.DoNotImmerse ? 1 : 0);
         p.AddWithValue("$notes", m.Notes);
-        p.AddWithValue("$provenance", m.Provenance);
+        p.AddWithValue("$stated", string.Join(' ', m.StatedFields));
     }
 
     private static void InsertChildren(SqliteConnection c, SqliteTransaction tx, long id, Material m)
@@ -67,10 +71,41 @@ internal static class CatalogueWriter
             Row(c, tx, "INSERT INTO material_uv(material_id, wave, position, strength) VALUES ($id, 'long', $a, $b)", id, i, CatalogueWords.Of(m.UvLong[i]));
         for (int i = 0; i < m.UvShort.Count; i++)
             Row(c, tx, "INSERT INTO material_uv(material_id, wave, position, strength) VALUES ($id, 'short', $a, $b)", id, i, CatalogueWords.Of(m.UvShort[i]));
-        for (int i = 0; i < m.AbsorptionLinesNanometres.Count; i++)
-            Row(c, tx, "INSERT INTO material_absorption(material_id, position, nanometres) VALUES ($id, $a, $b)", id, i, m.AbsorptionLinesNanometres[i]);
+        for (int i = 0; i < m.AbsorptionLines.Count; i++)
+            Row(c, tx, "INSERT INTO material_absorption(material_id, position, nanometres, strength) VALUES ($id, $a, $b, $c)", id, i,
+                m.AbsorptionLines[i].Nanometres, CatalogueWords.Of(m.AbsorptionLines[i].Strength));
+        foreach ((string field, ValueSource source) in m.Sources)
+            Row(c, tx, "INSERT INTO material_source(material_id, field, reference_key) VALUES ($id, $a, $b)", id, field, source.Key);
         for (int i = 0; i < m.Colours.Count; i++)
             Row(c, tx, "INSERT INTO material_colour(material_id, position, colour) VALUES ($id, $a, $b)", id, i, m.Colours[i]);
+    }
+
+    // One row per key; a key already in the file must carry the same kind and citation (one key, one citation).
+    private static void InsertReferences(SqliteConnection c, SqliteTransaction tx, IEnumerable<ValueSource> sources)
+    {
+        foreach (ValueSource s in sources)
+        {
+            using SqliteCommand find = c.CreateCommand();
+            find.Transaction = tx;
+            find.CommandText = "SELECT kind, citation FROM reference WHERE key = $key";
+            find.Parameters.AddWithValue("$key", s.Key);
+            using (SqliteDataReader r = find.ExecuteReader())
+            {
+                if (r.Read())
+                {
+                    if (r.GetString(0) != CatalogueWords.Of(s.Kind) || r.GetString(1) != s.Citation)
+                        throw new CatalogueStoreException($"reference '{s.Key}' is already in the catalogue file with another citation ('{r.GetString(1)}')");
+                    continue;
+                }
+            }
+            using SqliteCommand insert = c.CreateCommand();
+            insert.Transaction = tx;
+            insert.CommandText = "INSERT INTO reference(key, kind, citation) VALUES ($key, $kind, $citation)";
+            insert.Parameters.AddWithValue("$key", s.Key);
+            insert.Parameters.AddWithValue("$kind", CatalogueWords.Of(s.Kind));
+            insert.Parameters.AddWithValue("$citation", s.Citation);
+            insert.ExecuteNonQuery();
+        }
     }
 
     internal static string AxisWord(string symbol) => symbol switch

@@ -6,26 +6,46 @@ using GemIndex.Core.Quantities;
 namespace GemIndex.Data.Catalogue;
 
 /// <summary>
-/// Turns an <see cref="EntryDocument"/> into a Core <see cref="Material"/>, reporting every field that cannot be
-/// read (unknown word, a range that is not [min, max], indices that do not fit the optic character) by its
-/// source-file field name. Consistency between fields is the <see cref="CatalogueCheck"/>'s job.
+/// Turns an entry's identity and its (inherited and own) fields into a Core <see cref="Material"/>, reporting every
+/// field that cannot be read (unknown word, a range that is not [min, max], indices that do not fit the optic
+/// character, a required field missing) by its source-file field name. Consistency between fields is the
+/// <see cref="CatalogueCheck"/>'s job.
 /// </summary>
 internal static class EntryMapping
 {
-    private static readonly string[] IndexFields = ["n", "omega", "epsilon", "alpha", "beta", "gamma"];
+    /// <summary>
+    /// A variety (or user row) over the fields it inherits: the merged fields, the stated ones listed, each value's
+    /// source from the variety where it states the field and from the inherited side otherwise.
+    /// </summary>
+    public static Material? Flatten(EntryIdentity id, EntryFieldsDocument? inherited, Func<string, ValueSource?> inheritedSource,
+        EntryFieldsDocument own, Func<string, ValueSource?> ownSource, Action<string, string> error)
+    {
+        EntryFieldsDocument merged = inherited is null ? own : own.Over(inherited);
+        string[] stated = inherited is null ? [] : [.. own.Stated()];
+        var sources = new Dictionary<string, ValueSource>();
+        foreach (string field in merged.Stated())
+            if ((inherited is null || stated.Contains(field) ? ownSource(field) : inheritedSource(field)) is { } source) sources[field] = source;
+        return ToMaterial(id, merged, sources, stated, error);
+    }
 
-    public static Material? ToMaterial(EntryDocument e, string family, Action<string, string> error)
+    public static Material? ToMaterial(EntryIdentity id, EntryFieldsDocument e, IReadOnlyDictionary<string, ValueSource> sources,
+        IReadOnlyList<string> stated, Action<string, string> error)
     {
         bool failed = false;
         void Fail(string field, string problem) { failed = true; error(field, problem); }
 
-        OpticCharacter character = Word<OpticCharacter>("optic_character", e.OpticCharacter, Fail);
+        OpticCharacter character = Word<OpticCharacter>("optic_character", id.OpticCharacter, Fail);
         OpticalIndices? indices = failed ? null : Indices(e, character, Fail); // which indices are needed depends on the character
+        bool opaque = e.Opaque ?? false;
+        if (e.Sg is null) Fail("sg", "required: the specific gravity range [min, max]");
+        if (e.Forms is null or { Length: 0 }) Fail("forms", $"required: one or more of {CatalogueWords.Expected<MaterialForm>().Replace("none, ", "", StringComparison.Ordinal)}");
+        if (e.Colours is null or { Length: 0 }) Fail("colours", "required: one or more plain lower-case colour words");
+        if (e.Polariscope is null && !opaque) Fail("polariscope", "required unless the entry is opaque: a list of reactions");
         var material = new Material
         {
-            Name = e.Name, Species = e.Species, Variety = e.Variety, Family = family,
-            Origin = Word<OriginClass>("origin", e.Origin, Fail),
-            CrystalSystem = Word<CrystalSystem>("crystal_system", e.CrystalSystem, Fail),
+            Name = id.Name, Species = id.Species, Variety = id.Variety, Family = id.Family,
+            Origin = Word<OriginClass>("origin", id.Origin, Fail),
+            CrystalSystem = Word<CrystalSystem>("crystal_system", id.CrystalSystem, Fail),
             Indices = indices ?? OpticalIndices.SingleIndex(default), // replaced by null below when anything failed
             Sign = e.OpticSign is null ? OpticSign.None : Word<OpticSign>("optic_sign", e.OpticSign, Fail),
             Birefringence = Range("birefringence", e.Birefringence, Fail),
@@ -33,24 +53,39 @@ internal static class EntryMapping
             Dispersion = e.Dispersion,
             Hardness = Range("hardness", e.Hardness, Fail),
             Pleochroism = e.Pleochroism is null ? PleochroismStrength.None : Word<PleochroismStrength>("pleochroism", e.Pleochroism, Fail),
-            Polariscope = Words<PolariscopeReaction>("polariscope", e.Polariscope, Fail),
+            Polariscope = Words<PolariscopeReaction>("polariscope", e.Polariscope ?? [], Fail),
             ThermalProbe = e.ThermalProbe is null ? ThermalProbeResult.Negative : Word<ThermalProbeResult>("thermal_probe", e.ThermalProbe, Fail),
             Electrical = e.Electrical is null ? ElectricalResult.Insulating : Word<ElectricalResult>("electrical", e.Electrical, Fail),
             UvLong = Words<FluorescenceStrength>("uv_long", e.UvLong ?? [], Fail),
             UvShort = Words<FluorescenceStrength>("uv_short", e.UvShort ?? [], Fail),
-            AbsorptionLines = [.. (e.AbsorptionNm ?? []).Select(nm => new AbsorptionLine(nm))],
-            Colours = e.Colours,
-            Frequency = Word<BenchFrequency>("frequency", e.Frequency, Fail),
+            AbsorptionLines = [.. (e.Absorption ?? []).Select(a => new AbsorptionLine(a.Nm, Word<LineStrength>("absorption", a.Strength, Fail)))],
+            Colours = e.Colours ?? [],
+            Frequency = Word<BenchFrequency>("share", id.Share, Fail),
+            SpeciesFrequency = Word<BenchFrequency>("frequency", id.Frequency, Fail),
+            Forms = Forms(e.Forms ?? [], Fail),
+            IsOpaque = opaque,
             DoNotImmerse = e.DoNotImmerse ?? false,
             Notes = e.Notes ?? "",
-            Provenance = e.Provenance,
+            Sources = sources,
+            StatedFields = stated,
         };
-        if (e.Colours.Any(c => string.IsNullOrWhiteSpace(c) || c != c.ToLowerInvariant()))
-            Fail("colours", $"colours must be non-empty lower-case words; got [{string.Join(", ", e.Colours)}]");
-        return failed || indices is null ? null : material with { SpeciesFrequency = material.Frequency };
+        if (material.Colours.Any(c => string.IsNullOrWhiteSpace(c) || c != c.ToLowerInvariant()))
+            Fail("colours", $"colours must be non-empty lower-case words; got [{string.Join(", ", material.Colours)}]");
+        return failed || indices is null ? null : material;
     }
 
-    private static OpticalIndices? Indices(EntryDocument e, OpticCharacter character, Action<string, string> fail)
+    private static MaterialForm Forms(string[] words, Action<string, string> fail)
+    {
+        MaterialForm forms = MaterialForm.None;
+        foreach (string w in words)
+        {
+            if (w != "none" && CatalogueWords.TryParse(w, out MaterialForm f)) forms |= f;
+            else fail("forms", $"'{w}' is not one of crystal, aggregate, amorphous");
+        }
+        return forms;
+    }
+
+    private static OpticalIndices? Indices(EntryFieldsDocument e, OpticCharacter character, Action<string, string> fail)
     {
         string[] needed = character switch
         {
@@ -63,7 +98,7 @@ internal static class EntryMapping
             ["n"] = e.N, ["omega"] = e.Omega, ["epsilon"] = e.Epsilon, ["alpha"] = e.Alpha, ["beta"] = e.Beta, ["gamma"] = e.Gamma,
         };
         bool ok = true;
-        foreach (string field in IndexFields)
+        foreach (string field in CatalogueFields.Indices)
         {
             if (needed.Contains(field) && given[field] is null) { fail(field, $"required for {Article(character)} material"); ok = false; }
             if (!needed.Contains(field) && given[field] is not null)
@@ -104,7 +139,7 @@ internal static class EntryMapping
         }
     }
 
-    private static T Word<T>(string field, string? word, Action<string, string> fail) where T : struct, Enum
+    public static T Word<T>(string field, string? word, Action<string, string> fail) where T : struct, Enum
     {
         if (CatalogueWords.TryParse(word, out T value)) return value;
         fail(field, $"'{word}' is not one of {CatalogueWords.Expected<T>()}");

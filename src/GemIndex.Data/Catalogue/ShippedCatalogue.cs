@@ -15,8 +15,17 @@ public static class ShippedCatalogue
     /// <summary>The embedded family files, in ordinal file-name order.</summary>
     public static IReadOnlyList<FamilySource> Sources { get; } = LoadSources();
 
-    /// <summary>The first 16 hex digits of the SHA-256 of the embedded schema and family files (names and bytes).</summary>
+    /// <summary>The embedded reference-db/sources.json: the references every family file may name.</summary>
+    public static string SharedReferences { get; } = System.Text.Encoding.UTF8.GetString(CatalogueSchema.EmbeddedBytes("GemIndex.Catalogue.sources.json"));
+
+    /// <summary>The first 16 hex digits of the SHA-256 of the embedded schema, sources.json and family files (names and bytes).</summary>
     public static string ContentHash { get; } = HashOf(Sources);
+
+    private static readonly Lazy<FamilyCatalogue> Read = new(() => FamilyFileReader.ReadCatalogue(Sources));
+
+    /// <summary>The embedded family files read (once): species and references included, for checks and inheriting user rows.</summary>
+    /// <exception cref="CatalogueFormatException">An embedded family file cannot be read.</exception>
+    public static FamilyCatalogue Families => Read.Value;
 
     /// <summary>The built file's path inside a cache folder.</summary>
     public static string PathIn(string cacheDirectory) => Path.Combine(cacheDirectory, $"catalogue-{ContentHash}.db");
@@ -38,7 +47,7 @@ public static class ShippedCatalogue
                 // Our own cache from another version or damaged: rebuilt below, never patched.
             }
         }
-        CatalogueBuilder.Build(Sources, path, ContentHash);
+        CatalogueBuilder.Write(Families.Materials, path, "shipped", ContentHash);
         return path;
     }
 
@@ -56,11 +65,11 @@ public static class ShippedCatalogue
             .Select(n => new FamilySource(n[MaterialsPrefix.Length..],
                 System.Text.Encoding.UTF8.GetString(CatalogueSchema.EmbeddedBytes(n))))];
 
-    /// <summary>The first 16 hex digits of the SHA-256 of the schema and the given family files (names and text).</summary>
+    /// <summary>The first 16 hex digits of the SHA-256 of the schema, sources.json and the given family files (names and text).</summary>
     public static string HashOf(IReadOnlyList<FamilySource> sources)
     {
         using var sha = IncrementalHash.CreateHash(HashAlgorithmName.SHA256);
-        sha.AppendData(System.Text.Encoding.UTF8.GetBytes($"schema {CatalogueSchema.Version}\n{CatalogueSchema.Sql}\n"));
+        sha.AppendData(System.Text.Encoding.UTF8.GetBytes($"schema {CatalogueSchema.Version}\n{CatalogueSchema.Sql}\n{SharedReferences}\n"));
         foreach (FamilySource s in sources)
             sha.AppendData(System.Text.Encoding.UTF8.GetBytes($"{s.FileName}\n{s.Json.Length}\n{s.Json}\n"));
         return Convert.ToHexStringLower(sha.GetHashAndReset())[..16];

@@ -25,10 +25,11 @@ public sealed class UserCatalogue(string path)
 
     /// <summary>Reads, checks and adds every row of a CSV file in one transaction, or nothing if any row is bad.</summary>
     /// <param name="csv">The CSV text (reference-db/README.md, "User catalogue CSV").</param>
-    /// <param name="shipped">The shipped catalogue, whose names a user entry may not take.</param>
-    public CatalogueImportResult Import(TextReader csv, IReadOnlyList<Material> shipped)
+    /// <param name="shipped">The shipped catalogue, whose names a user entry may not take and whose species a row may inherit.</param>
+    public CatalogueImportResult Import(TextReader csv, FamilyCatalogue shipped)
     {
-        (IReadOnlyList<CatalogueCsvRow> rows, IReadOnlyList<CatalogueImportError> readErrors) = CatalogueCsvReader.Read(csv);
+        ArgumentNullException.ThrowIfNull(shipped);
+        (IReadOnlyList<CatalogueCsvRow> rows, IReadOnlyList<CatalogueImportError> readErrors) = CatalogueCsvReader.Read(csv, shipped);
         var errors = new List<CatalogueImportError>(readErrors);
         IReadOnlyList<Material> existing = Load();
         errors.AddRange(CheckRows(rows, shipped, existing));
@@ -37,14 +38,17 @@ public sealed class UserCatalogue(string path)
         return new(rows.Count, []);
     }
 
-    private static IEnumerable<CatalogueImportError> CheckRows(IReadOnlyList<CatalogueCsvRow> rows, IReadOnlyList<Material> shipped, IReadOnlyList<Material> existing)
+    private static IEnumerable<CatalogueImportError> CheckRows(IReadOnlyList<CatalogueCsvRow> rows, FamilyCatalogue shipped, IReadOnlyList<Material> existing)
     {
-        var shippedNames = shipped.Select(m => m.Name).ToHashSet(StringComparer.OrdinalIgnoreCase);
+        var shippedNames = shipped.Materials.Select(m => m.Name).ToHashSet(StringComparer.OrdinalIgnoreCase);
         var userNames = existing.Select(m => m.Name).ToHashSet(StringComparer.OrdinalIgnoreCase);
         var seen = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
         foreach (CatalogueCsvRow row in rows)
         {
-            foreach (CatalogueFinding f in CatalogueCheck.CheckEntry(row.Material))
+            IEnumerable<CatalogueFinding> findings = CatalogueCheck.CheckEntry(row.Material);
+            if (row.Material.StatedFields.Count > 0 && shipped.Species.TryGetValue(row.Material.Species, out Material? species))
+                findings = findings.Concat(CatalogueCheck.CheckAgainstSpecies(row.Material, species));
+            foreach (CatalogueFinding f in findings)
                 yield return new(row.Line, CatalogueCsvReader.ColumnsOf(f.Field), f.Problem);
             string name = row.Material.Name;
             if (shippedNames.Contains(name))

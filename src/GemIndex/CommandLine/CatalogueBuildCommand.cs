@@ -20,13 +20,14 @@ internal static class CatalogueBuildCommand
         command.SetAction(pr => CatalogueFailure.Guard(pr, (stdout, error) =>
         {
             IReadOnlyList<FamilySource> sources = pr.GetValue(source) is { } dir ? FamilySource.FromDirectory(dir.FullName) : ShippedCatalogue.Sources;
-            IReadOnlyList<Material> materials = FamilyFileReader.ReadAll(sources);
+            FamilyCatalogue families = FamilyFileReader.ReadCatalogue(sources);
+            IReadOnlyList<Material> materials = families.Materials;
             if (materials.Count == 0)
             {
                 error.WriteLine("gemindex: no catalogue entries to build: the family folder holds no entries");
                 return ExitCodes.BadInput;
             }
-            IReadOnlyList<CatalogueFinding> findings = CatalogueCheck.Check(materials);
+            IReadOnlyList<CatalogueFinding> findings = families.Check();
             foreach (CatalogueFinding f in findings) error.WriteLine($"gemindex: {f}");
             if (findings.Count > 0)
             {

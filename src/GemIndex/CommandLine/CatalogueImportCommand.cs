@@ -22,7 +22,7 @@ internal static class CatalogueImportCommand
             var user = new UserCatalogue(locations.UserCataloguePath);
             CatalogueImportResult result;
             using (var reader = new StreamReader(csv.FullName))
-                result = user.Import(reader, ShippedCatalogue.Load(locations.CacheDirectory));
+                result = user.Import(reader, ShippedCatalogue.Families);
             if (pr.GetValue(json))
                 CommandJson.Write(output, new CatalogueImportJson(csv.FullName, user.Path, result.Imported,
                     [.. result.Errors.Select(e => new ImportErrorJson(e.Line, e.Field, e.Problem))]));

@@ -33,7 +33,7 @@ internal static class CatalogueListCommand
             var filter = new CatalogueFilter(pr.GetValue(index), pr.GetValue(tolerance), pr.GetValue(sg), pr.GetValue(sgTolerance),
                 pr.GetValue(character) is { } word && CatalogueWords.TryParse(word, out OpticCharacter c) ? c : null);
             Material[] shown = [.. all.Where(filter.Matches)];
-            if (pr.GetValue(json)) CommandJson.Write(output, new CatalogueListJson(shown.Length, [.. shown.Select(MaterialJson.From)]));
+            if (pr.GetValue(json)) CommandJson.Write(output, new CatalogueListJson(shown.Length, [.. shown.Select(CatalogueEntryDocument.From)]));
             else
             {
                 if (shown.Length > 0) MaterialText.WriteTable(output, shown);

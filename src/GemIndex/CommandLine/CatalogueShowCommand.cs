@@ -24,7 +24,7 @@ internal static class CatalogueShowCommand
                     (near.Length > 0 ? $"; did you mean: {string.Join(", ", near)}?" : "; try 'gemindex catalogue list'"));
                 return ExitCodes.BadInput;
             }
-            if (pr.GetValue(json)) CommandJson.Write(output, MaterialJson.From(found));
+            if (pr.GetValue(json)) CommandJson.Write(output, CatalogueEntryDocument.From(found));
             else MaterialText.WriteDetails(output, found);
             return ExitCodes.Ok;
         }));

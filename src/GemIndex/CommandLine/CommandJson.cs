@@ -8,7 +8,7 @@ namespace GemIndex.Cli.CommandLine;
     PropertyNamingPolicy = JsonKnownNamingPolicy.SnakeCaseLower,
     WriteIndented = true,
     DefaultIgnoreCondition = JsonIgnoreCondition.WhenWritingNull)]
-[JsonSerializable(typeof(MaterialJson))]
+[JsonSerializable(typeof(GemIndex.Data.Catalogue.CatalogueEntryDocument))]
 [JsonSerializable(typeof(CatalogueListJson))]
 [JsonSerializable(typeof(CatalogueCheckJson))]
 [JsonSerializable(typeof(CatalogueImportJson))]

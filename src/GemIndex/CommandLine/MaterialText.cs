@@ -40,16 +40,30 @@ internal static class MaterialText
         lines.Add(("electrical", Word(m.Electrical)));
         lines.Add(("UV long (365 nm)", List(m.UvLong.Select(Word))));
         lines.Add(("UV short (254 nm)", List(m.UvShort.Select(Word))));
-        lines.Add(("absorption", m.AbsorptionLinesNanometres.Count == 0 ? "none given"
-            : string.Join(", ", m.AbsorptionLinesNanometres.Select(x => x.ToString("0.#", CultureInfo.InvariantCulture))) + " nm"));
+        lines.Add(("absorption", m.AbsorptionLines.Count == 0 ? "none given"
+            : string.Join(", ", m.AbsorptionLines.Select(x => $"{x.Nanometres.ToString("0.#", CultureInfo.InvariantCulture)} nm {Word(x.Strength)}"))));
         lines.Add(("colours", string.Join(", ", m.Colours)));
-        lines.Add(("frequency", Word(m.Frequency)));
+        lines.Add(("forms", string.Join(", ", CatalogueWords.OfForms(m.Forms))));
+        lines.Add(("opaque", m.IsOpaque ? "yes: no polariscope, dichroscope or transmitted-light spectrum" : "no"));
+        lines.Add(("species frequency", Word(m.SpeciesFrequency)));
+        lines.Add(("share of species", Word(m.Frequency)));
         lines.Add(("do not immerse", m.DoNotImmerse ? "yes: never weigh in water" : "no"));
         lines.Add(("notes", m.Notes.Length == 0 ? "-" : m.Notes));
-        lines.Add(("provenance", m.Provenance));
         lines.Add(("entry", m.IsUserEntry ? "your own (user catalogue)" : "shipped catalogue"));
+        if (m.StatedFields.Count > 0) lines.Add(("own fields", $"{string.Join(", ", m.StatedFields)} (the rest from species '{m.Species}')"));
         int width = lines.Max(l => l.Label.Length);
         foreach ((string label, string value) in lines) output.WriteLine($"{label.PadRight(width)}  {value}");
+        WriteSources(output, m);
+    }
+
+    // Each value's source, grouped by reference: "from memory of standard handbook values (memory, from memory): sg, dispersion".
+    private static void WriteSources(TextWriter output, Material m)
+    {
+        output.WriteLine("sources");
+        foreach (IGrouping<ValueSource, string> g in m.Sources.GroupBy(s => s.Value, s => s.Key))
+            output.WriteLine($"  {string.Join(", ", g)}: {g.Key.Citation} [{g.Key.Key}, {Word(g.Key.Kind)}]");
+        string[] missing = [.. CatalogueFields.NumericOf(m).Where(f => !m.Sources.ContainsKey(f))];
+        if (missing.Length > 0) output.WriteLine($"  {string.Join(", ", missing)}: no source named");
     }
 
     public static string Character(Material m) =>

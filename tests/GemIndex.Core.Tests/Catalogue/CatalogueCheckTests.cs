@@ -6,6 +6,12 @@ namespace GemIndex.Core.Tests.Catalogue;
 
 public class CatalogueCheckTests
 {
+    private static readonly ValueSource Memory = new("memory", SourceKind.FromMemory, "from memory of standard handbook values");
+
+    // Every field a fixture may use, from memory: the fixtures are invented, and say so.
+    private static readonly Dictionary<string, ValueSource> FromMemory =
+        CatalogueFields.Inheritable.ToDictionary(f => f, _ => Memory);
+
     // Invented test entries shaped like real ones; the numbers only need to be self-consistent.
     private static Material Uniaxial(string name = "test quartz") => new()
     {
@@ -19,7 +25,7 @@ public class CatalogueCheckTests
         Birefringence = new(0.009, 0.009),
         SpecificGravity = new(2.65, 2.66),
         Polariscope = [PolariscopeReaction.DoublyRefractive],
-        Provenance = "test fixture",
+        Sources = FromMemory,
     };
 
     private static Material Biaxial() => new()
@@ -34,7 +40,7 @@ public class CatalogueCheckTests
         Birefringence = new(0.035, 0.038),
         SpecificGravity = new(3.32, 3.37),
         Polariscope = [PolariscopeReaction.DoublyRefractive],
-        Provenance = "test fixture",
+        Sources = FromMemory,
     };
 
     private static Material Isotropic() => new()
@@ -47,7 +53,7 @@ public class CatalogueCheckTests
         Indices = OpticalIndices.SingleIndex(new(1.712, 1.720)),
         SpecificGravity = new(3.58, 3.61),
         Polariscope = [PolariscopeReaction.SinglyRefractive, PolariscopeReaction.Anomalous],
-        Provenance = "test fixture",
+        Sources = FromMemory,
     };
 
     private static void AssertOnlyFinding(Material m, string field)
@@ -207,9 +213,112 @@ public class CatalogueCheckTests
     }
 
     [Fact]
-    public void An_empty_provenance_is_reported()
+    public void A_number_without_a_source_is_reported_on_its_field()
     {
-        AssertOnlyFinding(Uniaxial() with { Provenance = "  " }, "provenance");
+        var sources = new Dictionary<string, ValueSource>(FromMemory);
+        sources.Remove("sg");
+        AssertOnlyFinding(Uniaxial() with { Sources = sources }, "sg");
+    }
+
+    [Fact]
+    public void An_opaque_entry_with_a_polariscope_reaction_is_reported()
+    {
+        AssertOnlyFinding(Isotropic() with { IsOpaque = true }, "polariscope");
+    }
+
+    [Fact]
+    public void An_opaque_entry_with_pleochroism_is_reported()
+    {
+        AssertOnlyFinding(Isotropic() with { IsOpaque = true, Polariscope = [], Pleochroism = PleochroismStrength.Weak }, "pleochroism");
+    }
+
+    [Fact]
+    public void An_opaque_entry_needs_no_polariscope_reaction()
+    {
+        Assert.Empty(CatalogueCheck.CheckEntry(Isotropic() with { IsOpaque = true, Polariscope = [] }));
+    }
+
+    [Fact]
+    public void The_G_to_B_over_C_to_F_ratio_agrees_with_Malitsons_fused_silica()
+    {
+        // Malitson (1965), J. Opt. Soc. Am. 55, 1205, fused silica Sellmeier (DOMAIN.md §7), evaluated by the core's own
+        // Sellmeier model: (nG − nB)/(nF − nC) = 1.703 by an independent calculation; the constant is quoted to 0.01.
+        var silica = new GemIndex.Core.Optics.Dispersion.SellmeierModel(
+            new(0.6961663, 0.0684043 * 0.0684043), new(0.4079426, 0.1162414 * 0.1162414), new(0.8974794, 9.896161 * 9.896161));
+        double gb = GemIndex.Core.Optics.Dispersion.TradeDispersion.Of(silica);
+        double cf = silica.IndexAt(GemIndex.Core.Optics.Dispersion.ReferenceWavelengths.F) - silica.IndexAt(GemIndex.Core.Optics.Dispersion.ReferenceWavelengths.C);
+        Assert.Equal(CatalogueCheck.GeeBeeToCeeEffRatio, gb / cf, 0.01);
+        // and fused silica's own nG − nB (0.0115 at n 1.458) lies inside the band
+        Assert.Empty(CatalogueCheck.CheckEntry(Isotropic() with
+        {
+            CrystalSystem = CrystalSystem.Amorphous, Indices = OpticalIndices.SingleIndex(new(1.458, 1.459), OpticCharacter.Amorphous),
+            Dispersion = Math.Round(gb, 4), Polariscope = [PolariscopeReaction.SinglyRefractive],
+        }));
+    }
+
+    [Fact]
+    public void A_C_to_F_value_for_a_weakly_dispersive_material_is_reported()
+    {
+        // Fluorite n 1.434 (DOMAIN.md §7); its C–F value is about 0.0045 (from memory; nG − nB about 0.007).
+        Material fluorite = Isotropic() with { Indices = OpticalIndices.SingleIndex(new(1.433, 1.435)), Dispersion = 0.0045 };
+        AssertOnlyFinding(fluorite, "dispersion");
+        Assert.Empty(CatalogueCheck.CheckEntry(fluorite with { Dispersion = 0.007 }));
+    }
+
+    [Fact]
+    public void A_dispersion_far_above_any_material_of_its_index_is_reported()
+    {
+        // 0.2 at n 1.716 would need an Abbe number near 6: no spinel-like material disperses so.
+        AssertOnlyFinding(Isotropic() with { Dispersion = 0.2 }, "dispersion");
+    }
+
+    [Fact]
+    public void Two_dispersions_of_one_species_a_C_to_F_ratio_apart_are_reported_on_the_lower()
+    {
+        // Issue 12: synthetic scheelite 0.026 (the C–F value) against scheelite 0.038 (nG − nB).
+        Material natural = Uniaxial("scheelite") with { Species = "scheelite", Dispersion = 0.038 };
+        Material synthetic = Uniaxial("synthetic scheelite") with { Species = "scheelite", Dispersion = 0.026 };
+        CatalogueFinding f = Assert.Single(CatalogueCheck.Check([natural, synthetic]));
+        Assert.Equal(("synthetic scheelite", "dispersion"), (f.Entry, f.Field));
+    }
+
+    [Fact]
+    public void Dispersions_of_one_species_that_differ_as_real_varieties_do_are_accepted()
+    {
+        // Issue 12: synthetic rutile about 0.33 against natural rutile 0.28 (a ratio of 1.18); checked on the spread
+        // rule alone (quartz's indices would put 0.3 outside the band).
+        Material natural = Uniaxial("rutile") with { Species = "rutile", Dispersion = 0.28 };
+        Material synthetic = Uniaxial("synthetic rutile") with { Species = "rutile", Dispersion = 0.33 };
+        Assert.DoesNotContain(CatalogueCheck.Check([natural, synthetic]), f => f.Problem.Contains("same species", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void A_variety_repeating_its_species_value_is_reported()
+    {
+        Material species = Uniaxial("quartz");
+        Material variety = Uniaxial("amethyst") with { Colours = ["purple"], StatedFields = ["sg", "colours"] };
+        CatalogueFinding f = Assert.Single(CatalogueCheck.CheckAgainstSpecies(variety, species));
+        Assert.Equal(("amethyst", "sg"), (f.Entry, f.Field));
+        Assert.Contains("repeats", f.Problem, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_variety_range_outside_its_species_range_is_reported_and_a_narrower_one_accepted()
+    {
+        Material species = Uniaxial("quartz") with { SpecificGravity = new(2.60, 2.70) };
+        Material wider = Uniaxial("citrine") with { SpecificGravity = new(2.65, 2.75), StatedFields = ["sg"] };
+        Material narrower = Uniaxial("amethyst") with { SpecificGravity = new(2.65, 2.66), StatedFields = ["sg"] };
+        Assert.Equal("sg", Assert.Single(CatalogueCheck.CheckAgainstSpecies(wider, species)).Field);
+        Assert.Empty(CatalogueCheck.CheckAgainstSpecies(narrower, species));
+    }
+
+    [Fact]
+    public void The_whole_catalogue_check_compares_each_variety_with_its_species()
+    {
+        Material species = Uniaxial("quartz species");
+        Material variety = Uniaxial("amethyst") with { StatedFields = ["sg"], Family = "quartz" };
+        CatalogueFinding f = Assert.Single(CatalogueCheck.Check([variety], new Dictionary<string, Material> { ["quartz"] = species }));
+        Assert.Equal("quartz.json", f.File);
     }
 
     [Fact]
@@ -225,9 +334,10 @@ public class CatalogueCheckTests
     }
 
     [Fact]
-    public void A_finding_reads_as_entry_field_and_problem()
+    public void A_finding_reads_as_file_entry_field_and_problem()
     {
         Assert.Equal("entry 'x', field sg: too low", new CatalogueFinding("x", "sg", "too low").ToString());
+        Assert.Equal("corundum.json: entry 'x', field sg: too low", new CatalogueFinding("x", "sg", "too low", "corundum.json").ToString());
     }
 
     [Fact]
@@ -245,7 +355,7 @@ public class CatalogueCheckTests
     [Fact]
     public void An_absorption_line_outside_the_visible_spectroscope_range_is_reported()
     {
-        AssertOnlyFinding(Isotropic() with { AbsorptionLines = [new(685), new(1200)] }, "absorption_nm");
+        AssertOnlyFinding(Isotropic() with { AbsorptionLines = [new(685), new(1200)] }, "absorption");
     }
 
     [Fact]

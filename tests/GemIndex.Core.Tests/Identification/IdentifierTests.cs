@@ -16,7 +16,7 @@ public class IdentifierTests
     {
         Name = name, Species = species, Variety = name, Origin = origin, CrystalSystem = CrystalSystem.Cubic, Indices = indices, Sign = sign,
         Birefringence = bire, SpecificGravity = new PropertyRange(sgLow, sgHigh), ThermalProbe = thermal, Dispersion = dispersion,
-        DoNotImmerse = porous, Frequency = frequency, Provenance = "from memory of standard handbook values",
+        DoNotImmerse = porous, Frequency = frequency,
         Polariscope = indices.Character is OpticCharacter.Uniaxial or OpticCharacter.Biaxial ? [PolariscopeReaction.DoublyRefractive] : [PolariscopeReaction.SinglyRefractive],
     };
 

@@ -12,6 +12,13 @@ public class CatalogueRoundTripProperties
 {
     private static readonly OpticCharacter[] SingleIndexCharacters = [OpticCharacter.Isotropic, OpticCharacter.Amorphous, OpticCharacter.Aggregate];
 
+    private static readonly ValueSource[] References =
+    [
+        new("memory", SourceKind.FromMemory, "from memory of standard handbook values"),
+        new("practice", SourceKind.CommonPractice, "common practice"),
+        new("book-'quoted'", SourceKind.Published, "An invented handbook, \"quoted\", with, commas (2000), p. 12"),
+    ];
+
     private static T Pick<T>(Random r) where T : struct, Enum => Enum.GetValues<T>()[r.Next(Enum.GetValues<T>().Length)];
 
     private static PropertyRange? Maybe(Random r, double low, double span) =>
@@ -37,9 +44,13 @@ public class CatalogueRoundTripProperties
             ThermalProbe = Pick<ThermalProbeResult>(r), Electrical = Pick<ElectricalResult>(r),
             UvLong = [.. Enumerable.Range(0, r.Next(3)).Select(_ => Pick<FluorescenceStrength>(r))],
             UvShort = [.. Enumerable.Range(0, r.Next(3)).Select(_ => Pick<FluorescenceStrength>(r))],
-            AbsorptionLines = [.. Enumerable.Range(0, r.Next(4)).Select(_ => new AbsorptionLine(400 + r.NextDouble() * 300))],
+            AbsorptionLines = [.. Enumerable.Range(0, r.Next(4)).Select(_ => new AbsorptionLine(400 + r.NextDouble() * 300, Pick<LineStrength>(r)))],
             Colours = [.. Enumerable.Range(0, r.Next(3)).Select(k => "colour" + k)], Frequency = Pick<BenchFrequency>(r),
-            DoNotImmerse = r.Next(2) == 0, Notes = r.Next(2) == 0 ? "" : "note; with, punctuation", Provenance = "p",
+            SpeciesFrequency = Pick<BenchFrequency>(r), Forms = (MaterialForm)r.Next(1, 8), IsOpaque = r.Next(2) == 0,
+            DoNotImmerse = r.Next(2) == 0, Notes = r.Next(2) == 0 ? "" : "note; with, punctuation",
+            // Sources from a small pool, so that entries share references as the catalogue's do (one row per key).
+            Sources = CatalogueFields.Inheritable.Where(_ => r.Next(2) == 0).ToDictionary(f => f, _ => References[r.Next(References.Length)]),
+            StatedFields = [.. CatalogueFields.Inheritable.Where(_ => r.Next(4) == 0)],
         };
     }
 

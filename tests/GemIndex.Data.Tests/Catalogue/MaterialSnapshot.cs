@@ -12,8 +12,10 @@ public static class MaterialSnapshot
         R(m.Birefringence), R(m.SpecificGravity), m.Dispersion?.ToString("R", CultureInfo.InvariantCulture) ?? "-", R(m.Hardness),
         m.Pleochroism, string.Join(";", m.Polariscope), m.ThermalProbe, m.Electrical,
         string.Join(";", m.UvLong), string.Join(";", m.UvShort),
-        string.Join(";", m.AbsorptionLinesNanometres.Select(x => x.ToString("R", CultureInfo.InvariantCulture))),
-        string.Join(";", m.Colours), m.Frequency, m.DoNotImmerse, m.Notes, m.Provenance, m.IsUserEntry);
+        string.Join(";", m.AbsorptionLines.Select(x => $"{x.Nanometres.ToString("R", CultureInfo.InvariantCulture)} {x.Strength}")),
+        string.Join(";", m.Colours), m.Frequency, m.SpeciesFrequency, m.Forms, m.IsOpaque, m.DoNotImmerse, m.Notes,
+        string.Join(";", m.Sources.OrderBy(s => s.Key, StringComparer.Ordinal).Select(s => $"{s.Key}={s.Value.Key}/{s.Value.Kind}/{s.Value.Citation}")),
+        string.Join(";", m.StatedFields), m.IsUserEntry);
 
     private static string R(PropertyRange? r) =>
         r is { } v ? $"[{v.Minimum.ToString("R", CultureInfo.InvariantCulture)},{v.Maximum.ToString("R", CultureInfo.InvariantCulture)}]" : "-";

@@ -5,6 +5,13 @@ namespace GemIndex.Data.Tests.Catalogue;
 
 public class ShippedCatalogueTests
 {
+    /// <summary>
+    /// The least share of shipped entries whose indices, birefringence, SG and dispersion all come from published works
+    /// (<see cref="SourcingSummary"/>): what the shipped files reach on this branch (0 of 260: the family files were
+    /// converted mechanically from entries all "from memory"). Raise it as sourced data lands; never lower it.
+    /// </summary>
+    private const double SourcedEntryShareFloor = 0.0;
+
     [Fact]
     public void The_embedded_sources_are_exactly_the_family_files_in_the_repository()
     {
@@ -44,8 +51,17 @@ public class ShippedCatalogueTests
         using var temp = new TempDirectory();
         IReadOnlyList<Material> shipped = ShippedCatalogue.Load(temp.Path);
         Assert.Equal(FamilyFileReader.ReadAll(ShippedCatalogue.Sources).Count, shipped.Count);
-        IReadOnlyList<CatalogueFinding> findings = CatalogueCheck.Check(shipped);
+        IReadOnlyList<CatalogueFinding> findings = CatalogueCheck.Check(shipped, ShippedCatalogue.Families.Species);
         Assert.True(findings.Count == 0, string.Join("\n", findings));
+    }
+
+    [Fact]
+    public void The_shipped_catalogues_sourced_entry_share_does_not_fall_below_its_floor()
+    {
+        SourcingSummary s = SourcingSummary.Of(ShippedCatalogue.Families.Materials);
+        Assert.True(s.SourcedEntryShare >= SourcedEntryShareFloor,
+            $"{s.SourcedEntries} of {s.Entries} entries sourced ({s.SourcedEntryShare:P1}); the floor is {SourcedEntryShareFloor:P1}");
+        Assert.Equal(0, s.UnsourcedValues); // every number names a source (a check finding otherwise)
     }
 
     [Fact]

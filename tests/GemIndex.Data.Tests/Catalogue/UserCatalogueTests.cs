@@ -5,14 +5,15 @@ namespace GemIndex.Data.Tests.Catalogue;
 
 public class UserCatalogueTests
 {
-    private static CatalogueImportResult Import(UserCatalogue user, string fixture, IReadOnlyList<Material>? shipped = null)
+    private static readonly FamilyCatalogue Shipped = FamilyFileReader.ReadCatalogue(Fixtures.FamilySources);
+
+    private static CatalogueImportResult Import(UserCatalogue user, string fixture, FamilyCatalogue? shipped = null)
     {
         using var reader = new StreamReader(Fixtures.File(fixture));
-        return user.Import(reader, shipped ?? []);
+        return user.Import(reader, shipped ?? Shipped);
     }
 
-    private static CatalogueImportResult ImportText(UserCatalogue user, string csv, IReadOnlyList<Material>? shipped = null) =>
-        user.Import(new StringReader(csv), shipped ?? []);
+    private static CatalogueImportResult ImportText(UserCatalogue user, string csv) => user.Import(new StringReader(csv), Shipped);
 
     [Fact]
     public void A_good_file_is_imported_and_its_entries_are_marked_as_user_entries()
@@ -21,13 +22,17 @@ public class UserCatalogueTests
         var user = new UserCatalogue(temp.File("user-catalogue.db"));
         CatalogueImportResult result = Import(user, "user-good.csv");
         Assert.True(result.Succeeded, string.Join("\n", result.Errors));
-        Assert.Equal(2, result.Imported);
+        Assert.Equal(3, result.Imported);
         IReadOnlyList<Material> loaded = user.Load();
-        Assert.Equal(["my test citrine", "my test glass"], loaded.Select(m => m.Name));
+        Assert.Equal(["my test citrine", "my test glass", "my test amethyst"], loaded.Select(m => m.Name));
         Assert.All(loaded, m => Assert.True(m.IsUserEntry));
-        Assert.Equal("heated, from a test parcel", loaded[0].Notes);
+        Assert.Equal("heated, from a test parcel\nkept apart", loaded[0].Notes);
         Assert.Equal(["yellow", "orange"], loaded[0].Colours);
         Assert.Equal("user", loaded[0].Family);
+        Assert.Equal(("user: my test citrine", SourceKind.FromMemory), (loaded[0].Sources["sg"].Key, loaded[0].Sources["sg"].Kind));
+        Material amethyst = loaded[2];
+        Assert.Equal(("quartz", 1.544, new PropertyRange(2.65, 2.65)), (amethyst.Species, amethyst.Indices.Omega!.Value.Minimum, amethyst.SpecificGravity));
+        Assert.Equal(["sg", "colours"], amethyst.StatedFields);
     }
 
     [Fact]
@@ -55,7 +60,7 @@ public class UserCatalogueTests
         var user = new UserCatalogue(temp.File("user-catalogue.db"));
         Assert.True(Import(user, "user-good.csv").Succeeded);
         Assert.False(Import(user, "user-bad.csv").Succeeded);
-        Assert.Equal(2, user.Load().Count);
+        Assert.Equal(3, user.Load().Count);
     }
 
     [Fact]
@@ -63,7 +68,8 @@ public class UserCatalogueTests
     {
         using var temp = new TempDirectory();
         var user = new UserCatalogue(temp.File("user-catalogue.db"));
-        IReadOnlyList<Material> shipped = [FamilyFileReader.ReadAll(Fixtures.FamilySources)[0] with { Name = "My Test Citrine" }];
+        string renamed = Fixtures.FamilySources[0].Json.Replace("\"sample rock crystal\"", "\"My Test Citrine\"", StringComparison.Ordinal);
+        FamilyCatalogue shipped = FamilyFileReader.ReadCatalogue([new FamilySource(Fixtures.FamilySources[0].FileName, renamed), Fixtures.FamilySources[1]]);
         CatalogueImportResult result = Import(user, "user-good.csv", shipped);
         CatalogueImportError e = Assert.Single(result.Errors);
         Assert.Equal("line 2, field name: 'my test citrine' is the name of a shipped catalogue entry; give your entry another name", e.ToString());
@@ -77,7 +83,8 @@ public class UserCatalogueTests
         var user = new UserCatalogue(temp.File("user-catalogue.db"));
         Assert.True(Import(user, "user-good.csv").Succeeded);
         CatalogueImportResult again = Import(user, "user-good.csv");
-        Assert.Equal(["line 2, field name: 'my test citrine' is already in your catalogue", "line 4, field name: 'my test glass' is already in your catalogue"],
+        Assert.Equal(["line 2, field name: 'my test citrine' is already in your catalogue", "line 5, field name: 'my test glass' is already in your catalogue",
+            "line 6, field name: 'my test amethyst' is already in your catalogue"],
             again.Errors.Select(e => e.ToString()));
     }
 
@@ -87,10 +94,23 @@ public class UserCatalogueTests
         using var temp = new TempDirectory();
         var user = new UserCatalogue(temp.File("user-catalogue.db"));
         string csv = File.ReadAllLines(Fixtures.File("user-good.csv"))[0] + "\n"
-            + "bad sign,quartz,citrine,treated,trigonal,uniaxial,negative,1.544,1.544,1.553,1.553,0.009,0.009,,,2.65,2.66,doubly_refractive,yellow,common,,own\n";
+            + "bad sign,quartz,citrine,treated,trigonal,uniaxial,negative,1.544,1.544,1.553,1.553,0.009,0.009,,,2.65,2.66,crystal,doubly_refractive,yellow,common,,own,from_memory,,\n";
         CatalogueImportError e = Assert.Single(ImportText(user, csv).Errors);
         Assert.Equal(2, e.Line);
         Assert.Equal("optic_sign", e.Field);
+    }
+
+    [Fact]
+    public void An_inheriting_row_that_repeats_or_leaves_its_species_range_is_refused()
+    {
+        using var temp = new TempDirectory();
+        var user = new UserCatalogue(temp.File("user-catalogue.db"));
+        string csv = "name,variety,origin,share,inherits,sg_min,sg_max,source,source_kind\n"
+            + "same,amethyst,natural,rare,quartz,2.65,2.66,own,from_memory\n"
+            + "wider,amethyst,natural,rare,quartz,2.60,2.66,own,from_memory\n";
+        Assert.Equal(["sg_min/sg_max", "sg_min/sg_max"], ImportText(user, csv).Errors.Select(e => e.Field));
+        Assert.Contains("repeats", ImportText(user, csv).Errors[0].Problem, StringComparison.Ordinal);
+        Assert.Contains("outside its species' range", ImportText(user, csv).Errors[1].Problem, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -101,7 +121,7 @@ public class UserCatalogueTests
         Assert.True(Import(new UserCatalogue(locations.UserCataloguePath), "user-good.csv").Succeeded);
         IReadOnlyList<Material> all = MergedCatalogue.Load(locations);
         int shipped = ShippedCatalogue.Sources.Count == 0 ? 0 : FamilyFileReader.ReadAll(ShippedCatalogue.Sources).Count;
-        Assert.Equal(shipped + 2, all.Count);
+        Assert.Equal(shipped + 3, all.Count);
         Assert.All(all.Take(shipped), m => Assert.False(m.IsUserEntry));
         Assert.All(all.Skip(shipped), m => Assert.True(m.IsUserEntry));
         Assert.StartsWith(temp.Path, ShippedCatalogue.EnsureBuilt(locations.CacheDirectory), StringComparison.Ordinal);

@@ -38,7 +38,7 @@ public class CatalogueCommandTests
         using var run = new CommandRun();
         var (exit, output, error) = run.Catalogue("import", CommandRun.Fixture("user-good.csv"));
         Assert.True(exit == 0, error);
-        Assert.Contains("imported 2 entries into", output, StringComparison.Ordinal);
+        Assert.Contains("imported 3 entries into", output, StringComparison.Ordinal);
         Assert.True(File.Exists(Path.Combine(run.Folder, "user-catalogue.db")));
         (exit, output, _) = run.Catalogue("list");
         Assert.Equal(0, exit);
@@ -140,11 +140,25 @@ public class CatalogueCommandTests
         Assert.Equal(0, exit);
         foreach (string label in new[] { "species", "variety", "origin", "crystal system", "optic character", "ω at 589.3 nm",
                      "ε at 589.3 nm", "birefringence", "specific gravity", "dispersion", "hardness", "pleochroism", "polariscope",
-                     "thermal probe", "electrical", "UV long (365 nm)", "UV short (254 nm)", "absorption", "colours", "frequency",
-                     "do not immerse", "notes", "provenance", "entry" })
+                     "thermal probe", "electrical", "UV long (365 nm)", "UV short (254 nm)", "absorption", "colours", "forms", "opaque",
+                     "species frequency", "share of species", "do not immerse", "notes", "entry", "sources" })
             Assert.Contains(label, output, StringComparison.Ordinal);
         Assert.Contains("heated, from a test parcel", output, StringComparison.Ordinal);
         Assert.Contains("your own (user catalogue)", output, StringComparison.Ordinal);
+        Assert.Contains("own measurements (invented test data) [user: my test citrine, from memory]", output, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Show_of_an_inheriting_user_entry_lists_each_value_with_its_source()
+    {
+        using var run = new CommandRun();
+        ImportGood(run);
+        var (exit, output, _) = run.Catalogue("show", "my test amethyst");
+        Assert.Equal(0, exit);
+        Assert.Contains("own fields         sg, colours (the rest from species 'quartz')", output, StringComparison.Ordinal);
+        string[] sources = output[output.IndexOf("\nsources\n", StringComparison.Ordinal)..].Split('\n');
+        Assert.Contains(sources, l => l.StartsWith("  colours, sg: own measurements (invented test data) [user: my test citrine".Replace("citrine", "amethyst", StringComparison.Ordinal), StringComparison.Ordinal));
+        Assert.Contains(sources, l => l.Contains("epsilon", StringComparison.Ordinal) && l.Contains("omega", StringComparison.Ordinal) && l.EndsWith("[memory, from memory]", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -157,6 +171,12 @@ public class CatalogueCommandTests
         using JsonDocument doc = JsonDocument.Parse(output);
         Assert.Equal([1.50, 1.70], doc.RootElement.GetProperty("n").EnumerateArray().Select(x => x.GetDouble()));
         Assert.Equal("very_common", doc.RootElement.GetProperty("frequency").GetString());
+        Assert.Equal("very_common", doc.RootElement.GetProperty("share").GetString());
+        Assert.Equal(["amorphous"], doc.RootElement.GetProperty("forms").EnumerateArray().Select(x => x.GetString()));
+        Assert.Equal("user: my test glass", doc.RootElement.GetProperty("sources").GetProperty("n").GetString());
+        JsonElement reference = Assert.Single(doc.RootElement.GetProperty("references").EnumerateArray());
+        Assert.Equal(("user: my test glass", "from_memory", "own measurements (invented test data)"),
+            (reference.GetProperty("key").GetString(), reference.GetProperty("kind").GetString(), reference.GetProperty("citation").GetString()));
         Assert.True(doc.RootElement.GetProperty("is_user_entry").GetBoolean());
     }
 
@@ -169,7 +189,7 @@ public class CatalogueCommandTests
         Assert.Equal(3, exit);
         Assert.Empty(output);
         Assert.Equal("gemindex: no entry named 'test'", error.Split(" among ")[0]);
-        Assert.Contains("did you mean: my test citrine, my test glass?", error, StringComparison.Ordinal);
+        Assert.Contains("did you mean: my test citrine, my test glass, my test amethyst?", error, StringComparison.Ordinal);
         Assert.Single(error.TrimEnd().Split('\n'));
     }
 
@@ -187,7 +207,9 @@ public class CatalogueCommandTests
         else
         {
             Assert.True(exit == 0, error);
-            Assert.Matches(@"^\d+ entries checked, no findings", output);
+            Assert.Matches(@"(?m)^\d+ entries checked, no findings$", output);
+            Assert.Matches(@"(?m)^sourced entries: \d+ of \d+ \(\d+\.\d %\) have every index, birefringence, SG and dispersion from a published work$", output);
+            Assert.Matches(@"(?m)^numeric values: \d+: published \d+, from memory \d+, common practice \d+, no source 0$", output);
         }
     }
 
@@ -199,14 +221,15 @@ public class CatalogueCommandTests
         {
             Name = "bad entry", Species = "Quartz", Variety = "v", Origin = OriginClass.Natural, CrystalSystem = CrystalSystem.Cubic,
             Indices = OpticalIndices.SingleIndex(new(1.5, 1.5)), SpecificGravity = new(2.6, 2.6),
-            Polariscope = [PolariscopeReaction.SinglyRefractive], Provenance = "test",
+            Polariscope = [PolariscopeReaction.SinglyRefractive],
+            Sources = new Dictionary<string, ValueSource> { ["n"] = new("memory", SourceKind.FromMemory, "from memory of standard handbook values"), ["sg"] = new("memory", SourceKind.FromMemory, "from memory of standard handbook values") },
         };
         // Written directly, as a damaged or hand-edited user catalogue would be: import would refuse it.
         CatalogueBuilder.Write([bad, bad with { Name = "other", Sign = OpticSign.Positive }], Path.Combine(run.Folder, "user-catalogue.db"), "user", "");
         var (exit, _, error) = run.Catalogue("check");
         Assert.Equal(3, exit);
-        Assert.Contains("gemindex: entry 'bad entry', field species: 'Quartz' must be lower-case", error, StringComparison.Ordinal);
-        Assert.Contains("gemindex: entry 'other', field optic_sign:", error, StringComparison.Ordinal);
+        Assert.Contains("gemindex: user catalogue: entry 'bad entry', field species: 'Quartz' must be lower-case", error, StringComparison.Ordinal);
+        Assert.Contains("gemindex: user catalogue: entry 'other', field optic_sign:", error, StringComparison.Ordinal);
         Assert.Contains("finding(s) in", error, StringComparison.Ordinal);
     }
 
@@ -217,7 +240,12 @@ public class CatalogueCommandTests
         ImportGood(run);
         var (_, output, _) = run.Catalogue("check", "--json");
         using JsonDocument doc = JsonDocument.Parse(output);
-        Assert.True(doc.RootElement.GetProperty("entries").GetInt32() >= 2);
+        int entries = doc.RootElement.GetProperty("entries").GetInt32();
+        Assert.True(entries >= 3);
+        JsonElement sourcing = doc.RootElement.GetProperty("sourcing");
+        Assert.Equal(entries, sourcing.GetProperty("entries").GetInt32());
+        Assert.Equal(sourcing.GetProperty("values").GetInt32(), new[] { "published_values", "memory_values", "practice_values", "unsourced_values" }
+            .Sum(p => sourcing.GetProperty(p).GetInt32()));
         Assert.Equal(JsonValueKind.Array, doc.RootElement.GetProperty("findings").ValueKind);
     }
 
@@ -240,9 +268,9 @@ public class CatalogueCommandTests
         string output = Path.Combine(run.Folder, "built.db");
         var (exit, text, error) = run.Catalogue("build", "--output", output, "--source", CommandRun.Fixture("families"));
         Assert.True(exit == 0, error);
-        Assert.Contains("built 4 entries from 2 family files", text, StringComparison.Ordinal);
+        Assert.Contains("built 5 entries from 2 family files", text, StringComparison.Ordinal);
         using CatalogueStore store = CatalogueStore.Open(output);
-        Assert.Equal(4, store.LoadAll().Count);
+        Assert.Equal(5, store.LoadAll().Count);
     }
 
     [Fact]
@@ -251,11 +279,11 @@ public class CatalogueCommandTests
         using var run = new CommandRun();
         string source = Path.Combine(run.Folder, "families");
         Directory.CreateDirectory(source);
-        File.WriteAllText(Path.Combine(source, "broken.json"), "{ \"family\": \"broken\", \"materials\": [ { \"name\": 1 } ] }");
+        File.WriteAllText(Path.Combine(source, "broken.json"), "{ \"family\": \"broken\", \"species\": [ { \"species\": 1 } ] }");
         string output = Path.Combine(run.Folder, "built.db");
         var (exit, _, error) = run.Catalogue("build", "--output", output, "--source", source);
         Assert.Equal(3, exit);
-        Assert.StartsWith("gemindex: broken.json: line 1, entry 0, field name:", error, StringComparison.Ordinal);
+        Assert.StartsWith("gemindex: broken.json: line 1, species 0, field species:", error, StringComparison.Ordinal);
         Assert.False(File.Exists(output));
     }
 

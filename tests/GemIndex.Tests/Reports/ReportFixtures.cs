@@ -18,21 +18,21 @@ internal static class ReportFixtures
             Name = "quartz", Species = "quartz", Variety = "rock crystal", Origin = OriginClass.Natural, CrystalSystem = CrystalSystem.Trigonal,
             Indices = OpticalIndices.Uniaxial(new(1.543, 1.545), new(1.552, 1.554)), Sign = Core.Optics.Indicatrix.OpticSign.Positive,
             Birefringence = new(0.009, 0.009), SpecificGravity = new(2.64, 2.66), Polariscope = [PolariscopeReaction.DoublyRefractive],
-            Frequency = BenchFrequency.VeryCommon, Provenance = "from memory",
+            Frequency = BenchFrequency.VeryCommon,
         },
         new()
         {
             Name = "corundum", Species = "corundum", Variety = "sapphire", Origin = OriginClass.Natural, CrystalSystem = CrystalSystem.Trigonal,
             Indices = OpticalIndices.Uniaxial(new(1.768, 1.772), new(1.760, 1.764)), Sign = Core.Optics.Indicatrix.OpticSign.Negative,
             Birefringence = new(0.008, 0.009), SpecificGravity = new(3.98, 4.02), Polariscope = [PolariscopeReaction.DoublyRefractive],
-            Frequency = BenchFrequency.VeryCommon, Provenance = "from memory",
+            Frequency = BenchFrequency.VeryCommon,
         },
         new()
         {
             Name = "glass", Species = "glass", Variety = "glass", Origin = OriginClass.Imitation, CrystalSystem = CrystalSystem.Amorphous,
             Indices = OpticalIndices.SingleIndex(new(1.48, 1.70), Core.Optics.Indicatrix.OpticCharacter.Amorphous),
             SpecificGravity = new(2.3, 4.5), Polariscope = [PolariscopeReaction.SinglyRefractive, PolariscopeReaction.Anomalous],
-            Frequency = BenchFrequency.VeryCommon, Provenance = "from memory",
+            Frequency = BenchFrequency.VeryCommon,
         },
     ];
 

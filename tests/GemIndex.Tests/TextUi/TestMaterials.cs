@@ -14,26 +14,26 @@ internal static class TestMaterials
             Name = "quartz", Species = "quartz", Variety = "rock crystal", Origin = OriginClass.Natural, CrystalSystem = CrystalSystem.Trigonal,
             Indices = OpticalIndices.Uniaxial(new PropertyRange(1.544, 1.545), new PropertyRange(1.553, 1.554)), Sign = OpticSign.Positive,
             Birefringence = new PropertyRange(0.009, 0.009), SpecificGravity = new PropertyRange(2.65, 2.66), Polariscope = [PolariscopeReaction.DoublyRefractive],
-            Frequency = BenchFrequency.VeryCommon, Provenance = "from memory",
+            Frequency = BenchFrequency.VeryCommon,
         },
         new Material
         {
             Name = "spinel", Species = "spinel", Variety = "red spinel", Origin = OriginClass.Natural, CrystalSystem = CrystalSystem.Cubic,
             Indices = OpticalIndices.SingleIndex(new PropertyRange(1.712, 1.736)), SpecificGravity = new PropertyRange(3.58, 3.61),
-            Polariscope = [PolariscopeReaction.SinglyRefractive], Frequency = BenchFrequency.Common, Provenance = "from memory",
+            Polariscope = [PolariscopeReaction.SinglyRefractive], Frequency = BenchFrequency.Common,
         },
         new Material
         {
             Name = "opal", Species = "opal", Variety = "white opal", Origin = OriginClass.Natural, CrystalSystem = CrystalSystem.Amorphous,
             Indices = OpticalIndices.SingleIndex(new PropertyRange(1.43, 1.47), OpticCharacter.Amorphous), SpecificGravity = new PropertyRange(1.98, 2.20),
             Polariscope = [PolariscopeReaction.SinglyRefractive, PolariscopeReaction.Anomalous], DoNotImmerse = true,
-            Notes = "porous", Frequency = BenchFrequency.Common, Provenance = "from memory",
+            Notes = "porous", Frequency = BenchFrequency.Common,
         },
         new Material
         {
             Name = "glass", Species = "glass", Variety = "crown glass", Origin = OriginClass.Imitation, CrystalSystem = CrystalSystem.Amorphous,
             Indices = OpticalIndices.SingleIndex(new PropertyRange(1.50, 1.70), OpticCharacter.Amorphous), SpecificGravity = new PropertyRange(2.3, 4.5),
-            Polariscope = [PolariscopeReaction.SinglyRefractive, PolariscopeReaction.Anomalous], Frequency = BenchFrequency.Common, Provenance = "from memory",
+            Polariscope = [PolariscopeReaction.SinglyRefractive, PolariscopeReaction.Anomalous], Frequency = BenchFrequency.Common,
         },
     ];
 }
