@@ -74,8 +74,8 @@ internal static class IndependentAccuracyRun
                 originRight += right ? 1 : 0;
                 originConfidentWrong += !right && answer.OriginShare >= Confident ? 1 : 0;
             }
-            if (!first && separable && failures is not null)
-                failures.WriteLine($"{stone.Species.Name} -> {answer.Species} {answer.Confidence:0.00}: {stone.Line}");
+            if (!first && failures is not null)
+                failures.WriteLine($"{(separable ? "SEPARABLE" : "confusable with " + string.Join("/", confusers))} {stone.Species.Name} -> {answer.Species} {answer.Confidence:0.00}: {stone.Line}");
         }
         double ece = bins.Where(b => b.Count > 0).Sum(b => Math.Abs(b.Correct - b.Confidence)) / stones;
 
