@@ -24,8 +24,22 @@ internal sealed class BatchLineAdapter(IReadOnlyList<Material> catalogue)
     /// <summary>Ranks a sheet already read (ranking only: no reasons, no next-test advice).</summary>
     public IdentificationResult Rank(BenchSheet sheet) => _identifier.Identify(sheet, maximumCandidates: 10, explainTop: 0, adviseNextTest: false);
 
-    /// <summary>Reads and ranks one line and reduces the result to what is scored.</summary>
-    public EngineAnswer Identify(string line) => Answer(Rank(Read(line)));
+    /// <summary>Reads and ranks one line and reduces the result to what is scored; false with the reader's message when the line is refused.</summary>
+    public bool TryIdentify(string line, out EngineAnswer answer, out string error)
+    {
+        try
+        {
+            answer = Answer(Rank(Read(line)));
+            error = "";
+            return true;
+        }
+        catch (BatchInputException e)
+        {
+            answer = new EngineAnswer("", 0, [], null, 0, NothingFits: false);
+            error = e.Message;
+            return false;
+        }
+    }
 
     /// <summary>
     /// Species of a result: the species list when the result carries one, else the top candidate's species; the origin

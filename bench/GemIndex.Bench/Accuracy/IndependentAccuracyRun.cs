@@ -14,7 +14,7 @@ namespace GemIndex.Bench.Accuracy;
 internal static class IndependentAccuracyRun
 {
     /// <summary>Stones run through the not-in-catalogue case (each needs its own reduced catalogue).</summary>
-    private const int RemovedSpeciesStones = 300;
+    private const int RemovedSpeciesStones = 1000;
 
     /// <summary>A confidence at or above this is a confident call (issue 14's target line).</summary>
     private const double Confident = 0.8;
@@ -35,12 +35,17 @@ internal static class IndependentAccuracyRun
         var cases = new List<(SimulatedStone Stone, EngineAnswer Answer, IReadOnlyList<Material> Baseline, bool Separable, IReadOnlyList<string> Confusers)>();
         var stopwatch = Stopwatch.StartNew();
         double engineSeconds = 0;
+        int refused = 0;
         for (int i = 0; i < stones; i++)
         {
             var stone = simulator.Simulate(usable[Draw(weights, random)], $"I-{i:D5}");
             lines?.WriteLine(stone.Line);
             var engineWatch = Stopwatch.StartNew();
-            var answer = adapter.Identify(stone.Line);
+            if (!adapter.TryIdentify(stone.Line, out var answer, out string error))
+            {
+                refused++;
+                failures?.WriteLine($"REFUSED {error}: {stone.Line}");
+            }
             engineSeconds += engineWatch.Elapsed.TotalSeconds;
             var confusers = SeparabilityOracle.Confusers(stone, usable);
             bool separable = SeparabilityOracle.Consistent(stone.Species, stone.Readings) && confusers.Count == 0;
@@ -85,6 +90,7 @@ internal static class IndependentAccuracyRun
         o.WriteLine($"stones drawn beyond the published ranges on purpose: {P(cases.Count(c => c.Stone.BeyondRange), stones)}; " +
             $"with a true lowest index or SG outside every catalogue entry of their species: {P(outsideCatalogue, stones)}");
         o.WriteLine($"stones the evidence separates (oracle with the true property table): {separableTally.Count} of {stones}");
+        o.WriteLine($"batch lines the reader refused (scored as wrong): {refused}");
         o.WriteLine();
         o.WriteLine("| measure (by species) | engine | printed-table baseline |");
         o.WriteLine("|---|---|---|");
@@ -127,7 +133,7 @@ internal static class IndependentAccuracyRun
             var removed = CatalogueSpeciesNames.Of(stone.Species.Name)
                 .Concat(confusers.SelectMany(c => PropertyTable.Species.Where(s => CatalogueSpeciesNames.GroupOf(s.Name) == c).SelectMany(s => CatalogueSpeciesNames.Of(s.Name))))
                 .ToHashSet(StringComparer.Ordinal);
-            var answer = new BatchLineAdapter([.. catalogue.Where(m => !removed.Contains(m.Species))]).Identify(stone.Line);
+            new BatchLineAdapter([.. catalogue.Where(m => !removed.Contains(m.Species))]).TryIdentify(stone.Line, out var answer, out _);
             flagged += answer.NothingFits ? 1 : 0;
             bool named = !answer.NothingFits && answer.Confidence >= Confident;
             confidentWrong += named ? 1 : 0;

@@ -24,6 +24,8 @@ internal sealed class IndependentStoneSimulator(Random random)
     /// <summary>Heavy liquids a bench keeps, densest first (studiopjj.blogspot.com, "Indicator stones").</summary>
     private static readonly double[] Liquids = [3.32, 3.05, 2.85, 2.67, 2.62, 2.57];
 
+    private static readonly double[] Liquid = [1.78, 1.79, 1.80, 1.81];
+
     private static readonly string[] PolariscopeWords = ["singly_refractive", "doubly_refractive", "aggregate", "anomalous"];
     private static readonly string[] PleochroismWords = ["none", "dichroic", "trichroic"];
     private static readonly string[] StrengthWords = ["inert", "weak", "moderate", "strong"];
@@ -81,8 +83,9 @@ internal sealed class IndependentStoneSimulator(Random random)
     {
         bool colourless = hue == "colourless";
         bool anisotropic = s.Indices.Model != OpticModel.Isotropic && s.Form == StoneForm.Crystal;
-        double liquid = 1.78 + 0.03 * random.NextDouble();
-        var readings = new BenchReadings { Id = id, LiquidLimit = Math.Round(liquid, 2) };
+        // The contact liquid: one of the usual 1.78–1.81 liquids; its own edge hides anything at or above it.
+        double liquid = Liquid[random.Next(Liquid.Length)];
+        var readings = new BenchReadings { Id = id, LiquidLimit = liquid };
         if (Chance(0.95)) readings = Refractometer(readings, s, n, liquid);
         readings = Gravity(readings, s, sg);
         return readings with
@@ -108,7 +111,10 @@ internal sealed class IndependentStoneSimulator(Random random)
         {
             double averaged = low + random.NextDouble() * (high - low);
             if (averaged >= liquid) return r with { RefractometerMethod = "spot", OverLimit = true };
-            return r with { RefractometerMethod = "spot", Spot = Math.Round(averaged + (random.NextDouble() - 0.5) * 0.01, 2) };
+            double reading = Math.Round(averaged + (random.NextDouble() - 0.5) * 0.01, 2);
+            return reading > liquid
+                ? r with { RefractometerMethod = "spot", OverLimit = true }
+                : r with { RefractometerMethod = "spot", Spot = reading };
         }
         int count = random.Next(3) switch { 0 => 4, 1 => 6, _ => 8 };
         double start = random.NextDouble() * Math.PI;
