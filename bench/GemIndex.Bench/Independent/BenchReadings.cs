@@ -46,10 +46,4 @@ internal sealed record BenchReadings
     public IReadOnlyList<double>? AbsorptionNanometres { get; init; }
 
     public string? Colour { get; init; }
-
-    /// <summary>The number of bench tests done (refractometer, SG, polariscope, …), each counted once.</summary>
-    public int TestCount =>
-        (RefractometerMethod is null ? 0 : 1) + (SpecificGravity is not null || Weighing is not null || HeavyLiquids.Count > 0 ? 1 : 0)
-        + new[] { Polariscope, Pleochroism, Dispersion, ThermalProbe, Electrical, UvLong, UvShort }.Count(x => x is not null)
-        + (AbsorptionNanometres is null ? 0 : 1);
 }
