@@ -1,5 +1,6 @@
 using BenchmarkDotNet.Attributes;
 using GemIndex.Bench.Accuracy;
+using GemIndex.Bench.Independent;
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Identification;
 using GemIndex.Data.Catalogue;
@@ -24,9 +25,11 @@ public class IdentifyBench
         _folder = Path.Combine(Path.GetTempPath(), "gemindex-bench-" + Guid.NewGuid().ToString("N"));
         IReadOnlyList<Material> catalogue = ShippedCatalogue.Load(Path.Combine(_folder, "cache"));
         _identifier = new Identifier(catalogue);
-        var simulator = new StoneSimulator(new Random(7));
+        var simulator = new IndependentStoneSimulator(new Random(7));
         var random = new Random(8);
-        _sheets = [.. Enumerable.Range(0, 10_000).Select(i => simulator.Simulate(catalogue[random.Next(catalogue.Count)], $"B-{i}"))];
+        var table = PropertyTable.Species;
+        var adapter = new BatchLineAdapter(catalogue);
+        _sheets = [.. Enumerable.Range(0, 10_000).Select(i => adapter.Read(simulator.Simulate(table[random.Next(table.Count)], $"B-{i}").Line))];
     }
 
     [GlobalCleanup]

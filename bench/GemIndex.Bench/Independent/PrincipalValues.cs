@@ -1,0 +1,49 @@
+namespace GemIndex.Bench.Independent;
+
+/// <summary>
+/// A species' principal indices as a composition series, so that they move together as they do in a real stone:
+/// the lowest index, the birefringence, and (biaxial) where β sits between α and γ as a fraction of γ − α
+/// (below one half: positive). Uniaxial: the lowest index with the sign saying whether it is ω (+) or ε (−).
+/// A source that gives nα, nβ, nγ ranges is converted to this form in the property table, row by row.
+/// </summary>
+internal sealed record PrincipalValues
+{
+    public required OpticModel Model { get; init; }
+
+    /// <summary>The lowest principal index: n (isotropic), ω (uniaxial +), ε (uniaxial −), α (biaxial).</summary>
+    public required IndexRange Lowest { get; init; }
+
+    /// <summary>γ − α or |ε − ω|; zero for isotropic.</summary>
+    public IndexRange Birefringence { get; init; } = IndexRange.At(0);
+
+    /// <summary>Uniaxial and biaxial: true for a positive sign.</summary>
+    public bool Positive { get; init; }
+
+    /// <summary>Biaxial: (β − α)/(γ − α).</summary>
+    public IndexRange BetaFraction { get; init; } = IndexRange.At(0.5);
+
+    /// <summary>The highest principal index the published ranges allow.</summary>
+    public double HighestMaximum => Lowest.High + Birefringence.High;
+
+    /// <summary>Isotropic material.</summary>
+    public static PrincipalValues Single(double low, double high) => new() { Model = OpticModel.Isotropic, Lowest = new(low, high) };
+
+    /// <summary>Uniaxial: ω range and birefringence range; ε = ω ± birefringence by the sign.</summary>
+    public static PrincipalValues Uniaxial(IndexRange omega, IndexRange birefringence, bool positive) => new()
+    {
+        Model = OpticModel.Uniaxial,
+        Lowest = positive ? omega : new(omega.Low - birefringence.High, omega.High - birefringence.Low),
+        Birefringence = birefringence,
+        Positive = positive,
+    };
+
+    /// <summary>Biaxial: α range, birefringence range and where β sits.</summary>
+    public static PrincipalValues Biaxial(IndexRange alpha, IndexRange birefringence, IndexRange betaFraction) => new()
+    {
+        Model = OpticModel.Biaxial,
+        Lowest = alpha,
+        Birefringence = birefringence,
+        BetaFraction = betaFraction,
+        Positive = betaFraction.High < 0.5,
+    };
+}

@@ -1,0 +1,432 @@
+namespace GemIndex.Bench.Independent;
+
+/// <summary>
+/// The independent property table: species values compiled from published pages read for this benchmark (each row
+/// names its sources), never from the catalogue or the engine. Where a source gives nα, nβ, nγ ranges they are turned
+/// into the lowest index, the birefringence and β's place between α and γ (<see cref="PrincipalValues"/>); where a
+/// source gives "1.762–1.770 (+.009, −.005)" the tolerance widens the range. A value not read in any source is marked
+/// "from memory" in its row; for stones above the refractometer's limit only "over the limit" is ever used of it.
+/// Hue weights, UV weights, origin shares and bench weights are judgements (docs/benchmark.md, "Judgements").
+/// </summary>
+internal static class PropertyTable
+{
+    public static IReadOnlyList<SpeciesProperties> Species { get; } =
+    [
+        new()
+        {
+            Name = "corundum", BenchWeight = 3,
+            Indices = PrincipalValues.Uniaxial(new(1.765, 1.779), new(0.008, 0.010), positive: false),
+            SpecificGravity = new(3.97, 4.05), Pleochroism = PleochroismHabit.Moderate, Dispersion = 0.018,
+            Lines =
+            [
+                new(694, true, "red"), new(692, true, "red"),
+                new(450, true, "blue", NaturalOnly: true), new(460, false, "blue", NaturalOnly: true), new(470, false, "blue", NaturalOnly: true),
+                new(450, false, "yellow", NaturalOnly: true),
+            ],
+            Hues = [new("blue", .35), new("red", .25), new("pink", .12), new("yellow", .1), new("colourless", .06), new("purple", .05), new("orange", .04), new("green", .03)],
+            Origins = [new("natural", .55), new("synthetic", .3), new("treated", .15)],
+            Citation = "gemologyproject.com/wiki Corundum (rev. 4643): uniaxial −, RI 1.762–1.770 (+.009, −.005), birefringence 0.008–0.010, dispersion 0.018, pleochroism weak to moderate; "
+                + "Handbook of Precious Stones (wikisource p. 80): SG 3.97–4.05; lotusgemology.com 'Gem testing with the spectroscope': blue sapphire iron lines 450, 460, 470 nm (natural); "
+                + "clouddl.cn UV-vis article: natural yellow sapphire 450 nm, heated lacks it; gemologiamllopis.com certificate 24-1821: ruby doublet 694/692 nm",
+        },
+        new()
+        {
+            Name = "beryl", BenchWeight = 2.5, SgFollowsIndex = 1,
+            Indices = PrincipalValues.Uniaxial(new(1.568, 1.602), new(0.004, 0.008), positive: false),
+            SpecificGravity = new(2.63, 2.92), Pleochroism = PleochroismHabit.Moderate, Dispersion = 0.014,
+            Lines = [new(683, true, "green"), new(680, true, "green"), new(637, false, "green")],
+            Hues = [new("green", .4), new("blue", .35), new("yellow", .1), new("pink", .08), new("colourless", .05), new("red", .02)],
+            Origins = [new("natural", .7), new("synthetic", .15), new("treated", .15)],
+            Citation = "Wikipedia 'Beryl' infobox (wiki.av1.space copy; cites Handbook of Mineralogy, mindat): uniaxial −, indices 1.564–1.602 (the larger list taken as ω), birefringence 0.004–0.007, SG 2.63–2.92; "
+                + "cadby.co.uk Emerald: birefringence 0.005–0.008, dispersion 0.014, emerald lines 683, 680, 637 nm",
+            Judgement = "SG rising with the indices (alkali-rich beryl): judgement, not read in a source here; hue, origin weights: judgement",
+        },
+        new()
+        {
+            Name = "chrysoberyl", BenchWeight = 1,
+            Indices = PrincipalValues.Biaxial(new(1.742, 1.750), new(0.008, 0.011), new(0.1, 0.35)),
+            SpecificGravity = new(3.71, 3.75), Pleochroism = PleochroismHabit.Moderate, Dispersion = 0.015,
+            Hues = [new("yellow", .4), new("green", .4), new("brown", .2)],
+            Origins = [new("natural", .85), new("synthetic", .15)],
+            Citation = "gemstones-guide.com 'Physical & Optical Properties of Chrysoberyl': RI 1.746–1.755 each ±0.004, birefringence 0.008–0.009, biaxial +, SG 3.71–3.75, dispersion 0.015; "
+                + "rocksandgems.info chrysoberyl: birefringence 0.011",
+            Judgement = "β near α (fraction 0.1–0.35) from the sign and the typical readings; hue, origin weights: judgement",
+        },
+        new()
+        {
+            Name = "spinel", BenchWeight = 1.5, Strained = 0.1,
+            Indices = PrincipalValues.Single(1.710, 1.735),
+            SpecificGravity = new(3.57, 3.70),
+            UvLong = [new("inert", .4), new("weak", .3), new("strong", .3)],
+            Lines = [new(458, true, "blue", NaturalOnly: true), new(478, false, "blue", NaturalOnly: true)],
+            Hues = [new("red", .3), new("pink", .2), new("blue", .2), new("purple", .15), new("orange", .05), new("black", .05), new("colourless", .05)],
+            Origins = [new("natural", .7), new("synthetic", .3)],
+            Citation = "awesomegems.com spinel: RI 1.718 (+.017, −.008), SG 3.60 (+.10, −.03); amezin.com spinel: red stones strong red fluorescence, blue weak; "
+                + "gemlab.co.uk 'Green, blue and violet Spinel': iron lines 458 (strong), 478 (weaker)",
+            Judgement = "strain (anomalous double refraction) in 10 %, UV shares, hue and origin weights: judgement",
+        },
+        new()
+        {
+            Name = "topaz", BenchWeight = 2, SgFollowsIndex = -1,
+            Indices = PrincipalValues.Biaxial(new(1.606, 1.629), new(0.008, 0.010), new(0.2, 0.4)),
+            SpecificGravity = new(3.49, 3.57), Pleochroism = PleochroismHabit.Moderate, Dispersion = 0.014,
+            UvLong = [new("inert", .5), new("weak", .5)], UvShort = [new("inert", .5), new("weak", .5)],
+            Hues = [new("blue", .35), new("colourless", .3), new("yellow", .15), new("orange", .1), new("pink", .1)],
+            Origins = [new("natural", .6), new("treated", .4)],
+            Citation = "Wikipedia 'Topaz' infobox (sco/si copies): biaxial +, nα 1.606–1.629, nβ 1.609–1.631, nγ 1.616–1.638, SG 3.49–3.57, LW cream, SW golden yellow; "
+                + "gemologyproject.com Topaz (rev. 6435): birefringence 0.008–0.010, fluorine lowers the index and raises SG, pleochroism distinct to strong, dispersion 0.014",
+            Judgement = "UV strengths (the sources give colours only) and hue, origin weights: judgement",
+        },
+        new()
+        {
+            Name = "tourmaline", BenchWeight = 2, SgFollowsIndex = 1,
+            Indices = PrincipalValues.Uniaxial(new(1.635, 1.675), new(0.014, 0.040), positive: false),
+            SpecificGravity = new(3.00, 3.26), Pleochroism = PleochroismHabit.Strong, Dispersion = 0.017,
+            UvLong = [new("inert", .7), new("weak", .3)], UvShort = [new("inert", .7), new("weak", .3)],
+            Lines = [new(498, true, "green"), new(498, true, "blue"), new(458, false, "pink"), new(451, false, "pink"), new(458, false, "red"), new(451, false, "red")],
+            Hues = [new("green", .35), new("pink", .25), new("blue", .1), new("red", .1), new("brown", .08), new("black", .07), new("yellow", .05)],
+            Citation = "Wikipedia 'Tourmaline' infobox (si copy; cites GIA Gem Reference Guide 1995): uniaxial −, nω 1.635–1.675, nε 1.610–1.650, birefringence 0.018–0.040, SG 3.06 (+.20, −.06), "
+                + "dispersion 0.017, pink stones inert to very weak in LW and SW, 498 nm band in blue and green, 458 and 451 nm in red and pink; "
+                + "gemologyproject.com Indicolite: birefringence 0.014–0.022",
+            Judgement = "SG rising with the indices and birefringence (dark iron-rich stones): judgement; hue weights: judgement",
+        },
+        new()
+        {
+            Name = "zircon", BenchWeight = 1, SgFollowsIndex = 1,
+            Indices = PrincipalValues.Uniaxial(new(1.810, 1.940), new(0.0, 0.062), positive: true),
+            SpecificGravity = new(3.93, 4.80), Pleochroism = PleochroismHabit.Weak,
+            Hues = [new("blue", .3), new("colourless", .2), new("brown", .2), new("yellow", .1), new("green", .1), new("red", .05), new("orange", .05)],
+            Origins = [new("natural", .5), new("treated", .5)],
+            Citation = "indygem.com Zircon: ω 1.92–1.94, ε 1.97–2.01, SG 4.6–4.8 (high type); gemselect.com 'green zircon': low and metamict zircon SG 3.93–4.73, RI 1.810–2.024, "
+                + "metamictization lowers index and SG together; cigem.ca: birefringence to 0.059, dwindling to zero in metamict stones",
+            Judgement = "the whole species lies above the refractometer's limit: only 'over the limit', SG and colour reach the engine; heat-treated share: judgement",
+        },
+        new()
+        {
+            Name = "olivine", BenchWeight = 1.2, SgFollowsIndex = 1,
+            Indices = PrincipalValues.Biaxial(new(1.650, 1.670), new(0.035, 0.038), new(0.4, 0.6)),
+            SpecificGravity = new(3.27, 3.48), Pleochroism = PleochroismHabit.Weak, Dispersion = 0.020,
+            UvLong = [new("inert", 1)], UvShort = [new("inert", 1)],
+            Hues = [new("green", .85), new("yellow", .1), new("brown", .05)],
+            Citation = "aglthai.com peridot: RI 1.654–1.690 (±0.020), birefringence 0.035–0.038, SG 3.34 (+.14, −.07), biaxial + or − (β near halfway), UV generally inert, dispersion 0.020; "
+                + "gemstones-guide.com 'Variations in Property': green peridot 1.654/1.690, SG 3.20–3.37, brown 1.665/1.705, SG near 3.48 (index and SG rise together)",
+        },
+        new()
+        {
+            Name = "quartz", BenchWeight = 3,
+            Indices = PrincipalValues.Uniaxial(new(1.542, 1.546), new(0.008, 0.010), positive: true),
+            SpecificGravity = new(2.64, 2.69), Pleochroism = PleochroismHabit.Weak, Dispersion = 0.013,
+            Hues = [new("purple", .35), new("yellow", .2), new("colourless", .2), new("brown", .1), new("pink", .1), new("green", .05)],
+            Origins = [new("natural", .75), new("synthetic", .15), new("treated", .1)],
+            Citation = "Handbook of Precious Stones (wikisource p. 116): ω 1.5442, ε 1.5533, SG 2.642–2.662; gemstones-guide.com 'Variations in Property': RI 1.544–1.553 within ±0.002; "
+                + "jiehonggem.com rock crystal (GIA Gem Reference Guide): uniaxial +, SG 2.66 (+.03, −.02), birefringence 0.009",
+        },
+        new()
+        {
+            Name = "chalcedony", BenchWeight = 2, Form = StoneForm.Aggregate,
+            Indices = PrincipalValues.Single(1.535, 1.539),
+            SpecificGravity = new(2.55, 2.65),
+            UvLong = [new("inert", .9), new("weak", .1)], UvShort = [new("inert", .9), new("weak", .1)],
+            Hues = [new("grey", .2), new("blue", .15), new("orange", .2), new("green", .15), new("black", .1), new("colourless", .1), new("brown", .1)],
+            Origins = [new("natural", .6), new("treated", .4)],
+            Citation = "gemstones-guide.com 'Physical & Optical Properties of Chalcedony': RI 1.535–1.539, SG 2.55–2.65 (normal 2.60), aggregate (stays light in the polariscope), generally inert to UV; "
+                + "jiehonggem.com blue agate (GIA Gem Reference Guide): spot 1.53 or 1.54, SG 2.60 (+.10, −.05)",
+            Judgement = "dyed share and hue weights: judgement",
+        },
+        new()
+        {
+            Name = "pyrope", BenchWeight = 1.2, SgFollowsIndex = 1, Strained = 0.05,
+            Indices = PrincipalValues.Single(1.730, 1.760),
+            SpecificGravity = new(3.65, 3.87),
+            Lines = [new(505, true), new(527, true), new(575, true)],
+            Hues = [new("red", .7), new("purple", .2), new("brown", .1)],
+            Citation = "amezin.com garnet: pyrope RI 1.730–1.760, SG 3.65–3.80; gemstone.pk pyrope-almandine: pyrope SG 3.65–3.87, index rising with density towards almandine; "
+                + "gemdictionary.blogspot.com 'intermediate species': pyrope-almandine bands 505, 527, 575 nm",
+        },
+        new()
+        {
+            Name = "almandine", BenchWeight = 1.5, SgFollowsIndex = 1, Strained = 0.05,
+            Indices = PrincipalValues.Single(1.760, 1.830),
+            SpecificGravity = new(3.90, 4.20),
+            Lines = [new(505, true), new(527, true), new(575, true)],
+            Hues = [new("red", .7), new("purple", .2), new("brown", .1)],
+            Citation = "gemstone.pk pyrope-almandine: almandine RI 1.76–1.83, SG 3.95–4.20; Smith, Gem-Stones (bitlit.ru p. 76): SG 3.90 (transparent) to 4.20, characteristic absorption spectrum; "
+                + "gemdictionary.blogspot.com: bands 505, 527, 575 nm",
+        },
+        new()
+        {
+            Name = "spessartine", BenchWeight = 0.6, SgFollowsIndex = 1,
+            Indices = PrincipalValues.Single(1.790, 1.815),
+            SpecificGravity = new(4.12, 4.20),
+            Lines = [new(432, false), new(412, false)],
+            Hues = [new("orange", .7), new("red", .2), new("brown", .1)],
+            Citation = "amezin.com garnet: spessartite RI 1.795–1.815, SG 4.12–4.20; oagems.com spessartite: RI 1.790–1.810, SG 4.12–4.20; gemdictionary.blogspot.com: manganese lines 432, 412 nm",
+        },
+        new()
+        {
+            Name = "grossular", BenchWeight = 0.8, SgFollowsIndex = 1,
+            Indices = PrincipalValues.Single(1.730, 1.760),
+            SpecificGravity = new(3.60, 3.70),
+            Hues = [new("orange", .35), new("green", .35), new("yellow", .15), new("brown", .1), new("colourless", .05)],
+            Citation = "libretexts Gemology 16.8.3 Grossular (from gemologyproject.com): RI 1.738–1.745, hessonite and green grossular 1.73–1.76, SG 3.60–3.70, isotropic",
+        },
+        new()
+        {
+            Name = "andradite", BenchWeight = 0.3,
+            Indices = PrincipalValues.Single(1.882, 1.889),
+            SpecificGravity = new(3.81, 3.86), Dispersion = 0.057,
+            Hues = [new("green", .6), new("yellow", .25), new("brown", .1), new("black", .05)],
+            Citation = "legendartbeads.com andradite: SG 3.81–3.86, RI 1.882–1.889; cadby.co.uk Garnet: andradite dispersion 0.057",
+        },
+        new()
+        {
+            Name = "diamond", BenchWeight = 2, ThermalPositive = true, Strained = 0.3,
+            Indices = PrincipalValues.Single(2.417, 2.417),
+            SpecificGravity = new(3.51, 3.53), Dispersion = 0.044,
+            Hues = [new("colourless", .8), new("yellow", .15), new("brown", .05)],
+            Origins = [new("natural", .8), new("synthetic", .15), new("treated", .05)],
+            Citation = "Wikipedia 'Diamond simulant' table (WikiTableQuestions copy): diamond 2.417, dispersion 0.044, thermal conductivity excellent; gemsociety.org diamond look-alike chart: SG 3.51–3.53",
+            Judgement = "strain in 30 %, hue and origin weights: judgement",
+        },
+        new()
+        {
+            Name = "cubic zirconia", BenchWeight = 1.5,
+            Indices = PrincipalValues.Single(2.15, 2.18),
+            SpecificGravity = new(5.60, 6.00), Dispersion = 0.060,
+            Hues = [new("colourless", .8), new("pink", .05), new("blue", .05), new("yellow", .05), new("green", .05)],
+            Origins = [new("synthetic", 1)],
+            Citation = "wejeweler.com cubic zirconia: RI 2.15–2.18, SG 5.6–6.0, dispersion 0.058–0.066; gemsociety.org look-alike chart: SG 5.34–6.00, none birefringent",
+        },
+        new()
+        {
+            Name = "moissanite", BenchWeight = 0.8, ThermalPositive = true, Conductive = true,
+            Indices = PrincipalValues.Uniaxial(new(2.60, 2.65), new(0.043, 0.043), positive: true),
+            SpecificGravity = new(3.17, 3.20),
+            Hues = [new("colourless", .9), new("green", .05), new("yellow", .05)],
+            Origins = [new("synthetic", 1)],
+            Citation = "gemsociety.org look-alike chart: SG 3.17–3.20, birefringence 0.043; brainscape.com simulant cards: moissanite is an electrical conductor; "
+                + "index 2.60–2.65 from memory (only 'over the limit' is used); heat probe positive: common practice",
+        },
+        new()
+        {
+            Name = "yttrium aluminium garnet", BenchWeight = 0.3,
+            Indices = PrincipalValues.Single(1.83, 1.83),
+            SpecificGravity = new(4.50, 4.60),
+            Hues = [new("colourless", .7), new("green", .2), new("blue", .1)],
+            Origins = [new("synthetic", 1)],
+            Citation = "gemsociety.org look-alike chart: SG 4.50–4.60, not birefringent; index 1.83 from memory (only 'over the limit' is used)",
+        },
+        new()
+        {
+            Name = "gadolinium gallium garnet", BenchWeight = 0.2,
+            Indices = PrincipalValues.Single(1.97, 1.97),
+            SpecificGravity = new(6.95, 7.09),
+            Hues = [new("colourless", .9), new("brown", .1)],
+            Origins = [new("synthetic", 1)],
+            Citation = "gemsociety.org look-alike chart: SG 6.95–7.09, not birefringent; index 1.97 from memory (only 'over the limit' is used)",
+        },
+        new()
+        {
+            Name = "rutile", BenchWeight = 0.15,
+            Indices = PrincipalValues.Uniaxial(new(2.61, 2.62), new(0.287, 0.287), positive: true),
+            SpecificGravity = new(4.20, 5.60),
+            Hues = [new("yellow", .5), new("colourless", .2), new("red", .2), new("brown", .1)],
+            Origins = [new("synthetic", .8), new("natural", .2)],
+            Citation = "gemsociety.org look-alike chart: SG 4.20–5.60, birefringence 0.287; cigem.ca: rutile 287 (×1000); index 2.61 from memory (only 'over the limit' is used)",
+        },
+        new()
+        {
+            Name = "spodumene", BenchWeight = 0.6,
+            Indices = PrincipalValues.Biaxial(new(1.648, 1.661), new(0.014, 0.018), new(0.3, 0.45)),
+            SpecificGravity = new(3.15, 3.21), Pleochroism = PleochroismHabit.Strong, Dispersion = 0.017,
+            Lines = [new(686, false, "green"), new(690.5, false, "green"), new(437.5, false), new(433, false)],
+            Hues = [new("pink", .5), new("purple", .2), new("green", .15), new("yellow", .1), new("colourless", .05)],
+            Citation = "Wikipedia 'Spodumene' infobox (mineralru.com copy): biaxial +, nα 1.648–1.661, nβ 1.655–1.670, nγ 1.662–1.679, birefringence 0.014–0.018; "
+                + "funwing.com spodumene: SG 3.17–3.19, RI 1.660–1.675, lines 686, 690.5, 437.5, 433 nm; gemstones-guide.com Spodumene: SG 3.18, dispersion 0.017",
+        },
+        new()
+        {
+            Name = "zoisite", BenchWeight = 0.8,
+            Indices = PrincipalValues.Biaxial(new(1.692, 1.700), new(0.006, 0.018), new(0.05, 0.3)),
+            SpecificGravity = new(3.25, 3.38), Pleochroism = PleochroismHabit.Strong,
+            Lines = [new(595, true), new(528, false), new(455, false)],
+            Hues = [new("purple", .5), new("blue", .4), new("green", .05), new("pink", .05)],
+            Origins = [new("natural", .3), new("treated", .7)],
+            Citation = "gemfame.com zoisite: tanzanite α 1.692, β 1.693, γ 1.700, biaxial +, birefringence 0.009, SG 3.35, band 595 nm with fainter 528 and 455, blue produced by heating; "
+                + "Wikipedia 'Zoisite' (findatwiki copy; cites Handbook of Mineralogy): nα 1.696–1.700, nγ 1.702–1.718, birefringence 0.006–0.018; 24carat.co.uk: SG 3.25–3.37",
+        },
+        new()
+        {
+            Name = "cordierite", BenchWeight = 0.6,
+            Indices = PrincipalValues.Biaxial(new(1.530, 1.542), new(0.008, 0.012), new(0.55, 0.8)),
+            SpecificGravity = new(2.58, 2.66), Pleochroism = PleochroismHabit.Strong,
+            Hues = [new("blue", .6), new("purple", .35), new("grey", .05)],
+            Citation = "theimage.com cordierite: RI 1.53–1.55, birefringence 0.008–0.012, SG 2.58–2.66, strongly dichroic or trichroic; biaxial − from memory",
+        },
+        new()
+        {
+            Name = "orthoclase", BenchWeight = 1,
+            Indices = PrincipalValues.Biaxial(new(1.514, 1.524), new(0.005, 0.008), new(0.6, 0.9)),
+            SpecificGravity = new(2.55, 2.61),
+            UvLong = [new("inert", .6), new("weak", .4)], UvShort = [new("inert", .6), new("weak", .4)],
+            Hues = [new("colourless", .5), new("yellow", .3), new("grey", .1), new("brown", .1)],
+            Citation = "jtv.com 'Moonstone-Orthoclase': RI 1.518–1.526 (±0.010), birefringence 0.005–0.008, biaxial −, SG 2.55–2.61, LW and SW inert to weak; langantiques.com feldspar: orthoclase 1.518–1.526",
+        },
+        new()
+        {
+            Name = "microcline", BenchWeight = 0.5,
+            Indices = PrincipalValues.Biaxial(new(1.522, 1.525), new(0.007, 0.008), new(0.6, 0.9)),
+            SpecificGravity = new(2.54, 2.58),
+            Hues = [new("green", .8), new("blue", .2)],
+            Citation = "langantiques.com feldspar (GIA Gem Reference Guide 1988; Schumann): microcline 1.522–1.530; studiopjj.blogspot.com indicator stones: amazonite SG 2.56; birefringence and sign from memory",
+        },
+        new()
+        {
+            Name = "oligoclase", BenchWeight = 0.3,
+            Indices = PrincipalValues.Biaxial(new(1.537, 1.540), new(0.007, 0.010), new(0.4, 0.6)),
+            SpecificGravity = new(2.62, 2.65),
+            Hues = [new("orange", .6), new("colourless", .2), new("brown", .2)],
+            Citation = "langantiques.com feldspar: oligoclase 1.537–1.547; gemstones.comparenature.com sunstone (Gemstones of the World): SG 2.62–2.65; birefringence from memory",
+        },
+        new()
+        {
+            Name = "labradorite", BenchWeight = 0.5,
+            Indices = PrincipalValues.Biaxial(new(1.559, 1.561), new(0.007, 0.009), new(0.4, 0.6)),
+            SpecificGravity = new(2.68, 2.72),
+            Hues = [new("grey", .6), new("black", .2), new("orange", .1), new("yellow", .1)],
+            Citation = "langantiques.com feldspar: labradorite 1.559 [printed 1.599]–1.568; SG 2.68–2.72 and birefringence from memory",
+        },
+        new()
+        {
+            Name = "jadeite", BenchWeight = 1, Form = StoneForm.Aggregate,
+            Indices = PrincipalValues.Single(1.654, 1.680),
+            SpecificGravity = new(3.30, 3.38),
+            Hues = [new("green", .6), new("colourless", .2), new("purple", .1), new("black", .05), new("yellow", .05)],
+            Origins = [new("natural", .7), new("treated", .3)],
+            Citation = "jbjewelryco.com jadeite and nephrite: jadeite RI 1.666–1.680 (±0.008), SG 3.34; hudec.ca jade: jadeite 1.654–1.667, SG 3.30–3.36; eurojade.fr: usually one line near 1.66",
+        },
+        new()
+        {
+            Name = "nephrite", BenchWeight = 0.8, Form = StoneForm.Aggregate,
+            Indices = PrincipalValues.Single(1.600, 1.632),
+            SpecificGravity = new(2.90, 3.02),
+            Hues = [new("green", .7), new("colourless", .15), new("black", .1), new("brown", .05)],
+            Citation = "jbjewelryco.com: nephrite RI 1.606–1.632 (+.009, −.006), SG 2.95; hudec.ca jade: nephrite 1.600–1.627, SG 2.90–3.02",
+        },
+        new()
+        {
+            Name = "opal", BenchWeight = 1, Form = StoneForm.Amorphous, Porous = true, Strained = 0.1,
+            Indices = PrincipalValues.Single(1.42, 1.47),
+            SpecificGravity = new(1.98, 2.20),
+            Hues = [new("colourless", .45), new("orange", .2), new("blue", .1), new("black", .1), new("yellow", .1), new("brown", .05)],
+            Origins = [new("natural", .85), new("synthetic", .1), new("treated", .05)],
+            Citation = "ora.it.com 'specific gravity of an opal': SG 1.98–2.20 (average 2.15), RI 1.42–1.47; vecstone.jp opal: RI 1.44–1.46, SG 1.9–2.3",
+        },
+        new()
+        {
+            Name = "apatite", BenchWeight = 0.4,
+            Indices = PrincipalValues.Uniaxial(new(1.632, 1.649), new(0.002, 0.006), positive: false),
+            SpecificGravity = new(3.15, 3.23), Pleochroism = PleochroismHabit.Weak, Dispersion = 0.013,
+            Hues = [new("blue", .3), new("green", .3), new("yellow", .3), new("purple", .1)],
+            Citation = "gemologyproject.com Template:Apatite: uniaxial −, RI 1.63–1.64, birefringence 0.003, SG 3.2, dispersion 0.013; theimage.com apatite: SG 3.16–3.23, RI 1.628–1.649; "
+                + "sglapidary.com: SG 3.15–3.22, birefringence 0.004; gemstones.comparenature.com (Gemmological Tables): birefringence 0.002–0.008",
+        },
+        new()
+        {
+            Name = "andalusite", BenchWeight = 0.3,
+            Indices = PrincipalValues.Biaxial(new(1.629, 1.640), new(0.006, 0.010), new(0.6, 0.9)),
+            SpecificGravity = new(3.12, 3.18), Pleochroism = PleochroismHabit.Strong,
+            Hues = [new("green", .5), new("brown", .4), new("pink", .1)],
+            Citation = "theimage.com andalusite: RI 1.63–1.648, birefringence 0.006, SG 3.12–3.18, strong pleochroism; uid-ramanlab.com library: RI 1.63–1.64, birefringence 0.010, SG 3.13–3.16; sign from memory",
+        },
+        new()
+        {
+            Name = "kyanite", BenchWeight = 0.3,
+            Indices = PrincipalValues.Biaxial(new(1.710, 1.718), new(0.012, 0.018), new(0.5, 0.7)),
+            SpecificGravity = new(3.53, 3.68), Pleochroism = PleochroismHabit.Strong,
+            Lines = [new(701, false)],
+            Hues = [new("blue", .8), new("green", .15), new("colourless", .05)],
+            Citation = "gemfame.com kyanite: nα 1.710–1.718, nβ 1.719–1.724, nγ 1.724–1.734, biaxial −, birefringence 0.017, SG 3.53–3.65, line 701 nm in some; wikigempedia.com: SG 3.53–3.68",
+        },
+        new()
+        {
+            Name = "sillimanite", BenchWeight = 0.2,
+            Indices = PrincipalValues.Biaxial(new(1.653, 1.661), new(0.014, 0.021), new(0.05, 0.3)),
+            SpecificGravity = new(3.20, 3.26), Pleochroism = PleochroismHabit.Strong,
+            Hues = [new("colourless", .3), new("blue", .3), new("green", .2), new("grey", .1), new("brown", .1)],
+            Citation = "gemdat.org sillimanite (Blue Chart Gem Identification 2010): RI 1.653–1.685, biaxial +, birefringence 0.014–0.021, SG 3.20–3.26, strong trichroism",
+        },
+        new()
+        {
+            Name = "diopside", BenchWeight = 0.5, SgFollowsIndex = 1,
+            Indices = PrincipalValues.Biaxial(new(1.664, 1.680), new(0.024, 0.032), new(0.25, 0.35)),
+            SpecificGravity = new(3.22, 3.38), Pleochroism = PleochroismHabit.Weak, Dispersion = 0.018,
+            Lines = [new(505, true, "green"), new(493, false, "green"), new(446, false, "green")],
+            Hues = [new("green", .85), new("brown", .1), new("black", .05)],
+            Citation = "gemfame.com diopside: α 1.664, β 1.672, γ 1.694, biaxial +, SG 3.22–3.38 rising with iron, pale green lines 505, 493, 446 nm; gemsociety.org diopside: birefringence 0.024–0.032, dispersion 0.017–0.020",
+        },
+        new()
+        {
+            Name = "titanite", BenchWeight = 0.3,
+            Indices = PrincipalValues.Biaxial(new(1.843, 1.950), new(0.100, 0.160), new(0.1, 0.3)),
+            SpecificGravity = new(3.45, 3.60), Pleochroism = PleochroismHabit.Strong, Dispersion = 0.051,
+            Hues = [new("yellow", .4), new("green", .4), new("brown", .15), new("orange", .05)],
+            Citation = "Wikipedia 'Titanite' (simple.wikipedia; cites Handbook of Mineralogy): nα 1.843–1.950, nγ 1.943–2.110, birefringence 0.100–0.160, biaxial +, SG 3.48–3.60; gemfame.com sphene: SG 3.45–3.55, dispersion 0.051",
+        },
+        new()
+        {
+            Name = "fluorite", BenchWeight = 0.5,
+            Indices = PrincipalValues.Single(1.432, 1.435),
+            SpecificGravity = new(3.00, 3.25), Dispersion = 0.007,
+            UvLong = [new("strong", .5), new("moderate", .3), new("weak", .2)],
+            Hues = [new("purple", .35), new("green", .3), new("blue", .15), new("yellow", .1), new("colourless", .1)],
+            Citation = "theimage.com fluorite: RI 1.434, SG 3.0–3.25, dispersion 0.007, strong fluorescence; ashantijewels.com (gemsociety text): N 1.432–1.434, SG 3.180; mints.uwc.ac.za: 1.433–1.435",
+        },
+        new()
+        {
+            Name = "amber", BenchWeight = 1, Form = StoneForm.Amorphous, Porous = true, Strained = 0.5,
+            Indices = PrincipalValues.Single(1.539, 1.545),
+            SpecificGravity = new(1.05, 1.10),
+            UvLong = [new("moderate", .5), new("strong", .3), new("weak", .2)], UvShort = [new("weak", .7), new("inert", .3)],
+            Hues = [new("yellow", .4), new("orange", .35), new("brown", .2), new("red", .05)],
+            Citation = "finegemcutting.com amber: RI about 1.54, SG 1.05–1.096, stress patterns in the polariscope; taylorfrancis.com (Read, Gemmology): RI 1.54, SG 1.05–1.10, LW bluish white, SW greenish; "
+                + "uid-ramanlab.com: RI 1.54–1.55",
+        },
+        new()
+        {
+            Name = "coral", BenchWeight = 0.6, Form = StoneForm.Aggregate, Porous = true, Opaque = true,
+            Indices = PrincipalValues.Single(1.486, 1.486),
+            SpecificGravity = new(2.60, 2.70),
+            Hues = [new("red", .5), new("pink", .35), new("colourless", .1), new("black", .05)],
+            Origins = [new("natural", .85), new("treated", .15)],
+            Citation = "orchid.ganoksin.com 'Coral vs glass': natural coral SG 2.60–2.70; blog.bhoma.com coral: RI 1.486, SG 2.60–2.70",
+        },
+        new()
+        {
+            Name = "glass", BenchWeight = 2, SgFollowsIndex = 1, Form = StoneForm.Amorphous, Strained = 0.3,
+            Indices = PrincipalValues.Single(1.48, 1.70),
+            SpecificGravity = new(2.30, 4.50),
+            Hues = [new("blue", .2), new("green", .2), new("colourless", .2), new("red", .15), new("yellow", .1), new("purple", .1), new("orange", .05)],
+            Origins = [new("imitation", 1)],
+            Citation = "Wikipedia 'Diamond simulant' table: glass ~1.6, SG 2.4–4.2; orchid.ganoksin.com: glass SG 2.30–4.50",
+            Judgement = "index range 1.48–1.70 around the published ~1.6 and SG rising with index (lead glass): judgement",
+        },
+        new()
+        {
+            Name = "phenakite", BenchWeight = 0.15,
+            Indices = PrincipalValues.Uniaxial(new(1.650, 1.656), new(0.015, 0.019), positive: true),
+            SpecificGravity = new(2.92, 2.97), Dispersion = 0.015,
+            Hues = [new("colourless", .8), new("yellow", .1), new("pink", .1)],
+            Citation = "gemologyproject.com Template:Phenakite: uniaxial +, RI 1.651–1.670, birefringence 0.016, SG 2.92–2.97, dispersion 0.015",
+        },
+        new()
+        {
+            Name = "euclase", BenchWeight = 0.1,
+            Indices = PrincipalValues.Biaxial(new(1.649, 1.653), new(0.018, 0.020), new(0.1, 0.3)),
+            SpecificGravity = new(3.05, 3.10),
+            Hues = [new("green", .5), new("blue", .4), new("colourless", .1)],
+            Citation = "Smith, Gem-Stones ch. XXXV (clyx.com): biaxial +, least and greatest index 1.651 and 1.670, SG 3.07",
+            Judgement = "ranges of ±0.002 and ±0.03 around Smith's single values, β's place: judgement",
+        },
+    ];
+}

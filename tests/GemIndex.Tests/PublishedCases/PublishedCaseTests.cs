@@ -1,0 +1,57 @@
+using System.Text.Json;
+using GemIndex.Tests.CommandLine;
+using Xunit.Abstractions;
+
+namespace GemIndex.Tests.PublishedCases;
+
+/// <summary>
+/// Runs every published case through the real batch interface (identify --batch) with the shipped catalogue and
+/// scores it by species: a case with at least two bench tests must have its published species among the first three
+/// (issue 14's target); top-1 and top-3 of every case are written to the test output.
+/// </summary>
+public class PublishedCaseTests(ITestOutputHelper output)
+{
+    [Fact]
+    public void Every_published_case_with_two_bench_tests_has_its_species_in_the_top_three()
+    {
+        using var run = new CommandRun();
+        var cases = PublishedCaseBook.Cases;
+        string file = Path.Combine(run.Folder, "published.jsonl");
+        File.WriteAllText(file, string.Join("\n", cases.Select(c => c.Line)) + "\n");
+        var (exit, stdout, error) = CommandRun.Plain("identify", "--batch", file, "--catalogue-dir", run.Folder);
+        Assert.True(exit == 0, error);
+        var results = stdout.Split('\n', StringSplitOptions.RemoveEmptyEntries);
+        Assert.Equal(cases.Count, results.Length);
+
+        var missed = new List<string>();
+        int top1 = 0, top3 = 0;
+        foreach (var (c, line) in cases.Zip(results))
+        {
+            var species = SpeciesOf(line);
+            bool first = species.Count > 0 && c.Species.Contains(species[0]);
+            bool three = species.Take(3).Any(c.Species.Contains);
+            top1 += first ? 1 : 0;
+            top3 += three ? 1 : 0;
+            output.WriteLine($"{(first ? "top-1" : three ? "top-3" : "miss ")}  {c.BenchTests} test(s)  {Id(line)}: published {c.Published}, ranked {string.Join(" > ", species.Take(3))}");
+            if (c.BenchTests >= 2 && !three) missed.Add($"{Id(line)} ({c.Published}): ranked {string.Join(", ", species.Take(3))}");
+        }
+        output.WriteLine($"published cases: {cases.Count}; top-1 {top1}, top-3 {top3}; with two or more bench tests: {cases.Count(c => c.BenchTests >= 2)}");
+        Assert.True(missed.Count == 0, "published species not in the top three: " + string.Join("; ", missed));
+    }
+
+    /// <summary>Species best first: the result's species list when the batch line carries one, else its candidates' species in order.</summary>
+    private static List<string> SpeciesOf(string line)
+    {
+        using var doc = JsonDocument.Parse(line);
+        var root = doc.RootElement;
+        if (root.TryGetProperty("species", out var list) && list.ValueKind == JsonValueKind.Array)
+            return [.. list.EnumerateArray().Select(s => s.GetProperty("species").GetString()!)];
+        return [.. root.GetProperty("candidates").EnumerateArray().Select(c => c.GetProperty("species").GetString()!).Distinct()];
+    }
+
+    private static string Id(string line)
+    {
+        using var doc = JsonDocument.Parse(line);
+        return doc.RootElement.GetProperty("id").GetString()!;
+    }
+}
