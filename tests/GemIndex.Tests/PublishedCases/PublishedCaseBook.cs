@@ -93,8 +93,8 @@ public static class PublishedCaseBook
             + "separation line at the girdle with flat bubbles in cement, natural fingerprint cavities in the pavilion; hydrothermal synthetic emerald on topaz "
             + "(Raman, not a bench test, named the parts).")
         { Origins = [OriginClass.Composite], FeaturesPresent = ["join_plane", "cement_bubbles", "healed_fractures"] },
-        new("""{"id":"gg-ln-synthetic-spinel-synthetic-ruby-doublet","refractometer":{"method":"facet","readings":[{"low":1.725}]},"colour":"red"}""", ["doublet"], 1,
-            "GIA Lab Notes (Carlsbad), 'Synthetic Spinel and Synthetic Ruby Doublet', as quoted at linellelynch.com (Gem FAQs, October 2010): 4.85 ct red, RI 1.725 "
+        new("""{"id":"gg-2010-ln-synthetic-spinel-synthetic-ruby-doublet","refractometer":{"method":"facet","readings":[{"low":1.725}]},"colour":"red"}""", ["doublet"], 1,
+            "Gems & Gemology, Winter 2010 (Vol. 46, No. 4), Lab Notes, 'Synthetic Spinel and Synthetic Ruby Doublet' (Carlsbad; listed in the issue's contents at scribd 'WN10'), as quoted at linellelynch.com (Gem FAQs, October 2010): 4.85 ct red, RI 1.725 "
             + "on the crown and 1.760–1.770 on the pavilion (only the crown's is entered), a glue layer with planar gas bubbles, a separation plane, a different "
             + "lustre above and below, curved striae in the crown, gas bubbles and curved striae in the pavilion. Crown and pavilion reacted differently to UV "
             + "(left out).")
@@ -117,6 +117,69 @@ public static class PublishedCaseBook
             + "'...a-new-type-of-opal-assemblage-magnified-10-x'; issue not named on the page): about 5 ct very dark green, birefringence 0.040 (the RI values are "
             + "lost in the transcription, so no refractometer reading is entered), distinct pleochroism green and olive brown, broad band centred at 455 nm, faint "
             + "line at 470 nm, cut-off from 430 nm (left out); 'proved that the stone is epidote'."),
+
+        new("""{"id":"gg-2017-ln-cats-eye-kornerupine","refractometer":{"method":"spot","spot":1.67},"sg":3.32,"colour":"yellowish green"}""", ["kornerupine"], 2,
+            "Gems & Gemology, Summer 2017 (Vol. 53, No. 2), Lab Notes, 'Cat's-Eye Kornerupine' (gia.edu/gems-gemology/summer-2017-labnotes-cats-eye-kornerupine): "
+            + "1.44 ct dark yellowish green cabochon, spot RI 1.67, hydrostatic SG 3.32, 'identified as kornerupine'; Raman (not a bench test) confirmed it."),
+        new("""{"id":"jgem-2019-star-enstatite","refractometer":{"method":"facet","readings":[{"low":1.660,"high":1.670}]},"sg":3.25,"pleochroism":"trichroic","uv_long":"inert","uv_short":"inert","absorption_nm":[505,545],"colour":"light brown"}""", ["enstatite"], 6,
+            "The Journal of Gemmology, 36(8), 2019, Gem Notes, a six-rayed star enstatite cabochon from Madagascar (fliphtml5.com/bfyz/utyf/..._Volume_36_Issue_8_(Winter_2019)/15): "
+            + "1.24 ct, colour light brown, pleochroism strong orangey brown, greyish green and grey (three colours: trichroic), RI 1.660–1.670, birefringence 0.010, "
+            + "biaxial positive, hydrostatic SG 3.25, inert to LW and SW, hand spectroscope sharp bands at about 505 and 545 nm; 'consistent with enstatite'. "
+            + "Magnetism and the Chelsea filter have no field; infrared reflectance is not a bench test."),
+        new("""{"id":"jck-synthetic-forsterite-tanzanite-imitation","refractometer":{"method":"facet","readings":[{"low":1.635,"high":1.647}]},"pleochroism":"dichroic"}""", ["forsterite"], 2,
+            "JCK magazine, 'Identifying Forsterite From Tanzanite' (jckonline.com/magazine-article/identifying-forsterite-from-tanzanite/): a 4.575 ct oval cushion "
+            + "bought as tanzanite; strong pleochroism, purple and blue in a calcite dichroscope (entered as dichroic, the two colours the dichroscope showed), RI "
+            + "1.635–1.647; a three-window colour filter (no field) then showed synthetic forsterite. The face-up colour is given only as 'resembled tanzanite' and "
+            + "is left out."),
+        new("""{"id":"gg-2020-gni-glass-imitating-gem-silica","refractometer":{"method":"spot","spot":1.48},"uv_long":"inert","uv_short":"weak","colour":"greenish blue"}""", ["glass"], 3,
+            "Gems & Gemology, Summer 2020 (Vol. 56, No. 2), Gem News International, 'Greenish Blue Glass Imitating Gem Silica' "
+            + "(gia.edu/gems-gemology/summer-2020-gemnews-greenish-blue-glass-imitating-gem-silica): three cabochons sold as gem silica, uniform greenish blue, spot RI "
+            + "1.48, inert LW, weak greenish white SW, numerous gas bubbles of various sizes; identified as glass. The SG (2.48 to about 2.57) is a range over the "
+            + "three stones, not one stone's reading, and is left out; the three are one case.")
+        { Origins = [OriginClass.Imitation], FeaturesPresent = ["round_bubbles"] },
+        new("""{"id":"jgem-2022-topaz-rough-diamond-imitation","refractometer":{"method":"spot","spot":1.61},"sg":3.56,"polariscope":"doubly_refractive","uv_long":"inert","uv_short":"inert"}""", ["topaz"], 5,
+            "The Journal of Gemmology, 38(4), 2022, Gem Notes, 'A Convincing Rough Diamond Imitation Manufactured from Topaz' (GCS Laboratory, London; "
+            + "fliphtml5.com/bfyz/enpd/The_Journal_of_Gemmology_Volume_38_issue_4/24): 20.30 ct purported diamond crystal, anisotropic in the polariscope with a partial "
+            + "biaxial figure, inert to LW and SW, spot RI about 1.61, hydrostatic SG 3.56, 'consistent with topaz'. Thermal and dual diamond testers said 'not "
+            + "diamond' (no field for a dual tester); UV-Vis-NIR, FTIR, Raman and EDXRF are not bench tests. Colour not stated."),
+        new("""{"id":"gg-2019-ln-glass-bangle-white","refractometer":{"method":"spot","spot":1.500},"colour":"white"}""", ["glass"], 1,
+            "Gems & Gemology, Spring 2019 (Vol. 55, No. 1), Lab Notes, 'Glass Bangles' (gia.edu/gems-gemology/spring-2019-labnotes-glass-bangles): 343.94 ct "
+            + "translucent white bangle, RI 'about 1.500' (a carved curved surface: entered as a spot reading), gas bubbles of various sizes and an elongated "
+            + "bubble below the surface; a manufactured glass.")
+        { Origins = [OriginClass.Imitation], FeaturesPresent = ["elongated_bubbles", "round_bubbles"] },
+        new("""{"id":"gg-2019-ln-glass-bangle-mottled","refractometer":{"method":"spot","spot":1.610},"colour":"light purplish gray and green"}""", ["glass"], 1,
+            "Gems & Gemology, Spring 2019, Lab Notes, 'Glass Bangles' (as above): 355.52 ct mottled light purplish gray and green bangle resembling jadeite, RI 1.610 "
+            + "(entered as a spot reading), gas bubbles throughout and in strings; a manufactured glass. The bubbles' shape is not stated: recorded as round_bubbles, "
+            + "the vocabulary's word for gas bubbles that are not elongated.")
+        { Origins = [OriginClass.Imitation], FeaturesPresent = ["round_bubbles"] },
+
+        new("""{"id":"gg-2014-gni-aquamarine-strong-dichroism","refractometer":{"method":"facet","readings":[{"low":1.582,"high":1.590}]},"sg":2.71,"pleochroism":"dichroic","colour":"grayish blue"}""", ["beryl"], 3,
+            "Gems & Gemology, Fall 2014 (Vol. 50, No. 3), Gem News International, 'Aquamarine with Unusually Strong Dichroism' (Gem Testing Laboratory, Jaipur; "
+            + "gia.edu/gems-gemology/fall-2014-gemnews-aquamarine-dichroism): 4.49 ct grayish blue oval, RI 1.582–1.590, birefringence 0.008, uniaxial negative, "
+            + "hydrostatic SG 2.71, dichroism deep blue and pale bluish green; natural origin established by planes of dendritic (ilmenite) platelets and liquid "
+            + "fingerprints. FTIR, Raman and UV-Vis-NIR are not bench tests.")
+        { Origins = [OriginClass.Natural], FeaturesPresent = ["crystals", "healed_fractures"] },
+
+        new("""{"id":"gg-2018-ln-cats-eye-demantoid","refractometer":{"method":"spot","over_limit":true},"sg":3.84,"colour":"green"}""", ["andradite"], 2,
+            "Gems & Gemology, Spring 2018 (Vol. 54, No. 1), Lab Notes, 'Cat's-Eye Demantoid and Brown Andradite with Horsetail Inclusions' (Tokyo; "
+            + "gia.edu/gems-gemology/spring-2018-labnotes-cats-eye-demantoid-and-brown-andradite-with-horsetail-inclusions): 2.51 ct green cabochon, RI over the "
+            + "limits of the refractometer, hydrostatic SG 3.84; horsetail inclusions (radiating fibres), 'regarded as diagnostic for natural demantoid'. Raman "
+            + "(not a bench test) matched andradite. Horsetail fibres are recorded as needles_silk, the vocabulary's word for fine fibres and needles.")
+        { Origins = [OriginClass.Natural], FeaturesPresent = ["needles_silk"] },
+        new("""{"id":"gg-2018-ln-brown-andradite-horsetail","refractometer":{"method":"facet","over_limit":true},"sg":3.84,"colour":"orangy brown"}""", ["andradite"], 2,
+            "Gems & Gemology, Spring 2018, Lab Notes (as above): 2.47 ct orangy brown round brilliant, RI over the limits, hydrostatic SG 3.84, radiating horsetail "
+            + "inclusions; andradite (Raman). Recorded as for the demantoid above.")
+        { Origins = [OriginClass.Natural], FeaturesPresent = ["needles_silk"] },
+        new("""{"id":"gg-bosshart-cobalt-glass-lapis-imitation","refractometer":{"method":"spot","spot":1.508},"sg":2.453,"colour":"violet-blue"}""", ["glass"], 2,
+            "Gems & Gemology, Notes and New Techniques, G. Bosshart, 'Cobalt Glass as a Lapis Lazuli Imitation' (SSEF; docslib.org/doc/1042806, issue not shown in "
+            + "the stored opening): a necklace of opaque violet-blue 8 mm beads offered as 'blue quartz from India', RI 1.508 (round beads: entered as a spot "
+            + "reading), SG 2.453; a nontransparent cobalt glass with white cristobalite crystallites. The absorption spectrum was recorded with a "
+            + "spectrophotometer, not a hand spectroscope, and is not entered."),
+        new("""{"id":"gsi-synthetic-rock-crystal-egg","uv_long":"inert","uv_short":"inert","colour":"colorless"}""", ["quartz"], 2,
+            "Gemological Science International (GSI, Jaipur) Lab Note, 'Massive egg-shaped synthetic rock crystal quartz' (M. B. Vyas and G. Khandelwal; read at "
+            + "usa-jewelry-shop.blogspot.com/2022/11/gsi-lab-note-massive-egg-shaped.html, also southernjewelrynews.com): 1588 g colourless spheroid, inert to LW and "
+            + "SW; a seed plate and breadcrumb-like particles (no vocabulary word for either) showed it synthetic, FTIR (not a bench test) confirmed. No RI or SG "
+            + "was published."),
 
         // One bench test: reported, not required (a single SG cannot separate the species of a general catalogue).
         new("""{"id":"bauer-quartz","sg":2.66}""", ["quartz"], 1,
