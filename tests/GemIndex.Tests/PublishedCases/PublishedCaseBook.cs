@@ -181,6 +181,12 @@ public static class PublishedCaseBook
             + "SW; a seed plate and breadcrumb-like particles (no vocabulary word for either) showed it synthetic, FTIR (not a bench test) confirmed. No RI or SG "
             + "was published."),
 
+        new("""{"id":"gg-2018-gni-zambian-emerald-three-direction-inclusions","refractometer":{"method":"spot","spot":1.58},"sg":2.80,"polariscope":"doubly_refractive","colour":"vivid green"}""", ["beryl"], 3,
+            "Gems & Gemology, Winter 2018, Gem News International, 'Natural emerald with inclusions along three directions' (Guild Gem Laboratories; read at "
+            + "scribd.com/document/620844704/GG-WN18-Gem-News-International): 10.48 ct sugarloaf cabochon of vivid highly saturated green, RI approximately 1.58 "
+            + "(a cabochon: entered as a spot reading), SG approximately 2.80, interference colours in the polariscope (written doubly refractive); FTIR (not a "
+            + "bench test) confirmed natural emerald, EDXRF pointed to Zambia."),
+
         // One bench test: reported, not required (a single SG cannot separate the species of a general catalogue).
         new("""{"id":"bauer-quartz","sg":2.66}""", ["quartz"], 1,
             "M. Bauer, Precious Stones (trans. L. J. Spencer), p. 19 (afripics.com page copy): worked hydrostatic example, SG 2.66, 'the stone may therefore be identified as quartz'"),
