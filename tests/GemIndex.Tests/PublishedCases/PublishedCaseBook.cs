@@ -187,6 +187,17 @@ public static class PublishedCaseBook
             + "(a cabochon: entered as a spot reading), SG approximately 2.80, interference colours in the polariscope (written doubly refractive); FTIR (not a "
             + "bench test) confirmed natural emerald, EDXRF pointed to Zambia."),
 
+        new("""{"id":"gg-2017-ln-sapphire-synthetic-ruby-overgrowth-1","refractometer":{"method":"facet","readings":[{"low":1.778,"high":1.788}]},"colour":"red"}""", ["corundum"], 1,
+            "Gems & Gemology, Winter 2017 (Vol. 53, No. 4), Lab Notes, 'Two Unusual Natural Sapphires with Synthetic Ruby Overgrowth' (New York; "
+            + "gia.edu/gems-gemology/winter-2017-labnotes-two-unusual-natural-sapphires-synthetic-ruby-overgrowth): red oval, RI 1.778–1.788; red colour at the facet "
+            + "junctions suggested chromium diffusion, but magnification showed a 0.3 mm synthetic overgrowth with shallow flux fingerprints on a near-colourless "
+            + "natural core with intact silk and heat-altered crystals. Origin: natural core, synthetic overgrowth.")
+        { Origins = [OriginClass.Natural, OriginClass.Synthetic], FeaturesPresent = ["surface_colour", "flux_residue", "needles_silk", "crystals"] },
+        new("""{"id":"gg-2017-ln-sapphire-synthetic-ruby-overgrowth-2","refractometer":{"method":"facet","readings":[{"low":1.776,"high":1.787}]},"colour":"red"}""", ["corundum"], 1,
+            "Gems & Gemology, Winter 2017, Lab Notes (as above): the second red oval, RI 1.776–1.787; the features are described for the two stones together and "
+            + "are recorded as for the first.")
+        { Origins = [OriginClass.Natural, OriginClass.Synthetic], FeaturesPresent = ["surface_colour", "flux_residue", "needles_silk", "crystals"] },
+
         // One bench test: reported, not required (a single SG cannot separate the species of a general catalogue).
         new("""{"id":"bauer-quartz","sg":2.66}""", ["quartz"], 1,
             "M. Bauer, Precious Stones (trans. L. J. Spencer), p. 19 (afripics.com page copy): worked hydrostatic example, SG 2.66, 'the stone may therefore be identified as quartz'"),
