@@ -57,8 +57,9 @@ public static class PublishedCaseBook
             "Gems & Gemology, Spring 2021, Lab Notes, 'Lead Glass–Filled Laboratory-Grown Ruby' (gia.edu/gems-gemology/spring-2021-labnotes-lead-glass-filled-laboratory-grown-ruby): "
             + "3.53 ct, RI 1.761–1.769, birefringence 0.008, SG 4.01, uniaxial, ruby spectrum (no line named, left out), strong red LW, 'medium' chalky red SW "
             + "(written moderate); a blue and orange flash effect and flattened gas bubbles proved lead-glass filling. No inclusion showed natural or synthetic "
-            + "growth: the laboratory-grown origin came from the DiamondView, which is not a bench test, so magnification decided the treatment only.")
-        { Origins = [OriginClass.Synthetic, OriginClass.Treated], FeaturesPresent = ["flash_effect", "flattened_bubbles"] },
+            + "growth: the diagnostic curved striae were looked for and not seen (the chalky SWUV and the filled fractures hid them), and the laboratory-grown "
+            + "origin came from the DiamondView, which is not a bench test, so magnification decided the treatment only.")
+        { Origins = [OriginClass.Synthetic, OriginClass.Treated], FeaturesPresent = ["flash_effect", "flattened_bubbles"], FeaturesAbsent = ["curved_striae"] },
         new("""{"id":"gg-2000-uvite-colour-change","refractometer":{"method":"facet","readings":[{"low":1.620,"high":1.640}]},"sg":3.06,"uv_long":"inert","uv_short":"weak","pleochroism":"dichroic","absorption_nm":[650,670]}""", Tourmaline, 6,
             "Gems & Gemology, Fall 2000 (yumpu.com copy 'Fall 2000 Gems & Gemology - Gemfrance', page 84), an item on a colour-shifting green tourmaline: "
             + "pleochroic dark yellowish green and brown-orange, uniaxial negative, RI 1.620–1.640, birefringence 0.020, hydrostatic SG 3.06, inert LW, very chalky "
