@@ -1,13 +1,36 @@
+using GemIndex.Core.Catalogue;
+
 namespace GemIndex.Tests.PublishedCases;
 
 /// <summary>
 /// One particular stone whose bench readings and identification were published: the readings as a batch line, copied
 /// as published (units converted only where the batch format asks for carats), the species the source named (any of
-/// <see cref="Species"/> counts: the catalogue splits tourmaline by end member), how many instrument tests the
-/// source reports (colour is an observation, not counted), and where it was read.
+/// <see cref="Species"/> counts: the catalogue splits tourmaline by end member, and an assembled stone may be named by
+/// its parts), how many instrument tests the source reports that the line holds (colour is an observation, not
+/// counted), and where it was read.
 /// </summary>
+/// <remarks>
+/// Where magnification decided origin or treatment, <see cref="Origins"/> holds the origin the source gave and
+/// <see cref="FeaturesPresent"/> / <see cref="FeaturesAbsent"/> the features seen (or looked for and not seen), in the
+/// words of the magnification vocabulary. They are kept out of the batch line until the engine reads magnification.
+/// </remarks>
 public sealed record PublishedCase(string Line, IReadOnlyList<string> Species, int BenchTests, string Source)
 {
-    /// <summary>The species as the source names it: the group name when several catalogue species stand for it.</summary>
-    public string Published => Species.Count > 1 ? "tourmaline" : Species[0];
+    /// <summary>The catalogue's tourmaline species: a source that says "tourmaline" is right with any of them.</summary>
+    public static IReadOnlyList<string> TourmalineGroup { get; } = ["elbaite", "dravite", "schorl", "uvite", "liddicoatite"];
+
+    /// <summary>The origin the source gave (more than one for, say, a glass-filled synthetic); empty when not recorded.</summary>
+    public IReadOnlyList<OriginClass> Origins { get; init; } = [];
+
+    /// <summary>Magnification features the source saw, as vocabulary words.</summary>
+    public IReadOnlyList<string> FeaturesPresent { get; init; } = [];
+
+    /// <summary>Magnification features the source says it looked for and did not see, as vocabulary words.</summary>
+    public IReadOnlyList<string> FeaturesAbsent { get; init; } = [];
+
+    /// <summary>True when the source says which features under magnification decided origin or treatment.</summary>
+    public bool IsMagnificationCase => FeaturesPresent.Count > 0 || FeaturesAbsent.Count > 0 || Origins.Count > 0;
+
+    /// <summary>The species as the source names it: the group name for tourmaline, else the names joined.</summary>
+    public string Published => Species.SequenceEqual(TourmalineGroup) ? "tourmaline" : string.Join(" / ", Species);
 }

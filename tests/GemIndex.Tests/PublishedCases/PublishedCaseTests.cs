@@ -39,6 +39,32 @@ public class PublishedCaseTests(ITestOutputHelper output)
         Assert.True(missed.Count == 0, "published species not in the top three: " + string.Join("; ", missed));
     }
 
+    /// <summary>
+    /// The magnification cases (issue 15) are not ranked yet, since the batch line does not carry features: this checks
+    /// that each one names the origin the source gave, uses only words of the magnification vocabulary, never has a
+    /// feature both present and absent, and keeps magnification out of the batch line.
+    /// </summary>
+    [Fact]
+    public void Every_magnification_case_names_an_origin_and_only_known_features()
+    {
+        var cases = PublishedCaseBook.Cases.Where(c => c.IsMagnificationCase).ToList();
+        Assert.NotEmpty(cases);
+        var problems = new List<string>();
+        foreach (var c in cases)
+        {
+            string id = Id(c.Line);
+            if (c.Origins.Count == 0) problems.Add($"{id}: no origin");
+            if (c.FeaturesPresent.Count + c.FeaturesAbsent.Count == 0) problems.Add($"{id}: no feature");
+            problems.AddRange(c.FeaturesPresent.Concat(c.FeaturesAbsent).Where(w => !MagnificationWords.Known.Contains(w)).Select(w => $"{id}: unknown feature '{w}'"));
+            problems.AddRange(c.FeaturesPresent.Intersect(c.FeaturesAbsent).Select(w => $"{id}: '{w}' both present and absent"));
+            using var doc = JsonDocument.Parse(c.Line);
+            if (doc.RootElement.TryGetProperty("magnification", out _)) problems.Add($"{id}: magnification in the batch line");
+            output.WriteLine($"{id}: {string.Join(" + ", c.Origins)}; present {string.Join(", ", c.FeaturesPresent)}; absent {string.Join(", ", c.FeaturesAbsent)}");
+        }
+        output.WriteLine($"magnification cases: {cases.Count}");
+        Assert.True(problems.Count == 0, string.Join("; ", problems));
+    }
+
     /// <summary>Species best first: the result's species list when the batch line carries one, else its candidates' species in order.</summary>
     private static List<string> SpeciesOf(string line)
     {
