@@ -55,7 +55,7 @@ public class PublishedCaseTests(ITestOutputHelper output)
             string id = Id(c.Line);
             if (c.Origins.Count == 0) problems.Add($"{id}: no origin");
             if (c.FeaturesPresent.Count + c.FeaturesAbsent.Count == 0) problems.Add($"{id}: no feature");
-            problems.AddRange(c.FeaturesPresent.Concat(c.FeaturesAbsent).Where(w => !MagnificationWords.Known.Contains(w)).Select(w => $"{id}: unknown feature '{w}'"));
+            problems.AddRange(c.FeaturesPresent.Concat(c.FeaturesAbsent).Where(w => GemIndex.Core.Magnification.MagnificationVocabulary.Find(w) is null).Select(w => $"{id}: unknown feature '{w}'"));
             problems.AddRange(c.FeaturesPresent.Intersect(c.FeaturesAbsent).Select(w => $"{id}: '{w}' both present and absent"));
             using var doc = JsonDocument.Parse(c.Line);
             if (doc.RootElement.TryGetProperty("magnification", out _)) problems.Add($"{id}: magnification in the batch line");
