@@ -45,7 +45,7 @@ public static class BenchDefaults
     public const int MostSteps = 1000;
 
     /// <summary>Candidates shown by default.</summary>
-    public const int Candidates = 5;
+    public const int Candidates = 10;
 
     /// <summary>The most candidates any front end shows (the range every option's help states).</summary>
     public const int MostCandidates = 50;

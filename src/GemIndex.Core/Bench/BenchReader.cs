@@ -166,7 +166,7 @@ public static class BenchReader
                     $"is given directly ({BenchText.Shown(direct)}) and by weighing ({BenchField.AirCt}, {BenchField.WaterCt}); give one of them.");
                 return null;
             }
-            if (celsius is not null && !weighed)
+            if (celsius is not null && !weighed && Number(BenchField.WaterC) is not null)
                 Error(BenchField.WaterC, celsius, "a temperature only with a hydrostatic weighing", "is given, but there is no hydrostatic weighing to apply it to.");
             if (direct is not null)
                 return Number(BenchField.Sg) is { } sg ? Checked(BenchField.Sg, direct, () => new SpecificGravity(sg, BenchDefaults.DirectSpecificGravityUncertainty)) : null;

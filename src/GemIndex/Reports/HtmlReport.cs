@@ -109,5 +109,5 @@ internal static class HtmlReport
     private static string Number(string text) => $"<td class=\"number\">{E(text)}</td>";
 
     /// <summary>HTML-encodes text: &lt; &gt; &amp; " and ' all become entities.</summary>
-    public static string E(string text) => WebUtility.HtmlEncode(text);
+    public static string E(string text) => WebUtility.HtmlEncode(string.Concat(text.Select(ch => char.IsControl(ch) && ch is not ('\n' or '\t') ? $"\\u{(int)ch:x4}" : ch.ToString())));
 }

@@ -72,13 +72,14 @@ internal static class MarkdownReport
         md.AppendLine();
     }
 
-    /// <summary>Backslash-escapes Markdown's punctuation and turns line breaks into spaces, so text stays on its line or cell.</summary>
+    /// <summary>Backslash-escapes Markdown's punctuation, turns line breaks into spaces (text stays on its line or cell) and other control characters into visible \uXXXX.</summary>
     public static string Escape(string text)
     {
         var sb = new StringBuilder(text.Length);
         foreach (char ch in text)
         {
             if (ch is '\r' or '\n') sb.Append(' ');
+            else if (char.IsControl(ch)) sb.Append($"\\u{(int)ch:x4}");   // an escape sequence is shown, never passed to a viewer
             else if ("\\`*_[]<>|".Contains(ch)) sb.Append('\\').Append(ch);
             else sb.Append(ch);
         }

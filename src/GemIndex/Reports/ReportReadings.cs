@@ -1,3 +1,4 @@
+using GemIndex.Core.Bench;
 using GemIndex.Data.Batch;
 
 namespace GemIndex.Cli.Reports;
@@ -19,10 +20,10 @@ internal static class ReportReadings
         if (r.Sg is { } sg) fields.Add(new("sg_given", "Specific gravity (given)", ReportNumbers.Gravity(sg)));
         if (r.SgWeighing is { } w)
         {
-            fields.Add(new("weight_in_air", "Weight in air", ReportNumbers.Carats(w.AirCt)));
-            fields.Add(new("weight_in_water", "Weight in water", ReportNumbers.Carats(w.WaterCt)));
+            fields.Add(new("weight_in_air", "Weight in air", w.AirCt is { } air ? ReportNumbers.Carats(air) : StoneReport.NotRecorded));
+            fields.Add(new("weight_in_water", "Weight in water", w.WaterCt is { } water ? ReportNumbers.Carats(water) : StoneReport.NotRecorded));
             fields.Add(new("water_temperature", "Water temperature", w.WaterC is { } t ? ReportNumbers.Celsius(t)
-                : $"not given ({ReportNumbers.Celsius(StoneReadingsConverter.DefaultWaterCelsius)} assumed)"));
+                : $"not given ({ReportNumbers.Celsius(BenchDefaults.WaterCelsius)} assumed)"));
         }
         foreach (var (h, i) in r.HeavyLiquids.Select((h, i) => (h, i)))
             fields.Add(new($"heavy_liquid_{i + 1}", $"Heavy liquid {i + 1}", $"{ReportNumbers.Density(h.Density)}: {StoneReport.Word(h.Result)}"));

@@ -28,16 +28,19 @@ public class IdentifyCommandTests
         Assert.Equal(2, lines.Length);
         using var quartz = JsonDocument.Parse(lines[0]);
         Assert.Equal("Q-1", quartz.RootElement.GetProperty("id").GetString());
-        var best = quartz.RootElement.GetProperty("candidates")[0];
-        Assert.Equal("quartz", best.GetProperty("species").GetString());
+        var species = quartz.RootElement.GetProperty("species");
+        Assert.Equal("quartz", species[0].GetProperty("species").GetString());
+        var best = species[0].GetProperty("candidates")[0];
+        Assert.Equal(1, best.GetProperty("rank").GetInt32());
         Assert.Equal("natural", best.GetProperty("origin").GetString());
         Assert.False(quartz.RootElement.GetProperty("no_good_match").GetBoolean());
-        double sum = quartz.RootElement.GetProperty("candidates").EnumerateArray().Sum(c => c.GetProperty("confidence").GetDouble());
-        Assert.InRange(sum, 0, 1);
-        Assert.True(quartz.RootElement.GetProperty("candidates").GetArrayLength() <= 10);
+        var candidates = species.EnumerateArray().SelectMany(x => x.GetProperty("candidates").EnumerateArray()).ToList();
+        Assert.InRange(candidates.Sum(c => c.GetProperty("confidence").GetDouble()), 0, 1);
+        Assert.InRange(species.EnumerateArray().Sum(x => x.GetProperty("confidence").GetDouble()), 0, 1);
+        Assert.True(candidates.Count <= 10);
         Assert.Equal(JsonValueKind.Array, quartz.RootElement.GetProperty("warnings").ValueKind);
         using var diamond = JsonDocument.Parse(lines[1]);
-        Assert.Equal("diamond", diamond.RootElement.GetProperty("candidates")[0].GetProperty("species").GetString());
+        Assert.Equal("diamond", diamond.RootElement.GetProperty("species")[0].GetProperty("species").GetString());
     }
 
     [Fact]
@@ -61,9 +64,9 @@ public class IdentifyCommandTests
         Assert.Equal(2, lines[1].GetProperty("line").GetInt32());
         Assert.StartsWith("$: not valid JSON", lines[1].GetProperty("error").GetString());
         Assert.Equal("refractometer.readings[0]: high edge is 1.544; allowed: not below the low edge 1.5530 of the same step.", lines[2].GetProperty("error").GetString());
-        Assert.Equal("polariscope: 'sparkly' is not one of singly_refractive | doubly_refractive | aggregate | anomalous", lines[3].GetProperty("error").GetString());
+        Assert.Equal("polariscope: 'sparkly' is not one of singly_refractive | doubly_refractive | aggregate | anomalous.", lines[3].GetProperty("error").GetString());
         Assert.Equal("sg.water_ct: weight in water is 1.2 ct; allowed: 0 to below the weight in air 1 ct.", lines[4].GetProperty("error").GetString());
-        Assert.Equal("sg: must be a number or {\"air_ct\", \"water_ct\", \"water_c\"}", lines[5].GetProperty("error").GetString());
+        Assert.Equal("sg: must be a number or {\"air_ct\", \"water_ct\", \"water_c\"}, not the text \"2.65\".", lines[5].GetProperty("error").GetString());
         Assert.Equal("F", lines[6].GetProperty("id").GetString());
     }
 
@@ -88,7 +91,7 @@ public class IdentifyCommandTests
         using var run = new CommandRun();
         var (exit, _, error) = Identify(run, "--edge", "0:1,544/1.553");
         Assert.Equal(3, exit);
-        Assert.Contains("--edge #1 low edge: '1,544' has a comma", error, StringComparison.Ordinal);
+        Assert.Contains("--edge #1: low: '1,544' has a comma", error, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -29,7 +29,7 @@ public sealed class ReportCommandTests : IDisposable
     [Theory]
     [InlineData("html", "<!DOCTYPE html>")]
     [InlineData("markdown", "# Stone report: lot 7 / 2")]
-    [InlineData("json", "\"report_version\": 1")]
+    [InlineData("json", "\"report_version\": 2")]
     public void Report_stone_writes_the_chosen_format_to_the_output_file(string format, string expected)
     {
         string output = Path.Combine(_dir, "report.out");
