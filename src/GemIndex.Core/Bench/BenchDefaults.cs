@@ -1,4 +1,5 @@
 using GemIndex.Core.Identification;
+using GemIndex.Core.Quantities;
 
 namespace GemIndex.Core.Bench;
 
@@ -37,6 +38,10 @@ public static class BenchDefaults
     /// air bubbles that a bench weighing in water carries (common practice: SG to ±0.01 on stones over about 1 ct).
     /// </summary>
     public const double WeighingUncertaintyCarats = 0.002;
+
+    /// <summary>A bench weighing in carats with the uncertainty every weighing carries (<see cref="WeighingUncertaintyCarats"/>).</summary>
+    /// <exception cref="QuantityOutOfRangeException">The weight is not a mass (see <see cref="Mass.FromCarats"/>).</exception>
+    public static Mass Weighed(double carats) => Mass.FromCarats(carats, WeighingUncertaintyCarats);
 
     /// <summary>Standard uncertainty assumed for an SG given as a plain number (common practice: ±0.01–0.02).</summary>
     public const double DirectSpecificGravityUncertainty = 0.01;

@@ -174,8 +174,8 @@ public static class BenchReader
             if (air is null) Error(BenchField.AirCt, "", "a weight in carats", "is missing: a hydrostatic weighing needs the weight in air as well as in water.");
             if (water is null) Error(BenchField.WaterCt, "", "a weight in carats", "is missing: a hydrostatic weighing needs the weight in water as well as in air.");
             double? airCt = Number(BenchField.AirCt), waterCt = Number(BenchField.WaterCt), waterC = Number(BenchField.WaterC);
-            Mass? inAir = airCt is { } a ? Checked(BenchField.AirCt, air!, () => Mass.FromCarats(a, BenchDefaults.WeighingUncertaintyCarats)) : null;
-            Mass? inWater = waterCt is { } w ? Checked(BenchField.WaterCt, water!, () => Mass.FromCarats(w, BenchDefaults.WeighingUncertaintyCarats)) : null;
+            Mass? inAir = airCt is { } a ? Checked(BenchField.AirCt, air!, () => BenchDefaults.Weighed(a)) : null;
+            Mass? inWater = waterCt is { } w ? Checked(BenchField.WaterCt, water!, () => BenchDefaults.Weighed(w)) : null;
             Temperature? temperature = celsius is not null && waterC is null ? null
                 : Checked(BenchField.WaterC, celsius ?? "", () => WaterDensity.At(Temperature.FromCelsius(waterC ?? BenchDefaults.WaterCelsius)).Temperature);
             if (inAir is not { } m1 || inWater is not { } m2 || temperature is not { } t) return null;
