@@ -91,4 +91,37 @@ public sealed class ReportCommandTests : IDisposable
         Assert.Equal(ExitCodes.Usage, exit);
         Assert.Contains(value, err);
     }
+
+    [Theory]
+    [InlineData("stone", "--readings", "")]
+    [InlineData("stone", "--workbook", "")]
+    [InlineData("workbook", "--workbook", "")]
+    public void An_empty_path_is_an_error_naming_the_option_not_a_crash(string command, string option, string path)
+    {
+        string[] args = command == "stone" && option == "--workbook" ? ["report", command, option, path, "--stone", "x"] : ["report", command, option, path];
+        var (exit, _, err) = Run(args);
+        Assert.Equal(ExitCodes.BadInput, exit);
+        Assert.Contains($"{option}: the path is empty", err);
+    }
+
+    [Fact]
+    public void A_missing_file_or_a_folder_is_a_plain_message()
+    {
+        var (exit, _, err) = Run("report", "stone", "--readings", Path.Combine(_dir, "nowhere.jsonl"));
+        Assert.Equal(ExitCodes.BadFile, exit);
+        Assert.Contains("there is no file", err);
+        var (folder, _, folderErr) = Run("report", "stone", "--readings", _dir);
+        Assert.Equal(ExitCodes.BadFile, folder);
+        Assert.Contains("is a folder, not a file", folderErr);
+    }
+
+    [Fact]
+    public void A_reference_with_a_terminal_escape_sequence_is_escaped_in_the_Markdown_on_standard_output()
+    {
+        string line = ReportFixtures.QuartzLine.Replace("\"id\":\"", "\"id\":\"\\u001b[2J", StringComparison.Ordinal);
+        var (exit, stdout, err) = Run("report", "stone", "--readings", Batch(line));
+        Assert.True(exit == ExitCodes.Ok, err);
+        Assert.DoesNotContain("\u001b", stdout);
+        Assert.Contains("\\u001b\\[2J", stdout);
+    }
 }
