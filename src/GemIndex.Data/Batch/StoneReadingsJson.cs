@@ -50,7 +50,7 @@ public static class StoneReadingsJson
         public BenchReadings Stone(JsonElement root)
         {
             var r = new BenchReadings();
-            if (!root.TryGetProperty("id", out var id) || id.ValueKind == JsonValueKind.Null)
+            if (!root.TryGetProperty(BenchField.Id, out var id) || id.ValueKind == JsonValueKind.Null)
                 errors.Add(new BenchFieldError(BenchField.Id, "", "a string", "is required."));
             else if (id.ValueKind is JsonValueKind.String or JsonValueKind.Number) r = r.With(BenchField.Id, Text(id, BenchField.Id));
             else errors.Add(new BenchFieldError(BenchField.Id, BenchText.Shown(id.GetRawText()), "a string", "must be a string."));
@@ -59,7 +59,7 @@ public static class StoneReadingsJson
                 if (rf.ValueKind != JsonValueKind.Object) errors.Add(new BenchFieldError("refractometer", BenchText.Shown(rf.GetRawText()), "an object", "must be an object."));
                 else r = Refractometer(rf, r);
             }
-            if (Child(root, "sg") is { } sg)
+            if (Child(root, BenchField.Sg) is { } sg)
             {
                 if (sg.ValueKind == JsonValueKind.Object)
                     r = r.With(BenchField.AirCt, Num(sg, "air_ct", BenchField.AirCt)).With(BenchField.WaterCt, Num(sg, "water_ct", BenchField.WaterCt))
@@ -68,7 +68,7 @@ public static class StoneReadingsJson
                 else errors.Add(new BenchFieldError(BenchField.Sg, BenchText.Shown(sg.GetRawText()), "a number or {\"air_ct\", \"water_ct\", \"water_c\"}",
                     $"must be a number or {{\"air_ct\", \"water_ct\", \"water_c\"}}, not {Kind(sg)}."));
             }
-            if (Child(root, "heavy_liquids") is { } liquids && List(liquids, BenchField.HeavyLiquids) is { } entries)
+            if (Child(root, BenchField.HeavyLiquids) is { } liquids && List(liquids, BenchField.HeavyLiquids) is { } entries)
             {
                 var texts = new List<string>();
                 for (int i = 0; i < entries.Count; i++)
@@ -82,13 +82,13 @@ public static class StoneReadingsJson
             }
             foreach (string word in new[] { BenchField.Polariscope, BenchField.Pleochroism, BenchField.ThermalProbe, BenchField.Electrical, BenchField.UvLong, BenchField.UvShort, BenchField.Colour })
                 r = r.With(word, Value(root, word, word));
-            if (Child(root, "dispersion") is { } dispersion)
+            if (Child(root, BenchField.Dispersion) is { } dispersion)
             {
                 if (dispersion.ValueKind == JsonValueKind.Object)
                     r = r.With(BenchField.IndexAtB, Num(dispersion, "nB", BenchField.IndexAtB)).With(BenchField.IndexAtG, Num(dispersion, "nG", BenchField.IndexAtG));
                 else r = r.With(BenchField.Dispersion, Word(dispersion, BenchField.Dispersion));
             }
-            if (Child(root, "absorption_nm") is { } lines && List(lines, BenchField.Absorption) is { } nm)
+            if (Child(root, BenchField.Absorption) is { } lines && List(lines, BenchField.Absorption) is { } nm)
                 r = r.With(BenchField.Absorption, BenchSyntax.Lines(nm.Select((x, i) => Number(x, $"{BenchField.Absorption}[{i}]") ?? "").Where(x => x.Length > 0)));
             return r;
         }
@@ -193,7 +193,7 @@ public static class StoneReadingsJson
         using (var w = new Utf8JsonWriter(stream))
         {
             w.WriteStartObject();
-            w.WriteString("id", r.Id);
+            w.WriteString(BenchField.Id, r.Id);
             if (r.Refractometer is { } rf)
             {
                 w.WriteStartObject("refractometer");
@@ -219,10 +219,10 @@ public static class StoneReadingsJson
                 if (rf.CalibrationOffset is { } c) w.WriteNumber("calibration_offset", c);
                 w.WriteEndObject();
             }
-            if (r.Sg is { } sg) w.WriteNumber("sg", sg);
+            if (r.Sg is { } sg) w.WriteNumber(BenchField.Sg, sg);
             else if (r.SgWeighing is { } wg)
             {
-                w.WriteStartObject("sg");
+                w.WriteStartObject(BenchField.Sg);
                 if (wg.AirCt is { } a) w.WriteNumber("air_ct", a);
                 if (wg.WaterCt is { } wc) w.WriteNumber("water_ct", wc);
                 if (wg.WaterC is { } t) w.WriteNumber("water_c", t);
@@ -230,25 +230,25 @@ public static class StoneReadingsJson
             }
             if (r.HeavyLiquids.Count > 0)
             {
-                w.WriteStartArray("heavy_liquids");
+                w.WriteStartArray(BenchField.HeavyLiquids);
                 foreach (var h in r.HeavyLiquids) { w.WriteStartObject(); w.WriteNumber("density", h.Density); w.WriteString("result", h.Result); w.WriteEndObject(); }
                 w.WriteEndArray();
             }
-            WriteWord(w, "polariscope", r.Polariscope);
-            WriteWord(w, "pleochroism", r.Pleochroism);
-            if (r.DispersionIndices is { } d) { w.WriteStartObject("dispersion"); w.WriteNumber("nB", d.NB); w.WriteNumber("nG", d.NG); w.WriteEndObject(); }
-            else WriteWord(w, "dispersion", r.Dispersion);
-            WriteWord(w, "thermal_probe", r.ThermalProbe);
-            WriteWord(w, "electrical", r.Electrical);
-            WriteWord(w, "uv_long", r.UvLong);
-            WriteWord(w, "uv_short", r.UvShort);
+            WriteWord(w, BenchField.Polariscope, r.Polariscope);
+            WriteWord(w, BenchField.Pleochroism, r.Pleochroism);
+            if (r.DispersionIndices is { } d) { w.WriteStartObject(BenchField.Dispersion); w.WriteNumber("nB", d.NB); w.WriteNumber("nG", d.NG); w.WriteEndObject(); }
+            else WriteWord(w, BenchField.Dispersion, r.Dispersion);
+            WriteWord(w, BenchField.ThermalProbe, r.ThermalProbe);
+            WriteWord(w, BenchField.Electrical, r.Electrical);
+            WriteWord(w, BenchField.UvLong, r.UvLong);
+            WriteWord(w, BenchField.UvShort, r.UvShort);
             if (r.AbsorptionNm is { } lines)
             {
-                w.WriteStartArray("absorption_nm");
+                w.WriteStartArray(BenchField.Absorption);
                 foreach (double l in lines) w.WriteNumberValue(l);
                 w.WriteEndArray();
             }
-            WriteWord(w, "colour", r.Colour);
+            WriteWord(w, BenchField.Colour, r.Colour);
             w.WriteEndObject();
         }
         return Encoding.UTF8.GetString(stream.ToArray());

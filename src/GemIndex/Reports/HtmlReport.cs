@@ -1,3 +1,4 @@
+using GemIndex.Core.Bench;
 using System.Globalization;
 using System.Net;
 using System.Text;
@@ -80,7 +81,7 @@ internal static class HtmlReport
         foreach (var c in report.Candidates.Where(c => c.Reasons.Count > 0))
         {
             h.Append("<h3>Reasons for ").Append(E(c.Name)).AppendLine("</h3>");
-            List(h, [.. c.Reasons.Select(r => $"{(r.Agrees ? "agrees" : "against")} ({StoneReport.Word(r.Test)}, {ReportNumbers.Bits(r.WeightBits)}): {r.Text}")], "");
+            List(h, [.. c.Reasons.Select(r => $"{(r.Agrees ? "agrees" : "against")} ({BenchTestWords.DisplayOfWire(r.Test)}, {ReportNumbers.Bits(r.WeightBits)}): {r.Text}")], "");
         }
     }
 

@@ -1,3 +1,4 @@
+using GemIndex.Core.Bench;
 using System.Text;
 
 namespace GemIndex.Cli.Reports;
@@ -52,7 +53,7 @@ internal static class MarkdownReport
         {
             md.Append("Reasons for ").Append(Escape(c.Name)).AppendLine(":").AppendLine();
             foreach (var r in c.Reasons)
-                md.AppendLine($"- {(r.Agrees ? "agrees" : "against")} ({Escape(StoneReport.Word(r.Test))}, {ReportNumbers.Bits(r.WeightBits)}): {Escape(r.Text)}");
+                md.AppendLine($"- {(r.Agrees ? "agrees" : "against")} ({Escape(BenchTestWords.DisplayOfWire(r.Test))}, {ReportNumbers.Bits(r.WeightBits)}): {Escape(r.Text)}");
             md.AppendLine();
         }
     }

@@ -27,15 +27,15 @@ internal static class ReportReadings
         }
         foreach (var (h, i) in r.HeavyLiquids.Select((h, i) => (h, i)))
             fields.Add(new($"heavy_liquid_{i + 1}", $"Heavy liquid {i + 1}", $"{ReportNumbers.Density(h.Density)}: {StoneReport.Word(h.Result)}"));
-        AddWord(fields, "polariscope", "Polariscope", r.Polariscope);
-        AddWord(fields, "pleochroism", "Pleochroism (dichroscope)", r.Pleochroism);
+        AddWord(fields, BenchField.Polariscope, "Polariscope", r.Polariscope);
+        AddWord(fields, BenchField.Pleochroism, "Pleochroism (dichroscope)", r.Pleochroism);
         if (r.DispersionIndices is { } d)
-            fields.Add(new("dispersion", "Dispersion", $"nB {ReportNumbers.Index(d.NB)}, nG {ReportNumbers.Index(d.NG)} (refractive indices)"));
-        else AddWord(fields, "dispersion", "Dispersion (by eye)", r.Dispersion);
-        AddWord(fields, "thermal_probe", "Thermal probe", r.ThermalProbe);
-        AddWord(fields, "electrical", "Electrical conductivity", r.Electrical);
-        AddWord(fields, "uv_long", "Long-wave UV (365 nm)", r.UvLong);
-        AddWord(fields, "uv_short", "Short-wave UV (254 nm)", r.UvShort);
+            fields.Add(new(BenchField.Dispersion, "Dispersion", $"nB {ReportNumbers.Index(d.NB)}, nG {ReportNumbers.Index(d.NG)} (refractive indices)"));
+        else AddWord(fields, BenchField.Dispersion, "Dispersion (by eye)", r.Dispersion);
+        AddWord(fields, BenchField.ThermalProbe, "Thermal probe", r.ThermalProbe);
+        AddWord(fields, BenchField.Electrical, "Electrical conductivity", r.Electrical);
+        AddWord(fields, BenchField.UvLong, "Long-wave UV (365 nm)", r.UvLong);
+        AddWord(fields, BenchField.UvShort, "Short-wave UV (254 nm)", r.UvShort);
         if (r.AbsorptionNm is { } lines)
             fields.Add(new("absorption", "Spectroscope", lines.Count == 0 ? "looked; no lines seen"
                 : "lines or bands at " + string.Join(", ", lines.Select(ReportNumbers.Nanometres))));
