@@ -8,21 +8,24 @@ namespace GemIndex.Cli.Identification;
 /// <see cref="MostUpdatesPerSecond"/> times a second. Made only for a terminal (see <see cref="For"/>): nothing is
 /// written when standard error is piped or TERM is dumb. No colour is used, so NO_COLOR is honoured by construction.
 /// </summary>
-internal sealed class BatchProgress(TextWriter error, long? totalCharacters)
+internal sealed class BatchProgress(TextWriter error, long? totalCharacters, Func<TimeSpan> elapsed)
 {
     public const int MostUpdatesPerSecond = 10;
 
-    private readonly Stopwatch _clock = Stopwatch.StartNew();
-    private TimeSpan _last = TimeSpan.MinValue;
+    private TimeSpan? _last;
 
     /// <summary>A progress line for a terminal, or null when standard error is not one (or TERM=dumb).</summary>
-    public static BatchProgress? For(TextWriter error, long? totalCharacters, bool errorIsTerminal, string? term) =>
-        errorIsTerminal && !string.Equals(term, "dumb", StringComparison.Ordinal) ? new BatchProgress(error, totalCharacters) : null;
+    public static BatchProgress? For(TextWriter error, long? totalCharacters, bool errorIsTerminal, string? term, Func<TimeSpan>? elapsed = null)
+    {
+        if (!errorIsTerminal || string.Equals(term, "dumb", StringComparison.Ordinal)) return null;
+        var clock = Stopwatch.StartNew();
+        return new BatchProgress(error, totalCharacters, elapsed ?? (() => clock.Elapsed));
+    }
 
     public void Report(int stones, long consumed)
     {
-        TimeSpan now = _clock.Elapsed;
-        if (now - _last < TimeSpan.FromSeconds(1.0 / MostUpdatesPerSecond)) return;
+        TimeSpan now = elapsed();
+        if (_last is { } last && now - last < TimeSpan.FromSeconds(1.0 / MostUpdatesPerSecond)) return;
         _last = now;
         double seconds = Math.Max(now.TotalSeconds, 1e-3);
         string rate = (stones / seconds).ToString("0", CultureInfo.InvariantCulture);
@@ -34,7 +37,7 @@ internal sealed class BatchProgress(TextWriter error, long? totalCharacters)
 
     public void Finish(int stones)
     {
-        error.Write($"\r{stones.ToString("N0", CultureInfo.InvariantCulture)} stones in {Duration(_clock.Elapsed.TotalSeconds)}          \n");
+        error.Write($"\r{stones.ToString("N0", CultureInfo.InvariantCulture)} stones in {Duration(elapsed().TotalSeconds)}          \n");
         error.Flush();
     }
 
