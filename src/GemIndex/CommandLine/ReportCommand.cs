@@ -43,9 +43,11 @@ internal static class ReportCommand
         var format = new Option<string>("--format") { Description = "markdown, html or json", DefaultValueFactory = _ => "markdown" };
         format.AcceptOnlyFromAmong(Formats);
         var output = new Option<FileInfo?>("--output") { Description = "File to write (default: standard output)" };
+        var examiner = new Option<string?>("--examiner") { Description = "Who examined the stone, printed in the report's header" };
+        var date = new Option<string?>("--date") { Description = "The report's date, YYYY-MM-DD (default: today)" };
         var stone = new Command("stone", "Identify one stone (a batch line, or a stone of a workbook) and write its report")
         {
-            readings, line, workbook, reference, format, output,
+            readings, line, workbook, reference, format, output, examiner, date,
         };
         stone.Validators.Add(r =>
         {
@@ -53,11 +55,15 @@ internal static class ReportCommand
             if (fromFile == fromWorkbook) r.AddError("give either --readings FILE or --workbook FILE --stone REFERENCE");
             else if (fromWorkbook && string.IsNullOrWhiteSpace(r.GetValue(reference))) r.AddError("--workbook needs --stone REFERENCE");
         });
-        stone.SetAction(pr => CatalogueFailure.Guard(pr, (o, e) => pr.GetValue(workbook) is { } bookPath
-            ? Existing("--workbook", bookPath, e, out int refused) is not { } book ? refused
-                : WorkbookStone(book, pr.GetValue(reference)!, pr.GetRequiredValue(format), pr.GetValue(output), () => catalogue(pr), o, e)
-            : Existing("--readings", pr.GetValue(readings)!, e, out int refusedFile) is not { } file ? refusedFile
-                : Stone(file, pr.GetValue(line), pr.GetRequiredValue(format), pr.GetValue(output), () => catalogue(pr), o, e)));
+        stone.SetAction(pr => CatalogueFailure.Guard(pr, (o, e) =>
+        {
+            if (Header(pr.GetValue(date), pr.GetValue(examiner), e) is not { } header) return ExitCodes.BadInput;
+            return pr.GetValue(workbook) is { } bookPath
+                ? Existing("--workbook", bookPath, e, out int refused) is not { } book ? refused
+                    : WorkbookStone(book, pr.GetValue(reference)!, pr.GetRequiredValue(format), pr.GetValue(output), header, () => catalogue(pr), o, e)
+                : Existing("--readings", pr.GetValue(readings)!, e, out int refusedFile) is not { } file ? refusedFile
+                    : Stone(file, pr.GetValue(line), pr.GetRequiredValue(format), pr.GetValue(output), header, () => catalogue(pr), o, e);
+        }));
         var wholeBook = new Option<string>("--workbook") { Description = "The workbook file", Required = true };
         var csv = new Option<FileInfo?>("--output") { Description = "CSV file to write (default: standard output)" };
         var all = new Command("workbook", "Every stone of a workbook as CSV, one row each, with its best candidate") { wholeBook, csv };
@@ -68,7 +74,24 @@ internal static class ReportCommand
         return report;
     }
 
-    private static int WorkbookStone(FileInfo book, string reference, string format, FileInfo? output, Func<IReadOnlyList<Material>> materials,
+    /// <summary>The report's header: the date given (or today, read here at the edge, never in Core), the examiner, the versions.</summary>
+    private static ReportHeader? Header(string? date, string? examiner, TextWriter e)
+    {
+        DateOnly day = DateOnly.FromDateTime(TimeProvider.System.GetLocalNow().Date);
+        if (date is not null && !DateOnly.TryParseExact(date.Trim(), "yyyy-MM-dd", CultureInfo.InvariantCulture, DateTimeStyles.None, out day))
+        {
+            e.WriteLine($"gemindex: --date: '{BenchText.Shown(date)}' is not a date; allowed: YYYY-MM-DD, e.g. 2026-03-14.");
+            return null;
+        }
+        if (examiner is not null && examiner.Trim().Length == 0)
+        {
+            e.WriteLine("gemindex: --examiner: is empty; give a name, or leave the option out.");
+            return null;
+        }
+        return new ReportHeader(day, examiner, ReportHeader.Program(), ShippedCatalogue.ContentHash[..Math.Min(12, ShippedCatalogue.ContentHash.Length)]);
+    }
+
+    private static int WorkbookStone(FileInfo book, string reference, string format, FileInfo? output, ReportHeader header, Func<IReadOnlyList<Material>> materials,
         TextWriter o, TextWriter e)
     {
         try
@@ -86,7 +109,7 @@ internal static class ReportCommand
                 foreach (var x in outcome.Reading.Errors) e.WriteLine($"gemindex: stone '{BenchText.Shown(reference)}': {x}");
                 return ExitCodes.BadInput;
             }
-            return Write(StoneReport.Build(sheet, result), sheet.Reference, format, output, o);
+            return Write(StoneReport.Build(sheet, result, header), sheet.Reference, format, output, o);
         }
         catch (WorkbookException x)
         {
@@ -139,7 +162,7 @@ internal static class ReportCommand
         return ExitCodes.Ok;
     }
 
-    private static int Stone(FileInfo file, int lineNumber, string format, FileInfo? output, Func<IReadOnlyList<Material>> materials,
+    private static int Stone(FileInfo file, int lineNumber, string format, FileInfo? output, ReportHeader header, Func<IReadOnlyList<Material>> materials,
         TextWriter o, TextWriter e)
     {
         string? text = null;
@@ -174,7 +197,7 @@ internal static class ReportCommand
             return ExitCodes.BadInput;
         }
         StoneReadings stored = StoneReadingsConverter.FromReadings(read.Readings, lenient: false);
-        var report = StoneReport.Build(new StoneSheet { Reference = stored.Id, Readings = stored }, result);
+        var report = StoneReport.Build(new StoneSheet { Reference = stored.Id, Readings = stored }, result, header);
         return Write(report, stored.Id, format, output, o);
     }
 

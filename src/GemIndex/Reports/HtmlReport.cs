@@ -38,6 +38,7 @@ internal static class HtmlReport
         h.Append("<title>Stone report: ").Append(E(report.Reference)).AppendLine("</title>");
         h.Append("<style>").Append(Style).AppendLine("</style>").AppendLine("</head>").AppendLine("<body>");
         h.Append("<h1>Stone report: ").Append(E(report.Reference)).AppendLine("</h1>");
+        if (report.Header is { } header) Fields(h, header.Fields());
         Section(h, "Stone");
         Fields(h, report.Description);
         Section(h, "Readings");

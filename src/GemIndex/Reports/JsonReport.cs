@@ -20,6 +20,13 @@ internal static class JsonReport
         {
             w.WriteStartObject();
             w.WriteNumber("report_version", ShapeVersion);
+            if (report.Header is { } header)
+            {
+                w.WriteStartObject("header");
+                foreach (var f in header.Fields()) w.WriteString(f.Key, f.Value == StoneReport.NotRecorded ? null : f.Value);
+                w.WriteEndObject();
+            }
+            else w.WriteNull("header");
             Stone(w, report);
             Readings(w, report);
             Derived(w, report);

@@ -10,6 +10,7 @@ internal static class MarkdownReport
     {
         var md = new StringBuilder();
         md.Append("# Stone report: ").AppendLine(Escape(report.Reference)).AppendLine();
+        if (report.Header is { } header) Fields(md, header.Fields());
         Section(md, "Stone");
         Fields(md, report.Description);
         Section(md, "Readings");

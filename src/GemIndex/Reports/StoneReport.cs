@@ -45,12 +45,14 @@ internal sealed record StoneReport
     public required bool NoGoodMatch { get; init; }
     public NextTestAdvice? NextTest { get; init; }
     public required IReadOnlyList<string> Warnings { get; init; }
+    /// <summary>Date, examiner, program and catalogue versions; null when the caller gives none.</summary>
+    public ReportHeader? Header { get; init; }
     /// <summary>The identification itself (the JSON report embeds it as the result document).</summary>
     public required IdentificationResult Result { get; init; }
     public IReadOnlyList<string> Cautions => ReportCautions.All;
 
     /// <summary>Builds the report of one stone.</summary>
-    public static StoneReport Build(StoneSheet sheet, IdentificationResult result)
+    public static StoneReport Build(StoneSheet sheet, IdentificationResult result, ReportHeader? header = null)
     {
         BenchSheet bench = BenchReader.Read(StoneReadingsConverter.ToReadings(sheet.Readings)).Sheet;
         RotationSeriesResult? series = result.Series;
@@ -75,6 +77,7 @@ internal sealed record StoneReport
             NextTest = result.NextTest,
             Warnings = result.Warnings,
             Result = result,
+            Header = header,
         };
     }
 

@@ -124,4 +124,31 @@ public sealed class ReportCommandTests : IDisposable
         Assert.DoesNotContain("\u001b", stdout);
         Assert.Contains("\\u001b\\[2J", stdout);
     }
+
+    [Fact]
+    public void The_header_carries_the_date_given_the_examiner_and_the_program_and_catalogue_versions()
+    {
+        var (exit, stdout, err) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine), "--date", "2026-03-14", "--examiner", "A. Example");
+        Assert.True(exit == ExitCodes.Ok, err);
+        Assert.Contains("**Date:** 2026-03-14", stdout);
+        Assert.Contains("**Examiner:** A. Example", stdout);
+        Assert.Contains("**Program:** gemindex ", stdout);
+        Assert.Contains("**Catalogue:** ", stdout);
+        var (json, jsonOut, _) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine), "--date", "2026-03-14", "--format", "json");
+        Assert.Equal(ExitCodes.Ok, json);
+        using var doc = System.Text.Json.JsonDocument.Parse(jsonOut);
+        Assert.Equal("2026-03-14", doc.RootElement.GetProperty("header").GetProperty("date").GetString());
+        Assert.Equal(System.Text.Json.JsonValueKind.Null, doc.RootElement.GetProperty("header").GetProperty("examiner").ValueKind);
+    }
+
+    [Theory]
+    [InlineData("--date", "14/03/2026")]
+    [InlineData("--date", "2026-02-30")]
+    [InlineData("--examiner", " ")]
+    public void A_bad_date_or_an_empty_examiner_is_an_error(string option, string value)
+    {
+        var (exit, _, err) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine), option, value);
+        Assert.Equal(ExitCodes.BadInput, exit);
+        Assert.Contains(option, err);
+    }
 }
