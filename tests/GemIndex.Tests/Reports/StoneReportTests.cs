@@ -94,4 +94,16 @@ public class StoneReportTests
         "json" => JsonReport.Write(report),
         _ => MarkdownReport.Write(report),
     };
+
+    [Fact]
+    public void A_printed_report_leaves_out_candidates_that_would_read_0_0_percent_and_the_JSON_result_keeps_them()
+    {
+        var report = ReportFixtures.Report(ReportFixtures.QuartzLine);
+        Assert.All(report.Candidates, c => Assert.NotEqual("0.0 %", ReportNumbers.Percent(c.Confidence)));
+        Assert.DoesNotContain("| 0.0 % |", MarkdownReport.Write(report));
+        // The quartz readings leave the fixture's other materials far below 0.05 %: they are in the result, not on paper.
+        int tiny = report.Result.Candidates.Count(c => c.Confidence < StoneReport.ShownConfidence);
+        Assert.True(tiny > 0);
+        Assert.Equal(report.Result.Candidates.Count - tiny, report.Candidates.Count);
+    }
 }
