@@ -1,8 +1,9 @@
 namespace GemIndex.Data.Batch;
 
 /// <summary>
-/// One stone's readings exactly as the batch format holds them (README "Batch format"), before they are checked
-/// and turned into a Core bench sheet by <see cref="StoneReadingsConverter"/>. Every field but the id is optional.
+/// One stone's readings as the workbook stores them (the batch format's JSON, README "Batch format"), typed but not
+/// checked; <see cref="StoneReadingsConverter"/> turns them into Core's <c>BenchReadings</c> and back. Every field but
+/// the id is optional.
 /// Enumerated answers are kept as the batch format's words ("singly_refractive", "floats", …).
 /// </summary>
 public sealed record StoneReadings
@@ -39,13 +40,17 @@ public sealed record RefractometerReadings
     public IReadOnlyList<EdgeReadingEntry> Readings { get; init; } = [];
     public double? Spot { get; init; }
     public bool OverLimit { get; init; }
+    /// <summary>Standard uncertainty of one reading (default: <see cref="GemIndex.Core.Bench.BenchDefaults"/>).</summary>
+    public double? Precision { get; init; }
+    /// <summary>Added to every reading, from a calibration on a standard.</summary>
+    public double? CalibrationOffset { get; init; }
 }
 
 /// <summary>One rotation step as entered.</summary>
 public sealed record EdgeReadingEntry(double RotationDeg, double Low, double? High);
 
-/// <summary>Hydrostatic weights in carats and the water temperature.</summary>
-public sealed record HydrostaticReadings(double AirCt, double WaterCt, double? WaterC);
+/// <summary>Hydrostatic weights in carats and the water temperature (a weight may be missing while being typed).</summary>
+public sealed record HydrostaticReadings(double? AirCt, double? WaterCt, double? WaterC);
 
 /// <summary>One heavy-liquid result: the liquid's density and "floats", "sinks" or "suspends".</summary>
 public sealed record HeavyLiquidReading(double Density, string Result);

@@ -1,92 +1,119 @@
-using GemIndex.Core.Gravity;
+using System.Globalization;
+using GemIndex.Core.Bench;
 using GemIndex.Core.Identification;
-using GemIndex.Core.Observations;
 using GemIndex.Core.Quantities;
-using GemIndex.Core.Readings;
 
 namespace GemIndex.Data.Batch;
 
 /// <summary>
-/// Turns batch readings into a Core bench sheet, checking every value through Core's own validation and naming
-/// the field of anything out of range ("refractometer.readings[2].high: high edge is 1.54; allowed: …").
+/// Stored readings (<see cref="StoneReadings"/>) to Core's <see cref="BenchReadings"/> and back. Numbers are written
+/// round-trip ("R"), so nothing is lost on the way; every check is Core's <see cref="BenchReader"/>.
 /// </summary>
 public static class StoneReadingsConverter
 {
-    /// <summary>Water temperature assumed when a hydrostatic weighing gives none (a room at 20 °C).</summary>
-    public const double DefaultWaterCelsius = 20;
+    /// <summary>The stored readings as the texts Core reads.</summary>
+    public static BenchReadings ToReadings(StoneReadings s)
+    {
+        var r = new BenchReadings().With(BenchField.Id, s.Id);
+        if (s.Refractometer is { } rf)
+        {
+            r = r.With(BenchField.Method, rf.Method).With(BenchField.LightNm, Number(rf.LightNm)).With(BenchField.LiquidLimit, Number(rf.LiquidLimit))
+                .With(BenchField.Spot, Number(rf.Spot)).With(BenchField.OverLimit, rf.OverLimit ? "yes" : null)
+                .With(BenchField.Precision, Number(rf.Precision)).With(BenchField.CalibrationOffset, Number(rf.CalibrationOffset));
+            foreach (var step in rf.Readings) r = r.WithStep(new EdgeStepText(Number(step.RotationDeg)!, Number(step.Low)!, Number(step.High) ?? ""));
+        }
+        r = r.With(BenchField.Sg, Number(s.Sg));
+        if (s.SgWeighing is { } w) r = r.With(BenchField.AirCt, Number(w.AirCt)).With(BenchField.WaterCt, Number(w.WaterCt)).With(BenchField.WaterC, Number(w.WaterC));
+        if (s.HeavyLiquids.Count > 0) r = r.With(BenchField.HeavyLiquids, BenchSyntax.HeavyLiquids(s.HeavyLiquids.Select(h => $"{Number(h.Density)} {h.Result}")));
+        if (s.DispersionIndices is { } d) r = r.With(BenchField.IndexAtB, Number(d.NB)).With(BenchField.IndexAtG, Number(d.NG));
+        r = r.With(BenchField.Polariscope, s.Polariscope).With(BenchField.Pleochroism, s.Pleochroism).With(BenchField.Dispersion, s.Dispersion)
+            .With(BenchField.ThermalProbe, s.ThermalProbe).With(BenchField.Electrical, s.Electrical).With(BenchField.UvLong, s.UvLong)
+            .With(BenchField.UvShort, s.UvShort).With(BenchField.Colour, s.Colour);
+        if (s.AbsorptionNm is { } lines) r = r.With(BenchField.Absorption, BenchSyntax.Lines(lines.Select(l => Number(l)!)));
+        return r;
+    }
 
     /// <summary>
-    /// Standard uncertainty of one weighing in carats: a 0.001 ct balance, with the surface tension on the wire and
-    /// air bubbles that a bench weighing in water carries (common practice: SG to ±0.01 on stones over about 1 ct).
+    /// Readings as typed into stored readings. Lenient: a number that does not parse is left out (the text UI keeps
+    /// it in its draft); strict: it is an error naming the field.
     /// </summary>
-    public const double WeighingUncertaintyCarats = 0.002;
-
-    /// <summary>Standard uncertainty assumed for an SG given as a plain number (common practice: ±0.01–0.02).</summary>
-    public const double DirectSpecificGravityUncertainty = 0.01;
-
-    /// <summary>Converts the readings; throws on the first bad field.</summary>
-    /// <exception cref="BatchInputException">A word is unknown or a value out of range (the message names the field).</exception>
-    public static BenchSheet ToBenchSheet(StoneReadings r) => new()
+    /// <exception cref="BatchInputException">Strict, and a number or a heavy-liquid entry does not parse (every such field named).</exception>
+    public static StoneReadings FromReadings(BenchReadings r, bool lenient)
     {
-        Id = r.Id,
-        Refractometer = r.Refractometer is { } rf ? Refractometer(rf) : null,
-        SpecificGravity = Field("sg", () => r.Sg is { } sg ? new SpecificGravity(sg, DirectSpecificGravityUncertainty)
-            : r.SgWeighing is { } w ? Weighing(w) : (SpecificGravity?)null),
-        HeavyLiquids = [.. r.HeavyLiquids.Select((h, i) => Field($"heavy_liquids[{i}]", () => new HeavyLiquidResult(
-            new SpecificGravity(h.Density), Word<HeavyLiquidOutcome>($"heavy_liquids[{i}].result", h.Result))))],
-        Polariscope = Optional<PolariscopeReaction>("polariscope", r.Polariscope),
-        Pleochroism = Optional<PleochroismObservation>("pleochroism", r.Pleochroism),
-        Dispersion = r.DispersionIndices is { } d
-            ? Field("dispersion", () => DispersionObservation.FromIndices(d.NB, d.NG))
-            : r.Dispersion is { } word ? DispersionObservation.ByEye(Word<DispersionStrength>("dispersion", word)) : null,
-        ThermalProbe = Optional<ThermalProbeResult>("thermal_probe", r.ThermalProbe),
-        Electrical = Optional<ElectricalResult>("electrical", r.Electrical),
-        UvLong = Optional<FluorescenceStrength>("uv_long", r.UvLong),
-        UvShort = Optional<FluorescenceStrength>("uv_short", r.UvShort),
-        AbsorptionLinesNanometres = r.AbsorptionNm is { } lines
-            ? [.. lines.Select((l, i) => Field($"absorption_nm[{i}]", () => { QuantityOutOfRangeException.ThrowIfOutside("absorption line", l, 380, 780, "nm"); return l; }))]
-            : null,
-        Colour = string.IsNullOrWhiteSpace(r.Colour) ? null : r.Colour.Trim(),
-    };
-
-    private static RefractometerObservation Refractometer(RefractometerReadings rf)
-    {
-        var method = Word<RefractometerMethod>("refractometer.method", rf.Method);
-        var steps = rf.Readings.Select((s, i) => Field($"refractometer.readings[{i}]", () => new ShadowEdgeStep(s.RotationDeg, s.Low, s.High))).ToList();
-        // With no liquid stated, the usual 1.79 is assumed, unless the readings themselves show a denser liquid was used.
-        double highest = steps.Select(x => x.High ?? x.Low).Append(rf.Spot ?? 0).Max();
-        double liquid = rf.LiquidLimit ?? Math.Max(RefractometerObservation.DefaultLiquidLimit, Math.Min(highest, 2.2));
-        return Field("refractometer", () => new RefractometerObservation(method, steps, rf.Spot, rf.OverLimit,
-            rf.LightNm ?? RefractometerObservation.SodiumLightNanometres, liquid));
+        var errors = new List<BenchFieldError>();
+        double? Num(string field, string? text)
+        {
+            if (text is null) return null;
+            if (BenchNumber.TryParse(text, out double v, out string problem)) return v;
+            if (!lenient) errors.Add(new BenchFieldError(field, BenchText.Shown(text), "a number", problem));
+            return null;
+        }
+        var steps = new List<EdgeReadingEntry>();
+        bool unrotated = r.Steps.All(s => s.Rotation.Trim().Length == 0);
+        for (int i = 0; i < r.Steps.Count; i++)
+        {
+            EdgeStepText s = r.Steps[i];
+            string field = BenchField.Step(i);
+            double? rotation = unrotated ? i * 180.0 / r.Steps.Count : s.Rotation.Trim().Length == 0 ? 0 : Num(field + ".rotation_deg", s.Rotation);
+            double? low = Num(field + ".low", s.Low);
+            double? high = s.High.Trim().Length == 0 ? null : Num(field + ".high", s.High);
+            if (rotation is { } rot && low is { } lo && (s.High.Trim().Length == 0 || high is not null)) steps.Add(new EdgeReadingEntry(rot, lo, high));
+        }
+        double? spot = Num(BenchField.Spot, r.Text(BenchField.Spot));
+        bool over = r.Text(BenchField.OverLimit)?.Trim().ToLowerInvariant() is "yes" or "true";
+        RefractometerReadings? refractometer = steps.Count > 0 || spot is not null || over || r.Text(BenchField.Method) is not null ? new RefractometerReadings
+        {
+            Method = r.Text(BenchField.Method) ?? (spot is not null && steps.Count == 0 ? "spot" : "facet"),
+            LightNm = Num(BenchField.LightNm, r.Text(BenchField.LightNm)),
+            LiquidLimit = Num(BenchField.LiquidLimit, r.Text(BenchField.LiquidLimit)),
+            Readings = steps,
+            Spot = spot,
+            OverLimit = over,
+            Precision = Num(BenchField.Precision, r.Text(BenchField.Precision)),
+            CalibrationOffset = Num(BenchField.CalibrationOffset, r.Text(BenchField.CalibrationOffset)),
+        } : null;
+        double? air = Num(BenchField.AirCt, r.Text(BenchField.AirCt)), water = Num(BenchField.WaterCt, r.Text(BenchField.WaterCt));
+        double? celsius = Num(BenchField.WaterC, r.Text(BenchField.WaterC));
+        var liquids = new List<HeavyLiquidReading>();
+        foreach (string entry in BenchSyntax.HeavyLiquidEntries(r.Text(BenchField.HeavyLiquids) ?? ""))
+            if (BenchSyntax.HeavyLiquid(entry) is { } parts && Num(BenchField.HeavyLiquids, parts.Density) is { } density) liquids.Add(new HeavyLiquidReading(density, parts.Result));
+            else if (!lenient && BenchSyntax.HeavyLiquid(entry) is null) errors.Add(new BenchFieldError(BenchField.HeavyLiquids, BenchText.Shown(entry), "DENSITY RESULT", "is not a density and a result."));
+        double? nB = Num(BenchField.IndexAtB, r.Text(BenchField.IndexAtB)), nG = Num(BenchField.IndexAtG, r.Text(BenchField.IndexAtG));
+        List<double>? lines = null;
+        if (r.Text(BenchField.Absorption) is { } text)
+        {
+            lines = [];
+            foreach (string part in BenchSyntax.Lines(text))
+                if (Num(BenchField.Absorption, part) is { } nm) lines.Add(nm);
+        }
+        if (errors.Count > 0) throw new BatchInputException(errors);
+        return new StoneReadings
+        {
+            Id = r.Text(BenchField.Id) ?? "",
+            Refractometer = refractometer,
+            Sg = Num(BenchField.Sg, r.Text(BenchField.Sg)),
+            SgWeighing = air is not null || water is not null || celsius is not null ? new HydrostaticReadings(air, water, celsius) : null,
+            HeavyLiquids = liquids,
+            Polariscope = r.Text(BenchField.Polariscope),
+            Pleochroism = r.Text(BenchField.Pleochroism),
+            Dispersion = r.Text(BenchField.Dispersion),
+            DispersionIndices = nB is { } b && nG is { } g ? (b, g) : null,
+            ThermalProbe = r.Text(BenchField.ThermalProbe),
+            Electrical = r.Text(BenchField.Electrical),
+            UvLong = r.Text(BenchField.UvLong),
+            UvShort = r.Text(BenchField.UvShort),
+            AbsorptionNm = lines,
+            Colour = r.Text(BenchField.Colour),
+        };
     }
 
-    private static SpecificGravity Weighing(HydrostaticReadings w)
+    /// <summary>Reads stored readings into a Core bench sheet.</summary>
+    /// <exception cref="BatchInputException">Some fields cannot be used (every one named).</exception>
+    public static BenchSheet ToBenchSheet(StoneReadings r)
     {
-        var air = Field("sg.air_ct", () => Mass.FromCarats(w.AirCt, WeighingUncertaintyCarats));
-        var water = Field("sg.water_ct", () => Mass.FromCarats(w.WaterCt, WeighingUncertaintyCarats));
-        var temperature = Field("sg.water_c", () => WaterDensity.At(Temperature.FromCelsius(w.WaterC ?? DefaultWaterCelsius)).Temperature);
-        return Field("sg.water_ct", () => HydrostaticWeighing.SpecificGravityOf(air, water, temperature));
+        BenchReading reading = BenchReader.Read(ToReadings(r));
+        return reading.Errors.Count == 0 ? reading.Sheet : throw new BatchInputException(reading.Errors);
     }
 
-    private static T? Optional<T>(string field, string? word) where T : struct, Enum =>
-        string.IsNullOrWhiteSpace(word) ? null : Word<T>(field, word);
-
-    /// <summary>The enum value named by a batch word ("singly_refractive" → SinglyRefractive).</summary>
-    private static T Word<T>(string field, string word) where T : struct, Enum
-    {
-        string key = word.Trim().Replace("_", "").Replace("-", "").Replace(" ", "");
-        foreach (T value in Enum.GetValues<T>())
-            if (string.Equals(value.ToString(), key, StringComparison.OrdinalIgnoreCase)) return value;
-        throw new BatchInputException(field, $"'{word}' is not one of {string.Join(" | ", Words<T>())}");
-    }
-
-    /// <summary>The batch words of an enum: SinglyRefractive → singly_refractive.</summary>
-    public static IEnumerable<string> Words<T>() where T : struct, Enum =>
-        Enum.GetNames<T>().Select(n => string.Concat(n.Select((c, i) => i > 0 && char.IsUpper(c) ? "_" + char.ToLowerInvariant(c) : char.ToLowerInvariant(c).ToString())));
-
-    private static T Field<T>(string field, Func<T> make)
-    {
-        try { return make(); }
-        catch (QuantityOutOfRangeException e) { throw new BatchInputException(field, e.Message); }
-    }
+    private static string? Number(double? v) => v?.ToString("R", CultureInfo.InvariantCulture);
 }

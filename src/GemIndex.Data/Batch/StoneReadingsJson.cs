@@ -1,146 +1,190 @@
-using System.Globalization;
 using System.Text;
 using System.Text.Json;
+using GemIndex.Core.Bench;
 
 namespace GemIndex.Data.Batch;
 
 /// <summary>
-/// Reads and writes one line of the batch format (JSON, one stone per line). Reading is strict where it matters —
-/// numbers must be finite JSON numbers, words must be known — and lenient where the format says so: unknown fields
-/// are ignored. Errors name the field by its path ("refractometer.readings[1].high").
+/// Reads and writes one line of the batch format (JSON, one stone per line). Reading turns every value into the text
+/// Core's <see cref="BenchReader"/> reads (a JSON number as written, a list of steps into steps, heavy liquids and
+/// absorption lines into <see cref="BenchSyntax"/>), so a value of the wrong kind is reported by the reader with
+/// every other bad field. Unknown fields are ignored, as the format says. Errors name the field by its path.
 /// </summary>
 public static class StoneReadingsJson
 {
-    private static readonly JsonDocumentOptions Options = new() { AllowTrailingCommas = false, CommentHandling = JsonCommentHandling.Disallow };
+    private static readonly JsonDocumentOptions Options = new() { AllowTrailingCommas = false, CommentHandling = JsonCommentHandling.Disallow, MaxDepth = 16 };
 
-    /// <summary>Parses one line.</summary>
-    /// <exception cref="BatchInputException">The line is not valid JSON, or a field has the wrong form.</exception>
-    public static StoneReadings Parse(string line)
+    /// <summary>Reads one line into readings and the errors of its form; never throws for bad input.</summary>
+    public static BatchLine Read(string line)
     {
+        var errors = new List<BenchFieldError>();
         JsonDocument doc;
         try { doc = JsonDocument.Parse(line, Options); }
-        catch (JsonException e) { throw new BatchInputException("$", "not valid JSON: " + e.Message.Split(" Path: ")[0].Split(" LineNumber: ")[0].TrimEnd('.', ' ', '|')); }
+        catch (JsonException e)
+        {
+            string problem = e.Message.Split(" Path: ")[0].Split(" LineNumber: ")[0].TrimEnd('.', ' ', '|');
+            return new BatchLine(new BenchReadings(), [new BenchFieldError("$", "", "one JSON object", $"not valid JSON: {problem}.")]);
+        }
         using (doc)
         {
             var root = doc.RootElement;
-            if (root.ValueKind != JsonValueKind.Object) throw new BatchInputException("$", "each line must be one JSON object");
-            var id = root.TryGetProperty("id", out var idElement)
-                ? idElement.ValueKind switch
-                {
-                    JsonValueKind.String => idElement.GetString()!,
-                    JsonValueKind.Number => idElement.GetRawText(),
-                    _ => throw new BatchInputException("id", "must be a string"),
-                }
-                : throw new BatchInputException("id", "is required");
-            return new StoneReadings
-            {
-                Id = id,
-                Refractometer = Optional(root, "refractometer", Refractometer),
-                Sg = Optional(root, "sg", e => e.ValueKind == JsonValueKind.Number ? Number(e, "sg") : (double?)null),
-                SgWeighing = Optional(root, "sg", e => e.ValueKind == JsonValueKind.Object ? Weighing(e) : e.ValueKind == JsonValueKind.Number ? null
-                    : throw new BatchInputException("sg", "must be a number or {\"air_ct\", \"water_ct\", \"water_c\"}")),
-                HeavyLiquids = Optional(root, "heavy_liquids", e => Array(e, "heavy_liquids", HeavyLiquid)) ?? [],
-                Polariscope = Optional(root, "polariscope", e => Word(e, "polariscope")),
-                Pleochroism = Optional(root, "pleochroism", e => Word(e, "pleochroism")),
-                Dispersion = Optional(root, "dispersion", e => e.ValueKind == JsonValueKind.Object ? null : Word(e, "dispersion")),
-                DispersionIndices = Optional(root, "dispersion", e => e.ValueKind == JsonValueKind.Object
-                    ? (Number(Required(e, "nB", "dispersion"), "dispersion.nB"), Number(Required(e, "nG", "dispersion"), "dispersion.nG"))
-                    : ((double, double)?)null),
-                ThermalProbe = Optional(root, "thermal_probe", e => Word(e, "thermal_probe")),
-                Electrical = Optional(root, "electrical", e => Word(e, "electrical")),
-                UvLong = Optional(root, "uv_long", e => Word(e, "uv_long")),
-                UvShort = Optional(root, "uv_short", e => Word(e, "uv_short")),
-                AbsorptionNm = Optional(root, "absorption_nm", e => Array(e, "absorption_nm", (x, path) => Number(x, path))),
-                Colour = Optional(root, "colour", e => Word(e, "colour")),
-            };
+            if (root.ValueKind != JsonValueKind.Object)
+                return new BatchLine(new BenchReadings(), [new BenchFieldError("$", "", "one JSON object", "each line must be one JSON object.")]);
+            var reader = new LineReader(errors);
+            BenchReadings readings = reader.Stone(root);
+            return new BatchLine(readings, errors);
         }
     }
 
-    private static RefractometerReadings Refractometer(JsonElement e)
+    /// <summary>Parses one line into typed readings (the workbook's stored form).</summary>
+    /// <exception cref="BatchInputException">The line is not valid JSON, or a field has the wrong form (every such field named).</exception>
+    public static StoneReadings Parse(string line)
     {
-        if (e.ValueKind != JsonValueKind.Object) throw new BatchInputException("refractometer", "must be an object");
-        return new RefractometerReadings
+        BatchLine read = Read(line);
+        if (read.Errors.Count > 0) throw new BatchInputException(read.Errors);
+        return StoneReadingsConverter.FromReadings(read.Readings, lenient: false);
+    }
+
+    private sealed class LineReader(List<BenchFieldError> errors)
+    {
+        public BenchReadings Stone(JsonElement root)
         {
-            Method = Optional(e, "method", x => Word(x, "refractometer.method")) ?? "facet",
-            LightNm = Optional(e, "light_nm", x => (double?)Number(x, "refractometer.light_nm")),
-            LiquidLimit = Optional(e, "liquid_limit", x => (double?)Number(x, "refractometer.liquid_limit")),
-            Readings = EvenlySpreadWhenUnrotated(e, Optional(e, "readings", x => Array(x, "refractometer.readings", Step)) ?? []),
-            Spot = Optional(e, "spot", x => (double?)Number(x, "refractometer.spot")),
-            OverLimit = Optional(e, "over_limit", x => x.ValueKind switch
+            var r = new BenchReadings();
+            if (!root.TryGetProperty(BenchField.Id, out var id) || id.ValueKind == JsonValueKind.Null)
+                errors.Add(new BenchFieldError(BenchField.Id, "", "a string", "is required."));
+            else if (id.ValueKind is JsonValueKind.String or JsonValueKind.Number) r = r.With(BenchField.Id, Text(id, BenchField.Id));
+            else errors.Add(new BenchFieldError(BenchField.Id, BenchText.Shown(id.GetRawText()), "a string", "must be a string."));
+            if (Child(root, "refractometer") is { } rf)
             {
-                JsonValueKind.True => (bool?)true,
-                JsonValueKind.False => false,
-                _ => throw new BatchInputException("refractometer.over_limit", "must be true or false"),
-            }) ?? false,
+                if (rf.ValueKind != JsonValueKind.Object) errors.Add(new BenchFieldError("refractometer", BenchText.Shown(rf.GetRawText()), "an object", "must be an object."));
+                else r = Refractometer(rf, r);
+            }
+            if (Child(root, BenchField.Sg) is { } sg)
+            {
+                if (sg.ValueKind == JsonValueKind.Object)
+                    r = r.With(BenchField.AirCt, Num(sg, "air_ct", BenchField.AirCt)).With(BenchField.WaterCt, Num(sg, "water_ct", BenchField.WaterCt))
+                        .With(BenchField.WaterC, Num(sg, "water_c", BenchField.WaterC));
+                else if (sg.ValueKind == JsonValueKind.Number) r = r.With(BenchField.Sg, sg.GetRawText());
+                else errors.Add(new BenchFieldError(BenchField.Sg, BenchText.Shown(sg.GetRawText()), "a number or {\"air_ct\", \"water_ct\", \"water_c\"}",
+                    $"must be a number or {{\"air_ct\", \"water_ct\", \"water_c\"}}, not {Kind(sg)}."));
+            }
+            if (Child(root, BenchField.HeavyLiquids) is { } liquids && List(liquids, BenchField.HeavyLiquids) is { } entries)
+            {
+                var texts = new List<string>();
+                for (int i = 0; i < entries.Count; i++)
+                {
+                    string path = $"{BenchField.HeavyLiquids}[{i}]";
+                    if (entries[i].ValueKind != JsonValueKind.Object)
+                        errors.Add(new BenchFieldError(path, BenchText.Shown(entries[i].GetRawText()), "{\"density\", \"result\"}", "must be an object {\"density\", \"result\"}."));
+                    else texts.Add($"{Num(entries[i], "density", path + ".density") ?? ""} {Value(entries[i], "result", path + ".result") ?? ""}".Trim());
+                }
+                r = r.With(BenchField.HeavyLiquids, BenchSyntax.HeavyLiquids(texts));
+            }
+            foreach (string word in new[] { BenchField.Polariscope, BenchField.Pleochroism, BenchField.ThermalProbe, BenchField.Electrical, BenchField.UvLong, BenchField.UvShort, BenchField.Colour })
+                r = r.With(word, Value(root, word, word));
+            if (Child(root, BenchField.Dispersion) is { } dispersion)
+            {
+                if (dispersion.ValueKind == JsonValueKind.Object)
+                    r = r.With(BenchField.IndexAtB, Num(dispersion, "nB", BenchField.IndexAtB)).With(BenchField.IndexAtG, Num(dispersion, "nG", BenchField.IndexAtG));
+                else r = r.With(BenchField.Dispersion, Word(dispersion, BenchField.Dispersion));
+            }
+            if (Child(root, BenchField.Absorption) is { } lines && List(lines, BenchField.Absorption) is { } nm)
+                r = r.With(BenchField.Absorption, BenchSyntax.Lines(nm.Select((x, i) => Number(x, $"{BenchField.Absorption}[{i}]") ?? "").Where(x => x.Length > 0)));
+            return r;
+        }
+
+        private BenchReadings Refractometer(JsonElement rf, BenchReadings r)
+        {
+            r = r.With(BenchField.Method, Value(rf, "method", BenchField.Method)).With(BenchField.LightNm, Num(rf, "light_nm", BenchField.LightNm))
+                .With(BenchField.LiquidLimit, Num(rf, "liquid_limit", BenchField.LiquidLimit)).With(BenchField.Spot, Num(rf, "spot", BenchField.Spot))
+                .With(BenchField.Precision, Num(rf, "precision", BenchField.Precision))
+                .With(BenchField.CalibrationOffset, Num(rf, "calibration_offset", BenchField.CalibrationOffset));
+            if (Child(rf, "over_limit") is { } over)
+                r = r.With(BenchField.OverLimit, over.ValueKind switch { JsonValueKind.True => "yes", JsonValueKind.False => "no", _ => Bad(over, BenchField.OverLimit, "true or false") });
+            if (Child(rf, "readings") is { } list && List(list, BenchField.Readings) is { } steps)
+            {
+                if (steps.Count > BenchDefaults.MostSteps)
+                {
+                    // Reported by the reader from the count alone; the steps themselves are not read.
+                    return r with { Steps = [.. Enumerable.Repeat(new EdgeStepText("", "", ""), steps.Count)] };
+                }
+                for (int i = 0; i < steps.Count; i++)
+                {
+                    string path = BenchField.Step(i);
+                    if (steps[i].ValueKind != JsonValueKind.Object)
+                    {
+                        errors.Add(new BenchFieldError(path, BenchText.Shown(steps[i].GetRawText()), "{\"rotation_deg\", \"low\", \"high\"}", "must be an object {\"rotation_deg\", \"low\", \"high\"}."));
+                        continue;
+                    }
+                    r = r.WithStep(new EdgeStepText(Num(steps[i], "rotation_deg", path + ".rotation_deg") ?? "",
+                        Num(steps[i], "low", path + ".low") ?? "", Num(steps[i], "high", path + ".high") ?? ""));
+                }
+            }
+            return r;
+        }
+
+        private static JsonElement? Child(JsonElement parent, string name) =>
+            parent.TryGetProperty(name, out var e) && e.ValueKind != JsonValueKind.Null ? e : null;
+
+        /// <summary>A word field: a JSON string, or an error naming the field.</summary>
+        private string? Value(JsonElement parent, string name, string path) => Child(parent, name) is { } e ? Word(e, path) : null;
+
+        /// <summary>A number field: a JSON number as written, or an error naming the field.</summary>
+        private string? Num(JsonElement parent, string name, string path) => Child(parent, name) is { } e ? Number(e, path) : null;
+
+        private string? Number(JsonElement e, string path)
+        {
+            if (e.ValueKind == JsonValueKind.Number) return e.GetRawText();
+            errors.Add(new BenchFieldError(path, BenchText.Shown(e.GetRawText()), "a number", $"must be a number, not {Kind(e)}."));
+            return null;
+        }
+
+        private string? Bad(JsonElement e, string path, string allowed)
+        {
+            errors.Add(new BenchFieldError(path, BenchText.Shown(e.GetRawText()), allowed, $"must be {allowed}, not {Kind(e)}."));
+            return null;
+        }
+
+        private string? Word(JsonElement e, string path)
+        {
+            if (e.ValueKind == JsonValueKind.String) return Text(e, path);
+            errors.Add(new BenchFieldError(path, BenchText.Shown(e.GetRawText()), "a string", $"must be a string, not {Kind(e)}."));
+            return null;
+        }
+
+        private string Kind(JsonElement e) => e.ValueKind switch
+        {
+            JsonValueKind.String => $"the text \"{BenchText.Shown(SafeString(e))}\"",
+            JsonValueKind.Object => "an object",
+            JsonValueKind.Array => "a list",
+            _ => BenchText.Shown(e.GetRawText()),
         };
+
+        private static string SafeString(JsonElement e)
+        {
+            try { return e.GetString()!; }
+            catch (InvalidOperationException) { return e.GetRawText(); }
+        }
+
+        private List<JsonElement>? List(JsonElement e, string path)
+        {
+            if (e.ValueKind == JsonValueKind.Array) return [.. e.EnumerateArray()];
+            errors.Add(new BenchFieldError(path, BenchText.Shown(e.GetRawText()), "a list", "must be a list."));
+            return null;
+        }
+
+        /// <summary>A value as text: a string as it is, a number as written, anything else as its JSON (which the reader refuses).</summary>
+        private string Text(JsonElement e, string path)
+        {
+            if (e.ValueKind != JsonValueKind.String) return e.GetRawText();
+            try { return e.GetString()!; }
+            catch (InvalidOperationException)
+            {
+                errors.Add(new BenchFieldError(path, BenchText.Shown(e.GetRawText()), "text", "is not valid text (a lone UTF-16 surrogate escape)."));
+                return "";
+            }
+        }
     }
-
-    /// <summary>
-    /// Steps given with no rotation angle at all are taken as read in order, evenly over a half turn (i·180°/n), the
-    /// usual way of reading a series; one angle given anywhere means the angles are the user's own (missing ones 0°).
-    /// </summary>
-    private static List<EdgeReadingEntry> EvenlySpreadWhenUnrotated(JsonElement refractometer, List<EdgeReadingEntry> steps)
-    {
-        if (!refractometer.TryGetProperty("readings", out var list) || list.ValueKind != JsonValueKind.Array) return steps;
-        bool anyRotation = list.EnumerateArray().Any(x => x.ValueKind == JsonValueKind.Object && x.TryGetProperty("rotation_deg", out var r) && r.ValueKind != JsonValueKind.Null);
-        return anyRotation ? steps : [.. steps.Select((s, i) => s with { RotationDeg = i * 180.0 / steps.Count })];
-    }
-
-    private static EdgeReadingEntry Step(JsonElement e, string path)
-    {
-        if (e.ValueKind != JsonValueKind.Object) throw new BatchInputException(path, "must be an object {\"rotation_deg\", \"low\", \"high\"}");
-        double rotation = Optional(e, "rotation_deg", x => (double?)Number(x, path + ".rotation_deg")) ?? 0;
-        double low = Number(Required(e, "low", path), path + ".low");
-        double? high = Optional(e, "high", x => (double?)Number(x, path + ".high"));
-        return new EdgeReadingEntry(rotation, low, high);
-    }
-
-    private static HydrostaticReadings Weighing(JsonElement e) => new(
-        Number(Required(e, "air_ct", "sg"), "sg.air_ct"),
-        Number(Required(e, "water_ct", "sg"), "sg.water_ct"),
-        Optional(e, "water_c", x => (double?)Number(x, "sg.water_c")));
-
-    private static HeavyLiquidReading HeavyLiquid(JsonElement e, string path)
-    {
-        if (e.ValueKind != JsonValueKind.Object) throw new BatchInputException(path, "must be an object {\"density\", \"result\"}");
-        return new HeavyLiquidReading(Number(Required(e, "density", path), path + ".density"), Word(Required(e, "result", path), path + ".result"));
-    }
-
-    private static T? Optional<T>(JsonElement parent, string name, Func<JsonElement, T?> read)
-    {
-        if (!parent.TryGetProperty(name, out var e) || e.ValueKind == JsonValueKind.Null) return default;
-        return read(e);
-    }
-
-    private static JsonElement Required(JsonElement parent, string name, string path) =>
-        parent.TryGetProperty(name, out var e) && e.ValueKind != JsonValueKind.Null ? e : throw new BatchInputException($"{path}.{name}", "is required");
-
-    private static double Number(JsonElement e, string path)
-    {
-        if (e.ValueKind != JsonValueKind.Number) throw new BatchInputException(path, $"must be a number, not {Shown(e)}");
-        if (!e.TryGetDouble(out double v) || !double.IsFinite(v)) throw new BatchInputException(path, $"number out of range: {e.GetRawText()}");
-        return v;
-    }
-
-    private static string Word(JsonElement e, string path) =>
-        e.ValueKind == JsonValueKind.String ? e.GetString()!.Trim() : throw new BatchInputException(path, $"must be a string, not {Shown(e)}");
-
-    private static List<T> Array<T>(JsonElement e, string path, Func<JsonElement, string, T> read)
-    {
-        if (e.ValueKind != JsonValueKind.Array) throw new BatchInputException(path, $"must be a list, not {Shown(e)}");
-        var list = new List<T>();
-        int i = 0;
-        foreach (var x in e.EnumerateArray()) list.Add(read(x, $"{path}[{i++}]"));
-        return list;
-    }
-
-    private static string Shown(JsonElement e) => e.ValueKind switch
-    {
-        JsonValueKind.String => $"the text \"{e.GetString()}\"",
-        JsonValueKind.Object => "an object",
-        JsonValueKind.Array => "a list",
-        _ => e.GetRawText(),
-    };
 
     /// <summary>Writes readings as one line of the batch format (no line break).</summary>
     public static string Write(StoneReadings r)
@@ -149,7 +193,7 @@ public static class StoneReadingsJson
         using (var w = new Utf8JsonWriter(stream))
         {
             w.WriteStartObject();
-            w.WriteString("id", r.Id);
+            w.WriteString(BenchField.Id, r.Id);
             if (r.Refractometer is { } rf)
             {
                 w.WriteStartObject("refractometer");
@@ -171,38 +215,40 @@ public static class StoneReadingsJson
                 }
                 if (rf.Spot is { } spot) w.WriteNumber("spot", spot);
                 if (rf.OverLimit) w.WriteBoolean("over_limit", true);
+                if (rf.Precision is { } p) w.WriteNumber("precision", p);
+                if (rf.CalibrationOffset is { } c) w.WriteNumber("calibration_offset", c);
                 w.WriteEndObject();
             }
-            if (r.Sg is { } sg) w.WriteNumber("sg", sg);
+            if (r.Sg is { } sg) w.WriteNumber(BenchField.Sg, sg);
             else if (r.SgWeighing is { } wg)
             {
-                w.WriteStartObject("sg");
-                w.WriteNumber("air_ct", wg.AirCt);
-                w.WriteNumber("water_ct", wg.WaterCt);
+                w.WriteStartObject(BenchField.Sg);
+                if (wg.AirCt is { } a) w.WriteNumber("air_ct", a);
+                if (wg.WaterCt is { } wc) w.WriteNumber("water_ct", wc);
                 if (wg.WaterC is { } t) w.WriteNumber("water_c", t);
                 w.WriteEndObject();
             }
             if (r.HeavyLiquids.Count > 0)
             {
-                w.WriteStartArray("heavy_liquids");
+                w.WriteStartArray(BenchField.HeavyLiquids);
                 foreach (var h in r.HeavyLiquids) { w.WriteStartObject(); w.WriteNumber("density", h.Density); w.WriteString("result", h.Result); w.WriteEndObject(); }
                 w.WriteEndArray();
             }
-            WriteWord(w, "polariscope", r.Polariscope);
-            WriteWord(w, "pleochroism", r.Pleochroism);
-            if (r.DispersionIndices is { } d) { w.WriteStartObject("dispersion"); w.WriteNumber("nB", d.NB); w.WriteNumber("nG", d.NG); w.WriteEndObject(); }
-            else WriteWord(w, "dispersion", r.Dispersion);
-            WriteWord(w, "thermal_probe", r.ThermalProbe);
-            WriteWord(w, "electrical", r.Electrical);
-            WriteWord(w, "uv_long", r.UvLong);
-            WriteWord(w, "uv_short", r.UvShort);
+            WriteWord(w, BenchField.Polariscope, r.Polariscope);
+            WriteWord(w, BenchField.Pleochroism, r.Pleochroism);
+            if (r.DispersionIndices is { } d) { w.WriteStartObject(BenchField.Dispersion); w.WriteNumber("nB", d.NB); w.WriteNumber("nG", d.NG); w.WriteEndObject(); }
+            else WriteWord(w, BenchField.Dispersion, r.Dispersion);
+            WriteWord(w, BenchField.ThermalProbe, r.ThermalProbe);
+            WriteWord(w, BenchField.Electrical, r.Electrical);
+            WriteWord(w, BenchField.UvLong, r.UvLong);
+            WriteWord(w, BenchField.UvShort, r.UvShort);
             if (r.AbsorptionNm is { } lines)
             {
-                w.WriteStartArray("absorption_nm");
+                w.WriteStartArray(BenchField.Absorption);
                 foreach (double l in lines) w.WriteNumberValue(l);
                 w.WriteEndArray();
             }
-            WriteWord(w, "colour", r.Colour);
+            WriteWord(w, BenchField.Colour, r.Colour);
             w.WriteEndObject();
         }
         return Encoding.UTF8.GetString(stream.ToArray());
@@ -210,8 +256,6 @@ public static class StoneReadingsJson
 
     private static void WriteWord(Utf8JsonWriter w, string name, string? value)
     {
-        if (!string.IsNullOrWhiteSpace(value)) w.WriteString(name, value);
+        if (value is not null) w.WriteString(name, value);
     }
-
-    internal static string Format(double v) => v.ToString("0.####", CultureInfo.InvariantCulture);
 }

@@ -1,17 +1,43 @@
 using System.CommandLine;
+using System.CommandLine.Parsing;
+using System.Globalization;
 using GemIndex.Cli.Identification;
+using GemIndex.Core.Bench;
 using GemIndex.Core.Identification;
-using GemIndex.Data.Batch;
 using GemIndex.Data.Catalogue;
 
 namespace GemIndex.Cli.CommandLine;
 
 /// <summary>
 /// <c>identify</c>: one stone from options (readable text or <c>--json</c>), or a whole batch file of JSON Lines
-/// (<c>--batch FILE</c>, <c>-</c> for standard input) in the batch interface's fixed format.
+/// (<c>--batch FILE</c>, <c>-</c> for standard input). Both fill Core's <see cref="BenchReadings"/> and go through
+/// <see cref="BenchIdentification"/>; every bad value is reported at once, naming its option (exit 3).
 /// </summary>
 internal static class IdentifyCommand
 {
+    /// <summary>The reading options: option name → the field of <see cref="BenchReadings"/> it fills.</summary>
+    private static readonly (string Option, string Field, string Description)[] Values =
+    [
+        ("--spot", BenchField.Spot, "A spot reading (distant-vision method on a curved surface)"),
+        ("--liquid-limit", BenchField.LiquidLimit, $"The contact liquid's index (default {BenchDefaults.LiquidLimit.ToString(CultureInfo.InvariantCulture)}; an edge above it is an error unless the liquid is given)"),
+        ("--light-nm", BenchField.LightNm, $"Wavelength of the light the readings were taken in, nm (default {BenchDefaults.LightNanometres.ToString(CultureInfo.InvariantCulture)})"),
+        ("--precision", BenchField.Precision, $"Standard uncertainty of one refractometer reading (default {BenchDefaults.FacetPrecision.ToString(CultureInfo.InvariantCulture)} facet, {BenchDefaults.SpotPrecision.ToString(CultureInfo.InvariantCulture)} spot)"),
+        ("--calibration-offset", BenchField.CalibrationOffset, "Added to every refractometer reading, from a calibration on a standard (default 0)"),
+        ("--sg", BenchField.Sg, $"Specific gravity typed directly (taken as ± {BenchDefaults.DirectSpecificGravityUncertainty.ToString(CultureInfo.InvariantCulture)})"),
+        ("--in-air-ct", BenchField.AirCt, $"Hydrostatic weighing: weight in air, carats (each weighing ± {BenchDefaults.WeighingUncertaintyCarats.ToString(CultureInfo.InvariantCulture)} ct)"),
+        ("--in-water-ct", BenchField.WaterCt, "Hydrostatic weighing: weight in water, carats"),
+        ("--water-c", BenchField.WaterC, $"Hydrostatic weighing: water temperature, °C (default {BenchDefaults.WaterCelsius.ToString(CultureInfo.InvariantCulture)})"),
+        ("--polariscope", BenchField.Polariscope, BenchWords.Choices<Core.Observations.PolariscopeReaction>()),
+        ("--pleochroism", BenchField.Pleochroism, BenchWords.Choices<Core.Observations.PleochroismObservation>()),
+        ("--dispersion", BenchField.Dispersion, BenchWords.Choices<Core.Observations.DispersionStrength>()),
+        ("--thermal-probe", BenchField.ThermalProbe, BenchWords.Choices<Core.Observations.ThermalProbeResult>()),
+        ("--electrical", BenchField.Electrical, BenchWords.Choices<Core.Observations.ElectricalResult>()),
+        ("--uv-long", BenchField.UvLong, BenchWords.Choices<Core.Observations.FluorescenceStrength>()),
+        ("--uv-short", BenchField.UvShort, BenchWords.Choices<Core.Observations.FluorescenceStrength>()),
+        ("--lines", BenchField.Absorption, "Absorption lines seen, nm, separated by spaces or commas (\"none\" if none)"),
+        ("--colour", BenchField.Colour, "A plain colour word"),
+    ];
+
     public static Command Create(Option<DirectoryInfo?> catalogueDirectory)
     {
         var batch = new Option<string?>("--batch") { Description = "JSON Lines file of stones (- for standard input); writes one JSON line per stone" };
@@ -21,106 +47,109 @@ internal static class IdentifyCommand
             Description = "A rotation step ROTATION:LOW[/HIGH], e.g. --edge 0:1.544/1.553 --edge 45:1.544/1.549 (repeat per step)",
             AllowMultipleArgumentsPerToken = false,
         };
-        var spot = NumberOption.Optional("--spot", "A spot reading (distant-vision method on a curved surface)", _ => { });
         var overLimit = new Option<bool>("--over-limit") { Description = "No stone edge below the contact liquid's index" };
-        var liquid = NumberOption.Optional("--liquid-limit", "The contact liquid's index (default 1.79)", _ => { });
-        var light = NumberOption.Optional("--light-nm", "Wavelength of the light the readings were taken in, nm (default 589.3)", _ => { });
-        var sg = NumberOption.Optional("--sg", "Specific gravity", _ => { });
-        var inAir = NumberOption.Optional("--in-air-ct", "Hydrostatic weighing: weight in air, carats", _ => { });
-        var inWater = NumberOption.Optional("--in-water-ct", "Hydrostatic weighing: weight in water, carats", _ => { });
-        var waterC = NumberOption.Optional("--water-c", "Hydrostatic weighing: water temperature, °C (default 20)", _ => { });
-        var liquids = new Option<string[]>("--heavy-liquid") { Description = "DENSITY:floats|sinks|suspends (repeat per liquid)" };
-        var polariscope = Word("--polariscope", "singly_refractive | doubly_refractive | aggregate | anomalous");
-        var pleochroism = Word("--pleochroism", "none | dichroic | trichroic");
-        var dispersion = Word("--dispersion", "none | weak | moderate | strong | very_strong");
-        var thermal = Word("--thermal-probe", "positive | negative");
-        var electrical = Word("--electrical", "conductive | insulating");
-        var uvLong = Word("--uv-long", "inert | weak | moderate | strong");
-        var uvShort = Word("--uv-short", "inert | weak | moderate | strong");
-        var lines = new Option<string?>("--lines") { Description = "Absorption lines seen, nm, comma-separated (\"none\" if none)" };
-        var colour = Word("--colour", "a plain colour word");
+        var liquids = new Option<string[]>("--heavy-liquid") { Description = "DENSITY RESULT, RESULT floats | sinks | suspends, e.g. \"3.32 floats\" (repeat per liquid)" };
+        var values = Values.Select(v => (v.Field, Option: new Option<string?>(v.Option) { Description = v.Description })).ToList();
         var id = new Option<string>("--id") { Description = "The stone's reference", DefaultValueFactory = _ => "stone" };
-        var count = new Option<int>("--candidates") { Description = "How many candidates to show (1–50)", DefaultValueFactory = _ => 5 };
-        var json = new Option<bool>("--json") { Description = "Write the result as one JSON line (the batch format)" };
+        var count = new Option<string?>("--candidates") { Description = $"How many candidates to show (1–{BenchDefaults.MostCandidates}, default {BenchDefaults.Candidates})" };
+        var json = new Option<bool>("--json") { Description = "Write the result as one JSON line (the result document, docs/result-document.md)" };
         var command = new Command("identify", "Rank catalogue materials for a stone's bench readings, with confidence, reasons and the next test")
         {
-            batch, explain, edges, spot, overLimit, liquid, light, sg, inAir, inWater, waterC, liquids, polariscope, pleochroism,
-            dispersion, thermal, electrical, uvLong, uvShort, lines, colour, id, count, json, catalogueDirectory,
+            batch, explain, edges, overLimit, liquids, id, count, json, catalogueDirectory,
         };
+        foreach (var (_, option) in values) command.Options.Add(option);
         command.SetAction(pr => CatalogueFailure.Guard(pr, (output, error) =>
         {
-            var identifier = new Identifier(MergedCatalogue.Load(CatalogueCommand.Locations(pr, catalogueDirectory)));
-            if (pr.GetValue(batch) is { } file) return Batch(file, identifier, pr.GetValue(explain), output, error);
-            try
+            if (Candidates(pr.GetValue(count), error) is not { } candidates) return ExitCodes.BadInput;
+            var readings = new BenchReadings().With(BenchField.Id, pr.GetValue(id));
+            var shapeErrors = new List<BenchFieldError>();
+            foreach (var (text, i) in (pr.GetValue(edges) ?? []).Select((t, i) => (t, i)))
             {
-                var readings = new StoneReadings
-                {
-                    Id = pr.GetValue(id)!,
-                    Refractometer = pr.GetValue(edges) is { Length: > 0 } || pr.GetValue(spot) is not null || pr.GetValue(overLimit)
-                        ? new RefractometerReadings
-                        {
-                            Method = pr.GetValue(spot) is not null && pr.GetValue(edges) is not { Length: > 0 } ? "spot" : "facet",
-                            Readings = [.. (pr.GetValue(edges) ?? []).Select((e, i) => Step(e, i))],
-                            Spot = pr.GetValue(spot), OverLimit = pr.GetValue(overLimit),
-                            LiquidLimit = pr.GetValue(liquid), LightNm = pr.GetValue(light),
-                        }
-                        : null,
-                    Sg = pr.GetValue(sg),
-                    SgWeighing = pr.GetValue(inAir) is { } air && pr.GetValue(inWater) is { } water ? new HydrostaticReadings(air, water, pr.GetValue(waterC)) : null,
-                    HeavyLiquids = [.. (pr.GetValue(liquids) ?? []).Select((l, i) => Liquid(l, i))],
-                    Polariscope = pr.GetValue(polariscope), Pleochroism = pr.GetValue(pleochroism), Dispersion = pr.GetValue(dispersion),
-                    ThermalProbe = pr.GetValue(thermal), Electrical = pr.GetValue(electrical), UvLong = pr.GetValue(uvLong), UvShort = pr.GetValue(uvShort),
-                    AbsorptionNm = pr.GetValue(lines) is { } l ? Lines(l) : null,
-                    Colour = pr.GetValue(colour),
-                };
-                var result = identifier.Identify(StoneReadingsConverter.ToBenchSheet(readings), Math.Clamp(pr.GetValue(count), 1, 50));
-                if (pr.GetValue(json)) output.WriteLine(BatchResultJson.Result(result, explain: true));
-                else IdentificationText.Write(result, output);
-                return ExitCodes.Ok;
+                if (BenchSyntax.Step(text) is { } step) readings = readings.WithStep(step);
+                else shapeErrors.Add(new BenchFieldError(BenchField.Step(i), BenchText.Shown(text), "ROTATION:LOW[/HIGH], e.g. 0:1.544/1.553",
+                    $"'{BenchText.Shown(text)}' is not ROTATION:LOW[/HIGH] (e.g. 0:1.544/1.553)."));
             }
-            catch (BatchInputException e)
+            if (pr.GetValue(overLimit)) readings = readings.With(BenchField.OverLimit, "yes");
+            if (pr.GetValue(liquids) is { Length: > 0 } entries) readings = readings.With(BenchField.HeavyLiquids, BenchSyntax.HeavyLiquids(entries));
+            foreach (var (field, option) in values) readings = readings.With(field, pr.GetValue(option));
+            bool anyReading = readings.Values.Count > 1 || readings.Steps.Count > 0 || shapeErrors.Count > 0;
+            if (pr.GetValue(batch) is { } file)
             {
-                error.WriteLine($"gemindex: {e.Message}");
+                if (anyReading || pr.GetValue(json))
+                    return Refuse(error, "--batch reads the stones from the file: reading options and --json are not used with it; give one or the other.");
+                return Batch(file, candidates, pr.GetValue(explain), catalogueDirectory, pr, output, error);
+            }
+            if (pr.GetValue(explain)) return Refuse(error, "--explain is used only with --batch (the single-stone output always gives the reasons).");
+            var identifier = new Identifier(MergedCatalogue.Load(CatalogueCommand.Locations(pr, catalogueDirectory)));
+            BenchOutcome outcome = BenchIdentification.Identify(identifier, readings, new BenchRequest { Candidates = candidates });
+            var errors = shapeErrors.Concat(outcome.Reading.Errors).ToList();
+            if (errors.Count > 0 || outcome.Result is not { } result)
+            {
+                foreach (var e in errors) error.WriteLine($"gemindex: {OptionOf(e.Field)}: {e.Sentence}");
                 return ExitCodes.BadInput;
             }
+            if (pr.GetValue(json)) output.WriteLine(ResultDocument.Line(result, explain: true));
+            else IdentificationText.Write(result, output);
+            return ExitCodes.Ok;
         }));
         return command;
     }
 
-    private static Option<string?> Word(string name, string description) => new(name) { Description = description };
-
-    private static int Batch(string file, Identifier identifier, bool explain, TextWriter output, TextWriter error)
+    /// <summary>The option a field came from, for messages: refractometer.readings[0] → "--edge #1".</summary>
+    private static string OptionOf(string field)
     {
-        using TextReader input = file == "-" ? Console.In : new StreamReader(file);
-        int failed = BatchIdentification.Run(input, output, identifier, explain);
-        if (failed > 0) error.WriteLine($"gemindex: {failed} line(s) could not be read; see their error lines");
+        if (field.StartsWith(BenchField.Readings + "[", StringComparison.Ordinal)
+            && int.TryParse(field[(BenchField.Readings.Length + 1)..field.IndexOf(']', StringComparison.Ordinal)], NumberStyles.None, CultureInfo.InvariantCulture, out int i))
+            return $"--edge #{i + 1}";
+        return field switch
+        {
+            BenchField.Readings => "--edge",
+            BenchField.OverLimit => "--over-limit",
+            BenchField.HeavyLiquids => "--heavy-liquid",
+            BenchField.IndexAtB or BenchField.IndexAtG => "--dispersion",
+            _ => Values.FirstOrDefault(v => v.Field == field).Option ?? field,
+        };
+    }
+
+    /// <summary>--candidates checked here, not clamped: 1–50, a bad value exits 3 naming the range.</summary>
+    private static int? Candidates(string? text, TextWriter error)
+    {
+        if (text is null) return BenchDefaults.Candidates;
+        if (int.TryParse(text.Trim(), NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out int n) && n is >= 1 and <= BenchDefaults.MostCandidates) return n;
+        error.WriteLine($"gemindex: --candidates: '{BenchText.Shown(text)}' is not a whole number from 1 to {BenchDefaults.MostCandidates}; allowed: 1–{BenchDefaults.MostCandidates}.");
+        return null;
+    }
+
+    private static int Refuse(TextWriter error, string sentence)
+    {
+        error.WriteLine($"gemindex: {sentence}");
+        return ExitCodes.Usage;
+    }
+
+    private static int Batch(string file, int candidates, bool explain, Option<DirectoryInfo?> catalogueDirectory, ParseResult pr, TextWriter output, TextWriter error)
+    {
+        if (file.Trim().Length == 0)
+        {
+            error.WriteLine("gemindex: --batch: the path is empty; give a file, or - for standard input.");
+            return ExitCodes.BadInput;
+        }
+        if (file != "-" && Directory.Exists(file))
+        {
+            error.WriteLine($"gemindex: --batch: {BenchText.Shown(file)} is a folder, not a file.");
+            return ExitCodes.BadFile;
+        }
+        if (file != "-" && !File.Exists(file))
+        {
+            error.WriteLine($"gemindex: --batch: there is no file {BenchText.Shown(file)}.");
+            return ExitCodes.BadFile;
+        }
+        var identifier = new Identifier(MergedCatalogue.Load(CatalogueCommand.Locations(pr, catalogueDirectory)));
+        // Standard input is read as UTF-8 with or without a byte order mark, as a file is.
+        using TextReader input = file == "-" ? new StreamReader(Console.OpenStandardInput(), System.Text.Encoding.UTF8, detectEncodingFromByteOrderMarks: true) : new StreamReader(file);
+        var progress = BatchProgress.For(error, file == "-" ? null : new FileInfo(file).Length, !Console.IsErrorRedirected && ReferenceEquals(error, Console.Error),
+            Environment.GetEnvironmentVariable("TERM"));
+        int failed = BatchIdentification.Run(input, output, identifier, new BenchRequest { Candidates = candidates, ExplainTop = explain ? 3 : 0 }, progress);
+        if (failed > 0) error.WriteLine($"gemindex: {failed} line(s) could not be read or ranked; see their error lines");
         return failed > 0 ? ExitCodes.BadInput : ExitCodes.Ok;
     }
-
-    private static EdgeReadingEntry Step(string text, int index)
-    {
-        string field = $"--edge #{index + 1}";
-        var parts = text.Split(':');
-        if (parts.Length != 2) throw new BatchInputException(field, $"'{text}' is not ROTATION:LOW[/HIGH] (e.g. 0:1.544/1.553)");
-        var edges = parts[1].Split('/');
-        double rotation = Number(parts[0], field + " rotation");
-        double low = Number(edges[0], field + " low edge");
-        double? high = edges.Length > 1 ? Number(edges[1], field + " high edge") : null;
-        return new EdgeReadingEntry(rotation, low, high);
-    }
-
-    private static HeavyLiquidReading Liquid(string text, int index)
-    {
-        var parts = text.Split(':');
-        string field = $"--heavy-liquid #{index + 1}";
-        if (parts.Length != 2) throw new BatchInputException(field, $"'{text}' is not DENSITY:floats|sinks|suspends");
-        return new HeavyLiquidReading(Number(parts[0], field + " density"), parts[1]);
-    }
-
-    private static List<double> Lines(string text) => text.Trim().Equals("none", StringComparison.OrdinalIgnoreCase)
-        ? []
-        : [.. text.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries).Select((t, i) => Number(t, $"--lines #{i + 1}"))];
-
-    private static double Number(string text, string field) =>
-        Core.Quantities.BenchNumber.TryParse(text, out double v, out string problem) ? v : throw new BatchInputException(field, problem);
 }

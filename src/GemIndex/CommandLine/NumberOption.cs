@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.CommandLine.Parsing;
+using GemIndex.Core.Bench;
 using GemIndex.Core.Quantities;
 
 namespace GemIndex.Cli.CommandLine;
@@ -39,7 +40,9 @@ internal static class NumberOption
         string text = result.Tokens.Count == 1 ? result.Tokens[0].Value : "";
         if (!BenchNumber.TryParse(text, out double value, out string error))
         {
-            result.AddError($"{name}: {error}");
+            // The value is echoed at most BenchText.MostShown characters, control characters made visible.
+            string trimmed = text.Trim();
+            result.AddError($"{name}: {(trimmed.Length > 0 ? error.Replace(trimmed, BenchText.Shown(trimmed), StringComparison.Ordinal) : error)}");
             return null;
         }
         try

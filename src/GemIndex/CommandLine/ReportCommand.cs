@@ -3,6 +3,7 @@ using System.CommandLine;
 using System.CommandLine.Parsing;
 using System.Globalization;
 using GemIndex.Cli.Reports;
+using GemIndex.Core.Bench;
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Identification;
 using GemIndex.Data.Batch;
@@ -19,6 +20,9 @@ internal static class ReportCommand
 {
     public static readonly string[] Formats = ["markdown", "html", "json"];
 
+    /// <summary>What a report asks of the identification: the default candidates and their reasons.</summary>
+    private static readonly BenchRequest Request = new();
+
     public static Command Create(Func<IReadOnlyList<Material>> materials) => Create(_ => materials(), null);
 
     /// <summary>The report group with the catalogue chosen per invocation (<c>--catalogue-dir</c>, as for the other commands).</summary>
@@ -27,10 +31,8 @@ internal static class ReportCommand
 
     private static Command Create(Func<ParseResult, IReadOnlyList<Material>> catalogue, Option<DirectoryInfo?>? catalogueDirectory)
     {
-        var readings = new Option<FileInfo>("--readings") { Description = "Batch file of readings (JSON, one stone per line)" };
-        readings.AcceptExistingOnly();
-        var workbook = new Option<FileInfo>("--workbook") { Description = "A workbook file: report a stone of it (--stone) or, with 'report workbook', all of them" };
-        workbook.AcceptExistingOnly();
+        var readings = new Option<string?>("--readings") { Description = "Batch file of readings (JSON, one stone per line)" };
+        var workbook = new Option<string?>("--workbook") { Description = "A workbook file: report a stone of it (--stone) or, with 'report workbook', all of them" };
         var reference = new Option<string?>("--stone") { Description = "With --workbook: the stone's reference" };
         var line = new Option<int>("--line")
         {
@@ -41,9 +43,11 @@ internal static class ReportCommand
         var format = new Option<string>("--format") { Description = "markdown, html or json", DefaultValueFactory = _ => "markdown" };
         format.AcceptOnlyFromAmong(Formats);
         var output = new Option<FileInfo?>("--output") { Description = "File to write (default: standard output)" };
+        var examiner = new Option<string?>("--examiner") { Description = "Who examined the stone, printed in the report's header" };
+        var date = new Option<string?>("--date") { Description = "The report's date, YYYY-MM-DD (default: today)" };
         var stone = new Command("stone", "Identify one stone (a batch line, or a stone of a workbook) and write its report")
         {
-            readings, line, workbook, reference, format, output,
+            readings, line, workbook, reference, format, output, examiner, date,
         };
         stone.Validators.Add(r =>
         {
@@ -51,20 +55,43 @@ internal static class ReportCommand
             if (fromFile == fromWorkbook) r.AddError("give either --readings FILE or --workbook FILE --stone REFERENCE");
             else if (fromWorkbook && string.IsNullOrWhiteSpace(r.GetValue(reference))) r.AddError("--workbook needs --stone REFERENCE");
         });
-        stone.SetAction(pr => CatalogueFailure.Guard(pr, (o, e) => pr.GetValue(workbook) is { } book
-            ? WorkbookStone(book, pr.GetValue(reference)!, pr.GetRequiredValue(format), pr.GetValue(output), () => catalogue(pr), o, e)
-            : Stone(pr.GetValue(readings)!, pr.GetValue(line), pr.GetRequiredValue(format), pr.GetValue(output), () => catalogue(pr), o, e)));
-        var wholeBook = new Option<FileInfo>("--workbook") { Description = "The workbook file", Required = true };
-        wholeBook.AcceptExistingOnly();
+        stone.SetAction(pr => CatalogueFailure.Guard(pr, (o, e) =>
+        {
+            if (Header(pr.GetValue(date), pr.GetValue(examiner), e) is not { } header) return ExitCodes.BadInput;
+            return pr.GetValue(workbook) is { } bookPath
+                ? Existing("--workbook", bookPath, e, out int refused) is not { } book ? refused
+                    : WorkbookStone(book, pr.GetValue(reference)!, pr.GetRequiredValue(format), pr.GetValue(output), header, () => catalogue(pr), o, e)
+                : Existing("--readings", pr.GetValue(readings)!, e, out int refusedFile) is not { } file ? refusedFile
+                    : Stone(file, pr.GetValue(line), pr.GetRequiredValue(format), pr.GetValue(output), header, () => catalogue(pr), o, e);
+        }));
+        var wholeBook = new Option<string>("--workbook") { Description = "The workbook file", Required = true };
         var csv = new Option<FileInfo?>("--output") { Description = "CSV file to write (default: standard output)" };
         var all = new Command("workbook", "Every stone of a workbook as CSV, one row each, with its best candidate") { wholeBook, csv };
-        all.SetAction(pr => CatalogueFailure.Guard(pr, (o, e) => Workbook(pr.GetRequiredValue(wholeBook), pr.GetValue(csv), () => catalogue(pr), o, e)));
+        all.SetAction(pr => CatalogueFailure.Guard(pr, (o, e) => Existing("--workbook", pr.GetRequiredValue(wholeBook), e, out int refused) is not { } book ? refused
+            : Workbook(book, pr.GetValue(csv), () => catalogue(pr), o, e)));
         var report = new Command("report", "Printable reports of identified stones, and the workbook as CSV") { stone, all };
         if (catalogueDirectory is not null) report.Options.Add(catalogueDirectory);
         return report;
     }
 
-    private static int WorkbookStone(FileInfo book, string reference, string format, FileInfo? output, Func<IReadOnlyList<Material>> materials,
+    /// <summary>The report's header: the date given (or today, read here at the edge, never in Core), the examiner, the versions.</summary>
+    private static ReportHeader? Header(string? date, string? examiner, TextWriter e)
+    {
+        DateOnly day = DateOnly.FromDateTime(TimeProvider.System.GetLocalNow().Date);
+        if (date is not null && !DateOnly.TryParseExact(date.Trim(), "yyyy-MM-dd", CultureInfo.InvariantCulture, DateTimeStyles.None, out day))
+        {
+            e.WriteLine($"gemindex: --date: '{BenchText.Shown(date)}' is not a date; allowed: YYYY-MM-DD, e.g. 2026-03-14.");
+            return null;
+        }
+        if (examiner is not null && examiner.Trim().Length == 0)
+        {
+            e.WriteLine("gemindex: --examiner: is empty; give a name, or leave the option out.");
+            return null;
+        }
+        return new ReportHeader(day, examiner, ReportHeader.Program(), ShippedCatalogue.ContentHash[..Math.Min(12, ShippedCatalogue.ContentHash.Length)]);
+    }
+
+    private static int WorkbookStone(FileInfo book, string reference, string format, FileInfo? output, ReportHeader header, Func<IReadOnlyList<Material>> materials,
         TextWriter o, TextWriter e)
     {
         try
@@ -76,18 +103,18 @@ internal static class ReportCommand
                 e.WriteLine($"gemindex: --stone: no stone '{reference}' in {book.Name}");
                 return ExitCodes.BadInput;
             }
-            var bench = StoneReadingsConverter.ToBenchSheet(sheet.Readings);
-            return Write(StoneReport.Build(sheet, new Identifier(materials()).Identify(bench)), sheet.Reference, format, output, o);
+            BenchOutcome outcome = BenchIdentification.Identify(new Identifier(materials()), StoneReadingsConverter.ToReadings(sheet.Readings), Request);
+            if (outcome.Result is not { } result)
+            {
+                foreach (var x in outcome.Reading.Errors) e.WriteLine($"gemindex: stone '{BenchText.Shown(reference)}': {x}");
+                return ExitCodes.BadInput;
+            }
+            return Write(StoneReport.Build(sheet, result, header), sheet.Reference, format, output, o);
         }
         catch (WorkbookException x)
         {
             e.WriteLine($"gemindex: {x.Message}");
             return ExitCodes.BadFile;
-        }
-        catch (BatchInputException x)
-        {
-            e.WriteLine($"gemindex: stone '{reference}': {x.Message}");
-            return ExitCodes.BadInput;
         }
     }
 
@@ -101,10 +128,10 @@ internal static class ReportCommand
             foreach (var summary in workbook.List())
             {
                 if (workbook.Get(summary.Id) is not { } sheet) continue;
-                IdentificationResult? result = null;
-                try { result = identifier.Identify(StoneReadingsConverter.ToBenchSheet(sheet.Readings), adviseNextTest: false); }
-                catch (BatchInputException x) { e.WriteLine($"gemindex: stone '{sheet.Reference}': {x.Message} (row written without a result)"); }
-                rows.Add((sheet, result));
+                BenchOutcome outcome = BenchIdentification.Identify(identifier, StoneReadingsConverter.ToReadings(sheet.Readings), Request with { AdviseNextTest = false });
+                foreach (var x in outcome.Reading.Errors)
+                    e.WriteLine($"gemindex: stone '{BenchText.Shown(sheet.Reference)}': {x} (row written without a result)");
+                rows.Add((sheet, outcome.Result));
             }
             using var writer = output is null ? null : new StreamWriter(output.FullName);
             WorkbookCsv.Write(writer ?? o, rows);
@@ -135,36 +162,55 @@ internal static class ReportCommand
         return ExitCodes.Ok;
     }
 
-    private static int Stone(FileInfo file, int lineNumber, string format, FileInfo? output, Func<IReadOnlyList<Material>> materials,
+    private static int Stone(FileInfo file, int lineNumber, string format, FileInfo? output, ReportHeader header, Func<IReadOnlyList<Material>> materials,
         TextWriter o, TextWriter e)
     {
-        string[] lines = File.ReadAllLines(file.FullName);
-        if (lineNumber > lines.Length)
+        string? text = null;
+        bool tooLong = false;
+        int count = 0;
+        using (var input = new StreamReader(file.FullName))
         {
-            e.WriteLine($"gemindex: --line: {lineNumber} is beyond the end of {file.Name} ({lines.Length} lines); allowed: 1–{lines.Length}");
+            var lines = new BatchLineReader(input);
+            while (count < lineNumber && ((text = lines.Next(out tooLong)) is not null || tooLong)) count++;
+        }
+        if (count < lineNumber)
+        {
+            e.WriteLine($"gemindex: --line: {lineNumber} is beyond the end of {file.Name} ({count} lines); allowed: 1–{count}");
             return ExitCodes.BadInput;
         }
-        StoneReadings stoneReadings;
-        BenchSheet bench;
-        try
+        if (tooLong || text is null)
         {
-            stoneReadings = StoneReadingsJson.Parse(lines[lineNumber - 1]);
-            bench = StoneReadingsConverter.ToBenchSheet(stoneReadings);
-        }
-        catch (BatchInputException x)
-        {
-            e.WriteLine($"gemindex: {file.Name} line {lineNumber}: {x.Message}");
+            e.WriteLine($"gemindex: {file.Name} line {lineNumber}: longer than {BatchLineReader.MostCharacters:N0} characters (1 MiB); not read");
             return ExitCodes.BadInput;
         }
+        BatchLine read = StoneReadingsJson.Read(text);
         IReadOnlyList<Material> catalogue = materials();
-        if (catalogue.Count == 0)
+        if (read.Errors.Count == 0 && catalogue.Count == 0)
         {
             e.WriteLine("gemindex: the catalogue has no materials; build it with 'gemindex catalogue build'");
             return ExitCodes.BadFile;
         }
-        IdentificationResult result = new Identifier(catalogue).Identify(bench);
-        var report = StoneReport.Build(new StoneSheet { Reference = stoneReadings.Id, Readings = stoneReadings }, result);
-        return Write(report, stoneReadings.Id, format, output, o);
+        BenchOutcome? outcome = read.Errors.Count == 0 ? BenchIdentification.Identify(new Identifier(catalogue), read.Readings, Request) : null;
+        if (outcome?.Result is not { } result)
+        {
+            foreach (var x in outcome?.Reading.Errors ?? read.Errors) e.WriteLine($"gemindex: {BenchText.Shown(file.Name)} line {lineNumber}: {x}");
+            return ExitCodes.BadInput;
+        }
+        StoneReadings stored = StoneReadingsConverter.FromReadings(read.Readings, lenient: false);
+        var report = StoneReport.Build(new StoneSheet { Reference = stored.Id, Readings = stored }, result, header);
+        return Write(report, stored.Id, format, output, o);
+    }
+
+    /// <summary>A path option's file, or null with a plain message and its exit code (an empty path is a bad value: 3; a folder or no such file: 4).</summary>
+    private static FileInfo? Existing(string option, string path, TextWriter e, out int exit)
+    {
+        exit = path.Trim().Length == 0 ? ExitCodes.BadInput : ExitCodes.BadFile;
+        string problem = path.Trim().Length == 0 ? "the path is empty; give a file"
+            : Directory.Exists(path) ? $"{BenchText.Shown(path)} is a folder, not a file"
+            : !File.Exists(path) ? $"there is no file {BenchText.Shown(path)}" : "";
+        if (problem.Length == 0) return new FileInfo(path);
+        e.WriteLine($"gemindex: {option}: {problem}.");
+        return null;
     }
 
     private static int LineNumber(ArgumentResult r)

@@ -1,37 +1,71 @@
+using GemIndex.Core.Bench;
 using GemIndex.Core.Identification;
 using GemIndex.Data.Batch;
 
 namespace GemIndex.Cli.Identification;
 
 /// <summary>
-/// The batch interface: JSON Lines in, one JSON line out per stone, in order; a line that cannot be read gives
-/// {"line": N, "error": "…"} and the rest go on. Blank lines are passed over.
+/// The batch interface: JSON Lines in, one JSON line out per stone, in input order, stones ranked on every core.
+/// Every non-blank line is answered: a line that cannot be read, is over the size cap, or fails inside the ranking
+/// gives its error document ({"line": N, "error": …, "errors": […]}) and the rest go on. Blank lines are passed over.
 /// </summary>
 internal static class BatchIdentification
 {
-    /// <summary>Runs a batch; returns the number of lines that failed.</summary>
-    public static int Run(TextReader input, TextWriter output, Identifier identifier, bool explain)
+    /// <summary>Lines read and ranked together; output is written after each chunk, in order.</summary>
+    private const int ChunkLines = 512;
+
+    /// <summary>Runs a batch; returns the number of lines answered with an error.</summary>
+    public static int Run(TextReader input, TextWriter output, Identifier identifier, BenchRequest request, BatchProgress? progress = null)
     {
-        int lineNumber = 0, failed = 0;
-        for (string? line; (line = input.ReadLine()) is not null;)
+        var reader = new BatchLineReader(input);
+        int lineNumber = 0, failed = 0, done = 0;
+        var chunk = new List<(int Number, string? Line)>(ChunkLines);
+        bool end = false;
+        while (!end)
         {
-            lineNumber++;
-            if (string.IsNullOrWhiteSpace(line)) continue;
-            string result;
-            try
+            chunk.Clear();
+            while (chunk.Count < ChunkLines)
             {
-                var sheet = StoneReadingsConverter.ToBenchSheet(StoneReadingsJson.Parse(line));
-                result = BatchResultJson.Result(identifier.Identify(sheet, explainTop: explain ? 3 : 0), explain);
+                string? line = reader.Next(out bool tooLong);
+                if (line is null && !tooLong) { end = true; break; }
+                lineNumber++;
+                if (line is not null && string.IsNullOrWhiteSpace(line)) continue;
+                chunk.Add((lineNumber, line));
             }
-            catch (BatchInputException e)
-            {
-                failed++;
-                result = BatchResultJson.Error(lineNumber, e.Message);
-            }
-            output.Write(result);
-            output.Write('\n');
+            var answers = new string[chunk.Count];
+            var failedHere = new bool[chunk.Count];
+            Parallel.For(0, chunk.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
+                (answers[i], failedHere[i]) = Answer(chunk[i].Number, chunk[i].Line, identifier, request));
+            foreach (string answer in answers) { output.Write(answer); output.Write('\n'); }
+            failed += failedHere.Count(f => f);
+            done += chunk.Count;
+            progress?.Report(done, reader.Consumed);
         }
         output.Flush();
+        progress?.Finish(done);
         return failed;
+    }
+
+    /// <summary>One line's answer: its result document, or its error document.</summary>
+    public static (string Answer, bool Failed) Answer(int lineNumber, string? line, Identifier identifier, BenchRequest request)
+    {
+        if (line is null)
+            return (ResultDocument.Error(lineNumber, null, [new BenchFieldError("$", "", $"at most {BatchLineReader.MostCharacters:N0} characters",
+                $"the line is longer than {BatchLineReader.MostCharacters:N0} characters (1 MiB) and was not read.")]), true);
+        BatchLine read = StoneReadingsJson.Read(line);
+        string? id = read.Readings.Text(BenchField.Id);
+        try
+        {
+            if (read.Errors.Count > 0) return (ResultDocument.Error(lineNumber, id, read.Errors), true);
+            BenchOutcome outcome = BenchIdentification.Identify(identifier, read.Readings, request);
+            return outcome.Result is { } result
+                ? (ResultDocument.Line(result, request.ExplainTop > 0), false)
+                : (ResultDocument.Error(lineNumber, id, outcome.Reading.Errors), true);
+        }
+        catch (Exception e) when (e is not OutOfMemoryException)
+        {
+            // Any failure inside one stone is that line's answer; the batch goes on.
+            return (ResultDocument.Error(lineNumber, id, [new BenchFieldError("$", "", "", $"this stone could not be ranked: {e.Message}")]), true);
+        }
     }
 }

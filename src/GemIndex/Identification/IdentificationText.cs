@@ -1,13 +1,22 @@
-using System.Globalization;
+using GemIndex.Cli.Reports;
+using GemIndex.Core.Bench;
 using GemIndex.Core.Identification;
 
 namespace GemIndex.Cli.Identification;
 
-/// <summary>The answer for one stone as text for a bench user: derived properties, candidates with reasons, next test, warnings.</summary>
+/// <summary>
+/// The answer for one stone as text for a bench user: species first, then derived properties, candidates with
+/// reasons, next test, warnings. Control characters are stripped (a catalogue name or a typed word could carry a
+/// terminal escape sequence).
+/// </summary>
 internal static class IdentificationText
 {
-    public static void Write(IdentificationResult result, TextWriter o)
+    public static void Write(IdentificationResult result, TextWriter output)
     {
+        var o = new StringWriter { NewLine = "\n" };
+        foreach (SpeciesResult s in ResultDocument.SpeciesShown(result))
+            o.WriteLine($"Species: {s.Species} {ReportNumbers.Percent(s.Confidence)}"
+                + (s.Origins.Count > 0 ? " (" + string.Join(", ", s.Origins.OrderByDescending(x => x.Value).Select(x => $"{BenchWords.Word(x.Key)} {ReportNumbers.Percent(x.Value)}")) + ")" : ""));
         if (result.Series is { } series)
         {
             o.WriteLine(series.Character is { } c ? $"Optic character: {c.ToString().ToLowerInvariant()}" : "Optic character: undetermined");
@@ -19,18 +28,17 @@ internal static class IdentificationText
         foreach (var (c, i) in result.Candidates.Select((c, i) => (c, i)))
         {
             string bar = new('#', (int)Math.Round(c.Confidence * 20));
-            o.WriteLine($"{i + 1,2}. {c.Material.Name,-36} {Percent(c.Confidence),6} {bar,-20} fit {c.Fit.ToString("0.00", CultureInfo.InvariantCulture)}  ({c.Material.Species}, {c.Material.Origin.ToString().ToLowerInvariant()})");
+            o.WriteLine($"{i + 1,2}. {c.Material.Name,-36} {ReportNumbers.Percent(c.Confidence),7} {bar,-20} fit {ReportNumbers.Fixed(c.Fit, "0.00")}  ({c.Material.Species}, {BenchWords.Word(c.Material.Origin)})");
             foreach (var r in c.Reasons) o.WriteLine($"      {(r.Agrees ? "+" : "-")} {r.Text}");
         }
-        o.WriteLine($"Not in the catalogue: {Percent(result.NotInCatalogue)}");
+        o.WriteLine($"Not in the catalogue: {ReportNumbers.Percent(result.NotInCatalogue)}");
         if (result.NextTest is { } next)
         {
-            o.WriteLine($"Next test: {next.Description} (expected gain {next.GainBits.ToString("0.00", CultureInfo.InvariantCulture)} bits)");
+            o.WriteLine($"Next test: {BenchTestWords.DisplayOfWire(next.Test)} (expected gain {ReportNumbers.Fixed(next.GainBits, "0.00")} bits)");
             foreach (string e in next.Expectations) o.WriteLine($"  {e}");
         }
         foreach (string w in result.Warnings) o.WriteLine($"Warning: {w}");
         o.WriteLine("An identification from bench tests is an aid, not a certificate.");
+        output.Write(BenchText.ForTerminal(o.ToString()).Replace("\n", output.NewLine, StringComparison.Ordinal));
     }
-
-    private static string Percent(double p) => (p * 100).ToString("0.0", CultureInfo.InvariantCulture) + "%";
 }

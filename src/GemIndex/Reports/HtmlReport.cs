@@ -1,3 +1,4 @@
+using GemIndex.Core.Bench;
 using System.Globalization;
 using System.Net;
 using System.Text;
@@ -37,6 +38,7 @@ internal static class HtmlReport
         h.Append("<title>Stone report: ").Append(E(report.Reference)).AppendLine("</title>");
         h.Append("<style>").Append(Style).AppendLine("</style>").AppendLine("</head>").AppendLine("<body>");
         h.Append("<h1>Stone report: ").Append(E(report.Reference)).AppendLine("</h1>");
+        if (report.Header is { } header) Fields(h, header.Fields());
         Section(h, "Stone");
         Fields(h, report.Description);
         Section(h, "Readings");
@@ -80,7 +82,7 @@ internal static class HtmlReport
         foreach (var c in report.Candidates.Where(c => c.Reasons.Count > 0))
         {
             h.Append("<h3>Reasons for ").Append(E(c.Name)).AppendLine("</h3>");
-            List(h, [.. c.Reasons.Select(r => $"{(r.Agrees ? "agrees" : "against")} ({StoneReport.Word(r.Test)}, {ReportNumbers.Bits(r.WeightBits)}): {r.Text}")], "");
+            List(h, [.. c.Reasons.Select(r => $"{(r.Agrees ? "agrees" : "against")} ({BenchTestWords.DisplayOfWire(r.Test)}, {ReportNumbers.Bits(r.WeightBits)}): {r.Text}")], "");
         }
     }
 
@@ -109,5 +111,5 @@ internal static class HtmlReport
     private static string Number(string text) => $"<td class=\"number\">{E(text)}</td>";
 
     /// <summary>HTML-encodes text: &lt; &gt; &amp; " and ' all become entities.</summary>
-    public static string E(string text) => WebUtility.HtmlEncode(text);
+    public static string E(string text) => WebUtility.HtmlEncode(string.Concat(text.Select(ch => char.IsControl(ch) && ch is not ('\n' or '\t') ? $"\\u{(int)ch:x4}" : ch.ToString())));
 }

@@ -1,16 +1,17 @@
 using System.Text;
 using System.Text.Json;
+using GemIndex.Cli.Identification;
 
 namespace GemIndex.Cli.Reports;
 
 /// <summary>
 /// A report as JSON: stable snake_case field names, units in the names (<c>weight_carats</c>), finite numbers only
 /// (a non-finite number is a bug upstream and throws rather than being written), absent values as null.
-/// Version 1 of the shape; add fields, never rename them.
+/// Version 2 of the shape (version 1 had its own candidates list; the identification is now the result document).
 /// </summary>
 internal static class JsonReport
 {
-    public const int ShapeVersion = 1;
+    public const int ShapeVersion = 2;
 
     public static string Write(StoneReport report)
     {
@@ -19,16 +20,21 @@ internal static class JsonReport
         {
             w.WriteStartObject();
             w.WriteNumber("report_version", ShapeVersion);
+            if (report.Header is { } header)
+            {
+                w.WriteStartObject("header");
+                foreach (var f in header.Fields()) w.WriteString(f.Key, f.Value == StoneReport.NotRecorded ? null : f.Value);
+                w.WriteEndObject();
+            }
+            else w.WriteNull("header");
             Stone(w, report);
             Readings(w, report);
             Derived(w, report);
-            Candidates(w, report);
-            Number(w, "not_in_catalogue", report.NotInCatalogue);
-            w.WriteBoolean("no_good_match", report.NoGoodMatch);
+            // The identification in the one result document (docs/result-document.md), as identify --json writes it.
+            w.WritePropertyName("result");
+            ResultDocument.Write(w, report.Result, explain: true);
             if (report.NoGoodMatch) w.WriteString("no_good_match_statement", StoneReport.NoGoodMatchStatement);
             else w.WriteNull("no_good_match_statement");
-            NextTest(w, report);
-            Strings(w, "warnings", report.Warnings);
             Strings(w, "cautions", report.Cautions);
             w.WriteEndObject();
         }
@@ -107,44 +113,6 @@ internal static class JsonReport
         Strings(w, "misreadings", report.Misreadings);
         Number(w, "specific_gravity", report.SpecificGravity?.Value);
         Number(w, "specific_gravity_uncertainty", report.SpecificGravity?.StandardUncertainty);
-        w.WriteEndObject();
-    }
-
-    private static void Candidates(Utf8JsonWriter w, StoneReport report)
-    {
-        w.WriteStartArray("candidates");
-        foreach (var c in report.Candidates)
-        {
-            w.WriteStartObject();
-            w.WriteNumber("rank", c.Rank);
-            w.WriteString("material", c.Name);
-            w.WriteString("origin", c.Origin);
-            Number(w, "confidence", c.Confidence);
-            Number(w, "fit", c.Fit);
-            w.WriteStartArray("reasons");
-            foreach (var r in c.Reasons)
-            {
-                w.WriteStartObject();
-                w.WriteString("test", r.Test);
-                w.WriteString("text", r.Text);
-                Number(w, "weight_bits", r.WeightBits);
-                w.WriteBoolean("agrees", r.Agrees);
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            w.WriteEndObject();
-        }
-        w.WriteEndArray();
-    }
-
-    private static void NextTest(Utf8JsonWriter w, StoneReport report)
-    {
-        if (report.NextTest is not { } n) { w.WriteNull("next_test"); return; }
-        w.WriteStartObject("next_test");
-        w.WriteString("test", n.Test);
-        Number(w, "gain_bits", n.GainBits);
-        Strings(w, "separates", n.Separates);
-        Strings(w, "expectations", n.Expectations);
         w.WriteEndObject();
     }
 

@@ -1,3 +1,4 @@
+using GemIndex.Core.Bench;
 using System.Text;
 
 namespace GemIndex.Cli.Reports;
@@ -9,6 +10,7 @@ internal static class MarkdownReport
     {
         var md = new StringBuilder();
         md.Append("# Stone report: ").AppendLine(Escape(report.Reference)).AppendLine();
+        if (report.Header is { } header) Fields(md, header.Fields());
         Section(md, "Stone");
         Fields(md, report.Description);
         Section(md, "Readings");
@@ -52,7 +54,7 @@ internal static class MarkdownReport
         {
             md.Append("Reasons for ").Append(Escape(c.Name)).AppendLine(":").AppendLine();
             foreach (var r in c.Reasons)
-                md.AppendLine($"- {(r.Agrees ? "agrees" : "against")} ({Escape(StoneReport.Word(r.Test))}, {ReportNumbers.Bits(r.WeightBits)}): {Escape(r.Text)}");
+                md.AppendLine($"- {(r.Agrees ? "agrees" : "against")} ({Escape(BenchTestWords.DisplayOfWire(r.Test))}, {ReportNumbers.Bits(r.WeightBits)}): {Escape(r.Text)}");
             md.AppendLine();
         }
     }
@@ -72,13 +74,14 @@ internal static class MarkdownReport
         md.AppendLine();
     }
 
-    /// <summary>Backslash-escapes Markdown's punctuation and turns line breaks into spaces, so text stays on its line or cell.</summary>
+    /// <summary>Backslash-escapes Markdown's punctuation, turns line breaks into spaces (text stays on its line or cell) and other control characters into visible \uXXXX.</summary>
     public static string Escape(string text)
     {
         var sb = new StringBuilder(text.Length);
         foreach (char ch in text)
         {
             if (ch is '\r' or '\n') sb.Append(' ');
+            else if (char.IsControl(ch)) sb.Append($"\\u{(int)ch:x4}");   // an escape sequence is shown, never passed to a viewer
             else if ("\\`*_[]<>|".Contains(ch)) sb.Append('\\').Append(ch);
             else sb.Append(ch);
         }

@@ -26,7 +26,11 @@ internal static class ReportNumbers
     /// <summary>A density of a heavy liquid: 3.32 g/cm³.</summary>
     public static string Density(double value) => Fixed(value, "0.00") + " g/cm³";
 
-    /// <summary>A probability (0–1) as a percentage: 87.3 %.</summary>
+    /// <summary>A value with its standard uncertainty, both to the same format: 2.650 ± 0.010.</summary>
+    public static string WithUncertainty(double value, double standardUncertainty, string format) =>
+        $"{Fixed(value, format)} ± {Fixed(standardUncertainty, format)}";
+
+    /// <summary>A probability (0–1) as a percentage, the one percent format of text, Markdown and HTML: 87.3 %.</summary>
     public static string Percent(double probability) => Fixed(probability * 100, "0.0") + " %";
 
     /// <summary>An information quantity: 1.25 bits.</summary>

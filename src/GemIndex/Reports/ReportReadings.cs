@@ -1,3 +1,4 @@
+using GemIndex.Core.Bench;
 using GemIndex.Data.Batch;
 
 namespace GemIndex.Cli.Reports;
@@ -19,22 +20,22 @@ internal static class ReportReadings
         if (r.Sg is { } sg) fields.Add(new("sg_given", "Specific gravity (given)", ReportNumbers.Gravity(sg)));
         if (r.SgWeighing is { } w)
         {
-            fields.Add(new("weight_in_air", "Weight in air", ReportNumbers.Carats(w.AirCt)));
-            fields.Add(new("weight_in_water", "Weight in water", ReportNumbers.Carats(w.WaterCt)));
+            fields.Add(new("weight_in_air", "Weight in air", w.AirCt is { } air ? ReportNumbers.Carats(air) : StoneReport.NotRecorded));
+            fields.Add(new("weight_in_water", "Weight in water", w.WaterCt is { } water ? ReportNumbers.Carats(water) : StoneReport.NotRecorded));
             fields.Add(new("water_temperature", "Water temperature", w.WaterC is { } t ? ReportNumbers.Celsius(t)
-                : $"not given ({ReportNumbers.Celsius(StoneReadingsConverter.DefaultWaterCelsius)} assumed)"));
+                : $"not given ({ReportNumbers.Celsius(BenchDefaults.WaterCelsius)} assumed)"));
         }
         foreach (var (h, i) in r.HeavyLiquids.Select((h, i) => (h, i)))
             fields.Add(new($"heavy_liquid_{i + 1}", $"Heavy liquid {i + 1}", $"{ReportNumbers.Density(h.Density)}: {StoneReport.Word(h.Result)}"));
-        AddWord(fields, "polariscope", "Polariscope", r.Polariscope);
-        AddWord(fields, "pleochroism", "Pleochroism (dichroscope)", r.Pleochroism);
+        AddWord(fields, BenchField.Polariscope, "Polariscope", r.Polariscope);
+        AddWord(fields, BenchField.Pleochroism, "Pleochroism (dichroscope)", r.Pleochroism);
         if (r.DispersionIndices is { } d)
-            fields.Add(new("dispersion", "Dispersion", $"nB {ReportNumbers.Index(d.NB)}, nG {ReportNumbers.Index(d.NG)} (refractive indices)"));
-        else AddWord(fields, "dispersion", "Dispersion (by eye)", r.Dispersion);
-        AddWord(fields, "thermal_probe", "Thermal probe", r.ThermalProbe);
-        AddWord(fields, "electrical", "Electrical conductivity", r.Electrical);
-        AddWord(fields, "uv_long", "Long-wave UV (365 nm)", r.UvLong);
-        AddWord(fields, "uv_short", "Short-wave UV (254 nm)", r.UvShort);
+            fields.Add(new(BenchField.Dispersion, "Dispersion", $"nB {ReportNumbers.Index(d.NB)}, nG {ReportNumbers.Index(d.NG)} (refractive indices)"));
+        else AddWord(fields, BenchField.Dispersion, "Dispersion (by eye)", r.Dispersion);
+        AddWord(fields, BenchField.ThermalProbe, "Thermal probe", r.ThermalProbe);
+        AddWord(fields, BenchField.Electrical, "Electrical conductivity", r.Electrical);
+        AddWord(fields, BenchField.UvLong, "Long-wave UV (365 nm)", r.UvLong);
+        AddWord(fields, BenchField.UvShort, "Short-wave UV (254 nm)", r.UvShort);
         if (r.AbsorptionNm is { } lines)
             fields.Add(new("absorption", "Spectroscope", lines.Count == 0 ? "looked; no lines seen"
                 : "lines or bands at " + string.Join(", ", lines.Select(ReportNumbers.Nanometres))));

@@ -1,3 +1,4 @@
+using GemIndex.Core.Bench;
 using GemIndex.Core.Gravity;
 using GemIndex.Core.Identification;
 using GemIndex.Core.Readings;
@@ -44,13 +45,16 @@ internal sealed record StoneReport
     public required bool NoGoodMatch { get; init; }
     public NextTestAdvice? NextTest { get; init; }
     public required IReadOnlyList<string> Warnings { get; init; }
+    /// <summary>Date, examiner, program and catalogue versions; null when the caller gives none.</summary>
+    public ReportHeader? Header { get; init; }
+    /// <summary>The identification itself (the JSON report embeds it as the result document).</summary>
+    public required IdentificationResult Result { get; init; }
     public IReadOnlyList<string> Cautions => ReportCautions.All;
 
     /// <summary>Builds the report of one stone.</summary>
-    /// <exception cref="BatchInputException">The sheet's readings do not convert (they converted when the stone was identified).</exception>
-    public static StoneReport Build(StoneSheet sheet, IdentificationResult result)
+    public static StoneReport Build(StoneSheet sheet, IdentificationResult result, ReportHeader? header = null)
     {
-        BenchSheet bench = StoneReadingsConverter.ToBenchSheet(sheet.Readings);
+        BenchSheet bench = BenchReader.Read(StoneReadingsConverter.ToReadings(sheet.Readings)).Sheet;
         RotationSeriesResult? series = result.Series;
         return new StoneReport
         {
@@ -65,12 +69,15 @@ internal sealed record StoneReport
             Misreadings = series?.Misreadings ?? [],
             SpecificGravity = bench.SpecificGravity,
             SpecificGravitySource = sheet.Readings.Sg is not null ? "given directly" : sheet.Readings.SgWeighing is not null ? "hydrostatic weighing" : "",
+            // A candidate that would print as 0.0 % says nothing on paper; it stays in the JSON's result document.
             Candidates = [.. result.Candidates.Select((c, i) => new ReportCandidate(i + 1, c.Material.Name, Word(c.Material.Origin.ToString()),
-                c.Confidence, c.Fit, c.Reasons))],
+                c.Confidence, c.Fit, c.Reasons)).Where(c => c.Confidence >= ShownConfidence)],
             NotInCatalogue = result.NotInCatalogue,
             NoGoodMatch = result.NoGoodMatch,
             NextTest = result.NextTest,
             Warnings = result.Warnings,
+            Result = result,
+            Header = header,
         };
     }
 
@@ -89,6 +96,9 @@ internal sealed record StoneReport
     private static ReportInterpretation Interpretation(SeriesInterpretation i) => new(
         i.Character is { } c ? Word(c.ToString()) : "undetermined", Word(i.Sign.ToString()), i.Weight,
         i.Lowest.Value, i.Highest.Value, i.Beta?.Value, i.Birefringence.Value, i.Birefringence.StandardUncertainty, i.Description);
+
+    /// <summary>The least confidence a printed report lists: what rounds to 0.1 % (below it the line would read 0.0 %).</summary>
+    public const double ShownConfidence = 0.0005;
 
     /// <summary>Shown for a description field left empty.</summary>
     public const string NotRecorded = "not recorded";

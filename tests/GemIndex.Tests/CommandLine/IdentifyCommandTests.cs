@@ -28,16 +28,19 @@ public class IdentifyCommandTests
         Assert.Equal(2, lines.Length);
         using var quartz = JsonDocument.Parse(lines[0]);
         Assert.Equal("Q-1", quartz.RootElement.GetProperty("id").GetString());
-        var best = quartz.RootElement.GetProperty("candidates")[0];
-        Assert.Equal("quartz", best.GetProperty("species").GetString());
+        var species = quartz.RootElement.GetProperty("species");
+        Assert.Equal("quartz", species[0].GetProperty("species").GetString());
+        var best = species[0].GetProperty("candidates")[0];
+        Assert.Equal(1, best.GetProperty("rank").GetInt32());
         Assert.Equal("natural", best.GetProperty("origin").GetString());
         Assert.False(quartz.RootElement.GetProperty("no_good_match").GetBoolean());
-        double sum = quartz.RootElement.GetProperty("candidates").EnumerateArray().Sum(c => c.GetProperty("confidence").GetDouble());
-        Assert.InRange(sum, 0, 1);
-        Assert.True(quartz.RootElement.GetProperty("candidates").GetArrayLength() <= 10);
+        var candidates = species.EnumerateArray().SelectMany(x => x.GetProperty("candidates").EnumerateArray()).ToList();
+        Assert.InRange(candidates.Sum(c => c.GetProperty("confidence").GetDouble()), 0, 1);
+        Assert.InRange(species.EnumerateArray().Sum(x => x.GetProperty("confidence").GetDouble()), 0, 1);
+        Assert.True(candidates.Count <= 10);
         Assert.Equal(JsonValueKind.Array, quartz.RootElement.GetProperty("warnings").ValueKind);
         using var diamond = JsonDocument.Parse(lines[1]);
-        Assert.Equal("diamond", diamond.RootElement.GetProperty("candidates")[0].GetProperty("species").GetString());
+        Assert.Equal("diamond", diamond.RootElement.GetProperty("species")[0].GetProperty("species").GetString());
     }
 
     [Fact]
@@ -61,9 +64,9 @@ public class IdentifyCommandTests
         Assert.Equal(2, lines[1].GetProperty("line").GetInt32());
         Assert.StartsWith("$: not valid JSON", lines[1].GetProperty("error").GetString());
         Assert.Equal("refractometer.readings[0]: high edge is 1.544; allowed: not below the low edge 1.5530 of the same step.", lines[2].GetProperty("error").GetString());
-        Assert.Equal("polariscope: 'sparkly' is not one of singly_refractive | doubly_refractive | aggregate | anomalous", lines[3].GetProperty("error").GetString());
+        Assert.Equal("polariscope: 'sparkly' is not one of singly_refractive | doubly_refractive | aggregate | anomalous.", lines[3].GetProperty("error").GetString());
         Assert.Equal("sg.water_ct: weight in water is 1.2 ct; allowed: 0 to below the weight in air 1 ct.", lines[4].GetProperty("error").GetString());
-        Assert.Equal("sg: must be a number or {\"air_ct\", \"water_ct\", \"water_c\"}", lines[5].GetProperty("error").GetString());
+        Assert.Equal("sg: must be a number or {\"air_ct\", \"water_ct\", \"water_c\"}, not the text \"2.65\".", lines[5].GetProperty("error").GetString());
         Assert.Equal("F", lines[6].GetProperty("id").GetString());
     }
 
@@ -88,7 +91,7 @@ public class IdentifyCommandTests
         using var run = new CommandRun();
         var (exit, _, error) = Identify(run, "--edge", "0:1,544/1.553");
         Assert.Equal(3, exit);
-        Assert.Contains("--edge #1 low edge: '1,544' has a comma", error, StringComparison.Ordinal);
+        Assert.Contains("--edge #1: low: '1,544' has a comma", error, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -101,5 +104,151 @@ public class IdentifyCommandTests
         Assert.True(exit == 0, error);
         Assert.Contains("uniaxial negative", output, StringComparison.Ordinal);
         Assert.DoesNotContain("undetermined", output, StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("0")]
+    [InlineData("-1")]
+    [InlineData("51")]
+    [InlineData("500")]
+    [InlineData("ten")]
+    public void Candidates_outside_1_to_50_are_an_error_naming_the_range_never_a_clamp(string count)
+    {
+        using var run = new CommandRun();
+        var (exit, _, error) = Identify(run, "--sg", "2.65", "--candidates", count);
+        Assert.Equal(3, exit);
+        Assert.Contains("--candidates", error, StringComparison.Ordinal);
+        Assert.Contains("allowed: 1–50", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Fifty_candidates_are_allowed()
+    {
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--sg", "2.65", "--candidates", "50", "--json");
+        Assert.True(exit == 0, error);
+        using var doc = JsonDocument.Parse(output);
+        Assert.True(doc.RootElement.GetProperty("species").EnumerateArray().Sum(s => s.GetProperty("candidates").GetArrayLength()) > 10);
+    }
+
+    [Theory]
+    [InlineData("--in-air-ct", "3.12", "sg.water_ct")]
+    [InlineData("--water-c", "1e308", "--water-c")]
+    [InlineData("--lines", "", "--lines")]
+    [InlineData("--polariscope", "", "--polariscope")]
+    [InlineData("--colour", " ", "--colour")]
+    [InlineData("--liquid-limit", "1.81", "--liquid-limit")]
+    public void Values_given_but_unusable_or_unused_are_refused(string option, string value, string named)
+    {
+        using var run = new CommandRun();
+        var (exit, _, error) = Identify(run, "--thermal-probe", "negative", option, value);
+        Assert.Equal(3, exit);
+        Assert.Contains(named == "sg.water_ct" ? "--in-water-ct" : named, error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void An_edge_reading_with_over_limit_and_a_high_edge_is_an_error_naming_both()
+    {
+        using var run = new CommandRun();
+        var (exit, _, error) = Identify(run, "--edge", "0:1.544/1.553", "--over-limit");
+        Assert.Equal(3, exit);
+        Assert.Contains("--over-limit", error, StringComparison.Ordinal);
+        Assert.Contains("refractometer.readings[0]", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void An_edge_above_the_usual_liquid_is_refused_as_the_text_UI_refuses_it()
+    {
+        using var run = new CommandRun();
+        var (exit, _, error) = Identify(run, "--edge", "0:1.81", "--edge", "90:1.81");
+        Assert.Equal(3, exit);
+        Assert.Contains("--edge #1: edge reading 1.81 is above the liquid limit 1.790", error, StringComparison.Ordinal);
+        var (ok, _, okError) = Identify(run, "--edge", "0:1.81", "--edge", "90:1.81", "--liquid-limit", "1.81");
+        Assert.True(ok == 0, okError);
+    }
+
+    [Fact]
+    public void A_bad_value_is_echoed_at_most_80_characters()
+    {
+        using var run = new CommandRun();
+        var (exit, _, error) = Identify(run, "--sg", new string('9', 50) + new string('x', 100_000));
+        Assert.Equal(3, exit);
+        Assert.True(error.Length < 400, $"{error.Length} characters");
+    }
+
+    [Fact]
+    public void An_empty_batch_path_is_an_error_not_a_crash()
+    {
+        using var run = new CommandRun();
+        var (exit, _, error) = Identify(run, "--batch", "");
+        Assert.Equal(3, exit);
+        Assert.Contains("--batch: the path is empty", error, StringComparison.Ordinal);
+        var (folder, _, folderError) = Identify(run, "--batch", run.Folder);
+        Assert.Equal(4, folder);
+        Assert.Contains("is a folder", folderError, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Every_batch_line_is_answered_a_lone_surrogate_too_many_steps_and_an_overlong_line_each_get_their_error()
+    {
+        using var run = new CommandRun();
+        string steps = string.Join(",", Enumerable.Range(0, 1001).Select(_ => """{"low":1.544}"""));
+        string path = Path.Combine(run.Folder, "hard.jsonl");
+        File.WriteAllText(path, string.Join("\n",
+            "\uFEFF" + """{"id":"first","sg":2.65}""",
+            """{"id":"\ud800","sg":2.65}""",
+            """{"id":"steps","refractometer":{"readings":[""" + steps + "]}}",
+            """{"id":"long","colour":" """ + new string('x', GemIndex.Data.Batch.BatchLineReader.MostCharacters) + "\"}",
+            """{"id":"last","sg":2.65}""") + "\n");
+        var (exit, output, _) = Identify(run, "--batch", path);
+        Assert.Equal(3, exit);
+        var lines = output.Split('\n', StringSplitOptions.RemoveEmptyEntries).Select(l => JsonDocument.Parse(l).RootElement).ToArray();
+        Assert.Equal(5, lines.Length);
+        Assert.Equal("first", lines[0].GetProperty("id").GetString());
+        Assert.Equal("id", lines[1].GetProperty("errors")[0].GetProperty("field").GetString());
+        Assert.Equal("refractometer.readings", lines[2].GetProperty("errors")[0].GetProperty("field").GetString());
+        Assert.Contains("longer than", lines[3].GetProperty("error").GetString(), StringComparison.Ordinal);
+        Assert.Equal("last", lines[4].GetProperty("id").GetString());
+    }
+
+    private const string Inserted = "{}[]\":,0-9.e\\u";
+
+    [Fact]
+    public void A_batch_of_mutated_lines_answers_every_non_blank_line_without_a_crash()
+    {
+        // 600 lines made by cutting, repeating and swapping characters of good lines (a seeded generator: the same lines every run).
+        string[] seeds =
+        [
+            """{"id":"Q","refractometer":{"readings":[{"rotation_deg":0,"low":1.544,"high":1.553},{"rotation_deg":90,"low":1.544,"high":1.548}]},"sg":2.65}""",
+            """{"id":"W","sg":{"air_ct":3.12,"water_ct":1.943,"water_c":22},"heavy_liquids":[{"density":2.89,"result":"floats"}],"absorption_nm":[694,668]}""",
+            """{"id":"D","refractometer":{"over_limit":true},"thermal_probe":"positive","dispersion":{"nB":2.407,"nG":2.451},"colour":"colourless"}""",
+        ];
+        var random = new Random(11);
+        var lines = new List<string>();
+        for (int i = 0; i < 600; i++)
+        {
+            var chars = seeds[i % seeds.Length].ToList();
+            for (int m = random.Next(1, 6); m > 0; m--)
+            {
+                int at = random.Next(chars.Count);
+                switch (random.Next(4))
+                {
+                    case 0: chars.RemoveAt(at); break;
+                    case 1: chars.Insert(at, Inserted[random.Next(Inserted.Length)]); break;
+                    case 2: chars[at] = (char)random.Next(32, 127); break;
+                    default: chars.InsertRange(at, chars.GetRange(at, Math.Min(8, chars.Count - at))); break;
+                }
+            }
+            lines.Add(new string([.. chars]).Replace("\n", " ", StringComparison.Ordinal));
+        }
+        using var run = new CommandRun();
+        string path = Path.Combine(run.Folder, "fuzz.jsonl");
+        File.WriteAllText(path, string.Join("\n", lines) + "\n");
+        var (exit, output, error) = Identify(run, "--batch", path);
+        Assert.True(exit is 0 or 3, error);
+        string[] answers = output.Split('\n', StringSplitOptions.RemoveEmptyEntries);
+        Assert.Equal(lines.Count(l => !string.IsNullOrWhiteSpace(l)), answers.Length);
+        Assert.All(answers, a => JsonDocument.Parse(a).Dispose());
+        Assert.DoesNotContain("could not be ranked", output, StringComparison.Ordinal);
     }
 }

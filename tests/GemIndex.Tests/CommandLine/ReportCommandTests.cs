@@ -29,7 +29,7 @@ public sealed class ReportCommandTests : IDisposable
     [Theory]
     [InlineData("html", "<!DOCTYPE html>")]
     [InlineData("markdown", "# Stone report: lot 7 / 2")]
-    [InlineData("json", "\"report_version\": 1")]
+    [InlineData("json", "\"report_version\": 2")]
     public void Report_stone_writes_the_chosen_format_to_the_output_file(string format, string expected)
     {
         string output = Path.Combine(_dir, "report.out");
@@ -90,5 +90,65 @@ public sealed class ReportCommandTests : IDisposable
         var (exit, _, err) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine), option, value);
         Assert.Equal(ExitCodes.Usage, exit);
         Assert.Contains(value, err);
+    }
+
+    [Theory]
+    [InlineData("stone", "--readings", "")]
+    [InlineData("stone", "--workbook", "")]
+    [InlineData("workbook", "--workbook", "")]
+    public void An_empty_path_is_an_error_naming_the_option_not_a_crash(string command, string option, string path)
+    {
+        string[] args = command == "stone" && option == "--workbook" ? ["report", command, option, path, "--stone", "x"] : ["report", command, option, path];
+        var (exit, _, err) = Run(args);
+        Assert.Equal(ExitCodes.BadInput, exit);
+        Assert.Contains($"{option}: the path is empty", err);
+    }
+
+    [Fact]
+    public void A_missing_file_or_a_folder_is_a_plain_message()
+    {
+        var (exit, _, err) = Run("report", "stone", "--readings", Path.Combine(_dir, "nowhere.jsonl"));
+        Assert.Equal(ExitCodes.BadFile, exit);
+        Assert.Contains("there is no file", err);
+        var (folder, _, folderErr) = Run("report", "stone", "--readings", _dir);
+        Assert.Equal(ExitCodes.BadFile, folder);
+        Assert.Contains("is a folder, not a file", folderErr);
+    }
+
+    [Fact]
+    public void A_reference_with_a_terminal_escape_sequence_is_escaped_in_the_Markdown_on_standard_output()
+    {
+        string line = ReportFixtures.QuartzLine.Replace("\"id\":\"", "\"id\":\"\\u001b[2J", StringComparison.Ordinal);
+        var (exit, stdout, err) = Run("report", "stone", "--readings", Batch(line));
+        Assert.True(exit == ExitCodes.Ok, err);
+        Assert.DoesNotContain("\u001b", stdout);
+        Assert.Contains("\\u001b\\[2J", stdout);
+    }
+
+    [Fact]
+    public void The_header_carries_the_date_given_the_examiner_and_the_program_and_catalogue_versions()
+    {
+        var (exit, stdout, err) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine), "--date", "2026-03-14", "--examiner", "A. Example");
+        Assert.True(exit == ExitCodes.Ok, err);
+        Assert.Contains("**Date:** 2026-03-14", stdout);
+        Assert.Contains("**Examiner:** A. Example", stdout);
+        Assert.Contains("**Program:** gemindex ", stdout);
+        Assert.Contains("**Catalogue:** ", stdout);
+        var (json, jsonOut, _) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine), "--date", "2026-03-14", "--format", "json");
+        Assert.Equal(ExitCodes.Ok, json);
+        using var doc = System.Text.Json.JsonDocument.Parse(jsonOut);
+        Assert.Equal("2026-03-14", doc.RootElement.GetProperty("header").GetProperty("date").GetString());
+        Assert.Equal(System.Text.Json.JsonValueKind.Null, doc.RootElement.GetProperty("header").GetProperty("examiner").ValueKind);
+    }
+
+    [Theory]
+    [InlineData("--date", "14/03/2026")]
+    [InlineData("--date", "2026-02-30")]
+    [InlineData("--examiner", " ")]
+    public void A_bad_date_or_an_empty_examiner_is_an_error(string option, string value)
+    {
+        var (exit, _, err) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine), option, value);
+        Assert.Equal(ExitCodes.BadInput, exit);
+        Assert.Contains(option, err);
     }
 }

@@ -51,7 +51,7 @@ internal static class ReportFixtures
     }
 
     public static IdentificationResult Identify(StoneSheet sheet) =>
-        new Identifier(Catalogue).Identify(StoneReadingsConverter.ToBenchSheet(sheet.Readings));
+        GemIndex.Core.Bench.BenchIdentification.Identify(new Identifier(Catalogue), StoneReadingsConverter.ToReadings(sheet.Readings), new()).Result!;
 
     public static StoneReport Report(string line, string? reference = null)
     {

@@ -27,7 +27,7 @@ public class StoneReportTests
         Assert.Contains("lot 7 / 2", text);
         foreach (var c in report.Candidates) Assert.Contains(c.Name, text);
         string confidence = format == "json"
-            ? report.Candidates[0].Confidence.ToString("R", System.Globalization.CultureInfo.InvariantCulture)
+            ? GemIndex.Cli.Identification.ResultDocument.Probability(report.Candidates[0].Confidence).ToString("R", System.Globalization.CultureInfo.InvariantCulture)
             : ReportNumbers.Percent(report.Candidates[0].Confidence);
         Assert.Contains(confidence, text);
         foreach (string caution in ReportCautions.All) Assert.Contains(format == "html" ? HtmlReport.E(caution) : caution, text);
@@ -64,12 +64,15 @@ public class StoneReportTests
         var root = doc.RootElement;
         Assert.Equal("lot 7 / 2", root.GetProperty("stone").GetProperty("reference").GetString());
         Assert.Equal(2.65, root.GetProperty("stone").GetProperty("weight_carats").GetDouble());
-        var first = root.GetProperty("candidates")[0];
-        Assert.Equal("quartz", first.GetProperty("material").GetString());
-        Assert.Equal(report.Candidates[0].Confidence, first.GetProperty("confidence").GetDouble());
+        var species = root.GetProperty("result").GetProperty("species")[0];
+        Assert.Equal("quartz", species.GetProperty("species").GetString());
+        var first = species.GetProperty("candidates")[0];
+        Assert.Equal("quartz", first.GetProperty("name").GetString());
+        Assert.Equal(1, first.GetProperty("rank").GetInt32());
+        Assert.Equal(Math.Floor(report.Candidates[0].Confidence * 10000) / 10000, first.GetProperty("confidence").GetDouble());
         Assert.Equal(4, root.GetProperty("readings").GetProperty("rotation_series").GetArrayLength());
         Assert.Equal(4, root.GetProperty("cautions").GetArrayLength());
-        Assert.Equal(JsonValueKind.False, root.GetProperty("no_good_match").ValueKind);
+        Assert.Equal(JsonValueKind.False, root.GetProperty("result").GetProperty("no_good_match").ValueKind);
     }
 
     [Fact]
@@ -82,7 +85,7 @@ public class StoneReportTests
         Assert.Contains("No good match", MarkdownReport.Write(report));
         Assert.Contains("No good match", HtmlReport.Write(report));
         using var doc = JsonDocument.Parse(JsonReport.Write(report));
-        Assert.True(doc.RootElement.GetProperty("no_good_match").GetBoolean());
+        Assert.True(doc.RootElement.GetProperty("result").GetProperty("no_good_match").GetBoolean());
     }
 
     private static string Render(string format, StoneReport report) => format switch
@@ -91,4 +94,16 @@ public class StoneReportTests
         "json" => JsonReport.Write(report),
         _ => MarkdownReport.Write(report),
     };
+
+    [Fact]
+    public void A_printed_report_leaves_out_candidates_that_would_read_0_0_percent_and_the_JSON_result_keeps_them()
+    {
+        var report = ReportFixtures.Report(ReportFixtures.QuartzLine);
+        Assert.All(report.Candidates, c => Assert.NotEqual("0.0 %", ReportNumbers.Percent(c.Confidence)));
+        Assert.DoesNotContain("| 0.0 % |", MarkdownReport.Write(report));
+        // The quartz readings leave the fixture's other materials far below 0.05 %: they are in the result, not on paper.
+        int tiny = report.Result.Candidates.Count(c => c.Confidence < StoneReport.ShownConfidence);
+        Assert.True(tiny > 0);
+        Assert.Equal(report.Result.Candidates.Count - tiny, report.Candidates.Count);
+    }
 }

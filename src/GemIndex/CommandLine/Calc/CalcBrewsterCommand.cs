@@ -18,10 +18,7 @@ internal static class CalcBrewsterCommand
         var stone = CalcOptions.Number("--index", "Index of the stone (no unit): gives the angle");
         var angle = CalcOptions.Number("--angle", "Measured Brewster angle in degrees: gives the index");
         var angleUncertainty = CalcOptions.Number("--angle-uncertainty", "Standard uncertainty of --angle, in degrees", 0);
-        var json = CalcOptions.Json();
-        var command = new Command("brewster", "Brewster (polarising) angle from an index, or an index from that angle")
-            { surrounding, stone, angle, angleUncertainty, json };
-        command.SetAction(pr => Guard(pr, output =>
+        return CalcBuilder.Command("brewster", "Brewster (polarising) angle from an index, or an index from that angle", [surrounding, stone, angle, angleUncertainty], pr =>
         {
             var medium = Named("--surrounding", () => new RefractiveIndex(pr.GetValue(surrounding)));
             BrewsterResult result = (pr.GetValue(stone), pr.GetValue(angle)) switch
@@ -31,13 +28,10 @@ internal static class CalcBrewsterCommand
                     () => Angle.FromDegrees(degrees, pr.GetValue(angleUncertainty)))),
                 _ => throw Input("give exactly one of --index (to get the angle) or --angle (to get the index)"),
             };
-            if (pr.GetValue(json)) CalcJson.Write(output, result);
-            else output.WriteLine($"in {Index(result.SurroundingIndex)} {NoUnit}: index " +
+            return CalcAnswer.Of(result, (output, _) => output.WriteLine($"in {Index(result.SurroundingIndex)} {NoUnit}: index " +
                 Index(new RefractiveIndex(result.StoneIndex, result.StoneIndexUncertainty ?? 0)) + $" {NoUnit} ↔ Brewster angle " +
-                Degrees(Angle.FromDegrees(result.BrewsterAngleDegrees, result.BrewsterAngleUncertaintyDegrees ?? 0)));
-            return ExitCodes.Ok;
-        }));
-        return command;
+                Degrees(Angle.FromDegrees(result.BrewsterAngleDegrees, result.BrewsterAngleUncertaintyDegrees ?? 0))));
+        });
     }
 
     private static BrewsterResult FromIndex(RefractiveIndex medium, RefractiveIndex stone)

@@ -14,9 +14,7 @@ internal static class CalcCaratsCommand
     {
         var carats = CalcOptions.Number("--carats", "A mass in metric carats: gives grams");
         var grams = CalcOptions.Number("--grams", "A mass in grams: gives carats");
-        var json = CalcOptions.Json();
-        var command = new Command("carats", "Convert metric carats to grams or grams to carats (1 ct = 0.2 g)") { carats, grams, json };
-        command.SetAction(pr => Guard(pr, output =>
+        return CalcBuilder.Command("carats", "Convert metric carats to grams or grams to carats (1 ct = 0.2 g)", [carats, grams], pr =>
         {
             Mass mass = (pr.GetValue(carats), pr.GetValue(grams)) switch
             {
@@ -25,10 +23,7 @@ internal static class CalcCaratsCommand
                 _ => throw Input("give exactly one of --carats or --grams"),
             };
             var result = new CaratsResult(mass.Carats, mass.Grams);
-            if (pr.GetValue(json)) CalcJson.Write(output, result);
-            else output.WriteLine($"{Carats(result.Carats)} = {Grams(result.Grams)}");
-            return ExitCodes.Ok;
-        }));
-        return command;
+            return CalcAnswer.Of(result, (output, _) => output.WriteLine($"{Carats(result.Carats)} = {Grams(result.Grams)}"));
+        });
     }
 }

@@ -15,20 +15,15 @@ internal static class CalcCriticalAngleCommand
     {
         var denser = CalcOptions.Number("--denser", "Index of the denser medium, e.g. the stone (no unit)", required: true);
         var rarer = CalcOptions.Number("--rarer", "Index of the rarer medium (no unit); default 1.000, air", 1.0);
-        var json = CalcOptions.Json();
-        var command = new Command("critical-angle", "Critical angle for total internal reflection") { denser, rarer, json };
-        command.SetAction(pr => Guard(pr, output =>
+        return CalcBuilder.Command("critical-angle", "Critical angle for total internal reflection", [denser, rarer], pr =>
         {
             var high = Named("--denser", () => new RefractiveIndex(pr.GetValue(denser)!.Value));
             var low = Named("--rarer", () => new RefractiveIndex(pr.GetValue(rarer)));
             Angle? angle = CriticalAngle.Between(high, low);
             var result = new CriticalAngleResult(high.Value, low.Value, angle?.Degrees);
-            if (pr.GetValue(json)) CalcJson.Write(output, result);
-            else output.WriteLine(result.CriticalAngleDegrees is { } degrees
+            return CalcAnswer.Of(result, (output, _) => output.WriteLine(result.CriticalAngleDegrees is { } degrees
                 ? $"critical angle from {Index(high)} into {Index(low)} {NoUnit}: {Degrees(degrees)}"
-                : $"no critical angle: {Index(high)} is not denser than {Index(low)} {NoUnit}, so light is never totally reflected");
-            return ExitCodes.Ok;
-        }));
-        return command;
+                : $"no critical angle: {Index(high)} is not denser than {Index(low)} {NoUnit}, so light is never totally reflected"));
+        });
     }
 }

@@ -33,29 +33,22 @@ internal static class CalcDispersionCommand
         var wavelength = CalcOptions.Number("--wavelength", "Wavelength of --reading, in nm");
         var indexD = CalcOptions.Number("--nd", "The material's index at 589.3 nm (no unit), for the conversion");
         var gMinusB = CalcOptions.Number("--g-minus-b", "The material's dispersion nG − nB (no unit), for the conversion");
-        var json = CalcOptions.Json();
-        var command = new Command("dispersion", "Fit a dispersion model to indices at several wavelengths, or convert a reading to 589.3 nm")
-            { points, model, terms, reading, wavelength, indexD, gMinusB, json };
-        command.SetAction(pr => Guard(pr, output =>
+        return CalcBuilder.Command("dispersion", "Fit a dispersion model to indices at several wavelengths, or convert a reading to 589.3 nm", [points, model, terms, reading, wavelength, indexD, gMinusB], pr =>
         {
             bool fit = pr.GetValue(points) is { Length: > 0 }, convert = pr.GetValue(reading) is not null;
             if (fit == convert) throw Input("give either --point pairs (to fit a model) or --reading (to convert it to 589.3 nm)");
             if (fit)
             {
                 DispersionResult result = Fit(pr.GetValue(points)!, pr.GetValue(model)!, pr.GetResult(terms) is null ? null : pr.GetValue(terms));
-                if (pr.GetValue(json)) CalcJson.Write(output, result);
-                else Write(output, result);
+                return CalcAnswer.Of(result, Write);
             }
             else
             {
                 ConversionResult result = Convert(pr.GetValue(reading)!.Value, Required(pr, wavelength), Required(pr, indexD), Required(pr, gMinusB));
-                if (pr.GetValue(json)) CalcJson.Write(output, result);
-                else output.WriteLine($"{Index(result.Reading)} {NoUnit} at {Nanometres(result.ReadAtNanometres)} → {Index(result.ConvertedIndex)} {NoUnit} " +
-                    $"at {Nanometres(result.ConvertedToNanometres)} (Cauchy model from nD {Index(result.IndexAtSodiumD)}, nG − nB {Index(result.GMinusB)})");
+                return CalcAnswer.Of(result, (output, _) => output.WriteLine($"{Index(result.Reading)} {NoUnit} at {Nanometres(result.ReadAtNanometres)} → {Index(result.ConvertedIndex)} {NoUnit} " +
+                    $"at {Nanometres(result.ConvertedToNanometres)} (Cauchy model from nD {Index(result.IndexAtSodiumD)}, nG − nB {Index(result.GMinusB)})"));
             }
-            return ExitCodes.Ok;
-        }));
-        return command;
+        });
     }
 
     private static double Required(ParseResult pr, Option<double?> option) =>

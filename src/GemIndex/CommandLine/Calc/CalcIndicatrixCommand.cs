@@ -28,19 +28,13 @@ internal static class CalcIndicatrixCommand
         var epsilon = CalcOptions.Number("--epsilon", "Extraordinary index ε (no unit)");
         var facet = CalcOptions.Tuple("--facet", "Facet normal X,Y,Z in the indicatrix axes (α along X, γ along Z)", ',', 3);
         var step = CalcOptions.Number("--step", "Rotation step of the simulated series, in degrees; default 15", 15);
-        var json = CalcOptions.Json();
-        var command = new Command("indicatrix", "Birefringence, optic sign and 2Vz from principal indices; optional simulated rotation on a facet")
-            { alpha, beta, gamma, omega, epsilon, facet, step, json };
-        command.SetAction(pr => Guard(pr, output =>
+        return CalcBuilder.Command("indicatrix", "Birefringence, optic sign and 2Vz from principal indices; optional simulated rotation on a facet", [alpha, beta, gamma, omega, epsilon, facet, step], pr =>
         {
             IndicatrixModel indicatrix = Build(pr.GetValue(alpha), pr.GetValue(beta), pr.GetValue(gamma), pr.GetValue(omega), pr.GetValue(epsilon));
             IndicatrixResult result = Describe(indicatrix, pr.GetValue(omega), pr.GetValue(epsilon));
             if (pr.GetValue(facet) is { Length: 3 } xyz) result = Rotate(result, indicatrix, xyz, pr.GetValue(step));
-            if (pr.GetValue(json)) CalcJson.Write(output, result);
-            else Write(output, result);
-            return ExitCodes.Ok;
-        }));
-        return command;
+            return CalcAnswer.Of(result, Write);
+        });
     }
 
     private static IndicatrixModel Build(double? alpha, double? beta, double? gamma, double? omega, double? epsilon) =>

@@ -18,10 +18,7 @@ internal static class CalcPrismCommand
         var apexUncertainty = CalcOptions.Number("--apex-uncertainty", "Standard uncertainty of --apex, in degrees", 0);
         var deviation = CalcOptions.Number("--deviation", "Minimum deviation angle, in degrees", required: true);
         var deviationUncertainty = CalcOptions.Number("--deviation-uncertainty", "Standard uncertainty of --deviation, in degrees", 0);
-        var json = CalcOptions.Json();
-        var command = new Command("prism", "Refractive index by the minimum-deviation method")
-            { apex, apexUncertainty, deviation, deviationUncertainty, json };
-        command.SetAction(pr => Guard(pr, output =>
+        return CalcBuilder.Command("prism", "Refractive index by the minimum-deviation method", [apex, apexUncertainty, deviation, deviationUncertainty], pr =>
         {
             Angle a = Named("--apex, --apex-uncertainty", () => Angle.FromDegrees(pr.GetValue(apex)!.Value, pr.GetValue(apexUncertainty)));
             Angle d = Named("--deviation, --deviation-uncertainty",
@@ -29,10 +26,7 @@ internal static class CalcPrismCommand
             RefractiveIndex n = Named("--apex, --deviation", () => MinimumDeviation.IndexFrom(a, d));
             var result = new PrismResult(a.Degrees, a.StandardUncertaintyDegrees, d.Degrees, d.StandardUncertaintyDegrees,
                 n.Value, n.StandardUncertainty);
-            if (pr.GetValue(json)) CalcJson.Write(output, result);
-            else output.WriteLine($"apex {Degrees(a)}, minimum deviation {Degrees(d)}: refractive index {Index(n)} {NoUnit}");
-            return ExitCodes.Ok;
-        }));
-        return command;
+            return CalcAnswer.Of(result, (output, _) => output.WriteLine($"apex {Degrees(a)}, minimum deviation {Degrees(d)}: refractive index {Index(n)} {NoUnit}"));
+        });
     }
 }

@@ -22,10 +22,7 @@ internal static class CalcReflectanceCommand
         var incidence = CalcOptions.Number("--incidence", "Angle of incidence in degrees (0–90); default 0, normal incidence", 0);
         var measured = CalcOptions.Number("--reflectance-percent", "Measured normal-incidence reflectance in %: gives the index");
         var measuredUncertainty = CalcOptions.Number("--reflectance-uncertainty-percent", "Standard uncertainty of the reflectance, in %", 0);
-        var json = CalcOptions.Json();
-        var command = new Command("reflectance", "Fresnel reflectance from indices, or an index from normal-incidence reflectance")
-            { from, to, incidence, measured, measuredUncertainty, json };
-        command.SetAction(pr => Guard(pr, output =>
+        return CalcBuilder.Command("reflectance", "Fresnel reflectance from indices, or an index from normal-incidence reflectance", [from, to, incidence, measured, measuredUncertainty], pr =>
         {
             var n1 = Named("--n1", () => new RefractiveIndex(pr.GetValue(from)));
             ReflectanceResult result = (pr.GetValue(to), pr.GetValue(measured)) switch
@@ -35,11 +32,8 @@ internal static class CalcReflectanceCommand
                 (null, { } percent) => FromReflectance(n1, percent, pr.GetValue(measuredUncertainty)),
                 _ => throw Input("give exactly one of --n2 (to get the reflectance) or --reflectance-percent (to get the index)"),
             };
-            if (pr.GetValue(json)) CalcJson.Write(output, result);
-            else Write(output, result);
-            return ExitCodes.Ok;
-        }));
-        return command;
+            return CalcAnswer.Of(result, Write);
+        });
     }
 
     private static ReflectanceResult FromIndex(RefractiveIndex n1, RefractiveIndex n2, Angle incidence)

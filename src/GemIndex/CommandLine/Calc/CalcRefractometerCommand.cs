@@ -27,10 +27,7 @@ internal static class CalcRefractometerCommand
         var edge = CalcOptions.Number("--edge-angle", "Shadow-edge angle in the glass, in degrees: gives the index");
         var index = CalcOptions.Number("--index", "Index of a stone (no unit): gives its edge angle, or over the limit");
         var standards = CalcOptions.Tuples("--standard", "A standard's known index and its raw reading, KNOWN:READ (repeat for more)", ':', 2);
-        var json = CalcOptions.Json();
-        var command = new Command("refractometer", "Hemicylinder refractometer: readable range, edge angle ↔ index, calibration offset")
-            { glass, liquid, edge, index, standards, json };
-        command.SetAction(pr => Guard(pr, output =>
+        return CalcBuilder.Command("refractometer", "Hemicylinder refractometer: readable range, edge angle ↔ index, calibration offset", [glass, liquid, edge, index, standards], pr =>
         {
             RefractometerProfile profile = Named("--glass, --liquid", () => new RefractometerProfile(
                 new RefractiveIndex(pr.GetValue(glass)), new RefractiveIndex(pr.GetValue(liquid)), ReferenceWavelength, 0.001));
@@ -41,11 +38,8 @@ internal static class CalcRefractometerCommand
             if (pr.GetValue(edge) is { } edgeDegrees) result = FromEdge(result, profile, edgeDegrees);
             if (pr.GetValue(index) is { } stone) result = FromIndex(result, profile, stone);
             if (pr.GetValue(standards) is { Length: > 0 } pairs) result = Calibrate(result, profile, pairs);
-            if (pr.GetValue(json)) CalcJson.Write(output, result);
-            else Write(output, result);
-            return ExitCodes.Ok;
-        }));
-        return command;
+            return CalcAnswer.Of(result, Write);
+        });
     }
 
     // The profile needs a wavelength; none of these results depend on it.

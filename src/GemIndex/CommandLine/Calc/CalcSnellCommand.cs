@@ -17,9 +17,7 @@ internal static class CalcSnellCommand
         var from = CalcOptions.Number("--n1", "Index of the medium the light comes from (no unit), e.g. 1.000 for air", required: true);
         var to = CalcOptions.Number("--n2", "Index of the medium the light enters (no unit)", required: true);
         var incidence = CalcOptions.Number("--incidence", "Angle of incidence from the normal, in degrees (0–90)", required: true);
-        var json = CalcOptions.Json();
-        var command = new Command("snell", "Refraction angle by Snell's law, or total internal reflection") { from, to, incidence, json };
-        command.SetAction(pr => Guard(pr, output =>
+        return CalcBuilder.Command("snell", "Refraction angle by Snell's law, or total internal reflection", [from, to, incidence], pr =>
         {
             var n1 = Named("--n1", () => new RefractiveIndex(pr.GetValue(from)!.Value));
             var n2 = Named("--n2", () => new RefractiveIndex(pr.GetValue(to)!.Value));
@@ -28,11 +26,8 @@ internal static class CalcSnellCommand
             Angle? critical = CriticalAngle.Between(n1, n2);
             var result = new SnellResult(n1.Value, n2.Value, theta.Degrees, refraction.IsTotallyReflected,
                 refraction.TryGetAngle(out Angle refracted) ? refracted.Degrees : null, critical?.Degrees);
-            if (pr.GetValue(json)) CalcJson.Write(output, result);
-            else Write(output, result);
-            return ExitCodes.Ok;
-        }));
-        return command;
+            return CalcAnswer.Of(result, Write);
+        });
     }
 
     private static void Write(TextWriter output, SnellResult r)

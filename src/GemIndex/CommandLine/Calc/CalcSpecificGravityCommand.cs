@@ -1,4 +1,5 @@
 using System.CommandLine;
+using GemIndex.Core.Bench;
 using GemIndex.Core.Gravity;
 using GemIndex.Core.Quantities;
 using static GemIndex.Cli.CommandLine.Calc.CalcFailure;
@@ -8,7 +9,8 @@ namespace GemIndex.Cli.CommandLine.Calc;
 
 /// <summary>
 /// <c>calc sg</c>: specific gravity by hydrostatic weighing (weights in air and in water, water temperature, balance
-/// resolution) with its uncertainty; and the density of water at that temperature.
+/// resolution) with its uncertainty, by the same rules as <c>identify</c> (each weighing ± the bench's weighing
+/// uncertainty, <see cref="BenchDefaults"/>); and the density of water at that temperature.
 /// </summary>
 internal static class CalcSpecificGravityCommand
 {
@@ -22,12 +24,9 @@ internal static class CalcSpecificGravityCommand
         var inWater = CalcOptions.Number("--in-water", "Weight of the stone in water, in --unit");
         var unit = new Option<string>("--unit") { Description = "Unit of the weights and resolution: ct or g (default ct)", DefaultValueFactory = _ => "ct" };
         unit.AcceptOnlyFromAmong("ct", "g");
-        var water = CalcOptions.Number("--water-celsius", "Water temperature in °C (0–40); default 20", 20);
+        var water = CalcOptions.Number("--water-celsius", $"Water temperature in °C (0–40); default {BenchDefaults.WaterCelsius}", BenchDefaults.WaterCelsius);
         var resolution = CalcOptions.Number("--resolution", "Balance resolution (its smallest step), in --unit; adds its rounding uncertainty");
-        var json = CalcOptions.Json();
-        var command = new Command("sg", "Specific gravity by hydrostatic weighing, and the density of water at a temperature")
-            { inAir, inWater, unit, water, resolution, json };
-        command.SetAction(pr => Guard(pr, output =>
+        return CalcBuilder.Command("sg", "Specific gravity by hydrostatic weighing, and the density of water at a temperature", [inAir, inWater, unit, water, resolution], pr =>
         {
             Temperature t = Temperature.FromCelsius(pr.GetValue(water));
             WaterDensity density = Named("--water-celsius", () => WaterDensity.At(t));
@@ -35,18 +34,16 @@ internal static class CalcSpecificGravityCommand
             (double? air, double? inW) = (pr.GetValue(inAir), pr.GetValue(inWater));
             if (air is null != inW is null) throw Input("give both --in-air and --in-water, or neither (for the water density only)");
             if (air is { } a && inW is { } w) result = Weigh(result, pr.GetValue(unit)!, a, w, pr.GetValue(resolution), t);
-            if (pr.GetValue(json)) CalcJson.Write(output, result);
-            else Write(output, result);
-            return ExitCodes.Ok;
-        }));
-        return command;
+            return CalcAnswer.Of(result, Write);
+        });
     }
 
     private static SpecificGravityResult Weigh(SpecificGravityResult result, string unit, double air, double inWater, double? resolution, Temperature t)
     {
         Func<double, Mass> mass = unit == "g" ? g => Mass.FromGrams(g) : ct => Mass.FromCarats(ct);
-        Mass a = Named("--in-air", () => mass(air));
-        Mass w = Named("--in-water", () => mass(inWater));
+        // Each weighing carries Core's bench uncertainty, as in identify and report (BenchDefaults.WeighingUncertaintyCarats).
+        Mass a = Named("--in-air", () => BenchDefaults.Weighed(mass(air).Carats));
+        Mass w = Named("--in-water", () => BenchDefaults.Weighed(mass(inWater).Carats));
         Mass? delta = resolution is { } step ? Named("--resolution", () => mass(step)) : null;
         SpecificGravity sg = delta is { } d
             ? Named("--in-air, --in-water, --resolution", () => HydrostaticWeighing.SpecificGravityOf(a, w, t, d))

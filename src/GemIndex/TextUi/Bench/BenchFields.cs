@@ -1,8 +1,10 @@
+using GemIndex.Core.Bench;
+
 namespace GemIndex.Cli.TextUi.Bench;
 
 /// <summary>
-/// The names of the bench form's fields. Reading fields use the batch format's own paths, so an error from
-/// <c>StoneReadingsConverter</c> lands on the field it names.
+/// The names of the bench form's fields. Reading fields are Core's <see cref="BenchField"/> names, so an error from
+/// <see cref="BenchReader"/> lands on the field it names; the description fields are the form's own.
 /// </summary>
 internal static class BenchFields
 {
@@ -11,34 +13,34 @@ internal static class BenchFields
     public const string Dimensions = "dimensions";
     public const string Shape = "shape";
     public const string CuttingStyle = "cutting_style";
-    public const string Colour = "colour";
+    public const string Colour = BenchField.Colour;
     public const string Transparency = "transparency";
     public const string Notes = "notes";
 
-    public const string Spot = "refractometer.spot";
-    public const string OverLimit = "refractometer.over_limit";
-    public const string LiquidLimit = "refractometer.liquid_limit";
-    public const string LightNm = "refractometer.light_nm";
-    public const string Precision = "refractometer.precision";
-    public const string CalibrationOffset = "refractometer.calibration_offset";
+    public const string Spot = BenchField.Spot;
+    public const string OverLimit = BenchField.OverLimit;
+    public const string LiquidLimit = BenchField.LiquidLimit;
+    public const string LightNm = BenchField.LightNm;
+    public const string Precision = BenchField.Precision;
+    public const string CalibrationOffset = BenchField.CalibrationOffset;
 
-    public const string Sg = "sg";
-    public const string AirCt = "sg.air_ct";
-    public const string WaterCt = "sg.water_ct";
-    public const string WaterC = "sg.water_c";
-    public const string HeavyLiquids = "heavy_liquids";
+    public const string Sg = BenchField.Sg;
+    public const string AirCt = BenchField.AirCt;
+    public const string WaterCt = BenchField.WaterCt;
+    public const string WaterC = BenchField.WaterC;
+    public const string HeavyLiquids = BenchField.HeavyLiquids;
 
-    public const string Polariscope = "polariscope";
-    public const string Pleochroism = "pleochroism";
-    public const string Dispersion = "dispersion";
-    public const string IndexAtB = "dispersion.nB";
-    public const string IndexAtG = "dispersion.nG";
-    public const string ThermalProbe = "thermal_probe";
-    public const string Electrical = "electrical";
-    public const string UvLong = "uv_long";
-    public const string UvShort = "uv_short";
-    public const string Absorption = "absorption_nm";
+    public const string Polariscope = BenchField.Polariscope;
+    public const string Pleochroism = BenchField.Pleochroism;
+    public const string Dispersion = BenchField.Dispersion;
+    public const string IndexAtB = BenchField.IndexAtB;
+    public const string IndexAtG = BenchField.IndexAtG;
+    public const string ThermalProbe = BenchField.ThermalProbe;
+    public const string Electrical = BenchField.Electrical;
+    public const string UvLong = BenchField.UvLong;
+    public const string UvShort = BenchField.UvShort;
+    public const string Absorption = BenchField.Absorption;
 
     /// <summary>The key of one rotation step's row.</summary>
-    public static string Step(int index) => $"refractometer.readings[{index}]";
+    public static string Step(int index) => BenchField.Step(index);
 }

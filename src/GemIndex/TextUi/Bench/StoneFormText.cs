@@ -1,4 +1,5 @@
 using System.Globalization;
+using GemIndex.Core.Bench;
 using GemIndex.Core.Quantities;
 using GemIndex.Data.Batch;
 using GemIndex.Data.Workbook;
@@ -27,13 +28,13 @@ internal static class StoneFormText
         yield return new(BenchFields.LiquidLimit, r.Refractometer?.LiquidLimit is { } ll ? Number(ll) : "");
         yield return new(BenchFields.LightNm, r.Refractometer?.LightNm is { } nm ? Number(nm) : "");
         yield return new(BenchFields.Sg, r.Sg is { } sg ? Number(sg) : "");
-        yield return new(BenchFields.AirCt, r.SgWeighing is { } a ? Number(a.AirCt) : "");
-        yield return new(BenchFields.WaterCt, r.SgWeighing is { } b ? Number(b.WaterCt) : "");
+        yield return new(BenchFields.AirCt, r.SgWeighing?.AirCt is { } a ? Number(a) : "");
+        yield return new(BenchFields.WaterCt, r.SgWeighing?.WaterCt is { } b ? Number(b) : "");
         yield return new(BenchFields.WaterC, r.SgWeighing?.WaterC is { } c ? Number(c) : "");
-        yield return new(BenchFields.HeavyLiquids, string.Join("; ", r.HeavyLiquids.Select(h => $"{Number(h.Density)} {h.Result}")));
+        yield return new(BenchFields.HeavyLiquids, BenchSyntax.HeavyLiquids(r.HeavyLiquids.Select(h => $"{Number(h.Density)} {h.Result}")));
         yield return new(BenchFields.IndexAtB, r.DispersionIndices is { } d ? Number(d.NB) : "");
         yield return new(BenchFields.IndexAtG, r.DispersionIndices is { } g ? Number(g.NG) : "");
-        yield return new(BenchFields.Absorption, r.AbsorptionNm is { } lines ? string.Join(" ", lines.Select(Number)) : "");
+        yield return new(BenchFields.Absorption, r.AbsorptionNm is { } lines ? BenchSyntax.Lines(lines.Select(Number)) : "");
     }
 
     public static IEnumerable<KeyValuePair<string, string>> Choices(StoneReadings r)

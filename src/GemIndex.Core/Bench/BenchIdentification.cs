@@ -1,0 +1,23 @@
+using GemIndex.Core.Identification;
+using GemIndex.Core.Quantities;
+
+namespace GemIndex.Core.Bench;
+
+/// <summary>
+/// The one call from a stone's readings to its result: read every field (<see cref="BenchReader"/>), then rank the
+/// catalogue (<see cref="Identifier"/>). Every front end goes through here.
+/// </summary>
+public static class BenchIdentification
+{
+    /// <summary>Reads and ranks one stone.</summary>
+    /// <exception cref="QuantityOutOfRangeException">The request asks for candidates outside 1–<see cref="BenchDefaults.MostCandidates"/>.</exception>
+    public static BenchOutcome Identify(Identifier identifier, BenchReadings readings, BenchRequest request)
+    {
+        QuantityOutOfRangeException.ThrowIfOutside("candidates", request.Candidates, 1, BenchDefaults.MostCandidates);
+        BenchReading reading = BenchReader.Read(readings);
+        bool rank = reading.Errors.Count == 0 || request.RankDespiteErrors && reading.HasReadings;
+        return new BenchOutcome(reading, rank
+            ? identifier.Identify(reading.Sheet, request.Candidates, request.ExplainTop, request.AdviseNextTest)
+            : null);
+    }
+}

@@ -1,0 +1,306 @@
+using System.Globalization;
+using GemIndex.Core.Gravity;
+using GemIndex.Core.Identification;
+using GemIndex.Core.Observations;
+using GemIndex.Core.Optics.Refractometer;
+using GemIndex.Core.Quantities;
+using GemIndex.Core.Readings;
+
+namespace GemIndex.Core.Bench;
+
+/// <summary>
+/// The one reader of a stone's readings: every value is checked through Core's own types, a bad field is reported
+/// with its name, value, allowed range and a sentence, and left out, so that every error is found in one pass and
+/// the rest of the sheet can still be used. Never throws for bad input. The defaults are <see cref="BenchDefaults"/>.
+/// </summary>
+public static class BenchReader
+{
+    private static readonly HashSet<string> Known = [.. BenchField.All];
+
+    /// <summary>Reads the readings into a sheet and the list of every field's error.</summary>
+    public static BenchReading Read(BenchReadings readings)
+    {
+        var pass = new Pass(readings);
+        return pass.Read();
+    }
+
+    private sealed class Pass(BenchReadings r)
+    {
+        private readonly List<BenchFieldError> _errors = [];
+
+        public BenchReading Read()
+        {
+            foreach (string field in r.Values.Keys.Where(k => !Known.Contains(k)))
+                Error(field, r.Text(field), "the fields of a stone's readings", "is not a field of a stone's readings.");
+            var sheet = new BenchSheet
+            {
+                Id = r.Text(BenchField.Id)?.Trim() ?? "",
+                Refractometer = Refractometer(),
+                SpecificGravity = Gravity(),
+                HeavyLiquids = HeavyLiquids(),
+                Polariscope = Word<PolariscopeReaction>(BenchField.Polariscope),
+                Pleochroism = Word<PleochroismObservation>(BenchField.Pleochroism),
+                Dispersion = Dispersion(),
+                ThermalProbe = Word<ThermalProbeResult>(BenchField.ThermalProbe),
+                Electrical = Word<ElectricalResult>(BenchField.Electrical),
+                UvLong = Word<FluorescenceStrength>(BenchField.UvLong),
+                UvShort = Word<FluorescenceStrength>(BenchField.UvShort),
+                AbsorptionLinesNanometres = Absorption(),
+                Colour = Colour(),
+            };
+            return new BenchReading { Sheet = sheet, Errors = [.. _errors.OrderBy(e => Order(e.Field)).ThenBy(e => e.Field, StringComparer.Ordinal)] };
+        }
+
+        private static int Order(string field)
+        {
+            if (field.StartsWith(BenchField.Readings, StringComparison.Ordinal)) return BenchField.All.Count / 2;
+            int i = BenchField.All.ToList().IndexOf(field);
+            return i < 0 ? BenchField.All.Count : i;
+        }
+
+        private RefractometerObservation? Refractometer()
+        {
+            double? liquidGiven = Number(BenchField.LiquidLimit);
+            bool liquidBad = r.Text(BenchField.LiquidLimit) is not null && liquidGiven is null;
+            double liquid = BenchDefaults.LiquidLimitOrDefault(liquidGiven);
+            var steps = Steps(liquid, checkAboveLiquid: !liquidBad && liquid is >= 1.5 and <= 2.2);
+            double? spot = Number(BenchField.Spot);
+            bool? over = YesNo(BenchField.OverLimit);
+            double? light = Number(BenchField.LightNm), precision = Number(BenchField.Precision), offset = Number(BenchField.CalibrationOffset);
+            RefractometerMethod? method = r.Text(BenchField.Method) is null ? null : Word<RefractometerMethod>(BenchField.Method);
+            bool anyReading = steps.Count > 0 || spot is not null || over == true;
+            bool anyGiven = r.Steps.Count > 0 || r.Text(BenchField.Spot) is not null || over == true;
+            if (!anyGiven)
+            {
+                // Settings with nothing to apply them to: refused, not silently dropped.
+                foreach (string field in new[] { BenchField.Method, BenchField.LiquidLimit, BenchField.LightNm, BenchField.Precision, BenchField.CalibrationOffset })
+                    if (r.Text(field) is { } text && !HasError(field))
+                        Error(field, text, "a value only with a refractometer reading", "is given, but there is no refractometer reading (steps, spot or over the limit) to apply it to.");
+                return null;
+            }
+            if (over == true && r.Text(BenchField.Spot) is not null)
+                Error(BenchField.OverLimit, "yes", "over the limit, or a spot reading, not both",
+                    $"says no edge was seen, but a spot reading {BenchText.Shown(r.Text(BenchField.Spot))} is given too.");
+            if (over == true && r.Steps.FindIndex(s => s.High.Trim().Length > 0) is int withHigh and >= 0)
+                Error(BenchField.OverLimit, "yes", "over the limit only when the high edge was not seen",
+                    $"says the high edge was not seen, but step {withHigh + 1} ({BenchField.Step(withHigh)}) gives one.");
+            if (!anyReading || HasError(BenchField.OverLimit)) return null;
+            var observation = new Dictionary<string, double?>
+            {
+                [BenchField.LightNm] = light, [BenchField.LiquidLimit] = liquidGiven, [BenchField.Precision] = precision,
+                [BenchField.CalibrationOffset] = offset, [BenchField.Spot] = spot,
+            };
+            // Core checks each instrument setting; a refused one is reported at its field and left at its default.
+            for (int attempt = 0; attempt <= observation.Count; attempt++)
+            {
+                try
+                {
+                    var m = method ?? (observation[BenchField.Spot] is not null && steps.Count == 0 ? RefractometerMethod.Spot : RefractometerMethod.Facet);
+                    return new RefractometerObservation(m, steps, observation[BenchField.Spot], over == true,
+                        observation[BenchField.LightNm] ?? BenchDefaults.LightNanometres, BenchDefaults.LiquidLimitOrDefault(observation[BenchField.LiquidLimit]),
+                        observation[BenchField.Precision], observation[BenchField.CalibrationOffset] ?? BenchDefaults.CalibrationOffset);
+                }
+                catch (QuantityOutOfRangeException e)
+                {
+                    string field = e.Quantity switch
+                    {
+                        "light" or "wavelength" => BenchField.LightNm,
+                        "liquid limit" => BenchField.LiquidLimit,
+                        "reading precision" => BenchField.Precision,
+                        "calibration offset" => BenchField.CalibrationOffset,
+                        "spot reading" => BenchField.Spot,
+                        _ => BenchField.Readings,
+                    };
+                    Error(field, r.Text(field) ?? "", e.Allowed, e.Message);
+                    if (field == BenchField.Readings || observation[field] is null) return null;
+                    observation[field] = null;
+                    if (steps.Count == 0 && observation[BenchField.Spot] is null && over != true) return null;
+                }
+            }
+            return null;
+        }
+
+        private List<ShadowEdgeStep> Steps(double liquid, bool checkAboveLiquid)
+        {
+            var steps = new List<ShadowEdgeStep>();
+            if (r.Steps.Count > BenchDefaults.MostSteps)
+            {
+                Error(BenchField.Readings, r.Steps.Count.ToString(CultureInfo.InvariantCulture), $"1–{BenchDefaults.MostSteps} steps",
+                    $"has {r.Steps.Count} rotation steps; allowed: 1–{BenchDefaults.MostSteps}.");
+                return steps;
+            }
+            // No rotation given at all: the steps were read in order, evenly over a half turn (i·180°/n), the usual way.
+            bool unrotated = r.Steps.All(s => s.Rotation.Trim().Length == 0);
+            for (int i = 0; i < r.Steps.Count; i++)
+            {
+                EdgeStepText s = r.Steps[i];
+                string field = BenchField.Step(i);
+                double? rotation = unrotated ? i * 180.0 / r.Steps.Count : s.Rotation.Trim().Length == 0 ? 0 : Parse(field, "rotation", s.Rotation);
+                double? low = rotation is null ? null : Parse(field, "low", s.Low);
+                double? high = low is null || s.High.Trim().Length == 0 ? null : Parse(field, "high", s.High);
+                if (rotation is null || low is null || s.High.Trim().Length > 0 && high is null) continue;
+                ShadowEdgeStep step;
+                try { step = new ShadowEdgeStep(rotation.Value, low.Value, high); }
+                catch (QuantityOutOfRangeException e) { Error(field, BenchSyntax.Step(s), e.Allowed, e.Message); continue; }
+                double highest = Math.Max(step.Low, step.High ?? 0);
+                if (checkAboveLiquid && highest > liquid + BenchDefaults.EdgeSlackAboveLiquid)
+                {
+                    string limit = liquid.ToString("0.000", CultureInfo.InvariantCulture);
+                    Error(field, BenchSyntax.Step(s), $"at most the liquid limit {limit}",
+                        $"edge reading {highest.ToString("0.####", CultureInfo.InvariantCulture)} is above the liquid limit {limit}: no stone edge can be seen above it"
+                        + (r.Text(BenchField.LiquidLimit) is null ? $" (if a denser liquid was used, give its index in {BenchField.LiquidLimit})." : "."));
+                    continue;
+                }
+                steps.Add(step);
+            }
+            return steps;
+        }
+
+        private SpecificGravity? Gravity()
+        {
+            string? direct = r.Text(BenchField.Sg), air = r.Text(BenchField.AirCt), water = r.Text(BenchField.WaterCt), celsius = r.Text(BenchField.WaterC);
+            bool weighed = air is not null || water is not null;
+            if (direct is not null && weighed)
+            {
+                Error(BenchField.Sg, direct, "SG typed, or weights in air and water, not both",
+                    $"is given directly ({BenchText.Shown(direct)}) and by weighing ({BenchField.AirCt}, {BenchField.WaterCt}); give one of them.");
+                return null;
+            }
+            if (celsius is not null && !weighed && Number(BenchField.WaterC) is not null)
+                Error(BenchField.WaterC, celsius, "a temperature only with a hydrostatic weighing", "is given, but there is no hydrostatic weighing to apply it to.");
+            if (direct is not null)
+                return Number(BenchField.Sg) is { } sg ? Checked(BenchField.Sg, direct, () => new SpecificGravity(sg, BenchDefaults.DirectSpecificGravityUncertainty)) : null;
+            if (!weighed) return null;
+            if (air is null) Error(BenchField.AirCt, "", "a weight in carats", "is missing: a hydrostatic weighing needs the weight in air as well as in water.");
+            if (water is null) Error(BenchField.WaterCt, "", "a weight in carats", "is missing: a hydrostatic weighing needs the weight in water as well as in air.");
+            double? airCt = Number(BenchField.AirCt), waterCt = Number(BenchField.WaterCt), waterC = Number(BenchField.WaterC);
+            Mass? inAir = airCt is { } a ? Checked(BenchField.AirCt, air!, () => BenchDefaults.Weighed(a)) : null;
+            Mass? inWater = waterCt is { } w ? Checked(BenchField.WaterCt, water!, () => BenchDefaults.Weighed(w)) : null;
+            Temperature? temperature = celsius is not null && waterC is null ? null
+                : Checked(BenchField.WaterC, celsius ?? "", () => WaterDensity.At(Temperature.FromCelsius(waterC ?? BenchDefaults.WaterCelsius)).Temperature);
+            if (inAir is not { } m1 || inWater is not { } m2 || temperature is not { } t) return null;
+            return Checked(BenchField.WaterCt, water!, () => HydrostaticWeighing.SpecificGravityOf(m1, m2, t));
+        }
+
+        private List<HeavyLiquidResult> HeavyLiquids()
+        {
+            var results = new List<HeavyLiquidResult>();
+            if (r.Text(BenchField.HeavyLiquids) is not { } text) return results;
+            if (text.Trim().Length == 0) { Empty(BenchField.HeavyLiquids, "DENSITY RESULT entries, e.g. 3.32 floats; 2.89 sinks"); return results; }
+            var entries = BenchSyntax.HeavyLiquidEntries(text);
+            string allowed = $"DENSITY RESULT entries separated by semicolons; RESULT one of {BenchWords.Choices<HeavyLiquidOutcome>()}";
+            for (int i = 0; i < entries.Count; i++)
+            {
+                string entry = entries[i];
+                string which = entries.Count > 1 ? $"entry {i + 1} " : "";
+                if (BenchSyntax.HeavyLiquid(entry) is not { } parts)
+                { Error(BenchField.HeavyLiquids, entry, allowed, $"{which}'{BenchText.Shown(entry)}' is not a density and a result (e.g. 3.32 floats)."); continue; }
+                if (!BenchNumber.TryParse(parts.Density, out double density, out string problem))
+                { Error(BenchField.HeavyLiquids, entry, allowed, which + Sentence(problem, parts.Density)); continue; }
+                if (BenchWords.Parse<HeavyLiquidOutcome>(parts.Result) is not { } outcome)
+                { Error(BenchField.HeavyLiquids, entry, allowed, $"{which}'{BenchText.Shown(parts.Result)}' is not one of {BenchWords.Choices<HeavyLiquidOutcome>()}."); continue; }
+                if (Checked(BenchField.HeavyLiquids, entry, () => new HeavyLiquidResult(new SpecificGravity(density), outcome)) is { } result) results.Add(result);
+            }
+            return results;
+        }
+
+        private DispersionObservation? Dispersion()
+        {
+            string? word = r.Text(BenchField.Dispersion), nBText = r.Text(BenchField.IndexAtB), nGText = r.Text(BenchField.IndexAtG);
+            bool measured = nBText is not null || nGText is not null;
+            if (word is not null && measured)
+            {
+                Error(BenchField.Dispersion, word, "by eye, or measured (nB and nG), not both",
+                    $"is given by eye ({BenchText.Shown(word)}) and measured ({BenchField.IndexAtB}, {BenchField.IndexAtG}); give one of them.");
+                return null;
+            }
+            if (word is not null) return Word<DispersionStrength>(BenchField.Dispersion) is { } strength ? DispersionObservation.ByEye(strength) : null;
+            if (!measured) return null;
+            if (nBText is null) Error(BenchField.IndexAtB, "", "an index", "is missing: a measured dispersion needs the index at the B line as well as at the G line.");
+            if (nGText is null) Error(BenchField.IndexAtG, "", "an index", "is missing: a measured dispersion needs the index at the G line as well as at the B line.");
+            double? nB = Number(BenchField.IndexAtB), nG = Number(BenchField.IndexAtG);
+            if (nB is not { } b || nG is not { } g) return null;
+            try { return DispersionObservation.FromIndices(b, g); }
+            catch (QuantityOutOfRangeException e) { Error(BenchField.IndexAtG, nGText!, e.Allowed, e.Message); return null; }
+        }
+
+        private List<double>? Absorption()
+        {
+            if (r.Text(BenchField.Absorption) is not { } text) return null;
+            if (text.Trim().Length == 0) { Empty(BenchField.Absorption, "lines in nm (592 685 656) or none"); return null; }
+            var lines = new List<double>();
+            foreach (string part in BenchSyntax.Lines(text))
+            {
+                if (!BenchNumber.TryParse(part, out double nm, out string problem))
+                { Error(BenchField.Absorption, part, "lines in nm, 380–780, or none", Sentence(problem, part)); return null; }
+                if (Checked(BenchField.Absorption, part, () => { QuantityOutOfRangeException.ThrowIfOutside("absorption line", nm, 380, 780, "nm"); return nm; }) is not { } checkedNm)
+                    return null;
+                lines.Add(checkedNm);
+            }
+            return lines;
+        }
+
+        private string? Colour()
+        {
+            if (r.Text(BenchField.Colour) is not { } text) return null;
+            if (text.Trim().Length == 0) { Empty(BenchField.Colour, "a plain colour word"); return null; }
+            return text.Trim();
+        }
+
+        private bool? YesNo(string field)
+        {
+            if (r.Text(field) is not { } text) return null;
+            switch (text.Trim().ToLowerInvariant())
+            {
+                case "yes" or "true": return true;
+                case "no" or "false": return false;
+                default:
+                    Error(field, text, "yes | no", $"'{BenchText.Shown(text)}' is not yes or no.");
+                    return null;
+            }
+        }
+
+        private T? Word<T>(string field) where T : struct, Enum
+        {
+            if (r.Text(field) is not { } text) return null;
+            if (text.Trim().Length == 0) { Empty(field, BenchWords.Choices<T>()); return null; }
+            if (BenchWords.Parse<T>(text) is { } value) return value;
+            Error(field, text, BenchWords.Choices<T>(), $"'{BenchText.Shown(text.Trim())}' is not one of {BenchWords.Choices<T>()}.");
+            return null;
+        }
+
+        private double? Number(string field)
+        {
+            if (r.Text(field) is not { } text) return null;
+            return Parse(field, "", text);
+        }
+
+        private double? Parse(string field, string part, string text)
+        {
+            if (BenchNumber.TryParse(text, out double value, out string problem)) return value;
+            string prefix = part.Length > 0 ? part + ": " : "";
+            Error(field, text, "a number", prefix + Sentence(problem, text));
+            return null;
+        }
+
+        /// <summary>A number parser's sentence with the echoed text shortened.</summary>
+        private static string Sentence(string problem, string text)
+        {
+            string trimmed = text.Trim();
+            return trimmed.Length > 0 ? problem.Replace(trimmed, BenchText.Shown(trimmed), StringComparison.Ordinal) : problem;
+        }
+
+        private T? Checked<T>(string field, string text, Func<T> make) where T : struct
+        {
+            try { return make(); }
+            catch (QuantityOutOfRangeException e) { Error(field, text, e.Allowed, e.Message); return null; }
+        }
+
+        private void Empty(string field, string allowed) => Error(field, "", allowed, $"is empty: give {allowed}, or leave the field out.");
+
+        private bool HasError(string field) => _errors.Any(e => e.Field == field);
+
+        private void Error(string field, string? value, string allowed, string sentence) =>
+            _errors.Add(new BenchFieldError(field, BenchText.Shown(value), allowed, sentence));
+    }
+}

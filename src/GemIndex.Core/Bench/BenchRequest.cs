@@ -1,0 +1,20 @@
+namespace GemIndex.Core.Bench;
+
+/// <summary>How much of an answer is wanted from <see cref="BenchIdentification.Identify"/>.</summary>
+public sealed record BenchRequest
+{
+    /// <summary>Candidates to return, 1–<see cref="BenchDefaults.MostCandidates"/>.</summary>
+    public int Candidates { get; init; } = BenchDefaults.Candidates;
+
+    /// <summary>For how many leading candidates to write the reasons.</summary>
+    public int ExplainTop { get; init; } = 3;
+
+    /// <summary>Whether to work out the next test.</summary>
+    public bool AdviseNextTest { get; init; } = true;
+
+    /// <summary>
+    /// Whether to rank what could be read when some fields are bad (the text UI, which shows the errors at their
+    /// fields); otherwise any error means no ranking (the command line and the batch refuse the stone).
+    /// </summary>
+    public bool RankDespiteErrors { get; init; }
+}

@@ -1,0 +1,172 @@
+using FsCheck;
+using FsCheck.Fluent;
+using FsCheck.Xunit;
+using GemIndex.Core.Bench;
+using GemIndex.Core.Observations;
+
+namespace GemIndex.Core.Tests.Bench;
+
+public class BenchReaderTests
+{
+    private static BenchReadings R(params (string Field, string Value)[] values) =>
+        values.Aggregate(new BenchReadings(), (r, v) => r.With(v.Field, v.Value));
+
+    private static BenchReadings Steps(BenchReadings r, params string[] steps) => steps.Aggregate(r, (x, s) => x.WithStep(BenchSyntax.Step(s)!));
+
+    private static IReadOnlyList<string> Fields(BenchReading reading) => [.. reading.Errors.Select(e => e.Field)];
+
+    [Fact]
+    public void Good_readings_give_a_sheet_and_no_errors()
+    {
+        // Quartz: ω 1.544, ε 1.553, SG 2.65 (from memory of standard handbook values).
+        var reading = BenchReader.Read(Steps(R((BenchField.Sg, "2.65"), (BenchField.Polariscope, "doubly refractive")), "0:1.544/1.553", "90:1.544/1.548"));
+        Assert.Empty(reading.Errors);
+        Assert.Equal(2, reading.Sheet.Refractometer!.Steps.Count);
+        Assert.Equal(2.65, reading.Sheet.SpecificGravity!.Value.Value);
+        Assert.Equal(BenchDefaults.DirectSpecificGravityUncertainty, reading.Sheet.SpecificGravity!.Value.StandardUncertainty);
+        Assert.Equal(PolariscopeReaction.DoublyRefractive, reading.Sheet.Polariscope);
+        Assert.Equal(BenchDefaults.LiquidLimit, reading.Sheet.Refractometer.LiquidLimit);
+    }
+
+    [Fact]
+    public void Every_bad_field_is_reported_at_once_with_its_name_value_range_and_sentence()
+    {
+        var reading = BenchReader.Read(R((BenchField.Sg, "50"), (BenchField.Polariscope, "sparkly"), (BenchField.Absorption, "900"), (BenchField.UvLong, "")));
+        Assert.Equal([BenchField.Sg, BenchField.Polariscope, BenchField.UvLong, BenchField.Absorption], Fields(reading));
+        BenchFieldError sg = reading.Errors[0];
+        Assert.Equal("50", sg.Value);
+        Assert.Contains("25", sg.Allowed);
+        Assert.StartsWith("specific gravity is 50; allowed:", sg.Sentence);
+        Assert.Equal("singly_refractive | doubly_refractive | aggregate | anomalous", reading.Errors[1].Allowed);
+        Assert.StartsWith("is empty", reading.Errors[2].Sentence);
+    }
+
+    [Fact]
+    public void An_edge_above_the_usual_liquid_is_an_error_asking_for_the_liquid_never_a_guess()
+    {
+        var reading = BenchReader.Read(Steps(new BenchReadings(), "0:1.81", "90:1.81"));
+        Assert.Equal([BenchField.Step(0), BenchField.Step(1)], Fields(reading));
+        Assert.Contains(BenchField.LiquidLimit, reading.Errors[0].Sentence);
+        Assert.Null(reading.Sheet.Refractometer);
+        var denser = BenchReader.Read(Steps(R((BenchField.LiquidLimit, "1.81")), "0:1.81", "90:1.81"));
+        Assert.Empty(denser.Errors);
+        Assert.Equal(1.81, denser.Sheet.Refractometer!.LiquidLimit);
+    }
+
+    [Fact]
+    public void Within_the_slack_above_the_liquid_an_edge_is_read()
+    {
+        var reading = BenchReader.Read(Steps(new BenchReadings(), "0:1.794"));
+        Assert.Empty(reading.Errors);
+    }
+
+    [Fact]
+    public void SG_typed_and_weighed_is_an_error_naming_both()
+    {
+        var reading = BenchReader.Read(R((BenchField.Sg, "2.65"), (BenchField.AirCt, "3.12"), (BenchField.WaterCt, "1.943")));
+        BenchFieldError e = Assert.Single(reading.Errors);
+        Assert.Equal(BenchField.Sg, e.Field);
+        Assert.Contains(BenchField.AirCt, e.Sentence);
+        Assert.Null(reading.Sheet.SpecificGravity);
+    }
+
+    [Fact]
+    public void A_weight_in_air_without_the_weight_in_water_is_refused()
+    {
+        var reading = BenchReader.Read(R((BenchField.AirCt, "3.12")));
+        Assert.Equal([BenchField.WaterCt], Fields(reading));
+    }
+
+    [Theory]
+    [InlineData(BenchField.WaterC, "20")]
+    [InlineData(BenchField.LiquidLimit, "1.81")]
+    [InlineData(BenchField.Precision, "0.002")]
+    [InlineData(BenchField.CalibrationOffset, "0.001")]
+    [InlineData(BenchField.LightNm, "589.3")]
+    public void A_setting_given_with_nothing_to_apply_it_to_is_refused(string field, string value)
+    {
+        var reading = BenchReader.Read(R((BenchField.Sg, "2.65"), (field, value)));
+        Assert.Equal([field], Fields(reading));
+        Assert.Contains("given, but there is no", reading.Errors[0].Sentence);
+    }
+
+    [Fact]
+    public void Over_the_limit_with_a_high_edge_read_is_a_contradiction_naming_both()
+    {
+        var reading = BenchReader.Read(Steps(R((BenchField.OverLimit, "yes")), "0:1.544/1.553"));
+        BenchFieldError e = Assert.Single(reading.Errors);
+        Assert.Equal(BenchField.OverLimit, e.Field);
+        Assert.Contains(BenchField.Step(0), e.Sentence);
+    }
+
+    [Fact]
+    public void More_steps_than_the_analysis_reads_is_one_error_not_a_crash()
+    {
+        var r = new BenchReadings();
+        for (int i = 0; i <= BenchDefaults.MostSteps; i++) r = r.WithStep(new EdgeStepText("0", "1.544", ""));
+        var reading = BenchReader.Read(r);
+        Assert.Equal([BenchField.Readings], Fields(reading));
+        Assert.Contains("1–1000", reading.Errors[0].Sentence);
+    }
+
+    [Fact]
+    public void A_bad_value_is_echoed_at_most_80_characters_with_control_characters_made_visible()
+    {
+        string huge = "1" + new string('x', 100_000);
+        var reading = BenchReader.Read(R((BenchField.Sg, huge), (BenchField.Colour, "\u001b[31mred")));
+        BenchFieldError e = Assert.Single(reading.Errors);
+        Assert.Equal(BenchText.MostShown, e.Value.Length);
+        Assert.True(e.Sentence.Length < 200, e.Sentence);
+        Assert.Equal("\\u001b[31mred", BenchText.Shown("\u001b[31mred"));
+        Assert.Equal("\\ud800", BenchText.Shown("\ud800"));
+    }
+
+    [Fact]
+    public void Instrument_settings_reach_the_observation_and_bad_ones_are_reported_together()
+    {
+        var good = BenchReader.Read(Steps(R((BenchField.Precision, "0.002"), (BenchField.CalibrationOffset, "0.003")), "0:1.718"));
+        Assert.Empty(good.Errors);
+        Assert.Equal(0.002, good.Sheet.Refractometer!.ReadingPrecision);
+        Assert.Equal(0.003, good.Sheet.Refractometer.CalibrationOffset);
+        var bad = BenchReader.Read(Steps(R((BenchField.Precision, "-1"), (BenchField.CalibrationOffset, "0.5"), (BenchField.LightNm, "100")), "0:1.718"));
+        Assert.Equal([BenchField.LightNm, BenchField.Precision, BenchField.CalibrationOffset], Fields(bad));
+        Assert.NotNull(bad.Sheet.Refractometer);   // the steps still count, at the default settings
+    }
+
+    [Fact]
+    public void Steps_with_no_rotation_are_spread_evenly_over_a_half_turn()
+    {
+        var r = new BenchReadings().WithStep(new EdgeStepText("", "1.544", "1.553")).WithStep(new EdgeStepText("", "1.544", "1.548"));
+        var reading = BenchReader.Read(r);
+        Assert.Equal([0.0, 90.0], reading.Sheet.Refractometer!.Steps.Select(s => s.RotationDegrees));
+    }
+
+    [Fact]
+    public void Absorption_none_means_looked_and_saw_none_and_an_empty_text_is_an_error()
+    {
+        Assert.Empty(BenchReader.Read(R((BenchField.Absorption, "none"))).Sheet.AbsorptionLinesNanometres!);
+        Assert.Equal([694.0, 668, 659], BenchReader.Read(R((BenchField.Absorption, "694, 668 659"))).Sheet.AbsorptionLinesNanometres!);
+        Assert.Equal([BenchField.Absorption], Fields(BenchReader.Read(R((BenchField.Absorption, " ")))));
+    }
+
+    [Fact]
+    public void An_unknown_field_is_an_error()
+    {
+        Assert.Equal(["refractometer.prism"], Fields(BenchReader.Read(R(("refractometer.prism", "1")))));
+    }
+
+    [FsCheck.Xunit.Property(MaxTest = 300)]
+    public Property Any_text_in_any_field_gives_errors_never_an_exception()
+    {
+        var texts = Gen.Elements("", " ", "1.5x", "1,544", "NaN", "1e308", "-1", "0", "2.65", "floats", "3.32 floats", "yes", "\u001b", "\ud800", "999999",
+            "singly_refractive", "none", "1.544", "0:1.5/1.6", "; ;");
+        var gen = Gen.ListOf(Gen.Zip(Gen.Elements(BenchField.All.ToArray()), texts)).Zip(Gen.ListOf(Gen.Zip(texts, texts).Select(t => new EdgeStepText(t.Item1, t.Item2, ""))));
+        return Prop.ForAll(gen.ToArbitrary(), input =>
+        {
+            var r = input.Item1.Aggregate(new BenchReadings(), (x, v) => x.With(v.Item1, v.Item2));
+            r = input.Item2.Aggregate(r, (x, s) => x.WithStep(s));
+            BenchReading reading = BenchReader.Read(r);
+            return reading.Errors.All(e => e.Value.Length <= BenchText.MostShown && e.Sentence.Length > 0);
+        });
+    }
+}

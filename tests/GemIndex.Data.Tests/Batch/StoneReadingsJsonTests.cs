@@ -1,0 +1,107 @@
+using FsCheck;
+using FsCheck.Fluent;
+using GemIndex.Core.Bench;
+using GemIndex.Data.Batch;
+
+namespace GemIndex.Data.Tests.Batch;
+
+public class StoneReadingsJsonTests
+{
+    private static IReadOnlyList<string> Errors(string line)
+    {
+        BatchLine read = StoneReadingsJson.Read(line);
+        if (read.Errors.Count > 0) return [.. read.Errors.Select(e => e.Field)];
+        return [.. BenchReader.Read(read.Readings).Errors.Select(e => e.Field)];
+    }
+
+    /// <summary>Physical values: indices 1.40–1.79 in steps of 0.001, SG 1.00–7.00, weights 0.5–10 ct, lines 400–700 nm.</summary>
+    private static readonly Gen<StoneReadings> Stones =
+        from id in Gen.Elements("a", "lot 7 / 2", "ring \"3\"", "é 石")
+        from steps in Gen.ListOf(from rot in Gen.Choose(0, 180) from low in Gen.Choose(1400, 1780) from d in Gen.Choose(0, 10)
+                                 select new EdgeReadingEntry(rot, low / 1000.0, d == 0 ? null : (low + d) / 1000.0))
+        from sg in Gen.Choose(100, 700)
+        from weighed in Gen.Elements(true, false)
+        from air in Gen.Choose(500, 10000)
+        from polariscope in Gen.Elements<string?>(null, "singly_refractive", "doubly_refractive", "aggregate")
+        from lines in Gen.Elements<List<double>?>(null, [], [694, 668.5], [450])
+        from liquids in Gen.Elements<List<HeavyLiquidReading>>([], [new HeavyLiquidReading(2.89, "floats")], [new HeavyLiquidReading(3.32, "sinks"), new HeavyLiquidReading(2.62, "suspends")])
+        from precision in Gen.Elements<double?>(null, 0.002)
+        select new StoneReadings
+        {
+            Id = id,
+            Refractometer = steps.Count == 0 ? null : new RefractometerReadings { Readings = [.. steps.Take(20)], Precision = precision },
+            Sg = weighed ? null : sg / 100.0,
+            SgWeighing = weighed ? new HydrostaticReadings(air / 1000.0, air / 1000.0 * 0.6, 21.5) : null,
+            HeavyLiquids = liquids,
+            Polariscope = polariscope,
+            AbsorptionNm = lines,
+            Colour = "greenish yellow",
+        };
+
+    [FsCheck.Xunit.Property(MaxTest = 200)]
+    public Property Written_readings_read_back_the_same()
+    {
+        return Prop.ForAll(Stones.ToArbitrary(), stone =>
+        {
+            string line = StoneReadingsJson.Write(stone);
+            StoneReadings back = StoneReadingsJson.Parse(line);
+            return StoneReadingsJson.Write(back) == line
+                && StoneReadingsConverter.ToReadings(back).Equals(StoneReadingsConverter.ToReadings(stone));
+        });
+    }
+
+    [FsCheck.Xunit.Property(MaxTest = 200)]
+    public Property Written_readings_read_through_Core_without_an_error()
+    {
+        return Prop.ForAll(Stones.ToArbitrary(), stone => BenchReader.Read(StoneReadingsJson.Read(StoneReadingsJson.Write(stone)).Readings).Errors.Count == 0);
+    }
+
+    [Theory]
+    [InlineData("""not json""", "$")]
+    [InlineData("""[1,2]""", "$")]
+    [InlineData("""{"sg":2.65}""", "id")]
+    [InlineData("""{"id":{}}""", "id")]
+    [InlineData("""{"id":"x","refractometer":1}""", "refractometer")]
+    [InlineData("""{"id":"x","refractometer":{"method":"sideways","spot":1.5}}""", "refractometer.method")]
+    [InlineData("""{"id":"x","refractometer":{"readings":[{"low":1.5x}]}}""", "$")]
+    [InlineData("""{"id":"x","refractometer":{"readings":[{"low":"1.54"}]}}""", "refractometer.readings[0].low")]
+    [InlineData("""{"id":"x","refractometer":{"readings":[{"low":1.553,"high":1.544}]}}""", "refractometer.readings[0]")]
+    [InlineData("""{"id":"x","refractometer":{"readings":[5]}}""", "refractometer.readings[0]")]
+    [InlineData("""{"id":"x","refractometer":{"readings":{}}}""", "refractometer.readings")]
+    [InlineData("""{"id":"x","refractometer":{"spot":1.2}}""", "refractometer.spot")]
+    [InlineData("""{"id":"x","refractometer":{"spot":1.5,"light_nm":100}}""", "refractometer.light_nm")]
+    [InlineData("""{"id":"x","refractometer":{"spot":1.5,"liquid_limit":3}}""", "refractometer.liquid_limit")]
+    [InlineData("""{"id":"x","refractometer":{"spot":1.5,"precision":0}}""", "refractometer.precision")]
+    [InlineData("""{"id":"x","refractometer":{"spot":1.5,"calibration_offset":1}}""", "refractometer.calibration_offset")]
+    [InlineData("""{"id":"x","refractometer":{"over_limit":"maybe"}}""", "refractometer.over_limit")]
+    [InlineData("""{"id":"x","sg":30}""", "sg")]
+    [InlineData("""{"id":"x","sg":"2.65"}""", "sg")]
+    [InlineData("""{"id":"x","sg":{"air_ct":-1,"water_ct":0.5}}""", "sg.air_ct")]
+    [InlineData("""{"id":"x","sg":{"air_ct":1,"water_ct":1.2}}""", "sg.water_ct")]
+    [InlineData("""{"id":"x","sg":{"air_ct":1,"water_ct":0.6,"water_c":90}}""", "sg.water_c")]
+    [InlineData("""{"id":"x","heavy_liquids":[{"density":3.32,"result":"bobs"}]}""", "heavy_liquids")]
+    [InlineData("""{"id":"x","heavy_liquids":[3.32]}""", "heavy_liquids[0]")]
+    [InlineData("""{"id":"x","polariscope":"sparkly"}""", "polariscope")]
+    [InlineData("""{"id":"x","pleochroism":""}""", "pleochroism")]
+    [InlineData("""{"id":"x","dispersion":"blinding"}""", "dispersion")]
+    [InlineData("""{"id":"x","dispersion":{"nB":1.54}}""", "dispersion.nG")]
+    [InlineData("""{"id":"x","dispersion":{"nB":1.56,"nG":1.50}}""", "dispersion.nG")]
+    [InlineData("""{"id":"x","thermal_probe":true}""", "thermal_probe")]
+    [InlineData("""{"id":"x","electrical":"sparks"}""", "electrical")]
+    [InlineData("""{"id":"x","uv_long":"glows"}""", "uv_long")]
+    [InlineData("""{"id":"x","uv_short":"glows"}""", "uv_short")]
+    [InlineData("""{"id":"x","absorption_nm":[900]}""", "absorption_nm")]
+    [InlineData("""{"id":"x","absorption_nm":"694"}""", "absorption_nm")]
+    [InlineData("""{"id":"x","colour":""}""", "colour")]
+    [InlineData("""{"id":"x","colour":"\ud800"}""", "colour")]
+    public void Each_bad_field_is_named(string line, string field)
+    {
+        Assert.Equal([field], Errors(line));
+    }
+
+    [Fact]
+    public void Unknown_fields_are_ignored_as_the_format_says()
+    {
+        Assert.Empty(Errors("""{"id":"x","sg":2.65,"lustre":"vitreous"}"""));
+    }
+}
