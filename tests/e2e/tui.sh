@@ -29,7 +29,7 @@ wait_for() {
 
 start() {
   tmux new-session -d -s "$session" -x 80 -y 24 \
-    "env HOME='$tmp' XDG_DATA_HOME='$tmp/data' XDG_CACHE_HOME='$tmp/cache' dotnet '$dll' --workbook '$workbook'; echo \"EXIT=\$?\"; sleep 600"
+    "env HOME='$tmp' XDG_DATA_HOME='$tmp/data' XDG_CACHE_HOME='$tmp/cache' dotnet '$dll' --new --workbook '$workbook'; echo \"EXIT=\$?\"; sleep 600"
   wait_for "[F3 RI]" 60
 }
 
