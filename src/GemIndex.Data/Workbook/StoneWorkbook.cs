@@ -193,7 +193,7 @@ public sealed class StoneWorkbook : IDisposable
                         throw new WorkbookException($"{full}: the workbook is damaged (table '{table}' has no column '{lost}'); it was left untouched");
                 }
                 string check = Scalar<string>(db, "PRAGMA quick_check(1)");
-                if (check != "ok") throw new WorkbookException($"{full}: the workbook is damaged ({check}); it was left untouched");
+                if (check != "ok") throw new WorkbookException($"{full}: the workbook is damaged ({Shown(check.Replace("*** in database main ***", "").ReplaceLineEndings(" ").Trim())}); it was left untouched");
                 CheckTimes(db, full, "SELECT id, 'created', created FROM stone UNION ALL SELECT id, 'modified', modified FROM stone", "stone");
                 CheckTimes(db, full, "SELECT stone_id, 'history time', at FROM stone_edit", "stone");
             }
@@ -214,7 +214,7 @@ public sealed class StoneWorkbook : IDisposable
     private static string Shown(object? value)
     {
         string text = Convert.ToString(value, CultureInfo.InvariantCulture) ?? "";
-        return text.Length > 40 ? text[..40] + "…" : text;
+        return text.Length > 80 ? text[..80] + "…" : text;
     }
 
     /// <summary>Why this process could not save to the file, judged from the mode bits (root ignores them, the user's intent does not).</summary>
