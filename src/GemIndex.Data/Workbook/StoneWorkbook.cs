@@ -375,16 +375,19 @@ public sealed class StoneWorkbook : IDisposable
             tx.Commit();
         }
         StoneSheet result = Get(edited.Id)!;
-        StoneSheet next = result;
-        if (conflicts.Count > 0)
-        {
-            SortedDictionary<string, string> keep = StoneFields.Of(result);
-            foreach (FieldConflict c in conflicts)
-                if (c.LastRead.Length == 0) keep.Remove(c.Field); else keep[c.Field] = c.LastRead;
-            try { next = StoneFields.Sheet(keep, result); }
-            catch (Exception e) when (e is BatchInputException or FormatException) { next = result; }
-        }
-        return new StoneSaveResult(result, saved, conflicts, next);
+        // The window's next last-read stone: what it read, plus what it wrote (or found already written). A field changed
+        // only elsewhere keeps the value the window shows, so a later edit of it here is checked against the right value.
+        SortedDictionary<string, string> next = new(read, StringComparer.Ordinal);
+        var conflicting = conflicts.Select(c => c.Field).ToHashSet(StringComparer.Ordinal);
+        foreach (string field in mine.Keys.Union(read.Keys))
+            if (!conflicting.Contains(field))
+            {
+                if (mine.TryGetValue(field, out string? want)) next[field] = want; else next.Remove(field);
+            }
+        StoneSheet nextLastRead;
+        try { nextLastRead = StoneFields.Sheet(next, result); }
+        catch (Exception e) when (e is BatchInputException or FormatException) { nextLastRead = lastRead; }
+        return new StoneSaveResult(result, saved, conflicts, nextLastRead);
     });
 
     /// <summary>A copy of the stone under the reference "… (copy)", with its own new history.</summary>

@@ -54,6 +54,23 @@ public class StoneWorkbookEditTests
     }
 
     [Fact]
+    public void A_field_changed_only_elsewhere_is_never_written_back_by_a_later_save()
+    {
+        using var dir = new TempDirectory();
+        string path = dir.File("wb.db");
+        using var first = StoneWorkbook.Open(path, new SteppingClock(), WorkbookOpening.CreateIfMissing);
+        using var second = StoneWorkbook.Open(path, new SteppingClock());
+        StoneSheet s = first.Create(Spinel());
+        second.Save(s, s with { Notes = "from the other window" });
+        StoneSaveResult unrelated = first.Save(s, s with { Shape = "oval" });   // clean, and the window still shows empty notes
+        Assert.Equal("from the other window", unrelated.Stored.Notes);
+        Assert.Equal("", unrelated.NextLastRead.Notes);
+        StoneSaveResult later = first.Save(unrelated.NextLastRead, s with { Shape = "oval", Notes = "mine" });
+        Assert.Equal("notes", Assert.Single(later.Conflicts).Field);
+        Assert.Equal("from the other window", first.Get(s.Id)!.Notes);
+    }
+
+    [Fact]
     public void Two_windows_editing_different_readings_of_one_stone_both_keep_their_edits()
     {
         using var dir = new TempDirectory();
