@@ -17,10 +17,23 @@ internal static class CatalogueBuildCommand
     {
         var output = new Option<FileInfo>("--output", "-o") { Description = "The SQLite file to write (a catalogue built earlier is replaced; any other file only with --force)", Required = true };
         var force = new Option<bool>("--force") { Description = "Replace the output file even if it is not a catalogue built by gemindex" };
-        var source = new Option<DirectoryInfo>("--source") { Description = "Build from the *.json family files in this folder instead of the embedded ones" };
-        source.AcceptExistingOnly();
+        var source = new Option<string?>("--source") { Description = "Build from the *.json family files in this folder instead of the embedded ones" };
+        source.Validators.Add(r =>
+        {
+            string text = r.Tokens.Count == 1 ? r.Tokens[0].Value : "";
+            if (text.Length == 0) r.AddError("--source: empty; give the folder of *.json family files");
+            else if (File.Exists(text)) r.AddError($"--source: '{Shown(text)}' is a file; give the folder that holds the *.json family files");
+            else if (!Directory.Exists(text)) r.AddError($"--source: no folder '{Shown(text)}'");
+        });
         Option<bool> json = CatalogueCommand.JsonOption();
         var command = new Command("build", "Build the catalogue's SQLite file from its JSON family files") { output, source, force, json };
+        // The catalogue group's --catalogue-dir reaches every subcommand; the build does not use it, but a wrong one is still an error.
+        command.Validators.Add(r =>
+        {
+            if (r.GetResult("--catalogue-dir") is System.CommandLine.Parsing.OptionResult { Implicit: false, Tokens: [{ Value: var dir }] }
+                && (dir.Length == 0 || File.Exists(dir)))
+                r.AddError($"--catalogue-dir: '{Shown(dir)}' is not a folder (and 'catalogue build' writes only the --output file)");
+        });
         command.SetAction(pr => CatalogueFailure.Guard(pr, (stdout, error) =>
         {
             string target = pr.GetRequiredValue(output).FullName;
@@ -29,7 +42,7 @@ internal static class CatalogueBuildCommand
                 error.WriteLine($"gemindex: --output: {target}: {refusal}; nothing was written");
                 return ExitCodes.BadFile;
             }
-            IReadOnlyList<FamilySource> sources = pr.GetValue(source) is { } dir ? FamilySource.FromDirectory(dir.FullName) : ShippedCatalogue.Sources;
+            IReadOnlyList<FamilySource> sources = pr.GetValue(source) is { } dir ? FamilySource.FromDirectory(Path.GetFullPath(dir)) : ShippedCatalogue.Sources;
             IReadOnlyList<Material> materials = FamilyFileReader.ReadAll(sources);
             if (materials.Count == 0)
             {
@@ -51,6 +64,8 @@ internal static class CatalogueBuildCommand
         }));
         return command;
     }
+
+    private static string Shown(string text) => text.Length > 80 ? text[..80] + "…" : text;
 
     /// <summary>Why the build must not write to <paramref name="path"/>, or null when it may.</summary>
     public static string? Refusal(string path, bool force) => FileKind.Of(path) switch
