@@ -102,9 +102,9 @@ public sealed class StoneWorkbook : IDisposable
                     : $"{full}: the file is empty (0 bytes), not a workbook; nothing was written to it");
             return CreateNew(full, folder, clock);
         }
-        Verify(full, folder);
+        Verify(full);
         string? readOnly = opening == WorkbookOpening.ReadOnly ? "opened for reading only" : ReadOnlyReasonFor(full, folder);
-        SqliteConnection db = Connect(full, folder, readOnly is not null);
+        SqliteConnection db = Connect(full, readOnly is not null);
         try
         {
             if (readOnly is null)
@@ -119,7 +119,7 @@ public sealed class StoneWorkbook : IDisposable
         {
             // Permissions the mode bits did not show (a read-only mount, another owner): read it, save nothing.
             db.Dispose();
-            return new StoneWorkbook(Connect(full, folder, readOnly: true), clock, full, SqliteProblem.Describe(e));
+            return new StoneWorkbook(Connect(full, readOnly: true), clock, full, SqliteProblem.Describe(e));
         }
         catch (SqliteException e)
         {
@@ -161,10 +161,10 @@ public sealed class StoneWorkbook : IDisposable
     }
 
     /// <summary>Checks an existing file on a read-only connection, so nothing is written to a file that is refused.</summary>
-    private static void Verify(string full, string folder)
+    private static void Verify(string full)
     {
         SqliteConnection db;
-        try { db = Connect(full, folder, readOnly: true); }
+        try { db = Connect(full, readOnly: true); }
         catch (SqliteException e) { throw new WorkbookException($"{full}: cannot open the workbook: {SqliteProblem.Describe(e)}; it was left untouched", e); }
         using (db)
         {
@@ -229,11 +229,13 @@ public sealed class StoneWorkbook : IDisposable
         return null;
     }
 
-    private static SqliteConnection Connect(string full, string folder, bool readOnly)
+    private static SqliteConnection Connect(string full, bool readOnly)
     {
-        // A WAL workbook read from a read-only folder cannot get its shared-memory file: read it as immutable, which
-        // is exact when no -wal file is left (the last writer closed cleanly, or never ran here).
-        bool immutable = readOnly && ReadOnlyReasonFor(full, folder) == "the folder is read-only" && !File.Exists(full + "-wal") && !File.Exists(full + "-shm");
+        // Read-only with no -wal file (the last writer closed cleanly): read it as immutable, which needs no -shm or
+        // -wal file, so a read-only folder can be read and a report leaves no files behind. In WAL mode the file only
+        // changes at a checkpoint; one during the read (a writer closing meanwhile) is reported as an error, never
+        // read as data. With a -wal file present, the ordinary read-only open reads the writes it holds.
+        bool immutable = readOnly && !File.Exists(full + "-wal");
         var db = new SqliteConnection(immutable
             ? ConnectionString("file:" + Uri.EscapeDataString(full).Replace("%2F", "/", StringComparison.Ordinal) + "?immutable=1", SqliteOpenMode.ReadOnly)
             : ConnectionString(full, readOnly ? SqliteOpenMode.ReadOnly : SqliteOpenMode.ReadWrite));

@@ -95,6 +95,7 @@ public sealed class DamagedWorkbookTests(ITestOutputHelper log) : IDisposable
         Assert.Equal(ExitCodes.Ok, exit);
         Assert.Contains("lot 3 / 2", csv);
         Assert.Equal(hash, ReliabilityFolder.Hash(path));
+        Assert.Equal(["wb.db"], Directory.GetFiles(_folder.Path).Select(Path.GetFileName));   // no -wal or -shm left by reading
     }
 
     [Fact]
