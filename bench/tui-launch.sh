@@ -16,7 +16,7 @@ times=()
 for i in $(seq "$runs"); do
   rm -f "$tmp/wb.db"
   start=$(date +%s%N)
-  tmux new-session -d -s gi-launch -x 80 -y 24 "env XDG_CACHE_HOME='$tmp/cache' XDG_DATA_HOME='$tmp/data' dotnet '$dll' --workbook '$tmp/wb.db'"
+  tmux new-session -d -s gi-launch -x 80 -y 24 "env XDG_CACHE_HOME='$tmp/cache' XDG_DATA_HOME='$tmp/data' dotnet '$dll' --new --workbook '$tmp/wb.db'"
   until tmux capture-pane -p -t gi-launch 2>/dev/null | grep -qF "[F3 RI]"; do sleep 0.01; done
   end=$(date +%s%N)
   tmux kill-session -t gi-launch

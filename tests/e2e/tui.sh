@@ -29,7 +29,7 @@ wait_for() {
 
 start() {
   tmux new-session -d -s "$session" -x 80 -y 24 \
-    "env HOME='$tmp' XDG_DATA_HOME='$tmp/data' XDG_CACHE_HOME='$tmp/cache' dotnet '$dll' --workbook '$workbook'; echo \"EXIT=\$?\"; sleep 600"
+    "env HOME='$tmp' XDG_DATA_HOME='$tmp/data' XDG_CACHE_HOME='$tmp/cache' dotnet '$dll' --new --workbook '$workbook'; echo \"EXIT=\$?\"; sleep 600"
   wait_for "[F3 RI]" 60
 }
 
@@ -65,12 +65,13 @@ wait_for "birefringence"
 screen | grep -qE "^.1 (rock crystal|quartz|synthetic co).*=#=.* in " || fail "the first candidate's range does not hold the reading on the scales"
 echo "---- 80x24 scales ----"; screen
 keys Escape
-# Export (Ctrl+E): three reports beside the workbook, named after the reference.
+# Export (Ctrl+E): three reports beside the workbook, named after the reference and the stone's number.
 keys C-e
 wait_for "Reports written"
 for ext in md html json; do
-  [[ -s "$tmp/reports/e2e_ring.$ext" ]] || fail "no $tmp/reports/e2e_ring.$ext"
-  grep -qF "e2e ring" "$tmp/reports/e2e_ring.$ext" || fail "e2e_ring.$ext does not name the stone"
+  report=$(ls "$tmp"/reports/e2e_ring-s*."$ext" 2>/dev/null | head -n 1 || true)
+  [[ -s "$report" ]] || fail "no $tmp/reports/e2e_ring-s*.$ext"
+  grep -qF "e2e ring" "$report" || fail "$report does not name the stone"
 done
 keys Enter
 keys C-q

@@ -8,6 +8,9 @@ public static class CatalogueSchema
     /// <summary>The schema version this build reads and writes (PRAGMA user_version and meta 'schema_version').</summary>
     public const int Version = 2;
 
+    /// <summary>PRAGMA application_id marking a catalogue built by GemIndex ("GICA"), so a build never replaces another file.</summary>
+    public const int ApplicationId = 0x47494341;
+
     /// <summary>The schema's SQL text.</summary>
     public static string Sql { get; } = EmbeddedText("GemIndex.Catalogue.schema.sql");
 
@@ -16,6 +19,7 @@ public static class CatalogueSchema
     {
         Execute(connection, transaction, Sql);
         Execute(connection, transaction, $"PRAGMA user_version = {Version}"); // a constant: PRAGMA takes no parameters
+        Execute(connection, transaction, $"PRAGMA application_id = {ApplicationId}");
         using SqliteCommand meta = connection.CreateCommand();
         meta.Transaction = transaction;
         meta.CommandText = "INSERT INTO meta(key, value) VALUES ('schema_version', $v), ('kind', $kind), ('source_hash', $hash)";

@@ -96,7 +96,7 @@ internal static class ReportCommand
     {
         try
         {
-            using var workbook = StoneWorkbook.Open(book.FullName, TimeProvider.System);
+            using var workbook = StoneWorkbook.Open(book.FullName, TimeProvider.System, WorkbookOpening.ReadOnly);
             var summary = workbook.List().FirstOrDefault(s => string.Equals(s.Reference, reference, StringComparison.OrdinalIgnoreCase));
             if (summary is null || workbook.Get(summary.Id) is not { } sheet)
             {
@@ -122,7 +122,7 @@ internal static class ReportCommand
     {
         try
         {
-            using var workbook = StoneWorkbook.Open(book.FullName, TimeProvider.System);
+            using var workbook = StoneWorkbook.Open(book.FullName, TimeProvider.System, WorkbookOpening.ReadOnly);
             var identifier = new Identifier(materials());
             var rows = new List<(StoneSheet, IdentificationResult?)>();
             foreach (var summary in workbook.List())

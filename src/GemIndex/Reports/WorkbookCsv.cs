@@ -1,13 +1,14 @@
-using System.Text;
 using GemIndex.Core.Identification;
 using GemIndex.Data.Workbook;
+using nietras.SeparatedValues;
 
 namespace GemIndex.Cli.Reports;
 
 /// <summary>
-/// A whole workbook as CSV (RFC 4180: comma-separated, CRLF line ends, a field quoted when it holds a comma, a
-/// quote or a line break, quotes doubled), one row per stone after a header row. Numbers in the invariant culture,
-/// units in the column names. A stone not identified (no result) has empty identification columns.
+/// A whole workbook as CSV, written by the Sep library (comma-separated, a field quoted when it holds a comma, a
+/// quote or a line break, quotes doubled, as RFC 4180 says), one row per stone after a header row. Numbers in the
+/// invariant culture, units in the column names. A stone not identified (no result) has empty identification
+/// columns. A cell that a spreadsheet would run as a formula is neutralised (<see cref="Neutralised"/>).
 /// </summary>
 internal static class WorkbookCsv
 {
@@ -17,11 +18,32 @@ internal static class WorkbookCsv
         "optic_character", "specific_gravity", "polariscope", "best_candidate", "confidence", "no_good_match",
     ];
 
-    public static void Write(TextWriter output, IEnumerable<(StoneSheet Sheet, IdentificationResult? Result)> stones)
+    /// <summary>Characters that make a spreadsheet read a cell as a formula when they lead it.</summary>
+    public const string FormulaTriggers = "=+-@\t\r\0";
+
+    public static void Write(TextWriter output, IEnumerable<(StoneSheet Sheet, IdentificationResult? Result)> stones) =>
+        Table(output, Columns, stones.Select(s => (IReadOnlyList<string>)Cells(s.Sheet, s.Result)));
+
+    /// <summary>Writes a header and rows of cells, every cell neutralised and quoted as needed.</summary>
+    public static void Table(TextWriter output, IReadOnlyList<string> header, IEnumerable<IReadOnlyList<string>> rows)
     {
-        Row(output, Columns);
-        foreach (var (sheet, result) in stones) Row(output, Cells(sheet, result));
+        using SepWriter writer = Sep.New(',').Writer(o => o with { Escape = true, CultureInfo = System.Globalization.CultureInfo.InvariantCulture })
+            .To(output, leaveOpen: true);
+        writer.Header.Add(header);
+        foreach (IReadOnlyList<string> cells in rows)
+        {
+            using SepWriter.Row row = writer.NewRow();
+            for (int i = 0; i < header.Count; i++) row[header[i]].Set(Neutralised(cells[i]));
+        }
     }
+
+    /// <summary>
+    /// A cell starting with =, +, -, @, tab, carriage return or NUL gets a leading apostrophe, so a spreadsheet shows it
+    /// as text instead of running it as a formula (OWASP ASVS 5.0 requirement 1.2.10; CWE-1236). A reference
+    /// such as "=HYPERLINK(…)" then reads back as "'=HYPERLINK(…)".
+    /// </summary>
+    public static string Neutralised(string cell) =>
+        cell.Length > 0 && FormulaTriggers.Contains(cell[0], StringComparison.Ordinal) ? "'" + cell : cell;
 
     private static List<string> Cells(StoneSheet sheet, IdentificationResult? result)
     {
@@ -45,14 +67,4 @@ internal static class WorkbookCsv
             result is null ? "" : result.NoGoodMatch ? "true" : "false",
         ];
     }
-
-    private static void Row(TextWriter output, IReadOnlyList<string> cells)
-    {
-        output.Write(string.Join(",", cells.Select(Quote)));
-        output.Write("\r\n");
-    }
-
-    /// <summary>A field as RFC 4180 wants it: quoted (with quotes doubled) when it holds a comma, quote, CR or LF.</summary>
-    public static string Quote(string field) =>
-        field.AsSpan().IndexOfAny(",\"\r\n") >= 0 ? "\"" + field.Replace("\"", "\"\"") + "\"" : field;
 }

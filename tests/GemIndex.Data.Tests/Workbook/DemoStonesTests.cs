@@ -18,7 +18,7 @@ public class DemoStonesTests
     public void The_demo_fills_a_workbook()
     {
         using var dir = new TempDirectory();
-        using var wb = StoneWorkbook.Open(dir.File("demo.db"), new SteppingClock());
+        using var wb = StoneWorkbook.Open(dir.File("demo.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing);
         int added = DemoStones.AddTo(wb);
         Assert.Equal(added, wb.List().Count);
         Assert.Single(wb.List("play of colour"));

@@ -22,8 +22,8 @@ public class StoneWorkbookTests
     {
         using var dir = new TempDirectory();
         long id;
-        using (var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock())) id = wb.Create(Quartz()).Id;
-        using var again = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());
+        using (var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing)) id = wb.Create(Quartz()).Id;
+        using var again = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing);
         StoneSheet s = again.Get(id)!;
         Assert.Equal("lot 7 / 1", s.Reference);
         Assert.Equal(2.31, s.WeightCarats);
@@ -41,13 +41,13 @@ public class StoneWorkbookTests
     public void Saving_records_each_changed_field_with_its_time_before_and_after()
     {
         using var dir = new TempDirectory();
-        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing);
         StoneSheet s = wb.Create(Quartz());
-        wb.Save(s with { Shape = "cushion", WeightCarats = 2.30 });
+        wb.Save(s, s with { Shape = "cushion", WeightCarats = 2.30 });
         IReadOnlyList<StoneEdit> history = wb.History(s.Id);
-        Assert.Equal(["created", "weight_ct", "shape"], history.Select(e => e.Field));
-        Assert.Equal(("oval", "cushion"), (history[2].Before, history[2].After));
-        Assert.Equal(("2.31", "2.3"), (history[1].Before, history[1].After));
+        Assert.Equal(["created", "shape", "weight_ct"], history.Select(e => e.Field));
+        Assert.Equal(("oval", "cushion"), (history[1].Before, history[1].After));
+        Assert.Equal(("2.31", "2.3"), (history[2].Before, history[2].After));
         Assert.True(history[1].At > history[0].At);
         Assert.Equal(history[1].At, wb.Get(s.Id)!.Modified);
     }
@@ -56,10 +56,10 @@ public class StoneWorkbookTests
     public void Keystrokes_to_one_field_in_quick_succession_make_one_history_entry()
     {
         using var dir = new TempDirectory();
-        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());   // one minute per reading: inside the window
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing);   // one minute per reading: inside the window
         StoneSheet s = wb.Create(Quartz() with { Notes = "" });
-        foreach (string typed in new[] { "c", "cl", "cle", "clean" }) s = wb.Save(s with { Notes = typed });
-        wb.Save(s with { Shape = "round" });
+        foreach (string typed in new[] { "c", "cl", "cle", "clean" }) s = wb.Save(s, s with { Notes = typed }).Stored;
+        wb.Save(s, s with { Shape = "round" });
         IReadOnlyList<StoneEdit> history = wb.History(s.Id);
         Assert.Equal(["created", "notes", "shape"], history.Select(e => e.Field));
         Assert.Equal(("", "clean"), (history[1].Before, history[1].After));
@@ -69,9 +69,9 @@ public class StoneWorkbookTests
     public void Saving_without_changes_adds_no_history()
     {
         using var dir = new TempDirectory();
-        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing);
         StoneSheet s = wb.Create(Quartz());
-        wb.Save(s);
+        wb.Save(s, s);
         Assert.Single(wb.History(s.Id));
     }
 
@@ -79,7 +79,7 @@ public class StoneWorkbookTests
     public void Search_finds_stones_by_reference_colour_or_notes_in_any_case()
     {
         using var dir = new TempDirectory();
-        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing);
         wb.Create(Quartz("lot 7 / 1"));
         wb.Create(Quartz("brooch centre") with { Notes = "chipped culet", Readings = new StoneReadings { Colour = "deep red" } });
         Assert.Equal(2, wb.List().Count);
@@ -93,7 +93,7 @@ public class StoneWorkbookTests
     public void Duplicate_copies_the_readings_under_a_new_reference_and_delete_removes_only_that_stone()
     {
         using var dir = new TempDirectory();
-        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing);
         StoneSheet s = wb.Create(Quartz());
         StoneSheet copy = wb.Duplicate(s.Id);
         Assert.NotEqual(s.Id, copy.Id);
@@ -110,8 +110,8 @@ public class StoneWorkbookTests
     public void Settings_are_kept_between_openings()
     {
         using var dir = new TempDirectory();
-        using (var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock())) wb.SetSetting("calibration_offset", "0.002");
-        using var again = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock());
+        using (var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing)) wb.SetSetting("calibration_offset", "0.002");
+        using var again = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing);
         Assert.Equal("0.002", again.Setting("calibration_offset"));
         Assert.Null(again.Setting("light_nm"));
     }
@@ -123,7 +123,7 @@ public class StoneWorkbookTests
         string path = dir.File("notes.db");
         File.WriteAllText(path, "shopping list: loupe, tweezers, cloth\n");
         byte[] before = File.ReadAllBytes(path);
-        var e = Assert.Throws<WorkbookException>(() => StoneWorkbook.Open(path, new SteppingClock()));
+        var e = Assert.Throws<WorkbookException>(() => StoneWorkbook.Open(path, new SteppingClock(), WorkbookOpening.CreateIfMissing));
         Assert.Contains("notes.db", e.Message);
         Assert.Contains("not a database", e.Message);
         Assert.Equal(before, File.ReadAllBytes(path));
@@ -142,7 +142,7 @@ public class StoneWorkbookTests
             cmd.ExecuteNonQuery();
         }
         byte[] before = File.ReadAllBytes(path);
-        var e = Assert.Throws<WorkbookException>(() => StoneWorkbook.Open(path, new SteppingClock()));
+        var e = Assert.Throws<WorkbookException>(() => StoneWorkbook.Open(path, new SteppingClock(), WorkbookOpening.CreateIfMissing));
         Assert.Contains("not a GemIndex workbook", e.Message);
         Assert.Equal(before, File.ReadAllBytes(path));
     }
@@ -152,7 +152,7 @@ public class StoneWorkbookTests
     {
         using var dir = new TempDirectory();
         string path = dir.File("newer.db");
-        using (StoneWorkbook.Open(path, new SteppingClock())) { }
+        using (StoneWorkbook.Open(path, new SteppingClock(), WorkbookOpening.CreateIfMissing)) { }
         using (var raw = new SqliteConnection($"Data Source={path};Pooling=False"))
         {
             raw.Open();
@@ -161,7 +161,7 @@ public class StoneWorkbookTests
             cmd.ExecuteNonQuery();
         }
         byte[] before = File.ReadAllBytes(path);
-        var e = Assert.Throws<WorkbookException>(() => StoneWorkbook.Open(path, new SteppingClock()));
+        var e = Assert.Throws<WorkbookException>(() => StoneWorkbook.Open(path, new SteppingClock(), WorkbookOpening.CreateIfMissing));
         Assert.Contains("newer GemIndex", e.Message);
         Assert.Contains($"schema {StoneWorkbook.SchemaVersion + 1}", e.Message);
         Assert.Equal(before, File.ReadAllBytes(path));
@@ -172,9 +172,9 @@ public class StoneWorkbookTests
     {
         using var dir = new TempDirectory();
         string path = dir.File("wb.db");
-        using var wb = StoneWorkbook.Open(path, new SteppingClock());
+        using var wb = StoneWorkbook.Open(path, new SteppingClock(), WorkbookOpening.CreateIfMissing);
         StoneSheet s = wb.Create(Quartz());
-        wb.Save(s with { Notes = "typed just before the terminal closed" });
+        wb.Save(s, s with { Notes = "typed just before the terminal closed" });
         // A second, independent connection sees the committed change while the first is still open.
         using var reader = new SqliteConnection($"Data Source={path};Pooling=False;Mode=ReadOnly");
         reader.Open();

@@ -1,10 +1,21 @@
+using FsCheck;
+using FsCheck.Fluent;
+using FsCheck.Xunit;
 using GemIndex.Cli.Reports;
 using GemIndex.Data.Workbook;
+using nietras.SeparatedValues;
 
 namespace GemIndex.Tests.Reports;
 
 public class WorkbookCsvTests
 {
+    private static string Csv(params string[] cells)
+    {
+        var w = new StringWriter();
+        WorkbookCsv.Table(w, [.. cells.Select((_, i) => "c" + i)], [cells]);
+        return w.ToString();
+    }
+
     [Theory]
     [InlineData("plain", "plain")]
     [InlineData("a,b", "\"a,b\"")]
@@ -12,21 +23,64 @@ public class WorkbookCsvTests
     [InlineData("two\nlines", "\"two\nlines\"")]
     [InlineData("cr\rhere", "\"cr\rhere\"")]
     public void Fields_are_quoted_as_RFC_4180_says(string field, string expected) =>
-        Assert.Equal(expected, WorkbookCsv.Quote(field));
+        Assert.Equal("c0" + Environment.NewLine + expected + Environment.NewLine, Csv(field));
+
+    // The triggers of OWASP ASVS 5.0 requirement 1.2.10 and CWE-1236 (read for this check): a leading =, +, -, @, tab,
+    // CR or NUL makes a spreadsheet evaluate the cell; a leading apostrophe makes it text.
+    [Theory]
+    [InlineData("=HYPERLINK(\"http://example.invalid\",\"lot 7\")", "'=HYPERLINK(\"http://example.invalid\",\"lot 7\")")]
+    [InlineData("+1+2", "'+1+2")]
+    [InlineData("-2+3", "'-2+3")]
+    [InlineData("@SUM(A1:A2)", "'@SUM(A1:A2)")]
+    [InlineData("\tlot 7", "'\tlot 7")]
+    [InlineData("\rlot 7", "'\rlot 7")]
+    [InlineData("lot =7", "lot =7")]
+    [InlineData("'already quoted", "'already quoted")]
+    [InlineData("", "")]
+    public void Cells_a_spreadsheet_would_run_as_formulas_get_a_leading_apostrophe(string cell, string expected) =>
+        Assert.Equal(expected, WorkbookCsv.Neutralised(cell));
 
     [Fact]
-    public void One_row_per_stone_after_the_header_with_CRLF_line_ends()
+    public void A_reference_written_as_a_formula_reaches_the_file_neutralised()
+    {
+        StoneSheet hostile = ReportFixtures.Sheet("""{"id":"=cmd|' /C calc'!A0","colour":"@red"}""");
+        var w = new StringWriter();
+        WorkbookCsv.Write(w, [(hostile, null)]);
+        string row = w.ToString().Split(Environment.NewLine)[1];
+        Assert.StartsWith("'=cmd|' /C calc'!A0,2.65,'@red,", row);
+    }
+
+    [Fact]
+    public void One_row_per_stone_after_the_header()
     {
         StoneSheet identified = ReportFixtures.Sheet(ReportFixtures.QuartzLine, "lot 7, \"A\"");
         StoneSheet notYet = ReportFixtures.Sheet("""{"id":"x","colour":"blue\ngreen"}""");
         var w = new StringWriter();
         WorkbookCsv.Write(w, [(identified, ReportFixtures.Identify(identified)), (notYet, null)]);
-        string[] rows = w.ToString().Split("\r\n");
+        string text = w.ToString();
+        string[] rows = text.Split(Environment.NewLine);
         Assert.Equal(string.Join(",", WorkbookCsv.Columns), rows[0]);
         Assert.StartsWith("\"lot 7, \"\"A\"\"\",2.65,colourless,1.544,1.553,", rows[1]);
         Assert.EndsWith(",quartz," + ReportFixtures.Identify(identified).Candidates[0].Confidence.ToString("0.000", System.Globalization.CultureInfo.InvariantCulture) + ",false", rows[1]);
-        Assert.Equal("x,2.65,\"blue\ngreen\",,,,,,,,,", rows[2]);
-        Assert.Equal("", rows[3]); // the file ends with a line break
-        Assert.Equal(4, rows.Length);
+        // The line break inside the quoted colour is the stone's, the last one ends the file (Sep writes the platform's line end).
+        Assert.EndsWith(Environment.NewLine + "x,2.65,\"blue\ngreen\",,,,,,,,," + Environment.NewLine, text);
     }
+
+    private static readonly Gen<string> Cell =
+        Gen.Elements("a", "b", ",", "\"", "\r", "\n", "\r\n", " ", "=", "+", "-", "@", "\t", "'", ";", "é", "1.544")
+            .ListOf().Select(parts => string.Concat(parts));
+
+    /// <summary>Any cells, with commas, quotes and line breaks anywhere, read back by the library as written (after neutralising).</summary>
+    [Property(MaxTest = 300)]
+    public Property Cells_with_quoted_commas_and_line_breaks_round_trip() =>
+        Prop.ForAll(Cell.ArrayOf(3).ListOf().Select(rows => rows.Select(r => (IReadOnlyList<string>)r).ToList()).ToArbitrary(), rows =>
+        {
+            var w = new StringWriter();
+            WorkbookCsv.Table(w, ["reference", "colour", "notes"], rows);
+            using SepReader reader = Sep.New(',').Reader(o => o with { Unescape = true, HasHeader = true }).FromText(w.ToString());
+            var back = new List<string[]>();
+            foreach (SepReader.Row row in reader) back.Add([row["reference"].ToString(), row["colour"].ToString(), row["notes"].ToString()]);
+            return back.Count == rows.Count
+                && back.Zip(rows).All(p => p.First.SequenceEqual(p.Second.Select(WorkbookCsv.Neutralised)));
+        });
 }

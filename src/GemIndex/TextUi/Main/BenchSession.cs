@@ -20,6 +20,10 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     private (long Id, int Version) _lastSaved = (0, -1);
     private Task _pending = Task.CompletedTask;
 
+    // Each stone as this window last read it: a save writes only what changed since, and only where the workbook
+    // still holds that value (another window's edit is reported as a conflict, never reverted).
+    private readonly Dictionary<long, StoneSheet> _lastRead = [];
+
     public BenchModel Form { get; } = new();
 
     public ResultsModel Results { get; } = new();
@@ -32,6 +36,12 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     /// <summary>The last save failure, shown on the key line; null after a good save.</summary>
     public string? SaveProblem { get; private set; }
 
+    /// <summary>Fields changed in another window that this window's last save left unwritten (both values); empty when none.</summary>
+    public IReadOnlyList<FieldConflict> Conflicts { get; private set; } = [];
+
+    /// <summary>Why the workbook is open for reading only (nothing typed is saved), or null.</summary>
+    public string? ReadOnlyReason => workbook.ReadOnlyReason;
+
     /// <summary>Opens the most recently changed stone, or a new one when the workbook is empty.</summary>
     public void Start()
     {
@@ -40,7 +50,7 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
             Form.SetText(BenchFields.Precision, workbook.Setting(PrecisionSetting) ?? "");
             Form.SetText(BenchFields.CalibrationOffset, workbook.Setting(CalibrationSetting) ?? "");
             StoneSummary? latest = workbook.List().FirstOrDefault();
-            Load(latest is null ? NewStone() : workbook.Get(latest.Id)!);
+            Load(latest is not null ? workbook.Get(latest.Id)! : workbook.IsReadOnly ? new StoneSheet() : NewStone());
         }
         Changed();
     }
@@ -62,6 +72,7 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
 
     private void Load(StoneSheet stone)
     {
+        _lastRead[stone.Id] = stone;
         Form.Load(stone);
         Form.ApplyDraft(workbook.Setting(DraftSetting(stone.Id)));
     }
@@ -103,35 +114,43 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     private void Process(BenchSnapshot snapshot, bool save)
     {
         BenchAssessment assessment = Assess(snapshot);
-        string? problem = save ? Save(snapshot, assessment) : SaveProblem;
+        (string? problem, IReadOnlyList<FieldConflict> conflicts) = save ? Save(snapshot, assessment) : (SaveProblem, Conflicts);
         toUi(() =>
         {
-            if (save) SaveProblem = problem;
+            if (save) (SaveProblem, Conflicts) = (problem, conflicts);
             if (Results.Accept(assessment)) Assessed?.Invoke();
         });
     }
 
-    private string? Save(BenchSnapshot snapshot, BenchAssessment assessment)
+    private (string? Problem, IReadOnlyList<FieldConflict> Conflicts) Save(BenchSnapshot snapshot, BenchAssessment assessment)
     {
         lock (_gate)
         {
-            if (snapshot.StoneId == _lastSaved.Id && snapshot.Version <= _lastSaved.Version) return null;  // overtaken by a newer save
+            if (snapshot.StoneId == _lastSaved.Id && snapshot.Version <= _lastSaved.Version) return (null, []);  // overtaken by a newer save
+            if (workbook.ReadOnlyReason is { } why) return ($"READ-ONLY: {why}; nothing typed is saved", []);
             try
             {
                 // The draft first: if the process dies between the two commits, the draft is the newer of the two.
                 Setting(DraftSetting(snapshot.StoneId), BenchDraft.Write(snapshot));
-                workbook.Save(BenchModel.ToStoneSheet(snapshot, assessment.Readings));
+                StoneSheet lastRead = _lastRead.GetValueOrDefault(snapshot.StoneId) ?? workbook.Get(snapshot.StoneId)
+                    ?? throw new WorkbookException($"{workbook.Path}: no stone with id {snapshot.StoneId} (deleted elsewhere?)");
+                StoneSaveResult saved = workbook.Save(lastRead, BenchModel.ToStoneSheet(snapshot, assessment.Readings));
+                _lastRead[snapshot.StoneId] = saved.NextLastRead;
                 Setting(PrecisionSetting, snapshot.Text(BenchFields.Precision));
                 Setting(CalibrationSetting, snapshot.Text(BenchFields.CalibrationOffset));
                 _lastSaved = (snapshot.StoneId, snapshot.Version);
-                return null;
+                return saved.IsClean ? (null, []) : (ConflictText(saved.Conflicts), saved.Conflicts);
             }
             catch (Exception e) when (e is WorkbookException or Microsoft.Data.Sqlite.SqliteException or IOException)
             {
-                return "NOT SAVED: " + e.Message;
+                return ("NOT SAVED: " + e.Message, []);
             }
         }
     }
+
+    /// <summary>The key line's words for fields another window changed meanwhile (until the text UI shows its dialog).</summary>
+    public static string ConflictText(IReadOnlyList<FieldConflict> conflicts) =>
+        "NOT SAVED, changed in another window: " + string.Join("; ", conflicts.Select(c => $"{c.Field} is '{c.Stored}' there, yours '{c.Yours}'"));
 
     private void Setting(string key, string value)
     {

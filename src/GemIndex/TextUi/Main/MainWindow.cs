@@ -8,6 +8,7 @@ using GemIndex.Cli.TextUi.Stones;
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Quantities;
 using GemIndex.Data.Batch;
+using GemIndex.Data.Workbook;
 using Terminal.Gui.App;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.Input;
@@ -255,10 +256,12 @@ internal sealed class MainWindow : Window
             BenchAssessment a = _session.Assess(snapshot);
             if (a.Result is null)
                 return ("Nothing to export", "No identification yet: enter readings first" + (_session.HasCatalogue ? "." : " (the catalogue is still loading)."));
-            IReadOnlyList<string> paths = StoneReportFiles.Write(workbook, BenchModel.ToStoneSheet(snapshot, a.Readings), a.Result);
-            return ("Reports written", string.Join('\n', paths));
+            StoneSheet sheet = BenchModel.ToStoneSheet(snapshot, a.Readings);
+            IReadOnlyList<string> paths = StoneReportFiles.Write(workbook, sheet, a.Result);   // never over an earlier file: a numbered name instead
+            IReadOnlyList<string> warnings = StoneReportFiles.ReferenceWarnings(sheet, _session.WithWorkbook(w => w.List()));
+            return ("Reports written", string.Join('\n', [.. paths, .. warnings]));
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or BatchInputException or QuantityOutOfRangeException)
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or BatchInputException or QuantityOutOfRangeException or WorkbookException)
         {
             return ("Export failed", $"The reports were not written to {StoneReportFiles.FolderFor(workbook)}:\n{e.Message}");
         }

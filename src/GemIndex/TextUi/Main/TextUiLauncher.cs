@@ -14,7 +14,7 @@ internal static class TextUiLauncher
     /// <summary>Shown in the identification panel until the catalogue is read.</summary>
     public const string LoadingCatalogue = "loading catalogue…";
 
-    public static int Run(string workbookPath, TextWriter error)
+    public static int Run(string workbookPath, bool createNew, TextWriter error)
     {
         if (Console.IsInputRedirected || Console.IsOutputRedirected)
         {
@@ -23,13 +23,10 @@ internal static class TextUiLauncher
         }
         // Read the catalogue (the slow part of a start) while the workbook opens and the window is drawn.
         Task<IReadOnlyList<Material>> loading = Task.Run(() => MergedCatalogue.Load(CatalogueLocations.FromEnvironment()));
-        StoneWorkbook workbook;
-        try { workbook = StoneWorkbook.Open(workbookPath, TimeProvider.System); }
-        catch (WorkbookException e)
-        {
-            error.WriteLine("gemindex: " + e.Message);
-            return ExitCodes.BadFile;
-        }
+        StoneWorkbook? workbook = TextUiCommand.Open(workbookPath, createNew, interactive: true, Console.In, Console.Out, error, out int failure);
+        if (workbook is null) return failure;
+        // Said before the screen is drawn, and on the key line (every save reports it) while it runs.
+        if (workbook.ReadOnlyReason is { } readOnly) error.WriteLine($"gemindex: {workbook.Path} opened read-only ({readOnly}): stones can be read and reported, nothing typed is saved");
         string? catalogueProblem = null;
         using (workbook)
         {

@@ -1,6 +1,7 @@
 using System.Text.Json;
 using GemIndex.Cli.Reports;
 using GemIndex.Cli.TextUi.Export;
+using GemIndex.Data.Workbook;
 using GemIndex.Tests.Reports;
 
 namespace GemIndex.Tests.TextUi.Export;
@@ -65,15 +66,63 @@ public sealed class StoneReportFilesTests : IDisposable
     }
 
     [Fact]
-    public void Exporting_again_replaces_the_files()
+    public void Exporting_again_never_replaces_a_file_without_the_users_word()
     {
-        var sheet = ReportFixtures.Sheet(ReportFixtures.QuartzLine, "ring 1");
+        var sheet = ReportFixtures.Sheet(ReportFixtures.QuartzLine, "ring 1") with { Id = 4 };
         string workbook = Path.Combine(_folder, "bench.db");
-        StoneReportFiles.Write(workbook, sheet, ReportFixtures.Identify(sheet));
-        var renamed = sheet with { Notes = "second export" };
-        IReadOnlyList<string> paths = StoneReportFiles.Write(workbook, renamed, ReportFixtures.Identify(renamed));
-        Assert.Contains("second export", File.ReadAllText(paths[0]));
-        Assert.Equal(3, Directory.GetFiles(Path.Combine(_folder, "reports")).Length);
+        IReadOnlyList<string> first = StoneReportFiles.Write(workbook, sheet, ReportFixtures.Identify(sheet));
+        string firstText = File.ReadAllText(first[0]);
+        Assert.True(StoneReportFiles.Exists(workbook, sheet));
+        var edited = sheet with { Notes = "second export" };
+        IReadOnlyList<string> second = StoneReportFiles.Write(workbook, edited, ReportFixtures.Identify(edited));
+        Assert.Equal(Path.Combine(_folder, "reports", "ring_1-s4-2.md"), second[0]);
+        Assert.Equal(firstText, File.ReadAllText(first[0]));
+        IReadOnlyList<string> replaced = StoneReportFiles.Write(workbook, edited, ReportFixtures.Identify(edited), replace: true);
+        Assert.Equal(first, replaced);
+        Assert.Contains("second export", File.ReadAllText(first[0]));
+        Assert.Equal(6, Directory.GetFiles(Path.Combine(_folder, "reports")).Length);   // no temporary files left behind
+    }
+
+    [Theory]
+    [InlineData("lot 7 2", "lot 7/2")]
+    [InlineData("", "/")]
+    [InlineData("/", "stone")]
+    [InlineData("lot 7", "lot 7")]
+    public void Stones_whose_references_map_to_one_name_get_their_own_files(string first, string second)
+    {
+        string workbook = Path.Combine(_folder, "bench.db");
+        var a = ReportFixtures.Sheet(ReportFixtures.QuartzLine, first) with { Id = 1 };
+        var b = ReportFixtures.Sheet(ReportFixtures.QuartzLine, second) with { Id = 2 };
+        IReadOnlyList<string> pathsA = StoneReportFiles.Write(workbook, a, ReportFixtures.Identify(a));
+        IReadOnlyList<string> pathsB = StoneReportFiles.Write(workbook, b, ReportFixtures.Identify(b));
+        Assert.Empty(pathsA.Intersect(pathsB));
+        Assert.Equal(6, Directory.GetFiles(Path.Combine(_folder, "reports")).Length);
+    }
+
+    [Theory]
+    [InlineData(129, 130)]
+    public void References_differing_after_the_name_length_limit_get_their_own_files(int lengthA, int lengthB)
+    {
+        string workbook = Path.Combine(_folder, "bench.db");
+        var a = ReportFixtures.Sheet(ReportFixtures.QuartzLine, new string('x', lengthA)) with { Id = 10 };
+        var b = ReportFixtures.Sheet(ReportFixtures.QuartzLine, new string('x', lengthB)) with { Id = 11 };
+        Assert.NotEqual(StoneReportFiles.Write(workbook, a, ReportFixtures.Identify(a))[0], StoneReportFiles.Write(workbook, b, ReportFixtures.Identify(b))[0]);
+    }
+
+    [Fact]
+    public void Empty_and_duplicate_references_are_warned_about()
+    {
+        var summaries = new[]
+        {
+            new StoneSummary(1, "Lot 7", "", null, DateTimeOffset.UnixEpoch),
+            new StoneSummary(2, "lot 7 ", "", null, DateTimeOffset.UnixEpoch),
+            new StoneSummary(3, "", "", null, DateTimeOffset.UnixEpoch),
+        };
+        var duplicate = new StoneSheet { Id = 2, Reference = "lot 7 " };
+        Assert.Equal(["1 other stone has the reference 'lot 7': the report names differ only by the stone number (-s2)."],
+            StoneReportFiles.ReferenceWarnings(duplicate, summaries));
+        Assert.Contains("has no reference", Assert.Single(StoneReportFiles.ReferenceWarnings(new StoneSheet { Id = 3 }, summaries)));
+        Assert.Empty(StoneReportFiles.ReferenceWarnings(new StoneSheet { Id = 9, Reference = "brooch" }, summaries));
     }
 
     [Fact]

@@ -16,7 +16,7 @@ public class BenchSessionTests
         try
         {
             long id;
-            using (var wb = StoneWorkbook.Open(path, TimeProvider.System))
+            using (var wb = StoneWorkbook.Open(path, TimeProvider.System, WorkbookOpening.CreateIfMissing))
             {
                 var session = new BenchSession(wb, new BenchAssessor(new Identifier(TestMaterials.All)), a => a());
                 session.Start();
@@ -30,7 +30,7 @@ public class BenchSessionTests
                 Assert.Null(session.SaveProblem);
                 Assert.True(session.Flush());
             }
-            using (var wb = StoneWorkbook.Open(path, TimeProvider.System))
+            using (var wb = StoneWorkbook.Open(path, TimeProvider.System, WorkbookOpening.CreateIfMissing))
             {
                 StoneSheet stored = wb.Get(id)!;
                 Assert.Equal("ring 3", stored.Reference);
@@ -55,7 +55,7 @@ public class BenchSessionTests
         string path = TempFile();
         try
         {
-            using var wb = StoneWorkbook.Open(path, TimeProvider.System);
+            using var wb = StoneWorkbook.Open(path, TimeProvider.System, WorkbookOpening.CreateIfMissing);
             var session = new BenchSession(wb, new BenchAssessor(null), a => a());
             session.Start();
             session.Form.SetText(BenchFields.Notes, "first");

@@ -19,7 +19,7 @@ public sealed class MainWindowTests : IDisposable
 
     public MainWindowTests()
     {
-        _workbook = StoneWorkbook.Open(_path, TimeProvider.System);
+        _workbook = StoneWorkbook.Open(_path, TimeProvider.System, WorkbookOpening.CreateIfMissing);
         _session = new BenchSession(_workbook, new BenchAssessor(new Identifier(TestMaterials.All)), _uiQueue.Enqueue);
     }
 
