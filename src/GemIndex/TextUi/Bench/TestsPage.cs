@@ -14,6 +14,6 @@ internal sealed class TestsPage : BenchPage
         AddChoice(BenchFields.Electrical);
         AddChoice(BenchFields.UvLong);
         AddChoice(BenchFields.UvShort);
-        AddField(BenchFields.Absorption, "Absorption", 14, "nm, or none");
+        AddField(BenchFields.Absorption, "Absorption", 12, "nm, or none");
     }
 }
