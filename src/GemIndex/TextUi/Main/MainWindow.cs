@@ -211,7 +211,11 @@ internal sealed class MainWindow : Window
         {
             foreach (BenchPage page in Pages)
             {
-                foreach (FormField f in page.Fields) f.Edit.Text = _session.Form.Text(f.Field);
+                foreach (FormField f in page.Fields)
+                {
+                    f.Edit.Text = _session.Form.Text(f.Field);
+                    f.Edit.InsertionPoint = 0;   // show a value's start (a number's leading digits, a note's first words)
+                }
                 foreach (ChoiceField c in page.Choices) c.Show(_session.Form.Choice(c.Choice.Field));
             }
             Refractometer.ShowSteps(_session.Form.Steps, new Dictionary<string, string>());
@@ -260,11 +264,20 @@ internal sealed class MainWindow : Window
         else if (key == Key.F10) ToggleAnswer();
         else if (key == Key.Esc && Results.HasFocus) ShowPage(CurrentPage);
         else if (key == Key.E.WithCtrl) Export();
-        else if (key == Key.N.WithCtrl) { _session.New(); FillFromModel(); ShowPage(0); }
+        else if (key == Key.N.WithCtrl) NewStone();
         else if (key == Key.Q.WithCtrl) App!.RequestStop();
         else if (key == Key.Esc) { }                       // Esc quits the application by default: keep the bench open
         else return;
         key.Handled = true;
+    }
+
+    /// <summary>A new stone, opened at its reference with the suggested one selected, so that typing replaces it.</summary>
+    private void NewStone()
+    {
+        _session.New();
+        FillFromModel();
+        ShowPage(0);
+        Pages[0].Fields[0].Edit.SelectAll();
     }
 
     /// <summary>Writes the open stone's reports beside the workbook off the UI thread, then shows where they went (or why not).</summary>
@@ -307,7 +320,7 @@ internal sealed class MainWindow : Window
         using var view = new StoneListView(model, id => _session.WithWorkbook(w => w.Duplicate(id).Id), id => _session.WithWorkbook(w => w.Delete(id)),
             id => _session.WithWorkbook(w => StoneHistoryText.Lines(w.Get(id)?.Reference ?? "", w.History(id))));
         App!.Run(view);
-        if (view.WantsNew) { _session.New(); FillFromModel(); ShowPage(0); }
+        if (view.WantsNew) NewStone();
         else if (view.Chosen is { } id) { _session.Open(id); FillFromModel(); }
         else if (_session.WithWorkbook(w => w.Get(_session.Form.StoneId)) is null) { _session.Start(); FillFromModel(); }  // the open stone was deleted
     }

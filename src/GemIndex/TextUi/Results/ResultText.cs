@@ -65,6 +65,9 @@ internal static class ResultText
         List<KeyValuePair<OriginClass, double>> origins = Origins(lead);
         if (origins.Count > 1) lines.Add("  " + string.Join(", ", origins.Select(o => $"{Origin(o.Key)} {Percent(o.Value)}")));
         if (origins.Count > 1) lines.Add(Inseparable(r, lead, origins));
+        else if (r.Candidates.Where(c => c.Material.Species == lead.Species && c.Confidence >= BenchWarnings.Relevant).ToList() is [var only]
+                 && only.Material.Name != lead.Species)
+            lines.Add($"  {only.Material.Name}, {Origin(only.Material.Origin)}");   // the variety beneath its species: "Forsterite" / "peridot"
         foreach (SpeciesResult other in r.Species.Skip(1).Where(s => s.Confidence >= BenchWarnings.Relevant).Take(2))
             lines.Add($"or {other.Species} {Percent(other.Confidence)}");
         return lines;
