@@ -60,8 +60,10 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
         double total = 0;
         if (index is { } n)
         {
-            if (Away(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum, n, IndexTolerance) is not { } d) return null;
-            total += d;
+            // Within the span of the entry's indices; closeness to the nearer of its lowest and highest index (an edge as read).
+            if (Away(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum, n, IndexTolerance) is null) return null;
+            total += Math.Min(Closeness(m.Indices.Lowest.Minimum, m.Indices.Lowest.Maximum, n, IndexTolerance),
+                Closeness(m.Indices.Highest.Minimum, m.Indices.Highest.Maximum, n, IndexTolerance));
         }
         if (sg is { } g)
         {
@@ -71,12 +73,14 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
         return total;
     }
 
-    private static double? Away(double low, double high, double x, double tolerance)
-    {
-        double outside = x < low ? low - x : x > high ? x - high : 0;
-        if (outside > tolerance) return null;
-        return outside / tolerance + Math.Abs(x - (low + high) / 2) / (tolerance * 100);
-    }
+    private static double? Away(double low, double high, double x, double tolerance) =>
+        Outside(low, high, x) > tolerance ? null : Closeness(low, high, x, tolerance);
+
+    private static double Outside(double low, double high, double x) => x < low ? low - x : x > high ? x - high : 0;
+
+    /// <summary>Tolerances outside the range, plus a hundredth of a tolerance per tolerance from its middle (ties go to the centred entry).</summary>
+    private static double Closeness(double low, double high, double x, double tolerance) =>
+        Outside(low, high, x) / tolerance + Math.Abs(x - (low + high) / 2) / (tolerance * 100);
 
     private static bool Matches(Material m, string q) =>
         new[] { m.Name, m.Species, m.Variety, m.Family }.Concat(m.Colours).Any(s => s.Contains(q, StringComparison.OrdinalIgnoreCase));

@@ -15,7 +15,7 @@ internal sealed class CatalogueBrowserView : Dialog
     public CatalogueBrowserView(CatalogueBrowserModel model)
     {
         _model = model;
-        Title = "Catalogue: a name, an index, an SG or both (1.544 2.65); ↑↓ select, Esc closes";
+        Title = "Catalogue: a name, an index, an SG or both (1.544 2.65); Esc closes";
         Width = Dim.Fill();
         Height = Dim.Fill();
         var label = new Label { Text = "Search:" };

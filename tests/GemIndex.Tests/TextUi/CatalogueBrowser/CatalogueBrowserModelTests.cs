@@ -39,6 +39,22 @@ public class CatalogueBrowserModelTests
     }
 
     [Fact]
+    public void An_index_read_as_an_edge_ranks_the_entry_whose_own_index_it_is_first()
+    {
+        // Oligoclase (from memory: α 1.533–1.540, γ 1.542–1.552, SG 2.62–2.67) spans 1.544 too, but none of its
+        // indices is 1.544; quartz's ω is (common practice).
+        var oligoclase = TestMaterials.All[0] with
+        {
+            Name = "oligoclase", Species = "plagioclase", Variety = "oligoclase",
+            Indices = GemIndex.Core.Catalogue.OpticalIndices.Uniaxial(new(1.533, 1.540), new(1.542, 1.552)),
+            SpecificGravity = new(2.62, 2.67),
+        };
+        var model = new CatalogueBrowserModel([oligoclase, TestMaterials.All[0]]);
+        model.Search("1.544 2.65");
+        Assert.Equal(["quartz", "oligoclase"], model.Shown.Select(m => m.Name));
+    }
+
+    [Fact]
     public void Names_are_not_cut_while_the_line_has_room()
     {
         var model = new CatalogueBrowserModel([TestMaterials.All[0] with { Name = "flame-fusion colourless synthetic sapphire" }]);
