@@ -19,6 +19,9 @@ internal sealed class RefractometerPage : BenchPage
     /// <summary>The bench setting that holds the rotation between steps (kept across stones, like the precision).</summary>
     public const string RotationStepField = "refractometer.rotation_step";
 
+    /// <summary>The step being typed (before Enter), kept in the form so that its draft survives a closed terminal.</summary>
+    public const string TypingRotation = "refractometer.typing.rotation", TypingLow = "refractometer.typing.low", TypingHigh = "refractometer.typing.high";
+
     public RefractometerPage() : base("Refractometer", "Enter stores the step")
     {
         NextRow();
@@ -53,6 +56,9 @@ internal sealed class RefractometerPage : BenchPage
     }
 
     public override View FirstReading => Low;
+
+    /// <summary>The edit line's boxes with the form keys that keep their text.</summary>
+    public IReadOnlyList<(TextField Box, string Key)> TypingBoxes => [(Rotation, TypingRotation), (Low, TypingLow), (High, TypingHigh)];
 
     public FormField StepField { get; }
 

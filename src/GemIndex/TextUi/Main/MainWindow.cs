@@ -197,6 +197,13 @@ internal sealed class MainWindow : Window
             rf.ShowSteps(_session.Form.Steps, _session.Results.Latest?.Errors ?? new Dictionary<string, string>());
             rf.BeginStep(null, null, _session.Form.NextRotation());
         };
+        foreach ((TextField box, string typingKey) in rf.TypingBoxes)
+            box.TextChanged += (_, _) =>
+            {
+                if (_filling) return;
+                _session.Form.SetText(typingKey, box.Text);
+                _session.Changed();
+            };
         rf.EditRequested += i => rf.BeginStep(i, _session.Form.Steps[i], _session.Form.NextRotation());
         rf.RemoveRequested += i => { _session.Form.RemoveStep(i); _session.Changed(); rf.ShowSteps(_session.Form.Steps, new Dictionary<string, string>()); };
         foreach (ChoiceField c in Pages.SelectMany(p => p.Choices)) c.HasFocusChanged += (_, _) => ShowBars();
@@ -220,6 +227,9 @@ internal sealed class MainWindow : Window
             }
             Refractometer.ShowSteps(_session.Form.Steps, new Dictionary<string, string>());
             Refractometer.BeginStep(null, null, _session.Form.NextRotation());
+            // A step typed but not stored (a closed terminal, another stone opened meanwhile) comes back on the edit line.
+            foreach ((TextField box, string typingKey) in Refractometer.TypingBoxes)
+                if (_session.Form.Text(typingKey) is { Length: > 0 } typed) box.Text = typed;
         }
         finally { _filling = false; }
         ShowPage(CurrentPage);

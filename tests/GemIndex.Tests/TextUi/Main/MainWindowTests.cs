@@ -350,5 +350,28 @@ public sealed class MainWindowTests : IDisposable
         app.End(token);
         app.Dispose();
     }
+
+    [Fact]
+    public void A_step_typed_but_not_stored_comes_back_when_the_workbook_is_opened_again()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        Type(app, "1.762");
+        app.InjectKey(Key.Tab);
+        Type(app, "1.770");        // no Enter: the terminal closes here
+        Settle();
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+
+        var again = new BenchSession(_workbook, new BenchAssessor(new Identifier(TestMaterials.All)), _uiQueue.Enqueue);
+        using var reopened = new MainWindow(again, TestMaterials.All);
+        again.Start();
+        reopened.FillFromModel();
+        Assert.Equal("1.762", reopened.Refractometer.Low.Text);
+        Assert.Equal("1.770", reopened.Refractometer.High.Text);
+        Assert.Empty(again.Form.Steps);   // still only typed: a step is stored with Enter
+        Assert.True(again.Flush());
+    }
 }
 
