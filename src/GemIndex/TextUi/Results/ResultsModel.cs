@@ -68,7 +68,7 @@ internal sealed class ResultsModel
         Text(ResultText.Lead(r));
         if (TopWarning(r) is { } top) Text(["! " + Short(top)]);
         rows.Add(new AnswerRow(""));
-        rows.Add(new AnswerRow("Candidates (Enter: detail)"));
+        rows.Add(new AnswerRow("Candidates (F10, Enter: detail)"));
         bool bars = width >= WidthForBars;
         int nameWidth = width - 7 - (bars ? ResultText.BarWidth + 1 : 0);
         IReadOnlyList<RankedCandidate> shown = [.. Candidates.Take(Listed)];
