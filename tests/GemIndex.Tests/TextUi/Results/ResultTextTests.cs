@@ -94,7 +94,9 @@ public class ResultTextTests
         var next = new NextTestAdvice { Test = "absorption_nm", GainBits = 1.3, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = ["ruby: lines at 694 nm"] };
         var model = new ResultsModel();
         model.Accept(new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 4.0 }, Result = CorundumAnswer(next) });
-        string pane = string.Join('\n', model.Rows(38).Select(r => r.Text));
+        IReadOnlyList<AnswerRow> rows = model.Rows(38);
+        Assert.All(rows, r => Assert.True(r.Text.Length <= 38, r.Text));   // wrapped or fitted, never cut by the pane's edge
+        string pane = string.Join('\n', rows.Select(r => r.Text));
         foreach (string jargon in new[] { "bits", "fit ", "conf", "σ", "weight", "undetermined", "family" })
             Assert.DoesNotContain(jargon, pane);
         Assert.Contains("1.3 bits", CandidateDetail.Render(CorundumAnswer(next).Candidates[0], 1, CorundumAnswer(next)));
