@@ -165,6 +165,13 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void A_two_column_line_wraps_under_its_second_column()
+    {
+        string[] rows = [.. TextWrap.Lines(["  F7    catalogue browser by name or index"], 30)];
+        Assert.Equal(["  F7    catalogue browser by", "        name or index"], rows);
+    }
+
+    [Fact]
     public void An_older_assessment_does_not_replace_a_newer_one()
     {
         var model = new ResultsModel();
