@@ -1,7 +1,13 @@
 #!/usr/bin/env bash
-# End-to-end test of the text UI: runs the built app (it builds nothing; CI builds first) in tmux at 80x24 with a
-# throw-away HOME and workbook, types a quartz-like stone, checks the identification, quits, reopens and checks the
-# stone is intact. Prints PASS or FAIL with the screen, exits non-zero on failure.
+# End-to-end test of the text UI, keyboard only at 80x24: runs the built app (it builds nothing; CI builds first) in
+# tmux with a throw-away HOME and workbook. Three stones, each checked by the species that leads the answer:
+#   1. a uniaxial series: quartz, ω 1.544 constant, ε' moving up to 1.553, SG 2.65 (common practice handbook values);
+#   2. over the limit with SG 5.80: cubic zirconia (SG 5.6–6.0, index 2.15 above any contact liquid; common practice);
+#   3. a biaxial series: peridot, α 1.654, β 1.672, γ 1.690 (common practice handbook values), SG 3.34 from weights
+#      in air and water (1.670 ct, 1.170 ct: 1.670 / 0.500 = 3.34).
+# Along the way: the focus order of every page, the rotation step set once and remembered, candidate 3 reached from
+# the keyboard with its detail, the scales, the export; then a kill -9 while typing and the stone reopened whole.
+# Prints PASS or FAIL with the screen, exits non-zero on failure.
 set -euo pipefail
 cd "$(dirname "$0")/../.."
 
@@ -27,6 +33,15 @@ wait_for() {
   done
 }
 
+# wait_match REGEX [SECONDS]: the same for an extended regular expression.
+wait_match() {
+  local deadline=$((SECONDS + ${2:-20}))
+  until screen | grep -qE -- "$1"; do
+    (( SECONDS < deadline )) || fail "did not see /$1/"
+    sleep 0.2
+  done
+}
+
 start() {
   tmux new-session -d -s "$session" -x 80 -y 24 \
     "env HOME='$tmp' XDG_DATA_HOME='$tmp/data' XDG_CACHE_HOME='$tmp/cache' dotnet '$dll' --new --workbook '$workbook'; echo \"EXIT=\$?\"; sleep 600"
@@ -36,56 +51,108 @@ start() {
 keys() { tmux send-keys -t "$session" "$@"; sleep 0.15; }
 text() { tmux send-keys -t "$session" -l "$1"; sleep 0.15; }
 
+# step LOW HIGH: types one rotation step on the RI page's edit line (the cursor is in the low edge) and stores it.
+step() { text "$1"; keys Tab; text "$2"; keys Enter; }
+
 start
-# Refractometer page: two rotation steps (rotation is offered; type low, Tab, high, Enter).
-text "1.544"; keys Tab; text "1.553"; keys Enter
-wait_for "0°  1.544    1.553"
-text "1.544"; keys Tab; text "1.548"; keys Enter
-wait_for "15°  1.544    1.548"
-# SG page: typed directly.
+# ---- stone 1: a uniaxial series (quartz) ----
+# RI page focus order: the page opens at the low edge; Tab: high edge, steps, spot, over limit, rotation step.
+keys Tab Tab Tab Tab Tab; text "45"
+wait_for "Rotation step 45"
+keys F3                                   # back at the low edge, not in the rotation step
+step 1.544 1.553
+wait_for "0°  1.544     1.553"
+wait_match "^.45 +"                       # the next rotation offered: the step set above
+step 1.544 1.551
+step 1.544 1.548
+step 1.544 1.551
+wait_for "135°  1.544     1.551"
+# SG page opens at the SG.
 keys F4; text "2.65"
-wait_for "SG 2.650 ± 0.010"
-# Stone page: reference and colour.
-keys F2; tmux send-keys -t "$session" C-a; text "e2e ring"; keys Tab Tab Tab Tab Tab; text "colourless"
-wait_for "e2e ring"
-wait_for "Best:"
-# The ranking follows the typing in the background: wait for it to take the colour in.
-deadline=$((SECONDS + 20))
-# (Before the colour counts, rock crystal and amethyst tie: wait until amethyst has dropped from second place.)
-until screen | grep -qE "^.*│1 (rock crystal|quartz|synthetic colo)" && ! screen | grep -qE "^.*│2 amethyst"; do
-  (( SECONDS < deadline )) || fail "quartz is not the first candidate"
-  sleep 0.2
-done
-screen | grep -qF "n 1.544 – 1.553" || fail "the derived indices are not shown"
-echo "---- 80x24 after entering the stone ----"; screen
+wait_for "SG 2.650 ± 0.010 as typed"
+# Tests page opens at the polariscope; Tab: pleochroism.
+keys F5; text "d"; keys Tab; text "n"
+wait_for "Polariscope   [doubly refractive]"
+wait_for "Pleochroism   [none]"
+# Stone page opens at the reference; Tab x5: colour.
+keys F2; text "e2e quartz"; keys Tab Tab Tab Tab Tab; text "colourless"
+wait_for "Colour        colourless"
+wait_match "│Quartz [0-9]+%"
+wait_for "Refractive indices: 1.544 to 1.553"
+echo "---- 80x24 stone 1 ----"; screen
+# Candidate 3 and its detail, from the keyboard: F10 to the answer, two rows down, Enter.
+keys F10
+wait_for "Enter detail │ F10 or Esc back"
+keys Down Down Enter
+wait_match "^.3\. [a-z]"
+wait_for "CATALOGUE ENTRY"
+echo "---- 80x24 candidate 3 ----"; screen
+keys Escape
+keys Escape                               # out of the answer, back to the form
+wait_for "Tab next field │"
 # Scales (Ctrl+R): the readings against the top candidates' ranges.
 keys C-r
 wait_for "lowest index"
 wait_for "birefringence"
 screen | grep -qE "^.1 (rock crystal|quartz|synthetic co).*=#=.* in " || fail "the first candidate's range does not hold the reading on the scales"
-echo "---- 80x24 scales ----"; screen
 keys Escape
-# Export (Ctrl+E): three reports beside the workbook, named after the reference and the stone's number.
+# Export (Ctrl+E): the reports beside the workbook, named after the reference.
 keys C-e
 wait_for "Reports written"
 for ext in md html json; do
-  report=$(ls "$tmp"/reports/e2e_ring-s*."$ext" 2>/dev/null | head -n 1 || true)
-  [[ -s "$report" ]] || fail "no $tmp/reports/e2e_ring-s*.$ext"
-  grep -qF "e2e ring" "$report" || fail "$report does not name the stone"
+  ls "$tmp"/reports/e2e_quartz*."$ext" >/dev/null 2>&1 || fail "no $tmp/reports/e2e_quartz*.$ext"
 done
 keys Enter
-keys C-q
-wait_for "EXIT=0" 15
 
+# ---- stone 2: over the limit (cubic zirconia) ----
+keys C-n
+wait_for "[F2 Stone]"
+text "e2e cz"                             # a new stone opens at its reference
+wait_for "Reference     e2e cz"
+keys F3; keys Tab Tab Tab Tab; text "y"
+wait_for "Over limit    [yes]"
+keys F4; text "5.80"
+wait_match "│Cubic zirconia [0-9]+%"
+wait_for "Over the limit: index above the"
+echo "---- 80x24 stone 2 ----"; screen
+
+# ---- stone 3: a biaxial series (peridot), SG from weights ----
+keys C-n; text "e2e peridot"
+keys F3
+step 1.654 1.690
+wait_match "^. +0°  1.654     1.690"
+wait_match "^.45 +"                       # the rotation step is remembered for the next stone
+step 1.662 1.686
+step 1.672 1.682
+step 1.664 1.685
+# SG page focus order: SG, in air, in water.
+keys F4; keys Tab; text "1.670"; keys Tab; text "1.170"
+wait_match "SG 3\.3[0-9]{2} ± 0\.[0-9]{3} from the weights"
+wait_match "│Forsterite [0-9]+%"
+wait_for "Optic character: biaxial"
+echo "---- 80x24 stone 3 ----"; screen
+
+# ---- a kill while typing (a note, and a step not yet stored), then the stone reopened ----
+keys F2; keys Tab Tab Tab Tab Tab Tab Tab; text "typed before the kill"
+wait_for "Notes         typed before the"
+keys F3; text "1.660"; keys Tab; text "1.687"   # a step half done: typed, Enter not pressed
+wait_match "^.(1?[0-9]{2,3}|[0-9]) +1\.660 +1\.687"
+sleep 1                                   # the save runs in the background a moment after each key
+pane=$(tmux display-message -p -t "$session" '#{pane_pid}')
+app=$(pgrep -P "$pane" -f gemindex.dll | head -n 1 || true)
+[[ -n "$app" ]] || fail "could not find the running app under the pane"
+kill -9 "$app"
+wait_for "EXIT=137" 15
 tmux kill-session -t "$session"
 start
-wait_for "e2e ring"
-wait_for "0°  1.544    1.553"
-wait_for "15°  1.544    1.548"
-keys F4
-wait_for "SG direct    2.65"
+wait_for "e2e peridot"
+wait_for "0°  1.654     1.690"
+wait_for "135°  1.664     1.685"
+wait_match "^.(1?[0-9]{2,3}|[0-9]) +1\.660 +1\.687"   # the half-typed step is back on the edit line
 keys F2
-wait_for "colourless"
+wait_for "Notes         typed before the"
+keys F4
+wait_for "1.170"
 keys C-q
 wait_for "EXIT=0" 15
-echo "PASS tui e2e: stone entered, identified, scaled, exported, saved and reopened intact"
+echo "PASS tui e2e: three stones identified by species, focus order, candidate 3 and its detail, scales, export, kill and reopen"

@@ -6,19 +6,23 @@ namespace GemIndex.Cli.TextUi.Bench;
 /// </summary>
 internal sealed record BenchChoice(string Field, string Label, IReadOnlyList<(char Key, string Word, string Shown)> Options)
 {
+    /// <remarks>
+    /// One meaning per key across every choice: n is always "none", w/m/s/v always a strength, + and − a test that
+    /// reacts or does not; so a letter typed on the wrong row never records the opposite answer.
+    /// </remarks>
     public static IReadOnlyList<BenchChoice> All { get; } =
     [
         new(BenchFields.OverLimit, "Over limit", [('y', "yes", "yes")]),
-        new(BenchFields.Polariscope, "Polariscope", [('s', "singly_refractive", "singly refractive"), ('d', "doubly_refractive", "doubly refractive"), ('a', "aggregate", "aggregate"), ('n', "anomalous", "anomalous (strain)")]),
-        new(BenchFields.Pleochroism, "Pleochroism", [('n', "none", "none"), ('d', "dichroic", "dichroic"), ('t', "trichroic", "trichroic")]),
+        new(BenchFields.Polariscope, "Polariscope", [('i', "singly_refractive", "singly refractive"), ('d', "doubly_refractive", "doubly refractive"), ('a', "aggregate", "aggregate"), ('x', "anomalous", "anomalous (strain)")]),
+        new(BenchFields.Pleochroism, "Pleochroism", [('n', "none", "none"), ('b', "dichroic", "dichroic"), ('t', "trichroic", "trichroic")]),
         new(BenchFields.Dispersion, "Fire (eye)", [('n', "none", "none"), ('w', "weak", "weak"), ('m', "moderate", "moderate"), ('s', "strong", "strong"), ('v', "very_strong", "very strong")]),
-        new(BenchFields.ThermalProbe, "Thermal", [('p', "positive", "positive (diamond-like)"), ('n', "negative", "negative")]),
-        new(BenchFields.Electrical, "Electrical", [('c', "conductive", "conductive"), ('i', "insulating", "insulating")]),
-        new(BenchFields.UvLong, "UV long", Fluorescence),
-        new(BenchFields.UvShort, "UV short", Fluorescence),
+        new(BenchFields.ThermalProbe, "Thermal probe", [('+', "positive", "positive"), ('-', "negative", "negative")]),
+        new(BenchFields.Electrical, "Conductivity", [('+', "conductive", "conductive"), ('-', "insulating", "non-conductive")]),
+        new(BenchFields.UvLong, "UV long wave", Fluorescence),
+        new(BenchFields.UvShort, "UV short wave", Fluorescence),
     ];
 
-    private static (char, string, string)[] Fluorescence => [('i', "inert", "inert"), ('w', "weak", "weak"), ('m', "moderate", "moderate"), ('s', "strong", "strong")];
+    private static (char, string, string)[] Fluorescence => [('n', "inert", "none (inert)"), ('w', "weak", "weak"), ('m', "moderate", "moderate"), ('s', "strong", "strong")];
 
     public static BenchChoice For(string field) => All.Single(c => c.Field == field);
 
@@ -30,6 +34,9 @@ internal sealed record BenchChoice(string Field, string Label, IReadOnlyList<(ch
     public string Show(string? word) =>
         word is null ? "-" : Options.Where(o => o.Word == word).Select(o => o.Shown).FirstOrDefault() ?? word;
 
-    /// <summary>The keys as a hint: "s/d/a/n".</summary>
+    /// <summary>The keys as a hint: "i/d/a/x".</summary>
     public string KeyHint => string.Join("/", Options.Select(o => o.Key));
+
+    /// <summary>Every key with its answer, for the key line while the choice has the cursor.</summary>
+    public string KeyWords => string.Join("  ", Options.Select(o => $"{o.Key} {o.Shown}")) + "  Space clears";
 }

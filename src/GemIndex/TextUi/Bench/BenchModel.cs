@@ -13,8 +13,11 @@ namespace GemIndex.Cli.TextUi.Bench;
 /// </summary>
 internal sealed class BenchModel
 {
-    /// <summary>Rotation step suggested between readings, degrees (common practice: 10°–30° steps over 180°).</summary>
+    /// <summary>Rotation step suggested between readings until the user sets one, degrees (common practice: 10°–30° steps over 180°).</summary>
     public const double RotationStepDegrees = 15;
+
+    /// <summary>The texts that belong to the bench rather than the stone: kept when another stone opens.</summary>
+    private static readonly string[] BenchSettings = [BenchFields.Precision, BenchFields.CalibrationOffset, RefractometerPage.RotationStepField];
 
     private ImmutableDictionary<string, string> _texts = ImmutableDictionary<string, string>.Empty;
     private ImmutableDictionary<string, string> _choices = ImmutableDictionary<string, string>.Empty;
@@ -58,11 +61,28 @@ internal sealed class BenchModel
         Version++;
     }
 
-    /// <summary>The rotation to offer for the next step: 0, then the last rotation plus <see cref="RotationStepDegrees"/>, round a full turn.</summary>
+    /// <summary>The rotation between steps as set on the RI page (a number from 1° to 180°), else <see cref="RotationStepDegrees"/>.</summary>
+    public double RotationStep =>
+        double.TryParse(Text(RefractometerPage.RotationStepField), NumberStyles.Float, CultureInfo.InvariantCulture, out double step) && step is >= 1 and <= 180
+            ? step : RotationStepDegrees;
+
+    /// <summary>Why the rotation step typed cannot be used (the default is used meanwhile), or null.</summary>
+    public string? RotationStepProblem
+    {
+        get
+        {
+            string text = Text(RefractometerPage.RotationStepField);
+            if (string.IsNullOrWhiteSpace(text)) return null;
+            if (!GemIndex.Core.Quantities.BenchNumber.TryParse(text, out double step, out string error)) return error;
+            return step is >= 1 and <= 180 ? null : $"rotation step {text.Trim()}° is outside 1° to 180°";
+        }
+    }
+
+    /// <summary>The rotation to offer for the next step: 0, then the last rotation plus <see cref="RotationStep"/>, round a full turn.</summary>
     public string NextRotation() =>
         _steps.Count == 0 ? "0"
         : double.TryParse(_steps[^1].Rotation, NumberStyles.Float, CultureInfo.InvariantCulture, out double last)
-            ? ((last + RotationStepDegrees) % 360).ToString("0.##", CultureInfo.InvariantCulture) : "";
+            ? ((last + RotationStep) % 360).ToString("0.##", CultureInfo.InvariantCulture) : "";
 
     /// <summary>Bumps <see cref="Version"/> without an edit, so that results worked out before (with an older catalogue) count as stale.</summary>
     public void Renew() => Version++;
@@ -74,7 +94,7 @@ internal sealed class BenchModel
     {
         StoneId = stone.Id;
         _created = stone.Created;
-        var keep = _texts.Where(p => p.Key is BenchFields.Precision or BenchFields.CalibrationOffset);
+        var keep = _texts.Where(p => BenchSettings.Contains(p.Key));
         _texts = ImmutableDictionary.CreateRange(keep.Concat(StoneFormText.From(stone)).Where(p => p.Value.Length > 0));
         _choices = ImmutableDictionary.CreateRange(StoneFormText.Choices(stone.Readings));
         _steps = [.. (stone.Readings.Refractometer?.Readings ?? []).Select(s =>
@@ -86,8 +106,8 @@ internal sealed class BenchModel
     public bool ApplyDraft(string? json)
     {
         if (json is null || BenchDraft.Read(json) is not { } draft) return false;
-        var bench = _texts.Where(p => p.Key is BenchFields.Precision or BenchFields.CalibrationOffset);
-        _texts = draft.Texts.RemoveRange([BenchFields.Precision, BenchFields.CalibrationOffset]).SetItems(bench);
+        var bench = _texts.Where(p => BenchSettings.Contains(p.Key));
+        _texts = draft.Texts.RemoveRange(BenchSettings).SetItems(bench);
         _choices = draft.Choices;
         _steps = draft.Steps;
         Version++;

@@ -8,7 +8,7 @@ namespace GemIndex.Cli.TextUi.Bench;
 /// <summary>One page of the bench form: rows of fields and choices, and at the bottom the full reasons of any refused entries.</summary>
 internal class BenchPage : View
 {
-    public const int LabelWidth = 13;
+    public const int LabelWidth = 14;   // the longest label (13) and a space before the value
     private readonly Label _problems;
     private int _row;
 
@@ -31,6 +31,15 @@ internal class BenchPage : View
 
     public List<ChoiceField> Choices { get; } = [];
 
+    /// <summary>The fields and choices in the order they are shown (and tabbed through).</summary>
+    private readonly List<View> _inOrder = [];
+
+    /// <summary>Where the cursor goes when the page opens: its first reading.</summary>
+    public virtual View FirstReading => _inOrder[0] is FormField f ? f.Edit : _inOrder[0];
+
+    /// <summary>Opens the page at its first reading (never at the field used last: readings would go astray).</summary>
+    public void FocusFirst() => FirstReading.SetFocus();
+
     protected int NextRow(int rows = 1)
     {
         int row = _row;
@@ -42,6 +51,7 @@ internal class BenchPage : View
     {
         var f = new FormField(field, label, LabelWidth, editWidth, hint) { Y = NextRow() };
         Fields.Add(f);
+        _inOrder.Add(f);
         Add(f);
         return f;
     }
@@ -50,6 +60,8 @@ internal class BenchPage : View
     {
         var c = new ChoiceField(BenchChoice.For(field), LabelWidth) { Y = NextRow() };
         Choices.Add(c);
+        _inOrder.Add(c);
+        c.TypedAhead += text => TypeIntoNextField(c, text);
         Add(c);
         return c;
     }
@@ -59,6 +71,15 @@ internal class BenchPage : View
         var l = new Label { Y = NextRow(), Width = Dim.Fill(), Text = text };
         Add(l);
         return l;
+    }
+
+    /// <summary>A digit typed on a choice is not lost: it goes into the next text field, which takes the cursor.</summary>
+    private void TypeIntoNextField(ChoiceField from, string text)
+    {
+        if (_inOrder.Skip(_inOrder.IndexOf(from) + 1).OfType<FormField>().FirstOrDefault() is not { } next) return;
+        next.Edit.SetFocus();
+        next.Edit.Text = text;
+        next.Edit.InsertionPoint = text.Length;
     }
 
     /// <summary>Marks each field with its error and lists the reasons at the bottom.</summary>

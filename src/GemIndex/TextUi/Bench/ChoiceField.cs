@@ -33,11 +33,15 @@ internal sealed class ChoiceField : View
     /// <summary>Raised when the user picks or clears the answer.</summary>
     public event Action<ChoiceField>? Picked;
 
+    /// <summary>Raised with a digit, point or sign typed here that no answer takes: it belongs to the next field.</summary>
+    public event Action<string>? TypedAhead;
+
     /// <summary>Shows a word without raising <see cref="Picked"/> (when a stone is loaded).</summary>
     public void Show(string? word)
     {
         Word = word;
-        Text = $"{Choice.Label.PadRight(_labelWidth)}[{Choice.Show(word)}]  {Choice.KeyHint}";
+        // The keys while nothing is chosen; the key line lists them in words while the choice has the cursor.
+        Text = $"{Choice.Label.PadRight(_labelWidth)}[{Choice.Show(word)}]" + (word is null ? "  " + Choice.KeyHint : "");
     }
 
     private void Pick(string? word)
@@ -50,7 +54,12 @@ internal sealed class ChoiceField : View
     {
         if (key == Key.Space || key == Key.Backspace || key == Key.Delete) { Pick(null); return true; }
         if (key.IsCtrl || key.IsAlt || !key.TryGetPrintableRune(out var rune) || !rune.IsBmp) return false;
-        if (Choice.WordFor((char)rune.Value) is not { } word) return false;
+        if (Choice.WordFor((char)rune.Value) is not { } word)
+        {
+            if (!char.IsAsciiDigit((char)rune.Value) && rune.Value != '.' && rune.Value != '-' || TypedAhead is null) return false;
+            TypedAhead((char)rune.Value + "");
+            return true;
+        }
         Pick(word);
         return true;
     }

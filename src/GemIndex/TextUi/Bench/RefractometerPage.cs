@@ -14,24 +14,32 @@ internal sealed class RefractometerPage : BenchPage
     public const int GridRows = 6;
     private readonly ObservableCollection<string> _rows = [];
     private int? _editing;
+    private int _stepCount;
 
-    public RefractometerPage() : base("Refractometer", "Enter stores, Del removes")
+    /// <summary>The bench setting that holds the rotation between steps (kept across stones, like the precision).</summary>
+    public const string RotationStepField = "refractometer.rotation_step";
+
+    /// <summary>The step being typed (before Enter), kept in the form so that its draft survives a closed terminal.</summary>
+    public const string TypingRotation = "refractometer.typing.rotation", TypingLow = "refractometer.typing.low", TypingHigh = "refractometer.typing.high";
+
+    public RefractometerPage() : base("Refractometer", "Enter stores the step")
     {
         NextRow();
-        Add(new Label { Y = 0, Text = "Rot °    Low      High     Enter stores" });
-        Rotation = new TextField { X = 0, Y = NextRow(), Width = 6 };
-        Low = new TextField { X = 9, Y = Pos.Top(Rotation), Width = 7 };
-        High = new TextField { X = 18, Y = Pos.Top(Rotation), Width = 7 };
-        Editing = new Label { X = 27, Y = Pos.Top(Rotation), Width = Dim.Fill() };
+        Add(new Label { Y = 0, Text = "Rotation  Low edge  High edge" });
+        Rotation = new TextField { X = 0, Y = NextRow(), Width = 7 };
+        Low = new TextField { X = 10, Y = Pos.Top(Rotation), Width = 8 };
+        High = new TextField { X = 20, Y = Pos.Top(Rotation), Width = 8 };
+        Editing = new Label { X = 29, Y = Pos.Top(Rotation), Width = Dim.Fill() };
         Grid = new ListView { X = 0, Y = NextRow(GridRows), Width = Dim.Fill(), Height = GridRows };
         Grid.SetSource(_rows);
         Add(Rotation, Low, High, Editing, Grid);
-        AddField(BenchFields.Spot, "Spot reading", 7, "(no steps)");
+        AddField(BenchFields.Spot, "Spot reading", 8, "curved stones");
         AddChoice(BenchFields.OverLimit);
-        AddField(BenchFields.LiquidLimit, "Liquid limit", 6, "default 1.79");
-        AddField(BenchFields.LightNm, "Light nm", 6, "default 589.3");
-        AddField(BenchFields.Precision, "Precision", 6, "default 0.001");
-        AddField(BenchFields.CalibrationOffset, "Calibration", 6, "offset, default 0");
+        StepField = AddField(RotationStepField, "Rotation step", 8, "°, default 15");
+        AddField(BenchFields.LiquidLimit, "Liquid limit", 8, "default 1.79");
+        AddField(BenchFields.LightNm, "Light", 8, "nm (589.3)");
+        AddField(BenchFields.Precision, "Precision", 8, "default 0.001");
+        AddField(BenchFields.CalibrationOffset, "Calibration", 8, "offset (0)");
         foreach (TextField box in new[] { Rotation, Low, High })
             box.KeyDown += (_, key) =>
             {
@@ -41,11 +49,18 @@ internal sealed class RefractometerPage : BenchPage
             };
         Grid.KeyDown += (_, key) =>
         {
-            if (Grid.SelectedItem is not { } i || i >= _rows.Count) return;
+            if (Grid.SelectedItem is not { } i || i >= _stepCount) return;
             if (key == Key.Enter) { EditRequested?.Invoke(i); key.Handled = true; }
             else if (key == Key.Delete) { RemoveRequested?.Invoke(i); key.Handled = true; }
         };
     }
+
+    public override View FirstReading => Low;
+
+    /// <summary>The edit line's boxes with the form keys that keep their text.</summary>
+    public IReadOnlyList<(TextField Box, string Key)> TypingBoxes => [(Rotation, TypingRotation), (Low, TypingLow), (High, TypingHigh)];
+
+    public FormField StepField { get; }
 
     public TextField Rotation { get; }
 
@@ -79,9 +94,11 @@ internal sealed class RefractometerPage : BenchPage
     {
         int? selected = Grid.SelectedItem;
         _rows.Clear();
+        _stepCount = steps.Count;
         for (int i = 0; i < steps.Count; i++)
-            _rows.Add($"{steps[i].Rotation,5}°  {steps[i].Low,-7}  {steps[i].High,-7}{(errors.TryGetValue(BenchFields.Step(i), out string? e) ? " ! " + e : "")}");
-        if (_rows.Count == 0) _rows.Add("(no steps yet: type low and high, Enter)");
+            _rows.Add($"{steps[i].Rotation,6}°  {steps[i].Low,-8}  {steps[i].High,-8}{(errors.TryGetValue(BenchFields.Step(i), out string? e) ? " ! " + e : "")}");
+        if (_rows.Count == 0) _rows.Add("(no steps yet: type the edges, Enter)");
+        else _rows.Add("(Enter edits a step, Del removes)");
         if (selected is { } s) Grid.SelectedItem = Math.Min(s, _rows.Count - 1);
     }
 

@@ -4,7 +4,11 @@ using GemIndex.Core.Catalogue;
 
 namespace GemIndex.Cli.TextUi.CatalogueBrowser;
 
-/// <summary>The catalogue list filtered by a search over name, species, variety and colours, or by an index or SG typed as a number.</summary>
+/// <summary>
+/// The catalogue list filtered by a search over name, species, variety and colours, or by numbers: one number is an
+/// index (below 2.5) or an SG; two numbers ("1.544 2.65") are an index and an SG. Number searches list the entries
+/// whose ranges hold every number (within the tolerances), closest first.
+/// </summary>
 internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
 {
     private readonly IReadOnlyList<Material> catalogue = materials;
@@ -12,25 +16,87 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
     /// <summary>How far a typed number may lie outside an entry's index (±0.01) or SG (±0.05) range and still match: common practice tolerances.</summary>
     public const double IndexTolerance = 0.01, SgTolerance = 0.05;
 
+    /// <summary>A single number below this is an index, above it an SG.</summary>
+    public const double HighestIndex = 2.5;
+
     public IReadOnlyList<Material> Shown { get; private set; } = materials;
 
     public void Search(string text)
     {
         string q = text.Trim();
-        Shown = q.Length == 0 ? catalogue
-            : double.TryParse(q, NumberStyles.Float, CultureInfo.InvariantCulture, out double x) && double.IsFinite(x)
-                ? [.. catalogue.Where(m => x < 2.5 ? Near(m.Indices.Lowest, m.Indices.Highest, x) : Near(m.SpecificGravity, m.SpecificGravity, x, SgTolerance))]
-                : [.. catalogue.Where(m => Matches(m, q))];
+        if (q.Length == 0) { Shown = catalogue; return; }
+        if (Numbers(q) is { } numbers)
+        {
+            (double? Index, double? Sg) typed = numbers.Count == 2 ? (numbers[0], numbers[1])
+                : numbers[0] < HighestIndex ? (numbers[0], null) : (null, numbers[0]);
+            (double? index, double? sg) = typed;
+            Shown = [.. catalogue.Select(m => (m, Distance: Distance(m, index, sg))).Where(p => p.Distance is not null)
+                .OrderBy(p => p.Distance).Select(p => p.m)];
+            return;
+        }
+        Shown = [.. catalogue.Where(m => Matches(m, q))];
     }
 
-    private static bool Near(PropertyRange low, PropertyRange high, double x, double tolerance = IndexTolerance) =>
-        x >= low.Minimum - tolerance && x <= high.Maximum + tolerance;
+    /// <summary>One or two numbers separated by spaces, or null when the search is words.</summary>
+    private static IReadOnlyList<double>? Numbers(string q)
+    {
+        string[] parts = q.Split([' ', ',', ';'], StringSplitOptions.RemoveEmptyEntries);
+        if (parts.Length is < 1 or > 2) return null;
+        var numbers = new List<double>();
+        foreach (string p in parts)
+        {
+            if (!double.TryParse(p, NumberStyles.Float, CultureInfo.InvariantCulture, out double x) || !double.IsFinite(x)) return null;
+            numbers.Add(x);
+        }
+        return numbers;
+    }
+
+    /// <summary>
+    /// How far the typed values are from an entry, in tolerances (0 inside a range; then the distance to the range's
+    /// middle breaks ties), or null when a value lies beyond its tolerance.
+    /// </summary>
+    private static double? Distance(Material m, double? index, double? sg)
+    {
+        double total = 0;
+        if (index is { } n)
+        {
+            // Within the span of the entry's indices; closeness to the nearer of its lowest and highest index (an edge as read).
+            if (Away(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum, n, IndexTolerance) is null) return null;
+            total += Math.Min(Closeness(m.Indices.Lowest.Minimum, m.Indices.Lowest.Maximum, n, IndexTolerance),
+                Closeness(m.Indices.Highest.Minimum, m.Indices.Highest.Maximum, n, IndexTolerance));
+        }
+        if (sg is { } g)
+        {
+            if (Away(m.SpecificGravity.Minimum, m.SpecificGravity.Maximum, g, SgTolerance) is not { } d) return null;
+            total += d;
+        }
+        return total;
+    }
+
+    private static double? Away(double low, double high, double x, double tolerance) =>
+        Outside(low, high, x) > tolerance ? null : Closeness(low, high, x, tolerance);
+
+    private static double Outside(double low, double high, double x) => x < low ? low - x : x > high ? x - high : 0;
+
+    /// <summary>Tolerances outside the range, plus a hundredth of a tolerance per tolerance from its middle (ties go to the centred entry).</summary>
+    private static double Closeness(double low, double high, double x, double tolerance) =>
+        Outside(low, high, x) / tolerance + Math.Abs(x - (low + high) / 2) / (tolerance * 100);
 
     private static bool Matches(Material m, string q) =>
         new[] { m.Name, m.Species, m.Variety, m.Family }.Concat(m.Colours).Any(s => s.Contains(q, StringComparison.OrdinalIgnoreCase));
 
-    public string Line(Material m) =>
-        $"{ResultsClip(m.Name, 26),-26} {m.Indices.Lowest.Minimum.ToString("0.000", CultureInfo.InvariantCulture)}-{m.Indices.Highest.Maximum.ToString("0.000", CultureInfo.InvariantCulture)} SG {m.SpecificGravity.ToString("0.00")}";
+    /// <summary>The width the names need: the longest shown, or what <paramref name="width"/> leaves beside the numbers.</summary>
+    public int NameWidth(int width) => Math.Max(12, Math.Min(Shown.Count == 0 ? 12 : Shown.Max(m => m.Name.Length), width - NumbersWidth));
+
+    /// <summary>" 1.544-1.553  SG 2.65-2.66" beside the name.</summary>
+    private const int NumbersWidth = 28;
+
+    public string Line(Material m, int nameWidth) =>
+        $"{Results.ResultText.Clip(m.Name, nameWidth).PadRight(nameWidth)} {m.Indices.Lowest.Minimum.ToString("0.000", CultureInfo.InvariantCulture)}-{m.Indices.Highest.Maximum.ToString("0.000", CultureInfo.InvariantCulture)}  SG {Range(m.SpecificGravity)}";
+
+    private static string Range(PropertyRange r) => r.Minimum == r.Maximum
+        ? r.Minimum.ToString("0.00", CultureInfo.InvariantCulture)
+        : $"{r.Minimum.ToString("0.00", CultureInfo.InvariantCulture)}-{r.Maximum.ToString("0.00", CultureInfo.InvariantCulture)}";
 
     public static string Details(Material m)
     {
@@ -38,6 +104,4 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
         MaterialText.WriteDetails(w, m);
         return w.ToString();
     }
-
-    private static string ResultsClip(string s, int width) => Results.ResultText.Clip(s, width);
 }

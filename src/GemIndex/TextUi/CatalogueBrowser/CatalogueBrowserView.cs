@@ -15,7 +15,7 @@ internal sealed class CatalogueBrowserView : Dialog
     public CatalogueBrowserView(CatalogueBrowserModel model)
     {
         _model = model;
-        Title = "Catalogue (type to search, ↑↓ select, Esc closes)";
+        Title = "Catalogue: a name, an index, an SG or both (1.544 2.65); Esc closes";
         Width = Dim.Fill();
         Height = Dim.Fill();
         var label = new Label { Text = "Search:" };
@@ -25,6 +25,7 @@ internal sealed class CatalogueBrowserView : Dialog
         List.SetSource(_rows);
         Entry = new WrappedText { Y = Pos.Bottom(List), Width = Dim.Fill(), Height = Dim.Fill() };
         Search.TextChanged += (_, _) => Fill();
+        List.ViewportChanged += (_, _) => { if (List.Viewport.Width != _filledAt) Fill(); };
         List.ValueChanged += (_, _) => ShowEntry();
         Add(label, Search, Count, List, Entry);
         Fill();
@@ -38,11 +39,15 @@ internal sealed class CatalogueBrowserView : Dialog
 
     public WrappedText Entry { get; }
 
+    private int _filledAt = -1;
+
     private void Fill()
     {
+        _filledAt = List.Viewport.Width;
         _model.Search(Search.Text);
         _rows.Clear();
-        foreach (var m in _model.Shown) _rows.Add(_model.Line(m));
+        int nameWidth = _model.NameWidth(Math.Max(List.Viewport.Width, 76));
+        foreach (var m in _model.Shown) _rows.Add(_model.Line(m, nameWidth));
         Count.Text = $"{_model.Shown.Count} entries";
         if (_rows.Count > 0) List.SelectedItem = 0;
         ShowEntry();

@@ -6,19 +6,20 @@ internal static class HelpText
     public static IReadOnlyList<(string Key, string Does)> Keys { get; } =
     [
         ("F1", "this help"),
-        ("F2 F3 F4 F5", "stone sheet / refractometer / SG and liquids / other tests"),
+        ("F2 F3 F4 F5", "stone sheet / refractometer / SG and liquids / other tests; each opens at its first reading"),
+        ("F10", "the cursor to the answer and back (Esc also returns); arrows and PgUp/PgDn scroll it"),
+        ("F9, Enter", "on a candidate: its detail: reasons with their numbers, and its catalogue entry"),
         ("F6", "edge plot (two shadow edges against rotation)"),
-        ("Ctrl+R", "scales: lowest index, birefringence and SG as read (± uncertainty) against the top candidates' ranges"),
-        ("F7", "catalogue browser (type a name, an index or an SG)"),
+        ("Ctrl+R", "scales: lowest index, birefringence and SG as read (with their uncertainty) against the top candidates' ranges"),
+        ("F7", "catalogue browser (a name, an index, an SG, or an index and an SG: 1.544 2.65)"),
         ("F8", "stones in the workbook (open, search, new, duplicate, delete; F3 there shows a stone's edit history)"),
-        ("F9, Enter", "on a candidate: its detail: reasons and catalogue entry"),
         ("Ctrl+E", "export the stone's report (Markdown, HTML, JSON) to reports/ beside the workbook"),
-        ("Ctrl+N", "new stone"),
+        ("Ctrl+N", "new stone (opens at its reference)"),
         ("Ctrl+Q", "quit (everything is already saved)"),
         ("Tab, Shift+Tab", "next / previous field"),
-        ("RI: Enter", "store the step being typed; rotation moves on by 15°"),
+        ("RI: Enter", "store the step being typed; the rotation moves on by the rotation step (set once on the page; 15° until set)"),
         ("RI: Enter on step", "edit that step; Delete removes it"),
-        ("Choices", "one letter picks the answer shown in brackets; Space or Backspace clears"),
+        ("Choices", "one key picks the answer: n none; w m s v weak, moderate, strong, very strong; i d a x singly refractive, doubly refractive, aggregate, anomalous; b t dichroic, trichroic; + - reacts, does not react; y yes. Space or Backspace clears; a digit goes on to the next field"),
         ("Mouse", "click a field or a tab; click a choice to cycle it"),
     ];
 

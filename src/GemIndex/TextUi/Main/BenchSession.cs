@@ -15,6 +15,7 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
 
     public const string PrecisionSetting = "refractometer.precision";
     public const string CalibrationSetting = "refractometer.calibration_offset";
+    public const string RotationStepSetting = RefractometerPage.RotationStepField;
 
     private readonly Lock _gate = new();
     private (long Id, int Version) _lastSaved = (0, -1);
@@ -49,6 +50,7 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
         {
             Form.SetText(BenchFields.Precision, workbook.Setting(PrecisionSetting) ?? "");
             Form.SetText(BenchFields.CalibrationOffset, workbook.Setting(CalibrationSetting) ?? "");
+            Form.SetText(RefractometerPage.RotationStepField, workbook.Setting(RotationStepSetting) ?? "");
             StoneSummary? latest = workbook.List().FirstOrDefault();
             Load(latest is not null ? workbook.Get(latest.Id)! : workbook.IsReadOnly ? new StoneSheet() : NewStone());
         }
@@ -138,6 +140,7 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
                 _lastRead[snapshot.StoneId] = saved.NextLastRead;
                 Setting(PrecisionSetting, snapshot.Text(BenchFields.Precision));
                 Setting(CalibrationSetting, snapshot.Text(BenchFields.CalibrationOffset));
+                Setting(RotationStepSetting, snapshot.Text(RefractometerPage.RotationStepField));
                 _lastSaved = (snapshot.StoneId, snapshot.Version);
                 return saved.IsClean ? (null, []) : (ConflictText(saved.Conflicts), saved.Conflicts);
             }

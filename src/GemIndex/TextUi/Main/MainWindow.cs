@@ -23,18 +23,24 @@ namespace GemIndex.Cli.TextUi.Main;
 /// </summary>
 internal sealed class MainWindow : Window
 {
-    public const int FormWidth = 44;
-    private const string GlobalKeys = "F1 help F6 plot ^R scales F7 gems F8 stones F9 detail ^E export ^N new ^Q quit";
+    /// <summary>The form's width at every size: its longest row (a label and a reading field); the answer gets the rest.</summary>
+    public const int FormWidth = 40;
+
+    /// <summary>The smallest screen the bench is laid out for; below it a notice says so instead of cutting numbers.</summary>
+    public const int MinimumColumns = 80, MinimumRows = 24;
+
+    private const string GlobalKeys = "F1 help F10 answer F9 detail F6 plot ^R scales F7 catalogue F8 stones ^E export ^N new ^Q quit";
 
     // At 80 columns the page's own keys come first and the rest of the line keeps the keys used most; F1 lists them all.
-    private const string ShortGlobalKeys = "F1 keys F6 plot F9 detail ^E export ^Q quit";
+    private const string ShortGlobalKeys = "F1 keys F10 answer F9 detail ^E export ^Q quit";
+    private const string AnswerKeys = "↑↓ PgUp PgDn scroll, Enter detail │ F10 or Esc back to the form";
     private readonly BenchSession _session;
     private IReadOnlyList<Material> _catalogue;
     private readonly Label _pageBar;
     private readonly FrameView _left;
     private readonly Label _keyLine;
+    private readonly Label _tooSmall;
     private bool _filling;
-    private long _cautionShownFor;
 
     public MainWindow(BenchSession session, IReadOnlyList<Material> catalogue)
     {
@@ -56,7 +62,9 @@ internal sealed class MainWindow : Window
         foreach (BenchPage page in Pages) _left.Add(page);
         Results = new ResultsView(session.Results) { X = FormWidth, Y = 1, Width = Dim.Fill(), Height = Dim.Fill(1) };
         _keyLine = new Label { Y = Pos.AnchorEnd(1), Width = Dim.Fill() };
-        Add(_pageBar, _left, Results, _keyLine);
+        _tooSmall = new Label { Width = Dim.Fill(), Height = Dim.Fill(), Visible = false };
+        Add(_pageBar, _left, Results, _keyLine, _tooSmall);
+        ViewportChanged += (_, _) => FitToScreen();
         Wire();
         FreeExportKey(this);
         session.Assessed += ShowAssessment;
@@ -115,28 +123,56 @@ internal sealed class MainWindow : Window
         return -1;
     }
 
+    /// <summary>Shows a page with the cursor in its first reading field (never where it was left: readings would go astray).</summary>
     public void ShowPage(int index)
     {
         CurrentPage = index;
         for (int i = 0; i < Pages.Count; i++) Pages[i].Visible = i == index;
-        _left.Title = $"{Pages[index].Title}: {Pages[index].Keys}";
+        _left.Title = Pages[index].Title;
+        Pages[index].FocusFirst();
         ShowBars();
-        if (index == 1 && _left.HasFocus is false) Refractometer.Low.SetFocus();
-        else Pages[index].SetFocus();
+    }
+
+    /// <summary>True while the screen is smaller than the bench's layout (the notice is shown instead).</summary>
+    public bool TooSmall => _tooSmall.Visible;
+
+    private void FitToScreen()
+    {
+        bool small = Viewport.Width < MinimumColumns || Viewport.Height < MinimumRows;
+        _tooSmall.Text = small
+            ? $"Window too small: the bench needs at least {MinimumColumns} x {MinimumRows} characters (this one is {Viewport.Width} x {Viewport.Height}).\nEnlarge the terminal; Ctrl+Q quits (everything is saved)."
+            : "";
+        if (small == _tooSmall.Visible) return;
+        _tooSmall.Visible = small;
+        foreach (View v in new View[] { _pageBar, _left, Results, _keyLine }) v.Visible = !small;
+        if (!small) ShowPage(CurrentPage);
     }
 
     private void ShowBars()
     {
         _pageBar.Text = string.Join(" ", PageNames.Select((n, i) => i == CurrentPage ? $"[{n}]" : $" {n} "))
             + $"  {_session.Form.Text(BenchFields.Reference)}";
-        _keyLine.Text = _session.SaveProblem ?? KeysFor(Pages[CurrentPage]);
+        _keyLine.Text = _session.SaveProblem ?? KeysNow();
     }
 
-    /// <summary>The key line: the page's own keys, then the window's (all of them when the screen is wide enough).</summary>
-    private string KeysFor(BenchPage page)
+    /// <summary>The key line: the answer's keys while it has the cursor, a choice's keys in words while one has it, else the page's keys then the window's.</summary>
+    private string KeysNow()
     {
-        string full = $"{page.Keys} │ {GlobalKeys}";
-        return full.Length <= Math.Max(80, Viewport.Width) - 1 ? full : $"{page.Keys} │ {ShortGlobalKeys}";
+        if (Results.HasFocus) return AnswerKeys;
+        if (Pages[CurrentPage].Choices.FirstOrDefault(c => c.HasFocus) is { } choice) return choice.Choice.KeyWords;
+        string keys = Pages[CurrentPage].Keys;
+        string full = $"{keys} │ {GlobalKeys}";
+        return full.Length <= Math.Max(MinimumColumns, Viewport.Width) - 1 ? full : $"{keys} │ {ShortGlobalKeys}";
+    }
+
+    /// <summary>F10: the cursor to the answer (on the selected candidate, or the first), or back to the form.</summary>
+    public void ToggleAnswer()
+    {
+        if (Results.HasFocus) { ShowPage(CurrentPage); return; }
+        Results.List.SetFocus();
+        if (Results.Rows.Count > 0 && (Results.List.SelectedItem is not { } row || Results.Rows[Math.Min(row, Results.Rows.Count - 1)].Candidate is null))
+            Results.SelectCandidate(0);
+        ShowBars();
     }
 
     private void Wire()
@@ -162,14 +198,17 @@ internal sealed class MainWindow : Window
             rf.ShowSteps(_session.Form.Steps, _session.Results.Latest?.Errors ?? new Dictionary<string, string>());
             rf.BeginStep(null, null, _session.Form.NextRotation());
         };
+        foreach ((TextField box, string typingKey) in rf.TypingBoxes)
+            box.TextChanged += (_, _) =>
+            {
+                if (_filling) return;
+                _session.Form.SetText(typingKey, box.Text);
+                _session.Changed();
+            };
         rf.EditRequested += i => rf.BeginStep(i, _session.Form.Steps[i], _session.Form.NextRotation());
         rf.RemoveRequested += i => { _session.Form.RemoveStep(i); _session.Changed(); rf.ShowSteps(_session.Form.Steps, new Dictionary<string, string>()); };
-        Gravity.WaterField.Edit.HasFocusChanged += (_, _) =>
-        {
-            if (!Gravity.WaterField.Edit.HasFocus || _session.Results.ImmersionCaution is not { } caution || _cautionShownFor == _session.Form.StoneId) return;
-            _cautionShownFor = _session.Form.StoneId;
-            App?.Invoke(() => MessageBox.Query(App!, "Do not immerse", caution, "Understood"));
-        };
+        foreach (ChoiceField c in Pages.SelectMany(p => p.Choices)) c.HasFocusChanged += (_, _) => ShowBars();
+        Results.List.HasFocusChanged += (_, _) => ShowBars();
     }
 
     /// <summary>Puts the model's texts into the fields (after a stone is opened), without echoing them back as edits.</summary>
@@ -180,11 +219,18 @@ internal sealed class MainWindow : Window
         {
             foreach (BenchPage page in Pages)
             {
-                foreach (FormField f in page.Fields) f.Edit.Text = _session.Form.Text(f.Field);
+                foreach (FormField f in page.Fields)
+                {
+                    f.Edit.Text = _session.Form.Text(f.Field);
+                    f.Edit.InsertionPoint = 0;   // show a value's start (a number's leading digits, a note's first words)
+                }
                 foreach (ChoiceField c in page.Choices) c.Show(_session.Form.Choice(c.Choice.Field));
             }
             Refractometer.ShowSteps(_session.Form.Steps, new Dictionary<string, string>());
             Refractometer.BeginStep(null, null, _session.Form.NextRotation());
+            // A step typed but not stored (a closed terminal, another stone opened meanwhile) comes back on the edit line.
+            foreach ((TextField box, string typingKey) in Refractometer.TypingBoxes)
+                if (_session.Form.Text(typingKey) is { Length: > 0 } typed) box.Text = typed;
         }
         finally { _filling = false; }
         ShowPage(CurrentPage);
@@ -194,9 +240,12 @@ internal sealed class MainWindow : Window
     {
         BenchAssessment? a = _session.Results.Latest;
         if (a is null) return;
-        foreach (BenchPage page in Pages) page.ShowErrors(a.Errors);
+        IReadOnlyDictionary<string, string> errors = _session.Form.RotationStepProblem is { } step
+            ? new Dictionary<string, string>(a.Errors) { [RefractometerPage.RotationStepField] = step } : a.Errors;
+        foreach (BenchPage page in Pages) page.ShowErrors(errors);
         Refractometer.ShowSteps(_session.Form.Steps, a.Errors);
-        Gravity.Result.Text = ResultText.Gravity(a.SpecificGravity);
+        Gravity.Result.Text = GravityText.Describe(_session.Form.Snapshot(), a.SpecificGravity);
+        // Inline and whole (no pop-up that would take the keys being typed): wrapped to the page's width.
         Gravity.Caution.Text = _session.Results.ImmersionCaution is { } c
             ? string.Join('\n', TextWrap.Lines(["!! " + c], Math.Max(20, Gravity.Viewport.Width)))
             : "";
@@ -207,7 +256,7 @@ internal sealed class MainWindow : Window
     private void ShowDetail(int index)
     {
         if (index >= _session.Results.Candidates.Count) return;
-        TextScreen.Show(App!, "Candidate", CandidateDetail.Render(_session.Results.Candidates[index], index + 1));
+        TextScreen.Show(App!, "Candidate", CandidateDetail.Render(_session.Results.Candidates[index], index + 1, _session.Results.Latest?.Result));
     }
 
     private void OnGlobalKey(object? sender, Key key)
@@ -219,16 +268,27 @@ internal sealed class MainWindow : Window
         else if (key == Key.F5) ShowPage(3);
         else if (key == Key.F6) EdgePlotView.Show(App!, new EdgePlotModel(_session.Results.Latest?.Readings.Refractometer?.Readings ?? []));
         else if (key == Key.R.WithCtrl) ScaleView.Show(App!, new ScaleModel(_session.Results.Latest));
-        else if (key == Key.F7 && _catalogue.Count == 0) MessageBox.Query(App!, "Catalogue", _session.Results.WaitingReason ?? _session.Results.Waiting ?? "The catalogue is empty.", "OK");
+        else if (key == Key.F7 && _catalogue.Count == 0) _keyLine.Text = "F7: " + (_session.Results.WaitingReason ?? _session.Results.Waiting ?? "the catalogue is empty");   // no pop-up to swallow the next keys
         else if (key == Key.F7) CatalogueBrowserView.Show(App!, new CatalogueBrowserModel(_catalogue));
         else if (key == Key.F8) ShowStones();
         else if (key == Key.F9) ShowDetail(Results.SelectedCandidate);
+        else if (key == Key.F10) ToggleAnswer();
+        else if (key == Key.Esc && Results.HasFocus) ShowPage(CurrentPage);
         else if (key == Key.E.WithCtrl) Export();
-        else if (key == Key.N.WithCtrl) { _session.New(); FillFromModel(); ShowPage(0); }
+        else if (key == Key.N.WithCtrl) NewStone();
         else if (key == Key.Q.WithCtrl) App!.RequestStop();
         else if (key == Key.Esc) { }                       // Esc quits the application by default: keep the bench open
         else return;
         key.Handled = true;
+    }
+
+    /// <summary>A new stone, opened at its reference with the suggested one selected, so that typing replaces it.</summary>
+    private void NewStone()
+    {
+        _session.New();
+        FillFromModel();
+        ShowPage(0);
+        Pages[0].Fields[0].Edit.SelectAll();
     }
 
     /// <summary>Writes the open stone's reports beside the workbook off the UI thread, then shows where they went (or why not).</summary>
@@ -273,7 +333,7 @@ internal sealed class MainWindow : Window
         using var view = new StoneListView(model, id => _session.WithWorkbook(w => w.Duplicate(id).Id), id => _session.WithWorkbook(w => w.Delete(id)),
             id => _session.WithWorkbook(w => StoneHistoryText.Lines(w.Get(id)?.Reference ?? "", w.History(id))));
         App!.Run(view);
-        if (view.WantsNew) { _session.New(); FillFromModel(); ShowPage(0); }
+        if (view.WantsNew) NewStone();
         else if (view.Chosen is { } id) { _session.Open(id); FillFromModel(); }
         else if (_session.WithWorkbook(w => w.Get(_session.Form.StoneId)) is null) { _session.Start(); FillFromModel(); }  // the open stone was deleted
     }

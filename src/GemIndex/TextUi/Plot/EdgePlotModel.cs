@@ -24,6 +24,18 @@ internal sealed class EdgePlotModel(IReadOnlyList<EdgeReadingEntry> steps)
 
     public double LeftEdge => IsEmpty ? 0 : Math.Min(0, Low.Min(p => p.Rotation));
 
-    /// <summary>A label increment giving about <paramref name="rows"/>/2 labels between bottom and top.</summary>
-    public double IndexStep(int rows) => Math.Max(0.0005, (Top - Bottom) / Math.Max(2, rows));
+    /// <summary>
+    /// The index per row: the smallest of 0.0005, 0.001, 0.002, 0.005, 0.01, … that fits the window in
+    /// <paramref name="rows"/> rows, so that the labels (every other row) step evenly in round numbers.
+    /// </summary>
+    public double IndexStep(int rows)
+    {
+        double needed = (Top - Bottom) / Math.Max(2, rows);
+        for (double decade = 0.0001; ; decade *= 10)
+            foreach (double m in new[] { 1, 2, 5 })
+                if (m * decade >= needed && m * decade >= 0.0005) return Math.Round(m * decade, 6);
+    }
+
+    /// <summary>The bottom of the plot on a whole number of steps, so that every label is a multiple of the step.</summary>
+    public double AlignedBottom(double step) => Math.Floor(Math.Round(Bottom / step, 6)) * step;
 }

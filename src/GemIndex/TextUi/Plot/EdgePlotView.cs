@@ -52,6 +52,9 @@ internal sealed class EdgePlotView : Dialog
         float step = (float)model.IndexStep(rows);
         Graph.CellSize = new PointF((float)(model.RightEdge - model.LeftEdge) / columns, step);
         Graph.AxisY.Increment = step;
+        float bottom = (float)model.AlignedBottom(step);
+        Graph.AxisY.Minimum = bottom;
+        Graph.ScrollOffset = new PointF((float)model.LeftEdge, bottom);
     }
 
     public static void Show(IApplication app, EdgePlotModel model)

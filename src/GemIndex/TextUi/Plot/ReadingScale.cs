@@ -21,7 +21,8 @@ internal sealed class ReadingScale(string title, string format, double value, do
     public const char Marker = '*';
     /// <summary>The marker where it falls on a candidate's bar (so a bar one cell wide does not vanish under it).</summary>
     public const char MarkerOnBar = '#';
-    public const int NameWidth = ResultsModel.NameWidth + 2;
+    /// <summary>Room for a rank and a name; a longer name is cut so that no two rows read the same (<see cref="CandidateNames"/>).</summary>
+    public const int NameWidth = 24;
     public const int VerdictWidth = 5;
     public const int NarrowestTrack = 12;
 
@@ -74,9 +75,11 @@ internal sealed class ReadingScale(string title, string format, double value, do
         int at = Column(value);
         if (at >= 0 && at < track) reading[at] = Marker;
         lines.Add(ResultText.Clip($"{Number(value)} ± {Number(uncertainty)}", NameWidth - 1).PadRight(NameWidth) + reading);
+        IReadOnlyList<string> names = CandidateNames.Fit([.. candidates.Select(c => c.Name)], NameWidth - 3);
         for (int i = 0; i < candidates.Count; i++)
         {
-            (string name, PropertyRange? range) = candidates[i];
+            (_, PropertyRange? range) = candidates[i];
+            string name = names[i];
             var row = new StringBuilder(new string(Track, track));
             if (range is { } r)
             {
@@ -88,7 +91,7 @@ internal sealed class ReadingScale(string title, string format, double value, do
                 if (left >= track) row[track - 1] = '>';
             }
             if (at >= 0 && at < track) row[at] = row[at] == Bar ? MarkerOnBar : Marker;
-            string label = $"{i + 1} {ResultText.Clip(name, NameWidth - 3)}";
+            string label = $"{i + 1} {name}";
             lines.Add(label.PadRight(NameWidth) + row + " " + Verdict(range));
         }
         return lines;

@@ -16,7 +16,7 @@ internal sealed class ScaleModel
     /// <summary>Widest windows shown: a refractometer's useful span, a typical birefringence span, and SG 1.5 either side.</summary>
     public const double WidestIndex = 0.12, WidestBirefringence = 0.06, WidestGravity = 1.5;
 
-    public const string Legend = "* reading (# on a range)  <-> ± std. uncertainty u  === range  near: 2u";
+    public const string Legend = "* reading (# on a range)  <-> uncertainty  === range  near: just outside";
 
     private readonly IReadOnlyList<Func<int, ReadingScale>> _scales;
 

@@ -1,15 +1,19 @@
 using System.Globalization;
 using GemIndex.Cli.TextUi.Bench;
+using GemIndex.Core.Catalogue;
 using GemIndex.Core.Gravity;
 using GemIndex.Core.Identification;
-using GemIndex.Core.Optics;
 using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Quantities;
 using GemIndex.Core.Readings;
 
 namespace GemIndex.Cli.TextUi.Results;
 
-/// <summary>The identification panel's text: derived properties, ranked candidates, next test and warnings. Numbers are formatted here only.</summary>
+/// <summary>
+/// The answer's words: the species and its total, its origins, the candidates, what the readings gave and the next
+/// test. The trade's words on the main pane; the numbers behind them stay in the candidate detail. Numbers are
+/// formatted here only, never cut short.
+/// </summary>
 internal static class ResultText
 {
     public const int BarWidth = 8;
@@ -29,28 +33,100 @@ internal static class ResultText
         return new string('#', filled) + new string('.', BarWidth - filled);
     }
 
-    /// <summary>Optic character, indices, birefringence, sign, 2V (biaxial) and SG, as far as the readings go.</summary>
+    public static string Capital(string s) => s.Length == 0 ? s : char.ToUpperInvariant(s[0]) + s[1..];
+
+    public static string Origin(OriginClass o) => o.ToString().ToLowerInvariant();
+
+    /// <summary>"a, b and c".</summary>
+    public static string Listed(IReadOnlyList<string> words) =>
+        words.Count <= 1 ? string.Concat(words) : string.Join(", ", words.Take(words.Count - 1)) + " and " + words[^1];
+
+    /// <summary>
+    /// The lead: the species best supported and its total over the whole catalogue, how the total splits by origin,
+    /// and (when several origins share it) that these tests cannot separate them, with the test that would.
+    /// </summary>
+    public static IReadOnlyList<string> Lead(IdentificationResult r)
+    {
+        var lines = new List<string>();
+        if (r.NoGoodMatch)
+        {
+            lines.Add("!! NO GOOD MATCH: nothing in the catalogue fits well");
+            lines.Add($"re-check the readings; the stone may be a material the catalogue lacks (not in the catalogue {Percent(r.NotInCatalogue)})");
+            if (r.Species.Count > 0) lines.Add($"closest: {r.Species[0].Species} {Percent(r.Species[0].Confidence)}");
+            return lines;
+        }
+        if (r.Species.Count == 0)
+        {
+            if (r.Candidates.Count > 0) lines.Add($"{Capital(r.Candidates[0].Material.Name)} {Percent(r.Candidates[0].Confidence)}");
+            return lines;
+        }
+        SpeciesResult lead = r.Species[0];
+        lines.Add($"{Capital(lead.Species)} {Percent(lead.Confidence)}");
+        List<KeyValuePair<OriginClass, double>> origins = Origins(lead);
+        if (origins.Count > 1) lines.Add("  " + string.Join(", ", origins.Select(o => $"{Origin(o.Key)} {Percent(o.Value)}")));
+        if (origins.Count > 1) lines.Add(Inseparable(r, lead, origins));
+        else if (r.Candidates.Where(c => c.Material.Species == lead.Species && c.Confidence >= BenchWarnings.Relevant).ToList() is [var only]
+                 && only.Material.Name != lead.Species)
+            lines.Add($"  {only.Material.Name}, {Origin(only.Material.Origin)}");   // the variety beneath its species: "Forsterite" / "peridot"
+        foreach (SpeciesResult other in r.Species.Skip(1).Where(s => s.Confidence >= BenchWarnings.Relevant).Take(2))
+            lines.Add($"or {other.Species} {Percent(other.Confidence)}");
+        return lines;
+    }
+
+    /// <summary>The origins that hold a relevant share of a species (the same threshold as the engine's warnings), largest first.</summary>
+    public static List<KeyValuePair<OriginClass, double>> Origins(SpeciesResult s) =>
+        [.. s.Origins.Where(o => o.Value >= BenchWarnings.Relevant).OrderByDescending(o => o.Value)];
+
+    private static string Inseparable(IdentificationResult r, SpeciesResult lead, List<KeyValuePair<OriginClass, double>> origins)
+    {
+        string which = Listed([.. origins.Select(o => Origin(o.Key))]);
+        HashSet<string> ofSpecies = [.. r.Candidates.Where(c => c.Material.Species == lead.Species).Select(c => c.Material.Name)];
+        bool nextSeparates = r.NextTest is { } n
+            && r.Candidates.Where(c => n.Separates.Contains(c.Material.Name) && ofSpecies.Contains(c.Material.Name)).Select(c => c.Material.Origin).Distinct().Count() > 1;
+        string remedy = nextSeparates ? $"the {r.NextTest!.Description} may help" : "refer a valuable stone to a qualified laboratory";
+        return $"  These tests cannot tell {which} {lead.Species} apart: {remedy}.";
+    }
+
+    /// <summary>What the engine used from the readings, in the reports' words (refused entries are not shown).</summary>
     public static IReadOnlyList<string> Derived(BenchAssessment a)
     {
         var lines = new List<string>();
         if (a.Result?.Series is { } series) lines.AddRange(Series(series));
-        else if (a.Readings.Refractometer?.Spot is { } spot) lines.Add($"spot reading n ≈ {Index(spot)}");
-        if (a.Readings.Refractometer is { OverLimit: true }) lines.Add("over the limit: index above the liquid");
-        lines.Add(Gravity(a.SpecificGravity));
+        else if (a.Readings.Refractometer?.Spot is { } spot && !a.Errors.ContainsKey(BenchFields.Spot) && a.Result is not null)
+            lines.Add($"Spot reading: {Index(spot)}");
+        if (a.Readings.Refractometer is { OverLimit: true } && !a.Errors.ContainsKey(BenchFields.OverLimit)) lines.Add("Over the limit: index above the contact liquid");
+        if (a.SpecificGravity is { } sg) lines.Add("Specific gravity: " + Gravity(sg)[3..]);
         return lines;
     }
 
     private static IEnumerable<string> Series(RotationSeriesResult s)
     {
-        if (s.Interpretations.Count == 0) { yield return "optic character: " + (s.UndeterminedReason.Length > 0 ? s.UndeterminedReason : "undetermined"); yield break; }
+        if (s.Interpretations.Count == 0)
+        {
+            yield return "Optic character: not fixed by the series" + (s.UndeterminedReason.Length > 0 ? ": " + s.UndeterminedReason : "");
+            yield break;
+        }
         SeriesInterpretation best = s.Interpretations.MaxBy(i => i.Weight)!;
-        string character = (best.Character ?? s.Character)?.ToString().ToLowerInvariant() ?? "character undetermined";
-        string sign = best.Sign switch { OpticSign.Positive => " positive (+)", OpticSign.Negative => " negative (−)", OpticSign.Either => " sign either", _ => "" };
-        yield return character + sign;
-        yield return best.Lowest.Value == best.Highest.Value ? $"n {Index(best.Lowest.Value)}" : $"n {Index(best.Lowest.Value)} – {Index(best.Highest.Value)}";
-        if (best.Beta is { } beta) yield return $"β {Index(beta.Value)}{TwoV(best)}";
-        if (best.Birefringence.Value > 0) yield return $"birefringence {best.Birefringence.Value.ToString("0.000", CultureInfo.InvariantCulture)}";
-        if (s.Interpretations.Count > 1) yield return $"({s.Interpretations.Count} readings of the series; best shown)";
+        yield return "Optic character: " + (s.Character is { } c ? c.ToString().ToLowerInvariant()
+            : "not fixed by the series" + (s.UndeterminedReason.Length > 0 ? ": " + s.UndeterminedReason : ""));
+        yield return "Refractive indices: " + (best.Beta is { } beta
+            ? $"α {Index(best.Lowest.Value)}, β {Index(beta.Value)}, γ {Index(best.Highest.Value)}{TwoV(best)}"
+            : best.Lowest.Value == best.Highest.Value ? Index(best.Lowest.Value) : $"{Index(best.Lowest.Value)} to {Index(best.Highest.Value)}");
+        if (best.Birefringence.Value > 0) yield return $"Birefringence: {Index(best.Birefringence.Value)}";
+        if (Sign(s) is { } sign) yield return "Optic sign: " + sign;
+    }
+
+    /// <summary>The sign in words, or "not fixed" when the series' interpretations that count disagree on it.</summary>
+    private static string? Sign(RotationSeriesResult s)
+    {
+        List<OpticSign> signs = [.. s.Interpretations.Where(i => i.Weight >= BenchWarnings.Relevant && i.Sign is OpticSign.Positive or OpticSign.Negative)
+            .Select(i => i.Sign).Distinct()];
+        return signs.Count switch
+        {
+            0 => null,
+            1 => signs[0] == OpticSign.Positive ? "positive" : "negative",
+            _ => "not fixed (positive and negative both fit the series)",
+        };
     }
 
     private static string TwoV(SeriesInterpretation i)
@@ -58,26 +134,20 @@ internal static class ResultText
         try
         {
             Angle? v = Indicatrix.Biaxial(i.Lowest, i.Beta!.Value, i.Highest).OpticAxialAngle;
-            return v is { } angle ? $"  2V {angle.Degrees.ToString("0", CultureInfo.InvariantCulture)}°" : "";
+            return v is { } angle ? $"; 2V {angle.Degrees.ToString("0", CultureInfo.InvariantCulture)}°" : "";
         }
         catch (ArgumentException) { return ""; }   // β not strictly between α and γ: no 2V to show
     }
 
-    /// <summary>One line per candidate: rank, name, confidence as number and bar, fit.</summary>
-    public static string Candidate(int rank, RankedCandidate c, int nameWidth) =>
-        $"{rank,1} {Clip(c.Material.Name, nameWidth).PadRight(nameWidth)} {Percent(c.Confidence),4} {Bar(c.Confidence)} {c.Fit.ToString("0.00", CultureInfo.InvariantCulture)}";
+    /// <summary>One candidate row: rank, name (already fitted), confidence and, when there is room, a bar.</summary>
+    public static string Candidate(int rank, string name, int nameWidth, double confidence, bool bar) =>
+        $"{rank,1} {name.PadRight(nameWidth)} {Percent(confidence),4}{(bar ? " " + Bar(confidence) : "")}";
 
-    /// <summary>The column heads above <see cref="Candidate"/> lines.</summary>
-    public static string CandidateHeader(int nameWidth) => $"  {"candidate".PadRight(nameWidth)} conf {"".PadRight(BarWidth)} fit";
-
-    public static string Headline(IdentificationResult r) => r.NoGoodMatch
-        ? $"!! NO GOOD MATCH: nothing fits well (not in catalogue {Percent(r.NotInCatalogue)})"
-        : $"Best: {r.Candidates[0].Material.Name} {Percent(r.Candidates[0].Confidence)} (not in catalogue {Percent(r.NotInCatalogue)})";
-
+    /// <summary>The next test in words: what it separates and what each would show (its strength in numbers is in the detail view).</summary>
     public static IReadOnlyList<string> NextTest(NextTestAdvice? advice) => advice is null ? [] :
     [
-        $"Next: {advice.Description} ({advice.GainBits.ToString("0.0", CultureInfo.InvariantCulture)} bits)",
-        .. advice.Separates.Count > 0 ? [$"  separates {string.Join(", ", advice.Separates)}"] : Array.Empty<string>(),
+        $"Next test: {advice.Description}",
+        .. advice.Separates.Count > 0 ? [$"  it separates {Listed(advice.Separates)}"] : Array.Empty<string>(),
         .. advice.Expectations.Select(e => "  " + e),
     ];
 

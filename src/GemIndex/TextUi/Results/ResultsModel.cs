@@ -1,12 +1,20 @@
+using GemIndex.Cli.TextUi.Main;
 using GemIndex.Cli.TextUi.Bench;
 using GemIndex.Core.Identification;
 
 namespace GemIndex.Cli.TextUi.Results;
 
-/// <summary>The live identification panel: the lines to show for an assessment, and which candidate is selected for detail.</summary>
+/// <summary>
+/// The live answer: the rows of the answer pane for an assessment at a given width, most important first (the
+/// species, then the warning that matters most, then the candidates), so that the lead stays in view at 80x24.
+/// </summary>
 internal sealed class ResultsModel
 {
-    public const int NameWidth = 13;
+    /// <summary>Candidates always listed (when the catalogue has them); more are listed while they hold at least 1 %.</summary>
+    public const int CandidatesListed = 6, MostCandidatesListed = 8;
+
+    /// <summary>Below this width the confidence bar is left out so that the names keep their room.</summary>
+    public const int WidthForBars = 50;
 
     public BenchAssessment? Latest { get; private set; }
 
@@ -22,30 +30,80 @@ internal sealed class ResultsModel
 
     public bool NoGoodMatch => Latest?.Result?.NoGoodMatch ?? false;
 
-    /// <summary>Shown instead of the headline while there is nothing to rank against ("loading catalogue…", or why it failed).</summary>
+    /// <summary>Shown instead of the answer while there is nothing to rank against ("loading catalogue…", or why it failed).</summary>
     public string? Waiting { get; set; }
 
-    /// <summary>Why <see cref="Waiting"/> lasts (a catalogue that failed to load), shown in full above the details.</summary>
+    /// <summary>Why <see cref="Waiting"/> lasts (a catalogue that failed to load), shown in full.</summary>
     public string? WaitingReason { get; set; }
 
-    public string Headline => Waiting is { } w ? w
-        : Latest?.Result is { } r ? ResultText.Headline(r)
-        : Latest is null ? "working…" : "Enter readings: the candidates appear here.";
+    /// <summary>How many candidates the pane lists.</summary>
+    public int Listed => Candidates.Count == 0 ? 0
+        : Math.Min(Candidates.Count, Math.Max(CandidatesListed, Candidates.Take(MostCandidatesListed).Count(c => c.Confidence >= 0.005)));
 
-    public string CandidateHeader => ResultText.CandidateHeader(NameWidth);
+    /// <summary>The first row of the answer, unwrapped (the species and its total, or why there is none).</summary>
+    public string Headline => Rows(int.MaxValue / 2)[0].Text;
 
-    public IReadOnlyList<string> CandidateLines => [.. Candidates.Take(8).Select((c, i) => ResultText.Candidate(i + 1, c, NameWidth))];
+    /// <summary>Every row of the answer pane, word-wrapped to <paramref name="width"/>.</summary>
+    public IReadOnlyList<AnswerRow> Rows(int width)
+    {
+        width = Math.Max(20, width);
+        var rows = new List<AnswerRow>();
+        void Text(IEnumerable<string> lines)
+        {
+            foreach (string l in TextWrap.Lines(lines, width)) rows.Add(new AnswerRow(l));
+        }
+        if (Waiting is { } w)
+        {
+            Text([w, .. WaitingReason is { } reason ? [reason] : Array.Empty<string>()]);
+            return rows;
+        }
+        if (Latest is not { } a) { Text(["working…"]); return rows; }
+        if (a.Result is not { } r)
+        {
+            bool typed = a.Errors.Count > 0 || a.Readings.Refractometer is not null || a.Readings.Sg is not null || a.Readings.SgWeighing is not null
+                || a.Readings.Polariscope is not null || a.Readings.Pleochroism is not null || a.Readings.Dispersion is not null;
+            Text([typed ? "No usable reading yet: see the entries marked '!'." : "Type readings on F3 RI, F4 SG or F5 Tests: the answer appears here."]);
+            return rows;
+        }
+        Text(ResultText.Lead(r));
+        if (TopWarning(r) is { } top) Text(["! " + Short(top)]);
+        rows.Add(new AnswerRow(""));
+        rows.Add(new AnswerRow("Candidates (F10, Enter: detail)"));
+        bool bars = width >= WidthForBars;
+        int nameWidth = width - 7 - (bars ? ResultText.BarWidth + 1 : 0);
+        IReadOnlyList<RankedCandidate> shown = [.. Candidates.Take(Listed)];
+        IReadOnlyList<string> names = CandidateNames.Fit([.. shown.Select(c => c.Material.Name)], nameWidth);
+        int used = Math.Min(nameWidth, names.Max(n => n.Length));
+        for (int i = 0; i < shown.Count; i++)
+            rows.Add(new AnswerRow(ResultText.Candidate(i + 1, names[i], used, shown[i].Confidence, bars), i));
+        Text([$"  not in the catalogue {ResultText.Percent(r.NotInCatalogue)}"]);
+        IReadOnlyList<string> derived = ResultText.Derived(a);
+        if (derived.Count > 0) { rows.Add(new AnswerRow("")); Text(["Readings used", .. derived.Select(d => "  " + d)]); }
+        if (r.NextTest is not null) { rows.Add(new AnswerRow("")); Text(ResultText.NextTest(r.NextTest)); }
+        if (r.Warnings.Count > 0) { rows.Add(new AnswerRow("")); Text(["Warnings", .. r.Warnings.Select(x => "! " + Sentence(x))]); }
+        return rows;
+    }
 
-    public IReadOnlyList<string> DetailLines => Latest is not { } a ? (WaitingReason is { } w ? [w] : []) :
-    [
-        .. WaitingReason is { } reason ? [reason] : Array.Empty<string>(),
-        .. ResultText.Derived(a),
-        .. a.Result is { } r ? ResultText.NextTest(r.NextTest) : [],
-        .. (a.Result?.Warnings ?? []).Select(w => "! " + w),
-    ];
+    /// <summary>
+    /// The warning shown under the lead: a do-not-immerse caution first (it protects the stone), else the engine's
+    /// first warning, leaving out what the lead already says (nothing fits; origins inseparable).
+    /// </summary>
+    public static string? TopWarning(IdentificationResult r)
+    {
+        IEnumerable<string> open = r.Warnings.Skip(r.NoGoodMatch ? 1 : 0).Where(w => !w.Contains("cannot be separated by these tests", StringComparison.Ordinal));
+        return open.FirstOrDefault(w => w.Contains("do not immerse", StringComparison.Ordinal)) ?? open.FirstOrDefault();
+    }
 
-    /// <summary>The caution to show before a weight in water is typed, or null when no top candidate forbids immersion.</summary>
+    /// <summary>A warning's first part, before the catalogue's notes (" — "), which the Warnings list below gives in full.</summary>
+    public static string Short(string warning) => warning.IndexOf(" — ", StringComparison.Ordinal) is var at and > 0
+        ? warning[..at] + (warning.Length > at ? "; more under Warnings." : "")
+        : Sentence(warning);
+
+    /// <summary>One full stop at the end (a note that ends in one and the sentence's own make "..").</summary>
+    public static string Sentence(string text) => text.EndsWith("..", StringComparison.Ordinal) && !text.EndsWith("...", StringComparison.Ordinal) ? text[..^1] : text;
+
+    /// <summary>The caution shown on the SG page, or null when no top candidate forbids immersion.</summary>
     public string? ImmersionCaution => Latest?.DoNotImmerse is { Count: > 0 } names
-        ? $"Do not immerse: {string.Join(", ", names)} {(names.Count == 1 ? "is" : "are")} among the top candidates. Water or heavy liquids can damage porous or soluble stones: skip the weighing in water and the heavy liquids, and rely on the other tests."
+        ? $"Do not immerse: {ResultText.Listed(names)} {(names.Count == 1 ? "is" : "are")} among the top candidates. Water or heavy liquids can damage porous or soluble stones: skip the weighing in water and the heavy liquids, and rely on the other tests."
         : null;
 }

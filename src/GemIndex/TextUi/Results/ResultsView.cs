@@ -1,55 +1,65 @@
-using Terminal.Gui.Drawing;
 using System.Collections.ObjectModel;
-using Terminal.Gui.Configuration;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
-using GemIndex.Cli.TextUi.Main;
 
 namespace GemIndex.Cli.TextUi.Results;
 
-/// <summary>The live identification panel: headline, ranked candidates, then derived properties, next test and warnings.</summary>
+/// <summary>
+/// The answer pane: one list of rows (species, top warning, candidates, readings used, next test, warnings), focusable
+/// (F10) and scrolled with the arrows and Page keys; Enter on a candidate opens its detail.
+/// </summary>
 internal sealed class ResultsView : FrameView
 {
+    public const string Name = "Answer";
     private readonly ResultsModel _model;
-    private readonly ObservableCollection<string> _rows = [];
+    private readonly ObservableCollection<string> _shown = [];
+    private IReadOnlyList<AnswerRow> _rows = [];
+    private int _builtAt = -1;
 
     public ResultsView(ResultsModel model)
     {
         _model = model;
-        Title = "Identification";
-        Headline = new Label { Width = Dim.Fill(), Height = 2, Text = model.Headline };
-        Header = new Label { Y = 2, Width = Dim.Fill(), Text = model.CandidateHeader };
-        Candidates = new ListView { Y = 3, Width = Dim.Fill(), Height = 6 };
-        Candidates.SetSource(_rows);
-        Details = new WrappedText { Y = 9, Width = Dim.Fill(), Height = Dim.Fill() };
-        Candidates.KeyDown += (_, key) =>
+        Title = Name + " (F10)";
+        CanFocus = true;
+        List = new ListView { Width = Dim.Fill(), Height = Dim.Fill(), CanFocus = true };
+        List.SetSource(_shown);
+        List.KeyDown += (_, key) =>
         {
-            if (key == Key.Enter && Candidates.SelectedItem is { } i && i < model.Candidates.Count) { DetailRequested?.Invoke(i); key.Handled = true; }
+            if (key == Key.Enter && CandidateAt(List.SelectedItem) is { } i) { DetailRequested?.Invoke(i); key.Handled = true; }
         };
-        Add(Headline, Header, Candidates, Details);
+        List.ViewportChanged += (_, _) => { if (List.Viewport.Width != _builtAt) Refresh(); };
+        Add(List);
     }
 
-    public Label Headline { get; }
+    public ListView List { get; }
 
-    public Label Header { get; }
-
-    public ListView Candidates { get; }
-
-    public WrappedText Details { get; }
+    /// <summary>The rows as shown (for tests and for the key line).</summary>
+    public IReadOnlyList<AnswerRow> Rows => _rows;
 
     public event Action<int>? DetailRequested;
 
-    public int SelectedCandidate => Candidates.SelectedItem is { } i && i < _model.Candidates.Count ? i : 0;
+    /// <summary>The candidate on the selected row, else the first.</summary>
+    public int SelectedCandidate => CandidateAt(List.SelectedItem) ?? 0;
+
+    private int? CandidateAt(int? row) => row is { } r && r < _rows.Count ? _rows[r].Candidate : null;
+
+    /// <summary>Moves the selection to a candidate's row (for F10 and the tests).</summary>
+    public void SelectCandidate(int index)
+    {
+        for (int r = 0; r < _rows.Count; r++)
+            if (_rows[r].Candidate == index) { List.SelectedItem = r; return; }
+    }
 
     public void Refresh()
     {
-        Headline.Text = _model.Headline;
-        Headline.SchemeName = _model.NoGoodMatch ? SchemeManager.SchemesToSchemeName(Schemes.Error) : null;
-        int? selected = Candidates.SelectedItem;
-        _rows.Clear();
-        foreach (string line in _model.CandidateLines) _rows.Add(line);
-        if (selected is { } s && _rows.Count > 0) Candidates.SelectedItem = Math.Min(s, _rows.Count - 1);
-        Details.Lines = _model.DetailLines;
+        int? candidate = CandidateAt(List.SelectedItem);
+        int? row = List.SelectedItem;
+        _builtAt = List.Viewport.Width;
+        _rows = _model.Rows(_builtAt > 0 ? _builtAt : 40);
+        _shown.Clear();
+        foreach (AnswerRow r in _rows) _shown.Add(r.Text);
+        if (candidate is { } c && c < _model.Listed) SelectCandidate(c);
+        else if (row is { } at && _rows.Count > 0) List.SelectedItem = Math.Min(at, _rows.Count - 1);
     }
 }

@@ -1,20 +1,115 @@
 using System.Globalization;
+using System.Text.Json;
 using GemIndex.Cli.TextUi.Results;
 using GemIndex.Data.Workbook;
 
 namespace GemIndex.Cli.TextUi.Stones;
 
-/// <summary>A stone's edit history as lines: when (UTC), which field, before → after (long values shortened).</summary>
+/// <summary>
+/// A stone's edit history in words, one line per field change with its time (UTC): "Colour set to 'blue'",
+/// "SG changed from 2.65 to 2.66". A value the store keeps as JSON (the readings) is compared field by field, so the
+/// JSON itself is never shown.
+/// </summary>
 internal static class StoneHistoryText
 {
     public const int ValueWidth = 60;
 
-    public static IReadOnlyList<string> Lines(string reference, IReadOnlyList<StoneEdit> edits) =>
-    [
-        $"History of '{reference}' ({edits.Count} entries, times in UTC)",
-        "",
-        .. edits.Select(e => $"{e.At.ToString("yyyy-MM-dd HH:mm:ss", CultureInfo.InvariantCulture)}  {e.Field}: {Shown(e.Before)} → {Shown(e.After)}"),
-    ];
+    /// <summary>The trade's words for the store's field names and the batch format's keys.</summary>
+    private static readonly Dictionary<string, string> Words = new(StringComparer.Ordinal)
+    {
+        ["created"] = "stone created", ["reference"] = "reference", ["weight_ct"] = "weight (ct)", ["dimensions"] = "dimensions",
+        ["shape"] = "shape", ["cutting_style"] = "cutting style", ["transparency"] = "transparency", ["colour"] = "colour",
+        ["notes"] = "notes", ["readings"] = "readings", ["refractometer"] = "RI", ["method"] = "method", ["light_nm"] = "light (nm)",
+        ["liquid_limit"] = "liquid limit", ["spot"] = "spot reading", ["over_limit"] = "over the limit", ["rotation_deg"] = "rotation (°)",
+        ["low"] = "low edge", ["high"] = "high edge", ["sg"] = "SG", ["air_ct"] = "weight in air (ct)", ["water_ct"] = "weight in water (ct)",
+        ["water_c"] = "water (°C)", ["heavy_liquids"] = "heavy liquid", ["density"] = "density", ["result"] = "result",
+        ["polariscope"] = "polariscope", ["pleochroism"] = "pleochroism", ["dispersion"] = "fire", ["nB"] = "n at B", ["nG"] = "n at G",
+        ["thermal_probe"] = "thermal probe", ["electrical"] = "conductivity", ["uv_long"] = "UV long wave", ["uv_short"] = "UV short wave",
+        ["absorption_nm"] = "absorption lines (nm)", ["id"] = "reference",
+    };
 
-    private static string Shown(string value) => value.Length == 0 ? "(empty)" : "'" + ResultText.Clip(value, ValueWidth) + "'";
+    public static IReadOnlyList<string> Lines(string reference, IReadOnlyList<StoneEdit> edits)
+    {
+        List<string> changes = [.. edits.SelectMany(e => Describe(e).Select(d => $"{e.At.ToString("yyyy-MM-dd HH:mm:ss", CultureInfo.InvariantCulture)}  {d}"))];
+        return [$"History of '{reference}' ({changes.Count} changes, times in UTC)", "", .. changes];
+    }
+
+    /// <summary>One sentence per changed field (several when a JSON value changed in several places).</summary>
+    public static IEnumerable<string> Describe(StoneEdit e)
+    {
+        if (e.Field == "created") return [$"stone created as '{e.After}'"];
+        if (Flatten(e.Before) is { } before && Flatten(e.After) is { } after)
+        {
+            string prefix = Label(e.Field) == "readings" ? "" : Label(e.Field) + " ";
+            return before.Keys.Union(after.Keys).Where(k => k != "id" && before.GetValueOrDefault(k) != after.GetValueOrDefault(k))
+                .Select(k => Change(prefix + PathWords(k), before.GetValueOrDefault(k), after.GetValueOrDefault(k)));
+        }
+        return [Change(Label(e.Field), e.Before, e.After)];
+    }
+
+    private static string Change(string what, string? before, string? after) =>
+        (before ?? "", after ?? "") switch
+        {
+            ("", "") => $"{Capital(what)} left empty",
+            ("", var a) => $"{Capital(what)} set to {Shown(a)}",
+            (var b, "") => $"{Capital(what)} cleared (was {Shown(b)})",
+            var (b, a) => $"{Capital(what)} changed from {Shown(b)} to {Shown(a)}",
+        };
+
+    private static string Capital(string s) => ResultText.Capital(s);
+
+    private static string Label(string field) => field.Contains('.') || field.Contains('[') ? PathWords(field) : Words.GetValueOrDefault(field, field.Replace('_', ' '));
+
+    /// <summary>"refractometer.readings[2].low" → "RI step 3 low edge".</summary>
+    private static string PathWords(string path) => string.Join(" ", path.Split('.').Select(part =>
+    {
+        int bracket = part.IndexOf('[');
+        if (bracket < 0) return Words.GetValueOrDefault(part, part.Replace('_', ' '));
+        int index = int.Parse(part[(bracket + 1)..part.IndexOf(']')], CultureInfo.InvariantCulture);
+        string name = part[..bracket];
+        return name == "readings" ? $"step {index + 1}" : $"{Words.GetValueOrDefault(name, name.Replace('_', ' '))} {index + 1}";
+    }));
+
+    /// <summary>A JSON object or array as path → value (null when the text is not JSON: it is then shown as it is).</summary>
+    private static Dictionary<string, string>? Flatten(string text)
+    {
+        string t = text.Trim();
+        if (t.Length == 0) return [];
+        if (t[0] is not ('{' or '[')) return null;
+        try
+        {
+            using JsonDocument doc = JsonDocument.Parse(t);
+            var map = new Dictionary<string, string>(StringComparer.Ordinal);
+            Walk(doc.RootElement, "", map);
+            return map;
+        }
+        catch (JsonException) { return null; }
+    }
+
+    private static void Walk(JsonElement e, string path, Dictionary<string, string> map)
+    {
+        switch (e.ValueKind)
+        {
+            case JsonValueKind.Object:
+                foreach (JsonProperty p in e.EnumerateObject()) Walk(p.Value, path.Length == 0 ? p.Name : path + "." + p.Name, map);
+                break;
+            case JsonValueKind.Array when e.EnumerateArray().All(x => x.ValueKind is JsonValueKind.Number or JsonValueKind.String):
+                map[path] = string.Join(" ", e.EnumerateArray().Select(x => x.ValueKind == JsonValueKind.String ? x.GetString()! : x.GetRawText()));
+                break;
+            case JsonValueKind.Array:
+                int i = 0;
+                foreach (JsonElement x in e.EnumerateArray()) Walk(x, $"{path}[{i++}]", map);
+                break;
+            case JsonValueKind.Null:
+                break;
+            case JsonValueKind.String:
+                map[path] = e.GetString()!.Replace('_', ' ');
+                break;
+            case JsonValueKind.True: map[path] = "yes"; break;
+            case JsonValueKind.False: map[path] = "no"; break;
+            default: map[path] = e.GetRawText(); break;
+        }
+    }
+
+    private static string Shown(string value) => "'" + ResultText.Clip(value, ValueWidth) + "'";
 }

@@ -30,8 +30,9 @@ internal sealed class StoneListView : Dialog
             else if (key == Key.N.WithCtrl) { WantsNew = true; App!.RequestStop(); }
             else if (key == Key.D.WithCtrl && id is { } d) { duplicate(d); Reload(); }
             else if (key == Key.F3 && id is { } h) Main.TextScreen.Show(App!, "Edit history", string.Join('\n', history(h)));
+            // The last button is the default: Enter keeps the stone; deleting takes Tab or D. The list stays in view after.
             else if (key == Key.Delete && sender == List && id is { } x && MessageBox.Query(App!, "Delete stone",
-                         $"Delete '{_model.Shown[List.SelectedItem!.Value].Reference}' and its history?", "Keep", "Delete") == 1) { delete(x); Reload(); }
+                         $"Delete '{_model.Shown[List.SelectedItem!.Value].Reference}' and its history?", DeleteButton, "Cancel") == 0) { delete(x); Reload(); }
             else return;
             key.Handled = true;
         };
@@ -40,6 +41,8 @@ internal sealed class StoneListView : Dialog
         Add(label, Search, List);
         Fill();
     }
+
+    public const string DeleteButton = "_Delete";
 
     public TextField Search { get; }
 
@@ -53,14 +56,18 @@ internal sealed class StoneListView : Dialog
 
     private void Reload()
     {
+        int at = List.SelectedItem ?? 0;
         _model.Refresh();
         Fill();
+        if (_rows.Count > 0) List.SelectedItem = Math.Min(at, _rows.Count - 1);
+        List.SetFocus();
     }
 
     private void Fill()
     {
         _rows.Clear();
         foreach (var s in _model.Shown) _rows.Add(StoneListModel.Line(s));
-        if (_rows.Count > 0) List.SelectedItem = 0;
+        if (_rows.Count == 0) _rows.Add(_model.Query.Length > 0 ? "(no stone matches the search)" : "(no stones: Ctrl+N starts one)");
+        List.SelectedItem = 0;
     }
 }

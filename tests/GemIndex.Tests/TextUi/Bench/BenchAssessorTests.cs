@@ -26,9 +26,9 @@ public class BenchAssessorTests
         Assert.Equal("quartz", a.Result!.Candidates[0].Material.Name);
         Assert.False(a.Result.NoGoodMatch);
         IReadOnlyList<string> derived = ResultText.Derived(a);
-        Assert.Contains("n 1.544 – 1.553", derived);
-        Assert.Contains("birefringence 0.009", derived);
-        Assert.Contains("SG 2.650 ± 0.010", derived);
+        Assert.Contains("Refractive indices: 1.544 to 1.553", derived);
+        Assert.Contains("Birefringence: 0.009", derived);
+        Assert.Contains("Specific gravity: 2.650 ± 0.010", derived);
     }
 
     [Fact]

@@ -77,9 +77,34 @@ public class BenchModelTests
     {
         BenchChoice polariscope = BenchChoice.For(BenchFields.Polariscope);
         Assert.Equal("doubly_refractive", polariscope.WordFor('d'));
-        Assert.Equal("singly_refractive", polariscope.WordFor('S'));
-        Assert.Null(polariscope.WordFor('x'));
-        Assert.Equal("s/d/a/n", polariscope.KeyHint);
+        Assert.Equal("singly_refractive", polariscope.WordFor('I'));
+        Assert.Null(polariscope.WordFor('n'));
+        Assert.Equal("i/d/a/x", polariscope.KeyHint);
         Assert.All(BenchChoice.All, c => Assert.Equal(c.Options.Count, c.Options.Select(o => o.Key).Distinct().Count()));
+    }
+
+    [Fact]
+    public void A_key_means_one_thing_on_every_choice()
+    {
+        // "n" is "none" wherever it is offered (it once meant "anomalous" on the polariscope).
+        var meanings = BenchChoice.All.SelectMany(c => c.Options.Select(o => (o.Key, Meaning: o.Key == 'n' || o.Word is "inert" ? "none" : o.Word)))
+            .GroupBy(o => o.Key).Where(g => g.Select(o => o.Meaning).Distinct().Count() > 1
+                && !(g.Key == '+' || g.Key == '-'))   // + and − are "reacts" and "does not react" on both probes
+            .Select(g => g.Key);
+        Assert.Empty(meanings);
+    }
+
+    [Fact]
+    public void The_rotation_step_set_once_is_offered_for_every_next_step_and_a_bad_one_is_refused_in_words()
+    {
+        var form = new BenchModel();
+        form.SetText(RefractometerPage.RotationStepField, "45");
+        form.PutStep(0, new StepText("0", "1.544", "1.553"));
+        Assert.Equal("45", form.NextRotation());
+        form.PutStep(1, new StepText("45", "1.544", "1.551"));
+        Assert.Equal("90", form.NextRotation());
+        form.SetText(RefractometerPage.RotationStepField, "400");
+        Assert.Equal("rotation step 400° is outside 1° to 180°", form.RotationStepProblem);
+        Assert.Equal("60", form.NextRotation());   // the default 15° meanwhile
     }
 }

@@ -21,10 +21,45 @@ public class CatalogueBrowserModelTests
         model.Search("1.72");
         Assert.Equal(["spinel"], model.Shown.Select(m => m.Name));   // glass ends at 1.70, more than 0.01 below
         model.Search("1.705");
-        Assert.Equal(["spinel", "glass"], model.Shown.Select(m => m.Name));
+        Assert.Equal(["glass", "spinel"], model.Shown.Select(m => m.Name));   // closest first: 0.005 above glass, 0.007 below spinel
         model.Search("3.60");
         Assert.Contains("spinel", model.Shown.Select(m => m.Name));
         Assert.DoesNotContain("quartz", model.Shown.Select(m => m.Name));
+    }
+
+    [Fact]
+    public void An_index_and_an_SG_together_find_quartz_like_materials_closest_first()
+    {
+        // Quartz: nω 1.544, SG 2.65 (common practice). Glass's wide ranges hold both values too, but far from their middle.
+        var model = new CatalogueBrowserModel(TestMaterials.All);
+        model.Search("1.544 2.65");
+        Assert.Equal(["quartz", "glass"], model.Shown.Select(m => m.Name));
+        model.Search("1.72 2.65");
+        Assert.Empty(model.Shown);   // spinel has the index, nothing has both
+    }
+
+    [Fact]
+    public void An_index_read_as_an_edge_ranks_the_entry_whose_own_index_it_is_first()
+    {
+        // Oligoclase (from memory: α 1.533–1.540, γ 1.542–1.552, SG 2.62–2.67) spans 1.544 too, but none of its
+        // indices is 1.544; quartz's ω is (common practice).
+        var oligoclase = TestMaterials.All[0] with
+        {
+            Name = "oligoclase", Species = "plagioclase", Variety = "oligoclase",
+            Indices = GemIndex.Core.Catalogue.OpticalIndices.Uniaxial(new(1.533, 1.540), new(1.542, 1.552)),
+            SpecificGravity = new(2.62, 2.67),
+        };
+        var model = new CatalogueBrowserModel([oligoclase, TestMaterials.All[0]]);
+        model.Search("1.544 2.65");
+        Assert.Equal(["quartz", "oligoclase"], model.Shown.Select(m => m.Name));
+    }
+
+    [Fact]
+    public void Names_are_not_cut_while_the_line_has_room()
+    {
+        var model = new CatalogueBrowserModel([TestMaterials.All[0] with { Name = "flame-fusion colourless synthetic sapphire" }]);
+        int width = model.NameWidth(76);
+        Assert.Contains("flame-fusion colourless synthetic sapphire 1.544-1.554  SG 2.65-2.66", model.Line(model.Shown[0], width));
     }
 
     [Fact]

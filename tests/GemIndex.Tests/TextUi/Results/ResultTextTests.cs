@@ -1,6 +1,11 @@
+using GemIndex.Cli.TextUi.Bench;
 using GemIndex.Cli.TextUi.Main;
 using GemIndex.Cli.TextUi.Results;
+using GemIndex.Core.Catalogue;
 using GemIndex.Core.Identification;
+using GemIndex.Core.Optics;
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Readings;
 
 namespace GemIndex.Tests.TextUi.Results;
 
@@ -13,24 +18,167 @@ public class ResultTextTests
     [InlineData(0.0625, "#.......")]   // 0.5 cell rounds up
     public void The_confidence_bar_fills_in_proportion(double p, string bar) => Assert.Equal(bar, ResultText.Bar(p));
 
+    // Corundum entries named as the catalogue names them: cutting their ends leaves "flame-fusion…" three times.
+    private static readonly string[] Corundums = ["flame-fusion synthetic ruby", "flame-fusion synthetic sapphire", "flame-fusion colourless synthetic sapphire", "ruby"];
+
     [Fact]
-    public void A_candidate_line_fits_the_identification_panel_at_80_columns()
+    public void Names_that_fit_stay_whole()
     {
-        var c = new RankedCandidate { Material = TestMaterials.All[0] with { Name = "a very long material name indeed" }, Confidence = 0.873, Fit = 0.62 };
-        string line = ResultText.Candidate(1, c, ResultsModel.NameWidth);
-        Assert.Equal("1 a very long …  87% #######. 0.62", line);
-        Assert.True(line.Length <= 80 - MainWindow.FormWidth - 2, line);
-        Assert.Contains("87%", line);
+        Assert.Equal(Corundums, CandidateNames.Fit(Corundums, 42));
+    }
+
+    [Theory]
+    [InlineData(20)]
+    [InlineData(24)]
+    [InlineData(31)]
+    public void Names_cut_to_a_column_never_read_the_same(int width)
+    {
+        IReadOnlyList<string> fitted = CandidateNames.Fit(Corundums, width);
+        Assert.Equal(fitted.Count, fitted.Distinct().Count());
+        Assert.All(fitted, n => Assert.True(n.Length <= width, n));
+        Assert.Equal("ruby", fitted[3]);
+    }
+
+    private static Material Corundum(string name, OriginClass origin, bool doNotImmerse = false) => TestMaterials.All[0] with
+    {
+        Name = name, Species = "corundum", Variety = name, Origin = origin, DoNotImmerse = doNotImmerse,
+    };
+
+    /// <summary>A corundum answer of the shape the issue describes: the species holds almost all of it, split across origins.</summary>
+    private static IdentificationResult CorundumAnswer(NextTestAdvice? next, IReadOnlyList<string>? warnings = null)
+    {
+        RankedCandidate[] candidates =
+        [
+            new() { Material = Corundum("flame-fusion synthetic ruby", OriginClass.Synthetic), Confidence = 0.40, Fit = 0.9 },
+            new() { Material = Corundum("ruby", OriginClass.Natural), Confidence = 0.35, Fit = 0.9 },
+            new() { Material = Corundum("glass-filled ruby", OriginClass.Treated, doNotImmerse: true), Confidence = 0.18, Fit = 0.9 },
+            new() { Material = TestMaterials.All[1], Confidence = 0.07, Fit = 0.5 },
+        ];
+        return new IdentificationResult
+        {
+            Id = "blue lot",
+            Species =
+            [
+                new SpeciesResult { Species = "corundum", Confidence = 0.93, Origins = new Dictionary<OriginClass, double> { [OriginClass.Synthetic] = 0.40, [OriginClass.Natural] = 0.35, [OriginClass.Treated] = 0.18 } },
+                new SpeciesResult { Species = "spinel", Confidence = 0.07, Origins = new Dictionary<OriginClass, double> { [OriginClass.Natural] = 0.07 } },
+            ],
+            Candidates = candidates,
+            NotInCatalogue = 0,
+            NoGoodMatch = false,
+            NextTest = next,
+            Warnings = warnings ?? [],
+        };
+    }
+
+    [Fact]
+    public void The_answer_leads_with_the_species_and_its_total_then_its_origins()
+    {
+        IReadOnlyList<string> lead = ResultText.Lead(CorundumAnswer(null));
+        Assert.Equal("Corundum 93%", lead[0]);
+        Assert.Equal("  synthetic 40%, natural 35%, treated 18%", lead[1]);
+        Assert.Equal("  These tests cannot tell synthetic, natural and treated corundum apart: refer a valuable stone to a qualified laboratory.", lead[2]);
+        Assert.Equal("or spinel 7%", lead[3]);
+    }
+
+    [Fact]
+    public void When_the_next_test_separates_the_origins_the_lead_names_it()
+    {
+        var next = new NextTestAdvice { Test = "absorption_nm", GainBits = 1.3, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = [] };
+        string said = ResultText.Lead(CorundumAnswer(next))[2];
+        Assert.EndsWith($"apart: the {next.Description} may help.", said);
+    }
+
+    [Fact]
+    public void The_answer_pane_names_no_jargon_and_keeps_the_numbers_for_the_detail_view()
+    {
+        var next = new NextTestAdvice { Test = "absorption_nm", GainBits = 1.3, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = ["ruby: lines at 694 nm"] };
+        var model = new ResultsModel();
+        model.Accept(new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 4.0 }, Result = CorundumAnswer(next) });
+        IReadOnlyList<AnswerRow> rows = model.Rows(38);
+        Assert.All(rows, r => Assert.True(r.Text.Length <= 38, r.Text));   // wrapped or fitted, never cut by the pane's edge
+        string pane = string.Join('\n', rows.Select(r => r.Text));
+        foreach (string jargon in new[] { "bits", "fit ", "conf", "σ", "weight", "undetermined", "family" })
+            Assert.DoesNotContain(jargon, pane);
+        Assert.Contains("1.3 bits", CandidateDetail.Render(CorundumAnswer(next).Candidates[0], 1, CorundumAnswer(next)));
+    }
+
+    [Fact]
+    public void The_immersion_caution_is_the_warning_under_the_lead_and_cut_before_the_notes()
+    {
+        IdentificationResult r = CorundumAnswer(null, ["Likely misreading: step at 90°.", "Possible glass-filled ruby: do not immerse (no water or heavy liquids) — lead-glass filler.."]);
+        Assert.Equal("Possible glass-filled ruby: do not immerse (no water or heavy liquids); more under Warnings.", ResultsModel.Short(ResultsModel.TopWarning(r)!));
+        Assert.Equal("filler.", ResultsModel.Sentence("filler.."));
+    }
+
+    [Fact]
+    public void Every_candidate_row_names_its_candidate_and_none_reads_like_another_at_80_columns()
+    {
+        var model = new ResultsModel();
+        model.Accept(new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 4.0 }, Result = CorundumAnswer(null) });
+        int width = 80 - MainWindow.FormWidth - 2;
+        AnswerRow[] candidates = [.. model.Rows(width).Where(r => r.Candidate is not null)];
+        Assert.Equal([0, 1, 2, 3], candidates.Select(r => r.Candidate!.Value));
+        Assert.Equal(4, candidates.Select(r => r.Text).Distinct().Count());
+        Assert.All(candidates, r => Assert.True(r.Text.Length <= width, r.Text));
+        Assert.StartsWith("1 flame-fusion synthetic ruby", candidates[0].Text);
+    }
+
+    private static RotationSeriesResult TwoSigns() => new()
+    {
+        Character = OpticCharacter.Uniaxial,
+        Interpretations =
+        [
+            new SeriesInterpretation { Character = OpticCharacter.Uniaxial, Weight = 0.5, Sign = OpticSign.Positive, Lowest = new RefractiveIndex(1.544), Highest = new RefractiveIndex(1.553), Birefringence = new Birefringence(0.009), Description = "" },
+            new SeriesInterpretation { Character = OpticCharacter.Uniaxial, Weight = 0.5, Sign = OpticSign.Negative, Lowest = new RefractiveIndex(1.544), Highest = new RefractiveIndex(1.553), Birefringence = new Birefringence(0.009), Description = "" },
+        ],
+    };
+
+    [Fact]
+    public void A_sign_the_series_leaves_open_is_not_shown_as_fixed()
+    {
+        var a = new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new(), Result = CorundumAnswer(null) with { Series = TwoSigns() } };
+        IReadOnlyList<string> used = ResultText.Derived(a);
+        Assert.Contains("Optic sign: not fixed (positive and negative both fit the series)", used);
+        Assert.Contains("Refractive indices: 1.544 to 1.553", used);
+    }
+
+    [Fact]
+    public void A_refused_spot_reading_is_not_shown_as_used()
+    {
+        var form = new BenchModel();
+        form.SetText(BenchFields.Spot, "90");
+        form.SetText(BenchFields.Sg, "2.65");
+        BenchAssessment a = new BenchAssessor(new Identifier(TestMaterials.All)).Assess(form.Snapshot());
+        Assert.True(a.Errors.ContainsKey(BenchFields.Spot));
+        Assert.DoesNotContain(ResultText.Derived(a), l => l.Contains("90", StringComparison.Ordinal));
+        Assert.Contains("Specific gravity: 2.650 ± 0.010", ResultText.Derived(a));
+    }
+
+    [Fact]
+    public void With_readings_typed_but_none_usable_the_pane_does_not_ask_for_readings()
+    {
+        var model = new ResultsModel();
+        var form = new BenchModel();
+        form.SetText(BenchFields.Sg, "2.6x");
+        model.Accept(new BenchAssessor(new Identifier(TestMaterials.All)).Assess(form.Snapshot()));
+        Assert.Equal("No usable reading yet: see the entries marked '!'.", model.Headline);
+    }
+
+    [Fact]
+    public void A_two_column_line_wraps_under_its_second_column()
+    {
+        string[] rows = [.. TextWrap.Lines(["  F7    catalogue browser by name or index"], 30)];
+        Assert.Equal(["  F7    catalogue browser by", "        name or index"], rows);
     }
 
     [Fact]
     public void An_older_assessment_does_not_replace_a_newer_one()
     {
         var model = new ResultsModel();
-        var assessor = new GemIndex.Cli.TextUi.Bench.BenchAssessor(null);
-        var form = new GemIndex.Cli.TextUi.Bench.BenchModel();
+        var assessor = new BenchAssessor(null);
+        var form = new BenchModel();
         var old = assessor.Assess(form.Snapshot());
-        form.SetText(GemIndex.Cli.TextUi.Bench.BenchFields.Sg, "2.65");
+        form.SetText(BenchFields.Sg, "2.65");
         var newer = assessor.Assess(form.Snapshot());
         Assert.True(model.Accept(newer));
         Assert.False(model.Accept(old));

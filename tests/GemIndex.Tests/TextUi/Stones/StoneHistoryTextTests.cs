@@ -5,13 +5,45 @@ namespace GemIndex.Tests.TextUi.Stones;
 
 public class StoneHistoryTextTests
 {
+    private static readonly DateTimeOffset At = new(2026, 3, 1, 9, 5, 0, TimeSpan.Zero);
+
     [Fact]
-    public void Each_edit_shows_its_time_field_and_values_with_long_values_shortened()
+    public void Each_field_change_is_one_line_in_words_with_its_time()
     {
-        var at = new DateTimeOffset(2026, 3, 1, 9, 5, 0, TimeSpan.Zero);
-        IReadOnlyList<string> lines = StoneHistoryText.Lines("lot 7", [new StoneEdit(at, "notes", "", "clean"), new StoneEdit(at, "readings", new string('x', 100), "{}")]);
-        Assert.Equal("History of 'lot 7' (2 entries, times in UTC)", lines[0]);
-        Assert.Equal("2026-03-01 09:05:00  notes: (empty) → 'clean'", lines[2]);
-        Assert.Equal($"2026-03-01 09:05:00  readings: '{new string('x', 59)}…' → '{{}}'", lines[3]);
+        IReadOnlyList<string> lines = StoneHistoryText.Lines("lot 7",
+        [
+            new StoneEdit(At, "created", "", "lot 7"),
+            new StoneEdit(At, "notes", "", "clean"),
+            new StoneEdit(At.AddMinutes(1), "colour", "blu", "blue"),
+            new StoneEdit(At.AddMinutes(2), "weight_ct", "1.2", ""),
+        ]);
+        Assert.Equal("History of 'lot 7' (4 changes, times in UTC)", lines[0]);
+        Assert.Equal("2026-03-01 09:05:00  stone created as 'lot 7'", lines[2]);
+        Assert.Equal("2026-03-01 09:05:00  Notes set to 'clean'", lines[3]);
+        Assert.Equal("2026-03-01 09:06:00  Colour changed from 'blu' to 'blue'", lines[4]);
+        Assert.Equal("2026-03-01 09:07:00  Weight (ct) cleared (was '1.2')", lines[5]);
+    }
+
+    [Fact]
+    public void Readings_kept_as_JSON_are_told_field_by_field_and_the_JSON_is_never_shown()
+    {
+        const string before = """{"id":"b","refractometer":{"method":"facet","readings":[{"rotation_deg":0,"low":1.544,"high":1.553}]},"sg":2.65}""";
+        const string after = """{"id":"blue","refractometer":{"method":"facet","readings":[{"rotation_deg":0,"low":1.544,"high":1.552}]},"sg":2.66,"polariscope":"doubly_refractive"}""";
+        string[] said = [.. StoneHistoryText.Describe(new StoneEdit(At, "readings", before, after))];
+        string[] expected =
+        [
+            "RI step 1 high edge changed from '1.553' to '1.552'",
+            "SG changed from '2.65' to '2.66'",
+            "Polariscope set to 'doubly refractive'",
+        ];
+        Assert.Equal(expected.Order(StringComparer.Ordinal), said.Order(StringComparer.Ordinal));
+        Assert.DoesNotContain(said, s => s.Contains('{') || s.Contains('"'));
+    }
+
+    [Fact]
+    public void A_field_path_from_the_store_is_named_in_words()
+    {
+        Assert.Equal(["RI step 2 low edge set to '1.762'"], StoneHistoryText.Describe(new StoneEdit(At, "refractometer.readings[1].low", "", "1.762")));
+        Assert.Equal(["SG weight in water (ct) changed from '1.1' to '1.2'"], StoneHistoryText.Describe(new StoneEdit(At, "sg.water_ct", "1.1", "1.2")));
     }
 }
