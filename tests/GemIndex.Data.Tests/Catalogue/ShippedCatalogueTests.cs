@@ -7,10 +7,10 @@ public class ShippedCatalogueTests
 {
     /// <summary>
     /// The least share of shipped entries whose indices, birefringence, SG and dispersion all come from published works
-    /// (<see cref="SourcingSummary"/>): 277 of 351 (78.9 %) when the sourced family files landed. Raise it as more
-    /// values are sourced; never lower it.
+    /// (<see cref="SourcingSummary"/>): 277 of 351 (78.9 %) when the sourced family files landed, 295 of 351 (84.0 %)
+    /// after the second sourcing pass. Raise it as more values are sourced; never lower it.
     /// </summary>
-    private const double SourcedEntryShareFloor = 0.78;
+    private const double SourcedEntryShareFloor = 0.84;
 
     [Fact]
     public void The_embedded_sources_are_exactly_the_family_files_in_the_repository()
