@@ -1,3 +1,3 @@
 using GemIndex.Cli.CommandLine;
 
-return CommandTree.Build().Parse(args).Invoke();
+return CommandTree.Run(args);

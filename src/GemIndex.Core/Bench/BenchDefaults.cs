@@ -60,4 +60,7 @@ public static class BenchDefaults
     /// (beyond <see cref="EdgeSlackAboveLiquid"/>) is an error asking for the liquid actually used, never a guess.
     /// </summary>
     public static double LiquidLimitOrDefault(double? stated) => stated ?? LiquidLimit;
+
+    /// <summary>The longest colour description read ("greenish yellow with brown zones" is 32).</summary>
+    public const int LongestColour = 40;
 }

@@ -164,6 +164,11 @@ public static class BenchReader
             {
                 Error(BenchField.Sg, direct, "SG typed, or weights in air and water, not both",
                     $"is given directly ({BenchText.Shown(direct)}) and by weighing ({BenchField.AirCt}, {BenchField.WaterCt}); give one of them.");
+                // Each value's own fault is still named, so that one pass shows everything to mend.
+                if (Number(BenchField.Sg) is { } s) Checked(BenchField.Sg, direct, () => new SpecificGravity(s, BenchDefaults.DirectSpecificGravityUncertainty));
+                foreach (string field in new[] { BenchField.AirCt, BenchField.WaterCt })
+                    if (Number(field) is { } ct) Checked(field, r.Text(field)!, () => BenchDefaults.Weighed(ct));
+                if (Number(BenchField.WaterC) is { } c) Checked(BenchField.WaterC, celsius!, () => WaterDensity.At(Temperature.FromCelsius(c)).Temperature);
                 return null;
             }
             if (celsius is not null && !weighed && Number(BenchField.WaterC) is not null)
@@ -244,6 +249,13 @@ public static class BenchReader
         {
             if (r.Text(BenchField.Colour) is not { } text) return null;
             if (text.Trim().Length == 0) { Empty(BenchField.Colour, "a plain colour word"); return null; }
+            // A colour is a word or two; an unknown word is the engine's to warn about, but no colour is this long or holds control characters.
+            if (text.Length > BenchDefaults.LongestColour || text.Any(char.IsControl))
+            {
+                Error(BenchField.Colour, text, $"a plain colour word or two, up to {BenchDefaults.LongestColour} printable characters",
+                    "is not a colour: too long or with control characters.");
+                return null;
+            }
             return text.Trim();
         }
 

@@ -9,12 +9,23 @@ internal static class CatalogueCommand
     public static Command Create() => Create(DirectoryOption());
 
     /// <summary>The <c>--catalogue-dir</c> option (recursive, so the subcommands see it too).</summary>
-    public static Option<DirectoryInfo?> DirectoryOption() => new("--catalogue-dir")
+    public static Option<DirectoryInfo?> DirectoryOption()
+    {
+        var option = new Option<DirectoryInfo?>("--catalogue-dir")
         {
             Description = "Folder for user-catalogue.db and the built shipped catalogue (cache/ inside it); " +
                 "default: the user's data and cache folders",
             Recursive = true,
         };
+        // A file where a folder is meant is refused up front, whichever subcommand would (or would not) use it.
+        option.Validators.Add(r =>
+        {
+            string text = r.Tokens.Count == 1 ? r.Tokens[0].Value : "";
+            if (text.Length == 0) r.AddError("--catalogue-dir: empty; give a folder, or leave the option out");
+            else if (File.Exists(text)) r.AddError($"--catalogue-dir: '{(text.Length > 80 ? text[..80] + "…" : text)}' is a file, not a folder");
+        });
+        return option;
+    }
 
     private static Command Create(Option<DirectoryInfo?> directory) =>
         new Command("catalogue", "The reference catalogue of gem materials and your own entries")

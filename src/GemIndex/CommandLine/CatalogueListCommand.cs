@@ -21,7 +21,7 @@ internal static class CatalogueListCommand
         var sgTolerance = NumberOption.WithDefault("--sg-tolerance", "Specific-gravity tolerance", 0.05,
             NumberOption.Within("specific-gravity tolerance", 0, 5));
         var character = new Option<string?>("--optic-character") { Description = "Only entries of this optic character" };
-        character.AcceptOnlyFromAmong([.. CatalogueWords.All<OpticCharacter>()]);
+        ChoiceOption.Restrict(character, [.. CatalogueWords.All<OpticCharacter>()]);
         Option<bool> json = CatalogueCommand.JsonOption();
         var command = new Command("list", "List catalogue entries (shipped and your own) with their index and SG ranges")
         {

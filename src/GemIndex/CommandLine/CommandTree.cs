@@ -6,6 +6,28 @@ namespace GemIndex.Cli.CommandLine;
 /// <summary>The whole command line: one file per command group, assembled here.</summary>
 internal static class CommandTree
 {
+    /// <summary>
+    /// Parses and runs a command line. A refused value (an option's or argument's own check) exits
+    /// <see cref="ExitCodes.BadInput"/> with one line per fault and no help page; a usage fault (an unknown word, a
+    /// missing required option) exits <see cref="ExitCodes.Usage"/>. Messages never carry control characters.
+    /// </summary>
+    public static int Run(string[] args, InvocationConfiguration? configuration = null)
+    {
+        ParseResult parse = Build().Parse(args);
+        if (parse.Errors.Count == 0 || parse.Action is System.CommandLine.Help.HelpAction)
+            return configuration is null ? parse.Invoke() : parse.Invoke(configuration);
+        TextWriter error = configuration?.Error ?? Console.Error;
+        foreach (System.CommandLine.Parsing.ParseError fault in parse.Errors)
+            error.WriteLine("gemindex: " + Printable(fault.Message));
+        bool usage = parse.Errors.Any(e => e.SymbolResult is not (System.CommandLine.Parsing.OptionResult or System.CommandLine.Parsing.ArgumentResult));
+        if (usage) error.WriteLine($"('{parse.CommandResult.Command.Name} --help' lists the options)");
+        return usage ? ExitCodes.Usage : ExitCodes.BadInput;
+    }
+
+    /// <summary>The text with control characters shown as \uXXXX, so no escape sequence reaches the terminal.</summary>
+    private static string Printable(string text) =>
+        string.Concat(text.Select(c => char.IsControl(c) && c != '\n' ? $"\\u{(int)c:x4}" : c.ToString()));
+
     public static RootCommand Build()
     {
         var root = new RootCommand("gemindex: identify gem materials from bench readings (refractometer, SG, polariscope, spectroscope, UV, probes)");

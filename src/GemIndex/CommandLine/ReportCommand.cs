@@ -41,7 +41,7 @@ internal static class ReportCommand
             CustomParser = LineNumber,
         };
         var format = new Option<string>("--format") { Description = "markdown, html or json", DefaultValueFactory = _ => "markdown" };
-        format.AcceptOnlyFromAmong(Formats);
+        ChoiceOption.Restrict(format, Formats);
         var output = new Option<FileInfo?>("--output") { Description = "File to write (default: standard output)" };
         var examiner = new Option<string?>("--examiner") { Description = "Who examined the stone, printed in the report's header" };
         var date = new Option<string?>("--date") { Description = "The report's date, YYYY-MM-DD (default: today)" };
@@ -74,6 +74,9 @@ internal static class ReportCommand
         return report;
     }
 
+    /// <summary>The longest examiner's name printed in a report header.</summary>
+    private const int MaximumExaminerLength = 80;
+
     /// <summary>The report's header: the date given (or today, read here at the edge, never in Core), the examiner, the versions.</summary>
     private static ReportHeader? Header(string? date, string? examiner, TextWriter e)
     {
@@ -86,6 +89,11 @@ internal static class ReportCommand
         if (examiner is not null && examiner.Trim().Length == 0)
         {
             e.WriteLine("gemindex: --examiner: is empty; give a name, or leave the option out.");
+            return null;
+        }
+        if (examiner is not null && (examiner.Length > MaximumExaminerLength || examiner.Any(char.IsControl)))
+        {
+            e.WriteLine($"gemindex: --examiner: '{BenchText.Shown(examiner)}' is not a name; allowed: up to {MaximumExaminerLength} printable characters.");
             return null;
         }
         return new ReportHeader(day, examiner, ReportHeader.Program(), ShippedCatalogue.ContentHash[..Math.Min(12, ShippedCatalogue.ContentHash.Length)]);

@@ -77,7 +77,7 @@ public class CatalogueCommandTests
     {
         using var run = new CommandRun();
         var (exit, _, error) = run.Catalogue("import", Path.Combine(run.Folder, "none.csv"));
-        Assert.Equal(1, exit);
+        Assert.Equal(3, exit);   // a refused value, not a usage fault
         Assert.Contains("none.csv", error, StringComparison.Ordinal);
     }
 
@@ -118,7 +118,7 @@ public class CatalogueCommandTests
     {
         using var run = new CommandRun();
         var (exit, _, error) = run.Catalogue("list", option, value);
-        Assert.Equal(1, exit);
+        Assert.Equal(3, exit);   // a refused value, not a usage fault
         Assert.Contains(expected, error, StringComparison.Ordinal);
     }
 
@@ -127,7 +127,7 @@ public class CatalogueCommandTests
     {
         using var run = new CommandRun();
         var (exit, _, error) = run.Catalogue("list", "--optic-character", "cubic");
-        Assert.Equal(1, exit);
+        Assert.Equal(3, exit);   // a refused value, not a usage fault
         Assert.Contains("'cubic'", error, StringComparison.Ordinal);
     }
 

@@ -17,7 +17,7 @@ public sealed class CommandRun : IDisposable
     {
         var output = new StringWriter();
         var error = new StringWriter();
-        int exit = CommandTree.Build().Parse(args).Invoke(new InvocationConfiguration { Output = output, Error = error });
+        int exit = CommandTree.Run(args, new InvocationConfiguration { Output = output, Error = error });
         return (exit, output.ToString(), error.ToString());
     }
 

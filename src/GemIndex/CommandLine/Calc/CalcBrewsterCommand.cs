@@ -17,7 +17,7 @@ internal static class CalcBrewsterCommand
         var surrounding = CalcOptions.Number("--surrounding", "Index of the surrounding medium (no unit); default 1.000, air", 1.0);
         var stone = CalcOptions.Number("--index", "Index of the stone (no unit): gives the angle");
         var angle = CalcOptions.Number("--angle", "Measured Brewster angle in degrees: gives the index");
-        var angleUncertainty = CalcOptions.Number("--angle-uncertainty", "Standard uncertainty of --angle, in degrees", 0);
+        var angleUncertainty = CalcOptions.Number("--angle-uncertainty", "Standard uncertainty of --angle, in degrees (0–10)", 0, "angle uncertainty", 0, 10, "°");
         return CalcBuilder.Command("brewster", "Brewster (polarising) angle from an index, or an index from that angle", [surrounding, stone, angle, angleUncertainty], pr =>
         {
             var medium = Named("--surrounding", () => new RefractiveIndex(pr.GetValue(surrounding)));

@@ -27,8 +27,13 @@ internal static class CalcDispersionCommand
     {
         var points = CalcOptions.Tuples("--point", "An index measured at a wavelength, NM:INDEX (repeat; enough points for the model)", ':', 2);
         var model = new Option<string>("--model") { Description = "Model to fit: cauchy or sellmeier", DefaultValueFactory = _ => "cauchy" };
-        model.AcceptOnlyFromAmong("cauchy", "sellmeier");
+        ChoiceOption.Restrict(model, "cauchy", "sellmeier");
         var terms = new Option<int>("--terms") { Description = "Terms: cauchy 2 or 3 (default 2), sellmeier 1–3 (default 1)" };
+        terms.Validators.Add(r =>
+        {
+            if (r.Tokens.Count == 1 && int.TryParse(r.Tokens[0].Value, System.Globalization.NumberStyles.Integer, System.Globalization.CultureInfo.InvariantCulture, out int n) && n is < 1 or > 3)
+                r.AddError($"--terms: {n} is not a number of terms; allowed: 1 to 3 (cauchy 2 or 3, sellmeier 1 to 3)");
+        });
         var reading = CalcOptions.Number("--reading", "An index read at --wavelength (no unit): converts it to 589.3 nm");
         var wavelength = CalcOptions.Number("--wavelength", "Wavelength of --reading, in nm");
         var indexD = CalcOptions.Number("--nd", "The material's index at 589.3 nm (no unit), for the conversion");

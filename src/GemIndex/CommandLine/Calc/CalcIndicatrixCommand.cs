@@ -27,7 +27,7 @@ internal static class CalcIndicatrixCommand
         var omega = CalcOptions.Number("--omega", "Ordinary index ω of a uniaxial material (no unit)");
         var epsilon = CalcOptions.Number("--epsilon", "Extraordinary index ε (no unit)");
         var facet = CalcOptions.Tuple("--facet", "Facet normal X,Y,Z in the indicatrix axes (α along X, γ along Z)", ',', 3);
-        var step = CalcOptions.Number("--step", "Rotation step of the simulated series, in degrees; default 15", 15);
+        var step = CalcOptions.Number("--step", "Rotation step of the simulated series, in degrees (1–90); default 15", 15, "rotation step", 1, 90, "°");
         return CalcBuilder.Command("indicatrix", "Birefringence, optic sign and 2Vz from principal indices; optional simulated rotation on a facet", [alpha, beta, gamma, omega, epsilon, facet, step], pr =>
         {
             IndicatrixModel indicatrix = Build(pr.GetValue(alpha), pr.GetValue(beta), pr.GetValue(gamma), pr.GetValue(omega), pr.GetValue(epsilon));

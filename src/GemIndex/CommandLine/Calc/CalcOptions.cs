@@ -21,6 +21,10 @@ internal static class CalcOptions
     public static Option<double> Number(string name, string description, double defaultValue) =>
         NumberOption.WithDefault(name, description, defaultValue, _ => { });
 
+    /// <summary>A number with a default that must lie within [minimum, maximum] (the refusal names the option and the range).</summary>
+    public static Option<double> Number(string name, string description, double defaultValue, string quantity, double minimum, double maximum, string unit = "") =>
+        NumberOption.WithDefault(name, description, defaultValue, v => QuantityOutOfRangeException.ThrowIfOutside(quantity, v, minimum, maximum, unit));
+
     /// <summary>A repeatable option whose every value is <paramref name="count"/> numbers joined by <paramref name="separator"/>.</summary>
     public static Option<double[][]> Tuples(string name, string description, char separator, int count) => new(name)
     {

@@ -21,7 +21,7 @@ internal static class CalcReflectanceCommand
         var to = CalcOptions.Number("--n2", "Index of the stone (no unit): gives the reflectance");
         var incidence = CalcOptions.Number("--incidence", "Angle of incidence in degrees (0–90); default 0, normal incidence", 0);
         var measured = CalcOptions.Number("--reflectance-percent", "Measured normal-incidence reflectance in %: gives the index");
-        var measuredUncertainty = CalcOptions.Number("--reflectance-uncertainty-percent", "Standard uncertainty of the reflectance, in %", 0);
+        var measuredUncertainty = CalcOptions.Number("--reflectance-uncertainty-percent", "Standard uncertainty of the reflectance, in % (0–100)", 0, "reflectance uncertainty", 0, 100, "%");
         return CalcBuilder.Command("reflectance", "Fresnel reflectance from indices, or an index from normal-incidence reflectance", [from, to, incidence, measured, measuredUncertainty], pr =>
         {
             var n1 = Named("--n1", () => new RefractiveIndex(pr.GetValue(from)));

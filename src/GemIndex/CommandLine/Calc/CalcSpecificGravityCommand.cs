@@ -23,8 +23,8 @@ internal static class CalcSpecificGravityCommand
         var inAir = CalcOptions.Number("--in-air", "Weight of the stone in air, in --unit");
         var inWater = CalcOptions.Number("--in-water", "Weight of the stone in water, in --unit");
         var unit = new Option<string>("--unit") { Description = "Unit of the weights and resolution: ct or g (default ct)", DefaultValueFactory = _ => "ct" };
-        unit.AcceptOnlyFromAmong("ct", "g");
-        var water = CalcOptions.Number("--water-celsius", $"Water temperature in °C (0–40); default {BenchDefaults.WaterCelsius}", BenchDefaults.WaterCelsius);
+        ChoiceOption.Restrict(unit, "ct", "g");
+        var water = CalcOptions.Number("--water-celsius", $"Water temperature in °C (0–40); default {BenchDefaults.WaterCelsius}", BenchDefaults.WaterCelsius, "water temperature", 0, 40, "°C");
         var resolution = CalcOptions.Number("--resolution", "Balance resolution (its smallest step), in --unit; adds its rounding uncertainty");
         return CalcBuilder.Command("sg", "Specific gravity by hydrostatic weighing, and the density of water at a temperature", [inAir, inWater, unit, water, resolution], pr =>
         {

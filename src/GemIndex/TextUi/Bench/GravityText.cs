@@ -1,13 +1,13 @@
 using GemIndex.Cli.TextUi.Results;
+using GemIndex.Core.Bench;
 using GemIndex.Core.Gravity;
-using GemIndex.Core.Quantities;
-using GemIndex.Data.Batch;
 
 namespace GemIndex.Cli.TextUi.Bench;
 
 /// <summary>
-/// The SG line of the SG page: the value in use and where it comes from; when an SG is typed and the weights give
-/// another, it says the typed one is used and flags the clash.
+/// The SG line of the SG page: the value in use and where it comes from. An SG typed together with weights is refused
+/// by the reader (one of them must go); the line then shows both values and whether they agree, so the user knows
+/// which one to clear.
 /// </summary>
 internal static class GravityText
 {
@@ -16,25 +16,23 @@ internal static class GravityText
 
     public static string Describe(BenchSnapshot form, SpecificGravity? used)
     {
-        bool typed = form.Text(BenchFields.Sg).Trim().Length > 0;
+        string typedText = form.Text(BenchFields.Sg).Trim();
         SpecificGravity? weighed = Weighed(form);
-        if (used is not { } sg) return "SG -";
-        if (!typed) return ResultText.Gravity(sg) + " from the weights";
-        if (weighed is not { } w) return ResultText.Gravity(sg) + " as typed";
-        double combined = Math.Sqrt(sg.StandardUncertainty * sg.StandardUncertainty + w.StandardUncertainty * w.StandardUncertainty);
-        string both = $"Using the typed {ResultText.Gravity(sg)}; the weights give {ResultText.Gravity(w)[3..]}";
-        return Math.Abs(sg.Value - w.Value) > ClashCoverage * combined
-            ? both + "\n!! they disagree: check both and clear the wrong one"
-            : both + " (they agree)";
+        if (used is { } sg) return ResultText.Gravity(sg) + (typedText.Length > 0 ? " as typed" : " from the weights");
+        SpecificGravity? typed = typedText.Length > 0 ? BenchReader.Read(new BenchReadings().With(BenchField.Sg, typedText)).Sheet.SpecificGravity : null;
+        if (typed is not { } t || weighed is not { } w) return "SG -";
+        double combined = Math.Sqrt(t.StandardUncertainty * t.StandardUncertainty + w.StandardUncertainty * w.StandardUncertainty);
+        string verdict = Math.Abs(t.Value - w.Value) > ClashCoverage * combined ? "they disagree" : "they agree";
+        return $"!! Typed {ResultText.Gravity(t)}, the weights give {ResultText.Gravity(w)[3..]} ({verdict}):\n   neither is used until one is cleared";
     }
 
-    /// <summary>The SG the weights alone give, or null when they are not both typed or do not make an SG.</summary>
+    /// <summary>The SG the weights alone give (read by the one reader), or null when they do not make an SG.</summary>
     private static SpecificGravity? Weighed(BenchSnapshot form)
     {
-        if (!BenchNumber.TryParse(form.Text(BenchFields.AirCt), out double air, out _) || !BenchNumber.TryParse(form.Text(BenchFields.WaterCt), out double water, out _))
-            return null;
-        double? celsius = BenchNumber.TryParse(form.Text(BenchFields.WaterC), out double c, out _) ? c : null;
-        try { return StoneReadingsConverter.ToBenchSheet(new StoneReadings { SgWeighing = new HydrostaticReadings(air, water, celsius) }).SpecificGravity; }
-        catch (BatchInputException) { return null; }
+        var readings = new BenchReadings();
+        foreach (string field in new[] { BenchFields.AirCt, BenchFields.WaterCt, BenchFields.WaterC })
+            if (form.Text(field).Trim() is { Length: > 0 } text) readings = readings.With(field, text);
+        BenchReading reading = BenchReader.Read(readings);
+        return reading.Errors.Count == 0 ? reading.Sheet.SpecificGravity : null;
     }
 }

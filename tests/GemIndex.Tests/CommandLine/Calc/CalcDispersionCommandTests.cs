@@ -89,7 +89,7 @@ public class CalcDispersionCommandTests
     public void A_comma_inside_a_point_is_a_usage_error()
     {
         var (exit, _, error) = Text("dispersion", "--point", "500:1,5", "--point", "600:1.49", "--point", "700:1.48");
-        Assert.Equal(Usage, exit);
+        Assert.Equal(BadInput, exit);
         Assert.Contains("--point: in '500:1,5', '1,5' has a comma", error, StringComparison.Ordinal);
     }
 }

@@ -52,7 +52,7 @@ public class CalcRefractometerCommandTests
     public void A_standard_without_its_reading_is_a_usage_error_naming_the_option()
     {
         var (exit, _, error) = Text("refractometer", "--standard", "1.544");
-        Assert.Equal(Usage, exit);
+        Assert.Equal(BadInput, exit);
         Assert.Contains("--standard: '1.544' should be 2 numbers joined by ':'", error, StringComparison.Ordinal);
     }
 }

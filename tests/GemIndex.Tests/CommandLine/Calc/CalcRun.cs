@@ -27,7 +27,7 @@ internal static class CalcRun
         Assert.Equal("", output);
         string[] lines = error.Split('\n', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
         Assert.Single(lines);
-        Assert.StartsWith("gemindex calc: ", lines[0], StringComparison.Ordinal);
+        Assert.StartsWith("gemindex", lines[0], StringComparison.Ordinal);
         Assert.DoesNotContain(" at ", lines[0], StringComparison.Ordinal); // no stack frame
         return lines[0];
     }

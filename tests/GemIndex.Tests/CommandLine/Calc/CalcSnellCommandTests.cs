@@ -31,7 +31,7 @@ public class CalcSnellCommandTests
     public void A_comma_decimal_mark_is_a_usage_error_naming_the_option()
     {
         var (exit, _, error) = Text("snell", "--n1", "1,5", "--n2", "1", "--incidence", "10");
-        Assert.Equal(Usage, exit);
+        Assert.Equal(BadInput, exit);
         Assert.Contains("--n1: '1,5' has a comma: use a dot as the decimal mark", error, StringComparison.Ordinal);
     }
 

@@ -332,7 +332,7 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
-    public void A_typed_SG_and_weights_that_give_another_are_flagged_and_the_typed_one_said_to_be_used()
+    public void A_typed_SG_and_weights_that_give_another_are_flagged_with_both_values()
     {
         var (app, window, token) = Open();
         app.InjectKey(Key.F4);
@@ -344,8 +344,9 @@ public sealed class MainWindowTests : IDisposable
         Settle();
         app.LayoutAndDraw();
         string said = window.Gravity.Result.Text;
-        Assert.StartsWith("Using the typed SG 2.650 ± 0.010; the weights give 2.99", said);
+        Assert.StartsWith("!! Typed SG 2.650 ± 0.010, the weights give 2.99", said);
         Assert.Contains("they disagree", said);
+        Assert.Contains("neither is used until one is cleared", said);
         window.Dispose();
         app.End(token);
         app.Dispose();
