@@ -31,6 +31,24 @@ internal sealed class EvidenceAccumulator(bool explaining)
         if (_contributions is not null) { _lastBits = Math.Log2(mixed / broad); _lastTail = tail; }
     }
 
+    /// <summary>
+    /// Adds one test given as natural logs (densities of many readings overflow a double): the robust mixture is
+    /// ln((1 − ρ) e^f + ρ e^g).
+    /// </summary>
+    public void AddLog(string test, double logLikelihood, double logBroad, double tail, bool robust)
+    {
+        double mixed = robust
+            ? Identification.SectionLikelihood.LogSum.Add(Math.Log(1 - BroadDensities.MisreadingShare) + logLikelihood, Math.Log(BroadDensities.MisreadingShare) + logBroad)
+            : logLikelihood;
+        mixed = Math.Max(mixed, -690);
+        _logLikelihood += mixed;
+        _logOther += logBroad;
+        _sumLogTails += Math.Log(Math.Clamp(tail, 1e-300, 1));
+        _tests++;
+        _lastTest = test;
+        if (_contributions is not null) { _lastBits = (mixed - logBroad) / Math.Log(2); _lastTail = tail; }
+    }
+
     /// <summary>Words for the test added last.</summary>
     public void Say(string text)
     {

@@ -1,4 +1,5 @@
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Optics.Indicatrix;
 
 namespace GemIndex.Core.Identification;
 
@@ -24,11 +25,24 @@ public sealed class Identifier
     {
         if (catalogue.Count == 0) throw new ArgumentException("the catalogue has no materials", nameof(catalogue));
         _materials = [.. catalogue];
-        _profiles = [.. _materials.Select(m => new MaterialProfile(m))];
+        _profiles = Profiles(_materials);
         double total = _materials.Sum(m => BenchFrequencyWeights.Of(m.Frequency));
         double inCatalogue = 1 - BroadDensities.NotInCataloguePrior;
         _logPriors = [.. _materials.Select(m => Math.Log(inCatalogue * BenchFrequencyWeights.Of(m.Frequency) / total))];
         _logPriorNotInCatalogue = Math.Log(BroadDensities.NotInCataloguePrior);
+    }
+
+    /// <summary>Profiles of every entry; entries with the same optical data share one indicatrix prior, so a stone's series is scored once for them.</summary>
+    private static MaterialProfile[] Profiles(Material[] materials)
+    {
+        var shared = new Dictionary<(OpticalIndices, PropertyRange, OpticSign, MaterialForm), IndicatrixPrior>();
+        return [.. materials.Select(m =>
+        {
+            var birefringence = RefractometerEvidence.BirefringenceRange(m);
+            var key = (m.Indices, birefringence, m.Sign, m.Forms);
+            if (!shared.TryGetValue(key, out var prior)) shared[key] = prior = IndicatrixPrior.For(m, birefringence);
+            return new MaterialProfile(m, prior);
+        })];
     }
 
     /// <summary>
