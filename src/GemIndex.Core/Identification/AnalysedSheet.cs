@@ -12,7 +12,8 @@ public sealed record AnalysedSheet
         Sheet = sheet;
         if (!string.IsNullOrWhiteSpace(sheet.Colour))
         {
-            ColourHues = ColourWords.Hues(sheet.Colour).ToHashSet();
+            ColourHues = ColourWords.Hues(sheet.Colour).Where(ColourWords.KnownHues.Contains).ToHashSet();
+            UnknownColourWords = ColourWords.UnknownWords(sheet.Colour);
             IsColourless = ColourWords.IsColourless(sheet.Colour);
         }
         if (sheet.Refractometer is { Steps.Count: > 0 } r)
@@ -41,6 +42,9 @@ public sealed record AnalysedSheet
 
     /// <summary>The colour seen, as normalised hue words; empty when no colour was given.</summary>
     public IReadOnlySet<string> ColourHues { get; } = new HashSet<string>();
+
+    /// <summary>Words of the colour given that name no known hue: they give no evidence, and a warning says so.</summary>
+    public IReadOnlyList<string> UnknownColourWords { get; } = [];
 
     /// <summary>True when the colour given describes a colourless stone (which shows no pleochroism).</summary>
     public bool IsColourless { get; }

@@ -10,7 +10,7 @@ namespace GemIndex.Core.Identification;
 /// prior is uniform over every combination that keeps each principal index within its catalogue range and B within its
 /// own (so indices move together, as in a composition series), with soft edges. The level is integrated in closed form
 /// (a common shift of all indices moves every edge by the same amount, to first order, together with the per-stone
-/// offset); the shape by Gauss–Legendre nodes, then refined continuously (<see cref="ShapeAt"/>). Built once per material.
+/// offset); the shape by two-point Gauss–Legendre nodes, then refined continuously (<see cref="ShapeAt"/>). Built once per material.
 /// </summary>
 internal sealed class IndicatrixPrior
 {
@@ -79,9 +79,10 @@ internal sealed class IndicatrixPrior
     /// <summary>A box narrower than this (a reading's precision) is taken as a point: one node, no refinement along it.</summary>
     internal const double NarrowBox = 0.0005;
 
-    // Three-point Gauss–Legendre nodes and weights on [−1, 1] (Abramowitz and Stegun 1964, table 25.4).
-    private static readonly double[] Nodes3 = [-0.7745966692414834, 0, 0.7745966692414834];
-    private static readonly double[] Weights3 = [5.0 / 9, 8.0 / 9, 5.0 / 9];
+    // Two-point Gauss–Legendre nodes and weights on [−1, 1] (Abramowitz and Stegun 1964, table 25.4): starting points for the
+    // refinement, which then moves the shape continuously.
+    private static readonly double[] Nodes2 = [-0.5773502691896258, 0.5773502691896258];
+    private static readonly double[] Weights2 = [1, 1];
 
     /// <summary>The prior of a catalogue material; an aggregate-only material is read as one averaged index over its span.</summary>
     public static IndicatrixPrior For(Material m, PropertyRange birefringence)
@@ -229,15 +230,18 @@ internal sealed class IndicatrixPrior
     }
 
     /// <summary>The level's interval allowed by every range; when they miss, the middle of the gap and the gap's size.</summary>
-    private static (double Low, double High, double Gap) Level(params (double Low, double High)[] ranges)
+    private static (double Low, double High, double Gap) Level((double Low, double High) a, (double Low, double High) b) =>
+        Level(a, b, b);
+
+    private static (double Low, double High, double Gap) Level((double Low, double High) a, (double Low, double High) b, (double Low, double High) c)
     {
-        double low = ranges.Max(r => r.Low), high = ranges.Min(r => r.High);
+        double low = Math.Max(a.Low, Math.Max(b.Low, c.Low)), high = Math.Min(a.High, Math.Min(b.High, c.High));
         if (low <= high) return (low, high, 0);
         double middle = (low + high) / 2;
         return (middle, middle, low - high);
     }
 
-    /// <summary>Three Gauss–Legendre nodes on [a, b] with weights summing to b − a (one node of weight 1 when the interval is narrower than a reading's precision).</summary>
+    /// <summary>Two Gauss–Legendre nodes on [a, b] with weights summing to b − a (one node of weight 1 when the interval is narrower than a reading's precision).</summary>
     private static IEnumerable<(double Node, double Weight)> Legendre(double a, double b)
     {
         if (b - a < NarrowBox)
@@ -245,6 +249,6 @@ internal sealed class IndicatrixPrior
             yield return ((a + b) / 2, 1);
             yield break;
         }
-        for (int i = 0; i < 3; i++) yield return ((a + b) / 2 + (b - a) / 2 * Nodes3[i], (b - a) / 2 * Weights3[i]);
+        for (int i = 0; i < 2; i++) yield return ((a + b) / 2 + (b - a) / 2 * Nodes2[i], (b - a) / 2 * Weights2[i]);
     }
 }

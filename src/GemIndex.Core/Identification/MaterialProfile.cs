@@ -15,7 +15,8 @@ public sealed class MaterialProfile
     internal MaterialProfile(Material material, IndicatrixPrior? prior)
     {
         Material = material;
-        Hues = material.Colours.SelectMany(ColourWords.Hues).ToHashSet();
+        ColourHues = [.. material.Colours.SelectMany(ColourWords.Hues).Where(ColourWords.KnownHues.Contains).Distinct()];
+        Hues = ColourHues.ToHashSet();
         Birefringence = RefractometerEvidence.BirefringenceRange(material);
         Prior = prior ?? IndicatrixPrior.For(material, Birefringence);
     }
@@ -25,6 +26,9 @@ public sealed class MaterialProfile
 
     /// <summary>The material.</summary>
     public Material Material { get; }
+
+    /// <summary>Its usual colours as known hue words, most usual first.</summary>
+    public IReadOnlyList<string> ColourHues { get; }
 
     /// <summary>Its usual colours as normalised hue words.</summary>
     public IReadOnlySet<string> Hues { get; }

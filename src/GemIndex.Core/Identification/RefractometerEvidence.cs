@@ -29,8 +29,8 @@ internal static class RefractometerEvidence
     /// </summary>
     internal const double AggregateShowsTwoEdges = 0.02;
 
-    /// <summary>The cheap screen's width, in standard deviations of a reading with its offset (DOMAIN.md §6b uses 4σ; 6 leaves room for the soft edges).</summary>
-    internal const double ScreenSigmas = 6;
+    /// <summary>The cheap screen's width, in standard deviations of a reading with its offset and soft edges (DOMAIN.md §6b: 4σ).</summary>
+    internal const double ScreenSigmas = 4;
 
     private readonly record struct Part(double Likelihood, double Broad, double Tail, string Text);
 
@@ -84,10 +84,10 @@ internal static class RefractometerEvidence
     internal static bool Screened(IndicatrixPrior prior, SeriesObservation series, double shift, double shiftSigma)
     {
         double sigma = Math.Sqrt(series.NoiseVariance + SectionLikelihood.OffsetVariance(series, shiftSigma));
-        double tolerance = ScreenSigmas * sigma + IndicatrixPrior.CatalogueBoundSigma;
+        double tolerance = ScreenSigmas * sigma;
         return series.LowestReading + shift < prior.LowestIndex - tolerance
                || series.HighestReading + shift > prior.HighestIndex + tolerance
-               || series.LargestSeparation > prior.LargestBirefringence + ScreenSigmas * Math.Sqrt(2 * series.NoiseVariance) + IndicatrixPrior.CatalogueBoundSigma;
+               || series.LargestSeparation > prior.LargestBirefringence + ScreenSigmas * Math.Sqrt(2 * series.NoiseVariance);
     }
 
     /// <summary>
@@ -136,7 +136,8 @@ internal static class RefractometerEvidence
         // A spot reading on a doubly refractive stone averages its edges: anywhere from the lowest to the highest index.
         var span = new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum);
         var part = Index("spot reading", spot, sigma, span, shift, shiftSigma, acc.Explaining);
-        acc.Add("refractometer", part.Likelihood, part.Broad, part.Tail, robust: true);
+        int group = (m.Forms & MaterialForm.Aggregate) != 0 ? EvidenceAccumulator.AggregateGroup : EvidenceAccumulator.Independent;
+        acc.Add("refractometer", part.Likelihood, part.Broad, part.Tail, robust: true, group);
         if (acc.Explaining) acc.Say(part.Text);
     }
 

@@ -19,11 +19,11 @@ namespace GemIndex.Core.Identification;
 internal static class SectionLikelihood
 {
     /// <summary>
-    /// On the coarse set an edge can move by about a tenth of the birefringence between neighbouring orientations, so
-    /// there each reading's noise is widened by σ_q = 0.1·B (a judgement; the refinement has no such widening;
+    /// On the coarse set an edge can move by about a fifth of the birefringence between neighbouring orientations, so
+    /// there each reading's noise is widened by σ_q = 0.2·B (a judgement; the refinement has no such widening;
     /// docs/ranking.md §1).
     /// </summary>
-    public const double QuadratureSpread = 0.1;
+    public const double QuadratureSpread = 0.2;
 
     /// <summary>The per-stone offset (calibration, liquid film), σ_b = ½ σ: a judgement kept from the first model (docs/ranking.md §1).</summary>
     public const double OffsetShare = 0.5;
@@ -42,7 +42,8 @@ internal static class SectionLikelihood
     /// <summary>One orientation and shape with the shift integrated out.</summary>
     /// <param name="LogValue">ln ∫ p(c) Π p(step | edges + c) dc (the shape's weight not included).</param>
     /// <param name="Tail">Goodness of fit at this point.</param>
-    internal readonly record struct PointFit(double LogValue, double Tail);
+    /// <param name="Readings">How many readings entered (with <c>residuals</c>, how many were written there).</param>
+    internal readonly record struct PointFit(double LogValue, double Tail, int Readings = 0);
 
     /// <summary>Scores the series; <paramref name="shift"/> moves readings to 589.3 nm (σ <paramref name="shiftSigma"/>).</summary>
     public static Outcome Evaluate(IndicatrixPrior prior, SeriesObservation series, double shift, double shiftSigma)
@@ -61,6 +62,7 @@ internal static class SectionLikelihood
         var best = new SectionRefinement.Start[SectionRefinement.Starts];
         Array.Fill(best, new SectionRefinement.Start(0, 0, double.NegativeInfinity));
         double bestTail = 0, bestScore = double.NegativeInfinity;
+        int bestPoint = 0, bestShape = 0;
         for (int j = 0; j < orientations; j++)
         {
             if (prior.IsIsotropic) IsotropicEdges(shapes, series.Count, edges);
@@ -69,23 +71,36 @@ internal static class SectionLikelihood
             {
                 bool isotropic = shapes[s].Group < 0;
                 if (isotropic && j > 0) continue; // the same at every orientation
-                var fit = Integrate(edges, s, count, series, noise[s], offsetVariance, shift, nearLimit, shapes[s], prior.LevelDensity);
-                double value = fit.LogValue + Math.Log(shapes[s].Weight);
+                double logWeight = Math.Log(shapes[s].Weight);
+                var fit = Integrate(edges, s, count, series, noise[s], offsetVariance, shift, nearLimit, shapes[s], prior.LevelDensity,
+                    withTail: false, floor: Math.Max(single.Max, oriented.Max) - 40 - logWeight);
+                double value = fit.LogValue + logWeight;
                 if (isotropic) single.Include(value);
                 else
                 {
                     oriented.Include(value);
                     SectionRefinement.Keep(best, new SectionRefinement.Start(j, s, value));
                 }
-                if (value > bestScore) (bestScore, bestTail) = (value, fit.Tail);
+                if (value > bestScore) (bestScore, bestPoint, bestShape) = (value, j, s);
             }
         }
+        if (double.IsFinite(bestScore)) bestTail = TailAt(prior, series, shift, offsetVariance, nearLimit, noise, bestPoint, bestShape);
         double coarse = oriented.Log - Math.Log(orientations);
         double refinedTail = 0;
         double refined = prior.IsIsotropic ? double.NegativeInfinity
             : SectionRefinement.LogIntegral(prior, series, shift, offsetVariance, nearLimit, best, out refinedTail);
         if (refined > coarse) { coarse = refined; bestTail = Math.Max(bestTail, refinedTail); }
         return new Outcome(LogSum.Add(single.Log, coarse), bestTail);
+    }
+
+    /// <summary>The goodness of fit at one coarse point (worked out once, for the best point only: it costs an incomplete gamma function).</summary>
+    private static double TailAt(IndicatrixPrior prior, SeriesObservation series, double shift, double offsetVariance, bool[]? nearLimit,
+        double[] noise, int point, int shape)
+    {
+        var edges = new double[series.Count * prior.Shapes.Length * 2];
+        if (prior.IsIsotropic) IsotropicEdges(prior.Shapes, series.Count, edges);
+        else SectionEdges(FacetOrientationSet.Points[point], prior.Shapes, series, edges);
+        return Integrate(edges, shape, prior.Shapes.Length, series, noise[shape], offsetVariance, shift, nearLimit, prior.Shapes[shape], prior.LevelDensity).Tail;
     }
 
     /// <summary>Variance of the common shift besides the level: the per-stone offset, the soft catalogue edges, the light's correction.</summary>
@@ -145,7 +160,7 @@ internal static class SectionLikelihood
     /// uniform density (or the broad one) convolved with the offset's normal.
     /// </summary>
     internal static PointFit Integrate(double[] edges, int s, int count, SeriesObservation series, double noise, double offsetVariance,
-        double shift, bool[]? nearLimit, in IndicatrixPrior.Shape shape, double levelDensity)
+        double shift, bool[]? nearLimit, in IndicatrixPrior.Shape shape, double levelDensity, bool withTail = true, double floor = double.NegativeInfinity, double[]? residuals = null)
     {
         int n = 0;
         double sum = 0, sum2 = 0, factor = 1, logFactor = 0;
@@ -159,31 +174,38 @@ internal static class SectionLikelihood
             if (series.TwoEdges[k])
             {
                 double a = series.Low[k] + shift - low, b = series.High[k] + shift - high;
+                if (residuals is not null) { residuals[n] = a; residuals[n + 1] = b; }
                 n += 2; sum += a + b; sum2 += a * a + b * b;
                 factor *= seenAsTwo;
             }
             else
             {
                 double a = series.Low[k] + shift - (low + high) / 2;
+                if (residuals is not null) residuals[n] = a;
                 n++; sum += a; sum2 += a * a;
                 factor *= 1 - seenAsTwo;
             }
             if (factor < 1e-200) { logFactor += Math.Log(factor); factor = 1; }
         }
         if (nearLimit is not null)
-            Censored(series, edges, s, count, noise, shift, nearLimit, separationSigma, ref n, ref sum, ref sum2, ref factor);
+            Censored(series, edges, s, count, noise, shift, nearLimit, separationSigma, residuals, ref n, ref sum, ref sum2, ref factor);
         logFactor += Math.Log(factor);
         double mean = sum / n;
         double squares = Math.Max(0, sum2 - sum * mean);
         double gaussian = -0.5 * (n - 1) * Math.Log(2 * Math.PI * noise) - 0.5 * Math.Log(n) - squares / (2 * noise);
         double spread = Math.Sqrt(noise / n + offsetVariance + Square(shape.ExtraSigma));
+        // The level's density is at most 1/max(width, spread·√(2π)) (or the broad density): skip it when even that cannot matter.
+        double ceiling = levelDensity > 0 ? levelDensity : 1 / Math.Max(shape.LevelHigh - shape.LevelLow, spread * 2.5066282746310002);
+        if (gaussian + logFactor + Math.Log(ceiling) < floor) return new PointFit(double.NegativeInfinity, 0);
         double density = LevelDensity(mean, shape.LevelLow, shape.LevelHigh, spread, levelDensity);
         if (!(density > 0)) return new PointFit(double.NegativeInfinity, 0);
+        if (residuals is not null) for (int i = 0; i < n; i++) residuals[i] -= mean; // centred: what the orientation and shape must explain
+        if (!withTail) return new PointFit(gaussian + logFactor + Math.Log(density), 0, n);
         double z = RangeLikelihood.StandardDeviationsOutside(mean, new PropertyRange(shape.LevelLow, shape.LevelHigh), spread);
         int freedom = Math.Max(1, n - 4); // three orientation angles and the level are fitted
         double tail = SpecialFunctions.GammaUpperRegularized(freedom / 2.0, squares / noise / 2) * RangeLikelihood.TwoSidedTail(z)
                       * Math.Min(1, Math.Exp(logFactor) / 0.5);
-        return new PointFit(gaussian + logFactor + Math.Log(density), tail);
+        return new PointFit(gaussian + logFactor + Math.Log(density), tail, n);
     }
 
     /// <summary>
@@ -192,7 +214,7 @@ internal static class SectionLikelihood
     /// plug-in: the shift is pinned far more tightly than either branch varies) and the likelier one is kept.
     /// </summary>
     private static void Censored(SeriesObservation series, double[] edges, int s, int count, double noise, double shift, bool[] nearLimit,
-        double separationSigma, ref int n, ref double sum, ref double sum2, ref double factor)
+        double separationSigma, double[]? residuals, ref int n, ref double sum, ref double sum2, ref double factor)
     {
         double fitted = n > 0 ? sum / n : Fallback(series, edges, s, count, shift, nearLimit);
         double sigma = Math.Sqrt(noise);
@@ -207,6 +229,7 @@ internal static class SectionLikelihood
             double pHiddenEdge = RangeLikelihood.Phi((high + fitted - shift - threshold) / sigma);
             bool hidden = pHiddenEdge * Math.Exp(-Square(alone - fitted) / (2 * noise)) > pOne * Math.Exp(-Square(merged - fitted) / (2 * noise));
             double a = hidden ? alone : merged;
+            if (residuals is not null) residuals[n] = a;
             n++; sum += a; sum2 += a * a;
             factor *= Math.Max(hidden ? pHiddenEdge : pOne, 1e-300);
         }
@@ -255,6 +278,9 @@ internal static class SectionLikelihood
         private double _max = double.NegativeInfinity, _sum;
 
         public double Log => _sum > 0 ? _max + Math.Log(_sum) : double.NegativeInfinity;
+
+        /// <summary>The largest value included so far.</summary>
+        public double Max => _max;
 
         public void Include(double value)
         {

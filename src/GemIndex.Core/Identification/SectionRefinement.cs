@@ -13,10 +13,13 @@ namespace GemIndex.Core.Identification;
 internal static class SectionRefinement
 {
     /// <summary>How many of the coarse set's best points are climbed from (a judgement between speed and finding every peak).</summary>
-    public const int Starts = 6;
+    public const int Starts = 4;
 
     /// <summary>Newton steps at most from each start.</summary>
-    private const int Iterations = 8;
+    private const int Iterations = 6;
+
+    /// <summary>A start this far (in ln) below the best cannot add a peak that matters.</summary>
+    private const double Negligible = 12;
 
     /// <summary>Shape parameters are moved in units of 0.001 so that all coordinates have similar curvature.</summary>
     private const double ShapeUnit = 0.001;
@@ -42,7 +45,8 @@ internal static class SectionRefinement
         tail = 0;
         var peaks = new List<(int Group, double[] Edges)>();
         var total = new SectionLikelihood.LogSum();
-        foreach (var start in starts.Where(s => double.IsFinite(s.Value)).OrderByDescending(s => s.Value))
+        double top = starts.Max(s => s.Value);
+        foreach (var start in starts.Where(s => s.Value > top - Negligible).OrderByDescending(s => s.Value))
         {
             var shape = prior.Shapes[start.Shape];
             if (shape.Group < 0) continue;
@@ -118,10 +122,11 @@ internal static class SectionRefinement
             return [theta, o.Sense > 0 ? psi : -psi];
         }
 
-        /// <summary>The log-integrand at <paramref name="x"/>; −∞ outside the prior's box.</summary>
-        private double Value(double[] x, bool keepEdges, out double tail)
+        /// <summary>The log-integrand at <paramref name="x"/> (−∞ outside the prior's box), and the centred residuals in σ.</summary>
+        private double Value(double[] x, bool final, out double tail, double[] residuals, out int count)
         {
             tail = 0;
+            count = 0;
             int i = _biaxial ? 3 : 2;
             double b = _freeBirefringence ? x[i++] * ShapeUnit : _fixedBirefringence;
             double u = _freeBeta ? x[i] * ShapeUnit : _fixedBeta;
@@ -129,8 +134,12 @@ internal static class SectionRefinement
             _one[0] = shape;
             var (orientation, logDensity) = Orientation(x);
             SectionLikelihood.SectionEdges(orientation, _one, _series, _edges);
-            var fit = SectionLikelihood.Integrate(_edges, 0, 1, _series, _series.NoiseVariance, _offsetVariance, _shift, _nearLimit, shape, _prior.LevelDensity);
+            var fit = SectionLikelihood.Integrate(_edges, 0, 1, _series, _series.NoiseVariance, _offsetVariance, _shift, _nearLimit, shape,
+                _prior.LevelDensity, withTail: final, residuals: residuals);
             tail = fit.Tail;
+            count = fit.Readings;
+            double scale = 1 / Math.Sqrt(_series.NoiseVariance);
+            for (int k = 0; k < count; k++) residuals[k] *= scale;
             return fit.LogValue + Math.Log(shape.Weight) + logDensity;
         }
 
@@ -157,76 +166,134 @@ internal static class SectionRefinement
                 -2 * Math.Log(Math.PI) - 1.5 * Math.Log(1 + a * a + c * c));
         }
 
+        /// <summary>
+        /// Levenberg–Marquardt on the residuals (Gauss–Newton with a damping that shrinks on success), then Laplace's
+        /// method with the full curvature of the log-integrand at the peak (central differences).
+        /// </summary>
         public bool Climb(out double logIntegral, out double tail, out double[] edges)
         {
             logIntegral = double.NegativeInfinity;
             edges = [];
-            int d = _x.Length;
-            double[] x = [.. _x];
-            double value = Value(x, false, out tail);
+            int d = _x.Length, m = 2 * _series.Count;
+            double[] x = [.. _x], r = new double[m], trialResiduals = new double[m], column = new double[m];
+            double value = Value(x, false, out tail, r, out int count);
             if (!double.IsFinite(value)) return false;
-            var h = Steps(d);
-            double[,] hessian = new double[d, d];
-            double[] gradient = new double[d];
+            var jacobian = new double[m, d];
+            var curvature = new double[d, d];
+            double damping = 1e-3;
             for (int iteration = 0; iteration < Iterations; iteration++)
             {
-                Derivatives(x, value, h, gradient, hessian);
-                double[] step = NewtonStep(gradient, hessian) ?? Ascent(gradient);
+                if (!Jacobian(x, r, count, jacobian, column)) return false;
+                var (gradient, normal) = NormalEquations(jacobian, r, count, d, curvature);
                 bool moved = false;
-                for (int halving = 0; halving < 5 && !moved; halving++)
+                double[] step = [];
+                for (int attempt = 0; attempt < 4 && !moved; attempt++)
                 {
+                    step = Solve(normal, gradient, damping) ?? new double[d];
+                    Limit(step);
                     double[] trial = [.. x.Select((xi, i) => xi + step[i])];
-                    double v = Value(trial, false, out _);
-                    if (v > value) { (x, value, moved) = (trial, v, true); }
-                    else for (int i = 0; i < d; i++) step[i] /= 2;
+                    double v = Value(trial, false, out _, trialResiduals, out int trialCount);
+                    if (v > value)
+                    {
+                        (x, value, count, moved) = (trial, v, trialCount, true);
+                        Array.Copy(trialResiduals, r, m);
+                        damping = Math.Max(damping / 4, 1e-6);
+                    }
+                    else damping *= 8;
                 }
                 if (!moved || step.Max(Math.Abs) < 1e-4) break;
             }
-            Derivatives(x, value, h, gradient, hessian);
-            double logDeterminant = LogDeterminantOfNegative(hessian);
+            // The peak's width from the full curvature of the log-integrand (level density, edge-count factors and the prior
+            // included); the Gauss–Newton curvature stands in when that is not negative definite.
+            double logDeterminant = LogDeterminant(FullCurvature(x, value, r));
+            if (!double.IsFinite(logDeterminant))
+            {
+                if (!Jacobian(x, r, count, jacobian, column)) return false;
+                NormalEquations(jacobian, r, count, d, curvature);
+                logDeterminant = LogDeterminant(curvature);
+            }
             if (!double.IsFinite(logDeterminant)) return false;
-            value = Value(x, true, out tail);
+            value = Value(x, true, out tail, r, out _);
             int shapeDimensions = (_freeBirefringence ? 1 : 0) + (_freeBeta ? 1 : 0);
             logIntegral = value + d / 2.0 * Math.Log(2 * Math.PI) - logDeterminant / 2 + shapeDimensions * Math.Log(ShapeUnit);
             edges = [.. _edges];
             return true;
         }
 
-        private double[] Steps(int d)
+        /// <summary>−∂²ℓ/∂x² by central differences of the log-integrand itself.</summary>
+        private double[,] FullCurvature(double[] x, double centre, double[] scratch)
         {
+            int d = x.Length, angles = _biaxial ? 3 : 2;
             var h = new double[d];
-            int angles = _biaxial ? 3 : 2;
             for (int i = 0; i < d; i++) h[i] = i < angles ? 0.004 : 0.05;
-            return h;
-        }
-
-        private void Derivatives(double[] x, double centre, double[] h, double[] gradient, double[,] hessian)
-        {
-            int d = x.Length;
             double[] y = [.. x];
             double F(int i, double di, int j, double dj)
             {
                 Array.Copy(x, y, d);
                 y[i] += di;
                 y[j] += dj;
-                double v = Value(y, false, out _);
+                double v = Value(y, false, out _, scratch, out _);
                 return double.IsFinite(v) ? v : centre - 1e3; // outside the box: a steep wall
             }
+            var curvature = new double[d, d];
             for (int i = 0; i < d; i++)
             {
-                double plus = F(i, h[i], i, 0), minus = F(i, -h[i], i, 0);
-                gradient[i] = (plus - minus) / (2 * h[i]);
-                hessian[i, i] = (plus - 2 * centre + minus) / (h[i] * h[i]);
+                curvature[i, i] = -(F(i, h[i], i, 0) - 2 * centre + F(i, -h[i], i, 0)) / (h[i] * h[i]);
                 for (int j = 0; j < i; j++)
-                    hessian[i, j] = hessian[j, i] = (F(i, h[i], j, h[j]) - F(i, h[i], j, -h[j]) - F(i, -h[i], j, h[j]) + F(i, -h[i], j, -h[j])) / (4 * h[i] * h[j]);
+                    curvature[i, j] = curvature[j, i] = -(F(i, h[i], j, h[j]) - F(i, h[i], j, -h[j]) - F(i, -h[i], j, h[j]) + F(i, -h[i], j, -h[j])) / (4 * h[i] * h[j]);
             }
+            return curvature;
         }
 
-        /// <summary>Δ = (−H)⁻¹ g when −H is positive definite (Cholesky), limited to a modest move; null otherwise.</summary>
-        private double[]? NewtonStep(double[] gradient, double[,] hessian)
+        /// <summary>∂r/∂x by forward differences; false when the readings' pairing changes under a small move (no smooth peak).</summary>
+        private bool Jacobian(double[] x, double[] r, int count, double[,] jacobian, double[] column)
+        {
+            int angles = _biaxial ? 3 : 2;
+            for (int i = 0; i < x.Length; i++)
+            {
+                double h = i < angles ? 0.002 : 0.02;
+                double keep = x[i];
+                x[i] = keep + h;
+                double v = Value(x, false, out _, column, out int n);
+                if (!double.IsFinite(v) || n != count)
+                {
+                    x[i] = keep - h; // at the box's wall: step the other way
+                    v = Value(x, false, out _, column, out n);
+                    h = -h;
+                }
+                x[i] = keep;
+                if (!double.IsFinite(v) || n != count) return false;
+                for (int k = 0; k < count; k++) jacobian[k, i] = (column[k] - r[k]) / h;
+            }
+            return true;
+        }
+
+        private static (double[] Gradient, double[,] Normal) NormalEquations(double[,] jacobian, double[] r, int count, int d, double[,] normal)
+        {
+            var gradient = new double[d];
+            for (int i = 0; i < d; i++)
+            {
+                double g = 0;
+                for (int k = 0; k < count; k++) g -= jacobian[k, i] * r[k];
+                gradient[i] = g;
+                for (int j = 0; j <= i; j++)
+                {
+                    double a = 0;
+                    for (int k = 0; k < count; k++) a += jacobian[k, i] * jacobian[k, j];
+                    normal[i, j] = normal[j, i] = a;
+                }
+            }
+            return (gradient, normal);
+        }
+
+        /// <summary>Solves (A + μ·diag(A)) Δ = g by Cholesky; null when not positive definite.</summary>
+        private static double[]? Solve(double[,] normal, double[] gradient, double damping)
         {
             int d = gradient.Length;
-            var l = Cholesky(hessian);
+            var a = new double[d, d];
+            for (int i = 0; i < d; i++)
+                for (int j = 0; j < d; j++) a[i, j] = normal[i, j] + (i == j ? damping * normal[i, i] + 1e-9 : 0);
+            var l = Cholesky(a);
             if (l is null) return null;
             var y = new double[d];
             for (int i = 0; i < d; i++)
@@ -242,16 +309,10 @@ internal static class SectionRefinement
                 for (int k = i + 1; k < d; k++) s -= l[k, i] * step[k];
                 step[i] = s / l[i, i];
             }
-            return Limited(step);
+            return step;
         }
 
-        private double[] Ascent(double[] gradient)
-        {
-            double norm = Math.Sqrt(gradient.Sum(g => g * g));
-            return norm > 0 ? Limited([.. gradient.Select(g => 0.05 * g / norm)]) : new double[gradient.Length];
-        }
-
-        private double[] Limited(double[] step)
+        private void Limit(double[] step)
         {
             int angles = _biaxial ? 3 : 2;
             for (int i = 0; i < step.Length; i++)
@@ -259,18 +320,17 @@ internal static class SectionRefinement
                 double cap = i < angles ? 0.15 : 1.0;
                 step[i] = Math.Clamp(step[i], -cap, cap);
             }
-            return step;
         }
 
-        /// <summary>The Cholesky factor L of −H (−H = L Lᵀ), or null when −H is not positive definite.</summary>
-        private static double[,]? Cholesky(double[,] hessian)
+        /// <summary>The Cholesky factor L of a symmetric matrix A = L Lᵀ, or null when A is not positive definite.</summary>
+        private static double[,]? Cholesky(double[,] a)
         {
-            int d = hessian.GetLength(0);
+            int d = a.GetLength(0);
             var l = new double[d, d];
             for (int i = 0; i < d; i++)
                 for (int j = 0; j <= i; j++)
                 {
-                    double s = -hessian[i, j];
+                    double s = a[i, j];
                     for (int k = 0; k < j; k++) s -= l[i, k] * l[j, k];
                     if (i == j)
                     {
@@ -282,12 +342,12 @@ internal static class SectionRefinement
             return l;
         }
 
-        private static double LogDeterminantOfNegative(double[,] hessian)
+        private static double LogDeterminant(double[,] a)
         {
-            var l = Cholesky(hessian);
+            var l = Cholesky(a);
             if (l is null) return double.NaN;
             double sum = 0;
-            for (int i = 0; i < hessian.GetLength(0); i++) sum += 2 * Math.Log(l[i, i]);
+            for (int i = 0; i < a.GetLength(0); i++) sum += 2 * Math.Log(l[i, i]);
             return sum;
         }
     }

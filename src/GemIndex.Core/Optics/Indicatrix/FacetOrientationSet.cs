@@ -13,10 +13,10 @@ namespace GemIndex.Core.Optics.Indicatrix;
 internal static class FacetOrientationSet
 {
     /// <summary>
-    /// How many orientations: 384 (a judgement between speed and the quadrature's error; docs/ranking.md §1, where the
+    /// How many orientations: 128 (a judgement between speed and the quadrature's error; docs/ranking.md §1, where the
     /// error measured against brute-force Monte Carlo is given).
     /// </summary>
-    public const int Count = 384;
+    public const int Count = 128;
 
     /// <summary>The orientations (normal, travel basis at φ0 = 0, starting azimuth, sense).</summary>
     public static readonly FacetOrientation[] Points = Build(Count);
