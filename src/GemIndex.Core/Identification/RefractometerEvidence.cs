@@ -25,7 +25,7 @@ internal static class RefractometerEvidence
     /// <summary>
     /// P(a series with two sharp edges | a material met only as an aggregate): an aggregate gives one vague, averaged
     /// edge; two sharp edges need a single crystal, so only a misidentified form or a rare crystal explains them (a
-    /// judgement; docs/ranking.md §2, form term).
+    /// judgement; docs/ranking.md §1, form term).
     /// </summary>
     internal const double AggregateShowsTwoEdges = 0.02;
 
