@@ -205,12 +205,12 @@ internal static class SectionRefinement
             }
             // The peak's width from the full curvature of the log-integrand (level density, edge-count factors and the prior
             // included); the Gauss–Newton curvature stands in when that is not negative definite.
-            double logDeterminant = LogDeterminant(FullCurvature(x, value, r));
+            double logDeterminant = LogDeterminant(Bounded(FullCurvature(x, value, r), x));
             if (!double.IsFinite(logDeterminant))
             {
                 if (!Jacobian(x, r, count, jacobian, column)) return false;
                 NormalEquations(jacobian, r, count, d, curvature);
-                logDeterminant = LogDeterminant(curvature);
+                logDeterminant = LogDeterminant(Bounded(curvature, x));
             }
             if (!double.IsFinite(logDeterminant)) return false;
             value = Value(x, true, out tail, r, out _);
@@ -218,6 +218,31 @@ internal static class SectionRefinement
             logIntegral = value + d / 2.0 * Math.Log(2 * Math.PI) - logDeterminant / 2 + shapeDimensions * Math.Log(ShapeUnit);
             edges = [.. _edges];
             return true;
+        }
+
+        /// <summary>
+        /// Adds to each coordinate's curvature 2π/range², so that no direction is wider than its whole range: along a flat
+        /// direction (a biaxial shape with β at α is round about an axis) the Gaussian would otherwise claim far more than
+        /// the parameter's domain. The orientation angles' range is taken as π; the shape's, its box.
+        /// </summary>
+        private double[,] Bounded(double[,] curvature, double[] x)
+        {
+            int d = x.Length, angles = _biaxial ? 3 : 2;
+            for (int i = 0; i < d; i++)
+            {
+                double range = i < angles ? Math.PI
+                    : i == angles && _freeBirefringence ? (_family.BirefringenceHigh - _family.BirefringenceLow) / ShapeUnit
+                    : BetaWidth(x) / ShapeUnit;
+                curvature[i, i] += 2 * Math.PI / Math.Max(range * range, 1e-12);
+            }
+            return curvature;
+        }
+
+        private double BetaWidth(double[] x)
+        {
+            double b = _freeBirefringence ? x[3] * ShapeUnit : _fixedBirefringence;
+            var (low, high) = IndicatrixPrior.BetaBox(_family, b);
+            return high - low;
         }
 
         /// <summary>−∂²ℓ/∂x² by central differences of the log-integrand itself.</summary>
