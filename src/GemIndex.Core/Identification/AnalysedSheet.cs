@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using GemIndex.Core.Readings;
 
 namespace GemIndex.Core.Identification;
@@ -11,12 +12,30 @@ public sealed record AnalysedSheet
         Sheet = sheet;
         if (!string.IsNullOrWhiteSpace(sheet.Colour))
         {
-            ColourHues = ColourWords.Hues(sheet.Colour).ToHashSet();
+            ColourHues = ColourWords.Hues(sheet.Colour).Where(ColourWords.KnownHues.Contains).ToHashSet();
+            UnknownColourWords = ColourWords.UnknownWords(sheet.Colour);
             IsColourless = ColourWords.IsColourless(sheet.Colour);
         }
         if (sheet.Refractometer is { Steps.Count: > 0 } r)
+        {
             Series = RotationSeriesAnalysis.Analyse(r.Steps, r.ReadingPrecision, r.CalibrationOffset);
+            Observation = new SeriesObservation(r.Steps, r.ReadingPrecision, r.CalibrationOffset, r.LiquidLimit);
+            _broad = new Lazy<double>(() => SectionLikelihood.Evaluate(IndicatrixPrior.Broad(Observation), Observation, 0, 0).LogLikelihood);
+        }
     }
+
+    private readonly Lazy<double>? _broad;
+    private readonly ConcurrentDictionary<IndicatrixPrior, SectionLikelihood.Outcome> _outcomes = new();
+
+    /// <summary>The series as the section model reads it, when there are readings.</summary>
+    internal SeriesObservation? Observation { get; }
+
+    /// <summary>ln p(series | not in the catalogue), worked out once per stone.</summary>
+    internal double BroadSeriesLogLikelihood => _broad?.Value ?? 0;
+
+    /// <summary>The section model's outcome for a prior, worked out once per stone however many entries share it.</summary>
+    internal SectionLikelihood.Outcome SeriesOutcome(IndicatrixPrior prior, Func<SectionLikelihood.Outcome> evaluate) =>
+        _outcomes.GetOrAdd(prior, _ => evaluate());
 
     /// <summary>The sheet as entered.</summary>
     public BenchSheet Sheet { get; }
@@ -24,9 +43,12 @@ public sealed record AnalysedSheet
     /// <summary>The colour seen, as normalised hue words; empty when no colour was given.</summary>
     public IReadOnlySet<string> ColourHues { get; } = new HashSet<string>();
 
+    /// <summary>Words of the colour given that name no known hue: they give no evidence, and a warning says so.</summary>
+    public IReadOnlyList<string> UnknownColourWords { get; } = [];
+
     /// <summary>True when the colour given describes a colourless stone (which shows no pleochroism).</summary>
     public bool IsColourless { get; }
 
-    /// <summary>The rotation series' analysis, when there are readings.</summary>
+    /// <summary>The rotation series' summary for display (character, sign, indices read from the readings; never a gate).</summary>
     public RotationSeriesResult? Series { get; }
 }

@@ -10,8 +10,18 @@ public static class BenchWarnings
     /// <summary>A candidate at or above this confidence is worth warning about.</summary>
     public const double Relevant = 0.05;
 
+    /// <summary>An origin holding at least this share of its species' total is one the tests have not ruled out.</summary>
+    public const double OriginShare = 0.05;
+
     /// <summary>Warnings for one answer, most important first.</summary>
-    public static IReadOnlyList<string> For(AnalysedSheet sheet, IReadOnlyList<RankedCandidate> candidates, double notInCatalogue, bool noGoodMatch)
+    /// <param name="sheet">The analysed sheet.</param>
+    /// <param name="candidates">The candidates shown.</param>
+    /// <param name="notInCatalogue">P(not in the catalogue).</param>
+    /// <param name="noGoodMatch">Whether nothing fits.</param>
+    /// <param name="species">Species totals over the whole catalogue, best first.</param>
+    /// <param name="separation">The test that would best tell the leading species' entries apart, if any.</param>
+    public static IReadOnlyList<string> For(AnalysedSheet sheet, IReadOnlyList<RankedCandidate> candidates, double notInCatalogue, bool noGoodMatch,
+        IReadOnlyList<SpeciesResult>? species = null, NextTestAdvice? separation = null)
     {
         var warnings = new List<string>();
         if (noGoodMatch)
@@ -29,8 +39,22 @@ public static class BenchWarnings
         var relevant = candidates.Where(c => c.Confidence >= Relevant).ToList();
         foreach (var c in relevant.Where(c => c.Material.DoNotImmerse))
             warnings.Add($"Possible {c.Material.Name}: do not immerse (no water or heavy liquids){(c.Material.Notes.Length > 0 ? " — " + c.Material.Notes : "")}.");
-        foreach (var species in relevant.GroupBy(c => c.Material.Species).Where(g => g.Select(c => c.Material.Origin).Distinct().Count() > 1))
-            warnings.Add($"{Capital(species.Key)}: {string.Join(", ", species.Select(c => c.Material.Origin.ToString().ToLowerInvariant()).Distinct())} forms cannot be separated by these tests; for a valuable stone refer it to a qualified laboratory.");
+        if (sheet.UnknownColourWords.Count > 0)
+            warnings.Add($"Colour word{(sheet.UnknownColourWords.Count > 1 ? "s" : "")} '{string.Join("', '", sheet.UnknownColourWords)}' not known: no colour evidence taken from {(sheet.UnknownColourWords.Count > 1 ? "them" : "it")} (known hues: {string.Join(", ", ColourWords.KnownHues)}).");
+        var leading = species ?? [.. relevant.GroupBy(c => c.Material.Species).Select(g => new SpeciesResult
+        {
+            Species = g.Key, Confidence = g.Sum(c => c.Confidence),
+            Origins = g.GroupBy(c => c.Material.Origin).ToDictionary(o => o.Key, o => o.Sum(c => c.Confidence)),
+        })];
+        for (int i = 0; i < leading.Count && leading[i].Confidence >= Relevant; i++)
+        {
+            var origins = leading[i].Origins.Where(o => o.Value >= OriginShare * leading[i].Confidence).Select(o => o.Key.ToString().ToLowerInvariant()).ToList();
+            if (origins.Count < 2) continue;
+            string test = i == 0 && separation is { } next
+                ? $"the {next.Description} would help ({next.GainBits.ToString("0.00", CultureInfo.InvariantCulture)} bits)"
+                : i == 0 ? "no bench test left here separates them" : "";
+            warnings.Add($"{Capital(leading[i].Species)}: {string.Join(", ", origins)} cannot be separated by these tests{(test.Length > 0 ? "; " + test : "")}; for a valuable stone refer it to a qualified laboratory.");
+        }
         if (relevant.Any(c => c.Material.Origin == OriginClass.Composite))
             warnings.Add("Possible composite: the refractometer reads only the facet it touches, and the SG of a composite means little; look at the girdle and for a join under magnification.");
         if (relevant.Any(c => c.Material.Origin == OriginClass.Treated))

@@ -32,6 +32,63 @@ public static class ColourWords
         ["black"] = ["grey", "brown"],
     };
 
+    // Words that say how much colour, not which: no evidence either way.
+    private static readonly HashSet<string> Modifiers = new(StringComparer.OrdinalIgnoreCase)
+    {
+        "light", "dark", "pale", "deep", "medium", "vivid", "bright", "intense", "very", "slightly", "faint", "strong", "rich",
+    };
+
+    /// <summary>The hues the tool knows (the bench's rough colour wheel).</summary>
+    public static IReadOnlyCollection<string> KnownHues => Neighbours.Keys;
+
+    /// <summary>P(a hue | not in the catalogue): each of the known hues alike.</summary>
+    public static double BroadProbability => 1.0 / Neighbours.Count;
+
+    /// <summary>
+    /// Share of a material's colour probability on its listed colours, the rest on their neighbours (bench colour words are
+    /// loose) and a floor everywhere (a judgement; docs/ranking.md §2).
+    /// </summary>
+    public const double ListedShare = 0.85, NeighbourShare = 0.1;
+
+    /// <summary>Each further listed colour is this much less usual than the one before (the list is most usual first; a judgement).</summary>
+    public const double RankDecay = 0.6;
+
+    /// <summary>
+    /// P(hue | material) for a material whose colours are <paramref name="listed"/> (most usual first): the listed share
+    /// split by rank (weights 1, 0.6, 0.36, …), the neighbour share split among the listed colours' neighbours, and the
+    /// rest spread over every known hue. For a description with several hues ("greenish blue"), the likeliest of them.
+    /// A material with no colours listed gives every hue alike.
+    /// </summary>
+    public static double Probability(IReadOnlySet<string> seen, IReadOnlyList<string> listed)
+    {
+        if (listed.Count == 0) return BroadProbability;
+        double total = 0;
+        for (int i = 0; i < listed.Count; i++) total += Math.Pow(RankDecay, i);
+        var neighbours = listed.SelectMany(h => Neighbours.TryGetValue(h, out var near) ? near : []).Where(h => !listed.Contains(h)).Distinct().ToList();
+        double best = 0;
+        foreach (string hue in seen)
+        {
+            if (!Neighbours.ContainsKey(hue)) continue;
+            int rank = IndexOf(listed, hue);
+            double p = (1 - ListedShare - (neighbours.Count > 0 ? NeighbourShare : 0)) * BroadProbability
+                       + (rank >= 0 ? ListedShare * Math.Pow(RankDecay, rank) / total : 0)
+                       + (neighbours.Contains(hue) ? NeighbourShare / neighbours.Count : 0);
+            best = Math.Max(best, p);
+        }
+        return best;
+    }
+
+    private static int IndexOf(IReadOnlyList<string> list, string value)
+    {
+        for (int i = 0; i < list.Count; i++) if (list[i] == value) return i;
+        return -1;
+    }
+
+    /// <summary>The words of a colour description that name no hue the tool knows (modifiers such as "light" aside).</summary>
+    public static IReadOnlyList<string> UnknownWords(string colour) =>
+        [.. colour.ToLowerInvariant().Split([' ', '-', '/', ',', ';'], StringSplitOptions.RemoveEmptyEntries)
+            .Where(w => !Modifiers.Contains(w) && !Hues(w).All(Neighbours.ContainsKey))];
+
     /// <summary>True when the words describe a colourless stone.</summary>
     public static bool IsColourless(string colour) => Hues(colour).All(h => h == "colourless") && Hues(colour).Any();
 
@@ -53,6 +110,7 @@ public static class ColourWords
     {
         foreach (string raw in colour.ToLowerInvariant().Split([' ', '-', '/', ',', ';'], StringSplitOptions.RemoveEmptyEntries))
         {
+            if (Modifiers.Contains(raw)) continue;
             string word = raw.EndsWith("ish", StringComparison.Ordinal) ? raw[..^3] : raw;
             if (Stems.TryGetValue(word, out string? stem)) word = stem;
             yield return Synonyms.TryGetValue(word, out string? s) ? s : word;

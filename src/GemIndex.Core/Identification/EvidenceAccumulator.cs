@@ -2,12 +2,27 @@ namespace GemIndex.Core.Identification;
 
 /// <summary>
 /// Sums the evidence of one sheet for one candidate: log-likelihoods under the candidate and under
-/// "not in the catalogue", the per-test tail probabilities for the fit, and (when asked) the words.
+/// "not in the catalogue", the per-test tail probabilities for the fit, and (when asked) the words. Tests that share a
+/// cause are not multiplied as independent (docs/ranking.md §3): within a group, the strongest weight of evidence
+/// (log likelihood ratio against "not in the catalogue") counts in full and the others by <see cref="CorrelatedShare"/>.
 /// </summary>
 internal sealed class EvidenceAccumulator(bool explaining)
 {
+    /// <summary>No group: an independent test.</summary>
+    public const int Independent = 0;
+
+    /// <summary>Colour, UV fluorescence and absorption lines: one chromophore causes all three.</summary>
+    public const int ChromophoreGroup = 1;
+
+    /// <summary>An aggregate's spot index and SG: both follow its mix of minerals and its porosity.</summary>
+    public const int AggregateGroup = 2;
+
+    /// <summary>How much a correlated test adds beyond the strongest of its group (a judgement; docs/ranking.md §3).</summary>
+    public const double CorrelatedShare = 0.5;
+
     private readonly List<EvidenceContribution>? _contributions = explaining ? [] : null;
-    private double _logLikelihood, _logOther, _lastBits, _lastTail, _sumLogTails;
+    private readonly List<double>[] _groups = [[], [], []];
+    private double _independent, _logOther, _lastBits, _lastTail, _sumLogTails;
     private int _tests;
     private string _lastTest = "";
 
@@ -17,18 +32,32 @@ internal sealed class EvidenceAccumulator(bool explaining)
     /// Adds one test. Continuous readings are mixed with the broad density (a robust likelihood: misreadings
     /// and ranges narrower than nature); reactions carry their own error rates in <paramref name="likelihood"/>.
     /// </summary>
-    public void Add(string test, double likelihood, double broad, double tail, bool robust)
+    public void Add(string test, double likelihood, double broad, double tail, bool robust, int group = Independent)
     {
         double mixed = robust
             ? (1 - BroadDensities.MisreadingShare) * likelihood + BroadDensities.MisreadingShare * broad
             : likelihood;
-        mixed = Math.Max(mixed, 1e-300);
-        _logLikelihood += Math.Log(mixed);
-        _logOther += Math.Log(broad);
+        AddLog(test, Math.Log(Math.Max(mixed, 1e-300)), Math.Log(broad), tail, robust: false, group);
+    }
+
+    /// <summary>
+    /// Adds one test given as natural logs (densities of many readings overflow a double): the robust mixture is
+    /// ln((1 − ρ) e^f + ρ e^g).
+    /// </summary>
+    public void AddLog(string test, double logLikelihood, double logBroad, double tail, bool robust, int group = Independent)
+    {
+        double mixed = robust
+            ? SectionLikelihood.LogSum.Add(Math.Log(1 - BroadDensities.MisreadingShare) + logLikelihood, Math.Log(BroadDensities.MisreadingShare) + logBroad)
+            : logLikelihood;
+        mixed = Math.Max(mixed, logBroad - 690);
+        double ratio = mixed - logBroad;
+        if (group == Independent) _independent += ratio;
+        else _groups[group].Add(ratio);
+        _logOther += logBroad;
         _sumLogTails += Math.Log(Math.Clamp(tail, 1e-300, 1));
         _tests++;
         _lastTest = test;
-        if (_contributions is not null) { _lastBits = Math.Log2(mixed / broad); _lastTail = tail; }
+        if (_contributions is not null) { _lastBits = ratio / Math.Log(2); _lastTail = tail; }
     }
 
     /// <summary>Words for the test added last.</summary>
@@ -37,13 +66,23 @@ internal sealed class EvidenceAccumulator(bool explaining)
         _contributions?.Add(new EvidenceContribution(_lastTest, text, _lastBits, _lastTail >= 0.05));
     }
 
-    public CandidateEvaluation Result() => new()
+    public CandidateEvaluation Result()
     {
-        LogLikelihood = _logLikelihood,
-        LogLikelihoodNotInCatalogue = _logOther,
-        Fit = FisherCombination(-_sumLogTails, _tests),
-        Contributions = _contributions ?? (IReadOnlyList<EvidenceContribution>)[],
-    };
+        double ratio = _independent;
+        foreach (var group in _groups)
+        {
+            if (group.Count == 0) continue;
+            double strongest = group.MaxBy(Math.Abs);
+            ratio += strongest + CorrelatedShare * (group.Sum() - strongest);
+        }
+        return new()
+        {
+            LogLikelihood = _logOther + ratio,
+            LogLikelihoodNotInCatalogue = _logOther,
+            Fit = FisherCombination(-_sumLogTails, _tests),
+            Contributions = _contributions ?? (IReadOnlyList<EvidenceContribution>)[],
+        };
+    }
 
     /// <summary>
     /// Fisher's method: X = −2 Σ ln pᵢ follows χ² with 2k degrees of freedom when every pᵢ is uniform;

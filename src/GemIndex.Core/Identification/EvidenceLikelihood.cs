@@ -17,9 +17,6 @@ public static class EvidenceLikelihood
     /// <summary>Extra SG spread beyond the catalogue range and the weighing (inclusions, natural variation), σ.</summary>
     public const double SpecificGravityFloor = 0.005;
 
-    /// <summary>Half-width of the window within which a seen absorption line matches a catalogue line, nm (hand spectroscope).</summary>
-    public const double AbsorptionWindowNanometres = 8;
-
     /// <summary>Weighs every test on the sheet for <paramref name="material"/>.</summary>
     /// <param name="material">The candidate.</param>
     /// <param name="sheet">The analysed sheet.</param>
@@ -34,7 +31,9 @@ public static class EvidenceLikelihood
         var acc = new EvidenceAccumulator(explain);
         RefractometerEvidence.Add(profile, sheet, acc);
         var s = sheet.Sheet;
-        if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc);
+        // An aggregate's spot index and SG both follow its mix of minerals: counted as correlated, not independent.
+        int gravityGroup = (material.Forms & MaterialForm.Aggregate) != 0 && s.Refractometer?.Spot is not null ? EvidenceAccumulator.AggregateGroup : EvidenceAccumulator.Independent;
+        if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc, gravityGroup);
         foreach (var liquid in s.HeavyLiquids) HeavyLiquid(material, liquid, acc);
         if (s.Polariscope is { } pol) Polariscope(material, pol, acc);
         if (s.Pleochroism is { } pl) Pleochroism(material, pl, sheet.IsColourless, acc);
@@ -48,12 +47,12 @@ public static class EvidenceLikelihood
         return acc.Result();
     }
 
-    private static void SpecificGravity(Material m, double value, double sigma, EvidenceAccumulator acc)
+    private static void SpecificGravity(Material m, double value, double sigma, EvidenceAccumulator acc, int group)
     {
         double s = double.Hypot(sigma, SpecificGravityFloor);
         var range = m.SpecificGravity;
         double z = RangeLikelihood.StandardDeviationsOutside(value, range, s);
-        acc.Add("sg", RangeLikelihood.Density(value, range, s), BroadDensities.SpecificGravity, RangeLikelihood.TwoSidedTail(z), robust: true);
+        acc.Add("sg", RangeLikelihood.Density(value, range, s), BroadDensities.SpecificGravity, RangeLikelihood.TwoSidedTail(z), robust: true, group);
         if (acc.Explaining)
             acc.Say($"SG {F2(value)} ± {F2(sigma)} {Where(value, range, s, "0.00")}");
     }
@@ -79,6 +78,13 @@ public static class EvidenceLikelihood
 
     private static void Polariscope(Material m, PolariscopeReaction seen, EvidenceAccumulator acc)
     {
+        if (m.IsOpaque)
+        {
+            // No light passes: the test cannot be taken on it, so whatever was written neither supports nor weakens it.
+            acc.Add("polariscope", 0.25, 0.25, 1, robust: false);
+            if (acc.Explaining) acc.Say("polariscope: opaque material, the test says nothing about it");
+            return;
+        }
         var usual = UsualReactions(m);
         double f = PolariscopeProbability(usual, seen);
         acc.Add("polariscope", f, 0.25, f / PolariscopeProbability(usual, usual[0]), robust: false);
@@ -111,6 +117,12 @@ public static class EvidenceLikelihood
 
     private static void Pleochroism(Material m, PleochroismObservation seen, bool colourless, EvidenceAccumulator acc)
     {
+        if (m.IsOpaque)
+        {
+            acc.Add("pleochroism", 1 / 3.0, 1 / 3.0, 1, robust: false);
+            if (acc.Explaining) acc.Say("pleochroism: opaque material, the dichroscope says nothing about it");
+            return;
+        }
         double[] row = PleochroismRow(m.OpticCharacter, colourless ? PleochroismStrength.None : m.Pleochroism);
         double f = row[(int)seen];
         acc.Add("pleochroism", f, 1 / 3.0, f / row.Max(), robust: false);
@@ -186,21 +198,29 @@ public static class EvidenceLikelihood
         _ => DispersionStrength.VeryStrong,
     };
 
+    /// <summary>P(a heat-conduction probe reads positive | the material's usual reading): 0.97 for a diamond-like conductor (a probe can miss on a small or dirty stone), 0.02 otherwise (a judgement; docs/ranking.md §2).</summary>
+    internal static double ThermalPositive(Material m) => m.ThermalProbe == ThermalProbeResult.Positive ? 0.97 : 0.02;
+
+    /// <summary>P(the conductivity tester reads conductive | the material's usual reading): 0.9 for a conductor (poor contact fails), 0.03 otherwise (a judgement; docs/ranking.md §2).</summary>
+    internal static double ElectricalConductive(Material m) => m.Electrical == ElectricalResult.Conductive ? 0.9 : 0.03;
+
+    /// <summary>"Not in the catalogue": P(probe positive) 0.05, P(conductive) 0.1 (few bench stones conduct heat or electricity).</summary>
+    private const double BroadThermalPositive = 0.05, BroadConductive = 0.1;
+
     private static void Thermal(Material m, ThermalProbeResult seen, EvidenceAccumulator acc)
     {
-        bool expectedPositive = m.ThermalProbe == ThermalProbeResult.Positive;
-        double pPositive = expectedPositive ? 0.97 : 0.02;
+        double pPositive = ThermalPositive(m);
         double f = seen == ThermalProbeResult.Positive ? pPositive : 1 - pPositive;
-        double g = seen == ThermalProbeResult.Positive ? 0.05 : 0.95;
+        double g = seen == ThermalProbeResult.Positive ? BroadThermalPositive : 1 - BroadThermalPositive;
         acc.Add("thermal_probe", f, g, f / Math.Max(pPositive, 1 - pPositive), robust: false);
         if (acc.Explaining) acc.Say($"thermal probe {Word(seen)}, {(seen == m.ThermalProbe ? "as expected" : $"where {Word(m.ThermalProbe)} is expected")}");
     }
 
     private static void Electrical(Material m, ElectricalResult seen, EvidenceAccumulator acc)
     {
-        double pConductive = m.Electrical == ElectricalResult.Conductive ? 0.9 : 0.03;
+        double pConductive = ElectricalConductive(m);
         double f = seen == ElectricalResult.Conductive ? pConductive : 1 - pConductive;
-        double g = seen == ElectricalResult.Conductive ? 0.1 : 0.9;
+        double g = seen == ElectricalResult.Conductive ? BroadConductive : 1 - BroadConductive;
         acc.Add("electrical", f, g, f / Math.Max(pConductive, 1 - pConductive), robust: false);
         if (acc.Explaining) acc.Say($"electrically {Word(seen)}, {(seen == m.Electrical ? "as expected" : $"where {Word(m.Electrical)} is expected")}");
     }
@@ -209,14 +229,14 @@ public static class EvidenceLikelihood
     {
         if (usual.Count == 0)
         {
-            acc.Add(test, 0.25, 0.25, 1, robust: false);
+            acc.Add(test, 0.25, 0.25, 1, robust: false, EvidenceAccumulator.ChromophoreGroup);
             if (acc.Explaining) acc.Say($"{lamp} {Word(seen)}; not recorded for this material");
             return;
         }
         double f = FluorescenceProbability(usual, seen);
         double best = 0;
         foreach (var u in usual) best = Math.Max(best, FluorescenceProbability(usual, u));
-        acc.Add(test, f, 0.25, f / best, robust: false);
+        acc.Add(test, f, 0.25, f / best, robust: false, EvidenceAccumulator.ChromophoreGroup);
         if (acc.Explaining) acc.Say($"{lamp} {Word(seen)}; {string.Join(" or ", usual.Select(Word))} usual");
     }
 
@@ -244,22 +264,15 @@ public static class EvidenceLikelihood
 
     private static void Absorption(Material m, IReadOnlyList<double> seen, EvidenceAccumulator acc)
     {
-        var listed = m.AbsorptionLinesNanometres;
-        double f = 1, g = seen.Count == 0 ? 0.6 : 1;
-        int unexplained = 0;
-        foreach (double line in seen)
-        {
-            bool matched = listed.Any(l => Math.Abs(l - line) <= AbsorptionWindowNanometres);
-            f *= matched ? 0.7 : 0.05;
-            g *= 0.1;
-            if (!matched) unexplained++;
-        }
-        int missed = listed.Count(l => !seen.Any(line => Math.Abs(l - line) <= AbsorptionWindowNanometres));
-        f *= Math.Pow(0.6, missed); // faint lines are often not seen, so a missing line is weak evidence
-        acc.Add("absorption_nm", f, g, Math.Pow(0.07, unexplained), robust: false);
+        double logF = AbsorptionLines.LogLikelihood(m.AbsorptionLines, seen, out int unexplained, out int missedStrong);
+        double logG = AbsorptionLines.LogBroad(seen);
+        double tail = Math.Pow(0.07, unexplained) * Math.Pow(1 - AbsorptionLines.Detection(LineStrength.Strong), missedStrong);
+        acc.AddLog("absorption_nm", logF, logG, tail, robust: false, EvidenceAccumulator.ChromophoreGroup);
         if (acc.Explaining)
         {
-            string expected = listed.Count == 0 ? "no diagnostic lines listed" : "lines at " + string.Join(", ", listed.Select(l => l.ToString("0.#", CultureInfo.InvariantCulture))) + " nm listed";
+            var listed = m.AbsorptionLines;
+            string expected = listed.Count == 0 ? "no diagnostic lines listed"
+                : "lines at " + string.Join(", ", listed.Select(l => l.Nanometres.ToString("0.#", CultureInfo.InvariantCulture) + (l.Strength == LineStrength.Moderate ? "" : $" ({l.Strength.ToString().ToLowerInvariant()})"))) + " nm listed";
             string observed = seen.Count == 0 ? "no lines seen" : "lines seen at " + string.Join(", ", seen.Select(l => l.ToString("0.#", CultureInfo.InvariantCulture))) + " nm";
             acc.Say($"{observed}; {expected}");
         }
@@ -268,19 +281,11 @@ public static class EvidenceLikelihood
     private static void Colour(MaterialProfile profile, string colour, IReadOnlySet<string> seen, EvidenceAccumulator acc)
     {
         var m = profile.Material;
-        var match = ColourWords.Compare(seen, profile.Hues);
-        int n = Math.Max(1, m.Colours.Count);
-        const double elsewhere = 0.1 / 15; // a colour the catalogue does not list for it (bench colour words are loose)
-        double f = match switch
-        {
-            ColourMatch.Same => 0.8 / n + elsewhere,
-            ColourMatch.Neighbour => 0.1 / n + elsewhere,
-            _ => elsewhere,
-        };
-        if (m.Colours.Count == 0) f = 1 / 15.0;
-        acc.Add("colour", f, 1 / 15.0, f / (0.8 / n + elsewhere), robust: false);
+        double f = ColourWords.Probability(seen, profile.ColourHues);
+        double best = profile.ColourHues.Count == 0 ? f : ColourWords.Probability(new HashSet<string> { profile.ColourHues[0] }, profile.ColourHues);
+        acc.Add("colour", f, ColourWords.BroadProbability, Math.Min(1, f / best), robust: false, EvidenceAccumulator.ChromophoreGroup);
         if (acc.Explaining)
-            acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : string.Join(", ", m.Colours) + " usual")}");
+            acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : string.Join(", ", m.Colours) + " usual, most usual first")}");
     }
 
     /// <summary>Where a value lies against a range: "lies in 3.95–4.05" or "lies 0.12 below 3.95–4.05 (8σ)".</summary>

@@ -1,4 +1,6 @@
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Quantities;
 
 namespace GemIndex.Core.Identification;
 
@@ -13,6 +15,19 @@ public sealed class Identifier
     /// <summary>Below this fit the best candidate is not offered as an answer.</summary>
     public const double MinimumFit = 0.02;
 
+    /// <summary>
+    /// When even the best candidate fits worse than this, the catalogue's share is scaled by fit/0.05 and the rest moves to
+    /// "not in the catalogue": a poor best fit means the model itself is in doubt (a judgement; docs/ranking.md §3).
+    /// </summary>
+    public const double PoorFit = 0.05;
+
+    /// <summary>
+    /// Every log-likelihood ratio is divided by this before the posterior (one temperature for the whole model). Left at 1,
+    /// the untempered Bayes value, until it is fitted on the independent benchmark (docs/ranking.md §3); never fitted on
+    /// stones simulated from the catalogue.
+    /// </summary>
+    public const double Temperature = 1.0;
+
     private readonly Material[] _materials;
     private readonly MaterialProfile[] _profiles;
     private readonly double[] _logPriors;
@@ -24,11 +39,41 @@ public sealed class Identifier
     {
         if (catalogue.Count == 0) throw new ArgumentException("the catalogue has no materials", nameof(catalogue));
         _materials = [.. catalogue];
-        _profiles = [.. _materials.Select(m => new MaterialProfile(m))];
-        double total = _materials.Sum(m => BenchFrequencyWeights.Of(m.Frequency));
-        double inCatalogue = 1 - BroadDensities.NotInCataloguePrior;
-        _logPriors = [.. _materials.Select(m => Math.Log(inCatalogue * BenchFrequencyWeights.Of(m.Frequency) / total))];
+        _profiles = Profiles(_materials);
+        _logPriors = LogPriors(_materials);
         _logPriorNotInCatalogue = Math.Log(BroadDensities.NotInCataloguePrior);
+    }
+
+    /// <summary>
+    /// The prior sits on the species (its <see cref="Material.SpeciesFrequency"/> weight, the largest any of its entries
+    /// states), and is split among the species' entries by their <see cref="Material.Frequency"/> weights, so a species with
+    /// many varieties or origins gets no extra mass.
+    /// </summary>
+    private static double[] LogPriors(Material[] materials)
+    {
+        var species = materials.GroupBy(m => m.Species).ToDictionary(g => g.Key, g => (
+            Weight: g.Max(m => BenchFrequencyWeights.Of(m.SpeciesFrequency)),
+            Within: g.Sum(m => BenchFrequencyWeights.Of(m.Frequency))));
+        double total = species.Values.Sum(v => v.Weight);
+        double inCatalogue = 1 - BroadDensities.NotInCataloguePrior;
+        return [.. materials.Select(m =>
+        {
+            var s = species[m.Species];
+            return Math.Log(inCatalogue * s.Weight / total * BenchFrequencyWeights.Of(m.Frequency) / s.Within);
+        })];
+    }
+
+    /// <summary>Profiles of every entry; entries with the same optical data share one indicatrix prior, so a stone's series is scored once for them.</summary>
+    private static MaterialProfile[] Profiles(Material[] materials)
+    {
+        var shared = new Dictionary<(OpticalIndices, PropertyRange, OpticSign, MaterialForm), IndicatrixPrior>();
+        return [.. materials.Select(m =>
+        {
+            var birefringence = RefractometerEvidence.BirefringenceRange(m);
+            var key = (m.Indices, birefringence, m.Sign, m.Forms);
+            if (!shared.TryGetValue(key, out var prior)) shared[key] = prior = IndicatrixPrior.For(m, birefringence);
+            return new MaterialProfile(m, prior);
+        })];
     }
 
     /// <summary>
@@ -48,6 +93,46 @@ public sealed class Identifier
             if (end - start > 1) Array.Sort(order, start, end - start);
         }
         return order;
+    }
+
+    /// <summary>Moves mass to "not in the catalogue" when even the best candidate fits poorly (<see cref="PoorFit"/>).</summary>
+    private static double DiscountPoorFit(double[] posterior, double[] fits, double other)
+    {
+        int best = 0;
+        for (int i = 1; i < posterior.Length; i++) if (posterior[i] > posterior[best]) best = i;
+        double keep = Math.Min(1, fits[best] / PoorFit);
+        if (keep >= 1) return other;
+        double moved = 0;
+        for (int i = 0; i < posterior.Length; i++) { moved += posterior[i] * (1 - keep); posterior[i] *= keep; }
+        return other + moved;
+    }
+
+    /// <summary>
+    /// Entries ordered species first: species by their total, and within a species its entries by their own share, so a
+    /// species' entries follow its total. Ties keep the catalogue's order.
+    /// </summary>
+    private int[] SpeciesFirst(double[] posterior)
+    {
+        int[] byEntry = Ranked(posterior);
+        var totals = new Dictionary<string, double>();
+        foreach (int i in byEntry) totals[_materials[i].Species] = totals.GetValueOrDefault(_materials[i].Species) + posterior[i];
+        var speciesRank = totals.Keys.Select((name, index) => (name, index))
+            .OrderByDescending(x => totals[x.name]).ThenBy(x => x.index).Select((x, rank) => (x.name, rank)).ToDictionary(x => x.name, x => x.rank);
+        return [.. byEntry.Select((i, position) => (i, position)).OrderBy(x => speciesRank[_materials[x.i].Species]).ThenBy(x => x.position).Select(x => x.i)];
+    }
+
+    /// <summary>
+    /// For the leading species when its entries differ in origin or variety: the test not yet done that best tells its
+    /// entries apart (by the advisor, over the species' own entries), or null when none would.
+    /// </summary>
+    private NextTestAdvice? Separation(BenchSheet sheet, double[] posterior)
+    {
+        int best = 0;
+        for (int i = 1; i < posterior.Length; i++) if (posterior[i] > posterior[best]) best = i;
+        string species = _materials[best].Species;
+        var entries = Enumerable.Range(0, posterior.Length).Where(i => _materials[i].Species == species && posterior[i] > 1e-4)
+            .Select(i => (_materials[i], posterior[i])).ToList();
+        return entries.Count < 2 ? null : NextTestAdvisor.Advise(sheet, entries);
     }
 
     /// <summary>Posterior totals per species over the whole catalogue, best first; ties keep the catalogue's order.</summary>
@@ -75,6 +160,7 @@ public sealed class Identifier
     /// <param name="adviseNextTest">Whether to work out the next test (costs a little time).</param>
     public IdentificationResult Identify(BenchSheet sheet, int maximumCandidates = 10, int explainTop = 3, bool adviseNextTest = true)
     {
+        QuantityOutOfRangeException.ThrowIfOutside("number of candidates", maximumCandidates, 1, 1000);
         var analysed = new AnalysedSheet(sheet);
         int n = _materials.Length;
         var logPosterior = new double[n];
@@ -83,28 +169,30 @@ public sealed class Identifier
         for (int i = 0; i < n; i++)
         {
             var e = EvidenceLikelihood.Evaluate(_profiles[i], analysed);
-            logPosterior[i] = _logPriors[i] + e.LogLikelihood;
-            fits[i] = e.Fit;
             logOther = e.LogLikelihoodNotInCatalogue;
+            // Tempered: the ratio to "not in the catalogue" is divided by the temperature.
+            logPosterior[i] = _logPriors[i] + (e.LogLikelihood - logOther) / Temperature;
+            fits[i] = e.Fit;
             max = Math.Max(max, logPosterior[i]);
         }
-        logOther += _logPriorNotInCatalogue;
+        logOther = _logPriorNotInCatalogue;
         max = Math.Max(max, logOther);
         double sum = Math.Exp(logOther - max);
         var posterior = new double[n];
         for (int i = 0; i < n; i++) sum += posterior[i] = Math.Exp(logPosterior[i] - max);
         for (int i = 0; i < n; i++) posterior[i] /= sum;
         double other = Math.Exp(logOther - max) / sum;
+        other = DiscountPoorFit(posterior, fits, other);
 
-        int[] order = Ranked(posterior);
-        var candidates = order.Take(Math.Clamp(maximumCandidates, 1, 1000)).Select((i, rank) => new RankedCandidate
+        int[] order = SpeciesFirst(posterior);
+        var candidates = order.Take(maximumCandidates).Select((i, rank) => new RankedCandidate
         {
             Material = _materials[i],
             Confidence = posterior[i],
             Fit = fits[i],
             Reasons = rank < explainTop ? EvidenceLikelihood.Evaluate(_profiles[i], analysed, explain: true).Contributions : [],
         }).ToList();
-        var best = candidates[0];
+        var best = candidates.MaxBy(c => c.Confidence)!;
         bool noGoodMatch = best.Fit < MinimumFit || other > best.Confidence;
         var weighted = order.Where(i => posterior[i] >= 1e-3).Select(i => (_materials[i], posterior[i])).ToList();
         return new IdentificationResult
@@ -115,7 +203,7 @@ public sealed class Identifier
             NotInCatalogue = other,
             NoGoodMatch = noGoodMatch,
             NextTest = adviseNextTest ? NextTestAdvisor.Advise(sheet, weighted) : null,
-            Warnings = BenchWarnings.For(analysed, candidates, other, noGoodMatch),
+            Warnings = BenchWarnings.For(analysed, candidates, other, noGoodMatch, SpeciesTotals(posterior), Separation(sheet, posterior)),
             Series = analysed.Series,
         };
     }

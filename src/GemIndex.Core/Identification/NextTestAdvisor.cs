@@ -50,8 +50,8 @@ public static class NextTestAdvisor
         if (s.Polariscope is null) yield return ("polariscope", Polariscope);
         if (s.Pleochroism is null) yield return ("pleochroism", Pleochroism);
         if (s.Dispersion is null) yield return ("dispersion", Dispersion);
-        if (s.ThermalProbe is null) yield return ("thermal_probe", m => Binary(m.ThermalProbe == ThermalProbeResult.Positive ? 0.97 : 0.02));
-        if (s.Electrical is null) yield return ("electrical", m => Binary(m.Electrical == ElectricalResult.Conductive ? 0.9 : 0.03));
+        if (s.ThermalProbe is null) yield return ("thermal_probe", m => Binary(EvidenceLikelihood.ThermalPositive(m)));
+        if (s.Electrical is null) yield return ("electrical", m => Binary(EvidenceLikelihood.ElectricalConductive(m)));
         if (s.UvLong is null) yield return ("uv_long", m => Fluorescence(m.UvLong));
         if (s.UvShort is null) yield return ("uv_short", m => Fluorescence(m.UvShort));
         if (s.AbsorptionLinesNanometres is null) yield return ("absorption_nm", Absorption);
@@ -105,12 +105,14 @@ public static class NextTestAdvisor
     // The outcome tables below are the likelihood's own (EvidenceLikelihood), so advice and ranking never disagree.
     private static IEnumerable<(long, double)> Polariscope(Material m)
     {
+        if (m.IsOpaque) { for (int o = 0; o < 4; o++) yield return (o, 0.25); yield break; } // the test cannot be taken
         var usual = EvidenceLikelihood.UsualReactions(m);
         for (int o = 0; o < 4; o++) yield return (o, EvidenceLikelihood.PolariscopeProbability(usual, (PolariscopeReaction)o));
     }
 
-    private static IEnumerable<(long, double)> Pleochroism(Material m) =>
-        EvidenceLikelihood.PleochroismRow(m.OpticCharacter, m.Pleochroism).Select((p, o) => ((long)o, p));
+    private static IEnumerable<(long, double)> Pleochroism(Material m) => m.IsOpaque
+        ? Enumerable.Range(0, 3).Select(o => ((long)o, 1 / 3.0))
+        : EvidenceLikelihood.PleochroismRow(m.OpticCharacter, m.Pleochroism).Select((p, o) => ((long)o, p));
 
     private static IEnumerable<(long, double)> Dispersion(Material m) => m.Dispersion is { } d
         ? EvidenceLikelihood.DispersionRow(EvidenceLikelihood.DispersionBand(d)).Select((p, o) => ((long)o, p))
@@ -120,13 +122,8 @@ public static class NextTestAdvisor
         ? Enumerable.Range(0, 4).Select(o => ((long)o, 0.25))
         : Enumerable.Range(0, 4).Select(o => ((long)o, EvidenceLikelihood.FluorescenceProbability(usual, (FluorescenceStrength)o)));
 
-    private static IEnumerable<(long, double)> Absorption(Material m)
-    {
-        if (m.AbsorptionLinesNanometres.Count == 0) return [(0, 1.0)];
-        // Outcome: the material's own pattern (lines rounded to 10 nm) seen, or nothing seen.
-        long signature = m.AbsorptionLinesNanometres.Aggregate(17L, (h, l) => h * 31 + (long)Math.Round(l / 10));
-        return [(signature, 0.6), (0, 0.4)];
-    }
+    // Which listed lines are seen, each with its own detection probability from its strength (the likelihood's model).
+    private static IEnumerable<(long, double)> Absorption(Material m) => AbsorptionLines.Outcomes(m.AbsorptionLines);
 
     private static string Expected(string test, Material m) => test switch
     {

@@ -9,8 +9,9 @@ using GemIndex.Core.Readings;
 namespace GemIndex.Core.Identification;
 
 /// <summary>
-/// The refractometer's evidence for one material: the rotation series' interpretations (mixed by weight),
-/// a spot reading, and "over the limit" as a censored reading. Readings in light other than 589.3 nm are
+/// The refractometer's evidence for one material: the rotation series' raw readings by the section model
+/// (<see cref="SectionLikelihood"/>, hidden high edges censored inside it), a spot reading, and "over the limit" with no
+/// edge at all as a censored reading. Readings in light other than 589.3 nm are
 /// moved to 589.3 nm with the material's own dispersion (two-term Cauchy through n and nG − nB).
 /// </summary>
 internal static class RefractometerEvidence
@@ -21,23 +22,27 @@ internal static class RefractometerEvidence
     /// <summary>Birefringence an aggregate can show as a faint second edge.</summary>
     private const double AggregateBirefringence = 0.006;
 
-    // Uniaxial readings from a biaxial stone need a facet near a principal section; both edges moving cannot come from
-    // a uniaxial stone except by misreading. Judgements (docs/ranking.md).
-    private const double BiaxialLooksUniaxial = 0.1;
-    private const double UniaxialLooksBiaxial = 0.02;
-    private const double SignMisread = 0.05;
+    /// <summary>
+    /// P(a series with two sharp edges | a material met only as an aggregate): an aggregate gives one vague, averaged
+    /// edge; two sharp edges need a single crystal, so only a misidentified form or a rare crystal explains them (a
+    /// judgement; docs/ranking.md §1, form term).
+    /// </summary>
+    internal const double AggregateShowsTwoEdges = 0.02;
 
-    // "Not in the catalogue": uniaxial and biaxial equally likely, either sign.
-    private const double CharacterBroad = 0.25;
+    /// <summary>The cheap screen's width, in standard deviations of a reading with its offset and soft edges (DOMAIN.md §6b: 4σ).</summary>
+    internal const double ScreenSigmas = 4;
+
+    private readonly record struct Part(double Likelihood, double Broad, double Tail, string Text);
 
     public static void Add(MaterialProfile profile, AnalysedSheet sheet, EvidenceAccumulator acc)
     {
         if (sheet.Sheet.Refractometer is not { } r) return;
         var m = profile.Material;
         double shift = WavelengthShift(m, r.LightNanometres, out double shiftSigma);
-        if (sheet.Series is { } series) Series(profile, series, r, shift, shiftSigma, acc);
+        if (sheet.Observation is { } series) Series(profile, sheet, series, shift, shiftSigma, acc);
         if (r.Spot is { } spot) Spot(m, spot, r.ReadingPrecision, shift, shiftSigma, acc);
-        if (r.OverLimit) OverLimit(m, r, hasReadings: sheet.Series is not null || r.Spot is not null, acc);
+        // With a series, an edge hidden above the liquid is censored within the section model itself.
+        if (r.OverLimit && sheet.Observation is null) OverLimit(m, r, hasReadings: r.Spot is not null, acc);
     }
 
     /// <summary>n(589.3) − n(λ) for the material, by the two-term Cauchy model through its n and nG − nB.</summary>
@@ -52,116 +57,56 @@ internal static class RefractometerEvidence
         return shift;
     }
 
-    private static void Series(MaterialProfile profile, RotationSeriesResult series, RefractometerObservation r, double shift, double shiftSigma, EvidenceAccumulator acc)
+    /// <summary>
+    /// The rotation series by the section model: ln p(raw readings | m) against the same under "not in the catalogue"
+    /// (<see cref="SectionLikelihood"/>), after a cheap screen that leaves out materials no orientation can fit: the lowest
+    /// reading at least the lowest index − 6σ, the highest at most the highest index + 6σ, the widest step at most the
+    /// birefringence + 6σ (σ with the offset, the soft edges and the light's correction). A screened-out material gets
+    /// no likelihood of its own; the robust mixture leaves it the misreading share of the broad one.
+    /// </summary>
+    private static void Series(MaterialProfile profile, AnalysedSheet sheet, SeriesObservation series, double shift, double shiftSigma, EvidenceAccumulator acc)
     {
         var m = profile.Material;
-        double f = 0, g = 0, bestWeighted = -1, bestTail = 1;
-        PartSet best = default;
-        SeriesInterpretation? bestInterpretation = null;
-        var interpretations = series.Interpretations;
-        for (int i = 0; i < interpretations.Count; i++)
-        {
-            var h = interpretations[i];
-            var parts = Parts(m, profile.Birefringence, h, r.ReadingPrecision, shift, shiftSigma, acc.Explaining, out double factor, out double broadFactor);
-            double fh = factor * parts.Likelihood, gh = broadFactor * parts.Broad;
-            f += h.Weight * fh;
-            g += h.Weight * gh;
-            if (h.Weight * fh > bestWeighted)
-            {
-                bestWeighted = h.Weight * fh;
-                best = parts;
-                bestInterpretation = h;
-                bestTail = factor >= 0.5 ? 1 : factor * 2;
-            }
-        }
-        acc.Add("refractometer", f, g, bestTail * best.Tail, robust: true);
-        if (acc.Explaining && bestInterpretation is not null)
-            acc.Say($"{bestInterpretation.Description}; " + string.Join("; ", best.Texts) + Character(m, bestInterpretation));
+        var prior = profile.Prior;
+        double broad = sheet.BroadSeriesLogLikelihood;
+        SectionLikelihood.Outcome outcome = Screened(prior, series, shift, shiftSigma)
+            ? new(double.NegativeInfinity, 0)
+            : shiftSigma == 0 && shift == 0
+                ? sheet.SeriesOutcome(prior, () => SectionLikelihood.Evaluate(prior, series, 0, 0))
+                : SectionLikelihood.Evaluate(prior, series, shift, shiftSigma);
+        double form = FormFactor(m, series);
+        acc.AddLog("refractometer", outcome.LogLikelihood + Math.Log(form), broad, outcome.Tail * Math.Min(1, 2 * form), robust: true);
+        if (acc.Explaining)
+            acc.Say(SeriesText(m, sheet, outcome, form));
     }
 
-    private static string Character(Material m, SeriesInterpretation h)
+    /// <summary>True when no orientation of the material can give these readings (the cheap bounds of DOMAIN.md §6b).</summary>
+    internal static bool Screened(IndicatrixPrior prior, SeriesObservation series, double shift, double shiftSigma)
     {
-        if (h.Character is not { } c || c == OpticCharacter.Isotropic) return "";
-        string expected = m.OpticCharacter.ToString().ToLowerInvariant();
-        string sign = m.Sign is OpticSign.None ? "" : " " + m.Sign.ToString().ToLowerInvariant();
-        return c == m.OpticCharacter && (h.Sign == OpticSign.None || m.Sign == OpticSign.Either || h.Sign == m.Sign)
-            ? $"; {expected}{sign} as expected"
-            : $"; {expected}{sign} expected";
+        double sigma = Math.Sqrt(series.NoiseVariance + SectionLikelihood.OffsetVariance(series, shiftSigma));
+        double tolerance = ScreenSigmas * sigma;
+        return series.LowestReading + shift < prior.LowestIndex - tolerance
+               || series.HighestReading + shift > prior.HighestIndex + tolerance
+               || series.LargestSeparation > prior.LargestBirefringence + ScreenSigmas * Math.Sqrt(2 * series.NoiseVariance);
     }
 
-    private readonly record struct Part(double Likelihood, double Broad, double Tail, string Text);
-
-    /// <summary>Two or three parts of one interpretation's evidence, without a heap allocation per material.</summary>
-    private readonly struct PartSet
+    /// <summary>
+    /// The form term: a series with two sharp edges comes from a single crystal, so it is strong evidence against a material
+    /// met only as an aggregate (<see cref="AggregateShowsTwoEdges"/>); a series of single edges fits both.
+    /// </summary>
+    internal static double FormFactor(Material m, SeriesObservation series)
     {
-        private readonly Part _a, _b, _c;
-        private readonly bool _three;
-
-        public PartSet(Part a, Part b) => (_a, _b) = (a, b);
-
-        public PartSet(Part a, Part b, Part c) => (_a, _b, _c, _three) = (a, b, c, true);
-
-        public double Likelihood => _a.Likelihood * _b.Likelihood * (_three ? _c.Likelihood : 1);
-
-        public double Broad => _a.Broad * _b.Broad * (_three ? _c.Broad : 1);
-
-        public double Tail => _a.Tail * _b.Tail * (_three ? _c.Tail : 1);
-
-        public IEnumerable<string> Texts => _three ? [_a.Text, _b.Text, _c.Text] : [_a.Text, _b.Text];
+        bool aggregateOnly = (m.Forms & MaterialForm.Aggregate) != 0 && (m.Forms & MaterialForm.Crystal) == 0;
+        return aggregateOnly && series.LargestSeparation > 0 ? AggregateShowsTwoEdges : 1;
     }
 
-    private static PartSet Parts(Material m, PropertyRange birefringence, SeriesInterpretation h, double sigma, double shift, double shiftSigma, bool words, out double factor, out double broadFactor)
+    private static string SeriesText(Material m, AnalysedSheet sheet, SectionLikelihood.Outcome outcome, double form)
     {
-        var indices = m.Indices;
-        factor = 1;
-        broadFactor = 1;
-        if (h.Character is null)
-        {
-            // Too few steps: each edge lies between the lowest and highest index, and the edges' separation is at most the birefringence.
-            var span = new PropertyRange(indices.Lowest.Minimum, indices.Highest.Maximum);
-            return new(Index("low edge", h.Lowest.Value, h.Lowest.StandardUncertainty, span, shift, shiftSigma, words),
-                    Index("high edge", h.Highest.Value, h.Highest.StandardUncertainty, span, shift, shiftSigma, words),
-                    Birefringence(h.Birefringence.Value, h.Birefringence.StandardUncertainty, new PropertyRange(0, birefringence.Maximum), "at most", words));
-        }
-        if (h.Character == OpticCharacter.Isotropic)
-        {
-            var span = new PropertyRange(indices.Lowest.Minimum, indices.Highest.Maximum);
-            double band = RotationSeriesAnalysis.ConstantBandSigmas * sigma;
-            double noSecondEdge = RangeLikelihood.ProbabilityBelow(band, birefringence, h.Birefringence.StandardUncertainty);
-            double tail = birefringence.Minimum <= band ? 1 : RangeLikelihood.TwoSidedTail((birefringence.Minimum - band) / h.Birefringence.StandardUncertainty);
-            return new(Index("n", h.Lowest.Value, h.Lowest.StandardUncertainty, span, shift, shiftSigma, words),
-                    new Part(noSecondEdge, BroadDensities.SingleEdge, tail, !words ? "" :
-                        birefringence.Maximum <= band ? "no second edge, as expected" : $"no second edge where birefringence {birefringence.ToString("0.000")} is expected"));
-        }
-        broadFactor = CharacterBroad;
-        var bire = Birefringence(h.Birefringence.Value, h.Birefringence.StandardUncertainty,
-            new PropertyRange(birefringence.Minimum * (1 - h.SamplingShortfall), birefringence.Maximum), "expected", words);
-        if (h.Character == OpticCharacter.Uniaxial)
-        {
-            if (m.OpticCharacter == OpticCharacter.Uniaxial)
-            {
-                factor = m.Sign == OpticSign.Either ? 0.5 : h.Sign == m.Sign ? 1 - SignMisread : SignMisread;
-                return new(Index("ω", h.Constant!.Value.Value, h.Constant.Value.StandardUncertainty, indices.Omega!.Value, shift, shiftSigma, words), bire);
-            }
-            if (m.OpticCharacter == OpticCharacter.Biaxial)
-            {
-                // A biaxial stone whose β lies within the constant band of α (or of γ) shows that edge constant on every
-                // facet: it looks uniaxial by nature, not by a rare orientation.
-                double band = RotationSeriesAnalysis.ConstantBandSigmas * sigma;
-                double gap = h.Sign == OpticSign.Negative
-                    ? indices.Gamma!.Value.Centre - indices.Beta!.Value.Centre
-                    : indices.Beta!.Value.Centre - indices.Alpha!.Value.Centre;
-                factor = gap <= band ? 1 : BiaxialLooksUniaxial;
-            }
-            var constantRange = h.Sign == OpticSign.Negative ? indices.Highest : indices.Lowest;
-            return new(Index(h.Sign == OpticSign.Negative ? "highest index" : "lowest index", h.Constant!.Value.Value, h.Constant.Value.StandardUncertainty, constantRange, shift, shiftSigma, words), bire);
-        }
-        // Biaxial readings.
-        if (m.OpticCharacter == OpticCharacter.Biaxial)
-            return new(Index("α", h.Lowest.Value, h.Lowest.StandardUncertainty, indices.Alpha!.Value, shift, shiftSigma, words),
-                    Index("β", h.Beta!.Value.Value, h.Beta.Value.StandardUncertainty, indices.Beta!.Value, shift, shiftSigma, words), bire);
-        if (m.OpticCharacter == OpticCharacter.Uniaxial) factor = UniaxialLooksBiaxial;
-        return new(Index("lowest index", h.Lowest.Value, h.Lowest.StandardUncertainty, indices.Lowest, shift, shiftSigma, words), bire);
+        string expected = string.Join(", ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString("0.000")}"));
+        string summary = sheet.Series?.Interpretations.FirstOrDefault()?.Description ?? "rotation series";
+        string verdict = double.IsNegativeInfinity(outcome.LogLikelihood) ? "no orientation of it can give these readings"
+            : outcome.Tail >= 0.05 ? "an orientation of it gives these readings" : "its best orientation fits these readings poorly";
+        return $"{summary}; {verdict} ({expected})" + (form < 1 ? "; two sharp edges come from a single crystal, and it is met only as an aggregate" : "");
     }
 
     private static Part Index(string symbol, double observed, double sigma, PropertyRange range, double shift, double shiftSigma, bool words)
@@ -171,15 +116,6 @@ internal static class RefractometerEvidence
         double z = RangeLikelihood.StandardDeviationsOutside(x, range, s);
         return new Part(RangeLikelihood.Density(x, range, s), BroadDensities.Index, RangeLikelihood.TwoSidedTail(z), !words ? "" :
             $"{symbol} {x.ToString("0.000", CultureInfo.InvariantCulture)} {EvidenceLikelihood.Where(x, range, s, "0.000")}");
-    }
-
-    private static Part Birefringence(double observed, double sigma, PropertyRange range, string how, bool words)
-    {
-        double z = RangeLikelihood.StandardDeviationsOutside(observed, range, sigma);
-        string text = !words ? "" : range.Contains(observed) || z < 2
-            ? $"birefringence {observed.ToString("0.000", CultureInfo.InvariantCulture)}, {how} {range.ToString("0.000")}"
-            : $"birefringence {observed.ToString("0.000", CultureInfo.InvariantCulture)} where {range.ToString("0.000")} is expected";
-        return new Part(RangeLikelihood.Density(observed, range, sigma), BroadDensities.Birefringence, RangeLikelihood.TwoSidedTail(z), text);
     }
 
     /// <summary>The material's birefringence range; derived from its index ranges where the catalogue gives none.</summary>
@@ -200,7 +136,8 @@ internal static class RefractometerEvidence
         // A spot reading on a doubly refractive stone averages its edges: anywhere from the lowest to the highest index.
         var span = new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum);
         var part = Index("spot reading", spot, sigma, span, shift, shiftSigma, acc.Explaining);
-        acc.Add("refractometer", part.Likelihood, part.Broad, part.Tail, robust: true);
+        int group = (m.Forms & MaterialForm.Aggregate) != 0 ? EvidenceAccumulator.AggregateGroup : EvidenceAccumulator.Independent;
+        acc.Add("refractometer", part.Likelihood, part.Broad, part.Tail, robust: true, group);
         if (acc.Explaining) acc.Say(part.Text);
     }
 

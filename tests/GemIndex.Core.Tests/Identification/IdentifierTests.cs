@@ -173,13 +173,18 @@ public class IdentifierTests
     public void A_biaxial_stone_with_beta_near_alpha_is_not_penalised_for_looking_uniaxial()
     {
         // Topaz is biaxial + with β only about 0.003 above α (from memory), so its low edge stays within the constant band
-        // on every facet. A uniaxial decoy with the same ranges (invented for this test) must not win ten to one.
+        // on every facet. A uniaxial decoy with the same ranges (invented for this test) must not win ten to one. Under these
+        // ranges topaz's β − α may be anything from 0 to the birefringence, and only the part of that with β near α fits a
+        // low edge that moves by at most 0.001, so odds of about one to three are the honest answer; neither may fall below
+        // one in ten.
         var topaz = Make("topaz", "topaz", OpticalIndices.Biaxial(new(1.610, 1.620), new(1.613, 1.623), new(1.620, 1.630)), 3.53, 3.57,
             OpticSign.Positive, new(0.008, 0.010));
         var decoy = Make("decoy", "decoy", OpticalIndices.Uniaxial(new(1.610, 1.620), new(1.620, 1.630)), 3.53, 3.57, OpticSign.Positive, new(0.008, 0.010));
         var sheet = new BenchSheet { Refractometer = Facet((0, 1.615, 1.624), (45, 1.616, 1.622), (90, 1.616, 1.619), (135, 1.615, 1.621)) };
         var result = new Identifier([topaz, decoy]).Identify(sheet);
         double topazShare = result.Candidates.Single(c => c.Material.Name == "topaz").Confidence;
-        Assert.InRange(topazShare, 0.4, 0.6);
+        double decoyShare = result.Candidates.Single(c => c.Material.Name == "decoy").Confidence;
+        Assert.True(topazShare >= 0.1, $"topaz {topazShare:0.00}");
+        Assert.True(decoyShare >= 0.1, $"decoy {decoyShare:0.00}");
     }
 }

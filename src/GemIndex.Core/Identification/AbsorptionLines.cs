@@ -1,0 +1,99 @@
+using GemIndex.Core.Catalogue;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>
+/// The likelihood of the lines seen in a hand spectroscope under a material's listed lines (docs/ranking.md §2): each
+/// listed line is seen with a probability set by its strength, at its wavelength with the instrument's error; a seen
+/// line no listed line explains is spurious (a Poisson rate of stray lines, anywhere in the visible). Seen lines are
+/// paired with listed ones greedily, nearest first, within four standard deviations.
+/// </summary>
+internal static class AbsorptionLines
+{
+    /// <summary>A hand spectroscope's error on a line's position, about 2 nm (its resolution; common practice).</summary>
+    public const double PositionSigmaNanometres = 2;
+
+    /// <summary>Mean number of stray lines a reading shows on a stone that has none listed (a judgement: faint bands, mis-seen Fraunhofer lines).</summary>
+    public const double SpuriousLineRate = 0.1;
+
+    /// <summary>"Not in the catalogue": lines anywhere in 400–700 nm, one a stone on average (a judgement).</summary>
+    public const double BroadLineRate = 1;
+
+    /// <summary>The visible span a line may be seen in, nm.</summary>
+    private const double VisibleSpanNanometres = 300;
+
+    /// <summary>P(a listed line is seen | its strength): strong 0.95, moderate 0.7, weak 0.3 (judgements; docs/ranking.md §2).</summary>
+    public static double Detection(LineStrength strength) => strength switch
+    {
+        LineStrength.Strong => 0.95,
+        LineStrength.Moderate => 0.7,
+        _ => 0.3,
+    };
+
+    /// <summary>ln p(seen lines | listed lines); counts the seen lines left unexplained and the strong lines missed.</summary>
+    public static double LogLikelihood(IReadOnlyList<AbsorptionLine> listed, IReadOnlyList<double> seen, out int unexplained, out int missedStrong)
+    {
+        var matched = Pair(listed, seen);
+        double log = -SpuriousLineRate;
+        missedStrong = 0;
+        unexplained = seen.Count;
+        for (int i = 0; i < listed.Count; i++)
+        {
+            double d = Detection(listed[i].Strength);
+            if (matched[i] is { } x)
+            {
+                unexplained--;
+                double z = (x - listed[i].Nanometres) / PositionSigmaNanometres;
+                log += Math.Log(d) - 0.5 * z * z - Math.Log(PositionSigmaNanometres * Math.Sqrt(2 * Math.PI));
+            }
+            else
+            {
+                log += Math.Log(1 - d);
+                if (listed[i].Strength == LineStrength.Strong) missedStrong++;
+            }
+        }
+        return log + unexplained * Math.Log(SpuriousLineRate / VisibleSpanNanometres);
+    }
+
+    /// <summary>ln p(seen lines | not in the catalogue): Poisson count, uniform positions.</summary>
+    public static double LogBroad(IReadOnlyList<double> seen) => -BroadLineRate + seen.Count * Math.Log(BroadLineRate / VisibleSpanNanometres);
+
+    /// <summary>For each listed line, the seen line paired with it (nearest pairs first, within 4σ), or null.</summary>
+    private static double?[] Pair(IReadOnlyList<AbsorptionLine> listed, IReadOnlyList<double> seen)
+    {
+        var result = new double?[listed.Count];
+        var used = new bool[seen.Count];
+        var pairs = new List<(double Distance, int Listed, int Seen)>();
+        for (int i = 0; i < listed.Count; i++)
+            for (int j = 0; j < seen.Count; j++)
+            {
+                double distance = Math.Abs(listed[i].Nanometres - seen[j]);
+                if (distance <= 4 * PositionSigmaNanometres) pairs.Add((distance, i, j));
+            }
+        foreach (var (_, i, j) in pairs.OrderBy(p => p.Distance))
+            if (result[i] is null && !used[j]) { result[i] = seen[j]; used[j] = true; }
+        return result;
+    }
+
+    /// <summary>
+    /// The outcomes a look through the spectroscope can have for this material and their probabilities, for the next-test
+    /// advice: which listed lines are seen (wavelengths rounded to 5 nm, so materials sharing a line share the outcome).
+    /// </summary>
+    public static IEnumerable<(long Outcome, double Probability)> Outcomes(IReadOnlyList<AbsorptionLine> listed)
+    {
+        int n = Math.Min(listed.Count, 10);
+        for (int mask = 0; mask < 1 << n; mask++)
+        {
+            double p = 1;
+            long key = 17;
+            for (int i = 0; i < n; i++)
+            {
+                double d = Detection(listed[i].Strength);
+                bool seen = (mask & (1 << i)) != 0;
+                p *= seen ? d : 1 - d;
+                if (seen) key = key * 131 + (long)Math.Round(listed[i].Nanometres / 5);
+            }
+            yield return (key, p);
+        }
+    }
+}

@@ -1,0 +1,379 @@
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Readings;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>
+/// Laplace's method around the best points of the coarse set (docs/ranking.md §1): from each, Newton's method climbs the
+/// log-integrand over the facet orientation (three angles; two for a uniaxial material, whose indicatrix is round about
+/// its optic axis) and the shape (birefringence, β − α, where the catalogue lets them vary), and the integral over that
+/// peak is exp(ℓ*) (2π)^(d/2) |−H|^(−1/2). Distinct peaks (different predicted series) are added; the same peak reached
+/// twice counts once. Derivatives by central differences.
+/// </summary>
+internal static class SectionRefinement
+{
+    /// <summary>How many of the coarse set's best points are climbed from (a judgement between speed and finding every peak).</summary>
+    public const int Starts = 4;
+
+    /// <summary>Newton steps at most from each start.</summary>
+    private const int Iterations = 6;
+
+    /// <summary>A start this far (in ln) below the best cannot add a peak that matters.</summary>
+    private const double Negligible = 12;
+
+    /// <summary>Shape parameters are moved in units of 0.001 so that all coordinates have similar curvature.</summary>
+    private const double ShapeUnit = 0.001;
+
+    /// <summary>A coarse point to climb from.</summary>
+    internal readonly record struct Start(int Point, int Shape, double Value);
+
+    /// <summary>Keeps the best <see cref="Starts"/> points (by value), in place.</summary>
+    public static void Keep(Start[] best, Start candidate)
+    {
+        int worst = 0;
+        for (int i = 0; i < best.Length; i++)
+        {
+            if (best[i].Value < best[worst].Value) worst = i;
+        }
+        if (candidate.Value > best[worst].Value) best[worst] = candidate;
+    }
+
+    /// <summary>ln of the sum of the Laplace integrals of the distinct peaks reached from <paramref name="starts"/>.</summary>
+    public static double LogIntegral(IndicatrixPrior prior, SeriesObservation series, double shift, double offsetVariance, bool[]? nearLimit,
+        Start[] starts, out double tail)
+    {
+        tail = 0;
+        var peaks = new List<(int Group, double[] Edges)>();
+        var total = new SectionLikelihood.LogSum();
+        double top = starts.Max(s => s.Value);
+        foreach (var start in starts.Where(s => s.Value > top - Negligible).OrderByDescending(s => s.Value))
+        {
+            var shape = prior.Shapes[start.Shape];
+            if (shape.Group < 0) continue;
+            var problem = new Peak(prior, series, shift, offsetVariance, nearLimit, shape, FacetOrientationSet.Points[start.Point]);
+            if (!problem.Climb(out double logValue, out double peakTail, out double[] edges)) continue;
+            if (peaks.Any(p => p.Group == shape.Group && Same(p.Edges, edges))) continue;
+            peaks.Add((shape.Group, edges));
+            total.Include(logValue);
+            tail = Math.Max(tail, peakTail);
+        }
+        return total.Log;
+    }
+
+    private static bool Same(double[] a, double[] b)
+    {
+        for (int i = 0; i < a.Length; i++) if (Math.Abs(a[i] - b[i]) > 3e-4) return false;
+        return true;
+    }
+
+    /// <summary>One climb: the log-integrand as a function of the free coordinates, and Newton's method on it.</summary>
+    private sealed class Peak
+    {
+        private readonly IndicatrixPrior _prior;
+        private readonly SeriesObservation _series;
+        private readonly double _shift, _offsetVariance;
+        private readonly bool[]? _nearLimit;
+        private readonly IndicatrixPrior.Family _family;
+        private readonly int _group;
+        private readonly bool _biaxial, _freeBirefringence, _freeBeta;
+        private readonly FacetOrientation _origin;
+        private readonly double[] _edges;
+        private readonly double[] _x;
+        private readonly IndicatrixPrior.Shape[] _one = new IndicatrixPrior.Shape[1];
+
+        public Peak(IndicatrixPrior prior, SeriesObservation series, double shift, double offsetVariance, bool[]? nearLimit,
+            IndicatrixPrior.Shape shape, FacetOrientation origin)
+        {
+            (_prior, _series, _shift, _offsetVariance, _nearLimit, _origin) = (prior, series, shift, offsetVariance, nearLimit, origin);
+            _group = shape.Group;
+            _family = prior.Families[_group];
+            _biaxial = _family.Biaxial;
+            _freeBirefringence = _family.BirefringenceHigh - _family.BirefringenceLow >= IndicatrixPrior.NarrowBox;
+            var (uLow, uHigh) = _biaxial ? IndicatrixPrior.BetaBox(_family, shape.Birefringence) : (0, 0);
+            _freeBeta = _biaxial && uHigh - uLow >= IndicatrixPrior.NarrowBox;
+            _edges = new double[series.Count * 2];
+            var x = new List<double>();
+            if (_biaxial) x.AddRange([0, 0, 0]);
+            else x.AddRange(UniaxialStart(origin));
+            if (_freeBirefringence) x.Add(shape.Birefringence / ShapeUnit);
+            if (_freeBeta) x.Add(shape.BetaAboveAlpha / ShapeUnit);
+            _x = [.. x];
+            _fixedBirefringence = shape.Birefringence;
+            _fixedBeta = shape.BetaAboveAlpha;
+        }
+
+        private readonly double _fixedBirefringence, _fixedBeta;
+
+        /// <summary>
+        /// A uniaxial indicatrix is round about z, so only the polar angle θ of N and the start ψ0 measured from the
+        /// optic axis' projection matter; with N = (sin θ, 0, cos θ), u = (cos θ, 0, −sin θ), v = N × u = (0, 1, 0).
+        /// A start of the other sense is its mirror image in the y axis: ψ0 → −ψ0.
+        /// </summary>
+        private static double[] UniaxialStart(FacetOrientation o)
+        {
+            var n = o.Normal;
+            double theta = Math.Acos(Math.Min(1, Math.Abs(n.Z)));
+            double azimuth = Math.Atan2(n.Y, n.X);
+            double s0x = o.CosStart * o.U.X + o.SinStart * o.V.X, s0y = o.CosStart * o.U.Y + o.SinStart * o.V.Y, s0z = o.CosStart * o.U.Z + o.SinStart * o.V.Z;
+            // Rotate about z by −azimuth so that N lies in the xz plane.
+            double rx = Math.Cos(azimuth) * s0x + Math.Sin(azimuth) * s0y, ry = -Math.Sin(azimuth) * s0x + Math.Cos(azimuth) * s0y;
+            double e1 = rx * Math.Cos(theta) - s0z * Math.Sin(theta); // the octant's normals have z ≥ 0
+            double psi = Math.Atan2(ry, e1);
+            return [theta, o.Sense > 0 ? psi : -psi];
+        }
+
+        /// <summary>The log-integrand at <paramref name="x"/> (−∞ outside the prior's box), and the centred residuals in σ.</summary>
+        private double Value(double[] x, bool final, out double tail, double[] residuals, out int count)
+        {
+            tail = 0;
+            count = 0;
+            int i = _biaxial ? 3 : 2;
+            double b = _freeBirefringence ? x[i++] * ShapeUnit : _fixedBirefringence;
+            double u = _freeBeta ? x[i] * ShapeUnit : _fixedBeta;
+            if (IndicatrixPrior.ShapeAt(_family, _group, b, u) is not { } shape || !(shape.Weight > 0)) return double.NegativeInfinity;
+            _one[0] = shape;
+            var (orientation, logDensity) = Orientation(x);
+            SectionLikelihood.SectionEdges(orientation, _one, _series, _edges);
+            var fit = SectionLikelihood.Integrate(_edges, 0, 1, _series, _series.NoiseVariance, _offsetVariance, _shift, _nearLimit, shape,
+                _prior.LevelDensity, withTail: final, residuals: residuals);
+            tail = fit.Tail;
+            count = fit.Readings;
+            double scale = 1 / Math.Sqrt(_series.NoiseVariance);
+            for (int k = 0; k < count; k++) residuals[k] *= scale;
+            return fit.LogValue + Math.Log(shape.Weight) + logDensity;
+        }
+
+        /// <summary>The orientation at x and the log of its density (uniform over the octant, the start and the sense: 1/π²).</summary>
+        private (FacetOrientation, double) Orientation(double[] x)
+        {
+            if (!_biaxial)
+            {
+                double theta = x[0], psi = x[1];
+                var n = new Direction(Math.Sin(theta), 0, Math.Cos(theta));
+                var u = new Direction(Math.Cos(theta), 0, -Math.Sin(theta));
+                // Density of (θ, ψ0): sin θ over θ in [0°, 90°], times 1/π over ψ0.
+                return (new FacetOrientation(n, u, Direction.AlongY, Math.Cos(psi), Math.Sin(psi), 1), Math.Log(Math.Abs(Math.Sin(theta)) + 1e-300) - Math.Log(Math.PI));
+            }
+            double a = x[0], c = x[1], delta = x[2];
+            var o = _origin;
+            var normal = new Direction(o.Normal.X + a * o.U.X + c * o.V.X, o.Normal.Y + a * o.U.Y + c * o.V.Y, o.Normal.Z + a * o.U.Z + c * o.V.Z);
+            double along = o.U.Dot(normal);
+            var travel = new Direction(o.U.X - along * normal.X, o.U.Y - along * normal.Y, o.U.Z - along * normal.Z);
+            var v = Direction.Cross(normal, travel);
+            double start = Math.Atan2(o.SinStart, o.CosStart) + delta;
+            // The tangent-plane chart N = (N0 + a·u + c·v)/|…| has area element (1 + a² + c²)^(−3/2) da dc.
+            return (new FacetOrientation(normal, travel, v, Math.Cos(start), Math.Sin(start), o.Sense),
+                -2 * Math.Log(Math.PI) - 1.5 * Math.Log(1 + a * a + c * c));
+        }
+
+        /// <summary>
+        /// Levenberg–Marquardt on the residuals (Gauss–Newton with a damping that shrinks on success), then Laplace's
+        /// method with the full curvature of the log-integrand at the peak (central differences).
+        /// </summary>
+        public bool Climb(out double logIntegral, out double tail, out double[] edges)
+        {
+            logIntegral = double.NegativeInfinity;
+            edges = [];
+            int d = _x.Length, m = 2 * _series.Count;
+            double[] x = [.. _x], r = new double[m], trialResiduals = new double[m], column = new double[m];
+            double value = Value(x, false, out tail, r, out int count);
+            if (!double.IsFinite(value)) return false;
+            var jacobian = new double[m, d];
+            var curvature = new double[d, d];
+            double damping = 1e-3;
+            for (int iteration = 0; iteration < Iterations; iteration++)
+            {
+                if (!Jacobian(x, r, count, jacobian, column)) return false;
+                var (gradient, normal) = NormalEquations(jacobian, r, count, d, curvature);
+                bool moved = false;
+                double[] step = [];
+                for (int attempt = 0; attempt < 4 && !moved; attempt++)
+                {
+                    step = Solve(normal, gradient, damping) ?? new double[d];
+                    Limit(step);
+                    double[] trial = [.. x.Select((xi, i) => xi + step[i])];
+                    double v = Value(trial, false, out _, trialResiduals, out int trialCount);
+                    if (v > value)
+                    {
+                        (x, value, count, moved) = (trial, v, trialCount, true);
+                        Array.Copy(trialResiduals, r, m);
+                        damping = Math.Max(damping / 4, 1e-6);
+                    }
+                    else damping *= 8;
+                }
+                if (!moved || step.Max(Math.Abs) < 1e-4) break;
+            }
+            // The peak's width from the full curvature of the log-integrand (level density, edge-count factors and the prior
+            // included); the Gauss–Newton curvature stands in when that is not negative definite.
+            double logDeterminant = LogDeterminant(Bounded(FullCurvature(x, value, r), x));
+            if (!double.IsFinite(logDeterminant))
+            {
+                if (!Jacobian(x, r, count, jacobian, column)) return false;
+                NormalEquations(jacobian, r, count, d, curvature);
+                logDeterminant = LogDeterminant(Bounded(curvature, x));
+            }
+            if (!double.IsFinite(logDeterminant)) return false;
+            value = Value(x, true, out tail, r, out _);
+            int shapeDimensions = (_freeBirefringence ? 1 : 0) + (_freeBeta ? 1 : 0);
+            logIntegral = value + d / 2.0 * Math.Log(2 * Math.PI) - logDeterminant / 2 + shapeDimensions * Math.Log(ShapeUnit);
+            edges = [.. _edges];
+            return true;
+        }
+
+        /// <summary>
+        /// Adds to each coordinate's curvature 2π/range², so that no direction is wider than its whole range: along a flat
+        /// direction (a biaxial shape with β at α is round about an axis) the Gaussian would otherwise claim far more than
+        /// the parameter's domain. The orientation angles' range is taken as π; the shape's, its box.
+        /// </summary>
+        private double[,] Bounded(double[,] curvature, double[] x)
+        {
+            int d = x.Length, angles = _biaxial ? 3 : 2;
+            for (int i = 0; i < d; i++)
+            {
+                double range = i < angles ? Math.PI
+                    : i == angles && _freeBirefringence ? (_family.BirefringenceHigh - _family.BirefringenceLow) / ShapeUnit
+                    : BetaWidth(x) / ShapeUnit;
+                curvature[i, i] += 2 * Math.PI / Math.Max(range * range, 1e-12);
+            }
+            return curvature;
+        }
+
+        private double BetaWidth(double[] x)
+        {
+            double b = _freeBirefringence ? x[3] * ShapeUnit : _fixedBirefringence;
+            var (low, high) = IndicatrixPrior.BetaBox(_family, b);
+            return high - low;
+        }
+
+        /// <summary>−∂²ℓ/∂x² by central differences of the log-integrand itself.</summary>
+        private double[,] FullCurvature(double[] x, double centre, double[] scratch)
+        {
+            int d = x.Length, angles = _biaxial ? 3 : 2;
+            var h = new double[d];
+            for (int i = 0; i < d; i++) h[i] = i < angles ? 0.004 : 0.05;
+            double[] y = [.. x];
+            double F(int i, double di, int j, double dj)
+            {
+                Array.Copy(x, y, d);
+                y[i] += di;
+                y[j] += dj;
+                double v = Value(y, false, out _, scratch, out _);
+                return double.IsFinite(v) ? v : centre - 1e3; // outside the box: a steep wall
+            }
+            var curvature = new double[d, d];
+            for (int i = 0; i < d; i++)
+            {
+                curvature[i, i] = -(F(i, h[i], i, 0) - 2 * centre + F(i, -h[i], i, 0)) / (h[i] * h[i]);
+                for (int j = 0; j < i; j++)
+                    curvature[i, j] = curvature[j, i] = -(F(i, h[i], j, h[j]) - F(i, h[i], j, -h[j]) - F(i, -h[i], j, h[j]) + F(i, -h[i], j, -h[j])) / (4 * h[i] * h[j]);
+            }
+            return curvature;
+        }
+
+        /// <summary>∂r/∂x by forward differences; false when the readings' pairing changes under a small move (no smooth peak).</summary>
+        private bool Jacobian(double[] x, double[] r, int count, double[,] jacobian, double[] column)
+        {
+            int angles = _biaxial ? 3 : 2;
+            for (int i = 0; i < x.Length; i++)
+            {
+                double h = i < angles ? 0.002 : 0.02;
+                double keep = x[i];
+                x[i] = keep + h;
+                double v = Value(x, false, out _, column, out int n);
+                if (!double.IsFinite(v) || n != count)
+                {
+                    x[i] = keep - h; // at the box's wall: step the other way
+                    v = Value(x, false, out _, column, out n);
+                    h = -h;
+                }
+                x[i] = keep;
+                if (!double.IsFinite(v) || n != count) return false;
+                for (int k = 0; k < count; k++) jacobian[k, i] = (column[k] - r[k]) / h;
+            }
+            return true;
+        }
+
+        private static (double[] Gradient, double[,] Normal) NormalEquations(double[,] jacobian, double[] r, int count, int d, double[,] normal)
+        {
+            var gradient = new double[d];
+            for (int i = 0; i < d; i++)
+            {
+                double g = 0;
+                for (int k = 0; k < count; k++) g -= jacobian[k, i] * r[k];
+                gradient[i] = g;
+                for (int j = 0; j <= i; j++)
+                {
+                    double a = 0;
+                    for (int k = 0; k < count; k++) a += jacobian[k, i] * jacobian[k, j];
+                    normal[i, j] = normal[j, i] = a;
+                }
+            }
+            return (gradient, normal);
+        }
+
+        /// <summary>Solves (A + μ·diag(A)) Δ = g by Cholesky; null when not positive definite.</summary>
+        private static double[]? Solve(double[,] normal, double[] gradient, double damping)
+        {
+            int d = gradient.Length;
+            var a = new double[d, d];
+            for (int i = 0; i < d; i++)
+                for (int j = 0; j < d; j++) a[i, j] = normal[i, j] + (i == j ? damping * normal[i, i] + 1e-9 : 0);
+            var l = Cholesky(a);
+            if (l is null) return null;
+            var y = new double[d];
+            for (int i = 0; i < d; i++)
+            {
+                double s = gradient[i];
+                for (int k = 0; k < i; k++) s -= l[i, k] * y[k];
+                y[i] = s / l[i, i];
+            }
+            var step = new double[d];
+            for (int i = d - 1; i >= 0; i--)
+            {
+                double s = y[i];
+                for (int k = i + 1; k < d; k++) s -= l[k, i] * step[k];
+                step[i] = s / l[i, i];
+            }
+            return step;
+        }
+
+        private void Limit(double[] step)
+        {
+            int angles = _biaxial ? 3 : 2;
+            for (int i = 0; i < step.Length; i++)
+            {
+                double cap = i < angles ? 0.15 : 1.0;
+                step[i] = Math.Clamp(step[i], -cap, cap);
+            }
+        }
+
+        /// <summary>The Cholesky factor L of a symmetric matrix A = L Lᵀ, or null when A is not positive definite.</summary>
+        private static double[,]? Cholesky(double[,] a)
+        {
+            int d = a.GetLength(0);
+            var l = new double[d, d];
+            for (int i = 0; i < d; i++)
+                for (int j = 0; j <= i; j++)
+                {
+                    double s = a[i, j];
+                    for (int k = 0; k < j; k++) s -= l[i, k] * l[j, k];
+                    if (i == j)
+                    {
+                        if (!(s > 0)) return null;
+                        l[i, i] = Math.Sqrt(s);
+                    }
+                    else l[i, j] = s / l[j, j];
+                }
+            return l;
+        }
+
+        private static double LogDeterminant(double[,] a)
+        {
+            var l = Cholesky(a);
+            if (l is null) return double.NaN;
+            double sum = 0;
+            for (int i = 0; i < a.GetLength(0); i++) sum += 2 * Math.Log(l[i, i]);
+            return sum;
+        }
+    }
+}

@@ -1,0 +1,151 @@
+using GemIndex.Core.Catalogue;
+using GemIndex.Core.Gravity;
+using GemIndex.Core.Identification;
+using GemIndex.Core.Observations;
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Readings;
+
+namespace GemIndex.Core.Tests.Identification;
+
+/// <summary>The evidence models of docs/ranking.md §2–3, on small catalogues invented for each test.</summary>
+public class EvidenceModelTests
+{
+    private static Material Entry(string name, string species, OpticalIndices indices, PropertyRange? birefringence = null, OpticSign sign = OpticSign.None,
+        MaterialForm forms = MaterialForm.Crystal, OriginClass origin = OriginClass.Natural, BenchFrequency frequency = BenchFrequency.Common,
+        IReadOnlyList<string>? colours = null, bool opaque = false, IReadOnlyList<AbsorptionLine>? lines = null) => new()
+    {
+        Name = name, Species = species, Variety = name, Origin = origin, CrystalSystem = CrystalSystem.Trigonal, Indices = indices,
+        Birefringence = birefringence, Sign = sign, SpecificGravity = new(2.60, 2.66), Forms = forms, Frequency = frequency,
+        SpeciesFrequency = BenchFrequency.Common, Colours = colours ?? [], IsOpaque = opaque, AbsorptionLines = lines ?? [],
+    };
+
+    // Quartz ω 1.544, ε 1.553 (Handbook of Mineralogy, from memory).
+    private static readonly OpticalIndices QuartzIndices = OpticalIndices.Uniaxial(new(1.543, 1.545), new(1.552, 1.554));
+
+    private static RefractometerObservation QuartzSeries() => new(RefractometerMethod.Facet,
+        [new(0, 1.544, 1.553), new(45, 1.544, 1.551), new(90, 1.544, 1.548), new(135, 1.544, 1.550)]);
+
+    [Fact]
+    public void A_sharp_two_edge_series_is_strong_evidence_against_a_material_met_only_as_an_aggregate()
+    {
+        var crystal = Entry("rock crystal", "quartz", QuartzIndices, new(0.009, 0.009), OpticSign.Positive);
+        var aggregate = Entry("quartzite", "quartzite", QuartzIndices, new(0.009, 0.009), OpticSign.Positive, forms: MaterialForm.Aggregate);
+        var result = new Identifier([crystal, aggregate]).Identify(new BenchSheet { Refractometer = QuartzSeries() });
+        Assert.Equal("rock crystal", result.Candidates[0].Material.Name);
+        Assert.True(result.Candidates[0].Confidence > 0.9, $"{result.Candidates[0].Confidence:0.00}");
+    }
+
+    [Fact]
+    public void A_spot_reading_fits_a_crystal_and_an_aggregate_alike()
+    {
+        var crystal = Entry("rock crystal", "quartz", QuartzIndices, new(0.009, 0.009), OpticSign.Positive);
+        var aggregate = Entry("quartzite", "quartzite", QuartzIndices, new(0.009, 0.009), OpticSign.Positive, forms: MaterialForm.Aggregate);
+        var sheet = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.55) };
+        var result = new Identifier([crystal, aggregate]).Identify(sheet);
+        Assert.Equal(result.Candidates[0].Confidence, result.Candidates[1].Confidence, 6);
+    }
+
+    [Fact]
+    public void An_opaque_material_neither_passes_nor_fails_the_polariscope_or_the_dichroscope()
+    {
+        var opaque = Entry("opaque stone", "opaque", OpticalIndices.SingleIndex(new(1.60, 1.62)), opaque: true);
+        var clear = Entry("clear stone", "clear", OpticalIndices.SingleIndex(new(1.60, 1.62)));
+        var engine = new Identifier([opaque, clear]);
+        var without = engine.Identify(new BenchSheet { SpecificGravity = new SpecificGravity(2.63, 0.01) });
+        var with = engine.Identify(new BenchSheet
+        {
+            SpecificGravity = new SpecificGravity(2.63, 0.01), Polariscope = PolariscopeReaction.DoublyRefractive, Pleochroism = PleochroismObservation.Dichroic,
+        });
+        double Share(IdentificationResult r) => r.Candidates.Single(c => c.Material.Name == "opaque stone").Confidence;
+        // The clear singly refractive stone is weakened by a doubly refractive reaction and two colours; the opaque one is not.
+        Assert.True(Share(with) > Share(without));
+        var reasons = engine.Identify(new BenchSheet { Polariscope = PolariscopeReaction.Aggregate });
+        Assert.Contains(reasons.Candidates.Single(c => c.Material.Name == "opaque stone").Reasons, r => r.Text.Contains("opaque", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void The_prior_sits_on_the_species_so_many_entries_give_it_no_extra_mass()
+    {
+        // Two species with identical data: one has three entries (origins), the other one.
+        var entries = new[]
+        {
+            Entry("natural a", "alpha", QuartzIndices, new(0.009, 0.009), OpticSign.Positive),
+            Entry("synthetic a", "alpha", QuartzIndices, new(0.009, 0.009), OpticSign.Positive, origin: OriginClass.Synthetic),
+            Entry("treated a", "alpha", QuartzIndices, new(0.009, 0.009), OpticSign.Positive, origin: OriginClass.Treated),
+            Entry("b", "beta", QuartzIndices, new(0.009, 0.009), OpticSign.Positive),
+        };
+        var result = new Identifier(entries).Identify(new BenchSheet { Refractometer = QuartzSeries() });
+        Assert.Equal(result.Species[0].Confidence, result.Species[1].Confidence, 9);
+        // Candidates follow species order: every entry of the first species before the second species.
+        var order = result.Candidates.Select(c => c.Material.Species).ToList();
+        Assert.Equal(order.Distinct().Count(), order.Select((s, i) => i == 0 || s != order[i - 1]).Count(x => x));
+        Assert.Contains(result.Warnings, w => w.Contains("cannot be separated by these tests", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void An_unknown_colour_word_gives_a_warning_and_no_evidence()
+    {
+        var blue = Entry("blue stone", "blue", QuartzIndices, new(0.009, 0.009), OpticSign.Positive, colours: ["blue"]);
+        var red = Entry("red stone", "red", QuartzIndices, new(0.009, 0.009), OpticSign.Positive, colours: ["red"]);
+        var engine = new Identifier([blue, red]);
+        var unknown = engine.Identify(new BenchSheet { Refractometer = QuartzSeries(), Colour = "zorbish" });
+        Assert.Equal(unknown.Candidates[0].Confidence, unknown.Candidates[1].Confidence, 9);
+        Assert.Contains(unknown.Warnings, w => w.Contains("'zorbish' not known", StringComparison.Ordinal));
+        var seen = engine.Identify(new BenchSheet { Refractometer = QuartzSeries(), Colour = "light blue" });
+        Assert.Equal("blue stone", seen.Candidates[0].Material.Name);
+        Assert.DoesNotContain(seen.Warnings, w => w.Contains("not known", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void The_first_listed_colour_is_likelier_than_the_second_and_a_neighbour_than_an_unrelated_hue()
+    {
+        IReadOnlyList<string> listed = ["blue", "green"];
+        double first = ColourWords.Probability(new HashSet<string> { "blue" }, listed);
+        double second = ColourWords.Probability(new HashSet<string> { "green" }, listed);
+        double neighbour = ColourWords.Probability(new HashSet<string> { "purple" }, listed);
+        double unrelated = ColourWords.Probability(new HashSet<string> { "orange" }, listed);
+        Assert.True(first > second && second > neighbour && neighbour > unrelated);
+        // A probability over the known hues: the shares add up to one (ListedShare + NeighbourShare + the floor).
+        Assert.Equal(1, ColourWords.KnownHues.Sum(h => ColourWords.Probability(new HashSet<string> { h }, listed)), 9);
+    }
+
+    [Fact]
+    public void A_strong_listed_line_not_seen_costs_far_more_than_a_weak_one()
+    {
+        // By the model's own numbers: missing a strong line costs ln(1 − 0.95), a weak one ln(1 − 0.3).
+        double strong = AbsorptionLines.LogLikelihood([new(594, LineStrength.Strong)], [], out _, out int missedStrong);
+        double weak = AbsorptionLines.LogLikelihood([new(594, LineStrength.Weak)], [], out _, out _);
+        Assert.Equal(1, missedStrong);
+        Assert.Equal(Math.Log(0.05) - Math.Log(0.7), strong - weak, 9);
+    }
+
+    [Fact]
+    public void A_seen_line_is_scored_by_its_distance_to_the_listed_line_with_a_two_nanometre_sigma()
+    {
+        // A line seen 2 nm from the listed one against 6 nm: ln ratio = (6² − 2²)/(2·2²) = 4 (the Gaussian of §2).
+        double near = AbsorptionLines.LogLikelihood([new(594)], [596], out int unexplainedNear, out _);
+        double far = AbsorptionLines.LogLikelihood([new(594)], [600], out _, out _);
+        Assert.Equal(0, unexplainedNear);
+        Assert.Equal(4, near - far, 9);
+        // Beyond 4σ the line is no longer paired: it counts as a stray line and the listed one as missed.
+        AbsorptionLines.LogLikelihood([new(594)], [603], out int unexplainedFar, out _);
+        Assert.Equal(1, unexplainedFar);
+    }
+
+    [Fact]
+    public void A_high_edge_hidden_above_the_liquid_at_some_steps_is_censored_evidence_not_a_misfit()
+    {
+        // An invented uniaxial + material, ω 1.770, ε 1.797: with a 1.79 liquid the high edge shows only where it is below
+        // about 1.787. Steps written with a low edge alone near the limit must not make the stone "nothing fits".
+        var high = Entry("high", "high", OpticalIndices.Uniaxial(new(1.769, 1.771), new(1.796, 1.798)), new(0.026, 0.028), OpticSign.Positive);
+        var single = Entry("single", "single", OpticalIndices.SingleIndex(new(1.765, 1.775)));
+        var sheet = new BenchSheet
+        {
+            Refractometer = new RefractometerObservation(RefractometerMethod.Facet,
+                [new(0, 1.770, 1.781), new(45, 1.770, 1.786), new(90, 1.770), new(135, 1.770, 1.785)], overLimit: true),
+        };
+        var result = new Identifier([high, single]).Identify(sheet);
+        Assert.Equal("high", result.Candidates[0].Material.Name);
+        Assert.False(result.NoGoodMatch);
+    }
+}
