@@ -13,7 +13,7 @@ internal static class CommandTree
     /// </summary>
     public static int Run(string[] args, InvocationConfiguration? configuration = null)
     {
-        ParseResult parse = Build().Parse(args);
+        ParseResult parse = Build(args).Parse(args);
         if (parse.Errors.Count == 0 || parse.Action is System.CommandLine.Help.HelpAction)
             return configuration is null ? parse.Invoke() : parse.Invoke(configuration);
         TextWriter error = configuration?.Error ?? Console.Error;
@@ -28,7 +28,32 @@ internal static class CommandTree
     private static string Printable(string text) =>
         string.Concat(text.Select(c => char.IsControl(c) && c != '\n' ? $"\\u{(int)c:x4}" : c.ToString()));
 
-    public static RootCommand Build()
+    /// <summary>
+    /// The command tree for these arguments: only the subcommand they name (or none, for the root's own options such as
+    /// --version or --workbook), so a start loads the types of one command, not of all; the whole tree when they ask for
+    /// help, name nothing known, or are absent (a typo then gets the library's suggestions).
+    /// </summary>
+    public static RootCommand Build(string[] args)
+    {
+        string? first = args.Length > 0 ? args[0] : null;
+        bool help = args.Any(a => a is "--help" or "-h" or "-?" or "/?" or "/h");
+        if (help || first is null) return Build();
+        if (first.StartsWith('-')) return Build(subcommands: []);
+        return Subcommands.TryGetValue(first, out var create) ? Build([create]) : Build();
+    }
+
+    private static readonly Dictionary<string, Func<Command>> Subcommands = new(StringComparer.Ordinal)
+    {
+        ["catalogue"] = CatalogueCommand.Create,
+        ["identify"] = () => IdentifyCommand.Create(CatalogueCommand.DirectoryOption()),
+        ["report"] = () => ReportCommand.Create(CatalogueCommand.DirectoryOption()),
+        ["calc"] = Calc.CalcCommand.Create,
+    };
+
+    /// <summary>The whole command tree.</summary>
+    public static RootCommand Build() => Build([.. Subcommands.Values]);
+
+    private static RootCommand Build(IReadOnlyList<Func<Command>> subcommands)
     {
         var root = new RootCommand("gemindex: identify gem materials from bench readings (refractometer, SG, polariscope, spectroscope, UV, probes)");
         var workbook = new Option<string?>("--workbook") { Description = "The workbook file of your stones (default: your data folder, gemindex/workbook.db)" };
@@ -38,10 +63,7 @@ internal static class CommandTree
         root.Options.Add(demo);
         root.Options.Add(createNew);
         root.SetAction(pr => TextUiCommand.Run(pr, pr.GetValue(workbook) ?? WorkbookLocation.Default(), pr.GetValue(demo), pr.GetValue(createNew)));
-        root.Subcommands.Add(CatalogueCommand.Create());
-        root.Subcommands.Add(IdentifyCommand.Create(CatalogueCommand.DirectoryOption()));
-        root.Subcommands.Add(ReportCommand.Create(CatalogueCommand.DirectoryOption()));
-        root.Subcommands.Add(Calc.CalcCommand.Create());
+        foreach (var create in subcommands) root.Subcommands.Add(create());
         return root;
     }
 }
