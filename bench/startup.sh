@@ -48,7 +48,7 @@ echo "hello-world: $hello ms; gemindex --version: $version ms; ratio $(python3 -
 # The text UI: from launch to the bench screen with its first field ready (warm catalogue cache, new workbook).
 export XDG_CACHE_HOME="$tmp/cache" XDG_DATA_HOME="$tmp/data"
 "$tools/gemindex" catalogue check >/dev/null
-marker=${GEMINDEX_FIRST_SCREEN_MARKER:-Reference}
+marker=${GEMINDEX_FIRST_SCREEN_MARKER:-"[F3 RI]"}
 times=()
 for i in $(seq "$runs"); do
   rm -f "$tmp/wb.db"
