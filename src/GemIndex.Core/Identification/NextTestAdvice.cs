@@ -7,7 +7,7 @@ public sealed record NextTestAdvice
     public required string Test { get; init; }
 
     /// <summary>The test in plain words ("hand spectroscope (absorption lines)").</summary>
-    public string Description => BenchTestNames.Describe(Test);
+    public string Description => GemIndex.Core.Bench.BenchTestWords.DisplayOfWire(Test);
 
     /// <summary>Expected information gain over the current candidates, bits.</summary>
     public required double GainBits { get; init; }

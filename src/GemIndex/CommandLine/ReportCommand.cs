@@ -42,12 +42,14 @@ internal static class ReportCommand
         };
         var format = new Option<string>("--format") { Description = "markdown, html or json", DefaultValueFactory = _ => "markdown" };
         ChoiceOption.Restrict(format, Formats);
-        var output = new Option<FileInfo?>("--output") { Description = "File to write (default: standard output)" };
+        var output = new Option<FileInfo?>("--output") { Description = "File to write (default: standard output); an existing file only with --force" };
+        var force = new Option<bool>("--force") { Description = "Replace the --output file if it exists" };
+        NeverReplacedUnasked(output, force);
         var examiner = new Option<string?>("--examiner") { Description = "Who examined the stone, printed in the report's header" };
         var date = new Option<string?>("--date") { Description = "The report's date, YYYY-MM-DD (default: today)" };
         var stone = new Command("stone", "Identify one stone (a batch line, or a stone of a workbook) and write its report")
         {
-            readings, line, workbook, reference, format, output, examiner, date,
+            readings, line, workbook, reference, format, output, force, examiner, date,
         };
         stone.Validators.Add(r =>
         {
@@ -65,14 +67,26 @@ internal static class ReportCommand
                     : Stone(file, pr.GetValue(line), pr.GetRequiredValue(format), pr.GetValue(output), header, () => catalogue(pr), o, e);
         }));
         var wholeBook = new Option<string>("--workbook") { Description = "The workbook file", Required = true };
-        var csv = new Option<FileInfo?>("--output") { Description = "CSV file to write (default: standard output)" };
-        var all = new Command("workbook", "Every stone of a workbook as CSV, one row each, with its best candidate") { wholeBook, csv };
+        var csv = new Option<FileInfo?>("--output") { Description = "CSV file to write (default: standard output); an existing file only with --force" };
+        var forceCsv = new Option<bool>("--force") { Description = "Replace the --output file if it exists" };
+        NeverReplacedUnasked(csv, forceCsv);
+        var all = new Command("workbook", "Every stone of a workbook as CSV, one row each, with its best candidate") { wholeBook, csv, forceCsv };
         all.SetAction(pr => CatalogueFailure.Guard(pr, (o, e) => Existing("--workbook", pr.GetRequiredValue(wholeBook), e, out int refused) is not { } book ? refused
             : Workbook(book, pr.GetValue(csv), () => catalogue(pr), o, e)));
         var report = new Command("report", "Printable reports of identified stones, and the workbook as CSV") { stone, all };
         if (catalogueDirectory is not null) report.Options.Add(catalogueDirectory);
         return report;
     }
+
+    /// <summary>An existing output file is replaced only with the user's word (--force); a folder never.</summary>
+    private static void NeverReplacedUnasked(Option<FileInfo?> output, Option<bool> force) => output.Validators.Add(r =>
+    {
+        if (r.Tokens.Count != 1) return;
+        string path = r.Tokens[0].Value;
+        if (Directory.Exists(path)) r.AddError($"--output: '{BenchText.Shown(path)}' is a folder; give a file name");
+        else if (File.Exists(path) && r.GetResult(force) is not { Implicit: false })
+            r.AddError($"--output: '{BenchText.Shown(path)}' exists; add --force to replace it, or give another name");
+    });
 
     /// <summary>The longest examiner's name printed in a report header.</summary>
     private const int MaximumExaminerLength = 80;

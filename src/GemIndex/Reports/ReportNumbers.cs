@@ -33,6 +33,9 @@ internal static class ReportNumbers
     /// <summary>A probability (0–1) as a percentage, the one percent format of text, Markdown and HTML: 87.3 %.</summary>
     public static string Percent(double probability) => Fixed(probability * 100, "0.0") + " %";
 
+    /// <summary>A probability in whole percent, for narrow screens: 93%.</summary>
+    public static string WholePercent(double probability) => Fixed(probability * 100, "0") + "%";
+
     /// <summary>An information quantity: 1.25 bits.</summary>
     public static string Bits(double value) => Fixed(value, "+0.00;-0.00;0.00") + " bits";
 

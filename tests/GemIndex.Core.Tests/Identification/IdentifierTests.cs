@@ -167,7 +167,7 @@ public class IdentifierTests
 
     [Fact]
     public void The_next_test_is_named_in_plain_words() =>
-        Assert.Equal("hand spectroscope (absorption lines)", BenchTestNames.Describe("absorption_nm"));
+        Assert.Equal("hand spectroscope (absorption lines)", GemIndex.Core.Bench.BenchTestWords.DisplayOfWire("absorption_nm"));
 
     [Fact]
     public void A_biaxial_stone_with_beta_near_alpha_is_not_penalised_for_looking_uniaxial()

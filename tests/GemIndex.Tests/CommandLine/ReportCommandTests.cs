@@ -44,6 +44,22 @@ public sealed class ReportCommandTests : IDisposable
     }
 
     [Fact]
+    public void An_existing_output_file_is_replaced_only_with_force()
+    {
+        string output = Path.Combine(_dir, "kept.md");
+        File.WriteAllText(output, "someone else's notes");
+        string batch = Batch(ReportFixtures.QuartzLine);
+        var (exit, _, err) = Run("report", "stone", "--readings", batch, "--output", output);
+        Assert.NotEqual(ExitCodes.Ok, exit);
+        Assert.Contains("--output", err);
+        Assert.Contains("exists; add --force", err);
+        Assert.Equal("someone else's notes", File.ReadAllText(output));
+        var (forced, _, _) = Run("report", "stone", "--readings", batch, "--output", output, "--force");
+        Assert.Equal(ExitCodes.Ok, forced);
+        Assert.StartsWith("# Stone report", File.ReadAllText(output));
+    }
+
+    [Fact]
     public void Without_output_the_report_goes_to_standard_output()
     {
         var (exit, stdout, _) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine));

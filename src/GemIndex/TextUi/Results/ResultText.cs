@@ -20,7 +20,7 @@ internal static class ResultText
 
     public static string Index(double n) => n.ToString("0.000", CultureInfo.InvariantCulture);
 
-    public static string Percent(double p) => (100 * p).ToString("0", CultureInfo.InvariantCulture) + "%";
+    public static string Percent(double p) => GemIndex.Cli.Reports.ReportNumbers.WholePercent(p);
 
     public static string Gravity(SpecificGravity? sg) => sg is { } g
         ? $"SG {g.Value.ToString("0.000", CultureInfo.InvariantCulture)} ± {g.StandardUncertainty.ToString("0.000", CultureInfo.InvariantCulture)}"
