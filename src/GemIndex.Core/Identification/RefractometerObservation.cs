@@ -39,7 +39,7 @@ public sealed record RefractometerObservation
         if (spot is { } x) QuantityOutOfRangeException.ThrowIfOutside("spot reading", x, RefractometerProfile.ScaleBottom, liquidLimit);
         steps ??= [];
         foreach (var step in steps)
-            if (step.High is { } h && h > liquidLimit + 0.005 || step.Low > liquidLimit + 0.005)
+            if (step.High is { } h && h > liquidLimit + Bench.BenchDefaults.EdgeSlackAboveLiquid || step.Low > liquidLimit + Bench.BenchDefaults.EdgeSlackAboveLiquid)
                 throw new QuantityOutOfRangeException("edge reading", Math.Max(step.Low, step.High ?? 0),
                     $"at most the liquid limit {liquidLimit:0.000} (no stone edge can be seen above it)");
         if (steps.Count == 0 && spot is null && !overLimit)
