@@ -72,9 +72,21 @@ public class ApprovalTests
             foreach (var x in e.EnumerateArray()) Walk(x, path + "[]", paths);
     }
 
-    private static void Approve(string name, string received, [CallerFilePath] string here = "")
+    /// <summary>
+    /// The approved files' folder, found from the test's output folder upwards (a CI build maps source paths to "/_/",
+    /// so the caller's file path cannot be used).
+    /// </summary>
+    private static string ApprovedFolder()
     {
-        string folder = Path.Combine(Path.GetDirectoryName(here)!, "Approved");
+        for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
+            if (File.Exists(Path.Combine(dir.FullName, "GemIndex.sln")))
+                return Path.Combine(dir.FullName, "tests", "GemIndex.Tests", "CommandLine", "Approved");
+        throw new InvalidOperationException($"no GemIndex.sln above {AppContext.BaseDirectory}");
+    }
+
+    private static void Approve(string name, string received)
+    {
+        string folder = ApprovedFolder();
         string approved = Path.Combine(folder, name + ".approved.txt");
         string text = received.Replace("\r\n", "\n", StringComparison.Ordinal);
         string? expected = File.Exists(approved) ? File.ReadAllText(approved) : null;
