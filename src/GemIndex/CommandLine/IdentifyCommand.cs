@@ -101,7 +101,7 @@ internal static class IdentifyCommand
                 return ExitCodes.BadInput;
             }
             if (pr.GetValue(json)) output.WriteLine(ResultDocument.Line(result, explain: true));
-            else IdentificationText.Write(result, output);
+            else IdentificationText.Write(result, output, outcome.Reading.Sheet.Magnification);
             return ExitCodes.Ok;
         }));
         return command;

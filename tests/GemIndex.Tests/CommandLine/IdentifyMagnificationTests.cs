@@ -19,6 +19,17 @@ public class IdentifyMagnificationTests
     }
 
     [Fact]
+    public void The_text_answer_lists_the_features_with_their_meaning()
+    {
+        using var run = new CommandRun();
+        var (exit, stdout, error) = CommandRun.Plain("identify", "--sg", "4.00", "--feature", "curved_striae", "--no-feature", "needles_silk", "--catalogue-dir", run.Folder);
+        Assert.True(exit == 0, error);
+        var striae = GemIndex.Core.Magnification.MagnificationVocabulary.Of(GemIndex.Core.Magnification.MagnificationFeature.CurvedStriae);
+        Assert.Contains($"Seen under magnification: {striae.Name}: {striae.Meaning}", stdout);
+        Assert.Contains("Looked for, not seen: needles and silk:", stdout);
+    }
+
+    [Fact]
     public void An_unknown_feature_exits_3_naming_the_option_and_the_allowed_words()
     {
         using var run = new CommandRun();
