@@ -57,12 +57,17 @@ public static class BenchField
     public const string Absorption = "absorption_nm";
     /// <summary>The body colour in plain words.</summary>
     public const string Colour = "colour";
+    /// <summary>Magnification features seen: vocabulary words separated like absorption lines (<see cref="BenchSyntax"/>).</summary>
+    public const string FeaturesPresent = "magnification.present";
+    /// <summary>Magnification features looked for and not seen, written the same way.</summary>
+    public const string FeaturesAbsent = "magnification.absent";
 
     /// <summary>Every single-valued field, in the order the reader reports them.</summary>
     public static IReadOnlyList<string> All { get; } =
     [
         Id, Method, Spot, OverLimit, LiquidLimit, LightNm, Precision, CalibrationOffset, Sg, AirCt, WaterCt, WaterC, HeavyLiquids,
         Polariscope, Pleochroism, Dispersion, IndexAtB, IndexAtG, ThermalProbe, Electrical, UvLong, UvShort, Absorption, Colour,
+        FeaturesPresent, FeaturesAbsent,
     ];
 
     /// <summary>The field of one rotation step (0 = the first).</summary>

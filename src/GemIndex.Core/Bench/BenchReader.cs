@@ -1,6 +1,7 @@
 using System.Globalization;
 using GemIndex.Core.Gravity;
 using GemIndex.Core.Identification;
+using GemIndex.Core.Magnification;
 using GemIndex.Core.Observations;
 using GemIndex.Core.Optics.Refractometer;
 using GemIndex.Core.Quantities;
@@ -47,6 +48,7 @@ public static class BenchReader
                 UvShort = Word<FluorescenceStrength>(BenchField.UvShort),
                 AbsorptionLinesNanometres = Absorption(),
                 Colour = Colour(),
+                Magnification = Magnification(),
             };
             return new BenchReading { Sheet = sheet, Errors = [.. _errors.OrderBy(e => Order(e.Field)).ThenBy(e => e.Field, StringComparer.Ordinal)] };
         }
@@ -243,6 +245,51 @@ public static class BenchReader
                 lines.Add(checkedNm);
             }
             return lines;
+        }
+
+        private MagnificationObservation? Magnification()
+        {
+            var present = Features(BenchField.FeaturesPresent);
+            var absent = Features(BenchField.FeaturesAbsent);
+            if (present is null && absent is null) return null;
+            var both = (present ?? []).Intersect(absent ?? []).ToList();
+            if (both.Count > 0)
+            {
+                string words = string.Join(", ", both.Select(f => MagnificationVocabulary.Of(f).Word));
+                Error(BenchField.FeaturesAbsent, words, "a feature as seen or as not seen, not both",
+                    $"lists {words}, also given in {BenchField.FeaturesPresent}: a feature is either seen or looked for and not seen.");
+                return null;
+            }
+            if (HasError(BenchField.FeaturesPresent) || HasError(BenchField.FeaturesAbsent)) return null;
+            return new MagnificationObservation(present ?? [], absent ?? []);
+        }
+
+        private List<MagnificationFeature>? Features(string field)
+        {
+            if (r.Text(field) is not { } text) return null;
+            string allowed = AllowedFeatures();
+            if (text.Trim().Length == 0) { Empty(field, "feature words, e.g. curved_striae round_bubbles"); return null; }
+            var features = new List<MagnificationFeature>();
+            foreach (string word in BenchSyntax.Features(text))
+            {
+                if (MagnificationVocabulary.Find(word) is { } feature) { if (!features.Contains(feature)) features.Add(feature); }
+                else Error(field, word, allowed, $"'{BenchText.Shown(word)}' is not a magnification feature; allowed: {allowed}.");
+            }
+            return features;
+        }
+
+        /// <summary>The vocabulary's words, shortened to fit one message (the full list is in the vocabulary's help).</summary>
+        private static string AllowedFeatures()
+        {
+            var shown = new List<string>();
+            int length = 0;
+            foreach (string word in MagnificationVocabulary.Words)
+            {
+                if (length + word.Length + 2 > BenchDefaults.LongestFeatureList) return string.Join(", ", shown) + $", … ({MagnificationVocabulary.Words.Count} in all)";
+                shown.Add(word);
+                length += word.Length + 2;
+            }
+            return string.Join(", ", shown);
         }
 
         private string? Colour()

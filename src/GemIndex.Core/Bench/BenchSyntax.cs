@@ -4,7 +4,8 @@ namespace GemIndex.Core.Bench;
 /// The one written form of the values that hold more than a number, for the command line, the text UI and the
 /// workbook alike: a rotation step "ROTATION:LOW[/HIGH]" (0:1.544/1.553), heavy liquids "DENSITY RESULT" entries
 /// separated by semicolons (3.32 floats; 2.89 sinks), absorption lines as numbers separated by spaces, commas or
-/// semicolons (592 685 656), or "none" when looked for and none seen.
+/// semicolons (592 685 656), or "none" when looked for and none seen; magnification features as words separated the
+/// same way (curved_striae round_bubbles).
 /// </summary>
 public static class BenchSyntax
 {
@@ -42,6 +43,12 @@ public static class BenchSyntax
     public static IReadOnlyList<string> Lines(string text) => text.Trim().Equals(NoLines, StringComparison.OrdinalIgnoreCase)
         ? []
         : text.Split([' ', ',', ';', '\t'], StringSplitOptions.RemoveEmptyEntries);
+
+    /// <summary>The words of a magnification field, separated like absorption lines (spaces, commas or semicolons).</summary>
+    public static IReadOnlyList<string> Features(string text) => text.Split([' ', ',', ';', '\t'], StringSplitOptions.RemoveEmptyEntries);
+
+    /// <summary>Magnification words written as one field's text.</summary>
+    public static string Features(IEnumerable<string> words) => string.Join(" ", words);
 
     /// <summary>Absorption lines written as one field's text ("none" when empty).</summary>
     public static string Lines(IEnumerable<string> lines) => string.Join(" ", lines) is { Length: > 0 } joined ? joined : NoLines;

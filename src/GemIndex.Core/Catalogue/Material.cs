@@ -1,3 +1,4 @@
+using GemIndex.Core.Magnification;
 using GemIndex.Core.Observations;
 using GemIndex.Core.Optics.Indicatrix;
 
@@ -108,6 +109,15 @@ public sealed record Material
 
     /// <summary>True for an entry from the user's own catalogue rather than the shipped one.</summary>
     public bool IsUserEntry { get; init; }
+
+    /// <summary>
+    /// How likely the entry is to hold each magnification feature (reference-db/magnification.json, attached when the
+    /// catalogue loads); null: the defaults of its origin (<see cref="MagnificationProfile.ForOrigin"/>).
+    /// </summary>
+    public MagnificationProfile? Magnification { get; init; }
+
+    /// <summary>The entry's magnification profile: its own, or its origin's defaults.</summary>
+    public MagnificationProfile MagnificationProfile => Magnification ?? MagnificationProfile.ForOrigin(Origin);
 
     /// <summary>Optic character, from the indices.</summary>
     public OpticCharacter OpticCharacter => Indices.Character;

@@ -1,4 +1,5 @@
 using GemIndex.Core.Gravity;
+using GemIndex.Core.Magnification;
 using GemIndex.Core.Observations;
 
 namespace GemIndex.Core.Identification;
@@ -47,4 +48,7 @@ public sealed record BenchSheet
 
     /// <summary>The body colour in a plain word or two ("blue", "greenish yellow").</summary>
     public string? Colour { get; init; }
+
+    /// <summary>What was looked for under magnification; null when nothing was.</summary>
+    public MagnificationObservation? Magnification { get; init; }
 }

@@ -1,6 +1,7 @@
 using System.Globalization;
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Gravity;
+using GemIndex.Core.Magnification;
 using GemIndex.Core.Observations;
 using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Readings;
@@ -44,6 +45,13 @@ public static class EvidenceLikelihood
         if (s.UvShort is { } us) Fluorescence("uv_short", "short-wave UV", material.UvShort, us, acc);
         if (s.AbsorptionLinesNanometres is { } lines) Absorption(material, lines, acc);
         if (sheet.ColourHues.Count > 0) Colour(profile, s.Colour!, sheet.ColourHues, acc);
+        if (s.Magnification is { IsEmpty: false } look)
+        {
+            // docs/ranking.md, "Magnification": "not in the catalogue" is the natural/imitation average.
+            var expected = material.MagnificationProfile;
+            acc.AddLog("magnification", MagnificationEvidence.LogLikelihood(look, expected), MagnificationEvidence.LogBroad(look), MagnificationEvidence.Fit(look, expected), robust: false);
+            if (acc.Explaining) acc.Say(MagnificationEvidence.Reason(look, expected));
+        }
         return acc.Result();
     }
 

@@ -1,3 +1,5 @@
+using GemIndex.Core.Catalogue;
+
 namespace GemIndex.Core.Magnification;
 
 /// <summary>
@@ -26,5 +28,43 @@ public static class MagnificationEvidence
         foreach (var feature in observation.Present) log += Math.Log(ProbabilityOfSeeing(profile, feature));
         foreach (var feature in observation.Absent) log += Math.Log(1 - ProbabilityOfSeeing(profile, feature));
         return log;
+    }
+
+    /// <summary>
+    /// ln P(observation | not in the catalogue): the mean of the likelihoods under the natural and the imitation
+    /// defaults, the two kinds an uncatalogued stone most often is (docs/ranking.md, "Magnification").
+    /// </summary>
+    public static double LogBroad(MagnificationObservation observation)
+    {
+        double natural = LogLikelihood(observation, MagnificationProfile.ForOrigin(OriginClass.Natural));
+        double imitation = LogLikelihood(observation, MagnificationProfile.ForOrigin(OriginClass.Imitation));
+        double top = Math.Max(natural, imitation);
+        return top + Math.Log((Math.Exp(natural - top) + Math.Exp(imitation - top)) / 2);
+    }
+
+    /// <summary>
+    /// The fit of the observation to the profile: its likelihood over that of the likeliest outcome of the same looks
+    /// (each feature seen or not, whichever the profile expects), as the other reaction tests measure fit.
+    /// </summary>
+    public static double Fit(MagnificationObservation observation, MagnificationProfile profile)
+    {
+        double best = 0;
+        foreach (var feature in observation.Present.Concat(observation.Absent))
+        {
+            double p = ProbabilityOfSeeing(profile, feature);
+            best += Math.Log(Math.Max(p, 1 - p));
+        }
+        return Math.Min(1, Math.Exp(LogLikelihood(observation, profile) - best));
+    }
+
+    /// <summary>
+    /// The reason in words: "magnification: curved striae seen (expected in 90 %), needles and silk not seen (held by 10 %)".
+    /// </summary>
+    public static string Reason(MagnificationObservation observation, MagnificationProfile profile)
+    {
+        static string Percent(double p) => (100 * p).ToString("0", System.Globalization.CultureInfo.InvariantCulture) + " %";
+        var parts = observation.Present.Order().Select(f => $"{MagnificationVocabulary.Of(f).Name} seen (held by {Percent(profile.ProbabilityOf(f))})")
+            .Concat(observation.Absent.Order().Select(f => $"{MagnificationVocabulary.Of(f).Name} not seen (held by {Percent(profile.ProbabilityOf(f))})"));
+        return "magnification: " + string.Join(", ", parts);
     }
 }

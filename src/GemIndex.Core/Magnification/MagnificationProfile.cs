@@ -29,6 +29,11 @@ public sealed class MagnificationProfile
         }
     }
 
+    private static readonly MagnificationProfile[] Defaults = [.. Enum.GetValues<OriginClass>().Select(o => new MagnificationProfile(o))];
+
+    /// <summary>The defaults of one origin, shared (a profile is immutable).</summary>
+    public static MagnificationProfile ForOrigin(OriginClass origin) => Defaults[Array.IndexOf(Enum.GetValues<OriginClass>(), origin)];
+
     /// <summary>The probability that a stone of this material holds the feature.</summary>
     public double ProbabilityOf(MagnificationFeature feature) => _probabilities[(int)feature];
 

@@ -30,6 +30,8 @@ public static class StoneReadingsConverter
             .With(BenchField.ThermalProbe, s.ThermalProbe).With(BenchField.Electrical, s.Electrical).With(BenchField.UvLong, s.UvLong)
             .With(BenchField.UvShort, s.UvShort).With(BenchField.Colour, s.Colour);
         if (s.AbsorptionNm is { } lines) r = r.With(BenchField.Absorption, BenchSyntax.Lines(lines.Select(l => Number(l)!)));
+        if (s.FeaturesPresent.Count > 0) r = r.With(BenchField.FeaturesPresent, BenchSyntax.Features(s.FeaturesPresent));
+        if (s.FeaturesAbsent.Count > 0) r = r.With(BenchField.FeaturesAbsent, BenchSyntax.Features(s.FeaturesAbsent));
         return r;
     }
 
@@ -104,6 +106,8 @@ public static class StoneReadingsConverter
             UvShort = r.Text(BenchField.UvShort),
             AbsorptionNm = lines,
             Colour = r.Text(BenchField.Colour),
+            FeaturesPresent = [.. BenchSyntax.Features(r.Text(BenchField.FeaturesPresent) ?? "")],
+            FeaturesAbsent = [.. BenchSyntax.Features(r.Text(BenchField.FeaturesAbsent) ?? "")],
         };
     }
 

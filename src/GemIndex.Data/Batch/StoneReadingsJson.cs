@@ -12,6 +12,9 @@ namespace GemIndex.Data.Batch;
 /// </summary>
 public static class StoneReadingsJson
 {
+    /// <summary>The batch line's magnification object, {"present": [...], "absent": [...]}.</summary>
+    private const string Magnification = "magnification";
+
     private static readonly JsonDocumentOptions Options = new() { AllowTrailingCommas = false, CommentHandling = JsonCommentHandling.Disallow, MaxDepth = 16 };
 
     /// <summary>Reads one line into readings and the errors of its form; never throws for bad input.</summary>
@@ -90,7 +93,26 @@ public static class StoneReadingsJson
             }
             if (Child(root, BenchField.Absorption) is { } lines && List(lines, BenchField.Absorption) is { } nm)
                 r = r.With(BenchField.Absorption, BenchSyntax.Lines(nm.Select((x, i) => Number(x, $"{BenchField.Absorption}[{i}]") ?? "").Where(x => x.Length > 0)));
+            if (Child(root, Magnification) is { } magnification)
+            {
+                if (magnification.ValueKind != JsonValueKind.Object)
+                    errors.Add(new BenchFieldError(Magnification, BenchText.Shown(magnification.GetRawText()), "{\"present\": [...], \"absent\": [...]}",
+                        $"must be an object {{\"present\": [...], \"absent\": [...]}}, not {Kind(magnification)}."));
+                else r = r.With(BenchField.FeaturesPresent, Features(magnification, "present", BenchField.FeaturesPresent))
+                    .With(BenchField.FeaturesAbsent, Features(magnification, "absent", BenchField.FeaturesAbsent));
+            }
             return r;
+        }
+
+        /// <summary>A list of feature words as one field's text (a word written with spaces joined by underscores); an empty list is not given.</summary>
+        private string? Features(JsonElement parent, string name, string path)
+        {
+            if (Child(parent, name) is not { } e || List(e, path) is not { } items) return null;
+            var words = new List<string>();
+            for (int i = 0; i < items.Count; i++)
+                if (Word(items[i], $"{path}[{i}]") is { } word && word.Trim().Length > 0)
+                    words.Add(string.Join('_', word.Split(' ', StringSplitOptions.RemoveEmptyEntries)));
+            return words.Count > 0 ? BenchSyntax.Features(words) : null;
         }
 
         private BenchReadings Refractometer(JsonElement rf, BenchReadings r)
@@ -249,9 +271,24 @@ public static class StoneReadingsJson
                 w.WriteEndArray();
             }
             WriteWord(w, BenchField.Colour, r.Colour);
+            if (r.FeaturesPresent.Count > 0 || r.FeaturesAbsent.Count > 0)
+            {
+                w.WriteStartObject(Magnification);
+                WriteWords(w, "present", r.FeaturesPresent);
+                WriteWords(w, "absent", r.FeaturesAbsent);
+                w.WriteEndObject();
+            }
             w.WriteEndObject();
         }
         return Encoding.UTF8.GetString(stream.ToArray());
+    }
+
+    private static void WriteWords(Utf8JsonWriter w, string name, IReadOnlyList<string> words)
+    {
+        if (words.Count == 0) return;
+        w.WriteStartArray(name);
+        foreach (string word in words) w.WriteStringValue(word);
+        w.WriteEndArray();
     }
 
     private static void WriteWord(Utf8JsonWriter w, string name, string? value)

@@ -1,5 +1,6 @@
 using System.Security.Cryptography;
 using GemIndex.Core.Catalogue;
+using GemIndex.Data.Magnification;
 
 namespace GemIndex.Data.Catalogue;
 
@@ -51,11 +52,11 @@ public static class ShippedCatalogue
         return path;
     }
 
-    /// <summary>Every shipped material, building the cache file first if needed.</summary>
+    /// <summary>Every shipped material with its magnification profile attached, building the cache file first if needed.</summary>
     public static IReadOnlyList<Material> Load(string cacheDirectory)
     {
         using CatalogueStore store = CatalogueStore.Open(EnsureBuilt(cacheDirectory));
-        return store.LoadAll();
+        return MagnificationTable.Embedded.Attach(store.LoadAll());
     }
 
     private static IReadOnlyList<FamilySource> LoadSources() =>

@@ -49,13 +49,23 @@ internal static class IdentifyCommand
         };
         var overLimit = new Option<bool>("--over-limit") { Description = "No stone edge below the contact liquid's index" };
         var liquids = new Option<string[]>("--heavy-liquid") { Description = "DENSITY RESULT, RESULT floats | sinks | suspends, e.g. \"3.32 floats\" (repeat per liquid)" };
+        var features = new Option<string[]>("--feature")
+        {
+            Description = "A magnification feature seen, e.g. curved_striae (repeat per feature; the words are listed by an unknown one's error)",
+            AllowMultipleArgumentsPerToken = false,
+        };
+        var noFeatures = new Option<string[]>("--no-feature")
+        {
+            Description = "A magnification feature looked for and not seen (repeat per feature); a feature not named was not looked for",
+            AllowMultipleArgumentsPerToken = false,
+        };
         var values = Values.Select(v => (v.Field, Option: new Option<string?>(v.Option) { Description = v.Description })).ToList();
         var id = new Option<string>("--id") { Description = "The stone's reference", DefaultValueFactory = _ => "stone" };
         var count = new Option<string?>("--candidates") { Description = $"How many candidates to show (1–{BenchDefaults.MostCandidates}, default {BenchDefaults.Candidates})" };
         var json = new Option<bool>("--json") { Description = "Write the result as one JSON line (the result document, docs/result-document.md)" };
         var command = new Command("identify", "Rank catalogue materials for a stone's bench readings, with confidence, reasons and the next test")
         {
-            batch, explain, edges, overLimit, liquids, id, count, json, catalogueDirectory,
+            batch, explain, edges, overLimit, liquids, features, noFeatures, id, count, json, catalogueDirectory,
         };
         foreach (var (_, option) in values) command.Options.Add(option);
         command.SetAction(pr => CatalogueFailure.Guard(pr, (output, error) =>
@@ -72,6 +82,8 @@ internal static class IdentifyCommand
             if (pr.GetValue(overLimit)) readings = readings.With(BenchField.OverLimit, "yes");
             if (pr.GetValue(liquids) is { Length: > 0 } entries) readings = readings.With(BenchField.HeavyLiquids, BenchSyntax.HeavyLiquids(entries));
             foreach (var (field, option) in values) readings = readings.With(field, pr.GetValue(option));
+            if (pr.GetValue(features) is { Length: > 0 } seen) readings = readings.With(BenchField.FeaturesPresent, BenchSyntax.Features(seen));
+            if (pr.GetValue(noFeatures) is { Length: > 0 } unseen) readings = readings.With(BenchField.FeaturesAbsent, BenchSyntax.Features(unseen));
             bool anyReading = readings.Values.Count > 1 || readings.Steps.Count > 0 || shapeErrors.Count > 0;
             if (pr.GetValue(batch) is { } file)
             {
@@ -89,7 +101,7 @@ internal static class IdentifyCommand
                 return ExitCodes.BadInput;
             }
             if (pr.GetValue(json)) output.WriteLine(ResultDocument.Line(result, explain: true));
-            else IdentificationText.Write(result, output);
+            else IdentificationText.Write(result, output, outcome.Reading.Sheet.Magnification);
             return ExitCodes.Ok;
         }));
         return command;
@@ -106,6 +118,8 @@ internal static class IdentifyCommand
             BenchField.Readings => "--edge",
             BenchField.OverLimit => "--over-limit",
             BenchField.HeavyLiquids => "--heavy-liquid",
+            BenchField.FeaturesPresent => "--feature",
+            BenchField.FeaturesAbsent => "--no-feature",
             BenchField.IndexAtB or BenchField.IndexAtG => "--dispersion",
             _ => Values.FirstOrDefault(v => v.Field == field).Option ?? field,
         };

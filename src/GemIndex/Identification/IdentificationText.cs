@@ -1,6 +1,7 @@
 using GemIndex.Cli.Reports;
 using GemIndex.Core.Bench;
 using GemIndex.Core.Identification;
+using GemIndex.Core.Magnification;
 
 namespace GemIndex.Cli.Identification;
 
@@ -11,9 +12,15 @@ namespace GemIndex.Cli.Identification;
 /// </summary>
 internal static class IdentificationText
 {
-    public static void Write(IdentificationResult result, TextWriter output)
+    /// <summary>Writes the answer; the features looked for under magnification, when given, are listed with their meaning.</summary>
+    public static void Write(IdentificationResult result, TextWriter output, MagnificationObservation? magnification = null)
     {
         var o = new StringWriter { NewLine = "\n" };
+        if (magnification is { IsEmpty: false } look)
+        {
+            foreach (var f in look.Present.Order()) o.WriteLine($"Seen under magnification: {MagnificationVocabulary.Of(f).Name}: {MagnificationVocabulary.Of(f).Meaning}");
+            foreach (var f in look.Absent.Order()) o.WriteLine($"Looked for, not seen: {MagnificationVocabulary.Of(f).Name}: {MagnificationVocabulary.Of(f).Meaning}");
+        }
         foreach (SpeciesResult s in ResultDocument.SpeciesShown(result))
             o.WriteLine($"Species: {s.Species} {ReportNumbers.Percent(s.Confidence)}"
                 + (s.Origins.Count > 0 ? " (" + string.Join(", ", s.Origins.OrderByDescending(x => x.Value).Select(x => $"{BenchWords.Word(x.Key)} {ReportNumbers.Percent(x.Value)}")) + ")" : ""));

@@ -76,6 +76,10 @@ internal static class JsonReport
             w.WriteEndObject();
         }
         else w.WriteNull("hydrostatic");
+        w.WriteStartObject("magnification");
+        Features(w, "present", report.Readings.FeaturesPresent);
+        Features(w, "absent", report.Readings.FeaturesAbsent);
+        w.WriteEndObject();
         w.WriteStartArray("all");
         foreach (var f in report.ReadingFields)
         {
@@ -87,6 +91,21 @@ internal static class JsonReport
         }
         w.WriteEndArray();
         w.WriteEndObject();
+    }
+
+    /// <summary>Features seen or looked for and not seen, each with its word, name and meaning.</summary>
+    private static void Features(Utf8JsonWriter w, string name, IReadOnlyList<string> words)
+    {
+        w.WriteStartArray(name);
+        foreach (var info in ReportReadings.Features(words))
+        {
+            w.WriteStartObject();
+            w.WriteString("feature", info.Word);
+            w.WriteString("name", info.Name);
+            w.WriteString("meaning", info.Meaning);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
     }
 
     private static void Derived(Utf8JsonWriter w, StoneReport report)

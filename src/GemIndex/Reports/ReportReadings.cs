@@ -1,4 +1,5 @@
 using GemIndex.Core.Bench;
+using GemIndex.Core.Magnification;
 using GemIndex.Data.Batch;
 
 namespace GemIndex.Cli.Reports;
@@ -39,8 +40,16 @@ internal static class ReportReadings
         if (r.AbsorptionNm is { } lines)
             fields.Add(new("absorption", "Spectroscope", lines.Count == 0 ? "looked; no lines seen"
                 : "lines or bands at " + string.Join(", ", lines.Select(ReportNumbers.Nanometres))));
+        foreach (var info in Features(r.FeaturesPresent))
+            fields.Add(new($"feature_seen_{info.Word}", $"Seen under magnification: {info.Name}", info.Meaning));
+        foreach (var info in Features(r.FeaturesAbsent))
+            fields.Add(new($"feature_not_seen_{info.Word}", $"Looked for, not seen: {info.Name}", info.Meaning));
         return fields;
     }
+
+    /// <summary>The vocabulary's entries for the words given (a word the vocabulary does not know was refused on reading).</summary>
+    public static IEnumerable<MagnificationFeatureInfo> Features(IEnumerable<string> words) =>
+        words.Select(MagnificationVocabulary.Find).OfType<MagnificationFeature>().Distinct().Select(MagnificationVocabulary.Of);
 
     private static void AddWord(List<ReportField> fields, string key, string label, string? word)
     {

@@ -26,6 +26,8 @@ public class StoneReadingsJsonTests
         from lines in Gen.Elements<List<double>?>(null, [], [694, 668.5], [450])
         from liquids in Gen.Elements<List<HeavyLiquidReading>>([], [new HeavyLiquidReading(2.89, "floats")], [new HeavyLiquidReading(3.32, "sinks"), new HeavyLiquidReading(2.62, "suspends")])
         from precision in Gen.Elements<double?>(null, 0.002)
+        from present in Gen.Elements<List<string>>([], ["curved_striae", "round_bubbles"], ["flux_residue"])
+        from absent in Gen.Elements<List<string>>([], ["needles_silk"], ["chevron_growth", "healed_fractures"])
         select new StoneReadings
         {
             Id = id,
@@ -36,6 +38,8 @@ public class StoneReadingsJsonTests
             Polariscope = polariscope,
             AbsorptionNm = lines,
             Colour = "greenish yellow",
+            FeaturesPresent = present,
+            FeaturesAbsent = absent,
         };
 
     [FsCheck.Xunit.Property(MaxTest = 200)]
@@ -75,6 +79,11 @@ public class StoneReadingsJsonTests
     [InlineData("""{"id":"x","refractometer":{"spot":1.5,"calibration_offset":1}}""", "refractometer.calibration_offset")]
     [InlineData("""{"id":"x","refractometer":{"over_limit":"maybe"}}""", "refractometer.over_limit")]
     [InlineData("""{"id":"x","sg":30}""", "sg")]
+    [InlineData("""{"id":"x","magnification":["curved_striae"]}""", "magnification")]
+    [InlineData("""{"id":"x","magnification":{"present":"curved_striae"}}""", "magnification.present")]
+    [InlineData("""{"id":"x","magnification":{"present":[3]}}""", "magnification.present[0]")]
+    [InlineData("""{"id":"x","magnification":{"present":["sparkles"]}}""", "magnification.present")]
+    [InlineData("""{"id":"x","magnification":{"present":["flux_residue"],"absent":["flux residue"]}}""", "magnification.absent")]
     [InlineData("""{"id":"x","sg":"2.65"}""", "sg")]
     [InlineData("""{"id":"x","sg":{"air_ct":-1,"water_ct":0.5}}""", "sg.air_ct")]
     [InlineData("""{"id":"x","sg":{"air_ct":1,"water_ct":1.2}}""", "sg.water_ct")]

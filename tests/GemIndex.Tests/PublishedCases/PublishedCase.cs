@@ -11,26 +11,48 @@ namespace GemIndex.Tests.PublishedCases;
 /// </summary>
 /// <remarks>
 /// Where magnification decided origin or treatment, <see cref="Origins"/> holds the origin the source gave and
-/// <see cref="FeaturesPresent"/> / <see cref="FeaturesAbsent"/> the features seen (or looked for and not seen), in the
-/// words of the magnification vocabulary. They are kept out of the batch line until the engine reads magnification.
+/// batch line's "magnification" object the features seen (or looked for and not seen), in the words of the
+/// magnification vocabulary; <see cref="FeaturesPresent"/> / <see cref="FeaturesAbsent"/> read them back from the line.
 /// </remarks>
 public sealed record PublishedCase(string Line, IReadOnlyList<string> Species, int BenchTests, string Source)
 {
     /// <summary>The catalogue's tourmaline species: a source that says "tourmaline" is right with any of them.</summary>
     public static IReadOnlyList<string> TourmalineGroup { get; } = ["elbaite", "dravite", "schorl", "uvite", "liddicoatite"];
 
+    /// <summary>The catalogue's man-made glass species: a source that says "glass" is right with any of them.</summary>
+    public static IReadOnlyList<string> GlassGroup { get; } =
+    [
+        "silica glass", "borosilicate glass", "soda-lime glass", "light lead glass", "lead flint glass", "dense lead glass", "extra-dense lead glass",
+        "highest-lead glass", "barium glass", "lanthanum glass", "lead-free high-index glass", "dense lead-free glass", "fibre-optic glass",
+    ];
+
+    /// <summary>The catalogue's assembled stones: a source that says "doublet" is right with any of them (its parts are not catalogued).</summary>
+    public static IReadOnlyList<string> AssembledGroup { get; } =
+        ["garnet-topped doublet", "opal doublet", "opal triplet", "quartz triplet", "spinel triplet", "corundum doublet", "diamond doublet", "jadeite triplet"];
+
     /// <summary>The origin the source gave (more than one for, say, a glass-filled synthetic); empty when not recorded.</summary>
     public IReadOnlyList<OriginClass> Origins { get; init; } = [];
 
-    /// <summary>Magnification features the source saw, as vocabulary words.</summary>
-    public IReadOnlyList<string> FeaturesPresent { get; init; } = [];
+    /// <summary>Magnification features the source saw, as vocabulary words (from the batch line).</summary>
+    public IReadOnlyList<string> FeaturesPresent => Magnification("present");
 
-    /// <summary>Magnification features the source says it looked for and did not see, as vocabulary words.</summary>
-    public IReadOnlyList<string> FeaturesAbsent { get; init; } = [];
+    /// <summary>Magnification features the source says it looked for and did not see, as vocabulary words (from the batch line).</summary>
+    public IReadOnlyList<string> FeaturesAbsent => Magnification("absent");
 
     /// <summary>True when the source says which features under magnification decided origin or treatment.</summary>
     public bool IsMagnificationCase => FeaturesPresent.Count > 0 || FeaturesAbsent.Count > 0 || Origins.Count > 0;
 
+    private List<string> Magnification(string part)
+    {
+        using var doc = System.Text.Json.JsonDocument.Parse(Line);
+        return doc.RootElement.TryGetProperty("magnification", out var m) && m.TryGetProperty(part, out var words)
+            ? [.. words.EnumerateArray().Select(w => w.GetString()!)]
+            : [];
+    }
+
     /// <summary>The species as the source names it: the group name for tourmaline, else the names joined.</summary>
-    public string Published => Species.SequenceEqual(TourmalineGroup) ? "tourmaline" : string.Join(" / ", Species);
+    public string Published => string.Join(" / ", Species.SequenceEqual(TourmalineGroup) ? ["tourmaline"]
+        : Species.SequenceEqual(GlassGroup) ? ["glass"]
+        : Species.Take(AssembledGroup.Count).SequenceEqual(AssembledGroup) ? ["doublet", .. Species.Skip(AssembledGroup.Count)]
+        : Species);
 }

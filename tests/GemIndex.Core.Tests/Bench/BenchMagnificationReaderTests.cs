@@ -1,0 +1,68 @@
+using GemIndex.Core.Bench;
+using GemIndex.Core.Magnification;
+
+namespace GemIndex.Core.Tests.Bench;
+
+public class BenchMagnificationReaderTests
+{
+    private static BenchReadings R(params (string Field, string Value)[] values) =>
+        values.Aggregate(new BenchReadings(), (r, v) => r.With(v.Field, v.Value));
+
+    [Fact]
+    public void Nothing_looked_for_gives_no_observation()
+    {
+        var reading = BenchReader.Read(R((BenchField.Sg, "3.99")));
+        Assert.Empty(reading.Errors);
+        Assert.Null(reading.Sheet.Magnification);
+    }
+
+    [Fact]
+    public void Words_separated_like_absorption_lines_are_read_into_seen_and_not_seen()
+    {
+        // A flame-fusion ruby as handbooks describe it: curved striae and round bubbles, no silk (common practice).
+        var reading = BenchReader.Read(R((BenchField.FeaturesPresent, "curved_striae, Round-Bubbles;round_bubbles"), (BenchField.FeaturesAbsent, "needles_silk")));
+        Assert.Empty(reading.Errors);
+        var observation = reading.Sheet.Magnification!;
+        Assert.Equal(new HashSet<MagnificationFeature> { MagnificationFeature.CurvedStriae, MagnificationFeature.RoundGasBubbles }, observation.Present);
+        Assert.Equal(new HashSet<MagnificationFeature> { MagnificationFeature.NeedlesAndSilk }, observation.Absent);
+    }
+
+    [Fact]
+    public void Only_absent_features_are_an_observation_too()
+    {
+        var observation = BenchReader.Read(R((BenchField.FeaturesAbsent, "curved_striae"))).Sheet.Magnification!;
+        Assert.Empty(observation.Present);
+        Assert.Single(observation.Absent);
+    }
+
+    [Fact]
+    public void An_unknown_word_names_the_field_the_word_and_the_allowed_words_shortened()
+    {
+        var reading = BenchReader.Read(R((BenchField.FeaturesPresent, "curved_striae sparkles")));
+        var error = Assert.Single(reading.Errors);
+        Assert.Equal(BenchField.FeaturesPresent, error.Field);
+        Assert.Equal("sparkles", error.Value);
+        Assert.Contains("curved_striae", error.Allowed);
+        Assert.Contains("'sparkles' is not a magnification feature", error.Sentence);
+        Assert.True(error.Allowed.Length <= BenchDefaults.LongestFeatureList + 20, error.Allowed);
+        Assert.Contains($"({MagnificationVocabulary.Words.Count} in all)", error.Allowed);
+        Assert.Null(reading.Sheet.Magnification);
+    }
+
+    [Fact]
+    public void A_word_both_seen_and_not_seen_is_an_error()
+    {
+        var reading = BenchReader.Read(R((BenchField.FeaturesPresent, "flux_residue"), (BenchField.FeaturesAbsent, "Flux_Residue curved_striae")));
+        var error = Assert.Single(reading.Errors);
+        Assert.Equal(BenchField.FeaturesAbsent, error.Field);
+        Assert.Contains("flux_residue", error.Sentence);
+        Assert.Null(reading.Sheet.Magnification);
+    }
+
+    [Fact]
+    public void An_empty_field_is_an_error()
+    {
+        var error = Assert.Single(BenchReader.Read(R((BenchField.FeaturesAbsent, "  "))).Errors);
+        Assert.Equal(BenchField.FeaturesAbsent, error.Field);
+    }
+}
