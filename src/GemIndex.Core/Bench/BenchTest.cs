@@ -27,4 +27,6 @@ public enum BenchTest
     Absorption,
     /// <summary>Body colour.</summary>
     Colour,
+    /// <summary>Loupe or microscope.</summary>
+    Magnification,
 }
