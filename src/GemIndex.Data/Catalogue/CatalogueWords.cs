@@ -1,16 +1,17 @@
 using System.Collections.Frozen;
-using System.Text;
+using GemIndex.Core.Bench;
 
 namespace GemIndex.Data.Catalogue;
 
 /// <summary>
-/// The lower-case words the catalogue files and database use for enumerations: VeryCommon ⇔ "very_common".
+/// The lower-case words the catalogue files and database use for enumerations: VeryCommon ⇔ "very_common", spelled by
+/// the bench's one rule (<see cref="BenchWords"/>) and looked up here from frozen tables, strictly (no other spelling).
 /// </summary>
 public static class CatalogueWords
 {
     /// <summary>The word for a value: VeryCommon → "very_common".</summary>
     public static string Of<T>(T value) where T : struct, Enum =>
-        Table<T>.ByValue.TryGetValue(value, out string? word) ? word : Spell(value.ToString());
+        Table<T>.ByValue.TryGetValue(value, out string? word) ? word : BenchWords.Word(value);
 
     /// <summary>The words of a set of forms, in declaration order: Crystal | Aggregate → crystal, aggregate.</summary>
     public static IEnumerable<string> OfForms(GemIndex.Core.Catalogue.MaterialForm forms) =>
@@ -35,22 +36,11 @@ public static class CatalogueWords
     /// <summary>The allowed words, comma-separated, for error messages.</summary>
     public static string Expected<T>() where T : struct, Enum => string.Join(", ", All<T>());
 
-    private static string Spell(string name)
-    {
-        var b = new StringBuilder(name.Length + 4);
-        for (int i = 0; i < name.Length; i++)
-        {
-            if (i > 0 && char.IsUpper(name[i])) b.Append('_');
-            b.Append(char.ToLowerInvariant(name[i]));
-        }
-        return b.ToString();
-    }
-
     // Immutable lookup tables, built once per enumeration (loading 10,000 entries parses ~100,000 words).
     private static class Table<T> where T : struct, Enum
     {
         public static readonly FrozenDictionary<T, string> ByValue =
-            Enum.GetValues<T>().ToFrozenDictionary(v => v, v => Spell(v.ToString()));
+            Enum.GetValues<T>().ToFrozenDictionary(v => v, v => BenchWords.Word(v));
 
         public static readonly FrozenDictionary<string, T> ByWord =
             ByValue.ToFrozenDictionary(p => p.Value, p => p.Key, StringComparer.Ordinal);
