@@ -153,6 +153,37 @@ keys F2
 wait_for "Notes         typed before the"
 keys F4
 wait_for "1.170"
+
+# ---- two stones with the same reference: both exported, neither report replaced ----
+first_md=$(ls "$tmp"/reports/e2e_quartz*.md | head -n 1)
+before=$(sha256sum "$first_md" | cut -d' ' -f1)
+keys C-n; text "e2e quartz"                # the first stone's reference again
+wait_for "Reference     e2e quartz"
+keys F4; text "2.66"
+wait_match "│Quartz [0-9]+%"
+keys C-e
+wait_for "Reports written"
+keys Enter
+for ext in md html json; do
+  count=$(ls "$tmp"/reports/e2e_quartz*."$ext" | wc -l)
+  (( count == 2 )) || fail "expected two e2e_quartz*.$ext reports after exporting two stones of one reference, found $count"
+done
+[[ "$(sha256sum "$first_md" | cut -d' ' -f1)" == "$before" ]] || fail "the first stone's report was replaced"
 keys C-q
 wait_for "EXIT=0" 15
-echo "PASS tui e2e: three stones identified by species, focus order, candidate 3 and its detail, scales, export, kill and reopen"
+tmux kill-session -t "$session"
+
+# ---- a read-only workbook: it opens, shows its stones, says so, and changes nothing ----
+chmod a-w "$workbook"
+wb_before=$(sha256sum "$workbook" | cut -d' ' -f1)
+start
+wait_for "READ-ONLY"                       # said on the key line from the start
+wait_for "e2e quartz"                      # the last stone opens, readable
+keys F2; text "x"                          # typing changes the form but is never saved
+wait_for "READ-ONLY"
+echo "---- 80x24 read-only ----"; screen
+keys C-q
+wait_for "EXIT=0" 15
+[[ "$(sha256sum "$workbook" | cut -d' ' -f1)" == "$wb_before" ]] || fail "the read-only workbook changed"
+chmod u+w "$workbook"
+echo "PASS tui e2e: three stones identified by species, focus order, candidate 3 and its detail, scales, export, kill and reopen, colliding references exported without loss, a read-only workbook"
