@@ -49,11 +49,13 @@ internal static class HtmlReport
             foreach (var s in rf.Readings)
                 h.AppendLine($"<tr>{Number(ReportNumbers.Degrees(s.RotationDeg))}{Number(ReportNumbers.Index(s.Low))}{Number(s.High is { } hi ? ReportNumbers.Index(hi) : "—")}</tr>");
             h.AppendLine("</table>");
+            h.Append("<figure>").Append(ReportPlots.EdgePlot(rf.Readings)).AppendLine("<figcaption>The shadow edges against rotation.</figcaption></figure>");
         }
         if (report.ReadingFields.Count == 0 && report.Readings.Refractometer is null) h.AppendLine("<p>No readings recorded.</p>");
         Fields(h, report.ReadingFields);
         Section(h, "Derived properties");
         Fields(h, [.. ReportDerived.Fields(report)]);
+        Scales(h, report);
         List(h, [.. report.Interpretations.Select(ReportDerived.Line)], "");
         List(h, [.. report.Misreadings.Select(m => "Possible misreading: " + m)], "");
         Candidates(h, report);
@@ -85,6 +87,26 @@ internal static class HtmlReport
             List(h, [.. c.Reasons.Select(r => $"{(r.Agrees ? "agrees" : "against")} ({BenchTestWords.DisplayOfWire(r.Test)}, {ReportNumbers.Bits(r.WeightBits)}): {r.Text}")], "");
         }
     }
+
+    /// <summary>The lowest index and the SG as read, against the three leading candidates' ranges.</summary>
+    private static void Scales(StringBuilder h, StoneReport report)
+    {
+        var leading = report.Result.Candidates.Take(ScaleCandidates).Select(c => c.Material).ToList();
+        if (leading.Count == 0) return;
+        if (report.Readings.Refractometer is { Readings.Count: > 0 } rf)
+        {
+            double lowest = rf.Readings.Min(s => s.Low);
+            double sigma = rf.Precision ?? BenchDefaults.FacetPrecision;
+            h.Append("<figure>").Append(ReportPlots.Scale("lowest index", lowest, sigma,
+                [.. leading.Select(m => (m.Name, m.Indices.Lowest.Minimum, m.Indices.Lowest.Maximum))])).AppendLine("</figure>");
+        }
+        if (report.SpecificGravity is { } sg)
+            h.Append("<figure>").Append(ReportPlots.Scale("SG", sg.Value, sg.StandardUncertainty,
+                [.. leading.Select(m => (m.Name, m.SpecificGravity.Minimum, m.SpecificGravity.Maximum))])).AppendLine("</figure>");
+    }
+
+    /// <summary>How many leading candidates the scales show.</summary>
+    private const int ScaleCandidates = 3;
 
     private static void Section(StringBuilder h, string title) => h.Append("<h2>").Append(E(title)).AppendLine("</h2>");
 

@@ -1,0 +1,80 @@
+using System.Globalization;
+using System.Text;
+using GemIndex.Data.Batch;
+
+namespace GemIndex.Cli.Reports;
+
+/// <summary>
+/// Small inline SVG drawings for the HTML report: the shadow edges against rotation, and a reading against the leading
+/// candidates' ranges. Plain shapes only (no scripts, no external assets), so the page prints as it shows; inline SVG in
+/// HTML5 needs no namespace attribute.
+/// </summary>
+internal static class ReportPlots
+{
+    private const int Width = 480, Height = 200, Left = 56, Right = 12, Top = 12, Bottom = 32;
+
+    /// <summary>The low (filled) and high (open) edges of each rotation step, rotation across, index up.</summary>
+    public static string EdgePlot(IReadOnlyList<EdgeReadingEntry> steps)
+    {
+        double low = steps.Min(s => s.Low), high = steps.Max(s => s.High ?? s.Low);
+        double pad = Math.Max(0.002, (high - low) * 0.1);
+        double yMin = low - pad, yMax = high + pad;
+        double X(double degrees) => Left + (Width - Left - Right) * (degrees % 180) / 180;
+        double Y(double index) => Top + (Height - Top - Bottom) * (yMax - index) / (yMax - yMin);
+        var svg = Open("Shadow edges against rotation");
+        Axes(svg);
+        foreach (double d in new[] { 0.0, 45, 90, 135, 180 })
+            svg.Append(Text(X(d == 180 ? 179.999 : d) + (d == 180 ? (Width - Left - Right) / 180.0 : 0), Height - Bottom + 16, F(d, "0") + "°", "middle"));
+        for (int i = 0; i <= 4; i++)
+        {
+            double index = yMin + (yMax - yMin) * i / 4;
+            svg.Append(Text(Left - 6, Y(index) + 4, F(index, "0.000"), "end"));
+        }
+        foreach (var s in steps)
+        {
+            svg.Append(Circle(X(s.RotationDeg), Y(s.Low), filled: true));
+            if (s.High is { } h) svg.Append(Circle(X(s.RotationDeg), Y(h), filled: false));
+        }
+        svg.Append(Text(Left + 4, Top + 10, "● low edge   ○ high edge", "start"));
+        return svg.Append("</svg>").ToString();
+    }
+
+    /// <summary>A reading (with its uncertainty) against candidates' ranges, one bar each.</summary>
+    public static string Scale(string title, double reading, double uncertainty, IReadOnlyList<(string Name, double Minimum, double Maximum)> ranges)
+    {
+        double lo = Math.Min(reading - 3 * uncertainty, ranges.Min(r => r.Minimum)), hi = Math.Max(reading + 3 * uncertainty, ranges.Max(r => r.Maximum));
+        double pad = Math.Max(1e-3, (hi - lo) * 0.08);
+        lo -= pad; hi += pad;
+        const int nameWidth = 170, row = 18;
+        int height = Top + row * ranges.Count + Bottom;
+        double X(double v) => nameWidth + (Width - nameWidth - Right) * (v - lo) / (hi - lo);
+        var svg = new StringBuilder($"<svg width=\"{Width}\" height=\"{height}\" viewBox=\"0 0 {Width} {height}\" role=\"img\" aria-label=\"{HtmlReport.E(title)}\">");
+        for (int i = 0; i < ranges.Count; i++)
+        {
+            var r = ranges[i];
+            double y = Top + row * i;
+            svg.Append(Text(nameWidth - 6, y + 12, r.Name.Length > 26 ? r.Name[..25] + "…" : r.Name, "end"));
+            svg.Append($"<rect x=\"{F(X(r.Minimum))}\" y=\"{F(y + 4)}\" width=\"{F(Math.Max(2, X(r.Maximum) - X(r.Minimum)))}\" height=\"10\" fill=\"#bbb\" stroke=\"#444\"/>");
+        }
+        double bottom = Top + row * ranges.Count;
+        svg.Append($"<rect x=\"{F(X(reading - uncertainty))}\" y=\"{F(Top)}\" width=\"{F(Math.Max(1, X(reading + uncertainty) - X(reading - uncertainty)))}\" height=\"{F(bottom - Top)}\" fill=\"none\" stroke=\"#111\" stroke-dasharray=\"3 2\"/>");
+        svg.Append($"<line x1=\"{F(X(reading))}\" y1=\"{F(Top)}\" x2=\"{F(X(reading))}\" y2=\"{F(bottom)}\" stroke=\"#111\" stroke-width=\"2\"/>");
+        svg.Append(Text(X(reading), bottom + 14, $"{title}: {F(reading, "0.000")} ± {F(uncertainty, "0.000")}", "middle"));
+        svg.Append(Text(nameWidth, bottom + 28, F(lo, "0.000"), "start")).Append(Text(Width - Right, bottom + 28, F(hi, "0.000"), "end"));
+        return svg.Append("</svg>").ToString();
+    }
+
+    private static StringBuilder Open(string title) =>
+        new($"<svg width=\"{Width}\" height=\"{Height}\" viewBox=\"0 0 {Width} {Height}\" role=\"img\" aria-label=\"{HtmlReport.E(title)}\">");
+
+    private static void Axes(StringBuilder svg) =>
+        svg.Append($"<rect x=\"{Left}\" y=\"{Top}\" width=\"{Width - Left - Right}\" height=\"{Height - Top - Bottom}\" fill=\"none\" stroke=\"#444\"/>");
+
+    private static string Circle(double x, double y, bool filled) =>
+        $"<circle cx=\"{F(x)}\" cy=\"{F(y)}\" r=\"3.5\" fill=\"{(filled ? "#111" : "#fff")}\" stroke=\"#111\"/>";
+
+    private static string Text(double x, double y, string text, string anchor) =>
+        $"<text x=\"{F(x)}\" y=\"{F(y)}\" font-size=\"11\" text-anchor=\"{anchor}\">{HtmlReport.E(text)}</text>";
+
+    private static string F(double v, string format = "0.#") => v.ToString(format, CultureInfo.InvariantCulture);
+}
