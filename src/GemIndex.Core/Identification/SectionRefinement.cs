@@ -51,8 +51,8 @@ internal static class SectionRefinement
             var shape = prior.Shapes[start.Shape];
             if (shape.Group < 0) continue;
             var problem = new Peak(prior, series, shift, offsetVariance, nearLimit, shape, FacetOrientationSet.Points[start.Point]);
-            if (!problem.Climb(out double logValue, out double peakTail, out double[] edges)) continue;
-            if (peaks.Any(p => p.Group == shape.Group && Same(p.Edges, edges))) continue;
+            if (!problem.Climb(e => peaks.Any(p => p.Group == shape.Group && Same(p.Edges, e)), out double logValue, out double peakTail, out double[] edges))
+                continue;
             peaks.Add((shape.Group, edges));
             total.Include(logValue);
             tail = Math.Max(tail, peakTail);
@@ -170,7 +170,11 @@ internal static class SectionRefinement
         /// Levenberg–Marquardt on the residuals (Gauss–Newton with a damping that shrinks on success), then Laplace's
         /// method with the full curvature of the log-integrand at the peak (central differences).
         /// </summary>
-        public bool Climb(out double logIntegral, out double tail, out double[] edges)
+        /// <remarks>
+        /// A climb that ends on a peak already counted (<paramref name="known"/> on its predicted edges) stops there, before
+        /// the curvature: that peak is counted once whatever its width.
+        /// </remarks>
+        public bool Climb(Func<double[], bool> known, out double logIntegral, out double tail, out double[] edges)
         {
             logIntegral = double.NegativeInfinity;
             edges = [];
@@ -207,6 +211,10 @@ internal static class SectionRefinement
                 for (int i = 0; i < d; i++) largest = Math.Max(largest, Math.Abs(step[i]));
                 if (!moved || largest < 1e-4) break;
             }
+            // The value, goodness of fit and predicted edges at the peak (r keeps the same residuals).
+            value = Value(x, true, out tail, r, out _);
+            edges = [.. _edges];
+            if (known(edges)) return false;
             // The peak's width from the full curvature of the log-integrand (level density, edge-count factors and the prior
             // included); the Gauss–Newton curvature stands in when that is not negative definite.
             FullCurvature(x, value, r, curvature);
@@ -218,10 +226,8 @@ internal static class SectionRefinement
                 logDeterminant = LogDeterminant(Bounded(curvature, x), d, factor);
             }
             if (!double.IsFinite(logDeterminant)) return false;
-            value = Value(x, true, out tail, r, out _);
             int shapeDimensions = (_freeBirefringence ? 1 : 0) + (_freeBeta ? 1 : 0);
             logIntegral = value + d / 2.0 * Math.Log(2 * Math.PI) - logDeterminant / 2 + shapeDimensions * Math.Log(ShapeUnit);
-            edges = [.. _edges];
             return true;
         }
 
