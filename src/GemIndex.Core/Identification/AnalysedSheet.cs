@@ -1,4 +1,3 @@
-using System.Collections.Concurrent;
 using GemIndex.Core.Readings;
 
 namespace GemIndex.Core.Identification;
@@ -25,7 +24,9 @@ public sealed record AnalysedSheet
     }
 
     private readonly Lazy<double>? _broad;
-    private readonly ConcurrentDictionary<IndicatrixPrior, SectionLikelihood.Outcome> _outcomes = new();
+    // One stone is ranked on one thread, so a plain dictionary under an uncontended lock (cheaper per stone than a
+    // concurrent one) keeps the sheet safe to share.
+    private readonly Dictionary<IndicatrixPrior, SectionLikelihood.Outcome> _outcomes = [];
 
     /// <summary>The series as the section model reads it, when there are readings.</summary>
     internal SeriesObservation? Observation { get; }
@@ -33,9 +34,15 @@ public sealed record AnalysedSheet
     /// <summary>ln p(series | not in the catalogue), worked out once per stone.</summary>
     internal double BroadSeriesLogLikelihood => _broad?.Value ?? 0;
 
-    /// <summary>The section model's outcome for a prior, worked out once per stone however many entries share it.</summary>
-    internal SectionLikelihood.Outcome SeriesOutcome(IndicatrixPrior prior, Func<SectionLikelihood.Outcome> evaluate) =>
-        _outcomes.GetOrAdd(prior, _ => evaluate());
+    /// <summary>The section model's outcome for a prior in 589.3 nm light, worked out once per stone however many entries share it.</summary>
+    internal SectionLikelihood.Outcome SeriesOutcome(IndicatrixPrior prior)
+    {
+        lock (_outcomes)
+            if (_outcomes.TryGetValue(prior, out var known)) return known;
+        var outcome = SectionLikelihood.Evaluate(prior, Observation!, 0, 0);
+        lock (_outcomes) _outcomes[prior] = outcome;
+        return outcome;
+    }
 
     /// <summary>The sheet as entered.</summary>
     public BenchSheet Sheet { get; }

@@ -62,9 +62,7 @@ public static class ColourWords
     public static double Probability(IReadOnlySet<string> seen, IReadOnlyList<string> listed)
     {
         if (listed.Count == 0) return BroadProbability;
-        double total = 0;
-        for (int i = 0; i < listed.Count; i++) total += Math.Pow(RankDecay, i);
-        var neighbours = listed.SelectMany(h => Neighbours.TryGetValue(h, out var near) ? near : []).Where(h => !listed.Contains(h)).Distinct().ToList();
+        var (total, neighbours) = ListedParts.GetValue(listed, Parts);
         double best = 0;
         foreach (string hue in seen)
         {
@@ -76,6 +74,18 @@ public static class ColourWords
             best = Math.Max(best, p);
         }
         return best;
+    }
+
+    // The rank weights' total and the listed colours' neighbours depend on the list alone: worked out once per list (the
+    // ranking asks for every entry on every stone).
+    private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<IReadOnlyList<string>, Tuple<double, List<string>>> ListedParts = new();
+
+    private static Tuple<double, List<string>> Parts(IReadOnlyList<string> listed)
+    {
+        double total = 0;
+        for (int i = 0; i < listed.Count; i++) total += Math.Pow(RankDecay, i);
+        var neighbours = listed.SelectMany(h => Neighbours.TryGetValue(h, out var near) ? near : []).Where(h => !listed.Contains(h)).Distinct().ToList();
+        return Tuple.Create(total, neighbours);
     }
 
     private static int IndexOf(IReadOnlyList<string> list, string value)

@@ -114,11 +114,31 @@ public sealed class Identifier
     private int[] SpeciesFirst(double[] posterior)
     {
         int[] byEntry = Ranked(posterior);
-        var totals = new Dictionary<string, double>();
-        foreach (int i in byEntry) totals[_materials[i].Species] = totals.GetValueOrDefault(_materials[i].Species) + posterior[i];
-        var speciesRank = totals.Keys.Select((name, index) => (name, index))
-            .OrderByDescending(x => totals[x.name]).ThenBy(x => x.index).Select((x, rank) => (x.name, rank)).ToDictionary(x => x.name, x => x.rank);
-        return [.. byEntry.Select((i, position) => (i, position)).OrderBy(x => speciesRank[_materials[x.i].Species]).ThenBy(x => x.position).Select(x => x.i)];
+        // Species numbered in the order they first appear in byEntry; their totals summed in that same order.
+        var number = new Dictionary<string, int>();
+        var speciesOf = new int[byEntry.Length];
+        var totals = new List<double>();
+        for (int position = 0; position < byEntry.Length; position++)
+        {
+            int i = byEntry[position];
+            if (!number.TryGetValue(_materials[i].Species, out int k)) number[_materials[i].Species] = k = totals.Count;
+            if (k == totals.Count) totals.Add(0);
+            totals[k] += posterior[i];
+            speciesOf[position] = k;
+        }
+        var species = new int[totals.Count];
+        for (int k = 0; k < species.Length; k++) species[k] = k;
+        Array.Sort(species, (a, b) => totals[b].CompareTo(totals[a]) is var c && c != 0 ? c : a.CompareTo(b));
+        // Each species' entries follow its total, in their own order.
+        var rankOf = new int[species.Length];
+        for (int rank = 0; rank < species.Length; rank++) rankOf[species[rank]] = rank;
+        var counts = new int[species.Length];
+        for (int position = 0; position < byEntry.Length; position++) counts[rankOf[speciesOf[position]]]++;
+        var offset = new int[species.Length];
+        for (int rank = 1; rank < species.Length; rank++) offset[rank] = offset[rank - 1] + counts[rank - 1];
+        var order = new int[byEntry.Length];
+        for (int position = 0; position < byEntry.Length; position++) order[offset[rankOf[speciesOf[position]]]++] = byEntry[position];
+        return order;
     }
 
     /// <summary>

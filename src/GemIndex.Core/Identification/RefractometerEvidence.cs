@@ -72,7 +72,7 @@ internal static class RefractometerEvidence
         SectionLikelihood.Outcome outcome = Screened(prior, series, shift, shiftSigma)
             ? new(double.NegativeInfinity, 0)
             : shiftSigma == 0 && shift == 0
-                ? sheet.SeriesOutcome(prior, () => SectionLikelihood.Evaluate(prior, series, 0, 0))
+                ? sheet.SeriesOutcome(prior)
                 : SectionLikelihood.Evaluate(prior, series, shift, shiftSigma);
         double form = FormFactor(m, series);
         acc.AddLog("refractometer", outcome.LogLikelihood + Math.Log(form), broad, outcome.Tail * Math.Min(1, 2 * form), robust: true);

@@ -51,8 +51,8 @@ internal static class SectionRefinement
             var shape = prior.Shapes[start.Shape];
             if (shape.Group < 0) continue;
             var problem = new Peak(prior, series, shift, offsetVariance, nearLimit, shape, FacetOrientationSet.Points[start.Point]);
-            if (!problem.Climb(out double logValue, out double peakTail, out double[] edges)) continue;
-            if (peaks.Any(p => p.Group == shape.Group && Same(p.Edges, edges))) continue;
+            if (!problem.Climb(e => peaks.Any(p => p.Group == shape.Group && Same(p.Edges, e)), out double logValue, out double peakTail, out double[] edges))
+                continue;
             peaks.Add((shape.Group, edges));
             total.Include(logValue);
             tail = Math.Max(tail, peakTail);
@@ -170,53 +170,64 @@ internal static class SectionRefinement
         /// Levenberg–Marquardt on the residuals (Gauss–Newton with a damping that shrinks on success), then Laplace's
         /// method with the full curvature of the log-integrand at the peak (central differences).
         /// </summary>
-        public bool Climb(out double logIntegral, out double tail, out double[] edges)
+        /// <remarks>
+        /// A climb that ends on a peak already counted (<paramref name="known"/> on its predicted edges) stops there, before
+        /// the curvature: that peak is counted once whatever its width.
+        /// </remarks>
+        public bool Climb(Func<double[], bool> known, out double logIntegral, out double tail, out double[] edges)
         {
             logIntegral = double.NegativeInfinity;
             edges = [];
             int d = _x.Length, m = 2 * _series.Count;
-            double[] x = [.. _x], r = new double[m], trialResiduals = new double[m], column = new double[m];
+            // Matrices are flat, row-major d×d (d ≤ 5), in buffers made once per climb: the climb runs for every start of
+            // every material on every stone.
+            double[] x = [.. _x], trial = new double[d], step = new double[d], gradient = new double[d], work = new double[d];
+            double[] r = new double[m], trialResiduals = new double[m], column = new double[m];
+            double[] jacobian = new double[m * d], curvature = new double[d * d], factor = new double[d * d];
             double value = Value(x, false, out tail, r, out int count);
             if (!double.IsFinite(value)) return false;
-            var jacobian = new double[m, d];
-            var curvature = new double[d, d];
             double damping = 1e-3;
             for (int iteration = 0; iteration < Iterations; iteration++)
             {
                 if (!Jacobian(x, r, count, jacobian, column)) return false;
-                var (gradient, normal) = NormalEquations(jacobian, r, count, d, curvature);
+                NormalEquations(jacobian, r, count, d, gradient, curvature);
                 bool moved = false;
-                double[] step = [];
                 for (int attempt = 0; attempt < 4 && !moved; attempt++)
                 {
-                    step = Solve(normal, gradient, damping) ?? new double[d];
+                    if (!Solve(curvature, gradient, damping, step, factor, work)) Array.Clear(step);
                     Limit(step);
-                    double[] trial = [.. x.Select((xi, i) => xi + step[i])];
+                    for (int i = 0; i < d; i++) trial[i] = x[i] + step[i];
                     double v = Value(trial, false, out _, trialResiduals, out int trialCount);
                     if (v > value)
                     {
-                        (x, value, count, moved) = (trial, v, trialCount, true);
+                        (x, trial) = (trial, x);
+                        (value, count, moved) = (v, trialCount, true);
                         Array.Copy(trialResiduals, r, m);
                         damping = Math.Max(damping / 4, 1e-6);
                     }
                     else damping *= 8;
                 }
-                if (!moved || step.Max(Math.Abs) < 1e-4) break;
+                double largest = 0;
+                for (int i = 0; i < d; i++) largest = Math.Max(largest, Math.Abs(step[i]));
+                if (!moved || largest < 1e-4) break;
             }
+            // The value, goodness of fit and predicted edges at the peak (r keeps the same residuals).
+            value = Value(x, true, out tail, r, out _);
+            edges = [.. _edges];
+            if (known(edges)) return false;
             // The peak's width from the full curvature of the log-integrand (level density, edge-count factors and the prior
             // included); the Gauss–Newton curvature stands in when that is not negative definite.
-            double logDeterminant = LogDeterminant(Bounded(FullCurvature(x, value, r), x));
+            FullCurvature(x, value, r, curvature);
+            double logDeterminant = LogDeterminant(Bounded(curvature, x), d, factor);
             if (!double.IsFinite(logDeterminant))
             {
                 if (!Jacobian(x, r, count, jacobian, column)) return false;
-                NormalEquations(jacobian, r, count, d, curvature);
-                logDeterminant = LogDeterminant(Bounded(curvature, x));
+                NormalEquations(jacobian, r, count, d, gradient, curvature);
+                logDeterminant = LogDeterminant(Bounded(curvature, x), d, factor);
             }
             if (!double.IsFinite(logDeterminant)) return false;
-            value = Value(x, true, out tail, r, out _);
             int shapeDimensions = (_freeBirefringence ? 1 : 0) + (_freeBeta ? 1 : 0);
             logIntegral = value + d / 2.0 * Math.Log(2 * Math.PI) - logDeterminant / 2 + shapeDimensions * Math.Log(ShapeUnit);
-            edges = [.. _edges];
             return true;
         }
 
@@ -225,7 +236,7 @@ internal static class SectionRefinement
         /// direction (a biaxial shape with β at α is round about an axis) the Gaussian would otherwise claim far more than
         /// the parameter's domain. The orientation angles' range is taken as π; the shape's, its box.
         /// </summary>
-        private double[,] Bounded(double[,] curvature, double[] x)
+        private double[] Bounded(double[] curvature, double[] x)
         {
             int d = x.Length, angles = _biaxial ? 3 : 2;
             for (int i = 0; i < d; i++)
@@ -233,7 +244,7 @@ internal static class SectionRefinement
                 double range = i < angles ? Math.PI
                     : i == angles && _freeBirefringence ? (_family.BirefringenceHigh - _family.BirefringenceLow) / ShapeUnit
                     : BetaWidth(x) / ShapeUnit;
-                curvature[i, i] += 2 * Math.PI / Math.Max(range * range, 1e-12);
+                curvature[i * d + i] += 2 * Math.PI / Math.Max(range * range, 1e-12);
             }
             return curvature;
         }
@@ -245,36 +256,38 @@ internal static class SectionRefinement
             return high - low;
         }
 
-        /// <summary>−∂²ℓ/∂x² by central differences of the log-integrand itself.</summary>
-        private double[,] FullCurvature(double[] x, double centre, double[] scratch)
+        /// <summary>−∂²ℓ/∂x² by central differences of the log-integrand itself, into <paramref name="curvature"/>.</summary>
+        private void FullCurvature(double[] x, double centre, double[] scratch, double[] curvature)
         {
             int d = x.Length, angles = _biaxial ? 3 : 2;
-            var h = new double[d];
+            Span<double> h = stackalloc double[d];
             for (int i = 0; i < d; i++) h[i] = i < angles ? 0.004 : 0.05;
             double[] y = [.. x];
-            double F(int i, double di, int j, double dj)
-            {
-                Array.Copy(x, y, d);
-                y[i] += di;
-                y[j] += dj;
-                double v = Value(y, false, out _, scratch, out _);
-                return double.IsFinite(v) ? v : centre - 1e3; // outside the box: a steep wall
-            }
-            var curvature = new double[d, d];
             for (int i = 0; i < d; i++)
             {
-                curvature[i, i] = -(F(i, h[i], i, 0) - 2 * centre + F(i, -h[i], i, 0)) / (h[i] * h[i]);
+                curvature[i * d + i] = -(Moved(x, y, centre, scratch, i, h[i], i, 0) - 2 * centre + Moved(x, y, centre, scratch, i, -h[i], i, 0)) / (h[i] * h[i]);
                 for (int j = 0; j < i; j++)
-                    curvature[i, j] = curvature[j, i] = -(F(i, h[i], j, h[j]) - F(i, h[i], j, -h[j]) - F(i, -h[i], j, h[j]) + F(i, -h[i], j, -h[j])) / (4 * h[i] * h[j]);
+                    curvature[i * d + j] = curvature[j * d + i] =
+                        -(Moved(x, y, centre, scratch, i, h[i], j, h[j]) - Moved(x, y, centre, scratch, i, h[i], j, -h[j])
+                          - Moved(x, y, centre, scratch, i, -h[i], j, h[j]) + Moved(x, y, centre, scratch, i, -h[i], j, -h[j])) / (4 * h[i] * h[j]);
             }
-            return curvature;
         }
 
-        /// <summary>∂r/∂x by forward differences; false when the readings' pairing changes under a small move (no smooth peak).</summary>
-        private bool Jacobian(double[] x, double[] r, int count, double[,] jacobian, double[] column)
+        /// <summary>The log-integrand at x moved by di along i and dj along j; outside the box, a steep wall.</summary>
+        private double Moved(double[] x, double[] y, double centre, double[] scratch, int i, double di, int j, double dj)
         {
-            int angles = _biaxial ? 3 : 2;
-            for (int i = 0; i < x.Length; i++)
+            Array.Copy(x, y, x.Length);
+            y[i] += di;
+            y[j] += dj;
+            double v = Value(y, false, out _, scratch, out _);
+            return double.IsFinite(v) ? v : centre - 1e3;
+        }
+
+        /// <summary>∂r/∂x by forward differences (row-major m×d); false when the readings' pairing changes under a small move (no smooth peak).</summary>
+        private bool Jacobian(double[] x, double[] r, int count, double[] jacobian, double[] column)
+        {
+            int angles = _biaxial ? 3 : 2, d = x.Length;
+            for (int i = 0; i < d; i++)
             {
                 double h = i < angles ? 0.002 : 0.02;
                 double keep = x[i];
@@ -288,53 +301,49 @@ internal static class SectionRefinement
                 }
                 x[i] = keep;
                 if (!double.IsFinite(v) || n != count) return false;
-                for (int k = 0; k < count; k++) jacobian[k, i] = (column[k] - r[k]) / h;
+                for (int k = 0; k < count; k++) jacobian[k * d + i] = (column[k] - r[k]) / h;
             }
             return true;
         }
 
-        private static (double[] Gradient, double[,] Normal) NormalEquations(double[,] jacobian, double[] r, int count, int d, double[,] normal)
+        /// <summary>The gradient −Jᵀr and the Gauss–Newton matrix JᵀJ, into the given buffers.</summary>
+        private static void NormalEquations(double[] jacobian, double[] r, int count, int d, double[] gradient, double[] normal)
         {
-            var gradient = new double[d];
             for (int i = 0; i < d; i++)
             {
                 double g = 0;
-                for (int k = 0; k < count; k++) g -= jacobian[k, i] * r[k];
+                for (int k = 0; k < count; k++) g -= jacobian[k * d + i] * r[k];
                 gradient[i] = g;
                 for (int j = 0; j <= i; j++)
                 {
                     double a = 0;
-                    for (int k = 0; k < count; k++) a += jacobian[k, i] * jacobian[k, j];
-                    normal[i, j] = normal[j, i] = a;
+                    for (int k = 0; k < count; k++) a += jacobian[k * d + i] * jacobian[k * d + j];
+                    normal[i * d + j] = normal[j * d + i] = a;
                 }
             }
-            return (gradient, normal);
         }
 
-        /// <summary>Solves (A + μ·diag(A)) Δ = g by Cholesky; null when not positive definite.</summary>
-        private static double[]? Solve(double[,] normal, double[] gradient, double damping)
+        /// <summary>Solves (A + μ·diag(A)) Δ = g by Cholesky into <paramref name="step"/>; false when not positive definite.</summary>
+        private static bool Solve(double[] normal, double[] gradient, double damping, double[] step, double[] factor, double[] work)
         {
             int d = gradient.Length;
-            var a = new double[d, d];
+            Span<double> a = stackalloc double[d * d];
             for (int i = 0; i < d; i++)
-                for (int j = 0; j < d; j++) a[i, j] = normal[i, j] + (i == j ? damping * normal[i, i] + 1e-9 : 0);
-            var l = Cholesky(a);
-            if (l is null) return null;
-            var y = new double[d];
+                for (int j = 0; j < d; j++) a[i * d + j] = normal[i * d + j] + (i == j ? damping * normal[i * d + i] + 1e-9 : 0);
+            if (!Cholesky(a, d, factor)) return false;
             for (int i = 0; i < d; i++)
             {
                 double s = gradient[i];
-                for (int k = 0; k < i; k++) s -= l[i, k] * y[k];
-                y[i] = s / l[i, i];
+                for (int k = 0; k < i; k++) s -= factor[i * d + k] * work[k];
+                work[i] = s / factor[i * d + i];
             }
-            var step = new double[d];
             for (int i = d - 1; i >= 0; i--)
             {
-                double s = y[i];
-                for (int k = i + 1; k < d; k++) s -= l[k, i] * step[k];
-                step[i] = s / l[i, i];
+                double s = work[i];
+                for (int k = i + 1; k < d; k++) s -= factor[k * d + i] * step[k];
+                step[i] = s / factor[i * d + i];
             }
-            return step;
+            return true;
         }
 
         private void Limit(double[] step)
@@ -347,32 +356,30 @@ internal static class SectionRefinement
             }
         }
 
-        /// <summary>The Cholesky factor L of a symmetric matrix A = L Lᵀ, or null when A is not positive definite.</summary>
-        private static double[,]? Cholesky(double[,] a)
+        /// <summary>The Cholesky factor L of a symmetric d×d matrix A = L Lᵀ into <paramref name="l"/>; false when A is not positive definite.</summary>
+        private static bool Cholesky(ReadOnlySpan<double> a, int d, double[] l)
         {
-            int d = a.GetLength(0);
-            var l = new double[d, d];
+            Array.Clear(l);
             for (int i = 0; i < d; i++)
                 for (int j = 0; j <= i; j++)
                 {
-                    double s = a[i, j];
-                    for (int k = 0; k < j; k++) s -= l[i, k] * l[j, k];
+                    double s = a[i * d + j];
+                    for (int k = 0; k < j; k++) s -= l[i * d + k] * l[j * d + k];
                     if (i == j)
                     {
-                        if (!(s > 0)) return null;
-                        l[i, i] = Math.Sqrt(s);
+                        if (!(s > 0)) return false;
+                        l[i * d + i] = Math.Sqrt(s);
                     }
-                    else l[i, j] = s / l[j, j];
+                    else l[i * d + j] = s / l[j * d + j];
                 }
-            return l;
+            return true;
         }
 
-        private static double LogDeterminant(double[,] a)
+        private static double LogDeterminant(double[] a, int d, double[] l)
         {
-            var l = Cholesky(a);
-            if (l is null) return double.NaN;
+            if (!Cholesky(a, d, l)) return double.NaN;
             double sum = 0;
-            for (int i = 0; i < a.GetLength(0); i++) sum += 2 * Math.Log(l[i, i]);
+            for (int i = 0; i < d; i++) sum += 2 * Math.Log(l[i * d + i]);
             return sum;
         }
     }
