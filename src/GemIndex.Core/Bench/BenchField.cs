@@ -9,6 +9,12 @@ public static class BenchField
 {
     /// <summary>The stone's reference.</summary>
     public const string Id = "id";
+
+    /// <summary>The refractometer as a test (its fields are "refractometer.…").</summary>
+    public const string Refractometer = "refractometer";
+
+    /// <summary>Magnification as a test (its fields are "magnification.…").</summary>
+    public const string Magnification = "magnification";
     /// <summary>"facet" or "spot"; by default spot when only a spot reading is given.</summary>
     public const string Method = "refractometer.method";
     /// <summary>A spot reading.</summary>

@@ -8,7 +8,7 @@ public static class BenchTestWords
 {
     private static readonly (BenchTest Test, string Wire, string Display)[] Table =
     [
-        (BenchTest.Refractometer, "refractometer", "refractometer"),
+        (BenchTest.Refractometer, BenchField.Refractometer, "refractometer"),
         (BenchTest.SpecificGravity, BenchField.Sg, "specific gravity (hydrostatic weighing)"),
         (BenchTest.HeavyLiquids, BenchField.HeavyLiquids, "heavy liquids"),
         (BenchTest.Polariscope, BenchField.Polariscope, "polariscope"),
@@ -20,7 +20,7 @@ public static class BenchTestWords
         (BenchTest.UvShort, BenchField.UvShort, "short-wave UV lamp (254 nm)"),
         (BenchTest.Absorption, BenchField.Absorption, "hand spectroscope (absorption lines)"),
         (BenchTest.Colour, BenchField.Colour, "colour"),
-        (BenchTest.Magnification, "magnification", "loupe or microscope (magnification)"),
+        (BenchTest.Magnification, BenchField.Magnification, "loupe or microscope (magnification)"),
     ];
 
     /// <summary>The wire word: SpecificGravity → "sg".</summary>

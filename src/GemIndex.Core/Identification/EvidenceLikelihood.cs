@@ -1,3 +1,4 @@
+using GemIndex.Core.Bench;
 using System.Globalization;
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Gravity;
@@ -41,15 +42,15 @@ public static class EvidenceLikelihood
         if (s.Dispersion is { } d) Dispersion(material, d, acc);
         if (s.ThermalProbe is { } t) Thermal(material, t, acc);
         if (s.Electrical is { } e) Electrical(material, e, acc);
-        if (s.UvLong is { } ul) Fluorescence("uv_long", "long-wave UV", material.UvLong, ul, acc);
-        if (s.UvShort is { } us) Fluorescence("uv_short", "short-wave UV", material.UvShort, us, acc);
+        if (s.UvLong is { } ul) Fluorescence(BenchField.UvLong, "long-wave UV", material.UvLong, ul, acc);
+        if (s.UvShort is { } us) Fluorescence(BenchField.UvShort, "short-wave UV", material.UvShort, us, acc);
         if (s.AbsorptionLinesNanometres is { } lines) Absorption(material, lines, acc);
         if (sheet.ColourHues.Count > 0) Colour(profile, s.Colour!, sheet.ColourHues, acc);
         if (s.Magnification is { IsEmpty: false } look)
         {
             // docs/ranking.md, "Magnification": "not in the catalogue" is the natural/imitation average.
             var expected = material.MagnificationProfile;
-            acc.AddLog("magnification", MagnificationEvidence.LogLikelihood(look, expected), MagnificationEvidence.LogBroad(look), MagnificationEvidence.Fit(look, expected), robust: false);
+            acc.AddLog(BenchField.Magnification, MagnificationEvidence.LogLikelihood(look, expected), MagnificationEvidence.LogBroad(look), MagnificationEvidence.Fit(look, expected), robust: false);
             if (acc.Explaining) acc.Say(MagnificationEvidence.Reason(look, expected));
         }
         return acc.Result();
@@ -60,7 +61,7 @@ public static class EvidenceLikelihood
         double s = double.Hypot(sigma, SpecificGravityFloor);
         var range = m.SpecificGravity;
         double z = RangeLikelihood.StandardDeviationsOutside(value, range, s);
-        acc.Add("sg", RangeLikelihood.Density(value, range, s), BroadDensities.SpecificGravity, RangeLikelihood.TwoSidedTail(z), robust: true, group);
+        acc.Add(BenchField.Sg, RangeLikelihood.Density(value, range, s), BroadDensities.SpecificGravity, RangeLikelihood.TwoSidedTail(z), robust: true, group);
         if (acc.Explaining)
             acc.Say($"SG {F2(value)} ± {F2(sigma)} {Where(value, range, s, "0.00")}");
     }
@@ -79,7 +80,7 @@ public static class EvidenceLikelihood
             _ => (RangeLikelihood.Density(density, range, 2 * sigma) * 4 * sigma, 4 * sigma * BroadDensities.SpecificGravity,
                 RangeLikelihood.TwoSidedTail(RangeLikelihood.StandardDeviationsOutside(density, range, 2 * sigma))),
         };
-        acc.Add("heavy_liquids", f, g, tail, robust: true);
+        acc.Add(BenchField.HeavyLiquids, f, g, tail, robust: true);
         if (acc.Explaining)
             acc.Say($"{Word(liquid.Outcome)} in liquid of density {F2(density)}: SG {range.ToString("0.00")} expected");
     }
@@ -89,13 +90,13 @@ public static class EvidenceLikelihood
         if (m.IsOpaque)
         {
             // No light passes: the test cannot be taken on it, so whatever was written neither supports nor weakens it.
-            acc.Add("polariscope", 0.25, 0.25, 1, robust: false);
+            acc.Add(BenchField.Polariscope, 0.25, 0.25, 1, robust: false);
             if (acc.Explaining) acc.Say("polariscope: opaque material, the test says nothing about it");
             return;
         }
         var usual = UsualReactions(m);
         double f = PolariscopeProbability(usual, seen);
-        acc.Add("polariscope", f, 0.25, f / PolariscopeProbability(usual, usual[0]), robust: false);
+        acc.Add(BenchField.Polariscope, f, 0.25, f / PolariscopeProbability(usual, usual[0]), robust: false);
         if (acc.Explaining)
             acc.Say($"polariscope {Word(seen)}{(usual.Contains(seen) ? ", as expected" : $", where {string.Join(" or ", usual.Select(Word))} is usual")}");
     }
@@ -127,13 +128,13 @@ public static class EvidenceLikelihood
     {
         if (m.IsOpaque)
         {
-            acc.Add("pleochroism", 1 / 3.0, 1 / 3.0, 1, robust: false);
+            acc.Add(BenchField.Pleochroism, 1 / 3.0, 1 / 3.0, 1, robust: false);
             if (acc.Explaining) acc.Say("pleochroism: opaque material, the dichroscope says nothing about it");
             return;
         }
         double[] row = PleochroismRow(m.OpticCharacter, colourless ? PleochroismStrength.None : m.Pleochroism);
         double f = row[(int)seen];
-        acc.Add("pleochroism", f, 1 / 3.0, f / row.Max(), robust: false);
+        acc.Add(BenchField.Pleochroism, f, 1 / 3.0, f / row.Max(), robust: false);
         if (acc.Explaining)
         {
             string expected = m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial
@@ -174,25 +175,25 @@ public static class EvidenceLikelihood
     {
         if (d.Measured is { } measured)
         {
-            if (m.Dispersion is not { } known) { acc.Add("dispersion", BroadDensities.Dispersion, BroadDensities.Dispersion, 1, false); return; }
+            if (m.Dispersion is not { } known) { acc.Add(BenchField.Dispersion, BroadDensities.Dispersion, BroadDensities.Dispersion, 1, false); return; }
             var range = new PropertyRange(0.9 * known, 1.1 * known);
             double sigma = 0.0015;
             double z = RangeLikelihood.StandardDeviationsOutside(measured, range, sigma);
-            acc.Add("dispersion", RangeLikelihood.Density(measured, range, sigma), BroadDensities.Dispersion, RangeLikelihood.TwoSidedTail(z), robust: true);
+            acc.Add(BenchField.Dispersion, RangeLikelihood.Density(measured, range, sigma), BroadDensities.Dispersion, RangeLikelihood.TwoSidedTail(z), robust: true);
             if (acc.Explaining) acc.Say($"dispersion nG − nB {F3(measured)} {Where(measured, range, sigma, "0.000")}");
             return;
         }
         var seen = d.Seen!.Value;
         if (m.Dispersion is not { } value)
         {
-            acc.Add("dispersion", 0.2, 0.2, 1, robust: false);
+            acc.Add(BenchField.Dispersion, 0.2, 0.2, 1, robust: false);
             if (acc.Explaining) acc.Say($"dispersion {Word(seen)}; not known for this material");
             return;
         }
         var expected = DispersionBand(value);
         double[] row = DispersionRow(expected);
         double f = row[(int)seen];
-        acc.Add("dispersion", f, 0.2, f / row[(int)expected], robust: false);
+        acc.Add(BenchField.Dispersion, f, 0.2, f / row[(int)expected], robust: false);
         if (acc.Explaining) acc.Say($"dispersion {Word(seen)}; nG − nB {F3(value)} ({Word(DispersionBand(value))}) expected");
     }
 
@@ -220,7 +221,7 @@ public static class EvidenceLikelihood
         double pPositive = ThermalPositive(m);
         double f = seen == ThermalProbeResult.Positive ? pPositive : 1 - pPositive;
         double g = seen == ThermalProbeResult.Positive ? BroadThermalPositive : 1 - BroadThermalPositive;
-        acc.Add("thermal_probe", f, g, f / Math.Max(pPositive, 1 - pPositive), robust: false);
+        acc.Add(BenchField.ThermalProbe, f, g, f / Math.Max(pPositive, 1 - pPositive), robust: false);
         if (acc.Explaining) acc.Say($"thermal probe {Word(seen)}, {(seen == m.ThermalProbe ? "as expected" : $"where {Word(m.ThermalProbe)} is expected")}");
     }
 
@@ -229,7 +230,7 @@ public static class EvidenceLikelihood
         double pConductive = ElectricalConductive(m);
         double f = seen == ElectricalResult.Conductive ? pConductive : 1 - pConductive;
         double g = seen == ElectricalResult.Conductive ? BroadConductive : 1 - BroadConductive;
-        acc.Add("electrical", f, g, f / Math.Max(pConductive, 1 - pConductive), robust: false);
+        acc.Add(BenchField.Electrical, f, g, f / Math.Max(pConductive, 1 - pConductive), robust: false);
         if (acc.Explaining) acc.Say($"electrically {Word(seen)}, {(seen == m.Electrical ? "as expected" : $"where {Word(m.Electrical)} is expected")}");
     }
 
@@ -275,7 +276,7 @@ public static class EvidenceLikelihood
         double logF = AbsorptionLines.LogLikelihood(m.AbsorptionLines, seen, out int unexplained, out int missedStrong);
         double logG = AbsorptionLines.LogBroad(seen);
         double tail = Math.Pow(0.07, unexplained) * Math.Pow(1 - AbsorptionLines.Detection(LineStrength.Strong), missedStrong);
-        acc.AddLog("absorption_nm", logF, logG, tail, robust: false, EvidenceAccumulator.ChromophoreGroup);
+        acc.AddLog(BenchField.Absorption, logF, logG, tail, robust: false, EvidenceAccumulator.ChromophoreGroup);
         if (acc.Explaining)
         {
             var listed = m.AbsorptionLines;
@@ -291,7 +292,7 @@ public static class EvidenceLikelihood
         var m = profile.Material;
         double f = ColourWords.Probability(seen, profile.ColourHues);
         double best = profile.ColourHues.Count == 0 ? f : ColourWords.Probability(new HashSet<string> { profile.ColourHues[0] }, profile.ColourHues);
-        acc.Add("colour", f, ColourWords.BroadProbability, Math.Min(1, f / best), robust: false, EvidenceAccumulator.ChromophoreGroup);
+        acc.Add(BenchField.Colour, f, ColourWords.BroadProbability, Math.Min(1, f / best), robust: false, EvidenceAccumulator.ChromophoreGroup);
         if (acc.Explaining)
             acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : string.Join(", ", m.Colours) + " usual, most usual first")}");
     }

@@ -1,3 +1,4 @@
+using GemIndex.Core.Bench;
 using System.Globalization;
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Observations;
@@ -45,16 +46,16 @@ public static class NextTestAdvisor
 
     private static IEnumerable<(string, Func<Material, IEnumerable<(long, double)>>)> TestsNotDone(BenchSheet s, bool immersionUnsafe)
     {
-        if (s.Refractometer is null) yield return ("refractometer", Refractometer);
-        if (s.SpecificGravity is null && s.HeavyLiquids.Count == 0 && !immersionUnsafe) yield return ("sg", SpecificGravity);
-        if (s.Polariscope is null) yield return ("polariscope", Polariscope);
-        if (s.Pleochroism is null) yield return ("pleochroism", Pleochroism);
-        if (s.Dispersion is null) yield return ("dispersion", Dispersion);
-        if (s.ThermalProbe is null) yield return ("thermal_probe", m => Binary(EvidenceLikelihood.ThermalPositive(m)));
-        if (s.Electrical is null) yield return ("electrical", m => Binary(EvidenceLikelihood.ElectricalConductive(m)));
-        if (s.UvLong is null) yield return ("uv_long", m => Fluorescence(m.UvLong));
-        if (s.UvShort is null) yield return ("uv_short", m => Fluorescence(m.UvShort));
-        if (s.AbsorptionLinesNanometres is null) yield return ("absorption_nm", Absorption);
+        if (s.Refractometer is null) yield return (BenchField.Refractometer, Refractometer);
+        if (s.SpecificGravity is null && s.HeavyLiquids.Count == 0 && !immersionUnsafe) yield return (BenchField.Sg, SpecificGravity);
+        if (s.Polariscope is null) yield return (BenchField.Polariscope, Polariscope);
+        if (s.Pleochroism is null) yield return (BenchField.Pleochroism, Pleochroism);
+        if (s.Dispersion is null) yield return (BenchField.Dispersion, Dispersion);
+        if (s.ThermalProbe is null) yield return (BenchField.ThermalProbe, m => Binary(EvidenceLikelihood.ThermalPositive(m)));
+        if (s.Electrical is null) yield return (BenchField.Electrical, m => Binary(EvidenceLikelihood.ElectricalConductive(m)));
+        if (s.UvLong is null) yield return (BenchField.UvLong, m => Fluorescence(m.UvLong));
+        if (s.UvShort is null) yield return (BenchField.UvShort, m => Fluorescence(m.UvShort));
+        if (s.AbsorptionLinesNanometres is null) yield return (BenchField.Absorption, Absorption);
     }
 
     private static double MutualInformation(List<(Material Material, double P)> candidates, Func<Material, IEnumerable<(long, double)>> outcomes)
@@ -127,18 +128,18 @@ public static class NextTestAdvisor
 
     private static string Expected(string test, Material m) => test switch
     {
-        "sg" => $"SG {m.SpecificGravity.ToString("0.00")}",
-        "refractometer" => m.Indices.Lowest.Minimum > RefractometerObservation.DefaultLiquidLimit
+        BenchField.Sg => $"SG {m.SpecificGravity.ToString("0.00")}",
+        BenchField.Refractometer => m.Indices.Lowest.Minimum > RefractometerObservation.DefaultLiquidLimit
             ? "over the limit"
             : string.Join(", ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString("0.000")}")),
-        "polariscope" => string.Join(" or ", EvidenceLikelihood.UsualReactions(m).Select(EvidenceLikelihood.Word)),
-        "pleochroism" => m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial ? $"{EvidenceLikelihood.Word(m.Pleochroism)} pleochroism" : "none",
-        "dispersion" => m.Dispersion is { } d ? $"nG − nB {d.ToString("0.000", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(EvidenceLikelihood.DispersionBand(d))})" : "not known",
-        "thermal_probe" => EvidenceLikelihood.Word(m.ThermalProbe),
-        "electrical" => EvidenceLikelihood.Word(m.Electrical),
-        "uv_long" => m.UvLong.Count == 0 ? "not known" : string.Join(" or ", m.UvLong.Select(EvidenceLikelihood.Word)),
-        "uv_short" => m.UvShort.Count == 0 ? "not known" : string.Join(" or ", m.UvShort.Select(EvidenceLikelihood.Word)),
-        "absorption_nm" => m.AbsorptionLinesNanometres.Count == 0 ? "no diagnostic lines" : "lines at " + string.Join(", ", m.AbsorptionLinesNanometres.Select(l => l.ToString("0.#", CultureInfo.InvariantCulture))) + " nm",
+        BenchField.Polariscope => string.Join(" or ", EvidenceLikelihood.UsualReactions(m).Select(EvidenceLikelihood.Word)),
+        BenchField.Pleochroism => m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial ? $"{EvidenceLikelihood.Word(m.Pleochroism)} pleochroism" : "none",
+        BenchField.Dispersion => m.Dispersion is { } d ? $"nG − nB {d.ToString("0.000", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(EvidenceLikelihood.DispersionBand(d))})" : "not known",
+        BenchField.ThermalProbe => EvidenceLikelihood.Word(m.ThermalProbe),
+        BenchField.Electrical => EvidenceLikelihood.Word(m.Electrical),
+        BenchField.UvLong => m.UvLong.Count == 0 ? "not known" : string.Join(" or ", m.UvLong.Select(EvidenceLikelihood.Word)),
+        BenchField.UvShort => m.UvShort.Count == 0 ? "not known" : string.Join(" or ", m.UvShort.Select(EvidenceLikelihood.Word)),
+        BenchField.Absorption => m.AbsorptionLinesNanometres.Count == 0 ? "no diagnostic lines" : "lines at " + string.Join(", ", m.AbsorptionLinesNanometres.Select(l => l.ToString("0.#", CultureInfo.InvariantCulture))) + " nm",
         _ => "",
     };
 }

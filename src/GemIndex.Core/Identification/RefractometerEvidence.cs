@@ -1,3 +1,4 @@
+using GemIndex.Core.Bench;
 using System.Globalization;
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Optics;
@@ -75,7 +76,7 @@ internal static class RefractometerEvidence
                 ? sheet.SeriesOutcome(prior)
                 : SectionLikelihood.Evaluate(prior, series, shift, shiftSigma);
         double form = FormFactor(m, series);
-        acc.AddLog("refractometer", outcome.LogLikelihood + Math.Log(form), broad, outcome.Tail * Math.Min(1, 2 * form), robust: true);
+        acc.AddLog(BenchField.Refractometer, outcome.LogLikelihood + Math.Log(form), broad, outcome.Tail * Math.Min(1, 2 * form), robust: true);
         if (acc.Explaining)
             acc.Say(SeriesText(m, sheet, outcome, form));
     }
@@ -137,7 +138,7 @@ internal static class RefractometerEvidence
         var span = new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum);
         var part = Index("spot reading", spot, sigma, span, shift, shiftSigma, acc.Explaining);
         int group = (m.Forms & MaterialForm.Aggregate) != 0 ? EvidenceAccumulator.AggregateGroup : EvidenceAccumulator.Independent;
-        acc.Add("refractometer", part.Likelihood, part.Broad, part.Tail, robust: true, group);
+        acc.Add(BenchField.Refractometer, part.Likelihood, part.Broad, part.Tail, robust: true, group);
         if (acc.Explaining) acc.Say(part.Text);
     }
 
@@ -149,7 +150,7 @@ internal static class RefractometerEvidence
         const double sigma = 0.003; // where exactly the liquid's own edge hides a stone edge
         double p = RangeLikelihood.ProbabilityAbove(limit, range, sigma);
         double tail = RangeLikelihood.TwoSidedTail(Math.Max(0, limit - range.Maximum) / sigma);
-        acc.Add("refractometer", p, hasReadings ? 0.3 : BroadDensities.OverLimit, tail, robust: true);
+        acc.Add(BenchField.Refractometer, p, hasReadings ? 0.3 : BroadDensities.OverLimit, tail, robust: true);
         if (acc.Explaining)
             acc.Say($"over the limit (n > {limit.ToString("0.000", CultureInfo.InvariantCulture)}): {(hasReadings ? "highest" : "lowest")} index {range.ToString("0.000")} expected");
     }
