@@ -19,7 +19,10 @@ internal static class CommandTree
         TextWriter error = configuration?.Error ?? Console.Error;
         foreach (System.CommandLine.Parsing.ParseError fault in parse.Errors)
             error.WriteLine("gemindex: " + Printable(fault.Message));
-        bool usage = parse.Errors.Any(e => e.SymbolResult is not (System.CommandLine.Parsing.OptionResult or System.CommandLine.Parsing.ArgumentResult));
+        // A value the user gave and a check refused is bad input; anything else (an unknown word, a missing option or
+        // argument) is a usage fault.
+        bool usage = parse.Errors.Any(e => e.SymbolResult is not (System.CommandLine.Parsing.OptionResult { Tokens.Count: > 0 }
+            or System.CommandLine.Parsing.ArgumentResult { Tokens.Count: > 0 }));
         if (usage) error.WriteLine($"('{parse.CommandResult.Command.Name} --help' lists the options)");
         return usage ? ExitCodes.Usage : ExitCodes.BadInput;
     }
