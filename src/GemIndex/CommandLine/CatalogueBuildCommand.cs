@@ -27,13 +27,6 @@ internal static class CatalogueBuildCommand
         });
         Option<bool> json = CatalogueCommand.JsonOption();
         var command = new Command("build", "Build the catalogue's SQLite file from its JSON family files") { output, source, force, json };
-        // The catalogue group's --catalogue-dir reaches every subcommand; the build does not use it, but a wrong one is still an error.
-        command.Validators.Add(r =>
-        {
-            if (r.GetResult("--catalogue-dir") is System.CommandLine.Parsing.OptionResult { Implicit: false, Tokens: [{ Value: var dir }] }
-                && (dir.Length == 0 || File.Exists(dir)))
-                r.AddError($"--catalogue-dir: '{Shown(dir)}' is not a folder (and 'catalogue build' writes only the --output file)");
-        });
         command.SetAction(pr => CatalogueFailure.Guard(pr, (stdout, error) =>
         {
             string target = pr.GetRequiredValue(output).FullName;

@@ -54,6 +54,7 @@ public sealed class BadValueMatrixTests(ITestOutputHelper log) : IDisposable
             ["catalogue import"] = ["catalogue", "import", CommandRun.Fixture("user-good.csv"), "--catalogue-dir", catalogueDir],
             ["catalogue build"] = ["catalogue", "build", "--output", output, "--source", CommandRun.Fixture("families"), "--catalogue-dir", catalogueDir],
             ["identify"] = ["identify", "--sg", "2.65", "--catalogue-dir", catalogueDir],
+            ["identify --batch"] = ["identify", "--catalogue-dir", catalogueDir],   // a batch takes no reading options
             ["report stone"] = ["report", "stone", "--readings", batch, "--catalogue-dir", catalogueDir],
             ["report stone/workbook"] = ["report", "stone", "--workbook", workbook, "--stone", "lot 3 / 1", "--catalogue-dir", catalogueDir],
             ["report workbook"] = ["report", "workbook", "--workbook", workbook, "--catalogue-dir", catalogueDir],
@@ -108,7 +109,8 @@ public sealed class BadValueMatrixTests(ITestOutputHelper log) : IDisposable
             foreach (Option option in command.Options.Concat(Recursive(command)).Distinct())
             {
                 if (option.Arity.MaximumNumberOfValues == 0 || option.ValueType == typeof(bool) || notTried.Contains(option.Name)) continue;
-                string key = path == "report stone" && option.Name is "--workbook" or "--stone" ? "report stone/workbook" : path;
+                string key = path == "report stone" && option.Name is "--workbook" or "--stone" ? "report stone/workbook"
+                    : path == "identify" && option.Name == "--batch" ? "identify --batch" : path;
                 string[] values = valuesByOption.TryGetValue(option.Name, out string[]? specific) ? specific
                     : option.ValueType == typeof(int) ? wholeNumbers
                     : option.ValueType == typeof(double) || option.ValueType == typeof(double?) ? numbers
@@ -119,7 +121,11 @@ public sealed class BadValueMatrixTests(ITestOutputHelper log) : IDisposable
                     string[] args = WithValue(baselines[key], option.Name, value);
                     (Outcome outcome, int exit, string error) = Run(args, option.Name, value);
                     counts[outcome] = counts.GetValueOrDefault(outcome) + 1;
-                    if (outcome == Outcome.Clear && exit == ExitCodes.Usage && value.Length > 0 && !error.Contains("Required", StringComparison.Ordinal)) exitOneForAValue++;
+                    if (outcome == Outcome.Clear && exit == ExitCodes.Usage && value.Length > 0 && !error.Contains("Required", StringComparison.Ordinal))
+                    {
+                        exitOneForAValue++;
+                        log.WriteLine($"exit 1 for a value: {path} {option.Name} {Label(value)}: {Shown(error.Trim())}");
+                    }
                     if (error.Length > 2_000) longEcho++;
                     if (outcome != Outcome.Clear)
                         failures.Add(($"{(path.Length == 0 ? "(root)" : path)} {option.Name} {Label(value)}", $"{outcome} (exit {exit}) {Shown(error.Trim())}"));
