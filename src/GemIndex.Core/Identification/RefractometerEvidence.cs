@@ -101,10 +101,26 @@ internal static class RefractometerEvidence
         return aggregateOnly && series.LargestSeparation > 0 ? AggregateShowsTwoEdges : 1;
     }
 
+    /// <summary>
+    /// The series in words that hold under every reading of it: the one interpretation when the readings fix it,
+    /// otherwise the edges as read (a material's reason never takes one of two equally likely readings as its own).
+    /// </summary>
+    private static string ReadingsText(AnalysedSheet sheet)
+    {
+        if (sheet.Series?.Interpretations is [var only]) return only.Description;
+        var steps = sheet.Sheet.Refractometer?.Steps ?? [];
+        if (steps.Count == 0) return "rotation series";
+        string Range(double a, double b) => a == b ? a.ToString("0.000", CultureInfo.InvariantCulture) : $"{a.ToString("0.000", CultureInfo.InvariantCulture)}–{b.ToString("0.000", CultureInfo.InvariantCulture)}";
+        var highs = steps.Where(x => x.High is not null).Select(x => x.High!.Value).ToList();
+        string text = $"low edge {Range(steps.Min(x => x.Low), steps.Max(x => x.Low))}";
+        if (highs.Count > 0) text += $", high edge {Range(highs.Min(), highs.Max())}";
+        return text + $" over {steps.Count} steps";
+    }
+
     private static string SeriesText(Material m, AnalysedSheet sheet, SectionLikelihood.Outcome outcome, double form)
     {
         string expected = string.Join(", ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString("0.000")}"));
-        string summary = sheet.Series?.Interpretations.FirstOrDefault()?.Description ?? "rotation series";
+        string summary = ReadingsText(sheet);
         string verdict = double.IsNegativeInfinity(outcome.LogLikelihood) ? "no orientation of it can give these readings"
             : outcome.Tail >= 0.05 ? "an orientation of it gives these readings" : "its best orientation fits these readings poorly";
         return $"{summary}; {verdict} ({expected})" + (form < 1 ? "; two sharp edges come from a single crystal, and it is met only as an aggregate" : "");

@@ -58,6 +58,8 @@ internal static class HtmlReport
         Scales(h, report);
         List(h, [.. report.Interpretations.Select(ReportDerived.Line)], "");
         List(h, [.. report.Misreadings.Select(m => "Possible misreading: " + m)], "");
+        Section(h, "Answer by species");
+        List(h, ReportDerived.SpeciesLines(report), "No species stands out.");
         Candidates(h, report);
         Section(h, "Next test");
         h.Append("<p>").Append(E(ReportDerived.NextTestLine(report))).AppendLine("</p>");
@@ -75,7 +77,7 @@ internal static class HtmlReport
     {
         Section(h, "Candidates");
         if (report.NoGoodMatch) h.Append("<p class=\"no-match\">").Append(E(StoneReport.NoGoodMatchStatement)).AppendLine("</p>");
-        h.AppendLine("<table>").AppendLine("<tr><th>Rank</th><th>Material</th><th>Origin</th><th>Confidence</th><th>Fit</th></tr>");
+        h.AppendLine("<table>").AppendLine("<tr><th>Rank</th><th>Material</th><th>Origin</th><th>Confidence</th><th>Agreement with the entry</th></tr>");
         foreach (var c in report.Candidates)
             h.AppendLine($"<tr>{Number(c.Rank.ToString(CultureInfo.InvariantCulture))}<td>{E(c.Name)}</td><td>{E(c.Origin)}</td>" +
                 $"{Number(ReportNumbers.Percent(c.Confidence))}{Number(ReportNumbers.Fixed(c.Fit, "0.000"))}</tr>");
@@ -84,7 +86,7 @@ internal static class HtmlReport
         foreach (var c in report.Candidates.Where(c => c.Reasons.Count > 0))
         {
             h.Append("<h3>Reasons for ").Append(E(c.Name)).AppendLine("</h3>");
-            List(h, [.. c.Reasons.Select(r => $"{(r.Agrees ? "agrees" : "against")} ({BenchTestWords.DisplayOfWire(r.Test)}, {ReportNumbers.Bits(r.WeightBits)}): {r.Text}")], "");
+            List(h, [.. c.Reasons.Select(ReportDerived.ReasonLine)], "");
         }
     }
 

@@ -30,6 +30,8 @@ internal static class MarkdownReport
         if (report.Interpretations.Count > 0) md.AppendLine();
         foreach (string m in report.Misreadings) md.Append("- Possible misreading: ").AppendLine(Escape(m));
         if (report.Misreadings.Count > 0) md.AppendLine();
+        Section(md, "Answer by species");
+        List(md, ReportDerived.SpeciesLines(report), "No species stands out.");
         Candidates(md, report);
         Section(md, "Next test");
         md.AppendLine(Escape(ReportDerived.NextTestLine(report))).AppendLine();
@@ -46,7 +48,7 @@ internal static class MarkdownReport
     {
         Section(md, "Candidates");
         if (report.NoGoodMatch) md.Append("**").Append(Escape(StoneReport.NoGoodMatchStatement)).AppendLine("**").AppendLine();
-        md.AppendLine("| Rank | Material | Origin | Confidence | Fit |").AppendLine("|---:|---|---|---:|---:|");
+        md.AppendLine("| Rank | Material | Origin | Confidence | Agreement with the entry |").AppendLine("|---:|---|---|---:|---:|");
         foreach (var c in report.Candidates)
             md.AppendLine($"| {c.Rank} | {Escape(c.Name)} | {Escape(c.Origin)} | {ReportNumbers.Percent(c.Confidence)} | {ReportNumbers.Fixed(c.Fit, "0.000")} |");
         md.AppendLine().Append("Not in the catalogue: ").AppendLine(ReportNumbers.Percent(report.NotInCatalogue)).AppendLine();
@@ -54,7 +56,7 @@ internal static class MarkdownReport
         {
             md.Append("Reasons for ").Append(Escape(c.Name)).AppendLine(":").AppendLine();
             foreach (var r in c.Reasons)
-                md.AppendLine($"- {(r.Agrees ? "agrees" : "against")} ({Escape(BenchTestWords.DisplayOfWire(r.Test))}, {ReportNumbers.Bits(r.WeightBits)}): {Escape(r.Text)}");
+                md.AppendLine($"- {Escape(ReportDerived.ReasonLine(r))}");
             md.AppendLine();
         }
     }

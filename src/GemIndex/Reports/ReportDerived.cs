@@ -1,3 +1,6 @@
+using GemIndex.Core.Bench;
+using GemIndex.Core.Identification;
+
 namespace GemIndex.Cli.Reports;
 
 /// <summary>The derived-property and next-test lines shared by the text formats.</summary>
@@ -14,7 +17,7 @@ internal static class ReportDerived
                 ? $"α {ReportNumbers.Index(best.Lowest)}, β {ReportNumbers.Index(beta)}, γ {ReportNumbers.Index(best.Highest)}"
                 : best.Lowest == best.Highest ? ReportNumbers.Index(best.Lowest) : $"{ReportNumbers.Index(best.Lowest)} to {ReportNumbers.Index(best.Highest)}");
             yield return new("birefringence", "Birefringence", ReportNumbers.WithUncertainty(best.Birefringence, best.BirefringenceUncertainty, "0.000"));
-            yield return new("optic_sign", "Optic sign", best.Sign);
+            yield return new("optic_sign", "Optic sign", SignText(report));
         }
         if (report.SpecificGravity is { } sg)
             yield return new("specific_gravity", "Specific gravity", $"{ReportNumbers.WithUncertainty(sg.Value, sg.StandardUncertainty, "0.00")} (standard uncertainty; {report.SpecificGravitySource})");
@@ -22,11 +25,57 @@ internal static class ReportDerived
             yield return new("derived", "Derived", "none: no rotation series and no specific gravity");
     }
 
-    /// <summary>One interpretation in a line: "uniaxial, positive (weight 92.0 %): …".</summary>
+    /// <summary>A reading is called settled when it carries at least this share of the weight (a judgement).</summary>
+    private const double SettledShare = 0.9;
+
+    /// <summary>The sign as the series gives it: "not fixed" while its readings weigh positive and negative alike.</summary>
+    public static string SignText(StoneReport report)
+    {
+        var signs = report.Interpretations.GroupBy(i => i.Sign).Select(g => (Sign: g.Key, Weight: g.Sum(i => i.Weight))).OrderByDescending(g => g.Weight).ToList();
+        if (signs.Count == 0) return "not fixed";
+        if (signs.Count == 1 || signs[0].Weight >= SettledShare) return signs[0].Sign;
+        return $"not fixed by the series: {string.Join(" or ", signs.Select(g => $"{g.Sign} ({ReportNumbers.WholePercent(g.Weight)})"))}";
+    }
+
+    /// <summary>One reading of the series in a line: "uniaxial, sign positive (chance 50%): …".</summary>
     public static string Line(ReportInterpretation i) =>
-        $"{i.Character}, sign {i.Sign} (weight {ReportNumbers.Percent(i.Weight)}): {i.Description}";
+        $"{i.Character}, sign {i.Sign} (chance {ReportNumbers.WholePercent(i.Weight)}): {i.Description}";
+
+    /// <summary>How strongly a test speaks for or against a candidate, in words (a likelihood ratio of 10 is "strongly", of 2 plain).</summary>
+    public static string Strength(EvidenceContribution reason)
+    {
+        double ratio = Math.Abs(reason.WeightBits);
+        string how = ratio >= StrongBits ? "strongly " : ratio >= ClearBits ? "" : "slightly ";
+        return how + (reason.WeightBits >= 0 ? "for" : "against");
+    }
+
+    /// <summary>Ten to one in favour or against (log2 10): "strongly".</summary>
+    private const double StrongBits = 3.32;
+
+    /// <summary>Two to one: below it, "slightly".</summary>
+    private const double ClearBits = 1;
+
+    /// <summary>A reason in a line: "strongly for (refractometer): …".</summary>
+    public static string ReasonLine(EvidenceContribution reason) =>
+        $"{Strength(reason)} ({BenchTestWords.DisplayOfWire(reason.Test)}): {reason.Text}";
+
+    /// <summary>The answer by species, best first: "Corundum 93.0 % — natural 41.0 %, synthetic 48.0 %".</summary>
+    public static IReadOnlyList<string> SpeciesLines(StoneReport report) =>
+        [.. report.Result.Species.Where(s => s.Confidence >= ShownSpeciesShare).Take(ShownSpecies).Select(s =>
+            $"{char.ToUpperInvariant(s.Species[0])}{s.Species[1..]} {ReportNumbers.Percent(s.Confidence)}" +
+            (s.Origins.Count > 1 ? " — " + string.Join(", ", s.Origins.OrderByDescending(o => o.Value)
+                .Select(o => $"{BenchWords.Word(o.Key)} {ReportNumbers.Percent(o.Value)}")) : $" ({BenchWords.Word(s.Origins.Keys.First())})"))];
+
+    /// <summary>Species below this share are not listed in the answer (a judgement: 1 %).</summary>
+    private const double ShownSpeciesShare = 0.01;
+
+    /// <summary>At most this many species in the answer.</summary>
+    private const int ShownSpecies = 5;
 
     public static string NextTestLine(StoneReport report) => report.NextTest is { } n
-        ? $"{n.Description}: expected gain {ReportNumbers.Fixed(n.GainBits, "0.00")} bits; separates {string.Join(", ", n.Separates)}."
+        ? $"{n.Description}: it would {Separation(n.GainBits)} {string.Join(", ", n.Separates)}."
         : "None suggested: no remaining test would separate the candidates.";
+
+    /// <summary>How well the next test separates the leading candidates, in words (1 bit halves the doubt).</summary>
+    private static string Separation(double gainBits) => gainBits >= 1 ? "clearly separate" : gainBits >= 0.3 ? "partly separate" : "slightly separate";
 }
