@@ -22,7 +22,10 @@ internal static class TextUiLauncher
             return ExitCodes.NoTerminal;
         }
         // Read the catalogue (the slow part of a start) while the workbook opens and the window is drawn.
-        Task<IReadOnlyList<Material>> loading = Task.Run(() => MergedCatalogue.Load(CatalogueLocations.FromEnvironment()));
+        // Started once the main loop runs (after the first frame is drawn), so that on a two-core laptop the catalogue
+        // does not compete with the window's own start-up for the first screen.
+        var started = new TaskCompletionSource(TaskCreationOptions.RunContinuationsAsynchronously);
+        Task<IReadOnlyList<Material>> loading = started.Task.ContinueWith(_ => MergedCatalogue.Load(CatalogueLocations.FromEnvironment()), TaskScheduler.Default);
         StoneWorkbook? workbook = TextUiCommand.Open(workbookPath, createNew, interactive: true, Console.In, Console.Out, error, out int failure);
         if (workbook is null) return failure;
         // Said before the screen is drawn, and on the key line (every save reports it) while it runs.
@@ -51,6 +54,7 @@ internal static class TextUiLauncher
                 string reason = catalogueProblem;
                 app.Invoke(() => window.ShowCatalogueState("!! no catalogue: nothing can be ranked (readings are still saved)", reason));
             }, TaskScheduler.Default);
+            app.Invoke(() => started.TrySetResult());
             app.Run(window);
             session.Flush();
         }
