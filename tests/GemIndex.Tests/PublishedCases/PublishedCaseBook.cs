@@ -116,9 +116,9 @@ public static class PublishedCaseBook
             "GAAJ-Zenhokyo Laboratory, 'Laboratory of the month' 2008.5 (as above): faceted saturated blue stone, RI 1.39 and hydrostatic SG 1.75, anomalous "
             + "extinction between crossed polars; identified as synthetic opal."),
         new("""{"id":"gg-ln-epidote-needles","pleochroism":"dichroic","absorption_nm":[455,470],"colour":"very dark green"}""", ["epidote"], 2,
-            "Gems & Gemology, Gem Trade Lab Notes (editor C. W. Fryer), 'Needle-like Inclusions in Epidote' (transcription at hobbydocbox.com, "
+            "Gems & Gemology, Gem Trade Lab Notes (editor C. W. Fryer), 'Needle-like Inclusions in Epidote' (copy at hobbydocbox.com, "
             + "'...a-new-type-of-opal-assemblage-magnified-10-x'; issue not named on the page): about 5 ct very dark green, birefringence 0.040 (the RI values are "
-            + "lost in the transcription, so no refractometer reading is entered), distinct pleochroism green and olive brown, broad band centred at 455 nm, faint "
+            + "lost in that copy, so no refractometer reading is entered), distinct pleochroism green and olive brown, broad band centred at 455 nm, faint "
             + "line at 470 nm, cut-off from 430 nm (left out); 'proved that the stone is epidote'."),
 
         new("""{"id":"gg-2017-ln-cats-eye-kornerupine","refractometer":{"method":"spot","spot":1.67},"sg":3.32,"colour":"yellowish green"}""", ["kornerupine"], 2,
