@@ -1,3 +1,4 @@
+using GemIndex.Core.Bench;
 using System.CommandLine;
 using GemIndex.Core.Catalogue;
 using GemIndex.Data.Catalogue;
@@ -22,8 +23,8 @@ internal static class CatalogueBuildCommand
         {
             string text = r.Tokens.Count == 1 ? r.Tokens[0].Value : "";
             if (text.Length == 0) r.AddError("--source: empty; give the folder of *.json family files");
-            else if (File.Exists(text)) r.AddError($"--source: '{Shown(text)}' is a file; give the folder that holds the *.json family files");
-            else if (!Directory.Exists(text)) r.AddError($"--source: no folder '{Shown(text)}'");
+            else if (File.Exists(text)) r.AddError($"--source: '{BenchText.Shown(text)}' is a file; give the folder that holds the *.json family files");
+            else if (!Directory.Exists(text)) r.AddError($"--source: no folder '{BenchText.Shown(text)}'");
         });
         Option<bool> json = CatalogueCommand.JsonOption();
         var command = new Command("build", "Build the catalogue's SQLite file from its JSON family files") { output, source, force, json };
@@ -58,8 +59,6 @@ internal static class CatalogueBuildCommand
         }));
         return command;
     }
-
-    private static string Shown(string text) => text.Length > 80 ? text[..80] + "…" : text;
 
     /// <summary>Why the build must not write to <paramref name="path"/>, or null when it may.</summary>
     public static string? Refusal(string path, bool force) => FileKind.Of(path) switch

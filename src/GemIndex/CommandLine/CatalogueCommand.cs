@@ -1,3 +1,4 @@
+using GemIndex.Core.Bench;
 using System.CommandLine;
 using GemIndex.Data.Catalogue;
 
@@ -22,7 +23,7 @@ internal static class CatalogueCommand
         {
             string text = r.Tokens.Count == 1 ? r.Tokens[0].Value : "";
             if (text.Length == 0) r.AddError("--catalogue-dir: empty; give a folder, or leave the option out");
-            else if (File.Exists(text)) r.AddError($"--catalogue-dir: '{(text.Length > 80 ? text[..80] + "…" : text)}' is a file, not a folder");
+            else if (File.Exists(text)) r.AddError($"--catalogue-dir: '{BenchText.Shown(text)}' is a file, not a folder");
         });
         return option;
     }
