@@ -79,6 +79,8 @@ internal static class IndependentAccuracyRun
                 originRight += right ? 1 : 0;
                 originConfidentWrong += !right && answer.OriginShare >= Confident ? 1 : 0;
             }
+            if (answer.NothingFits && failures is not null)
+                failures.WriteLine($"NOTHING-FITS {stone.Species.Name}{(stone.BeyondRange ? " (drawn beyond its range)" : "")} -> {answer.Species} {answer.Confidence:0.00}: {stone.Line}");
             if (!first && failures is not null)
                 failures.WriteLine($"{(separable ? "SEPARABLE" : "confusable with " + string.Join("/", confusers))} {stone.Species.Name} -> {answer.Species} {answer.Confidence:0.00}: {stone.Line}");
         }

@@ -60,8 +60,8 @@ public static class EvidenceLikelihood
     {
         double s = double.Hypot(sigma, SpecificGravityFloor);
         var range = m.SpecificGravity;
-        double z = RangeLikelihood.StandardDeviationsOutside(value, range, s);
-        acc.Add(BenchField.Sg, RangeLikelihood.Density(value, range, s), BroadDensities.SpecificGravity, RangeLikelihood.TwoSidedTail(z), robust: true, group);
+        double stray = RangeStrays.SpecificGravityShare * value;
+        acc.Add(BenchField.Sg, RangeStrays.Density(value, range, s, stray), BroadDensities.SpecificGravity, RangeStrays.Tail(value, range, s, stray), robust: true, group);
         if (acc.Explaining)
             acc.Say($"SG {F2(value)} ± {F2(sigma)} {Where(value, range, s, "0.00")}");
     }

@@ -30,6 +30,14 @@ internal static class RefractometerEvidence
     /// </summary>
     internal const double AggregateShowsTwoEdges = 0.02;
 
+    /// <summary>
+    /// P(a rotation series of single sharp edges read step by step | a material met only as an aggregate): an aggregate's
+    /// shadow edge is vague and is usually taken once as a spot reading; a sharp edge followed round the stone is the
+    /// behaviour of a polished facet on a single crystal or a glass, though a flat-polished aggregate now and then gives
+    /// one (a judgement; docs/ranking.md §1, form term).
+    /// </summary>
+    internal const double AggregateShowsSharpSeries = 0.2;
+
     /// <summary>The cheap screen's width, in standard deviations of a reading with its offset and soft edges (DOMAIN.md §6b: 4σ).</summary>
     internal const double ScreenSigmas = 4;
 
@@ -93,12 +101,15 @@ internal static class RefractometerEvidence
 
     /// <summary>
     /// The form term: a series with two sharp edges comes from a single crystal, so it is strong evidence against a material
-    /// met only as an aggregate (<see cref="AggregateShowsTwoEdges"/>); a series of single edges fits both.
+    /// met only as an aggregate (<see cref="AggregateShowsTwoEdges"/>); a series of single sharp edges read at several
+    /// steps is weaker evidence against it (<see cref="AggregateShowsSharpSeries"/>); a spot reading fits both.
     /// </summary>
     internal static double FormFactor(Material m, SeriesObservation series)
     {
         bool aggregateOnly = (m.Forms & MaterialForm.Aggregate) != 0 && (m.Forms & MaterialForm.Crystal) == 0;
-        return aggregateOnly && series.LargestSeparation > 0 ? AggregateShowsTwoEdges : 1;
+        if (!aggregateOnly) return 1;
+        if (series.LargestSeparation > 0) return AggregateShowsTwoEdges;
+        return series.Low.Length > 1 ? AggregateShowsSharpSeries : 1;
     }
 
     /// <summary>
@@ -123,15 +134,15 @@ internal static class RefractometerEvidence
         string summary = ReadingsText(sheet);
         string verdict = double.IsNegativeInfinity(outcome.LogLikelihood) ? "no orientation of it can give these readings"
             : outcome.Tail >= 0.05 ? "an orientation of it gives these readings" : "its best orientation fits these readings poorly";
-        return $"{summary}; {verdict} ({expected})" + (form < 1 ? "; two sharp edges come from a single crystal, and it is met only as an aggregate" : "");
+        return $"{summary}; {verdict} ({expected})" + (form == AggregateShowsTwoEdges ? "; two sharp edges come from a single crystal, and it is met only as an aggregate"
+            : form < 1 ? "; a sharp edge followed round the stone is rarely seen on an aggregate, which gives a vague edge" : "");
     }
 
     private static Part Index(string symbol, double observed, double sigma, PropertyRange range, double shift, double shiftSigma, bool words)
     {
         double x = observed + shift;
         double s = double.Hypot(sigma, shiftSigma);
-        double z = RangeLikelihood.StandardDeviationsOutside(x, range, s);
-        return new Part(RangeLikelihood.Density(x, range, s), BroadDensities.Index, RangeLikelihood.TwoSidedTail(z), !words ? "" :
+        return new Part(RangeStrays.Density(x, range, s, RangeStrays.IndexScale), BroadDensities.Index, RangeStrays.Tail(x, range, s, RangeStrays.IndexScale), !words ? "" :
             $"{symbol} {x.ToString("0.000", CultureInfo.InvariantCulture)} {EvidenceLikelihood.Where(x, range, s, "0.000")}");
     }
 

@@ -201,9 +201,12 @@ internal static class SectionLikelihood
         if (!(density > 0)) return new PointFit(double.NegativeInfinity, 0);
         if (residuals is not null) for (int i = 0; i < n; i++) residuals[i] -= mean; // centred: what the orientation and shape must explain
         if (!withTail) return new PointFit(gaussian + logFactor + Math.Log(density), 0, n);
-        double z = RangeLikelihood.StandardDeviationsOutside(mean, new PropertyRange(shape.LevelLow, shape.LevelHigh), spread);
+        var level = new PropertyRange(shape.LevelLow, shape.LevelHigh);
+        double levelTail = levelDensity > 0
+            ? RangeLikelihood.TwoSidedTail(RangeLikelihood.StandardDeviationsOutside(mean, level, spread))
+            : RangeStrays.Tail(mean, level, spread, RangeStrays.IndexScale);
         int freedom = Math.Max(1, n - 4); // three orientation angles and the level are fitted
-        double tail = SpecialFunctions.GammaUpperRegularized(freedom / 2.0, squares / noise / 2) * RangeLikelihood.TwoSidedTail(z)
+        double tail = SpecialFunctions.GammaUpperRegularized(freedom / 2.0, squares / noise / 2) * levelTail
                       * Math.Min(1, Math.Exp(logFactor) / 0.5);
         return new PointFit(gaussian + logFactor + Math.Log(density), tail, n);
     }
@@ -249,8 +252,8 @@ internal static class SectionLikelihood
     {
         double width = high - low;
         if (density > 0) return density * (RangeLikelihood.Phi((high - mean) / s) - RangeLikelihood.Phi((low - mean) / s));
-        if (width < 1e-3 * s) return RangeLikelihood.PhiDensity((mean - (low + high) / 2) / s) / s;
-        return (RangeLikelihood.Phi((high - mean) / s) - RangeLikelihood.Phi((low - mean) / s)) / width;
+        // A catalogue level: its stones with soft edges, and the strays beyond its range (RangeStrays).
+        return RangeStrays.Density(mean, new PropertyRange(low, high), s, RangeStrays.IndexScale);
     }
 
     /// <summary>P(two edges written | true separation): Φ((separation − resolution)/σ), with the misreading floor.</summary>

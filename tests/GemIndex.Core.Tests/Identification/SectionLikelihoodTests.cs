@@ -46,7 +46,7 @@ public class SectionLikelihoodTests(ITestOutputHelper output)
     /// closed-form shift): facet normals uniform over the whole sphere and starting azimuths uniform, the shape (B, β − α)
     /// uniform over the prior's box and weighted by the prior's density there (the prior's definition is shared with the
     /// engine: this checks the integration, not the prior), the level uniform within its interval, the per-stone offset and
-    /// the soft edges drawn as normals, and each lone edge's probability summed over both readings (written as one, or the
+    /// the soft edges and the strays beyond the range drawn as normals, and each lone edge's probability summed over both readings (written as one, or the
     /// high edge hidden).
     /// </summary>
     private static (double Log, double StandardError) MonteCarlo(Material m, SeriesObservation series, int samples, int seed)
@@ -69,7 +69,9 @@ public class SectionLikelihoodTests(ITestOutputHelper output)
             }
             if (IndicatrixPrior.ShapeAt(family, Array.IndexOf(prior.Families, family), b, u) is not { } shape) { values[n] = double.NegativeInfinity; continue; }
             double centre = 1 / Math.Sqrt(shape.InverseSquareX);
-            double level = centre + shape.LevelLow + random.NextDouble() * (shape.LevelHigh - shape.LevelLow) + Gaussian(random) * Math.Sqrt(shiftSd * shiftSd + shape.ExtraSigma * shape.ExtraSigma);
+            // A share of stones strays beyond the range by the stray scale (RangeStrays), drawn as the engine's mixture.
+            double stray = random.NextDouble() < RangeStrays.Share ? Gaussian(random) * RangeStrays.IndexScale : 0;
+            double level = centre + shape.LevelLow + random.NextDouble() * (shape.LevelHigh - shape.LevelLow) + stray + Gaussian(random) * Math.Sqrt(shiftSd * shiftSd + shape.ExtraSigma * shape.ExtraSigma);
             var indicatrix = family.Biaxial
                 ? Indicatrix.Biaxial(new RefractiveIndex(level), new RefractiveIndex(level + u), new RefractiveIndex(level + b))
                 : Indicatrix.Uniaxial(new RefractiveIndex(level), new RefractiveIndex(level + family.Sign * b));
