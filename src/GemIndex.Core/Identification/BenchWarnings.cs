@@ -38,7 +38,7 @@ public static class BenchWarnings
             warnings.Add($"SG uncertainty ±{sg.StandardUncertainty.ToString("0.00", CultureInfo.InvariantCulture)} is large (a small stone or a coarse balance): SG separates little here.");
         var relevant = candidates.Where(c => c.Confidence >= Relevant).ToList();
         foreach (var c in relevant.Where(c => c.Material.DoNotImmerse))
-            warnings.Add($"Possible {c.Material.Name}: do not immerse (no water or heavy liquids){(c.Material.Notes.Length > 0 ? " — " + c.Material.Notes : "")}.");
+            warnings.Add($"Possible {c.Material.Name}: do not immerse (no water or heavy liquids){(c.Material.Notes.Length > 0 ? " — " + c.Material.Notes.TrimEnd('.') : "")}.");
         if (sheet.UnknownColourWords.Count > 0)
             warnings.Add($"Colour word{(sheet.UnknownColourWords.Count > 1 ? "s" : "")} '{string.Join("', '", sheet.UnknownColourWords)}' not known: no colour evidence taken from {(sheet.UnknownColourWords.Count > 1 ? "them" : "it")} (known hues: {string.Join(", ", ColourWords.KnownHues)}).");
         var leading = species ?? [.. relevant.GroupBy(c => c.Material.Species).Select(g => new SpeciesResult
@@ -51,15 +51,36 @@ public static class BenchWarnings
             var origins = leading[i].Origins.Where(o => o.Value >= OriginShare * leading[i].Confidence).Select(o => o.Key.ToString().ToLowerInvariant()).ToList();
             if (origins.Count < 2) continue;
             string test = i == 0 && separation is { } next
-                ? $"the {next.Description} would help ({next.GainBits.ToString("0.00", CultureInfo.InvariantCulture)} bits)"
+                ? $"the {next.Description} would help"
                 : i == 0 ? "no bench test left here separates them" : "";
             warnings.Add($"{Capital(leading[i].Species)}: {string.Join(", ", origins)} cannot be separated by these tests{(test.Length > 0 ? "; " + test : "")}; for a valuable stone refer it to a qualified laboratory.");
         }
+        if (leading.Count > 0 && LaboratoryCaution(leading[0], sheet) is { } caution) warnings.Add(caution);
         if (relevant.Any(c => c.Material.Origin == OriginClass.Composite))
             warnings.Add("Possible composite: the refractometer reads only the facet it touches, and the SG of a composite means little; look at the girdle and for a join under magnification.");
         if (relevant.Any(c => c.Material.Origin == OriginClass.Treated))
             warnings.Add("A treated material is among the candidates: treatments are mostly not detectable with these tests.");
         return warnings;
+    }
+
+    /// <summary>
+    /// When one origin leads its species but the species is also met treated or laboratory-grown, the answer is only as
+    /// good as the tests done: heating, many fillers and some growth methods (HPHT and CVD diamond among them) leave no
+    /// sign a loupe can find, so the laboratory caution stays even after magnification.
+    /// </summary>
+    private static string? LaboratoryCaution(SpeciesResult leading, AnalysedSheet sheet)
+    {
+        if (leading.Confidence < Relevant) return null;
+        var held = leading.Origins.Where(o => o.Value >= OriginShare * leading.Confidence).Select(o => o.Key).ToList();
+        if (held.Count != 1) return null; // several origins held: the warning above already says they cannot be separated
+        var hidden = leading.Origins.Keys.Where(o => o != held[0] && o is OriginClass.Treated or OriginClass.Synthetic)
+            .Select(o => o == OriginClass.Treated ? "treated" : "laboratory-grown").ToList();
+        if (hidden.Count == 0) return null;
+        string looked = sheet.Sheet.Magnification is { IsEmpty: false } ? "even with the magnification recorded, " : "";
+        string unseen = leading.Species == "diamond"
+            ? "HPHT and CVD growth and HPHT colour treatment leave no sign these tests find"
+            : "heating, many fillers and some laboratory growth leave no sign these tests find";
+        return $"{Capital(leading.Species)} is also met {string.Join(" and ", hidden)}: {looked}{unseen}; for a valuable stone refer it to a qualified laboratory.";
     }
 
     private static string P(double p) => p.ToString("0.00", CultureInfo.InvariantCulture);

@@ -145,12 +145,13 @@ public sealed class Identifier
     /// For the leading species when its entries differ in origin or variety: the test not yet done that best tells its
     /// entries apart (by the advisor, over the species' own entries), or null when none would.
     /// </summary>
-    private NextTestAdvice? Separation(BenchSheet sheet, double[] posterior)
+    private NextTestAdvice? Separation(BenchSheet sheet, double[] posterior, IReadOnlyList<SpeciesResult> species)
     {
-        int best = 0;
-        for (int i = 1; i < posterior.Length; i++) if (posterior[i] > posterior[best]) best = i;
-        string species = _materials[best].Species;
-        var entries = Enumerable.Range(0, posterior.Length).Where(i => _materials[i].Species == species && posterior[i] > 1e-4)
+        // The leading species by its total, not the species of the single likeliest entry: one lone entry of another
+        // species can outweigh each of a species' many varieties while the species as a whole leads.
+        if (species.Count == 0) return null;
+        string leading = species[0].Species;
+        var entries = Enumerable.Range(0, posterior.Length).Where(i => _materials[i].Species == leading && posterior[i] > 1e-4)
             .Select(i => (_materials[i], posterior[i])).ToList();
         return entries.Count < 2 ? null : NextTestAdvisor.Advise(sheet, entries);
     }
@@ -214,16 +215,17 @@ public sealed class Identifier
         }).ToList();
         var best = candidates.MaxBy(c => c.Confidence)!;
         bool noGoodMatch = best.Fit < MinimumFit || other > best.Confidence;
+        var species = SpeciesTotals(posterior);
         var weighted = order.Where(i => posterior[i] >= 1e-3).Select(i => (_materials[i], posterior[i])).ToList();
         return new IdentificationResult
         {
             Id = sheet.Id,
-            Species = SpeciesTotals(posterior),
+            Species = species,
             Candidates = candidates,
             NotInCatalogue = other,
             NoGoodMatch = noGoodMatch,
             NextTest = adviseNextTest ? NextTestAdvisor.Advise(sheet, weighted) : null,
-            Warnings = BenchWarnings.For(analysed, candidates, other, noGoodMatch, SpeciesTotals(posterior), Separation(sheet, posterior)),
+            Warnings = BenchWarnings.For(analysed, candidates, other, noGoodMatch, species, Separation(sheet, posterior, species)),
             Series = analysed.Series,
         };
     }

@@ -6,8 +6,18 @@ public sealed record NextTestAdvice
     /// <summary>The test, as named in the batch format ("sg", "polariscope", "refractometer", …).</summary>
     public required string Test { get; init; }
 
-    /// <summary>The test in plain words ("hand spectroscope (absorption lines)").</summary>
-    public string Description => GemIndex.Core.Bench.BenchTestWords.DisplayOfWire(Test);
+    /// <summary>
+    /// The test in plain words ("hand spectroscope (absorption lines)"); for magnification, what to look for and the
+    /// lighting ("loupe or microscope (magnification): look for curved striae (diffused light) and round gas bubbles (brightfield or darkfield)").
+    /// </summary>
+    public string Description => GemIndex.Core.Bench.BenchTestWords.DisplayOfWire(Test)
+        + (LookFor.Count > 0 ? ": look for " + string.Join(" and ", LookFor.Select((f, i) => i < Lighting.Count ? $"{f} ({Lighting[i]})" : f)) : "");
+
+    /// <summary>For magnification: the features to look for (their plain names), most telling first; empty otherwise.</summary>
+    public IReadOnlyList<string> LookFor { get; init; } = [];
+
+    /// <summary>For magnification: the lighting that shows each feature of <see cref="LookFor"/>.</summary>
+    public IReadOnlyList<string> Lighting { get; init; } = [];
 
     /// <summary>Expected information gain over the current candidates, bits.</summary>
     public required double GainBits { get; init; }

@@ -1,6 +1,7 @@
 using GemIndex.Core.Bench;
 using System.Globalization;
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Magnification;
 using GemIndex.Core.Observations;
 using GemIndex.Core.Optics.Indicatrix;
 
@@ -33,8 +34,19 @@ public static class NextTestAdvisor
             double gain = MutualInformation(weighted, outcomes);
             if (best is null || gain > best.Value.Gain + 1e-9) best = (test, gain);
         }
-        if (best is not { } chosen || chosen.Gain < MinimumGainBits) return null;
+        var look = Look(sheet, weighted);
         var leaders = weighted.Where(c => c.P >= 0.02).Take(5).ToList();
+        if (look is { } l && l.Gain > (best?.Gain ?? 0) + 1e-9 && l.Gain >= MinimumGainBits)
+            return new NextTestAdvice
+            {
+                Test = BenchField.Magnification,
+                GainBits = Math.Round(l.Gain, 3),
+                Separates = [.. leaders.Select(c => c.Material.Name)],
+                Expectations = [.. leaders.Select(c => $"{c.Material.Name}: {ExpectedLook(l.Features, c.Material)}")],
+                LookFor = [.. l.Features.Select(f => MagnificationVocabulary.Of(f).Name)],
+                Lighting = [.. l.Features.Select(f => MagnificationVocabulary.Of(f).Lighting)],
+            };
+        if (best is not { } chosen || chosen.Gain < MinimumGainBits) return null;
         return new NextTestAdvice
         {
             Test = chosen.Test,
@@ -43,6 +55,38 @@ public static class NextTestAdvisor
             Expectations = [.. leaders.Select(c => $"{c.Material.Name}: {Expected(chosen.Test, c.Material)}")],
         };
     }
+
+    /// <summary>
+    /// The most informative look under magnification among the features not yet looked for: the single feature with the
+    /// largest gain, joined by a second when looking for both adds at least <see cref="MinimumGainBits"/> (features are
+    /// independent given the material, as in the likelihood, so the pair's outcomes are the four seen/not-seen pairs).
+    /// </summary>
+    private static (MagnificationFeature[] Features, double Gain)? Look(BenchSheet sheet, List<(Material Material, double P)> candidates)
+    {
+        var done = sheet.Magnification is { } m ? m.Present.Concat(m.Absent).ToHashSet() : [];
+        var open = MagnificationVocabulary.All.Select(i => i.Feature).Where(f => !done.Contains(f)).ToList();
+        if (open.Count == 0) return null;
+        double Seen(Material material, MagnificationFeature f) => MagnificationEvidence.ProbabilityOfSeeing(material.MagnificationProfile, f);
+        IEnumerable<(long, double)> One(Material material, MagnificationFeature f) => Binary(Seen(material, f));
+        IEnumerable<(long, double)> Two(Material material, MagnificationFeature f, MagnificationFeature g)
+        {
+            double a = Seen(material, f), b = Seen(material, g);
+            return [(0, a * b), (1, a * (1 - b)), (2, (1 - a) * b), (3, (1 - a) * (1 - b))];
+        }
+        var first = open.Select(f => (Feature: f, Gain: MutualInformation(candidates, x => One(x, f)))).MaxBy(x => x.Gain);
+        var second = open.Where(f => f != first.Feature)
+            .Select(g => (Feature: g, Gain: MutualInformation(candidates, x => Two(x, first.Feature, g)))).MaxBy(x => x.Gain);
+        return second.Gain >= first.Gain + MinimumGainBits
+            ? ([first.Feature, second.Feature], second.Gain)
+            : ([first.Feature], first.Gain);
+    }
+
+    private static string ExpectedLook(MagnificationFeature[] features, Material m) => string.Join(", ", features.Select(f =>
+    {
+        double p = MagnificationEvidence.ProbabilityOfSeeing(m.MagnificationProfile, f);
+        string name = MagnificationVocabulary.Of(f).Name;
+        return p >= 0.5 ? $"{name} likely" : p >= 0.1 ? $"{name} possible" : $"{name} not expected";
+    }));
 
     private static IEnumerable<(string, Func<Material, IEnumerable<(long, double)>>)> TestsNotDone(BenchSheet s, bool immersionUnsafe)
     {

@@ -41,7 +41,7 @@ internal static class IdentificationText
         o.WriteLine($"Not in the catalogue: {ReportNumbers.Percent(result.NotInCatalogue)}");
         if (result.NextTest is { } next)
         {
-            o.WriteLine($"Next test: {BenchTestWords.DisplayOfWire(next.Test)} (expected gain {ReportNumbers.Fixed(next.GainBits, "0.00")} bits)");
+            o.WriteLine($"Next test: {next.Description} (expected gain {ReportNumbers.Fixed(next.GainBits, "0.00")} bits)");
             foreach (string e in next.Expectations) o.WriteLine($"  {e}");
         }
         foreach (string w in result.Warnings) o.WriteLine($"Warning: {w}");

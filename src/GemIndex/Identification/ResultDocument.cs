@@ -75,7 +75,13 @@ internal static class ResultDocument
         {
             w.WriteStartObject("next_test");
             w.WriteString("test", next.Test);
-            w.WriteString("description", BenchTestWords.DisplayOfWire(next.Test));
+            w.WriteString("description", next.Description);
+            if (next.LookFor.Count > 0)
+            {
+                w.WriteStartArray("look_for");
+                foreach (string feature in next.LookFor) w.WriteStringValue(feature);
+                w.WriteEndArray();
+            }
             w.WriteNumber("gain_bits", Math.Round(next.GainBits, 3));
             w.WriteStartArray("separates");
             foreach (string name in next.Separates) w.WriteStringValue(name);

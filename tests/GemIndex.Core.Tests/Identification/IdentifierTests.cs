@@ -166,6 +166,48 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void When_only_origin_is_open_the_advice_names_a_look_under_magnification()
+    {
+        // Natural and synthetic sapphire share every bench reading here; only what is inside tells them apart (nature's
+        // crystals and healed fractures against growth signatures: the defaults by origin of docs/ranking.md, common practice).
+        var sheet = new BenchSheet
+        {
+            Refractometer = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770)),
+            SpecificGravity = new SpecificGravity(4.00, 0.01), Polariscope = PolariscopeReaction.DoublyRefractive,
+            Pleochroism = PleochroismObservation.Dichroic, Dispersion = DispersionObservation.ByEye(DispersionStrength.Weak), ThermalProbe = ThermalProbeResult.Negative,
+            Electrical = ElectricalResult.Insulating, UvLong = FluorescenceStrength.Inert, UvShort = FluorescenceStrength.Inert, AbsorptionLinesNanometres = [],
+        };
+        var result = Engine.Identify(sheet);
+        var next = Assert.IsType<NextTestAdvice>(result.NextTest);
+        Assert.Equal("magnification", next.Test);
+        Assert.NotEmpty(next.LookFor);
+        Assert.Equal(next.LookFor.Count, next.Lighting.Count);
+        string natural = Assert.Single(next.Expectations, e => e.StartsWith("sapphire:", StringComparison.Ordinal));
+        string synthetic = Assert.Single(next.Expectations, e => e.StartsWith("synthetic sapphire:", StringComparison.Ordinal));
+        Assert.NotEqual(natural[natural.IndexOf(':')..], synthetic[synthetic.IndexOf(':')..]);
+        Assert.StartsWith("loupe or microscope (magnification): look for ", next.Description, StringComparison.Ordinal);
+        Assert.Contains(result.Warnings, w => w.StartsWith("Corundum: natural, synthetic cannot be separated", StringComparison.Ordinal) && w.Contains("look for", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Magnification_that_settles_the_origin_keeps_the_laboratory_caution()
+    {
+        // Curved striae and round bubbles seen: the synthetic leads alone, but the species is also met natural-looking
+        // treated or grown stones a loupe cannot expose, so the laboratory caution remains.
+        var sheet = new BenchSheet
+        {
+            Refractometer = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770)),
+            Magnification = new GemIndex.Core.Magnification.MagnificationObservation(
+                [GemIndex.Core.Magnification.MagnificationFeature.CrystalInclusions, GemIndex.Core.Magnification.MagnificationFeature.NeedlesAndSilk],
+                [GemIndex.Core.Magnification.MagnificationFeature.CurvedStriae, GemIndex.Core.Magnification.MagnificationFeature.RoundGasBubbles]),
+        };
+        var result = Engine.Identify(sheet);
+        Assert.Equal("corundum", result.Species[0].Species);
+        Assert.Contains(result.Warnings, w => w.StartsWith("Corundum is also met laboratory-grown: even with the magnification recorded", StringComparison.Ordinal)
+                                              && w.EndsWith("refer it to a qualified laboratory.", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void The_next_test_is_named_in_plain_words() =>
         Assert.Equal("hand spectroscope (absorption lines)", GemIndex.Core.Bench.BenchTestWords.DisplayOfWire("absorption_nm"));
 
