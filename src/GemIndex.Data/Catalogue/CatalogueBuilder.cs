@@ -22,7 +22,7 @@ public static class CatalogueBuilder
 
     /// <summary>Writes materials to a new catalogue file of the given kind ("shipped" or "user").</summary>
     /// <exception cref="CatalogueStoreException">The file cannot be written (for example a name used twice).</exception>
-    public static void Write(IReadOnlyList<Material> materials, string outputPath, string kind, string sourceHash)
+    public static void Write(IReadOnlyList<Material> materials, string outputPath, string kind, string sourceHash, Action<int>? progress = null)
     {
         string full = Path.GetFullPath(outputPath);
         Directory.CreateDirectory(Path.GetDirectoryName(full)!);
@@ -38,7 +38,7 @@ public static class CatalogueBuilder
                 }
                 using SqliteTransaction tx = c.BeginTransaction();
                 CatalogueSchema.Create(c, tx, kind, sourceHash);
-                CatalogueWriter.Insert(c, tx, materials);
+                CatalogueWriter.Insert(c, tx, materials, progress);
                 tx.Commit();
             }
             File.Move(temporary, full, overwrite: true);

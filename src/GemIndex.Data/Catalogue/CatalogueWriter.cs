@@ -16,18 +16,20 @@ internal static class CatalogueWriter
         RETURNING id
         """;
 
-    public static void Insert(SqliteConnection connection, SqliteTransaction transaction, IReadOnlyList<Material> materials)
+    public static void Insert(SqliteConnection connection, SqliteTransaction transaction, IReadOnlyList<Material> materials, Action<int>? progress = null)
     {
         InsertReferences(connection, transaction, materials.SelectMany(m => m.Sources.Values).Distinct());
         using SqliteCommand cmd = connection.CreateCommand();
         cmd.Transaction = transaction;
         cmd.CommandText = InsertMaterial;
+        int written = 0;
         foreach (Material m in materials)
         {
             cmd.Parameters.Clear();
             AddMaterialParameters(cmd, m);
             long id = (long)cmd.ExecuteScalar()!;
             InsertChildren(connection, transaction, id, m);
+            progress?.Invoke(++written);
         }
     }
 

@@ -1,5 +1,6 @@
 using GemIndex.Core.Bench;
 using System.CommandLine;
+using GemIndex.Cli.Identification;
 using GemIndex.Core.Catalogue;
 using GemIndex.Data.Catalogue;
 using GemIndex.Data.Workbook;
@@ -52,7 +53,9 @@ internal static class CatalogueBuildCommand
                 return ExitCodes.BadInput;
             }
             string path = target, hash = ShippedCatalogue.HashOf(sources);
-            CatalogueBuilder.Write(materials, path, "shipped", hash);
+            var progress = BatchProgress.ForConsole(error, materials.Count, "entries");
+            CatalogueBuilder.Write(materials, path, "shipped", hash, progress is null ? null : done => progress.Report(done, done));
+            progress?.Finish(materials.Count);
             if (pr.GetValue(json)) CommandJson.Write(stdout, new CatalogueBuildJson(path, materials.Count, hash));
             else stdout.WriteLine($"built {materials.Count} entries from {sources.Count} family files into {path}");
             return ExitCodes.Ok;

@@ -32,4 +32,28 @@ public class BatchProgressTests
         Assert.Contains("\r7 stones in 1 s", text);
         Assert.DoesNotContain("\u001b", text);   // no colour, no escape sequence (NO_COLOR holds by construction)
     }
+
+    [Fact]
+    public void A_catalogue_build_counts_entries_against_their_total()
+    {
+        var error = new StringWriter();
+        var now = TimeSpan.FromSeconds(2);
+        var progress = BatchProgress.For(error, 400, errorIsTerminal: true, term: "xterm", () => now, unit: "entries")!;
+        progress.Report(100, 100);
+        progress.Finish(400);
+        string text = error.ToString();
+        Assert.StartsWith("\r100 entries, 50/s, about 6 s left", text);   // 100 in 2 s; 300 left at 50/s
+        Assert.Contains("\r400 entries in 2 s", text);
+    }
+
+    [Fact]
+    public void A_build_writing_to_a_pipe_prints_no_progress()
+    {
+        // The command's error writer is not the console's own standard error: no progress, only findings would show.
+        using var run = new GemIndex.Tests.CommandLine.CommandRun();
+        string output = Path.Combine(run.Folder, "built.db");
+        var (code, _, err) = GemIndex.Tests.CommandLine.CommandRun.Plain("catalogue", "build", "--output", output);
+        Assert.Equal(0, code);
+        Assert.Equal("", err);
+    }
 }
