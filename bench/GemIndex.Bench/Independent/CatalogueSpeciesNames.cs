@@ -21,10 +21,6 @@ internal static class CatalogueSpeciesNames
         ["grossular"] = ["grossular", "grossular-andradite", "hydrogrossular"],
         ["andradite"] = ["andradite", "grossular-andradite"],
         ["coral"] = ["calcareous coral"],
-        // Man-made glass is split by family in the catalogue (one dispersion band each); any of them is "glass".
-        ["glass"] = ["soda-lime glass", "silica glass", "borosilicate glass", "light lead glass", "lead flint glass", "dense lead glass",
-            "extra-dense lead glass", "highest-lead glass", "barium glass", "lanthanum glass", "lead-free high-index glass",
-            "dense lead-free glass", "fibre-optic glass"],
     };
 
     /// <summary>The catalogue species a table species stands for (its own name unless mapped).</summary>

@@ -121,7 +121,9 @@ public static class CatalogueCheck
             string own = MaterialFieldText.Of(variety, field), inherited = MaterialFieldText.Of(species, field);
             if (own == inherited)
                 f.Add(new(variety.Name, field, $"repeats its species' value {own}; state only what differs from species '{species.Name}'", FileOf(variety)));
-            else if (MaterialFieldText.RangeOf(variety, field) is { } r && MaterialFieldText.RangeOf(species, field) is { } whole
+            // An assembled stone's index is its top's and its SG the assembly's: outside the species' own ranges by nature.
+            else if (variety.Origin != OriginClass.Composite
+                && MaterialFieldText.RangeOf(variety, field) is { } r && MaterialFieldText.RangeOf(species, field) is { } whole
                 && (r.Minimum < whole.Minimum || r.Maximum > whole.Maximum))
                 f.Add(new(variety.Name, field, $"{r.ToString("0.####")} lies outside its species' range {whole.ToString("0.####")}", FileOf(variety)));
         }
@@ -132,14 +134,24 @@ public static class CatalogueCheck
     {
         foreach (IGrouping<string, Material> group in materials.Where(m => m.Dispersion > 0).GroupBy(m => m.Species))
         {
-            Material most = group.MaxBy(m => m.Dispersion!.Value)!;
-            foreach (Material m in group.Where(m => most.Dispersion!.Value / m.Dispersion!.Value >= DispersionSpreadWithinSpecies))
+            // A man-made material met as a continuum of compositions (glass from soda-lime to dense lead, plastics by
+            // polymer) disperses as its composition does: only the per-entry band applies to it. Elsewhere entries are
+            // compared where their indices overlap, since other indices mean another composition.
+            if (group.All(m => m.Origin == OriginClass.Imitation)) continue;
+            foreach (Material m in group)
+            {
+                Material? most = group.Where(o => Overlap(o, m)).MaxBy(o => o.Dispersion!.Value);
+                if (most is null || most.Dispersion!.Value / m.Dispersion!.Value < DispersionSpreadWithinSpecies) continue;
                 yield return new(m.Name, "dispersion",
                     $"{Format(m.Dispersion!.Value)} is {Format(most.Dispersion!.Value / m.Dispersion.Value)} times below " +
                     $"'{most.Name}' ({Format(most.Dispersion.Value)}) of the same species; a C–F value (nF − nC) is about " +
                     $"1/{Format(GeeBeeToCeeEffRatio)} of nG − nB, which the field holds", FileOf(m));
+            }
         }
     }
+
+    private static bool Overlap(Material a, Material b) =>
+        a.Indices.Lowest.Minimum <= b.Indices.Highest.Maximum && b.Indices.Lowest.Minimum <= a.Indices.Highest.Maximum;
 
     private static void CheckText(Material m, Action<string, string> add)
     {

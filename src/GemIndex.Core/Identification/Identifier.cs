@@ -206,7 +206,10 @@ public sealed class Identifier
         other = DiscountPoorFit(posterior, fits, other);
 
         int[] order = SpeciesFirst(posterior);
-        var candidates = order.Take(maximumCandidates).Select((i, rank) => new RankedCandidate
+        // The shown candidates are the most probable entries, then grouped species first: a species with many varieties
+        // must not fill the list with entries the readings rule out while another species' likely entry is left off.
+        var shown = new HashSet<int>(Ranked(posterior).Take(maximumCandidates));
+        var candidates = order.Where(shown.Contains).Select((i, rank) => new RankedCandidate
         {
             Material = _materials[i],
             Confidence = posterior[i],

@@ -19,16 +19,8 @@ public sealed record PublishedCase(string Line, IReadOnlyList<string> Species, i
     /// <summary>The catalogue's tourmaline species: a source that says "tourmaline" is right with any of them.</summary>
     public static IReadOnlyList<string> TourmalineGroup { get; } = ["elbaite", "dravite", "schorl", "uvite", "liddicoatite"];
 
-    /// <summary>The catalogue's man-made glass species: a source that says "glass" is right with any of them.</summary>
-    public static IReadOnlyList<string> GlassGroup { get; } =
-    [
-        "silica glass", "borosilicate glass", "soda-lime glass", "light lead glass", "lead flint glass", "dense lead glass", "extra-dense lead glass",
-        "highest-lead glass", "barium glass", "lanthanum glass", "lead-free high-index glass", "dense lead-free glass", "fibre-optic glass",
-    ];
-
-    /// <summary>The catalogue's assembled stones: a source that says "doublet" is right with any of them (its parts are not catalogued).</summary>
-    public static IReadOnlyList<string> AssembledGroup { get; } =
-        ["garnet-topped doublet", "opal doublet", "opal triplet", "quartz triplet", "spinel triplet", "corundum doublet", "diamond doublet", "jadeite triplet"];
+    /// <summary>Man-made glass is one species of the catalogue, its families (soda-lime, lead, barium…) varieties under it.</summary>
+    public static IReadOnlyList<string> GlassGroup { get; } = ["glass"];
 
     /// <summary>The origin the source gave (more than one for, say, a glass-filled synthetic); empty when not recorded.</summary>
     public IReadOnlyList<OriginClass> Origins { get; init; } = [];
@@ -52,7 +44,5 @@ public sealed record PublishedCase(string Line, IReadOnlyList<string> Species, i
 
     /// <summary>The species as the source names it: the group name for tourmaline, else the names joined.</summary>
     public string Published => string.Join(" / ", Species.SequenceEqual(TourmalineGroup) ? ["tourmaline"]
-        : Species.SequenceEqual(GlassGroup) ? ["glass"]
-        : Species.Take(AssembledGroup.Count).SequenceEqual(AssembledGroup) ? ["doublet", .. Species.Skip(AssembledGroup.Count)]
         : Species);
 }

@@ -10,7 +10,6 @@ public static class PublishedCaseBook
 {
     private static readonly IReadOnlyList<string> Tourmaline = PublishedCase.TourmalineGroup;
     private static readonly IReadOnlyList<string> Glass = PublishedCase.GlassGroup;
-    private static readonly IReadOnlyList<string> Assembled = PublishedCase.AssembledGroup;
 
     private const string ChurchBeryl = "A. H. Church, Handbook of Precious Stones (wikisource, page 103): specific gravities of beryls";
     private const string ChurchTourmaline = "A. H. Church, Handbook of Precious Stones (wikisource, page 92): 'determinations made with particular care'";
@@ -84,25 +83,25 @@ public static class PublishedCaseBook
             "Gems & Gemology, Spring 2019, Lab Notes, 'Large Faceted Gahnospinel' (gia.edu/gems-gemology/spring-2019-labnotes-large-faceted-gahnospinel): "
             + "11.34 ct dark greenish blue oval, RI 1.754, SG 4.10, 'not typical for spinel'; gahnospinel, a zinc-rich member of the spinel series (ICP-MS, not a "
             + "bench test, showed the zinc). Scored as the catalogue's spinel or gahnospinel species (the source names both)."),
-        new("""{"id":"gg-2016-ln-emerald-emerald-doublet","refractometer":{"method":"facet","readings":[{"low":1.572,"high":1.580}]},"sg":2.71,"colour":"green","magnification":{"present":["join_plane","cement_bubbles","flash_effect","fluid_inclusions"]}}""", [.. Assembled, "beryl"], 2,
+        new("""{"id":"gg-2016-ln-emerald-emerald-doublet","refractometer":{"method":"facet","readings":[{"low":1.572,"high":1.580}]},"sg":2.71,"colour":"green","magnification":{"present":["join_plane","cement_bubbles","flash_effect","fluid_inclusions"]}}""", ["beryl"], 2,
             "Gems & Gemology, Spring 2016, Lab Notes, 'Emerald/Emerald Doublet' (read at prachursinghal.blogspot.com/2016/05/emeraldemerald-doublet-figure-1.html and "
             + "fliphtml5.com/qovqs/fkdy/Spring-2016-Gems-Gemology/74): 1.81 ct green step cut, SG 2.71, RI 1.572–1.580 on the crown and 1.570–1.578 on the "
             + "pavilion (only the crown's, the table reading, is entered), chromium spectrum (no line named); a flat separation plane with flattened gas bubbles, "
-            + "flash effect in filled fractures of both parts, jagged three-phase inclusions. Both parts are beryl, so either the composite or beryl counts.")
+            + "flash effect in filled fractures of both parts, jagged three-phase inclusions. Both parts are beryl: the species is beryl, assembled.")
         { Origins = [OriginClass.Composite, OriginClass.Treated] },
-        new("""{"id":"gg-2014-gni-synthetic-emerald-topaz-doublet","uv_long":"inert","colour":"green","magnification":{"present":["join_plane","cement_bubbles","healed_fractures"]}}""", Assembled, 1,
+        new("""{"id":"gg-2014-gni-synthetic-emerald-topaz-doublet","uv_long":"inert","colour":"green","magnification":{"present":["join_plane","cement_bubbles","healed_fractures"]}}""", ["beryl", "topaz"], 1,
             "Gems & Gemology, Winter 2014, Gem News International, 'An Unusual Doublet Set in Fine Jewelry' (gia.edu/gems-gemology/winter-2014-gemnews-unusual-doublet-set-in-fine-jewelry): "
             + "green oval in a closed setting, RI impossible to measure, inert to LW; crown inert and pavilion light blue to SW (two reactions: left out); a "
             + "separation line at the girdle with flat bubbles in cement, natural fingerprint cavities in the pavilion; hydrothermal synthetic emerald on topaz "
             + "(Raman, not a bench test, named the parts).")
         { Origins = [OriginClass.Composite] },
-        new("""{"id":"gg-2010-ln-synthetic-spinel-synthetic-ruby-doublet","refractometer":{"method":"facet","readings":[{"low":1.725}]},"colour":"red","magnification":{"present":["join_plane","cement_bubbles","two_lustres","curved_striae","round_bubbles"]}}""", Assembled, 1,
+        new("""{"id":"gg-2010-ln-synthetic-spinel-synthetic-ruby-doublet","refractometer":{"method":"facet","readings":[{"low":1.725}]},"colour":"red","magnification":{"present":["join_plane","cement_bubbles","two_lustres","curved_striae","round_bubbles"]}}""", ["spinel", "corundum"], 1,
             "Gems & Gemology, Winter 2010 (Vol. 46, No. 4), Lab Notes, 'Synthetic Spinel and Synthetic Ruby Doublet' (Carlsbad; listed in the issue's contents at scribd 'WN10'), as quoted at linellelynch.com (Gem FAQs, October 2010): 4.85 ct red, RI 1.725 "
             + "on the crown and 1.760–1.770 on the pavilion (only the crown's is entered), a glue layer with planar gas bubbles, a separation plane, a different "
             + "lustre above and below, curved striae in the crown, gas bubbles and curved striae in the pavilion. Crown and pavilion reacted differently to UV "
             + "(left out).")
         { Origins = [OriginClass.Composite] },
-        new("""{"id":"gg-2016-ln-synthetic-spinel-sapphire-doublet","refractometer":{"method":"facet","readings":[{"low":1.728}]},"colour":"greenish yellow","magnification":{"present":["join_plane","cement_bubbles","curved_striae"]}}""", Assembled, 1,
+        new("""{"id":"gg-2016-ln-synthetic-spinel-sapphire-doublet","refractometer":{"method":"facet","readings":[{"low":1.728}]},"colour":"greenish yellow","magnification":{"present":["join_plane","cement_bubbles","curved_striae"]}}""", ["spinel", "corundum"], 1,
             "Gems & Gemology, Winter 2016 (Vol. 52, No. 4), Lab Notes, 'Synthetic Sapphire and Synthetic Spinel Doublets' "
             + "(gia.edu/gems-gemology/winter-2016-labnotes-synthetic-sapphire-synthetic-spinel-doublets): two greenish yellow doublets with the same published "
             + "readings (one case): crown RI 1.728 with whitish chalky SW (no strength word, left out), pavilion 1.760–1.768 and inert (not entered); a separation "
@@ -204,8 +203,6 @@ public static class PublishedCaseBook
         // One bench test: reported, not required (a single SG cannot separate the species of a general catalogue).
         new("""{"id":"bauer-quartz","sg":2.66}""", ["quartz"], 1,
             "M. Bauer, Precious Stones (trans. L. J. Spencer), p. 19 (afripics.com page copy): worked hydrostatic example, SG 2.66, 'the stone may therefore be identified as quartz'"),
-        new("""{"id":"gemmology-dev-diamond","sg":{"air_ct":17.6,"water_ct":12.6,"water_c":20}}""", ["diamond"], 1,
-            "gemmology.dev 'Measurement & Calculation': teaching example 'Diamond: 3.52 g in air, 2.52 g in water at 20 °C = SG 3.52' (grams written as carats: × 5)"),
         new("""{"id":"church-emerald-muzo-1","sg":2.710}""", ["beryl"], 1, ChurchBeryl + ": emerald from Muzo 2.710"),
         new("""{"id":"church-emerald-muzo-2","sg":2.704}""", ["beryl"], 1, ChurchBeryl + ": emerald from Muzo 2.704"),
         new("""{"id":"church-aquamarine-brazil","sg":2.702}""", ["beryl"], 1, ChurchBeryl + ": aquamarine (Brazil) 2.702"),
