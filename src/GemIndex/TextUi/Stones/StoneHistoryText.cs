@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text.Json;
 using GemIndex.Cli.TextUi.Results;
+using GemIndex.Core.Magnification;
 using GemIndex.Data.Workbook;
 
 namespace GemIndex.Cli.TextUi.Stones;
@@ -26,6 +27,7 @@ internal static class StoneHistoryText
         ["polariscope"] = "polariscope", ["pleochroism"] = "pleochroism", ["dispersion"] = "fire", ["nB"] = "n at B", ["nG"] = "n at G",
         ["thermal_probe"] = "thermal probe", ["electrical"] = "conductivity", ["uv_long"] = "UV long wave", ["uv_short"] = "UV short wave",
         ["absorption_nm"] = "absorption lines (nm)", ["id"] = "reference",
+        ["magnification.present"] = "features seen under magnification", ["magnification.absent"] = "features looked for and not seen",
     };
 
     public static IReadOnlyList<string> Lines(string reference, IReadOnlyList<StoneEdit> edits)
@@ -61,7 +63,7 @@ internal static class StoneHistoryText
     private static string Label(string field) => field.Contains('.') || field.Contains('[') ? PathWords(field) : Words.GetValueOrDefault(field, field.Replace('_', ' '));
 
     /// <summary>"refractometer.readings[2].low" → "RI step 3 low edge".</summary>
-    private static string PathWords(string path) => string.Join(" ", path.Split('.').Select(part =>
+    private static string PathWords(string path) => Words.TryGetValue(path, out string? whole) ? whole : string.Join(" ", path.Split('.').Select(part =>
     {
         int bracket = part.IndexOf('[');
         if (bracket < 0) return Words.GetValueOrDefault(part, part.Replace('_', ' '));
@@ -93,8 +95,13 @@ internal static class StoneHistoryText
             case JsonValueKind.Object:
                 foreach (JsonProperty p in e.EnumerateObject()) Walk(p.Value, path.Length == 0 ? p.Name : path + "." + p.Name, map);
                 break;
-            case JsonValueKind.Array when e.EnumerateArray().All(x => x.ValueKind is JsonValueKind.Number or JsonValueKind.String):
-                map[path] = string.Join(" ", e.EnumerateArray().Select(x => x.ValueKind == JsonValueKind.String ? x.GetString()! : x.GetRawText()));
+            case JsonValueKind.Array when e.EnumerateArray().All(x => x.ValueKind is JsonValueKind.Number):
+                map[path] = string.Join(" ", e.EnumerateArray().Select(x => x.GetRawText()));
+                break;
+            case JsonValueKind.Array when e.EnumerateArray().All(x => x.ValueKind is JsonValueKind.String):
+                // Words (the magnification features): their names, separated so that a name of two words reads as one.
+                map[path] = string.Join(", ", e.EnumerateArray().Select(x => x.GetString()!)
+                    .Select(w => MagnificationVocabulary.Find(w) is { } f ? MagnificationVocabulary.Of(f).Name : w.Replace('_', ' ')));
                 break;
             case JsonValueKind.Array:
                 int i = 0;

@@ -41,6 +41,20 @@ public class StoneHistoryTextTests
     }
 
     [Fact]
+    public void Magnification_features_are_told_by_their_names_as_seen_or_looked_for_and_not_seen()
+    {
+        const string before = """{"id":"b","sg":4.0}""";
+        const string after = """{"id":"b","sg":4.0,"magnification":{"present":["curved_striae","round_bubbles"],"absent":["needles_silk"]}}""";
+        string[] said = [.. StoneHistoryText.Describe(new StoneEdit(At, "readings", before, after))];
+        string[] expected =
+        [
+            "Features seen under magnification set to 'curved striae, round gas bubbles'",
+            "Features looked for and not seen set to 'needles and silk'",
+        ];
+        Assert.Equal(expected.Order(StringComparer.Ordinal), said.Order(StringComparer.Ordinal));
+    }
+
+    [Fact]
     public void A_field_path_from_the_store_is_named_in_words()
     {
         Assert.Equal(["RI step 2 low edge set to '1.762'"], StoneHistoryText.Describe(new StoneEdit(At, "refractometer.readings[1].low", "", "1.762")));
