@@ -206,11 +206,11 @@ wait_for "Type to find a feature"
 wait_for "── not looked for ─"                 # the page opens on its first feature, curved striae
 wait_for "Look for: fine curved growth lines"
 keys +
-wait_for " [+] curved striae"
+wait_for " yes curved striae"
 text "silk"                               # typing finds; the cursor goes to the first match
 wait_for "Find: silk_"
 keys -
-wait_for " [-] needles and silk"
+wait_for " no  needles and silk"
 wait_for "── looked for, not seen ─"
 keys Escape                               # the filter cleared: every feature listed again, with the counts
 wait_for "Type to find        1 seen, 1 not seen"
@@ -228,8 +228,8 @@ grep -qF '"absent":[{"feature":"needles_silk"' <<<"$json" || fail "the workbook 
 start
 wait_for "e2e corundum"
 keys C-l
-wait_for " [+] curved striae"
-wait_for " [-] needles and silk"
+wait_for " yes curved striae"
+wait_for " no  needles and silk"
 keys C-q
 wait_for "EXIT=0" 15
 echo "PASS tui e2e: four stones identified by species, focus order, candidate 3 and its detail, scales, export, kill and reopen, colliding references exported without loss, a read-only workbook, magnification marks saved and shown again"

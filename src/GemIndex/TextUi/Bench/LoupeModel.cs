@@ -20,7 +20,8 @@ internal sealed class LoupeModel
     /// <summary>Rows of the page besides the list and the description: the find line and the rule with the state.</summary>
     public const int FixedRows = 2;
 
-    public const string PresentMark = "[+]", AbsentMark = "[-]", NotLookedForMark = "[ ]";
+    // Words, not signs: "[-]" already means "nothing chosen" on the other pages, and a blank says "not looked for" best.
+    public const string PresentMark = "yes", AbsentMark = "no", NotLookedForMark = "";
 
     private readonly Dictionary<MagnificationFeature, FeatureState> _states = [];
 
@@ -153,8 +154,8 @@ internal sealed class LoupeModel
         return -1;
     }
 
-    /// <summary>A row as shown: a heading in capitals, or a feature indented under it with its mark.</summary>
-    public string Line(LoupeRow row) => row.Feature is { } f ? $" {Mark(State(f.Feature))} {f.Name}" : Heading(row.Group);
+    /// <summary>A row as shown: a heading in capitals, or a feature under it after its mark ("yes", "no" or blank).</summary>
+    public string Line(LoupeRow row) => row.Feature is { } f ? $" {Mark(State(f.Feature)),-3} {f.Name}" : Heading(row.Group);
 
     public static string Heading(FeatureGroup group) => group switch
     {

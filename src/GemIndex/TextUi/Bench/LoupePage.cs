@@ -16,7 +16,7 @@ namespace GemIndex.Cli.TextUi.Bench;
 internal sealed class LoupePage : BenchPage
 {
     /// <summary>The page's keys on the key line (letters and spaces go to the filter; Backspace and Esc edit it).</summary>
-    public const string KeyWords = "+ seen  - not seen  ? not looked for  type: find";
+    public const string KeyWords = "+ seen  - not seen  ? not looked for  type to find";
 
     private readonly ObservableCollection<string> _rows = [];
     private readonly Label _find;

@@ -40,12 +40,11 @@ internal static class StoneHistoryText
     public static IEnumerable<string> Describe(StoneEdit e)
     {
         if (e.Field == "created") return [$"stone created as '{e.After}'"];
-        if (Flatten(e.Before) is { } before && Flatten(e.After) is { } after)
-        {
-            string prefix = Label(e.Field) == "readings" ? "" : Label(e.Field) + " ";
+        // A reading is stored as JSON ("readings.colour" holds "\"blue\""): its text is read as JSON too.
+        bool reading = e.Field == "readings" || e.Field.StartsWith(ReadingsPrefix, StringComparison.Ordinal);
+        if (Flatten(e.Before, reading) is { } before && Flatten(e.After, reading) is { } after)
             return before.Keys.Union(after.Keys).Where(k => k != "id" && before.GetValueOrDefault(k) != after.GetValueOrDefault(k))
-                .Select(k => Change(prefix + PathWords(k), before.GetValueOrDefault(k), after.GetValueOrDefault(k)));
-        }
+                .Select(k => Change(PathWords(k.Length == 0 ? e.Field : e.Field + "." + k), before.GetValueOrDefault(k), after.GetValueOrDefault(k)));
         return [Change(Label(e.Field), e.Before, e.After)];
     }
 
@@ -62,22 +61,36 @@ internal static class StoneHistoryText
 
     private static string Label(string field) => field.Contains('.') || field.Contains('[') ? PathWords(field) : Words.GetValueOrDefault(field, field.Replace('_', ' '));
 
-    /// <summary>"refractometer.readings[2].low" → "RI step 3 low edge".</summary>
-    private static string PathWords(string path) => Words.TryGetValue(path, out string? whole) ? whole : string.Join(" ", path.Split('.').Select(part =>
+    private const string ReadingsPrefix = "readings.";
+
+    /// <summary>
+    /// "refractometer.readings[2].low" → "RI step 3 low edge"; the store's "readings." before a reading is left out
+    /// ("readings.colour" → "colour"), since every such field is a reading.
+    /// </summary>
+    private static string PathWords(string path)
+    {
+        if (path.StartsWith(ReadingsPrefix, StringComparison.Ordinal)) path = path[ReadingsPrefix.Length..];
+        return Words.TryGetValue(path, out string? whole) ? whole : string.Join(" ", path.Split('.').Select(PartWords));
+    }
+
+    private static string PartWords(string part)
     {
         int bracket = part.IndexOf('[');
         if (bracket < 0) return Words.GetValueOrDefault(part, part.Replace('_', ' '));
         int index = int.Parse(part[(bracket + 1)..part.IndexOf(']')], CultureInfo.InvariantCulture);
         string name = part[..bracket];
         return name == "readings" ? $"step {index + 1}" : $"{Words.GetValueOrDefault(name, name.Replace('_', ' '))} {index + 1}";
-    }));
+    }
 
-    /// <summary>A JSON object or array as path → value (null when the text is not JSON: it is then shown as it is).</summary>
-    private static Dictionary<string, string>? Flatten(string text)
+    /// <summary>
+    /// A JSON object or array (or, for a reading, a JSON string) as path → value; null when the text is not JSON: it
+    /// is then shown as it is.
+    /// </summary>
+    private static Dictionary<string, string>? Flatten(string text, bool reading)
     {
         string t = text.Trim();
         if (t.Length == 0) return [];
-        if (t[0] is not ('{' or '[')) return null;
+        if (t[0] is not ('{' or '[') && !(reading && t[0] == '"')) return null;
         try
         {
             using JsonDocument doc = JsonDocument.Parse(t);

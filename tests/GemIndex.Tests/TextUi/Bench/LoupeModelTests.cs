@@ -203,13 +203,13 @@ public class LoupeModelTests
     {
         var model = new LoupeModel();
         LoupeRow striae = model.Rows[model.RowOf(MagnificationFeature.CurvedStriae)];
-        Assert.Equal(" [ ] curved striae", model.Line(striae));
+        Assert.Equal("     curved striae", model.Line(striae));
         Assert.StartsWith("── not looked for ─", model.Rule(striae, PageWidth));
         model.Set(MagnificationFeature.CurvedStriae, FeatureState.Present);
-        Assert.Equal(" [+] curved striae", model.Line(striae));
+        Assert.Equal(" yes curved striae", model.Line(striae));
         Assert.StartsWith("── seen ─", model.Rule(striae, PageWidth));
         model.Set(MagnificationFeature.CurvedStriae, FeatureState.Absent);
-        Assert.Equal(" [-] curved striae", model.Line(striae));
+        Assert.Equal(" no  curved striae", model.Line(striae));
         Assert.StartsWith("── looked for, not seen ─", model.Rule(striae, PageWidth));
         Assert.Equal(PageWidth, model.Rule(striae, PageWidth).Length);
         string find = model.FindLine(PageWidth);

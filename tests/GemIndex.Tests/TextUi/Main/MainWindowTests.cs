@@ -396,7 +396,7 @@ public sealed class MainWindowTests : IDisposable
         app.LayoutAndDraw();
         string screen = app.Driver!.ToString()!;
         Assert.Contains("Find: silk_", screen);
-        Assert.Contains(" [-] needles and silk", screen);
+        Assert.Contains(" no  needles and silk", screen);
         Assert.Contains("── looked for, not seen ─", screen);
         Assert.Equal("curved_striae round_bubbles", _session.Form.Text(BenchFields.FeaturesPresent));
         Assert.Equal("needles_silk", _session.Form.Text(BenchFields.FeaturesAbsent));
