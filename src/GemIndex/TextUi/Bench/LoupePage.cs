@@ -57,6 +57,7 @@ internal sealed class LoupePage : BenchPage
     {
         Model.SetFilter("");
         Fill();
+        List.Viewport = List.Viewport with { Y = 0 };   // the first heading in view too, wherever the list was scrolled
         Select(Model.FirstFeatureRow);
         List.SetFocus();
     }

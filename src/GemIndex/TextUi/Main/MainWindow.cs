@@ -152,7 +152,11 @@ internal sealed class MainWindow : Window
         _tooSmall.Text = small
             ? $"Window too small: the bench needs at least {MinimumColumns} x {MinimumRows} characters (this one is {Viewport.Width} x {Viewport.Height}).\nEnlarge the terminal; Ctrl+Q quits (everything is saved)."
             : "";
-        if (small == _tooSmall.Visible) return;
+        if (small == _tooSmall.Visible)
+        {
+            if (!small) ShowBars();   // the key line fitted to the new width
+            return;
+        }
         _tooSmall.Visible = small;
         foreach (View v in new View[] { _pageBar, _left, Results, _keyLine }) v.Visible = !small;
         if (!small) ShowPage(CurrentPage);
