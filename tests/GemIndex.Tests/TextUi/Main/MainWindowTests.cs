@@ -225,6 +225,16 @@ public sealed class MainWindowTests : IDisposable
         return (app, window, token);
     }
 
+    /// <summary>The program started again on the same workbook (after the terminal closed): a new session and window.</summary>
+    private (BenchSession Session, MainWindow Window) Restart()
+    {
+        var session = new BenchSession(_workbook, new BenchAssessor(new Identifier(TestMaterials.All)), _uiQueue.Enqueue);
+        var window = new MainWindow(session, TestMaterials.All);
+        session.Start();
+        window.FillFromModel();
+        return (session, window);
+    }
+
     [Fact]
     public void Each_page_opens_at_its_first_reading_whatever_field_was_used_last()
     {
@@ -366,10 +376,8 @@ public sealed class MainWindowTests : IDisposable
         app.End(token);
         app.Dispose();
 
-        var again = new BenchSession(_workbook, new BenchAssessor(new Identifier(TestMaterials.All)), _uiQueue.Enqueue);
-        using var reopened = new MainWindow(again, TestMaterials.All);
-        again.Start();
-        reopened.FillFromModel();
+        var (again, reopened) = Restart();
+        using var _ = reopened;
         Assert.Equal("1.762", reopened.Refractometer.Low.Text);
         Assert.Equal("1.770", reopened.Refractometer.High.Text);
         Assert.Empty(again.Form.Steps);   // still only typed: a step is stored with Enter
@@ -444,14 +452,32 @@ public sealed class MainWindowTests : IDisposable
         app.End(token);
         app.Dispose();
 
-        var again = new BenchSession(_workbook, new BenchAssessor(new Identifier(TestMaterials.All)), _uiQueue.Enqueue);
-        using var reopened = new MainWindow(again, TestMaterials.All);
-        again.Start();                                               // the stone changed last opens
-        reopened.FillFromModel();
+        var (again, reopened) = Restart();                          // the stone changed last opens
+        using var _ = reopened;
         Assert.Equal(id, again.Form.StoneId);
         Assert.Equal("curved_striae chevron_growth", reopened.Loupe.Model.PresentText);
         Assert.Equal("angular_zoning", reopened.Loupe.Model.AbsentText);
         Assert.True(again.Flush());
+    }
+
+    [Fact]
+    public void On_the_loupe_a_heading_is_never_the_cursors_row_whether_reached_by_keys_or_a_click()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.L.WithCtrl);
+        app.InjectKey(Key.CursorUp);                                 // from the first feature: nowhere to go, the heading is passed over
+        Assert.Equal(MagnificationFeature.CurvedStriae, window.Loupe.Current?.Feature?.Feature);
+        app.InjectKey(Key.End);
+        Assert.Equal(MagnificationFeature.CementLayerBubbles, window.Loupe.Current?.Feature?.Feature);
+        app.InjectKey(Key.Home);
+        Assert.Equal(MagnificationFeature.CurvedStriae, window.Loupe.Current?.Feature?.Feature);
+        app.LayoutAndDraw();
+        int inclusions = window.Loupe.Model.Rows.ToList().FindIndex(r => r.IsHeading && r.Group == FeatureGroup.Inclusion);
+        app.InjectSequence(InputInjectionExtensions.LeftButtonClick(window.Loupe.List.ViewportToScreen(new System.Drawing.Point(2, inclusions))));
+        Assert.Equal(MagnificationFeature.RoundGasBubbles, window.Loupe.Current?.Feature?.Feature);
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
     }
 
     [Theory]
