@@ -4,7 +4,9 @@
 #   1. a uniaxial series: quartz, ω 1.544 constant, ε' moving up to 1.553, SG 2.65 (common practice handbook values);
 #   2. over the limit with SG 5.80: cubic zirconia (SG 5.6–6.0, index 2.15 above any contact liquid; common practice);
 #   3. a biaxial series: peridot, α 1.654, β 1.672, γ 1.690 (common practice handbook values), SG 3.34 from weights
-#      in air and water (1.670 ct, 1.170 ct: 1.670 / 0.500 = 3.34).
+#      in air and water (1.670 ct, 1.170 ct: 1.670 / 0.500 = 3.34);
+#   4. blue corundum, ω 1.770, ε 1.762, SG 4.00 (common practice handbook values), then on the loupe page curved striae
+#      seen and needles (silk) looked for and not seen: melt growth, so a flame-fusion synthetic leads the candidates.
 # Along the way: the focus order of every page, the rotation step set once and remembered, candidate 3 reached from
 # the keyboard with its detail, the scales, the export; then a kill -9 while typing and the stone reopened whole.
 # Prints PASS or FAIL with the screen, exits non-zero on failure.
@@ -186,4 +188,48 @@ keys C-q
 wait_for "EXIT=0" 15
 [[ "$(sha256sum "$workbook" | cut -d' ' -f1)" == "$wb_before" ]] || fail "the read-only workbook changed"
 chmod u+w "$workbook"
-echo "PASS tui e2e: three stones identified by species, focus order, candidate 3 and its detail, scales, export, kill and reopen, colliding references exported without loss, a read-only workbook"
+
+# ---- stone 4: blue corundum, then the loupe page (Ctrl+L) ----
+tmux kill-session -t "$session"
+start
+keys C-n; text "e2e corundum"; keys Tab Tab Tab Tab Tab; text "blue"
+keys F3
+step 1.762 1.770                          # the rotation step (45°) is a bench setting, kept from stone 1
+step 1.765 1.770
+step 1.768 1.770
+step 1.765 1.770
+keys F4; text "4.00"
+wait_match "│Corundum [0-9]+%"
+keys C-l
+wait_for "[^L Loupe]"
+wait_for "Type to find a feature"
+wait_for "── not looked for ─"                 # the page opens on its first feature, curved striae
+wait_for "Look for: fine curved growth lines"
+keys +
+wait_for " yes curved striae"
+text "silk"                               # typing finds; the cursor goes to the first match
+wait_for "Find: silk_"
+keys -
+wait_for " no  needles and silk"
+wait_for "── looked for, not seen ─"
+keys Escape                               # the filter cleared: every feature listed again, with the counts
+wait_for "Type to find        1 seen, 1 not seen"
+wait_match "│1 flame-fusion synthetic"     # melt growth: the flame-fusion synthetic leads
+echo "---- 80x24 loupe ----"; screen
+keys C-q
+wait_for "EXIT=0" 15
+tmux kill-session -t "$session"
+# The stored readings hold both marks: the stone's report, read from the workbook by the command line.
+json=$(env HOME="$tmp" XDG_DATA_HOME="$tmp/data" XDG_CACHE_HOME="$tmp/cache" \
+  dotnet "$dll" report stone --workbook "$workbook" --stone "e2e corundum" --format json | tr -d ' \n')
+grep -qF '"present":[{"feature":"curved_striae"' <<<"$json" || fail "the workbook does not hold curved_striae as seen"
+grep -qF '"absent":[{"feature":"needles_silk"' <<<"$json" || fail "the workbook does not hold needles_silk as looked for and not seen"
+# Restarted, the stone opens with its marks on the loupe page.
+start
+wait_for "e2e corundum"
+keys C-l
+wait_for " yes curved striae"
+wait_for " no  needles and silk"
+keys C-q
+wait_for "EXIT=0" 15
+echo "PASS tui e2e: four stones identified by species, focus order, candidate 3 and its detail, scales, export, kill and reopen, colliding references exported without loss, a read-only workbook, magnification marks saved and shown again"

@@ -41,6 +41,9 @@ internal static class BenchFields
     public const string UvShort = BenchField.UvShort;
     public const string Absorption = BenchField.Absorption;
 
+    public const string FeaturesPresent = BenchField.FeaturesPresent;
+    public const string FeaturesAbsent = BenchField.FeaturesAbsent;
+
     /// <summary>The key of one rotation step's row.</summary>
     public static string Step(int index) => BenchField.Step(index);
 }

@@ -12,14 +12,17 @@ internal class BenchPage : View
     private readonly Label _problems;
     private int _row;
 
-    public BenchPage(string title, string keys)
+    /// <param name="title">The page's name in its frame.</param>
+    /// <param name="keys">The page's own keys, for the key line.</param>
+    /// <param name="problemRows">Rows at the bottom for the reasons of refused entries (0: the page shows them itself).</param>
+    public BenchPage(string title, string keys, int problemRows = 4)
     {
         Title = title;
         Keys = keys;
         Width = Dim.Fill();
         Height = Dim.Fill();
         CanFocus = true;
-        _problems = new Label { X = 0, Y = Pos.AnchorEnd(4), Width = Dim.Fill(), Height = 4 };
+        _problems = new Label { X = 0, Y = Pos.AnchorEnd(problemRows), Width = Dim.Fill(), Height = problemRows, Visible = problemRows > 0 };
         _problems.SchemeName = SchemeManager.SchemesToSchemeName(Schemes.Error);
         Add(_problems);
     }
@@ -38,7 +41,7 @@ internal class BenchPage : View
     public virtual View FirstReading => _inOrder[0] is FormField f ? f.Edit : _inOrder[0];
 
     /// <summary>Opens the page at its first reading (never at the field used last: readings would go astray).</summary>
-    public void FocusFirst() => FirstReading.SetFocus();
+    public virtual void FocusFirst() => FirstReading.SetFocus();
 
     protected int NextRow(int rows = 1)
     {

@@ -13,6 +13,7 @@ internal static class FormReader
     [
         BenchFields.Spot, BenchFields.LiquidLimit, BenchFields.LightNm, BenchFields.Sg, BenchFields.AirCt, BenchFields.WaterCt, BenchFields.WaterC,
         BenchFields.HeavyLiquids, BenchFields.IndexAtB, BenchFields.IndexAtG, BenchFields.Absorption, BenchFields.Colour,
+        BenchFields.FeaturesPresent, BenchFields.FeaturesAbsent,
     ];
 
     private static readonly string[] ChoiceFields =

@@ -35,6 +35,8 @@ internal static class StoneFormText
         yield return new(BenchFields.IndexAtB, r.DispersionIndices is { } d ? Number(d.NB) : "");
         yield return new(BenchFields.IndexAtG, r.DispersionIndices is { } g ? Number(g.NG) : "");
         yield return new(BenchFields.Absorption, r.AbsorptionNm is { } lines ? BenchSyntax.Lines(lines.Select(Number)) : "");
+        yield return new(BenchFields.FeaturesPresent, BenchSyntax.Features(r.FeaturesPresent));
+        yield return new(BenchFields.FeaturesAbsent, BenchSyntax.Features(r.FeaturesAbsent));
     }
 
     public static IEnumerable<KeyValuePair<string, string>> Choices(StoneReadings r)

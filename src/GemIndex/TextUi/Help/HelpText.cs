@@ -7,6 +7,7 @@ internal static class HelpText
     [
         ("F1", "this help"),
         ("F2 F3 F4 F5", "stone sheet / refractometer / SG and liquids / other tests; each opens at its first reading"),
+        ("Ctrl+L", "magnification (loupe or microscope): the features, grouped; opens on the first, with every feature listed"),
         ("F10", "the cursor to the answer and back (Esc also returns); arrows and PgUp/PgDn scroll it"),
         ("F9, Enter", "on a candidate: its detail: reasons with their numbers, and its catalogue entry"),
         ("F6", "edge plot (two shadow edges against rotation)"),
@@ -20,6 +21,8 @@ internal static class HelpText
         ("RI: Enter", "store the step being typed; the rotation moves on by the rotation step (set once on the page; 15° until set)"),
         ("RI: Enter on step", "edit that step; Delete removes it"),
         ("Choices", "one key picks the answer: n none; w m s v weak, moderate, strong, very strong; i d a x singly refractive, doubly refractive, aggregate, anomalous; b t dichroic, trichroic; + - reacts, does not react; y yes. Space or Backspace clears; a digit goes on to the next field"),
+        ("Loupe: + - ?", "on the feature under the cursor: + seen, - looked for and not seen, ? not looked for (Delete too); ↑↓ PgUp PgDn move"),
+        ("Loupe: typing", "letters find features by name or description (several words: all must match); Backspace edits, Esc clears"),
         ("Mouse", "click a field or a tab; click a choice to cycle it"),
     ];
 

@@ -18,7 +18,7 @@ using Terminal.Gui.Views;
 namespace GemIndex.Cli.TextUi.Main;
 
 /// <summary>
-/// The bench: on the left one page of the form (stone, refractometer, SG, other tests), on the right the live
+/// The bench: on the left one page of the form (stone, refractometer, SG, other tests, magnification), on the right the live
 /// identification, at the top the pages, at the bottom the keys. Wiring only: the models do the work.
 /// </summary>
 internal sealed class MainWindow : Window
@@ -31,8 +31,9 @@ internal sealed class MainWindow : Window
 
     private const string GlobalKeys = "F1 help F10 answer F9 detail F6 plot ^R scales F7 catalogue F8 stones ^E export ^N new ^Q quit";
 
-    // At 80 columns the page's own keys come first and the rest of the line keeps the keys used most; F1 lists them all.
-    private const string ShortGlobalKeys = "F1 keys F10 answer F9 detail ^E export ^Q quit";
+    // At 80 columns the page's own keys come first and the rest of the line keeps the keys used most, as many as fit
+    // (whole: a key and its word); F1 lists them all.
+    private static readonly string[] ShortGlobalKeys = ["F1 keys", "F10 answer", "F9 detail", "^E export", "^Q quit"];
     private const string AnswerKeys = "↑↓ PgUp PgDn scroll, Enter detail │ F10 or Esc back to the form";
     private readonly BenchSession _session;
     private IReadOnlyList<Material> _catalogue;
@@ -49,7 +50,7 @@ internal sealed class MainWindow : Window
         Title = "GemIndex";
         BorderStyle = LineStyle.None;
         if (Monochrome.Wanted) Monochrome.Apply(this);
-        Pages = [new StonePage(), new RefractometerPage(), new GravityPage(), new TestsPage()];
+        Pages = [new StonePage(), new RefractometerPage(), new GravityPage(), new TestsPage(), new LoupePage()];
         _pageBar = new Label { Width = Dim.Fill() };
         _pageBar.MouseEvent += (_, m) =>
         {
@@ -66,7 +67,7 @@ internal sealed class MainWindow : Window
         Add(_pageBar, _left, Results, _keyLine, _tooSmall);
         ViewportChanged += (_, _) => FitToScreen();
         Wire();
-        FreeExportKey(this);
+        FreeWindowKeys(this);
         session.Assessed += ShowAssessment;
         Results.DetailRequested += ShowDetail;
         KeyDown += OnGlobalKey;
@@ -93,16 +94,25 @@ internal sealed class MainWindow : Window
         _session.UseAssessor(assessor);
     }
 
-    /// <summary>A text field takes Ctrl+E as "end of line" (End does the same): let it reach the window as "export".</summary>
-    private static void FreeExportKey(View view)
+    /// <summary>
+    /// A text field takes Ctrl+E as "end of line" (End does the same), a list Ctrl+N as "down" (the arrow does the
+    /// same): let them reach the window as "export" and "new stone", whatever has the cursor.
+    /// </summary>
+    private static void FreeWindowKeys(View view)
     {
         if (view is TextField field) field.KeyBindings.Remove(Key.E.WithCtrl);
-        foreach (View sub in view.SubViews) FreeExportKey(sub);
+        if (view is ListView list) list.KeyBindings.Remove(Key.N.WithCtrl);
+        foreach (View sub in view.SubViews) FreeWindowKeys(sub);
     }
 
     public RefractometerPage Refractometer => (RefractometerPage)Pages[1];
 
     public GravityPage Gravity => (GravityPage)Pages[2];
+
+    public LoupePage Loupe => (LoupePage)Pages[LoupePageIndex];
+
+    /// <summary>The loupe page's place; Ctrl+L opens it (L for loupe: the function keys next in line are taken or, F11, kept by many terminals for full screen).</summary>
+    public const int LoupePageIndex = 4;
 
     public ResultsView Results { get; }
 
@@ -110,7 +120,7 @@ internal sealed class MainWindow : Window
 
     public string KeyLine => _keyLine.Text;
 
-    private static readonly string[] PageNames = ["F2 Stone", "F3 RI", "F4 SG", "F5 Tests"];
+    private static readonly string[] PageNames = ["F2 Stone", "F3 RI", "F4 SG", "F5 Tests", "^L Loupe"];
 
     private int PageAt(int x)
     {
@@ -142,7 +152,11 @@ internal sealed class MainWindow : Window
         _tooSmall.Text = small
             ? $"Window too small: the bench needs at least {MinimumColumns} x {MinimumRows} characters (this one is {Viewport.Width} x {Viewport.Height}).\nEnlarge the terminal; Ctrl+Q quits (everything is saved)."
             : "";
-        if (small == _tooSmall.Visible) return;
+        if (small == _tooSmall.Visible)
+        {
+            if (!small) ShowBars();   // the key line fitted to the new width
+            return;
+        }
         _tooSmall.Visible = small;
         foreach (View v in new View[] { _pageBar, _left, Results, _keyLine }) v.Visible = !small;
         if (!small) ShowPage(CurrentPage);
@@ -161,8 +175,16 @@ internal sealed class MainWindow : Window
         if (Results.HasFocus) return AnswerKeys;
         if (Pages[CurrentPage].Choices.FirstOrDefault(c => c.HasFocus) is { } choice) return choice.Choice.KeyWords;
         string keys = Pages[CurrentPage].Keys;
+        int room = Math.Max(MinimumColumns, Viewport.Width) - 1;
         string full = $"{keys} │ {GlobalKeys}";
-        return full.Length <= Math.Max(MinimumColumns, Viewport.Width) - 1 ? full : $"{keys} │ {ShortGlobalKeys}";
+        if (full.Length <= room) return full;
+        string line = keys + " │";
+        foreach (string pair in ShortGlobalKeys)
+        {
+            if (line.Length + 1 + pair.Length > room) break;
+            line += " " + pair;
+        }
+        return line;
     }
 
     /// <summary>F10: the cursor to the answer (on the selected candidate, or the first), or back to the form.</summary>
@@ -189,6 +211,12 @@ internal sealed class MainWindow : Window
             foreach (ChoiceField c in page.Choices)
                 c.Picked += picked => { _session.Form.Choose(picked.Choice.Field, picked.Word); _session.Changed(); };
         }
+        Loupe.Marked += page =>
+        {
+            _session.Form.SetText(BenchFields.FeaturesPresent, page.Model.PresentText);
+            _session.Form.SetText(BenchFields.FeaturesAbsent, page.Model.AbsentText);
+            _session.Changed();
+        };
         RefractometerPage rf = Refractometer;
         rf.StoreRequested += (index, step) =>
         {
@@ -226,6 +254,7 @@ internal sealed class MainWindow : Window
                 }
                 foreach (ChoiceField c in page.Choices) c.Show(_session.Form.Choice(c.Choice.Field));
             }
+            Loupe.Load(_session.Form.Text(BenchFields.FeaturesPresent), _session.Form.Text(BenchFields.FeaturesAbsent));
             Refractometer.ShowSteps(_session.Form.Steps, new Dictionary<string, string>());
             Refractometer.BeginStep(null, null, _session.Form.NextRotation());
             // A step typed but not stored (a closed terminal, another stone opened meanwhile) comes back on the edit line.
@@ -266,6 +295,7 @@ internal sealed class MainWindow : Window
         else if (key == Key.F3) ShowPage(1);
         else if (key == Key.F4) ShowPage(2);
         else if (key == Key.F5) ShowPage(3);
+        else if (key == Key.L.WithCtrl) ShowPage(LoupePageIndex);
         else if (key == Key.F6) EdgePlotView.Show(App!, new EdgePlotModel(_session.Results.Latest?.Readings.Refractometer?.Readings ?? []));
         else if (key == Key.R.WithCtrl) ScaleView.Show(App!, new ScaleModel(_session.Results.Latest));
         else if (key == Key.F7 && _catalogue.Count == 0) _keyLine.Text = "F7: " + (_session.Results.WaitingReason ?? _session.Results.Waiting ?? "the catalogue is empty");   // no pop-up to swallow the next keys

@@ -68,6 +68,8 @@ internal static class ResultText
         else if (r.Candidates.Where(c => c.Material.Species == lead.Species && c.Confidence >= BenchWarnings.Relevant).ToList() is [var only]
                  && only.Material.Name != lead.Species)
             lines.Add($"  {only.Material.Name}, {Origin(only.Material.Origin)}");   // the variety beneath its species: "Forsterite" / "peridot"
+        else if (origins is [var one])
+            lines.Add($"  {Origin(one.Key)} {Percent(one.Value)}");   // several entries, one origin left (melt-growth signs seen: "synthetic 96%")
         foreach (SpeciesResult other in r.Species.Skip(1).Where(s => s.Confidence >= BenchWarnings.Relevant).Take(2))
             lines.Add($"or {other.Species} {Percent(other.Confidence)}");
         return lines;

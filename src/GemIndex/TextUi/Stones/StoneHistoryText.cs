@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text.Json;
 using GemIndex.Cli.TextUi.Results;
+using GemIndex.Core.Magnification;
 using GemIndex.Data.Workbook;
 
 namespace GemIndex.Cli.TextUi.Stones;
@@ -26,6 +27,7 @@ internal static class StoneHistoryText
         ["polariscope"] = "polariscope", ["pleochroism"] = "pleochroism", ["dispersion"] = "fire", ["nB"] = "n at B", ["nG"] = "n at G",
         ["thermal_probe"] = "thermal probe", ["electrical"] = "conductivity", ["uv_long"] = "UV long wave", ["uv_short"] = "UV short wave",
         ["absorption_nm"] = "absorption lines (nm)", ["id"] = "reference",
+        ["magnification.present"] = "features seen under magnification", ["magnification.absent"] = "features looked for and not seen",
     };
 
     public static IReadOnlyList<string> Lines(string reference, IReadOnlyList<StoneEdit> edits)
@@ -38,12 +40,11 @@ internal static class StoneHistoryText
     public static IEnumerable<string> Describe(StoneEdit e)
     {
         if (e.Field == "created") return [$"stone created as '{e.After}'"];
-        if (Flatten(e.Before) is { } before && Flatten(e.After) is { } after)
-        {
-            string prefix = Label(e.Field) == "readings" ? "" : Label(e.Field) + " ";
+        // A reading is stored as JSON ("readings.colour" holds "\"blue\""): its text is read as JSON too.
+        bool reading = e.Field == "readings" || e.Field.StartsWith(ReadingsPrefix, StringComparison.Ordinal);
+        if (Flatten(e.Before, reading) is { } before && Flatten(e.After, reading) is { } after)
             return before.Keys.Union(after.Keys).Where(k => k != "id" && before.GetValueOrDefault(k) != after.GetValueOrDefault(k))
-                .Select(k => Change(prefix + PathWords(k), before.GetValueOrDefault(k), after.GetValueOrDefault(k)));
-        }
+                .Select(k => Change(PathWords(k.Length == 0 ? e.Field : e.Field + "." + k), before.GetValueOrDefault(k), after.GetValueOrDefault(k)));
         return [Change(Label(e.Field), e.Before, e.After)];
     }
 
@@ -60,22 +61,36 @@ internal static class StoneHistoryText
 
     private static string Label(string field) => field.Contains('.') || field.Contains('[') ? PathWords(field) : Words.GetValueOrDefault(field, field.Replace('_', ' '));
 
-    /// <summary>"refractometer.readings[2].low" → "RI step 3 low edge".</summary>
-    private static string PathWords(string path) => string.Join(" ", path.Split('.').Select(part =>
+    private const string ReadingsPrefix = "readings.";
+
+    /// <summary>
+    /// "refractometer.readings[2].low" → "RI step 3 low edge"; the store's "readings." before a reading is left out
+    /// ("readings.colour" → "colour"), since every such field is a reading.
+    /// </summary>
+    private static string PathWords(string path)
+    {
+        if (path.StartsWith(ReadingsPrefix, StringComparison.Ordinal)) path = path[ReadingsPrefix.Length..];
+        return Words.TryGetValue(path, out string? whole) ? whole : string.Join(" ", path.Split('.').Select(PartWords));
+    }
+
+    private static string PartWords(string part)
     {
         int bracket = part.IndexOf('[');
         if (bracket < 0) return Words.GetValueOrDefault(part, part.Replace('_', ' '));
         int index = int.Parse(part[(bracket + 1)..part.IndexOf(']')], CultureInfo.InvariantCulture);
         string name = part[..bracket];
         return name == "readings" ? $"step {index + 1}" : $"{Words.GetValueOrDefault(name, name.Replace('_', ' '))} {index + 1}";
-    }));
+    }
 
-    /// <summary>A JSON object or array as path → value (null when the text is not JSON: it is then shown as it is).</summary>
-    private static Dictionary<string, string>? Flatten(string text)
+    /// <summary>
+    /// A JSON object or array (or, for a reading, a JSON string) as path → value; null when the text is not JSON: it
+    /// is then shown as it is.
+    /// </summary>
+    private static Dictionary<string, string>? Flatten(string text, bool reading)
     {
         string t = text.Trim();
         if (t.Length == 0) return [];
-        if (t[0] is not ('{' or '[')) return null;
+        if (t[0] is not ('{' or '[') && !(reading && t[0] == '"')) return null;
         try
         {
             using JsonDocument doc = JsonDocument.Parse(t);
@@ -93,8 +108,13 @@ internal static class StoneHistoryText
             case JsonValueKind.Object:
                 foreach (JsonProperty p in e.EnumerateObject()) Walk(p.Value, path.Length == 0 ? p.Name : path + "." + p.Name, map);
                 break;
-            case JsonValueKind.Array when e.EnumerateArray().All(x => x.ValueKind is JsonValueKind.Number or JsonValueKind.String):
-                map[path] = string.Join(" ", e.EnumerateArray().Select(x => x.ValueKind == JsonValueKind.String ? x.GetString()! : x.GetRawText()));
+            case JsonValueKind.Array when e.EnumerateArray().All(x => x.ValueKind is JsonValueKind.Number):
+                map[path] = string.Join(" ", e.EnumerateArray().Select(x => x.GetRawText()));
+                break;
+            case JsonValueKind.Array when e.EnumerateArray().All(x => x.ValueKind is JsonValueKind.String):
+                // Words (the magnification features): their names, separated so that a name of two words reads as one.
+                map[path] = string.Join(", ", e.EnumerateArray().Select(x => x.GetString()!)
+                    .Select(w => MagnificationVocabulary.Find(w) is { } f ? MagnificationVocabulary.Of(f).Name : w.Replace('_', ' ')));
                 break;
             case JsonValueKind.Array:
                 int i = 0;

@@ -38,6 +38,7 @@ public class BenchModelTests
                 Id = "lot 2", Colour = "red", Sg = 3.6, Polariscope = "singly_refractive", UvLong = "moderate", AbsorptionNm = [685, 656],
                 Refractometer = new RefractometerReadings { Readings = [new EdgeReadingEntry(0, 1.718, null)], LiquidLimit = 1.81 },
                 HeavyLiquids = [new HeavyLiquidReading(3.32, "floats")],
+                FeaturesPresent = ["crystals", "needles_silk"], FeaturesAbsent = ["round_bubbles"],
             },
         };
         var form = new BenchModel();
@@ -46,6 +47,8 @@ public class BenchModelTests
         Assert.Equal("685 656", form.Text(BenchFields.Absorption));
         Assert.Equal("3.32 floats", form.Text(BenchFields.HeavyLiquids));
         Assert.Equal("singly_refractive", form.Choice(BenchFields.Polariscope));
+        Assert.Equal("crystals needles_silk", form.Text(BenchFields.FeaturesPresent));
+        Assert.Equal("round_bubbles", form.Text(BenchFields.FeaturesAbsent));
         var assessor = new BenchAssessor(null);
         BenchAssessment a = assessor.Assess(form.Snapshot());
         Assert.Empty(a.Errors);

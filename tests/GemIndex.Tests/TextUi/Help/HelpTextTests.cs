@@ -8,7 +8,7 @@ public class HelpTextTests
     public void Help_lists_every_function_key_and_the_quit_key()
     {
         string help = HelpText.Render();
-        foreach (string key in new[] { "F1", "F2", "F3", "F4", "F5", "F6", "F7", "F8", "F9", "F10", "Ctrl+N", "Ctrl+Q" }) Assert.Contains(key, help);
+        foreach (string key in new[] { "F1", "F2", "F3", "F4", "F5", "F6", "F7", "F8", "F9", "F10", "Ctrl+L", "Ctrl+N", "Ctrl+Q" }) Assert.Contains(key, help);
     }
 
     [Fact]

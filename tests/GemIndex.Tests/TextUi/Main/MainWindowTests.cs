@@ -2,6 +2,7 @@ using System.Collections.Concurrent;
 using GemIndex.Cli.TextUi.Bench;
 using GemIndex.Cli.TextUi.Main;
 using GemIndex.Core.Identification;
+using GemIndex.Core.Magnification;
 using GemIndex.Data.Workbook;
 using Terminal.Gui.App;
 using Terminal.Gui.Input;
@@ -224,6 +225,16 @@ public sealed class MainWindowTests : IDisposable
         return (app, window, token);
     }
 
+    /// <summary>The program started again on the same workbook (after the terminal closed): a new session and window.</summary>
+    private (BenchSession Session, MainWindow Window) Restart()
+    {
+        var session = new BenchSession(_workbook, new BenchAssessor(new Identifier(TestMaterials.All)), _uiQueue.Enqueue);
+        var window = new MainWindow(session, TestMaterials.All);
+        session.Start();
+        window.FillFromModel();
+        return (session, window);
+    }
+
     [Fact]
     public void Each_page_opens_at_its_first_reading_whatever_field_was_used_last()
     {
@@ -365,14 +376,133 @@ public sealed class MainWindowTests : IDisposable
         app.End(token);
         app.Dispose();
 
-        var again = new BenchSession(_workbook, new BenchAssessor(new Identifier(TestMaterials.All)), _uiQueue.Enqueue);
-        using var reopened = new MainWindow(again, TestMaterials.All);
-        again.Start();
-        reopened.FillFromModel();
+        var (again, reopened) = Restart();
+        using var _ = reopened;
         Assert.Equal("1.762", reopened.Refractometer.Low.Text);
         Assert.Equal("1.770", reopened.Refractometer.High.Text);
         Assert.Empty(again.Form.Steps);   // still only typed: a step is stored with Enter
         Assert.True(again.Flush());
     }
-}
 
+    [Fact]
+    public void Ctrl_L_opens_the_loupe_on_its_first_feature_and_its_marks_are_saved_as_the_two_fields()
+    {
+        var (app, window, token) = Open();
+        long id = _session.Form.StoneId;
+        app.InjectKey(Key.L.WithCtrl);
+        Assert.Equal(MainWindow.LoupePageIndex, window.CurrentPage);
+        Assert.Same(window.Loupe.List, window.MostFocused);
+        Assert.Equal(MagnificationFeature.CurvedStriae, window.Loupe.Current?.Feature?.Feature);
+        app.InjectKey(new Key('+'));
+        for (int i = 0; i < 5; i++) app.InjectKey(Key.CursorDown);   // four growth features on, then over the INCLUSIONS heading
+        Assert.Equal(MagnificationFeature.RoundGasBubbles, window.Loupe.Current?.Feature?.Feature);
+        app.InjectKey(new Key('+'));
+        Type(app, "silk");                                           // typing finds; the cursor goes to the first match
+        Assert.Equal(MagnificationFeature.NeedlesAndSilk, window.Loupe.Current?.Feature?.Feature);
+        app.InjectKey(new Key('-'));
+        Settle();
+        app.LayoutAndDraw();
+        string screen = app.Driver!.ToString()!;
+        Assert.Contains("Find: silk_", screen);
+        Assert.Contains(" no  needles and silk", screen);
+        Assert.Contains("── looked for, not seen ─", screen);
+        Assert.Equal("curved_striae round_bubbles", _session.Form.Text(BenchFields.FeaturesPresent));
+        Assert.Equal("needles_silk", _session.Form.Text(BenchFields.FeaturesAbsent));
+        StoneSheet stored = _workbook.Get(id)!;
+        Assert.Equal(["curved_striae", "round_bubbles"], stored.Readings.FeaturesPresent);
+        Assert.Equal(["needles_silk"], stored.Readings.FeaturesAbsent);
+
+        app.InjectKey(Key.Esc);                                      // the filter cleared, the cursor stays on its feature
+        Assert.Equal("", window.Loupe.Model.Filter);
+        Assert.Equal(MagnificationFeature.NeedlesAndSilk, window.Loupe.Current?.Feature?.Feature);
+        app.InjectKey(new Key('?'));                                 // not looked for after all
+        Settle();
+        Assert.Equal("", _session.Form.Text(BenchFields.FeaturesAbsent));
+        Assert.Empty(_workbook.Get(id)!.Readings.FeaturesAbsent);
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Fact]
+    public void The_marks_stored_show_again_when_the_stone_is_reopened_or_the_program_restarted()
+    {
+        var (app, window, token) = Open();
+        long id = _session.Form.StoneId;
+        app.InjectKey(Key.L.WithCtrl);
+        app.InjectKey(new Key('+'));
+        app.InjectKey(Key.CursorDown);
+        app.InjectKey(new Key('-'));
+        Settle();
+        app.InjectKey(Key.N.WithCtrl);                               // another stone: nothing marked
+        Settle();
+        Assert.NotEqual(id, _session.Form.StoneId);
+        Assert.Equal(0, window.Loupe.Model.Count(FeatureState.Present) + window.Loupe.Model.Count(FeatureState.Absent));
+        _session.Open(id);                                           // what F8 does on Enter
+        window.FillFromModel();
+        Settle();
+        Assert.Equal(FeatureState.Present, window.Loupe.Model.State(MagnificationFeature.CurvedStriae));
+        Assert.Equal(FeatureState.Absent, window.Loupe.Model.State(MagnificationFeature.AngularGrowthZoning));
+        app.InjectKey(Key.L.WithCtrl);                               // one more mark, so that this stone is the one changed last
+        app.InjectKey(Key.CursorDown);
+        app.InjectKey(Key.CursorDown);
+        app.InjectKey(new Key('+'));
+        Settle();
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+
+        var (again, reopened) = Restart();                          // the stone changed last opens
+        using var _ = reopened;
+        Assert.Equal(id, again.Form.StoneId);
+        Assert.Equal("curved_striae chevron_growth", reopened.Loupe.Model.PresentText);
+        Assert.Equal("angular_zoning", reopened.Loupe.Model.AbsentText);
+        Assert.True(again.Flush());
+    }
+
+    [Fact]
+    public void On_the_loupe_a_heading_is_never_the_cursors_row_whether_reached_by_keys_or_a_click()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.L.WithCtrl);
+        app.InjectKey(Key.CursorUp);                                 // from the first feature: nowhere to go, the heading is passed over
+        Assert.Equal(MagnificationFeature.CurvedStriae, window.Loupe.Current?.Feature?.Feature);
+        app.InjectKey(Key.End);
+        Assert.Equal(MagnificationFeature.CementLayerBubbles, window.Loupe.Current?.Feature?.Feature);
+        app.InjectKey(Key.Home);
+        Assert.Equal(MagnificationFeature.CurvedStriae, window.Loupe.Current?.Feature?.Feature);
+        app.LayoutAndDraw();
+        int inclusions = window.Loupe.Model.Rows.ToList().FindIndex(r => r.IsHeading && r.Group == FeatureGroup.Inclusion);
+        app.InjectSequence(InputInjectionExtensions.LeftButtonClick(window.Loupe.List.ViewportToScreen(new System.Drawing.Point(2, inclusions))));
+        Assert.Equal(MagnificationFeature.RoundGasBubbles, window.Loupe.Current?.Feature?.Feature);
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Theory]
+    [InlineData(80, 24, false)]
+    [InlineData(120, 40, true)]
+    public void The_loupe_page_fits_whole_rows_the_description_and_its_keys(int columns, int rows, bool meaning)
+    {
+        var (app, window, token) = Open(columns, rows);
+        app.InjectKey(Key.L.WithCtrl);
+        app.LayoutAndDraw();
+        string screen = app.Driver!.ToString()!;
+        string[] lines = screen.Split('\n');
+        Assert.Contains("[^L Loupe]", lines[0]);
+        string keyLine = lines.Last(l => l.Trim().Length > 0).Trim();
+        Assert.StartsWith(LoupePage.KeyWords + " │ F1 keys F10 answer", keyLine);
+        Assert.Contains("Look for: fine curved growth lines", screen);
+        Assert.Contains("Lighting: diffused light", screen);
+        Assert.Equal(meaning, screen.Contains("Meaning: melt growth", StringComparison.Ordinal));
+        // Every list row on the screen is a whole row of the model: a heading or a feature's mark and full name.
+        string[] whole = [.. window.Loupe.Model.Rows.Select(window.Loupe.Model.Line)];
+        string[] shown = [.. lines.Skip(3).Take(window.Loupe.List.Viewport.Height).Select(l => l.Split('│')[1].TrimEnd())];
+        Assert.Equal(whole.Take(shown.Length), shown);
+        Assert.True(shown.Length >= LoupeModel.MinimumListRows);
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+}

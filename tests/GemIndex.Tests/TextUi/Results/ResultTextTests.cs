@@ -81,6 +81,26 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void When_one_origin_is_left_among_several_entries_the_lead_still_names_it()
+    {
+        // Melt-growth signs seen under magnification: the natural and treated entries fall away, two synthetics remain.
+        IdentificationResult r = CorundumAnswer(null) with
+        {
+            Species =
+            [
+                new SpeciesResult { Species = "corundum", Confidence = 0.97, Origins = new Dictionary<OriginClass, double> { [OriginClass.Synthetic] = 0.96, [OriginClass.Natural] = 0.01 } },
+            ],
+            Candidates =
+            [
+                new() { Material = Corundum("flame-fusion synthetic sapphire", OriginClass.Synthetic), Confidence = 0.70, Fit = 0.9 },
+                new() { Material = Corundum("flame-fusion synthetic colour-change sapphire", OriginClass.Synthetic), Confidence = 0.26, Fit = 0.9 },
+                new() { Material = Corundum("sapphire", OriginClass.Natural), Confidence = 0.01, Fit = 0.9 },
+            ],
+        };
+        Assert.Equal(["Corundum 97%", "  synthetic 96%"], ResultText.Lead(r));
+    }
+
+    [Fact]
     public void When_the_next_test_separates_the_origins_the_lead_names_it()
     {
         var next = new NextTestAdvice { Test = "absorption_nm", GainBits = 1.3, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = [] };

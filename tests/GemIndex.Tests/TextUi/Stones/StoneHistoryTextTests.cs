@@ -41,6 +41,32 @@ public class StoneHistoryTextTests
     }
 
     [Fact]
+    public void Magnification_features_are_told_by_their_names_as_seen_or_looked_for_and_not_seen()
+    {
+        const string before = """{"id":"b","sg":4.0}""";
+        const string after = """{"id":"b","sg":4.0,"magnification":{"present":["curved_striae","round_bubbles"],"absent":["needles_silk"]}}""";
+        string[] said = [.. StoneHistoryText.Describe(new StoneEdit(At, "readings", before, after))];
+        string[] expected =
+        [
+            "Features seen under magnification set to 'curved striae, round gas bubbles'",
+            "Features looked for and not seen set to 'needles and silk'",
+        ];
+        Assert.Equal(expected.Order(StringComparer.Ordinal), said.Order(StringComparer.Ordinal));
+    }
+
+    [Fact]
+    public void Readings_stored_one_field_each_are_named_without_the_store_prefix_or_JSON_quotes()
+    {
+        Assert.Equal(["Colour set to 'blue'"], StoneHistoryText.Describe(new StoneEdit(At, "readings.colour", "", "\"blue\"")));
+        Assert.Equal(["Polariscope changed from 'singly refractive' to 'doubly refractive'"],
+            StoneHistoryText.Describe(new StoneEdit(At, "readings.polariscope", "\"singly_refractive\"", "\"doubly_refractive\"")));
+        Assert.Equal(["SG set to '4'"], StoneHistoryText.Describe(new StoneEdit(At, "readings.sg", "", "4")));
+        Assert.Equal(["Features seen under magnification set to 'curved striae'"],
+            StoneHistoryText.Describe(new StoneEdit(At, "readings.magnification", "", """{"present":["curved_striae"]}""")));
+        Assert.Equal(["Notes set to '\"as found\"'"], StoneHistoryText.Describe(new StoneEdit(At, "notes", "", "\"as found\"")));   // a note is text, never JSON
+    }
+
+    [Fact]
     public void A_field_path_from_the_store_is_named_in_words()
     {
         Assert.Equal(["RI step 2 low edge set to '1.762'"], StoneHistoryText.Describe(new StoneEdit(At, "refractometer.readings[1].low", "", "1.762")));
