@@ -16,7 +16,7 @@ internal static class SectionRefinement
     public const int Starts = 4;
 
     /// <summary>Newton steps at most from each start.</summary>
-    private const int Iterations = 6;
+    private const int Iterations = 10;
 
     /// <summary>A start this far (in ln) below the best cannot add a peak that matters.</summary>
     private const double Negligible = 12;
@@ -351,7 +351,7 @@ internal static class SectionRefinement
             int angles = _biaxial ? 3 : 2;
             for (int i = 0; i < step.Length; i++)
             {
-                double cap = i < angles ? 0.15 : 1.0;
+                double cap = i < angles ? 0.15 : 5.0;
                 step[i] = Math.Clamp(step[i], -cap, cap);
             }
         }
