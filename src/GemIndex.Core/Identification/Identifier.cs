@@ -185,6 +185,7 @@ public sealed class Identifier
         var analysed = new AnalysedSheet(sheet);
         int n = _materials.Length;
         var logPosterior = new double[n];
+        var logLikelihood = new double[n];
         var fits = new double[n];
         double logOther = 0, max = double.NegativeInfinity;
         for (int i = 0; i < n; i++)
@@ -192,7 +193,8 @@ public sealed class Identifier
             var e = EvidenceLikelihood.Evaluate(_profiles[i], analysed);
             logOther = e.LogLikelihoodNotInCatalogue;
             // Tempered: the ratio to "not in the catalogue" is divided by the temperature.
-            logPosterior[i] = _logPriors[i] + (e.LogLikelihood - logOther) / Temperature;
+            logLikelihood[i] = (e.LogLikelihood - logOther) / Temperature;
+            logPosterior[i] = _logPriors[i] + logLikelihood[i];
             fits[i] = e.Fit;
             max = Math.Max(max, logPosterior[i]);
         }
@@ -204,6 +206,7 @@ public sealed class Identifier
         for (int i = 0; i < n; i++) posterior[i] /= sum;
         double other = Math.Exp(logOther - max) / sum;
         other = DiscountPoorFit(posterior, fits, other);
+        OriginBalance.Apply(_materials, posterior, logLikelihood, _logPriors);
 
         int[] order = SpeciesFirst(posterior);
         // The shown candidates are the most probable entries, then grouped species first: a species with many varieties

@@ -1,0 +1,85 @@
+using GemIndex.Core.Catalogue;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>
+/// Keeps the origin split under a species honest (docs/ranking.md §3, "Origin within a species"). The catalogue's shares of
+/// natural, synthetic and treated stones are judgements of how often each reaches a bench; when the tests themselves do not
+/// separate the origins, those shares alone would put one origin above 80 %, which no bench answer can support. So when the
+/// tests alone (the origins taken as equally likely) leave the leading origin below <see cref="Decided"/>, its share of
+/// the species is held to at most <see cref="Cap"/> and the rest goes to the origins the catalogue holds as serious
+/// alternatives, in proportion to what the tests say of them. The species' total does not change.
+/// </summary>
+internal static class OriginBalance
+{
+    /// <summary>
+    /// The most an origin may hold of its species on the catalogue's shares alone (a judgement: the bound for an
+    /// origin given without a test that decides it).
+    /// </summary>
+    public const double Cap = 0.8;
+
+    /// <summary>When the tests alone, with every origin equally likely, give the leading origin this much, they decide it.</summary>
+    public const double Decided = 0.8;
+
+    /// <summary>
+    /// An origin whose catalogue share is below this fraction of the leading origin's is not a serious alternative (a
+    /// natural moissanite beside the synthetic): it neither triggers the cap nor receives its mass (a judgement: one
+    /// frequency class in four, very rare against very common).
+    /// </summary>
+    public const double SeriousShare = 1 / 16.0;
+
+    /// <summary>Adjusts <paramref name="posterior"/> in place, species by species.</summary>
+    /// <param name="materials">The catalogue.</param>
+    /// <param name="posterior">Each entry's posterior (sums to 1 with "not in the catalogue").</param>
+    /// <param name="logLikelihood">Each entry's tempered log-likelihood ratio (prior excluded).</param>
+    /// <param name="logPrior">Each entry's log prior.</param>
+    public static void Apply(Material[] materials, double[] posterior, double[] logLikelihood, double[] logPrior)
+    {
+        foreach (var species in Enumerable.Range(0, materials.Length).GroupBy(i => materials[i].Species))
+        {
+            int[] entries = [.. species];
+            if (entries.Select(i => materials[i].Origin).Distinct().Count() < 2) continue;
+            double total = entries.Sum(i => posterior[i]);
+            if (total < 1e-9) continue;
+            var posteriorShare = Totals(entries, i => posterior[i], materials);
+            var leading = posteriorShare.MaxBy(kv => kv.Value).Key;
+            if (posteriorShare[leading] / total <= Cap) continue;
+            var priorShare = Totals(entries, i => Math.Exp(logPrior[i]), materials);
+            var serious = priorShare.Where(kv => kv.Key != leading && kv.Value >= SeriousShare * priorShare[leading]).Select(kv => kv.Key).ToList();
+            if (serious.Count == 0) continue;
+            var tests = TestsAlone(entries, materials, logLikelihood, logPrior);
+            if (tests[leading] >= Decided) continue;
+            // Hold the leading origin to the cap; share the rest among the serious alternatives by what the tests say.
+            double keep = Cap * total, give = posteriorShare[leading] - keep;
+            double weights = serious.Sum(o => tests[o]);
+            if (!(weights > 0)) continue;
+            foreach (int i in entries.Where(i => materials[i].Origin == leading)) posterior[i] *= keep / posteriorShare[leading];
+            foreach (var origin in serious)
+            {
+                double add = give * tests[origin] / weights;
+                int[] members = [.. entries.Where(i => materials[i].Origin == origin)];
+                // Within the origin, by the entries' own posterior, or their prior where the posterior is nil.
+                double own = members.Sum(i => posterior[i]);
+                double prior = members.Sum(i => Math.Exp(logPrior[i]));
+                foreach (int i in members) posterior[i] += add * (own > 1e-300 ? posterior[i] / own : Math.Exp(logPrior[i]) / prior);
+            }
+        }
+    }
+
+    private static Dictionary<OriginClass, double> Totals(int[] entries, Func<int, double> value, Material[] materials)
+    {
+        var totals = new Dictionary<OriginClass, double>();
+        foreach (int i in entries) totals[materials[i].Origin] = totals.GetValueOrDefault(materials[i].Origin) + value(i);
+        return totals;
+    }
+
+    /// <summary>P(origin | tests) with every origin equally likely a priori and the entries within an origin by their shares.</summary>
+    private static Dictionary<OriginClass, double> TestsAlone(int[] entries, Material[] materials, double[] logLikelihood, double[] logPrior)
+    {
+        double top = entries.Max(i => logLikelihood[i]);
+        var within = Totals(entries, i => Math.Exp(logPrior[i]), materials);
+        var evidence = Totals(entries, i => Math.Exp(logPrior[i]) / within[materials[i].Origin] * Math.Exp(logLikelihood[i] - top), materials);
+        double sum = evidence.Values.Sum();
+        return evidence.ToDictionary(kv => kv.Key, kv => sum > 0 ? kv.Value / sum : 0);
+    }
+}
