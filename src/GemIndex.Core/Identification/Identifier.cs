@@ -22,6 +22,14 @@ public sealed class Identifier
     public const double PoorFit = 0.05;
 
     /// <summary>
+    /// A candidate with at least this share of the leader's posterior is a serious one: "nothing fits" and the poor-fit
+    /// discount look at the best fit among the serious candidates, not only the leader's, since a leader that wins on SG
+    /// and colour while its refractometer reading is impossible must not hide a rival that fits every test (a judgement;
+    /// docs/ranking.md §4).
+    /// </summary>
+    public const double SeriousCandidate = 0.1;
+
+    /// <summary>
     /// Every log-likelihood ratio is divided by this before the posterior (one temperature for the whole model): fitted on
     /// the independent benchmark by the calibration error of the leading species' confidence (docs/ranking.md §3, its
     /// table); never fitted on stones simulated from the catalogue.
@@ -95,16 +103,23 @@ public sealed class Identifier
         return order;
     }
 
-    /// <summary>Moves mass to "not in the catalogue" when even the best candidate fits poorly (<see cref="PoorFit"/>).</summary>
+    /// <summary>Moves mass to "not in the catalogue" when even the best-fitting serious candidate fits poorly (<see cref="PoorFit"/>).</summary>
     private static double DiscountPoorFit(double[] posterior, double[] fits, double other)
     {
-        int best = 0;
-        for (int i = 1; i < posterior.Length; i++) if (posterior[i] > posterior[best]) best = i;
-        double keep = Math.Min(1, fits[best] / PoorFit);
+        double keep = Math.Min(1, BestSeriousFit(posterior, fits) / PoorFit);
         if (keep >= 1) return other;
         double moved = 0;
         for (int i = 0; i < posterior.Length; i++) { moved += posterior[i] * (1 - keep); posterior[i] *= keep; }
         return other + moved;
+    }
+
+    /// <summary>The best fit among the candidates with at least <see cref="SeriousCandidate"/> of the leader's posterior.</summary>
+    private static double BestSeriousFit(double[] posterior, double[] fits)
+    {
+        double top = posterior.Max(), best = 0;
+        for (int i = 0; i < posterior.Length; i++)
+            if (posterior[i] >= SeriousCandidate * top) best = Math.Max(best, fits[i]);
+        return best;
     }
 
     /// <summary>
@@ -220,7 +235,7 @@ public sealed class Identifier
             Reasons = rank < explainTop ? EvidenceLikelihood.Evaluate(_profiles[i], analysed, explain: true).Contributions : [],
         }).ToList();
         var best = candidates.MaxBy(c => c.Confidence)!;
-        bool noGoodMatch = best.Fit < MinimumFit || other > best.Confidence;
+        bool noGoodMatch = BestSeriousFit(posterior, fits) < MinimumFit || other > best.Confidence;
         var species = SpeciesTotals(posterior);
         var weighted = order.Where(i => posterior[i] >= 1e-3).Select(i => (_materials[i], posterior[i])).ToList();
         return new IdentificationResult

@@ -234,6 +234,27 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_leader_with_an_impossible_reading_does_not_make_nothing_fit_while_a_rival_fits_everything()
+    {
+        // Over the limit at 1.80 with SG 4.02: a corundum-like entry (n 1.76–1.77, very common) cannot be over the limit, a
+        // low-zircon-like entry (ω 1.80–1.84, SG 3.95–4.20) can. Whichever leads, a candidate that fits every test exists.
+        Material corundumLike = Make("sapphire", "corundum", OpticalIndices.Uniaxial(new(1.767, 1.772), new(1.759, 1.763)), 4.015, 4.025, OpticSign.Negative,
+            new(0.008, 0.009), frequency: BenchFrequency.VeryCommon) with { Colours = ["colourless"] };
+        Material zirconLike = Make("low zircon", "zircon", OpticalIndices.Uniaxial(new(1.80, 1.84), new(1.805, 1.845)), 3.50, 4.60, OpticSign.Positive,
+            new(0.0, 0.008), frequency: BenchFrequency.VeryRare);
+        var engine = new Identifier([corundumLike, zirconLike]);
+        var result = engine.Identify(new BenchSheet
+        {
+            Refractometer = new RefractometerObservation(RefractometerMethod.Facet, overLimit: true, liquidLimit: 1.80),
+            SpecificGravity = new SpecificGravity(4.02, 0.01), Colour = "colourless",
+        });
+        Assert.True(result.Candidates[0].Material.Name == "sapphire", string.Join("; ", result.Candidates.Select(c => $"{c.Material.Name} {c.Confidence:0.000} fit {c.Fit:0.00}")) + $"; other {result.NotInCatalogue:0.000}");   // the leader, on SG, colour and its prior
+        Assert.False(result.NoGoodMatch);
+        Assert.True(result.NotInCatalogue < 0.5, $"not in the catalogue {result.NotInCatalogue}");
+        Assert.Contains(result.Candidates, c => c.Material.Name == "low zircon" && c.Fit > Identifier.MinimumFit);
+    }
+
+    [Fact]
     public void The_next_test_is_named_in_plain_words() =>
         Assert.Equal("hand spectroscope (absorption lines)", GemIndex.Core.Bench.BenchTestWords.DisplayOfWire("absorption_nm"));
 
