@@ -95,6 +95,9 @@ public class PublishedCaseTests(ITestOutputHelper output)
             $"{top2} of {cases.Count} in the top two (floor {MagnificationOriginTopTwoFloor}); misses: {string.Join("; ", missed)}");
     }
 
+    /// <summary>The published species must hold at least this share of the answer for its origins to count as ranked.</summary>
+    private const double RankedSpeciesShare = 0.01;
+
     private (int Top1, int Top2, List<string> Missed) OriginScores(IReadOnlyList<PublishedCase> cases, Func<PublishedCase, string> line)
     {
         using var run = new CommandRun();
@@ -109,7 +112,9 @@ public class PublishedCaseTests(ITestOutputHelper output)
         foreach (var (c, result) in cases.Zip(results))
         {
             var origins = OriginsOf(result, c.Species);
-            var ranked = origins.OrderByDescending(o => o.Value).Select(o => o.Key).ToList();
+            // A species holding next to nothing of the answer has no meaningful order of origins (all near zero).
+            var ranked = origins.Values.Sum() < RankedSpeciesShare ? []
+                : origins.OrderByDescending(o => o.Value).Select(o => o.Key).ToList();
             bool Published(string origin) => c.Origins.Any(o => o.ToString().Equals(origin, StringComparison.OrdinalIgnoreCase));
             bool first = ranked.Count > 0 && Published(ranked[0]);
             bool two = ranked.Take(2).Any(Published);
