@@ -38,6 +38,22 @@ internal static class RefractometerEvidence
     /// </summary>
     internal const double AggregateShowsSharpSeries = 0.2;
 
+    /// <summary>
+    /// An aggregate whose index span is wider than this is a strongly birefringent mineral in grains (calcite and aragonite
+    /// in coral, pearl and shell; rhodochrosite, smithsonite, malachite, magnesite): on the spot its reading blinks between
+    /// the two ends (a judgement from common practice; docs/ranking.md §2).
+    /// </summary>
+    internal const double BlinkSpan = 0.1;
+
+    /// <summary>The share of spot readings taken at each end of a blinking aggregate's span (the rest fall between: a judgement).</summary>
+    internal const double BlinkEndShare = 0.4;
+
+    /// <summary>How wide each end of the span is taken to be (the grains' own index spread and the reading's: a judgement).</summary>
+    internal const double BlinkEndWidth = 0.01;
+
+    private static bool IsBlinkingAggregate(Material m, PropertyRange span) =>
+        (m.Forms & MaterialForm.Aggregate) != 0 && (m.Forms & MaterialForm.Crystal) == 0 && span.Width > BlinkSpan;
+
     /// <summary>The cheap screen's width, in standard deviations of a reading with its offset and soft edges (DOMAIN.md §6b: 4σ).</summary>
     internal const double ScreenSigmas = 4;
 
@@ -164,6 +180,17 @@ internal static class RefractometerEvidence
         // A spot reading on a doubly refractive stone averages its edges: anywhere from the lowest to the highest index.
         var span = new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum);
         var part = Index("spot reading", spot, sigma, span, shift, shiftSigma, acc.Explaining);
+        if (IsBlinkingAggregate(m, span))
+        {
+            // A strongly birefringent aggregate (coral, pearl, shell, the carbonates) shows the birefringence blink: the
+            // spot is read at one end or the other of the span far more often than between them.
+            var low = new PropertyRange(span.Minimum, span.Minimum + BlinkEndWidth);
+            var high = new PropertyRange(span.Maximum - BlinkEndWidth, span.Maximum);
+            var atLow = Index("spot reading", spot, sigma, low, shift, shiftSigma, false);
+            var atHigh = Index("spot reading", spot, sigma, high, shift, shiftSigma, false);
+            double density = BlinkEndShare * (atLow.Likelihood + atHigh.Likelihood) + (1 - 2 * BlinkEndShare) * part.Likelihood;
+            part = part with { Likelihood = density, Tail = Math.Max(part.Tail, Math.Max(atLow.Tail, atHigh.Tail)) };
+        }
         int group = (m.Forms & MaterialForm.Aggregate) != 0 ? EvidenceAccumulator.AggregateGroup : EvidenceAccumulator.Independent;
         acc.Add(BenchField.Refractometer, part.Likelihood, part.Broad, part.Tail, robust: true, group);
         if (acc.Explaining) acc.Say(part.Text);

@@ -26,6 +26,22 @@ public class EvidenceModelTests
         [new(0, 1.544, 1.553), new(45, 1.544, 1.551), new(90, 1.544, 1.548), new(135, 1.544, 1.550)]);
 
     [Fact]
+    public void A_strongly_birefringent_aggregate_is_read_at_the_ends_of_its_span_on_the_spot()
+    {
+        // Coral: calcite grains, ε 1.486 and ω 1.658 (common practice: the spot blinks between them). A reading at either end
+        // is far likelier than one in the middle; a narrow aggregate (nephrite-like, 1.60–1.63) keeps the uniform span.
+        var coral = Entry("coral", "coral", OpticalIndices.SingleIndex(new(1.486, 1.658), OpticCharacter.Aggregate), forms: MaterialForm.Aggregate);
+        var narrow = Entry("narrow", "narrow", OpticalIndices.SingleIndex(new(1.600, 1.630), OpticCharacter.Aggregate), forms: MaterialForm.Aggregate);
+        double Log(Material m, double spot) => EvidenceLikelihood.Evaluate(m, new AnalysedSheet(new BenchSheet
+        {
+            Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: spot),
+        })).LogLikelihood;
+        Assert.True(Log(coral, 1.49) > Log(coral, 1.57) + 2, $"low end {Log(coral, 1.49)} against the middle {Log(coral, 1.57)}");
+        Assert.True(Log(coral, 1.65) > Log(coral, 1.57) + 2, $"high end {Log(coral, 1.65)} against the middle {Log(coral, 1.57)}");
+        Assert.Equal(Log(narrow, 1.605), Log(narrow, 1.625), 6);
+    }
+
+    [Fact]
     public void A_sharp_two_edge_series_is_strong_evidence_against_a_material_met_only_as_an_aggregate()
     {
         var crystal = Entry("rock crystal", "quartz", QuartzIndices, new(0.009, 0.009), OpticSign.Positive);
