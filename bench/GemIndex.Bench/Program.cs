@@ -2,7 +2,8 @@ using BenchmarkDotNet.Running;
 using GemIndex.Bench.Accuracy;
 using GemIndex.Data.Catalogue;
 
-// accuracy [STONES] [SEED] [--failures] [--lines FILE]: the independent accuracy benchmark (docs/benchmark.md);
+// accuracy [STONES] [SEED] [--failures] [--lines FILE] [--loupe SHARE]: the independent accuracy benchmark
+// (docs/benchmark.md); SHARE of stones get a magnification look (default 0.5; 0 gives the sheets without it);
 // anything else goes to BenchmarkDotNet: dotnet run -c Release --project bench/GemIndex.Bench -- --filter '*' --job short
 if (args.Length > 0 && args[0] == "accuracy")
 {
@@ -11,8 +12,12 @@ if (args.Length > 0 && args[0] == "accuracy")
     int seed = numbers.Count > 1 ? int.Parse(numbers[1], System.Globalization.CultureInfo.InvariantCulture) : 1;
     int linesAt = Array.IndexOf(args, "--lines");
     using var lines = linesAt > 0 && linesAt + 1 < args.Length ? new StreamWriter(args[linesAt + 1]) : null;
+    int loupeAt = Array.IndexOf(args, "--loupe");
+    double lookShare = loupeAt > 0 && loupeAt + 1 < args.Length
+        ? double.Parse(args[loupeAt + 1], System.Globalization.CultureInfo.InvariantCulture)
+        : GemIndex.Bench.Independent.LoupeExaminer.DefaultLookShare;
     string cache = Path.Combine(Path.GetTempPath(), "gemindex-bench-cache");
-    IndependentAccuracyRun.Run(ShippedCatalogue.Load(cache), stones, seed, Console.Out, args.Contains("--failures") ? Console.Error : null, lines);
+    IndependentAccuracyRun.Run(ShippedCatalogue.Load(cache), stones, seed, Console.Out, args.Contains("--failures") ? Console.Error : null, lines, lookShare);
     return 0;
 }
 BenchmarkSwitcher.FromAssembly(typeof(IndependentAccuracyRun).Assembly).Run(args);

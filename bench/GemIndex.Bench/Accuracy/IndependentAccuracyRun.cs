@@ -2,6 +2,7 @@ using System.Diagnostics;
 using System.Globalization;
 using GemIndex.Bench.Independent;
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Magnification;
 
 namespace GemIndex.Bench.Accuracy;
 
@@ -9,7 +10,8 @@ namespace GemIndex.Bench.Accuracy;
 /// The independent accuracy benchmark (docs/benchmark.md): stones drawn from the independent property table, written as
 /// batch lines, ranked by the engine through <see cref="BatchLineAdapter"/> and by the printed-table baseline, and scored
 /// by species: top-1 and top-3 on the stones the evidence separates and on all stones, "nothing fits" on catalogue
-/// stones, the not-in-catalogue case, the calibration of the leading species' confidence, and origin within species.
+/// stones, the not-in-catalogue case, the calibration of the leading species' confidence, and origin within species,
+/// without magnification, with it, and with a feature seen that points at the stone's origin.
 /// </summary>
 internal static class IndependentAccuracyRun
 {
@@ -19,7 +21,8 @@ internal static class IndependentAccuracyRun
     /// <summary>A confidence at or above this is a confident call (issue 14's target line).</summary>
     private const double Confident = 0.8;
 
-    public static void Run(IReadOnlyList<Material> catalogue, int stones, int seed, TextWriter o, TextWriter? failures = null, TextWriter? lines = null)
+    public static void Run(IReadOnlyList<Material> catalogue, int stones, int seed, TextWriter o, TextWriter? failures = null, TextWriter? lines = null,
+        double lookShare = LoupeExaminer.DefaultLookShare)
     {
         var adapter = new BatchLineAdapter(catalogue);
         var table = PropertyTable.Species;
@@ -30,7 +33,8 @@ internal static class IndependentAccuracyRun
         var unsourced = known.Where(n => !covered.Contains(n)).Order(StringComparer.Ordinal).ToList();
 
         var random = new Random(seed);
-        var simulator = new IndependentStoneSimulator(random);
+        // Magnification draws from a stream of its own, so the other readings of a seed are those drawn without it.
+        var simulator = new IndependentStoneSimulator(random, new LoupeExaminer(new Random(unchecked(seed * 7919 + 104729)), lookShare));
         double[] weights = [.. usable.Select(s => s.BenchWeight)];
         var cases = new List<(SimulatedStone Stone, EngineAnswer Answer, IReadOnlyList<Material> Baseline, bool Separable, IReadOnlyList<string> Confusers)>();
         var stopwatch = Stopwatch.StartNew();
@@ -53,7 +57,10 @@ internal static class IndependentAccuracyRun
         }
 
         var all = new Tally();
+        var origins = new OriginTallies();
         var separableTally = new Tally();
+        var withLook = new Tally();
+        var withoutLook = new Tally();
         var bins = new (double Confidence, int Correct, int Count)[10];
         int nothingFits = 0, outsideCatalogue = 0, originStones = 0, originRight = 0, originConfidentWrong = 0;
         var perSpecies = new SortedDictionary<string, Tally>(StringComparer.Ordinal);
@@ -78,7 +85,15 @@ internal static class IndependentAccuracyRun
                 bool right = answer.Origin == stone.Origin;
                 originRight += right ? 1 : 0;
                 originConfidentWrong += !right && answer.OriginShare >= Confident ? 1 : 0;
+                var look = stone.Magnification;
+                bool looked = look is { Looked: true };
+                bool diagnostic = looked && look!.Present.Any(w => MagnificationHabits.IsDiagnostic(stone.Species, stone.Origin, stone.Hue, w));
+                origins.Add(stone.Species.Name, stone.Origin, look?.Habit.Method ?? "?", looked, diagnostic, right, answer.OriginShare >= Confident);
+                if (failures is not null && !right && (looked || answer.OriginShare >= Confident))
+                    failures.WriteLine($"ORIGIN {stone.Species.Name} {stone.Origin} ({look?.Habit.Method}; holds {Words(look?.Held)}) -> {answer.Origin} {answer.OriginShare:0.00}" +
+                        (looked ? $"; seen {Words(look!.Present)}; not seen {Words(look.Absent)}{(diagnostic ? "; a diagnostic feature seen" : "")}" : "; no magnification") + $": {stone.Line}");
             }
+            (stone.Magnification is { Looked: true } ? withLook : withoutLook).Add(first, three, baseFirst, baseThree);
             if (answer.NothingFits && failures is not null)
                 failures.WriteLine($"NOTHING-FITS {stone.Species.Name}{(stone.BeyondRange ? " (drawn beyond its range)" : "")} -> {answer.Species} {answer.Confidence:0.00}: {stone.Line}");
             if (!first && failures is not null)
@@ -93,6 +108,8 @@ internal static class IndependentAccuracyRun
             $"with a true lowest index or SG outside every catalogue entry of their species: {P(outsideCatalogue, stones)}");
         o.WriteLine($"stones the evidence separates (oracle with the true property table): {separableTally.Count} of {stones}");
         o.WriteLine($"batch lines the reader refused (scored as wrong): {refused}");
+        ReportVocabulary(usable, o);
+        o.WriteLine($"stones with a magnification look: {P(cases.Count(c => c.Stone.Magnification is { Looked: true }), stones)} (asked for {lookShare.ToString("0.00", CultureInfo.InvariantCulture)})");
         o.WriteLine();
         o.WriteLine("| measure (by species) | engine | printed-table baseline |");
         o.WriteLine("|---|---|---|");
@@ -104,7 +121,9 @@ internal static class IndependentAccuracyRun
         o.WriteLine($"| expected calibration error, leading species' confidence (10 bins) | {ece.ToString("0.000", CultureInfo.InvariantCulture)} | – |");
         o.WriteLine($"| origin top-1 within the species, species right and more than one origin ({originStones}) | {P(originRight, originStones)} | – |");
         o.WriteLine($"| confident (≥ 80 %) wrong origin, same stones | {P(originConfidentWrong, originStones)} | – |");
+        o.WriteLine($"| top-1, stones without magnification ({withoutLook.Count}) / with a look ({withLook.Count}) | {P(withoutLook.First, withoutLook.Count)} / {P(withLook.First, withLook.Count)} | {P(withoutLook.BaseFirst, withoutLook.Count)} / {P(withLook.BaseFirst, withLook.Count)} |");
         o.WriteLine($"| stones per second through the batch line (one core, ranking only) | {(stones / engineSeconds).ToString("0", CultureInfo.InvariantCulture)} | – |");
+        origins.Report(o);
         o.WriteLine();
         o.WriteLine("Reliability of the leading species' confidence:");
         o.WriteLine("| confidence | stones | mean confidence | right |");
@@ -163,6 +182,26 @@ internal static class IndependentAccuracyRun
         for (int i = 0; i < weights.Length; i++)
             if ((x -= weights[i]) <= 0) return i;
         return weights.Length - 1;
+    }
+
+    private static string Words(IReadOnlyList<string>? words) => words is null || words.Count == 0 ? "nothing" : string.Join(",", words);
+
+    /// <summary>Words the benchmark writes that the program's vocabulary does not know, and table pairs with no magnification row.</summary>
+    private static void ReportVocabulary(IReadOnlyList<SpeciesProperties> usable, TextWriter o)
+    {
+        var unknown = LoupeVisibility.Words.Where(w => MagnificationVocabulary.Find(w) is null).ToList();
+        var unmodelled = MagnificationHabits.All.SelectMany(r => r.Features).Select(f => f.Word).Distinct().Where(w => !LoupeVisibility.Words.Contains(w)).ToList();
+        var missing = usable.SelectMany(s => s.Origins.SelectMany(origin => s.Hues.Where(h => MagnificationHabits.For(s.Name, origin.Word, h.Word).Count == 0)
+            .Select(h => $"{s.Name}/{origin.Word}/{h.Word}"))).ToList();
+        if (unknown.Count > 0) o.WriteLine($"magnification words the program does not know (lines with them are refused): {string.Join(", ", unknown)}");
+        if (unmodelled.Count > 0) o.WriteLine($"magnification words in the habit table with no visibility (never looked for): {string.Join(", ", unmodelled)}");
+        if (missing.Count > 0) o.WriteLine($"species/origin/hue with no magnification row (no look): {string.Join(", ", missing)}");
+        var pointing = usable.Where(s => s.Origins.Count > 1).SelectMany(s => s.Origins.Select(origin =>
+        {
+            var words = LoupeVisibility.Words.Where(w => s.Hues.Any(h => MagnificationHabits.IsDiagnostic(s, origin.Word, h.Word, w))).ToList();
+            return words.Count == 0 ? null : $"{s.Name} {origin.Word}: {string.Join(",", words)}";
+        })).OfType<string>().ToList();
+        o.WriteLine($"features that point at an origin (≥ {MagnificationHabits.DiagnosticShare:0%} of the species' origins for some hue, from the tables): {string.Join("; ", pointing)}");
     }
 
     private static string P(int k, int n) => n == 0 ? "–" : (100.0 * k / n).ToString("0.0", CultureInfo.InvariantCulture) + " %";

@@ -74,9 +74,23 @@ internal static class BatchLineWriter
                 w.WriteEndArray();
             }
             Word(w, "colour", r.Colour);
+            if (r.FeaturesPresent is not null || r.FeaturesAbsent is not null)
+            {
+                w.WriteStartObject("magnification");
+                Words(w, "present", r.FeaturesPresent ?? []);
+                Words(w, "absent", r.FeaturesAbsent ?? []);
+                w.WriteEndObject();
+            }
             w.WriteEndObject();
         }
         return Encoding.UTF8.GetString(stream.ToArray());
+    }
+
+    private static void Words(Utf8JsonWriter w, string name, IReadOnlyList<string> words)
+    {
+        w.WriteStartArray(name);
+        foreach (string word in words) w.WriteStringValue(word);
+        w.WriteEndArray();
     }
 
     private static void Word(Utf8JsonWriter w, string name, string? value)

@@ -46,4 +46,10 @@ internal sealed record BenchReadings
     public IReadOnlyList<double>? AbsorptionNanometres { get; init; }
 
     public string? Colour { get; init; }
+
+    /// <summary>Magnification features seen; null when nobody looked (then <see cref="FeaturesAbsent"/> is null too).</summary>
+    public IReadOnlyList<string>? FeaturesPresent { get; init; }
+
+    /// <summary>Magnification features looked for and not seen.</summary>
+    public IReadOnlyList<string>? FeaturesAbsent { get; init; }
 }

@@ -5,9 +5,10 @@ namespace GemIndex.Bench.Independent;
 /// "The simulator"). True values are drawn from the table's ranges along the species' composition series, a few
 /// stones beyond them; the refractometer series comes from the indicatrix section of a random facet at each rotation
 /// step; every other test has its own detection or misreading model and is skipped at random as a bench would.
-/// Nothing here reads the catalogue or the engine's likelihood tables.
+/// Magnification comes from a <see cref="LoupeExaminer"/> with its own random stream, so the other readings of a seed
+/// do not depend on it. Nothing here reads the catalogue or the engine's likelihood tables.
 /// </summary>
-internal sealed class IndependentStoneSimulator(Random random)
+internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? loupe = null)
 {
     /// <summary>Share of stones drawn beyond the published ranges (index, SG or both): 7 %, inside the brief's 5–10 %.</summary>
     public const double BeyondRangeShare = 0.07;
@@ -48,10 +49,13 @@ internal sealed class IndependentStoneSimulator(Random random)
         string origin = Pick(species.Origins);
         string hue = Pick(species.Hues);
         var readings = Readings(species, id, principal, sg, origin, hue);
+        var magnification = loupe?.Examine(species, origin, hue);
+        if (magnification is { Looked: true })
+            readings = readings with { FeaturesPresent = magnification.Present, FeaturesAbsent = magnification.Absent };
         return new SimulatedStone
         {
-            Species = species, Origin = origin, Principal = principal, SpecificGravity = sg, BeyondRange = beyond,
-            Readings = readings, Line = BatchLineWriter.Write(readings),
+            Species = species, Origin = origin, Hue = hue, Principal = principal, SpecificGravity = sg, BeyondRange = beyond,
+            Readings = readings, Line = BatchLineWriter.Write(readings), Magnification = magnification,
         };
     }
 

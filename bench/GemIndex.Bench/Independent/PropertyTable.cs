@@ -24,7 +24,7 @@ internal static class PropertyTable
                 new(450, false, "yellow", NaturalOnly: true),
             ],
             Hues = [new("blue", .35), new("red", .25), new("pink", .12), new("yellow", .1), new("colourless", .06), new("purple", .05), new("orange", .04), new("green", .03)],
-            Origins = [new("natural", .55), new("synthetic", .3), new("treated", .15)],
+            Origins = [new("natural", .55), new("synthetic", .3), new("treated", .12), new("composite", .03)],
             Citation = "gemologyproject.com/wiki Corundum (rev. 4643): uniaxial −, RI 1.762–1.770 (+.009, −.005), birefringence 0.008–0.010, dispersion 0.018, pleochroism weak to moderate; "
                 + "Handbook of Precious Stones (wikisource p. 80): SG 3.97–4.05; lotusgemology.com 'Gem testing with the spectroscope': blue sapphire iron lines 450, 460, 470 nm (natural); "
                 + "clouddl.cn UV-vis article: natural yellow sapphire 450 nm, heated lacks it; gemologiamllopis.com certificate 24-1821: ruby doublet 694/692 nm",
@@ -319,7 +319,7 @@ internal static class PropertyTable
             Indices = PrincipalValues.Single(1.42, 1.47),
             SpecificGravity = new(1.98, 2.20),
             Hues = [new("colourless", .45), new("orange", .2), new("blue", .1), new("black", .1), new("yellow", .1), new("brown", .05)],
-            Origins = [new("natural", .85), new("synthetic", .1), new("treated", .05)],
+            Origins = [new("natural", .75), new("synthetic", .1), new("treated", .05), new("composite", .1)],
             Citation = "ora.it.com 'specific gravity of an opal': SG 1.98–2.20 (average 2.15), RI 1.42–1.47; vecstone.jp opal: RI 1.44–1.46, SG 1.9–2.3",
         },
         new()

@@ -8,6 +8,12 @@ internal sealed record SimulatedStone
     /// <summary>"natural", "synthetic", "treated", "imitation" or "composite".</summary>
     public required string Origin { get; init; }
 
+    /// <summary>The hue drawn for the stone (the colour word written, when written).</summary>
+    public required string Hue { get; init; }
+
+    /// <summary>Its magnification: method, features held and, when looked at, what was written; null when not drawn.</summary>
+    public MagnificationLook? Magnification { get; init; }
+
     /// <summary>True principal indices along x, y, z (isotropic: all equal; uniaxial: z is the optic axis).</summary>
     public required (double X, double Y, double Z) Principal { get; init; }
 
