@@ -1,3 +1,4 @@
+using GemIndex.Cli.TextUi.Main;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.Configuration;
 using Terminal.Gui.ViewBase;
@@ -22,7 +23,7 @@ internal class BenchPage : View
         Width = Dim.Fill();
         Height = Dim.Fill();
         CanFocus = true;
-        _problems = new Label { X = 0, Y = Pos.AnchorEnd(problemRows), Width = Dim.Fill(), Height = problemRows, Visible = problemRows > 0 };
+        _problems = new PlainLabel { X = 0, Y = Pos.AnchorEnd(problemRows), Width = Dim.Fill(), Height = problemRows, Visible = problemRows > 0 };
         _problems.SchemeName = SchemeManager.SchemesToSchemeName(Schemes.Error);
         Add(_problems);
     }
@@ -71,7 +72,7 @@ internal class BenchPage : View
 
     public Label AddNote(string text = "")
     {
-        var l = new Label { Y = NextRow(), Width = Dim.Fill(), Text = text };
+        var l = new PlainLabel { Y = NextRow(), Width = Dim.Fill(), Text = text };
         Add(l);
         return l;
     }
@@ -85,7 +86,7 @@ internal class BenchPage : View
         next.Edit.InsertionPoint = text.Length;
     }
 
-    /// <summary>Marks each field with its error and lists the reasons at the bottom.</summary>
+    /// <summary>Marks each field with its error and lists the reasons at the bottom, each after its field's caption.</summary>
     public virtual void ShowErrors(IReadOnlyDictionary<string, string> errors)
     {
         var mine = new List<string>();
@@ -93,10 +94,17 @@ internal class BenchPage : View
         {
             string? reason = errors.GetValueOrDefault(f.Field);
             f.ShowError(reason);
-            if (reason is not null) mine.Add(reason);
+            if (reason is not null) mine.Add($"{f.Label}: {InCaptions(reason)}");
         }
         mine.AddRange(OwnErrors(errors));
         _problems.Text = string.Join('\n', mine.Select(m => "! " + m));
+    }
+
+    /// <summary>A reason as the page shows it: the fields it names by their wire names ("sg.air_ct") named by their captions ("In air").</summary>
+    public string InCaptions(string reason)
+    {
+        foreach (FormField f in Fields.OrderByDescending(f => f.Field.Length)) reason = reason.Replace(f.Field, f.Label, StringComparison.Ordinal);
+        return reason;
     }
 
     protected virtual IEnumerable<string> OwnErrors(IReadOnlyDictionary<string, string> errors) => [];

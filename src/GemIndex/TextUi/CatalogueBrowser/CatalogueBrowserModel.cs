@@ -88,15 +88,15 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
     /// <summary>The width the names need: the longest shown, or what <paramref name="width"/> leaves beside the numbers.</summary>
     public int NameWidth(int width) => Math.Max(12, Math.Min(Shown.Count == 0 ? 12 : Shown.Max(m => m.Name.Length), width - NumbersWidth));
 
-    /// <summary>" 1.544-1.553  SG 2.65-2.66" beside the name.</summary>
+    /// <summary>" 1.544–1.553  SG 2.65–2.66" beside the name.</summary>
     private const int NumbersWidth = 28;
 
     public string Line(Material m, int nameWidth) =>
-        $"{Results.ResultText.Clip(m.Name, nameWidth).PadRight(nameWidth)} {m.Indices.Lowest.Minimum.ToString("0.000", CultureInfo.InvariantCulture)}-{m.Indices.Highest.Maximum.ToString("0.000", CultureInfo.InvariantCulture)}  SG {Range(m.SpecificGravity)}";
+        $"{Results.ResultText.Clip(m.Name, nameWidth).PadRight(nameWidth)} {m.Indices.Lowest.Minimum.ToString("0.000", CultureInfo.InvariantCulture)}–{m.Indices.Highest.Maximum.ToString("0.000", CultureInfo.InvariantCulture)}  SG {Range(m.SpecificGravity)}";
 
     private static string Range(PropertyRange r) => r.Minimum == r.Maximum
         ? r.Minimum.ToString("0.00", CultureInfo.InvariantCulture)
-        : $"{r.Minimum.ToString("0.00", CultureInfo.InvariantCulture)}-{r.Maximum.ToString("0.00", CultureInfo.InvariantCulture)}";
+        : $"{r.Minimum.ToString("0.00", CultureInfo.InvariantCulture)}–{r.Maximum.ToString("0.00", CultureInfo.InvariantCulture)}";
 
     public static string Details(Material m)
     {

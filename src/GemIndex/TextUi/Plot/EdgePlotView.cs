@@ -1,3 +1,4 @@
+using GemIndex.Cli.TextUi.Main;
 using System.Drawing;
 using System.Globalization;
 using System.Text;
@@ -8,16 +9,14 @@ using Terminal.Gui.Views;
 namespace GemIndex.Cli.TextUi.Plot;
 
 /// <summary>The two shadow edges against rotation: 'l' marks the low edge, 'h' the high edge.</summary>
-internal sealed class EdgePlotView : Dialog
+internal sealed class EdgePlotView : FullScreenDialog
 {
     public EdgePlotView(EdgePlotModel model)
     {
         Title = "Shadow edges against rotation (Esc closes)";
-        Width = Dim.Fill();
-        Height = Dim.Fill();
         if (model.IsEmpty)
         {
-            Add(new Label { Text = "No rotation steps yet: enter them on the RI page (F3)." });
+            Add(new PlainLabel { Text = "No rotation steps yet: enter them on the RI page (F3)." });
             return;
         }
         Graph = new GraphView { Width = Dim.Fill(), Height = Dim.Fill(1), MarginLeft = 7, MarginBottom = 2 };
@@ -32,7 +31,7 @@ internal sealed class EdgePlotView : Dialog
         Graph.ScrollOffset = new PointF((float)model.LeftEdge, (float)model.Bottom);
         Line(model.Low, 'l');
         Line(model.High, 'h');
-        Add(Graph, new Label { Y = Pos.AnchorEnd(1), Text = "l = low edge   h = high edge   (index against rotation)" });
+        Add(Graph, new PlainLabel { Y = Pos.AnchorEnd(1), Text = "l = low edge   h = high edge   (index against rotation)" });
     }
 
     public GraphView? Graph { get; }

@@ -1,3 +1,4 @@
+using GemIndex.Cli.TextUi.Main;
 using System.Collections.ObjectModel;
 using Terminal.Gui.App;
 using Terminal.Gui.Input;
@@ -7,7 +8,7 @@ using Terminal.Gui.Views;
 namespace GemIndex.Cli.TextUi.Stones;
 
 /// <summary>The workbook's stones: search, Enter opens, Ctrl+N new, Ctrl+D duplicate, Delete deletes (after asking).</summary>
-internal sealed class StoneListView : Dialog
+internal sealed class StoneListView : FullScreenDialog
 {
     private readonly StoneListModel _model;
     private readonly ObservableCollection<string> _rows = [];
@@ -16,9 +17,7 @@ internal sealed class StoneListView : Dialog
     {
         _model = model;
         Title = "Stones: Enter open ^N new ^D duplicate F3 history Del delete";
-        Width = Dim.Fill();
-        Height = Dim.Fill();
-        var label = new Label { Text = "Search:" };
+        var label = new PlainLabel { Text = "Search:" };
         Search = new TextField { X = 8, Width = 24 };
         List = new ListView { Y = 1, Width = Dim.Fill(), Height = Dim.Fill() };
         List.SetSource(_rows);

@@ -59,7 +59,7 @@ public class CatalogueBrowserModelTests
     {
         var model = new CatalogueBrowserModel([TestMaterials.All[0] with { Name = "flame-fusion colourless synthetic sapphire" }]);
         int width = model.NameWidth(76);
-        Assert.Contains("flame-fusion colourless synthetic sapphire 1.544-1.554  SG 2.65-2.66", model.Line(model.Shown[0], width));
+        Assert.Contains("flame-fusion colourless synthetic sapphire 1.544–1.554  SG 2.65–2.66", model.Line(model.Shown[0], width));
     }
 
     [Fact]
