@@ -11,6 +11,7 @@ internal class BenchPage : View
 {
     public const int LabelWidth = 14;   // the longest label (13) and a space before the value
     private readonly Label _problems;
+    private readonly int _problemRows;
     private int _row;
 
     /// <param name="title">The page's name in its frame.</param>
@@ -20,12 +21,14 @@ internal class BenchPage : View
     {
         Title = title;
         Keys = keys;
+        _problemRows = problemRows;
         Width = Dim.Fill();
         Height = Dim.Fill();
         CanFocus = true;
         _problems = new PlainLabel { X = 0, Y = Pos.AnchorEnd(problemRows), Width = Dim.Fill(), Height = problemRows, Visible = problemRows > 0 };
         _problems.SchemeName = SchemeManager.SchemesToSchemeName(Schemes.Error);
         Add(_problems);
+        ViewportChanged += (_, _) => WrapProblems();
     }
 
     /// <summary>The keys that matter on this page, for the key line.</summary>
@@ -97,7 +100,21 @@ internal class BenchPage : View
             if (reason is not null) mine.Add($"{f.Label}: {InCaptions(reason)}");
         }
         mine.AddRange(OwnErrors(errors));
-        _problems.Text = string.Join('\n', mine.Select(m => "! " + m));
+        _problemLines = [.. mine.Select(m => "! " + m)];
+        WrapProblems();
+    }
+
+    private IReadOnlyList<string> _problemLines = [];
+
+    /// <summary>Said on the last row when the reasons need more rows than the page has for them.</summary>
+    public const string MoreProblems = "! more: see the fields marked '!'";
+
+    /// <summary>The reasons word-wrapped to the page's width, each continuation indented under its "!"; never cut off unsaid.</summary>
+    private void WrapProblems()
+    {
+        List<string> lines = [.. Main.TextWrap.Lines(_problemLines, Math.Max(20, Viewport.Width))];
+        if (lines.Count > _problemRows) lines = [.. lines.Take(_problemRows - 1), MoreProblems];
+        _problems.Text = string.Join('\n', lines);
     }
 
     /// <summary>A reason as the page shows it: the fields it names by their wire names ("sg.air_ct") named by their captions ("In air").</summary>

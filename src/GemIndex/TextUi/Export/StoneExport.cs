@@ -14,7 +14,7 @@ namespace GemIndex.Cli.TextUi.Export;
 internal static class StoneExport
 {
     /// <summary>The confirmation's line when no examiner is set, saying where to set it.</summary>
-    public const string NoExaminer = "Examiner: not recorded (type it once on F2 Stone, Examiner: every report then names it)";
+    public const string NoExaminer = "Examiner: not recorded (set it once at the foot of F2 Stone)";
 
     /// <summary>
     /// Writes the reports of the assessed form and returns the confirmation's title and text (or why nothing was

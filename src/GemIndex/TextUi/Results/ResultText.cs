@@ -90,7 +90,7 @@ internal static class ResultText
         string remedy = NextTestSeparatesOrigins(r, lead.Species) is { } next
             ? $"the {BenchTestWords.DisplayOfWire(next.Test)} may tell some of them apart{(next.LookFor.Count > 0 ? $" (look for {Listed(next.LookFor)})" : "")}"
             : "refer a valuable stone to a qualified laboratory";
-        return $"  These tests cannot tell {which} {lead.Species} apart: {remedy}.";
+        return $"  These tests cannot separate {which} {lead.Species}: {remedy}.";
     }
 
     /// <summary>

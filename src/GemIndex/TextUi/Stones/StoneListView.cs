@@ -19,7 +19,8 @@ internal sealed class StoneListView : FullScreenDialog
         Title = "Stones: Enter open ^N new ^D duplicate F3 history Del delete";
         var label = new PlainLabel { Text = "Search:" };
         Search = new TextField { X = 8, Width = 24 };
-        List = new ListView { Y = 1, Width = Dim.Fill(), Height = Dim.Fill() };
+        var heading = new PlainLabel { Y = 1, Width = Dim.Fill(), Text = StoneListModel.Heading };
+        List = new ListView { Y = 2, Width = Dim.Fill(), Height = Dim.Fill() };
         List.SetSource(_rows);
         Search.TextChanged += (_, _) => { _model.Search(Search.Text); Fill(); };
         EventHandler<Key> keys = (sender, key) =>
@@ -37,7 +38,7 @@ internal sealed class StoneListView : FullScreenDialog
         };
         List.KeyDown += keys;      // on the focused views: Enter would otherwise close the dialog first
         Search.KeyDown += keys;
-        Add(label, Search, List);
+        Add(label, Search, heading, List);
         Fill();
     }
 

@@ -76,7 +76,7 @@ public class ResultTextTests
         IReadOnlyList<string> lead = ResultText.Lead(CorundumAnswer(null));
         Assert.Equal("Corundum 93%", lead[0]);
         Assert.Equal("  synthetic 40%, natural 35%, treated 18%", lead[1]);
-        Assert.Equal("  These tests cannot tell synthetic, natural and treated corundum apart: refer a valuable stone to a qualified laboratory.", lead[2]);
+        Assert.Equal("  These tests cannot separate synthetic, natural and treated corundum: refer a valuable stone to a qualified laboratory.", lead[2]);
         Assert.Equal("or spinel 7%", lead[3]);
     }
 
@@ -109,7 +109,7 @@ public class ResultTextTests
             Expectations = ["flame-fusion synthetic ruby: no diagnostic lines", "ruby: lines at 694, 668, 659 nm"],
         };
         string said = ResultText.Lead(CorundumAnswer(next))[2];
-        Assert.EndsWith("apart: the hand spectroscope (absorption lines) may tell some of them apart.", said);
+        Assert.EndsWith("corundum: the hand spectroscope (absorption lines) may tell some of them apart.", said);
     }
 
     [Fact]
@@ -122,7 +122,7 @@ public class ResultTextTests
             Expectations = ["flame-fusion synthetic ruby: dichroic", "ruby: dichroic"],
         };
         string said = ResultText.Lead(CorundumAnswer(next))[2];
-        Assert.EndsWith("apart: refer a valuable stone to a qualified laboratory.", said);
+        Assert.EndsWith("corundum: refer a valuable stone to a qualified laboratory.", said);
     }
 
     [Fact]
