@@ -1,6 +1,6 @@
 namespace GemIndex.Cli.TextUi.Help;
 
-/// <summary>The help screen: every key, then the cautions.</summary>
+/// <summary>The help screen: every key, how to read the answer, then the cautions.</summary>
 internal static class HelpText
 {
     public static IReadOnlyList<(string Key, string Does)> Keys { get; } =
@@ -27,6 +27,15 @@ internal static class HelpText
         ("Mouse", "click a field or a tab; click a choice to cycle it"),
     ];
 
+    /// <summary>How to read the answer and the rules a user meets on the pages.</summary>
+    public static IReadOnlyList<string> Reading { get; } =
+    [
+        "The answer leads with the species and its total over the whole catalogue, then how it splits by origin (natural, synthetic, treated, composite, imitation). The candidates follow grouped by species, best first within each; Enter on one opens why.",
+        "<1% and >99%: bench readings never make a material impossible or certain, so no probability short of that is shown as 0% or 100%.",
+        "SG: type it, or weigh the stone in air and in water. With both filled in neither is used until one is cleared; the SG page says both values and whether they agree.",
+        "Examiner: typed once at the foot of F2 Stone, kept in the workbook and named in every exported report; the export's confirmation says who.",
+    ];
+
     public static IReadOnlyList<string> Cautions { get; } =
     [
         "Contact liquids for refractometers (and heavy liquids for SG) are toxic: use little, keep the room aired, wear gloves, never let them touch skin, wash off spills at once.",
@@ -40,6 +49,7 @@ internal static class HelpText
         int width = Keys.Max(k => k.Key.Length);
         return string.Join('\n', [
             "KEYS", .. Keys.Select(k => $"  {k.Key.PadRight(width)}  {k.Does}"), "",
+            "READING THE ANSWER", .. Reading.Select(r => "  * " + r), "",
             "CAUTIONS", .. Cautions.Select(c => "  * " + c)]);
     }
 }

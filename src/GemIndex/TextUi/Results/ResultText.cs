@@ -89,9 +89,18 @@ internal static class ResultText
         string which = Listed([.. origins.Select(o => Origin(o.Key))]);
         string remedy = NextTestSeparatesOrigins(r, lead.Species) is { } next
             ? $"the {BenchTestWords.DisplayOfWire(next.Test)} may tell some of them apart{(next.LookFor.Count > 0 ? $" (look for {Listed(next.LookFor)})" : "")}"
+            : WarningNamesASeparatingTest(r, lead.Species) ? "the Warnings below name a test that may"
             : "refer a valuable stone to a qualified laboratory";
         return $"  These tests cannot separate {which} {lead.Species}: {remedy}.";
     }
+
+    /// <summary>
+    /// True when the engine's warning that the species' origins cannot be separated names a test that would help (the
+    /// engine picks that test among the species' own entries, which the next test, chosen over all candidates, may not be).
+    /// </summary>
+    private static bool WarningNamesASeparatingTest(IdentificationResult r, string species) =>
+        r.Warnings.Any(w => w.StartsWith(Capital(species) + ": ", StringComparison.Ordinal)
+            && w.Contains(ResultsModel.CannotBeSeparated, StringComparison.Ordinal) && w.Contains(" would help", StringComparison.Ordinal));
 
     /// <summary>
     /// The next test when it is expected to show something different for two entries of the species that differ in

@@ -91,13 +91,16 @@ internal sealed class ResultsModel
         return rows;
     }
 
+    /// <summary>The words of the engine's warning that a species' origins cannot be told apart (the lead says it in its own words).</summary>
+    public const string CannotBeSeparated = "cannot be separated by these tests";
+
     /// <summary>
     /// The warning shown under the lead: a do-not-immerse caution first (it protects the stone), else the engine's
     /// first warning, leaving out what the lead already says (nothing fits; origins inseparable).
     /// </summary>
     public static string? TopWarning(IdentificationResult r)
     {
-        IEnumerable<string> open = r.Warnings.Skip(r.NoGoodMatch ? 1 : 0).Where(w => !w.Contains("cannot be separated by these tests", StringComparison.Ordinal));
+        IEnumerable<string> open = r.Warnings.Skip(r.NoGoodMatch ? 1 : 0).Where(w => !w.Contains(CannotBeSeparated, StringComparison.Ordinal));
         return open.FirstOrDefault(w => w.Contains("do not immerse", StringComparison.Ordinal)) ?? open.FirstOrDefault();
     }
 

@@ -126,6 +126,18 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void When_only_the_warnings_name_a_test_for_the_origins_the_lead_points_there()
+    {
+        var next = new NextTestAdvice
+        {
+            Test = "pleochroism", GainBits = 0.2, Separates = ["flame-fusion synthetic ruby", "ruby"],
+            Expectations = ["flame-fusion synthetic ruby: dichroic", "ruby: dichroic"],
+        };
+        IdentificationResult r = CorundumAnswer(next, ["Corundum: synthetic, natural, treated cannot be separated by these tests; the loupe or microscope (magnification): look for curved striae (diffused light) would help; for a valuable stone refer it to a qualified laboratory."]);
+        Assert.EndsWith("corundum: the Warnings below name a test that may.", ResultText.Lead(r)[2]);
+    }
+
+    [Fact]
     public void Magnification_offered_in_the_lead_names_what_to_look_for_without_the_lighting()
     {
         var next = new NextTestAdvice
