@@ -143,7 +143,7 @@ internal static class ResultText
             yield break;
         }
         SeriesInterpretation best = s.Interpretations.MaxBy(i => i.Weight)!;
-        yield return "Optic character: " + (s.Character is { } c ? c.ToString().ToLowerInvariant()
+        yield return "Optic character: " + (s.Character is { } c ? Character(c)
             : "not fixed by the series" + (s.UndeterminedReason.Length > 0 ? ": " + s.UndeterminedReason : ""));
         bool single = best.Beta is null && best.Lowest.Value == best.Highest.Value;
         yield return (single ? "Refractive index: " : "Refractive indices: ") + (best.Beta is { } beta
@@ -152,6 +152,14 @@ internal static class ResultText
         if (best.Birefringence.Value > 0) yield return $"Birefringence: {Index(best.Birefringence.Value)}";
         if (Sign(s) is { } sign) yield return "Optic sign: " + sign;
     }
+
+    /// <summary>The optic character in the bench's words: one index is "singly refractive", as the polariscope says it.</summary>
+    public static string Character(OpticCharacter c) => c switch
+    {
+        OpticCharacter.Isotropic => "singly refractive (isotropic)",
+        OpticCharacter.Amorphous => "singly refractive (amorphous)",
+        _ => c.ToString().ToLowerInvariant(),
+    };
 
     /// <summary>The sign in words, or "not fixed" when the series' interpretations that count disagree on it.</summary>
     private static string? Sign(RotationSeriesResult s)

@@ -81,7 +81,7 @@ internal sealed class ResultsModel
         for (int i = 0; i < shown.Count; i++)
         {
             rows.Add(new AnswerRow(ResultText.Candidate(i + 1, names[i][0], used, shown[i].Confidence, bars), i));
-            foreach (string more in names[i].Skip(1)) rows.Add(new AnswerRow("  " + more, i));
+            foreach (string more in names[i].Skip(1)) rows.Add(new AnswerRow("  " + more, i, Continues: true));
         }
         Text([$"  not in the catalogue {ResultText.Percent(r.NotInCatalogue)}"]);
         IReadOnlyList<string> derived = ResultText.Derived(a);

@@ -10,7 +10,8 @@ using Terminal.Gui.Testing;
 
 namespace GemIndex.Tests.TextUi.Main;
 
-/// <summary>The bench drawn headless. One class, so the Terminal.Gui instances never run in parallel.</summary>
+/// <summary>The bench drawn headless; in the Terminal.Gui collection, so no two Terminal.Gui instances run in parallel.</summary>
+[Collection(Headless.Collection)]
 public sealed class MainWindowTests : IDisposable
 {
     private readonly string _path = Path.Combine(Path.GetTempPath(), "gemindex-tests-" + Guid.NewGuid().ToString("N") + ".db");
@@ -376,6 +377,41 @@ public sealed class MainWindowTests : IDisposable
         Assert.DoesNotContain("sg.", page);
         string answer = System.Text.RegularExpressions.Regex.Replace(string.Join(" ", window.Results.Rows.Select(r => r.Text)), @"\s+", " ");
         Assert.Contains("Specific gravity: none used (the SG page, F4, says why)", answer);
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Fact]
+    public void A_reference_with_underscores_shows_them_on_the_page_bar()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F2);
+        Type(app, "lot_7 a_b");
+        Settle();
+        app.LayoutAndDraw();
+        Assert.Contains("lot_7 a_b", app.Driver!.ToString()!.Split('\n')[0]);   // Terminal.Gui's label would take the first '_' as a hot key
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Fact]
+    public void The_examiner_is_reached_from_the_keyboard_at_the_foot_of_the_stone_page_and_kept_for_the_next_stone()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F2);
+        for (int i = 0; i < 8; i++) app.InjectKey(Key.Tab);
+        Type(app, "A. Example");
+        Settle();
+        app.InjectKey(Key.N.WithCtrl);                        // a new stone: the bench's examiner stays
+        Settle();
+        app.LayoutAndDraw();
+        string screen = app.Driver!.ToString()!;
+        Assert.Contains("Examiner      A. Example", screen);
+        Assert.Contains(StonePage.ExaminerNote.Trim(), screen);
+        Assert.True(_session.Flush());
+        Assert.Equal("A. Example", _workbook.Setting(BenchSession.ExaminerSetting));
         window.Dispose();
         app.End(token);
         app.Dispose();

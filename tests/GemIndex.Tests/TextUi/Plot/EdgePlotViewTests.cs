@@ -8,6 +8,7 @@ using Terminal.Gui.App;
 namespace GemIndex.Tests.TextUi.Plot;
 
 /// <summary>The edge plot drawn headless: every mark sits on the row whose index (read off the labels) is its reading.</summary>
+[Collection(Headless.Collection)]
 public sealed class EdgePlotViewTests
 {
     // A quartz series (common practice: ω 1.544 constant, ε' moving up to 1.553) and a corundum one (ω 1.770, ε 1.762).

@@ -200,6 +200,7 @@ public class ResultTextTests
         foreach (string rotation in new[] { "0", "45", "90", "135" }) form.PutStep(form.Steps.Count, new StepText(rotation, "1.620", ""));
         BenchAssessment a = new BenchAssessor(new Identifier(TestMaterials.All)).Assess(form.Snapshot());
         Assert.Contains("Refractive index: 1.620", ResultText.Derived(a));
+        Assert.Contains("Optic character: singly refractive (isotropic)", ResultText.Derived(a));
     }
 
     [Fact]
