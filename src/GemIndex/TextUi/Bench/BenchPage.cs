@@ -109,11 +109,25 @@ internal class BenchPage : View
     /// <summary>Said on the last row when the reasons need more rows than the page has for them.</summary>
     public const string MoreProblems = "! more: see the fields marked '!'";
 
-    /// <summary>The reasons word-wrapped to the page's width, each continuation indented under its "!"; never cut off unsaid.</summary>
+    /// <summary>
+    /// The reasons word-wrapped to the page's width, each continuation indented under its "!"; only whole reasons, and
+    /// when they need more rows than the page has, as many as fit with a last row saying there are more.
+    /// </summary>
     private void WrapProblems()
     {
-        List<string> lines = [.. Main.TextWrap.Lines(_problemLines, Math.Max(20, Viewport.Width))];
-        if (lines.Count > _problemRows) lines = [.. lines.Take(_problemRows - 1), MoreProblems];
+        int width = Math.Max(20, Viewport.Width);
+        List<List<string>> reasons = [.. _problemLines.Select(p => Main.TextWrap.Lines([p], width).ToList())];
+        List<string> lines = [.. reasons.SelectMany(r => r)];
+        if (lines.Count > _problemRows)
+        {
+            lines = [];
+            foreach (List<string> reason in reasons)
+            {
+                if (lines.Count + reason.Count > _problemRows - 1) break;
+                lines.AddRange(reason);
+            }
+            lines.Add(MoreProblems);
+        }
         _problems.Text = string.Join('\n', lines);
     }
 

@@ -97,7 +97,7 @@ internal sealed class RefractometerPage : BenchPage
         _rows.Clear();
         _stepCount = steps.Count;
         for (int i = 0; i < steps.Count; i++)
-            _rows.Add($"{steps[i].Rotation,6}°  {steps[i].Low,-8}  {steps[i].High,-8}{(errors.TryGetValue(BenchFields.Step(i), out string? e) ? " ! " + e : "")}");
+            _rows.Add($"{steps[i].Rotation,6}°  {steps[i].Low,-8}  {steps[i].High,-8}{(errors.ContainsKey(BenchFields.Step(i)) ? FormField.SeeBelow : "")}");   // the reason whole at the page's foot
         if (_rows.Count == 0) _rows.Add("(no steps yet: type the edges, Enter)");
         else _rows.Add("(Enter edits a step, Del removes)");
         if (selected is { } s) Grid.SelectedItem = Math.Min(s, _rows.Count - 1);

@@ -84,23 +84,26 @@ internal static class ResultText
     public static List<KeyValuePair<OriginClass, double>> Origins(SpeciesResult s) =>
         [.. s.Origins.Where(o => o.Value >= BenchWarnings.Relevant).OrderByDescending(o => o.Value)];
 
+    /// <summary>
+    /// "These tests cannot separate natural and synthetic quartz: …", with what may help. The engine's own warning comes
+    /// first, since it picks its test among the species' own entries: when that test is the next test, it is named here
+    /// (without the lighting, which the next test below gives); when it is another, the line points to the warnings;
+    /// when the engine finds none, a laboratory. Without that warning, the next test is named only when it is expected
+    /// to show something different for entries of different origins.
+    /// </summary>
     private static string Inseparable(IdentificationResult r, SpeciesResult lead, List<KeyValuePair<OriginClass, double>> origins)
     {
         string which = Listed([.. origins.Select(o => Origin(o.Key))]);
-        string remedy = NextTestSeparatesOrigins(r, lead.Species) is { } next
-            ? $"the {BenchTestWords.DisplayOfWire(next.Test)} may tell some of them apart{(next.LookFor.Count > 0 ? $" (look for {Listed(next.LookFor)})" : "")}"
-            : WarningNamesASeparatingTest(r, lead.Species) ? "the Warnings below name a test that may"
+        string? warning = r.Warnings.FirstOrDefault(w => w.StartsWith(Capital(lead.Species) + ": ", StringComparison.Ordinal)
+            && w.Contains(ResultsModel.CannotBeSeparated, StringComparison.Ordinal));
+        NextTestAdvice? named = warning is null ? NextTestSeparatesOrigins(r, lead.Species)
+            : r.NextTest is { } next && warning.Contains($"the {next.Description} would help", StringComparison.Ordinal) ? next : null;
+        string remedy = named is not null
+            ? $"the {BenchTestWords.DisplayOfWire(named.Test)} may tell some of them apart{(named.LookFor.Count > 0 ? $" (look for {Listed(named.LookFor)})" : "")}"
+            : warning is not null && warning.Contains(" would help", StringComparison.Ordinal) ? "the Warnings below name a test that may"
             : "refer a valuable stone to a qualified laboratory";
         return $"  These tests cannot separate {which} {lead.Species}: {remedy}.";
     }
-
-    /// <summary>
-    /// True when the engine's warning that the species' origins cannot be separated names a test that would help (the
-    /// engine picks that test among the species' own entries, which the next test, chosen over all candidates, may not be).
-    /// </summary>
-    private static bool WarningNamesASeparatingTest(IdentificationResult r, string species) =>
-        r.Warnings.Any(w => w.StartsWith(Capital(species) + ": ", StringComparison.Ordinal)
-            && w.Contains(ResultsModel.CannotBeSeparated, StringComparison.Ordinal) && w.Contains(" would help", StringComparison.Ordinal));
 
     /// <summary>
     /// The next test when it is expected to show something different for two entries of the species that differ in

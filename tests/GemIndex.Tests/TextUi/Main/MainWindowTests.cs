@@ -383,6 +383,38 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void Refused_entries_are_marked_at_their_rows_and_their_reasons_given_whole_or_not_at_all()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        foreach ((string low, string high) in new[] { ("1.544", "1.553"), ("1.95", "2.0") })
+        {
+            Type(app, low);
+            app.InjectKey(Key.Tab);
+            Type(app, high);
+            app.InjectKey(Key.Enter);
+        }
+        for (int i = 0; i < 3; i++) app.InjectKey(Key.Tab);      // the spot reading
+        Type(app, "1.5x");
+        Settle();
+        app.LayoutAndDraw();
+        string screen = app.Driver!.ToString()!;
+        Assert.Matches(@"15°  1\.95      2\.0     ! see below│", screen);   // the step row says where its reason is
+        string page = FormText(screen);
+        IReadOnlyDictionary<string, string> errors = _session.Results.Latest!.Errors;
+        Assert.True(errors.Count >= 2);
+        foreach (string reason in errors.Values)
+        {
+            string words = System.Text.RegularExpressions.Regex.Replace(reason, @"\s+", " ");
+            Assert.True(page.Contains(words, StringComparison.Ordinal) || !page.Contains(words[..Math.Min(12, words.Length)], StringComparison.Ordinal), $"cut short: {words}\n{page}");
+        }
+        Assert.Contains(BenchPage.MoreProblems, page);             // two long reasons: the second does not fit whole, and the page says so
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Fact]
     public void A_reference_with_underscores_shows_them_on_the_page_bar()
     {
         var (app, window, token) = Open();

@@ -138,6 +138,23 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void When_the_engine_names_the_next_test_for_the_origins_the_lead_names_it_too()
+    {
+        var next = new NextTestAdvice { Test = "absorption_nm", GainBits = 1.3, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = [] };
+        IdentificationResult r = CorundumAnswer(next, [$"Corundum: synthetic, natural, treated cannot be separated by these tests; the {next.Description} would help; for a valuable stone refer it to a qualified laboratory."]);
+        Assert.EndsWith("corundum: the hand spectroscope (absorption lines) may tell some of them apart.", ResultText.Lead(r)[2]);
+    }
+
+    [Fact]
+    public void When_the_engine_finds_no_test_for_the_origins_the_lead_does_not_offer_the_next_test()
+    {
+        // The next test's expectations differ by entry (SG ranges), but the engine finds nothing that parts the origins.
+        var next = new NextTestAdvice { Test = "sg", GainBits = 0.4, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = ["flame-fusion synthetic ruby: SG 3.99–4.01", "ruby: SG 3.97–4.05"] };
+        IdentificationResult r = CorundumAnswer(next, ["Corundum: synthetic, natural, treated cannot be separated by these tests; no bench test left here separates them; for a valuable stone refer it to a qualified laboratory."]);
+        Assert.EndsWith("corundum: refer a valuable stone to a qualified laboratory.", ResultText.Lead(r)[2]);
+    }
+
+    [Fact]
     public void Magnification_offered_in_the_lead_names_what_to_look_for_without_the_lighting()
     {
         var next = new NextTestAdvice
