@@ -8,7 +8,8 @@
 #   4. blue corundum, ω 1.770, ε 1.762, SG 4.00 (common practice handbook values), then on the loupe page curved striae
 #      seen and needles (silk) looked for and not seen: melt growth, so a flame-fusion synthetic leads the candidates.
 # Along the way: the focus order of every page, the rotation step set once and remembered, candidate 3 reached from
-# the keyboard with its detail, the scales, the export; then a kill -9 while typing and the stone reopened whole.
+# the keyboard with its detail, the scales, the examiner set once and named in the export, an SG typed over weights
+# (the clash said on the SG page); then a kill -9 while typing and the stone reopened whole.
 # Prints PASS or FAIL with the screen, exits non-zero on failure.
 set -euo pipefail
 cd "$(dirname "$0")/../.."
@@ -79,7 +80,7 @@ wait_for "Pleochroism   [none]"
 # Stone page opens at the reference; Tab x5: colour.
 keys F2; text "e2e quartz"; keys Tab Tab Tab Tab Tab; text "colourless"
 wait_for "Colour        colourless"
-wait_match "│Quartz [0-9]+%"
+wait_match "│Quartz [<>]?[0-9]+%"
 wait_for "Refractive indices: 1.544 to 1.553"
 echo "---- 80x24 stone 1 ----"; screen
 # Candidate 3 and its detail, from the keyboard: F10 to the answer, two rows down, Enter.
@@ -98,12 +99,17 @@ wait_for "lowest index"
 wait_for "birefringence"
 screen | grep -qE "^.1 (rock crystal|quartz|synthetic co)[^#]*#.* in " || fail "the first candidate's range does not hold the reading on the scales"
 keys Escape
-# Export (Ctrl+E): the reports beside the workbook, named after the reference.
+# The examiner, typed once at the foot of the stone page (Tab x8 from the reference), kept in the workbook.
+keys F2 Tab Tab Tab Tab Tab Tab Tab Tab; text "E2E Examiner"
+wait_for "Examiner      E2E Examiner"
+# Export (Ctrl+E): the reports beside the workbook, named after the reference, headed by the examiner.
 keys C-e
 wait_for "Reports written"
+wait_for "Examiner: E2E Examiner"
 for ext in md html json; do
   ls "$tmp"/reports/e2e_quartz*."$ext" >/dev/null 2>&1 || fail "no $tmp/reports/e2e_quartz*.$ext"
 done
+grep -qF "**Examiner:** E2E Examiner" "$tmp"/reports/e2e_quartz*.md || fail "the report does not name the examiner"
 keys Enter
 
 # ---- stone 2: over the limit (cubic zirconia) ----
@@ -114,7 +120,7 @@ wait_for "Reference     e2e cz"
 keys F3; keys Tab Tab Tab Tab; text "y"
 wait_for "Over limit    [yes]"
 keys F4; text "5.80"
-wait_match "│Cubic zirconia [0-9]+%"
+wait_match "│Cubic zirconia [<>]?[0-9]+%"
 wait_for "Over the limit: index above the"
 echo "---- 80x24 stone 2 ----"; screen
 
@@ -130,7 +136,14 @@ step 1.664 1.685
 # SG page focus order: SG, in air, in water.
 keys F4; keys Tab; text "1.670"; keys Tab; text "1.170"
 wait_match "SG 3\.3[0-9]{2} ± 0\.[0-9]{3} from the weights"
-wait_match "│Forsterite [0-9]+%"
+wait_match "│Forsterite [<>]?[0-9]+%"
+# An SG typed over the weights is a clash said on the SG page: both values, neither used; cleared, the weights count again.
+keys F4; text "3.60"
+wait_for "!! SG typed 3.600, weighed 3.3"
+wait_for "disagree. Neither is used; clear the"
+echo "---- 80x24 SG clash ----"; screen
+keys BSpace BSpace BSpace BSpace
+wait_match "SG 3\.3[0-9]{2} ± 0\.[0-9]{3} from the weights"
 wait_for "Optic character: biaxial"
 echo "---- 80x24 stone 3 ----"; screen
 
@@ -162,7 +175,7 @@ before=$(sha256sum "$first_md" | cut -d' ' -f1)
 keys C-n; text "e2e quartz"                # the first stone's reference again
 wait_for "Reference     e2e quartz"
 keys F4; text "2.66"
-wait_match "│Quartz [0-9]+%"
+wait_match "│Quartz [<>]?[0-9]+%"
 keys C-e
 wait_for "Reports written"
 keys Enter
@@ -199,7 +212,7 @@ step 1.765 1.770
 step 1.768 1.770
 step 1.765 1.770
 keys F4; text "4.00"
-wait_match "│Corundum [0-9]+%"
+wait_match "│Corundum [<>]?[0-9]+%"
 keys C-l
 wait_for "[^L Loupe]"
 wait_for "Type to find a feature"
@@ -232,4 +245,4 @@ wait_for " yes curved striae"
 wait_for " no  needles and silk"
 keys C-q
 wait_for "EXIT=0" 15
-echo "PASS tui e2e: four stones identified by species, focus order, candidate 3 and its detail, scales, export, kill and reopen, colliding references exported without loss, a read-only workbook, magnification marks saved and shown again"
+echo "PASS tui e2e: four stones identified by species, focus order, candidate 3 and its detail, scales, examiner in the export, SG clash, kill and reopen, colliding references exported without loss, a read-only workbook, magnification marks saved and shown again"

@@ -30,6 +30,7 @@ internal sealed class BenchAssessor(Identifier? identifier)
         var errors = new Dictionary<string, string>();
         foreach (BenchFieldError e in outcome.Reading.Errors) errors.TryAdd(e.Field, e.Sentence);
         CheckWeight(form, errors);
+        if (GemIndex.Cli.Reports.ReportHeader.ExaminerProblem(form.Text(BenchFields.Examiner)) is { } examiner) errors[BenchFields.Examiner] = examiner;
         IdentificationResult? result = outcome.Reading.HasReadings ? outcome.Result : null;
         return new BenchAssessment
         {

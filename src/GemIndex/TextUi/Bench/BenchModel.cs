@@ -17,7 +17,7 @@ internal sealed class BenchModel
     public const double RotationStepDegrees = 15;
 
     /// <summary>The texts that belong to the bench rather than the stone: kept when another stone opens.</summary>
-    private static readonly string[] BenchSettings = [BenchFields.Precision, BenchFields.CalibrationOffset, RefractometerPage.RotationStepField];
+    private static readonly string[] BenchSettings = [BenchFields.Precision, BenchFields.CalibrationOffset, RefractometerPage.RotationStepField, BenchFields.Examiner];
 
     private ImmutableDictionary<string, string> _texts = ImmutableDictionary<string, string>.Empty;
     private ImmutableDictionary<string, string> _choices = ImmutableDictionary<string, string>.Empty;
@@ -89,7 +89,7 @@ internal sealed class BenchModel
 
     public BenchSnapshot Snapshot() => new(StoneId, Version, _texts, _choices, _steps);
 
-    /// <summary>Fills the form from a stored stone; bench settings (precision, calibration) are kept.</summary>
+    /// <summary>Fills the form from a stored stone; bench settings (precision, calibration, rotation step, examiner) are kept.</summary>
     public void Load(StoneSheet stone)
     {
         StoneId = stone.Id;

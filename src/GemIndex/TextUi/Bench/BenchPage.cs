@@ -1,3 +1,4 @@
+using GemIndex.Cli.TextUi.Main;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.Configuration;
 using Terminal.Gui.ViewBase;
@@ -10,6 +11,7 @@ internal class BenchPage : View
 {
     public const int LabelWidth = 14;   // the longest label (13) and a space before the value
     private readonly Label _problems;
+    private readonly int _problemRows;
     private int _row;
 
     /// <param name="title">The page's name in its frame.</param>
@@ -19,12 +21,14 @@ internal class BenchPage : View
     {
         Title = title;
         Keys = keys;
+        _problemRows = problemRows;
         Width = Dim.Fill();
         Height = Dim.Fill();
         CanFocus = true;
-        _problems = new Label { X = 0, Y = Pos.AnchorEnd(problemRows), Width = Dim.Fill(), Height = problemRows, Visible = problemRows > 0 };
+        _problems = new PlainLabel { X = 0, Y = Pos.AnchorEnd(problemRows), Width = Dim.Fill(), Height = problemRows, Visible = problemRows > 0 };
         _problems.SchemeName = SchemeManager.SchemesToSchemeName(Schemes.Error);
         Add(_problems);
+        ViewportChanged += (_, _) => WrapProblems();
     }
 
     /// <summary>The keys that matter on this page, for the key line.</summary>
@@ -71,7 +75,7 @@ internal class BenchPage : View
 
     public Label AddNote(string text = "")
     {
-        var l = new Label { Y = NextRow(), Width = Dim.Fill(), Text = text };
+        var l = new PlainLabel { Y = NextRow(), Width = Dim.Fill(), Text = text };
         Add(l);
         return l;
     }
@@ -85,7 +89,7 @@ internal class BenchPage : View
         next.Edit.InsertionPoint = text.Length;
     }
 
-    /// <summary>Marks each field with its error and lists the reasons at the bottom.</summary>
+    /// <summary>Marks each field with its error and lists the reasons at the bottom, each after its field's caption.</summary>
     public virtual void ShowErrors(IReadOnlyDictionary<string, string> errors)
     {
         var mine = new List<string>();
@@ -93,10 +97,45 @@ internal class BenchPage : View
         {
             string? reason = errors.GetValueOrDefault(f.Field);
             f.ShowError(reason);
-            if (reason is not null) mine.Add(reason);
+            if (reason is not null) mine.Add($"{f.Label}: {InCaptions(reason)}");
         }
         mine.AddRange(OwnErrors(errors));
-        _problems.Text = string.Join('\n', mine.Select(m => "! " + m));
+        _problemLines = [.. mine.Select(m => "! " + m)];
+        WrapProblems();
+    }
+
+    private IReadOnlyList<string> _problemLines = [];
+
+    /// <summary>Said on the last row when the reasons need more rows than the page has for them.</summary>
+    public const string MoreProblems = "! more: see the fields marked '!'";
+
+    /// <summary>
+    /// The reasons word-wrapped to the page's width, each continuation indented under its "!"; only whole reasons, and
+    /// when they need more rows than the page has, as many as fit with a last row saying there are more.
+    /// </summary>
+    private void WrapProblems()
+    {
+        int width = Math.Max(20, Viewport.Width);
+        List<List<string>> reasons = [.. _problemLines.Select(p => Main.TextWrap.Lines([p], width).ToList())];
+        List<string> lines = [.. reasons.SelectMany(r => r)];
+        if (lines.Count > _problemRows)
+        {
+            lines = [];
+            foreach (List<string> reason in reasons)
+            {
+                if (lines.Count + reason.Count > _problemRows - 1) break;
+                lines.AddRange(reason);
+            }
+            lines.Add(MoreProblems);
+        }
+        _problems.Text = string.Join('\n', lines);
+    }
+
+    /// <summary>A reason as the page shows it: the fields it names by their wire names ("sg.air_ct") named by their captions ("In air").</summary>
+    public string InCaptions(string reason)
+    {
+        foreach (FormField f in Fields.OrderByDescending(f => f.Field.Length)) reason = reason.Replace(f.Field, f.Label, StringComparison.Ordinal);
+        return reason;
     }
 
     protected virtual IEnumerable<string> OwnErrors(IReadOnlyDictionary<string, string> errors) => [];

@@ -1,3 +1,4 @@
+using GemIndex.Cli.TextUi.Main;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.Configuration;
 using Terminal.Gui.ViewBase;
@@ -5,26 +6,39 @@ using Terminal.Gui.Views;
 
 namespace GemIndex.Cli.TextUi.Bench;
 
-/// <summary>A label, a text box and, to its right, the hint or the reason the entry is refused ("! ...").</summary>
+/// <summary>
+/// A label, a text box and, to its right, the hint or the reason the entry is refused ("! ..."); a reason too long for
+/// the room beside the box says "! see below" there, and the page lists it whole at its bottom.
+/// </summary>
 internal sealed class FormField : View
 {
+    /// <summary>Shown beside the box when the reason does not fit there.</summary>
+    public const string SeeBelow = "! see below";
+
     private readonly string _hint;
     private readonly Label _mark;
+    private string? _reason;
 
     public FormField(string field, string label, int labelWidth, int editWidth, string hint = "")
     {
         Field = field;
+        string name = label.Trim();
+        Label = name.StartsWith("or ", StringComparison.Ordinal) ? name[3..] : name;
         _hint = hint;
         Width = Dim.Fill();
         Height = 1;
         CanFocus = true;
-        var caption = new Label { Text = label, Width = labelWidth };
+        var caption = new PlainLabel { Text = label, Width = labelWidth };
         Edit = new TextField { X = labelWidth, Width = editWidth };
-        _mark = new Label { X = Pos.Right(Edit) + 1, Width = Dim.Fill(), Text = hint };
+        _mark = new PlainLabel { X = Pos.Right(Edit) + 1, Width = Dim.Fill(), Text = hint };
         Add(caption, Edit, _mark);
+        _mark.ViewportChanged += (_, _) => ShowMark();
     }
 
     public string Field { get; }
+
+    /// <summary>The field's name as the page's reasons give it: its caption ("In air"), without the "or" that links it to the row above.</summary>
+    public string Label { get; }
 
     public TextField Edit { get; }
 
@@ -32,7 +46,15 @@ internal sealed class FormField : View
 
     public void ShowError(string? reason)
     {
-        _mark.Text = reason is null ? _hint : "! " + reason;
+        _reason = reason;
         _mark.SchemeName = reason is null ? null : SchemeManager.SchemesToSchemeName(Schemes.Error);
+        ShowMark();
+    }
+
+    private void ShowMark()
+    {
+        string text = _reason is null ? _hint : "! " + _reason;
+        int room = _mark.Viewport.Width;
+        _mark.Text = _reason is null || room <= 0 || text.Length <= room ? text : SeeBelow;
     }
 }

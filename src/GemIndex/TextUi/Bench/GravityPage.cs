@@ -1,3 +1,4 @@
+using GemIndex.Cli.TextUi.Main;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.Configuration;
 using Terminal.Gui.ViewBase;
@@ -10,25 +11,46 @@ internal sealed class GravityPage : BenchPage
 {
     public const int CautionRows = 7;
 
+    /// <summary>Rows of the SG line: a clash between a typed SG and the weights is said whole in three rows at the form's width.</summary>
+    public const int ResultRows = 3;
+
+    private string _result = GravityText.None;
+    private string _caution = "";
+
     public GravityPage() : base("SG", "Tab next field")
     {
         AddField(BenchFields.Sg, "SG", 8, "or weigh:");
         AddField(BenchFields.AirCt, "In air", 8, "ct");
         WaterField = AddField(BenchFields.WaterCt, "In water", 8, "ct");
         AddField(BenchFields.WaterC, "Water", 8, "°C, default 20");
-        Result = new Label { Y = NextRow(2), Width = Dim.Fill(), Height = 2, Text = "SG -" };
+        Result = new PlainLabel { Y = NextRow(ResultRows), Width = Dim.Fill(), Height = ResultRows, Text = GravityText.None };
         Add(Result);
         AddField(BenchFields.HeavyLiquids, "Heavy liquid", 24);
         AddNote("  e.g. 3.32 floats; 2.89 sinks");
         // Several rows: the caution names the candidates and says why, whole, word-wrapped to the page's width.
-        Caution = new Label { Y = NextRow(CautionRows), Width = Dim.Fill(), Height = CautionRows };
+        Caution = new PlainLabel { Y = NextRow(CautionRows), Width = Dim.Fill(), Height = CautionRows };
         Caution.SchemeName = SchemeManager.SchemesToSchemeName(Schemes.Error);
         Add(Caution);
+        ViewportChanged += (_, _) => Wrap();
+    }
+
+    /// <summary>Shows the SG line and the immersion caution (empty: none), word-wrapped to the page's width.</summary>
+    public void Show(string result, string caution)
+    {
+        (_result, _caution) = (result, caution);
+        Wrap();
+    }
+
+    private void Wrap()
+    {
+        int width = Math.Max(20, Viewport.Width);
+        Result.Text = string.Join('\n', TextWrap.Lines([_result], width));
+        Caution.Text = _caution.Length == 0 ? "" : string.Join('\n', TextWrap.Lines(["!! " + _caution], width));
     }
 
     public Label Caution { get; }
 
-    /// <summary>The SG in use and where it comes from (and a clash between a typed SG and the weights).</summary>
+    /// <summary>The SG in use and where it comes from (or a clash between a typed SG and the weights: neither is used).</summary>
     public Label Result { get; }
 
     public FormField WaterField { get; }

@@ -1,3 +1,4 @@
+using System.Globalization;
 using GemIndex.Cli.TextUi.Results;
 using GemIndex.Core.Bench;
 using GemIndex.Core.Gravity;
@@ -6,25 +7,38 @@ namespace GemIndex.Cli.TextUi.Bench;
 
 /// <summary>
 /// The SG line of the SG page: the value in use and where it comes from. An SG typed together with weights is refused
-/// by the reader (one of them must go); the line then shows both values and whether they agree, so the user knows
-/// which one to clear.
+/// by the reader (one of them must go), so then the line says so whole: both values, whether they agree, that neither
+/// is used, and what to clear. It stays on the page while the user types (no pop-up, not only the key line).
 /// </summary>
 internal static class GravityText
 {
     /// <summary>Coverage factor for "the two disagree": two combined standard uncertainties (about 95 %, common practice in measurement).</summary>
     public const double ClashCoverage = 2;
 
+    /// <summary>What the SG line says when there is no SG to use and nothing clashes.</summary>
+    public const string None = "SG -";
+
+    /// <summary>The end of every clash sentence: which value is used, and the way out.</summary>
+    public const string NeitherUsed = "Neither is used; clear the SG or the weights.";
+
     public static string Describe(BenchSnapshot form, SpecificGravity? used)
     {
         string typedText = form.Text(BenchFields.Sg).Trim();
-        SpecificGravity? weighed = Weighed(form);
         if (used is { } sg) return ResultText.Gravity(sg) + (typedText.Length > 0 ? " as typed" : " from the weights");
-        SpecificGravity? typed = typedText.Length > 0 ? BenchReader.Read(new BenchReadings().With(BenchField.Sg, typedText)).Sheet.SpecificGravity : null;
-        if (typed is not { } t || weighed is not { } w) return "SG -";
-        double combined = Math.Sqrt(t.StandardUncertainty * t.StandardUncertainty + w.StandardUncertainty * w.StandardUncertainty);
-        string verdict = Math.Abs(t.Value - w.Value) > ClashCoverage * combined ? "they disagree" : "they agree";
-        return $"!! Typed {ResultText.Gravity(t)}, the weights give {ResultText.Gravity(w)[3..]} ({verdict}):\n   neither is used until one is cleared";
+        bool weighing = new[] { BenchFields.AirCt, BenchFields.WaterCt }.Any(f => form.Text(f).Trim().Length > 0);
+        if (typedText.Length == 0 || !weighing) return None;
+        SpecificGravity? typed = BenchReader.Read(new BenchReadings().With(BenchField.Sg, typedText)).Sheet.SpecificGravity;
+        string typedWords = typed is { } t ? $"SG typed {Value(t)}" : $"SG typed '{BenchText.Shown(typedText)}'";
+        if (Weighed(form) is not { } w) return $"!! {typedWords} and a weighing begun. {NeitherUsed}";
+        string verdict = typed is not { } both ? "." : Disagree(both, w) ? ": they disagree." : ": they agree.";
+        return $"!! {typedWords}, weighed {Value(w)}{verdict} {NeitherUsed}";
     }
+
+    /// <summary>True when a typed and a weighed SG lie further apart than <see cref="ClashCoverage"/> combined standard uncertainties.</summary>
+    public static bool Disagree(SpecificGravity typed, SpecificGravity weighed) =>
+        Math.Abs(typed.Value - weighed.Value) > ClashCoverage * Math.Sqrt(typed.StandardUncertainty * typed.StandardUncertainty + weighed.StandardUncertainty * weighed.StandardUncertainty);
+
+    private static string Value(SpecificGravity sg) => sg.Value.ToString("0.000", CultureInfo.InvariantCulture);
 
     /// <summary>The SG the weights alone give (read by the one reader), or null when they do not make an SG.</summary>
     private static SpecificGravity? Weighed(BenchSnapshot form)

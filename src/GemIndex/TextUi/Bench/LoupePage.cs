@@ -1,3 +1,4 @@
+using GemIndex.Cli.TextUi.Main;
 using System.Collections.ObjectModel;
 using GemIndex.Core.Bench;
 using Terminal.Gui.Configuration;
@@ -30,12 +31,12 @@ internal sealed class LoupePage : BenchPage
 
     public LoupePage() : base("Magnification", KeyWords, problemRows: 0)
     {
-        _find = new Label { X = 0, Y = 0, Width = Dim.Fill(), Height = 1 };
+        _find = new PlainLabel { X = 0, Y = 0, Width = Dim.Fill(), Height = 1 };
         // Keystroke navigation off: every letter goes to the filter, so a typed word never jumps to some row instead.
         List = new ListView { X = 0, Y = 1, Width = Dim.Fill(), Height = LoupeModel.MinimumListRows, KeystrokeNavigator = null };
         List.SetSource(_rows);
-        _rule = new Label { X = 0, Y = Pos.Bottom(List), Width = Dim.Fill(), Height = 1 };
-        _description = new Label { X = 0, Y = Pos.Bottom(_rule), Width = Dim.Fill(), Height = 6 };
+        _rule = new PlainLabel { X = 0, Y = Pos.Bottom(List), Width = Dim.Fill(), Height = 1 };
+        _description = new PlainLabel { X = 0, Y = Pos.Bottom(_rule), Width = Dim.Fill(), Height = 6 };
         Add(_find, List, _rule, _description);
         List.KeyDown += OnListKey;
         List.ValueChanged += (_, _) => OnMoved();

@@ -1,3 +1,4 @@
+using GemIndex.Cli.TextUi.Main;
 using System.Collections.ObjectModel;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
@@ -25,11 +26,11 @@ internal sealed class RefractometerPage : BenchPage
     public RefractometerPage() : base("Refractometer", "Enter stores the step")
     {
         NextRow();
-        Add(new Label { Y = 0, Text = "Rotation  Low edge  High edge" });
+        Add(new PlainLabel { Y = 0, Text = "Rotation  Low edge  High edge" });
         Rotation = new TextField { X = 0, Y = NextRow(), Width = 7 };
         Low = new TextField { X = 10, Y = Pos.Top(Rotation), Width = 8 };
         High = new TextField { X = 20, Y = Pos.Top(Rotation), Width = 8 };
-        Editing = new Label { X = 29, Y = Pos.Top(Rotation), Width = Dim.Fill() };
+        Editing = new PlainLabel { X = 29, Y = Pos.Top(Rotation), Width = Dim.Fill() };
         Grid = new ListView { X = 0, Y = NextRow(GridRows), Width = Dim.Fill(), Height = GridRows };
         Grid.SetSource(_rows);
         Add(Rotation, Low, High, Editing, Grid);
@@ -96,7 +97,7 @@ internal sealed class RefractometerPage : BenchPage
         _rows.Clear();
         _stepCount = steps.Count;
         for (int i = 0; i < steps.Count; i++)
-            _rows.Add($"{steps[i].Rotation,6}°  {steps[i].Low,-8}  {steps[i].High,-8}{(errors.TryGetValue(BenchFields.Step(i), out string? e) ? " ! " + e : "")}");
+            _rows.Add($"{steps[i].Rotation,6}°  {steps[i].Low,-8}  {steps[i].High,-8}{(errors.ContainsKey(BenchFields.Step(i)) ? FormField.SeeBelow : "")}");   // the reason whole at the page's foot
         if (_rows.Count == 0) _rows.Add("(no steps yet: type the edges, Enter)");
         else _rows.Add("(Enter edits a step, Del removes)");
         if (selected is { } s) Grid.SelectedItem = Math.Min(s, _rows.Count - 1);

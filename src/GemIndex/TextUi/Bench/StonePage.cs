@@ -1,8 +1,11 @@
 namespace GemIndex.Cli.TextUi.Bench;
 
-/// <summary>The stone sheet: what the stone is, before any instrument.</summary>
+/// <summary>The stone sheet: what the stone is, before any instrument; under it the examiner, set once for the workbook.</summary>
 internal sealed class StonePage : BenchPage
 {
+    /// <summary>Under the examiner's field: what it is for and that it is not the stone's.</summary>
+    public const string ExaminerNote = "  on every report from this workbook";
+
     public StonePage() : base("Stone", "Tab next field")
     {
         AddField(BenchFields.Reference, "Reference", 24);
@@ -13,5 +16,8 @@ internal sealed class StonePage : BenchPage
         AddField(BenchFields.Colour, "Colour", 24);
         AddField(BenchFields.Transparency, "Transparency", 20);
         AddField(BenchFields.Notes, "Notes", 24);
+        AddNote();
+        AddField(BenchFields.Examiner, "Examiner", 24);
+        AddNote(ExaminerNote);
     }
 }

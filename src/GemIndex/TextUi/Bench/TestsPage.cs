@@ -8,8 +8,8 @@ internal sealed class TestsPage : BenchPage
         AddChoice(BenchFields.Polariscope);
         AddChoice(BenchFields.Pleochroism);
         AddChoice(BenchFields.Dispersion);
-        AddField(BenchFields.IndexAtB, " or n at B", 8, "686.7 nm");
-        AddField(BenchFields.IndexAtG, "    n at G", 8, "430.8 nm");
+        AddField(BenchFields.IndexAtB, "or RI at B", 8, "686.7 nm");
+        AddField(BenchFields.IndexAtG, "   RI at G", 8, "430.8 nm");
         AddChoice(BenchFields.ThermalProbe);
         AddChoice(BenchFields.Electrical);
         AddChoice(BenchFields.UvLong);

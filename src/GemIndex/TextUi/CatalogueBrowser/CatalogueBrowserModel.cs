@@ -34,8 +34,14 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
                 .OrderBy(p => p.Distance).Select(p => p.m)];
             return;
         }
-        Shown = [.. catalogue.Where(m => Matches(m, q))];
+        Shown = [.. catalogue.Where(m => Matches(m, q)).OrderBy(m => Closeness(m, q))];   // stable: the catalogue's order within each kind
     }
+
+    /// <summary>How a word search matches an entry, best first: the species or the name itself, then the name, then the variety, family or a colour.</summary>
+    private static int Closeness(Material m, string q) =>
+        string.Equals(m.Species, q, StringComparison.OrdinalIgnoreCase) || string.Equals(m.Name, q, StringComparison.OrdinalIgnoreCase) ? 0
+        : m.Name.Contains(q, StringComparison.OrdinalIgnoreCase) ? 1
+        : 2;
 
     /// <summary>One or two numbers separated by spaces, or null when the search is words.</summary>
     private static IReadOnlyList<double>? Numbers(string q)
@@ -88,15 +94,18 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
     /// <summary>The width the names need: the longest shown, or what <paramref name="width"/> leaves beside the numbers.</summary>
     public int NameWidth(int width) => Math.Max(12, Math.Min(Shown.Count == 0 ? 12 : Shown.Max(m => m.Name.Length), width - NumbersWidth));
 
-    /// <summary>" 1.544-1.553  SG 2.65-2.66" beside the name.</summary>
+    /// <summary>" 1.544–1.553  SG 2.65–2.66" beside the name.</summary>
     private const int NumbersWidth = 28;
 
     public string Line(Material m, int nameWidth) =>
-        $"{Results.ResultText.Clip(m.Name, nameWidth).PadRight(nameWidth)} {m.Indices.Lowest.Minimum.ToString("0.000", CultureInfo.InvariantCulture)}-{m.Indices.Highest.Maximum.ToString("0.000", CultureInfo.InvariantCulture)}  SG {Range(m.SpecificGravity)}";
+        $"{Results.ResultText.Clip(m.Name, nameWidth).PadRight(nameWidth)} {m.Indices.Lowest.Minimum.ToString("0.000", CultureInfo.InvariantCulture)}–{m.Indices.Highest.Maximum.ToString("0.000", CultureInfo.InvariantCulture)}  SG {Range(m.SpecificGravity)}";
 
-    private static string Range(PropertyRange r) => r.Minimum == r.Maximum
-        ? r.Minimum.ToString("0.00", CultureInfo.InvariantCulture)
-        : $"{r.Minimum.ToString("0.00", CultureInfo.InvariantCulture)}-{r.Maximum.ToString("0.00", CultureInfo.InvariantCulture)}";
+    /// <summary>An SG range at two decimals; one number when both ends print the same.</summary>
+    private static string Range(PropertyRange r)
+    {
+        string low = r.Minimum.ToString("0.00", CultureInfo.InvariantCulture), high = r.Maximum.ToString("0.00", CultureInfo.InvariantCulture);
+        return low == high ? low : $"{low}–{high}";
+    }
 
     public static string Details(Material m)
     {

@@ -7,7 +7,7 @@ using GemIndex.Cli.TextUi.Main;
 namespace GemIndex.Cli.TextUi.CatalogueBrowser;
 
 /// <summary>Search the catalogue by name or colour, or type an index (below 2.5) or an SG; the entry of the selected line shows below.</summary>
-internal sealed class CatalogueBrowserView : Dialog
+internal sealed class CatalogueBrowserView : FullScreenDialog
 {
     private readonly CatalogueBrowserModel _model;
     private readonly ObservableCollection<string> _rows = [];
@@ -16,11 +16,9 @@ internal sealed class CatalogueBrowserView : Dialog
     {
         _model = model;
         Title = "Catalogue: a name, an index, an SG or both (1.544 2.65); Esc closes";
-        Width = Dim.Fill();
-        Height = Dim.Fill();
-        var label = new Label { Text = "Search:" };
+        var label = new PlainLabel { Text = "Search:" };
         Search = new TextField { X = 8, Width = 24 };
-        Count = new Label { X = Pos.Right(Search) + 2, Width = Dim.Fill() };
+        Count = new PlainLabel { X = Pos.Right(Search) + 2, Width = Dim.Fill() };
         List = new ListView { Y = 1, Width = Dim.Fill(), Height = Dim.Percent(40) };
         List.SetSource(_rows);
         Entry = new WrappedText { Y = Pos.Bottom(List), Width = Dim.Fill(), Height = Dim.Fill() };

@@ -76,16 +76,17 @@ internal static class StoneReportFiles
     }
 
     /// <summary>
-    /// Writes the three reports and returns their full paths (Markdown, HTML, JSON). With <paramref name="replace"/>
+    /// Writes the three reports, headed by <paramref name="header"/> (date, examiner, versions), and returns their full
+    /// paths (Markdown, HTML, JSON). With <paramref name="replace"/>
     /// (the user agreed) a stone's earlier reports are replaced; without it, an existing name is never overwritten and
     /// the next free numbered name is used. Each file is written whole to a temporary file, then renamed.
     /// </summary>
     /// <exception cref="IOException">The folder or a file could not be written (the message names the path).</exception>
     /// <exception cref="UnauthorizedAccessException">No permission to write there.</exception>
     /// <exception cref="GemIndex.Data.Batch.BatchInputException">The sheet's readings do not convert.</exception>
-    public static IReadOnlyList<string> Write(string workbookPath, StoneSheet sheet, IdentificationResult result, bool replace = false)
+    public static IReadOnlyList<string> Write(string workbookPath, StoneSheet sheet, IdentificationResult result, ReportHeader? header = null, bool replace = false)
     {
-        StoneReport report = StoneReport.Build(sheet, result);
+        StoneReport report = StoneReport.Build(sheet, result, header);
         string folder = FolderFor(workbookPath);
         if (FileKind.Of(folder) is not (FileKind.Entry.Folder or FileKind.Entry.Missing))
             throw new IOException($"{folder}: is {FileKind.Describe(FileKind.Of(folder))}, not a folder; the reports were not written");

@@ -1,6 +1,6 @@
 namespace GemIndex.Cli.TextUi.Help;
 
-/// <summary>The help screen: every key, then the cautions.</summary>
+/// <summary>The help screen: every key, how to read the answer, then the cautions.</summary>
 internal static class HelpText
 {
     public static IReadOnlyList<(string Key, string Does)> Keys { get; } =
@@ -14,10 +14,11 @@ internal static class HelpText
         ("Ctrl+R", "scales: lowest index, birefringence and SG as read (with their uncertainty) against the top candidates' ranges"),
         ("F7", "catalogue browser (a name, an index, an SG, or an index and an SG: 1.544 2.65)"),
         ("F8", "stones in the workbook (open, search, new, duplicate, delete; F3 there shows a stone's edit history)"),
-        ("Ctrl+E", "export the stone's report (Markdown, HTML, JSON) to reports/ beside the workbook"),
+        ("Ctrl+E", "export the stone's report (Markdown, HTML, JSON) to reports/ beside the workbook; each names the examiner typed once at the foot of F2 Stone (kept in the workbook)"),
         ("Ctrl+N", "new stone (opens at its reference)"),
         ("Ctrl+Q", "quit (everything is already saved)"),
-        ("Tab, Shift+Tab", "next / previous field"),
+        ("Tab, Shift+Tab", "next / previous field; a field reached by Tab has its text selected, so typing replaces it"),
+        ("Ctrl+Z", "in a field: undo the last change (a value replaced by mistake comes back)"),
         ("RI: Enter", "store the step being typed; the rotation moves on by the rotation step (set once on the page; 15° until set)"),
         ("RI: Enter on step", "edit that step; Delete removes it"),
         ("Choices", "one key picks the answer: n none; w m s v weak, moderate, strong, very strong; i d a x singly refractive, doubly refractive, aggregate, anomalous; b t dichroic, trichroic; + - reacts, does not react; y yes. Space or Backspace clears; a digit goes on to the next field"),
@@ -26,11 +27,20 @@ internal static class HelpText
         ("Mouse", "click a field or a tab; click a choice to cycle it"),
     ];
 
+    /// <summary>How to read the answer and the rules a user meets on the pages.</summary>
+    public static IReadOnlyList<string> Reading { get; } =
+    [
+        "The answer leads with the species and its total over the whole catalogue, then how it splits by origin (natural, synthetic, treated, composite, imitation). The candidates follow grouped by species, best first within each; Enter on one opens why.",
+        "<1% and >99%: bench readings never make a material impossible or certain, so no probability short of that is shown as 0% or 100%.",
+        "SG: type it, or weigh the stone in air and in water. With both filled in neither is used until one is cleared; the SG page says both values and whether they agree.",
+        "Examiner: typed once at the foot of F2 Stone, kept in the workbook and named in every exported report; the export's confirmation says who.",
+    ];
+
     public static IReadOnlyList<string> Cautions { get; } =
     [
         "Contact liquids for refractometers (and heavy liquids for SG) are toxic: use little, keep the room aired, wear gloves, never let them touch skin, wash off spills at once.",
         "Ultraviolet lamps harm eyes and skin: never look into the lamp, use the viewing cabinet or UV-blocking glasses.",
-        "Do not immerse porous, soluble or fragile stones (opal, turquoise, pearl, amber and the like) in water or heavy liquids; the SG screen warns when such a stone is among the top candidates.",
+        "Do not immerse porous, soluble or fragile stones (opal, turquoise, pearl, amber and the like) in water or heavy liquids; the SG page warns when such a stone is among the top candidates.",
         "An identification here is an aid to your own judgement, not a certificate. Defer to local rules and licensed practice; refer valuable or doubtful stones to a qualified laboratory.",
     ];
 
@@ -39,6 +49,7 @@ internal static class HelpText
         int width = Keys.Max(k => k.Key.Length);
         return string.Join('\n', [
             "KEYS", .. Keys.Select(k => $"  {k.Key.PadRight(width)}  {k.Does}"), "",
+            "READING THE ANSWER", .. Reading.Select(r => "  * " + r), "",
             "CAUTIONS", .. Cautions.Select(c => "  * " + c)]);
     }
 }

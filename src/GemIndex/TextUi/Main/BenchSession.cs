@@ -17,6 +17,9 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     public const string CalibrationSetting = "refractometer.calibration_offset";
     public const string RotationStepSetting = RefractometerPage.RotationStepField;
 
+    /// <summary>The examiner named in every report exported from this workbook (a workbook is one examiner's bench book).</summary>
+    public const string ExaminerSetting = BenchFields.Examiner;
+
     private readonly Lock _gate = new();
     private (long Id, int Version) _lastSaved = (0, -1);
     private Task _pending = Task.CompletedTask;
@@ -51,6 +54,7 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
             Form.SetText(BenchFields.Precision, workbook.Setting(PrecisionSetting) ?? "");
             Form.SetText(BenchFields.CalibrationOffset, workbook.Setting(CalibrationSetting) ?? "");
             Form.SetText(RefractometerPage.RotationStepField, workbook.Setting(RotationStepSetting) ?? "");
+            Form.SetText(BenchFields.Examiner, workbook.Setting(ExaminerSetting) ?? "");
             StoneSummary? latest = workbook.List().FirstOrDefault();
             Load(latest is not null ? workbook.Get(latest.Id)! : workbook.IsReadOnly ? new StoneSheet() : NewStone());
         }
@@ -141,6 +145,7 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
                 Setting(PrecisionSetting, snapshot.Text(BenchFields.Precision));
                 Setting(CalibrationSetting, snapshot.Text(BenchFields.CalibrationOffset));
                 Setting(RotationStepSetting, snapshot.Text(RefractometerPage.RotationStepField));
+                Setting(ExaminerSetting, snapshot.Text(BenchFields.Examiner));
                 _lastSaved = (snapshot.StoneId, snapshot.Version);
                 return saved.IsClean ? (null, []) : (ConflictText(saved.Conflicts), saved.Conflicts);
             }

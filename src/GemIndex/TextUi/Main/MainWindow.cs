@@ -51,7 +51,7 @@ internal sealed class MainWindow : Window
         BorderStyle = LineStyle.None;
         if (Monochrome.Wanted) Monochrome.Apply(this);
         Pages = [new StonePage(), new RefractometerPage(), new GravityPage(), new TestsPage(), new LoupePage()];
-        _pageBar = new Label { Width = Dim.Fill() };
+        _pageBar = new PlainLabel { Width = Dim.Fill() };
         _pageBar.MouseEvent += (_, m) =>
         {
             if (!m.IsSingleClicked || m.Position is not { } p) return;
@@ -62,8 +62,8 @@ internal sealed class MainWindow : Window
         _left = new FrameView { Y = 1, Width = FormWidth, Height = Dim.Fill(1) };
         foreach (BenchPage page in Pages) _left.Add(page);
         Results = new ResultsView(session.Results) { X = FormWidth, Y = 1, Width = Dim.Fill(), Height = Dim.Fill(1) };
-        _keyLine = new Label { Y = Pos.AnchorEnd(1), Width = Dim.Fill() };
-        _tooSmall = new Label { Width = Dim.Fill(), Height = Dim.Fill(), Visible = false };
+        _keyLine = new PlainLabel { Y = Pos.AnchorEnd(1), Width = Dim.Fill() };
+        _tooSmall = new PlainLabel { Width = Dim.Fill(), Height = Dim.Fill(), Visible = false };
         Add(_pageBar, _left, Results, _keyLine, _tooSmall);
         ViewportChanged += (_, _) => FitToScreen();
         Wire();
@@ -273,11 +273,8 @@ internal sealed class MainWindow : Window
             ? new Dictionary<string, string>(a.Errors) { [RefractometerPage.RotationStepField] = step } : a.Errors;
         foreach (BenchPage page in Pages) page.ShowErrors(errors);
         Refractometer.ShowSteps(_session.Form.Steps, a.Errors);
-        Gravity.Result.Text = GravityText.Describe(_session.Form.Snapshot(), a.SpecificGravity);
         // Inline and whole (no pop-up that would take the keys being typed): wrapped to the page's width.
-        Gravity.Caution.Text = _session.Results.ImmersionCaution is { } c
-            ? string.Join('\n', TextWrap.Lines(["!! " + c], Math.Max(20, Gravity.Viewport.Width)))
-            : "";
+        Gravity.Show(GravityText.Describe(_session.Form.Snapshot(), a.SpecificGravity), _session.Results.ImmersionCaution ?? "");
         Results.Refresh();
         ShowBars();
     }
@@ -339,23 +336,9 @@ internal sealed class MainWindow : Window
         });
     }
 
-    private (string Title, string Text) ExportNow(BenchSnapshot snapshot, string workbook)
-    {
-        try
-        {
-            BenchAssessment a = _session.Assess(snapshot);
-            if (a.Result is null)
-                return ("Nothing to export", "No identification yet: enter readings first" + (_session.HasCatalogue ? "." : " (the catalogue is still loading)."));
-            StoneSheet sheet = BenchModel.ToStoneSheet(snapshot, a.Readings);
-            IReadOnlyList<string> paths = StoneReportFiles.Write(workbook, sheet, a.Result);   // never over an earlier file: a numbered name instead
-            IReadOnlyList<string> warnings = StoneReportFiles.ReferenceWarnings(sheet, _session.WithWorkbook(w => w.List()));
-            return ("Reports written", string.Join('\n', [.. paths, .. warnings]));
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or BatchInputException or QuantityOutOfRangeException or WorkbookException)
-        {
-            return ("Export failed", $"The reports were not written to {StoneReportFiles.FolderFor(workbook)}:\n{e.Message}");
-        }
-    }
+    private (string Title, string Text) ExportNow(BenchSnapshot snapshot, string workbook) =>
+        StoneExport.Write(workbook, snapshot, _session.Assess(snapshot), _session.HasCatalogue, () => _session.WithWorkbook(w => w.List()),
+            DateOnly.FromDateTime(TimeProvider.System.GetLocalNow().Date));   // the report's date, read here at the edge
 
     private void ShowStones()
     {

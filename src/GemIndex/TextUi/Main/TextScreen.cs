@@ -5,13 +5,11 @@ using Terminal.Gui.Views;
 namespace GemIndex.Cli.TextUi.Main;
 
 /// <summary>A full-size read-only text screen (help, candidate detail); Esc or Enter closes it.</summary>
-internal sealed class TextScreen : Dialog
+internal sealed class TextScreen : FullScreenDialog
 {
     public TextScreen(string title, string text)
     {
         Title = title + " (Esc closes)";
-        Width = Dim.Fill();
-        Height = Dim.Fill();
         Body = new WrappedText { Width = Dim.Fill(), Height = Dim.Fill(), Lines = [text] };
         Add(Body);
     }

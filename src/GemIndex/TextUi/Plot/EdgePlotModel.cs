@@ -26,16 +26,21 @@ internal sealed class EdgePlotModel(IReadOnlyList<EdgeReadingEntry> steps)
 
     /// <summary>
     /// The index per row: the smallest of 0.0005, 0.001, 0.002, 0.005, 0.01, … that fits the window in
-    /// <paramref name="rows"/> rows, so that the labels (every other row) step evenly in round numbers.
+    /// <paramref name="rows"/> rows from <see cref="Bottom"/> to the highest edge with two rows to spare (the bottom is
+    /// moved down to a round label by up to two steps; the margin above the edges takes what is left), so that the
+    /// labels (every other row) step evenly in round numbers.
     /// </summary>
     public double IndexStep(int rows)
     {
-        double needed = (Top - Bottom) / Math.Max(2, rows);
+        double needed = (Top - Margin - Bottom) / Math.Max(1, rows - 2);
         for (double decade = 0.0001; ; decade *= 10)
             foreach (double m in new[] { 1, 2, 5 })
                 if (m * decade >= needed && m * decade >= 0.0005) return Math.Round(m * decade, 6);
     }
 
-    /// <summary>The bottom of the plot on a whole number of steps, so that every label is a multiple of the step.</summary>
-    public double AlignedBottom(double step) => Math.Floor(Math.Round(Bottom / step, 6)) * step;
+    /// <summary>
+    /// The bottom of the plot on a whole number of label spacings (two steps: the labels are on every other row), so
+    /// that every label is a round number; at most two steps below <see cref="Bottom"/>, which <see cref="IndexStep"/> leaves room for.
+    /// </summary>
+    public double AlignedBottom(double step) => Math.Floor(Math.Round(Bottom / (2 * step), 6)) * 2 * step;
 }

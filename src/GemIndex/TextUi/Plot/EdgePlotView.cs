@@ -1,3 +1,4 @@
+using GemIndex.Cli.TextUi.Main;
 using System.Drawing;
 using System.Globalization;
 using System.Text;
@@ -8,16 +9,14 @@ using Terminal.Gui.Views;
 namespace GemIndex.Cli.TextUi.Plot;
 
 /// <summary>The two shadow edges against rotation: 'l' marks the low edge, 'h' the high edge.</summary>
-internal sealed class EdgePlotView : Dialog
+internal sealed class EdgePlotView : FullScreenDialog
 {
     public EdgePlotView(EdgePlotModel model)
     {
         Title = "Shadow edges against rotation (Esc closes)";
-        Width = Dim.Fill();
-        Height = Dim.Fill();
         if (model.IsEmpty)
         {
-            Add(new Label { Text = "No rotation steps yet: enter them on the RI page (F3)." });
+            Add(new PlainLabel { Text = "No rotation steps yet: enter them on the RI page (F3)." });
             return;
         }
         Graph = new GraphView { Width = Dim.Fill(), Height = Dim.Fill(1), MarginLeft = 7, MarginBottom = 2 };
@@ -32,7 +31,7 @@ internal sealed class EdgePlotView : Dialog
         Graph.ScrollOffset = new PointF((float)model.LeftEdge, (float)model.Bottom);
         Line(model.Low, 'l');
         Line(model.High, 'h');
-        Add(Graph, new Label { Y = Pos.AnchorEnd(1), Text = "l = low edge   h = high edge   (index against rotation)" });
+        Add(Graph, new PlainLabel { Y = Pos.AnchorEnd(1), Text = "l = low edge   h = high edge   (index against rotation)" });
     }
 
     public GraphView? Graph { get; }
@@ -45,16 +44,24 @@ internal sealed class EdgePlotView : Dialog
         Graph!.Series.Add(new ScatterSeries { Points = p, Fill = new GraphCellToRender(new Rune(mark)) });
     }
 
+    /// <summary>
+    /// Fits the window to the view. Terminal.Gui finds a point's cell by truncating (y − offset) / cell size in floats,
+    /// so a reading on a multiple of the step can land one cell low; the view is therefore scrolled half a cell below
+    /// the aligned bottom (every reading falls in the middle of its cell), and the axes' minimums keep the ticks and
+    /// labels on the cells' middles too. The arithmetic stays in doubles until it reaches the view.
+    /// </summary>
     private void Scale(EdgePlotModel model)
     {
         int columns = Math.Max(10, Graph!.Viewport.Width - (int)Graph.MarginLeft - 2);
         int rows = Math.Max(4, Graph.Viewport.Height - (int)Graph.MarginBottom - 1);
-        float step = (float)model.IndexStep(rows);
-        Graph.CellSize = new PointF((float)(model.RightEdge - model.LeftEdge) / columns, step);
-        Graph.AxisY.Increment = step;
-        float bottom = (float)model.AlignedBottom(step);
-        Graph.AxisY.Minimum = bottom;
-        Graph.ScrollOffset = new PointF((float)model.LeftEdge, bottom);
+        double step = model.IndexStep(rows);
+        double bottom = model.AlignedBottom(step);
+        double degreesPerColumn = (model.RightEdge - model.LeftEdge) / columns;
+        Graph.CellSize = new PointF((float)degreesPerColumn, (float)step);
+        Graph.AxisY.Increment = (float)step;
+        Graph.AxisY.Minimum = (float)bottom;
+        Graph.AxisX.Minimum = (float)model.LeftEdge;
+        Graph.ScrollOffset = new PointF((float)(model.LeftEdge - degreesPerColumn / 2), (float)(bottom - step / 2));
     }
 
     public static void Show(IApplication app, EdgePlotModel model)

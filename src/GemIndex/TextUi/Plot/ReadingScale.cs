@@ -37,9 +37,15 @@ internal sealed class ReadingScale(string title, string format, double value, do
     public double Value => value;
     public IReadOnlyList<(string Name, PropertyRange? Range)> Candidates => candidates;
 
+    /// <summary>
+    /// How far a value may lie outside a range and still count as in it: rounding noise of the arithmetic only (a
+    /// birefringence 1.553 − 1.544 comes out as 0.009000000000000008), far below any reading's precision.
+    /// </summary>
+    public const double Noise = 1e-9;
+
     /// <summary>In, near or out (see the constants); "-" when the candidate has no range for this quantity.</summary>
     public string Verdict(PropertyRange? range) => range is not { } r ? "-"
-        : r.Contains(value) ? In
+        : value >= r.Minimum - Noise && value <= r.Maximum + Noise ? In
         : value + 2 * uncertainty >= r.Minimum && value - 2 * uncertainty <= r.Maximum ? Near
         : Out;
 
@@ -64,7 +70,8 @@ internal sealed class ReadingScale(string title, string format, double value, do
     {
         int track = Math.Max(NarrowestTrack, width - NameWidth - VerdictWidth);
         (double low, double high) = Window();
-        int Column(double x) => (int)Math.Round((x - low) / (high - low) * (track - 1), MidpointRounding.AwayFromZero);
+        // Rounded to 9 places first, so that rounding noise cannot put a value and an equal range end in neighbouring columns.
+        int Column(double x) => (int)Math.Round(Math.Round((x - low) / (high - low) * (track - 1), 9), MidpointRounding.AwayFromZero);
         string Number(double x) => x.ToString(format, CultureInfo.InvariantCulture);
 
         var lines = new List<string> { ResultText.Clip(title, NameWidth - 1).PadRight(NameWidth) + Axis(track, Number(low), Number((low + high) / 2), Number(high)) };

@@ -6,13 +6,11 @@ using Terminal.Gui.Views;
 namespace GemIndex.Cli.TextUi.Plot;
 
 /// <summary>The scales screen (Ctrl+R): each reading against the top candidates' ranges, laid out for the screen's size.</summary>
-internal sealed class ScaleView : Dialog
+internal sealed class ScaleView : FullScreenDialog
 {
     public ScaleView(ScaleModel model)
     {
         Title = "Readings against the candidates' ranges (Esc closes)";
-        Width = Dim.Fill();
-        Height = Dim.Fill();
         Body = new WrappedText { Width = Dim.Fill(), Height = Dim.Fill() };
         Body.ViewportChanged += (_, _) =>
         {

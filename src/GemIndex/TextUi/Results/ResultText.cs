@@ -1,5 +1,6 @@
 using System.Globalization;
 using GemIndex.Cli.TextUi.Bench;
+using GemIndex.Core.Bench;
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Gravity;
 using GemIndex.Core.Identification;
@@ -20,7 +21,11 @@ internal static class ResultText
 
     public static string Index(double n) => n.ToString("0.000", CultureInfo.InvariantCulture);
 
-    public static string Percent(double p) => GemIndex.Cli.Reports.ReportNumbers.WholePercent(p);
+    /// <summary>
+    /// A probability in whole percent; what would print as 0 % or 100 % prints as "&lt;1%" or "&gt;99%", since bench readings
+    /// never make a material impossible or certain (and a listed candidate at "0%" reads as ruled out).
+    /// </summary>
+    public static string Percent(double p) => p is > 0 and < 0.005 ? "<1%" : p is >= 0.995 and < 1 ? ">99%" : GemIndex.Cli.Reports.ReportNumbers.WholePercent(p);
 
     public static string Gravity(SpecificGravity? sg) => sg is { } g
         ? $"SG {g.Value.ToString("0.000", CultureInfo.InvariantCulture)} ± {g.StandardUncertainty.ToString("0.000", CultureInfo.InvariantCulture)}"
@@ -79,17 +84,48 @@ internal static class ResultText
     public static List<KeyValuePair<OriginClass, double>> Origins(SpeciesResult s) =>
         [.. s.Origins.Where(o => o.Value >= BenchWarnings.Relevant).OrderByDescending(o => o.Value)];
 
+    /// <summary>
+    /// "These tests cannot separate natural and synthetic quartz: …", with what may help. The engine's own warning comes
+    /// first, since it picks its test among the species' own entries: when that test is the next test, it is named here
+    /// (without the lighting, which the next test below gives); when it is another, the line points to the warnings;
+    /// when the engine finds none, a laboratory. Without that warning, the next test is named only when it is expected
+    /// to show something different for entries of different origins.
+    /// </summary>
     private static string Inseparable(IdentificationResult r, SpeciesResult lead, List<KeyValuePair<OriginClass, double>> origins)
     {
         string which = Listed([.. origins.Select(o => Origin(o.Key))]);
-        HashSet<string> ofSpecies = [.. r.Candidates.Where(c => c.Material.Species == lead.Species).Select(c => c.Material.Name)];
-        bool nextSeparates = r.NextTest is { } n
-            && r.Candidates.Where(c => n.Separates.Contains(c.Material.Name) && ofSpecies.Contains(c.Material.Name)).Select(c => c.Material.Origin).Distinct().Count() > 1;
-        string remedy = nextSeparates ? $"the {r.NextTest!.Description} may help" : "refer a valuable stone to a qualified laboratory";
-        return $"  These tests cannot tell {which} {lead.Species} apart: {remedy}.";
+        string? warning = r.Warnings.FirstOrDefault(w => w.StartsWith(Capital(lead.Species) + ": ", StringComparison.Ordinal)
+            && w.Contains(ResultsModel.CannotBeSeparated, StringComparison.Ordinal));
+        NextTestAdvice? named = warning is null ? NextTestSeparatesOrigins(r, lead.Species)
+            : r.NextTest is { } next && warning.Contains($"the {next.Description} would help", StringComparison.Ordinal) ? next : null;
+        string remedy = named is not null
+            ? $"the {BenchTestWords.DisplayOfWire(named.Test)} may tell some of them apart{(named.LookFor.Count > 0 ? $" (look for {Listed(named.LookFor)})" : "")}"
+            : warning is not null && warning.Contains(" would help", StringComparison.Ordinal) ? "the Warnings below name a test that may"
+            : "refer a valuable stone to a qualified laboratory";
+        return $"  These tests cannot separate {which} {lead.Species}: {remedy}.";
     }
 
-    /// <summary>What the engine used from the readings, in the reports' words (refused entries are not shown).</summary>
+    /// <summary>
+    /// The next test when it is expected to show something different for two entries of the species that differ in
+    /// origin (by the advice's own expectations: "sapphire: lines at 450 nm" against "flame-fusion synthetic sapphire:
+    /// no diagnostic lines"), else null: a test that tells colours or varieties apart but not origins is not offered as
+    /// the way to tell natural from synthetic.
+    /// </summary>
+    public static NextTestAdvice? NextTestSeparatesOrigins(IdentificationResult r, string species)
+    {
+        if (r.NextTest is not { } next) return null;
+        Dictionary<string, string> expected = [];
+        foreach (string e in next.Expectations)
+            if (e.IndexOf(": ", StringComparison.Ordinal) is > 0 and var colon) expected.TryAdd(e[..colon], e[(colon + 2)..]);
+        List<RankedCandidate> separated = [.. r.Candidates.Where(c => c.Material.Species == species && next.Separates.Contains(c.Material.Name))];
+        bool differs = separated.Any(a => separated.Any(b => a.Material.Origin != b.Material.Origin
+            && (!expected.TryGetValue(a.Material.Name, out string? ea) || !expected.TryGetValue(b.Material.Name, out string? eb) || ea != eb)));
+        return differs ? next : null;
+    }
+
+    private static readonly string[] GravityFields = [BenchFields.Sg, BenchFields.AirCt, BenchFields.WaterCt, BenchFields.WaterC];
+
+    /// <summary>What the engine used from the readings, in the reports' words (refused entries are not shown; a refused SG is said to be unused).</summary>
     public static IReadOnlyList<string> Derived(BenchAssessment a)
     {
         var lines = new List<string>();
@@ -98,6 +134,7 @@ internal static class ResultText
             lines.Add($"Spot reading: {Index(spot)}");
         if (a.Readings.Refractometer is { OverLimit: true } && !a.Errors.ContainsKey(BenchFields.OverLimit)) lines.Add("Over the limit: index above the contact liquid");
         if (a.SpecificGravity is { } sg) lines.Add("Specific gravity: " + Gravity(sg)[3..]);
+        else if (GravityFields.Any(a.Errors.ContainsKey)) lines.Add("Specific gravity: none used (the SG page, F4, says why)");
         return lines;
     }
 
@@ -109,14 +146,23 @@ internal static class ResultText
             yield break;
         }
         SeriesInterpretation best = s.Interpretations.MaxBy(i => i.Weight)!;
-        yield return "Optic character: " + (s.Character is { } c ? c.ToString().ToLowerInvariant()
+        yield return "Optic character: " + (s.Character is { } c ? Character(c)
             : "not fixed by the series" + (s.UndeterminedReason.Length > 0 ? ": " + s.UndeterminedReason : ""));
-        yield return "Refractive indices: " + (best.Beta is { } beta
+        bool single = best.Beta is null && best.Lowest.Value == best.Highest.Value;
+        yield return (single ? "Refractive index: " : "Refractive indices: ") + (best.Beta is { } beta
             ? $"α {Index(best.Lowest.Value)}, β {Index(beta.Value)}, γ {Index(best.Highest.Value)}{TwoV(best)}"
             : best.Lowest.Value == best.Highest.Value ? Index(best.Lowest.Value) : $"{Index(best.Lowest.Value)} to {Index(best.Highest.Value)}");
         if (best.Birefringence.Value > 0) yield return $"Birefringence: {Index(best.Birefringence.Value)}";
         if (Sign(s) is { } sign) yield return "Optic sign: " + sign;
     }
+
+    /// <summary>The optic character in the bench's words: one index is "singly refractive", as the polariscope says it.</summary>
+    public static string Character(OpticCharacter c) => c switch
+    {
+        OpticCharacter.Isotropic => "singly refractive (isotropic)",
+        OpticCharacter.Amorphous => "singly refractive (amorphous)",
+        _ => c.ToString().ToLowerInvariant(),
+    };
 
     /// <summary>The sign in words, or "not fixed" when the series' interpretations that count disagree on it.</summary>
     private static string? Sign(RotationSeriesResult s)
@@ -149,7 +195,7 @@ internal static class ResultText
     public static IReadOnlyList<string> NextTest(NextTestAdvice? advice) => advice is null ? [] :
     [
         $"Next test: {advice.Description}",
-        .. advice.Separates.Count > 0 ? [$"  it separates {Listed(advice.Separates)}"] : Array.Empty<string>(),
+        .. advice.Separates.Count > 1 ? [$"  it separates {Listed(advice.Separates)}"] : Array.Empty<string>(),
         .. advice.Expectations.Select(e => "  " + e),
     ];
 

@@ -13,6 +13,9 @@ internal sealed class ResultsModel
     /// <summary>Candidates always listed (when the catalogue has them); more are listed while they hold at least 1 %.</summary>
     public const int CandidatesListed = 6, MostCandidatesListed = 8;
 
+    /// <summary>The heading over the candidates: the list is grouped by species (the species' order of the lead), best entry first within each.</summary>
+    public const string CandidatesHeading = "Candidates by species (Enter: detail)";
+
     /// <summary>Below this width the confidence bar is left out so that the names keep their room.</summary>
     public const int WidthForBars = 50;
 
@@ -68,14 +71,18 @@ internal sealed class ResultsModel
         Text(ResultText.Lead(r));
         if (TopWarning(r) is { } top) Text(["! " + Short(top)]);
         rows.Add(new AnswerRow(""));
-        rows.Add(new AnswerRow("Candidates (F10, Enter: detail)"));
+        rows.Add(new AnswerRow(CandidatesHeading));
         bool bars = width >= WidthForBars;
         int nameWidth = width - 7 - (bars ? ResultText.BarWidth + 1 : 0);
         IReadOnlyList<RankedCandidate> shown = [.. Candidates.Take(Listed)];
-        IReadOnlyList<string> names = CandidateNames.Fit([.. shown.Select(c => c.Material.Name)], nameWidth);
-        int used = Math.Min(nameWidth, names.Max(n => n.Length));
+        // A name too long for its column goes on under itself, whole (every row of it opens the candidate's detail).
+        List<string>[] names = [.. shown.Select(c => TextWrap.Lines([c.Material.Name], nameWidth).ToList())];
+        int used = Math.Min(nameWidth, names.Max(n => n[0].Length));
         for (int i = 0; i < shown.Count; i++)
-            rows.Add(new AnswerRow(ResultText.Candidate(i + 1, names[i], used, shown[i].Confidence, bars), i));
+        {
+            rows.Add(new AnswerRow(ResultText.Candidate(i + 1, names[i][0], used, shown[i].Confidence, bars), i));
+            foreach (string more in names[i].Skip(1)) rows.Add(new AnswerRow("  " + more, i, Continues: true));
+        }
         Text([$"  not in the catalogue {ResultText.Percent(r.NotInCatalogue)}"]);
         IReadOnlyList<string> derived = ResultText.Derived(a);
         if (derived.Count > 0) { rows.Add(new AnswerRow("")); Text(["Readings used", .. derived.Select(d => "  " + d)]); }
@@ -84,13 +91,16 @@ internal sealed class ResultsModel
         return rows;
     }
 
+    /// <summary>The words of the engine's warning that a species' origins cannot be told apart (the lead says it in its own words).</summary>
+    public const string CannotBeSeparated = "cannot be separated by these tests";
+
     /// <summary>
     /// The warning shown under the lead: a do-not-immerse caution first (it protects the stone), else the engine's
     /// first warning, leaving out what the lead already says (nothing fits; origins inseparable).
     /// </summary>
     public static string? TopWarning(IdentificationResult r)
     {
-        IEnumerable<string> open = r.Warnings.Skip(r.NoGoodMatch ? 1 : 0).Where(w => !w.Contains("cannot be separated by these tests", StringComparison.Ordinal));
+        IEnumerable<string> open = r.Warnings.Skip(r.NoGoodMatch ? 1 : 0).Where(w => !w.Contains(CannotBeSeparated, StringComparison.Ordinal));
         return open.FirstOrDefault(w => w.Contains("do not immerse", StringComparison.Ordinal)) ?? open.FirstOrDefault();
     }
 

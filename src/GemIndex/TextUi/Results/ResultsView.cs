@@ -29,6 +29,7 @@ internal sealed class ResultsView : FrameView
             if (key == Key.Enter && CandidateAt(List.SelectedItem) is { } i) { DetailRequested?.Invoke(i); key.Handled = true; }
         };
         List.ViewportChanged += (_, _) => { if (List.Viewport.Width != _builtAt) Refresh(); };
+        List.ValueChanged += (_, _) => PassOverContinuations();
         Add(List);
     }
 
@@ -49,6 +50,25 @@ internal sealed class ResultsView : FrameView
     {
         for (int r = 0; r < _rows.Count; r++)
             if (_rows[r].Candidate == index) { List.SelectedItem = r; return; }
+    }
+
+    private int _lastRow;
+    private bool _moving;
+
+    /// <summary>A row that only continues a candidate's name is passed over in the direction the selection moved.</summary>
+    private void PassOverContinuations()
+    {
+        if (_moving || List.SelectedItem is not { } row) return;
+        int step = row >= _lastRow ? 1 : -1;
+        int to = row;
+        while (to > 0 && to < _rows.Count - 1 && _rows[to].Continues) to += step;
+        if (to < _rows.Count && _rows[to].Continues) to = row - step;   // nothing beyond: stay on the candidate's first row
+        while (to > 0 && _rows[to].Continues) to--;
+        _lastRow = to;
+        if (to == row) return;
+        _moving = true;
+        try { List.SelectedItem = to; }
+        finally { _moving = false; }
     }
 
     public void Refresh()

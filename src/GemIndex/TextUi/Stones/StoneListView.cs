@@ -1,3 +1,4 @@
+using GemIndex.Cli.TextUi.Main;
 using System.Collections.ObjectModel;
 using Terminal.Gui.App;
 using Terminal.Gui.Input;
@@ -7,7 +8,7 @@ using Terminal.Gui.Views;
 namespace GemIndex.Cli.TextUi.Stones;
 
 /// <summary>The workbook's stones: search, Enter opens, Ctrl+N new, Ctrl+D duplicate, Delete deletes (after asking).</summary>
-internal sealed class StoneListView : Dialog
+internal sealed class StoneListView : FullScreenDialog
 {
     private readonly StoneListModel _model;
     private readonly ObservableCollection<string> _rows = [];
@@ -16,11 +17,10 @@ internal sealed class StoneListView : Dialog
     {
         _model = model;
         Title = "Stones: Enter open ^N new ^D duplicate F3 history Del delete";
-        Width = Dim.Fill();
-        Height = Dim.Fill();
-        var label = new Label { Text = "Search:" };
+        var label = new PlainLabel { Text = "Search:" };
         Search = new TextField { X = 8, Width = 24 };
-        List = new ListView { Y = 1, Width = Dim.Fill(), Height = Dim.Fill() };
+        var heading = new PlainLabel { Y = 1, Width = Dim.Fill(), Text = StoneListModel.Heading };
+        List = new ListView { Y = 2, Width = Dim.Fill(), Height = Dim.Fill() };
         List.SetSource(_rows);
         Search.TextChanged += (_, _) => { _model.Search(Search.Text); Fill(); };
         EventHandler<Key> keys = (sender, key) =>
@@ -38,7 +38,7 @@ internal sealed class StoneListView : Dialog
         };
         List.KeyDown += keys;      // on the focused views: Enter would otherwise close the dialog first
         Search.KeyDown += keys;
-        Add(label, Search, List);
+        Add(label, Search, heading, List);
         Fill();
     }
 

@@ -15,6 +15,27 @@ public class CatalogueBrowserModelTests
     }
 
     [Fact]
+    public void A_word_lists_the_species_of_that_name_before_entries_that_only_mention_it()
+    {
+        // A composite with glass in its variety comes first in the catalogue; the glass species' own entries lead the list.
+        var doublet = TestMaterials.All[0] with { Name = "garnet-topped doublet", Species = "garnet-topped doublet", Variety = "garnet and glass doublet" };
+        var leadGlass = TestMaterials.All[1] with { Name = "lead flint glass", Species = "glass", Variety = "lead glass" };
+        var paste = TestMaterials.All[1] with { Name = "paste", Species = "glass", Variety = "paste" };
+        var filled = TestMaterials.All[0] with { Name = "glass-filled ruby", Species = "corundum", Variety = "ruby" };
+        var model = new CatalogueBrowserModel([doublet, filled, leadGlass, paste]);
+        model.Search("glass");
+        Assert.Equal(["lead flint glass", "paste", "glass-filled ruby", "garnet-topped doublet"], model.Shown.Select(m => m.Name));
+    }
+
+    [Fact]
+    public void An_SG_range_whose_ends_print_alike_prints_once()
+    {
+        var silica = TestMaterials.All[0] with { SpecificGravity = new(2.199, 2.201) };
+        var model = new CatalogueBrowserModel([silica]);
+        Assert.EndsWith("SG 2.20", model.Line(silica, 20));
+    }
+
+    [Fact]
     public void A_number_below_2_5_searches_by_index_and_above_by_SG()
     {
         var model = new CatalogueBrowserModel(TestMaterials.All);
@@ -59,7 +80,7 @@ public class CatalogueBrowserModelTests
     {
         var model = new CatalogueBrowserModel([TestMaterials.All[0] with { Name = "flame-fusion colourless synthetic sapphire" }]);
         int width = model.NameWidth(76);
-        Assert.Contains("flame-fusion colourless synthetic sapphire 1.544-1.554  SG 2.65-2.66", model.Line(model.Shown[0], width));
+        Assert.Contains("flame-fusion colourless synthetic sapphire 1.544–1.554  SG 2.65–2.66", model.Line(model.Shown[0], width));
     }
 
     [Fact]

@@ -12,6 +12,17 @@ public class HelpTextTests
     }
 
     [Fact]
+    public void Help_says_how_to_read_the_answer_the_SG_clash_and_where_the_examiner_is_set()
+    {
+        string help = HelpText.Render();
+        Assert.Contains("READING THE ANSWER", help);
+        Assert.Contains("<1% and >99%", help);
+        Assert.Contains("neither is used until one is cleared", help);
+        Assert.Contains("Examiner: typed once at the foot of F2 Stone", help);
+        Assert.Contains("Ctrl+Z", help);
+    }
+
+    [Fact]
     public void Help_gives_the_cautions_on_liquids_lamps_immersion_and_certificates()
     {
         string cautions = string.Join(" ", HelpText.Cautions);

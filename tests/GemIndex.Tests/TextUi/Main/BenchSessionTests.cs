@@ -71,4 +71,37 @@ public class BenchSessionTests
             foreach (string f in new[] { path, path + "-wal", path + "-shm" }) File.Delete(f);
         }
     }
+
+    [Fact]
+    public async Task The_examiner_is_typed_once_kept_across_stones_and_kept_in_the_workbook()
+    {
+        string path = TempFile();
+        try
+        {
+            using (var wb = StoneWorkbook.Open(path, TimeProvider.System, WorkbookOpening.CreateIfMissing))
+            {
+                var session = new BenchSession(wb, new BenchAssessor(null), a => a());
+                session.Start();
+                session.Form.SetText(BenchFields.Examiner, "A. Example");
+                await session.Changed();
+                session.New();                                       // another stone: the bench's examiner stays
+                Assert.Equal("A. Example", session.Form.Text(BenchFields.Examiner));
+                Assert.True(session.Flush());
+                Assert.Equal("A. Example", wb.Setting(BenchSession.ExaminerSetting));
+            }
+            using (var wb = StoneWorkbook.Open(path, TimeProvider.System, WorkbookOpening.CreateIfMissing))
+            {
+                var session = new BenchSession(wb, new BenchAssessor(null), a => a());
+                session.Start();                                     // the program started again: the examiner is back
+                Assert.Equal("A. Example", session.Form.Text(BenchFields.Examiner));
+                session.Open(wb.List().Last().Id);                   // and stays whichever stone is opened
+                Assert.Equal("A. Example", session.Form.Text(BenchFields.Examiner));
+                Assert.True(session.Flush());
+            }
+        }
+        finally
+        {
+            foreach (string f in new[] { path, path + "-wal", path + "-shm" }) File.Delete(f);
+        }
+    }
 }

@@ -10,7 +10,8 @@ using Terminal.Gui.Testing;
 
 namespace GemIndex.Tests.TextUi.Main;
 
-/// <summary>The bench drawn headless. One class, so the Terminal.Gui instances never run in parallel.</summary>
+/// <summary>The bench drawn headless; in the Terminal.Gui collection, so no two Terminal.Gui instances run in parallel.</summary>
+[Collection(Headless.Collection)]
 public sealed class MainWindowTests : IDisposable
 {
     private readonly string _path = Path.Combine(Path.GetTempPath(), "gemindex-tests-" + Guid.NewGuid().ToString("N") + ".db");
@@ -92,7 +93,9 @@ public sealed class MainWindowTests : IDisposable
         Settle();
         app.LayoutAndDraw();
         string screen = app.Driver!.ToString()!;
-        Assert.Contains("! '2x' is not a number", screen);
+        // Too long for the room beside the box: the box says so, the foot of the page gives it whole, after the field's caption.
+        Assert.Contains(FormField.SeeBelow, screen);
+        Assert.Contains("! Water: '2x' is not a number", screen);
         Assert.Contains("SG 2.650 ± 0.010", screen);
         Assert.Equal("2x", _session.Form.Text(BenchFields.WaterC));
         app.End(token);
@@ -137,7 +140,7 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Theory]
-    [InlineData(80, 24, 3)]
+    [InlineData(80, 24, 4)]
     [InlineData(100, 30, 5)]
     [InlineData(80, 20, 2)]
     public void The_scales_screen_shows_each_reading_against_the_top_candidates(int columns, int rows, int candidates)
@@ -342,22 +345,105 @@ public sealed class MainWindowTests : IDisposable
         app.Dispose();
     }
 
-    [Fact]
-    public void A_typed_SG_and_weights_that_give_another_are_flagged_with_both_values()
+    /// <summary>The form's side of the screen (inside its frame) as one line, runs of spaces made one: what the user reads on the page.</summary>
+    private static string FormText(string screen) => System.Text.RegularExpressions.Regex.Replace(
+        string.Join(" ", screen.Split('\n').Where(l => l.Length > MainWindow.FormWidth).Select(l => l[1..(MainWindow.FormWidth - 1)])), @"\s+", " ");
+
+    [Theory]
+    [InlineData("2.65", "3.00", "2.00", @"!! SG typed 2\.650, weighed 2\.99\d: they disagree\. Neither is used; clear the SG or the weights\.")]
+    [InlineData("2.99", "3.00", "2.00", @"!! SG typed 2\.990, weighed 2\.99\d: they agree\. Neither is used; clear the SG or the weights\.")]
+    [InlineData("2.65", "3.00", "", @"!! SG typed 2\.650 and a weighing begun\. Neither is used; clear the SG or the weights\.")]
+    [InlineData("2,6x", "3.00", "2.00", @"!! SG typed '2,6x', weighed 2\.99\d\. Neither is used; clear the SG or the weights\.")]
+    public void A_typed_SG_and_weights_are_a_clash_said_whole_on_the_SG_page_with_which_is_used(string sg, string air, string water, string said)
     {
+        // 3.00 ct in air, 2.00 ct in water: 3.00 / (3.00 − 2.00) × ρ(20 °C) = 2.995 (hydrostatic weighing, common practice).
         var (app, window, token) = Open();
+        _session.Form.SetText(BenchFields.Spot, "1.54");   // a reading to rank on, so that the answer lists what it used
         app.InjectKey(Key.F4);
-        Type(app, "2.65");
+        Type(app, sg);
         app.InjectKey(Key.Tab);
-        Type(app, "3.00");
+        Type(app, air);
         app.InjectKey(Key.Tab);
-        Type(app, "2.00");        // 3.00 / (3.00 − 2.00) = SG 3.0 (hydrostatic weighing, common practice)
+        Type(app, water);
         Settle();
         app.LayoutAndDraw();
-        string said = window.Gravity.Result.Text;
-        Assert.StartsWith("!! Typed SG 2.650 ± 0.010, the weights give 2.99", said);
-        Assert.Contains("they disagree", said);
-        Assert.Contains("neither is used until one is cleared", said);
+        string page = FormText(app.Driver!.ToString()!);
+        Assert.Matches(said, page);                               // whole, on the page, at 80x24: no row of it cut off
+        Assert.Same(window, app.TopRunnableView);                 // no pop-up: the keys typed went into the fields
+        Assert.Equal(water, _session.Form.Text(BenchFields.WaterCt));
+        Assert.Null(_session.Results.Latest!.SpecificGravity);
+        Assert.Contains("! SG: is given directly", page);        // the reason at the foot, after the field's caption,
+        Assert.Contains("(In air, In water)", page);             // naming the fields by their captions
+        Assert.DoesNotContain("sg.", page);
+        string answer = System.Text.RegularExpressions.Regex.Replace(string.Join(" ", window.Results.Rows.Select(r => r.Text)), @"\s+", " ");
+        Assert.Contains("Specific gravity: none used (the SG page, F4, says why)", answer);
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Fact]
+    public void Refused_entries_are_marked_at_their_rows_and_their_reasons_given_whole_or_not_at_all()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        foreach ((string low, string high) in new[] { ("1.544", "1.553"), ("1.95", "2.0") })
+        {
+            Type(app, low);
+            app.InjectKey(Key.Tab);
+            Type(app, high);
+            app.InjectKey(Key.Enter);
+        }
+        for (int i = 0; i < 3; i++) app.InjectKey(Key.Tab);      // the spot reading
+        Type(app, "1.5x");
+        Settle();
+        app.LayoutAndDraw();
+        string screen = app.Driver!.ToString()!;
+        Assert.Matches(@"15°  1\.95      2\.0     ! see below│", screen);   // the step row says where its reason is
+        string page = FormText(screen);
+        IReadOnlyDictionary<string, string> errors = _session.Results.Latest!.Errors;
+        Assert.True(errors.Count >= 2);
+        foreach (string reason in errors.Values)
+        {
+            string words = System.Text.RegularExpressions.Regex.Replace(reason, @"\s+", " ");
+            Assert.True(page.Contains(words, StringComparison.Ordinal) || !page.Contains(words[..Math.Min(12, words.Length)], StringComparison.Ordinal), $"cut short: {words}\n{page}");
+        }
+        Assert.Contains(BenchPage.MoreProblems, page);             // two long reasons: the second does not fit whole, and the page says so
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Fact]
+    public void A_reference_with_underscores_shows_them_on_the_page_bar()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F2);
+        Type(app, "lot_7 a_b");
+        Settle();
+        app.LayoutAndDraw();
+        Assert.Contains("lot_7 a_b", app.Driver!.ToString()!.Split('\n')[0]);   // Terminal.Gui's label would take the first '_' as a hot key
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Fact]
+    public void The_examiner_is_reached_from_the_keyboard_at_the_foot_of_the_stone_page_and_kept_for_the_next_stone()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F2);
+        for (int i = 0; i < 8; i++) app.InjectKey(Key.Tab);
+        Type(app, "A. Example");
+        Settle();
+        app.InjectKey(Key.N.WithCtrl);                        // a new stone: the bench's examiner stays
+        Settle();
+        app.LayoutAndDraw();
+        string screen = app.Driver!.ToString()!;
+        Assert.Contains("Examiner      A. Example", screen);
+        Assert.Contains(StonePage.ExaminerNote.Trim(), screen);
+        Assert.True(_session.Flush());
+        Assert.Equal("A. Example", _workbook.Setting(BenchSession.ExaminerSetting));
         window.Dispose();
         app.End(token);
         app.Dispose();

@@ -49,6 +49,18 @@ public class ReadingScaleTests
         Assert.True(columns[0] > ReadingScale.NameWidth);
     }
 
+    [Theory]
+    [InlineData(76)]
+    [InlineData(96)]
+    [InlineData(40)]
+    public void A_birefringence_worked_out_from_two_edges_is_in_the_range_it_equals(int width)
+    {
+        // Quartz, ω 1.544 and ε 1.553 (common practice): 1.553 − 1.544 is 0.009000000000000008 in binary arithmetic.
+        var scale = new ReadingScale("birefringence", "0.000", 1.553 - 1.544, 0.001, ScaleModel.WidestBirefringence, [("quartz", new PropertyRange(0.009, 0.009))]);
+        Assert.Equal(ReadingScale.In, scale.Verdict(new PropertyRange(0.009, 0.009)));
+        Assert.Equal(ReadingScale.MarkerOnBar, Track(scale.Render(width)[2], width).Trim('.').Single());
+    }
+
     [Fact]
     public void A_range_one_cell_wide_stays_visible_under_the_marker()
     {

@@ -76,7 +76,7 @@ public class ResultTextTests
         IReadOnlyList<string> lead = ResultText.Lead(CorundumAnswer(null));
         Assert.Equal("Corundum 93%", lead[0]);
         Assert.Equal("  synthetic 40%, natural 35%, treated 18%", lead[1]);
-        Assert.Equal("  These tests cannot tell synthetic, natural and treated corundum apart: refer a valuable stone to a qualified laboratory.", lead[2]);
+        Assert.Equal("  These tests cannot separate synthetic, natural and treated corundum: refer a valuable stone to a qualified laboratory.", lead[2]);
         Assert.Equal("or spinel 7%", lead[3]);
     }
 
@@ -103,9 +103,121 @@ public class ResultTextTests
     [Fact]
     public void When_the_next_test_separates_the_origins_the_lead_names_it()
     {
-        var next = new NextTestAdvice { Test = "absorption_nm", GainBits = 1.3, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = [] };
+        var next = new NextTestAdvice
+        {
+            Test = "absorption_nm", GainBits = 1.3, Separates = ["flame-fusion synthetic ruby", "ruby"],
+            Expectations = ["flame-fusion synthetic ruby: no diagnostic lines", "ruby: lines at 694, 668, 659 nm"],
+        };
         string said = ResultText.Lead(CorundumAnswer(next))[2];
-        Assert.EndsWith($"apart: the {next.Description} may help.", said);
+        Assert.EndsWith("corundum: the hand spectroscope (absorption lines) may tell some of them apart.", said);
+    }
+
+    [Fact]
+    public void A_next_test_that_shows_the_same_for_every_origin_is_not_offered_to_tell_them_apart()
+    {
+        // The dichroscope tells colours apart, not a synthetic from a natural stone of one colour: both show the same.
+        var next = new NextTestAdvice
+        {
+            Test = "pleochroism", GainBits = 0.2, Separates = ["flame-fusion synthetic ruby", "ruby"],
+            Expectations = ["flame-fusion synthetic ruby: dichroic", "ruby: dichroic"],
+        };
+        string said = ResultText.Lead(CorundumAnswer(next))[2];
+        Assert.EndsWith("corundum: refer a valuable stone to a qualified laboratory.", said);
+    }
+
+    [Fact]
+    public void When_only_the_warnings_name_a_test_for_the_origins_the_lead_points_there()
+    {
+        var next = new NextTestAdvice
+        {
+            Test = "pleochroism", GainBits = 0.2, Separates = ["flame-fusion synthetic ruby", "ruby"],
+            Expectations = ["flame-fusion synthetic ruby: dichroic", "ruby: dichroic"],
+        };
+        IdentificationResult r = CorundumAnswer(next, ["Corundum: synthetic, natural, treated cannot be separated by these tests; the loupe or microscope (magnification): look for curved striae (diffused light) would help; for a valuable stone refer it to a qualified laboratory."]);
+        Assert.EndsWith("corundum: the Warnings below name a test that may.", ResultText.Lead(r)[2]);
+    }
+
+    [Fact]
+    public void When_the_engine_names_the_next_test_for_the_origins_the_lead_names_it_too()
+    {
+        var next = new NextTestAdvice { Test = "absorption_nm", GainBits = 1.3, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = [] };
+        IdentificationResult r = CorundumAnswer(next, [$"Corundum: synthetic, natural, treated cannot be separated by these tests; the {next.Description} would help; for a valuable stone refer it to a qualified laboratory."]);
+        Assert.EndsWith("corundum: the hand spectroscope (absorption lines) may tell some of them apart.", ResultText.Lead(r)[2]);
+    }
+
+    [Fact]
+    public void When_the_engine_finds_no_test_for_the_origins_the_lead_does_not_offer_the_next_test()
+    {
+        // The next test's expectations differ by entry (SG ranges), but the engine finds nothing that parts the origins.
+        var next = new NextTestAdvice { Test = "sg", GainBits = 0.4, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = ["flame-fusion synthetic ruby: SG 3.99–4.01", "ruby: SG 3.97–4.05"] };
+        IdentificationResult r = CorundumAnswer(next, ["Corundum: synthetic, natural, treated cannot be separated by these tests; no bench test left here separates them; for a valuable stone refer it to a qualified laboratory."]);
+        Assert.EndsWith("corundum: refer a valuable stone to a qualified laboratory.", ResultText.Lead(r)[2]);
+    }
+
+    [Fact]
+    public void Magnification_offered_in_the_lead_names_what_to_look_for_without_the_lighting()
+    {
+        var next = new NextTestAdvice
+        {
+            Test = "magnification", GainBits = 1.1, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = [],
+            LookFor = ["curved striae", "needles and silk"], Lighting = ["diffused light", "darkfield"],
+        };
+        string said = ResultText.Lead(CorundumAnswer(next))[2];
+        Assert.EndsWith("may tell some of them apart (look for curved striae and needles and silk).", said);
+        Assert.DoesNotContain("darkfield", said);   // the lighting is under Next test, below
+    }
+
+    [Theory]
+    [InlineData(0.0041, "<1%")]
+    [InlineData(0.005, "1%")]
+    [InlineData(0.994, "99%")]
+    [InlineData(0.9951, ">99%")]
+    [InlineData(1.0, "100%")]
+    [InlineData(0.0, "0%")]
+    public void A_probability_never_reads_as_impossible_or_certain_unless_it_is(double p, string shown) =>
+        Assert.Equal(shown, ResultText.Percent(p));
+
+    [Fact]
+    public void A_next_test_that_names_one_entry_does_not_say_it_separates_it()
+    {
+        var next = new NextTestAdvice { Test = "absorption_nm", GainBits = 0.3, Separates = ["opal doublet"], Expectations = ["opal doublet: no diagnostic lines"] };
+        Assert.Equal(["Next test: hand spectroscope (absorption lines)", "  opal doublet: no diagnostic lines"], ResultText.NextTest(next));
+    }
+
+    [Fact]
+    public void A_candidate_name_too_long_for_its_column_goes_on_under_itself_whole()
+    {
+        IdentificationResult r = CorundumAnswer(null) with
+        {
+            Candidates = [new() { Material = Corundum("flame-fusion synthetic colour-change sapphire", OriginClass.Synthetic), Confidence = 0.6, Fit = 0.9 },
+                .. CorundumAnswer(null).Candidates],
+        };
+        var model = new ResultsModel();
+        model.Accept(new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 4.0 }, Result = r });
+        int width = 80 - MainWindow.FormWidth - 2;
+        AnswerRow[] first = [.. model.Rows(width).Where(x => x.Candidate == 0)];
+        Assert.Equal(2, first.Length);                              // both rows open candidate 1's detail
+        Assert.Equal("flame-fusion synthetic colour-change sapphire", string.Join(" ", first.Select(x => x.Text.Replace("60%", "").Trim()[(x == first[0] ? 2 : 0)..].Trim())));
+        Assert.EndsWith("60%", first[0].Text.TrimEnd());
+        Assert.DoesNotContain(model.Rows(width), x => x.Text.Contains('…'));
+        Assert.Contains(ResultsModel.CandidatesHeading, model.Rows(width).Select(x => x.Text));
+    }
+
+    [Fact]
+    public void A_percentage_stays_with_its_word_and_an_uncertainty_with_its_value_when_a_line_wraps()
+    {
+        Assert.Equal(["  natural 49%, synthetic 33%,", "    treated 14%"], TextWrap.Lines(["  natural 49%, synthetic 33%, treated 14%"], 36));
+        Assert.Equal(["Specific gravity:", "  2.650 ± 0.010"], TextWrap.Lines(["Specific gravity: 2.650 ± 0.010"], 26));
+    }
+
+    [Fact]
+    public void A_single_edge_is_one_refractive_index()
+    {
+        var form = new BenchModel();
+        foreach (string rotation in new[] { "0", "45", "90", "135" }) form.PutStep(form.Steps.Count, new StepText(rotation, "1.620", ""));
+        BenchAssessment a = new BenchAssessor(new Identifier(TestMaterials.All)).Assess(form.Snapshot());
+        Assert.Contains("Refractive index: 1.620", ResultText.Derived(a));
+        Assert.Contains("Optic character: singly refractive (isotropic)", ResultText.Derived(a));
     }
 
     [Fact]
