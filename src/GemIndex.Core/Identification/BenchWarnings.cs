@@ -53,11 +53,13 @@ public static class BenchWarnings
             string test = i == 0 && separation is { } next
                 ? $"the {next.Description} would help"
                 : i == 0 ? "no bench test left here separates them" : "";
-            warnings.Add($"{Capital(leading[i].Species)}: {string.Join(", ", origins)} cannot be separated by these tests{(test.Length > 0 ? "; " + test : "")}; for a valuable stone refer it to a qualified laboratory.");
+            warnings.Add($"{Capital(leading[i].Species)}: {Listed(origins)} cannot be separated by these tests{(test.Length > 0 ? "; " + test : "")}; for a valuable stone refer it to a qualified laboratory.");
         }
         if (leading.Count > 0 && LaboratoryCaution(leading[0], sheet) is { } caution) warnings.Add(caution);
         if (relevant.Any(c => c.Material.Origin == OriginClass.Composite))
-            warnings.Add("Possible composite: the refractometer reads only the facet it touches, and the SG of a composite means little; look at the girdle and for a join under magnification.");
+            warnings.Add(sheet.Sheet.Magnification?.Present.Contains(Magnification.MagnificationFeature.JoinPlane) == true
+                ? "Assembled stone: a join plane was seen; the refractometer reads only the part it touches, and the SG of a composite means little."
+                : "Possible composite: the refractometer reads only the facet it touches, and the SG of a composite means little; look at the girdle and for a join under magnification.");
         if (relevant.Any(c => c.Material.Origin == OriginClass.Treated))
             warnings.Add("A treated material is among the candidates: treatments are mostly not detectable with these tests.");
         return warnings;
@@ -82,6 +84,10 @@ public static class BenchWarnings
             : "heating, many fillers and some laboratory growth leave no sign these tests find";
         return $"{Capital(leading.Species)} is also met {string.Join(" and ", hidden)}: {looked}{unseen}; for a valuable stone refer it to a qualified laboratory.";
     }
+
+    /// <summary>Words joined as a list is read: "natural and synthetic", "natural, treated and synthetic".</summary>
+    private static string Listed(IReadOnlyList<string> words) =>
+        words.Count < 2 ? string.Join("", words) : string.Join(", ", words.Take(words.Count - 1)) + " and " + words[^1];
 
     private static string P(double p) => p.ToString("0.00", CultureInfo.InvariantCulture);
 

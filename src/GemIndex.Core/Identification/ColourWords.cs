@@ -32,10 +32,13 @@ public static class ColourWords
         ["black"] = ["grey", "brown"],
     };
 
-    // Words that say how much colour, not which: no evidence either way.
+    // Words that say how much colour, not which, and optical effects seen over the body colour (play of colour, sheen,
+    // a star): no evidence either way.
     private static readonly HashSet<string> Modifiers = new(StringComparer.OrdinalIgnoreCase)
     {
         "light", "dark", "pale", "deep", "medium", "vivid", "bright", "intense", "very", "slightly", "faint", "strong", "rich",
+        "play", "of", "colour", "color", "with", "and", "multicolour", "multicolor", "iridescent", "opalescent", "sheen",
+        "schiller", "chatoyant", "star", "flash", "flashes", "fire",
     };
 
     /// <summary>The hues the tool knows (the bench's rough colour wheel).</summary>

@@ -138,7 +138,7 @@ public static class EvidenceLikelihood
         if (acc.Explaining)
         {
             string expected = m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial
-                ? $"{m.Pleochroism.ToString().ToLowerInvariant()} pleochroism ({(m.OpticCharacter == OpticCharacter.Biaxial ? "up to three colours" : "two colours at most")}) expected"
+                ? (m.Pleochroism == PleochroismStrength.None ? "no pleochroism" : $"{m.Pleochroism.ToString().ToLowerInvariant()} pleochroism") + $" ({(m.OpticCharacter == OpticCharacter.Biaxial ? "up to three colours" : "two colours at most")}) expected"
                 : "none expected (singly refractive)";
             acc.Say($"pleochroism {seen.ToString().ToLowerInvariant()}; {expected}");
         }

@@ -63,8 +63,8 @@ public static class MagnificationEvidence
     public static string Reason(MagnificationObservation observation, MagnificationProfile profile)
     {
         static string Percent(double p) => (100 * p).ToString("0", System.Globalization.CultureInfo.InvariantCulture) + " %";
-        var parts = observation.Present.Order().Select(f => $"{MagnificationVocabulary.Of(f).Name} seen (held by {Percent(profile.ProbabilityOf(f))})")
-            .Concat(observation.Absent.Order().Select(f => $"{MagnificationVocabulary.Of(f).Name} not seen (held by {Percent(profile.ProbabilityOf(f))})"));
+        var parts = observation.Present.Order().Select(f => $"{MagnificationVocabulary.Of(f).Name} seen (held by {Percent(profile.ProbabilityOf(f))} of such stones)")
+            .Concat(observation.Absent.Order().Select(f => $"{MagnificationVocabulary.Of(f).Name} not seen (held by {Percent(profile.ProbabilityOf(f))} of such stones)"));
         return "magnification: " + string.Join(", ", parts);
     }
 }

@@ -74,7 +74,7 @@ public static class MagnificationVocabulary
             "abraded facet edges or patches where a thin surface layer is missing; an iridescent or uneven surface", "reflected light",
             "coated stone", CommonPractice, Plain),
         new(MagnificationFeature.JoinPlane, FeatureGroup.Composite, "join_plane", "join plane",
-            "a flat plane where two pieces meet, often at or near the girdle", "reflected light along the girdle; immersion shows the parts' colours",
+            "a flat plane where two pieces meet, often at or near the girdle", "reflected light along the girdle; immersion if not porous",
             "assembled stone: doublet or triplet", Wade1918, Obvious),
         new(MagnificationFeature.LustreChangeAtGirdle, FeatureGroup.Composite, "two_lustres", "different lustre above and below",
             "the crown reflects with another lustre than the pavilion", "reflected light, tilting the stone",

@@ -186,7 +186,7 @@ public class IdentifierTests
         string synthetic = Assert.Single(next.Expectations, e => e.StartsWith("synthetic sapphire:", StringComparison.Ordinal));
         Assert.NotEqual(natural[natural.IndexOf(':')..], synthetic[synthetic.IndexOf(':')..]);
         Assert.StartsWith("loupe or microscope (magnification): look for ", next.Description, StringComparison.Ordinal);
-        Assert.Contains(result.Warnings, w => w.StartsWith("Corundum: natural, synthetic cannot be separated", StringComparison.Ordinal) && w.Contains("look for", StringComparison.Ordinal));
+        Assert.Contains(result.Warnings, w => w.StartsWith("Corundum: natural and synthetic cannot be separated", StringComparison.Ordinal) && w.Contains("look for", StringComparison.Ordinal));
     }
 
     [Fact]

@@ -42,7 +42,7 @@ public class MagnificationRankingTests
         Assert.True(with > 0.9 && with > without, $"synthetic share {without:0.000} without, {with:0.000} with");
         Assert.Equal("flame-fusion synthetic ruby", result.Candidates[0].Material.Name);
         var reason = Assert.Single(result.Candidates[0].Reasons, c => c.Test == "magnification");
-        Assert.Contains("curved striae seen (held by 90 %)", reason.Text);
+        Assert.Contains("curved striae seen (held by 90 % of such stones)", reason.Text);
     }
 
     [Fact]
