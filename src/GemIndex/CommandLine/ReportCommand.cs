@@ -113,12 +113,18 @@ internal static class ReportCommand
         return new ReportHeader(day, examiner, ReportHeader.Program(), ShippedCatalogue.ContentHash[..Math.Min(12, ShippedCatalogue.ContentHash.Length)]);
     }
 
+    /// <summary>The workbook setting the text UI keeps the examiner in (the same key as its field, TextUi/Bench/BenchFields).</summary>
+    private const string WorkbookExaminer = GemIndex.Cli.TextUi.Bench.BenchFields.Examiner;
+
     private static int WorkbookStone(FileInfo book, string reference, string format, FileInfo? output, ReportHeader header, Func<IReadOnlyList<Material>> materials,
         TextWriter o, TextWriter e)
     {
         try
         {
             using var workbook = StoneWorkbook.Open(book.FullName, TimeProvider.System, WorkbookOpening.ReadOnly);
+            // Without --examiner, the examiner set once in the text UI for this workbook heads its reports too.
+            if (header.Examiner is null && workbook.Setting(WorkbookExaminer) is { } kept && kept.Trim().Length > 0 && ReportHeader.ExaminerProblem(kept) is null)
+                header = header with { Examiner = kept.Trim() };
             var summary = workbook.List().FirstOrDefault(s => string.Equals(s.Reference, reference, StringComparison.OrdinalIgnoreCase));
             if (summary is null || workbook.Get(summary.Id) is not { } sheet)
             {

@@ -142,6 +142,22 @@ public sealed class ReportCommandTests : IDisposable
     }
 
     [Fact]
+    public void A_workbook_stone_without_the_option_takes_the_examiner_kept_in_the_workbook()
+    {
+        string path = Path.Combine(_dir, "bench.db");
+        using (var wb = GemIndex.Data.Workbook.StoneWorkbook.Open(path, TimeProvider.System, GemIndex.Data.Workbook.WorkbookOpening.CreateIfMissing))
+        {
+            wb.Create(ReportFixtures.Sheet(ReportFixtures.QuartzLine, "lot 7 / 2"));
+            wb.SetSetting(GemIndex.Cli.TextUi.Bench.BenchFields.Examiner, "B. Example");
+        }
+        var (exit, stdout, err) = Run("report", "stone", "--workbook", path, "--stone", "lot 7 / 2");
+        Assert.True(exit == 0, err);
+        Assert.Contains("**Examiner:** B. Example", stdout);
+        var (_, given, _) = Run("report", "stone", "--workbook", path, "--stone", "lot 7 / 2", "--examiner", "A. Example");
+        Assert.Contains("**Examiner:** A. Example", given);   // the option wins over the workbook's setting
+    }
+
+    [Fact]
     public void The_header_carries_the_date_given_the_examiner_and_the_program_and_catalogue_versions()
     {
         var (exit, stdout, err) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine), "--date", "2026-03-14", "--examiner", "A. Example");
