@@ -1,6 +1,7 @@
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Readings;
+using System.Runtime.Intrinsics;
 using MathNet.Numerics;
 
 namespace GemIndex.Core.Identification;
@@ -52,11 +53,21 @@ internal static class SectionLikelihood
         int count = shapes.Length;
         int orientations = prior.IsIsotropic ? 1 : FacetOrientationSet.Count;
         var edges = new double[series.Count * count * 2];
-        var noise = new double[count];
         double offsetVariance = OffsetVariance(series, shiftSigma);
-        for (int s = 0; s < count; s++)
-            noise[s] = series.NoiseVariance + Square(QuadratureSpread * shapes[s].Birefringence);
         var nearLimit = NearLimit(series, prior);
+        // What does not change from orientation to orientation, once per shape.
+        var noise = new NoiseTerms[count];
+        Span<double> spreads = stackalloc double[count], logCeilings = stackalloc double[count], logWeights = stackalloc double[count];
+        for (int s = 0; s < count; s++)
+        {
+            noise[s] = NoiseTerms.For(series, nearLimit, series.NoiseVariance + Square(QuadratureSpread * shapes[s].Birefringence));
+            spreads[s] = noise[s].Spread(offsetVariance, shapes[s].ExtraSigma);
+            logCeilings[s] = LogCeiling(shapes[s], spreads[s], prior.LevelDensity);
+            logWeights[s] = Math.Log(shapes[s].Weight);
+        }
+        double[]? geometry = prior.IsIsotropic ? null : series.CoarseGeometry;
+        int blockLength = GeometryLength(series.Count) * Block;
+        var blockEdges = geometry is null ? null : new double[series.Count * count * 2 * Block];
         var single = new LogSum();
         var oriented = new LogSum();
         var best = new SectionRefinement.Start[SectionRefinement.Starts];
@@ -65,15 +76,19 @@ internal static class SectionLikelihood
         int bestPoint = 0, bestShape = 0;
         for (int j = 0; j < orientations; j++)
         {
-            if (prior.IsIsotropic) IsotropicEdges(shapes, series.Count, edges);
-            else SectionEdges(FacetOrientationSet.Points[j], shapes, series, edges);
+            // The coarse orientations' edges are worked out a block at a time (the same arithmetic, lane by lane), then
+            // weighed one orientation after another as before.
+            int lane = j % Block;
+            if (geometry is null) IsotropicEdges(shapes, series.Count, edges);
+            else if (lane == 0) BlockEdges(geometry.AsSpan(j / Block * blockLength, blockLength), shapes, series.Count, blockEdges!);
             for (int s = 0; s < count; s++)
             {
                 bool isotropic = shapes[s].Group < 0;
                 if (isotropic && j > 0) continue; // the same at every orientation
-                double logWeight = Math.Log(shapes[s].Weight);
-                var fit = Integrate(edges, s, count, series, noise[s], offsetVariance, shift, nearLimit, shapes[s], prior.LevelDensity,
-                    withTail: false, floor: Math.Max(single.Max, oriented.Max) - 40 - logWeight);
+                double logWeight = logWeights[s];
+                var at = geometry is null ? EdgeIndex.Interleaved(s, count) : new EdgeIndex(s * 2 * Block + lane, count * 2 * Block, Block);
+                var fit = Integrate(blockEdges ?? edges, at, series, noise[s], spreads[s], shift, nearLimit, shapes[s], prior.LevelDensity,
+                    withTail: false, floor: Math.Max(single.Max, oriented.Max) - 40 - logWeight, logCeiling: logCeilings[s]);
                 double value = fit.LogValue + logWeight;
                 if (isotropic) single.Include(value);
                 else
@@ -84,7 +99,7 @@ internal static class SectionLikelihood
                 if (value > bestScore) (bestScore, bestPoint, bestShape) = (value, j, s);
             }
         }
-        if (double.IsFinite(bestScore)) bestTail = TailAt(prior, series, shift, offsetVariance, nearLimit, noise, bestPoint, bestShape);
+        if (double.IsFinite(bestScore)) bestTail = TailAt(prior, series, shift, nearLimit, noise[bestShape], spreads[bestShape], bestPoint, bestShape);
         double coarse = oriented.Log - Math.Log(orientations);
         double refinedTail = 0;
         double refined = prior.IsIsotropic ? double.NegativeInfinity
@@ -94,14 +109,36 @@ internal static class SectionLikelihood
     }
 
     /// <summary>The goodness of fit at one coarse point (worked out once, for the best point only: it costs an incomplete gamma function).</summary>
-    private static double TailAt(IndicatrixPrior prior, SeriesObservation series, double shift, double offsetVariance, bool[]? nearLimit,
-        double[] noise, int point, int shape)
+    private static double TailAt(IndicatrixPrior prior, SeriesObservation series, double shift, bool[]? nearLimit,
+        in NoiseTerms noise, double spread, int point, int shape)
     {
         var edges = new double[series.Count * prior.Shapes.Length * 2];
         if (prior.IsIsotropic) IsotropicEdges(prior.Shapes, series.Count, edges);
         else SectionEdges(FacetOrientationSet.Points[point], prior.Shapes, series, edges);
-        return Integrate(edges, shape, prior.Shapes.Length, series, noise[shape], offsetVariance, shift, nearLimit, prior.Shapes[shape], prior.LevelDensity).Tail;
+        return Integrate(edges, EdgeIndex.Interleaved(shape, prior.Shapes.Length), series, noise, spread, shift, nearLimit, prior.Shapes[shape], prior.LevelDensity).Tail;
     }
+
+    /// <summary>
+    /// What <see cref="Integrate"/> needs of a reading variance σ² on this series, worked out once rather than at every
+    /// orientation: how many readings enter (fixed by the steps and the censored ones), √(2σ²) for the edge count, and the
+    /// Gaussian's normaliser −½(n − 1) ln 2πσ² − ½ ln n.
+    /// </summary>
+    internal readonly record struct NoiseTerms(double Noise, int Readings, double SeparationSigma, double Normaliser)
+    {
+        public static NoiseTerms For(SeriesObservation series, bool[]? nearLimit, double noise)
+        {
+            int n = 0;
+            for (int k = 0; k < series.Count; k++) n += nearLimit is not null && nearLimit[k] ? 1 : series.TwoEdges[k] ? 2 : 1;
+            return new NoiseTerms(noise, n, Math.Sqrt(2 * noise), -0.5 * (n - 1) * Math.Log(2 * Math.PI * noise) - 0.5 * Math.Log(n));
+        }
+
+        /// <summary>The spread of the readings' mean about the level: √(σ²/n + offset variance + extra²).</summary>
+        public double Spread(double offsetVariance, double extraSigma) => Math.Sqrt(Noise / Readings + offsetVariance + Square(extraSigma));
+    }
+
+    /// <summary>ln of the most the level's density can be: 1/max(width, spread·√(2π)), or the broad density.</summary>
+    private static double LogCeiling(in IndicatrixPrior.Shape shape, double spread, double levelDensity) =>
+        Math.Log(levelDensity > 0 ? levelDensity : 1 / Math.Max(shape.LevelHigh - shape.LevelLow, spread * 2.5066282746310002));
 
     /// <summary>Variance of the common shift besides the level: the per-stone offset, the soft catalogue edges, the light's correction.</summary>
     internal static double OffsetVariance(SeriesObservation series, double shiftSigma) =>
@@ -119,18 +156,119 @@ internal static class SectionLikelihood
     /// <summary>The two edges of every step and shape for one orientation: n = λ^(−1/2) for the eigenvalues λ of BᵀMB.</summary>
     internal static void SectionEdges(in FacetOrientation o, IndicatrixPrior.Shape[] shapes, SeriesObservation series, double[] edges)
     {
+        int length = GeometryLength(series.Count);
+        Span<double> geometry = length <= 256 ? stackalloc double[length] : new double[length];
+        Geometry(o, series, geometry);
+        SectionEdges(geometry, shapes, series.Count, edges);
+    }
+
+    /// <summary>The length of one orientation's geometry (<see cref="Geometry"/>) for a series of this many steps.</summary>
+    internal static int GeometryLength(int steps) => 3 + 6 * steps;
+
+    /// <summary>How many coarse orientations are worked out together (<see cref="BlockEdges"/>; the coarse set is a multiple of it).</summary>
+    private const int Block = 8;
+
+    /// <summary>
+    /// The geometry of every coarse orientation for the series (<see cref="Geometry"/>), in blocks of <see cref="Block"/>
+    /// orientations, each quantity's values of the block side by side: it is the same for every material, so the series
+    /// keeps it (<see cref="SeriesObservation.CoarseGeometry"/>).
+    /// </summary>
+    internal static double[] CoarseGeometry(SeriesObservation series)
+    {
+        int length = GeometryLength(series.Count);
+        // Whole blocks; lanes past the set's end stay zero and are never read.
+        var geometry = new double[(FacetOrientationSet.Count + Block - 1) / Block * Block * length];
+        var one = new double[length];
+        for (int j = 0; j < FacetOrientationSet.Count; j++)
+        {
+            Geometry(FacetOrientationSet.Points[j], series, one);
+            int block = j / Block * Block * length, lane = j % Block;
+            for (int q = 0; q < length; q++) geometry[block + q * Block + lane] = one[q];
+        }
+        return geometry;
+    }
+
+    /// <summary>
+    /// What the edges take of one orientation and the steps' rotations: N's squared components, then for each step the
+    /// squared components of t (in the facet, across the direction of travel) and N's products with them.
+    /// </summary>
+    private static void Geometry(in FacetOrientation o, SeriesObservation series, Span<double> geometry)
+    {
         var (nx, ny, nz) = (o.Normal.X, o.Normal.Y, o.Normal.Z);
-        double nxx = nx * nx, nyy = ny * ny, nzz = nz * nz;
+        geometry[0] = nx * nx;
+        geometry[1] = ny * ny;
+        geometry[2] = nz * nz;
         for (int k = 0; k < series.Count; k++)
         {
             double c = o.CosStart * series.Cos[k] - o.Sense * o.SinStart * series.Sin[k];
             double s = o.SinStart * series.Cos[k] + o.Sense * o.CosStart * series.Sin[k];
             double tx = c * o.V.X - s * o.U.X, ty = c * o.V.Y - s * o.U.Y, tz = c * o.V.Z - s * o.U.Z;
-            double txx = tx * tx, tyy = ty * ty, tzz = tz * tz, ntx = nx * tx, nty = ny * ty, ntz = nz * tz;
+            var step = geometry.Slice(3 + 6 * k, 6);
+            step[0] = tx * tx;
+            step[1] = ty * ty;
+            step[2] = tz * tz;
+            step[3] = nx * tx;
+            step[4] = ny * ty;
+            step[5] = nz * tz;
+        }
+    }
+
+    /// <summary>
+    /// The edges of every step and shape for a block of coarse orientations, from the block's geometry: the same arithmetic
+    /// as <see cref="SectionEdges(ReadOnlySpan{double}, IndicatrixPrior.Shape[], int, double[])"/> (IEEE products, sums,
+    /// square roots and quotients, so the same bits), <see cref="Block"/> orientations at a time. Step k's edges of shape
+    /// i for the block's orientation l are at ((k·shapes + i)·2 + 0 or 1)·Block + l.
+    /// </summary>
+    private static void BlockEdges(ReadOnlySpan<double> geometry, IndicatrixPrior.Shape[] shapes, int steps, double[] edges)
+    {
+        var nxx = Vector512.Create(geometry[..Block]);
+        var nyy = Vector512.Create(geometry.Slice(Block, Block));
+        var nzz = Vector512.Create(geometry.Slice(2 * Block, Block));
+        var half = Vector512.Create(0.5);
+        Span<Vector512<double>> normal = shapes.Length <= 16 ? stackalloc Vector512<double>[shapes.Length] : new Vector512<double>[shapes.Length];
+        for (int i = 0; i < shapes.Length; i++)
+            normal[i] = nxx * shapes[i].InverseSquareX + nyy * shapes[i].InverseSquareY + nzz * shapes[i].InverseSquareZ;
+        for (int k = 0; k < steps; k++)
+        {
+            var step = geometry.Slice((3 + 6 * k) * Block, 6 * Block);
+            var txx = Vector512.Create(step[..Block]);
+            var tyy = Vector512.Create(step.Slice(Block, Block));
+            var tzz = Vector512.Create(step.Slice(2 * Block, Block));
+            var ntx = Vector512.Create(step.Slice(3 * Block, Block));
+            var nty = Vector512.Create(step.Slice(4 * Block, Block));
+            var ntz = Vector512.Create(step.Slice(5 * Block, Block));
             for (int i = 0; i < shapes.Length; i++)
             {
                 ref readonly var shape = ref shapes[i];
-                double p = nxx * shape.InverseSquareX + nyy * shape.InverseSquareY + nzz * shape.InverseSquareZ;
+                var p = normal[i];
+                var q = txx * shape.InverseSquareX + tyy * shape.InverseSquareY + tzz * shape.InverseSquareZ;
+                var r = ntx * shape.InverseSquareX + nty * shape.InverseSquareY + ntz * shape.InverseSquareZ;
+                // x·½ is x/2 exactly.
+                Vector512<double> mean = (p + q) * half, difference = (p - q) * half;
+                var spread = Vector512.Sqrt(difference * difference + r * r);
+                int at = (k * shapes.Length + i) * 2 * Block;
+                (Vector512<double>.One / Vector512.Sqrt(mean + spread)).CopyTo(edges, at);
+                (Vector512<double>.One / Vector512.Sqrt(mean - spread)).CopyTo(edges, at + Block);
+            }
+        }
+    }
+
+    /// <summary>The edges of every step and shape from one orientation's <see cref="Geometry"/>.</summary>
+    private static void SectionEdges(ReadOnlySpan<double> geometry, IndicatrixPrior.Shape[] shapes, int steps, double[] edges)
+    {
+        double nxx = geometry[0], nyy = geometry[1], nzz = geometry[2];
+        // N·M·N does not depend on the step.
+        Span<double> normal = shapes.Length <= 64 ? stackalloc double[shapes.Length] : new double[shapes.Length];
+        for (int i = 0; i < shapes.Length; i++)
+            normal[i] = nxx * shapes[i].InverseSquareX + nyy * shapes[i].InverseSquareY + nzz * shapes[i].InverseSquareZ;
+        for (int k = 0; k < steps; k++)
+        {
+            var step = geometry.Slice(3 + 6 * k, 6);
+            double txx = step[0], tyy = step[1], tzz = step[2], ntx = step[3], nty = step[4], ntz = step[5];
+            for (int i = 0; i < shapes.Length; i++)
+            {
+                ref readonly var shape = ref shapes[i];
+                double p = normal[i];
                 double q = txx * shape.InverseSquareX + tyy * shape.InverseSquareY + tzz * shape.InverseSquareZ;
                 double r = ntx * shape.InverseSquareX + nty * shape.InverseSquareY + ntz * shape.InverseSquareZ;
                 double mean = (p + q) / 2, half = (p - q) / 2;
@@ -159,17 +297,24 @@ internal static class SectionLikelihood
     /// ∫ Π N(rᵢ; c, σ²) p(c) dc = (2πσ²)^(−(n−1)/2) n^(−1/2) exp(−Σ(rᵢ − r̄)²/2σ²) · [p ∗ N(0, σ²/n)](r̄), p the level's
     /// uniform density (or the broad one) convolved with the offset's normal.
     /// </summary>
-    internal static PointFit Integrate(double[] edges, int s, int count, SeriesObservation series, double noise, double offsetVariance,
-        double shift, bool[]? nearLimit, in IndicatrixPrior.Shape shape, double levelDensity, bool withTail = true, double floor = double.NegativeInfinity, double[]? residuals = null)
+    /// <remarks>
+    /// <paramref name="floor"/>: below it the point is left out (−∞); the test takes the level's density at its ceiling
+    /// (<paramref name="logCeiling"/>, worked out here when not given). <paramref name="spread"/> is
+    /// <see cref="NoiseTerms.Spread"/> for this shape.
+    /// </remarks>
+    internal static PointFit Integrate(double[] edges, EdgeIndex index, SeriesObservation series, in NoiseTerms terms, double spread,
+        double shift, bool[]? nearLimit, in IndicatrixPrior.Shape shape, double levelDensity, bool withTail = true, double floor = double.NegativeInfinity,
+        double logCeiling = double.NaN, double[]? residuals = null)
     {
         int n = 0;
+        double noise = terms.Noise;
         double sum = 0, sum2 = 0, factor = 1, logFactor = 0;
-        double separationSigma = Math.Sqrt(2 * noise);
+        double separationSigma = terms.SeparationSigma;
         for (int k = 0; k < series.Count; k++)
         {
             if (nearLimit is not null && nearLimit[k]) continue;
-            int at = (k * count + s) * 2;
-            double low = edges[at], high = edges[at + 1];
+            int at = index.Start + k * index.Step;
+            double low = edges[at], high = edges[at + index.Pair];
             double seenAsTwo = SeenAsTwo(high - low, separationSigma);
             if (series.TwoEdges[k])
             {
@@ -188,15 +333,16 @@ internal static class SectionLikelihood
             if (factor < 1e-200) { logFactor += Math.Log(factor); factor = 1; }
         }
         if (nearLimit is not null)
-            Censored(series, edges, s, count, noise, shift, nearLimit, separationSigma, residuals, ref n, ref sum, ref sum2, ref factor);
+            Censored(series, edges, index, noise, shift, nearLimit, separationSigma, residuals, ref n, ref sum, ref sum2, ref factor);
         logFactor += Math.Log(factor);
         double mean = sum / n;
         double squares = Math.Max(0, sum2 - sum * mean);
-        double gaussian = -0.5 * (n - 1) * Math.Log(2 * Math.PI * noise) - 0.5 * Math.Log(n) - squares / (2 * noise);
-        double spread = Math.Sqrt(noise / n + offsetVariance + Square(shape.ExtraSigma));
+        // n is terms.Readings: the steps and the censored ones fix it.
+        double gaussian = terms.Normaliser - squares / (2 * noise);
         // The level's density is at most 1/max(width, spread·√(2π)) (or the broad density): skip it when even that cannot matter.
-        double ceiling = levelDensity > 0 ? levelDensity : 1 / Math.Max(shape.LevelHigh - shape.LevelLow, spread * 2.5066282746310002);
-        if (gaussian + logFactor + Math.Log(ceiling) < floor) return new PointFit(double.NegativeInfinity, 0);
+        if (floor > double.NegativeInfinity
+            && gaussian + logFactor + (double.IsNaN(logCeiling) ? LogCeiling(shape, spread, levelDensity) : logCeiling) < floor)
+            return new PointFit(double.NegativeInfinity, 0);
         double density = LevelDensity(mean, shape.LevelLow, shape.LevelHigh, spread, levelDensity);
         if (!(density > 0)) return new PointFit(double.NegativeInfinity, 0);
         if (residuals is not null) for (int i = 0; i < n; i++) residuals[i] -= mean; // centred: what the orientation and shape must explain
@@ -216,17 +362,17 @@ internal static class SectionLikelihood
     /// above the limit (censored: edge &gt; limit − margin). Both are weighed at the shift fitted from the other steps (a
     /// plug-in: the shift is pinned far more tightly than either branch varies) and the likelier one is kept.
     /// </summary>
-    private static void Censored(SeriesObservation series, double[] edges, int s, int count, double noise, double shift, bool[] nearLimit,
+    private static void Censored(SeriesObservation series, double[] edges, EdgeIndex index, double noise, double shift, bool[] nearLimit,
         double separationSigma, double[]? residuals, ref int n, ref double sum, ref double sum2, ref double factor)
     {
-        double fitted = n > 0 ? sum / n : Fallback(series, edges, s, count, shift, nearLimit);
+        double fitted = n > 0 ? sum / n : Fallback(series, edges, index, shift, nearLimit);
         double sigma = Math.Sqrt(noise);
         double threshold = series.LiquidLimit - SeriesObservation.LiquidEdgeMargin;
         for (int k = 0; k < series.Count; k++)
         {
             if (!nearLimit[k]) continue;
-            int at = (k * count + s) * 2;
-            double low = edges[at], high = edges[at + 1];
+            int at = index.Start + k * index.Step;
+            double low = edges[at], high = edges[at + index.Pair];
             double merged = series.Low[k] + shift - (low + high) / 2, alone = series.Low[k] + shift - low;
             double pOne = 1 - SeenAsTwo(high - low, separationSigma);
             double pHiddenEdge = RangeLikelihood.Phi((high + fitted - shift - threshold) / sigma);
@@ -238,13 +384,23 @@ internal static class SectionLikelihood
         }
     }
 
-    private static double Fallback(SeriesObservation series, double[] edges, int s, int count, double shift, bool[] nearLimit)
+    private static double Fallback(SeriesObservation series, double[] edges, EdgeIndex index, double shift, bool[] nearLimit)
     {
         double total = 0;
         int n = 0;
         for (int k = 0; k < series.Count; k++)
-            if (nearLimit[k]) { total += series.Low[k] + shift - edges[(k * count + s) * 2]; n++; }
+            if (nearLimit[k]) { total += series.Low[k] + shift - edges[index.Start + k * index.Step]; n++; }
         return total / n;
+    }
+
+    /// <summary>
+    /// Where one orientation and shape's edges lie in an edge buffer: step k's low edge at Start + k·Step, its high edge
+    /// Pair after it.
+    /// </summary>
+    internal readonly record struct EdgeIndex(int Start, int Step, int Pair)
+    {
+        /// <summary>Shape s of <paramref name="count"/> in the layout <see cref="SectionEdges(in FacetOrientation, IndicatrixPrior.Shape[], SeriesObservation, double[])"/> writes.</summary>
+        public static EdgeIndex Interleaved(int s, int count) => new(s * 2, count * 2, 1);
     }
 
     /// <summary>The level's density at r̄: uniform on [low, high] (or the given density there) convolved with N(0, s²).</summary>

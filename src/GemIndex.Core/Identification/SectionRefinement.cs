@@ -80,11 +80,13 @@ internal static class SectionRefinement
         private readonly double[] _edges;
         private readonly double[] _x;
         private readonly IndicatrixPrior.Shape[] _one = new IndicatrixPrior.Shape[1];
+        private readonly SectionLikelihood.NoiseTerms _noise;
 
         public Peak(IndicatrixPrior prior, SeriesObservation series, double shift, double offsetVariance, bool[]? nearLimit,
             IndicatrixPrior.Shape shape, FacetOrientation origin)
         {
             (_prior, _series, _shift, _offsetVariance, _nearLimit, _origin) = (prior, series, shift, offsetVariance, nearLimit, origin);
+            _noise = SectionLikelihood.NoiseTerms.For(series, nearLimit, series.NoiseVariance);
             _group = shape.Group;
             _family = prior.Families[_group];
             _biaxial = _family.Biaxial;
@@ -134,7 +136,7 @@ internal static class SectionRefinement
             _one[0] = shape;
             var (orientation, logDensity) = Orientation(x);
             SectionLikelihood.SectionEdges(orientation, _one, _series, _edges);
-            var fit = SectionLikelihood.Integrate(_edges, 0, 1, _series, _series.NoiseVariance, _offsetVariance, _shift, _nearLimit, shape,
+            var fit = SectionLikelihood.Integrate(_edges, SectionLikelihood.EdgeIndex.Interleaved(0, 1), _series, _noise, _noise.Spread(_offsetVariance, shape.ExtraSigma), _shift, _nearLimit, shape,
                 _prior.LevelDensity, withTail: final, residuals: residuals);
             tail = fit.Tail;
             count = fit.Readings;

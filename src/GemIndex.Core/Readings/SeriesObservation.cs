@@ -53,6 +53,14 @@ internal sealed class SeriesObservation
         LiquidLimit = liquidLimit;
     }
 
+    private double[]? _coarseGeometry;
+
+    /// <summary>
+    /// The geometry of the section model's coarse orientations for these steps (<c>SectionLikelihood.CoarseGeometry</c>),
+    /// the same for every material, so worked out once, on first use.
+    /// </summary>
+    internal double[] CoarseGeometry => _coarseGeometry ??= Identification.SectionLikelihood.CoarseGeometry(this);
+
     /// <summary>cos φₖ of each step's rotation.</summary>
     public double[] Cos { get; }
 
