@@ -162,6 +162,38 @@ internal static class SectionLikelihood
         SectionEdges(geometry, shapes, series.Count, edges);
     }
 
+    /// <summary>
+    /// The edges of every step for one orientation and one shape (the refinement's case), <see cref="Block"/> steps at a
+    /// time: lows at 0…, highs at <see cref="SeriesObservation.PaddedCount"/>…; the same arithmetic as the per-step
+    /// <see cref="Geometry"/> and <see cref="SectionEdges(ReadOnlySpan{double}, IndicatrixPrior.Shape[], int, double[])"/>,
+    /// so the same bits. Lanes past the last step hold whatever a zero rotation vector gives and are never read.
+    /// </summary>
+    internal static void SectionEdges(in FacetOrientation o, in IndicatrixPrior.Shape shape, SeriesObservation series, double[] edges)
+    {
+        var (nx, ny, nz) = (o.Normal.X, o.Normal.Y, o.Normal.Z);
+        double p = nx * nx * shape.InverseSquareX + ny * ny * shape.InverseSquareY + nz * nz * shape.InverseSquareZ;
+        double senseSin = o.Sense * o.SinStart, senseCos = o.Sense * o.CosStart;
+        var half = Vector512.Create(0.5);
+        var normal = Vector512.Create(p);
+        int padded = series.PaddedCount;
+        for (int k = 0; k < padded; k += Block)
+        {
+            var cos = Vector512.Create(series.PaddedCos.AsSpan(k, Block));
+            var sin = Vector512.Create(series.PaddedSin.AsSpan(k, Block));
+            var c = o.CosStart * cos - senseSin * sin;
+            var s = o.SinStart * cos + senseCos * sin;
+            var tx = c * o.V.X - s * o.U.X;
+            var ty = c * o.V.Y - s * o.U.Y;
+            var tz = c * o.V.Z - s * o.U.Z;
+            var q = tx * tx * shape.InverseSquareX + ty * ty * shape.InverseSquareY + tz * tz * shape.InverseSquareZ;
+            var r = nx * tx * shape.InverseSquareX + ny * ty * shape.InverseSquareY + nz * tz * shape.InverseSquareZ;
+            Vector512<double> mean = (normal + q) * half, difference = (normal - q) * half;
+            var spread = Vector512.Sqrt(difference * difference + r * r);
+            (Vector512<double>.One / Vector512.Sqrt(mean + spread)).CopyTo(edges, k);
+            (Vector512<double>.One / Vector512.Sqrt(mean - spread)).CopyTo(edges, padded + k);
+        }
+    }
+
     /// <summary>The length of one orientation's geometry (<see cref="Geometry"/>) for a series of this many steps.</summary>
     internal static int GeometryLength(int steps) => 3 + 6 * steps;
 

@@ -79,7 +79,7 @@ internal static class SectionRefinement
         private readonly FacetOrientation _origin;
         private readonly double[] _edges;
         private readonly double[] _x;
-        private readonly IndicatrixPrior.Shape[] _one = new IndicatrixPrior.Shape[1];
+        private readonly double _scale;
         private readonly SectionLikelihood.NoiseTerms _noise;
 
         public Peak(IndicatrixPrior prior, SeriesObservation series, double shift, double offsetVariance, bool[]? nearLimit,
@@ -93,7 +93,8 @@ internal static class SectionRefinement
             _freeBirefringence = _family.BirefringenceHigh - _family.BirefringenceLow >= IndicatrixPrior.NarrowBox;
             var (uLow, uHigh) = _biaxial ? IndicatrixPrior.BetaBox(_family, shape.Birefringence) : (0, 0);
             _freeBeta = _biaxial && uHigh - uLow >= IndicatrixPrior.NarrowBox;
-            _edges = new double[series.Count * 2];
+            _edges = new double[2 * series.PaddedCount];
+            _scale = 1 / Math.Sqrt(series.NoiseVariance);
             var x = new List<double>();
             if (_biaxial) x.AddRange([0, 0, 0]);
             else x.AddRange(UniaxialStart(origin));
@@ -133,14 +134,13 @@ internal static class SectionRefinement
             double b = _freeBirefringence ? x[i++] * ShapeUnit : _fixedBirefringence;
             double u = _freeBeta ? x[i] * ShapeUnit : _fixedBeta;
             if (IndicatrixPrior.ShapeAt(_family, _group, b, u) is not { } shape || !(shape.Weight > 0)) return double.NegativeInfinity;
-            _one[0] = shape;
             var (orientation, logDensity) = Orientation(x);
-            SectionLikelihood.SectionEdges(orientation, _one, _series, _edges);
-            var fit = SectionLikelihood.Integrate(_edges, SectionLikelihood.EdgeIndex.Interleaved(0, 1), _series, _noise, _noise.Spread(_offsetVariance, shape.ExtraSigma), _shift, _nearLimit, shape,
-                _prior.LevelDensity, withTail: final, residuals: residuals);
+            SectionLikelihood.SectionEdges(orientation, shape, _series, _edges);
+            var fit = SectionLikelihood.Integrate(_edges, new SectionLikelihood.EdgeIndex(0, 1, _series.PaddedCount), _series, _noise,
+                _noise.Spread(_offsetVariance, shape.ExtraSigma), _shift, _nearLimit, shape, _prior.LevelDensity, withTail: final, residuals: residuals);
             tail = fit.Tail;
             count = fit.Readings;
-            double scale = 1 / Math.Sqrt(_series.NoiseVariance);
+            double scale = _scale;
             for (int k = 0; k < count; k++) residuals[k] *= scale;
             return fit.LogValue + Math.Log(shape.Weight) + logDensity;
         }
@@ -215,7 +215,8 @@ internal static class SectionRefinement
             }
             // The value, goodness of fit and predicted edges at the peak (r keeps the same residuals).
             value = Value(x, true, out tail, r, out _);
-            edges = [.. _edges];
+            // The predicted edges, low then high (Same compares every one, in any order).
+            edges = [.. _edges.AsSpan(0, _series.Count), .. _edges.AsSpan(_series.PaddedCount, _series.Count)];
             if (known(edges)) return false;
             // The peak's width from the full curvature of the log-integrand (level density, edge-count factors and the prior
             // included); the Gauss–Newton curvature stands in when that is not negative definite.
