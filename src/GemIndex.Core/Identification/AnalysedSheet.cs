@@ -12,7 +12,9 @@ public sealed record AnalysedSheet
         Sheet = sheet;
         if (!string.IsNullOrWhiteSpace(sheet.Colour))
         {
-            ColourHues = ColourWords.Hues(sheet.Colour).Where(ColourWords.KnownHues.Contains).ToHashSet();
+            var hues = ColourWords.Hues(sheet.Colour).Where(ColourWords.KnownHues.Contains).ToHashSet();
+            ColourHues = hues;
+            ColourHueList = [.. hues];
             UnknownColourWords = ColourWords.UnknownWords(sheet.Colour);
             IsColourless = ColourWords.IsColourless(sheet.Colour);
         }
@@ -59,6 +61,9 @@ public sealed record AnalysedSheet
 
     /// <summary>The colour seen, as normalised hue words; empty when no colour was given.</summary>
     public IReadOnlySet<string> ColourHues { get; } = new HashSet<string>();
+
+    /// <summary>The same hues as a list, in the set's own order (the colour test reads them for every entry).</summary>
+    internal IReadOnlyList<string> ColourHueList { get; } = [];
 
     /// <summary>Words of the colour given that name no known hue: they give no evidence, and a warning says so.</summary>
     public IReadOnlyList<string> UnknownColourWords { get; } = [];

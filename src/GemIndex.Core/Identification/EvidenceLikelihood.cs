@@ -44,7 +44,7 @@ public static class EvidenceLikelihood
         // An aggregate's spot index and SG both follow its mix of minerals: counted as correlated, not independent.
         int gravityGroup = (material.Forms & MaterialForm.Aggregate) != 0 && s.Refractometer?.Spot is not null ? EvidenceAccumulator.AggregateGroup : EvidenceAccumulator.Independent;
         if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc, gravityGroup);
-        foreach (var liquid in s.HeavyLiquids) HeavyLiquid(material, liquid, acc);
+        for (int i = 0; i < s.HeavyLiquids.Count; i++) HeavyLiquid(material, s.HeavyLiquids[i], acc);
         if (s.Polariscope is { } pol) Polariscope(profile, pol, acc);
         if (s.Pleochroism is { } pl) Pleochroism(profile, pl, sheet.IsColourless, acc);
         if (s.Dispersion is { } d) Dispersion(material, d, acc);
@@ -53,7 +53,7 @@ public static class EvidenceLikelihood
         if (s.UvLong is { } ul) Fluorescence(BenchField.UvLong, "long-wave UV", material.UvLong, profile.UvLong, ul, acc);
         if (s.UvShort is { } us) Fluorescence(BenchField.UvShort, "short-wave UV", material.UvShort, profile.UvShort, us, acc);
         if (s.AbsorptionLinesNanometres is { } lines) Absorption(material, lines, acc);
-        if (sheet.ColourHues.Count > 0) Colour(profile, s.Colour!, sheet.ColourHues, acc);
+        if (sheet.ColourHues.Count > 0) Colour(profile, s.Colour!, sheet.ColourHueList, acc);
         if (s.Magnification is { IsEmpty: false } look)
         {
             // docs/ranking.md, "Magnification": "not in the catalogue" is the natural/imitation average.
@@ -301,7 +301,7 @@ public static class EvidenceLikelihood
         }
     }
 
-    private static void Colour(MaterialProfile profile, string colour, IReadOnlySet<string> seen, EvidenceAccumulator acc)
+    private static void Colour(MaterialProfile profile, string colour, IReadOnlyList<string> seen, EvidenceAccumulator acc)
     {
         var m = profile.Material;
         double f = ColourWords.Probability(seen, profile.ColourHues);

@@ -52,7 +52,7 @@ internal static class SectionLikelihood
         var shapes = prior.Shapes;
         int count = shapes.Length;
         int orientations = prior.IsIsotropic ? 1 : FacetOrientationSet.Count;
-        var edges = new double[series.Count * count * 2];
+        var edges = prior.IsIsotropic ? Scratch(ref t_edges, series.Count * count * 2) : null;
         double offsetVariance = OffsetVariance(series, shiftSigma);
         var nearLimit = NearLimit(series, prior);
         // What does not change from orientation to orientation, once per shape.
@@ -68,7 +68,7 @@ internal static class SectionLikelihood
         }
         double[]? geometry = prior.IsIsotropic ? null : series.CoarseGeometry;
         int blockLength = GeometryLength(series.Count) * Block;
-        var blockEdges = geometry is null ? null : new double[series.Count * count * 2 * Block];
+        var blockEdges = geometry is null ? null : Scratch(ref t_blockEdges, series.Count * count * 2 * Block);
         var single = new LogSum();
         var oriented = new LogSum();
         var best = new SectionRefinement.Start[SectionRefinement.Starts];
@@ -80,7 +80,7 @@ internal static class SectionLikelihood
             // The coarse orientations' edges are worked out a block at a time (the same arithmetic, lane by lane), then
             // weighed one orientation after another as before.
             int lane = j % Block;
-            if (geometry is null) IsotropicEdges(shapes, series.Count, edges);
+            if (geometry is null) IsotropicEdges(shapes, series.Count, edges!);
             else if (lane == 0) BlockEdges(geometry.AsSpan(j / Block * blockLength, blockLength), shapes, series.Count, blockEdges!);
             for (int s = 0; s < count; s++)
             {
@@ -88,7 +88,7 @@ internal static class SectionLikelihood
                 if (isotropic && j > 0) continue; // the same at every orientation
                 double logWeight = logWeights[s];
                 var at = geometry is null ? EdgeIndex.Interleaved(s, count) : new EdgeIndex(s * 2 * Block + lane, count * 2 * Block, Block);
-                var fit = Integrate(blockEdges ?? edges, at, series, noise[s], spreads[s], shift, nearLimit, shapes[s], prior.LevelDensity,
+                var fit = Integrate((blockEdges ?? edges)!, at, series, noise[s], spreads[s], shift, nearLimit, shapes[s], prior.LevelDensity,
                     withTail: false, floor: Math.Max(single.Max, oriented.Max) - 40 - logWeight, logCeiling: logCeilings[s]);
                 double value = fit.LogValue + logWeight;
                 if (isotropic) single.Include(value);
@@ -108,6 +108,12 @@ internal static class SectionLikelihood
         if (refined > coarse) { coarse = refined; bestTail = Math.Max(bestTail, refinedTail); }
         return new Outcome(LogSum.Add(single.Log, coarse), bestTail);
     }
+
+    // Each thread's edge buffers for Evaluate (every entry it reads is written first in the same call).
+    [ThreadStatic] private static double[]? t_edges, t_blockEdges;
+
+    private static double[] Scratch(ref double[]? buffer, int length) =>
+        buffer is { } known && known.Length >= length ? known : buffer = new double[length];
 
     /// <summary>The goodness of fit at one coarse point (worked out once, for the best point only: it costs an incomplete gamma function).</summary>
     private static double TailAt(IndicatrixPrior prior, SeriesObservation series, double shift, bool[]? nearLimit,

@@ -211,6 +211,42 @@ internal static class SectionRefinement
             return new Polar(first, second, normal, travel, v, -2 * LogPi - 1.5 * Math.Log(1 + a * a + c * c));
         }
 
+        /// <summary>A thread's work arrays for climbs in d dimensions on series of up to m/2 steps (reused climb after climb).</summary>
+        private sealed class Buffers
+        {
+            [ThreadStatic] private static Buffers?[]? t_byDimension;
+
+            private Buffers(int d, int m)
+            {
+                M = m;
+                (X, Trial, Step, Gradient, Work, Moved) = (new double[d], new double[d], new double[d], new double[d], new double[d], new double[d]);
+                (R, TrialResiduals, Column) = (new double[m], new double[m], new double[m]);
+                (Jacobian, Curvature, Factor) = (new double[m * d], new double[d * d], new double[d * d]);
+            }
+
+            /// <summary>This thread's buffers for d dimensions, with room for m residuals.</summary>
+            public static Buffers For(int d, int m)
+            {
+                var known = t_byDimension ??= new Buffers?[8];
+                if (d >= known.Length) return new Buffers(d, m);
+                return known[d] is { } b && b.M >= m ? b : known[d] = new Buffers(d, m);
+            }
+
+            public int M { get; }
+            public double[] X { get; }
+            public double[] Trial { get; }
+            public double[] Step { get; }
+            public double[] Gradient { get; }
+            public double[] Work { get; }
+            public double[] Moved { get; }
+            public double[] R { get; }
+            public double[] TrialResiduals { get; }
+            public double[] Column { get; }
+            public double[] Jacobian { get; }
+            public double[] Curvature { get; }
+            public double[] Factor { get; }
+        }
+
         /// <summary>Keeps what the last point worked out as the climb's current point's.</summary>
         private void Anchor() => (_anchorPolar, _anchorShape) = (_last, _lastShape);
 
@@ -227,11 +263,13 @@ internal static class SectionRefinement
             logIntegral = double.NegativeInfinity;
             edges = [];
             int d = _x.Length, m = 2 * _series.Count;
-            // Matrices are flat, row-major d×d (d ≤ 5), in buffers made once per climb: the climb runs for every start of
-            // every material on every stone.
-            double[] x = [.. _x], trial = new double[d], step = new double[d], gradient = new double[d], work = new double[d];
-            double[] r = new double[m], trialResiduals = new double[m], column = new double[m];
-            double[] jacobian = new double[m * d], curvature = new double[d * d], factor = new double[d * d];
+            // Matrices are flat, row-major d×d (d ≤ 5), in the thread's buffers for this dimension: the climb runs for every
+            // start of every material on every stone. Every entry is written in this climb before it is read.
+            var buffers = Buffers.For(d, m);
+            double[] x = buffers.X, trial = buffers.Trial, step = buffers.Step, gradient = buffers.Gradient, work = buffers.Work;
+            double[] r = buffers.R, trialResiduals = buffers.TrialResiduals, column = buffers.Column;
+            double[] jacobian = buffers.Jacobian, curvature = buffers.Curvature, factor = buffers.Factor;
+            Array.Copy(_x, x, d);
             double value = Value(x, false, out tail, r, out int count);
             Anchor();
             if (!double.IsFinite(value)) return false;
@@ -269,7 +307,7 @@ internal static class SectionRefinement
             if (known(edges)) return false;
             // The peak's width from the full curvature of the log-integrand (level density, edge-count factors and the prior
             // included); the Gauss–Newton curvature stands in when that is not negative definite.
-            FullCurvature(x, value, r, curvature);
+            FullCurvature(x, value, r, curvature, buffers.Moved);
             double logDeterminant = LogDeterminant(Bounded(curvature, x), d, factor);
             if (!double.IsFinite(logDeterminant))
             {
@@ -309,12 +347,11 @@ internal static class SectionRefinement
         }
 
         /// <summary>−∂²ℓ/∂x² by central differences of the log-integrand itself, into <paramref name="curvature"/>.</summary>
-        private void FullCurvature(double[] x, double centre, double[] scratch, double[] curvature)
+        private void FullCurvature(double[] x, double centre, double[] scratch, double[] curvature, double[] y)
         {
             int d = x.Length, angles = _biaxial ? 3 : 2;
             Span<double> h = stackalloc double[d];
             for (int i = 0; i < d; i++) h[i] = i < angles ? 0.004 : 0.05;
-            double[] y = [.. x];
             for (int i = 0; i < d; i++)
             {
                 curvature[i * d + i] = -(Moved(x, y, centre, scratch, i, h[i], i, 0) - 2 * centre + Moved(x, y, centre, scratch, i, -h[i], i, 0)) / (h[i] * h[i]);
