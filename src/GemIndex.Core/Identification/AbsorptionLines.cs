@@ -63,15 +63,24 @@ internal static class AbsorptionLines
     {
         var result = new double?[listed.Count];
         var used = new bool[seen.Count];
-        var pairs = new List<(double Distance, int Listed, int Seen)>();
+        if (listed.Count == 0 || seen.Count == 0) return result;
+        // The candidate pairs nearest first, equal distances in the order found (a stable insertion sort: few pairs).
+        var pairs = new (double Distance, int Listed, int Seen)[listed.Count * seen.Count];
+        int count = 0;
         for (int i = 0; i < listed.Count; i++)
             for (int j = 0; j < seen.Count; j++)
             {
                 double distance = Math.Abs(listed[i].Nanometres - seen[j]);
-                if (distance <= 4 * PositionSigmaNanometres) pairs.Add((distance, i, j));
+                if (!(distance <= 4 * PositionSigmaNanometres)) continue;
+                int at = count++;
+                while (at > 0 && pairs[at - 1].Distance > distance) { pairs[at] = pairs[at - 1]; at--; }
+                pairs[at] = (distance, i, j);
             }
-        foreach (var (_, i, j) in pairs.OrderBy(p => p.Distance))
+        for (int p = 0; p < count; p++)
+        {
+            var (_, i, j) = pairs[p];
             if (result[i] is null && !used[j]) { result[i] = seen[j]; used[j] = true; }
+        }
         return result;
     }
 

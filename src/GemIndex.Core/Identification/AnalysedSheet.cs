@@ -1,3 +1,4 @@
+using GemIndex.Core.Magnification;
 using GemIndex.Core.Readings;
 
 namespace GemIndex.Core.Identification;
@@ -11,10 +12,13 @@ public sealed record AnalysedSheet
         Sheet = sheet;
         if (!string.IsNullOrWhiteSpace(sheet.Colour))
         {
-            ColourHues = ColourWords.Hues(sheet.Colour).Where(ColourWords.KnownHues.Contains).ToHashSet();
+            var hues = ColourWords.Hues(sheet.Colour).Where(ColourWords.KnownHues.Contains).ToHashSet();
+            ColourHues = hues;
+            ColourHueList = [.. hues];
             UnknownColourWords = ColourWords.UnknownWords(sheet.Colour);
             IsColourless = ColourWords.IsColourless(sheet.Colour);
         }
+        if (sheet.Magnification is { IsEmpty: false } look) LogBroadLook = MagnificationEvidence.LogBroad(look);
         if (sheet.Refractometer is { Steps.Count: > 0 } r)
         {
             Series = RotationSeriesAnalysis.Analyse(r.Steps, r.ReadingPrecision, r.CalibrationOffset);
@@ -26,7 +30,7 @@ public sealed record AnalysedSheet
     private readonly Lazy<double>? _broad;
     // One stone is ranked on one thread, so a plain dictionary under an uncontended lock (cheaper per stone than a
     // concurrent one) keeps the sheet safe to share.
-    private readonly Dictionary<IndicatrixPrior, SectionLikelihood.Outcome> _outcomes = [];
+    private readonly Dictionary<(IndicatrixPrior, double, double), SectionLikelihood.Outcome> _outcomes = [];
 
     /// <summary>The series as the section model reads it, when there are readings.</summary>
     internal SeriesObservation? Observation { get; }
@@ -34,21 +38,32 @@ public sealed record AnalysedSheet
     /// <summary>ln p(series | not in the catalogue), worked out once per stone.</summary>
     internal double BroadSeriesLogLikelihood => _broad?.Value ?? 0;
 
-    /// <summary>The section model's outcome for a prior in 589.3 nm light, worked out once per stone however many entries share it.</summary>
-    internal SectionLikelihood.Outcome SeriesOutcome(IndicatrixPrior prior)
+    /// <summary>
+    /// The section model's outcome for a prior with the readings moved by <paramref name="shift"/> (σ
+    /// <paramref name="shiftSigma"/>) to 589.3 nm, worked out once per stone however many entries share it and however
+    /// often an entry is weighed.
+    /// </summary>
+    internal SectionLikelihood.Outcome SeriesOutcome(IndicatrixPrior prior, double shift, double shiftSigma)
     {
+        var key = (prior, shift, shiftSigma);
         lock (_outcomes)
-            if (_outcomes.TryGetValue(prior, out var known)) return known;
-        var outcome = SectionLikelihood.Evaluate(prior, Observation!, 0, 0);
-        lock (_outcomes) _outcomes[prior] = outcome;
+            if (_outcomes.TryGetValue(key, out var known)) return known;
+        var outcome = SectionLikelihood.Evaluate(prior, Observation!, shift, shiftSigma);
+        lock (_outcomes) _outcomes[key] = outcome;
         return outcome;
     }
+
+    /// <summary>ln P(what was seen under magnification | not in the catalogue), worked out once per stone.</summary>
+    internal double LogBroadLook { get; }
 
     /// <summary>The sheet as entered.</summary>
     public BenchSheet Sheet { get; }
 
     /// <summary>The colour seen, as normalised hue words; empty when no colour was given.</summary>
     public IReadOnlySet<string> ColourHues { get; } = new HashSet<string>();
+
+    /// <summary>The same hues as a list, in the set's own order (the colour test reads them for every entry).</summary>
+    internal IReadOnlyList<string> ColourHueList { get; } = [];
 
     /// <summary>Words of the colour given that name no known hue: they give no evidence, and a warning says so.</summary>
     public IReadOnlyList<string> UnknownColourWords { get; } = [];

@@ -62,22 +62,31 @@ public static class ColourWords
     /// rest spread over every known hue. For a description with several hues ("greenish blue"), the likeliest of them.
     /// A material with no colours listed gives every hue alike.
     /// </summary>
-    public static double Probability(IReadOnlySet<string> seen, IReadOnlyList<string> listed)
+    public static double Probability(IReadOnlySet<string> seen, IReadOnlyList<string> listed) => Probability([.. seen], listed);
+
+    /// <summary><see cref="Probability(IReadOnlySet{string}, IReadOnlyList{string})"/> with the hues seen as a list, in the set's order.</summary>
+    internal static double Probability(IReadOnlyList<string> seen, IReadOnlyList<string> listed)
     {
         if (listed.Count == 0) return BroadProbability;
         var (total, neighbours) = ListedParts.GetValue(listed, Parts);
         double best = 0;
-        foreach (string hue in seen)
+        for (int i = 0; i < seen.Count; i++)
         {
+            string hue = seen[i];
             if (!Neighbours.ContainsKey(hue)) continue;
             int rank = IndexOf(listed, hue);
             double p = (1 - ListedShare - (neighbours.Count > 0 ? NeighbourShare : 0)) * BroadProbability
-                       + (rank >= 0 ? ListedShare * Math.Pow(RankDecay, rank) / total : 0)
+                       + (rank >= 0 ? ListedShare * RankWeight(rank) / total : 0)
                        + (neighbours.Contains(hue) ? NeighbourShare / neighbours.Count : 0);
             best = Math.Max(best, p);
         }
         return best;
     }
+
+    /// <summary><see cref="RankDecay"/> to the power of the rank, from a table for the ranks lists have.</summary>
+    private static double RankWeight(int rank) => rank < RankWeights.Length ? RankWeights[rank] : Math.Pow(RankDecay, rank);
+
+    private static readonly double[] RankWeights = [.. Enumerable.Range(0, 16).Select(r => Math.Pow(RankDecay, r))];
 
     // The rank weights' total and the listed colours' neighbours depend on the list alone: worked out once per list (the
     // ranking asks for every entry on every stone).

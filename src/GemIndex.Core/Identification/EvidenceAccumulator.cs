@@ -5,8 +5,14 @@ namespace GemIndex.Core.Identification;
 /// "not in the catalogue", the per-test tail probabilities for the fit, and (when asked) the words. Tests that share a
 /// cause are not multiplied as independent (docs/ranking.md §3): within a group, the strongest weight of evidence
 /// (log likelihood ratio against "not in the catalogue") counts in full and the others by <see cref="CorrelatedShare"/>.
+/// One accumulator is reused from candidate to candidate of a stone (<see cref="Reset"/>).
 /// </summary>
-internal sealed class EvidenceAccumulator(bool explaining)
+/// <param name="explaining">Also collect the contributions in words.</param>
+/// <param name="fitting">
+/// Also combine the tail probabilities into the fit; without it the tails need not be worked out at all (the ranking
+/// needs the fit of only the few candidates it shows).
+/// </param>
+internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
 {
     /// <summary>No group: an independent test.</summary>
     public const int Independent = 0;
@@ -20,13 +26,26 @@ internal sealed class EvidenceAccumulator(bool explaining)
     /// <summary>How much a correlated test adds beyond the strongest of its group (a judgement; docs/ranking.md §3).</summary>
     public const double CorrelatedShare = 0.5;
 
-    private readonly List<EvidenceContribution>? _contributions = explaining ? [] : null;
+    private List<EvidenceContribution>? _contributions = explaining ? [] : null;
     private readonly List<double>[] _groups = [[], [], []];
     private double _independent, _logOther, _lastBits, _lastTail, _sumLogTails;
     private int _tests;
     private string _lastTest = "";
 
     public bool Explaining => _contributions is not null;
+
+    /// <summary>Whether the tails are wanted (see the constructor).</summary>
+    public bool Fitting { get; } = fitting || explaining;
+
+    /// <summary>Empties the sums for the next candidate.</summary>
+    public void Reset()
+    {
+        if (_contributions is not null) _contributions = [];
+        foreach (var group in _groups) group.Clear();
+        _independent = _logOther = _lastBits = _lastTail = _sumLogTails = 0;
+        _tests = 0;
+        _lastTest = "";
+    }
 
     /// <summary>
     /// Adds one test. Continuous readings are mixed with the broad density (a robust likelihood: misreadings
@@ -54,7 +73,7 @@ internal sealed class EvidenceAccumulator(bool explaining)
         if (group == Independent) _independent += ratio;
         else _groups[group].Add(ratio);
         _logOther += logBroad;
-        _sumLogTails += Math.Log(Math.Clamp(tail, 1e-300, 1));
+        if (Fitting) _sumLogTails += Math.Log(Math.Clamp(tail, 1e-300, 1));
         _tests++;
         _lastTest = test;
         if (_contributions is not null) { _lastBits = ratio / Math.Log(2); _lastTail = tail; }
@@ -66,18 +85,35 @@ internal sealed class EvidenceAccumulator(bool explaining)
         _contributions?.Add(new EvidenceContribution(_lastTest, text, _lastBits, _lastTail >= 0.05));
     }
 
+    /// <summary>ln p(sheet | candidate), the correlated groups counted as in <see cref="Result"/>.</summary>
+    public double LogLikelihood
+    {
+        get
+        {
+            double ratio = _independent;
+            foreach (var group in _groups)
+            {
+                if (group.Count == 0) continue;
+                // The strongest by size (the first of equal sizes), and the group's sum in the order the tests came.
+                double strongest = group[0], sum = 0;
+                for (int i = 1; i < group.Count; i++)
+                    if (Math.Abs(group[i]).CompareTo(Math.Abs(strongest)) > 0) strongest = group[i];
+                foreach (double value in group) sum += value;
+                ratio += strongest + CorrelatedShare * (sum - strongest);
+            }
+            return _logOther + ratio;
+        }
+    }
+
+    /// <summary>ln p(sheet | not in the catalogue).</summary>
+    public double LogLikelihoodNotInCatalogue => _logOther;
+
     public CandidateEvaluation Result()
     {
-        double ratio = _independent;
-        foreach (var group in _groups)
-        {
-            if (group.Count == 0) continue;
-            double strongest = group.MaxBy(Math.Abs);
-            ratio += strongest + CorrelatedShare * (group.Sum() - strongest);
-        }
+        if (!Fitting) throw new InvalidOperationException("the fit needs the tails: this accumulator was made without them");
         return new()
         {
-            LogLikelihood = _logOther + ratio,
+            LogLikelihood = LogLikelihood,
             LogLikelihoodNotInCatalogue = _logOther,
             Fit = FisherCombination(-_sumLogTails, _tests),
             Contributions = _contributions ?? (IReadOnlyList<EvidenceContribution>)[],

@@ -29,31 +29,39 @@ public static class EvidenceLikelihood
     /// <summary>Weighs every test on the sheet for a prepared material (the ranking's fast path).</summary>
     public static CandidateEvaluation Evaluate(MaterialProfile profile, AnalysedSheet sheet, bool explain = false)
     {
-        var material = profile.Material;
         var acc = new EvidenceAccumulator(explain);
+        Weigh(profile, sheet, acc);
+        return acc.Result();
+    }
+
+    /// <summary>Weighs every test on the sheet for a prepared material into <paramref name="acc"/>, emptied first.</summary>
+    internal static void Weigh(MaterialProfile profile, AnalysedSheet sheet, EvidenceAccumulator acc)
+    {
+        var material = profile.Material;
+        acc.Reset();
         RefractometerEvidence.Add(profile, sheet, acc);
         var s = sheet.Sheet;
         // An aggregate's spot index and SG both follow its mix of minerals: counted as correlated, not independent.
         int gravityGroup = (material.Forms & MaterialForm.Aggregate) != 0 && s.Refractometer?.Spot is not null ? EvidenceAccumulator.AggregateGroup : EvidenceAccumulator.Independent;
         if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc, gravityGroup);
-        foreach (var liquid in s.HeavyLiquids) HeavyLiquid(material, liquid, acc);
-        if (s.Polariscope is { } pol) Polariscope(material, pol, acc);
-        if (s.Pleochroism is { } pl) Pleochroism(material, pl, sheet.IsColourless, acc);
+        for (int i = 0; i < s.HeavyLiquids.Count; i++) HeavyLiquid(material, s.HeavyLiquids[i], acc);
+        if (s.Polariscope is { } pol) Polariscope(profile, pol, acc);
+        if (s.Pleochroism is { } pl) Pleochroism(profile, pl, sheet.IsColourless, acc);
         if (s.Dispersion is { } d) Dispersion(material, d, acc);
         if (s.ThermalProbe is { } t) Thermal(material, t, acc);
         if (s.Electrical is { } e) Electrical(material, e, acc);
-        if (s.UvLong is { } ul) Fluorescence(BenchField.UvLong, "long-wave UV", material.UvLong, ul, acc);
-        if (s.UvShort is { } us) Fluorescence(BenchField.UvShort, "short-wave UV", material.UvShort, us, acc);
+        if (s.UvLong is { } ul) Fluorescence(BenchField.UvLong, "long-wave UV", material.UvLong, profile.UvLong, ul, acc);
+        if (s.UvShort is { } us) Fluorescence(BenchField.UvShort, "short-wave UV", material.UvShort, profile.UvShort, us, acc);
         if (s.AbsorptionLinesNanometres is { } lines) Absorption(material, lines, acc);
-        if (sheet.ColourHues.Count > 0) Colour(profile, s.Colour!, sheet.ColourHues, acc);
+        if (sheet.ColourHues.Count > 0) Colour(profile, s.Colour!, sheet.ColourHueList, acc);
         if (s.Magnification is { IsEmpty: false } look)
         {
             // docs/ranking.md, "Magnification": "not in the catalogue" is the natural/imitation average.
             var expected = material.MagnificationProfile;
-            acc.AddLog(BenchField.Magnification, MagnificationEvidence.LogLikelihood(look, expected), MagnificationEvidence.LogBroad(look), MagnificationEvidence.Fit(look, expected), robust: false);
+            acc.AddLog(BenchField.Magnification, MagnificationEvidence.LogLikelihood(look, expected), sheet.LogBroadLook,
+                acc.Fitting ? MagnificationEvidence.Fit(look, expected) : 1, robust: false);
             if (acc.Explaining) acc.Say(MagnificationEvidence.Reason(look, expected));
         }
-        return acc.Result();
     }
 
     private static void SpecificGravity(Material m, double value, double sigma, EvidenceAccumulator acc, int group)
@@ -61,7 +69,7 @@ public static class EvidenceLikelihood
         double s = double.Hypot(sigma, SpecificGravityFloor);
         var range = m.SpecificGravity;
         double stray = RangeStrays.SpecificGravityShare * value;
-        acc.Add(BenchField.Sg, RangeStrays.Density(value, range, s, stray), BroadDensities.SpecificGravity, RangeStrays.Tail(value, range, s, stray), robust: true, group);
+        acc.Add(BenchField.Sg, RangeStrays.Density(value, range, s, stray), BroadDensities.SpecificGravity, acc.Fitting ? RangeStrays.Tail(value, range, s, stray) : 1, robust: true, group);
         if (acc.Explaining)
             acc.Say($"SG {F2(value)} ± {F2(sigma)} {Where(value, range, s, "0.00")}");
     }
@@ -71,22 +79,24 @@ public static class EvidenceLikelihood
         const double sigma = 0.01;
         var range = m.SpecificGravity;
         double density = liquid.Liquid.Value;
+        bool fitting = acc.Fitting;
         (double f, double g, double tail) = liquid.Outcome switch
         {
             HeavyLiquidOutcome.Floats => (RangeLikelihood.ProbabilityBelow(density, range, sigma), 0.5,
-                RangeLikelihood.TwoSidedTail(Math.Max(0, range.Minimum - density) / sigma)),
+                fitting ? RangeLikelihood.TwoSidedTail(Math.Max(0, range.Minimum - density) / sigma) : 1),
             HeavyLiquidOutcome.Sinks => (RangeLikelihood.ProbabilityAbove(density, range, sigma), 0.5,
-                RangeLikelihood.TwoSidedTail(Math.Max(0, density - range.Maximum) / sigma)),
+                fitting ? RangeLikelihood.TwoSidedTail(Math.Max(0, density - range.Maximum) / sigma) : 1),
             _ => (RangeLikelihood.Density(density, range, 2 * sigma) * 4 * sigma, 4 * sigma * BroadDensities.SpecificGravity,
-                RangeLikelihood.TwoSidedTail(RangeLikelihood.StandardDeviationsOutside(density, range, 2 * sigma))),
+                fitting ? RangeLikelihood.TwoSidedTail(RangeLikelihood.StandardDeviationsOutside(density, range, 2 * sigma)) : 1),
         };
         acc.Add(BenchField.HeavyLiquids, f, g, tail, robust: true);
         if (acc.Explaining)
             acc.Say($"{Word(liquid.Outcome)} in liquid of density {F2(density)}: SG {range.ToString("0.00")} expected");
     }
 
-    private static void Polariscope(Material m, PolariscopeReaction seen, EvidenceAccumulator acc)
+    private static void Polariscope(MaterialProfile profile, PolariscopeReaction seen, EvidenceAccumulator acc)
     {
+        var m = profile.Material;
         if (m.IsOpaque)
         {
             // No light passes: the test cannot be taken on it, so whatever was written neither supports nor weakens it.
@@ -94,9 +104,9 @@ public static class EvidenceLikelihood
             if (acc.Explaining) acc.Say("polariscope: opaque material, the test says nothing about it");
             return;
         }
+        double f = profile.Polariscope[(int)seen];
+        acc.Add(BenchField.Polariscope, f, 0.25, f / profile.PolariscopeUsual, robust: false);
         var usual = UsualReactions(m);
-        double f = PolariscopeProbability(usual, seen);
-        acc.Add(BenchField.Polariscope, f, 0.25, f / PolariscopeProbability(usual, usual[0]), robust: false);
         if (acc.Explaining)
             acc.Say($"polariscope {Word(seen)}{(usual.Contains(seen) ? ", as expected" : $", where {string.Join(" or ", usual.Select(Word))} is usual")}");
     }
@@ -124,8 +134,9 @@ public static class EvidenceLikelihood
         _ => SinglyRefractiveOrAnomalous,
     };
 
-    private static void Pleochroism(Material m, PleochroismObservation seen, bool colourless, EvidenceAccumulator acc)
+    private static void Pleochroism(MaterialProfile profile, PleochroismObservation seen, bool colourless, EvidenceAccumulator acc)
     {
+        var m = profile.Material;
         if (m.IsOpaque)
         {
             acc.Add(BenchField.Pleochroism, 1 / 3.0, 1 / 3.0, 1, robust: false);
@@ -134,7 +145,7 @@ public static class EvidenceLikelihood
         }
         double[] row = PleochroismRow(m.OpticCharacter, colourless ? PleochroismStrength.None : m.Pleochroism);
         double f = row[(int)seen];
-        acc.Add(BenchField.Pleochroism, f, 1 / 3.0, f / row.Max(), robust: false);
+        acc.Add(BenchField.Pleochroism, f, 1 / 3.0, f / (colourless ? profile.PleochroismLargestColourless : profile.PleochroismLargest), robust: false);
         if (acc.Explaining)
         {
             string expected = m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial
@@ -162,7 +173,11 @@ public static class EvidenceLikelihood
     private static readonly double[] DispersionSlip = [0.6, 0.15, 0.04, 0.01];
 
     /// <summary>P(each of the five dispersion words) when the material's nG − nB is in <paramref name="expected"/>.</summary>
-    internal static double[] DispersionRow(DispersionStrength expected)
+    internal static double[] DispersionRow(DispersionStrength expected) => DispersionRows[(int)expected];
+
+    private static readonly double[][] DispersionRows = [.. Enumerable.Range(0, 5).Select(b => NewDispersionRow((DispersionStrength)b))];
+
+    private static double[] NewDispersionRow(DispersionStrength expected)
     {
         var row = new double[5];
         double sum = 0;
@@ -179,7 +194,7 @@ public static class EvidenceLikelihood
             var range = new PropertyRange(0.9 * known, 1.1 * known);
             double sigma = 0.0015;
             double z = RangeLikelihood.StandardDeviationsOutside(measured, range, sigma);
-            acc.Add(BenchField.Dispersion, RangeLikelihood.Density(measured, range, sigma), BroadDensities.Dispersion, RangeLikelihood.TwoSidedTail(z), robust: true);
+            acc.Add(BenchField.Dispersion, RangeLikelihood.Density(measured, range, sigma), BroadDensities.Dispersion, acc.Fitting ? RangeLikelihood.TwoSidedTail(z) : 1, robust: true);
             if (acc.Explaining) acc.Say($"dispersion nG − nB {F3(measured)} {Where(measured, range, sigma, "0.000")}");
             return;
         }
@@ -234,7 +249,8 @@ public static class EvidenceLikelihood
         if (acc.Explaining) acc.Say($"electrically {Word(seen)}, {(seen == m.Electrical ? "as expected" : $"where {Word(m.Electrical)} is expected")}");
     }
 
-    private static void Fluorescence(string test, string lamp, IReadOnlyList<FluorescenceStrength> usual, FluorescenceStrength seen, EvidenceAccumulator acc)
+    private static void Fluorescence(string test, string lamp, IReadOnlyList<FluorescenceStrength> usual, MaterialProfile.FluorescenceTable table,
+        FluorescenceStrength seen, EvidenceAccumulator acc)
     {
         if (usual.Count == 0)
         {
@@ -242,10 +258,8 @@ public static class EvidenceLikelihood
             if (acc.Explaining) acc.Say($"{lamp} {Word(seen)}; not recorded for this material");
             return;
         }
-        double f = FluorescenceProbability(usual, seen);
-        double best = 0;
-        foreach (var u in usual) best = Math.Max(best, FluorescenceProbability(usual, u));
-        acc.Add(test, f, 0.25, f / best, robust: false, EvidenceAccumulator.ChromophoreGroup);
+        double f = table.Probabilities[(int)seen];
+        acc.Add(test, f, 0.25, f / table.Usual, robust: false, EvidenceAccumulator.ChromophoreGroup);
         if (acc.Explaining) acc.Say($"{lamp} {Word(seen)}; {string.Join(" or ", usual.Select(Word))} usual");
     }
 
@@ -275,7 +289,7 @@ public static class EvidenceLikelihood
     {
         double logF = AbsorptionLines.LogLikelihood(m.AbsorptionLines, seen, out int unexplained, out int missedStrong);
         double logG = AbsorptionLines.LogBroad(seen);
-        double tail = Math.Pow(0.07, unexplained) * Math.Pow(1 - AbsorptionLines.Detection(LineStrength.Strong), missedStrong);
+        double tail = acc.Fitting ? Math.Pow(0.07, unexplained) * Math.Pow(1 - AbsorptionLines.Detection(LineStrength.Strong), missedStrong) : 1;
         acc.AddLog(BenchField.Absorption, logF, logG, tail, robust: false, EvidenceAccumulator.ChromophoreGroup);
         if (acc.Explaining)
         {
@@ -287,11 +301,11 @@ public static class EvidenceLikelihood
         }
     }
 
-    private static void Colour(MaterialProfile profile, string colour, IReadOnlySet<string> seen, EvidenceAccumulator acc)
+    private static void Colour(MaterialProfile profile, string colour, IReadOnlyList<string> seen, EvidenceAccumulator acc)
     {
         var m = profile.Material;
         double f = ColourWords.Probability(seen, profile.ColourHues);
-        double best = profile.ColourHues.Count == 0 ? f : ColourWords.Probability(new HashSet<string> { profile.ColourHues[0] }, profile.ColourHues);
+        double best = profile.ColourHues.Count == 0 ? f : profile.ColourFirstHue;
         acc.Add(BenchField.Colour, f, ColourWords.BroadProbability, Math.Min(1, f / best), robust: false, EvidenceAccumulator.ChromophoreGroup);
         if (acc.Explaining)
             acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : string.Join(", ", m.Colours) + " usual, most usual first")}");

@@ -40,6 +40,9 @@ public sealed class Identifier
     private readonly MaterialProfile[] _profiles;
     private readonly double[] _logPriors;
     private readonly double _logPriorNotInCatalogue;
+    // Each entry's species numbered in the order species first appear in the catalogue, and how many there are.
+    private readonly int[] _speciesOf;
+    private readonly int _speciesCount;
 
     /// <summary>Prepares the ranking over a catalogue (at least one material).</summary>
     /// <exception cref="ArgumentException">The catalogue is empty.</exception>
@@ -50,6 +53,9 @@ public sealed class Identifier
         _profiles = Profiles(_materials);
         _logPriors = LogPriors(_materials);
         _logPriorNotInCatalogue = Math.Log(BroadDensities.NotInCataloguePrior);
+        var number = new Dictionary<string, int>();
+        _speciesOf = [.. _materials.Select(m => number.TryGetValue(m.Species, out int k) ? k : number[m.Species] = number.Count)];
+        _speciesCount = number.Count;
     }
 
     /// <summary>
@@ -104,21 +110,21 @@ public sealed class Identifier
     }
 
     /// <summary>Moves mass to "not in the catalogue" when even the best-fitting serious candidate fits poorly (<see cref="PoorFit"/>).</summary>
-    private static double DiscountPoorFit(double[] posterior, double[] fits, double other)
+    private static double DiscountPoorFit(double[] posterior, Func<int, double> fit, double other)
     {
-        double keep = Math.Min(1, BestSeriousFit(posterior, fits) / PoorFit);
+        double keep = Math.Min(1, BestSeriousFit(posterior, fit) / PoorFit);
         if (keep >= 1) return other;
         double moved = 0;
         for (int i = 0; i < posterior.Length; i++) { moved += posterior[i] * (1 - keep); posterior[i] *= keep; }
         return other + moved;
     }
 
-    /// <summary>The best fit among the candidates with at least <see cref="SeriousCandidate"/> of the leader's posterior.</summary>
-    private static double BestSeriousFit(double[] posterior, double[] fits)
+    /// <summary>The best fit among the candidates with at least <see cref="SeriousCandidate"/> of the leader's posterior (their fits worked out only here).</summary>
+    private static double BestSeriousFit(double[] posterior, Func<int, double> fit)
     {
         double top = posterior.Max(), best = 0;
         for (int i = 0; i < posterior.Length; i++)
-            if (posterior[i] >= SeriousCandidate * top) best = Math.Max(best, fits[i]);
+            if (posterior[i] >= SeriousCandidate * top) best = Math.Max(best, fit(i));
         return best;
     }
 
@@ -126,22 +132,23 @@ public sealed class Identifier
     /// Entries ordered species first: species by their total, and within a species its entries by their own share, so a
     /// species' entries follow its total. Ties keep the catalogue's order.
     /// </summary>
-    private int[] SpeciesFirst(double[] posterior)
+    private int[] SpeciesFirst(double[] posterior, int[] byEntry)
     {
-        int[] byEntry = Ranked(posterior);
         // Species numbered in the order they first appear in byEntry; their totals summed in that same order.
-        var number = new Dictionary<string, int>();
+        var number = new int[_speciesCount];
+        Array.Fill(number, -1);
         var speciesOf = new int[byEntry.Length];
-        var totals = new List<double>();
+        var totals = new double[_speciesCount];
+        int count = 0;
         for (int position = 0; position < byEntry.Length; position++)
         {
             int i = byEntry[position];
-            if (!number.TryGetValue(_materials[i].Species, out int k)) number[_materials[i].Species] = k = totals.Count;
-            if (k == totals.Count) totals.Add(0);
+            int k = number[_speciesOf[i]];
+            if (k < 0) number[_speciesOf[i]] = k = count++;
             totals[k] += posterior[i];
             speciesOf[position] = k;
         }
-        var species = new int[totals.Count];
+        var species = new int[count];
         for (int k = 0; k < species.Length; k++) species[k] = k;
         Array.Sort(species, (a, b) => totals[b].CompareTo(totals[a]) is var c && c != 0 ? c : a.CompareTo(b));
         // Each species' entries follow its total, in their own order.
@@ -166,24 +173,33 @@ public sealed class Identifier
         // species can outweigh each of a species' many varieties while the species as a whole leads.
         if (species.Count == 0) return null;
         string leading = species[0].Species;
-        var entries = Enumerable.Range(0, posterior.Length).Where(i => _materials[i].Species == leading && posterior[i] > 1e-4)
-            .Select(i => (_materials[i], posterior[i])).ToList();
+        var entries = new List<(Material, double)>();
+        for (int i = 0; i < posterior.Length; i++)
+            if (_materials[i].Species == leading && posterior[i] > 1e-4) entries.Add((_materials[i], posterior[i]));
         return entries.Count < 2 ? null : NextTestAdvisor.Advise(sheet, entries);
     }
 
     /// <summary>Posterior totals per species over the whole catalogue, best first; ties keep the catalogue's order.</summary>
     private List<SpeciesResult> SpeciesTotals(double[] posterior)
     {
-        var totals = new Dictionary<string, (int First, double Total, Dictionary<OriginClass, double> Origins)>();
+        // Species are numbered by their first entry in the catalogue, so the number breaks ties as the first entry does.
+        var totals = new double[_speciesCount];
+        var origins = new Dictionary<OriginClass, double>[_speciesCount];
+        var names = new string[_speciesCount];
         for (int i = 0; i < posterior.Length; i++)
         {
             var m = _materials[i];
-            if (!totals.TryGetValue(m.Species, out var t)) t = (i, 0, []);
-            t.Origins[m.Origin] = t.Origins.GetValueOrDefault(m.Origin) + posterior[i];
-            totals[m.Species] = (t.First, t.Total + posterior[i], t.Origins);
+            int k = _speciesOf[i];
+            if (origins[k] is not { } o) { origins[k] = o = []; names[k] = m.Species; }
+            o[m.Origin] = o.GetValueOrDefault(m.Origin) + posterior[i];
+            totals[k] += posterior[i];
         }
-        return [.. totals.OrderByDescending(kv => kv.Value.Total).ThenBy(kv => kv.Value.First)
-            .Select(kv => new SpeciesResult { Species = kv.Key, Confidence = kv.Value.Total, Origins = kv.Value.Origins })];
+        var order = new int[_speciesCount];
+        for (int k = 0; k < order.Length; k++) order[k] = k;
+        Array.Sort(order, (a, b) => totals[b].CompareTo(totals[a]) is var c && c != 0 ? c : a.CompareTo(b));
+        var result = new List<SpeciesResult>(order.Length);
+        foreach (int k in order) result.Add(new SpeciesResult { Species = names[k], Confidence = totals[k], Origins = origins[k] });
+        return result;
     }
 
     /// <summary>The catalogue ranked over.</summary>
@@ -201,17 +217,26 @@ public sealed class Identifier
         int n = _materials.Length;
         var logPosterior = new double[n];
         var logLikelihood = new double[n];
-        var fits = new double[n];
         double logOther = 0, max = double.NegativeInfinity;
+        // The likelihoods of every entry, without their fits: only the best entry's fit and the shown candidates' are
+        // read, and a fit costs the tails of every test. Those few are weighed again in full (the same sums).
+        var acc = new EvidenceAccumulator(explaining: false, fitting: false);
         for (int i = 0; i < n; i++)
         {
-            var e = EvidenceLikelihood.Evaluate(_profiles[i], analysed);
-            logOther = e.LogLikelihoodNotInCatalogue;
+            EvidenceLikelihood.Weigh(_profiles[i], analysed, acc);
+            logOther = acc.LogLikelihoodNotInCatalogue;
             // Tempered: the ratio to "not in the catalogue" is divided by the temperature.
-            logLikelihood[i] = (e.LogLikelihood - logOther) / Temperature;
+            logLikelihood[i] = (acc.LogLikelihood - logOther) / Temperature;
             logPosterior[i] = _logPriors[i] + logLikelihood[i];
-            fits[i] = e.Fit;
             max = Math.Max(max, logPosterior[i]);
+        }
+        var evaluations = new CandidateEvaluation?[n];
+        var explained = new bool[n];
+        CandidateEvaluation Evaluated(int i, bool explain)
+        {
+            if (evaluations[i] is { } known && (explained[i] || !explain)) return known;
+            explained[i] = explain;
+            return evaluations[i] = EvidenceLikelihood.Evaluate(_profiles[i], analysed, explain);
         }
         logOther = _logPriorNotInCatalogue;
         max = Math.Max(max, logOther);
@@ -220,22 +245,31 @@ public sealed class Identifier
         for (int i = 0; i < n; i++) sum += posterior[i] = Math.Exp(logPosterior[i] - max);
         for (int i = 0; i < n; i++) posterior[i] /= sum;
         double other = Math.Exp(logOther - max) / sum;
-        other = DiscountPoorFit(posterior, fits, other);
+        other = DiscountPoorFit(posterior, i => Evaluated(i, explain: false).Fit, other);
         OriginBalance.Apply(_materials, posterior, logLikelihood, _logPriors);
 
-        int[] order = SpeciesFirst(posterior);
+        int[] byEntry = Ranked(posterior);
+        int[] order = SpeciesFirst(posterior, byEntry);
         // The shown candidates are the most probable entries, then grouped species first: a species with many varieties
         // must not fill the list with entries the readings rule out while another species' likely entry is left off.
-        var shown = new HashSet<int>(Ranked(posterior).Take(maximumCandidates));
-        var candidates = order.Where(shown.Contains).Select((i, rank) => new RankedCandidate
+        var shown = new bool[n];
+        for (int position = 0; position < Math.Min(maximumCandidates, n); position++) shown[byEntry[position]] = true;
+        var candidates = new List<RankedCandidate>(Math.Min(maximumCandidates, n));
+        foreach (int i in order)
         {
-            Material = _materials[i],
-            Confidence = posterior[i],
-            Fit = fits[i],
-            Reasons = rank < explainTop ? EvidenceLikelihood.Evaluate(_profiles[i], analysed, explain: true).Contributions : [],
-        }).ToList();
+            if (!shown[i]) continue;
+            bool explain = candidates.Count < explainTop;
+            var e = Evaluated(i, explain);
+            candidates.Add(new RankedCandidate
+            {
+                Material = _materials[i],
+                Confidence = posterior[i],
+                Fit = e.Fit,
+                Reasons = explain ? e.Contributions : [],
+            });
+        }
         var best = candidates.MaxBy(c => c.Confidence)!;
-        bool noGoodMatch = BestSeriousFit(posterior, fits) < MinimumFit || other > best.Confidence;
+        bool noGoodMatch = BestSeriousFit(posterior, i => Evaluated(i, explain: false).Fit) < MinimumFit || other > best.Confidence;
         var species = SpeciesTotals(posterior);
         var weighted = order.Where(i => posterior[i] >= 1e-3).Select(i => (_materials[i], posterior[i])).ToList();
         return new IdentificationResult

@@ -1,10 +1,11 @@
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Observations;
 
 namespace GemIndex.Core.Identification;
 
 /// <summary>
 /// What the likelihood needs of a material that costs time to work out (its colours as hue words, its birefringence
-/// range), computed once per catalogue rather than once per stone.
+/// range, the reaction tests' probabilities), computed once per catalogue rather than once per stone.
 /// </summary>
 public sealed class MaterialProfile
 {
@@ -19,6 +20,14 @@ public sealed class MaterialProfile
         Hues = ColourHues.ToHashSet();
         Birefringence = RefractometerEvidence.BirefringenceRange(material);
         Prior = prior ?? IndicatrixPrior.For(material, Birefringence);
+        if (ColourHues.Count > 0) ColourFirstHue = ColourWords.Probability(new HashSet<string> { ColourHues[0] }, ColourHues);
+        var usual = EvidenceLikelihood.UsualReactions(material);
+        Polariscope = [.. Enumerable.Range(0, 4).Select(o => EvidenceLikelihood.PolariscopeProbability(usual, (PolariscopeReaction)o))];
+        PolariscopeUsual = EvidenceLikelihood.PolariscopeProbability(usual, usual[0]);
+        PleochroismLargest = EvidenceLikelihood.PleochroismRow(material.OpticCharacter, material.Pleochroism).Max();
+        PleochroismLargestColourless = EvidenceLikelihood.PleochroismRow(material.OpticCharacter, PleochroismStrength.None).Max();
+        UvLong = new FluorescenceTable(material.UvLong);
+        UvShort = new FluorescenceTable(material.UvShort);
     }
 
     /// <summary>Where its principal indices may lie, for the section model (shared among entries with the same optical data).</summary>
@@ -35,4 +44,41 @@ public sealed class MaterialProfile
 
     /// <summary>Its birefringence range (derived from the index ranges where the catalogue gives none).</summary>
     public PropertyRange Birefringence { get; }
+
+    /// <summary>P(its most usual hue is named | its colours): the colour test's best case (0 when it lists no known hue).</summary>
+    internal double ColourFirstHue { get; }
+
+    /// <summary>P(each polariscope reaction | the material), by <see cref="PolariscopeReaction"/>.</summary>
+    internal double[] Polariscope { get; }
+
+    /// <summary>P(its first usual reaction | the material): the polariscope's best case.</summary>
+    internal double PolariscopeUsual { get; }
+
+    /// <summary>The likeliest dichroscope answer's probability, for its pleochroism.</summary>
+    internal double PleochroismLargest { get; }
+
+    /// <summary>The same for a colourless stone of it (no pleochroism to see).</summary>
+    internal double PleochroismLargestColourless { get; }
+
+    /// <summary>Long-wave UV: P(each strength) and the best case.</summary>
+    internal FluorescenceTable UvLong { get; }
+
+    /// <summary>Short-wave UV: P(each strength) and the best case.</summary>
+    internal FluorescenceTable UvShort { get; }
+
+    /// <summary>P(each fluorescence strength | the usual strengths), and the largest of them at a usual strength.</summary>
+    internal sealed class FluorescenceTable
+    {
+        public FluorescenceTable(IReadOnlyList<FluorescenceStrength> usual)
+        {
+            Probabilities = [.. Enumerable.Range(0, 4).Select(o => EvidenceLikelihood.FluorescenceProbability(usual, (FluorescenceStrength)o))];
+            foreach (var u in usual) Usual = Math.Max(Usual, EvidenceLikelihood.FluorescenceProbability(usual, u));
+        }
+
+        /// <summary>By <see cref="FluorescenceStrength"/>.</summary>
+        public double[] Probabilities { get; }
+
+        /// <summary>The best case: the largest probability of a usual strength.</summary>
+        public double Usual { get; }
+    }
 }

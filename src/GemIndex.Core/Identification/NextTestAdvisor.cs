@@ -26,15 +26,17 @@ public static class NextTestAdvisor
         if (candidates.Count < 2) return null;
         double total = candidates.Sum(c => c.Probability);
         var weighted = candidates.Select(c => (c.Material, P: c.Probability / total)).ToList();
+        var tables = new OutcomeTables[weighted.Count];
+        for (int i = 0; i < tables.Length; i++) tables[i] = OutcomeTables.Of(weighted[i].Material);
         (string Test, double Gain)? best = null;
         // Never suggest weighing in water while a porous or fragile material is a serious candidate.
         bool immersionUnsafe = weighted.Any(c => c.P >= BenchWarnings.Relevant && c.Material.DoNotImmerse);
-        foreach (var (test, outcomes) in TestsNotDone(sheet, immersionUnsafe))
+        foreach (int test in TestsNotDone(sheet, immersionUnsafe))
         {
-            double gain = MutualInformation(weighted, outcomes);
-            if (best is null || gain > best.Value.Gain + 1e-9) best = (test, gain);
+            double gain = MutualInformation(weighted, tables, test);
+            if (best is null || gain > best.Value.Gain + 1e-9) best = (Tests[test].Field, gain);
         }
-        var look = Look(sheet, weighted);
+        var look = Look(sheet, weighted, tables);
         var leaders = weighted.Where(c => c.P >= 0.02).Take(5).ToList();
         if (look is { } l && l.Gain > (best?.Gain ?? 0) + 1e-9 && l.Gain >= MinimumGainBits)
             return new NextTestAdvice
@@ -61,24 +63,73 @@ public static class NextTestAdvisor
     /// largest gain, joined by a second when looking for both adds at least <see cref="MinimumGainBits"/> (features are
     /// independent given the material, as in the likelihood, so the pair's outcomes are the four seen/not-seen pairs).
     /// </summary>
-    private static (MagnificationFeature[] Features, double Gain)? Look(BenchSheet sheet, List<(Material Material, double P)> candidates)
+    private static (MagnificationFeature[] Features, double Gain)? Look(BenchSheet sheet, List<(Material Material, double P)> candidates, OutcomeTables[] tables)
     {
         var done = sheet.Magnification is { } m ? m.Present.Concat(m.Absent).ToHashSet() : [];
-        var open = MagnificationVocabulary.All.Select(i => i.Feature).Where(f => !done.Contains(f)).ToList();
+        var open = new List<int>();
+        for (int f = 0; f < MagnificationVocabulary.All.Count; f++)
+            if (!done.Contains(MagnificationVocabulary.All[f].Feature)) open.Add(f);
         if (open.Count == 0) return null;
-        double Seen(Material material, MagnificationFeature f) => MagnificationEvidence.ProbabilityOfSeeing(material.MagnificationProfile, f);
-        IEnumerable<(long, double)> One(Material material, MagnificationFeature f) => Binary(Seen(material, f));
-        IEnumerable<(long, double)> Two(Material material, MagnificationFeature f, MagnificationFeature g)
+        // Of equal gains the first is kept (as MaxBy does).
+        int first = open[0];
+        double firstGain = LookInformation(candidates, tables, first, -1);
+        for (int i = 1; i < open.Count; i++)
         {
-            double a = Seen(material, f), b = Seen(material, g);
-            return [(0, a * b), (1, a * (1 - b)), (2, (1 - a) * b), (3, (1 - a) * (1 - b))];
+            double gain = LookInformation(candidates, tables, open[i], -1);
+            if (gain.CompareTo(firstGain) > 0) (first, firstGain) = (open[i], gain);
         }
-        var first = open.Select(f => (Feature: f, Gain: MutualInformation(candidates, x => One(x, f)))).MaxBy(x => x.Gain);
-        var second = open.Where(f => f != first.Feature)
-            .Select(g => (Feature: g, Gain: MutualInformation(candidates, x => Two(x, first.Feature, g)))).MaxBy(x => x.Gain);
-        return second.Gain >= first.Gain + MinimumGainBits
-            ? ([first.Feature, second.Feature], second.Gain)
-            : ([first.Feature], first.Gain);
+        int second = -1;
+        double secondGain = 0;
+        foreach (int g in open)
+        {
+            if (g == first) continue;
+            double gain = LookInformation(candidates, tables, first, g);
+            if (second < 0 || gain.CompareTo(secondGain) > 0) (second, secondGain) = (g, gain);
+        }
+        // A single feature left to look for has no partner: the same failure as MaxBy over no elements.
+        if (second < 0) throw new InvalidOperationException("Sequence contains no elements");
+        var firstFeature = MagnificationVocabulary.All[first].Feature;
+        return secondGain >= firstGain + MinimumGainBits
+            ? ([firstFeature, MagnificationVocabulary.All[second].Feature], secondGain)
+            : ([firstFeature], firstGain);
+    }
+
+    /// <summary>
+    /// I(material; outcome) for looking for feature <paramref name="f"/> alone (<paramref name="g"/> &lt; 0: seen or not),
+    /// or for f and g together (the four seen/not-seen pairs, f's answer first); features are independent given the material.
+    /// </summary>
+    private static double LookInformation(List<(Material Material, double P)> candidates, OutcomeTables[] tables, int f, int g)
+    {
+        int outcomes = g < 0 ? 2 : 4;
+        Span<double> marginal = stackalloc double[4];
+        Span<double> q = stackalloc double[4];
+        marginal.Clear();
+        for (int c = 0; c < candidates.Count; c++)
+        {
+            LookOutcomes(tables[c], f, g, q);
+            double p = candidates[c].P;
+            for (int o = 0; o < outcomes; o++) marginal[o] += p * q[o];
+        }
+        double information = 0;
+        for (int c = 0; c < candidates.Count; c++)
+        {
+            LookOutcomes(tables[c], f, g, q);
+            double p = candidates[c].P;
+            for (int o = 0; o < outcomes; o++)
+                if (q[o] > 0) information += p * q[o] * Math.Log2(q[o] / marginal[o]);
+        }
+        return Math.Max(0, information);
+    }
+
+    private static void LookOutcomes(OutcomeTables t, int f, int g, Span<double> q)
+    {
+        double a = t.Seen[f];
+        if (g < 0) { q[0] = a; q[1] = 1 - a; return; }
+        double b = t.Seen[g];
+        q[0] = a * b;
+        q[1] = a * (1 - b);
+        q[2] = (1 - a) * b;
+        q[3] = (1 - a) * (1 - b);
     }
 
     private static string ExpectedLook(MagnificationFeature[] features, Material m) => string.Join(", ", features.Select(f =>
@@ -88,32 +139,116 @@ public static class NextTestAdvisor
         return p >= 0.5 ? $"{name} likely" : p >= 0.1 ? $"{name} possible" : $"{name} not expected";
     }));
 
-    private static IEnumerable<(string, Func<Material, IEnumerable<(long, double)>>)> TestsNotDone(BenchSheet s, bool immersionUnsafe)
+    /// <summary>The tests the advisor weighs, in the order it weighs them (of equal gains the first is kept).</summary>
+    private static readonly (string Field, Func<Material, IEnumerable<(long, double)>> Outcomes)[] Tests =
+    [
+        (BenchField.Refractometer, Refractometer),
+        (BenchField.Sg, SpecificGravity),
+        (BenchField.Polariscope, Polariscope),
+        (BenchField.Pleochroism, Pleochroism),
+        (BenchField.Dispersion, Dispersion),
+        (BenchField.ThermalProbe, m => Binary(EvidenceLikelihood.ThermalPositive(m))),
+        (BenchField.Electrical, m => Binary(EvidenceLikelihood.ElectricalConductive(m))),
+        (BenchField.UvLong, m => Fluorescence(m.UvLong)),
+        (BenchField.UvShort, m => Fluorescence(m.UvShort)),
+        (BenchField.Absorption, Absorption),
+    ];
+
+    /// <summary>Indices into <see cref="Tests"/> of the tests not on the sheet.</summary>
+    private static IEnumerable<int> TestsNotDone(BenchSheet s, bool immersionUnsafe)
     {
-        if (s.Refractometer is null) yield return (BenchField.Refractometer, Refractometer);
-        if (s.SpecificGravity is null && s.HeavyLiquids.Count == 0 && !immersionUnsafe) yield return (BenchField.Sg, SpecificGravity);
-        if (s.Polariscope is null) yield return (BenchField.Polariscope, Polariscope);
-        if (s.Pleochroism is null) yield return (BenchField.Pleochroism, Pleochroism);
-        if (s.Dispersion is null) yield return (BenchField.Dispersion, Dispersion);
-        if (s.ThermalProbe is null) yield return (BenchField.ThermalProbe, m => Binary(EvidenceLikelihood.ThermalPositive(m)));
-        if (s.Electrical is null) yield return (BenchField.Electrical, m => Binary(EvidenceLikelihood.ElectricalConductive(m)));
-        if (s.UvLong is null) yield return (BenchField.UvLong, m => Fluorescence(m.UvLong));
-        if (s.UvShort is null) yield return (BenchField.UvShort, m => Fluorescence(m.UvShort));
-        if (s.AbsorptionLinesNanometres is null) yield return (BenchField.Absorption, Absorption);
+        if (s.Refractometer is null) yield return 0;
+        if (s.SpecificGravity is null && s.HeavyLiquids.Count == 0 && !immersionUnsafe) yield return 1;
+        if (s.Polariscope is null) yield return 2;
+        if (s.Pleochroism is null) yield return 3;
+        if (s.Dispersion is null) yield return 4;
+        if (s.ThermalProbe is null) yield return 5;
+        if (s.Electrical is null) yield return 6;
+        if (s.UvLong is null) yield return 7;
+        if (s.UvShort is null) yield return 8;
+        if (s.AbsorptionLinesNanometres is null) yield return 9;
     }
 
-    private static double MutualInformation(List<(Material Material, double P)> candidates, Func<Material, IEnumerable<(long, double)>> outcomes)
+    /// <summary>
+    /// Σ_m Σ_o π(m) P(o|m) log₂(P(o|m)/P(o)) for one test, from the materials' outcome tables. P(o) is added up in the
+    /// candidates' order in a scratch array indexed by the outcome's slot, which is cleared again after.
+    /// </summary>
+    private static double MutualInformation(List<(Material Material, double P)> candidates, OutcomeTables[] tables, int test)
     {
-        var perMaterial = candidates.Select(c => (c.P, Outcomes: outcomes(c.Material).ToList())).ToList();
-        var marginal = new Dictionary<long, double>();
-        foreach (var (p, list) in perMaterial)
-            foreach (var (o, q) in list)
-                marginal[o] = marginal.GetValueOrDefault(o) + p * q;
+        int size = 0;
+        for (int c = 0; c < candidates.Count; c++) size = Math.Max(size, tables[c].SlotCount[test]);
+        var scratch = t_marginal ??= new double[Tests.Length][];
+        if (scratch[test] is not { } marginal || marginal.Length < size) scratch[test] = marginal = new double[Math.Max(size, 2 * (scratch[test]?.Length ?? 0))];
+        for (int c = 0; c < candidates.Count; c++)
+        {
+            double p = candidates[c].P;
+            int[] slots = tables[c].Slots[test];
+            double[] q = tables[c].Probabilities[test];
+            for (int t = 0; t < slots.Length; t++) marginal[slots[t]] += p * q[t];
+        }
         double information = 0;
-        foreach (var (p, list) in perMaterial)
-            foreach (var (o, q) in list)
-                if (q > 0) information += p * q * Math.Log2(q / marginal[o]);
+        for (int c = 0; c < candidates.Count; c++)
+        {
+            double p = candidates[c].P;
+            int[] slots = tables[c].Slots[test];
+            double[] q = tables[c].Probabilities[test];
+            for (int t = 0; t < slots.Length; t++)
+                if (q[t] > 0) information += p * q[t] * Math.Log2(q[t] / marginal[slots[t]]);
+        }
+        for (int c = 0; c < candidates.Count; c++)
+            foreach (int slot in tables[c].Slots[test]) marginal[slot] = 0;
         return Math.Max(0, information);
+    }
+
+    /// <summary>Each thread's scratch marginals, one array per test (a batch runs the advisor on every core).</summary>
+    [ThreadStatic] private static double[][]? t_marginal;
+
+    /// <summary>
+    /// A material's possible answers to each test, worked out once per material rather than once per stone: every test's
+    /// outcomes as the outcome functions below give them, in their order, each outcome's key replaced by a slot number
+    /// shared by all materials; and the chance of seeing each magnification feature.
+    /// </summary>
+    private sealed class OutcomeTables
+    {
+        private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<Material, OutcomeTables> Known = new();
+        private static readonly Dictionary<long, int>[] KeySlots = [.. Tests.Select(_ => new Dictionary<long, int>())];
+
+        private OutcomeTables(Material m)
+        {
+            Slots = new int[Tests.Length][];
+            Probabilities = new double[Tests.Length][];
+            SlotCount = new int[Tests.Length];
+            for (int test = 0; test < Tests.Length; test++)
+            {
+                var outcomes = Tests[test].Outcomes(m).ToList();
+                Slots[test] = new int[outcomes.Count];
+                Probabilities[test] = new double[outcomes.Count];
+                var keys = KeySlots[test];
+                lock (keys)
+                    for (int t = 0; t < outcomes.Count; t++)
+                    {
+                        if (!keys.TryGetValue(outcomes[t].Item1, out int slot)) keys[outcomes[t].Item1] = slot = keys.Count;
+                        Slots[test][t] = slot;
+                        Probabilities[test][t] = outcomes[t].Item2;
+                        SlotCount[test] = Math.Max(SlotCount[test], slot + 1);
+                    }
+            }
+            Seen = [.. MagnificationVocabulary.All.Select(i => MagnificationEvidence.ProbabilityOfSeeing(m.MagnificationProfile, i.Feature))];
+        }
+
+        public static OutcomeTables Of(Material m) => Known.GetValue(m, material => new OutcomeTables(material));
+
+        /// <summary>Per test, each outcome's slot.</summary>
+        public int[][] Slots { get; }
+
+        /// <summary>Per test, each outcome's probability.</summary>
+        public double[][] Probabilities { get; }
+
+        /// <summary>Per test, one more than the largest slot used.</summary>
+        public int[] SlotCount { get; }
+
+        /// <summary>P(seen | looked for) of each feature, in the vocabulary's order.</summary>
+        public double[] Seen { get; }
     }
 
     private static IEnumerable<(long, double)> Binary(double pFirst) => [(0, pFirst), (1, 1 - pFirst)];

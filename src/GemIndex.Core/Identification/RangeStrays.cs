@@ -25,8 +25,12 @@ public static class RangeStrays
 
     /// <summary>Density of <paramref name="observed"/> under the range with soft edges σ, strays included.</summary>
     public static double Density(double observed, PropertyRange range, double sigma, double strayScale) =>
+        Density(observed, range, sigma, strayScale, double.Hypot(sigma, strayScale));
+
+    /// <summary><see cref="Density(double, PropertyRange, double, double)"/> with √(σ² + scale²) given (<paramref name="wideSigma"/>), for a caller that reuses it.</summary>
+    internal static double Density(double observed, PropertyRange range, double sigma, double strayScale, double wideSigma) =>
         (1 - Share) * RangeLikelihood.Density(observed, range, sigma)
-        + Share * RangeLikelihood.Density(observed, range, double.Hypot(sigma, strayScale));
+        + Share * RangeLikelihood.Density(observed, range, wideSigma);
 
     /// <summary>Two-sided tail of the distance outside the range under the same mixture (the fit of §4).</summary>
     public static double Tail(double observed, PropertyRange range, double sigma, double strayScale) =>

@@ -96,9 +96,7 @@ internal static class RefractometerEvidence
         double broad = sheet.BroadSeriesLogLikelihood;
         SectionLikelihood.Outcome outcome = Screened(prior, series, shift, shiftSigma)
             ? new(double.NegativeInfinity, 0)
-            : shiftSigma == 0 && shift == 0
-                ? sheet.SeriesOutcome(prior)
-                : SectionLikelihood.Evaluate(prior, series, shift, shiftSigma);
+            : sheet.SeriesOutcome(prior, shift, shiftSigma);
         double form = FormFactor(m, series);
         acc.AddLog(BenchField.Refractometer, outcome.LogLikelihood + Math.Log(form), broad, outcome.Tail * Math.Min(1, 2 * form), robust: true);
         if (acc.Explaining)
@@ -154,11 +152,12 @@ internal static class RefractometerEvidence
             : form < 1 ? "; a sharp edge followed round the stone is rarely seen on an aggregate, which gives a vague edge" : "");
     }
 
-    private static Part Index(string symbol, double observed, double sigma, PropertyRange range, double shift, double shiftSigma, bool words)
+    private static Part Index(string symbol, double observed, double sigma, PropertyRange range, double shift, double shiftSigma, bool words, bool fitting)
     {
         double x = observed + shift;
         double s = double.Hypot(sigma, shiftSigma);
-        return new Part(RangeStrays.Density(x, range, s, RangeStrays.IndexScale), BroadDensities.Index, RangeStrays.Tail(x, range, s, RangeStrays.IndexScale), !words ? "" :
+        return new Part(RangeStrays.Density(x, range, s, RangeStrays.IndexScale), BroadDensities.Index,
+            fitting ? RangeStrays.Tail(x, range, s, RangeStrays.IndexScale) : 1, !words ? "" :
             $"{symbol} {x.ToString("0.000", CultureInfo.InvariantCulture)} {EvidenceLikelihood.Where(x, range, s, "0.000")}");
     }
 
@@ -179,15 +178,15 @@ internal static class RefractometerEvidence
     {
         // A spot reading on a doubly refractive stone averages its edges: anywhere from the lowest to the highest index.
         var span = new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum);
-        var part = Index("spot reading", spot, sigma, span, shift, shiftSigma, acc.Explaining);
+        var part = Index("spot reading", spot, sigma, span, shift, shiftSigma, acc.Explaining, acc.Fitting);
         if (IsBlinkingAggregate(m, span))
         {
             // A strongly birefringent aggregate (coral, pearl, shell, the carbonates) shows the birefringence blink: the
             // spot is read at one end or the other of the span far more often than between them.
             var low = new PropertyRange(span.Minimum, span.Minimum + BlinkEndWidth);
             var high = new PropertyRange(span.Maximum - BlinkEndWidth, span.Maximum);
-            var atLow = Index("spot reading", spot, sigma, low, shift, shiftSigma, false);
-            var atHigh = Index("spot reading", spot, sigma, high, shift, shiftSigma, false);
+            var atLow = Index("spot reading", spot, sigma, low, shift, shiftSigma, false, acc.Fitting);
+            var atHigh = Index("spot reading", spot, sigma, high, shift, shiftSigma, false, acc.Fitting);
             double density = BlinkEndShare * (atLow.Likelihood + atHigh.Likelihood) + (1 - 2 * BlinkEndShare) * part.Likelihood;
             part = part with { Likelihood = density, Tail = Math.Max(part.Tail, Math.Max(atLow.Tail, atHigh.Tail)) };
         }
@@ -203,7 +202,7 @@ internal static class RefractometerEvidence
         double limit = r.LiquidLimit;
         const double sigma = 0.003; // where exactly the liquid's own edge hides a stone edge
         double p = RangeLikelihood.ProbabilityAbove(limit, range, sigma);
-        double tail = RangeLikelihood.TwoSidedTail(Math.Max(0, limit - range.Maximum) / sigma);
+        double tail = acc.Fitting ? RangeLikelihood.TwoSidedTail(Math.Max(0, limit - range.Maximum) / sigma) : 1;
         acc.Add(BenchField.Refractometer, p, hasReadings ? 0.3 : BroadDensities.OverLimit, tail, robust: true);
         if (acc.Explaining)
             acc.Say($"over the limit (n > {limit.ToString("0.000", CultureInfo.InvariantCulture)}): {(hasReadings ? "highest" : "lowest")} index {range.ToString("0.000")} expected");

@@ -1,6 +1,7 @@
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Readings;
+using System.Runtime.Intrinsics;
 using MathNet.Numerics;
 
 namespace GemIndex.Core.Identification;
@@ -51,12 +52,23 @@ internal static class SectionLikelihood
         var shapes = prior.Shapes;
         int count = shapes.Length;
         int orientations = prior.IsIsotropic ? 1 : FacetOrientationSet.Count;
-        var edges = new double[series.Count * count * 2];
-        var noise = new double[count];
+        var edges = prior.IsIsotropic ? Scratch(ref t_edges, series.Count * count * 2) : null;
         double offsetVariance = OffsetVariance(series, shiftSigma);
-        for (int s = 0; s < count; s++)
-            noise[s] = series.NoiseVariance + Square(QuadratureSpread * shapes[s].Birefringence);
         var nearLimit = NearLimit(series, prior);
+        // What does not change from orientation to orientation, once per shape.
+        var noise = new NoiseTerms[count];
+        Span<LevelSpread> spreads = stackalloc LevelSpread[count];
+        Span<double> logCeilings = stackalloc double[count], logWeights = stackalloc double[count];
+        for (int s = 0; s < count; s++)
+        {
+            noise[s] = NoiseTerms.For(series, nearLimit, series.NoiseVariance + Square(QuadratureSpread * shapes[s].Birefringence));
+            spreads[s] = noise[s].Spread(offsetVariance, shapes[s].ExtraSigma);
+            logCeilings[s] = LogCeiling(shapes[s], spreads[s].Sigma, prior.LevelDensity);
+            logWeights[s] = Math.Log(shapes[s].Weight);
+        }
+        double[]? geometry = prior.IsIsotropic ? null : series.CoarseGeometry;
+        int blockLength = GeometryLength(series.Count) * Block;
+        var blockEdges = geometry is null ? null : Scratch(ref t_blockEdges, series.Count * count * 2 * Block);
         var single = new LogSum();
         var oriented = new LogSum();
         var best = new SectionRefinement.Start[SectionRefinement.Starts];
@@ -65,15 +77,19 @@ internal static class SectionLikelihood
         int bestPoint = 0, bestShape = 0;
         for (int j = 0; j < orientations; j++)
         {
-            if (prior.IsIsotropic) IsotropicEdges(shapes, series.Count, edges);
-            else SectionEdges(FacetOrientationSet.Points[j], shapes, series, edges);
+            // The coarse orientations' edges are worked out a block at a time (the same arithmetic, lane by lane), then
+            // weighed one orientation after another as before.
+            int lane = j % Block;
+            if (geometry is null) IsotropicEdges(shapes, series.Count, edges!);
+            else if (lane == 0) BlockEdges(geometry.AsSpan(j / Block * blockLength, blockLength), shapes, series.Count, blockEdges!);
             for (int s = 0; s < count; s++)
             {
                 bool isotropic = shapes[s].Group < 0;
                 if (isotropic && j > 0) continue; // the same at every orientation
-                double logWeight = Math.Log(shapes[s].Weight);
-                var fit = Integrate(edges, s, count, series, noise[s], offsetVariance, shift, nearLimit, shapes[s], prior.LevelDensity,
-                    withTail: false, floor: Math.Max(single.Max, oriented.Max) - 40 - logWeight);
+                double logWeight = logWeights[s];
+                var at = geometry is null ? EdgeIndex.Interleaved(s, count) : new EdgeIndex(s * 2 * Block + lane, count * 2 * Block, Block);
+                var fit = Integrate((blockEdges ?? edges)!, at, series, noise[s], spreads[s], shift, nearLimit, shapes[s], prior.LevelDensity,
+                    withTail: false, floor: Math.Max(single.Max, oriented.Max) - 40 - logWeight, logCeiling: logCeilings[s]);
                 double value = fit.LogValue + logWeight;
                 if (isotropic) single.Include(value);
                 else
@@ -84,7 +100,7 @@ internal static class SectionLikelihood
                 if (value > bestScore) (bestScore, bestPoint, bestShape) = (value, j, s);
             }
         }
-        if (double.IsFinite(bestScore)) bestTail = TailAt(prior, series, shift, offsetVariance, nearLimit, noise, bestPoint, bestShape);
+        if (double.IsFinite(bestScore)) bestTail = TailAt(prior, series, shift, nearLimit, noise[bestShape], spreads[bestShape], bestPoint, bestShape);
         double coarse = oriented.Log - Math.Log(orientations);
         double refinedTail = 0;
         double refined = prior.IsIsotropic ? double.NegativeInfinity
@@ -93,15 +109,50 @@ internal static class SectionLikelihood
         return new Outcome(LogSum.Add(single.Log, coarse), bestTail);
     }
 
+    // Each thread's edge buffers for Evaluate (every entry it reads is written first in the same call).
+    [ThreadStatic] private static double[]? t_edges, t_blockEdges;
+
+    private static double[] Scratch(ref double[]? buffer, int length) =>
+        buffer is { } known && known.Length >= length ? known : buffer = new double[length];
+
     /// <summary>The goodness of fit at one coarse point (worked out once, for the best point only: it costs an incomplete gamma function).</summary>
-    private static double TailAt(IndicatrixPrior prior, SeriesObservation series, double shift, double offsetVariance, bool[]? nearLimit,
-        double[] noise, int point, int shape)
+    private static double TailAt(IndicatrixPrior prior, SeriesObservation series, double shift, bool[]? nearLimit,
+        in NoiseTerms noise, in LevelSpread spread, int point, int shape)
     {
         var edges = new double[series.Count * prior.Shapes.Length * 2];
         if (prior.IsIsotropic) IsotropicEdges(prior.Shapes, series.Count, edges);
         else SectionEdges(FacetOrientationSet.Points[point], prior.Shapes, series, edges);
-        return Integrate(edges, shape, prior.Shapes.Length, series, noise[shape], offsetVariance, shift, nearLimit, prior.Shapes[shape], prior.LevelDensity).Tail;
+        return Integrate(edges, EdgeIndex.Interleaved(shape, prior.Shapes.Length), series, noise, spread, shift, nearLimit, prior.Shapes[shape], prior.LevelDensity).Tail;
     }
+
+    /// <summary>
+    /// What <see cref="Integrate"/> needs of a reading variance σ² on this series, worked out once rather than at every
+    /// orientation: how many readings enter (fixed by the steps and the censored ones), √(2σ²) for the edge count, and the
+    /// Gaussian's normaliser −½(n − 1) ln 2πσ² − ½ ln n.
+    /// </summary>
+    internal readonly record struct NoiseTerms(double Noise, int Readings, double SeparationSigma, double Normaliser)
+    {
+        public static NoiseTerms For(SeriesObservation series, bool[]? nearLimit, double noise)
+        {
+            int n = 0;
+            for (int k = 0; k < series.Count; k++) n += nearLimit is not null && nearLimit[k] ? 1 : series.TwoEdges[k] ? 2 : 1;
+            return new NoiseTerms(noise, n, Math.Sqrt(2 * noise), -0.5 * (n - 1) * Math.Log(2 * Math.PI * noise) - 0.5 * Math.Log(n));
+        }
+
+        /// <summary>The spread of the readings' mean about the level: √(σ²/n + offset variance + extra²).</summary>
+        public LevelSpread Spread(double offsetVariance, double extraSigma) => new(Math.Sqrt(Noise / Readings + offsetVariance + Square(extraSigma)));
+    }
+
+    /// <summary>The spread of the readings' mean about the level, and the same widened by the strays' scale (RangeStrays).</summary>
+    internal readonly record struct LevelSpread(double Sigma)
+    {
+        /// <summary>√(σ² + <see cref="RangeStrays.IndexScale"/>²).</summary>
+        public double Wide { get; } = double.Hypot(Sigma, RangeStrays.IndexScale);
+    }
+
+    /// <summary>ln of the most the level's density can be: 1/max(width, spread·√(2π)), or the broad density.</summary>
+    private static double LogCeiling(in IndicatrixPrior.Shape shape, double spread, double levelDensity) =>
+        Math.Log(levelDensity > 0 ? levelDensity : 1 / Math.Max(shape.LevelHigh - shape.LevelLow, spread * 2.5066282746310002));
 
     /// <summary>Variance of the common shift besides the level: the per-stone offset, the soft catalogue edges, the light's correction.</summary>
     internal static double OffsetVariance(SeriesObservation series, double shiftSigma) =>
@@ -119,18 +170,151 @@ internal static class SectionLikelihood
     /// <summary>The two edges of every step and shape for one orientation: n = λ^(−1/2) for the eigenvalues λ of BᵀMB.</summary>
     internal static void SectionEdges(in FacetOrientation o, IndicatrixPrior.Shape[] shapes, SeriesObservation series, double[] edges)
     {
+        int length = GeometryLength(series.Count);
+        Span<double> geometry = length <= 256 ? stackalloc double[length] : new double[length];
+        Geometry(o, series, geometry);
+        SectionEdges(geometry, shapes, series.Count, edges);
+    }
+
+    /// <summary>
+    /// The edges of every step for one orientation and one shape (the refinement's case), <see cref="Block"/> steps at a
+    /// time: lows at 0…, highs at <see cref="SeriesObservation.PaddedCount"/>…; the same arithmetic as the per-step
+    /// <see cref="Geometry"/> and <see cref="SectionEdges(ReadOnlySpan{double}, IndicatrixPrior.Shape[], int, double[])"/>,
+    /// so the same bits. Lanes past the last step hold whatever a zero rotation vector gives and are never read.
+    /// </summary>
+    internal static void SectionEdges(in FacetOrientation o, in IndicatrixPrior.Shape shape, SeriesObservation series, double[] edges)
+    {
         var (nx, ny, nz) = (o.Normal.X, o.Normal.Y, o.Normal.Z);
-        double nxx = nx * nx, nyy = ny * ny, nzz = nz * nz;
+        double p = nx * nx * shape.InverseSquareX + ny * ny * shape.InverseSquareY + nz * nz * shape.InverseSquareZ;
+        double senseSin = o.Sense * o.SinStart, senseCos = o.Sense * o.CosStart;
+        var half = Vector512.Create(0.5);
+        var normal = Vector512.Create(p);
+        int padded = series.PaddedCount;
+        for (int k = 0; k < padded; k += Block)
+        {
+            var cos = Vector512.Create(series.PaddedCos.AsSpan(k, Block));
+            var sin = Vector512.Create(series.PaddedSin.AsSpan(k, Block));
+            var c = o.CosStart * cos - senseSin * sin;
+            var s = o.SinStart * cos + senseCos * sin;
+            var tx = c * o.V.X - s * o.U.X;
+            var ty = c * o.V.Y - s * o.U.Y;
+            var tz = c * o.V.Z - s * o.U.Z;
+            var q = tx * tx * shape.InverseSquareX + ty * ty * shape.InverseSquareY + tz * tz * shape.InverseSquareZ;
+            var r = nx * tx * shape.InverseSquareX + ny * ty * shape.InverseSquareY + nz * tz * shape.InverseSquareZ;
+            Vector512<double> mean = (normal + q) * half, difference = (normal - q) * half;
+            var spread = Vector512.Sqrt(difference * difference + r * r);
+            (Vector512<double>.One / Vector512.Sqrt(mean + spread)).CopyTo(edges, k);
+            (Vector512<double>.One / Vector512.Sqrt(mean - spread)).CopyTo(edges, padded + k);
+        }
+    }
+
+    /// <summary>The length of one orientation's geometry (<see cref="Geometry"/>) for a series of this many steps.</summary>
+    internal static int GeometryLength(int steps) => 3 + 6 * steps;
+
+    /// <summary>How many coarse orientations are worked out together (<see cref="BlockEdges"/>; the coarse set is a multiple of it).</summary>
+    private const int Block = 8;
+
+    /// <summary>
+    /// The geometry of every coarse orientation for the series (<see cref="Geometry"/>), in blocks of <see cref="Block"/>
+    /// orientations, each quantity's values of the block side by side: it is the same for every material, so the series
+    /// keeps it (<see cref="SeriesObservation.CoarseGeometry"/>).
+    /// </summary>
+    internal static double[] CoarseGeometry(SeriesObservation series)
+    {
+        int length = GeometryLength(series.Count);
+        // Whole blocks; lanes past the set's end stay zero and are never read.
+        var geometry = new double[(FacetOrientationSet.Count + Block - 1) / Block * Block * length];
+        var one = new double[length];
+        for (int j = 0; j < FacetOrientationSet.Count; j++)
+        {
+            Geometry(FacetOrientationSet.Points[j], series, one);
+            int block = j / Block * Block * length, lane = j % Block;
+            for (int q = 0; q < length; q++) geometry[block + q * Block + lane] = one[q];
+        }
+        return geometry;
+    }
+
+    /// <summary>
+    /// What the edges take of one orientation and the steps' rotations: N's squared components, then for each step the
+    /// squared components of t (in the facet, across the direction of travel) and N's products with them.
+    /// </summary>
+    private static void Geometry(in FacetOrientation o, SeriesObservation series, Span<double> geometry)
+    {
+        var (nx, ny, nz) = (o.Normal.X, o.Normal.Y, o.Normal.Z);
+        geometry[0] = nx * nx;
+        geometry[1] = ny * ny;
+        geometry[2] = nz * nz;
         for (int k = 0; k < series.Count; k++)
         {
             double c = o.CosStart * series.Cos[k] - o.Sense * o.SinStart * series.Sin[k];
             double s = o.SinStart * series.Cos[k] + o.Sense * o.CosStart * series.Sin[k];
             double tx = c * o.V.X - s * o.U.X, ty = c * o.V.Y - s * o.U.Y, tz = c * o.V.Z - s * o.U.Z;
-            double txx = tx * tx, tyy = ty * ty, tzz = tz * tz, ntx = nx * tx, nty = ny * ty, ntz = nz * tz;
+            var step = geometry.Slice(3 + 6 * k, 6);
+            step[0] = tx * tx;
+            step[1] = ty * ty;
+            step[2] = tz * tz;
+            step[3] = nx * tx;
+            step[4] = ny * ty;
+            step[5] = nz * tz;
+        }
+    }
+
+    /// <summary>
+    /// The edges of every step and shape for a block of coarse orientations, from the block's geometry: the same arithmetic
+    /// as <see cref="SectionEdges(ReadOnlySpan{double}, IndicatrixPrior.Shape[], int, double[])"/> (IEEE products, sums,
+    /// square roots and quotients, so the same bits), <see cref="Block"/> orientations at a time. Step k's edges of shape
+    /// i for the block's orientation l are at ((k·shapes + i)·2 + 0 or 1)·Block + l.
+    /// </summary>
+    private static void BlockEdges(ReadOnlySpan<double> geometry, IndicatrixPrior.Shape[] shapes, int steps, double[] edges)
+    {
+        var nxx = Vector512.Create(geometry[..Block]);
+        var nyy = Vector512.Create(geometry.Slice(Block, Block));
+        var nzz = Vector512.Create(geometry.Slice(2 * Block, Block));
+        var half = Vector512.Create(0.5);
+        Span<Vector512<double>> normal = shapes.Length <= 16 ? stackalloc Vector512<double>[shapes.Length] : new Vector512<double>[shapes.Length];
+        for (int i = 0; i < shapes.Length; i++)
+            normal[i] = nxx * shapes[i].InverseSquareX + nyy * shapes[i].InverseSquareY + nzz * shapes[i].InverseSquareZ;
+        for (int k = 0; k < steps; k++)
+        {
+            var step = geometry.Slice((3 + 6 * k) * Block, 6 * Block);
+            var txx = Vector512.Create(step[..Block]);
+            var tyy = Vector512.Create(step.Slice(Block, Block));
+            var tzz = Vector512.Create(step.Slice(2 * Block, Block));
+            var ntx = Vector512.Create(step.Slice(3 * Block, Block));
+            var nty = Vector512.Create(step.Slice(4 * Block, Block));
+            var ntz = Vector512.Create(step.Slice(5 * Block, Block));
             for (int i = 0; i < shapes.Length; i++)
             {
                 ref readonly var shape = ref shapes[i];
-                double p = nxx * shape.InverseSquareX + nyy * shape.InverseSquareY + nzz * shape.InverseSquareZ;
+                var p = normal[i];
+                var q = txx * shape.InverseSquareX + tyy * shape.InverseSquareY + tzz * shape.InverseSquareZ;
+                var r = ntx * shape.InverseSquareX + nty * shape.InverseSquareY + ntz * shape.InverseSquareZ;
+                // x·½ is x/2 exactly.
+                Vector512<double> mean = (p + q) * half, difference = (p - q) * half;
+                var spread = Vector512.Sqrt(difference * difference + r * r);
+                int at = (k * shapes.Length + i) * 2 * Block;
+                (Vector512<double>.One / Vector512.Sqrt(mean + spread)).CopyTo(edges, at);
+                (Vector512<double>.One / Vector512.Sqrt(mean - spread)).CopyTo(edges, at + Block);
+            }
+        }
+    }
+
+    /// <summary>The edges of every step and shape from one orientation's <see cref="Geometry"/>.</summary>
+    private static void SectionEdges(ReadOnlySpan<double> geometry, IndicatrixPrior.Shape[] shapes, int steps, double[] edges)
+    {
+        double nxx = geometry[0], nyy = geometry[1], nzz = geometry[2];
+        // N·M·N does not depend on the step.
+        Span<double> normal = shapes.Length <= 64 ? stackalloc double[shapes.Length] : new double[shapes.Length];
+        for (int i = 0; i < shapes.Length; i++)
+            normal[i] = nxx * shapes[i].InverseSquareX + nyy * shapes[i].InverseSquareY + nzz * shapes[i].InverseSquareZ;
+        for (int k = 0; k < steps; k++)
+        {
+            var step = geometry.Slice(3 + 6 * k, 6);
+            double txx = step[0], tyy = step[1], tzz = step[2], ntx = step[3], nty = step[4], ntz = step[5];
+            for (int i = 0; i < shapes.Length; i++)
+            {
+                ref readonly var shape = ref shapes[i];
+                double p = normal[i];
                 double q = txx * shape.InverseSquareX + tyy * shape.InverseSquareY + tzz * shape.InverseSquareZ;
                 double r = ntx * shape.InverseSquareX + nty * shape.InverseSquareY + ntz * shape.InverseSquareZ;
                 double mean = (p + q) / 2, half = (p - q) / 2;
@@ -159,52 +343,76 @@ internal static class SectionLikelihood
     /// ∫ Π N(rᵢ; c, σ²) p(c) dc = (2πσ²)^(−(n−1)/2) n^(−1/2) exp(−Σ(rᵢ − r̄)²/2σ²) · [p ∗ N(0, σ²/n)](r̄), p the level's
     /// uniform density (or the broad one) convolved with the offset's normal.
     /// </summary>
-    internal static PointFit Integrate(double[] edges, int s, int count, SeriesObservation series, double noise, double offsetVariance,
-        double shift, bool[]? nearLimit, in IndicatrixPrior.Shape shape, double levelDensity, bool withTail = true, double floor = double.NegativeInfinity, double[]? residuals = null)
+    /// <remarks>
+    /// <paramref name="floor"/>: below it the point is left out (−∞); the test takes the level's density at its ceiling
+    /// (<paramref name="logCeiling"/>, worked out here when not given). <paramref name="spread"/> is
+    /// <see cref="NoiseTerms.Spread"/> for this shape.
+    /// </remarks>
+    internal static PointFit Integrate(double[] edges, EdgeIndex index, SeriesObservation series, in NoiseTerms terms, in LevelSpread spread,
+        double shift, bool[]? nearLimit, in IndicatrixPrior.Shape shape, double levelDensity, bool withTail = true, double floor = double.NegativeInfinity,
+        double logCeiling = double.NaN, double[]? residuals = null)
     {
-        int n = 0;
-        double sum = 0, sum2 = 0, factor = 1, logFactor = 0;
-        double separationSigma = Math.Sqrt(2 * noise);
-        for (int k = 0; k < series.Count; k++)
+        int steps = series.Count;
+        Span<double> seen = steps <= 64 ? stackalloc double[steps] : new double[steps];
+        EachSeenAsTwo(edges, index, steps, terms.SeparationSigma, seen);
+        var sums = new Sums { Factor = 1 };
+        for (int k = 0; k < steps; k++)
         {
             if (nearLimit is not null && nearLimit[k]) continue;
-            int at = (k * count + s) * 2;
-            double low = edges[at], high = edges[at + 1];
-            double seenAsTwo = SeenAsTwo(high - low, separationSigma);
+            int at = index.Start + k * index.Step;
+            double low = edges[at], high = edges[at + index.Pair];
+            double seenAsTwo = seen[k];
             if (series.TwoEdges[k])
             {
                 double a = series.Low[k] + shift - low, b = series.High[k] + shift - high;
-                if (residuals is not null) { residuals[n] = a; residuals[n + 1] = b; }
-                n += 2; sum += a + b; sum2 += a * a + b * b;
-                factor *= seenAsTwo;
+                if (residuals is not null) { residuals[sums.N] = a; residuals[sums.N + 1] = b; }
+                sums.N += 2; sums.Sum += a + b; sums.Sum2 += a * a + b * b;
+                sums.Factor *= seenAsTwo;
             }
             else
             {
                 double a = series.Low[k] + shift - (low + high) / 2;
-                if (residuals is not null) residuals[n] = a;
-                n++; sum += a; sum2 += a * a;
-                factor *= 1 - seenAsTwo;
+                if (residuals is not null) residuals[sums.N] = a;
+                sums.N++; sums.Sum += a; sums.Sum2 += a * a;
+                sums.Factor *= 1 - seenAsTwo;
             }
-            if (factor < 1e-200) { logFactor += Math.Log(factor); factor = 1; }
+            if (sums.Factor < 1e-200) { sums.LogFactor += Math.Log(sums.Factor); sums.Factor = 1; }
         }
         if (nearLimit is not null)
-            Censored(series, edges, s, count, noise, shift, nearLimit, separationSigma, residuals, ref n, ref sum, ref sum2, ref factor);
-        logFactor += Math.Log(factor);
-        double mean = sum / n;
-        double squares = Math.Max(0, sum2 - sum * mean);
-        double gaussian = -0.5 * (n - 1) * Math.Log(2 * Math.PI * noise) - 0.5 * Math.Log(n) - squares / (2 * noise);
-        double spread = Math.Sqrt(noise / n + offsetVariance + Square(shape.ExtraSigma));
+            Censored(series, edges, index, terms.Noise, shift, nearLimit, seen, residuals, ref sums);
+        return Finish(sums, terms, spread, shape, levelDensity, withTail, floor, logCeiling, residuals);
+    }
+
+    /// <summary>What the steps add up to at one orientation and shape: the readings' count, Σr, Σr², and the edge-count factor (rescaled into its log part).</summary>
+    private struct Sums
+    {
+        public int N;
+        public double Sum, Sum2, Factor, LogFactor;
+    }
+
+    /// <summary>The closed-form integral over the common shift from the steps' sums (the second half of <see cref="Integrate"/>).</summary>
+    private static PointFit Finish(in Sums sums, in NoiseTerms terms, in LevelSpread spread, in IndicatrixPrior.Shape shape, double levelDensity, bool withTail,
+        double floor, double logCeiling, double[]? residuals)
+    {
+        int n = sums.N;
+        double noise = terms.Noise;
+        double logFactor = sums.LogFactor + Math.Log(sums.Factor);
+        double mean = sums.Sum / n;
+        double squares = Math.Max(0, sums.Sum2 - sums.Sum * mean);
+        // n is terms.Readings: the steps and the censored ones fix it.
+        double gaussian = terms.Normaliser - squares / (2 * noise);
         // The level's density is at most 1/max(width, spread·√(2π)) (or the broad density): skip it when even that cannot matter.
-        double ceiling = levelDensity > 0 ? levelDensity : 1 / Math.Max(shape.LevelHigh - shape.LevelLow, spread * 2.5066282746310002);
-        if (gaussian + logFactor + Math.Log(ceiling) < floor) return new PointFit(double.NegativeInfinity, 0);
+        if (floor > double.NegativeInfinity
+            && gaussian + logFactor + (double.IsNaN(logCeiling) ? LogCeiling(shape, spread.Sigma, levelDensity) : logCeiling) < floor)
+            return new PointFit(double.NegativeInfinity, 0);
         double density = LevelDensity(mean, shape.LevelLow, shape.LevelHigh, spread, levelDensity);
         if (!(density > 0)) return new PointFit(double.NegativeInfinity, 0);
         if (residuals is not null) for (int i = 0; i < n; i++) residuals[i] -= mean; // centred: what the orientation and shape must explain
         if (!withTail) return new PointFit(gaussian + logFactor + Math.Log(density), 0, n);
         var level = new PropertyRange(shape.LevelLow, shape.LevelHigh);
         double levelTail = levelDensity > 0
-            ? RangeLikelihood.TwoSidedTail(RangeLikelihood.StandardDeviationsOutside(mean, level, spread))
-            : RangeStrays.Tail(mean, level, spread, RangeStrays.IndexScale);
+            ? RangeLikelihood.TwoSidedTail(RangeLikelihood.StandardDeviationsOutside(mean, level, spread.Sigma))
+            : RangeStrays.Tail(mean, level, spread.Sigma, RangeStrays.IndexScale);
         int freedom = Math.Max(1, n - 4); // three orientation angles and the level are fitted
         double tail = SpecialFunctions.GammaUpperRegularized(freedom / 2.0, squares / noise / 2) * levelTail
                       * Math.Min(1, Math.Exp(logFactor) / 0.5);
@@ -216,51 +424,91 @@ internal static class SectionLikelihood
     /// above the limit (censored: edge &gt; limit − margin). Both are weighed at the shift fitted from the other steps (a
     /// plug-in: the shift is pinned far more tightly than either branch varies) and the likelier one is kept.
     /// </summary>
-    private static void Censored(SeriesObservation series, double[] edges, int s, int count, double noise, double shift, bool[] nearLimit,
-        double separationSigma, double[]? residuals, ref int n, ref double sum, ref double sum2, ref double factor)
+    private static void Censored(SeriesObservation series, double[] edges, EdgeIndex index, double noise, double shift, bool[] nearLimit,
+        ReadOnlySpan<double> seen, double[]? residuals, ref Sums sums)
     {
-        double fitted = n > 0 ? sum / n : Fallback(series, edges, s, count, shift, nearLimit);
+        double fitted = sums.N > 0 ? sums.Sum / sums.N : Fallback(series, edges, index, shift, nearLimit);
         double sigma = Math.Sqrt(noise);
         double threshold = series.LiquidLimit - SeriesObservation.LiquidEdgeMargin;
         for (int k = 0; k < series.Count; k++)
         {
             if (!nearLimit[k]) continue;
-            int at = (k * count + s) * 2;
-            double low = edges[at], high = edges[at + 1];
+            int at = index.Start + k * index.Step;
+            double low = edges[at], high = edges[at + index.Pair];
             double merged = series.Low[k] + shift - (low + high) / 2, alone = series.Low[k] + shift - low;
-            double pOne = 1 - SeenAsTwo(high - low, separationSigma);
+            double pOne = 1 - seen[k];
             double pHiddenEdge = RangeLikelihood.Phi((high + fitted - shift - threshold) / sigma);
             bool hidden = pHiddenEdge * Math.Exp(-Square(alone - fitted) / (2 * noise)) > pOne * Math.Exp(-Square(merged - fitted) / (2 * noise));
             double a = hidden ? alone : merged;
-            if (residuals is not null) residuals[n] = a;
-            n++; sum += a; sum2 += a * a;
-            factor *= Math.Max(hidden ? pHiddenEdge : pOne, 1e-300);
+            if (residuals is not null) residuals[sums.N] = a;
+            sums.N++; sums.Sum += a; sums.Sum2 += a * a;
+            sums.Factor *= Math.Max(hidden ? pHiddenEdge : pOne, 1e-300);
         }
     }
 
-    private static double Fallback(SeriesObservation series, double[] edges, int s, int count, double shift, bool[] nearLimit)
+    private static double Fallback(SeriesObservation series, double[] edges, EdgeIndex index, double shift, bool[] nearLimit)
     {
         double total = 0;
         int n = 0;
         for (int k = 0; k < series.Count; k++)
-            if (nearLimit[k]) { total += series.Low[k] + shift - edges[(k * count + s) * 2]; n++; }
+            if (nearLimit[k]) { total += series.Low[k] + shift - edges[index.Start + k * index.Step]; n++; }
         return total / n;
     }
 
-    /// <summary>The level's density at r̄: uniform on [low, high] (or the given density there) convolved with N(0, s²).</summary>
-    private static double LevelDensity(double mean, double low, double high, double s, double density)
+    /// <summary>
+    /// Where one orientation and shape's edges lie in an edge buffer: step k's low edge at Start + k·Step, its high edge
+    /// Pair after it.
+    /// </summary>
+    internal readonly record struct EdgeIndex(int Start, int Step, int Pair)
     {
-        double width = high - low;
+        /// <summary>Shape s of <paramref name="count"/> in the layout <see cref="SectionEdges(in FacetOrientation, IndicatrixPrior.Shape[], SeriesObservation, double[])"/> writes.</summary>
+        public static EdgeIndex Interleaved(int s, int count) => new(s * 2, count * 2, 1);
+    }
+
+    /// <summary>The level's density at r̄: uniform on [low, high] (or the given density there) convolved with N(0, s²).</summary>
+    private static double LevelDensity(double mean, double low, double high, in LevelSpread spread, double density)
+    {
+        double s = spread.Sigma;
         if (density > 0) return density * (RangeLikelihood.Phi((high - mean) / s) - RangeLikelihood.Phi((low - mean) / s));
         // A catalogue level: its stones with soft edges, and the strays beyond its range (RangeStrays).
-        return RangeStrays.Density(mean, new PropertyRange(low, high), s, RangeStrays.IndexScale);
+        return RangeStrays.Density(mean, new PropertyRange(low, high), s, RangeStrays.IndexScale, spread.Wide);
     }
 
     /// <summary>P(two edges written | true separation): Φ((separation − resolution)/σ), with the misreading floor.</summary>
-    internal static double SeenAsTwo(double separation, double sigma) =>
-        EdgeCountMisread + (1 - 2 * EdgeCountMisread) * FastPhi((separation - SeriesObservation.EdgeResolution) / sigma);
+    internal static double SeenAsTwo(double separation, double sigma) => SeenAsTwoAt((separation - SeriesObservation.EdgeResolution) / sigma);
+
+    /// <summary><see cref="SeenAsTwo(double, double)"/> at z = (separation − resolution)/σ.</summary>
+    private static double SeenAsTwoAt(double z) => EdgeCountMisread + (1 - 2 * EdgeCountMisread) * FastPhi(z);
+
+    /// <summary>
+    /// <see cref="SeenAsTwo(double, double)"/> of every step's edges; with the edges of consecutive steps side by side, the quotients are
+    /// taken eight at a time (the same IEEE quotients).
+    /// </summary>
+    private static void EachSeenAsTwo(double[] edges, EdgeIndex index, int steps, double sigma, Span<double> seen)
+    {
+        int k = 0;
+        int padded = (steps + Block - 1) / Block * Block;
+        if (index.Step == 1 && index.Start + index.Pair + padded <= edges.Length)
+        {
+            var resolution = Vector512.Create(SeriesObservation.EdgeResolution);
+            var sigmas = Vector512.Create(sigma);
+            for (; k < steps; k += Block)
+            {
+                var low = Vector512.Create(edges.AsSpan(index.Start + k, Block));
+                var high = Vector512.Create(edges.AsSpan(index.Start + index.Pair + k, Block));
+                var z = (high - low - resolution) / sigmas;
+                for (int lane = 0; lane < Block && k + lane < steps; lane++) seen[k + lane] = SeenAsTwoAt(z[lane]);
+            }
+        }
+        for (; k < steps; k++)
+        {
+            int at = index.Start + k * index.Step;
+            seen[k] = SeenAsTwo(edges[at + index.Pair] - edges[at], sigma);
+        }
+    }
 
     /// <summary>Φ by linear interpolation in a table at steps of 0.01 over ±6 (error below 10⁻⁵; enough beside the misreading floor).</summary>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
     private static double FastPhi(double z)
     {
         if (z <= -6) return 0;

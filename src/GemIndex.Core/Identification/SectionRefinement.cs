@@ -79,19 +79,42 @@ internal static class SectionRefinement
         private readonly FacetOrientation _origin;
         private readonly double[] _edges;
         private readonly double[] _x;
-        private readonly IndicatrixPrior.Shape[] _one = new IndicatrixPrior.Shape[1];
+        private readonly double _scale;
+        // The level's spread for the last shape's extra σ (the same for almost every shape of a family).
+        private long _spreadExtra = -1;
+        private SectionLikelihood.LevelSpread _spread;
+        // The start's azimuth at the origin (biaxial): the climb moves it by δ.
+        private readonly double _startAzimuth;
+        // What the last point worked out shares with its neighbours, and the same for the climb's current point (its
+        // anchor): the Jacobian and the curvature move one or two coordinates at a time, so many of their points have the
+        // anchor's shape or the anchor's facet normal. Kept with the coordinates they were worked out from (compared bit for bit).
+        private Polar _last, _anchorPolar;
+        private ShapeAtPoint _lastShape, _anchorShape;
+
+        private readonly record struct Polar(long First, long Second, Direction Normal, Direction Travel, Direction V, double LogDensity);
+
+        private readonly record struct ShapeAtPoint(long B, long U, IndicatrixPrior.Shape? Shape, double LogWeight);
+
+        private static readonly double LogPi = Math.Log(Math.PI);
+        private static readonly Direction AlongY = Direction.AlongY;
+        private readonly SectionLikelihood.NoiseTerms _noise;
 
         public Peak(IndicatrixPrior prior, SeriesObservation series, double shift, double offsetVariance, bool[]? nearLimit,
             IndicatrixPrior.Shape shape, FacetOrientation origin)
         {
             (_prior, _series, _shift, _offsetVariance, _nearLimit, _origin) = (prior, series, shift, offsetVariance, nearLimit, origin);
+            _noise = SectionLikelihood.NoiseTerms.For(series, nearLimit, series.NoiseVariance);
             _group = shape.Group;
             _family = prior.Families[_group];
             _biaxial = _family.Biaxial;
             _freeBirefringence = _family.BirefringenceHigh - _family.BirefringenceLow >= IndicatrixPrior.NarrowBox;
             var (uLow, uHigh) = _biaxial ? IndicatrixPrior.BetaBox(_family, shape.Birefringence) : (0, 0);
             _freeBeta = _biaxial && uHigh - uLow >= IndicatrixPrior.NarrowBox;
-            _edges = new double[series.Count * 2];
+            _edges = new double[2 * series.PaddedCount];
+            _scale = 1 / Math.Sqrt(series.NoiseVariance);
+            _startAzimuth = Math.Atan2(origin.SinStart, origin.CosStart);
+            _last = _anchorPolar = new Polar(-1, -1, default, default, default, 0);
+            _lastShape = _anchorShape = new ShapeAtPoint(-1, -1, null, 0);
             var x = new List<double>();
             if (_biaxial) x.AddRange([0, 0, 0]);
             else x.AddRange(UniaxialStart(origin));
@@ -130,41 +153,102 @@ internal static class SectionRefinement
             int i = _biaxial ? 3 : 2;
             double b = _freeBirefringence ? x[i++] * ShapeUnit : _fixedBirefringence;
             double u = _freeBeta ? x[i] * ShapeUnit : _fixedBeta;
-            if (IndicatrixPrior.ShapeAt(_family, _group, b, u) is not { } shape || !(shape.Weight > 0)) return double.NegativeInfinity;
-            _one[0] = shape;
+            long bBits = BitConverter.DoubleToInt64Bits(b), uBits = BitConverter.DoubleToInt64Bits(u);
+            var at = bBits == _anchorShape.B && uBits == _anchorShape.U ? _anchorShape
+                : bBits == _lastShape.B && uBits == _lastShape.U ? _lastShape
+                : IndicatrixPrior.ShapeAt(_family, _group, b, u) is { } found
+                    ? new ShapeAtPoint(bBits, uBits, found, Math.Log(found.Weight)) : new ShapeAtPoint(bBits, uBits, null, 0);
+            _lastShape = at;
+            if (at.Shape is not { } shape || !(shape.Weight > 0)) return double.NegativeInfinity;
             var (orientation, logDensity) = Orientation(x);
-            SectionLikelihood.SectionEdges(orientation, _one, _series, _edges);
-            var fit = SectionLikelihood.Integrate(_edges, 0, 1, _series, _series.NoiseVariance, _offsetVariance, _shift, _nearLimit, shape,
-                _prior.LevelDensity, withTail: final, residuals: residuals);
+            SectionLikelihood.SectionEdges(orientation, shape, _series, _edges);
+            long extraBits = BitConverter.DoubleToInt64Bits(shape.ExtraSigma);
+            if (extraBits != _spreadExtra) (_spreadExtra, _spread) = (extraBits, _noise.Spread(_offsetVariance, shape.ExtraSigma));
+            var fit = SectionLikelihood.Integrate(_edges, new SectionLikelihood.EdgeIndex(0, 1, _series.PaddedCount), _series, _noise,
+                _spread, _shift, _nearLimit, shape, _prior.LevelDensity, withTail: final, residuals: residuals);
             tail = fit.Tail;
             count = fit.Readings;
-            double scale = 1 / Math.Sqrt(_series.NoiseVariance);
+            double scale = _scale;
             for (int k = 0; k < count; k++) residuals[k] *= scale;
-            return fit.LogValue + Math.Log(shape.Weight) + logDensity;
+            return fit.LogValue + at.LogWeight + logDensity;
         }
 
         /// <summary>The orientation at x and the log of its density (uniform over the octant, the start and the sense: 1/π²).</summary>
         private (FacetOrientation, double) Orientation(double[] x)
         {
+            long first = BitConverter.DoubleToInt64Bits(x[0]), second = _biaxial ? BitConverter.DoubleToInt64Bits(x[1]) : 0;
+            var polar = first == _anchorPolar.First && second == _anchorPolar.Second ? _anchorPolar
+                : first == _last.First && second == _last.Second ? _last
+                : NewPolar(x, first, second);
+            _last = polar;
             if (!_biaxial)
             {
-                double theta = x[0], psi = x[1];
-                var n = new Direction(Math.Sin(theta), 0, Math.Cos(theta));
-                var u = new Direction(Math.Cos(theta), 0, -Math.Sin(theta));
-                // Density of (θ, ψ0): sin θ over θ in [0°, 90°], times 1/π over ψ0.
-                return (new FacetOrientation(n, u, Direction.AlongY, Math.Cos(psi), Math.Sin(psi), 1), Math.Log(Math.Abs(Math.Sin(theta)) + 1e-300) - Math.Log(Math.PI));
+                double psi = x[1];
+                return (new FacetOrientation(polar.Normal, polar.Travel, polar.V, Math.Cos(psi), Math.Sin(psi), 1), polar.LogDensity);
             }
-            double a = x[0], c = x[1], delta = x[2];
+            double start = _startAzimuth + x[2];
+            return (new FacetOrientation(polar.Normal, polar.Travel, polar.V, Math.Cos(start), Math.Sin(start), _origin.Sense), polar.LogDensity);
+        }
+
+        /// <summary>The facet normal, the travel basis and the log density for the polar coordinates (θ; or a and c).</summary>
+        private Polar NewPolar(double[] x, long first, long second)
+        {
+            if (!_biaxial)
+            {
+                double theta = x[0], sin = Math.Sin(theta), cos = Math.Cos(theta);
+                var n = new Direction(sin, 0, cos);
+                var u = new Direction(cos, 0, -sin);
+                // Density of (θ, ψ0): sin θ over θ in [0°, 90°], times 1/π over ψ0.
+                return new Polar(first, second, n, u, AlongY, Math.Log(Math.Abs(sin) + 1e-300) - LogPi);
+            }
+            double a = x[0], c = x[1];
             var o = _origin;
             var normal = new Direction(o.Normal.X + a * o.U.X + c * o.V.X, o.Normal.Y + a * o.U.Y + c * o.V.Y, o.Normal.Z + a * o.U.Z + c * o.V.Z);
             double along = o.U.Dot(normal);
             var travel = new Direction(o.U.X - along * normal.X, o.U.Y - along * normal.Y, o.U.Z - along * normal.Z);
             var v = Direction.Cross(normal, travel);
-            double start = Math.Atan2(o.SinStart, o.CosStart) + delta;
             // The tangent-plane chart N = (N0 + a·u + c·v)/|…| has area element (1 + a² + c²)^(−3/2) da dc.
-            return (new FacetOrientation(normal, travel, v, Math.Cos(start), Math.Sin(start), o.Sense),
-                -2 * Math.Log(Math.PI) - 1.5 * Math.Log(1 + a * a + c * c));
+            return new Polar(first, second, normal, travel, v, -2 * LogPi - 1.5 * Math.Log(1 + a * a + c * c));
         }
+
+        /// <summary>A thread's work arrays for climbs in d dimensions on series of up to m/2 steps (reused climb after climb).</summary>
+        private sealed class Buffers
+        {
+            [ThreadStatic] private static Buffers?[]? t_byDimension;
+
+            private Buffers(int d, int m)
+            {
+                M = m;
+                (X, Trial, Step, Gradient, Work, Moved) = (new double[d], new double[d], new double[d], new double[d], new double[d], new double[d]);
+                (R, TrialResiduals, Column) = (new double[m], new double[m], new double[m]);
+                (Jacobian, Curvature, Factor) = (new double[m * d], new double[d * d], new double[d * d]);
+            }
+
+            /// <summary>This thread's buffers for d dimensions, with room for m residuals.</summary>
+            public static Buffers For(int d, int m)
+            {
+                var known = t_byDimension ??= new Buffers?[8];
+                if (d >= known.Length) return new Buffers(d, m);
+                return known[d] is { } b && b.M >= m ? b : known[d] = new Buffers(d, m);
+            }
+
+            public int M { get; }
+            public double[] X { get; }
+            public double[] Trial { get; }
+            public double[] Step { get; }
+            public double[] Gradient { get; }
+            public double[] Work { get; }
+            public double[] Moved { get; }
+            public double[] R { get; }
+            public double[] TrialResiduals { get; }
+            public double[] Column { get; }
+            public double[] Jacobian { get; }
+            public double[] Curvature { get; }
+            public double[] Factor { get; }
+        }
+
+        /// <summary>Keeps what the last point worked out as the climb's current point's.</summary>
+        private void Anchor() => (_anchorPolar, _anchorShape) = (_last, _lastShape);
 
         /// <summary>
         /// Levenberg–Marquardt on the residuals (Gauss–Newton with a damping that shrinks on success), then Laplace's
@@ -179,12 +263,15 @@ internal static class SectionRefinement
             logIntegral = double.NegativeInfinity;
             edges = [];
             int d = _x.Length, m = 2 * _series.Count;
-            // Matrices are flat, row-major d×d (d ≤ 5), in buffers made once per climb: the climb runs for every start of
-            // every material on every stone.
-            double[] x = [.. _x], trial = new double[d], step = new double[d], gradient = new double[d], work = new double[d];
-            double[] r = new double[m], trialResiduals = new double[m], column = new double[m];
-            double[] jacobian = new double[m * d], curvature = new double[d * d], factor = new double[d * d];
+            // Matrices are flat, row-major d×d (d ≤ 5), in the thread's buffers for this dimension: the climb runs for every
+            // start of every material on every stone. Every entry is written in this climb before it is read.
+            var buffers = Buffers.For(d, m);
+            double[] x = buffers.X, trial = buffers.Trial, step = buffers.Step, gradient = buffers.Gradient, work = buffers.Work;
+            double[] r = buffers.R, trialResiduals = buffers.TrialResiduals, column = buffers.Column;
+            double[] jacobian = buffers.Jacobian, curvature = buffers.Curvature, factor = buffers.Factor;
+            Array.Copy(_x, x, d);
             double value = Value(x, false, out tail, r, out int count);
+            Anchor();
             if (!double.IsFinite(value)) return false;
             double damping = 1e-3;
             for (int iteration = 0; iteration < Iterations; iteration++)
@@ -201,6 +288,7 @@ internal static class SectionRefinement
                     if (v > value)
                     {
                         (x, trial) = (trial, x);
+                        Anchor();
                         (value, count, moved) = (v, trialCount, true);
                         Array.Copy(trialResiduals, r, m);
                         damping = Math.Max(damping / 4, 1e-6);
@@ -213,11 +301,13 @@ internal static class SectionRefinement
             }
             // The value, goodness of fit and predicted edges at the peak (r keeps the same residuals).
             value = Value(x, true, out tail, r, out _);
-            edges = [.. _edges];
+            Anchor();
+            // The predicted edges, low then high (Same compares every one, in any order).
+            edges = [.. _edges.AsSpan(0, _series.Count), .. _edges.AsSpan(_series.PaddedCount, _series.Count)];
             if (known(edges)) return false;
             // The peak's width from the full curvature of the log-integrand (level density, edge-count factors and the prior
             // included); the Gauss–Newton curvature stands in when that is not negative definite.
-            FullCurvature(x, value, r, curvature);
+            FullCurvature(x, value, r, curvature, buffers.Moved);
             double logDeterminant = LogDeterminant(Bounded(curvature, x), d, factor);
             if (!double.IsFinite(logDeterminant))
             {
@@ -257,12 +347,11 @@ internal static class SectionRefinement
         }
 
         /// <summary>−∂²ℓ/∂x² by central differences of the log-integrand itself, into <paramref name="curvature"/>.</summary>
-        private void FullCurvature(double[] x, double centre, double[] scratch, double[] curvature)
+        private void FullCurvature(double[] x, double centre, double[] scratch, double[] curvature, double[] y)
         {
             int d = x.Length, angles = _biaxial ? 3 : 2;
             Span<double> h = stackalloc double[d];
             for (int i = 0; i < d; i++) h[i] = i < angles ? 0.004 : 0.05;
-            double[] y = [.. x];
             for (int i = 0; i < d; i++)
             {
                 curvature[i * d + i] = -(Moved(x, y, centre, scratch, i, h[i], i, 0) - 2 * centre + Moved(x, y, centre, scratch, i, -h[i], i, 0)) / (h[i] * h[i]);

@@ -46,12 +46,34 @@ internal sealed class SeriesObservation
             HighestReading = i == 0 ? High[i] : Math.Max(HighestReading, High[i]);
             if (TwoEdges[i]) LargestSeparation = Math.Max(LargestSeparation, High[i] - Low[i]);
         }
+        PaddedCount = (k + 7) / 8 * 8;
+        PaddedCos = new double[PaddedCount];
+        PaddedSin = new double[PaddedCount];
+        Cos.CopyTo(PaddedCos, 0);
+        Sin.CopyTo(PaddedSin, 0);
         RoundingStep = Math.Pow(10, -decimals);
         ReadingPrecision = readingPrecision;
         // Rounding to the decimals written adds a uniform error of width w: variance w²/12 (Sheppard's correction).
         NoiseVariance = readingPrecision * readingPrecision + RoundingStep * RoundingStep / 12;
         LiquidLimit = liquidLimit;
     }
+
+    private double[]? _coarseGeometry;
+
+    /// <summary>
+    /// The geometry of the section model's coarse orientations for these steps (<c>SectionLikelihood.CoarseGeometry</c>),
+    /// the same for every material, so worked out once, on first use.
+    /// </summary>
+    internal double[] CoarseGeometry => _coarseGeometry ??= Identification.SectionLikelihood.CoarseGeometry(this);
+
+    /// <summary>The number of steps rounded up to a multiple of eight (the section model works on eight steps at a time).</summary>
+    internal int PaddedCount { get; }
+
+    /// <summary><see cref="Cos"/> followed by zeros up to <see cref="PaddedCount"/>.</summary>
+    internal double[] PaddedCos { get; }
+
+    /// <summary><see cref="Sin"/> followed by zeros up to <see cref="PaddedCount"/>.</summary>
+    internal double[] PaddedSin { get; }
 
     /// <summary>cos φₖ of each step's rotation.</summary>
     public double[] Cos { get; }

@@ -1,3 +1,4 @@
+using System.Buffers;
 using System.Text;
 using System.Text.Json;
 using GemIndex.Core.Bench;
@@ -20,10 +21,19 @@ internal static class ResultDocument
     /// <summary>The result as one line of JSON (no line break).</summary>
     public static string Line(IdentificationResult result, bool explain)
     {
-        using var stream = new MemoryStream();
-        using (var w = new Utf8JsonWriter(stream)) Write(w, result, explain);
-        return Encoding.UTF8.GetString(stream.ToArray());
+        // The thread's buffer and writer are reused line after line (a batch writes one line per stone on every core).
+        var buffer = t_buffer ??= new ArrayBufferWriter<byte>(16 * 1024);
+        buffer.ResetWrittenCount();
+        var w = t_writer;
+        if (w is null) t_writer = w = new Utf8JsonWriter(buffer);
+        else w.Reset(buffer);
+        Write(w, result, explain);
+        w.Flush();
+        return Encoding.UTF8.GetString(buffer.WrittenSpan);
     }
+
+    [ThreadStatic] private static ArrayBufferWriter<byte>? t_buffer;
+    [ThreadStatic] private static Utf8JsonWriter? t_writer;
 
     /// <summary>Writes the result object (for embedding, as the JSON report does).</summary>
     public static void Write(Utf8JsonWriter w, IdentificationResult result, bool explain)
