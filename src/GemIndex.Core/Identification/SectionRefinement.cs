@@ -1,5 +1,6 @@
 using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Readings;
+using System.Runtime.CompilerServices;
 
 namespace GemIndex.Core.Identification;
 
@@ -28,6 +29,7 @@ internal static class SectionRefinement
     internal readonly record struct Start(int Point, int Shape, double Value);
 
     /// <summary>Keeps the best <see cref="Starts"/> points (by value), in place.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void Keep(Start[] best, Start candidate)
     {
         int worst = 0;
@@ -39,6 +41,7 @@ internal static class SectionRefinement
     }
 
     /// <summary>ln of the sum of the Laplace integrals of the distinct peaks reached from <paramref name="starts"/>.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static double LogIntegral(IndicatrixPrior prior, SeriesObservation series, double shift, double offsetVariance, bool[]? nearLimit,
         Start[] starts, out double tail)
     {
@@ -146,6 +149,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>The log-integrand at <paramref name="x"/> (−∞ outside the prior's box), and the centred residuals in σ.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private double Value(double[] x, bool final, out double tail, double[] residuals, out int count)
         {
             tail = 0;
@@ -174,6 +178,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>The orientation at x and the log of its density (uniform over the octant, the start and the sense: 1/π²).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private (FacetOrientation, double) Orientation(double[] x)
         {
             long first = BitConverter.DoubleToInt64Bits(x[0]), second = _biaxial ? BitConverter.DoubleToInt64Bits(x[1]) : 0;
@@ -191,6 +196,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>The facet normal, the travel basis and the log density for the polar coordinates (θ; or a and c).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private Polar NewPolar(double[] x, long first, long second)
         {
             if (!_biaxial)
@@ -258,6 +264,7 @@ internal static class SectionRefinement
         /// A climb that ends on a peak already counted (<paramref name="known"/> on its predicted edges) stops there, before
         /// the curvature: that peak is counted once whatever its width.
         /// </remarks>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public bool Climb(Func<double[], bool> known, out double logIntegral, out double tail, out double[] edges)
         {
             logIntegral = double.NegativeInfinity;
@@ -326,6 +333,7 @@ internal static class SectionRefinement
         /// direction (a biaxial shape with β at α is round about an axis) the Gaussian would otherwise claim far more than
         /// the parameter's domain. The orientation angles' range is taken as π; the shape's, its box.
         /// </summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private double[] Bounded(double[] curvature, double[] x)
         {
             int d = x.Length, angles = _biaxial ? 3 : 2;
@@ -347,6 +355,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>−∂²ℓ/∂x² by central differences of the log-integrand itself, into <paramref name="curvature"/>.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private void FullCurvature(double[] x, double centre, double[] scratch, double[] curvature, double[] y)
         {
             int d = x.Length, angles = _biaxial ? 3 : 2;
@@ -363,6 +372,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>The log-integrand at x moved by di along i and dj along j; outside the box, a steep wall.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private double Moved(double[] x, double[] y, double centre, double[] scratch, int i, double di, int j, double dj)
         {
             Array.Copy(x, y, x.Length);
@@ -373,6 +383,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>∂r/∂x by forward differences (row-major m×d); false when the readings' pairing changes under a small move (no smooth peak).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private bool Jacobian(double[] x, double[] r, int count, double[] jacobian, double[] column)
         {
             int angles = _biaxial ? 3 : 2, d = x.Length;
@@ -396,6 +407,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>The gradient −Jᵀr and the Gauss–Newton matrix JᵀJ, into the given buffers.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private static void NormalEquations(double[] jacobian, double[] r, int count, int d, double[] gradient, double[] normal)
         {
             for (int i = 0; i < d; i++)
@@ -413,6 +425,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>Solves (A + μ·diag(A)) Δ = g by Cholesky into <paramref name="step"/>; false when not positive definite.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private static bool Solve(double[] normal, double[] gradient, double damping, double[] step, double[] factor, double[] work)
         {
             int d = gradient.Length;
@@ -446,6 +459,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>The Cholesky factor L of a symmetric d×d matrix A = L Lᵀ into <paramref name="l"/>; false when A is not positive definite.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private static bool Cholesky(ReadOnlySpan<double> a, int d, double[] l)
         {
             Array.Clear(l);
@@ -464,6 +478,7 @@ internal static class SectionRefinement
             return true;
         }
 
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private static double LogDeterminant(double[] a, int d, double[] l)
         {
             if (!Cholesky(a, d, l)) return double.NaN;
