@@ -50,10 +50,27 @@ internal static class SectionLikelihood
     /// <summary>Scores the series; <paramref name="shift"/> moves readings to 589.3 nm (σ <paramref name="shiftSigma"/>).</summary>
     public static Outcome Evaluate(IndicatrixPrior prior, SeriesObservation series, double shift, double shiftSigma)
     {
+        // The edge buffers come from the shared pool (every entry read is written first in this call).
+        var pool = System.Buffers.ArrayPool<double>.Shared;
+        int length = series.Count * prior.Shapes.Length * 2 * (prior.IsIsotropic ? 1 : Block);
+        double[] buffer = pool.Rent(length);
+        try
+        {
+            return Evaluate(prior, series, shift, shiftSigma, buffer);
+        }
+        finally
+        {
+            pool.Return(buffer);
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static Outcome Evaluate(IndicatrixPrior prior, SeriesObservation series, double shift, double shiftSigma, double[] buffer)
+    {
         var shapes = prior.Shapes;
         int count = shapes.Length;
         int orientations = prior.IsIsotropic ? 1 : FacetOrientationSet.Count;
-        var edges = prior.IsIsotropic ? Scratch(ref t_edges, series.Count * count * 2) : null;
+        var edges = prior.IsIsotropic ? buffer : null;
         double offsetVariance = OffsetVariance(series, shiftSigma);
         var nearLimit = NearLimit(series, prior);
         // What does not change from orientation to orientation, once per shape.
@@ -69,7 +86,7 @@ internal static class SectionLikelihood
         }
         double[]? geometry = prior.IsIsotropic ? null : series.CoarseGeometry;
         int blockLength = GeometryLength(series.Count) * Block;
-        var blockEdges = geometry is null ? null : Scratch(ref t_blockEdges, series.Count * count * 2 * Block);
+        var blockEdges = geometry is null ? null : buffer;
         var single = new LogSum();
         var oriented = new LogSum();
         var best = new SectionRefinement.Start[SectionRefinement.Starts];
@@ -109,12 +126,6 @@ internal static class SectionLikelihood
         if (refined > coarse) { coarse = refined; bestTail = Math.Max(bestTail, refinedTail); }
         return new Outcome(LogSum.Add(single.Log, coarse), bestTail);
     }
-
-    // Each thread's edge buffers for Evaluate (every entry it reads is written first in the same call).
-    [ThreadStatic] private static double[]? t_edges, t_blockEdges;
-
-    private static double[] Scratch(ref double[]? buffer, int length) =>
-        buffer is { } known && known.Length >= length ? known : buffer = new double[length];
 
     /// <summary>The goodness of fit at one coarse point (worked out once, for the best point only: it costs an incomplete gamma function).</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]

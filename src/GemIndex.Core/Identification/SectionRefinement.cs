@@ -47,6 +47,7 @@ internal static class SectionRefinement
     {
         tail = 0;
         var peaks = new List<(int Group, double[] Edges)>();
+        var buffers = new Peak.Buffers.Set();
         var total = new SectionLikelihood.LogSum();
         double top = starts.Max(s => s.Value);
         foreach (var start in starts.Where(s => s.Value > top - Negligible).OrderByDescending(s => s.Value))
@@ -54,7 +55,7 @@ internal static class SectionRefinement
             var shape = prior.Shapes[start.Shape];
             if (shape.Group < 0) continue;
             var problem = new Peak(prior, series, shift, offsetVariance, nearLimit, shape, FacetOrientationSet.Points[start.Point]);
-            if (!problem.Climb(e => peaks.Any(p => p.Group == shape.Group && Same(p.Edges, e)), out double logValue, out double peakTail, out double[] edges))
+            if (!problem.Climb(e => peaks.Any(p => p.Group == shape.Group && Same(p.Edges, e)), buffers, out double logValue, out double peakTail, out double[] edges))
                 continue;
             peaks.Add((shape.Group, edges));
             total.Include(logValue);
@@ -217,10 +218,21 @@ internal static class SectionRefinement
             return new Polar(first, second, normal, travel, v, -2 * LogPi - 1.5 * Math.Log(1 + a * a + c * c));
         }
 
-        /// <summary>A thread's work arrays for climbs in d dimensions on series of up to m/2 steps (reused climb after climb).</summary>
-        private sealed class Buffers
+        /// <summary>The work arrays for climbs in d dimensions on series of up to m/2 steps (reused climb after climb).</summary>
+        internal sealed class Buffers
         {
-            [ThreadStatic] private static Buffers?[]? t_byDimension;
+            /// <summary>One prior's buffers by dimension, shared by its climbs (which run one after another).</summary>
+            internal sealed class Set
+            {
+                private readonly Buffers?[] _byDimension = new Buffers?[8];
+
+                /// <summary>The buffers for d dimensions, with room for m residuals.</summary>
+                public Buffers For(int d, int m)
+                {
+                    if (d >= _byDimension.Length) return new Buffers(d, m);
+                    return _byDimension[d] is { } b && b.M >= m ? b : _byDimension[d] = new Buffers(d, m);
+                }
+            }
 
             private Buffers(int d, int m)
             {
@@ -228,14 +240,6 @@ internal static class SectionRefinement
                 (X, Trial, Step, Gradient, Work, Moved) = (new double[d], new double[d], new double[d], new double[d], new double[d], new double[d]);
                 (R, TrialResiduals, Column) = (new double[m], new double[m], new double[m]);
                 (Jacobian, Curvature, Factor) = (new double[m * d], new double[d * d], new double[d * d]);
-            }
-
-            /// <summary>This thread's buffers for d dimensions, with room for m residuals.</summary>
-            public static Buffers For(int d, int m)
-            {
-                var known = t_byDimension ??= new Buffers?[8];
-                if (d >= known.Length) return new Buffers(d, m);
-                return known[d] is { } b && b.M >= m ? b : known[d] = new Buffers(d, m);
             }
 
             public int M { get; }
@@ -265,14 +269,14 @@ internal static class SectionRefinement
         /// the curvature: that peak is counted once whatever its width.
         /// </remarks>
         [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-        public bool Climb(Func<double[], bool> known, out double logIntegral, out double tail, out double[] edges)
+        public bool Climb(Func<double[], bool> known, Buffers.Set buffersByDimension, out double logIntegral, out double tail, out double[] edges)
         {
             logIntegral = double.NegativeInfinity;
             edges = [];
             int d = _x.Length, m = 2 * _series.Count;
             // Matrices are flat, row-major d×d (d ≤ 5), in the thread's buffers for this dimension: the climb runs for every
             // start of every material on every stone. Every entry is written in this climb before it is read.
-            var buffers = Buffers.For(d, m);
+            var buffers = buffersByDimension.For(d, m);
             double[] x = buffers.X, trial = buffers.Trial, step = buffers.Step, gradient = buffers.Gradient, work = buffers.Work;
             double[] r = buffers.R, trialResiduals = buffers.TrialResiduals, column = buffers.Column;
             double[] jacobian = buffers.Jacobian, curvature = buffers.Curvature, factor = buffers.Factor;
