@@ -1,6 +1,7 @@
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Readings;
+using System.Runtime.CompilerServices;
 
 namespace GemIndex.Core.Identification;
 
@@ -183,6 +184,7 @@ internal sealed class IndicatrixPrior
     /// The shape of family <paramref name="group"/> at birefringence <paramref name="b"/> and β − α <paramref name="u"/>,
     /// weighted by the prior density there (per unit B, and per unit β − α for a biaxial family); null outside the box.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static Shape? ShapeAt(Family f, int group, double b, double u)
     {
         if (b < f.BirefringenceLow - 1e-12 || b > f.BirefringenceHigh + 1e-12) return null;

@@ -86,9 +86,9 @@ public static class NextTestAdvisor
             double gain = LookInformation(candidates, tables, first, g);
             if (second < 0 || gain.CompareTo(secondGain) > 0) (second, secondGain) = (g, gain);
         }
-        // A single feature left to look for has no partner: the same failure as MaxBy over no elements.
-        if (second < 0) throw new InvalidOperationException("Sequence contains no elements");
         var firstFeature = MagnificationVocabulary.All[first].Feature;
+        // A single feature left to look for has no partner: it is the look.
+        if (second < 0) return ([firstFeature], firstGain);
         return secondGain >= firstGain + MinimumGainBits
             ? ([firstFeature, MagnificationVocabulary.All[second].Feature], secondGain)
             : ([firstFeature], firstGain);
@@ -171,14 +171,27 @@ public static class NextTestAdvisor
 
     /// <summary>
     /// Σ_m Σ_o π(m) P(o|m) log₂(P(o|m)/P(o)) for one test, from the materials' outcome tables. P(o) is added up in the
-    /// candidates' order in a scratch array indexed by the outcome's slot, which is cleared again after.
+    /// candidates' order in a pooled array indexed by the outcome's slot; the slots used are zeroed first.
     /// </summary>
     private static double MutualInformation(List<(Material Material, double P)> candidates, OutcomeTables[] tables, int test)
     {
         int size = 0;
         for (int c = 0; c < candidates.Count; c++) size = Math.Max(size, tables[c].SlotCount[test]);
-        var scratch = t_marginal ??= new double[Tests.Length][];
-        if (scratch[test] is not { } marginal || marginal.Length < size) scratch[test] = marginal = new double[Math.Max(size, 2 * (scratch[test]?.Length ?? 0))];
+        double[] marginal = System.Buffers.ArrayPool<double>.Shared.Rent(Math.Max(size, 1));
+        try
+        {
+            for (int c = 0; c < candidates.Count; c++)
+                foreach (int slot in tables[c].Slots[test]) marginal[slot] = 0;
+            return MutualInformation(candidates, tables, test, marginal);
+        }
+        finally
+        {
+            System.Buffers.ArrayPool<double>.Shared.Return(marginal);
+        }
+    }
+
+    private static double MutualInformation(List<(Material Material, double P)> candidates, OutcomeTables[] tables, int test, double[] marginal)
+    {
         for (int c = 0; c < candidates.Count; c++)
         {
             double p = candidates[c].P;
@@ -195,13 +208,8 @@ public static class NextTestAdvisor
             for (int t = 0; t < slots.Length; t++)
                 if (q[t] > 0) information += p * q[t] * Math.Log2(q[t] / marginal[slots[t]]);
         }
-        for (int c = 0; c < candidates.Count; c++)
-            foreach (int slot in tables[c].Slots[test]) marginal[slot] = 0;
         return Math.Max(0, information);
     }
-
-    /// <summary>Each thread's scratch marginals, one array per test (a batch runs the advisor on every core).</summary>
-    [ThreadStatic] private static double[][]? t_marginal;
 
     /// <summary>
     /// A material's possible answers to each test, worked out once per material rather than once per stone: every test's

@@ -1,4 +1,5 @@
 using GemIndex.Core.Catalogue;
+using System.Runtime.CompilerServices;
 
 namespace GemIndex.Core.Identification;
 
@@ -28,6 +29,7 @@ public static class RangeStrays
         Density(observed, range, sigma, strayScale, double.Hypot(sigma, strayScale));
 
     /// <summary><see cref="Density(double, PropertyRange, double, double)"/> with √(σ² + scale²) given (<paramref name="wideSigma"/>), for a caller that reuses it.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static double Density(double observed, PropertyRange range, double sigma, double strayScale, double wideSigma) =>
         (1 - Share) * RangeLikelihood.Density(observed, range, sigma)
         + Share * RangeLikelihood.Density(observed, range, wideSigma);

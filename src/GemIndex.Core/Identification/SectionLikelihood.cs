@@ -3,6 +3,7 @@ using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Readings;
 using System.Runtime.Intrinsics;
 using MathNet.Numerics;
+using System.Runtime.CompilerServices;
 
 namespace GemIndex.Core.Identification;
 
@@ -49,10 +50,27 @@ internal static class SectionLikelihood
     /// <summary>Scores the series; <paramref name="shift"/> moves readings to 589.3 nm (σ <paramref name="shiftSigma"/>).</summary>
     public static Outcome Evaluate(IndicatrixPrior prior, SeriesObservation series, double shift, double shiftSigma)
     {
+        // The edge buffers come from the shared pool (every entry read is written first in this call).
+        var pool = System.Buffers.ArrayPool<double>.Shared;
+        int length = series.Count * prior.Shapes.Length * 2 * (prior.IsIsotropic ? 1 : Block);
+        double[] buffer = pool.Rent(length);
+        try
+        {
+            return Evaluate(prior, series, shift, shiftSigma, buffer);
+        }
+        finally
+        {
+            pool.Return(buffer);
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static Outcome Evaluate(IndicatrixPrior prior, SeriesObservation series, double shift, double shiftSigma, double[] buffer)
+    {
         var shapes = prior.Shapes;
         int count = shapes.Length;
         int orientations = prior.IsIsotropic ? 1 : FacetOrientationSet.Count;
-        var edges = prior.IsIsotropic ? Scratch(ref t_edges, series.Count * count * 2) : null;
+        var edges = prior.IsIsotropic ? buffer : null;
         double offsetVariance = OffsetVariance(series, shiftSigma);
         var nearLimit = NearLimit(series, prior);
         // What does not change from orientation to orientation, once per shape.
@@ -68,7 +86,7 @@ internal static class SectionLikelihood
         }
         double[]? geometry = prior.IsIsotropic ? null : series.CoarseGeometry;
         int blockLength = GeometryLength(series.Count) * Block;
-        var blockEdges = geometry is null ? null : Scratch(ref t_blockEdges, series.Count * count * 2 * Block);
+        var blockEdges = geometry is null ? null : buffer;
         var single = new LogSum();
         var oriented = new LogSum();
         var best = new SectionRefinement.Start[SectionRefinement.Starts];
@@ -109,13 +127,8 @@ internal static class SectionLikelihood
         return new Outcome(LogSum.Add(single.Log, coarse), bestTail);
     }
 
-    // Each thread's edge buffers for Evaluate (every entry it reads is written first in the same call).
-    [ThreadStatic] private static double[]? t_edges, t_blockEdges;
-
-    private static double[] Scratch(ref double[]? buffer, int length) =>
-        buffer is { } known && known.Length >= length ? known : buffer = new double[length];
-
     /// <summary>The goodness of fit at one coarse point (worked out once, for the best point only: it costs an incomplete gamma function).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static double TailAt(IndicatrixPrior prior, SeriesObservation series, double shift, bool[]? nearLimit,
         in NoiseTerms noise, in LevelSpread spread, int point, int shape)
     {
@@ -219,6 +232,7 @@ internal static class SectionLikelihood
     /// orientations, each quantity's values of the block side by side: it is the same for every material, so the series
     /// keeps it (<see cref="SeriesObservation.CoarseGeometry"/>).
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static double[] CoarseGeometry(SeriesObservation series)
     {
         int length = GeometryLength(series.Count);
@@ -238,6 +252,7 @@ internal static class SectionLikelihood
     /// What the edges take of one orientation and the steps' rotations: N's squared components, then for each step the
     /// squared components of t (in the facet, across the direction of travel) and N's products with them.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void Geometry(in FacetOrientation o, SeriesObservation series, Span<double> geometry)
     {
         var (nx, ny, nz) = (o.Normal.X, o.Normal.Y, o.Normal.Z);
@@ -327,6 +342,7 @@ internal static class SectionLikelihood
     }
 
     /// <summary>Steps with one edge close enough to the liquid's limit that the high edge may be hidden above it.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static bool[]? NearLimit(SeriesObservation series, IndicatrixPrior prior)
     {
         if (prior.IsIsotropic) return null;
@@ -391,6 +407,7 @@ internal static class SectionLikelihood
     }
 
     /// <summary>The closed-form integral over the common shift from the steps' sums (the second half of <see cref="Integrate"/>).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static PointFit Finish(in Sums sums, in NoiseTerms terms, in LevelSpread spread, in IndicatrixPrior.Shape shape, double levelDensity, bool withTail,
         double floor, double logCeiling, double[]? residuals)
     {
@@ -424,6 +441,7 @@ internal static class SectionLikelihood
     /// above the limit (censored: edge &gt; limit − margin). Both are weighed at the shift fitted from the other steps (a
     /// plug-in: the shift is pinned far more tightly than either branch varies) and the likelier one is kept.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void Censored(SeriesObservation series, double[] edges, EdgeIndex index, double noise, double shift, bool[] nearLimit,
         ReadOnlySpan<double> seen, double[]? residuals, ref Sums sums)
     {
@@ -446,6 +464,7 @@ internal static class SectionLikelihood
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static double Fallback(SeriesObservation series, double[] edges, EdgeIndex index, double shift, bool[] nearLimit)
     {
         double total = 0;
@@ -466,6 +485,7 @@ internal static class SectionLikelihood
     }
 
     /// <summary>The level's density at r̄: uniform on [low, high] (or the given density there) convolved with N(0, s²).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static double LevelDensity(double mean, double low, double high, in LevelSpread spread, double density)
     {
         double s = spread.Sigma;
@@ -484,6 +504,7 @@ internal static class SectionLikelihood
     /// <see cref="SeenAsTwo(double, double)"/> of every step's edges; with the edges of consecutive steps side by side, the quotients are
     /// taken eight at a time (the same IEEE quotients).
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void EachSeenAsTwo(double[] edges, EdgeIndex index, int steps, double sigma, Span<double> seen)
     {
         int k = 0;
@@ -533,6 +554,7 @@ internal static class SectionLikelihood
         /// <summary>The largest value included so far.</summary>
         public double Max => _max;
 
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public void Include(double value)
         {
             if (double.IsNegativeInfinity(value)) return;
@@ -542,6 +564,7 @@ internal static class SectionLikelihood
         }
 
         /// <summary>ln(eᵃ + eᵇ).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public static double Add(double a, double b)
         {
             if (double.IsNegativeInfinity(a)) return b;

@@ -1,5 +1,6 @@
 using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Readings;
+using System.Runtime.CompilerServices;
 
 namespace GemIndex.Core.Identification;
 
@@ -28,6 +29,7 @@ internal static class SectionRefinement
     internal readonly record struct Start(int Point, int Shape, double Value);
 
     /// <summary>Keeps the best <see cref="Starts"/> points (by value), in place.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void Keep(Start[] best, Start candidate)
     {
         int worst = 0;
@@ -39,11 +41,13 @@ internal static class SectionRefinement
     }
 
     /// <summary>ln of the sum of the Laplace integrals of the distinct peaks reached from <paramref name="starts"/>.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static double LogIntegral(IndicatrixPrior prior, SeriesObservation series, double shift, double offsetVariance, bool[]? nearLimit,
         Start[] starts, out double tail)
     {
         tail = 0;
         var peaks = new List<(int Group, double[] Edges)>();
+        var buffers = new Peak.Buffers.Set();
         var total = new SectionLikelihood.LogSum();
         double top = starts.Max(s => s.Value);
         foreach (var start in starts.Where(s => s.Value > top - Negligible).OrderByDescending(s => s.Value))
@@ -51,7 +55,7 @@ internal static class SectionRefinement
             var shape = prior.Shapes[start.Shape];
             if (shape.Group < 0) continue;
             var problem = new Peak(prior, series, shift, offsetVariance, nearLimit, shape, FacetOrientationSet.Points[start.Point]);
-            if (!problem.Climb(e => peaks.Any(p => p.Group == shape.Group && Same(p.Edges, e)), out double logValue, out double peakTail, out double[] edges))
+            if (!problem.Climb(e => peaks.Any(p => p.Group == shape.Group && Same(p.Edges, e)), buffers, out double logValue, out double peakTail, out double[] edges))
                 continue;
             peaks.Add((shape.Group, edges));
             total.Include(logValue);
@@ -146,6 +150,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>The log-integrand at <paramref name="x"/> (−∞ outside the prior's box), and the centred residuals in σ.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private double Value(double[] x, bool final, out double tail, double[] residuals, out int count)
         {
             tail = 0;
@@ -174,6 +179,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>The orientation at x and the log of its density (uniform over the octant, the start and the sense: 1/π²).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private (FacetOrientation, double) Orientation(double[] x)
         {
             long first = BitConverter.DoubleToInt64Bits(x[0]), second = _biaxial ? BitConverter.DoubleToInt64Bits(x[1]) : 0;
@@ -191,6 +197,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>The facet normal, the travel basis and the log density for the polar coordinates (θ; or a and c).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private Polar NewPolar(double[] x, long first, long second)
         {
             if (!_biaxial)
@@ -211,10 +218,21 @@ internal static class SectionRefinement
             return new Polar(first, second, normal, travel, v, -2 * LogPi - 1.5 * Math.Log(1 + a * a + c * c));
         }
 
-        /// <summary>A thread's work arrays for climbs in d dimensions on series of up to m/2 steps (reused climb after climb).</summary>
-        private sealed class Buffers
+        /// <summary>The work arrays for climbs in d dimensions on series of up to m/2 steps (reused climb after climb).</summary>
+        internal sealed class Buffers
         {
-            [ThreadStatic] private static Buffers?[]? t_byDimension;
+            /// <summary>One prior's buffers by dimension, shared by its climbs (which run one after another).</summary>
+            internal sealed class Set
+            {
+                private readonly Buffers?[] _byDimension = new Buffers?[8];
+
+                /// <summary>The buffers for d dimensions, with room for m residuals.</summary>
+                public Buffers For(int d, int m)
+                {
+                    if (d >= _byDimension.Length) return new Buffers(d, m);
+                    return _byDimension[d] is { } b && b.M >= m ? b : _byDimension[d] = new Buffers(d, m);
+                }
+            }
 
             private Buffers(int d, int m)
             {
@@ -222,14 +240,6 @@ internal static class SectionRefinement
                 (X, Trial, Step, Gradient, Work, Moved) = (new double[d], new double[d], new double[d], new double[d], new double[d], new double[d]);
                 (R, TrialResiduals, Column) = (new double[m], new double[m], new double[m]);
                 (Jacobian, Curvature, Factor) = (new double[m * d], new double[d * d], new double[d * d]);
-            }
-
-            /// <summary>This thread's buffers for d dimensions, with room for m residuals.</summary>
-            public static Buffers For(int d, int m)
-            {
-                var known = t_byDimension ??= new Buffers?[8];
-                if (d >= known.Length) return new Buffers(d, m);
-                return known[d] is { } b && b.M >= m ? b : known[d] = new Buffers(d, m);
             }
 
             public int M { get; }
@@ -258,14 +268,15 @@ internal static class SectionRefinement
         /// A climb that ends on a peak already counted (<paramref name="known"/> on its predicted edges) stops there, before
         /// the curvature: that peak is counted once whatever its width.
         /// </remarks>
-        public bool Climb(Func<double[], bool> known, out double logIntegral, out double tail, out double[] edges)
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+        public bool Climb(Func<double[], bool> known, Buffers.Set buffersByDimension, out double logIntegral, out double tail, out double[] edges)
         {
             logIntegral = double.NegativeInfinity;
             edges = [];
             int d = _x.Length, m = 2 * _series.Count;
             // Matrices are flat, row-major d×d (d ≤ 5), in the thread's buffers for this dimension: the climb runs for every
             // start of every material on every stone. Every entry is written in this climb before it is read.
-            var buffers = Buffers.For(d, m);
+            var buffers = buffersByDimension.For(d, m);
             double[] x = buffers.X, trial = buffers.Trial, step = buffers.Step, gradient = buffers.Gradient, work = buffers.Work;
             double[] r = buffers.R, trialResiduals = buffers.TrialResiduals, column = buffers.Column;
             double[] jacobian = buffers.Jacobian, curvature = buffers.Curvature, factor = buffers.Factor;
@@ -311,6 +322,8 @@ internal static class SectionRefinement
             double logDeterminant = LogDeterminant(Bounded(curvature, x), d, factor);
             if (!double.IsFinite(logDeterminant))
             {
+                // The curvature's neighbouring points wrote over r: the peak's residuals again before the Jacobian.
+                Value(x, false, out _, r, out count);
                 if (!Jacobian(x, r, count, jacobian, column)) return false;
                 NormalEquations(jacobian, r, count, d, gradient, curvature);
                 logDeterminant = LogDeterminant(Bounded(curvature, x), d, factor);
@@ -326,6 +339,7 @@ internal static class SectionRefinement
         /// direction (a biaxial shape with β at α is round about an axis) the Gaussian would otherwise claim far more than
         /// the parameter's domain. The orientation angles' range is taken as π; the shape's, its box.
         /// </summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private double[] Bounded(double[] curvature, double[] x)
         {
             int d = x.Length, angles = _biaxial ? 3 : 2;
@@ -347,6 +361,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>−∂²ℓ/∂x² by central differences of the log-integrand itself, into <paramref name="curvature"/>.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private void FullCurvature(double[] x, double centre, double[] scratch, double[] curvature, double[] y)
         {
             int d = x.Length, angles = _biaxial ? 3 : 2;
@@ -363,6 +378,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>The log-integrand at x moved by di along i and dj along j; outside the box, a steep wall.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private double Moved(double[] x, double[] y, double centre, double[] scratch, int i, double di, int j, double dj)
         {
             Array.Copy(x, y, x.Length);
@@ -373,6 +389,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>∂r/∂x by forward differences (row-major m×d); false when the readings' pairing changes under a small move (no smooth peak).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private bool Jacobian(double[] x, double[] r, int count, double[] jacobian, double[] column)
         {
             int angles = _biaxial ? 3 : 2, d = x.Length;
@@ -396,6 +413,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>The gradient −Jᵀr and the Gauss–Newton matrix JᵀJ, into the given buffers.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private static void NormalEquations(double[] jacobian, double[] r, int count, int d, double[] gradient, double[] normal)
         {
             for (int i = 0; i < d; i++)
@@ -413,6 +431,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>Solves (A + μ·diag(A)) Δ = g by Cholesky into <paramref name="step"/>; false when not positive definite.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private static bool Solve(double[] normal, double[] gradient, double damping, double[] step, double[] factor, double[] work)
         {
             int d = gradient.Length;
@@ -446,6 +465,7 @@ internal static class SectionRefinement
         }
 
         /// <summary>The Cholesky factor L of a symmetric d×d matrix A = L Lᵀ into <paramref name="l"/>; false when A is not positive definite.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private static bool Cholesky(ReadOnlySpan<double> a, int d, double[] l)
         {
             Array.Clear(l);
@@ -464,6 +484,7 @@ internal static class SectionRefinement
             return true;
         }
 
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private static double LogDeterminant(double[] a, int d, double[] l)
         {
             if (!Cholesky(a, d, l)) return double.NaN;

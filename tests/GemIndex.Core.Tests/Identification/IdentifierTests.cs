@@ -255,6 +255,21 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void With_one_feature_left_to_look_for_the_advice_still_works()
+    {
+        // Every feature but one recorded as looked for and not seen: the look, if advised, is that one feature alone.
+        var all = GemIndex.Core.Magnification.MagnificationVocabulary.All.Select(i => i.Feature).ToList();
+        var sheet = new BenchSheet
+        {
+            Refractometer = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770)),
+            Magnification = new GemIndex.Core.Magnification.MagnificationObservation([], all.Skip(1)),
+        };
+        var result = Engine.Identify(sheet);
+        Assert.NotEmpty(result.Candidates);
+        if (result.NextTest is { Test: "magnification" } next) Assert.Equal([GemIndex.Core.Magnification.MagnificationVocabulary.Of(all[0]).Name], next.LookFor);
+    }
+
+    [Fact]
     public void The_next_test_is_named_in_plain_words() =>
         Assert.Equal("hand spectroscope (absorption lines)", GemIndex.Core.Bench.BenchTestWords.DisplayOfWire("absorption_nm"));
 
