@@ -48,8 +48,8 @@ public static class BenchWarnings
         })];
         for (int i = 0; i < leading.Count && leading[i].Confidence >= Relevant; i++)
         {
-            var origins = leading[i].Origins.Where(o => o.Value >= OriginShare * leading[i].Confidence).Select(o => o.Key.ToString().ToLowerInvariant()).ToList();
-            if (origins.Count < 2) continue;
+            if (Inseparable(leading[i]) is not { } held) continue;
+            var origins = held.Select(o => o.ToString().ToLowerInvariant()).ToList();
             string test = i == 0 && separation is { } next
                 ? $"the {next.Description} would help"
                 : i == 0 ? "no bench test left here separates them" : "";
@@ -63,6 +63,14 @@ public static class BenchWarnings
         if (relevant.Any(c => c.Material.Origin == OriginClass.Treated))
             warnings.Add("A treated material is among the candidates: treatments are mostly not detectable with these tests.");
         return warnings;
+    }
+
+    /// <summary>The species' origins that each hold at least <see cref="OriginShare"/> of it, when there are two or more and the species is relevant; else null.</summary>
+    internal static IReadOnlyList<OriginClass>? Inseparable(SpeciesResult species)
+    {
+        if (species.Confidence < Relevant) return null;
+        var held = species.Origins.Where(o => o.Value >= OriginShare * species.Confidence).Select(o => o.Key).ToList();
+        return held.Count < 2 ? null : held;
     }
 
     /// <summary>

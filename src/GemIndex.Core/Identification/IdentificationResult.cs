@@ -26,6 +26,9 @@ public sealed record IdentificationResult
     /// <summary>What a bench user must know (misreadings, porous candidates, natural versus synthetic, …).</summary>
     public required IReadOnlyList<string> Warnings { get; init; }
 
+    /// <summary>The leading species' origins these tests cannot separate, and the test that best would; null when they can.</summary>
+    public InseparableOrigins? InseparableOrigins { get; init; }
+
     /// <summary>The rotation series' analysis, when there were readings.</summary>
     public RotationSeriesResult? Series { get; init; }
 }

@@ -43,6 +43,7 @@ public sealed class Identifier
     // Each entry's species numbered in the order species first appear in the catalogue, and how many there are.
     private readonly int[] _speciesOf;
     private readonly int _speciesCount;
+    private readonly int[][] _originGroups;
 
     /// <summary>Prepares the ranking over a catalogue (at least one material).</summary>
     /// <exception cref="ArgumentException">The catalogue is empty.</exception>
@@ -56,6 +57,9 @@ public sealed class Identifier
         var number = new Dictionary<string, int>();
         _speciesOf = [.. _materials.Select(m => number.TryGetValue(m.Species, out int k) ? k : number[m.Species] = number.Count)];
         _speciesCount = number.Count;
+        // Each species' entries in catalogue order, and whether they differ in origin: made once, read by every stone.
+        _originGroups = [.. Enumerable.Range(0, _materials.Length).GroupBy(i => _speciesOf[i]).Select(g => g.ToArray())
+            .Where(g => g.Select(i => _materials[i].Origin).Distinct().Count() > 1)];
     }
 
     /// <summary>
@@ -246,7 +250,7 @@ public sealed class Identifier
         for (int i = 0; i < n; i++) posterior[i] /= sum;
         double other = Math.Exp(logOther - max) / sum;
         other = DiscountPoorFit(posterior, i => Evaluated(i, explain: false).Fit, other);
-        OriginBalance.Apply(_materials, posterior, logLikelihood, _logPriors);
+        OriginBalance.Apply(_materials, _originGroups, posterior, logLikelihood, _logPriors);
 
         int[] byEntry = Ranked(posterior);
         int[] order = SpeciesFirst(posterior, byEntry);
@@ -272,6 +276,7 @@ public sealed class Identifier
         bool noGoodMatch = BestSeriousFit(posterior, i => Evaluated(i, explain: false).Fit) < MinimumFit || other > best.Confidence;
         var species = SpeciesTotals(posterior);
         var weighted = order.Where(i => posterior[i] >= 1e-3).Select(i => (_materials[i], posterior[i])).ToList();
+        var separation = Separation(sheet, posterior, species);
         return new IdentificationResult
         {
             Id = sheet.Id,
@@ -280,7 +285,9 @@ public sealed class Identifier
             NotInCatalogue = other,
             NoGoodMatch = noGoodMatch,
             NextTest = adviseNextTest ? NextTestAdvisor.Advise(sheet, weighted) : null,
-            Warnings = BenchWarnings.For(analysed, candidates, other, noGoodMatch, species, Separation(sheet, posterior, species)),
+            Warnings = BenchWarnings.For(analysed, candidates, other, noGoodMatch, species, separation),
+            InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
+                ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
             Series = analysed.Series,
         };
     }

@@ -30,15 +30,14 @@ internal static class OriginBalance
 
     /// <summary>Adjusts <paramref name="posterior"/> in place, species by species.</summary>
     /// <param name="materials">The catalogue.</param>
+    /// <param name="species">The entries of each species whose entries differ in origin, in catalogue order (made once per catalogue).</param>
     /// <param name="posterior">Each entry's posterior (sums to 1 with "not in the catalogue").</param>
     /// <param name="logLikelihood">Each entry's tempered log-likelihood ratio (prior excluded).</param>
     /// <param name="logPrior">Each entry's log prior.</param>
-    public static void Apply(Material[] materials, double[] posterior, double[] logLikelihood, double[] logPrior)
+    public static void Apply(Material[] materials, int[][] species, double[] posterior, double[] logLikelihood, double[] logPrior)
     {
-        foreach (var species in Enumerable.Range(0, materials.Length).GroupBy(i => materials[i].Species))
+        foreach (int[] entries in species)
         {
-            int[] entries = [.. species];
-            if (entries.Select(i => materials[i].Origin).Distinct().Count() < 2) continue;
             double total = entries.Sum(i => posterior[i]);
             if (total < 1e-9) continue;
             var posteriorShare = Totals(entries, i => posterior[i], materials);

@@ -88,8 +88,6 @@ internal static class ReportCommand
             r.AddError($"--output: '{BenchText.Shown(path)}' exists; add --force to replace it, or give another name");
     });
 
-    /// <summary>The longest examiner's name printed in a report header.</summary>
-    private const int MaximumExaminerLength = 80;
 
     /// <summary>The report's header: the date given (or today, read here at the edge, never in Core), the examiner, the versions.</summary>
     private static ReportHeader? Header(string? date, string? examiner, TextWriter e)
@@ -105,16 +103,13 @@ internal static class ReportCommand
             e.WriteLine("gemindex: --examiner: is empty; give a name, or leave the option out.");
             return null;
         }
-        if (examiner is not null && (examiner.Length > MaximumExaminerLength || examiner.Any(char.IsControl)))
+        if (examiner is not null && (examiner.Length > ReportHeader.MostExaminerLength || examiner.Any(char.IsControl)))
         {
-            e.WriteLine($"gemindex: --examiner: '{BenchText.Shown(examiner)}' is not a name; allowed: up to {MaximumExaminerLength} printable characters.");
+            e.WriteLine($"gemindex: --examiner: '{BenchText.Shown(examiner)}' is not a name; allowed: up to {ReportHeader.MostExaminerLength} printable characters.");
             return null;
         }
         return new ReportHeader(day, examiner, ReportHeader.Program(), ShippedCatalogue.ContentHash[..Math.Min(12, ShippedCatalogue.ContentHash.Length)]);
     }
-
-    /// <summary>The workbook setting the text UI keeps the examiner in (the same key as its field, TextUi/Bench/BenchFields).</summary>
-    private const string WorkbookExaminer = GemIndex.Cli.TextUi.Bench.BenchFields.Examiner;
 
     private static int WorkbookStone(FileInfo book, string reference, string format, FileInfo? output, ReportHeader header, Func<IReadOnlyList<Material>> materials,
         TextWriter o, TextWriter e)
@@ -123,7 +118,7 @@ internal static class ReportCommand
         {
             using var workbook = StoneWorkbook.Open(book.FullName, TimeProvider.System, WorkbookOpening.ReadOnly);
             // Without --examiner, the examiner set once in the text UI for this workbook heads its reports too.
-            if (header.Examiner is null && workbook.Setting(WorkbookExaminer) is { } kept && kept.Trim().Length > 0 && ReportHeader.ExaminerProblem(kept) is null)
+            if (header.Examiner is null && workbook.Setting(ReportHeader.ExaminerSetting) is { } kept && kept.Trim().Length > 0 && ReportHeader.ExaminerProblem(kept) is null)
                 header = header with { Examiner = kept.Trim() };
             var summary = workbook.List().FirstOrDefault(s => string.Equals(s.Reference, reference, StringComparison.OrdinalIgnoreCase));
             if (summary is null || workbook.Get(summary.Id) is not { } sheet)

@@ -13,6 +13,9 @@ internal sealed record ReportHeader(DateOnly Date, string? Examiner, string Prog
     /// <summary>The longest examiner's name printed in a report header.</summary>
     public const int MostExaminerLength = 80;
 
+    /// <summary>The workbook setting that keeps a workbook's examiner, for the text UI's exports and `report stone --workbook`.</summary>
+    public const string ExaminerSetting = "report.examiner";
+
     /// <summary>The header of a report made today by <paramref name="examiner"/> (blank: not recorded) with this build's versions.</summary>
     public static ReportHeader For(DateOnly date, string? examiner) =>
         new(date, string.IsNullOrWhiteSpace(examiner) ? null : examiner.Trim(), Program(), Catalogue());

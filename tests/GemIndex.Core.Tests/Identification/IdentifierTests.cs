@@ -270,6 +270,18 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void The_inseparable_origins_are_given_as_data_beside_the_warning_that_says_them()
+    {
+        // Corundum ω 1.770, ε 1.762 (common practice): natural and synthetic sapphire share every reading here.
+        var result = Engine.Identify(new BenchSheet { Refractometer = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770)) });
+        var held = Assert.IsType<InseparableOrigins>(result.InseparableOrigins);
+        Assert.Equal("corundum", held.Species);
+        Assert.Equal([OriginClass.Natural, OriginClass.Synthetic], held.Origins.Order());
+        Assert.Contains(result.Warnings, w => w.StartsWith("Corundum: ", StringComparison.Ordinal) && w.Contains("cannot be separated", StringComparison.Ordinal)
+            && (held.Test is null ? w.Contains("no bench test left", StringComparison.Ordinal) : w.Contains($"the {held.Test.Description} would help", StringComparison.Ordinal)));
+    }
+
+    [Fact]
     public void The_next_test_is_named_in_plain_words() =>
         Assert.Equal("hand spectroscope (absorption lines)", GemIndex.Core.Bench.BenchTestWords.DisplayOfWire("absorption_nm"));
 

@@ -18,7 +18,7 @@ internal static class BenchFields
     public const string Notes = "notes";
 
     /// <summary>Who examines the stones of this workbook: a bench setting (kept across stones, stored in the workbook), printed in every exported report.</summary>
-    public const string Examiner = "report.examiner";
+    public const string Examiner = Reports.ReportHeader.ExaminerSetting;
 
     public const string Spot = BenchField.Spot;
     public const string OverLimit = BenchField.OverLimit;

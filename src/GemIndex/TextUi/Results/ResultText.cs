@@ -86,7 +86,8 @@ internal static class ResultText
 
     /// <summary>
     /// "These tests cannot separate natural and synthetic quartz: …", with what may help. The engine's own warning comes
-    /// first, since it picks its test among the species' own entries: when that test is the next test, it is named here
+    /// first (IdentificationResult.InseparableOrigins), since it picks its test among the species' own entries: when
+    /// that test is the next test, it is named here
     /// (without the lighting, which the next test below gives); when it is another, the line points to the warnings;
     /// when the engine finds none, a laboratory. Without that warning, the next test is named only when it is expected
     /// to show something different for entries of different origins.
@@ -94,13 +95,12 @@ internal static class ResultText
     private static string Inseparable(IdentificationResult r, SpeciesResult lead, List<KeyValuePair<OriginClass, double>> origins)
     {
         string which = Listed([.. origins.Select(o => Origin(o.Key))]);
-        string? warning = r.Warnings.FirstOrDefault(w => w.StartsWith(Capital(lead.Species) + ": ", StringComparison.Ordinal)
-            && w.Contains(ResultsModel.CannotBeSeparated, StringComparison.Ordinal));
-        NextTestAdvice? named = warning is null ? NextTestSeparatesOrigins(r, lead.Species)
-            : r.NextTest is { } next && warning.Contains($"the {next.Description} would help", StringComparison.Ordinal) ? next : null;
+        InseparableOrigins? engine = r.InseparableOrigins is { } held && held.Species == lead.Species ? held : null;
+        NextTestAdvice? named = engine is null ? NextTestSeparatesOrigins(r, lead.Species)
+            : r.NextTest is { } next && engine.Test?.Description == next.Description ? next : null;
         string remedy = named is not null
             ? $"the {BenchTestWords.DisplayOfWire(named.Test)} may tell some of them apart{(named.LookFor.Count > 0 ? $" (look for {Listed(named.LookFor)})" : "")}"
-            : warning is not null && warning.Contains(" would help", StringComparison.Ordinal) ? "the Warnings below name a test that may"
+            : engine?.Test is not null ? "the Warnings below name a test that may"
             : "refer a valuable stone to a qualified laboratory";
         return $"  These tests cannot separate {which} {lead.Species}: {remedy}.";
     }

@@ -45,7 +45,11 @@ public class ResultTextTests
     };
 
     /// <summary>A corundum answer of the shape the issue describes: the species holds almost all of it, split across origins.</summary>
-    private static IdentificationResult CorundumAnswer(NextTestAdvice? next, IReadOnlyList<string>? warnings = null)
+    /// <summary>What the engine says in the warning above, as the structured result it gives beside it.</summary>
+    private static InseparableOrigins Inseparable(NextTestAdvice? test) =>
+        new() { Species = "corundum", Origins = [OriginClass.Synthetic, OriginClass.Natural, OriginClass.Treated], Test = test };
+
+    private static IdentificationResult CorundumAnswer(NextTestAdvice? next, IReadOnlyList<string>? warnings = null, InseparableOrigins? inseparable = null)
     {
         RankedCandidate[] candidates =
         [
@@ -67,6 +71,7 @@ public class ResultTextTests
             NoGoodMatch = false,
             NextTest = next,
             Warnings = warnings ?? [],
+            InseparableOrigins = inseparable,
         };
     }
 
@@ -133,7 +138,9 @@ public class ResultTextTests
             Test = "pleochroism", GainBits = 0.2, Separates = ["flame-fusion synthetic ruby", "ruby"],
             Expectations = ["flame-fusion synthetic ruby: dichroic", "ruby: dichroic"],
         };
-        IdentificationResult r = CorundumAnswer(next, ["Corundum: synthetic, natural, treated cannot be separated by these tests; the loupe or microscope (magnification): look for curved striae (diffused light) would help; for a valuable stone refer it to a qualified laboratory."]);
+        var look = new NextTestAdvice { Test = "magnification", GainBits = 0.5, Separates = [], Expectations = [], LookFor = ["curved striae"], Lighting = ["diffused light"] };
+        IdentificationResult r = CorundumAnswer(next, ["Corundum: synthetic, natural, treated cannot be separated by these tests; the loupe or microscope (magnification): look for curved striae (diffused light) would help; for a valuable stone refer it to a qualified laboratory."],
+            Inseparable(look));
         Assert.EndsWith("corundum: the Warnings below name a test that may.", ResultText.Lead(r)[2]);
     }
 
@@ -141,7 +148,8 @@ public class ResultTextTests
     public void When_the_engine_names_the_next_test_for_the_origins_the_lead_names_it_too()
     {
         var next = new NextTestAdvice { Test = "absorption_nm", GainBits = 1.3, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = [] };
-        IdentificationResult r = CorundumAnswer(next, [$"Corundum: synthetic, natural, treated cannot be separated by these tests; the {next.Description} would help; for a valuable stone refer it to a qualified laboratory."]);
+        IdentificationResult r = CorundumAnswer(next, [$"Corundum: synthetic, natural, treated cannot be separated by these tests; the {next.Description} would help; for a valuable stone refer it to a qualified laboratory."],
+            Inseparable(next));
         Assert.EndsWith("corundum: the hand spectroscope (absorption lines) may tell some of them apart.", ResultText.Lead(r)[2]);
     }
 
@@ -150,7 +158,8 @@ public class ResultTextTests
     {
         // The next test's expectations differ by entry (SG ranges), but the engine finds nothing that parts the origins.
         var next = new NextTestAdvice { Test = "sg", GainBits = 0.4, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = ["flame-fusion synthetic ruby: SG 3.99–4.01", "ruby: SG 3.97–4.05"] };
-        IdentificationResult r = CorundumAnswer(next, ["Corundum: synthetic, natural, treated cannot be separated by these tests; no bench test left here separates them; for a valuable stone refer it to a qualified laboratory."]);
+        IdentificationResult r = CorundumAnswer(next, ["Corundum: synthetic, natural, treated cannot be separated by these tests; no bench test left here separates them; for a valuable stone refer it to a qualified laboratory."],
+            Inseparable(null));
         Assert.EndsWith("corundum: refer a valuable stone to a qualified laboratory.", ResultText.Lead(r)[2]);
     }
 
