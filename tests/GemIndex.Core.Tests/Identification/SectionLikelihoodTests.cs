@@ -28,7 +28,7 @@ public class SectionLikelihoodTests(ITestOutputHelper output)
     // elbaite): a wide shape box, where the climb must find a birefringence far from its starting nodes.
     private static readonly Material Tourmaline = Crystal("tourmaline", OpticalIndices.Uniaxial(new(1.635, 1.675), new(1.610, 1.650)), new(0.018, 0.040), OpticSign.Negative);
 
-    // Cordierite: α 1.527–1.560, β 1.532–1.574, γ 1.537–1.578, birefringence 0.007–0.018 (the catalogue's iolite): a wide
+    // Cordierite: α 1.527–1.560, β 1.532–1.574, γ 1.537–1.578 (gemfame.com, Iolite), birefringence 0.007–0.018 (goettgen.de, Iolit): a wide
     // biaxial box, both in birefringence and in β's place.
     private static readonly Material Cordierite = Crystal("cordierite", OpticalIndices.Biaxial(new(1.527, 1.560), new(1.532, 1.574), new(1.537, 1.578)), new(0.007, 0.018), OpticSign.Either);
 
