@@ -12,11 +12,11 @@ namespace GemIndex.Tests.PublishedCases;
 public class PublishedCaseTests(ITestOutputHelper output)
 {
     /// <summary>
-    /// Cases with two or more bench tests that the engine still misses: listed and printed, never dropped (issue 14
-    /// stays open on them); any other miss fails the test.
-    /// - Synthetic forsterite sold as tanzanite: RI 1.635–1.647 and "dichroic" only; tourmaline and andalusite rank first.
+    /// Cases with two or more bench tests that the engine still misses: listed and printed, never dropped; any other miss
+    /// fails the test. None now: the synthetic forsterite sold as tanzanite (RI 1.635–1.647 and "dichroic" only), the last
+    /// one, ranks forsterite second since tourmaline took its published ranges.
     /// </summary>
-    private static readonly HashSet<string> KnownMisses = ["jck-synthetic-forsterite-tanzanite-imitation"];
+    private static readonly HashSet<string> KnownMisses = [];
 
     [Fact]
     public void Every_published_case_with_two_bench_tests_has_its_species_in_the_top_three()
