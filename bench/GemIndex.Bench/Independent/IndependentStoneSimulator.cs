@@ -37,8 +37,8 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
         bool beyond = random.NextDouble() < BeyondRangeShare;
         int beyondWhat = beyond ? random.Next(3) : -1; // 0 index, 1 SG, 2 both
         double quantile = random.NextDouble();
-        double lowest = Draw(species.Indices.Lowest, quantile, beyondWhat is 0 or 2, 0.01);
-        var principal = Principal(species.Indices, lowest);
+        double drawn = Draw(species.Indices.Drawn, quantile, beyondWhat is 0 or 2, 0.01);
+        var principal = Principal(species.Indices, drawn);
         double sgQuantile = species.SgFollowsIndex switch
         {
             > 0 => Clamp01(quantile + Gauss(0.15)),
@@ -67,19 +67,20 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
         return random.NextDouble() < 0.5 ? range.Low - by : range.High + by;
     }
 
-    private (double X, double Y, double Z) Principal(PrincipalValues p, double lowest)
+    /// <summary>The principal values from the index drawn (<see cref="PrincipalValues.Drawn"/>) and a birefringence drawn here.</summary>
+    private (double X, double Y, double Z) Principal(PrincipalValues p, double drawn)
     {
         double birefringence = p.Birefringence.Low + random.NextDouble() * p.Birefringence.Width;
         switch (p.Model)
         {
             case OpticModel.Uniaxial:
-                double omega = p.Positive ? lowest : lowest + birefringence, epsilon = p.Positive ? lowest + birefringence : lowest;
-                return (omega, omega, epsilon);
+                double epsilon = p.Positive ? drawn + birefringence : drawn - birefringence;
+                return (drawn, drawn, epsilon);
             case OpticModel.Biaxial:
                 double fraction = p.BetaFraction.Low + random.NextDouble() * p.BetaFraction.Width;
-                return (lowest, lowest + fraction * birefringence, lowest + birefringence);
+                return (drawn, drawn + fraction * birefringence, drawn + birefringence);
             default:
-                return (lowest, lowest, lowest);
+                return (drawn, drawn, drawn);
         }
     }
 

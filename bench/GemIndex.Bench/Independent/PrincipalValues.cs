@@ -13,6 +13,15 @@ internal sealed record PrincipalValues
     /// <summary>The lowest principal index: n (isotropic), ω (uniaxial +), ε (uniaxial −), α (biaxial).</summary>
     public required IndexRange Lowest { get; init; }
 
+    /// <summary>
+    /// The index whose published range a stone is drawn from, the others following by the birefringence: n, ω (uniaxial
+    /// of either sign) or α. For a negative uniaxial row this is ω, not ε: drawing ε over its widest span and adding the
+    /// birefringence would put ω beyond the very range the row cites.
+    /// </summary>
+    public IndexRange Drawn => _omega ?? Lowest;
+
+    private IndexRange? _omega;
+
     /// <summary>γ − α or |ε − ω|; zero for isotropic.</summary>
     public IndexRange Birefringence { get; init; } = IndexRange.At(0);
 
@@ -35,6 +44,7 @@ internal sealed record PrincipalValues
         Lowest = positive ? omega : new(omega.Low - birefringence.High, omega.High - birefringence.Low),
         Birefringence = birefringence,
         Positive = positive,
+        _omega = positive ? null : omega,
     };
 
     /// <summary>Biaxial: α range, birefringence range and where β sits.</summary>
