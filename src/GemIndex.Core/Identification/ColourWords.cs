@@ -57,6 +57,22 @@ public static class ColourWords
     public const double RankDecay = 0.6;
 
     /// <summary>
+    /// Share of an entry's colour probability taken from its species' colours rather than its own list: varieties and
+    /// origins are named by their usual colours, but the boundaries are loose (an orange common opal, a pink laboratory-grown
+    /// beryl), so a hue the species shows is never as unlikely for one of its entries as a hue the species never shows (a
+    /// judgement: about one stone in five of a named entry lies outside its usual colours; docs/ranking.md §2, colour).
+    /// </summary>
+    public const double SpeciesShare = 0.2;
+
+    /// <summary>
+    /// P(hue | entry) with the species' colours mixed in (<see cref="SpeciesShare"/>): the entry's own list and its
+    /// species' list, each by <see cref="Probability(IReadOnlySet{string}, IReadOnlyList{string})"/>.
+    /// </summary>
+    internal static double EntryProbability(IReadOnlyList<string> seen, IReadOnlyList<string> entry, IReadOnlyList<string> species) =>
+        ReferenceEquals(entry, species) ? Probability(seen, entry)
+            : (1 - SpeciesShare) * Probability(seen, entry) + SpeciesShare * Probability(seen, species);
+
+    /// <summary>
     /// P(hue | material) for a material whose colours are <paramref name="listed"/> (most usual first): the listed share
     /// split by rank (weights 1, 0.6, 0.36, …), the neighbour share split among the listed colours' neighbours, and the
     /// rest spread over every known hue. For a description with several hues ("greenish blue"), the likeliest of them.

@@ -304,7 +304,7 @@ public static class EvidenceLikelihood
     private static void Colour(MaterialProfile profile, string colour, IReadOnlyList<string> seen, EvidenceAccumulator acc)
     {
         var m = profile.Material;
-        double f = ColourWords.Probability(seen, profile.ColourHues);
+        double f = ColourWords.EntryProbability(seen, profile.ColourHues, profile.SpeciesHues);
         double best = profile.ColourHues.Count == 0 ? f : profile.ColourFirstHue;
         acc.Add(BenchField.Colour, f, ColourWords.BroadProbability, Math.Min(1, f / best), robust: false, EvidenceAccumulator.ChromophoreGroup);
         if (acc.Explaining)

@@ -85,12 +85,13 @@ public sealed class Identifier
     private static MaterialProfile[] Profiles(Material[] materials)
     {
         var shared = new Dictionary<(OpticalIndices, PropertyRange, OpticSign, MaterialForm), IndicatrixPrior>();
+        var speciesHues = materials.GroupBy(m => m.Species).ToDictionary(g => g.Key, g => MaterialProfile.SpeciesHueList(g));
         return [.. materials.Select(m =>
         {
             var birefringence = RefractometerEvidence.BirefringenceRange(m);
             var key = (m.Indices, birefringence, m.Sign, m.Forms);
             if (!shared.TryGetValue(key, out var prior)) shared[key] = prior = IndicatrixPrior.For(m, birefringence);
-            return new MaterialProfile(m, prior);
+            return new MaterialProfile(m, prior, speciesHues[m.Species]);
         })];
     }
 

@@ -10,17 +10,21 @@ namespace GemIndex.Core.Identification;
 public sealed class MaterialProfile
 {
     /// <summary>Prepares the profile of one material.</summary>
-    public MaterialProfile(Material material) : this(material, null) { }
+    public MaterialProfile(Material material) : this(material, null, null) { }
 
-    /// <summary>Prepares the profile, sharing <paramref name="prior"/> with entries of the same optical data.</summary>
-    internal MaterialProfile(Material material, IndicatrixPrior? prior)
+    /// <summary>
+    /// Prepares the profile, sharing <paramref name="prior"/> with entries of the same optical data; the hues its species
+    /// shows (<see cref="SpeciesHueList"/>) are mixed into its colour test, its own when none are given.
+    /// </summary>
+    internal MaterialProfile(Material material, IndicatrixPrior? prior, IReadOnlyList<string>? speciesHues)
     {
         Material = material;
-        ColourHues = [.. material.Colours.SelectMany(ColourWords.Hues).Where(ColourWords.KnownHues.Contains).Distinct()];
+        ColourHues = HueList(material);
         Hues = ColourHues.ToHashSet();
+        SpeciesHues = speciesHues is null || speciesHues.SequenceEqual(ColourHues) ? ColourHues : speciesHues;
         Birefringence = RefractometerEvidence.BirefringenceRange(material);
         Prior = prior ?? IndicatrixPrior.For(material, Birefringence);
-        if (ColourHues.Count > 0) ColourFirstHue = ColourWords.Probability(new HashSet<string> { ColourHues[0] }, ColourHues);
+        if (ColourHues.Count > 0) ColourFirstHue = ColourWords.EntryProbability([ColourHues[0]], ColourHues, SpeciesHues);
         var usual = EvidenceLikelihood.UsualReactions(material);
         Polariscope = [.. Enumerable.Range(0, 4).Select(o => EvidenceLikelihood.PolariscopeProbability(usual, (PolariscopeReaction)o))];
         PolariscopeUsual = EvidenceLikelihood.PolariscopeProbability(usual, usual[0]);
@@ -38,6 +42,28 @@ public sealed class MaterialProfile
 
     /// <summary>Its usual colours as known hue words, most usual first.</summary>
     public IReadOnlyList<string> ColourHues { get; }
+
+    /// <summary>The hues its species shows, most usual first: itself when it is its species' only entry.</summary>
+    internal IReadOnlyList<string> SpeciesHues { get; }
+
+    /// <summary>An entry's usual colours as known hue words, most usual first.</summary>
+    private static List<string> HueList(Material m) => [.. m.Colours.SelectMany(ColourWords.Hues).Where(ColourWords.KnownHues.Contains).Distinct()];
+
+    /// <summary>
+    /// The hues a species' entries show, the hue listed by most entries first (ties by where they first appear, entries in
+    /// catalogue order, each list most usual first).
+    /// </summary>
+    internal static IReadOnlyList<string> SpeciesHueList(IEnumerable<Material> entries)
+    {
+        var count = new Dictionary<string, int>();
+        var first = new Dictionary<string, int>();
+        foreach (var hue in entries.SelectMany(HueList))
+        {
+            first.TryAdd(hue, first.Count);
+            count[hue] = count.GetValueOrDefault(hue) + 1;
+        }
+        return [.. count.Keys.OrderByDescending(h => count[h]).ThenBy(h => first[h])];
+    }
 
     /// <summary>Its usual colours as normalised hue words.</summary>
     public IReadOnlySet<string> Hues { get; }

@@ -126,6 +126,26 @@ public class EvidenceModelTests
     }
 
     [Fact]
+    public void A_hue_the_species_shows_is_less_unlikely_for_an_entry_that_does_not_list_it_than_a_hue_the_species_never_shows()
+    {
+        // The mixture of docs/ranking.md §2 (colour): (1 − SpeciesShare)·P(own list) + SpeciesShare·P(species' list).
+        var green = Entry("green entry", "s", QuartzIndices, colours: ["green"]);
+        var pink = Entry("pink entry", "s", QuartzIndices, colours: ["pink", "green"]);
+        IReadOnlyList<string> species = MaterialProfile.SpeciesHueList([green, pink]);
+        Assert.Equal(["green", "pink"], species); // listed by both entries first
+        IReadOnlyList<string> own = ["green"];
+        double pinkSeen = ColourWords.EntryProbability(["pink"], own, species);
+        double orangeSeen = ColourWords.EntryProbability(["orange"], own, species);
+        double expected = (1 - ColourWords.SpeciesShare) * ColourWords.Probability(["pink"], own) + ColourWords.SpeciesShare * ColourWords.Probability(["pink"], species);
+        Assert.Equal(expected, pinkSeen, 12);
+        Assert.True(pinkSeen > 5 * ColourWords.Probability(["pink"], own));
+        Assert.True(pinkSeen > orangeSeen);
+        // Still a probability over the known hues, and an entry that is its species' only one is unchanged.
+        Assert.Equal(1, ColourWords.KnownHues.Sum(h => ColourWords.EntryProbability([h], own, species)), 9);
+        Assert.Equal(ColourWords.Probability(["pink"], own), ColourWords.EntryProbability(["pink"], own, own), 12);
+    }
+
+    [Fact]
     public void A_strong_listed_line_not_seen_costs_far_more_than_a_weak_one()
     {
         // By the model's own numbers: missing a strong line costs ln(1 − 0.95), a weak one ln(1 − 0.3).
