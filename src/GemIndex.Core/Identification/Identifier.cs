@@ -273,9 +273,9 @@ public sealed class Identifier
                 Reasons = explain ? e.Contributions : [],
             });
         }
-        var best = candidates.MaxBy(c => c.Confidence)!;
-        bool noGoodMatch = BestSeriousFit(posterior, i => Evaluated(i, explain: false).Fit) < MinimumFit || other > best.Confidence;
         var species = SpeciesTotals(posterior);
+        // Species first: "not in the catalogue" is set against the leading species, not against one of its many entries.
+        bool noGoodMatch = BestSeriousFit(posterior, i => Evaluated(i, explain: false).Fit) < MinimumFit || other > species[0].Confidence;
         var weighted = order.Where(i => posterior[i] >= 1e-3).Select(i => (_materials[i], posterior[i])).ToList();
         var separation = Separation(sheet, posterior, species);
         return new IdentificationResult
