@@ -29,7 +29,7 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
     private List<EvidenceContribution>? _contributions = explaining ? [] : null;
     private readonly List<double>[] _groups = [[], [], []];
     private double _independent, _logOther, _lastBits, _lastTail, _sumLogTails;
-    private int _tests;
+    private int _tests, _colourAt = -1;
     private string _lastTest = "";
 
     public bool Explaining => _contributions is not null;
@@ -44,6 +44,7 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
         foreach (var group in _groups) group.Clear();
         _independent = _logOther = _lastBits = _lastTail = _sumLogTails = 0;
         _tests = 0;
+        _colourAt = -1;
         _lastTest = "";
     }
 
@@ -71,7 +72,11 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
         mixed = Math.Max(mixed, logBroad - 690);
         double ratio = mixed - logBroad;
         if (group == Independent) _independent += ratio;
-        else _groups[group].Add(ratio);
+        else
+        {
+            if (test == Bench.BenchField.Colour && group == ChromophoreGroup) _colourAt = _groups[group].Count;
+            _groups[group].Add(ratio);
+        }
         _logOther += logBroad;
         if (Fitting) _sumLogTails += Math.Log(Math.Clamp(tail, 1e-300, 1));
         _tests++;
@@ -86,23 +91,36 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
     }
 
     /// <summary>ln p(sheet | candidate), the correlated groups counted as in <see cref="Result"/>.</summary>
-    public double LogLikelihood
+    public double LogLikelihood => _logOther + Ratio(skip: -1);
+
+    /// <summary>
+    /// The same without the colour test: what the other tests say (the origin balance asks whether a test other than
+    /// colour decides an origin; docs/ranking.md §3).
+    /// </summary>
+    public double LogLikelihoodWithoutColour => _logOther + Ratio(skip: _colourAt);
+
+    /// <summary>The summed log-likelihood ratio, the chromophore group's element <paramref name="skip"/> left out (−1: none).</summary>
+    private double Ratio(int skip)
     {
-        get
+        double ratio = _independent;
+        for (int g = 0; g < _groups.Length; g++)
         {
-            double ratio = _independent;
-            foreach (var group in _groups)
+            var group = _groups[g];
+            int skipHere = g == ChromophoreGroup ? skip : -1;
+            // The strongest by size (the first of equal sizes), and the group's sum in the order the tests came.
+            double strongest = 0, sum = 0;
+            bool any = false;
+            for (int i = 0; i < group.Count; i++)
             {
-                if (group.Count == 0) continue;
-                // The strongest by size (the first of equal sizes), and the group's sum in the order the tests came.
-                double strongest = group[0], sum = 0;
-                for (int i = 1; i < group.Count; i++)
-                    if (Math.Abs(group[i]).CompareTo(Math.Abs(strongest)) > 0) strongest = group[i];
-                foreach (double value in group) sum += value;
-                ratio += strongest + CorrelatedShare * (sum - strongest);
+                if (i == skipHere) continue;
+                if (!any || Math.Abs(group[i]).CompareTo(Math.Abs(strongest)) > 0) strongest = group[i];
+                any = true;
             }
-            return _logOther + ratio;
+            if (!any) continue;
+            for (int i = 0; i < group.Count; i++) if (i != skipHere) sum += group[i];
+            ratio += strongest + CorrelatedShare * (sum - strongest);
         }
+        return ratio;
     }
 
     /// <summary>ln p(sheet | not in the catalogue).</summary>

@@ -222,6 +222,9 @@ public sealed class Identifier
         int n = _materials.Length;
         var logPosterior = new double[n];
         var logLikelihood = new double[n];
+        // The same without colour: the origin balance's "tests alone" (colour lists by origin are the market's usual
+        // colours, never a physical separation of origins).
+        var logLikelihoodWithoutColour = new double[n];
         double logOther = 0, max = double.NegativeInfinity;
         // The likelihoods of every entry, without their fits: only the best entry's fit and the shown candidates' are
         // read, and a fit costs the tails of every test. Those few are weighed again in full (the same sums).
@@ -232,6 +235,7 @@ public sealed class Identifier
             logOther = acc.LogLikelihoodNotInCatalogue;
             // Tempered: the ratio to "not in the catalogue" is divided by the temperature.
             logLikelihood[i] = (acc.LogLikelihood - logOther) / Temperature;
+            logLikelihoodWithoutColour[i] = (acc.LogLikelihoodWithoutColour - logOther) / Temperature;
             logPosterior[i] = _logPriors[i] + logLikelihood[i];
             max = Math.Max(max, logPosterior[i]);
         }
@@ -251,7 +255,7 @@ public sealed class Identifier
         for (int i = 0; i < n; i++) posterior[i] /= sum;
         double other = Math.Exp(logOther - max) / sum;
         other = DiscountPoorFit(posterior, i => Evaluated(i, explain: false).Fit, other);
-        OriginBalance.Apply(_materials, _originGroups, posterior, logLikelihood, _logPriors);
+        OriginBalance.Apply(_materials, _originGroups, posterior, logLikelihoodWithoutColour, _logPriors);
 
         int[] byEntry = Ranked(posterior);
         int[] order = SpeciesFirst(posterior, byEntry);

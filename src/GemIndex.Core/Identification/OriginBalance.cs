@@ -32,7 +32,10 @@ internal static class OriginBalance
     /// <param name="materials">The catalogue.</param>
     /// <param name="species">The entries of each species whose entries differ in origin, in catalogue order (made once per catalogue).</param>
     /// <param name="posterior">Each entry's posterior (sums to 1 with "not in the catalogue").</param>
-    /// <param name="logLikelihood">Each entry's tempered log-likelihood ratio (prior excluded).</param>
+    /// <param name="logLikelihood">
+    /// Each entry's tempered log-likelihood ratio (prior excluded) without the colour test: a catalogue's colours by
+    /// origin are the usual colours of the market, so colour alone never decides an origin.
+    /// </param>
     /// <param name="logPrior">Each entry's log prior.</param>
     public static void Apply(Material[] materials, int[][] species, double[] posterior, double[] logLikelihood, double[] logPrior)
     {

@@ -234,6 +234,29 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void Colour_alone_never_decides_the_origin()
+    {
+        // The natural entry lists blue, the treated one orange (invented shares, both common): an orange stone read only on
+        // the refractometer leans to the treated entry by colour, but colour lists by origin are the market's usual colours,
+        // so the split is held at the cap. An SG that only the treated entry can give decides it.
+        Material natural = Make("blue stone", "corundum", OpticalIndices.Uniaxial(new(1.767, 1.772), new(1.759, 1.763)), 3.99, 4.01, OpticSign.Negative,
+            new(0.008, 0.009), frequency: BenchFrequency.Common) with { Colours = ["blue"] };
+        Material treated = Make("orange treated stone", "corundum", OpticalIndices.Uniaxial(new(1.767, 1.772), new(1.759, 1.763)), 3.99, 4.01, OpticSign.Negative,
+            new(0.008, 0.009), frequency: BenchFrequency.Common, origin: OriginClass.Treated) with { Colours = ["orange"] };
+        var engine = new Identifier([natural, treated, Catalogue[0]]);
+        var series = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770));
+        var byColour = engine.Identify(new BenchSheet { Refractometer = series, Colour = "orange" }).Species.Single(s => s.Species == "corundum");
+        Assert.Equal(OriginBalance.Cap * byColour.Confidence, byColour.Origins[OriginClass.Treated], 9);
+
+        Material denser = treated with { SpecificGravity = new(4.20, 4.25) };
+        var bySg = new Identifier([natural, denser, Catalogue[0]]).Identify(new BenchSheet
+        {
+            Refractometer = series, Colour = "orange", SpecificGravity = new SpecificGravity(4.22, 0.01),
+        }).Species.Single(s => s.Species == "corundum");
+        Assert.True(bySg.Origins[OriginClass.Treated] > 0.95 * bySg.Confidence, $"treated {bySg.Origins[OriginClass.Treated]} of {bySg.Confidence}");
+    }
+
+    [Fact]
     public void A_leader_with_an_impossible_reading_does_not_make_nothing_fit_while_a_rival_fits_everything()
     {
         // Over the limit at 1.80 with SG 4.02: a corundum-like entry (n 1.76–1.77, very common) cannot be over the limit, a
