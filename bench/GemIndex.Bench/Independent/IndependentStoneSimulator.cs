@@ -48,8 +48,12 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
         double sg = Draw(species.SpecificGravity, sgQuantile, beyondWhat is 1 or 2, 0.05);
         string origin = Pick(species.Origins);
         string hue = Pick(species.Hues);
-        var readings = Readings(species, id, principal, sg, origin, hue);
+        // The loupe draws from its own stream, so asking it first leaves the other draws of the seed as they were; its
+        // method of growth says whether the stone reads as the method's published figures rather than the species' row.
         var magnification = loupe?.Examine(species, origin, hue);
+        if (MethodProperties.For(species.Name, magnification?.Habit.Method) is { } method)
+            (principal, sg) = method.Apply(species, principal, sg);
+        var readings = Readings(species, id, principal, sg, origin, hue);
         if (magnification is { Looked: true })
             readings = readings with { FeaturesPresent = magnification.Present, FeaturesAbsent = magnification.Absent };
         return new SimulatedStone
