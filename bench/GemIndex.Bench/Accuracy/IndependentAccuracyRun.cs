@@ -63,6 +63,8 @@ internal static class IndependentAccuracyRun
         var withoutLook = new Tally();
         var bins = new (double Confidence, int Correct, int Count)[10];
         int nothingFits = 0, outsideCatalogue = 0, originStones = 0, originRight = 0, originConfidentWrong = 0;
+        // Separable stones named as a catalogue species the table has no row for: the oracle cannot see those rivals.
+        int separableMissedToUnsimulated = 0;
         var perSpecies = new SortedDictionary<string, Tally>(StringComparer.Ordinal);
         foreach (var (stone, answer, baseline, separable, confusers) in cases)
         {
@@ -73,6 +75,7 @@ internal static class IndependentAccuracyRun
             bool baseThree = baseline.Select(m => m.Species).Distinct().Take(3).Any(truth.Contains);
             all.Add(first, three, baseFirst, baseThree);
             if (separable) separableTally.Add(first, three, baseFirst, baseThree);
+            if (separable && !first && !answer.NothingFits && !covered.Contains(answer.Species)) separableMissedToUnsimulated++;
             if (!perSpecies.TryGetValue(stone.Species.Name, out var tally)) perSpecies[stone.Species.Name] = tally = new Tally();
             tally.Add(first, three, baseFirst, baseThree);
             nothingFits += answer.NothingFits ? 1 : 0;
@@ -106,7 +109,8 @@ internal static class IndependentAccuracyRun
         o.WriteLine($"catalogue species with no row in the property table (never simulated): {unsourced.Count}: {string.Join(", ", unsourced)}");
         o.WriteLine($"stones drawn beyond the published ranges on purpose: {P(cases.Count(c => c.Stone.BeyondRange), stones)}; " +
             $"with a true lowest index or SG outside every catalogue entry of their species: {P(outsideCatalogue, stones)}");
-        o.WriteLine($"stones the evidence separates (oracle with the true property table): {separableTally.Count} of {stones}");
+        o.WriteLine($"stones the evidence separates (oracle with the true property table): {separableTally.Count} of {stones}; " +
+            $"of their misses, {separableMissedToUnsimulated} of {separableTally.Count - separableTally.First} name a catalogue species the table has no row for (a rival the oracle cannot see)");
         o.WriteLine($"batch lines the reader refused (scored as wrong): {refused}");
         ReportVocabulary(usable, o);
         o.WriteLine($"stones with a magnification look: {P(cases.Count(c => c.Stone.Magnification is { Looked: true }), stones)} (asked for {lookShare.ToString("0.00", CultureInfo.InvariantCulture)})");
