@@ -51,7 +51,7 @@ public class ShippedCatalogueTests
         using var temp = new TempDirectory();
         IReadOnlyList<Material> shipped = ShippedCatalogue.Load(temp.Path);
         Assert.Equal(FamilyFileReader.ReadAll(ShippedCatalogue.Sources).Count, shipped.Count);
-        IReadOnlyList<CatalogueFinding> findings = CatalogueCheck.Check(shipped, ShippedCatalogue.Families.Species);
+        IReadOnlyList<CatalogueFinding> findings = CatalogueCheck.Check(shipped, ShippedCatalogue.Families.Species, ShippedCatalogue.Families.Likes);
         Assert.True(findings.Count == 0, string.Join("\n", findings));
     }
 
