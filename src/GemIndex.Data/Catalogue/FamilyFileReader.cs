@@ -111,7 +111,7 @@ public static class FamilyFileReader
                 if (sibling is null) return read[v] = null;
             }
             HashSet<string> stated = [.. v.Stated()];
-            CheckSources(v.Sources, stated, sibling is null ? "its species'" : $"the source it has in '{v.Like}'", references, Fail);
+            CheckSources(v.Sources, stated, sibling is null ? "its species' source" : $"the source it has in '{v.Like}'", references, Fail);
             var id = new EntryIdentity(v.Name, s.Species, v.Variety, v.Origin, v.Share, s.CrystalSystem, s.OpticCharacter, s.Frequency, family);
             Func<string, ValueSource?> ownSource = field => Resolve(v.Sources, field, references);
             Material? m = sibling is null
@@ -159,7 +159,7 @@ public static class FamilyFileReader
             if (!SourceFields.Contains(field))
                 fail("sources", $"'{field}' is not a field that takes a source; use \"*\" or one of {string.Join(", ", CatalogueFields.Inheritable)}");
             else if (stated is not null && field != "*" && !stated.Contains(field))
-                fail("sources", $"names '{field}', which this variety does not state (it inherits it with {inheritedFrom} source)");
+                fail("sources", $"names '{field}', which this variety does not state (it inherits it with {inheritedFrom})");
             if (!references.ContainsKey(key))
                 fail("sources", $"'{key}' (for {field}) is not a reference key of this file or of sources.json");
         }
