@@ -9,7 +9,8 @@ namespace GemIndex.Core.Catalogue;
 /// birefringence that agrees with the index ranges, β within α..γ, an optic sign that agrees with the indices,
 /// an optic character that agrees with the crystal system, a dispersion in plausible proportion to the index,
 /// no polariscope or pleochroism reaction on an opaque entry, a source for every number, a variety that states
-/// only what differs from its species and stays inside its species' ranges, and unique names. The sign rules are
+/// only what differs from its species (or, written "like" a sibling variety, from that sibling, and differs from it in
+/// origin or in a stated field) and stays inside its species' ranges, and unique names. The sign rules are
 /// common practice in mineral optics (uniaxial positive when ε &gt; ω; biaxial positive when γ − β &gt; β − α);
 /// the numeric bounds are our own sanity limits, wide enough for any gem material; the dispersion constants are
 /// explained where they are declared and in reference-db/README.md ("Check rules"). Pure: the same list always
