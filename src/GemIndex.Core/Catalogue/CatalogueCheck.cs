@@ -9,7 +9,8 @@ namespace GemIndex.Core.Catalogue;
 /// birefringence that agrees with the index ranges, β within α..γ, an optic sign that agrees with the indices,
 /// an optic character that agrees with the crystal system, a dispersion in plausible proportion to the index,
 /// no polariscope or pleochroism reaction on an opaque entry, a source for every number, a variety that states
-/// only what differs from its species and stays inside its species' ranges, and unique names. The sign rules are
+/// only what differs from its species (or, written "like" a sibling variety, from that sibling, and differs from it in
+/// origin or in a stated field) and stays inside its species' ranges, and unique names. The sign rules are
 /// common practice in mineral optics (uniaxial positive when ε &gt; ω; biaxial positive when γ − β &gt; β − α);
 /// the numeric bounds are our own sanity limits, wide enough for any gem material; the dispersion constants are
 /// explained where they are declared and in reference-db/README.md ("Check rules"). Pure: the same list always
@@ -67,14 +68,21 @@ public static class CatalogueCheck
     /// </summary>
     /// <param name="materials">The entries, in catalogue order.</param>
     /// <param name="species">The species' own values by species name (a material built from the species fields alone).</param>
-    public static IReadOnlyList<CatalogueFinding> Check(IReadOnlyList<Material> materials, IReadOnlyDictionary<string, Material>? species = null)
+    /// <param name="likes">
+    /// The entries written "like" a sibling variety, by entry name: each is checked against its sibling
+    /// (<see cref="CheckAgainstSibling"/>) instead of against its species.
+    /// </param>
+    public static IReadOnlyList<CatalogueFinding> Check(IReadOnlyList<Material> materials, IReadOnlyDictionary<string, Material>? species = null,
+        IReadOnlyDictionary<string, Likeness>? likes = null)
     {
         ArgumentNullException.ThrowIfNull(materials);
         var findings = new List<CatalogueFinding>();
         foreach (Material m in materials)
         {
             findings.AddRange(CheckEntry(m));
-            if (species is not null && species.TryGetValue(m.Species, out Material? own)) findings.AddRange(CheckAgainstSpecies(m, own));
+            Material? own = species is not null && species.TryGetValue(m.Species, out Material? s) ? s : null;
+            if (likes is not null && likes.TryGetValue(m.Name, out Likeness? like)) findings.AddRange(CheckAgainstSibling(m, like, own));
+            else if (own is not null) findings.AddRange(CheckAgainstSpecies(m, own));
         }
         findings.AddRange(CheckDispersionWithinSpecies(materials));
         var seen = new Dictionary<string, string>(StringComparer.OrdinalIgnoreCase);
@@ -121,14 +129,56 @@ public static class CatalogueCheck
             string own = MaterialFieldText.Of(variety, field), inherited = MaterialFieldText.Of(species, field);
             if (own == inherited)
                 f.Add(new(variety.Name, field, $"repeats its species' value {own}; state only what differs from species '{species.Name}'", FileOf(variety)));
-            // An assembled stone's index is its top's and its SG the assembly's: outside the species' own ranges by nature.
-            else if (variety.Origin != OriginClass.Composite
-                && MaterialFieldText.RangeOf(variety, field) is { } r && MaterialFieldText.RangeOf(species, field) is { } whole
-                && (r.Minimum < whole.Minimum || r.Maximum > whole.Maximum))
-                f.Add(new(variety.Name, field, $"{r.ToString("0.####")} lies outside its species' range {whole.ToString("0.####")}", FileOf(variety)));
+            else if (OutsideSpecies(variety, field, species) is { } problem) f.Add(new(variety.Name, field, problem, FileOf(variety)));
         }
         return f;
     }
+
+    /// <summary>
+    /// A variety written "like" a sibling of its species (reference-db/README.md, "Varieties like a sibling"): it takes
+    /// the sibling's values for every field it does not state, so what it states must differ from the sibling's value
+    /// (else it is a copy of the sibling's number), a stated range must lie inside its species' range, and it must differ
+    /// from the sibling in origin or in at least one stated field other than its notes (else it is the sibling again
+    /// under another name, and it would take a share of the prior for nothing).
+    /// </summary>
+    /// <param name="variety">The flattened variety.</param>
+    /// <param name="like">Its sibling's flattened entry and the fields the variety states itself.</param>
+    /// <param name="species">The species' own values, for the range rule; null to skip it.</param>
+    public static IReadOnlyList<CatalogueFinding> CheckAgainstSibling(Material variety, Likeness like, Material? species)
+    {
+        ArgumentNullException.ThrowIfNull(variety);
+        ArgumentNullException.ThrowIfNull(like);
+        var f = new List<CatalogueFinding>();
+        Material sibling = like.Sibling;
+        foreach (string field in like.OwnFields)
+        {
+            string own = MaterialFieldText.Of(variety, field), theirs = MaterialFieldText.Of(sibling, field);
+            if (own == theirs)
+                f.Add(new(variety.Name, field, $"repeats the value {own} of '{sibling.Name}', which it is like; state only what differs from it", FileOf(variety)));
+            else if (species is not null && OutsideSpecies(variety, field, species) is { } problem) f.Add(new(variety.Name, field, problem, FileOf(variety)));
+        }
+        if (variety.Origin == sibling.Origin
+            && !like.OwnFields.Any(x => x != "notes" && MaterialFieldText.Of(variety, x) != MaterialFieldText.Of(sibling, x)))
+            f.Add(new(variety.Name, "like", $"differs from '{sibling.Name}', which it is like, neither in origin ({variety.Origin.ToString().ToLowerInvariant()}) " +
+                "nor in any stated field but its notes: it is the same entry under another name", FileOf(variety)));
+        return f;
+    }
+
+    // An assembled stone's index is its top's and its SG the assembly's: outside the species' own ranges by nature.
+    private static string? OutsideSpecies(Material variety, string field, Material species) =>
+        variety.Origin != OriginClass.Composite
+            && MaterialFieldText.RangeOf(variety, field) is { } r && MaterialFieldText.RangeOf(species, field) is { } whole
+            && (r.Minimum < whole.Minimum || r.Maximum > whole.Maximum)
+            ? $"{r.ToString("0.####")} lies outside its species' range {whole.ToString("0.####")}"
+            : null;
+
+    /// <summary>
+    /// A variety written "like" a sibling variety of its species: the sibling's flattened entry and the fields (as the
+    /// family files name them) the variety states itself; it takes every other field from the sibling.
+    /// </summary>
+    /// <param name="Sibling">The sibling's flattened entry.</param>
+    /// <param name="OwnFields">The fields the variety states itself.</param>
+    public sealed record Likeness(Material Sibling, IReadOnlyList<string> OwnFields);
 
     private static IEnumerable<CatalogueFinding> CheckDispersionWithinSpecies(IReadOnlyList<Material> materials)
     {

@@ -15,16 +15,21 @@ internal static class EntryMapping
 {
     /// <summary>
     /// A variety (or user row) over the fields it inherits: the merged fields, the stated ones listed, each value's
-    /// source from the variety where it states the field and from the inherited side otherwise.
+    /// source from the variety where it states the field and from the inherited side otherwise. A variety "like" a
+    /// sibling inherits the sibling's merged fields; <paramref name="inheritedStated"/> (the sibling's stated fields)
+    /// then joins the entry's stated fields, so they name every field that does not come from the species.
     /// </summary>
     public static Material? Flatten(EntryIdentity id, EntryFieldsDocument? inherited, Func<string, ValueSource?> inheritedSource,
-        EntryFieldsDocument own, Func<string, ValueSource?> ownSource, Action<string, string> error)
+        EntryFieldsDocument own, Func<string, ValueSource?> ownSource, Action<string, string> error,
+        IReadOnlyCollection<string>? inheritedStated = null)
     {
         EntryFieldsDocument merged = inherited is null ? own : own.Over(inherited);
-        string[] stated = inherited is null ? [] : [.. own.Stated()];
+        string[] ownStated = inherited is null ? [] : [.. own.Stated()];
         var sources = new Dictionary<string, ValueSource>();
         foreach (string field in merged.Stated())
-            if ((inherited is null || stated.Contains(field) ? ownSource(field) : inheritedSource(field)) is { } source) sources[field] = source;
+            if ((inherited is null || ownStated.Contains(field) ? ownSource(field) : inheritedSource(field)) is { } source) sources[field] = source;
+        string[] stated = inheritedStated is null ? ownStated
+            : [.. merged.Stated().Where(f => ownStated.Contains(f) || inheritedStated.Contains(f))];
         return ToMaterial(id, merged, sources, stated, error);
     }
 

@@ -47,6 +47,12 @@ public static class FamilyFileReader
         var species = new Dictionary<string, Material>(StringComparer.Ordinal);
         var documents = new Dictionary<string, SpeciesDocument>(StringComparer.Ordinal);
         var declaredIn = new Dictionary<string, string>(StringComparer.Ordinal);
+        var likes = new Dictionary<string, CatalogueCheck.Likeness>(StringComparer.Ordinal);
+        // Which species (and file) each variety name belongs to, so that a "like" naming another species' variety says so.
+        var speciesOfVariety = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach ((FamilySource source, FamilyDocument document) in files)
+            foreach (SpeciesDocument s in document.Species)
+                foreach (VarietyDocument v in s.Varieties) speciesOfVariety.TryAdd(v.Name, $"species '{s.Species}' in {source.FileName}");
         foreach ((FamilySource source, FamilyDocument document) in files)
         {
             foreach (SpeciesDocument s in document.Species)
@@ -56,17 +62,21 @@ public static class FamilyFileReader
                     errors.Add($"{where}, field species: already declared in {first}; a species lives in exactly one file");
                 else declaredIn[s.Species] = source.FileName;
                 documents[s.Species] = s;
-                ReadSpecies(s, document.Family, where, byKey, materials, species, errors);
+                ReadSpecies(s, document.Family, where, byKey, speciesOfVariety, materials, species, likes, errors);
             }
         }
-        return errors.Count > 0 ? throw new CatalogueFormatException(errors) : new FamilyCatalogue(materials, species, documents, byKey);
+        return errors.Count > 0 ? throw new CatalogueFormatException(errors) : new FamilyCatalogue(materials, species, documents, byKey, likes);
     }
 
+    // A variety read: its fields merged over what it inherits (for a variety like it) and its flattened material.
+    private sealed record ReadVariety(EntryFieldsDocument Merged, Material Material);
+
     private static void ReadSpecies(SpeciesDocument s, string family, string where, Dictionary<string, ValueSource> references,
-        List<Material> materials, Dictionary<string, Material> species, List<string> errors)
+        Dictionary<string, string> speciesOfVariety, List<Material> materials, Dictionary<string, Material> species,
+        Dictionary<string, CatalogueCheck.Likeness> likes, List<string> errors)
     {
         if (s.Sources is null) errors.Add($"{where}, field sources: required: a map from field name (or \"*\") to a reference key");
-        CheckSources(s.Sources, null, references, (field, problem) => errors.Add($"{where}, field {field}: {problem}"));
+        CheckSources(s.Sources, null, "", references, (field, problem) => errors.Add($"{where}, field {field}: {problem}"));
         if (s.Varieties.Length == 0) errors.Add($"{where}, field varieties: at least one variety is required (a species with one has one entry)");
         Func<string, ValueSource?> speciesSource = field => Resolve(s.Sources, field, references);
         var own = new EntryIdentity(s.Species, s.Species, s.Species, "natural", s.Frequency, s.CrystalSystem, s.OpticCharacter, s.Frequency, family);
@@ -78,29 +88,78 @@ public static class FamilyFileReader
             if (field != "share" && speciesProblems.Add((field, problem))) errors.Add($"{where}, field {field}: {problem}");
         }
         if (EntryMapping.Flatten(own, null, speciesSource, s, speciesSource, SpeciesFail) is { } whole) species[s.Species] = whole;
-        foreach (VarietyDocument v in s.Varieties)
+        // Varieties by name, for "like" (a name used twice is the catalogue check's finding; the first is meant here).
+        var byName = new Dictionary<string, VarietyDocument>(StringComparer.Ordinal);
+        foreach (VarietyDocument v in s.Varieties) byName.TryAdd(v.Name, v);
+        var read = new Dictionary<VarietyDocument, ReadVariety?>(ReferenceEqualityComparer.Instance);
+
+        // A variety is read after the sibling it is like (chains allowed, cycles refused before any recursion), so a
+        // variety like a sibling that cannot be read is not read either: the sibling's own errors say why.
+        ReadVariety? Read(VarietyDocument v)
         {
+            if (read.TryGetValue(v, out ReadVariety? done)) return done;
             string at = $"{where}, variety '{v.Name}'";
-            HashSet<string> stated = [.. v.Stated()];
             void Fail(string field, string problem)
             {
                 if (!speciesProblems.Contains((field, problem))) errors.Add($"{at}, field {field}: {problem}");
             }
-            CheckSources(v.Sources, stated, references, Fail);
+            ReadVariety? sibling = null;
+            if (v.Like is { } like)
+            {
+                if (LikeProblem(v, s.Species, byName, speciesOfVariety) is { } problem) Fail("like", problem);
+                else sibling = Read(byName[like]);
+                if (sibling is null) return read[v] = null;
+            }
+            HashSet<string> stated = [.. v.Stated()];
+            CheckSources(v.Sources, stated, sibling is null ? "its species' source" : $"the source it has in '{v.Like}'", references, Fail);
             var id = new EntryIdentity(v.Name, s.Species, v.Variety, v.Origin, v.Share, s.CrystalSystem, s.OpticCharacter, s.Frequency, family);
-            if (EntryMapping.Flatten(id, s, speciesSource, v, field => Resolve(v.Sources, field, references), Fail) is { } m) materials.Add(m);
+            Func<string, ValueSource?> ownSource = field => Resolve(v.Sources, field, references);
+            Material? m = sibling is null
+                ? EntryMapping.Flatten(id, s, speciesSource, v, ownSource, Fail)
+                : EntryMapping.Flatten(id, sibling.Merged, field => sibling.Material.Sources.GetValueOrDefault(field), v, ownSource, Fail,
+                    sibling.Material.StatedFields);
+            if (m is null) return read[v] = null;
+            if (sibling is not null) likes[v.Name] = new CatalogueCheck.Likeness(sibling.Material, [.. stated]);
+            return read[v] = new ReadVariety(v.Over(sibling?.Merged ?? s), m);
         }
+
+        foreach (VarietyDocument v in s.Varieties)
+            if (Read(v) is { } r) materials.Add(r.Material);
+    }
+
+    // What is wrong with a variety's "like", if anything: an unknown name, another species' variety, or a cycle (itself,
+    // or a chain that comes back to it or runs into a cycle further on). A chain (a like b, b like c) is allowed.
+    private static string? LikeProblem(VarietyDocument v, string species, Dictionary<string, VarietyDocument> byName,
+        Dictionary<string, string> speciesOfVariety)
+    {
+        string like = v.Like!;
+        if (!byName.ContainsKey(like))
+            return speciesOfVariety.TryGetValue(like, out string? other)
+                ? $"'{like}' is a variety of {other}, not of species '{species}'; a variety can be like only a sibling of its own species"
+                : $"'{like}' is not the name of a variety of species '{species}' (names are compared exactly)";
+        var chain = new List<string> { v.Name };
+        VarietyDocument current = v;
+        while (current.Like is { } next && byName.TryGetValue(next, out VarietyDocument? sibling))
+        {
+            bool back = next == v.Name, inner = !back && chain.Contains(next);
+            chain.Add(next);
+            if (back) return $"'{like}' leads back to this variety ({string.Join(" → ", chain)}); a chain of \"like\" must not form a cycle";
+            if (inner) return $"'{like}' leads into a cycle ({string.Join(" → ", chain)}); a chain of \"like\" must not form a cycle";
+            current = sibling;
+        }
+        return null;
     }
 
     // A sources map names fields a document can hold ("*" too), each a known reference; a variety's only fields it states.
-    private static void CheckSources(Dictionary<string, string>? map, HashSet<string>? stated, Dictionary<string, ValueSource> references, Action<string, string> fail)
+    private static void CheckSources(Dictionary<string, string>? map, HashSet<string>? stated, string inheritedFrom,
+        Dictionary<string, ValueSource> references, Action<string, string> fail)
     {
         foreach ((string field, string key) in map ?? [])
         {
             if (!SourceFields.Contains(field))
                 fail("sources", $"'{field}' is not a field that takes a source; use \"*\" or one of {string.Join(", ", CatalogueFields.Inheritable)}");
             else if (stated is not null && field != "*" && !stated.Contains(field))
-                fail("sources", $"names '{field}', which this variety does not state (it inherits it with its species' source)");
+                fail("sources", $"names '{field}', which this variety does not state (it inherits it with {inheritedFrom})");
             if (!references.ContainsKey(key))
                 fail("sources", $"'{key}' (for {field}) is not a reference key of this file or of sources.json");
         }

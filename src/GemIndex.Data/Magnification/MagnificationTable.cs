@@ -8,7 +8,9 @@ namespace GemIndex.Data.Magnification;
 /// <summary>
 /// reference-db/magnification.json: for named catalogue entries, the probability of holding each magnification
 /// feature, with its source. Read once from the embedded file and attached to the shipped entries after the catalogue
-/// loads, keyed by entry name (the SQLite schema does not hold it); every other entry keeps its origin's defaults.
+/// loads, keyed by entry name (the SQLite schema does not hold it); every other entry keeps its origin's defaults. An
+/// entry may give <c>"like": "other entry"</c> instead of its features (a heated stone keeps its natural sibling's
+/// inclusions) and takes that entry's listed features; the other entry must list features of its own (no chains).
 /// </summary>
 public sealed class MagnificationTable
 {
@@ -42,6 +44,8 @@ public sealed class MagnificationTable
             if (!doc.RootElement.TryGetProperty("entries", out var list) || list.ValueKind != JsonValueKind.Array)
                 throw new CatalogueFormatException(["magnification.json: \"entries\" must be a list."]);
             int index = 0;
+            var names = new HashSet<string>(StringComparer.Ordinal);
+            var likes = new List<(string At, string Name, string Sibling)>();
             foreach (var entry in list.EnumerateArray())
             {
                 string at = $"magnification.json: entries[{index++}]";
@@ -51,6 +55,15 @@ public sealed class MagnificationTable
                 at += $" ({name})";
                 if (!entry.TryGetProperty("source", out var source) || source.ValueKind != JsonValueKind.String || !keys.Contains(source.GetString()!))
                     errors.Add($"{at}: \"source\" must be one of the file's reference keys.");
+                if (entry.TryGetProperty("like", out var like))
+                {
+                    // A treated stone that keeps its natural sibling's inclusions takes the sibling's listed features.
+                    if (like.ValueKind != JsonValueKind.String || entry.TryGetProperty("features", out _))
+                        errors.Add($"{at}: \"like\" must be the name of another entry of the table, given instead of \"features\".");
+                    else if (!names.Add(name)) errors.Add($"{at}: the entry is named twice.");
+                    else likes.Add((at, name, like.GetString()!));
+                    continue;
+                }
                 if (!entry.TryGetProperty("features", out var features) || features.ValueKind != JsonValueKind.Object)
                 { errors.Add($"{at}: \"features\" must be an object of word: probability."); continue; }
                 var probabilities = new Dictionary<MagnificationFeature, double>();
@@ -62,7 +75,13 @@ public sealed class MagnificationTable
                         errors.Add($"{at}: {feature.Name} must be a probability, 0–1.");
                     else probabilities[known] = feature.Value.GetDouble();
                 }
-                if (!entries.TryAdd(name, probabilities)) errors.Add($"{at}: the entry is named twice.");
+                if (!names.Add(name) || !entries.TryAdd(name, probabilities)) errors.Add($"{at}: the entry is named twice.");
+            }
+            var own = new Dictionary<string, IReadOnlyDictionary<MagnificationFeature, double>>(entries, StringComparer.Ordinal);
+            foreach ((string at, string name, string sibling) in likes)
+            {
+                if (own.TryGetValue(sibling, out var listed)) entries[name] = listed;
+                else errors.Add($"{at}: \"like\" names '{sibling}', which is not an entry of the table with features of its own.");
             }
         }
         catch (JsonException e) { errors.Add($"magnification.json: not valid JSON: {e.Message}"); }

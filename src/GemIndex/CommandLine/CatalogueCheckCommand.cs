@@ -21,7 +21,7 @@ internal static class CatalogueCheckCommand
             FamilyCatalogue shipped = ShippedCatalogue.Families;
             IReadOnlyList<Material> user = new UserCatalogue(CatalogueCommand.Locations(pr, directory).UserCataloguePath).Load();
             IReadOnlyList<Material> all = [.. shipped.Materials, .. user];
-            IReadOnlyList<CatalogueFinding> findings = CatalogueCheck.Check(all, shipped.Species);
+            IReadOnlyList<CatalogueFinding> findings = CatalogueCheck.Check(all, shipped.Species, shipped.Likes);
             SourcingSummary sourcing = SourcingSummary.Of(all);
             if (pr.GetValue(json))
                 CommandJson.Write(output, new CatalogueCheckJson(all.Count, sourcing,

@@ -322,6 +322,46 @@ public class CatalogueCheckTests
     }
 
     [Fact]
+    public void A_like_variety_is_held_against_its_sibling_not_its_species()
+    {
+        Material species = Uniaxial("quartz species") with { SpecificGravity = new(2.60, 2.70) };
+        Material sibling = Uniaxial("amethyst") with { SpecificGravity = new(2.64, 2.66), Colours = ["purple"], StatedFields = ["sg", "colours"] };
+        // Heated: the sibling's SG (inherited, not its own), its own colours; pleochroism stated back to the species' value.
+        Material heated = sibling with { Name = "heated amethyst", Origin = OriginClass.Treated, Colours = ["yellow"], StatedFields = ["sg", "pleochroism", "colours"] };
+        sibling = sibling with { Pleochroism = PleochroismStrength.Moderate, StatedFields = ["sg", "pleochroism", "colours"] };
+        var like = new CatalogueCheck.Likeness(sibling, ["pleochroism", "colours"]);
+        Assert.Empty(CatalogueCheck.CheckAgainstSibling(heated, like, species));
+        // Without the likeness the same entry would be refused for the pleochroism it shares with the species.
+        Assert.Equal("pleochroism", Assert.Single(CatalogueCheck.CheckAgainstSpecies(heated, species)).Field);
+        var checkedWithLike = CatalogueCheck.Check([sibling, heated], new Dictionary<string, Material> { ["quartz"] = species },
+            new Dictionary<string, CatalogueCheck.Likeness> { ["heated amethyst"] = like });
+        Assert.True(checkedWithLike.Count == 0, string.Join("\n", checkedWithLike));
+    }
+
+    [Fact]
+    public void A_like_variety_repeating_its_siblings_value_or_leaving_the_species_range_is_reported()
+    {
+        Material species = Uniaxial("quartz species") with { SpecificGravity = new(2.60, 2.70) };
+        Material sibling = Uniaxial("amethyst") with { Colours = ["purple"], StatedFields = ["colours"] };
+        Material heated = sibling with { Name = "heated amethyst", Origin = OriginClass.Treated, SpecificGravity = new(2.65, 2.75) };
+        CatalogueFinding[] f = [.. CatalogueCheck.CheckAgainstSibling(heated, new(sibling, ["colours", "sg"]), species)];
+        Assert.Equal(["colours", "sg"], f.Select(x => x.Field));
+        Assert.StartsWith("repeats the value [purple] of 'amethyst', which it is like", f[0].Problem, StringComparison.Ordinal);
+        Assert.Contains("lies outside its species' range", f[1].Problem, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_like_variety_of_the_siblings_origin_must_differ_in_a_field_other_than_its_notes()
+    {
+        Material sibling = Uniaxial("amethyst") with { Colours = ["purple"], Notes = "Natural." };
+        Material copy = sibling with { Name = "amethyst again", Notes = "The same." };
+        CatalogueFinding f = Assert.Single(CatalogueCheck.CheckAgainstSibling(copy, new(sibling, ["notes"]), null));
+        Assert.Equal(("amethyst again", "like"), (f.Entry, f.Field));
+        Assert.Empty(CatalogueCheck.CheckAgainstSibling(copy with { Origin = OriginClass.Treated }, new(sibling, ["notes"]), null));
+        Assert.Empty(CatalogueCheck.CheckAgainstSibling(copy with { Colours = ["violet"] }, new(sibling, ["notes", "colours"]), null));
+    }
+
+    [Fact]
     public void A_species_with_capitals_is_reported()
     {
         AssertOnlyFinding(Uniaxial() with { Species = "Quartz" }, "species");

@@ -51,7 +51,7 @@ public class ShippedCatalogueTests
         using var temp = new TempDirectory();
         IReadOnlyList<Material> shipped = ShippedCatalogue.Load(temp.Path);
         Assert.Equal(FamilyFileReader.ReadAll(ShippedCatalogue.Sources).Count, shipped.Count);
-        IReadOnlyList<CatalogueFinding> findings = CatalogueCheck.Check(shipped, ShippedCatalogue.Families.Species);
+        IReadOnlyList<CatalogueFinding> findings = CatalogueCheck.Check(shipped, ShippedCatalogue.Families.Species, ShippedCatalogue.Families.Likes);
         Assert.True(findings.Count == 0, string.Join("\n", findings));
     }
 
@@ -71,5 +71,30 @@ public class ShippedCatalogueTests
         using var temp = new TempDirectory();
         int count = ShippedCatalogue.Load(temp.Path).Count;
         Assert.True(count >= 200, $"the shipped catalogue has {count} entries; the target is at least 200");
+    }
+
+    [Theory]
+    [InlineData("heated tanzanite", "tanzanite")]
+    [InlineData("heated sapphire", "sapphire")]
+    [InlineData("heated ruby", "ruby")]
+    [InlineData("heated aquamarine", "aquamarine")]
+    [InlineData("heated pink topaz", "pink topaz")]
+    public void A_heated_entry_is_written_like_its_unheated_sibling_and_reads_with_its_lines_and_sources(string name, string sibling)
+    {
+        // Built and loaded as the engine sees it; the likeness from the family files.
+        using var temp = new TempDirectory();
+        IReadOnlyList<Material> shipped = ShippedCatalogue.Load(temp.Path);
+        Material heated = shipped.Single(m => m.Name == name), natural = shipped.Single(m => m.Name == sibling);
+        Assert.Equal(sibling, ShippedCatalogue.Families.Likes[name].Sibling.Name);
+        Assert.Equal((OriginClass.Treated, OriginClass.Natural), (heated.Origin, natural.Origin));
+        Assert.Equal(natural.Species, heated.Species);
+        Assert.NotEmpty(natural.AbsorptionLines);
+        Assert.Equal(natural.AbsorptionLines, heated.AbsorptionLines);
+        Assert.Equal((natural.Indices, natural.SpecificGravity, natural.Pleochroism), (heated.Indices, heated.SpecificGravity, heated.Pleochroism));
+        Assert.Equal(natural.UvLong, heated.UvLong);
+        Assert.Equal(natural.UvShort, heated.UvShort);
+        // A field the heated entry does not write keeps the sibling's source key, so the sourcing counts do not change.
+        foreach (string field in natural.Sources.Keys.Except(ShippedCatalogue.Families.Likes[name].OwnFields))
+            Assert.Equal(natural.Sources[field].Key, heated.Sources[field].Key);
     }
 }

@@ -39,10 +39,33 @@ public class MagnificationTableTests
     [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"x","source":"a","features":{"curved_striae":1.5}}]}""", "curved_striae must be a probability")]
     [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"x","source":"b","features":{}}]}""", "\"source\" must be one of")]
     [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"x","source":"a","features":{}},{"name":"x","source":"a","features":{}}]}""", "named twice")]
+    [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"x","source":"a","like":"y"}]}""", "'y', which is not an entry of the table")]
+    [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"y","source":"a","features":{}},{"name":"x","source":"a","like":"y","features":{}}]}""", "given instead of \"features\"")]
+    [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"z","source":"a","features":{}},{"name":"y","source":"a","like":"z"},{"name":"x","source":"a","like":"y"}]}""", "with features of its own")]
     public void A_fault_in_the_table_is_an_error_naming_the_entry(string json, string expected)
     {
         var e = Assert.Throws<CatalogueFormatException>(() => MagnificationTable.Read(json));
         Assert.Contains("(x)", e.Errors[0]);
         Assert.Contains(expected, e.Errors[0]);
+    }
+
+    [Fact]
+    public void An_entry_like_another_takes_its_listed_features()
+    {
+        MagnificationTable table = MagnificationTable.Read("""
+            {"references":[{"key":"a"}],"entries":[{"name":"x","source":"a","like":"y"},{"name":"y","source":"a","features":{"curved_striae":0.7}}]}
+            """);
+        Assert.Equal(0.7, table.Entries["x"][MagnificationFeature.CurvedStriae]);
+    }
+
+    [Fact]
+    public void The_shipped_heated_ruby_keeps_the_unheated_rubys_inclusions()
+    {
+        using var temp = new TempDirectory();
+        IReadOnlyList<Material> shipped = ShippedCatalogue.Load(temp.Path);
+        Material ruby = shipped.Single(m => m.Name == "ruby"), heated = shipped.Single(m => m.Name == "heated ruby");
+        Assert.NotEmpty(MagnificationTable.Embedded.Entries["ruby"]);
+        foreach (MagnificationFeature f in Enum.GetValues<MagnificationFeature>())
+            Assert.Equal(ruby.MagnificationProfile.ProbabilityOf(f), heated.MagnificationProfile.ProbabilityOf(f));
     }
 }
