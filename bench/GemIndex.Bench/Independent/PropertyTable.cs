@@ -24,7 +24,9 @@ internal static class PropertyTable
                 new(450, false, "yellow", NaturalOnly: true),
             ],
             Hues = [new("blue", .35), new("red", .25), new("pink", .12), new("yellow", .1), new("colourless", .06), new("purple", .05), new("orange", .04), new("green", .03)],
-            Origins = [new("natural", .55), new("synthetic", .3), new("treated", .12), new("composite", .03)],
+            Origins = [new("natural", .15), new("synthetic", .3), new("treated", .52), new("composite", .03)],
+            OriginCitation = "gemsociety.org 'Corundum treatments': almost all rubies and sapphires receive heat treatment; aussiesapphire.com 'Heat treatment': "
+                + "buyers should assume all sapphire has been heated (treated .52 against unheated natural .15; synthetic and composite shares: judgement)",
             Citation = "gemologyproject.com/wiki Corundum (rev. 4643): uniaxial −, RI 1.762–1.770 (+.009, −.005), birefringence 0.008–0.010, dispersion 0.018, pleochroism weak to moderate; "
                 + "Handbook of Precious Stones (wikisource p. 80): SG 3.97–4.05; lotusgemology.com 'Gem testing with the spectroscope': blue sapphire iron lines 450, 460, 470 nm (natural); "
                 + "clouddl.cn UV-vis article: natural yellow sapphire 450 nm, heated lacks it; gemologiamllopis.com certificate 24-1821: ruby doublet 694/692 nm",
@@ -36,7 +38,9 @@ internal static class PropertyTable
             SpecificGravity = new(2.63, 2.92), Pleochroism = PleochroismHabit.Moderate, Dispersion = 0.014,
             Lines = [new(683, true, "green"), new(680, true, "green"), new(637, false, "green")],
             Hues = [new("green", .4), new("blue", .35), new("yellow", .1), new("pink", .08), new("colourless", .05), new("red", .02)],
-            Origins = [new("natural", .7), new("synthetic", .15), new("treated", .15)],
+            Origins = [new("natural", .45), new("synthetic", .15), new("treated", .4)],
+            OriginCitation = "igindia.techway.online 'Emerald': most emeralds are oiled to fill surface-reaching cracks; gemsociety.org 'Just ask Jeff' (aquamarine): "
+                + "most aquamarine starts bluish green and is heated to blue (treated .4 against untreated natural .45: judgement from those words)",
             Citation = "Wikipedia 'Beryl' infobox (wiki.av1.space copy; cites Handbook of Mineralogy, mindat): uniaxial −, indices 1.564–1.602 (the larger list taken as ω), birefringence 0.004–0.007, SG 2.63–2.92; "
                 + "cadby.co.uk Emerald: birefringence 0.005–0.008, dispersion 0.014, emerald lines 683, 680, 637 nm",
             Judgement = "SG rising with the indices (alkali-rich beryl): judgement, not read in a source here; hue, origin weights: judgement",

@@ -57,5 +57,8 @@ internal sealed record SpeciesProperties
 
     public required string Citation { get; init; }
 
+    /// <summary>Where the origin shares come from, when a page was read for them (otherwise they are a judgement).</summary>
+    public string OriginCitation { get; init; } = "";
+
     public string Judgement { get; init; } = "hue weights, UV weights and origin shares: judgement";
 }

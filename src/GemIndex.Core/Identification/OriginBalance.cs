@@ -13,10 +13,10 @@ namespace GemIndex.Core.Identification;
 internal static class OriginBalance
 {
     /// <summary>
-    /// The most an origin may hold of its species on the catalogue's shares alone (a judgement: the bound for an
-    /// origin given without a test that decides it).
+    /// The most an origin may hold of its species on the catalogue's shares alone: held below the 80 % at which an origin
+    /// reads as a confident call, since no test decided it (a judgement; docs/ranking.md §3, origin within a species).
     /// </summary>
-    public const double Cap = 0.8;
+    public const double Cap = 0.75;
 
     /// <summary>When the tests alone, with every origin equally likely, give the leading origin this much, they decide it.</summary>
     public const double Decided = 0.8;

@@ -211,7 +211,7 @@ public class IdentifierTests
     public void Without_a_test_that_separates_them_no_origin_holds_more_than_eighty_percent_of_its_species()
     {
         // Natural sapphire very common, synthetic rare (a serious alternative: one in eight): on the refractometer alone the
-        // shares would give natural 16/18 = 89 %; the tests do not separate the two, so the split is held at 80 / 20.
+        // shares would give natural 16/18 = 89 %; the tests do not separate the two, so the split is held at the cap (75 / 25).
         Material natural = Make("blue sapphire", "corundum", OpticalIndices.Uniaxial(new(1.767, 1.772), new(1.759, 1.763)), 3.99, 4.01, OpticSign.Negative,
             new(0.008, 0.009), frequency: BenchFrequency.VeryCommon);
         Material synthetic = Make("synthetic blue sapphire", "corundum", OpticalIndices.Uniaxial(new(1.767, 1.772), new(1.759, 1.763)), 3.99, 4.01, OpticSign.Negative,
