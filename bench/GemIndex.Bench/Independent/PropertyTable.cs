@@ -611,5 +611,18 @@ internal static class PropertyTable
                 + "nationalgemlab.in: pleochroism weak; funwing.com: distinct",
             Judgement = "β's place from gemfame's values; which bands are strong (the sources name them only) and hue weights: judgement",
         },
+        new()
+        {
+            Name = "dumortierite", BenchWeight = 0.15, Form = StoneForm.Aggregate, Opaque = true,
+            Indices = PrincipalValues.Biaxial(new(1.669, 1.686), new(0.011, 0.037), new(0.9, 0.98)),
+            SpecificGravity = new(3.21, 3.41),
+            UvShort = [new("weak", .4), new("moderate", .3), new("inert", .3)],
+            Hues = [new("blue", .7), new("purple", .2), new("brown", .05), new("pink", .05)],
+            Citation = "gemfame.com dumortierite: ornamental material massive blue or violet, SG 3.21–3.41, a blurred shadow edge at about 1.68; Sri Lankan crystal 1.686, 1.722, 1.723, biaxial −, "
+                + "birefringence 0.037; gemstonebuzz.com dumortierite: RI 1.686–1.723, biaxial −, SG 3.26–3.41, commonly opaque, blue to bluish white in SW, most gem material is dumortierite in quartz; "
+                + "gemstones.comparenature.com dumortierite: RI 1.669–1.723, birefringence 0.011–0.037",
+            Judgement = "the row is massive dumortierite (the quartz rock it colours reads as quartz and is left out); α 1.669–1.686 from the two lower bounds read; β's place from the Sri Lankan "
+                + "crystal; UV strengths, hue weights and bench weight: judgement",
+        },
     ];
 }
