@@ -22,6 +22,16 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
     /// <summary>Spectroscope: a strong line is seen 90 % of the time, a faint one 30 %; a spurious line appears on 10 % of spectra; positions read with σ 2 nm.</summary>
     public const double StrongLineSeen = 0.9, FaintLineSeen = 0.3, SpuriousLine = 0.1, LineReadingNanometres = 2;
 
+    /// <summary>
+    /// A spot reading on an aggregate whose principal indices span at least this much (the carbonates: calcite, aragonite,
+    /// malachite, pearl and shell) is read at one end of the span, the lowest or the highest principal index, never in
+    /// between: the shadow edge jumps between the two as the polarizing filter is turned (the "birefringence blink",
+    /// named for shell by globalgemology.com 'Abalone shell'); which end the bench writes is an even chance. Below it
+    /// the spot is an average somewhere inside the span, as for turquoise and howlite, whose sources give one spot value
+    /// inside their published range. The threshold and the even chance: common practice and judgement.
+    /// </summary>
+    public const double BlinkSpan = 0.1;
+
     /// <summary>Heavy liquids a bench keeps, densest first (studiopjj.blogspot.com, "Indicator stones").</summary>
     private static readonly double[] Liquids = [3.32, 3.05, 2.85, 2.67, 2.62, 2.57];
 
@@ -118,7 +128,7 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
         bool spot = s.Form == StoneForm.Aggregate || Chance(s.Form == StoneForm.Amorphous ? 0.5 : 0.15);
         if (spot)
         {
-            double averaged = low + random.NextDouble() * (high - low);
+            double averaged = Blinks(s, low, high) ? (Chance(0.5) ? low : high) : low + random.NextDouble() * (high - low);
             if (averaged >= liquid) return r with { RefractometerMethod = "spot", OverLimit = true };
             double reading = Math.Round(averaged + (random.NextDouble() - 0.5) * 0.01, 2);
             return reading > liquid
@@ -156,6 +166,9 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
             : r with { RefractometerMethod = "facet", Steps = steps };
     }
 
+    /// <summary>True when a spot on the stone is read at either end of its span (<see cref="BlinkSpan"/>).</summary>
+    public static bool Blinks(SpeciesProperties s, double low, double high) => s.Form == StoneForm.Aggregate && high - low >= BlinkSpan;
+
     private double Read(double index, double sigma) => Math.Round(index + Gauss(sigma), 3);
 
     private BenchReadings Gravity(BenchReadings r, SpeciesProperties s, double sg)
@@ -169,10 +182,9 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
             double celsius = 16 + 12 * random.NextDouble();
             double water = air - air * WaterDensity.RelativeToFourDegrees(celsius) / sg;
             // Balance 0.001 ct; the wire's surface tension and small bubbles add about 0.002 ct (common practice).
-            return r with
-            {
-                Weighing = new(Math.Round(air + Gauss(0.001), 3), Math.Round(water + Gauss(0.002), 3), Chance(0.7) ? Math.Round(celsius, 1) : null),
-            };
+            var weighing = new HydrostaticWeights(Math.Round(air + Gauss(0.001), 3), Math.Round(water + Gauss(0.002), 3), Chance(0.7) ? Math.Round(celsius, 1) : null);
+            // A stone lighter than water (a plastic drawn below its range) floats: nothing to weigh in water (after the draws, so the seed's stream is kept).
+            return weighing.WaterCarats > 0 ? r with { Weighing = weighing } : r;
         }
         if (mode < 0.85)
         {

@@ -60,6 +60,14 @@ internal static class MagnificationHabits
     private const string Moissanite = "diamondschina.com moissanite identification (Hodgkinson: needle-like inclusions); francoisjewellers.co.za (needle-like lines typical)";
     private const string GarnetNeedles = "J. Mineral. Petrol. Sci. 2023 'Rutile exsolution lamellae of garnet' (rutile needles in almandine-pyrope at 120°)";
     private const string Demantoid = "ilatminerals.ru 'Types of inclusions in the Ural demantoid' (horsetails of byssolite)";
+    private const string Plastic = "astrogyangranth.com 'plastic' (gas bubbles, flow lines, mould marks, orange-peel surface)";
+    private const string Obsidian = "jiehonggem.com 'Natural glass – obsidian' (gas bubbles, crystallites, stubby needle-like inclusions, banding)";
+    private const string Lapis = "gemstones-guide.com lapis lazuli (brassy pyrite and white calcite inclusions)";
+    private const string Sodalite = "tannerchaney.com sodalite (white calcite veining, pyrite now and then)";
+    private const string Malachite = "gemstonebuzz.com malachite (curved and straight banding under magnification)";
+    private const string TurquoiseAndHowlite = "jiehonggem.com turquoise and howlite (matrix, spiderweb veins; dye and impregnation found by magnification 'possibly')";
+    private const string Shell = "jtv.com 'Shell pearl' (parallel growth structure, flame-like structure)";
+    private const string Alabaster = "jtv.com 'Alabaster' (banded, veined, often dyed)";
 
     private static FeatureHabit H(string word, double held) => new(word, held);
 
@@ -339,6 +347,80 @@ internal static class MagnificationHabits
             Source = "from memory" },
         new() { Species = "euclase", Origin = "natural", Method = "natural", Clean = .3,
             Features = [H("healed_fractures", .2), H("fluid_inclusions", .2), H("colour_banding", .2)],
+            Source = "from memory" },
+
+        // The rows added with the rival species of the property table (kept short: their features rarely decide an origin).
+        new() { Species = "plastic", Origin = "imitation", Method = "moulded plastic", Clean = .3,
+            Features = [H("round_bubbles", .5), H("elongated_bubbles", .2), H("curved_striae", .2)],
+            Source = $"{Plastic}; flow lines written as curved striae, as for glass: judgement" },
+        new() { Species = "natural glass", Origin = "natural", Method = "natural", Clean = .3,
+            Features = [H("round_bubbles", .3), H("elongated_bubbles", .2), H("crystals", .3), H("needles_silk", .2), H("colour_banding", .2)],
+            Source = Obsidian },
+        new() { Species = "lazurite", Origin = "natural", Method = "natural", Clean = .1,
+            Features = [H("crystals", .7), H("colour_banding", .2)],
+            Source = Lapis },
+        new() { Species = "lazurite", Origin = "treated", Method = "dyed or waxed", Clean = .2,
+            Features = [H("crystals", .6), H("dye_in_fractures", .4)],
+            Source = $"{Lapis}; dye gathered in cracks and calcite: from memory" },
+        new() { Species = "sodalite", Origin = "natural", Method = "natural", Clean = .2,
+            Features = [H("colour_banding", .5), H("crystals", .2)],
+            Source = $"{Sodalite}; veins written as colour banding: judgement" },
+        new() { Species = "calcite", Origin = "natural", Method = "natural", Clean = .3,
+            Features = [H("colour_banding", .5), H("crystals", .1)],
+            Source = "Smith, Gem-Stones (bitlit.ru p. 99: marble streaked with other substances)" },
+        new() { Species = "calcite", Origin = "treated", Method = "dyed", Clean = .1,
+            Features = [H("dye_in_fractures", .5), H("colour_banding", .4)],
+            Source = "from memory (dye along grain boundaries and cracks)" },
+        new() { Species = "malachite", Origin = "natural", Method = "natural", Clean = .05,
+            Features = [H("colour_banding", .9)],
+            Source = Malachite },
+        new() { Species = "malachite", Origin = "treated", Method = "waxed or resin filled", Clean = .05,
+            Features = [H("colour_banding", .9)],
+            Source = $"{Malachite}; common practice: wax leaves nothing the vocabulary names" },
+        new() { Species = "turquoise", Origin = "natural", Method = "natural", Clean = .3,
+            Features = [H("crystals", .3), H("colour_banding", .3)],
+            Source = $"{TurquoiseAndHowlite}; matrix written as crystals or banding: judgement" },
+        new() { Species = "turquoise", Origin = "treated", Method = "stabilized or dyed", Clean = .3,
+            Features = [H("crystals", .3), H("colour_banding", .3), H("dye_in_fractures", .25)],
+            Source = TurquoiseAndHowlite },
+        new() { Species = "pearl", Origin = "natural", Method = "natural or cultured", Clean = .8,
+            Features = [H("colour_banding", .2)],
+            Source = "from memory (the vocabulary has no word for nacre structure or the bead nucleus)" },
+        new() { Species = "pearl", Origin = "treated", Method = "dyed or irradiated", Clean = .5,
+            Features = [H("dye_in_fractures", .5)],
+            Source = "from memory (dye gathered at the drill hole and in blemishes)" },
+        new() { Species = "shell", Origin = "natural", Method = "natural", Clean = .4,
+            Features = [H("colour_banding", .5)],
+            Source = $"{Shell}; parallel growth written as banding: judgement" },
+        new() { Species = "shell", Origin = "treated", Method = "dyed", Clean = .2,
+            Features = [H("dye_in_fractures", .5), H("colour_banding", .4)],
+            Source = $"{Shell}; dye: from memory" },
+        new() { Species = "howlite", Origin = "natural", Method = "natural", Clean = .3,
+            Features = [H("colour_banding", .5)],
+            Source = $"{TurquoiseAndHowlite}; spiderweb veins written as banding: judgement" },
+        new() { Species = "howlite", Origin = "treated", Method = "dyed", Clean = .1,
+            Features = [H("dye_in_fractures", .6), H("colour_banding", .4)],
+            Source = TurquoiseAndHowlite },
+        new() { Species = "albite", Origin = "natural", Method = "natural", Clean = .4,
+            Features = [H("healed_fractures", .2), H("crystals", .1), H("needles_silk", .1)],
+            Source = "from memory" },
+        new() { Species = "gypsum", Origin = "natural", Method = "natural", Clean = .4,
+            Features = [H("colour_banding", .4)],
+            Source = Alabaster },
+        new() { Species = "gypsum", Origin = "treated", Method = "dyed", Clean = .2,
+            Features = [H("dye_in_fractures", .4), H("colour_banding", .3)],
+            Source = Alabaster },
+        new() { Species = "aragonite", Origin = "natural", Method = "natural", Clean = .3,
+            Features = [H("colour_banding", .5), H("crystals", .1)],
+            Source = "gemdat.org aragonite (layered, banded massive material)" },
+        new() { Species = "staurolite", Origin = "natural", Method = "natural", Clean = .2,
+            Features = [H("crystals", .3), H("healed_fractures", .2)],
+            Source = "from memory" },
+        new() { Species = "dumortierite", Origin = "natural", Method = "natural", Clean = .3,
+            Features = [H("needles_silk", .4), H("crystals", .2), H("healed_fractures", .2)],
+            Source = "gemstonebuzz.com dumortierite (parallel fibrous inclusions, crystals, fingerprints)" },
+        new() { Species = "sinhalite", Origin = "natural", Method = "natural", Clean = .3,
+            Features = [H("healed_fractures", .2), H("crystals", .15), H("fluid_inclusions", .15)],
             Source = "from memory" },
     ];
 

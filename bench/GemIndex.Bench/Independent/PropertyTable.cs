@@ -432,5 +432,201 @@ internal static class PropertyTable
             Citation = "Smith, Gem-Stones ch. XXXV (clyx.com): biaxial +, least and greatest index 1.651 and 1.670, SG 3.07",
             Judgement = "ranges of ±0.002 and ±0.03 around Smith's single values, β's place: judgement",
         },
+        // Catalogue species added as rivals (docs/benchmark.md, "The property table"): imitations, organics, opaque
+        // aggregates and a few rare crystals the bench meets. "white" is written for opaque white stones, as a bench does.
+        new()
+        {
+            Name = "plastic", BenchWeight = 0.8, Form = StoneForm.Amorphous, Strained = 0.6,
+            Indices = PrincipalValues.Single(1.46, 1.70),
+            SpecificGravity = new(1.05, 1.55),
+            Hues = [new("yellow", .2), new("orange", .15), new("white", .15), new("red", .1), new("black", .1), new("blue", .1), new("green", .1), new("colourless", .1)],
+            Origins = [new("imitation", 1)],
+            Citation = "astrogyangranth.com 'plastic' (article AGG0000161, a GIA-style data sheet): amorphous, singly refractive with strong anomalous double refraction and strain colours common, "
+                + "RI usually 1.460–1.700, no birefringence, SG usually 1.05–1.55, imitates amber, coral, jet, ivory, pearl and opal; gia.edu Gems & Gemology Spring 2018 Lab Notes "
+                + "'New plastic imitation opal from Kyocera': hydrostatic SG 1.35, RI 1.49",
+            Judgement = "anomalous double refraction in 60 % (the sheet's 'common'), hue weights (mostly organic imitations), bench weight: judgement",
+        },
+        new()
+        {
+            Name = "natural glass", BenchWeight = 0.4, Form = StoneForm.Amorphous, Strained = 0.1,
+            Indices = PrincipalValues.Single(1.46, 1.54),
+            SpecificGravity = new(2.20, 2.60),
+            Hues = [new("black", .45), new("green", .2), new("brown", .15), new("grey", .1), new("yellow", .05), new("red", .05)],
+            Citation = "tradeshop.com 'Tektite (Moldavite)': RI 1.46–1.54, SG 2.2–2.9; jiehonggem.com 'Natural glass – obsidian' (GIA Gem Reference Guide): RI 1.49 (+.020, −.010), SG 2.40 (+.10, −.07); "
+                + "langantiques.com moldavite: RI 1.48–1.50; gemstones-guide.com 'Natural glass': obsidian SG 2.34–2.46; Smith, Gem-Stones (1919; oldandsold.com 'Obsidian, moldavite'): obsidian about 1.50, "
+                + "moldavite 1.51 and SG 2.50, single refraction; gemsociety.org 'Natural glass': RI 1.46–1.69 and SG 2.20–3.00 over every type, UV not diagnostic",
+            Judgement = "SG cut at 2.60 (obsidian and moldavite, the types a bench meets; the rare high types of the wider ranges left out), strain in 10 %, hue weights: judgement",
+        },
+        new()
+        {
+            Name = "lazurite", BenchWeight = 0.6, Form = StoneForm.Aggregate, Opaque = true,
+            Indices = PrincipalValues.Single(1.50, 1.55),
+            SpecificGravity = new(2.50, 3.00),
+            UvLong = [new("inert", .6), new("weak", .25), new("moderate", .15)], UvShort = [new("inert", .5), new("weak", .3), new("moderate", .2)],
+            Hues = [new("blue", .95), new("purple", .05)],
+            Origins = [new("natural", .8), new("treated", .2)],
+            Citation = "gemstones-guide.com 'Physical & optical properties of lapis lazuli': granular aggregate, RI 1.50, SG 2.50–3.0 (normal 2.75, higher with pyrite), opaque, generally inert "
+                + "(calcite patches pink in LW), weak to moderate green in SW, no spectrum; gillabs.com lapis lazuli: SG 2.70–2.90, RI 1.500–1.550; theimage.com lapis: SG 2.39–2.92, RI 1.5, some porosity",
+            Judgement = "the index range 1.50–1.55 from the widest source, UV strengths, the dyed or waxed share and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "sodalite", BenchWeight = 0.4, Form = StoneForm.Aggregate, Opaque = true,
+            Indices = PrincipalValues.Single(1.478, 1.488),
+            SpecificGravity = new(2.13, 2.40),
+            UvLong = [new("strong", .3), new("moderate", .35), new("weak", .2), new("inert", .15)], UvShort = [new("moderate", .3), new("weak", .4), new("inert", .3)],
+            Hues = [new("blue", .9), new("purple", .05), new("grey", .05)],
+            Citation = "gemdat.org sodalite (Blue Chart Gem Identification 2010): RI 1.478–1.488, SG 2.15–2.40, isotropic; gemfame.com sodalite: RI 1.483–1.487, SG 2.27–2.33, massive; "
+                + "tannerchaney.com sodalite (International School of Gemology): RI 1.48, SG 2.13–2.29, opaque, strong orange in long-wave UV; nationalgemlab.in: bright red-orange in SW and LW",
+            Judgement = "the SG range as the union of those read, UV strengths (patchy in massive stones) and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "calcite", BenchWeight = 0.4, Form = StoneForm.Aggregate,
+            Indices = PrincipalValues.Uniaxial(new(1.656, 1.660), new(0.170, 0.174), positive: false),
+            SpecificGravity = new(2.67, 2.73),
+            Hues = [new("white", .45), new("grey", .1), new("pink", .1), new("green", .1), new("yellow", .1), new("brown", .1), new("black", .05)],
+            Origins = [new("natural", .8), new("treated", .2)],
+            Citation = "Smith, Gem-Stones (bitlit.ru p. 99): marble is massive calcite, ε 1.486, ω 1.658, difference 0.172, SG 2.71, effervesces with acid; gemfame.com calcite: RI 1.486–1.660, uniaxial −, "
+                + "SG 2.7102; gemstones.comparenature.com calcite: RI 1.486–1.658, birefringence 0.154–0.174, SG 2.67–2.73",
+            Judgement = "ω ±0.002 about Smith's 1.658, birefringence 0.170–0.174, the spot read at either end of the span (IndependentStoneSimulator.BlinkSpan), the dyed share and hue weights: judgement",
+        },
+        new()
+        {
+            Name = "malachite", BenchWeight = 0.4, Form = StoneForm.Aggregate, Opaque = true,
+            Indices = PrincipalValues.Biaxial(new(1.655, 1.660), new(0.250, 0.254), new(0.8, 0.9)),
+            SpecificGravity = new(3.60, 4.05),
+            Hues = [new("green", 1)],
+            Origins = [new("natural", .9), new("treated", .1)],
+            Citation = "gemologyproject.com Malachite (after Thomas, Gemstones 2008): biaxial −, RI 1.655–1.909, birefringence 0.254, SG 3.60–4.05, translucent to opaque; "
+                + "gemstonebuzz.com malachite: RI 1.660–1.910, birefringence 0.250, biaxial −, spot 1.85 (beyond a 1.78–1.81 contact liquid: written over the limit here), banding; "
+                + "gemdat.org malachite: wax or resin to hide cracks (Nassau 1984)",
+            Judgement = "β near γ (fraction 0.8–0.9) from memory; the spot read at either end of the span, the upper end over the limit; the waxed share and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "turquoise", BenchWeight = 0.8, Form = StoneForm.Aggregate, Opaque = true, Porous = true,
+            Indices = PrincipalValues.Single(1.60, 1.62),
+            SpecificGravity = new(2.40, 2.90),
+            UvLong = [new("inert", .6), new("weak", .4)], UvShort = [new("inert", 1)],
+            Lines = [new(432, false), new(420, false), new(460, false)],
+            Hues = [new("blue", .6), new("green", .4)],
+            Origins = [new("natural", .45), new("treated", .55)],
+            Citation = "gemstones-guide.com 'Physical & optical properties of turquoise': cryptocrystalline aggregate, RI 1.61–1.65 but one reading usually about 1.60, SG 2.61–2.84, "
+                + "none to weak greenish yellow in LW, inert in SW; jiehonggem.com turquoise (GIA Gem Reference Guide): spot usually 1.61, SG 2.76 (+.14, −.36), bands 420 and 432 nm, weak 460 nm, "
+                + "plastic or wax impregnation common; tradeshop.com turquoise: RI 1.62, SG 2.6–2.9; fireballtim.com (Wikipedia text): single reading 1.61 or 1.62",
+            Judgement = "the spot range 1.60–1.62 from the three published spot values; porous (not immersed: common practice); the treated share and bench weight: judgement; "
+                + "the lines are kept for the record but never written (the simulator reads no spectrum of an opaque stone)",
+        },
+        new()
+        {
+            Name = "pearl", BenchWeight = 0.8, Form = StoneForm.Aggregate, Opaque = true, Porous = true,
+            Indices = PrincipalValues.Biaxial(new(1.52, 1.53), new(0.14, 0.16), new(0.95, 0.98)),
+            SpecificGravity = new(2.60, 2.85),
+            UvLong = [new("weak", .4), new("moderate", .4), new("inert", .2)],
+            Hues = [new("white", .6), new("black", .15), new("yellow", .1), new("pink", .1), new("grey", .05)],
+            Origins = [new("natural", .85), new("treated", .15)],
+            Citation = "sco.wikipedia.org 'Pairl' infobox (cites Schumann, Gemstones of the World; Lazzarelli, Blue Chart): RI 1.52–1.66, black pearl 1.53–1.69, birefringence 0.156, SG 2.60–2.85, "
+                + "white pearls light blue to light yellow in UV, black pink to orange-red; blog.bhoma.com pearl: RI 1.530–1.685, SG 2.6–2.78; mgc-labs.ru pearl: aragonite and conchiolin, SG 2.60–2.85",
+            Judgement = "cultured pearls counted as natural (nacre grown by the mollusc); β's place from aragonite (gemsociety.org aragonite: α 1.530, β 1.681, γ 1.685); the spot read at either end; "
+                + "not immersed (common practice for pearls at a general bench); UV strengths, dyed or irradiated share, hue weights: judgement",
+        },
+        new()
+        {
+            Name = "shell", BenchWeight = 0.4, Form = StoneForm.Aggregate, Opaque = true,
+            Indices = PrincipalValues.Biaxial(new(1.529, 1.531), new(0.154, 0.156), new(0.95, 0.98)),
+            SpecificGravity = new(2.70, 2.89),
+            UvLong = [new("inert", .3), new("weak", .4), new("moderate", .3)],
+            Hues = [new("white", .5), new("pink", .15), new("orange", .1), new("grey", .1), new("black", .05), new("green", .05), new("blue", .05)],
+            Origins = [new("natural", .85), new("treated", .15)],
+            Citation = "jtv.com gemopedia 'Shell pearl' (species shell): RI 1.530–1.685, aggregate, SG 2.700–2.890, fluorescence variable; globalgemology.com 'Abalone shell' (mother of pearl): "
+                + "RI 1.530–1.685, birefringence 0.155 by the birefringence blink technique, aggregate, SG 2.86 (+0.03, −0.16); gem5.com shell: mother-of-pearl is layered aragonite",
+            Judgement = "β's place from aragonite; the spot read at either end; UV strengths, dyed share, hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "howlite", BenchWeight = 0.5, Form = StoneForm.Aggregate, Opaque = true,
+            Indices = PrincipalValues.Biaxial(new(1.583, 1.586), new(0.019, 0.022), new(0.55, 0.65)),
+            SpecificGravity = new(2.45, 2.59),
+            UvLong = [new("inert", .5), new("weak", .3), new("moderate", .2)], UvShort = [new("inert", .5), new("weak", .5)],
+            Hues = [new("white", .45), new("blue", .45), new("green", .05), new("red", .05)],
+            Origins = [new("natural", .4), new("treated", .6)],
+            Citation = "gemfame.com howlite: α 1.583–1.586, β 1.596–1.598, γ 1.605, biaxial −, birefringence 0.022, about 1.59 in practice, SG 2.53–2.59, deep orange in LW (some), brownish yellow in SW; "
+                + "jiehonggem.com howlite (GIA Gem Reference Guide): aggregate, RI 1.586–1.605 (+.003), spot usually 1.59, birefringence 0.019, inert to moderate orange LW, SG 2.58 (−.13), "
+                + "commonly dyed blue to imitate turquoise or lapis; patrickvoillot.com howlite: SG 2.45–2.59, porous enough to dye",
+            Judgement = "β's place from gemfame's values, the dyed share (hue drawn apart from origin, as for every row), UV strengths and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "albite", BenchWeight = 0.2,
+            Indices = PrincipalValues.Biaxial(new(1.527, 1.533), new(0.008, 0.011), new(0.2, 0.4)),
+            SpecificGravity = new(2.60, 2.65), Dispersion = 0.012,
+            UvLong = [new("inert", .7), new("weak", .3)], UvShort = [new("inert", .7), new("weak", .3)],
+            Hues = [new("colourless", .6), new("white", .1), new("grey", .1), new("blue", .1), new("yellow", .1)],
+            Citation = "gemdat.org albite (Blue Chart Gem Identification 2010): RI 1.525–1.542, biaxial +, birefringence 0.008–0.011, SG 2.60–2.65, LW green, SW white or green (O'Donoghue); "
+                + "gemfame.com albite: α 1.528–1.533, β 1.532–1.537, γ 1.538–1.542, SG 2.61–2.63; gemsociety.org albite: α 1.527, β 1.531, γ 1.538, dispersion 0.012, usually no luminescence",
+            Judgement = "β's place (fraction 0.2–0.4) from the two sets of α, β, γ; UV strengths, hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "gypsum", BenchWeight = 0.2, Form = StoneForm.Aggregate,
+            Indices = PrincipalValues.Biaxial(new(1.520, 1.521), new(0.009, 0.010), new(0.2, 0.3)),
+            SpecificGravity = new(2.25, 2.35),
+            UvLong = [new("inert", .6), new("weak", .4)], UvShort = [new("inert", .6), new("weak", .4)],
+            Hues = [new("white", .6), new("pink", .1), new("yellow", .1), new("brown", .1), new("grey", .1)],
+            Origins = [new("natural", .7), new("treated", .3)],
+            Citation = "jtv.com 'Alabaster': RI 1.52–1.529, birefringence 0.009–0.01, biaxial +, SG 2.25–2.35, inert to weak brownish to greenish white in LW and SW, often dyed; "
+                + "nevada-outback-gems.com gypsum: α 1.521, β 1.523, γ 1.530, density 2.3; gemsociety.org gypsum: SG 2.32 (2.30–2.33), birefringence 0.010, dyeing and bleaching common",
+            Judgement = "alabaster and satin spar as an aggregate; UV strengths, the dyed share, hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "aragonite", BenchWeight = 0.2, Form = StoneForm.Aggregate,
+            Indices = PrincipalValues.Biaxial(new(1.529, 1.535), new(0.150, 0.156), new(0.95, 0.98)),
+            SpecificGravity = new(2.93, 2.96),
+            UvLong = [new("weak", .4), new("moderate", .3), new("inert", .3)], UvShort = [new("weak", .5), new("inert", .5)],
+            Hues = [new("white", .4), new("yellow", .15), new("brown", .15), new("blue", .1), new("green", .1), new("grey", .1)],
+            Citation = "gemsociety.org aragonite: α 1.530, β 1.681, γ 1.685, biaxial −, birefringence 0.155, SG usually 2.93–2.95, massive, fibrous or coralloidal as well as crystals; "
+                + "gemdat.org aragonite (Blue Chart): RI 1.525–1.686, birefringence 0.155, SG 2.93–2.96; gemfame.com aragonite: 1.530–1.540 and 1.680–1.690, birefringence 0.150; "
+                + "nationalgemlab.in aragonite: LW pale rose, yellow, white or bluish, SW yellowish",
+            Judgement = "the massive banded stone taken as the bench's aragonite (an aggregate read by spot at either end); UV strengths, hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "staurolite", BenchWeight = 0.1,
+            Indices = PrincipalValues.Biaxial(new(1.736, 1.747), new(0.011, 0.015), new(0.4, 0.49)),
+            SpecificGravity = new(3.68, 3.83), Pleochroism = PleochroismHabit.Moderate,
+            Lines = [new(632, false), new(610, false), new(531.5, false)],
+            Hues = [new("brown", .8), new("red", .1), new("black", .1)],
+            Citation = "gemfame.com staurolite: α 1.736–1.747, β 1.742–1.753, γ 1.748–1.761, biaxial +, birefringence 0.011–0.015, SG 3.68–3.83, distinct pleochroism, "
+                + "bands at 632 and 610 nm in zinc-rich stones and sometimes 531.5 nm",
+            Judgement = "β's place below one half (the sign) from the published α, β, γ; line strengths and hue weights: judgement",
+        },
+        new()
+        {
+            Name = "sinhalite", BenchWeight = 0.15,
+            Indices = PrincipalValues.Biaxial(new(1.665, 1.676), new(0.035, 0.042), new(0.75, 0.85)),
+            SpecificGravity = new(3.46, 3.50), Pleochroism = PleochroismHabit.Moderate, Dispersion = 0.018,
+            UvLong = [new("inert", 1)], UvShort = [new("inert", 1)],
+            Lines = [new(493, true), new(475, true), new(463, true), new(452, true), new(435, false)],
+            Hues = [new("brown", .5), new("yellow", .4), new("green", .1)],
+            Citation = "gemfame.com sinhalite: α 1.667–1.676, β 1.697–1.704, γ 1.705–1.712, biaxial −, birefringence 0.035–0.037, SG 3.475–3.50, bands 493, 475, 463, 452, 435 nm (463 absent in peridot); "
+                + "gemdat.org sinhalite (Blue Chart): RI 1.665–1.712, birefringence 0.036–0.042, SG 3.46–3.50, dispersion 0.018 (Schumann); cameo.mfa.org: inert, moderate pleochroism; "
+                + "nationalgemlab.in: pleochroism weak; funwing.com: distinct",
+            Judgement = "β's place from gemfame's values; which bands are strong (the sources name them only) and hue weights: judgement",
+        },
+        new()
+        {
+            Name = "dumortierite", BenchWeight = 0.15, Form = StoneForm.Aggregate, Opaque = true,
+            Indices = PrincipalValues.Biaxial(new(1.669, 1.686), new(0.011, 0.037), new(0.9, 0.98)),
+            SpecificGravity = new(3.21, 3.41),
+            UvShort = [new("weak", .4), new("moderate", .3), new("inert", .3)],
+            Hues = [new("blue", .7), new("purple", .2), new("brown", .05), new("pink", .05)],
+            Citation = "gemfame.com dumortierite: ornamental material massive blue or violet, SG 3.21–3.41, a blurred shadow edge at about 1.68; Sri Lankan crystal 1.686, 1.722, 1.723, biaxial −, "
+                + "birefringence 0.037; gemstonebuzz.com dumortierite: RI 1.686–1.723, biaxial −, SG 3.26–3.41, commonly opaque, blue to bluish white in SW, most gem material is dumortierite in quartz; "
+                + "gemstones.comparenature.com dumortierite: RI 1.669–1.723, birefringence 0.011–0.037",
+            Judgement = "the row is massive dumortierite (the quartz rock it colours reads as quartz and is left out); α 1.669–1.686 from the two lower bounds read; β's place from the Sri Lankan "
+                + "crystal; UV strengths, hue weights and bench weight: judgement",
+        },
     ];
 }

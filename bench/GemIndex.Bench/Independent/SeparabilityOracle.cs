@@ -51,7 +51,18 @@ internal static class SeparabilityOracle
             OpticModel.Uniaxial when !p.Positive => p.Lowest.Low + p.Birefringence.Low,
             _ => p.Lowest.Low,
         };
-        if (r.Spot is { } spot) return spot >= lowest - SpotTolerance && spot <= highest + SpotTolerance;
+        if (r.Spot is { } spot)
+        {
+            // An aggregate whose every stone blinks is read at one end of its span: near the lowest principal index or
+            // near the highest (IndependentStoneSimulator.BlinkSpan); any other is read anywhere inside it.
+            if (s.Form != StoneForm.Aggregate || p.Birefringence.Low < IndependentStoneSimulator.BlinkSpan)
+                return spot >= lowest - SpotTolerance && spot <= highest + SpotTolerance;
+            bool lowEnd = spot >= lowest - SpotTolerance && spot <= p.Lowest.High + SpotTolerance;
+            bool highEnd = spot >= p.Lowest.Low + p.Birefringence.Low - SpotTolerance && spot <= highest + SpotTolerance;
+            return lowEnd || highEnd;
+        }
+        // A spot over the limit: the spot can land anywhere up to the highest principal index; a facet only beyond β or ω.
+        if (r.Steps.Count == 0 && r.RefractometerMethod == "spot") return !r.OverLimit || highest >= r.LiquidLimit - 0.02;
         if (r.Steps.Count == 0) return !r.OverLimit || lowCeiling >= r.LiquidLimit - 0.02;
         double minLow = r.Steps.Min(x => x.Low);
         double maxHigh = r.Steps.Max(x => x.High ?? x.Low);
