@@ -103,6 +103,20 @@ internal static class RefractometerEvidence
             acc.Say(SeriesText(m, sheet, outcome, form));
     }
 
+    /// <summary>
+    /// The section model's work for this material on this sheet, when it has any: its prior and the light's shift (what
+    /// <see cref="AnalysedSheet.SeriesOutcome"/> is keyed by); false when there is no series, or the screen leaves it out.
+    /// </summary>
+    internal static bool SeriesWork(MaterialProfile profile, AnalysedSheet sheet, out (IndicatrixPrior Prior, double Shift, double ShiftSigma) work)
+    {
+        work = default;
+        if (sheet.Sheet.Refractometer is not { } r || sheet.Observation is not { } series) return false;
+        double shift = WavelengthShift(profile.Material, r.LightNanometres, out double shiftSigma);
+        if (Screened(profile.Prior, series, shift, shiftSigma)) return false;
+        work = (profile.Prior, shift, shiftSigma);
+        return true;
+    }
+
     /// <summary>True when no orientation of the material can give these readings (the cheap bounds of DOMAIN.md §6b).</summary>
     internal static bool Screened(IndicatrixPrior prior, SeriesObservation series, double shift, double shiftSigma)
     {
