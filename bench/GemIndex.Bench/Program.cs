@@ -20,10 +20,10 @@ if (args.Length > 0 && args[0] == "accuracy")
     IndependentAccuracyRun.Run(ShippedCatalogue.Load(cache), stones, seed, Console.Out, args.Contains("--failures") ? Console.Error : null, lines, lookShare);
     return 0;
 }
-// profile [PASSES]: CPU time per stone of the IdentifyBench stones on one thread (RankingProfile)
+// profile [PASSES] [one-core]: CPU and wall time per stone of the IdentifyBench stones, one stone at a time (RankingProfile)
 if (args.Length > 0 && args[0] == "profile")
 {
-    GemIndex.Bench.RankingProfile.Run(args.Length > 1 ? int.Parse(args[1], System.Globalization.CultureInfo.InvariantCulture) : 5, Console.Out);
+    GemIndex.Bench.RankingProfile.Run(args.Length > 1 ? int.Parse(args[1], System.Globalization.CultureInfo.InvariantCulture) : 5, args.Contains("one-core"), Console.Out);
     return 0;
 }
 BenchmarkSwitcher.FromAssembly(typeof(IndependentAccuracyRun).Assembly).Run(args);

@@ -7,17 +7,17 @@ namespace GemIndex.Bench;
 
 /// <summary>
 /// A Stopwatch harness for the ranking's speed work (`profile [PASSES]`): the IdentifyBench stones ranked on one thread,
-/// a warm-up pass, then the mean CPU time per stone of each pass (the process's CPU time, less disturbed than wall time on
+/// (with `one-core`, each stone's series on one thread), a warm-up pass, then the mean CPU time per stone of each pass (the process's CPU time, less disturbed than wall time on
 /// a shared machine). For comparing code changes quickly and under a sampling profiler; the README's figures come from
 /// BenchmarkDotNet.
 /// </summary>
 public static class RankingProfile
 {
-    public static void Run(int passes, TextWriter output)
+    public static void Run(int passes, bool oneCore, TextWriter output)
     {
         string cache = Path.Combine(Path.GetTempPath(), "gemindex-bench-cache");
         IReadOnlyList<Material> catalogue = ShippedCatalogue.Load(cache);
-        var identifier = new Identifier(catalogue);
+        var identifier = new Identifier(catalogue).WithSeriesOnEveryCore(!oneCore);
         var random = new Random(8);
         var readable = catalogue.Where(m => m.Indices.Highest.Maximum < GemIndex.Core.Identification.RefractometerObservation.DefaultLiquidLimit - 0.01).ToList();
         var sheets = Enumerable.Range(0, 1000).Select(i => IdentifyBench.Sheet(readable[random.Next(readable.Count)], random, $"B-{i}")).ToArray();
