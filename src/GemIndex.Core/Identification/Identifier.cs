@@ -233,7 +233,7 @@ public sealed class Identifier
     /// </summary>
     private void SeriesInParallel(AnalysedSheet analysed)
     {
-        if (analysed.Observation is not { } series || Environment.ProcessorCount < 2) return;
+        if (analysed.Observation is not { } series) return;
         var seen = new HashSet<(IndicatrixPrior, double, double)>();
         var work = new List<(IndicatrixPrior Prior, double Shift, double ShiftSigma)>();
         foreach (var profile in _profiles)
@@ -241,7 +241,7 @@ public sealed class Identifier
         if (work.Count == 0) return;
         _ = series.CoarseGeometry; // shared by every prior: made once, before the threads start
         // One item at a time (the priors differ in cost); the broad prior's series is one more item.
-        Parallel.For(0, work.Count + 1, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, k =>
+        Parallel.For(0, work.Count + 1, k =>
         {
             if (k == work.Count) _ = analysed.BroadSeriesLogLikelihood;
             else analysed.SeriesOutcome(work[k].Prior, work[k].Shift, work[k].ShiftSigma);
