@@ -240,12 +240,19 @@ public sealed class Identifier
             if (RefractometerEvidence.SeriesWork(profile, analysed, out var key) && !key.Prior.IsIsotropic && seen.Add(key)) work.Add(key);
         if (work.Count == 0) return;
         _ = series.CoarseGeometry; // shared by every prior: made once, before the threads start
-        // One item at a time (the priors differ in cost); the broad prior's series is one more item.
-        Parallel.For(0, work.Count + 1, k =>
+        // One item at a time, the dearest first so that the cores finish together: the broad prior (four kinds of crystal),
+        // then by the shapes each coarse orientation weighs, a biaxial family's climbs (three angles and up to two shape
+        // coordinates) counted double.
+        work.Sort((a, b) => Cost(b.Prior).CompareTo(Cost(a.Prior)));
+        var items = new int[work.Count + 1];
+        for (int k = 0; k < items.Length; k++) items[k] = k - 1;
+        Parallel.ForEach(System.Collections.Concurrent.Partitioner.Create(items, loadBalance: true), k =>
         {
-            if (k == work.Count) _ = analysed.BroadSeriesLogLikelihood;
+            if (k < 0) _ = analysed.BroadSeriesLogLikelihood;
             else analysed.SeriesOutcome(work[k].Prior, work[k].Shift, work[k].ShiftSigma);
         });
+
+        static int Cost(IndicatrixPrior prior) => prior.Shapes.Length * (prior.Families.Any(f => f.Biaxial) ? 2 : 1);
     }
 
     /// <summary>The catalogue ranked over.</summary>
