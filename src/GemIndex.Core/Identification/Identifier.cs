@@ -209,7 +209,8 @@ public sealed class Identifier
 
     /// <summary>
     /// Whether <see cref="Identify"/> works out the rotation series' section model for the catalogue's distinct priors on
-    /// every core before weighing the entries (docs/ranking.md §6): the same values, in less wall time for one stone.
+    /// every core before weighing the entries, and weighs the entries on every core (docs/ranking.md §6): the same values,
+    /// in less wall time for one stone.
     /// </summary>
     public bool SeriesOnEveryCore { get; private init; } = true;
 
@@ -255,6 +256,17 @@ public sealed class Identifier
         static int Cost(IndicatrixPrior prior) => prior.Shapes.Length * (prior.Families.Any(f => f.Biaxial) ? 2 : 1);
     }
 
+    /// <summary>Entry <paramref name="i"/>'s tempered log-likelihood ratio (with and without colour) and log posterior, without its fit.</summary>
+    private void Weigh(int i, AnalysedSheet analysed, EvidenceAccumulator acc, double[] logLikelihood, double[] logLikelihoodWithoutColour, double[] logPosterior)
+    {
+        EvidenceLikelihood.Weigh(_profiles[i], analysed, acc);
+        double logOther = acc.LogLikelihoodNotInCatalogue;
+        // Tempered: the ratio to "not in the catalogue" is divided by the temperature.
+        logLikelihood[i] = (acc.LogLikelihood - logOther) / Temperature;
+        logLikelihoodWithoutColour[i] = (acc.LogLikelihoodWithoutColour - logOther) / Temperature;
+        logPosterior[i] = _logPriors[i] + logLikelihood[i];
+    }
+
     /// <summary>The catalogue ranked over.</summary>
     public IReadOnlyList<Material> Materials => _materials;
 
@@ -274,20 +286,19 @@ public sealed class Identifier
         // The same without colour: the origin balance's "tests alone" (colour lists by origin are the market's usual
         // colours, never a physical separation of origins).
         var logLikelihoodWithoutColour = new double[n];
-        double logOther = 0, max = double.NegativeInfinity;
+        double logOther, max = double.NegativeInfinity;
         // The likelihoods of every entry, without their fits: only the best entry's fit and the shown candidates' are
-        // read, and a fit costs the tails of every test. Those few are weighed again in full (the same sums).
-        var acc = new EvidenceAccumulator(explaining: false, fitting: false);
-        for (int i = 0; i < n; i++)
+        // read, and a fit costs the tails of every test. Those few are weighed again in full (the same sums). Each entry
+        // is weighed on its own (an accumulator per thread, emptied for every entry), so on every core too.
+        if (SeriesOnEveryCore)
+            Parallel.For(0, n, () => new EvidenceAccumulator(explaining: false, fitting: false),
+                (i, _, acc) => { Weigh(i, analysed, acc, logLikelihood, logLikelihoodWithoutColour, logPosterior); return acc; }, _ => { });
+        else
         {
-            EvidenceLikelihood.Weigh(_profiles[i], analysed, acc);
-            logOther = acc.LogLikelihoodNotInCatalogue;
-            // Tempered: the ratio to "not in the catalogue" is divided by the temperature.
-            logLikelihood[i] = (acc.LogLikelihood - logOther) / Temperature;
-            logLikelihoodWithoutColour[i] = (acc.LogLikelihoodWithoutColour - logOther) / Temperature;
-            logPosterior[i] = _logPriors[i] + logLikelihood[i];
-            max = Math.Max(max, logPosterior[i]);
+            var acc = new EvidenceAccumulator(explaining: false, fitting: false);
+            for (int i = 0; i < n; i++) Weigh(i, analysed, acc, logLikelihood, logLikelihoodWithoutColour, logPosterior);
         }
+        for (int i = 0; i < n; i++) max = Math.Max(max, logPosterior[i]);
         var evaluations = new CandidateEvaluation?[n];
         var explained = new bool[n];
         CandidateEvaluation Evaluated(int i, bool explain)
