@@ -170,7 +170,7 @@ public sealed class Identifier
 
     /// <summary>
     /// For the leading species when its entries differ in origin or variety: the test not yet done that best tells its
-    /// entries apart (by the advisor, over the species' own entries), or null when none would.
+    /// origins apart (by the advisor, over the species' own entries grouped by origin), or null when none would.
     /// </summary>
     private NextTestAdvice? Separation(BenchSheet sheet, double[] posterior, IReadOnlyList<SpeciesResult> species)
     {
@@ -181,7 +181,8 @@ public sealed class Identifier
         var entries = new List<(Material, double)>();
         for (int i = 0; i < posterior.Length; i++)
             if (_materials[i].Species == leading && posterior[i] > 1e-4) entries.Add((_materials[i], posterior[i]));
-        return entries.Count < 2 ? null : NextTestAdvisor.Advise(sheet, entries);
+        // The test that tells the species' origins apart, not merely its varieties.
+        return entries.Count < 2 ? null : NextTestAdvisor.Advise(sheet, entries, m => (int)m.Origin);
     }
 
     /// <summary>Posterior totals per species over the whole catalogue, best first; ties keep the catalogue's order.</summary>

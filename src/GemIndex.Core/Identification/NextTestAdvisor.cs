@@ -18,27 +18,43 @@ public static class NextTestAdvisor
     /// <summary>Below this expected gain no test is suggested.</summary>
     public const double MinimumGainBits = 0.05;
 
+    /// <summary>
+    /// Telling groups apart (the origins of one species), a test must also be expected to remove at least this share of
+    /// the uncertainty about the group: otherwise its gain comes from telling one group's varieties from another's (a
+    /// green zoisite among tanzanites), not from the question asked (a judgement; docs/ranking.md §5).
+    /// </summary>
+    public const double GroupEntropyShare = 0.1;
+
     /// <summary>Suggests the next test, or null when none would help.</summary>
     /// <param name="sheet">What has been done.</param>
     /// <param name="candidates">Materials with their posterior probabilities (need not sum to 1).</param>
-    public static NextTestAdvice? Advise(BenchSheet sheet, IReadOnlyList<(Material Material, double Probability)> candidates)
+    /// <param name="groupOf">
+    /// When given, the test is chosen to tell these groups apart (the origins of one species) rather than the materials:
+    /// its gain is I(group; outcome) = I(material; outcome) − Σ_g P(g)·I(material; outcome | g), since the material fixes
+    /// its group. A test that only tells varieties of one origin apart gains nothing.
+    /// </param>
+    public static NextTestAdvice? Advise(BenchSheet sheet, IReadOnlyList<(Material Material, double Probability)> candidates,
+        Func<Material, int>? groupOf = null)
     {
         if (candidates.Count < 2) return null;
         double total = candidates.Sum(c => c.Probability);
         var weighted = candidates.Select(c => (c.Material, P: c.Probability / total)).ToList();
         var tables = new OutcomeTables[weighted.Count];
         for (int i = 0; i < tables.Length; i++) tables[i] = OutcomeTables.Of(weighted[i].Material);
+        var groups = groupOf is null ? null : Groups(weighted, tables, groupOf);
+        double minimum = groups is null ? MinimumGainBits
+            : Math.Max(MinimumGainBits, GroupEntropyShare * -groups.Sum(g => g.Share * Math.Log2(g.Share)));
         (string Test, double Gain)? best = null;
         // Never suggest weighing in water while a porous or fragile material is a serious candidate.
         bool immersionUnsafe = weighted.Any(c => c.P >= BenchWarnings.Relevant && c.Material.DoNotImmerse);
         foreach (int test in TestsNotDone(sheet, immersionUnsafe))
         {
-            double gain = MutualInformation(weighted, tables, test);
+            double gain = Between(groups, MutualInformation(weighted, tables, test), g => MutualInformation(g.Candidates, g.Tables, test));
             if (best is null || gain > best.Value.Gain + 1e-9) best = (Tests[test].Field, gain);
         }
-        var look = Look(sheet, weighted, tables);
+        var look = Look(sheet, weighted, tables, groups);
         var leaders = weighted.Where(c => c.P >= 0.02).Take(5).ToList();
-        if (look is { } l && l.Gain > (best?.Gain ?? 0) + 1e-9 && l.Gain >= MinimumGainBits)
+        if (look is { } l && l.Gain > (best?.Gain ?? 0) + 1e-9 && l.Gain >= minimum)
             return new NextTestAdvice
             {
                 Test = BenchField.Magnification,
@@ -48,7 +64,7 @@ public static class NextTestAdvisor
                 LookFor = [.. l.Features.Select(f => MagnificationVocabulary.Of(f).Name)],
                 Lighting = [.. l.Features.Select(f => MagnificationVocabulary.Of(f).Lighting)],
             };
-        if (best is not { } chosen || chosen.Gain < MinimumGainBits) return null;
+        if (best is not { } chosen || chosen.Gain < minimum) return null;
         return new NextTestAdvice
         {
             Test = chosen.Test,
@@ -63,8 +79,37 @@ public static class NextTestAdvisor
     /// largest gain, joined by a second when looking for both adds at least <see cref="MinimumGainBits"/> (features are
     /// independent given the material, as in the likelihood, so the pair's outcomes are the four seen/not-seen pairs).
     /// </summary>
-    private static (MagnificationFeature[] Features, double Gain)? Look(BenchSheet sheet, List<(Material Material, double P)> candidates, OutcomeTables[] tables)
+    /// <summary>The candidates split by group, each renormalised within its group, with the group's total.</summary>
+    private static List<(double Share, List<(Material Material, double P)> Candidates, OutcomeTables[] Tables)> Groups(
+        List<(Material Material, double P)> candidates, OutcomeTables[] tables, Func<Material, int> groupOf)
     {
+        var result = new List<(double, List<(Material, double)>, OutcomeTables[])>();
+        foreach (var group in Enumerable.Range(0, candidates.Count).GroupBy(i => groupOf(candidates[i].Material)))
+        {
+            double share = group.Sum(i => candidates[i].P);
+            if (!(share > 0)) continue;
+            result.Add((share, [.. group.Select(i => (candidates[i].Material, candidates[i].P / share))], [.. group.Select(i => tables[i])]));
+        }
+        return result;
+    }
+
+    /// <summary>
+    /// The information a test gives about the groups: all of <paramref name="overall"/> without groups, otherwise less the
+    /// information it gives within each group, weighted by the group's share (the chain rule of mutual information).
+    /// </summary>
+    private static double Between(List<(double Share, List<(Material Material, double P)> Candidates, OutcomeTables[] Tables)>? groups,
+        double overall, Func<(double Share, List<(Material Material, double P)> Candidates, OutcomeTables[] Tables), double> within)
+    {
+        if (groups is null) return overall;
+        double inside = 0;
+        foreach (var g in groups) if (g.Candidates.Count > 1) inside += g.Share * within(g);
+        return Math.Max(0, overall - inside);
+    }
+
+    private static (MagnificationFeature[] Features, double Gain)? Look(BenchSheet sheet, List<(Material Material, double P)> candidates, OutcomeTables[] tables,
+        List<(double Share, List<(Material Material, double P)> Candidates, OutcomeTables[] Tables)>? groups)
+    {
+        double Information(int f, int g) => Between(groups, LookInformation(candidates, tables, f, g), x => LookInformation(x.Candidates, x.Tables, f, g));
         var done = sheet.Magnification is { } m ? m.Present.Concat(m.Absent).ToHashSet() : [];
         var open = new List<int>();
         for (int f = 0; f < MagnificationVocabulary.All.Count; f++)
@@ -72,10 +117,10 @@ public static class NextTestAdvisor
         if (open.Count == 0) return null;
         // Of equal gains the first is kept (as MaxBy does).
         int first = open[0];
-        double firstGain = LookInformation(candidates, tables, first, -1);
+        double firstGain = Information(first, -1);
         for (int i = 1; i < open.Count; i++)
         {
-            double gain = LookInformation(candidates, tables, open[i], -1);
+            double gain = Information(open[i], -1);
             if (gain.CompareTo(firstGain) > 0) (first, firstGain) = (open[i], gain);
         }
         int second = -1;
@@ -83,7 +128,7 @@ public static class NextTestAdvisor
         foreach (int g in open)
         {
             if (g == first) continue;
-            double gain = LookInformation(candidates, tables, first, g);
+            double gain = Information(first, g);
             if (second < 0 || gain.CompareTo(secondGain) > 0) (second, secondGain) = (g, gain);
         }
         var firstFeature = MagnificationVocabulary.All[first].Feature;

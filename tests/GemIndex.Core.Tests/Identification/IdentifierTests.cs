@@ -234,6 +234,28 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void The_test_named_to_separate_origins_tells_origins_apart_not_varieties_of_one_origin()
+    {
+        // Two natural varieties told apart only by the heat probe, and a treated entry told from both only by SG (invented
+        // entries). Over the materials the probe is the better test; over the origins it gains nothing, since it only
+        // splits the natural varieties (I(origin; outcome) = I(material; outcome) − Σ P(origin) I(material; outcome | origin)).
+        var indices = OpticalIndices.Uniaxial(new(1.767, 1.772), new(1.759, 1.763));
+        Material cool = Make("cool variety", "s", indices, 3.99, 4.01, OpticSign.Negative, new(0.008, 0.009));
+        Material warm = Make("warm variety", "s", indices, 3.99, 4.01, OpticSign.Negative, new(0.008, 0.009), thermal: ThermalProbeResult.Positive);
+        Material treated = Make("treated entry", "s", indices, 3.60, 3.62, OpticSign.Negative, new(0.008, 0.009), origin: OriginClass.Treated);
+        var sheet = new BenchSheet { Refractometer = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770)) };
+        IReadOnlyList<(Material, double)> posterior = [(cool, 0.4), (warm, 0.4), (treated, 0.2)];
+        Assert.Equal(GemIndex.Core.Bench.BenchField.ThermalProbe, NextTestAdvisor.Advise(sheet, posterior)!.Test);
+        Assert.Equal(GemIndex.Core.Bench.BenchField.Sg, NextTestAdvisor.Advise(sheet, posterior, m => (int)m.Origin)!.Test);
+
+        // A treated entry identical in every test to the one natural variety left: no test tells the origins apart, and
+        // none is named, though the probe still splits the natural varieties when both are there.
+        Material alike = treated with { SpecificGravity = new(3.99, 4.01) };
+        var none = NextTestAdvisor.Advise(sheet, [(cool, 0.6), (alike, 0.4)], m => (int)m.Origin);
+        Assert.True(none is null, $"{none?.Test} {none?.GainBits}");
+    }
+
+    [Fact]
     public void Colour_alone_never_decides_the_origin()
     {
         // The natural entry lists blue, the treated one orange (invented shares, both common): an orange stone read only on
