@@ -84,7 +84,8 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
     /// <summary>The principal values from the index drawn (<see cref="PrincipalValues.Drawn"/>) and a birefringence drawn here.</summary>
     private (double X, double Y, double Z) Principal(PrincipalValues p, double drawn)
     {
-        double birefringence = p.Birefringence.Low + random.NextDouble() * p.Birefringence.Width;
+        var range = p.BirefringenceFor(drawn);
+        double birefringence = range.Low + random.NextDouble() * range.Width;
         switch (p.Model)
         {
             case OpticModel.Uniaxial:

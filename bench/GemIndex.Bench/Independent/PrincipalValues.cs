@@ -25,6 +25,21 @@ internal sealed record PrincipalValues
     /// <summary>γ − α or |ε − ω|; zero for isotropic.</summary>
     public IndexRange Birefringence { get; init; } = IndexRange.At(0);
 
+    /// <summary>Uniaxial: the ε range the row cites beside ω and the birefringence, if it cites one.</summary>
+    public IndexRange? Epsilon { get; init; }
+
+    /// <summary>
+    /// The birefringences a stone with this ω may take: the row's range, narrowed so that ε stays in its cited range too
+    /// (a tourmaline of low ω cannot take the highest birefringence); the row's range when none is cited or nothing fits.
+    /// </summary>
+    public IndexRange BirefringenceFor(double omega)
+    {
+        if (Model != OpticModel.Uniaxial || Epsilon is not { } e) return Birefringence;
+        double low = Positive ? e.Low - omega : omega - e.High, high = Positive ? e.High - omega : omega - e.Low;
+        double from = Math.Max(Birefringence.Low, low), to = Math.Min(Birefringence.High, high);
+        return from <= to ? new(from, to) : Birefringence;
+    }
+
     /// <summary>Uniaxial and biaxial: true for a positive sign.</summary>
     public bool Positive { get; init; }
 
@@ -37,9 +52,13 @@ internal sealed record PrincipalValues
     /// <summary>Isotropic material.</summary>
     public static PrincipalValues Single(double low, double high) => new() { Model = OpticModel.Isotropic, Lowest = new(low, high) };
 
-    /// <summary>Uniaxial: ω range and birefringence range; ε = ω ± birefringence by the sign.</summary>
-    public static PrincipalValues Uniaxial(IndexRange omega, IndexRange birefringence, bool positive) => new()
+    /// <summary>
+    /// Uniaxial: ω range and birefringence range; ε = ω ± birefringence by the sign. When the row also cites an ε range,
+    /// a stone's birefringence is drawn where both hold (<see cref="BirefringenceFor"/>).
+    /// </summary>
+    public static PrincipalValues Uniaxial(IndexRange omega, IndexRange birefringence, bool positive, IndexRange? epsilon = null) => new()
     {
+        Epsilon = epsilon,
         Model = OpticModel.Uniaxial,
         Lowest = positive ? omega : new(omega.Low - birefringence.High, omega.High - birefringence.Low),
         Birefringence = birefringence,

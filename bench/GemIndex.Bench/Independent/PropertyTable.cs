@@ -84,7 +84,7 @@ internal static class PropertyTable
         new()
         {
             Name = "tourmaline", BenchWeight = 2, SgFollowsIndex = 1,
-            Indices = PrincipalValues.Uniaxial(new(1.635, 1.675), new(0.014, 0.040), positive: false),
+            Indices = PrincipalValues.Uniaxial(new(1.635, 1.675), new(0.014, 0.040), positive: false, epsilon: new(1.610, 1.650)),
             SpecificGravity = new(3.00, 3.26), Pleochroism = PleochroismHabit.Strong, Dispersion = 0.017,
             UvLong = [new("inert", .7), new("weak", .3)], UvShort = [new("inert", .7), new("weak", .3)],
             Lines = [new(498, true, "green"), new(498, true, "blue"), new(458, false, "pink"), new(451, false, "pink"), new(458, false, "red"), new(451, false, "red")],
