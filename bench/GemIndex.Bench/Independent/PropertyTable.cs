@@ -50,11 +50,13 @@ internal static class PropertyTable
             Name = "chrysoberyl", BenchWeight = 1,
             Indices = PrincipalValues.Biaxial(new(1.742, 1.750), new(0.008, 0.011), new(0.1, 0.35)),
             SpecificGravity = new(3.71, 3.75), Pleochroism = PleochroismHabit.Moderate, Dispersion = 0.015,
+            Lines = [new(444, true, "yellow", NaturalOnly: true), new(444, true, "green", NaturalOnly: true)],
             Hues = [new("yellow", .4), new("green", .4), new("brown", .2)],
             Origins = [new("natural", .85), new("synthetic", .15)],
             Citation = "gemstones-guide.com 'Physical & Optical Properties of Chrysoberyl': RI 1.746–1.755 each ±0.004, birefringence 0.008–0.009, biaxial +, SG 3.71–3.75, dispersion 0.015; "
-                + "rocksandgems.info chrysoberyl: birefringence 0.011",
-            Judgement = "β near α (fraction 0.1–0.35) from the sign and the typical readings; hue, origin weights: judgement",
+                + "rocksandgems.info chrysoberyl: birefringence 0.011; aggemologist.blogspot.com 'Chrysoberyl' (2021): yellow-green and brown chrysoberyl show a broad "
+                + "band centred at 444 nm, which general absorption hides in very brown stones; Gao et al. (2023), Crystals 13, 1580, abstract: Fe-related 440 nm peak in canary yellow chrysoberyl",
+            Judgement = "β near α (fraction 0.1–0.35) from the sign and the typical readings; the 444 nm band strong in yellow and green stones, none written for brown ones, and natural stones only (laboratory-grown chrysoberyl need not hold iron); hue, origin weights: judgement",
         },
         new()
         {
