@@ -630,5 +630,157 @@ internal static class PropertyTable
             Judgement = "the row is massive dumortierite (the quartz rock it colours reads as quartz and is left out); α 1.669–1.686 from the two lower bounds read; β's place from the Sri Lankan "
                 + "crystal; UV strengths, hue weights and bench weight: judgement",
         },
+        // Second pass of catalogue rivals (docs/benchmark.md, "The property table"): the species the engine's misses on
+        // separable stones named most often when the table had no row for them.
+        new()
+        {
+            Name = "jet", BenchWeight = 0.4, Form = StoneForm.Amorphous, Opaque = true, Porous = true,
+            Indices = PrincipalValues.Single(1.64, 1.68),
+            SpecificGravity = new(1.19, 1.40),
+            UvLong = [new("inert", 1)], UvShort = [new("inert", 1)],
+            Hues = [new("black", .9), new("brown", .1)],
+            Citation = "tradeshop.com jet: fossilised wood (lignite), black, RI 1.66, amorphous, SG 1.19–1.35; review.clateway.com 'Jet (gemstone)' (Wikipedia text): isotropic, RI 1.640–1.680, "
+                + "SG 1.3–1.4, black, occasionally brown, no UV fluorescence; gemdictionary.blogspot.com and gemstonebuzz.com jet: isotropic, RI about 1.66, SG 1.20–1.30, inert in UV, "
+                + "low SG with high RI the key separation from its imitations",
+            Judgement = "SG as the union of the ranges read; organic and so not immersed (the table's convention for organics, common practice); hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "bytownite", BenchWeight = 0.15,
+            Indices = PrincipalValues.Biaxial(new(1.563, 1.572), new(0.008, 0.011), new(0.5, 0.6)),
+            SpecificGravity = new(2.74, 2.76), Dispersion = 0.012,
+            Hues = [new("yellow", .6), new("colourless", .25), new("grey", .1), new("green", .05)],
+            Citation = "the-uncensored-wiki.com 'Bytownite' (Wikipedia text): nα 1.563–1.572, nβ 1.568–1.578, nγ 1.573–1.583, SG 2.74–2.75; sglapidary.com bytownite: RI 1.56–1.58, "
+                + "birefringence 0.008, dispersion 0.012, no pleochroism; authorhaf.com bytownite: SG 2.75–2.76; rc.unesp.br bytownita: biaxial negative, density 2.76; "
+                + "perceptiocs.com (Czech text): colourless, grey, greenish white, translucent yellowish crystals cut",
+            Judgement = "birefringence 0.008–0.011 (the lapidary figure and γ − α of the Wikipedia ranges); β's place (0.5–0.6, sign negative) from the same ranges; no UV read; "
+                + "hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "smithsonite", BenchWeight = 0.2, Form = StoneForm.Aggregate,
+            Indices = PrincipalValues.Uniaxial(new(1.842, 1.850), new(0.225, 0.228), positive: false, epsilon: new(1.619, 1.623)),
+            SpecificGravity = new(4.00, 4.65),
+            UvLong = [new("inert", .4), new("weak", .25), new("moderate", .2), new("strong", .15)],
+            UvShort = [new("inert", .4), new("weak", .25), new("moderate", .2), new("strong", .15)],
+            Hues = [new("green", .35), new("blue", .25), new("pink", .15), new("yellow", .1), new("white", .1), new("brown", .05)],
+            Citation = "gemfame.com smithsonite: reniform or botryoidal translucent masses, crystals rare, ω 1.842–1.850, ε 1.619–1.623, uniaxial −, birefringence 0.227, SG 4.43; "
+                + "jtv.com gemopedia smithsonite: RI over the limit 1.621–1.849, birefringence 0.225–0.228, polariscope aggregate or DR, SG 4.000–4.650, SWUV inert to strong green or red, "
+                + "LWUV inert to strong white; gemdat.org smithsonite: SG 4.00–4.65 (Schumann), RI 1.620–1.850, birefringence 0.228 (Blue Chart); studiopjj.blogspot.com: mostly massive",
+            Judgement = "the massive stone taken as the bench's smithsonite (an aggregate read by spot at either end: ε near 1.62, or ω over the limit); UV strengths, hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "zincite", BenchWeight = 0.15,
+            Indices = PrincipalValues.Uniaxial(new(2.011, 2.015), new(0.015, 0.017), positive: true),
+            SpecificGravity = new(5.64, 5.70), Dispersion = 0.127,
+            UvLong = [new("inert", .5), new("weak", .25), new("moderate", .25)], UvShort = [new("inert", .5), new("weak", .25), new("moderate", .25)],
+            Hues = [new("orange", .45), new("red", .25), new("yellow", .25), new("green", .05)],
+            Origins = [new("natural", .1), new("synthetic", .9)],
+            OriginCitation = "gemdat.org zincite and gemstones.com gemopedia zincite: gem zincite is mostly a by-product of Polish zinc smelters; gia.edu G&G Spring 2017 "
+                + "'Characteristics of gem-quality by-product synthetic zincite' (the synthetic share .9: judgement from those words)",
+            Citation = "gemfame.com zincite: ω 2.013, ε 2.029, uniaxial +, birefringence 0.016, SG 5.68; gemstones-guide.com zincite: RI 2.013–2.029, SG 5.70, no fluorescence; "
+                + "gemstones.com gemopedia zincite: over the limit 2.013–2.029, dispersion 0.127, SG 5.640–5.680, LW and SW inert to moderate yellow to orange, pleochroism unobservable; "
+                + "gemsociety.org zincite: dispersion 0.127, orange-yellow to dark red",
+            Judgement = "ω ±0.002 and birefringence ±0.001 about the single published values (always over the limit at a bench); the UV strengths (one page inert, one inert to moderate), "
+                + "hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "scapolite", BenchWeight = 0.3, SgFollowsIndex = 1,
+            Indices = PrincipalValues.Uniaxial(new(1.550, 1.600), new(0.004, 0.037), positive: false, epsilon: new(1.526, 1.565)),
+            SpecificGravity = new(2.50, 2.78), Pleochroism = PleochroismHabit.Moderate, Dispersion = 0.017,
+            UvLong = [new("inert", .3), new("weak", .2), new("moderate", .25), new("strong", .25)], UvShort = [new("inert", .5), new("weak", .3), new("moderate", .2)],
+            Lines = [new(663, false, "pink"), new(652, false, "pink"), new(663, false, "purple"), new(652, false, "purple")],
+            Hues = [new("yellow", .45), new("purple", .25), new("colourless", .15), new("pink", .1), new("grey", .05)],
+            Citation = "gemfame.com scapolite: marialite–meionite series, ordinary and extraordinary rays 1.546–1.600 in all, uniaxial −, SG 2.50–2.78 with composition, pink and violet "
+                + "stones dichroic, some show 663 and 652 nm (Cr), yellow stones yellow to orange or bright yellow-green in LW, SW variable; mints.uwc.ac.za scapolite: ω 1.540–1.600, "
+                + "ε 1.535–1.565, birefringence 0.004–0.037 rising with meionite; review.clateway.com 'Scapolite' (Wikipedia text): ω 1.555–1.594, ε 1.526–1.565, birefringence 0.004–0.038, "
+                + "pleochroism moderate to strong, dispersion 0.017, UV inert to strong pink, orange, yellow; cameo.mfa.org: birefringence rises with RI; "
+                + "wholesalecrystalsupplier.com: RI, birefringence and density rise with Ca",
+            Judgement = "ω 1.550–1.600 between the ranges read; UV strengths, the lines written weak, hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "pyrite", BenchWeight = 0.3, Opaque = true,
+            Indices = PrincipalValues.Single(2.60, 3.00),
+            SpecificGravity = new(4.90, 5.20),
+            Hues = [new("yellow", .85), new("grey", .15)],
+            Citation = "tradeshop.com pyrite: opaque, metallic lustre, SG 5.0, faceted as rose cuts; gemfame.com pyrite: SG 5.01–5.03, pale brass yellow, 'marcasite' of the jeweller, "
+                + "a semiconductor; m.minerals.net pyrite: opaque, SG 4.9–5.2, metallic yellow or grey, not treated; blog.bhoma.com pyrite: opaque, no refractive index; "
+                + "greatspiritlodge.shop (metallic lustre gems): index of metallic-lustre gems about 2.6 to more than 3.0",
+            Judgement = "the index range 2.60–3.00 from the general statement on metallic-lustre gems (written only as over the limit at a bench); not written conductive "
+                + "(a semiconductor, but whether a bench tester reads it so was not read); hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "scheelite", BenchWeight = 0.15,
+            Indices = PrincipalValues.Uniaxial(new(1.918, 1.921), new(0.016, 0.017), positive: true, epsilon: new(1.935, 1.938)),
+            SpecificGravity = new(5.90, 6.10), Pleochroism = PleochroismHabit.Moderate, Dispersion = 0.026,
+            UvLong = [new("inert", .7), new("weak", .3)], UvShort = [new("strong", .8), new("moderate", .2)],
+            Hues = [new("yellow", .4), new("orange", .3), new("colourless", .2), new("brown", .1)],
+            Citation = "findatwiki.com and piglix.com 'Scheelite' (Wikipedia text): ω 1.918–1.921, ε 1.935–1.938, uniaxial +, birefringence 0.017 (0.016 maximum in the text), SG 5.9–6.1, "
+                + "definite dichroism in yellow, dispersion 0.026, bright blue to bluish white or yellow in SW; gemstoneslist.com scheelite: strong blue in SW, almost none in LW; "
+                + "crystalalmanac.com scheelite: SG 6.01, honey yellow, orange, colourless, pale brown",
+            Judgement = "natural only (the Czochralski synthetic is named as a diamond imitation and a laser crystal, not met at a bench here); UV strengths, hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "tortoiseshell", BenchWeight = 0.2, Form = StoneForm.Amorphous, Porous = true,
+            Indices = PrincipalValues.Single(1.54, 1.56),
+            SpecificGravity = new(1.26, 1.35),
+            UvLong = [new("inert", .4), new("weak", .3), new("moderate", .3)], UvShort = [new("inert", .4), new("weak", .3), new("moderate", .3)],
+            Hues = [new("brown", .55), new("yellow", .35), new("black", .1)],
+            Citation = "jtv.com gemopedia 'Tortoise shell': keratin, amorphous, RI 1.55 (−0.010), singly refractive, SG 1.26–1.35 (typical 1.29), SWUV and LWUV inert to moderate bluish white; "
+                + "gemdictionary.blogspot.com tortoise shell: RI 1.55, SG 1.29, mottled yellow and brown, yellow parts blue-white in UV; langantiques.com: RI 1.55; "
+                + "gemstones.comparenature.com tortoiseshell: RI 1.540–1.560",
+            Judgement = "organic and so not immersed (the table's convention for organics); UV strengths, hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "gahnospinel", BenchWeight = 0.15, SgFollowsIndex = 1, Strained = 0.15,
+            Indices = PrincipalValues.Single(1.735, 1.790),
+            SpecificGravity = new(3.65, 4.40),
+            Hues = [new("blue", .8), new("green", .1), new("purple", .1)],
+            Citation = "gia.edu G&G Spring 2019 Lab Notes 'Large faceted gahnospinel': dark greenish blue, spinel–gahnite series, RI and SG rise with zinc between spinel (1.718) and gahnite "
+                + "(1.800, SG 4.55), the stone read 1.754 and SG 4.10; muuseo.com gahnospinel (quoting a mineral museum's label): RI 1.735–1.790; danugroup.lk spinel: zinc-rich spinel SG "
+                + "up to 4.40, anomalous double refraction in some blue zincian stones",
+            Judgement = "the SG range 3.65–4.40 (spinel's top to the zinc-rich figure) and SG rising with the index from the GIA note; strain in 15 %, hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "pleonaste", BenchWeight = 0.15, Opaque = true,
+            Indices = PrincipalValues.Single(1.770, 1.780),
+            SpecificGravity = new(3.60, 3.90),
+            Hues = [new("black", .75), new("green", .15), new("blue", .05), new("grey", .05)],
+            Citation = "en.wiki.x.io 'Ceylonite' (pleonaste; Wikipedia text): isotropic, RI 1.770–1.780, SG 3.6–3.9, dingy blue or grey to black, dark green; les-pierres-precieuses.fr "
+                + "pléonaste: N 1.7–1.8, density 3.6–3.9, translucent to opaque, dark green to black; farlang.com (Catelle, Precious Stones): pleonaste is black and opaque",
+            Judgement = "opaque as a bench meets it (black); no UV or lines read for the dark stone; hue weights and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "magnesite", BenchWeight = 0.3, Form = StoneForm.Aggregate, Opaque = true,
+            Indices = PrincipalValues.Uniaxial(new(1.700, 1.720), new(0.190, 0.202), positive: false, epsilon: new(1.509, 1.515)),
+            SpecificGravity = new(2.92, 3.12),
+            UvShort = [new("inert", .5), new("weak", .3), new("moderate", .2)],
+            Hues = [new("white", .5), new("blue", .2), new("green", .1), new("red", .1), new("grey", .05), new("brown", .05)],
+            Origins = [new("natural", .6), new("treated", .4)],
+            Citation = "gemfame.com magnesite: crystals rare, mostly white, yellowish, brown or grey earthy or chalky masses, ω 1.710, ε 1.509, uniaxial −, birefringence 0.202, SG 3.0–3.1, "
+                + "SWUV blue-green or white; gemdat.org magnesite (Blue Chart 2010): RI 1.509–1.720, birefringence 0.190–0.202, SG 2.92–3.12, masses cut as cabochons, dyed to imitate "
+                + "lapis, turquoise and coral; dunebeads.com: often dyed blue or blue-green",
+            Judgement = "ω 1.700–1.720 and ε 1.509–1.515 about the values read; the chalky masses taken as opaque (read by spot at either end); UV strengths, the dyed share, hue weights "
+                + "and bench weight: judgement",
+        },
+        new()
+        {
+            Name = "hematite", BenchWeight = 0.3, Opaque = true,
+            Indices = PrincipalValues.Uniaxial(new(3.20, 3.22), new(0.27, 0.28), positive: false),
+            SpecificGravity = new(4.95, 5.30),
+            UvLong = [new("inert", 1)], UvShort = [new("inert", 1)],
+            Hues = [new("black", .6), new("grey", .4)],
+            Citation = "jtv.com hematite: opaque, RI over the limit 2.94–3.22, birefringence 0.28, SG 4.95–5.28 (typical 5.2), SW and LW inert, dark grey to black, red-brown streak; "
+                + "tradeshop.com hematite: RI 2.94–3.22, SG 4.95–5.26; gemdat.org hematite: SG 5.00–5.30 (Blue Chart), uniaxial −, birefringence 0.280; maygems.com: SG 5.12–5.28",
+            Judgement = "always over the limit at a bench; hue weights and bench weight: judgement (the sintered imitation is not a row)",
+        },
     ];
 }
