@@ -216,7 +216,18 @@ internal static class RefractometerEvidence
         double limit = r.LiquidLimit;
         const double sigma = 0.003; // where exactly the liquid's own edge hides a stone edge
         double p = RangeLikelihood.ProbabilityAbove(limit, range, sigma);
-        double tail = acc.Fitting ? RangeLikelihood.TwoSidedTail(Math.Max(0, limit - range.Maximum) / sigma) : 1;
+        var span = new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum);
+        bool blinking = !hasReadings && r.Method == RefractometerMethod.Spot && IsBlinkingAggregate(m, span);
+        if (blinking)
+        {
+            // A blinking aggregate's spot is read at either end of its span, or between (the spot model above): with its
+            // high end above the liquid, the shadow edge is lost whenever the reading falls there.
+            var low = new PropertyRange(span.Minimum, span.Minimum + BlinkEndWidth);
+            var high = new PropertyRange(span.Maximum - BlinkEndWidth, span.Maximum);
+            p = BlinkEndShare * (RangeLikelihood.ProbabilityAbove(limit, low, sigma) + RangeLikelihood.ProbabilityAbove(limit, high, sigma))
+                + (1 - 2 * BlinkEndShare) * RangeLikelihood.ProbabilityAbove(limit, span, sigma);
+        }
+        double tail = acc.Fitting ? RangeLikelihood.TwoSidedTail(Math.Max(0, limit - (blinking ? span : range).Maximum) / sigma) : 1;
         acc.Add(BenchField.Refractometer, p, hasReadings ? 0.3 : BroadDensities.OverLimit, tail, robust: true);
         if (acc.Explaining)
             acc.Say($"over the limit (n > {limit.ToString("0.000", CultureInfo.InvariantCulture)}): {(hasReadings ? "highest" : "lowest")} index {range.ToString("0.000")} expected");

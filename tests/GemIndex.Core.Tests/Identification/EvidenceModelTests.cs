@@ -42,6 +42,28 @@ public class EvidenceModelTests
     }
 
     [Fact]
+    public void A_blinking_aggregate_whose_high_end_is_above_the_liquid_can_give_no_spot_edge_at_all()
+    {
+        // Smithsonite-like grains, ε 1.62 and ω 1.85 (ω above a 1.80 liquid): the spot is read at the high end, so lost,
+        // about as often as at either end (BlinkEndShare). A narrow aggregate whose whole span lies below the liquid cannot
+        // give "over the limit" with no edge: its probability is the robust mixture's floor only.
+        var grains = Entry("grains", "grains", OpticalIndices.SingleIndex(new(1.62, 1.85), OpticCharacter.Aggregate), forms: MaterialForm.Aggregate);
+        var narrow = Entry("narrow", "narrow", OpticalIndices.SingleIndex(new(1.600, 1.630), OpticCharacter.Aggregate), forms: MaterialForm.Aggregate);
+        var sheet = new AnalysedSheet(new BenchSheet
+        {
+            Refractometer = new RefractometerObservation(RefractometerMethod.Spot, overLimit: true, liquidLimit: 1.80),
+        });
+        var blinking = EvidenceLikelihood.Evaluate(grains, sheet);
+        // ln of the share read at the high end, over the broad "over the limit" density, mixed with the misreading share.
+        double expected = Math.Log((1 - BroadDensities.MisreadingShare) * (RefractometerEvidence.BlinkEndShare
+            + (1 - 2 * RefractometerEvidence.BlinkEndShare) * 0.05 / 0.23) / BroadDensities.OverLimit + BroadDensities.MisreadingShare);
+        Assert.Equal(expected, blinking.LogLikelihood - blinking.LogLikelihoodNotInCatalogue, 1);
+        Assert.True(blinking.Fit > 0.5, $"fit {blinking.Fit}");
+        var flat = EvidenceLikelihood.Evaluate(narrow, sheet);
+        Assert.True(blinking.LogLikelihood > flat.LogLikelihood + 3, $"{blinking.LogLikelihood} against {flat.LogLikelihood}");
+    }
+
+    [Fact]
     public void A_sharp_two_edge_series_is_strong_evidence_against_a_material_met_only_as_an_aggregate()
     {
         var crystal = Entry("rock crystal", "quartz", QuartzIndices, new(0.009, 0.009), OpticSign.Positive);
