@@ -114,11 +114,10 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
             {
                 if (i == skipHere) continue;
                 if (!any || Math.Abs(group[i]).CompareTo(Math.Abs(strongest)) > 0) strongest = group[i];
+                sum += group[i];
                 any = true;
             }
-            if (!any) continue;
-            for (int i = 0; i < group.Count; i++) if (i != skipHere) sum += group[i];
-            ratio += strongest + CorrelatedShare * (sum - strongest);
+            if (any) ratio += strongest + CorrelatedShare * (sum - strongest);
         }
         return ratio;
     }

@@ -74,21 +74,18 @@ public static class NextTestAdvisor
         };
     }
 
-    /// <summary>
-    /// The most informative look under magnification among the features not yet looked for: the single feature with the
-    /// largest gain, joined by a second when looking for both adds at least <see cref="MinimumGainBits"/> (features are
-    /// independent given the material, as in the likelihood, so the pair's outcomes are the four seen/not-seen pairs).
-    /// </summary>
-    /// <summary>The candidates split by group, each renormalised within its group, with the group's total.</summary>
-    private static List<(double Share, List<(Material Material, double P)> Candidates, OutcomeTables[] Tables)> Groups(
-        List<(Material Material, double P)> candidates, OutcomeTables[] tables, Func<Material, int> groupOf)
+    /// <summary>One group's candidates, renormalised within it, their outcome tables, and the group's share.</summary>
+    private sealed record Group(double Share, List<(Material Material, double P)> Candidates, OutcomeTables[] Tables);
+
+    /// <summary>The candidates split by group.</summary>
+    private static List<Group> Groups(List<(Material Material, double P)> candidates, OutcomeTables[] tables, Func<Material, int> groupOf)
     {
-        var result = new List<(double, List<(Material, double)>, OutcomeTables[])>();
-        foreach (var group in Enumerable.Range(0, candidates.Count).GroupBy(i => groupOf(candidates[i].Material)))
+        var result = new List<Group>();
+        foreach (var members in Enumerable.Range(0, candidates.Count).GroupBy(i => groupOf(candidates[i].Material)))
         {
-            double share = group.Sum(i => candidates[i].P);
+            double share = members.Sum(i => candidates[i].P);
             if (!(share > 0)) continue;
-            result.Add((share, [.. group.Select(i => (candidates[i].Material, candidates[i].P / share))], [.. group.Select(i => tables[i])]));
+            result.Add(new Group(share, [.. members.Select(i => (candidates[i].Material, candidates[i].P / share))], [.. members.Select(i => tables[i])]));
         }
         return result;
     }
@@ -97,8 +94,7 @@ public static class NextTestAdvisor
     /// The information a test gives about the groups: all of <paramref name="overall"/> without groups, otherwise less the
     /// information it gives within each group, weighted by the group's share (the chain rule of mutual information).
     /// </summary>
-    private static double Between(List<(double Share, List<(Material Material, double P)> Candidates, OutcomeTables[] Tables)>? groups,
-        double overall, Func<(double Share, List<(Material Material, double P)> Candidates, OutcomeTables[] Tables), double> within)
+    private static double Between(List<Group>? groups, double overall, Func<Group, double> within)
     {
         if (groups is null) return overall;
         double inside = 0;
@@ -106,8 +102,13 @@ public static class NextTestAdvisor
         return Math.Max(0, overall - inside);
     }
 
+    /// <summary>
+    /// The most informative look under magnification among the features not yet looked for: the single feature with the
+    /// largest gain, joined by a second when looking for both adds at least <see cref="MinimumGainBits"/> (features are
+    /// independent given the material, as in the likelihood, so the pair's outcomes are the four seen/not-seen pairs).
+    /// </summary>
     private static (MagnificationFeature[] Features, double Gain)? Look(BenchSheet sheet, List<(Material Material, double P)> candidates, OutcomeTables[] tables,
-        List<(double Share, List<(Material Material, double P)> Candidates, OutcomeTables[] Tables)>? groups)
+        List<Group>? groups)
     {
         double Information(int f, int g) => Between(groups, LookInformation(candidates, tables, f, g), x => LookInformation(x.Candidates, x.Tables, f, g));
         var done = sheet.Magnification is { } m ? m.Present.Concat(m.Absent).ToHashSet() : [];

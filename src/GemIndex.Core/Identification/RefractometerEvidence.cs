@@ -54,6 +54,10 @@ internal static class RefractometerEvidence
     private static bool IsBlinkingAggregate(Material m, PropertyRange span) =>
         (m.Forms & MaterialForm.Aggregate) != 0 && (m.Forms & MaterialForm.Crystal) == 0 && span.Width > BlinkSpan;
 
+    /// <summary>The two ends of a blinking aggregate's span at which its spot is read (<see cref="BlinkEndWidth"/> wide).</summary>
+    private static (PropertyRange Low, PropertyRange High) BlinkEnds(PropertyRange span) =>
+        (new PropertyRange(span.Minimum, span.Minimum + BlinkEndWidth), new PropertyRange(span.Maximum - BlinkEndWidth, span.Maximum));
+
     /// <summary>The cheap screen's width, in standard deviations of a reading with its offset and soft edges (DOMAIN.md §6b: 4σ).</summary>
     internal const double ScreenSigmas = 4;
 
@@ -197,8 +201,7 @@ internal static class RefractometerEvidence
         {
             // A strongly birefringent aggregate (coral, pearl, shell, the carbonates) shows the birefringence blink: the
             // spot is read at one end or the other of the span far more often than between them.
-            var low = new PropertyRange(span.Minimum, span.Minimum + BlinkEndWidth);
-            var high = new PropertyRange(span.Maximum - BlinkEndWidth, span.Maximum);
+            var (low, high) = BlinkEnds(span);
             var atLow = Index("spot reading", spot, sigma, low, shift, shiftSigma, false, acc.Fitting);
             var atHigh = Index("spot reading", spot, sigma, high, shift, shiftSigma, false, acc.Fitting);
             double density = BlinkEndShare * (atLow.Likelihood + atHigh.Likelihood) + (1 - 2 * BlinkEndShare) * part.Likelihood;
@@ -222,8 +225,7 @@ internal static class RefractometerEvidence
         {
             // A blinking aggregate's spot is read at either end of its span, or between (the spot model above): with its
             // high end above the liquid, the shadow edge is lost whenever the reading falls there.
-            var low = new PropertyRange(span.Minimum, span.Minimum + BlinkEndWidth);
-            var high = new PropertyRange(span.Maximum - BlinkEndWidth, span.Maximum);
+            var (low, high) = BlinkEnds(span);
             p = BlinkEndShare * (RangeLikelihood.ProbabilityAbove(limit, low, sigma) + RangeLikelihood.ProbabilityAbove(limit, high, sigma))
                 + (1 - 2 * BlinkEndShare) * RangeLikelihood.ProbabilityAbove(limit, span, sigma);
         }
