@@ -44,7 +44,7 @@ public class EvidenceModelTests
     [Fact]
     public void A_blinking_aggregate_whose_high_end_is_above_the_liquid_can_give_no_spot_edge_at_all()
     {
-        // Smithsonite-like grains, ε 1.62 and ω 1.85 (ω above a 1.80 liquid): the spot is read at the high end, so lost,
+        // Smithsonite-like grains, ε 1.62 and ω 1.85 (from memory; ω above a 1.80 liquid): the spot is read at the high end, so lost,
         // about as often as at either end (BlinkEndShare). A narrow aggregate whose whole span lies below the liquid cannot
         // give "over the limit" with no edge: its probability is the robust mixture's floor only.
         var grains = Entry("grains", "grains", OpticalIndices.SingleIndex(new(1.62, 1.85), OpticCharacter.Aggregate), forms: MaterialForm.Aggregate);
