@@ -9,7 +9,7 @@ namespace GemIndex.Bench.Independent;
 /// occasionally 0.1, rare 0.02–0.05. Rows marked "from memory" or "common practice" had no page read for them.
 /// The method shares within an origin are judgements.
 /// </summary>
-internal static class MagnificationHabits
+internal static partial class MagnificationHabits
 {
     // Pages read through the search tool (pages corpus), by short key.
     private const string CurvedStriaeHowTo = "gemsociety.org 'How to find curved striae in synthetic ruby and sapphire' (sure sign, subtle curvature, immersion and the c axis help)";
@@ -72,7 +72,9 @@ internal static class MagnificationHabits
     private static FeatureHabit H(string word, double held) => new(word, held);
 
     /// <summary>Every row: for each species and origin of the property table, one row per method.</summary>
-    public static IReadOnlyList<MagnificationHabit> All { get; } =
+    public static IReadOnlyList<MagnificationHabit> All { get; } = [.. FirstRows(), .. CrystalRows(), .. OrnamentalRows(), .. OrganicAndManMadeRows()];
+
+    private static MagnificationHabit[] FirstRows() =>
     [
         // Corundum.
         new() { Species = "corundum", Origin = "natural", Method = "natural", Clean = .05,

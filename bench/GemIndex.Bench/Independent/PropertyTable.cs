@@ -8,9 +8,12 @@ namespace GemIndex.Bench.Independent;
 /// "from memory" in its row; for stones above the refractometer's limit only "over the limit" is ever used of it.
 /// Hue weights, UV weights, origin shares and bench weights are judgements (docs/benchmark.md, "Judgements").
 /// </summary>
-internal static class PropertyTable
+internal static partial class PropertyTable
 {
-    public static IReadOnlyList<SpeciesProperties> Species { get; } =
+    /// <summary>Every row: the first rows here, then the families kept in files of their own (PropertyTable.*.cs).</summary>
+    public static IReadOnlyList<SpeciesProperties> Species { get; } = [.. FirstRows(), .. CrystalRows(), .. OrnamentalRows(), .. OrganicAndManMadeRows()];
+
+    private static SpeciesProperties[] FirstRows() =>
     [
         new()
         {

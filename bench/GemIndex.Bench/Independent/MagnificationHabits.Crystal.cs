@@ -1,0 +1,7 @@
+namespace GemIndex.Bench.Independent;
+
+internal static partial class MagnificationHabits
+{
+    /// <summary>Magnification rows for the species of PropertyTable.Crystal.cs.</summary>
+    private static MagnificationHabit[] CrystalRows() => [];
+}
