@@ -30,6 +30,13 @@ public sealed class Identifier
     public const double SeriousCandidate = 0.1;
 
     /// <summary>
+    /// "Not in the catalogue" outranking the leading species is "nothing fits" only when the readings favour an unlisted
+    /// material over the catalogue as a whole by at least this factor (its posterior odds over its prior odds). Without it
+    /// a sheet that says next to nothing, spread thin over many species, was called "nothing fits" (a judgement; docs/ranking.md §4).
+    /// </summary>
+    public const double NothingFitsOdds = 2;
+
+    /// <summary>
     /// Every log-likelihood ratio is divided by this before the posterior (one temperature for the whole model): fitted on
     /// the independent benchmark by the calibration error of the leading species' confidence (docs/ranking.md §3, its
     /// table); never fitted on stones simulated from the catalogue.
@@ -123,6 +130,8 @@ public sealed class Identifier
         for (int i = 0; i < posterior.Length; i++) { moved += posterior[i] * (1 - keep); posterior[i] *= keep; }
         return other + moved;
     }
+
+    private static double Odds(double p) => p / (1 - p);
 
     /// <summary>The best fit among the candidates with at least <see cref="SeriousCandidate"/> of the leader's posterior (their fits worked out only here).</summary>
     private static double BestSeriousFit(double[] posterior, Func<int, double> fit)
@@ -340,7 +349,8 @@ public sealed class Identifier
         }
         var species = SpeciesTotals(posterior);
         // Species first: "not in the catalogue" is set against the leading species, not against one of its many entries.
-        bool noGoodMatch = BestSeriousFit(posterior, i => Evaluated(i, explain: false).Fit) < MinimumFit || other > species[0].Confidence;
+        bool noGoodMatch = BestSeriousFit(posterior, i => Evaluated(i, explain: false).Fit) < MinimumFit
+            || (other > species[0].Confidence && Odds(other) >= NothingFitsOdds * Odds(BroadDensities.NotInCataloguePrior));
         var weighted = order.Where(i => posterior[i] >= 1e-3).Select(i => (_materials[i], posterior[i])).ToList();
         var separation = Separation(sheet, posterior, species);
         return new IdentificationResult

@@ -111,6 +111,20 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_sheet_that_says_nothing_is_not_called_nothing_fits_however_many_species_share_it()
+    {
+        // Sixty glass-like species of equal frequency (invented, for the rule only): with one SG that every one of them and
+        // an unlisted material explain alike, each species holds about 1.6 % and "not in the catalogue" keeps its prior
+        // of 3 %, above any one species, yet the readings have said nothing against the catalogue.
+        var many = Enumerable.Range(0, 60)
+            .Select(i => Make($"material {i}", $"species {i}", OpticalIndices.SingleIndex(new(1.50, 1.53), OpticCharacter.Amorphous), 1.0, 8.0))
+            .ToArray();
+        var result = new Identifier(many).Identify(new BenchSheet { SpecificGravity = new SpecificGravity(3.0, 0.02) });
+        Assert.True(result.NotInCatalogue > result.Species[0].Confidence);
+        Assert.False(result.NoGoodMatch);
+    }
+
+    [Fact]
     public void Confidences_and_the_not_in_catalogue_share_sum_to_one()
     {
         var result = Engine.Identify(new BenchSheet { SpecificGravity = new SpecificGravity(3.6, 0.02) }, maximumCandidates: 100);
