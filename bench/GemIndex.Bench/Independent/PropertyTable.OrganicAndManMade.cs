@@ -129,18 +129,6 @@ internal static partial class PropertyTable
         },
         new()
         {
-            Name = "ceramic", BenchWeight = 0.15, Form = StoneForm.Aggregate, Opaque = true,
-            Indices = PrincipalValues.Single(2.15, 2.20),
-            SpecificGravity = new(5.95, 6.10),
-            Hues = [new("black", .45), new("white", .4), new("grey", .1), new("blue", .05)],
-            Origins = [new("imitation", 1)],
-            Citation = "chatelain.ch 'Ceramic': sintered zirconia stabilised with yttria, widely used in watchmaking and jewellery in various shades; renato.design materials "
-                + "'Zirconia (yttria-stabilised Y-TZP)': density 6050 kg/m3, white to cream",
-            Judgement = "the row is the sintered zirconia ceramic of jewellery (other ceramics not read); SG 5.95–6.10 about the density read; opaque, read by spot; the index "
-                + "about cubic zirconia's from memory (only 'over the limit' reaches a bench); black and white the usual shades (from memory); hue weights and bench weight: judgement",
-        },
-        new()
-        {
             Name = "marcasite", BenchWeight = 0.05, Opaque = true,
             Indices = PrincipalValues.Single(2.60, 3.00),
             SpecificGravity = new(4.85, 4.92),
