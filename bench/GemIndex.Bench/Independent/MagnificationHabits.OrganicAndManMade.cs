@@ -53,6 +53,12 @@ internal static partial class MagnificationHabits
         new() { Species = "ferrite", Origin = "imitation", Method = "sintered", Clean = 1,
             Features = [],
             Source = "from memory: a sintered opaque ceramic, nothing of the vocabulary shows (gemstones.com 'Hematine' names no inclusions)" },
+        new() { Species = "ceramic", Origin = "imitation", Method = "sintered or bonded", Clean = .4,
+            Features = [H("round_bubbles", .4), H("colour_banding", .4), H("crystals", .2)],
+            Source = "gia.edu G&G Summer 2013 'Imitation larimar' (whitish gas bubbles and dark blue colour concentrations at 40x); juwelir.info 'Synthetic lazurite' "
+                + "(pyrite particles added to the Gilson lapis imitation, without the crystal outlines of natural pyrite); gemstones-guide.com 'Synthetic turquoise' (no characteristic "
+                + "inclusions; microspheres at high magnification, not a word of the vocabulary); colour concentrations written as banding, pyrite as crystals, the clean share and "
+                + "feature shares: judgement" },
         new() { Species = "marcasite", Origin = "natural", Method = "natural", Clean = .8,
             Features = [H("crystals", .1)],
             Source = "from memory" },
