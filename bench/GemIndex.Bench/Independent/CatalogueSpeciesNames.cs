@@ -21,6 +21,10 @@ internal static class CatalogueSpeciesNames
         ["grossular"] = ["grossular", "grossular-andradite", "hydrogrossular"],
         ["andradite"] = ["andradite", "grossular-andradite"],
         ["coral"] = ["calcareous coral"],
+        // The catalogue keeps its sintered and bonded imitations as one species; the table reads each material apart.
+        ["ceramic imitation of larimar"] = ["ceramic"],
+        ["sintered imitation of lapis"] = ["ceramic"],
+        ["bonded imitation of turquoise"] = ["ceramic"],
     };
 
     /// <summary>The catalogue species a table species stands for (its own name unless mapped).</summary>

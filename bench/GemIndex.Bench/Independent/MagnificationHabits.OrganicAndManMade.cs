@@ -53,7 +53,19 @@ internal static partial class MagnificationHabits
         new() { Species = "ferrite", Origin = "imitation", Method = "sintered", Clean = 1,
             Features = [],
             Source = "from memory: a sintered opaque ceramic, nothing of the vocabulary shows (gemstones.com 'Hematine' names no inclusions)" },
-        new() { Species = "ceramic", Origin = "imitation", Method = "sintered or bonded", Clean = .4,
+        new() { Species = "ceramic imitation of larimar", Origin = "imitation", Method = "sintered or bonded", Clean = .4,
+            Features = [H("round_bubbles", .4), H("colour_banding", .4), H("crystals", .2)],
+            Source = "gia.edu G&G Summer 2013 'Imitation larimar' (whitish gas bubbles and dark blue colour concentrations at 40x); juwelir.info 'Synthetic lazurite' "
+                + "(pyrite particles added to the Gilson lapis imitation, without the crystal outlines of natural pyrite); gemstones-guide.com 'Synthetic turquoise' (no characteristic "
+                + "inclusions; microspheres at high magnification, not a word of the vocabulary); colour concentrations written as banding, pyrite as crystals, the clean share and "
+                + "feature shares: judgement" },
+        new() { Species = "sintered imitation of lapis", Origin = "imitation", Method = "sintered or bonded", Clean = .4,
+            Features = [H("round_bubbles", .4), H("colour_banding", .4), H("crystals", .2)],
+            Source = "gia.edu G&G Summer 2013 'Imitation larimar' (whitish gas bubbles and dark blue colour concentrations at 40x); juwelir.info 'Synthetic lazurite' "
+                + "(pyrite particles added to the Gilson lapis imitation, without the crystal outlines of natural pyrite); gemstones-guide.com 'Synthetic turquoise' (no characteristic "
+                + "inclusions; microspheres at high magnification, not a word of the vocabulary); colour concentrations written as banding, pyrite as crystals, the clean share and "
+                + "feature shares: judgement" },
+        new() { Species = "bonded imitation of turquoise", Origin = "imitation", Method = "sintered or bonded", Clean = .4,
             Features = [H("round_bubbles", .4), H("colour_banding", .4), H("crystals", .2)],
             Source = "gia.edu G&G Summer 2013 'Imitation larimar' (whitish gas bubbles and dark blue colour concentrations at 40x); juwelir.info 'Synthetic lazurite' "
                 + "(pyrite particles added to the Gilson lapis imitation, without the crystal outlines of natural pyrite); gemstones-guide.com 'Synthetic turquoise' (no characteristic "

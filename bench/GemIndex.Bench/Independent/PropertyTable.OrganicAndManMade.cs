@@ -128,25 +128,42 @@ internal static partial class PropertyTable
                 + "limit, as for hematite); insulating (as read); hue weights and bench weight: judgement",
         },
         // Sintered or bonded imitations of opaque ornamental stones (turquoise, lapis lazuli, larimar): the catalogue's
-        // ceramic, not the zirconia ceramic of watch cases. Three materials read, each a spot reading and a weighed SG.
+        // ceramic, not the zirconia ceramic of watch cases. Three materials read, each a spot reading and a weighed SG, kept
+        // as three rows (CatalogueSpeciesNames maps each to the catalogue's ceramic): one row spanning all three drew
+        // index and SG pairs that no page describes.
         new()
         {
-            Name = "ceramic", BenchWeight = 0.2, Form = StoneForm.Aggregate, Opaque = true, SgFollowsIndex = 1,
-            Indices = PrincipalValues.Single(1.53, 1.61),
-            SpecificGravity = new(1.85, 2.75),
+            Name = "ceramic imitation of larimar", BenchWeight = 0.05, Form = StoneForm.Aggregate, Opaque = true,
+            Indices = PrincipalValues.Single(1.52, 1.54),
+            SpecificGravity = new(1.84, 1.90),
             Hues = [new("blue", 1)],
             Origins = [new("imitation", 1)],
-            Citation = "gia.edu G&G Summer 2013 Gem News 'Imitation larimar': a ceramic cabochon (95 % Al₂O₃, 4 % SiO₂) made in China, spot RI 1.53, SG 1.87, light blue; "
-                + "gemstones-guide.com 'Synthetic turquoise' (the Gilson material, spheres held by a binder, so not a true synthetic): blue, semi-translucent to opaque, RI 1.598 ±0.01 "
-                + "as a single reading, SG 2.56–2.75 (closer 2.75), LW moderate greenish blue, SW very faint yellowish green; baike.wangchao.net.cn 'artificial lapis' (the Gilson "
-                + "imitation): SG 2.33–2.53 with or without pyrite, RI 1.55, gives off hydrogen sulphide with acid; juwelir.info 'Synthetic lazurite' (the Gilson material): density "
-                + "2.38, noticeably porous; yourgemologist.com 'Imitation of lapis lazuli': very porous; Wikipedia 'Turquoise' (imitations section, zalansite.site copy): pressed, "
-                + "bonded and sintered turquoise imitations of copper and aluminium compounds ('Viennese turquoise', 'neolith'), Gilson's with black spiderweb matrix",
-            Judgement = "one row for the three materials read (larimar, lapis and turquoise imitations): the spot range 1.53–1.61 spans the three readings (1.598 ±0.01); "
-                + "SG 1.85–2.75 spans the weighed values; SG written to rise with the index (SgFollowsIndex 1) because the three materials read sit in that order (1.53/1.87, "
-                + "1.55/2.33–2.53, 1.598/2.56–2.75): judgement; not written porous although the lapis imitation is said to be (every page read gives a weighed SG, and the "
-                + "juwelir.info page names weighing as the simplest test), so it is weighed at the bench: judgement; blue only, the one hue the pages give; no UV written (read "
-                + "for the turquoise imitation only); the bench weight: judgement",
+            Citation = "gia.edu G&G Summer 2013 Gem News 'Imitation larimar': a ceramic cabochon (95 % Al₂O₃, 4 % SiO₂) made in China, spot RI 1.53, SG 1.87, light blue",
+            Judgement = "one stone read: the spot ±0.01 and SG ±0.03 about its figures; blue (the page's light blue); the bench weight: judgement",
+        },
+        new()
+        {
+            Name = "sintered imitation of lapis", BenchWeight = 0.08, Form = StoneForm.Aggregate, Opaque = true,
+            Indices = PrincipalValues.Single(1.54, 1.56),
+            SpecificGravity = new(2.33, 2.53),
+            Hues = [new("blue", 1)],
+            Origins = [new("imitation", 1)],
+            Citation = "baike.wangchao.net.cn 'artificial lapis' (the Gilson imitation): SG 2.33–2.53 with or without pyrite, RI 1.55, gives off hydrogen sulphide with acid; "
+                + "juwelir.info 'Synthetic lazurite' (the Gilson material): density 2.38, noticeably porous, weighing the simplest test; yourgemologist.com 'Imitation of lapis lazuli': very porous",
+            Judgement = "the spot ±0.01 about 1.55; not written porous although the pages say it is (each gives a weighed SG, so the bench weighs it); the bench weight: judgement",
+        },
+        new()
+        {
+            Name = "bonded imitation of turquoise", BenchWeight = 0.07, Form = StoneForm.Aggregate, Opaque = true,
+            Indices = PrincipalValues.Single(1.588, 1.608),
+            SpecificGravity = new(2.56, 2.75),
+            UvLong = [new("moderate", 1)], UvShort = [new("weak", 1)],
+            Hues = [new("blue", 1)],
+            Origins = [new("imitation", 1)],
+            Citation = "gemstones-guide.com 'Synthetic turquoise' (the Gilson material, spheres held by a binder, so not a true synthetic): blue, semi-translucent to opaque, RI 1.598 ±0.01 "
+                + "as a single reading, SG 2.56–2.75 (closer 2.75), LW moderate greenish blue, SW very faint yellowish green; Wikipedia 'Turquoise' (imitations section, zalansite.site "
+                + "copy): pressed, bonded and sintered turquoise imitations of copper and aluminium compounds, Gilson's with black spiderweb matrix",
+            Judgement = "SW 'very faint' written weak; blue only (the page's hue); the bench weight: judgement",
         },
         new()
         {
