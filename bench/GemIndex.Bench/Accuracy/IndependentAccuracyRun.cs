@@ -156,13 +156,15 @@ internal static class IndependentAccuracyRun
     /// </summary>
     private static void NotInCatalogue(IReadOnlyList<Material> catalogue, List<(SimulatedStone Stone, IReadOnlyList<string> Confusers)> cases, TextWriter o, TextWriter? failures)
     {
-        int flagged = 0, confidentWrong = 0, inside = 0, insideFlagged = 0, insideConfidentWrong = 0;
+        int everything = 0, flagged = 0, confidentWrong = 0, inside = 0, insideFlagged = 0, insideConfidentWrong = 0;
         foreach (var (stone, confusers) in cases)
         {
             var removed = CatalogueSpeciesNames.Of(stone.Species.Name)
                 .Concat(confusers.SelectMany(c => PropertyTable.Species.Where(s => CatalogueSpeciesNames.GroupOf(s.Name) == c).SelectMany(s => CatalogueSpeciesNames.Of(s.Name))))
                 .ToHashSet(StringComparer.Ordinal);
             var remaining = catalogue.Where(m => !removed.Contains(m.Species)).ToList();
+            // A sheet that says almost nothing is consistent with every species: nothing is left to rank.
+            if (remaining.Count == 0) { everything++; continue; }
             new BatchLineAdapter(remaining).TryIdentify(stone.Line, out var answer, out _);
             bool named = !answer.NothingFits && answer.Confidence >= Confident;
             bool admitted = InsideRemaining(stone, remaining);
@@ -174,10 +176,10 @@ internal static class IndependentAccuracyRun
             if (named && failures is not null)
                 failures.WriteLine($"REMOVED {stone.Species.Name} -> {answer.Species} {answer.Confidence:0.00}{(admitted ? " (inside its ranges)" : "")}: {stone.Line}");
         }
-        int outside = cases.Count - inside;
+        int ranked = cases.Count - everything, outside = ranked - inside;
         o.WriteLine();
-        o.WriteLine($"Species and its look-alikes removed from the catalogue ({cases.Count} stones): \"nothing fits\" for {P(flagged, cases.Count)}; " +
-            $"a wrong species named at ≥ 80 % for {P(confidentWrong, cases.Count)}.");
+        o.WriteLine($"Species and its look-alikes removed from the catalogue ({ranked} stones; {everything} left out, every species a look-alike): " +
+            $"\"nothing fits\" for {P(flagged, ranked)}; a wrong species named at ≥ 80 % for {P(confidentWrong, ranked)}.");
         o.WriteLine($"  of them, true values inside a remaining catalogue entry's ranges (lowest and highest index ± {InsideIndexTolerance}, SG ± {InsideGravityShare:0%}): {inside}; " +
             $"\"nothing fits\" {P(insideFlagged, inside)}, wrong at ≥ 80 % {P(insideConfidentWrong, inside)}; " +
             $"the other {outside}: \"nothing fits\" {P(flagged - insideFlagged, outside)}, wrong at ≥ 80 % {P(confidentWrong - insideConfidentWrong, outside)}.");
