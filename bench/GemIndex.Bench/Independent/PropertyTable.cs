@@ -453,14 +453,16 @@ internal static partial class PropertyTable
         },
         new()
         {
-            Name = "natural glass", BenchWeight = 0.4, Form = StoneForm.Amorphous, Strained = 0.1,
+            Name = "natural glass", BenchWeight = 0.4, Form = StoneForm.Amorphous, Strained = 0.1, SgFollowsIndex = 1,
             Indices = PrincipalValues.Single(1.46, 1.54),
             SpecificGravity = new(2.20, 2.60),
             Hues = [new("black", .45), new("green", .2), new("brown", .15), new("grey", .1), new("yellow", .05), new("red", .05)],
             Citation = "tradeshop.com 'Tektite (Moldavite)': RI 1.46–1.54, SG 2.2–2.9; jiehonggem.com 'Natural glass – obsidian' (GIA Gem Reference Guide): RI 1.49 (+.020, −.010), SG 2.40 (+.10, −.07); "
                 + "langantiques.com moldavite: RI 1.48–1.50; gemstones-guide.com 'Natural glass': obsidian SG 2.34–2.46; Smith, Gem-Stones (1919; oldandsold.com 'Obsidian, moldavite'): obsidian about 1.50, "
                 + "moldavite 1.51 and SG 2.50, single refraction; gemsociety.org 'Natural glass': RI 1.46–1.69 and SG 2.20–3.00 over every type, UV not diagnostic",
-            Judgement = "SG cut at 2.60 (obsidian and moldavite, the types a bench meets; the rare high types of the wider ranges left out), strain in 10 %, hue weights: judgement",
+            Judgement = "SG cut at 2.60 (obsidian and moldavite, the types a bench meets; the rare high types of the wider ranges left out), strain in 10 %, hue weights: judgement; "
+                + "SG rising with the index: the pairs read rise together (obsidian 1.49 / 2.40, moldavite 1.51 / 2.50), as a glass's index follows its density (the "
+                + "Gladstone–Dale relation); drawn apart, a silica-rich index came with an obsidian's weight, a pair no page gives",
         },
         new()
         {
