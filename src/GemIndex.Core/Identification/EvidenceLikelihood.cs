@@ -46,7 +46,7 @@ public static class EvidenceLikelihood
         if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc, gravityGroup);
         for (int i = 0; i < s.HeavyLiquids.Count; i++) HeavyLiquid(material, s.HeavyLiquids[i], acc);
         if (s.Polariscope is { } pol) Polariscope(profile, pol, acc);
-        if (s.Pleochroism is { } pl) Pleochroism(profile, pl, sheet.IsColourless, acc);
+        if (s.Pleochroism is { } pl) Pleochroism(profile, pl, sheet.IsColourless, lightCounted: s.Polariscope is not null, acc);
         if (s.Dispersion is { } d) Dispersion(material, d, acc);
         if (s.ThermalProbe is { } t) Thermal(material, t, acc);
         if (s.Electrical is { } e) Electrical(material, e, acc);
@@ -94,14 +94,21 @@ public static class EvidenceLikelihood
             acc.Say($"{Word(liquid.Outcome)} in liquid of density {F2(density)}: SG {range.ToString("0.00")} expected");
     }
 
+    /// <summary>
+    /// A polariscope reaction or a pleochroism reading needs light through the stone. On a material the catalogue calls
+    /// opaque one is written only at thin edges or translucent patches, or by mistake: this share of the chance on a stone
+    /// that transmits light, counted once per stone (a judgement; docs/ranking.md §2). The reaction written says nothing more.
+    /// </summary>
+    public const double OpaqueReadingShare = 0.2;
+
     private static void Polariscope(MaterialProfile profile, PolariscopeReaction seen, EvidenceAccumulator acc)
     {
         var m = profile.Material;
         if (m.IsOpaque)
         {
-            // No light passes: the test cannot be taken on it, so whatever was written neither supports nor weakens it.
-            acc.Add(BenchField.Polariscope, 0.25, 0.25, 1, robust: false);
-            if (acc.Explaining) acc.Say("polariscope: opaque material, the test says nothing about it");
+            // The reaction itself says nothing of an opaque material, but that one was written says light passed.
+            acc.Add(BenchField.Polariscope, OpaqueReadingShare * 0.25, 0.25, OpaqueReadingShare, robust: false);
+            if (acc.Explaining) acc.Say("polariscope: a reaction was written, but this material is opaque (light passes at thin edges at most)");
             return;
         }
         double f = profile.Polariscope[(int)seen];
@@ -134,13 +141,17 @@ public static class EvidenceLikelihood
         _ => SinglyRefractiveOrAnomalous,
     };
 
-    private static void Pleochroism(MaterialProfile profile, PleochroismObservation seen, bool colourless, EvidenceAccumulator acc)
+    private static void Pleochroism(MaterialProfile profile, PleochroismObservation seen, bool colourless, bool lightCounted, EvidenceAccumulator acc)
     {
         var m = profile.Material;
         if (m.IsOpaque)
         {
-            acc.Add(BenchField.Pleochroism, 1 / 3.0, 1 / 3.0, 1, robust: false);
-            if (acc.Explaining) acc.Say("pleochroism: opaque material, the dichroscope says nothing about it");
+            // Light through the stone is counted once: by the polariscope's reading when there is one.
+            double share = lightCounted ? 1 : OpaqueReadingShare;
+            acc.Add(BenchField.Pleochroism, share / 3, 1 / 3.0, share, robust: false);
+            if (acc.Explaining)
+                acc.Say(lightCounted ? "pleochroism: opaque material, the dichroscope says nothing about it"
+                    : "pleochroism: a reading was written, but this material is opaque (light passes at thin edges at most)");
             return;
         }
         double[] row = PleochroismRow(m.OpticCharacter, colourless ? PleochroismStrength.None : m.Pleochroism);

@@ -84,7 +84,27 @@ public class EvidenceModelTests
     }
 
     [Fact]
-    public void An_opaque_material_neither_passes_nor_fails_the_polariscope_or_the_dichroscope()
+    public void A_written_polariscope_or_dichroscope_reading_says_light_passed_and_counts_once_against_an_opaque_material()
+    {
+        // Common practice: both instruments need light through the stone. The weight is log2 of the rule's share.
+        var opaque = Entry("opaque stone", "opaque", OpticalIndices.SingleIndex(new(1.60, 1.62)), opaque: true);
+        var engine = new Identifier([opaque, Entry("clear stone", "clear", OpticalIndices.SingleIndex(new(1.60, 1.62)))]);
+        double expected = Math.Log2(EvidenceLikelihood.OpaqueReadingShare);
+        IReadOnlyList<EvidenceContribution> Reasons(BenchSheet sheet) => engine.Identify(sheet).Candidates.Single(c => c.Material.Name == "opaque stone").Reasons;
+        double Weight(IReadOnlyList<EvidenceContribution> reasons, string test) => reasons.Single(r => r.Test == test).WeightBits;
+
+        var polariscopeOnly = Reasons(new BenchSheet { Polariscope = PolariscopeReaction.SinglyRefractive });
+        var dichroscopeOnly = Reasons(new BenchSheet { Pleochroism = PleochroismObservation.None });
+        var both = Reasons(new BenchSheet { Polariscope = PolariscopeReaction.SinglyRefractive, Pleochroism = PleochroismObservation.None });
+        string polariscope = polariscopeOnly.Single().Test, dichroscope = dichroscopeOnly.Single().Test;
+        Assert.Equal(expected, Weight(polariscopeOnly, polariscope), 9);
+        Assert.Equal(expected, Weight(dichroscopeOnly, dichroscope), 9);
+        Assert.Equal(expected, Weight(both, polariscope), 9);
+        Assert.Equal(0, Weight(both, dichroscope), 9);
+    }
+
+    [Fact]
+    public void What_an_opaque_material_shows_in_the_polariscope_or_the_dichroscope_neither_supports_nor_weakens_it()
     {
         var opaque = Entry("opaque stone", "opaque", OpticalIndices.SingleIndex(new(1.60, 1.62)), opaque: true);
         var clear = Entry("clear stone", "clear", OpticalIndices.SingleIndex(new(1.60, 1.62)));
