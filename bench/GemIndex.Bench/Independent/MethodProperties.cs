@@ -29,6 +29,15 @@ internal sealed record MethodProperties
                        + "density about 3.64, from the excess alumina of the flame-fusion boule; gemstones-guide.com 'Synthetic spinel': 2.5 Al2O3 to 1 MgO. "
                        + "Ranges: ±0.005 and ±0.02 about the published figures, judgement",
         },
+        new()
+        {
+            // The species' row spans natural rutile's niobium- and tantalum-rich stones (SG up to 5.6); the boule is TiO2.
+            Species = "rutile", Method = "flame fusion",
+            Index = new(2.61, 2.62), SpecificGravity = new(4.23, 4.28),
+            Citation = "1-cultured-diamonds.com 'Synthetic rutile': relative density 4.25, refractive index 2.62–2.90, birefringence 0.287; gemdat.awj.mine.nu "
+                       + "'Rutile' (Henn and Milisenda, Gemmological Tables 2004): synthetic rutile SG 4.26, RI 2.616–2.903. Ranges: the index as the species' row "
+                       + "(over the limit at a bench), SG ±0.02 about the two figures read, judgement",
+        },
     ];
 
     /// <summary>The row for a stone of this species made by this method, if its figures differ from the species'.</summary>
