@@ -193,7 +193,7 @@ internal static class IndependentAccuracyRun
 
     /// <summary>
     /// True when some remaining catalogue entry's ranges hold the stone's true lowest and highest principal index and its
-    /// SG (within the tolerances above), with the same kind of indicatrix (isotropic or not).
+    /// SG (within the tolerances above), with the same kind of indicatrix (isotropic or not; an aggregate entry either).
     /// </summary>
     private static bool InsideRemaining(SimulatedStone stone, IReadOnlyList<Material> remaining)
     {
@@ -202,7 +202,7 @@ internal static class IndependentAccuracyRun
         bool isotropic = highest - lowest < 1e-9;
         static bool Holds(PropertyRange range, double value, double tolerance) => range.Minimum - tolerance <= value && value <= range.Maximum + tolerance;
         return remaining.Any(m =>
-            (m.Indices.Character is OpticCharacter.Uniaxial or OpticCharacter.Biaxial) != isotropic
+            (m.Indices.Character == OpticCharacter.Aggregate || (m.Indices.Character is OpticCharacter.Uniaxial or OpticCharacter.Biaxial) != isotropic)
             && Holds(m.Indices.Lowest, lowest, InsideIndexTolerance) && Holds(m.Indices.Highest, highest, InsideIndexTolerance)
             && Holds(m.SpecificGravity, stone.SpecificGravity, InsideGravityShare * stone.SpecificGravity));
     }
