@@ -197,8 +197,7 @@ internal static class IndependentAccuracyRun
     /// </summary>
     private static bool InsideRemaining(SimulatedStone stone, IReadOnlyList<Material> remaining)
     {
-        double lowest = stone.LowestIndex;
-        double highest = Math.Max(stone.Principal.X, Math.Max(stone.Principal.Y, stone.Principal.Z));
+        double lowest = stone.LowestIndex, highest = stone.HighestIndex;
         bool isotropic = highest - lowest < 1e-9;
         static bool Holds(PropertyRange range, double value, double tolerance) => range.Minimum - tolerance <= value && value <= range.Maximum + tolerance;
         return remaining.Any(m =>

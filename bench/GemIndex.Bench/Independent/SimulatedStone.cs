@@ -28,4 +28,6 @@ internal sealed record SimulatedStone
     public required string Line { get; init; }
 
     public double LowestIndex => Math.Min(Principal.X, Math.Min(Principal.Y, Principal.Z));
+
+    public double HighestIndex => Math.Max(Principal.X, Math.Max(Principal.Y, Principal.Z));
 }

@@ -266,15 +266,14 @@ public sealed class Identifier
         static int Cost(IndicatrixPrior prior) => prior.Shapes.Length * (prior.Families.Any(f => f.Biaxial) ? 2 : 1);
     }
 
-    /// <summary>Entry <paramref name="i"/>'s tempered log-likelihood ratio (with and without colour) and log posterior, without its fit.</summary>
-    private void Weigh(int i, AnalysedSheet analysed, EvidenceAccumulator acc, double[] logLikelihood, double[] logLikelihoodWithoutColour, double[] logPosterior)
+    /// <summary>Entry <paramref name="i"/>'s log posterior and its tempered log-likelihood ratio without colour, without its fit.</summary>
+    private void Weigh(int i, AnalysedSheet analysed, EvidenceAccumulator acc, double[] logLikelihoodWithoutColour, double[] logPosterior)
     {
         EvidenceLikelihood.Weigh(_profiles[i], analysed, acc);
         double logOther = acc.LogLikelihoodNotInCatalogue;
         // Tempered: the ratio to "not in the catalogue" is divided by the temperature.
-        logLikelihood[i] = (acc.LogLikelihood - logOther) / Temperature;
         logLikelihoodWithoutColour[i] = (acc.LogLikelihoodWithoutColour - logOther) / Temperature;
-        logPosterior[i] = _logPriors[i] + logLikelihood[i];
+        logPosterior[i] = _logPriors[i] + (acc.LogLikelihood - logOther) / Temperature;
     }
 
     /// <summary>The catalogue ranked over.</summary>
@@ -292,7 +291,6 @@ public sealed class Identifier
         if (SeriesOnEveryCore) SeriesInParallel(analysed);
         int n = _materials.Length;
         var logPosterior = new double[n];
-        var logLikelihood = new double[n];
         // The same without colour: the origin balance's "tests alone" (colour lists by origin are the market's usual
         // colours, never a physical separation of origins).
         var logLikelihoodWithoutColour = new double[n];
@@ -302,11 +300,11 @@ public sealed class Identifier
         // is weighed on its own (an accumulator per thread, emptied for every entry), so on every core too.
         if (SeriesOnEveryCore)
             Parallel.For(0, n, () => new EvidenceAccumulator(explaining: false, fitting: false),
-                (i, _, acc) => { Weigh(i, analysed, acc, logLikelihood, logLikelihoodWithoutColour, logPosterior); return acc; }, _ => { });
+                (i, _, acc) => { Weigh(i, analysed, acc, logLikelihoodWithoutColour, logPosterior); return acc; }, _ => { });
         else
         {
             var acc = new EvidenceAccumulator(explaining: false, fitting: false);
-            for (int i = 0; i < n; i++) Weigh(i, analysed, acc, logLikelihood, logLikelihoodWithoutColour, logPosterior);
+            for (int i = 0; i < n; i++) Weigh(i, analysed, acc, logLikelihoodWithoutColour, logPosterior);
         }
         for (int i = 0; i < n; i++) max = Math.Max(max, logPosterior[i]);
         var evaluations = new CandidateEvaluation?[n];
