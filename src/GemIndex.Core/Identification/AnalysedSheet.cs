@@ -12,7 +12,7 @@ public sealed record AnalysedSheet
         Sheet = sheet;
         if (!string.IsNullOrWhiteSpace(sheet.Colour))
         {
-            var hues = ColourWords.Hues(sheet.Colour).Where(ColourWords.KnownHues.Contains).ToHashSet();
+            var hues = ColourWords.PrincipalHues(sheet.Colour).ToHashSet();
             ColourHues = hues;
             ColourHueList = [.. hues];
             UnknownColourWords = ColourWords.UnknownWords(sheet.Colour);
@@ -59,7 +59,7 @@ public sealed record AnalysedSheet
     /// <summary>The sheet as entered.</summary>
     public BenchSheet Sheet { get; }
 
-    /// <summary>The colour seen, as normalised hue words; empty when no colour was given.</summary>
+    /// <summary>The colour seen, as the normalised hues it names (<see cref="ColourWords.PrincipalHues"/>: a tint such as "bluish" left out); empty when no colour was given.</summary>
     public IReadOnlySet<string> ColourHues { get; } = new HashSet<string>();
 
     /// <summary>The same hues as a list, in the set's own order (the colour test reads them for every entry).</summary>

@@ -13,7 +13,7 @@ public static class ColourWords
         ["gold"] = "yellow", ["golden"] = "yellow", ["lemon"] = "yellow", ["champagne"] = "yellow", ["honey"] = "yellow",
         ["rose"] = "pink", ["salmon"] = "pink", ["crimson"] = "red", ["scarlet"] = "red", ["teal"] = "blue",
         ["turquoise"] = "blue", ["cyan"] = "blue", ["aqua"] = "blue", ["olive"] = "green", ["emerald"] = "green",
-        ["tan"] = "brown", ["cognac"] = "brown", ["amber"] = "orange", ["peach"] = "orange",
+        ["tan"] = "brown", ["cognac"] = "brown", ["amber"] = "orange", ["peach"] = "orange", ["orangy"] = "orange", ["pinky"] = "pink",
     };
 
     // "-ish" forms with the suffix cut: "bluish" → "blu", "reddish" → "redd".
@@ -130,18 +130,38 @@ public static class ColourWords
     /// <summary>True when the words describe a colourless stone.</summary>
     public static bool IsColourless(string colour) => Hues(colour).All(h => h == "colourless") && Hues(colour).Any();
 
-    /// <summary>Compares a seen colour with a material's usual colours.</summary>
-    public static ColourMatch Compare(string seen, IReadOnlyList<string> usual) =>
-        Compare(Hues(seen).ToHashSet(), usual.SelectMany(Hues).ToHashSet());
-
-    /// <summary>Compares hue words already normalised by <see cref="Hues"/>.</summary>
-    public static ColourMatch Compare(IReadOnlySet<string> seenHues, IReadOnlySet<string> usualHues)
+    /// <summary>
+    /// The hues a colour description names as its colour, without the hues that only tint it: "bluish green" and "golden
+    /// yellow" are a green and a yellow, "blue-green" is both, "pink with black veins" is pink and black. Each part (split
+    /// at "and", "with", commas and slashes) gives the hues of its last word that names one; an "-ish" or "-y" word
+    /// ("bluish", "orangy") only tints (common practice in colour description: the last hue is the colour, the modifier
+    /// its tone), unless it is all the part has.
+    /// </summary>
+    public static IEnumerable<string> PrincipalHues(string colour)
     {
-        if (seenHues.Overlaps(usualHues)) return ColourMatch.Same;
-        foreach (string hue in seenHues)
-            if (Neighbours.TryGetValue(hue, out var near) && near.Any(usualHues.Contains)) return ColourMatch.Neighbour;
-        return ColourMatch.Different;
+        var found = new List<string>();
+        foreach (string part in colour.ToLowerInvariant().Split([",", "/", ";", " and ", " with "], StringSplitOptions.RemoveEmptyEntries))
+        {
+            var words = part.Split(' ', StringSplitOptions.RemoveEmptyEntries);
+            List<string>? tint = null;
+            bool named = false;
+            for (int i = words.Length - 1; i >= 0 && !named; i--)
+            {
+                // A hyphenated word names each of its hues ("blue-green"), save an "-ish" half ("yellowish-green").
+                var halves = words[i].Split('-', StringSplitOptions.RemoveEmptyEntries);
+                var hues = halves.Where(h => !IsTint(h)).SelectMany(Hues).Where(KnownHues.Contains).ToList();
+                if (hues.Count > 0) { found.AddRange(hues); named = true; }
+                else tint ??= [.. halves.SelectMany(Hues).Where(KnownHues.Contains)];
+            }
+            if (!named && tint is { Count: > 0 }) found.AddRange(tint);
+        }
+        return found.Distinct();
     }
+
+    // "bluish", "orangy": a word that tones a hue rather than naming the colour.
+    private static bool IsTint(string word) => word.EndsWith("ish", StringComparison.Ordinal) || TintWords.Contains(word);
+
+    private static readonly HashSet<string> TintWords = new(StringComparer.Ordinal) { "orangy", "pinky" };
 
     /// <summary>The hue words in a colour description, normalised ("greenish blue" → green, blue).</summary>
     public static IEnumerable<string> Hues(string colour)

@@ -46,8 +46,8 @@ public sealed class MaterialProfile
     /// <summary>The hues its species shows, most usual first: itself when it is its species' only entry.</summary>
     internal IReadOnlyList<string> SpeciesHues { get; }
 
-    /// <summary>An entry's usual colours as known hue words, most usual first.</summary>
-    private static List<string> HueList(Material m) => [.. m.Colours.SelectMany(ColourWords.Hues).Where(ColourWords.KnownHues.Contains).Distinct()];
+    /// <summary>An entry's usual colours as the hues they name (<see cref="ColourWords.PrincipalHues"/>), most usual first.</summary>
+    private static List<string> HueList(Material m) => [.. m.Colours.SelectMany(ColourWords.PrincipalHues).Distinct()];
 
     /// <summary>
     /// The hues a species' entries show, the hue listed by most entries first (ties by where they first appear, entries in

@@ -167,6 +167,41 @@ public class EvidenceModelTests
         Assert.Equal(1, ColourWords.KnownHues.Sum(h => ColourWords.Probability(new HashSet<string> { h }, listed)), 9);
     }
 
+    [Theory]
+    // Common practice in describing colour: the last hue named is the colour, an "-ish" or "-y" word only its tone;
+    // a hyphenated pair names both; "with" and "and" join colours that are both there.
+    [InlineData("bluish green", "green")]
+    [InlineData("yellowish green", "green")]
+    [InlineData("greenish yellow", "yellow")]
+    [InlineData("golden yellow", "yellow")]
+    [InlineData("orangy red", "red")]
+    [InlineData("purplish red", "red")]
+    [InlineData("blue-green", "blue green")]
+    [InlineData("yellowish-green", "green")]
+    [InlineData("pink with black veins", "pink black")]
+    [InlineData("green and red", "green red")]
+    [InlineData("bluish", "blue")]
+    [InlineData("light blue", "blue")]
+    [InlineData("zorbish", "")]
+    public void A_colour_description_names_its_last_hue_and_a_tint_only_tones_it(string description, string expected)
+    {
+        Assert.Equal(expected.Split(' ', StringSplitOptions.RemoveEmptyEntries), ColourWords.PrincipalHues(description).ToArray());
+    }
+
+    [Fact]
+    public void A_tint_in_an_entrys_colours_does_not_list_that_hue()
+    {
+        // An emerald's "yellowish green" is a green: a yellow stone must favour the yellow variety of the same species.
+        var green = Entry("green variety", "s", QuartzIndices, colours: ["green", "yellowish green"], frequency: BenchFrequency.VeryCommon);
+        var yellow = Entry("yellow variety", "s", QuartzIndices, colours: ["yellow", "greenish yellow"]);
+        var result = new Identifier([green, yellow]).Identify(new BenchSheet { Colour = "yellow" });
+        Assert.Equal("yellow variety", result.Candidates[0].Material.Name);
+        Assert.Equal(["green"], new MaterialProfile(green, null, null).ColourHues);
+        // "orangy" is a colour word of the trade: no "not known" warning.
+        Assert.DoesNotContain(new Identifier([green]).Identify(new BenchSheet { Colour = "orangy red" }).Warnings,
+            w => w.Contains("not known", StringComparison.Ordinal));
+    }
+
     [Fact]
     public void A_hue_the_species_shows_is_less_unlikely_for_an_entry_that_does_not_list_it_than_a_hue_the_species_never_shows()
     {
