@@ -2,8 +2,9 @@ using BenchmarkDotNet.Running;
 using GemIndex.Bench.Accuracy;
 using GemIndex.Data.Catalogue;
 
-// accuracy [STONES] [SEED] [--failures] [--lines FILE] [--loupe SHARE]: the independent accuracy benchmark
-// (docs/benchmark.md); SHARE of stones get a magnification look (default 0.5; 0 gives the sheets without it);
+// accuracy [STONES] [SEED] [--failures] [--lines FILE] [--loupe SHARE] [--beyond SHARE]: the independent accuracy
+// benchmark (docs/benchmark.md); --loupe: SHARE of stones get a magnification look (default 0.5; 0 gives the sheets
+// without it); --beyond: SHARE of stones drawn beyond the table's ranges (default 0.07; a stress check);
 // anything else goes to BenchmarkDotNet: dotnet run -c Release --project bench/GemIndex.Bench -- --filter '*' --job short
 if (args.Length > 0 && args[0] == "accuracy")
 {
@@ -16,8 +17,12 @@ if (args.Length > 0 && args[0] == "accuracy")
     double lookShare = loupeAt > 0 && loupeAt + 1 < args.Length
         ? double.Parse(args[loupeAt + 1], System.Globalization.CultureInfo.InvariantCulture)
         : GemIndex.Bench.Independent.LoupeExaminer.DefaultLookShare;
+    int beyondAt = Array.IndexOf(args, "--beyond");
+    double beyondShare = beyondAt > 0 && beyondAt + 1 < args.Length
+        ? double.Parse(args[beyondAt + 1], System.Globalization.CultureInfo.InvariantCulture)
+        : GemIndex.Bench.Independent.IndependentStoneSimulator.BeyondRangeShare;
     string cache = Path.Combine(Path.GetTempPath(), "gemindex-bench-cache");
-    IndependentAccuracyRun.Run(ShippedCatalogue.Load(cache), stones, seed, Console.Out, args.Contains("--failures") ? Console.Error : null, lines, lookShare);
+    IndependentAccuracyRun.Run(ShippedCatalogue.Load(cache), stones, seed, Console.Out, args.Contains("--failures") ? Console.Error : null, lines, lookShare, beyondShare);
     return 0;
 }
 // profile [PASSES] [one-core]: CPU and wall time per stone of the IdentifyBench stones, one stone at a time (RankingProfile)

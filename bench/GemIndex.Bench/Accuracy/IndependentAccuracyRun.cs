@@ -23,7 +23,7 @@ internal static class IndependentAccuracyRun
     private const double Confident = 0.8;
 
     public static void Run(IReadOnlyList<Material> catalogue, int stones, int seed, TextWriter o, TextWriter? failures = null, TextWriter? lines = null,
-        double lookShare = LoupeExaminer.DefaultLookShare)
+        double lookShare = LoupeExaminer.DefaultLookShare, double beyondRangeShare = IndependentStoneSimulator.BeyondRangeShare)
     {
         var adapter = new BatchLineAdapter(catalogue);
         var table = PropertyTable.Species;
@@ -35,7 +35,7 @@ internal static class IndependentAccuracyRun
 
         var random = new Random(seed);
         // Magnification draws from a stream of its own, so the other readings of a seed are those drawn without it.
-        var simulator = new IndependentStoneSimulator(random, new LoupeExaminer(new Random(unchecked(seed * 7919 + 104729)), lookShare));
+        var simulator = new IndependentStoneSimulator(random, new LoupeExaminer(new Random(unchecked(seed * 7919 + 104729)), lookShare), beyondRangeShare);
         double[] weights = [.. usable.Select(s => s.BenchWeight)];
         var cases = new List<(SimulatedStone Stone, EngineAnswer Answer, IReadOnlyList<Material> Baseline, bool Separable, IReadOnlyList<string> Confusers)>();
         var stopwatch = Stopwatch.StartNew();

@@ -8,9 +8,12 @@ namespace GemIndex.Bench.Independent;
 /// Magnification comes from a <see cref="LoupeExaminer"/> with its own random stream, so the other readings of a seed
 /// do not depend on it. Nothing here reads the catalogue or the engine's likelihood tables.
 /// </summary>
-internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? loupe = null)
+internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? loupe = null, double beyondRangeShare = IndependentStoneSimulator.BeyondRangeShare)
 {
-    /// <summary>Share of stones drawn beyond the published ranges (index, SG or both): 7 %, inside the brief's 5–10 %.</summary>
+    /// <summary>
+    /// Share of stones drawn beyond the published ranges (index, SG or both): 7 %, inside the brief's 5–10 % (the
+    /// benchmark's <c>--beyond</c> option sets another share for a stress check).
+    /// </summary>
     public const double BeyondRangeShare = 0.07;
 
     /// <summary>A categorical reading (polariscope, pleochroism, probes, UV, dispersion word) is misread 3 % of the time.</summary>
@@ -44,7 +47,7 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
 
     public SimulatedStone Simulate(SpeciesProperties species, string id)
     {
-        bool beyond = random.NextDouble() < BeyondRangeShare;
+        bool beyond = random.NextDouble() < beyondRangeShare;
         int beyondWhat = beyond ? random.Next(3) : -1; // 0 index, 1 SG, 2 both
         double quantile = random.NextDouble();
         double drawn = Draw(species.Indices.Drawn, quantile, beyondWhat is 0 or 2, 0.01);
