@@ -35,7 +35,7 @@ internal static class IdentifyCommand
         ("--uv-long", BenchField.UvLong, BenchWords.Choices<Core.Observations.FluorescenceStrength>()),
         ("--uv-short", BenchField.UvShort, BenchWords.Choices<Core.Observations.FluorescenceStrength>()),
         ("--lines", BenchField.Absorption, "Absorption lines seen, nm, separated by spaces or commas (\"none\" if none)"),
-        ("--colour", BenchField.Colour, "A plain colour word"),
+        ("--colour", BenchField.Colour, "The colour in plain words, e.g. yellow, \"bluish green\" (the last hue named is the colour; an -ish word only tones it)"),
     ];
 
     public static Command Create(Option<DirectoryInfo?> catalogueDirectory)
