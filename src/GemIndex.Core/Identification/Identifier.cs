@@ -121,6 +121,44 @@ public sealed class Identifier
         return order;
     }
 
+    /// <summary>
+    /// The shown candidates, then grouped species first: the best entry of every species whose total reaches the list (at
+    /// least the share of the list's last entry), most probable species first, then the most probable entries. A species
+    /// with many varieties must not fill the list with entries the readings rule out while another species' likely entry
+    /// is left off, and a species whose mass is spread over many small entries must not be left off while a species of
+    /// one small entry is shown.
+    /// </summary>
+    private bool[] Shown(double[] posterior, int[] byEntry, int count)
+    {
+        var shown = new bool[posterior.Length];
+        if (count == 0) return shown;
+        double cut = posterior[byEntry[count - 1]];
+        var best = new int[_speciesCount];
+        Array.Fill(best, -1);
+        var totals = new double[_speciesCount];
+        var firstSeen = new List<int>();
+        foreach (int i in byEntry)
+        {
+            int k = _speciesOf[i];
+            totals[k] += posterior[i];
+            if (best[k] < 0) { best[k] = i; firstSeen.Add(k); }
+        }
+        // A stable sort: species of equal totals keep the order of their best entries.
+        int taken = 0;
+        foreach (int k in firstSeen.OrderByDescending(k => totals[k]))
+        {
+            if (taken == count || totals[k] < cut) break;
+            shown[best[k]] = true;
+            taken++;
+        }
+        foreach (int i in byEntry)
+        {
+            if (taken == count) break;
+            if (!shown[i]) { shown[i] = true; taken++; }
+        }
+        return shown;
+    }
+
     /// <summary>Moves mass to "not in the catalogue" when even the best-fitting serious candidate fits poorly (<see cref="PoorFit"/>).</summary>
     private static double DiscountPoorFit(double[] posterior, Func<int, double> fit, double other)
     {
@@ -327,10 +365,7 @@ public sealed class Identifier
 
         int[] byEntry = Ranked(posterior);
         int[] order = SpeciesFirst(posterior, byEntry);
-        // The shown candidates are the most probable entries, then grouped species first: a species with many varieties
-        // must not fill the list with entries the readings rule out while another species' likely entry is left off.
-        var shown = new bool[n];
-        for (int position = 0; position < Math.Min(maximumCandidates, n); position++) shown[byEntry[position]] = true;
+        var shown = Shown(posterior, byEntry, Math.Min(maximumCandidates, n));
         var candidates = new List<RankedCandidate>(Math.Min(maximumCandidates, n));
         foreach (int i in order)
         {

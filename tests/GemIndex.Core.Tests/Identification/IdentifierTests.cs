@@ -67,6 +67,24 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_species_whose_mass_is_spread_over_many_entries_is_shown_before_a_smaller_species_of_one_entry()
+    {
+        // Readings every entry fits alike: posteriors follow the priors (species weights 16, 8 and 4 of
+        // BenchFrequencyWeights; the very common species split over ten varieties of 1.6 each).
+        var glassLike = OpticalIndices.SingleIndex(new(1.50, 1.53), OpticCharacter.Amorphous);
+        Material[] catalogue =
+        [
+            .. Enumerable.Range(1, 10).Select(k => Make($"variety {k}", "many", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryCommon }),
+            Make("single", "one", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.Common },
+            Make("small", "small", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.Occasional },
+        ];
+        var result = new Identifier(catalogue).Identify(new BenchSheet { SpecificGravity = new(2.5, 0.01) }, maximumCandidates: 2);
+        Assert.Equal(["many", "one", "small"], result.Species.Select(s => s.Species).ToArray());
+        // The two entries with the largest shares are "single" and "small", yet the leading species must be shown.
+        Assert.Equal(["many", "one"], result.Candidates.Select(c => c.Material.Species).ToArray());
+    }
+
+    [Fact]
     public void A_corundum_series_reads_negative_and_names_corundum_and_warns_about_synthetics()
     {
         // Corundum ω 1.770, ε 1.762 (common practice); natural and synthetic cannot be separated by these tests.
