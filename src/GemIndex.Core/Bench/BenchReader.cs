@@ -149,8 +149,8 @@ public static class BenchReader
                 {
                     string limit = liquid.ToString("0.000", CultureInfo.InvariantCulture);
                     Error(field, BenchSyntax.Step(s), $"at most the liquid limit {limit}",
-                        $"edge reading {highest.ToString("0.####", CultureInfo.InvariantCulture)} is above the liquid limit {limit}: no stone edge can be seen above it"
-                        + (r.Text(BenchField.LiquidLimit) is null ? $" (if a denser liquid was used, give its index in {BenchField.LiquidLimit})." : "."));
+                        $"edge {highest.ToString("0.####", CultureInfo.InvariantCulture)} is above the liquid limit {limit}, where no edge can be seen"
+                        + (r.Text(BenchField.LiquidLimit) is null ? $" (a denser liquid? give its index in {BenchField.LiquidLimit})." : "."));
                     continue;
                 }
                 steps.Add(step);

@@ -97,7 +97,7 @@ internal static class IdentifyCommand
             var errors = shapeErrors.Concat(outcome.Reading.Errors).ToList();
             if (errors.Count > 0 || outcome.Result is not { } result)
             {
-                foreach (var e in errors) error.WriteLine($"gemindex: {OptionOf(e.Field)}: {e.Sentence}");
+                foreach (var e in errors) error.WriteLine($"gemindex: {OptionOf(e.Field)}: {InOptions(e.Sentence)}");
                 return ExitCodes.BadInput;
             }
             if (pr.GetValue(json)) output.WriteLine(ResultDocument.Line(result, explain: true));
@@ -105,6 +105,15 @@ internal static class IdentifyCommand
             return ExitCodes.Ok;
         }));
         return command;
+    }
+
+    /// <summary>A reason as the command line gives it: the fields it names ("refractometer.liquid_limit") by their options ("--liquid-limit").</summary>
+    private static string InOptions(string sentence)
+    {
+        // Only the dotted names: a plain one ("colour", "sg") is also an everyday word of the sentences.
+        foreach (var (option, field, _) in Values.Where(v => v.Field.Contains('.', StringComparison.Ordinal)).OrderByDescending(v => v.Field.Length))
+            sentence = sentence.Replace(field, option, StringComparison.Ordinal);
+        return sentence;
     }
 
     /// <summary>The option a field came from, for messages: refractometer.readings[0] → "--edge #1".</summary>

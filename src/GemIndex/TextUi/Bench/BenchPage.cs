@@ -59,6 +59,7 @@ internal class BenchPage : View
         var f = new FormField(field, label, LabelWidth, editWidth, hint) { Y = NextRow() };
         Fields.Add(f);
         _inOrder.Add(f);
+        f.Edit.HasFocusChanged += (_, _) => WrapProblems();
         Add(f);
         return f;
     }
@@ -92,31 +93,38 @@ internal class BenchPage : View
     /// <summary>Marks each field with its error and lists the reasons at the bottom, each after its field's caption.</summary>
     public virtual void ShowErrors(IReadOnlyDictionary<string, string> errors)
     {
-        var mine = new List<string>();
+        var mine = new List<(string Key, string Text)>();
         foreach (FormField f in Fields)
         {
             string? reason = errors.GetValueOrDefault(f.Field);
             f.ShowError(reason);
-            if (reason is not null) mine.Add($"{f.Label}: {InCaptions(reason)}");
+            if (reason is not null) mine.Add((f.Field, $"{f.Label}: {InCaptions(reason)}"));
         }
         mine.AddRange(OwnErrors(errors));
-        _problemLines = [.. mine.Select(m => "! " + m)];
+        _problemLines = [.. mine.Select(m => (m.Key, "! " + m.Text))];
         WrapProblems();
     }
 
-    private IReadOnlyList<string> _problemLines = [];
+    private IReadOnlyList<(string Key, string Line)> _problemLines = [];
 
     /// <summary>Said on the last row when the reasons need more rows than the page has for them.</summary>
-    public const string MoreProblems = "! more: see the fields marked '!'";
+    public const string MoreProblems = "! more: move to a '!' to read it";
+
+    /// <summary>The error key of the field or step under the cursor (its reason is shown first), or null.</summary>
+    protected virtual string? FocusedProblemKey => Fields.FirstOrDefault(f => f.Edit.HasFocus)?.Field;
 
     /// <summary>
-    /// The reasons word-wrapped to the page's width, each continuation indented under its "!"; only whole reasons, and
-    /// when they need more rows than the page has, as many as fit with a last row saying there are more.
+    /// The reasons word-wrapped to the page's width, each continuation indented under its "!": the reason of the field or
+    /// step under the cursor first, so that every marked entry's reason can be read by moving to it; then the others in
+    /// order, only whole ones, and when they need more rows than the page has, as many as fit with a last row saying there
+    /// are more.
     /// </summary>
-    private void WrapProblems()
+    protected void WrapProblems()
     {
         int width = Math.Max(20, Viewport.Width);
-        List<List<string>> reasons = [.. _problemLines.Select(p => Main.TextWrap.Lines([p], width).ToList())];
+        string? focused = FocusedProblemKey;
+        var ordered = _problemLines.Where(p => p.Key == focused).Concat(_problemLines.Where(p => p.Key != focused));
+        List<List<string>> reasons = [.. ordered.Select(p => Main.TextWrap.Lines([p.Line], width).ToList())];
         List<string> lines = [.. reasons.SelectMany(r => r)];
         if (lines.Count > _problemRows)
         {
@@ -126,7 +134,16 @@ internal class BenchPage : View
                 if (lines.Count + reason.Count > _problemRows - 1) break;
                 lines.AddRange(reason);
             }
-            lines.Add(MoreProblems);
+            // The first reason is always given: whole when the page's rows hold it (the other entries keep their '!'),
+            // else as much as they hold.
+            if (lines.Count == 0 && reasons[0].Count <= _problemRows) lines.AddRange(reasons[0]);
+            else if (lines.Count == 0)
+            {
+                lines.AddRange(reasons[0].Take(_problemRows - 1));
+                lines[^1] = lines[^1].TrimEnd() + "…";
+                lines.Add(MoreProblems);
+            }
+            else lines.Add(MoreProblems);
         }
         _problems.Text = string.Join('\n', lines);
     }
@@ -138,5 +155,6 @@ internal class BenchPage : View
         return reason;
     }
 
-    protected virtual IEnumerable<string> OwnErrors(IReadOnlyDictionary<string, string> errors) => [];
+    /// <summary>The page's own reasons beside its fields' (the refractometer's steps), each with its error key.</summary>
+    protected virtual IEnumerable<(string Key, string Text)> OwnErrors(IReadOnlyDictionary<string, string> errors) => [];
 }

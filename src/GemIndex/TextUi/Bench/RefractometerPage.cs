@@ -23,7 +23,7 @@ internal sealed class RefractometerPage : BenchPage
     /// <summary>The step being typed (before Enter), kept in the form so that its draft survives a closed terminal.</summary>
     public const string TypingRotation = "refractometer.typing.rotation", TypingLow = "refractometer.typing.low", TypingHigh = "refractometer.typing.high";
 
-    public RefractometerPage() : base("Refractometer", "Enter stores the step")
+    public RefractometerPage() : base("Refractometer", "Enter stores the step", problemRows: 5)
     {
         NextRow();
         Add(new PlainLabel { Y = 0, Text = "Rotation  Low edge  High edge" });
@@ -34,6 +34,8 @@ internal sealed class RefractometerPage : BenchPage
         Grid = new ListView { X = 0, Y = NextRow(GridRows), Width = Dim.Fill(), Height = GridRows };
         Grid.SetSource(_rows);
         Add(Rotation, Low, High, Editing, Grid);
+        Grid.HasFocusChanged += (_, _) => WrapProblems();
+        Grid.ValueChanged += (_, _) => WrapProblems();
         AddField(BenchFields.Spot, "Spot reading", 8, "curved stones");
         AddChoice(BenchFields.OverLimit);
         StepField = AddField(RotationStepField, "Rotation step", 8, "°, default 15");
@@ -103,8 +105,12 @@ internal sealed class RefractometerPage : BenchPage
         if (selected is { } s) Grid.SelectedItem = Math.Min(s, _rows.Count - 1);
     }
 
-    protected override IEnumerable<string> OwnErrors(IReadOnlyDictionary<string, string> errors) =>
+    protected override IEnumerable<(string Key, string Text)> OwnErrors(IReadOnlyDictionary<string, string> errors) =>
         errors.Where(p => p.Key.StartsWith("refractometer.readings[", StringComparison.Ordinal))
-            .Select(p => $"step {int.Parse(p.Key[23..p.Key.IndexOf(']')], System.Globalization.CultureInfo.InvariantCulture) + 1}: {p.Value}")
-            .Concat(errors.Where(p => p.Key == BenchFields.OverLimit).Select(p => p.Value));
+            .Select(p => (p.Key, $"step {int.Parse(p.Key[23..p.Key.IndexOf(']')], System.Globalization.CultureInfo.InvariantCulture) + 1}: {InCaptions(p.Value)}"))
+            .Concat(errors.Where(p => p.Key == BenchFields.OverLimit).Select(p => (p.Key, p.Value)));
+
+    /// <summary>The step selected in the list, while the list has the cursor; else the field under it.</summary>
+    protected override string? FocusedProblemKey =>
+        Grid.HasFocus && Grid.SelectedItem is { } i && i < _stepCount ? BenchFields.Step(i) : base.FocusedProblemKey;
 }

@@ -275,7 +275,7 @@ internal sealed class MainWindow : Window
         Refractometer.ShowSteps(_session.Form.Steps, a.Errors);
         // Inline and whole (no pop-up that would take the keys being typed): wrapped to the page's width.
         Gravity.Show(GravityText.Describe(_session.Form.Snapshot(), a.SpecificGravity), _session.Results.ImmersionCaution ?? "");
-        Results.Refresh();
+        Results.ShowNewAnswer();
         ShowBars();
     }
 

@@ -69,6 +69,8 @@ internal sealed class ResultsModel
             return rows;
         }
         Text(ResultText.Lead(r));
+        // A refused entry is left out of the answer: said at its top, so an answer is never read as using it.
+        if (a.Errors.Count > 0) Text([RefusedLine(a.Errors.Count)]);
         if (TopWarning(r) is { } top) Text(["! " + Short(top)]);
         rows.Add(new AnswerRow(""));
         rows.Add(new AnswerRow(CandidatesHeading));
@@ -90,6 +92,10 @@ internal sealed class ResultsModel
         if (r.Warnings.Count > 0) { rows.Add(new AnswerRow("")); Text(["Warnings", .. r.Warnings.Select(x => "! " + Sentence(x))]); }
         return rows;
     }
+
+    /// <summary>The answer's line for entries refused and left out of it.</summary>
+    public static string RefusedLine(int count) =>
+        count == 1 ? "! 1 entry refused and not used: see the entry marked '!'." : $"! {count} entries refused and not used: see the entries marked '!'.";
 
     /// <summary>The words of the engine's warning that a species' origins cannot be told apart (the lead says it in its own words).</summary>
     public const string CannotBeSeparated = "cannot be separated by these tests";

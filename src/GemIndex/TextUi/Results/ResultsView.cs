@@ -71,6 +71,19 @@ internal sealed class ResultsView : FrameView
         finally { _moving = false; }
     }
 
+    /// <summary>
+    /// A new answer (the readings changed): shown from its top, the species headline and any "no good match" first; the
+    /// place in the old answer means nothing in the new one.
+    /// </summary>
+    public void ShowNewAnswer()
+    {
+        Refresh();
+        if (_rows.Count == 0) return;
+        List.SelectedItem = 0;
+        List.Viewport = List.Viewport with { Y = 0 };
+    }
+
+    /// <summary>The same answer again (another width, the catalogue's state): the selected candidate kept.</summary>
     public void Refresh()
     {
         int? candidate = CandidateAt(List.SelectedItem);

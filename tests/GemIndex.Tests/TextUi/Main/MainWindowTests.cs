@@ -405,10 +405,79 @@ public sealed class MainWindowTests : IDisposable
         Assert.True(errors.Count >= 2);
         foreach (string reason in errors.Values)
         {
-            string words = System.Text.RegularExpressions.Regex.Replace(reason, @"\s+", " ");
+            string words = System.Text.RegularExpressions.Regex.Replace(window.Refractometer.InCaptions(reason), @"\s+", " ");
             Assert.True(page.Contains(words, StringComparison.Ordinal) || !page.Contains(words[..Math.Min(12, words.Length)], StringComparison.Ordinal), $"cut short: {words}\n{page}");
         }
-        Assert.Contains(BenchPage.MoreProblems, page);             // two long reasons: the second does not fit whole, and the page says so
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Fact]
+    public void The_reason_of_the_step_under_the_cursor_is_shown_first_so_every_marked_entry_can_be_read()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        foreach ((string low, string high) in new[] { ("1.7x2", "1.718"), ("1.95", "2.0"), ("1.96", "2.1"), ("1.544", "1.553") })
+        {
+            Type(app, low);
+            app.InjectKey(Key.Tab);
+            Type(app, high);
+            app.InjectKey(Key.Enter);
+        }
+        Settle();
+        app.LayoutAndDraw();
+        Assert.Contains("! step 1:", FormText(app.Driver!.ToString()!));
+        Assert.DoesNotContain("! step 3:", FormText(app.Driver!.ToString()!));   // three reasons do not fit: the first are shown
+        app.InjectKey(Key.Tab);            // the high edge
+        app.InjectKey(Key.Tab);            // the list of steps
+        app.InjectKey(Key.Home);
+        app.InjectKey(Key.CursorDown);
+        app.InjectKey(Key.CursorDown);     // step 3
+        app.LayoutAndDraw();
+        string page = FormText(app.Driver!.ToString()!);
+        Assert.Contains("! step 3: edge 2.1 is above the liquid limit 1.790, where no edge can be seen (a denser liquid? give its index in Liquid limit).", page);
+        Assert.Contains(BenchPage.MoreProblems, page);
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Fact]
+    public void A_new_answer_is_shown_from_its_top_even_after_the_old_one_was_scrolled()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F4);
+        Type(app, "3.99");
+        Settle();
+        app.LayoutAndDraw();
+        app.InjectKey(Key.F10);
+        for (int i = 0; i < 3; i++) { app.InjectKey(Key.PageDown); app.LayoutAndDraw(); }
+        Assert.True(window.Results.List.SelectedItem > 0);   // the place in the old answer moved down
+        app.InjectKey(Key.F4);
+        app.InjectKey(Key.Backspace);
+        Type(app, "1.50");                                          // another SG: a new answer (nothing fits)
+        Settle();
+        app.LayoutAndDraw();
+        Assert.Equal(0, window.Results.List.Viewport.Y);
+        Assert.Equal(0, window.Results.List.SelectedItem);
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Fact]
+    public void A_refused_entry_is_said_at_the_top_of_the_answer()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F4);
+        Type(app, "3.99");
+        for (int i = 0; i < 4; i++) app.InjectKey(Key.Tab);   // the heavy liquids
+        Type(app, "3,32 floats");
+        Settle();
+        app.LayoutAndDraw();
+        string answer = System.Text.RegularExpressions.Regex.Replace(string.Join(" ", window.Results.Rows.Select(r => r.Text)), @"\s+", " ");
+        Assert.Contains(GemIndex.Cli.TextUi.Results.ResultsModel.RefusedLine(1), answer);
         window.Dispose();
         app.End(token);
         app.Dispose();
