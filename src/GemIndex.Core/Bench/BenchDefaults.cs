@@ -52,6 +52,12 @@ public static class BenchDefaults
     /// <summary>Candidates shown by default.</summary>
     public const int Candidates = 10;
 
+    /// <summary>
+    /// Candidates whose reasons the command line, the batch and the result document give: the leading three (the text
+    /// UI works out every listed candidate's reasons, since any can be opened).
+    /// </summary>
+    public const int ExplainedCandidates = 3;
+
     /// <summary>The most candidates any front end shows (the range every option's help states).</summary>
     public const int MostCandidates = 50;
 

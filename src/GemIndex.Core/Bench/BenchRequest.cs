@@ -7,7 +7,7 @@ public sealed record BenchRequest
     public int Candidates { get; init; } = BenchDefaults.Candidates;
 
     /// <summary>For how many leading candidates to write the reasons.</summary>
-    public int ExplainTop { get; init; } = 3;
+    public int ExplainTop { get; init; } = BenchDefaults.ExplainedCandidates;
 
     /// <summary>Whether to work out the next test.</summary>
     public bool AdviseNextTest { get; init; } = true;

@@ -59,7 +59,7 @@ internal static class ResultDocument
                 w.WriteString("origin", BenchWords.Word(c.Material.Origin));
                 w.WriteNumber("confidence", Probability(c.Confidence));
                 w.WriteNumber("fit", Math.Round(c.Fit, 4));
-                if (explain && c.Reasons.Count > 0)
+                if (explain && c.Reasons.Count > 0 && rank <= BenchDefaults.ExplainedCandidates)
                 {
                     w.WriteStartArray("why");
                     foreach (var r in c.Reasons)

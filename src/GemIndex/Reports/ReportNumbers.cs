@@ -30,8 +30,17 @@ internal static class ReportNumbers
     public static string WithUncertainty(double value, double standardUncertainty, string format) =>
         $"{Fixed(value, format)} ± {Fixed(standardUncertainty, format)}";
 
-    /// <summary>A probability (0–1) as a percentage, the one percent format of text, Markdown and HTML: 87.3 %.</summary>
-    public static string Percent(double probability) => Fixed(probability * 100, "0.0") + " %";
+    /// <summary>
+    /// A probability (0–1) as a percentage, the one percent format of text, Markdown and HTML: 87.3 %. Bench readings
+    /// never make a material certain or impossible, so a probability short of 1 or above 0 that would round to 100.0 %
+    /// or 0.0 % is given as ">99.9 %" or "<0.1 %".
+    /// </summary>
+    public static string Percent(double probability) => probability switch
+    {
+        > 0 and < 0.0005 => "<0.1 %",
+        >= 0.9995 and < 1 => ">99.9 %",
+        _ => Fixed(probability * 100, "0.0") + " %",
+    };
 
     /// <summary>A probability in whole percent, for narrow screens: 93%.</summary>
     public static string WholePercent(double probability) => Fixed(probability * 100, "0") + "%";

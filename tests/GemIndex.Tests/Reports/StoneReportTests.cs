@@ -19,6 +19,18 @@ public class StoneReportTests
     public static TheoryData<string> Formats => new() { "markdown", "html", "json" };
 
     [Theory]
+    // Bench readings never make a material certain or impossible: no probability short of 1 (above 0) reads 100 % (0 %).
+    [InlineData(0.9996, ">99.9 %")]
+    [InlineData(0.9994, "99.9 %")]
+    [InlineData(0.0004, "<0.1 %")]
+    [InlineData(0.0006, "0.1 %")]
+    [InlineData(0.5, "50.0 %")]
+    [InlineData(1.0, "100.0 %")]
+    [InlineData(0.0, "0.0 %")]
+    public void A_percentage_never_rounds_to_certain_or_impossible(double probability, string expected) =>
+        Assert.Equal(expected, ReportNumbers.Percent(probability));
+
+    [Theory]
     [MemberData(nameof(Formats))]
     public void Every_format_carries_the_reference_candidates_confidence_and_cautions(string format)
     {
@@ -29,7 +41,7 @@ public class StoneReportTests
         string confidence = format == "json"
             ? GemIndex.Cli.Identification.ResultDocument.Probability(report.Candidates[0].Confidence).ToString("R", System.Globalization.CultureInfo.InvariantCulture)
             : ReportNumbers.Percent(report.Candidates[0].Confidence);
-        Assert.Contains(confidence, text);
+        Assert.Contains(format == "html" ? HtmlReport.E(confidence) : confidence, text);
         foreach (string caution in ReportCautions.All) Assert.Contains(format == "html" ? HtmlReport.E(caution) : caution, text);
         Assert.Contains("1.553", text); // a high edge of the rotation series
         Assert.Contains(format == "json" ? "weight_carats" : "2.65 ct", text);

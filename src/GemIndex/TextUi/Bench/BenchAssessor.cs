@@ -15,8 +15,11 @@ internal sealed class BenchAssessor(Identifier? identifier)
     /// <summary>Candidates at or above this confidence count as "among the top ones" for the immersion caution.</summary>
     public const double ImmersionCautionConfidence = 0.05;
 
-    /// <summary>What the text UI asks for: the bad fields are shown at their places and the rest is ranked.</summary>
-    public static readonly BenchRequest Request = new() { RankDespiteErrors = true };
+    /// <summary>
+    /// What the text UI asks for: the bad fields are shown at their places and the rest is ranked; every listed
+    /// candidate can be opened, so every one has its reasons.
+    /// </summary>
+    public static readonly BenchRequest Request = new() { RankDespiteErrors = true, ExplainTop = BenchDefaults.Candidates };
 
     /// <summary>False when built without a catalogue (nothing is ranked then).</summary>
     public bool HasCatalogue => identifier is not null;

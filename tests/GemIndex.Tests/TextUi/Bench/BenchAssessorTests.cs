@@ -32,6 +32,14 @@ public class BenchAssessorTests
     }
 
     [Fact]
+    public void Every_listed_candidate_has_its_reasons_since_any_can_be_opened()
+    {
+        BenchAssessment a = Assessor.Assess(QuartzForm().Snapshot());
+        Assert.True(a.Result!.Candidates.Count > 3);
+        Assert.All(a.Result.Candidates, c => Assert.NotEmpty(c.Reasons));
+    }
+
+    [Fact]
     public void A_step_that_does_not_parse_is_marked_at_its_row_and_the_rest_still_ranks()
     {
         BenchModel form = QuartzForm();
