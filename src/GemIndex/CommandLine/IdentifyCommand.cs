@@ -113,7 +113,7 @@ internal static class IdentifyCommand
         // Only the dotted names: a plain one ("colour", "sg") is also an everyday word of the sentences.
         foreach (var (option, field, _) in Values.Where(v => v.Field.Contains('.', StringComparison.Ordinal)).OrderByDescending(v => v.Field.Length))
             sentence = sentence.Replace(field, option, StringComparison.Ordinal);
-        return sentence;
+        return System.Text.RegularExpressions.Regex.Replace(sentence, System.Text.RegularExpressions.Regex.Escape(BenchField.Readings) + @"\[\d+\]", m => OptionOf(m.Value));
     }
 
     /// <summary>The option a field came from, for messages: refractometer.readings[0] → "--edge #1".</summary>

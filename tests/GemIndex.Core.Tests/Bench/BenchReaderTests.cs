@@ -100,6 +100,17 @@ public class BenchReaderTests
     }
 
     [Fact]
+    public void Over_the_limit_with_only_a_low_edge_read_is_a_contradiction_too()
+    {
+        // "Over the limit" is no edge at all; a high edge hidden above the liquid is left out of its step instead.
+        var reading = BenchReader.Read(Steps(R((BenchField.OverLimit, "yes")), "0:1.72"));
+        BenchFieldError e = Assert.Single(reading.Errors);
+        Assert.Equal(BenchField.OverLimit, e.Field);
+        Assert.Contains(BenchField.Step(0), e.Sentence);
+        Assert.Empty(BenchReader.Read(Steps(R(), "0:1.72")).Errors);
+    }
+
+    [Fact]
     public void More_steps_than_the_analysis_reads_is_one_error_not_a_crash()
     {
         var r = new BenchReadings();
