@@ -36,7 +36,7 @@ internal static class IdentificationText
         {
             string bar = new('#', (int)Math.Round(c.Confidence * 20));
             o.WriteLine($"{i + 1,2}. {c.Material.Name,-36} {ReportNumbers.Percent(c.Confidence),7} {bar,-20} fit {ReportNumbers.Fixed(c.Fit, "0.00")}  ({c.Material.Species}, {BenchWords.Word(c.Material.Origin)})");
-            foreach (var r in c.Reasons) o.WriteLine($"      {(r.Agrees ? "+" : "-")} {r.Text}");
+            foreach (var r in c.Reasons) o.WriteLine($"      {GemIndex.Cli.Reports.ReportDerived.Verdict(r)}: {r.Text}");
         }
         o.WriteLine($"Not in the catalogue: {ReportNumbers.Percent(result.NotInCatalogue)}");
         if (result.NextTest is { } next)

@@ -49,6 +49,12 @@ internal static class ReportDerived
         return how + (reason.WeightBits >= 0 ? "for" : "against");
     }
 
+    /// <summary>
+    /// The one verdict on a reason that every front end gives: how strongly it speaks for or against the candidate, and
+    /// "unusual" when the reading lies well outside the candidate's range or is a reaction it rarely shows.
+    /// </summary>
+    public static string Verdict(EvidenceContribution reason) => Strength(reason) + (reason.Agrees ? "" : ", unusual");
+
     /// <summary>Ten to one in favour or against (log2 10): "strongly".</summary>
     private const double StrongBits = 3.32;
 
@@ -57,7 +63,7 @@ internal static class ReportDerived
 
     /// <summary>A reason in a line: "strongly for (refractometer): …".</summary>
     public static string ReasonLine(EvidenceContribution reason) =>
-        $"{Strength(reason)} ({BenchTestWords.DisplayOfWire(reason.Test)}): {reason.Text}";
+        $"{Verdict(reason)} ({BenchTestWords.DisplayOfWire(reason.Test)}): {reason.Text}";
 
     /// <summary>The answer by species, best first: "Corundum 93.0 % — natural 41.0 %, synthetic 48.0 %".</summary>
     public static IReadOnlyList<string> SpeciesLines(StoneReport report) =>

@@ -82,7 +82,7 @@ internal static class ResultText
 
     /// <summary>The origins that hold a relevant share of a species (the same threshold as the engine's warnings), largest first.</summary>
     public static List<KeyValuePair<OriginClass, double>> Origins(SpeciesResult s) =>
-        [.. s.Origins.Where(o => o.Value >= BenchWarnings.Relevant).OrderByDescending(o => o.Value)];
+        [.. s.Origins.Where(o => o.Value >= BenchWarnings.OriginShare * s.Confidence).OrderByDescending(o => o.Value)];
 
     /// <summary>
     /// "These tests cannot separate natural and synthetic quartz: …", with what may help. The engine's own warning comes
