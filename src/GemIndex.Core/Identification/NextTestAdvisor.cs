@@ -366,7 +366,7 @@ public static class NextTestAdvisor
             ? "over the limit"
             : string.Join(", ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString("0.000")}")),
         BenchField.Polariscope => string.Join(" or ", EvidenceLikelihood.UsualReactions(m).Select(EvidenceLikelihood.Word)),
-        BenchField.Pleochroism => m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial ? $"{EvidenceLikelihood.Word(m.Pleochroism)} pleochroism" : "none",
+        BenchField.Pleochroism => m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial && m.Pleochroism != PleochroismStrength.None ? $"{EvidenceLikelihood.Word(m.Pleochroism)} pleochroism" : "no pleochroism",
         BenchField.Dispersion => m.Dispersion is { } d ? $"nG − nB {d.ToString("0.000", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(EvidenceLikelihood.DispersionBand(d))})" : "not known",
         BenchField.ThermalProbe => EvidenceLikelihood.Word(m.ThermalProbe),
         BenchField.Electrical => EvidenceLikelihood.Word(m.Electrical),

@@ -43,9 +43,15 @@ internal sealed class ReadingScale(string title, string format, double value, do
     /// </summary>
     public const double Noise = 1e-9;
 
+    /// <summary>
+    /// The value as the scale prints it (rounded to the format's decimals): the verdict is on the number the user reads,
+    /// so a reading shown as 0.009 is "in" a range 0.009–0.009 (a fitted birefringence of 0.0092 was called "near").
+    /// </summary>
+    private double Shown => Math.Round(value, format.Contains('.') ? format.Length - format.IndexOf('.') - 1 : 0, MidpointRounding.AwayFromZero);
+
     /// <summary>In, near or out (see the constants); "-" when the candidate has no range for this quantity.</summary>
     public string Verdict(PropertyRange? range) => range is not { } r ? "-"
-        : value >= r.Minimum - Noise && value <= r.Maximum + Noise ? In
+        : Shown >= r.Minimum - Noise && Shown <= r.Maximum + Noise ? In
         : value + 2 * uncertainty >= r.Minimum && value - 2 * uncertainty <= r.Maximum ? Near
         : Out;
 

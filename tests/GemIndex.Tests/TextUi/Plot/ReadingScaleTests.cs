@@ -50,6 +50,18 @@ public class ReadingScaleTests
     }
 
     [Theory]
+    // The verdict is on the number shown: a fitted 0.0092 prints as 0.009 and is in quartz's 0.009 (common practice);
+    // 0.0096 prints as 0.010 and lies just outside.
+    [InlineData(0.0092, ReadingScale.In)]
+    [InlineData(0.0096, ReadingScale.Near)]
+    [InlineData(0.0130, ReadingScale.Out)]
+    public void The_verdict_is_on_the_value_as_printed(double birefringence, string expected)
+    {
+        var scale = new ReadingScale("birefringence", "0.000", birefringence, 0.001, ScaleModel.WidestBirefringence, [("quartz", new PropertyRange(0.009, 0.009))]);
+        Assert.Equal(expected, scale.Verdict(new PropertyRange(0.009, 0.009)));
+    }
+
+    [Theory]
     [InlineData(76)]
     [InlineData(96)]
     [InlineData(40)]
