@@ -23,6 +23,9 @@ internal sealed class RefractometerPage : BenchPage
     /// <summary>The step being typed (before Enter), kept in the form so that its draft survives a closed terminal.</summary>
     public const string TypingRotation = "refractometer.typing.rotation", TypingLow = "refractometer.typing.low", TypingHigh = "refractometer.typing.high";
 
+    /// <summary>The step being edited (1-based; empty for a new step), kept with the draft so that an edit survives a closed terminal.</summary>
+    public const string TypingStep = "refractometer.typing.step";
+
     public RefractometerPage() : base("Refractometer", "Enter stores the step", problemRows: 5)
     {
         NextRow();

@@ -222,6 +222,7 @@ internal sealed class MainWindow : Window
         {
             if (step.Low.Length == 0) return;
             _session.Form.PutStep(index ?? _session.Form.Steps.Count, step);
+            _session.Form.SetText(RefractometerPage.TypingStep, "");
             _session.Changed();
             rf.ShowSteps(_session.Form.Steps, _session.Results.Latest?.Errors ?? new Dictionary<string, string>());
             rf.BeginStep(null, null, _session.Form.NextRotation());
@@ -233,8 +234,23 @@ internal sealed class MainWindow : Window
                 _session.Form.SetText(typingKey, box.Text);
                 _session.Changed();
             };
-        rf.EditRequested += i => rf.BeginStep(i, _session.Form.Steps[i], _session.Form.NextRotation());
-        rf.RemoveRequested += i => { _session.Form.RemoveStep(i); _session.Changed(); rf.ShowSteps(_session.Form.Steps, new Dictionary<string, string>()); };
+        rf.EditRequested += i =>
+        {
+            _session.Form.SetText(RefractometerPage.TypingStep, (i + 1).ToString(System.Globalization.CultureInfo.InvariantCulture));
+            rf.BeginStep(i, _session.Form.Steps[i], _session.Form.NextRotation());
+        };
+        rf.RemoveRequested += i =>
+        {
+            _session.Form.RemoveStep(i);
+            // The numbers of the steps after it move: an edit under way goes on as a new step rather than into another one.
+            if (_session.Form.Text(RefractometerPage.TypingStep).Length > 0)
+            {
+                _session.Form.SetText(RefractometerPage.TypingStep, "");
+                rf.BeginStep(null, new StepText(rf.Rotation.Text, rf.Low.Text, rf.High.Text), _session.Form.NextRotation());
+            }
+            _session.Changed();
+            rf.ShowSteps(_session.Form.Steps, new Dictionary<string, string>());
+        };
         foreach (ChoiceField c in Pages.SelectMany(p => p.Choices)) c.HasFocusChanged += (_, _) => ShowBars();
         Results.List.HasFocusChanged += (_, _) => ShowBars();
     }
@@ -256,8 +272,11 @@ internal sealed class MainWindow : Window
             }
             Loupe.Load(_session.Form.Text(BenchFields.FeaturesPresent), _session.Form.Text(BenchFields.FeaturesAbsent));
             Refractometer.ShowSteps(_session.Form.Steps, new Dictionary<string, string>());
-            Refractometer.BeginStep(null, null, _session.Form.NextRotation());
-            // A step typed but not stored (a closed terminal, another stone opened meanwhile) comes back on the edit line.
+            // A step typed but not stored (a closed terminal, another stone opened meanwhile) comes back on the edit line,
+            // and an edit of a stored step comes back as that edit.
+            int? editing = int.TryParse(_session.Form.Text(RefractometerPage.TypingStep), System.Globalization.NumberStyles.None,
+                System.Globalization.CultureInfo.InvariantCulture, out int number) && number >= 1 && number <= _session.Form.Steps.Count ? number - 1 : null;
+            Refractometer.BeginStep(editing, editing is { } e ? _session.Form.Steps[e] : null, _session.Form.NextRotation());
             foreach ((TextField box, string typingKey) in Refractometer.TypingBoxes)
                 if (_session.Form.Text(typingKey) is { Length: > 0 } typed) box.Text = typed;
         }

@@ -540,6 +540,38 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void An_edit_of_a_stored_step_interrupted_by_a_closed_terminal_comes_back_as_that_edit()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        foreach ((string low, string high) in new[] { ("1.616", "1.621"), ("1.617", "1.622") })
+        {
+            Type(app, low);
+            app.InjectKey(Key.Tab);
+            Type(app, high);
+            app.InjectKey(Key.Enter);
+        }
+        app.InjectKey(Key.Tab);
+        app.InjectKey(Key.Tab);            // the list of steps
+        app.InjectKey(Key.Home);
+        app.InjectKey(Key.Enter);          // edit step 1
+        window.Refractometer.Low.Text = "1.618";
+        Settle();
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+
+        var (again, reopened) = Restart();
+        using var _ = reopened;
+        Assert.Equal("1.618", reopened.Refractometer.Low.Text);
+        Assert.StartsWith("editing step 1", reopened.Refractometer.Editing.Text);
+        reopened.Refractometer.Low.NewKeyDownEvent(Key.Enter);   // stores the edit into step 1, not as a third step
+        Assert.Equal(2, again.Form.Steps.Count);
+        Assert.Equal("1.618", again.Form.Steps[0].Low);
+        Assert.True(again.Flush());
+    }
+
+    [Fact]
     public void Ctrl_L_opens_the_loupe_on_its_first_feature_and_its_marks_are_saved_as_the_two_fields()
     {
         var (app, window, token) = Open();
