@@ -164,12 +164,20 @@ public static class BenchReader
         {
             string? direct = r.Text(BenchField.Sg), air = r.Text(BenchField.AirCt), water = r.Text(BenchField.WaterCt), celsius = r.Text(BenchField.WaterC);
             bool weighed = air is not null || water is not null;
+            // A typed SG that is itself refused (not a number, out of range) is named with its own reason, and the
+            // weighing stands on its own: the typed value cannot be meant, and nothing typed is lost.
+            bool typedRefused = false;
             if (direct is not null && weighed)
+            {
+                int before = _errors.Count;
+                SpecificGravity? typed = Number(BenchField.Sg) is { } s ? Checked(BenchField.Sg, direct, () => new SpecificGravity(s, BenchDefaults.DirectSpecificGravityUncertainty)) : null;
+                typedRefused = typed is null && _errors.Count > before;
+            }
+            if (direct is not null && weighed && !typedRefused)
             {
                 Error(BenchField.Sg, direct, "SG typed, or weights in air and water, not both",
                     $"is given directly ({BenchText.Shown(direct)}) and by weighing ({BenchField.AirCt}, {BenchField.WaterCt}); give one of them.");
                 // Each value's own fault is still named, so that one pass shows everything to mend.
-                if (Number(BenchField.Sg) is { } s) Checked(BenchField.Sg, direct, () => new SpecificGravity(s, BenchDefaults.DirectSpecificGravityUncertainty));
                 foreach (string field in new[] { BenchField.AirCt, BenchField.WaterCt })
                     if (Number(field) is { } ct) Checked(field, r.Text(field)!, () => BenchDefaults.Weighed(ct));
                 if (Number(BenchField.WaterC) is { } c) Checked(BenchField.WaterC, celsius!, () => WaterDensity.At(Temperature.FromCelsius(c)).Temperature);
@@ -177,7 +185,7 @@ public static class BenchReader
             }
             if (celsius is not null && !weighed && Number(BenchField.WaterC) is not null)
                 Error(BenchField.WaterC, celsius, "a temperature only with a hydrostatic weighing", "is given, but there is no hydrostatic weighing to apply it to.");
-            if (direct is not null)
+            if (direct is not null && !typedRefused)
                 return Number(BenchField.Sg) is { } sg ? Checked(BenchField.Sg, direct, () => new SpecificGravity(sg, BenchDefaults.DirectSpecificGravityUncertainty)) : null;
             if (!weighed) return null;
             if (air is null) Error(BenchField.AirCt, "", "a weight in carats", "is missing: a hydrostatic weighing needs the weight in air as well as in water.");

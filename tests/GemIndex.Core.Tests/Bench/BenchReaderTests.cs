@@ -70,6 +70,20 @@ public class BenchReaderTests
         Assert.Null(reading.Sheet.SpecificGravity);
     }
 
+    [Theory]
+    [InlineData("-2.7", "allowed: 0.5")]
+    [InlineData("2.7x", "not a number")]
+    public void A_typed_SG_that_is_itself_refused_gets_its_own_reason_and_the_weighing_stands(string typed, string reason)
+    {
+        var reading = BenchReader.Read(R((BenchField.Sg, typed), (BenchField.AirCt, "3.12"), (BenchField.WaterCt, "1.943")));
+        BenchFieldError e = Assert.Single(reading.Errors);
+        Assert.Equal(BenchField.Sg, e.Field);
+        Assert.DoesNotContain("by weighing", e.Sentence);
+        Assert.Contains(reason, e.Allowed + " " + e.Sentence);
+        // 3.12 / (3.12 − 1.943) at 20 °C: 2.65 (the hydrostatic relation; common practice).
+        Assert.Equal(2.65, reading.Sheet.SpecificGravity!.Value.Value, 2);
+    }
+
     [Fact]
     public void A_weight_in_air_without_the_weight_in_water_is_refused()
     {

@@ -24,7 +24,9 @@ internal static class GravityText
     public static string Describe(BenchSnapshot form, SpecificGravity? used)
     {
         string typedText = form.Text(BenchFields.Sg).Trim();
-        if (used is { } sg) return ResultText.Gravity(sg) + (typedText.Length > 0 ? " as typed" : " from the weights");
+        bool typedRefused = typedText.Length > 0 && BenchReader.Read(new BenchReadings().With(BenchField.Sg, typedText)).Errors.Count > 0;
+        if (used is { } sg)
+            return ResultText.Gravity(sg) + (typedText.Length == 0 ? " from the weights" : typedRefused ? " from the weights (the SG typed is refused)" : " as typed");
         bool weighing = new[] { BenchFields.AirCt, BenchFields.WaterCt }.Any(f => form.Text(f).Trim().Length > 0);
         if (typedText.Length == 0 || !weighing) return None;
         SpecificGravity? typed = BenchReader.Read(new BenchReadings().With(BenchField.Sg, typedText)).Sheet.SpecificGravity;
