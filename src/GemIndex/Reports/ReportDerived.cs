@@ -31,15 +31,21 @@ internal static class ReportDerived
     /// <summary>The sign as the series gives it: "not fixed" while its readings weigh positive and negative alike.</summary>
     public static string SignText(StoneReport report)
     {
-        var signs = report.Interpretations.GroupBy(i => i.Sign).Select(g => (Sign: g.Key, Weight: g.Sum(i => i.Weight))).OrderByDescending(g => g.Weight).ToList();
+        // A reading whose character the series leaves open has no sign to give ("none" is a singly refractive stone's).
+        var signs = report.Interpretations.Where(i => i.Character != Undetermined)
+            .GroupBy(i => i.Sign).Select(g => (Sign: g.Key, Weight: g.Sum(i => i.Weight))).OrderByDescending(g => g.Weight).ToList();
         if (signs.Count == 0) return "not fixed";
         if (signs.Count == 1 || signs[0].Weight >= SettledShare) return signs[0].Sign;
         return $"not fixed by the series: {string.Join(" or ", signs.Select(g => $"{g.Sign} ({ReportNumbers.WholePercent(g.Weight)})"))}";
     }
 
     /// <summary>One reading of the series in a line: "uniaxial, sign positive (chance 50%): …".</summary>
-    public static string Line(ReportInterpretation i) =>
-        $"{i.Character}, sign {i.Sign} (chance {ReportNumbers.WholePercent(i.Weight)}): {i.Description}";
+    public static string Line(ReportInterpretation i) => i.Character == Undetermined
+        ? $"{i.Character} (chance {ReportNumbers.WholePercent(i.Weight)}): {i.Description}"
+        : $"{i.Character}, sign {i.Sign} (chance {ReportNumbers.WholePercent(i.Weight)}): {i.Description}";
+
+    /// <summary>The character word of a reading the series leaves open (<see cref="StoneReport"/>).</summary>
+    private const string Undetermined = "undetermined";
 
     /// <summary>How strongly a test speaks for or against a candidate, in words (a likelihood ratio of 10 is "strongly", of 2 plain).</summary>
     public static string Strength(EvidenceContribution reason)

@@ -18,6 +18,15 @@ public class StoneReportTests
 
     public static TheoryData<string> Formats => new() { "markdown", "html", "json" };
 
+    [Fact]
+    public void A_reading_whose_character_the_series_leaves_open_names_no_sign()
+    {
+        var open = new ReportInterpretation("undetermined", "none", 1, 1.617, 1.621, null, 0.004, 0.001, "one step: which edge moves is not seen");
+        Assert.Equal("undetermined (chance 100%): one step: which edge moves is not seen", ReportDerived.Line(open));
+        var uniaxial = open with { Character = "uniaxial", Sign = "positive" };
+        Assert.StartsWith("uniaxial, sign positive (chance 100%)", ReportDerived.Line(uniaxial));
+    }
+
     [Theory]
     // Bench readings never make a material certain or impossible: no probability short of 1 (above 0) reads 100 % (0 %).
     [InlineData(0.9996, ">99.9 %")]
