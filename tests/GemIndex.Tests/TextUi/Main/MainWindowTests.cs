@@ -44,6 +44,18 @@ public sealed class MainWindowTests : IDisposable
         foreach (char c in text) app.InjectKey(new Key(c));
     }
 
+    /// <summary>Types rotation steps on the refractometer page: low edge, Tab, high edge, Enter for each.</summary>
+    private static void TypeSteps(IApplication app, params (string Low, string High)[] steps)
+    {
+        foreach ((string low, string high) in steps)
+        {
+            Type(app, low);
+            app.InjectKey(Key.Tab);
+            Type(app, high);
+            app.InjectKey(Key.Enter);
+        }
+    }
+
     [Theory]
     [InlineData(80, 24)]
     [InlineData(100, 30)]
@@ -409,13 +421,7 @@ public sealed class MainWindowTests : IDisposable
     {
         var (app, window, token) = Open();
         app.InjectKey(Key.F3);
-        foreach ((string low, string high) in new[] { ("1.544", "1.553"), ("1.95", "2.0") })
-        {
-            Type(app, low);
-            app.InjectKey(Key.Tab);
-            Type(app, high);
-            app.InjectKey(Key.Enter);
-        }
+        TypeSteps(app, ("1.544", "1.553"), ("1.95", "2.0"));
         for (int i = 0; i < 3; i++) app.InjectKey(Key.Tab);      // the spot reading
         Type(app, "1.5x");
         Settle();
@@ -440,13 +446,7 @@ public sealed class MainWindowTests : IDisposable
     {
         var (app, window, token) = Open();
         app.InjectKey(Key.F3);
-        foreach ((string low, string high) in new[] { ("1.7x2", "1.718"), ("1.95", "2.0"), ("1.96", "2.1"), ("1.544", "1.553") })
-        {
-            Type(app, low);
-            app.InjectKey(Key.Tab);
-            Type(app, high);
-            app.InjectKey(Key.Enter);
-        }
+        TypeSteps(app, ("1.7x2", "1.718"), ("1.95", "2.0"), ("1.96", "2.1"), ("1.544", "1.553"));
         Settle();
         app.LayoutAndDraw();
         Assert.Contains("! step 1:", FormText(app.Driver!.ToString()!));
@@ -566,13 +566,7 @@ public sealed class MainWindowTests : IDisposable
     {
         var (app, window, token) = Open();
         app.InjectKey(Key.F3);
-        foreach ((string low, string high) in new[] { ("1.616", "1.621"), ("1.617", "1.622") })
-        {
-            Type(app, low);
-            app.InjectKey(Key.Tab);
-            Type(app, high);
-            app.InjectKey(Key.Enter);
-        }
+        TypeSteps(app, ("1.616", "1.621"), ("1.617", "1.622"));
         app.InjectKey(Key.Tab);
         app.InjectKey(Key.Tab);            // the list of steps
         app.InjectKey(Key.Home);
