@@ -34,6 +34,12 @@ internal class BenchPage : View
     /// <summary>The keys that matter on this page, for the key line.</summary>
     public string Keys { get; }
 
+    /// <summary>The keys of a text field, whatever page it is on (a page's own keys speak of its choices or its steps).</summary>
+    public const string FieldKeys = "Tab next field";
+
+    /// <summary>The keys that matter where the cursor is: a text field's, else the page's.</summary>
+    public string KeysHere => Fields.Any(f => f.Edit.HasFocus) ? FieldKeys : Keys;
+
     public List<FormField> Fields { get; } = [];
 
     public List<ChoiceField> Choices { get; } = [];

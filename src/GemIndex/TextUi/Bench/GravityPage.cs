@@ -17,7 +17,7 @@ internal sealed class GravityPage : BenchPage
     private string _result = GravityText.None;
     private string _caution = "";
 
-    public GravityPage() : base("SG", "Tab next field")
+    public GravityPage() : base("SG", FieldKeys)
     {
         AddField(BenchFields.Sg, "SG", 8, "or weigh:");
         AddField(BenchFields.AirCt, "In air", 8, "ct");

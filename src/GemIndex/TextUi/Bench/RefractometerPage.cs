@@ -108,6 +108,14 @@ internal sealed class RefractometerPage : BenchPage
         if (selected is { } s) Grid.SelectedItem = Math.Min(s, _rows.Count - 1);
     }
 
+    /// <summary>Scrolls the list so that step <paramref name="index"/> is in sight (and selected).</summary>
+    public void ShowStep(int index)
+    {
+        if (index < 0 || index >= _stepCount) return;
+        Grid.SelectedItem = index;
+        Grid.EnsureSelectedItemVisible();
+    }
+
     protected override IEnumerable<(string Key, string Text)> OwnErrors(IReadOnlyDictionary<string, string> errors) =>
         errors.Where(p => p.Key.StartsWith("refractometer.readings[", StringComparison.Ordinal))
             .Select(p => (p.Key, $"step {int.Parse(p.Key[23..p.Key.IndexOf(']')], System.Globalization.CultureInfo.InvariantCulture) + 1}: {InCaptions(p.Value)}"))

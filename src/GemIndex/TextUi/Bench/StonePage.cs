@@ -6,7 +6,7 @@ internal sealed class StonePage : BenchPage
     /// <summary>Under the examiner's field: what it is for and that it is not the stone's.</summary>
     public const string ExaminerNote = "  on every report from this workbook";
 
-    public StonePage() : base("Stone", "Tab next field")
+    public StonePage() : base("Stone", FieldKeys)
     {
         AddField(BenchFields.Reference, "Reference", 24);
         AddField(BenchFields.Weight, "Weight", 8, "ct");

@@ -174,7 +174,7 @@ internal sealed class MainWindow : Window
     {
         if (Results.HasFocus) return AnswerKeys;
         if (Pages[CurrentPage].Choices.FirstOrDefault(c => c.HasFocus) is { } choice) return choice.Choice.KeyWords;
-        string keys = Pages[CurrentPage].Keys;
+        string keys = Pages[CurrentPage].KeysHere;
         int room = Math.Max(MinimumColumns, Viewport.Width) - 1;
         string full = $"{keys} │ {GlobalKeys}";
         if (full.Length <= room) return full;
@@ -225,6 +225,7 @@ internal sealed class MainWindow : Window
             _session.Form.SetText(RefractometerPage.TypingStep, "");
             _session.Changed();
             rf.ShowSteps(_session.Form.Steps, _session.Results.Latest?.Errors ?? new Dictionary<string, string>());
+            rf.ShowStep(index ?? _session.Form.Steps.Count - 1);   // the step just stored stays in sight (six rows at 80x24)
             rf.BeginStep(null, null, _session.Form.NextRotation());
         };
         foreach ((TextField box, string typingKey) in rf.TypingBoxes)
@@ -252,6 +253,7 @@ internal sealed class MainWindow : Window
             rf.ShowSteps(_session.Form.Steps, new Dictionary<string, string>());
         };
         foreach (ChoiceField c in Pages.SelectMany(p => p.Choices)) c.HasFocusChanged += (_, _) => ShowBars();
+        foreach (FormField f in Pages.SelectMany(p => p.Fields)) f.Edit.HasFocusChanged += (_, _) => ShowBars();
         Results.List.HasFocusChanged += (_, _) => ShowBars();
     }
 

@@ -20,7 +20,7 @@ internal static class CandidateDetail
         .. c.Reasons.Count == 0 ? ["  (reasons are worked out for the leading candidates only)"]
             : c.Reasons.Select(r => $"  {GemIndex.Cli.Reports.ReportDerived.Verdict(r)}: {r.Text} [{Signed(r.WeightBits)} bits]"),
         .. c.Reasons.Any(r => r.Text.Contains('σ')) ? ["  (8σ: eight standard uncertainties of the reading outside the range)"] : Array.Empty<string>(),
-        .. result?.NextTest is { } n ? ["", $"NEXT TEST: {n.Description}: expected gain {Fixed(n.GainBits, "0.0")} bits (how strongly it would separate the leading candidates)"] : Array.Empty<string>(),
+        .. result?.NextTest is { } n ? ["", $"NEXT TEST: {n.Description}: expected gain {Fixed(n.GainBits, "0.00")} bits (how strongly it would separate the leading candidates)"] : Array.Empty<string>(),
         "",
         "CATALOGUE ENTRY",
         CatalogueBrowserModel.Details(c.Material),

@@ -489,6 +489,23 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void A_text_field_on_the_tests_page_has_a_text_fields_keys_and_a_choice_its_own()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F5);                      // the polariscope, a choice
+        app.LayoutAndDraw();
+        string[] screen = app.Driver!.ToString()!.Split('\n');
+        Assert.DoesNotContain(BenchPage.FieldKeys, screen.Last(l => l.Trim().Length > 0));
+        app.InjectKey(Key.Tab.WithShift);           // the absorption lines, a text field
+        app.LayoutAndDraw();
+        screen = app.Driver!.ToString()!.Split('\n');
+        Assert.StartsWith(BenchPage.FieldKeys, screen.Last(l => l.Trim().Length > 0).Trim());
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Fact]
     public void A_refused_entry_is_said_at_the_top_of_the_answer()
     {
         var (app, window, token) = Open();

@@ -240,7 +240,7 @@ public class ResultTextTests
         string pane = string.Join('\n', rows.Select(r => r.Text));
         foreach (string jargon in new[] { "bits", "fit ", "conf", "σ", "weight", "undetermined", "family" })
             Assert.DoesNotContain(jargon, pane);
-        Assert.Contains("1.3 bits", CandidateDetail.Render(CorundumAnswer(next).Candidates[0], 1, CorundumAnswer(next)));
+        Assert.Contains("1.30 bits", CandidateDetail.Render(CorundumAnswer(next).Candidates[0], 1, CorundumAnswer(next)));   // to two decimals, as the command line gives it
     }
 
     [Fact]
