@@ -7,6 +7,7 @@ using GemIndex.Core.Identification;
 using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Quantities;
 using GemIndex.Core.Readings;
+using GemIndex.Data.Batch;
 
 namespace GemIndex.Cli.TextUi.Results;
 
@@ -135,7 +136,28 @@ internal static class ResultText
         if (a.Readings.Refractometer is { OverLimit: true } && !a.Errors.ContainsKey(BenchFields.OverLimit)) lines.Add("Over the limit: index above the contact liquid");
         if (a.SpecificGravity is { } sg) lines.Add("Specific gravity: " + Gravity(sg)[3..]);
         else if (GravityFields.Any(a.Errors.ContainsKey)) lines.Add("Specific gravity: none used (the SG page, F4, says why)");
+        if (a.Result is not null) lines.AddRange(OtherTests(a.Readings));
         return lines;
+    }
+
+    /// <summary>The other tests the answer used, in the bench's words (every reading that parsed is weighed).</summary>
+    private static IEnumerable<string> OtherTests(StoneReadings r)
+    {
+        static string Words(string wire) => wire.Replace('_', ' ');
+        if (r.HeavyLiquids.Count > 0) yield return $"Heavy liquids: {r.HeavyLiquids.Count}";
+        if (r.Polariscope is { } p) yield return $"Polariscope: {Words(p)}";
+        if (r.Pleochroism is { } pl) yield return $"Pleochroism: {Words(pl)}";
+        if (r.Dispersion is { } d) yield return $"Fire (eye): {Words(d)}";
+        if (r.DispersionIndices is { } nb) yield return $"Dispersion: RI at B {Index(nb.NB)}, at G {Index(nb.NG)}";
+        if (r.ThermalProbe is { } t) yield return $"Thermal probe: {Words(t)}";
+        if (r.Electrical is { } e) yield return $"Conductivity: {Words(e)}";
+        if (r.UvLong is { } ul) yield return $"UV long wave: {Words(ul)}";
+        if (r.UvShort is { } us) yield return $"UV short wave: {Words(us)}";
+        if (r.AbsorptionNm is { } lines)
+            yield return lines.Count == 0 ? "Absorption: no lines" : "Absorption: " + string.Join(", ", lines.Select(n => n.ToString("0.#", CultureInfo.InvariantCulture))) + " nm";
+        if (r.Colour is { } c) yield return $"Colour: {c}";
+        if (r.FeaturesPresent.Count + r.FeaturesAbsent.Count > 0)
+            yield return $"Loupe: {r.FeaturesPresent.Count} seen, {r.FeaturesAbsent.Count} looked for and not seen";
     }
 
     private static IEnumerable<string> Series(RotationSeriesResult s)

@@ -32,6 +32,20 @@ public class BenchAssessorTests
     }
 
     [Fact]
+    public void The_readings_used_name_every_test_the_answer_weighed_not_only_the_numbers()
+    {
+        var form = QuartzForm();
+        form.Choose(BenchFields.Polariscope, "doubly_refractive");
+        form.SetText(BenchFields.Absorption, "none");
+        form.SetText(BenchFields.Colour, "yellow");
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        IReadOnlyList<string> derived = ResultText.Derived(a);
+        Assert.Contains("Polariscope: doubly refractive", derived);
+        Assert.Contains("Absorption: no lines", derived);
+        Assert.Contains("Colour: yellow", derived);
+    }
+
+    [Fact]
     public void Every_listed_candidate_has_its_reasons_since_any_can_be_opened()
     {
         BenchAssessment a = Assessor.Assess(QuartzForm().Snapshot());
