@@ -53,7 +53,7 @@ public static class NextTestAdvisor
             if (best is null || gain > best.Value.Gain + 1e-9) best = (Tests[test].Field, gain);
         }
         var look = Look(sheet, weighted, tables, groups);
-        var leaders = weighted.Where(c => c.P >= 0.02).Take(5).ToList();
+        var leaders = Leaders(weighted, byGroup: groups is not null);
         if (look is { } l && l.Gain > (best?.Gain ?? 0) + 1e-9 && l.Gain >= minimum)
             return new NextTestAdvice
             {
@@ -72,6 +72,25 @@ public static class NextTestAdvisor
             Separates = [.. leaders.Select(c => c.Material.Name)],
             Expectations = [.. leaders.Select(c => $"{c.Material.Name}: {Expected(chosen.Test, c.Material)}")],
         };
+    }
+
+    /// <summary>A candidate counts among the leaders the advice names when it holds at least this share (a judgement).</summary>
+    private const double LeaderShare = 0.02;
+
+    /// <summary>How many leaders the advice names.</summary>
+    private const int LeaderCount = 5;
+
+    /// <summary>
+    /// The candidates the advice names with what each would show: when the test tells materials apart, the best entry of
+    /// each leading species first (the test's worth lies between species, and five varieties of one species that would all
+    /// show the same say nothing), then the next entries; when it tells a species' origins apart, the leading entries.
+    /// </summary>
+    private static List<(Material Material, double P)> Leaders(List<(Material Material, double P)> weighted, bool byGroup)
+    {
+        var serious = weighted.Where(c => c.P >= LeaderShare).ToList();
+        if (byGroup) return [.. serious.Take(LeaderCount)];
+        var firstOfSpecies = serious.GroupBy(c => c.Material.Species).Select(g => g.First()).Take(LeaderCount).ToList();
+        return [.. firstOfSpecies.Concat(serious.Where(c => !firstOfSpecies.Contains(c))).Take(LeaderCount)];
     }
 
     /// <summary>One group's candidates, renormalised within it, their outcome tables, and the group's share.</summary>
