@@ -288,6 +288,21 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void The_next_test_names_a_rival_species_not_only_the_varieties_of_the_leading_one()
+    {
+        // Six varieties of one species lead, each ahead of the one rival species' entry; the probe tells the species
+        // apart (invented entries): the advice must name the rival and what it would show.
+        var indices = OpticalIndices.Uniaxial(new(1.767, 1.772), new(1.759, 1.763));
+        var varieties = Enumerable.Range(1, 6).Select(k => (Make($"variety {k}", "leading", indices, 3.99, 4.01, OpticSign.Negative, new(0.008, 0.009)), 0.13)).ToList();
+        Material rival = Make("rival", "other", indices, 3.99, 4.01, OpticSign.Negative, new(0.008, 0.009), thermal: ThermalProbeResult.Positive);
+        var sheet = new BenchSheet { Refractometer = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770)) };
+        var advice = NextTestAdvisor.Advise(sheet, [.. varieties, (rival, 0.1)])!;
+        Assert.Equal(GemIndex.Core.Bench.BenchField.ThermalProbe, advice.Test);
+        Assert.Equal(["variety 1", "rival"], advice.Separates.Take(2).ToArray());
+        Assert.Contains(advice.Expectations, e => e.StartsWith("rival: positive", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void Colour_alone_never_decides_the_origin()
     {
         // The natural entry lists blue, the treated one orange (invented shares, both common): an orange stone read only on
