@@ -10,8 +10,14 @@ namespace GemIndex.Cli.TextUi.Results;
 /// </summary>
 internal sealed class ResultsModel
 {
-    /// <summary>Candidates always listed (when the catalogue has them); more are listed while they hold at least 1 %.</summary>
-    public const int CandidatesListed = 6, MostCandidatesListed = 8;
+    /// <summary>
+    /// Candidates always listed (when the catalogue has them); the list goes on through the last of the engine's candidates
+    /// that holds at least <see cref="ListedShare"/>, so a species shown after another's many varieties is not cut off.
+    /// </summary>
+    public const int CandidatesListed = 6;
+
+    /// <summary>The least share a candidate beyond the first six needs to be listed (a judgement).</summary>
+    public const double ListedShare = 0.005;
 
     /// <summary>The heading over the candidates: the list is grouped by species (the species' order of the lead), best entry first within each.</summary>
     public const string CandidatesHeading = "Candidates by species (Enter: detail)";
@@ -40,8 +46,15 @@ internal sealed class ResultsModel
     public string? WaitingReason { get; set; }
 
     /// <summary>How many candidates the pane lists.</summary>
-    public int Listed => Candidates.Count == 0 ? 0
-        : Math.Min(Candidates.Count, Math.Max(CandidatesListed, Candidates.Take(MostCandidatesListed).Count(c => c.Confidence >= 0.005)));
+    public int Listed
+    {
+        get
+        {
+            int last = -1;
+            for (int i = 0; i < Candidates.Count; i++) if (Candidates[i].Confidence >= ListedShare) last = i;
+            return Math.Min(Candidates.Count, Math.Max(CandidatesListed, last + 1));
+        }
+    }
 
     /// <summary>The first row of the answer, unwrapped (the species and its total, or why there is none).</summary>
     public string Headline => Rows(int.MaxValue / 2)[0].Text;

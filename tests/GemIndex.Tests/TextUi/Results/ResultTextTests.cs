@@ -194,6 +194,21 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void A_species_listed_after_another_species_many_small_varieties_is_not_cut_off()
+    {
+        // Eight small corundum entries (0.3 % each) come first in species order; the ninth candidate holds 12 %.
+        RankedCandidate[] small = [.. Enumerable.Range(1, 8).Select(k => new RankedCandidate { Material = Corundum($"variety {k}", OriginClass.Natural), Confidence = 0.003, Fit = 0.9 })];
+        IdentificationResult r = CorundumAnswer(null) with
+        {
+            Candidates = [.. small, new() { Material = TestMaterials.All[1], Confidence = 0.12, Fit = 0.5 }],
+        };
+        var model = new ResultsModel();
+        model.Accept(new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 4.0 }, Result = r });
+        Assert.Equal(9, model.Listed);
+        Assert.Contains(model.Rows(60), x => x.Candidate == 8);
+    }
+
+    [Fact]
     public void A_candidate_name_too_long_for_its_column_goes_on_under_itself_whole()
     {
         IdentificationResult r = CorundumAnswer(null) with
