@@ -216,7 +216,7 @@ public static class BenchReader
                 { Error(BenchField.HeavyLiquids, entry, allowed, which + Sentence(problem, parts.Density)); continue; }
                 if (BenchWords.Parse<HeavyLiquidOutcome>(parts.Result) is not { } outcome)
                 { Error(BenchField.HeavyLiquids, entry, allowed, $"{which}'{BenchText.Shown(parts.Result)}' is not one of {BenchWords.Choices<HeavyLiquidOutcome>()}."); continue; }
-                if (Checked(BenchField.HeavyLiquids, entry, () => new HeavyLiquidResult(new SpecificGravity(density), outcome)) is { } result) results.Add(result);
+                if (Checked(BenchField.HeavyLiquids, entry, () => HeavyLiquidResult.Of(density, outcome)) is { } result) results.Add(result);
             }
             return results;
         }

@@ -17,12 +17,26 @@ public readonly record struct HeavyLiquidResult
     /// </summary>
     public const double SuspendedTolerance = 0.01;
 
+    /// <summary>
+    /// The densities a heavy liquid for gem testing can have: from water (1.00) to the densest, Clerici solution, about
+    /// 4.2 at room temperature (common practice; 4.3 leaves room for a warm one). A "liquid" outside is a typing slip.
+    /// </summary>
+    public const double LightestLiquid = 1.0, DensestLiquid = 4.3;
+
+    /// <summary>A result from the liquid's density as typed and what the stone did (the density checked first, as a liquid's).</summary>
+    /// <exception cref="QuantityOutOfRangeException">The density lies outside <see cref="LightestLiquid"/>–<see cref="DensestLiquid"/>.</exception>
+    public static HeavyLiquidResult Of(double density, HeavyLiquidOutcome outcome)
+    {
+        QuantityOutOfRangeException.ThrowIfOutside("heavy liquid density", density, LightestLiquid, DensestLiquid);
+        return new HeavyLiquidResult(new SpecificGravity(density), outcome);
+    }
+
     /// <summary>A result from the liquid's density and what the stone did.</summary>
-    /// <exception cref="QuantityOutOfRangeException"><paramref name="liquid"/> is <c>default</c> (SG 0).</exception>
+    /// <exception cref="QuantityOutOfRangeException"><paramref name="liquid"/> lies outside <see cref="LightestLiquid"/>–<see cref="DensestLiquid"/> (or is <c>default</c>, SG 0).</exception>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="outcome"/> is not a defined outcome.</exception>
     public HeavyLiquidResult(SpecificGravity liquid, HeavyLiquidOutcome outcome)
     {
-        QuantityOutOfRangeException.ThrowIfOutside("heavy liquid density", liquid.Value, SpecificGravity.Minimum, SpecificGravity.Maximum);
+        QuantityOutOfRangeException.ThrowIfOutside("heavy liquid density", liquid.Value, LightestLiquid, DensestLiquid);
         if (!Enum.IsDefined(outcome))
             throw new ArgumentOutOfRangeException(nameof(outcome), outcome, "heavy liquid outcome must be floats, suspends or sinks.");
         Liquid = liquid;

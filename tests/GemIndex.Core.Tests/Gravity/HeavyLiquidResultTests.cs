@@ -49,7 +49,19 @@ public class HeavyLiquidResultTests
     public void A_default_liquid_is_refused()
     {
         var error = Assert.Throws<QuantityOutOfRangeException>(() => new HeavyLiquidResult(default, HeavyLiquidOutcome.Sinks));
-        Assert.Equal("heavy liquid density is 0; allowed: 0.5 to 25.", error.Message);
+        Assert.Equal("heavy liquid density is 0; allowed: 1 to 4.3.", error.Message);
+    }
+
+    [Theory]
+    // Heavy liquids for gem testing run from water (1.00) to Clerici solution (about 4.2; common practice):
+    // a typed 9 or 30 is a slip, named as a liquid's density, not as the stone's SG.
+    [InlineData(9.0)]
+    [InlineData(0.9)]
+    public void A_liquid_no_heavy_liquid_can_be_is_refused_as_a_liquid(double density)
+    {
+        var error = Assert.Throws<QuantityOutOfRangeException>(() => HeavyLiquidResult.Of(density, HeavyLiquidOutcome.Sinks));
+        Assert.StartsWith("heavy liquid density is", error.Message);
+        Assert.Equal(4.15, HeavyLiquidResult.Of(4.15, HeavyLiquidOutcome.Floats).Liquid.Value);
     }
 
     [Fact]
