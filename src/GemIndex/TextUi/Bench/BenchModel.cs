@@ -61,6 +61,13 @@ internal sealed class BenchModel
         Version++;
     }
 
+    /// <summary>Puts a removed step back at <paramref name="index"/> (Ctrl+Z on the list of steps).</summary>
+    public void InsertStep(int index, StepText step)
+    {
+        _steps = _steps.Insert(Math.Clamp(index, 0, _steps.Count), step);
+        Version++;
+    }
+
     /// <summary>The rotation between steps as set on the RI page (a number from 1° to 180°), else <see cref="RotationStepDegrees"/>.</summary>
     public double RotationStep =>
         double.TryParse(Text(RefractometerPage.RotationStepField), NumberStyles.Float, CultureInfo.InvariantCulture, out double step) && step is >= 1 and <= 180

@@ -59,6 +59,10 @@ internal sealed class RefractometerPage : BenchPage
             if (key == Key.Enter) { EditRequested?.Invoke(i); key.Handled = true; }
             else if (key == Key.Delete) { RemoveRequested?.Invoke(i); key.Handled = true; }
         };
+        Grid.KeyDown += (_, key) =>
+        {
+            if (key == Key.Z.WithCtrl && RestoreRequested is not null) { RestoreRequested(); key.Handled = true; }
+        };
     }
 
     public override View FirstReading => Low;
@@ -85,6 +89,9 @@ internal sealed class RefractometerPage : BenchPage
 
     public event Action<int>? RemoveRequested;
 
+    /// <summary>Ctrl+Z on the list: the step removed last comes back.</summary>
+    public event Action? RestoreRequested;
+
     /// <summary>Puts a step on the edit line (null: an empty new step at <paramref name="nextRotation"/>).</summary>
     public void BeginStep(int? index, StepText? step, string nextRotation)
     {
@@ -104,7 +111,7 @@ internal sealed class RefractometerPage : BenchPage
         for (int i = 0; i < steps.Count; i++)
             _rows.Add($"{steps[i].Rotation,6}°  {steps[i].Low,-8}  {steps[i].High,-8}{(errors.ContainsKey(BenchFields.Step(i)) ? FormField.SeeBelow : "")}");   // the reason whole at the page's foot
         if (_rows.Count == 0) _rows.Add("(no steps yet: type the edges, Enter)");
-        else _rows.Add("(Enter edits a step, Del removes)");
+        else _rows.Add("(Enter edits, Del removes, ^Z undo)");
         if (selected is { } s) Grid.SelectedItem = Math.Min(s, _rows.Count - 1);
     }
 

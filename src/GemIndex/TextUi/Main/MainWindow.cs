@@ -76,6 +76,9 @@ internal sealed class MainWindow : Window
 
     public IReadOnlyList<BenchPage> Pages { get; }
 
+    /// <summary>The step removed last and where it stood, for Ctrl+Z on the list of steps (one level; another stone forgets it).</summary>
+    private (int Index, StepText Step)? _removedStep;
+
     /// <summary>Says in the identification panel that the catalogue is loading, or why it could not be loaded.</summary>
     public void ShowCatalogueState(string text, string? reason = null)
     {
@@ -242,6 +245,7 @@ internal sealed class MainWindow : Window
         };
         rf.RemoveRequested += i =>
         {
+            _removedStep = (i, _session.Form.Steps[i]);
             _session.Form.RemoveStep(i);
             // The numbers of the steps after it move: an edit under way goes on as a new step rather than into another one.
             if (_session.Form.Text(RefractometerPage.TypingStep).Length > 0)
@@ -252,6 +256,15 @@ internal sealed class MainWindow : Window
             _session.Changed();
             rf.ShowSteps(_session.Form.Steps, new Dictionary<string, string>());
         };
+        rf.RestoreRequested += () =>
+        {
+            if (_removedStep is not { } removed) return;
+            _removedStep = null;
+            _session.Form.InsertStep(removed.Index, removed.Step);
+            _session.Changed();
+            rf.ShowSteps(_session.Form.Steps, _session.Results.Latest?.Errors ?? new Dictionary<string, string>());
+            rf.ShowStep(Math.Min(removed.Index, _session.Form.Steps.Count - 1));
+        };
         foreach (ChoiceField c in Pages.SelectMany(p => p.Choices)) c.HasFocusChanged += (_, _) => ShowBars();
         foreach (FormField f in Pages.SelectMany(p => p.Fields)) f.Edit.HasFocusChanged += (_, _) => ShowBars();
         Results.List.HasFocusChanged += (_, _) => ShowBars();
@@ -260,6 +273,7 @@ internal sealed class MainWindow : Window
     /// <summary>Puts the model's texts into the fields (after a stone is opened), without echoing them back as edits.</summary>
     public void FillFromModel()
     {
+        _removedStep = null;
         _filling = true;
         try
         {

@@ -506,6 +506,25 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void A_step_removed_by_mistake_comes_back_with_Ctrl_Z()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        TypeSteps(app, ("1.544", "1.553"), ("1.544", "1.551"), ("1.544", "1.549"));
+        app.InjectKey(Key.Tab);
+        app.InjectKey(Key.Tab);            // the list of steps
+        app.InjectKey(Key.Home);
+        app.InjectKey(Key.CursorDown);     // step 2
+        app.InjectKey(Key.Delete);
+        Assert.Equal(["1.553", "1.549"], _session.Form.Steps.Select(s => s.High).ToArray());
+        app.InjectKey(Key.Z.WithCtrl);
+        Assert.Equal(["1.553", "1.551", "1.549"], _session.Form.Steps.Select(s => s.High).ToArray());
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
+    [Fact]
     public void A_refused_entry_is_said_at_the_top_of_the_answer()
     {
         var (app, window, token) = Open();
