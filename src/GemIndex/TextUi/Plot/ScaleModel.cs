@@ -1,4 +1,5 @@
 using GemIndex.Cli.TextUi.Bench;
+using GemIndex.Core.Bench;
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Identification;
 using GemIndex.Core.Readings;
@@ -6,7 +7,7 @@ using GemIndex.Core.Readings;
 namespace GemIndex.Cli.TextUi.Plot;
 
 /// <summary>
-/// The scales screen: the lowest index, the birefringence and the SG as read, each against the ranges of the top
+/// The scales screen: the lowest index, the birefringence (or a spot reading) and the SG as read, each against the ranges of the top
 /// candidates (<see cref="ReadingScale"/>), as many candidates as the height allows (between one and five).
 /// </summary>
 internal sealed class ScaleModel
@@ -34,6 +35,11 @@ internal sealed class ScaleModel
                     scales.Add(n => new ReadingScale("birefringence", "0.000", best.Birefringence.Value, best.Birefringence.StandardUncertainty, WidestBirefringence,
                         [.. top.Take(n).Select(m => (m.Name, m.Birefringence ?? new PropertyRange(0, 0)))]));
             }
+            else if (a.Readings.Refractometer?.Spot is { } spot && a.Result is not null)
+                // A spot reading lies anywhere between a material's lowest and highest index (the shadow blinks between
+                // them on a birefringent stone), read to about ±0.01 (σ 0.006 unless the bench's precision says otherwise).
+                scales.Add(n => new ReadingScale("spot reading", "0.00", spot, a.Readings.Refractometer.Precision ?? BenchDefaults.SpotPrecision, WidestIndex,
+                    [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum)))]));
             if (a.SpecificGravity is { } sg)
                 scales.Add(n => new ReadingScale("SG", "0.00", sg.Value, sg.StandardUncertainty, WidestGravity,
                     [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)m.SpecificGravity))]));

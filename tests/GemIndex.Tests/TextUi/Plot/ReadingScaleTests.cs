@@ -143,6 +143,20 @@ public class ReadingScaleTests
     }
 
     [Fact]
+    public void A_spot_reading_is_scaled_against_each_candidates_whole_index_span()
+    {
+        var form = new BenchModel();
+        form.SetText(BenchFields.Spot, "1.55");   // quartz reads 1.54-1.55 on a cabochon (common practice)
+        BenchAssessment a = new BenchAssessor(new Identifier(TestMaterials.All)).Assess(form.Snapshot());
+        IReadOnlyList<ReadingScale> scales = new ScaleModel(a).Scales(3);
+        ReadingScale spot = Assert.Single(scales);
+        Assert.Equal("spot reading", spot.Title);
+        Assert.Equal(1.55, spot.Value);
+        var quartz = spot.Candidates.Single(c => c.Name == "quartz");
+        Assert.Equal(ReadingScale.In, spot.Verdict(quartz.Range));   // between ω 1.544 and ε 1.553
+    }
+
+    [Fact]
     public void Without_readings_the_model_says_what_it_needs()
     {
         var model = new ScaleModel(null);
