@@ -81,11 +81,15 @@ internal sealed record StoneReport
         };
     }
 
+    /// <summary>Dimensions as typed, with "mm" (the form's unit) added to bare numbers such as "8.1 x 6.2 x 4.0".</summary>
+    private static string? InMillimetres(string? dimensions) =>
+        dimensions is { Length: > 0 } d && System.Text.RegularExpressions.Regex.IsMatch(d.Trim(), @"^[\d.,]+(\s*[x×*]\s*[\d.,]+)*$") ? d.Trim() + " mm" : dimensions;
+
     private static List<ReportField> DescriptionOf(StoneSheet sheet) =>
     [
         new("reference", "Reference", Shown(sheet.Reference)),
         new("weight", "Weight", sheet.WeightCarats is { } ct ? ReportNumbers.Carats(ct) : NotRecorded),
-        new("dimensions", "Dimensions", Shown(sheet.Dimensions)),
+        new("dimensions", "Dimensions", Shown(InMillimetres(sheet.Dimensions))),
         new("shape", "Shape", Shown(sheet.Shape)),
         new("cutting_style", "Cutting style", Shown(sheet.CuttingStyle)),
         new("colour", "Colour", Shown(sheet.Readings.Colour)),

@@ -18,6 +18,17 @@ public class StoneReportTests
 
     public static TheoryData<string> Formats => new() { "markdown", "html", "json" };
 
+    [Theory]
+    [InlineData("10.1 x 8.0 x 5.2", "10.1 x 8.0 x 5.2 mm")]   // the form's unit added to bare numbers
+    [InlineData("10.1 x 8.0 x 5.2 mm", "10.1 x 8.0 x 5.2 mm")]
+    [InlineData("about 8 mm round", "about 8 mm round")]
+    public void Dimensions_carry_their_unit(string typed, string shown)
+    {
+        var sheet = ReportFixtures.Sheet(ReportFixtures.QuartzLine) with { Dimensions = typed };
+        var report = StoneReport.Build(sheet, ReportFixtures.Identify(sheet));
+        Assert.Equal(shown, report.Description.Single(f => f.Key == "dimensions").Value);
+    }
+
     [Fact]
     public void A_reading_whose_character_the_series_leaves_open_names_no_sign()
     {
