@@ -83,11 +83,11 @@ public static class BenchReader
             if (over == true && r.Text(BenchField.Spot) is not null)
                 Error(BenchField.OverLimit, "yes", "over the limit, or a spot reading, not both",
                     $"says no edge was seen, but a spot reading {BenchText.Shown(r.Text(BenchField.Spot))} is given too.");
-            // "Over the limit" is no edge at all; a high edge hidden above the liquid is written by leaving it out of its
-            // step (the engine takes it as above the limit), so a step with an edge contradicts the flag.
-            if (over == true && r.Steps.Count > 0)
-                Error(BenchField.OverLimit, "yes", "over the limit only when no edge was seen",
-                    $"says no edge was seen, but step 1 ({BenchField.Step(0)}) gives one (a high edge hidden above the liquid is left out of its step).");
+            // "Over the limit" with steps is the trade's "high edge OTL": the steps give only their low edges, and a step
+            // without a high edge is already read as one hidden above the liquid. A high edge read contradicts it.
+            if (over == true && r.Steps.FindIndex(s => s.High.Trim().Length > 0) is int withHigh and >= 0)
+                Error(BenchField.OverLimit, "yes", "over the limit only when the high edge was not seen",
+                    $"says the high edge was not seen, but step {withHigh + 1} ({BenchField.Step(withHigh)}) gives one.");
             if (!anyReading || HasError(BenchField.OverLimit)) return null;
             var observation = new Dictionary<string, double?>
             {

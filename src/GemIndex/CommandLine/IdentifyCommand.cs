@@ -47,7 +47,7 @@ internal static class IdentifyCommand
             Description = "A rotation step ROTATION:LOW[/HIGH], e.g. --edge 0:1.544/1.553 --edge 45:1.544/1.549 (repeat per step)",
             AllowMultipleArgumentsPerToken = false,
         };
-        var overLimit = new Option<bool>("--over-limit") { Description = "No stone edge below the contact liquid's index" };
+        var overLimit = new Option<bool>("--over-limit") { Description = "No stone edge below the contact liquid's index (with --edge steps of low edges only: the high edge was above it)" };
         var liquids = new Option<string[]>("--heavy-liquid") { Description = "DENSITY RESULT, RESULT floats | sinks | suspends, e.g. \"3.32 floats\" (repeat per liquid)" };
         var features = new Option<string[]>("--feature")
         {

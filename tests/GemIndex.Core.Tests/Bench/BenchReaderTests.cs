@@ -114,14 +114,13 @@ public class BenchReaderTests
     }
 
     [Fact]
-    public void Over_the_limit_with_only_a_low_edge_read_is_a_contradiction_too()
+    public void Over_the_limit_with_only_low_edges_read_is_the_trades_high_edge_over_the_limit()
     {
-        // "Over the limit" is no edge at all; a high edge hidden above the liquid is left out of its step instead.
-        var reading = BenchReader.Read(Steps(R((BenchField.OverLimit, "yes")), "0:1.72"));
-        BenchFieldError e = Assert.Single(reading.Errors);
-        Assert.Equal(BenchField.OverLimit, e.Field);
-        Assert.Contains(BenchField.Step(0), e.Sentence);
-        Assert.Empty(BenchReader.Read(Steps(R(), "0:1.72")).Errors);
+        // A birefringent stone whose high edge lies above the liquid: the low edges are read and the high one is "OTL"
+        // (common practice). Not a contradiction; the steps without a high edge already say it.
+        var reading = BenchReader.Read(Steps(R((BenchField.OverLimit, "yes")), "0:1.72", "90:1.73"));
+        Assert.Empty(reading.Errors);
+        Assert.Equal(2, reading.Sheet.Refractometer!.Steps.Count);
     }
 
     [Fact]
