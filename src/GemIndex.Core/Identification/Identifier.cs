@@ -122,12 +122,16 @@ public sealed class Identifier
     }
 
     /// <summary>
-    /// The shown candidates, then grouped species first: the best entry of every species whose total reaches the list (at
-    /// least the share of the list's last entry), most probable species first, then the most probable entries. A species
+    /// The shown candidates, then grouped species first: the best entry of each of the <see cref="SpeciesAlwaysShown"/>
+    /// leading species and of every further species whose total reaches the list (at least the share of the list's last
+    /// entry), most probable species first, then the most probable entries. A species
     /// with many varieties must not fill the list with entries the readings rule out while another species' likely entry
     /// is left off, and a species whose mass is spread over many small entries must not be left off while a species of
     /// one small entry is shown.
     /// </summary>
+    /// <summary>How many leading species always have their best entry among the shown candidates (docs/ranking.md §3, species totals).</summary>
+    public const int SpeciesAlwaysShown = 3;
+
     private bool[] Shown(double[] posterior, int[] byEntry, int count)
     {
         var shown = new bool[posterior.Length];
@@ -143,11 +147,12 @@ public sealed class Identifier
             totals[k] += posterior[i];
             if (best[k] < 0) { best[k] = i; firstSeen.Add(k); }
         }
-        // A stable sort: species of equal totals keep the order of their best entries.
+        // A stable sort: species of equal totals keep the order of their best entries. The first few species are shown
+        // whatever their entries' shares, so the answer's species list always holds the leading three.
         int taken = 0;
         foreach (int k in firstSeen.OrderByDescending(k => totals[k]))
         {
-            if (taken == count || totals[k] < cut) break;
+            if (taken == count || (taken >= SpeciesAlwaysShown && totals[k] < cut) || totals[k] <= 0) break;
             shown[best[k]] = true;
             taken++;
         }

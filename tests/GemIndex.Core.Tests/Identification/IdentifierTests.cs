@@ -85,6 +85,23 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void The_second_and_third_species_are_shown_even_when_the_leaders_varieties_could_fill_the_list()
+    {
+        // Readings every entry fits alike: ten varieties of a very common species (1.6 each of weight 16) against two very
+        // rare species of one entry each (weight 1): every variety outranks them, yet the list names all three species.
+        var glassLike = OpticalIndices.SingleIndex(new(1.50, 1.53), OpticCharacter.Amorphous);
+        Material[] catalogue =
+        [
+            .. Enumerable.Range(1, 10).Select(k => Make($"variety {k}", "many", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryCommon }),
+            Make("second", "second", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryRare },
+            Make("third", "third", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryRare },
+        ];
+        var result = new Identifier(catalogue).Identify(new BenchSheet { SpecificGravity = new(2.5, 0.01) }, maximumCandidates: 10);
+        Assert.Equal(10, result.Candidates.Count);
+        Assert.Equal(["many", "second", "third"], result.Candidates.Select(c => c.Material.Species).Distinct().ToArray());
+    }
+
+    [Fact]
     public void A_corundum_series_reads_negative_and_names_corundum_and_warns_about_synthetics()
     {
         // Corundum ω 1.770, ε 1.762 (common practice); natural and synthetic cannot be separated by these tests.
