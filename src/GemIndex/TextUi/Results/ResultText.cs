@@ -210,8 +210,8 @@ internal static class ResultText
     }
 
     /// <summary>One candidate row: rank, name (already fitted), confidence and, when there is room, a bar.</summary>
-    public static string Candidate(int rank, string name, int nameWidth, double confidence, bool bar) =>
-        $"{rank,1} {name.PadRight(nameWidth)} {Percent(confidence),4}{(bar ? " " + Bar(confidence) : "")}";
+    public static string Candidate(int rank, string name, int nameWidth, double confidence, bool bar, int rankWidth = 1) =>
+        $"{rank.ToString(CultureInfo.InvariantCulture).PadLeft(rankWidth)} {name.PadRight(nameWidth)} {Percent(confidence),4}{(bar ? " " + Bar(confidence) : "")}";
 
     /// <summary>The next test in words: what it separates and what each would show (its strength in numbers is in the detail view).</summary>
     public static IReadOnlyList<string> NextTest(NextTestAdvice? advice) => advice is null ? [] :

@@ -88,15 +88,16 @@ internal sealed class ResultsModel
         rows.Add(new AnswerRow(""));
         rows.Add(new AnswerRow(CandidatesHeading));
         bool bars = width >= WidthForBars;
-        int nameWidth = width - 7 - (bars ? ResultText.BarWidth + 1 : 0);
         IReadOnlyList<RankedCandidate> shown = [.. Candidates.Take(Listed)];
+        int rankWidth = shown.Count.ToString(System.Globalization.CultureInfo.InvariantCulture).Length;   // "10" aligns with " 9"
+        int nameWidth = width - 6 - rankWidth - (bars ? ResultText.BarWidth + 1 : 0);
         // A name too long for its column goes on under itself, whole (every row of it opens the candidate's detail).
         List<string>[] names = [.. shown.Select(c => TextWrap.Lines([c.Material.Name], nameWidth).ToList())];
         int used = Math.Min(nameWidth, names.Max(n => n[0].Length));
         for (int i = 0; i < shown.Count; i++)
         {
-            rows.Add(new AnswerRow(ResultText.Candidate(i + 1, names[i][0], used, shown[i].Confidence, bars), i));
-            foreach (string more in names[i].Skip(1)) rows.Add(new AnswerRow("  " + more, i, Continues: true));
+            rows.Add(new AnswerRow(ResultText.Candidate(i + 1, names[i][0], used, shown[i].Confidence, bars, rankWidth), i));
+            foreach (string more in names[i].Skip(1)) rows.Add(new AnswerRow(new string(' ', rankWidth + 1) + more, i, Continues: true));
         }
         Text([$"  not in the catalogue {ResultText.Percent(r.NotInCatalogue)}"]);
         IReadOnlyList<string> derived = ResultText.Derived(a);

@@ -365,4 +365,11 @@ public class ResultTextTests
         Assert.Equal([OriginClass.Synthetic, OriginClass.Natural, OriginClass.Treated],
             ResultText.Origins(beryl).Select(o => o.Key).ToArray());   // composite 4 % of the species stays out (BenchWarnings.OriginShare 5 %)
     }
+
+    [Fact]
+    public void Ranks_of_one_and_two_digits_line_up()
+    {
+        Assert.Equal(" 9 beryl   3%", ResultText.Candidate(9, "beryl", 5, 0.03, bar: false, rankWidth: 2));
+        Assert.Equal("10 topaz   3%", ResultText.Candidate(10, "topaz", 5, 0.03, bar: false, rankWidth: 2));
+    }
 }
