@@ -121,17 +121,16 @@ public sealed class Identifier
         return order;
     }
 
-    /// <summary>
-    /// The shown candidates, then grouped species first: the best entry of each of the <see cref="SpeciesAlwaysShown"/>
-    /// leading species and of every further species whose total reaches the list (at least the share of the list's last
-    /// entry), most probable species first, then the most probable entries. A species
-    /// with many varieties must not fill the list with entries the readings rule out while another species' likely entry
-    /// is left off, and a species whose mass is spread over many small entries must not be left off while a species of
-    /// one small entry is shown.
-    /// </summary>
     /// <summary>How many leading species always have their best entry among the shown candidates (docs/ranking.md §3, species totals).</summary>
     public const int SpeciesAlwaysShown = 3;
 
+    /// <summary>
+    /// The shown candidates, then grouped species first: the best entry of each of the <see cref="SpeciesAlwaysShown"/>
+    /// leading species and of every further species whose total reaches the list (at least the share of the list's last
+    /// entry), most probable species first, then the most probable entries. A species with many varieties must not fill
+    /// the list with entries the readings rule out while another species' likely entry is left off, and a species whose
+    /// mass is spread over many small entries must not be left off while a species of one small entry is shown.
+    /// </summary>
     private bool[] Shown(double[] posterior, int[] byEntry, int count)
     {
         var shown = new bool[posterior.Length];

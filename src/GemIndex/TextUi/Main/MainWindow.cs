@@ -243,16 +243,19 @@ internal sealed class MainWindow : Window
             _session.Form.SetText(RefractometerPage.TypingStep, (i + 1).ToString(System.Globalization.CultureInfo.InvariantCulture));
             rf.BeginStep(i, _session.Form.Steps[i], _session.Form.NextRotation());
         };
+        // A step removed or put back moves the numbers of the steps after it: an edit under way goes on as a new step
+        // rather than into another one.
+        void EditGoesOnAsNewStep()
+        {
+            if (_session.Form.Text(RefractometerPage.TypingStep).Length == 0) return;
+            _session.Form.SetText(RefractometerPage.TypingStep, "");
+            rf.BeginStep(null, new StepText(rf.Rotation.Text, rf.Low.Text, rf.High.Text), _session.Form.NextRotation());
+        }
         rf.RemoveRequested += i =>
         {
             _removedStep = (i, _session.Form.Steps[i]);
             _session.Form.RemoveStep(i);
-            // The numbers of the steps after it move: an edit under way goes on as a new step rather than into another one.
-            if (_session.Form.Text(RefractometerPage.TypingStep).Length > 0)
-            {
-                _session.Form.SetText(RefractometerPage.TypingStep, "");
-                rf.BeginStep(null, new StepText(rf.Rotation.Text, rf.Low.Text, rf.High.Text), _session.Form.NextRotation());
-            }
+            EditGoesOnAsNewStep();
             _session.Changed();
             rf.ShowSteps(_session.Form.Steps, new Dictionary<string, string>());
         };
@@ -261,6 +264,7 @@ internal sealed class MainWindow : Window
             if (_removedStep is not { } removed) return;
             _removedStep = null;
             _session.Form.InsertStep(removed.Index, removed.Step);
+            EditGoesOnAsNewStep();
             _session.Changed();
             rf.ShowSteps(_session.Form.Steps, _session.Results.Latest?.Errors ?? new Dictionary<string, string>());
             rf.ShowStep(Math.Min(removed.Index, _session.Form.Steps.Count - 1));
