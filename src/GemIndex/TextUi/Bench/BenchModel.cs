@@ -105,7 +105,7 @@ internal sealed class BenchModel
         _texts = ImmutableDictionary.CreateRange(keep.Concat(StoneFormText.From(stone)).Where(p => p.Value.Length > 0));
         _choices = ImmutableDictionary.CreateRange(StoneFormText.Choices(stone.Readings));
         _steps = [.. (stone.Readings.Refractometer?.Readings ?? []).Select(s =>
-            new StepText(StoneFormText.Number(s.RotationDeg), StoneFormText.Number(s.Low), s.High is { } h ? StoneFormText.Number(h) : ""))];
+            new StepText(StoneFormText.Number(s.RotationDeg), StoneFormText.Index(s.Low), s.High is { } h ? StoneFormText.Index(h) : ""))];
         Version++;
     }
 

@@ -28,6 +28,25 @@ public class BenchModelTests
     }
 
     [Fact]
+    public void A_reopened_stone_shows_its_indices_to_the_thousandth_as_read()
+    {
+        // A refractometer reads to 0.001 (common practice): 1.770 is a reading of 1.770, and it comes back as written.
+        var stone = new StoneSheet
+        {
+            Id = 5, Reference = "lot 3",
+            Readings = new StoneReadings
+            {
+                Id = "lot 3",
+                Refractometer = new RefractometerReadings { Readings = [new EdgeReadingEntry(0, 1.762, 1.770)], LiquidLimit = 1.8 },
+            },
+        };
+        var form = new BenchModel();
+        form.Load(stone);
+        Assert.Equal(("1.762", "1.770"), (form.Steps[0].Low, form.Steps[0].High));
+        Assert.Equal("1.800", form.Text(BenchFields.LiquidLimit));
+    }
+
+    [Fact]
     public void A_loaded_stone_fills_the_form_and_goes_back_unchanged()
     {
         var stone = new StoneSheet
