@@ -348,7 +348,34 @@ public static class BenchReader
         {
             if (BenchNumber.TryParse(text, out double value, out string problem)) return value;
             string prefix = part.Length > 0 ? part + ": " : "";
-            Error(field, text, "a number", prefix + Sentence(problem, text));
+            string? range = AllowedRange(field, part);
+            Error(field, text, range is null ? "a number" : $"a number, {range}", prefix + Sentence(problem, text) + (range is null ? "" : $"; allowed: {range}."));
+            return null;
+        }
+
+        /// <summary>
+        /// The range a numeric field allows, for the message on text that is not a number: asked of the very check the
+        /// field's value meets (with a value no field allows), so the range is stated in one place only.
+        /// </summary>
+        private static string? AllowedRange(string field, string part)
+        {
+            const double Far = 1e300;
+            Action? check = (field, part) switch
+            {
+                (BenchField.Sg, _) => () => _ = new SpecificGravity(Far, BenchDefaults.DirectSpecificGravityUncertainty),
+                (BenchField.AirCt or BenchField.WaterCt, _) => () => _ = BenchDefaults.Weighed(Far),
+                (BenchField.WaterC, _) => () => _ = Temperature.FromCelsius(Far),
+                (BenchField.LiquidLimit, _) => () => _ = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.5, liquidLimit: Far),
+                (BenchField.LightNm, _) => () => _ = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.5, lightNanometres: Far),
+                (BenchField.Spot, _) => () => _ = new RefractometerObservation(RefractometerMethod.Spot, spot: Far),
+                (BenchField.IndexAtB or BenchField.IndexAtG, _) => () => _ = DispersionObservation.FromIndices(Far, Far),
+                (_, "rotation") => () => _ = new ShadowEdgeStep(Far, 1.5, null),
+                (_, "low") => () => _ = new ShadowEdgeStep(0, Far, null),
+                (_, "high") => () => _ = new ShadowEdgeStep(0, 1.5, Far),
+                _ => null,
+            };
+            try { check?.Invoke(); }
+            catch (QuantityOutOfRangeException e) { return e.Allowed; }
             return null;
         }
 

@@ -123,6 +123,21 @@ public class BenchReaderTests
         Assert.Equal(2, reading.Sheet.Refractometer!.Steps.Count);
     }
 
+    [Theory]
+    // Text that is not a number is told the field's range, the range its value's own check states.
+    [InlineData(BenchField.Sg, "2.7x", "allowed: 0.5 to 25.")]
+    [InlineData(BenchField.LiquidLimit, "1.8x", "allowed: 1.5 to 2.2.")]
+    [InlineData(BenchField.WaterC, "2x", "allowed: -50 to 150 °C.")]
+    public void Text_that_is_not_a_number_is_told_the_fields_range(string field, string text, string allowed)
+    {
+        var readings = R((field, text));
+        if (field == BenchField.LiquidLimit) readings = readings.With(BenchField.Spot, "1.60");
+        if (field == BenchField.WaterC) readings = readings.With(BenchField.AirCt, "3.12").With(BenchField.WaterCt, "1.943");
+        BenchFieldError e = Assert.Single(BenchReader.Read(readings).Errors);
+        Assert.Equal(field, e.Field);
+        Assert.EndsWith(allowed, e.Sentence);
+    }
+
     [Fact]
     public void More_steps_than_the_analysis_reads_is_one_error_not_a_crash()
     {

@@ -59,7 +59,7 @@ public class BenchAssessorTests
         BenchModel form = QuartzForm();
         form.PutStep(1, new StepText("45", "1.5x", "1.551"));
         BenchAssessment a = Assessor.Assess(form.Snapshot());
-        Assert.Equal("low: '1.5x' is not a number", a.Errors[BenchFields.Step(1)]);
+        Assert.Equal("low: '1.5x' is not a number; allowed: 1 to 4.", a.Errors[BenchFields.Step(1)]);   // the range of the low edge's own check
         Assert.Single(a.Errors);
         Assert.Equal("quartz", a.Result!.Candidates[0].Material.Name);
         Assert.Equal(4, a.Readings.Refractometer!.Readings.Count);
