@@ -240,6 +240,14 @@ public sealed class MainWindowTests : IDisposable
         return (app, window, token);
     }
 
+    /// <summary>Closes the window and the headless application opened by <see cref="Open"/>.</summary>
+    private static void Close(IApplication app, MainWindow window, SessionToken token)
+    {
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+    }
+
     /// <summary>The program started again on the same workbook (after the terminal closed): a new session and window.</summary>
     private (BenchSession Session, MainWindow Window) Restart()
     {
@@ -269,9 +277,7 @@ public sealed class MainWindowTests : IDisposable
         app.InjectKey(Key.N.WithCtrl);
         Assert.Same(window.Pages[0].Fields[0].Edit, window.MostFocused);                            // a new stone opens at its reference
         Assert.Equal(0, window.CurrentPage);
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -284,9 +290,7 @@ public sealed class MainWindowTests : IDisposable
         Settle();
         Assert.Equal("1.65", _session.Form.Text(BenchFields.IndexAtB));
         Assert.Null(_session.Form.Choice(BenchFields.Dispersion));
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -310,9 +314,7 @@ public sealed class MainWindowTests : IDisposable
         Assert.Contains("Quartz ", screen);        // the species leads
         app.InjectKey(Key.F10);
         Assert.Same(window.Refractometer.Low, window.MostFocused);
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -327,9 +329,7 @@ public sealed class MainWindowTests : IDisposable
         app.LayoutAndDraw();
         Assert.False(window.TooSmall);
         Assert.Contains("F3 RI", app.Driver!.ToString()!);
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -352,9 +352,7 @@ public sealed class MainWindowTests : IDisposable
         string caution = System.Text.RegularExpressions.Regex.Replace(window.Gravity.Caution.Text, @"\s+", " ");
         Assert.Contains("Do not immerse: opal is among the top candidates.", caution);
         Assert.EndsWith("rely on the other tests.", caution);
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     /// <summary>The form's side of the screen (inside its frame) as one line, runs of spaces made one: what the user reads on the page.</summary>
@@ -379,9 +377,7 @@ public sealed class MainWindowTests : IDisposable
         Assert.Matches(@"SG 2\.99\d ± 0\.0\d\d from the weights \(the SG typed is refused\)", page);
         Assert.InRange(_session.Results.Latest!.SpecificGravity!.Value.Value, 2.990, 3.000);
         Assert.Contains("! SG: '2,6x' has a comma", page);       // the typed value's own reason, not a clash
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Theory]
@@ -411,9 +407,7 @@ public sealed class MainWindowTests : IDisposable
         Assert.DoesNotContain("sg.", page);
         string answer = System.Text.RegularExpressions.Regex.Replace(string.Join(" ", window.Results.Rows.Select(r => r.Text)), @"\s+", " ");
         Assert.Contains("Specific gravity: none used (the SG page, F4, says why)", answer);
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -436,9 +430,7 @@ public sealed class MainWindowTests : IDisposable
             string words = System.Text.RegularExpressions.Regex.Replace(window.Refractometer.InCaptions(reason), @"\s+", " ");
             Assert.True(page.Contains(words, StringComparison.Ordinal) || !page.Contains(words[..Math.Min(12, words.Length)], StringComparison.Ordinal), $"cut short: {words}\n{page}");
         }
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -460,9 +452,7 @@ public sealed class MainWindowTests : IDisposable
         string page = FormText(app.Driver!.ToString()!);
         Assert.Contains("! step 3: edge 2.1 is above the liquid limit 1.790, where no edge can be seen (a denser liquid? give its index in Liquid limit).", page);
         Assert.Contains(BenchPage.MoreProblems, page);
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -483,9 +473,7 @@ public sealed class MainWindowTests : IDisposable
         app.LayoutAndDraw();
         Assert.Equal(0, window.Results.List.Viewport.Y);
         Assert.Equal(0, window.Results.List.SelectedItem);
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -500,9 +488,7 @@ public sealed class MainWindowTests : IDisposable
         app.LayoutAndDraw();
         screen = app.Driver!.ToString()!.Split('\n');
         Assert.StartsWith(BenchPage.FieldKeys, screen.Last(l => l.Trim().Length > 0).Trim());
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -519,9 +505,7 @@ public sealed class MainWindowTests : IDisposable
         Assert.Equal(["1.553", "1.549"], _session.Form.Steps.Select(s => s.High).ToArray());
         app.InjectKey(Key.Z.WithCtrl);
         Assert.Equal(["1.553", "1.551", "1.549"], _session.Form.Steps.Select(s => s.High).ToArray());
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -536,9 +520,7 @@ public sealed class MainWindowTests : IDisposable
         app.LayoutAndDraw();
         string answer = System.Text.RegularExpressions.Regex.Replace(string.Join(" ", window.Results.Rows.Select(r => r.Text)), @"\s+", " ");
         Assert.Contains(GemIndex.Cli.TextUi.Results.ResultsModel.RefusedLine(1), answer);
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -550,9 +532,7 @@ public sealed class MainWindowTests : IDisposable
         Settle();
         app.LayoutAndDraw();
         Assert.Contains("lot_7 a_b", app.Driver!.ToString()!.Split('\n')[0]);   // Terminal.Gui's label would take the first '_' as a hot key
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -571,9 +551,7 @@ public sealed class MainWindowTests : IDisposable
         Assert.Contains(StonePage.ExaminerNote.Trim(), screen);
         Assert.True(_session.Flush());
         Assert.Equal("A. Example", _workbook.Setting(BenchSession.ExaminerSetting));
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -585,9 +563,7 @@ public sealed class MainWindowTests : IDisposable
         app.InjectKey(Key.Tab);
         Type(app, "1.770");        // no Enter: the terminal closes here
         Settle();
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
 
         var (again, reopened) = Restart();
         using var _ = reopened;
@@ -609,9 +585,7 @@ public sealed class MainWindowTests : IDisposable
         app.InjectKey(Key.Enter);          // edit step 1
         window.Refractometer.Low.Text = "1.618";
         Settle();
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
 
         var (again, reopened) = Restart();
         using var _ = reopened;
@@ -658,9 +632,7 @@ public sealed class MainWindowTests : IDisposable
         Settle();
         Assert.Equal("", _session.Form.Text(BenchFields.FeaturesAbsent));
         Assert.Empty(_workbook.Get(id)!.Readings.FeaturesAbsent);
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Fact]
@@ -687,9 +659,7 @@ public sealed class MainWindowTests : IDisposable
         app.InjectKey(Key.CursorDown);
         app.InjectKey(new Key('+'));
         Settle();
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
 
         var (again, reopened) = Restart();                          // the stone changed last opens
         using var _ = reopened;
@@ -714,9 +684,7 @@ public sealed class MainWindowTests : IDisposable
         int inclusions = window.Loupe.Model.Rows.ToList().FindIndex(r => r.IsHeading && r.Group == FeatureGroup.Inclusion);
         app.InjectSequence(InputInjectionExtensions.LeftButtonClick(window.Loupe.List.ViewportToScreen(new System.Drawing.Point(2, inclusions))));
         Assert.Equal(MagnificationFeature.RoundGasBubbles, window.Loupe.Current?.Feature?.Feature);
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 
     [Theory]
@@ -740,8 +708,6 @@ public sealed class MainWindowTests : IDisposable
         string[] shown = [.. lines.Skip(3).Take(window.Loupe.List.Viewport.Height).Select(l => l.Split('│')[1].TrimEnd())];
         Assert.Equal(whole.Take(shown.Length), shown);
         Assert.True(shown.Length >= LoupeModel.MinimumListRows);
-        window.Dispose();
-        app.End(token);
-        app.Dispose();
+        Close(app, window, token);
     }
 }
