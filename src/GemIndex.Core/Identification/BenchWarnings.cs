@@ -34,6 +34,9 @@ public static class BenchWarnings
         }
         if (sheet.Sheet.Refractometer is { OverLimit: true } r)
             warnings.Add($"Over the limit: no stone edge below {r.LiquidLimit.ToString("0.00", CultureInfo.InvariantCulture)}; the index is only known to be higher. SG, dispersion, the thermal probe or a reflectance or prism method can go further.");
+        if (sheet.Sheet.SpecificGravity is { } measured)
+            foreach (var h in sheet.Sheet.HeavyLiquids.Where(h => Contradicts(measured, h)))
+                warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");
         if (sheet.Sheet.SpecificGravity is { StandardUncertainty: > 0.03 } sg)
             warnings.Add($"SG uncertainty ±{sg.StandardUncertainty.ToString("0.00", CultureInfo.InvariantCulture)} is large (a small stone or a coarse balance): SG separates little here.");
         var relevant = candidates.Where(c => c.Confidence >= Relevant).ToList();
@@ -100,4 +103,22 @@ public static class BenchWarnings
     private static string P(double p) => p.ToString("0.00", CultureInfo.InvariantCulture);
 
     private static string Capital(string s) => s.Length == 0 ? s : char.ToUpperInvariant(s[0]) + s[1..];
+
+    /// <summary>
+    /// A measured SG and a heavy-liquid result disagree when the SG lies beyond what the result allows by more than
+    /// <see cref="HeavyLiquidClashCoverage"/> standard uncertainties of the SG (and the suspension's own tolerance).
+    /// </summary>
+    internal static bool Contradicts(Gravity.SpecificGravity sg, Gravity.HeavyLiquidResult h)
+    {
+        double margin = HeavyLiquidClashCoverage * sg.StandardUncertainty;
+        return sg.Value + margin < h.LowestSpecificGravity || sg.Value - margin > h.HighestSpecificGravity;
+    }
+
+    /// <summary>Two standard uncertainties (about 95 %; common practice in measurement) before a clash is said.</summary>
+    public const double HeavyLiquidClashCoverage = 2;
+
+    private static string Word(Gravity.HeavyLiquidOutcome o) => o.ToString().ToLowerInvariant();
+
+    private static string Expected(Gravity.SpecificGravity sg, Gravity.HeavyLiquidResult h) =>
+        Math.Abs(sg.Value - h.Liquid.Value) <= h.Tolerance ? "stay suspended" : sg.Value > h.Liquid.Value ? "sink" : "float";
 }

@@ -320,6 +320,20 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void An_SG_that_a_heavy_liquid_result_contradicts_is_said_with_both()
+    {
+        // A stone of SG 3.99 sinks in a liquid of 3.32 (the definition of the test; common practice).
+        var floats = new HeavyLiquidResult(new SpecificGravity(3.32), HeavyLiquidOutcome.Floats);
+        var clash = Engine.Identify(new BenchSheet { SpecificGravity = new SpecificGravity(3.99, 0.01), HeavyLiquids = [floats] });
+        Assert.Contains(clash.Warnings, w => w.StartsWith("SG 3.99 and the heavy liquid 3.32 (floats) disagree: a stone of that SG would sink", StringComparison.Ordinal));
+        var agrees = Engine.Identify(new BenchSheet { SpecificGravity = new SpecificGravity(2.65, 0.01), HeavyLiquids = [floats] });
+        Assert.DoesNotContain(agrees.Warnings, w => w.Contains("disagree", StringComparison.Ordinal));
+        // Within two standard uncertainties of the liquid: no clash said (3.33 ± 0.01 "floats" in 3.32).
+        Assert.DoesNotContain(Engine.Identify(new BenchSheet { SpecificGravity = new SpecificGravity(3.33, 0.01), HeavyLiquids = [floats] }).Warnings,
+            w => w.Contains("disagree", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void Colour_alone_never_decides_the_origin()
     {
         // The natural entry lists blue, the treated one orange (invented shares, both common): an orange stone read only on
