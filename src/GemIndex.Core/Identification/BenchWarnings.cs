@@ -36,7 +36,7 @@ public static class BenchWarnings
             warnings.Add($"Over the limit: no stone edge below {r.LiquidLimit.ToString("0.00", CultureInfo.InvariantCulture)}; the index is only known to be higher. SG, dispersion, the thermal probe or a reflectance or prism method can go further.");
         if (sheet.Sheet.SpecificGravity is { } measured)
             foreach (var h in sheet.Sheet.HeavyLiquids.Where(h => Contradicts(measured, h)))
-                warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");
+                warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");
         if (sheet.Sheet.SpecificGravity is { StandardUncertainty: > 0.03 } sg)
             warnings.Add($"SG uncertainty ±{sg.StandardUncertainty.ToString("0.00", CultureInfo.InvariantCulture)} is large (a small stone or a coarse balance): SG separates little here.");
         var relevant = candidates.Where(c => c.Confidence >= Relevant).ToList();
@@ -116,8 +116,6 @@ public static class BenchWarnings
 
     /// <summary>Two standard uncertainties (about 95 %; common practice in measurement) before a clash is said.</summary>
     public const double HeavyLiquidClashCoverage = 2;
-
-    private static string Word(Gravity.HeavyLiquidOutcome o) => o.ToString().ToLowerInvariant();
 
     private static string Expected(Gravity.SpecificGravity sg, Gravity.HeavyLiquidResult h) =>
         Math.Abs(sg.Value - h.Liquid.Value) <= h.Tolerance ? "stay suspended" : sg.Value > h.Liquid.Value ? "sink" : "float";

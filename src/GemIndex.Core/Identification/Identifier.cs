@@ -130,29 +130,22 @@ public sealed class Identifier
     /// entry), most probable species first, then the most probable entries. A species with many varieties must not fill
     /// the list with entries the readings rule out while another species' likely entry is left off, and a species whose
     /// mass is spread over many small entries must not be left off while a species of one small entry is shown.
+    /// Read off the species-first order (<see cref="SpeciesFirst"/>): its runs are the species by total, each run's
+    /// first entry the species' best.
     /// </summary>
-    private bool[] Shown(double[] posterior, int[] byEntry, int count)
+    private bool[] Shown(double[] posterior, int[] byEntry, int[] order, int count)
     {
         var shown = new bool[posterior.Length];
         if (count == 0) return shown;
         double cut = posterior[byEntry[count - 1]];
-        var best = new int[_speciesCount];
-        Array.Fill(best, -1);
-        var totals = new double[_speciesCount];
-        var firstSeen = new List<int>();
-        foreach (int i in byEntry)
-        {
-            int k = _speciesOf[i];
-            totals[k] += posterior[i];
-            if (best[k] < 0) { best[k] = i; firstSeen.Add(k); }
-        }
-        // A stable sort: species of equal totals keep the order of their best entries. The first few species are shown
-        // whatever their entries' shares, so the answer's species list always holds the leading three.
         int taken = 0;
-        foreach (int k in firstSeen.OrderByDescending(k => totals[k]))
+        for (int start = 0, end; start < order.Length && taken < count; start = end)
         {
-            if (taken == count || (taken >= SpeciesAlwaysShown && totals[k] < cut) || totals[k] <= 0) break;
-            shown[best[k]] = true;
+            int species = _speciesOf[order[start]];
+            double total = 0;
+            for (end = start; end < order.Length && _speciesOf[order[end]] == species; end++) total += posterior[order[end]];
+            if ((taken >= SpeciesAlwaysShown && total < cut) || total <= 0) break;
+            shown[order[start]] = true;
             taken++;
         }
         foreach (int i in byEntry)
@@ -369,7 +362,7 @@ public sealed class Identifier
 
         int[] byEntry = Ranked(posterior);
         int[] order = SpeciesFirst(posterior, byEntry);
-        var shown = Shown(posterior, byEntry, Math.Min(maximumCandidates, n));
+        var shown = Shown(posterior, byEntry, order, Math.Min(maximumCandidates, n));
         var candidates = new List<RankedCandidate>(Math.Min(maximumCandidates, n));
         foreach (int i in order)
         {

@@ -32,7 +32,7 @@ internal static class ReportDerived
     public static string SignText(StoneReport report)
     {
         // A reading whose character the series leaves open has no sign to give ("none" is a singly refractive stone's).
-        var signs = report.Interpretations.Where(i => i.Character != Undetermined)
+        var signs = report.Interpretations.Where(i => !i.IsUndetermined)
             .GroupBy(i => i.Sign).Select(g => (Sign: g.Key, Weight: g.Sum(i => i.Weight))).OrderByDescending(g => g.Weight).ToList();
         if (signs.Count == 0) return "not fixed";
         if (signs.Count == 1 || signs[0].Weight >= SettledShare) return signs[0].Sign;
@@ -40,12 +40,9 @@ internal static class ReportDerived
     }
 
     /// <summary>One reading of the series in a line: "uniaxial, sign positive (chance 50%): …".</summary>
-    public static string Line(ReportInterpretation i) => i.Character == Undetermined
+    public static string Line(ReportInterpretation i) => i.IsUndetermined
         ? $"{i.Character} (chance {ReportNumbers.WholePercent(i.Weight)}): {i.Description}"
         : $"{i.Character}, sign {i.Sign} (chance {ReportNumbers.WholePercent(i.Weight)}): {i.Description}";
-
-    /// <summary>The character word of a reading the series leaves open (<see cref="StoneReport"/>).</summary>
-    private const string Undetermined = "undetermined";
 
     /// <summary>How strongly a test speaks for or against a candidate, in words (a likelihood ratio of 10 is "strongly", of 2 plain).</summary>
     public static string Strength(EvidenceContribution reason)

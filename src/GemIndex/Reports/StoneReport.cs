@@ -98,7 +98,7 @@ internal sealed record StoneReport
     ];
 
     private static ReportInterpretation Interpretation(SeriesInterpretation i) => new(
-        i.Character is { } c ? Word(c.ToString()) : "undetermined", Word(i.Sign.ToString()), i.Weight,
+        i.Character is { } c ? Word(c.ToString()) : ReportInterpretation.Undetermined, Word(i.Sign.ToString()), i.Weight,
         i.Lowest.Value, i.Highest.Value, i.Beta?.Value, i.Birefringence.Value, i.Birefringence.StandardUncertainty, i.Description);
 
     /// <summary>The least confidence a printed report lists: what rounds to 0.1 % (below it the line would read 0.0 %).</summary>

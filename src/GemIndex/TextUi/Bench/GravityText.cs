@@ -24,12 +24,13 @@ internal static class GravityText
     public static string Describe(BenchSnapshot form, SpecificGravity? used)
     {
         string typedText = form.Text(BenchFields.Sg).Trim();
-        bool typedRefused = typedText.Length > 0 && BenchReader.Read(new BenchReadings().With(BenchField.Sg, typedText)).Errors.Count > 0;
+        // The typed SG read alone, once: refused or not, and its value.
+        BenchReading? typedAlone = typedText.Length > 0 ? BenchReader.Read(new BenchReadings().With(BenchField.Sg, typedText)) : null;
         if (used is { } sg)
-            return ResultText.Gravity(sg) + (typedText.Length == 0 ? " from the weights" : typedRefused ? " from the weights (the SG typed is refused)" : " as typed");
+            return ResultText.Gravity(sg) + (typedAlone is null ? " from the weights" : typedAlone.Errors.Count > 0 ? " from the weights (the SG typed is refused)" : " as typed");
         bool weighing = new[] { BenchFields.AirCt, BenchFields.WaterCt }.Any(f => form.Text(f).Trim().Length > 0);
-        if (typedText.Length == 0 || !weighing) return None;
-        SpecificGravity? typed = BenchReader.Read(new BenchReadings().With(BenchField.Sg, typedText)).Sheet.SpecificGravity;
+        if (typedAlone is null || !weighing) return None;
+        SpecificGravity? typed = typedAlone.Sheet.SpecificGravity;
         string typedWords = typed is { } t ? $"SG typed {Value(t)}" : $"SG typed '{BenchText.Shown(typedText)}'";
         if (Weighed(form) is not { } w) return $"!! {typedWords} and a weighing begun. {NeitherUsed}";
         string verdict = typed is not { } both ? "." : Disagree(both, w) ? ": they disagree." : ": they agree.";

@@ -55,13 +55,10 @@ internal sealed class RefractometerPage : BenchPage
             };
         Grid.KeyDown += (_, key) =>
         {
+            if (key == Key.Z.WithCtrl && RestoreRequested is not null) { RestoreRequested(); key.Handled = true; return; }   // with or without a step selected
             if (Grid.SelectedItem is not { } i || i >= _stepCount) return;
             if (key == Key.Enter) { EditRequested?.Invoke(i); key.Handled = true; }
             else if (key == Key.Delete) { RemoveRequested?.Invoke(i); key.Handled = true; }
-        };
-        Grid.KeyDown += (_, key) =>
-        {
-            if (key == Key.Z.WithCtrl && RestoreRequested is not null) { RestoreRequested(); key.Handled = true; }
         };
     }
 

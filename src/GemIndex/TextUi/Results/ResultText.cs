@@ -140,19 +140,18 @@ internal static class ResultText
         return lines;
     }
 
-    /// <summary>The other tests the answer used, in the bench's words (every reading that parsed is weighed).</summary>
+    /// <summary>The other tests the answer used, in the words of the pages they were typed on (every reading that parsed is weighed).</summary>
     private static IEnumerable<string> OtherTests(StoneReadings r)
     {
-        static string Words(string wire) => wire.Replace('_', ' ');
         if (r.HeavyLiquids.Count > 0) yield return $"Heavy liquids: {r.HeavyLiquids.Count}";
-        if (r.Polariscope is { } p) yield return $"Polariscope: {Words(p)}";
-        if (r.Pleochroism is { } pl) yield return $"Pleochroism: {Words(pl)}";
-        if (r.Dispersion is { } d) yield return $"Fire (eye): {Words(d)}";
+        (string Field, string? Word)[] choices =
+        [
+            (BenchFields.Polariscope, r.Polariscope), (BenchFields.Pleochroism, r.Pleochroism), (BenchFields.Dispersion, r.Dispersion),
+            (BenchFields.ThermalProbe, r.ThermalProbe), (BenchFields.Electrical, r.Electrical), (BenchFields.UvLong, r.UvLong), (BenchFields.UvShort, r.UvShort),
+        ];
+        foreach (var (field, word) in choices)
+            if (word is not null && BenchChoice.For(field) is var choice) yield return $"{choice.Label}: {choice.Show(word)}";
         if (r.DispersionIndices is { } nb) yield return $"Dispersion: RI at B {Index(nb.NB)}, at G {Index(nb.NG)}";
-        if (r.ThermalProbe is { } t) yield return $"Thermal probe: {Words(t)}";
-        if (r.Electrical is { } e) yield return $"Conductivity: {Words(e)}";
-        if (r.UvLong is { } ul) yield return $"UV long wave: {Words(ul)}";
-        if (r.UvShort is { } us) yield return $"UV short wave: {Words(us)}";
         if (r.AbsorptionNm is { } lines)
             yield return lines.Count == 0 ? "Absorption: no lines" : "Absorption: " + string.Join(", ", lines.Select(n => n.ToString("0.#", CultureInfo.InvariantCulture))) + " nm";
         if (r.Colour is { } c) yield return $"Colour: {c}";
