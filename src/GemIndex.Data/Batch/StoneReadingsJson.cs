@@ -8,7 +8,9 @@ namespace GemIndex.Data.Batch;
 /// Reads and writes one line of the batch format (JSON, one stone per line). Reading turns every value into the text
 /// Core's <see cref="BenchReader"/> reads (a JSON number as written, a list of steps into steps, heavy liquids and
 /// absorption lines into <see cref="BenchSyntax"/>), so a value of the wrong kind is reported by the reader with
-/// every other bad field. Unknown fields are ignored, as the format says. Errors name the field by its path.
+/// every other bad field. A field the format does not know is not read and is named in <see cref="BatchLine.Unread"/>
+/// (with the known field it was likely meant for), so a misspelt reading is never lost in silence. Errors name the
+/// field by its path.
 /// </summary>
 public static class StoneReadingsJson
 {
@@ -35,7 +37,7 @@ public static class StoneReadingsJson
                 return new BatchLine(new BenchReadings(), [new BenchFieldError("$", "", "one JSON object", "each line must be one JSON object.")]);
             var reader = new LineReader(errors);
             BenchReadings readings = reader.Stone(root);
-            return new BatchLine(readings, errors);
+            return new BatchLine(readings, errors) { Unread = reader.Unread };
         }
     }
 
@@ -48,10 +50,46 @@ public static class StoneReadingsJson
         return StoneReadingsConverter.FromReadings(read.Readings, lenient: false);
     }
 
+    /// <summary>The names each object of the format holds, keyed by the object's path ("" for the line itself).</summary>
+    private static readonly Dictionary<string, string[]> Names = new()
+    {
+        [""] = [.. BenchField.All.Select(f => f.Split('.')[0]).Append(BenchField.Refractometer).Append(Magnification).Distinct()],
+        [BenchField.Refractometer] = Inside(BenchField.Refractometer, BenchField.Readings),
+        [BenchField.Sg] = Inside(BenchField.Sg),
+        [BenchField.Dispersion] = Inside(BenchField.Dispersion),
+        [Magnification] = Inside(Magnification),
+        [BenchField.Readings] = ["rotation_deg", "low", "high"],
+        [BenchField.HeavyLiquids] = ["density", "result"],
+    };
+
+    private static string[] Inside(string parent, params string[] more) =>
+        [.. BenchField.All.Concat(more).Where(f => f.StartsWith(parent + ".", StringComparison.Ordinal)).Select(f => f[(parent.Length + 1)..])];
+
     private sealed class LineReader(List<BenchFieldError> errors)
     {
+        public List<UnreadField> Unread { get; } = [];
+
+        /// <summary>Notes every field of an object the format does not know; <paramref name="kind"/> keys <see cref="Names"/>.</summary>
+        private void NoteUnknown(JsonElement obj, string path, string kind)
+        {
+            string[] known = Names[kind];
+            foreach (var property in obj.EnumerateObject())
+            {
+                if (known.Contains(property.Name, StringComparer.Ordinal)) continue;
+                string name = SafeName(property);
+                Unread.Add(new UnreadField(path.Length == 0 ? name : $"{path}.{name}", FieldNames.Near(name, known), known));
+            }
+        }
+
+        private static string SafeName(JsonProperty property)
+        {
+            try { return BenchText.Shown(property.Name); }
+            catch (InvalidOperationException) { return "(a name that is not valid text)"; }
+        }
+
         public BenchReadings Stone(JsonElement root)
         {
+            NoteUnknown(root, "", "");
             var r = new BenchReadings();
             if (!root.TryGetProperty(BenchField.Id, out var id) || id.ValueKind == JsonValueKind.Null)
                 errors.Add(new BenchFieldError(BenchField.Id, "", "a string", "is required."));
@@ -65,8 +103,11 @@ public static class StoneReadingsJson
             if (Child(root, BenchField.Sg) is { } sg)
             {
                 if (sg.ValueKind == JsonValueKind.Object)
+                {
+                    NoteUnknown(sg, BenchField.Sg, BenchField.Sg);
                     r = r.With(BenchField.AirCt, Num(sg, "air_ct", BenchField.AirCt)).With(BenchField.WaterCt, Num(sg, "water_ct", BenchField.WaterCt))
                         .With(BenchField.WaterC, Num(sg, "water_c", BenchField.WaterC));
+                }
                 else if (sg.ValueKind == JsonValueKind.Number) r = r.With(BenchField.Sg, sg.GetRawText());
                 else errors.Add(new BenchFieldError(BenchField.Sg, BenchText.Shown(sg.GetRawText()), "a number or {\"air_ct\", \"water_ct\", \"water_c\"}",
                     $"must be a number or {{\"air_ct\", \"water_ct\", \"water_c\"}}, not {Kind(sg)}."));
@@ -79,7 +120,11 @@ public static class StoneReadingsJson
                     string path = $"{BenchField.HeavyLiquids}[{i}]";
                     if (entries[i].ValueKind != JsonValueKind.Object)
                         errors.Add(new BenchFieldError(path, BenchText.Shown(entries[i].GetRawText()), "{\"density\", \"result\"}", "must be an object {\"density\", \"result\"}."));
-                    else texts.Add($"{Num(entries[i], "density", path + ".density") ?? ""} {Value(entries[i], "result", path + ".result") ?? ""}".Trim());
+                    else
+                    {
+                        NoteUnknown(entries[i], path, BenchField.HeavyLiquids);
+                        texts.Add($"{Num(entries[i], "density", path + ".density") ?? ""} {Value(entries[i], "result", path + ".result") ?? ""}".Trim());
+                    }
                 }
                 r = r.With(BenchField.HeavyLiquids, BenchSyntax.HeavyLiquids(texts));
             }
@@ -88,7 +133,10 @@ public static class StoneReadingsJson
             if (Child(root, BenchField.Dispersion) is { } dispersion)
             {
                 if (dispersion.ValueKind == JsonValueKind.Object)
+                {
+                    NoteUnknown(dispersion, BenchField.Dispersion, BenchField.Dispersion);
                     r = r.With(BenchField.IndexAtB, Num(dispersion, "nB", BenchField.IndexAtB)).With(BenchField.IndexAtG, Num(dispersion, "nG", BenchField.IndexAtG));
+                }
                 else r = r.With(BenchField.Dispersion, Word(dispersion, BenchField.Dispersion));
             }
             if (Child(root, BenchField.Absorption) is { } lines && List(lines, BenchField.Absorption) is { } nm)
@@ -98,8 +146,12 @@ public static class StoneReadingsJson
                 if (magnification.ValueKind != JsonValueKind.Object)
                     errors.Add(new BenchFieldError(Magnification, BenchText.Shown(magnification.GetRawText()), "{\"present\": [...], \"absent\": [...]}",
                         $"must be an object {{\"present\": [...], \"absent\": [...]}}, not {Kind(magnification)}."));
-                else r = r.With(BenchField.FeaturesPresent, Features(magnification, "present", BenchField.FeaturesPresent))
-                    .With(BenchField.FeaturesAbsent, Features(magnification, "absent", BenchField.FeaturesAbsent));
+                else
+                {
+                    NoteUnknown(magnification, Magnification, Magnification);
+                    r = r.With(BenchField.FeaturesPresent, Features(magnification, "present", BenchField.FeaturesPresent))
+                        .With(BenchField.FeaturesAbsent, Features(magnification, "absent", BenchField.FeaturesAbsent));
+                }
             }
             return r;
         }
@@ -117,6 +169,7 @@ public static class StoneReadingsJson
 
         private BenchReadings Refractometer(JsonElement rf, BenchReadings r)
         {
+            NoteUnknown(rf, BenchField.Refractometer, BenchField.Refractometer);
             r = r.With(BenchField.Method, Value(rf, "method", BenchField.Method)).With(BenchField.LightNm, Num(rf, "light_nm", BenchField.LightNm))
                 .With(BenchField.LiquidLimit, Num(rf, "liquid_limit", BenchField.LiquidLimit)).With(BenchField.Spot, Num(rf, "spot", BenchField.Spot))
                 .With(BenchField.Precision, Num(rf, "precision", BenchField.Precision))
@@ -138,6 +191,7 @@ public static class StoneReadingsJson
                         errors.Add(new BenchFieldError(path, BenchText.Shown(steps[i].GetRawText()), "{\"rotation_deg\", \"low\", \"high\"}", "must be an object {\"rotation_deg\", \"low\", \"high\"}."));
                         continue;
                     }
+                    NoteUnknown(steps[i], path, BenchField.Readings);
                     r = r.WithStep(new EdgeStepText(Num(steps[i], "rotation_deg", path + ".rotation_deg") ?? "",
                         Num(steps[i], "low", path + ".low") ?? "", Num(steps[i], "high", path + ".high") ?? ""));
                 }

@@ -2,6 +2,7 @@ using GemIndex.Data.Catalogue;
 using System.CommandLine;
 using System.CommandLine.Parsing;
 using System.Globalization;
+using GemIndex.Cli.Identification;
 using GemIndex.Cli.Reports;
 using GemIndex.Core.Bench;
 using GemIndex.Core.Catalogue;
@@ -220,7 +221,7 @@ internal static class ReportCommand
             return ExitCodes.BadInput;
         }
         StoneReadings stored = StoneReadingsConverter.FromReadings(read.Readings, lenient: false);
-        var report = StoneReport.Build(new StoneSheet { Reference = stored.Id, Readings = stored }, result, header);
+        var report = StoneReport.Build(new StoneSheet { Reference = stored.Id, Readings = stored }, BatchIdentification.WithUnread(result, read), header);
         return Write(report, stored.Id, format, output, o);
     }
 

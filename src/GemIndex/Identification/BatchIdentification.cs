@@ -49,6 +49,10 @@ internal static class BatchIdentification
         return failed;
     }
 
+    /// <summary>The answer with a warning first for each field the line holds that the format does not know (it was not read).</summary>
+    public static IdentificationResult WithUnread(IdentificationResult result, BatchLine read) =>
+        read.Unread.Count == 0 ? result : result with { Warnings = [.. read.Unread.Select(u => u.Message), .. result.Warnings] };
+
     /// <summary>One line's answer: its result document, or its error document.</summary>
     public static (string Answer, bool Failed) Answer(int lineNumber, string? line, Identifier identifier, BenchRequest request)
     {
@@ -62,7 +66,7 @@ internal static class BatchIdentification
             if (read.Errors.Count > 0) return (ResultDocument.Error(lineNumber, id, read.Errors), true);
             BenchOutcome outcome = BenchIdentification.Identify(identifier, read.Readings, request);
             return outcome.Result is { } result
-                ? (ResultDocument.Line(result, request.ExplainTop > 0), false)
+                ? (ResultDocument.Line(WithUnread(result, read), request.ExplainTop > 0), false)
                 : (ResultDocument.Error(lineNumber, id, outcome.Reading.Errors), true);
         }
         catch (Exception e) when (e is not OutOfMemoryException)

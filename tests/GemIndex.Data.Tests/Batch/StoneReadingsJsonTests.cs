@@ -109,8 +109,51 @@ public class StoneReadingsJsonTests
     }
 
     [Fact]
-    public void Unknown_fields_are_ignored_as_the_format_says()
+    public void An_unknown_field_is_no_error_but_is_named_as_not_read()
     {
-        Assert.Empty(Errors("""{"id":"x","sg":2.65,"lustre":"vitreous"}"""));
+        const string line = """{"id":"x","sg":2.65,"lustre":"vitreous"}""";
+        Assert.Empty(Errors(line));
+        UnreadField unread = Assert.Single(StoneReadingsJson.Read(line).Unread);
+        Assert.Equal("lustre", unread.Path);
+        Assert.Empty(unread.Meant);
+        Assert.Contains("absorption_nm", unread.Known);
+        Assert.StartsWith("\"lustre\" was not read", unread.Message, StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("""{"id":"x","color":"red"}""", "color", "colour")]
+    [InlineData("""{"id":"x","SG":2.65}""", "SG", "sg")]
+    [InlineData("""{"id":"x","absorption":[694]}""", "absorption", "absorption_nm")]
+    [InlineData("""{"id":"x","uv":"weak"}""", "uv", "uv_long|uv_short")]
+    [InlineData("""{"id":"x","heavy_liquid":[]}""", "heavy_liquid", "heavy_liquids")]
+    [InlineData("""{"id":"x","refractometer":{"spot":1.54,"liquidlimit":1.79}}""", "refractometer.liquidlimit", "liquid_limit")]
+    [InlineData("""{"id":"x","refractometer":{"readings":[{"rotation":0,"low":1.54}]}}""", "refractometer.readings[0].rotation", "rotation_deg")]
+    [InlineData("""{"id":"x","sg":{"air_c":1,"water_ct":0.6,"water_c":20}}""", "sg.air_c", "air_ct")]
+    [InlineData("""{"id":"x","heavy_liquids":[{"density":3.32,"results":"sinks"}]}""", "heavy_liquids[0].results", "result")]
+    [InlineData("""{"id":"x","dispersion":{"nb":1.7,"nG":1.72}}""", "dispersion.nb", "nB")]
+    [InlineData("""{"id":"x","magnification":{"presents":["flux_residue"]}}""", "magnification.presents", "present")]
+    public void A_misspelt_field_is_named_with_the_field_it_was_likely_meant_to_be(string line, string path, string meant)
+    {
+        UnreadField unread = Assert.Single(StoneReadingsJson.Read(line).Unread);
+        Assert.Equal(path, unread.Path);
+        Assert.Equal(meant.Split('|'), unread.Meant);
+        Assert.Contains("did you mean", unread.Message, StringComparison.Ordinal);
+    }
+
+    [FsCheck.Xunit.Property(MaxTest = 200)]
+    public Property A_line_written_by_the_format_has_no_unread_field()
+    {
+        return Prop.ForAll(Stones.ToArbitrary(), stone => StoneReadingsJson.Read(StoneReadingsJson.Write(stone)).Unread.Count == 0);
+    }
+
+    [Theory]
+    [InlineData("colour", "color", 1)]
+    [InlineData("kitten", "sitting", 3)] // the textbook example of the distance (from memory)
+    [InlineData("", "sg", 2)]
+    [InlineData("uv_long", "uv_long", 0)]
+    public void Edits_count_letters_changed_added_or_dropped(string a, string b, int edits)
+    {
+        Assert.Equal(edits, FieldNames.Edits(a, b));
+        Assert.Equal(edits, FieldNames.Edits(b, a));
     }
 }

@@ -41,6 +41,9 @@ public class IdentifyCommandTests
         Assert.Equal(JsonValueKind.Array, quartz.RootElement.GetProperty("warnings").ValueKind);
         using var diamond = JsonDocument.Parse(lines[1]);
         Assert.Equal("diamond", diamond.RootElement.GetProperty("species")[0].GetProperty("species").GetString());
+        // A field the format does not know is not read, and the answer says so first.
+        Assert.StartsWith("\"unknown_field\" was not read", diamond.RootElement.GetProperty("warnings")[0].GetString(), StringComparison.Ordinal);
+        Assert.DoesNotContain(quartz.RootElement.GetProperty("warnings").EnumerateArray(), w => w.GetString()!.Contains("was not read", StringComparison.Ordinal));
     }
 
     [Fact]

@@ -68,6 +68,15 @@ public sealed class ReportCommandTests : IDisposable
     }
 
     [Fact]
+    public void A_field_the_format_does_not_know_is_named_in_the_report_as_not_read()
+    {
+        string line = ReportFixtures.QuartzLine.TrimEnd().TrimEnd('}') + ",\"color\":\"colourless\"}";
+        var (exit, stdout, _) = Run("report", "stone", "--readings", Batch(line));
+        Assert.Equal(ExitCodes.Ok, exit);
+        Assert.Contains("\"color\" was not read: the batch format has no such field; did you mean \"colour\"?", stdout);
+    }
+
+    [Fact]
     public void A_bad_line_is_reported_with_its_field_and_a_non_zero_exit()
     {
         string output = Path.Combine(_dir, "never.md");
