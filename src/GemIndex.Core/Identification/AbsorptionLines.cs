@@ -6,12 +6,17 @@ namespace GemIndex.Core.Identification;
 /// The likelihood of the lines seen in a hand spectroscope under a material's listed lines (docs/ranking.md §2): each
 /// listed line is seen with a probability set by its strength, at its wavelength with the instrument's error; a seen
 /// line no listed line explains is spurious (a Poisson rate of stray lines, anywhere in the visible). Seen lines are
-/// paired with listed ones greedily, nearest first, within four standard deviations.
+/// paired with listed ones greedily, nearest first, within four standard deviations. Listed lines no farther apart than
+/// the instrument's resolution are seen as one line (ruby's 694.2 / 692.8 nm doublet is written "694"): one seen line
+/// stands for all of them, and those left unpaired beside a paired one are not counted as missed.
 /// </summary>
 internal static class AbsorptionLines
 {
     /// <summary>A hand spectroscope's error on a line's position, about 2 nm (its resolution; common practice).</summary>
     public const double PositionSigmaNanometres = 2;
+
+    /// <summary>Listed lines this close or closer read as one line in a hand spectroscope: its resolution, as <see cref="PositionSigmaNanometres"/>.</summary>
+    public const double ResolutionNanometres = PositionSigmaNanometres;
 
     /// <summary>Mean number of stray lines a reading shows on a stone that has none listed (a judgement: faint bands, mis-seen Fraunhofer lines).</summary>
     public const double SpuriousLineRate = 0.1;
@@ -46,13 +51,47 @@ internal static class AbsorptionLines
                 double z = (x - listed[i].Nanometres) / PositionSigmaNanometres;
                 log += Math.Log(d) - 0.5 * z * z - Math.Log(PositionSigmaNanometres * Math.Sqrt(2 * Math.PI));
             }
-            else
+            else if (!SeenBeside(listed, matched, i))
             {
                 log += Math.Log(1 - d);
                 if (listed[i].Strength == LineStrength.Strong) missedStrong++;
             }
         }
         return log + unexplained * Math.Log(SpuriousLineRate / VisibleSpanNanometres);
+    }
+
+    /// <summary>Whether a listed line within the resolution of this one (through a chain of such lines) was seen: then one seen line stands for them.</summary>
+    private static bool SeenBeside(IReadOnlyList<AbsorptionLine> listed, double?[] matched, int line)
+    {
+        int[] group = Group(listed, line);
+        foreach (int j in group) if (matched[j] is not null) return true;
+        return false;
+    }
+
+    /// <summary>The listed lines seen as one with this one: every line linked to it by steps no longer than the resolution.</summary>
+    private static int[] Group(IReadOnlyList<AbsorptionLine> listed, int line)
+    {
+        var members = new List<int> { line };
+        for (int k = 0; k < members.Count; k++)
+            for (int j = 0; j < listed.Count; j++)
+                if (!members.Contains(j) && Math.Abs(listed[j].Nanometres - listed[members[k]].Nanometres) <= ResolutionNanometres)
+                    members.Add(j);
+        return [.. members];
+    }
+
+    /// <summary>The listed lines as the instrument shows them: groups of lines seen as one (each line in exactly one group).</summary>
+    public static IReadOnlyList<int[]> Groups(IReadOnlyList<AbsorptionLine> listed)
+    {
+        var groups = new List<int[]>();
+        var placed = new bool[listed.Count];
+        for (int i = 0; i < listed.Count; i++)
+        {
+            if (placed[i]) continue;
+            int[] group = Group(listed, i);
+            foreach (int j in group) placed[j] = true;
+            groups.Add(group);
+        }
+        return groups;
     }
 
     /// <summary>ln p(seen lines | not in the catalogue): Poisson count, uniform positions.</summary>
@@ -86,21 +125,29 @@ internal static class AbsorptionLines
 
     /// <summary>
     /// The outcomes a look through the spectroscope can have for this material and their probabilities, for the next-test
-    /// advice: which listed lines are seen (wavelengths rounded to 5 nm, so materials sharing a line share the outcome).
+    /// advice: which of the lines the instrument shows are seen (a group of lines within its resolution is one line, seen
+    /// when any of them is; its wavelength, the group's first, rounded to 5 nm, so materials sharing a line share the outcome).
     /// </summary>
     public static IEnumerable<(long Outcome, double Probability)> Outcomes(IReadOnlyList<AbsorptionLine> listed)
     {
-        int n = Math.Min(listed.Count, 10);
+        var groups = Groups(listed);
+        int n = Math.Min(groups.Count, 10);
+        var detection = new double[n];
+        for (int g = 0; g < n; g++)
+        {
+            double missed = 1;
+            foreach (int i in groups[g]) missed *= 1 - Detection(listed[i].Strength);
+            detection[g] = 1 - missed;
+        }
         for (int mask = 0; mask < 1 << n; mask++)
         {
             double p = 1;
             long key = 17;
-            for (int i = 0; i < n; i++)
+            for (int g = 0; g < n; g++)
             {
-                double d = Detection(listed[i].Strength);
-                bool seen = (mask & (1 << i)) != 0;
-                p *= seen ? d : 1 - d;
-                if (seen) key = key * 131 + (long)Math.Round(listed[i].Nanometres / 5);
+                bool seen = (mask & (1 << g)) != 0;
+                p *= seen ? detection[g] : 1 - detection[g];
+                if (seen) key = key * 131 + (long)Math.Round(listed[groups[g][0]].Nanometres / 5);
             }
             yield return (key, p);
         }

@@ -246,6 +246,37 @@ public class EvidenceModelTests
     }
 
     [Fact]
+    public void Listed_lines_within_the_resolution_read_as_one_line_and_one_seen_line_stands_for_both()
+    {
+        // Ruby's chromium doublet, 694.2 and 692.8 nm (1.4 nm apart, closer than a hand spectroscope's ~2 nm; from
+        // memory), is written as one line "694": the unpaired 692.8 is not a missed strong line.
+        AbsorptionLine[] doublet = [new(694.2, LineStrength.Strong), new(692.8, LineStrength.Strong)];
+        double one = AbsorptionLines.LogLikelihood(doublet, [694], out int unexplained, out int missedStrong);
+        Assert.Equal(0, unexplained);
+        Assert.Equal(0, missedStrong);
+        Assert.Equal(AbsorptionLines.LogLikelihood([doublet[0]], [694], out _, out _), one, 12);
+        // Seeing neither is still both missed, and a good instrument's two lines still both pair.
+        AbsorptionLines.LogLikelihood(doublet, [], out _, out int missedBoth);
+        Assert.Equal(2, missedBoth);
+        AbsorptionLines.LogLikelihood(doublet, [694.2, 692.8], out int unexplainedTwo, out _);
+        Assert.Equal(0, unexplainedTwo);
+        // Emerald's 683 and 680 nm (3 nm apart; from memory) are resolved: one seen, the other missed.
+        AbsorptionLines.LogLikelihood([new(683, LineStrength.Strong), new(680, LineStrength.Strong)], [683], out _, out int missedEmerald);
+        Assert.Equal(1, missedEmerald);
+    }
+
+    [Fact]
+    public void The_spectroscope_outcomes_treat_a_doublet_as_one_line_and_sum_to_one()
+    {
+        AbsorptionLine[] ruby = [new(694.2, LineStrength.Strong), new(692.8, LineStrength.Strong), new(668, LineStrength.Weak)];
+        var outcomes = AbsorptionLines.Outcomes(ruby).ToList();
+        Assert.Equal(4, outcomes.Count);
+        Assert.Equal(1, outcomes.Sum(o => o.Probability), 12);
+        // Nothing seen: the doublet missed by both lines (0.05²) and the weak line missed (0.7), by the model's numbers.
+        Assert.Equal(0.05 * 0.05 * 0.7, outcomes[0].Probability, 12);
+    }
+
+    [Fact]
     public void A_high_edge_hidden_above_the_liquid_at_some_steps_is_censored_evidence_not_a_misfit()
     {
         // An invented uniaxial + material, ω 1.770, ε 1.797: with a 1.79 liquid the high edge shows only where it is below
