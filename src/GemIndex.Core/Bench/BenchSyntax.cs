@@ -22,6 +22,16 @@ public static class BenchSyntax
         return new EdgeStepText(parts[0].Trim(), edges[0].Trim(), edges.Length > 1 ? edges[1].Trim() : "");
     }
 
+    /// <summary>
+    /// Both edges typed into the low edge's box, "LOW/HIGH" as in a step or "LOW HIGH" as read off the scale; null
+    /// when the text is not exactly two parts (one edge, or anything else, stays the low edge's text to be checked).
+    /// </summary>
+    public static (string Low, string High)? EdgePair(string text)
+    {
+        string[] parts = text.Split(['/', ' ', '\t'], StringSplitOptions.RemoveEmptyEntries);
+        return parts.Length == 2 ? (parts[0], parts[1]) : null;
+    }
+
     /// <summary>A step written back as "ROTATION:LOW[/HIGH]".</summary>
     public static string Step(EdgeStepText step) => step.High.Length > 0 ? $"{step.Rotation}:{step.Low}/{step.High}" : $"{step.Rotation}:{step.Low}";
 

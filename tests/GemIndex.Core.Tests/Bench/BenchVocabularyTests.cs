@@ -37,6 +37,10 @@ public class BenchVocabularyTests
         Assert.Equal(new EdgeStepText("0", "1.718", ""), BenchSyntax.Step("0:1.718"));
         Assert.Null(BenchSyntax.Step("1.544/1.553"));
         Assert.Null(BenchSyntax.Step("0:1.5/1.6/1.7"));
+        Assert.Equal(("1.544", "1.553"), BenchSyntax.EdgePair("1.544 1.553"));
+        Assert.Equal(("1.544", "1.553"), BenchSyntax.EdgePair(" 1.544 / 1.553 "));
+        Assert.Null(BenchSyntax.EdgePair("1.544"));
+        Assert.Null(BenchSyntax.EdgePair("1.544 1.549 1.553"));
         Assert.Equal("45:1.544/1.549", BenchSyntax.Step(new EdgeStepText("45", "1.544", "1.549")));
         Assert.Equal(["3.32 floats", "2.89 sinks"], BenchSyntax.HeavyLiquidEntries("3.32 floats; 2.89 sinks;"));
         Assert.Equal(("3.32", "floats"), BenchSyntax.HeavyLiquid("3.32  floats"));

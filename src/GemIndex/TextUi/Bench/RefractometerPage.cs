@@ -1,4 +1,5 @@
 using GemIndex.Cli.TextUi.Main;
+using GemIndex.Core.Bench;
 using System.Collections.ObjectModel;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
@@ -50,7 +51,10 @@ internal sealed class RefractometerPage : BenchPage
             box.KeyDown += (_, key) =>
             {
                 if (key != Key.Enter) return;
-                StoreRequested?.Invoke(_editing, new StepText(Rotation.Text.Trim(), Low.Text.Trim(), High.Text.Trim()));
+                string low = Low.Text.Trim(), high = High.Text.Trim();
+                // Both edges typed in the low box ("1.624 1.644" or "1.624/1.644") are the two edges.
+                if (high.Length == 0 && BenchSyntax.EdgePair(low) is { } pair) (low, high) = pair;
+                StoreRequested?.Invoke(_editing, new StepText(Rotation.Text.Trim(), low, high));
                 key.Handled = true;
             };
         Grid.KeyDown += (_, key) =>
@@ -107,7 +111,7 @@ internal sealed class RefractometerPage : BenchPage
         _stepCount = steps.Count;
         for (int i = 0; i < steps.Count; i++)
             _rows.Add($"{steps[i].Rotation,6}°  {steps[i].Low,-8}  {steps[i].High,-8}{(errors.ContainsKey(BenchFields.Step(i)) ? FormField.SeeBelow : "")}");   // the reason whole at the page's foot
-        if (_rows.Count == 0) _rows.Add("(no steps yet: type the edges, Enter)");
+        if (_rows.Count == 0) _rows.Add("(no steps yet: low high, then Enter)");
         else _rows.Add("(Enter edits, Del removes, ^Z undo)");
         if (selected is { } s) Grid.SelectedItem = Math.Min(s, _rows.Count - 1);
     }

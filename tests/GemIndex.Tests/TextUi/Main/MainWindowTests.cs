@@ -554,6 +554,22 @@ public sealed class MainWindowTests : IDisposable
         Close(app, window, token);
     }
 
+    [Theory]
+    [InlineData("1.544 1.553")]
+    [InlineData("1.544/1.553")]
+    [InlineData("1.544   1.553")]
+    public void Both_edges_typed_in_the_low_box_are_stored_as_the_two_edges(string typed)
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        Type(app, typed);
+        app.InjectKey(Key.Enter);
+        Settle();
+        var step = Assert.Single(_session.Form.Steps);
+        Assert.Equal(("1.544", "1.553"), (step.Low, step.High));
+        Close(app, window, token);
+    }
+
     [Fact]
     public void A_step_typed_but_not_stored_comes_back_when_the_workbook_is_opened_again()
     {
