@@ -89,15 +89,21 @@ internal sealed class ResultsModel
         rows.Add(new AnswerRow(CandidatesHeading));
         bool bars = width >= WidthForBars;
         IReadOnlyList<RankedCandidate> shown = [.. Candidates.Take(Listed)];
+        // With more than one species listed, each species' entries go under its name and total, indented, so that an
+        // entry's rank after another species' many varieties reads as part of its own species.
+        bool grouped = shown.Select(c => c.Material.Species).Distinct().Skip(1).Any();
+        string indent = grouped ? SpeciesIndent : "";
         int rankWidth = shown.Count.ToString(System.Globalization.CultureInfo.InvariantCulture).Length;   // "10" aligns with " 9"
-        int nameWidth = width - 6 - rankWidth - (bars ? ResultText.BarWidth + 1 : 0);
+        int nameWidth = width - 6 - rankWidth - indent.Length - (bars ? ResultText.BarWidth + 1 : 0);
         // A name too long for its column goes on under itself, whole (every row of it opens the candidate's detail).
         List<string>[] names = [.. shown.Select(c => TextWrap.Lines([c.Material.Name], nameWidth).ToList())];
         int used = Math.Min(nameWidth, names.Max(n => n[0].Length));
         for (int i = 0; i < shown.Count; i++)
         {
-            rows.Add(new AnswerRow(ResultText.Candidate(i + 1, names[i][0], used, shown[i].Confidence, bars, rankWidth), i));
-            foreach (string more in names[i].Skip(1)) rows.Add(new AnswerRow(new string(' ', rankWidth + 1) + more, i, Continues: true));
+            if (grouped && (i == 0 || shown[i].Material.Species != shown[i - 1].Material.Species))
+                foreach (string l in TextWrap.Lines([SpeciesHeading(r, shown[i].Material.Species)], width)) rows.Add(new AnswerRow(l, PassedOver: true));
+            rows.Add(new AnswerRow(indent + ResultText.Candidate(i + 1, names[i][0], used, shown[i].Confidence, bars, rankWidth), i));
+            foreach (string more in names[i].Skip(1)) rows.Add(new AnswerRow(indent + new string(' ', rankWidth + 1) + more, i, PassedOver: true));
         }
         Text([$"  not in the catalogue {ResultText.Percent(r.NotInCatalogue)}"]);
         IReadOnlyList<string> derived = ResultText.Derived(a);
@@ -106,6 +112,13 @@ internal sealed class ResultsModel
         if (r.Warnings.Count > 0) { rows.Add(new AnswerRow("")); Text(["Warnings", .. r.Warnings.Select(x => "! " + Sentence(x))]); }
         return rows;
     }
+
+    /// <summary>The indent of a species' entries under its heading.</summary>
+    public const string SpeciesIndent = "  ";
+
+    /// <summary>A species' heading over its entries: its name and its total over the whole catalogue.</summary>
+    public static string SpeciesHeading(IdentificationResult r, string species) =>
+        r.Species.FirstOrDefault(s => s.Species == species) is { } found ? $"{species} {ResultText.Percent(found.Confidence)}" : species;
 
     /// <summary>The answer's line for entries refused and left out of it.</summary>
     public static string RefusedLine(int count) =>

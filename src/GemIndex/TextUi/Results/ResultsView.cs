@@ -29,7 +29,7 @@ internal sealed class ResultsView : FrameView
             if (key == Key.Enter && CandidateAt(List.SelectedItem) is { } i) { DetailRequested?.Invoke(i); key.Handled = true; }
         };
         List.ViewportChanged += (_, _) => { if (List.Viewport.Width != _builtAt) Refresh(); };
-        List.ValueChanged += (_, _) => PassOverContinuations();
+        List.ValueChanged += (_, _) => PassOverBetweenRows();
         Add(List);
     }
 
@@ -55,15 +55,15 @@ internal sealed class ResultsView : FrameView
     private int _lastRow;
     private bool _moving;
 
-    /// <summary>A row that only continues a candidate's name is passed over in the direction the selection moved.</summary>
-    private void PassOverContinuations()
+    /// <summary>A row between candidates (the rest of a name, a species' heading) is passed over in the direction the selection moved.</summary>
+    private void PassOverBetweenRows()
     {
         if (_moving || List.SelectedItem is not { } row) return;
         int step = row >= _lastRow ? 1 : -1;
         int to = row;
-        while (to > 0 && to < _rows.Count - 1 && _rows[to].Continues) to += step;
-        if (to < _rows.Count && _rows[to].Continues) to = row - step;   // nothing beyond: stay on the candidate's first row
-        while (to > 0 && _rows[to].Continues) to--;
+        while (to > 0 && to < _rows.Count - 1 && _rows[to].PassedOver) to += step;
+        if (to < _rows.Count && _rows[to].PassedOver) to = row - step;   // nothing beyond: stay on the candidate's first row
+        while (to > 0 && _rows[to].PassedOver) to--;
         _lastRow = to;
         if (to == row) return;
         _moving = true;

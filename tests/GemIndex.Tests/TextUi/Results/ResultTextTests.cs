@@ -276,7 +276,33 @@ public class ResultTextTests
         Assert.Equal([0, 1, 2, 3], candidates.Select(r => r.Candidate!.Value));
         Assert.Equal(4, candidates.Select(r => r.Text).Distinct().Count());
         Assert.All(candidates, r => Assert.True(r.Text.Length <= width, r.Text));
-        Assert.StartsWith("1 flame-fusion synthetic ruby", candidates[0].Text);
+        Assert.StartsWith(ResultsModel.SpeciesIndent + "1 flame-fusion synthetic ruby", candidates[0].Text);
+    }
+
+    [Fact]
+    public void With_several_species_listed_each_species_heads_its_entries_with_its_total()
+    {
+        var model = new ResultsModel();
+        model.Accept(new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 4.0 }, Result = CorundumAnswer(null) });
+        string[] rows = [.. model.Rows(38).Select(r => r.Text)];
+        int heading = Array.IndexOf(rows, ResultsModel.CandidatesHeading);
+        Assert.Equal("corundum 93%", rows[heading + 1]);
+        Assert.StartsWith("  1 flame-fusion synthetic ruby", rows[heading + 2]);
+        Assert.Equal("spinel 7%", rows[heading + 5]);
+        Assert.StartsWith("  4 ", rows[heading + 6]);
+        // The headings open no detail: Enter acts on candidates only.
+        Assert.All(model.Rows(38).Where(r => r.Text is "corundum 93%" or "spinel 7%"), r => Assert.Null(r.Candidate));
+    }
+
+    [Fact]
+    public void With_one_species_listed_its_entries_need_no_heading()
+    {
+        IdentificationResult r = CorundumAnswer(null) with { Candidates = [.. CorundumAnswer(null).Candidates.Take(3)] };
+        var model = new ResultsModel();
+        model.Accept(new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 4.0 }, Result = r });
+        string[] rows = [.. model.Rows(38).Select(x => x.Text)];
+        int heading = Array.IndexOf(rows, ResultsModel.CandidatesHeading);
+        Assert.StartsWith("1 flame-fusion synthetic ruby", rows[heading + 1]);
     }
 
     private static RotationSeriesResult TwoSigns() => new()

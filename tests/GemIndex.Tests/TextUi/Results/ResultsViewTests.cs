@@ -37,7 +37,7 @@ public sealed class ResultsViewTests
         view.Refresh();
         view.List.SetFocus();
         view.SelectCandidate(0);
-        Assert.Contains(view.Rows, r => r.Continues && r.Candidate == 0);   // the long name did go on under itself
+        Assert.Contains(view.Rows, r => r.PassedOver && r.Candidate == 0);   // the long name did go on under itself
         app.InjectKey(Key.CursorDown);
         Assert.Equal(1, view.SelectedCandidate);
         app.InjectKey(Key.CursorDown);
@@ -45,7 +45,7 @@ public sealed class ResultsViewTests
         app.InjectKey(Key.CursorUp);
         app.InjectKey(Key.CursorUp);
         Assert.Equal(0, view.SelectedCandidate);
-        Assert.False(view.Rows[view.List.SelectedItem!.Value].Continues);  // on the name's first row, where its percentage is
+        Assert.False(view.Rows[view.List.SelectedItem!.Value].PassedOver);  // on the name's first row, where its percentage is
         app.End(token);
         top.Dispose();
     }
