@@ -13,8 +13,9 @@ namespace GemIndex.Cli.TextUi.Plot;
 /// <param name="title">What is measured, e.g. "lowest index".</param>
 /// <param name="format">Number format of the axis labels and the reading.</param>
 /// <param name="widest">The widest window shown; wider ranges are cut at the edges and marked '&lt;' or '&gt;'.</param>
+/// <param name="ranks">Each candidate's rank in the answer (null: 1, 2, 3 … in the order given).</param>
 internal sealed class ReadingScale(string title, string format, double value, double uncertainty, double widest,
-    IReadOnlyList<(string Name, PropertyRange? Range)> candidates)
+    IReadOnlyList<(string Name, PropertyRange? Range)> candidates, IReadOnlyList<int>? ranks = null)
 {
     public const char Track = '.';
     public const char Bar = '=';
@@ -36,6 +37,9 @@ internal sealed class ReadingScale(string title, string format, double value, do
     public string Title => title;
     public double Value => value;
     public IReadOnlyList<(string Name, PropertyRange? Range)> Candidates => candidates;
+
+    /// <summary>The answer's rank of the candidate at this row.</summary>
+    public int Rank(int row) => ranks is not null && row < ranks.Count ? ranks[row] : row + 1;
 
     /// <summary>
     /// How far a value may lie outside a range and still count as in it: rounding noise of the arithmetic only (a
@@ -88,7 +92,8 @@ internal sealed class ReadingScale(string title, string format, double value, do
         int at = Column(value);
         if (at >= 0 && at < track) reading[at] = Marker;
         lines.Add(ResultText.Clip($"{Number(value)} ± {Number(uncertainty)}", NameWidth - 1).PadRight(NameWidth) + reading);
-        IReadOnlyList<string> names = CandidateNames.Fit([.. candidates.Select(c => c.Name)], NameWidth - 3);
+        int rankWidth = candidates.Count == 0 ? 1 : Enumerable.Range(0, candidates.Count).Max(i => Rank(i).ToString(CultureInfo.InvariantCulture).Length);   // "10" aligns with " 8"
+        IReadOnlyList<string> names = CandidateNames.Fit([.. candidates.Select(c => c.Name)], NameWidth - 2 - rankWidth);
         for (int i = 0; i < candidates.Count; i++)
         {
             (_, PropertyRange? range) = candidates[i];
@@ -104,7 +109,7 @@ internal sealed class ReadingScale(string title, string format, double value, do
                 if (left >= track) row[track - 1] = '>';
             }
             if (at >= 0 && at < track) row[at] = row[at] == Bar ? MarkerOnBar : Marker;
-            string label = $"{i + 1} {name}";
+            string label = $"{Rank(i).ToString(CultureInfo.InvariantCulture).PadLeft(rankWidth)} {name}";
             lines.Add(label.PadRight(NameWidth) + row + " " + Verdict(range));
         }
         return lines;

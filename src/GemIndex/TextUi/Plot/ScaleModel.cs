@@ -8,7 +8,8 @@ namespace GemIndex.Cli.TextUi.Plot;
 
 /// <summary>
 /// The scales screen: the lowest index, the birefringence (or a spot reading) and the SG as read, each against the ranges of the top
-/// candidates (<see cref="ReadingScale"/>), as many candidates as the height allows (between one and five).
+/// candidates (<see cref="ReadingScale"/>), as many candidates as the height allows (between one and five): the best
+/// entry of each species first, each labelled with its rank in the answer.
 /// </summary>
 internal sealed class ScaleModel
 {
@@ -24,25 +25,31 @@ internal sealed class ScaleModel
     public ScaleModel(BenchAssessment? assessment)
     {
         var scales = new List<Func<int, ReadingScale>>();
-        IReadOnlyList<Material> top = [.. (assessment?.Result?.Candidates ?? []).Take(MostCandidates).Select(c => c.Material)];
+        // The best entry of each species first, then the next entries (as the answer's leaders): four varieties of one
+        // species share its ranges and say nothing against a rival species'. Each keeps its rank in the answer.
+        IReadOnlyList<RankedCandidate> ranked = assessment?.Result?.Candidates ?? [];
+        IReadOnlyList<int> firsts = [.. Enumerable.Range(0, ranked.Count).GroupBy(i => ranked[i].Material.Species).Select(g => g.First())];
+        IReadOnlyList<int> order = [.. firsts.Concat(Enumerable.Range(0, ranked.Count).Except(firsts)).Take(MostCandidates)];
+        IReadOnlyList<Material> top = [.. order.Select(i => ranked[i].Material)];
+        IReadOnlyList<int> ranks = [.. order.Select(i => i + 1)];
         if (top.Count > 0 && assessment is { } a)
         {
             if (a.Result?.Series?.Interpretations.MaxBy(i => i.Weight) is SeriesInterpretation best)
             {
                 scales.Add(n => new ReadingScale("lowest index", "0.000", best.Lowest.Value, best.Lowest.StandardUncertainty, WidestIndex,
-                    [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)m.Indices.Lowest))]));
+                    [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)m.Indices.Lowest))], ranks));
                 if (best.Birefringence.Value > 0)
                     scales.Add(n => new ReadingScale("birefringence", "0.000", best.Birefringence.Value, best.Birefringence.StandardUncertainty, WidestBirefringence,
-                        [.. top.Take(n).Select(m => (m.Name, m.Birefringence ?? new PropertyRange(0, 0)))]));
+                        [.. top.Take(n).Select(m => (m.Name, m.Birefringence ?? new PropertyRange(0, 0)))], ranks));
             }
             else if (a.Readings.Refractometer?.Spot is { } spot && a.Result is not null)
                 // A spot reading lies anywhere between a material's lowest and highest index (the shadow blinks between
                 // them on a birefringent stone), read to about ±0.01 (σ 0.006 unless the bench's precision says otherwise).
                 scales.Add(n => new ReadingScale("spot reading", "0.00", spot, a.Readings.Refractometer.Precision ?? BenchDefaults.SpotPrecision, WidestIndex,
-                    [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum)))]));
+                    [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum)))], ranks));
             if (a.SpecificGravity is { } sg)
                 scales.Add(n => new ReadingScale("SG", "0.00", sg.Value, sg.StandardUncertainty, WidestGravity,
-                    [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)m.SpecificGravity))]));
+                    [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)m.SpecificGravity))], ranks));
         }
         _scales = scales;
     }

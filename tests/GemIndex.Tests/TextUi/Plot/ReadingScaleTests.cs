@@ -1,6 +1,7 @@
 using GemIndex.Cli.TextUi.Bench;
 using GemIndex.Cli.TextUi.Plot;
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Gravity;
 using GemIndex.Core.Identification;
 
 namespace GemIndex.Tests.TextUi.Plot;
@@ -154,6 +155,27 @@ public class ReadingScaleTests
         Assert.Equal(1.55, spot.Value);
         var quartz = spot.Candidates.Single(c => c.Name == "quartz");
         Assert.Equal(ReadingScale.In, spot.Verdict(quartz.Range));   // between ω 1.544 and ε 1.553
+    }
+
+    [Fact]
+    public void The_scales_show_the_best_entry_of_each_species_first_under_its_rank_in_the_answer()
+    {
+        // Three quartz entries lead, spinel is fourth: a rival species' ranges say more than a third quartz variety's.
+        Material quartz = TestMaterials.All[0], spinel = TestMaterials.All[1];
+        RankedCandidate[] ranked =
+        [
+            new() { Material = quartz, Confidence = 0.4, Fit = 0.9 },
+            new() { Material = quartz with { Name = "citrine" }, Confidence = 0.3, Fit = 0.9 },
+            new() { Material = quartz with { Name = "amethyst" }, Confidence = 0.2, Fit = 0.9 },
+            new() { Material = spinel, Confidence = 0.1, Fit = 0.5 },
+        ];
+        var result = new IdentificationResult { Id = "x", Candidates = ranked, NotInCatalogue = 0, NoGoodMatch = false, Warnings = [] };
+        var a = new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 2.65 }, Result = result,
+            SpecificGravity = new SpecificGravity(2.65, 0.01) };
+        ReadingScale sg = Assert.Single(new ScaleModel(a).Scales(3));
+        Assert.Equal(["quartz", "spinel", "citrine"], sg.Candidates.Select(c => c.Name));
+        Assert.Equal([1, 4, 2], Enumerable.Range(0, 3).Select(sg.Rank));
+        Assert.Contains(sg.Render(76), l => l.StartsWith("4 spinel", StringComparison.Ordinal));
     }
 
     [Fact]
