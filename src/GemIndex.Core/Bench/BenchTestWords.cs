@@ -9,7 +9,7 @@ public static class BenchTestWords
     private static readonly (BenchTest Test, string Wire, string Display)[] Table =
     [
         (BenchTest.Refractometer, BenchField.Refractometer, "refractometer"),
-        (BenchTest.SpecificGravity, BenchField.Sg, "specific gravity (hydrostatic weighing)"),
+        (BenchTest.SpecificGravity, BenchField.Sg, "specific gravity"),   // typed or weighed in air and water alike
         (BenchTest.HeavyLiquids, BenchField.HeavyLiquids, "heavy liquids"),
         (BenchTest.Polariscope, BenchField.Polariscope, "polariscope"),
         (BenchTest.Pleochroism, BenchField.Pleochroism, "dichroscope (pleochroism)"),

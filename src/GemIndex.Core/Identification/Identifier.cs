@@ -317,7 +317,7 @@ public sealed class Identifier
     /// <summary>Ranks the catalogue for one sheet.</summary>
     /// <param name="sheet">The readings.</param>
     /// <param name="maximumCandidates">How many candidates to return (1–1000).</param>
-    /// <param name="explainTop">For how many leading candidates to write the reasons in words.</param>
+    /// <param name="explainTop">For how many candidates to write the reasons in words (<see cref="LeadingCandidates"/>: the best entry of each leading species first).</param>
     /// <param name="adviseNextTest">Whether to work out the next test (costs a little time).</param>
     public IdentificationResult Identify(BenchSheet sheet, int maximumCandidates = 10, int explainTop = 3, bool adviseNextTest = true)
     {
@@ -364,10 +364,11 @@ public sealed class Identifier
         int[] order = SpeciesFirst(posterior, byEntry);
         var shown = Shown(posterior, byEntry, order, Math.Min(maximumCandidates, n));
         var candidates = new List<RankedCandidate>(Math.Min(maximumCandidates, n));
+        bool[] explainAt = LeadingCandidates.Explained([.. order.Where(i => shown[i]).Select(i => _materials[i].Species)], explainTop);
         foreach (int i in order)
         {
             if (!shown[i]) continue;
-            bool explain = candidates.Count < explainTop;
+            bool explain = explainAt[candidates.Count];
             var e = Evaluated(i, explain);
             candidates.Add(new RankedCandidate
             {

@@ -42,6 +42,7 @@ internal static class ResultDocument
         w.WriteString("id", result.Id);
         w.WriteStartArray("species");
         var ranks = result.Candidates.Select((c, i) => (c, Rank: i + 1)).ToList();
+        bool[] explained = LeadingCandidates.Explained(result.Candidates, BenchDefaults.ExplainedCandidates);
         foreach (SpeciesResult species in SpeciesShown(result))
         {
             w.WriteStartObject();
@@ -59,7 +60,7 @@ internal static class ResultDocument
                 w.WriteString("origin", BenchWords.Word(c.Material.Origin));
                 w.WriteNumber("confidence", Probability(c.Confidence));
                 w.WriteNumber("fit", Math.Round(c.Fit, 4));
-                if (explain && c.Reasons.Count > 0 && rank <= BenchDefaults.ExplainedCandidates)
+                if (explain && c.Reasons.Count > 0 && explained[rank - 1])
                 {
                     w.WriteStartArray("why");
                     foreach (var r in c.Reasons)

@@ -2,6 +2,7 @@ using GemIndex.Core.Bench;
 using System.Globalization;
 using System.Net;
 using System.Text;
+using GemIndex.Core.Identification;
 
 namespace GemIndex.Cli.Reports;
 
@@ -77,9 +78,9 @@ internal static class HtmlReport
     {
         Section(h, "Candidates");
         if (report.NoGoodMatch) h.Append("<p class=\"no-match\">").Append(E(StoneReport.NoGoodMatchStatement)).AppendLine("</p>");
-        h.AppendLine("<table>").AppendLine("<tr><th>Rank</th><th>Material</th><th>Origin</th><th>Confidence</th><th>Agreement with the entry</th></tr>");
+        h.AppendLine("<table>").AppendLine("<tr><th>Rank</th><th>Material</th><th>Species</th><th>Origin</th><th>Confidence</th><th>Agreement with the entry</th></tr>");
         foreach (var c in report.Candidates)
-            h.AppendLine($"<tr>{Number(c.Rank.ToString(CultureInfo.InvariantCulture))}<td>{E(c.Name)}</td><td>{E(c.Origin)}</td>" +
+            h.AppendLine($"<tr>{Number(c.Rank.ToString(CultureInfo.InvariantCulture))}<td>{E(c.Name)}</td><td>{E(c.Species)}</td><td>{E(c.Origin)}</td>" +
                 $"{Number(ReportNumbers.Percent(c.Confidence))}{Number(ReportNumbers.Fixed(c.Fit, "0.000"))}</tr>");
         h.AppendLine("</table>");
         h.Append("<p>Not in the catalogue: ").Append(E(ReportNumbers.Percent(report.NotInCatalogue))).AppendLine("</p>");
@@ -90,10 +91,10 @@ internal static class HtmlReport
         }
     }
 
-    /// <summary>The lowest index and the SG as read, against the three leading candidates' ranges.</summary>
+    /// <summary>The lowest index and the SG as read, against the ranges of three leading candidates, the best entry of each species first.</summary>
     private static void Scales(StringBuilder h, StoneReport report)
     {
-        var leading = report.Result.Candidates.Take(ScaleCandidates).Select(c => c.Material).ToList();
+        var leading = LeadingCandidates.Order(report.Result.Candidates).Take(ScaleCandidates).Select(i => report.Result.Candidates[i].Material).ToList();
         if (leading.Count == 0) return;
         if (report.Readings.Refractometer is { Readings.Count: > 0 } rf)
         {

@@ -48,9 +48,9 @@ internal static class MarkdownReport
     {
         Section(md, "Candidates");
         if (report.NoGoodMatch) md.Append("**").Append(Escape(StoneReport.NoGoodMatchStatement)).AppendLine("**").AppendLine();
-        md.AppendLine("| Rank | Material | Origin | Confidence | Agreement with the entry |").AppendLine("|---:|---|---|---:|---:|");
+        md.AppendLine("| Rank | Material | Species | Origin | Confidence | Agreement with the entry |").AppendLine("|---:|---|---|---|---:|---:|");
         foreach (var c in report.Candidates)
-            md.AppendLine($"| {c.Rank} | {Escape(c.Name)} | {Escape(c.Origin)} | {ReportNumbers.Percent(c.Confidence)} | {ReportNumbers.Fixed(c.Fit, "0.000")} |");
+            md.AppendLine($"| {c.Rank} | {Escape(c.Name)} | {Escape(c.Species)} | {Escape(c.Origin)} | {ReportNumbers.Percent(c.Confidence)} | {ReportNumbers.Fixed(c.Fit, "0.000")} |");
         md.AppendLine().Append("Not in the catalogue: ").AppendLine(ReportNumbers.Percent(report.NotInCatalogue)).AppendLine();
         foreach (var c in report.Candidates.Where(c => c.Reasons.Count > 0))
         {

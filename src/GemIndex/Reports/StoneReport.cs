@@ -56,6 +56,7 @@ internal sealed record StoneReport
     {
         BenchSheet bench = BenchReader.Read(StoneReadingsConverter.ToReadings(sheet.Readings)).Sheet;
         RotationSeriesResult? series = result.Series;
+        bool[] explained = LeadingCandidates.Explained(result.Candidates, BenchDefaults.ExplainedCandidates);
         return new StoneReport
         {
             Reference = sheet.Reference,
@@ -70,8 +71,9 @@ internal sealed record StoneReport
             SpecificGravity = bench.SpecificGravity,
             SpecificGravitySource = sheet.Readings.Sg is not null ? "given directly" : sheet.Readings.SgWeighing is not null ? "hydrostatic weighing" : "",
             // A candidate that would print as 0.0 % says nothing on paper; it stays in the JSON's result document.
-            Candidates = [.. result.Candidates.Select((c, i) => new ReportCandidate(i + 1, c.Material.Name, Word(c.Material.Origin.ToString()),
-                c.Confidence, c.Fit, c.Reasons)).Where(c => c.Confidence >= ShownConfidence)],
+            // Reasons for the explained candidates only, whoever worked out more (the text UI does for its detail view).
+            Candidates = [.. result.Candidates.Select((c, i) => new ReportCandidate(i + 1, c.Material.Name, c.Material.Species, Word(c.Material.Origin.ToString()),
+                c.Confidence, c.Fit, explained[i] ? c.Reasons : [])).Where(c => c.Confidence >= ShownConfidence)],
             NotInCatalogue = result.NotInCatalogue,
             NoGoodMatch = result.NoGoodMatch,
             NextTest = result.NextTest,

@@ -102,6 +102,32 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void The_reasons_are_written_for_the_best_entry_of_each_leading_species_first()
+    {
+        // As above: the leading species' varieties fill the top of the list; the reasons worth reading are the rivals'.
+        var glassLike = OpticalIndices.SingleIndex(new(1.50, 1.53), OpticCharacter.Amorphous);
+        Material[] catalogue =
+        [
+            .. Enumerable.Range(1, 10).Select(k => Make($"variety {k}", "many", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryCommon }),
+            Make("second", "second", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryRare },
+            Make("third", "third", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryRare },
+        ];
+        var result = new Identifier(catalogue).Identify(new BenchSheet { SpecificGravity = new(2.5, 0.01) }, maximumCandidates: 10, explainTop: 4);
+        Assert.Equal(["variety 1", "variety 2", "second", "third"],
+            result.Candidates.Where(c => c.Reasons.Count > 0).Select(c => c.Material.Name).ToArray());
+    }
+
+    [Fact]
+    public void Leading_candidates_take_the_first_entry_of_each_species_then_the_rest_in_order()
+    {
+        string[] species = ["beryl", "beryl", "beryl", "glass", "beryl", "quartz"];
+        Assert.Equal([0, 3, 5, 1, 2, 4], LeadingCandidates.Order(species));
+        Assert.Equal([true, true, false, true, false, true], LeadingCandidates.Explained(species, 4));
+        Assert.Equal(species.Select(_ => true), LeadingCandidates.Explained(species, 10));
+        Assert.Empty(LeadingCandidates.Order(Array.Empty<string>()));
+    }
+
+    [Fact]
     public void A_corundum_series_reads_negative_and_names_corundum_and_warns_about_synthetics()
     {
         // Corundum ω 1.770, ε 1.762 (common practice); natural and synthetic cannot be separated by these tests.

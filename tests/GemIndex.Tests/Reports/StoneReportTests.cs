@@ -1,5 +1,6 @@
 using System.Text.Json;
 using GemIndex.Cli.Reports;
+using GemIndex.Core.Identification;
 
 namespace GemIndex.Tests.Reports;
 
@@ -137,5 +138,31 @@ public class StoneReportTests
         int tiny = report.Result.Candidates.Count(c => c.Confidence < StoneReport.ShownConfidence);
         Assert.True(tiny > 0);
         Assert.Equal(report.Result.Candidates.Count - tiny, report.Candidates.Count);
+    }
+
+    [Fact]
+    public void The_report_gives_reasons_for_the_best_entry_of_each_species_first_and_names_each_candidates_species()
+    {
+        // Every candidate comes with its reasons (as the text UI works them out); the report writes out three of them:
+        // the first entry of each species, then the next entry.
+        var sheet = ReportFixtures.Sheet(ReportFixtures.QuartzLine);
+        IdentificationResult found = ReportFixtures.Identify(sheet);
+        var reasons = found.Candidates[0].Reasons;
+        RankedCandidate Entry(string name, string species, double p) => new()
+        {
+            Material = ReportFixtures.Catalogue[0] with { Name = name, Species = species }, Confidence = p, Fit = 0.9, Reasons = reasons,
+        };
+        IdentificationResult result = found with
+        {
+            Candidates = [Entry("rock crystal", "quartz", 0.5), Entry("citrine", "quartz", 0.2), Entry("amethyst", "quartz", 0.1), Entry("crown glass", "glass", 0.1)],
+        };
+        var report = StoneReport.Build(sheet, result);
+        Assert.Equal(["rock crystal", "citrine", "crown glass"], report.Candidates.Where(c => c.Reasons.Count > 0).Select(c => c.Name));
+        string markdown = MarkdownReport.Write(report);
+        Assert.Contains("| Rank | Material | Species | Origin |", markdown);
+        Assert.Contains("| 4 | crown glass | glass | natural |", markdown);
+        Assert.Contains("Reasons for crown glass:", markdown);
+        Assert.DoesNotContain("Reasons for amethyst:", markdown);
+        Assert.Contains("<td>crown glass</td><td>glass</td>", HtmlReport.Write(report));
     }
 }

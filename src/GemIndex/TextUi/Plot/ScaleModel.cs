@@ -28,8 +28,7 @@ internal sealed class ScaleModel
         // The best entry of each species first, then the next entries (as the answer's leaders): four varieties of one
         // species share its ranges and say nothing against a rival species'. Each keeps its rank in the answer.
         IReadOnlyList<RankedCandidate> ranked = assessment?.Result?.Candidates ?? [];
-        IReadOnlyList<int> firsts = [.. Enumerable.Range(0, ranked.Count).GroupBy(i => ranked[i].Material.Species).Select(g => g.First())];
-        IReadOnlyList<int> order = [.. firsts.Concat(Enumerable.Range(0, ranked.Count).Except(firsts)).Take(MostCandidates)];
+        IReadOnlyList<int> order = [.. LeadingCandidates.Order(ranked).Take(MostCandidates)];
         IReadOnlyList<Material> top = [.. order.Select(i => ranked[i].Material)];
         IReadOnlyList<int> ranks = [.. order.Select(i => i + 1)];
         if (top.Count > 0 && assessment is { } a)
