@@ -170,8 +170,10 @@ internal static class IdentifyCommand
         // Standard input is read as UTF-8 with or without a byte order mark, as a file is.
         using TextReader input = file == "-" ? new StreamReader(Console.OpenStandardInput(), System.Text.Encoding.UTF8, detectEncodingFromByteOrderMarks: true) : new StreamReader(file);
         var progress = BatchProgress.ForConsole(error, file == "-" ? null : new FileInfo(file).Length, "stones");
-        int failed = BatchIdentification.Run(input, output, identifier, new BenchRequest { Candidates = candidates, ExplainTop = explain ? BenchDefaults.ExplainedCandidates : 0 }, progress);
-        if (failed > 0) error.WriteLine($"gemindex: {failed} line(s) could not be read or ranked; see their error lines");
-        return failed > 0 ? ExitCodes.BadInput : ExitCodes.Ok;
+        var summary = BatchIdentification.Run(input, output, identifier, new BenchRequest { Candidates = candidates, ExplainTop = explain ? BenchDefaults.ExplainedCandidates : 0 }, progress);
+        if (summary.LinesWithUnread > 0)
+            error.WriteLine($"gemindex: {summary.LinesWithUnread} line(s) hold fields the batch format does not know, which were not read (first: {summary.FirstUnread}); each answer's warnings name them");
+        if (summary.Failed > 0) error.WriteLine($"gemindex: {summary.Failed} line(s) could not be read or ranked; see their error lines");
+        return summary.Failed > 0 ? ExitCodes.BadInput : ExitCodes.Ok;
     }
 }

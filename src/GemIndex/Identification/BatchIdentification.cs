@@ -14,14 +14,18 @@ internal static class BatchIdentification
     /// <summary>Lines read and ranked together; output is written after each chunk, in order.</summary>
     private const int ChunkLines = 512;
 
-    /// <summary>Runs a batch; returns the number of lines answered with an error.</summary>
-    public static int Run(TextReader input, TextWriter output, Identifier identifier, BenchRequest request, BatchProgress? progress = null)
+    /// <summary>What a batch run met: lines answered with an error, lines holding fields the format does not know (the first named).</summary>
+    public sealed record Summary(int Failed, int LinesWithUnread, string? FirstUnread);
+
+    /// <summary>Runs a batch; returns the number of lines answered with an error and of lines with fields not read.</summary>
+    public static Summary Run(TextReader input, TextWriter output, Identifier identifier, BenchRequest request, BatchProgress? progress = null)
     {
         // The stones are ranked on every core already: one stone's series on one thread (measured: the inner threads
         // only added CPU time, docs/ranking.md §6).
         identifier = identifier.WithSeriesOnEveryCore(false);
         var reader = new BatchLineReader(input);
-        int lineNumber = 0, failed = 0, done = 0;
+        int lineNumber = 0, failed = 0, done = 0, unread = 0;
+        string? firstUnread = null;
         var chunk = new List<(int Number, string? Line)>(ChunkLines);
         bool end = false;
         while (!end)
@@ -37,42 +41,46 @@ internal static class BatchIdentification
             }
             var answers = new string[chunk.Count];
             var failedHere = new bool[chunk.Count];
+            var unreadHere = new string?[chunk.Count];
             Parallel.For(0, chunk.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
-                (answers[i], failedHere[i]) = Answer(chunk[i].Number, chunk[i].Line, identifier, request));
+                (answers[i], failedHere[i], unreadHere[i]) = Answer(chunk[i].Number, chunk[i].Line, identifier, request));
             foreach (string answer in answers) { output.Write(answer); output.Write('\n'); }
             failed += failedHere.Count(f => f);
+            for (int i = 0; i < chunk.Count; i++)
+                if (unreadHere[i] is { } path) { unread++; firstUnread ??= $"line {chunk[i].Number}: \"{path}\""; }
             done += chunk.Count;
             progress?.Report(done, reader.Consumed);
         }
         output.Flush();
         progress?.Finish(done);
-        return failed;
+        return new Summary(failed, unread, firstUnread);
     }
 
     /// <summary>The answer with a warning first for each field the line holds that the format does not know (it was not read).</summary>
     public static IdentificationResult WithUnread(IdentificationResult result, BatchLine read) =>
         read.Unread.Count == 0 ? result : result with { Warnings = [.. read.Unread.Select(u => u.Message), .. result.Warnings] };
 
-    /// <summary>One line's answer: its result document, or its error document.</summary>
-    public static (string Answer, bool Failed) Answer(int lineNumber, string? line, Identifier identifier, BenchRequest request)
+    /// <summary>One line's answer: its result document, or its error document; and the first field it holds that was not read.</summary>
+    public static (string Answer, bool Failed, string? Unread) Answer(int lineNumber, string? line, Identifier identifier, BenchRequest request)
     {
         if (line is null)
             return (ResultDocument.Error(lineNumber, null, [new BenchFieldError("$", "", $"at most {BatchLineReader.MostCharacters:N0} characters",
-                $"the line is longer than {BatchLineReader.MostCharacters:N0} characters (1 MiB) and was not read.")]), true);
+                $"the line is longer than {BatchLineReader.MostCharacters:N0} characters (1 MiB) and was not read.")]), true, null);
         BatchLine read = StoneReadingsJson.Read(line);
         string? id = read.Readings.Text(BenchField.Id);
+        string? unread = read.Unread.Count > 0 ? read.Unread[0].Path : null;
         try
         {
-            if (read.Errors.Count > 0) return (ResultDocument.Error(lineNumber, id, read.Errors), true);
+            if (read.Errors.Count > 0) return (ResultDocument.Error(lineNumber, id, read.Errors), true, unread);
             BenchOutcome outcome = BenchIdentification.Identify(identifier, read.Readings, request);
             return outcome.Result is { } result
-                ? (ResultDocument.Line(WithUnread(result, read), request.ExplainTop > 0), false)
-                : (ResultDocument.Error(lineNumber, id, outcome.Reading.Errors), true);
+                ? (ResultDocument.Line(WithUnread(result, read), request.ExplainTop > 0), false, unread)
+                : (ResultDocument.Error(lineNumber, id, outcome.Reading.Errors), true, unread);
         }
         catch (Exception e) when (e is not OutOfMemoryException)
         {
             // Any failure inside one stone is that line's answer; the batch goes on.
-            return (ResultDocument.Error(lineNumber, id, [new BenchFieldError("$", "", "", $"this stone could not be ranked: {e.Message}")]), true);
+            return (ResultDocument.Error(lineNumber, id, [new BenchFieldError("$", "", "", $"this stone could not be ranked: {e.Message}")]), true, unread);
         }
     }
 }

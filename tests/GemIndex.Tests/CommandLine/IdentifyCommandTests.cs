@@ -44,6 +44,7 @@ public class IdentifyCommandTests
         // A field the format does not know is not read, and the answer says so first.
         Assert.StartsWith("\"unknown_field\" was not read", diamond.RootElement.GetProperty("warnings")[0].GetString(), StringComparison.Ordinal);
         Assert.DoesNotContain(quartz.RootElement.GetProperty("warnings").EnumerateArray(), w => w.GetString()!.Contains("was not read", StringComparison.Ordinal));
+        Assert.Contains("1 line(s) hold fields the batch format does not know, which were not read (first: line 2: \"unknown_field\")", error, StringComparison.Ordinal);
     }
 
     [Fact]
