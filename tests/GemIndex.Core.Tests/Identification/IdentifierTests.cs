@@ -84,18 +84,24 @@ public class IdentifierTests
         Assert.Equal(["many", "one"], result.Candidates.Select(c => c.Material.Species).ToArray());
     }
 
-    [Fact]
-    public void The_second_and_third_species_are_shown_even_when_the_leaders_varieties_could_fill_the_list()
+    /// <summary>Ten varieties of a very common species and two very rare species of one entry each, all fitting an SG of 2.5 alike.</summary>
+    private static Material[] ManyVarietiesAndTwoRareSpecies()
     {
-        // Readings every entry fits alike: ten varieties of a very common species (1.6 each of weight 16) against two very
-        // rare species of one entry each (weight 1): every variety outranks them, yet the list names all three species.
         var glassLike = OpticalIndices.SingleIndex(new(1.50, 1.53), OpticCharacter.Amorphous);
-        Material[] catalogue =
+        return
         [
             .. Enumerable.Range(1, 10).Select(k => Make($"variety {k}", "many", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryCommon }),
             Make("second", "second", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryRare },
             Make("third", "third", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryRare },
         ];
+    }
+
+    [Fact]
+    public void The_second_and_third_species_are_shown_even_when_the_leaders_varieties_could_fill_the_list()
+    {
+        // Readings every entry fits alike: ten varieties of a very common species (1.6 each of weight 16) against two very
+        // rare species of one entry each (weight 1): every variety outranks them, yet the list names all three species.
+        Material[] catalogue = ManyVarietiesAndTwoRareSpecies();
         var result = new Identifier(catalogue).Identify(new BenchSheet { SpecificGravity = new(2.5, 0.01) }, maximumCandidates: 10);
         Assert.Equal(10, result.Candidates.Count);
         Assert.Equal(["many", "second", "third"], result.Candidates.Select(c => c.Material.Species).Distinct().ToArray());
@@ -105,13 +111,7 @@ public class IdentifierTests
     public void The_reasons_are_written_for_the_best_entry_of_each_leading_species_first()
     {
         // As above: the leading species' varieties fill the top of the list; the reasons worth reading are the rivals'.
-        var glassLike = OpticalIndices.SingleIndex(new(1.50, 1.53), OpticCharacter.Amorphous);
-        Material[] catalogue =
-        [
-            .. Enumerable.Range(1, 10).Select(k => Make($"variety {k}", "many", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryCommon }),
-            Make("second", "second", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryRare },
-            Make("third", "third", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryRare },
-        ];
+        Material[] catalogue = ManyVarietiesAndTwoRareSpecies();
         var result = new Identifier(catalogue).Identify(new BenchSheet { SpecificGravity = new(2.5, 0.01) }, maximumCandidates: 10, explainTop: 4);
         Assert.Equal(["variety 1", "variety 2", "second", "third"],
             result.Candidates.Where(c => c.Reasons.Count > 0).Select(c => c.Material.Name).ToArray());
