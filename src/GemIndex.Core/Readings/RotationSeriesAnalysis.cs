@@ -19,7 +19,8 @@ namespace GemIndex.Core.Readings;
 /// low ∈ [α, β], high ∈ [β, γ] are used.</item>
 /// </list>
 /// An edge is "constant" when all its readings but at most one lie within 4σ of their median; a lone reading
-/// outside that band is reported as a likely misreading and left out. Low edges above the high edges of other steps
+/// outside that band is reported as a likely misreading and left out, unless every reading follows one smoothly moving
+/// edge (within 2σ of the harmonic through them all: the edges of a uniaxial stone meeting at one step). Low edges above the high edges of other steps
 /// (impossible for any orientation) are reported too.
 /// </summary>
 public static class RotationSeriesAnalysis
@@ -263,12 +264,24 @@ public static class RotationSeriesAnalysis
         var odd = outside[0];
         var rest = values.Where(v => v != odd).ToList();
         if (Spread(rest) > band) return values; // a moving edge, not a constant one with a stray reading
+        // An edge that moves smoothly and meets the other at one step (a uniaxial stone with its optic axis in the facet:
+        // 1.553, 1.550, 1.544, 1.550) follows n(φ) = a + b·cos 2φ + c·sin 2φ through every reading; a stray does not.
+        if (FollowsHarmonic(values, band / ConstantBandSigmas)) return values;
         misreadings.Add($"step at {D(odd.Rotation)}: {name} edge {F(odd.Value)} departs by {F(Math.Abs(odd.Value - median))} from an edge otherwise constant at {F(median)}; likely misread, left out");
         values.Remove(odd);
         return values;
     }
 
     private static double Spread(List<EdgeValue> values) => values.Max(v => v.Value) - values.Min(v => v.Value);
+
+    /// <summary>Whether every reading lies within 2σ of the harmonic fitted through all of them (four or more rotations over the half turn).</summary>
+    private static bool FollowsHarmonic(List<EdgeValue> values, double sigma)
+    {
+        if (values.Select(v => Math.Round(((v.Rotation % 180) + 180) % 180, 6)).Distinct().Count() < 4) return false;
+        double[] x = [.. values.Select(v => v.Rotation * Math.PI / 90)];
+        double[] p = MovingEdge.HarmonicFit(x, [.. values.Select(v => v.Value)]);
+        return values.Select((v, i) => Math.Abs(v.Value - (p[0] + p[1] * Math.Cos(x[i]) + p[2] * Math.Sin(x[i])))).Max() <= 2 * sigma;
+    }
 
     private static double Median(IEnumerable<double> values)
     {

@@ -91,6 +91,20 @@ public class RotationSeriesAnalysisTests
     }
 
     [Fact]
+    public void Edges_that_meet_at_one_step_of_a_smoothly_moving_edge_are_not_a_misreading()
+    {
+        // Quartz ω 1.544, ε 1.553 (from memory) with its optic axis in the facet: the high edge falls from ε to meet the
+        // low edge at 90° and rises again (1.553, 1.550, 1.544, 1.550 within the 0.001 of a reading).
+        List<ShadowEdgeStep> steps = [new(0, 1.544, 1.553), new(45, 1.544, 1.550), new(90, 1.544, 1.544), new(135, 1.544, 1.550)];
+        var result = RotationSeriesAnalysis.Analyse(steps, 0.001);
+        Assert.Empty(result.Misreadings);
+        var h = Assert.Single(result.Interpretations);
+        Assert.Equal(OpticSign.Positive, h.Sign);
+        Assert.Equal(1.544, h.Lowest.Value, 0.0015);      // the harmonic's extremes, within a reading's rounding and noise
+        Assert.InRange(h.Highest.Value, 1.552, 1.556);
+    }
+
+    [Fact]
     public void Low_edges_above_other_steps_high_edges_are_impossible_and_reported()
     {
         List<ShadowEdgeStep> steps = [new(0, 1.600, 1.640), new(45, 1.630, 1.650), new(90, 1.610, 1.620), new(135, 1.605, 1.645)];
