@@ -75,7 +75,7 @@ internal class BenchPage : View
         var c = new ChoiceField(BenchChoice.For(field), LabelWidth) { Y = NextRow() };
         Choices.Add(c);
         _inOrder.Add(c);
-        c.TypedAhead += text => TypeIntoNextField(c, text);
+        c.TypedAhead = text => TypeIntoNextField(c, text);
         Add(c);
         return c;
     }
@@ -87,13 +87,18 @@ internal class BenchPage : View
         return l;
     }
 
-    /// <summary>A digit typed on a choice is not lost: it goes into the next text field, which takes the cursor.</summary>
-    private void TypeIntoNextField(ChoiceField from, string text)
+    /// <summary>
+    /// A digit typed on a choice goes on into the field right after it when that is an empty text field, which takes the
+    /// cursor (a choice, then its number: "d" then the index). Anywhere else it is refused: it must never replace a value
+    /// farther down the page.
+    /// </summary>
+    private bool TypeIntoNextField(ChoiceField from, string text)
     {
-        if (_inOrder.Skip(_inOrder.IndexOf(from) + 1).OfType<FormField>().FirstOrDefault() is not { } next) return;
+        if (_inOrder.ElementAtOrDefault(_inOrder.IndexOf(from) + 1) is not FormField next || next.Edit.Text.Length > 0) return false;
         next.Edit.SetFocus();
         next.Edit.Text = text;
         next.Edit.InsertionPoint = text.Length;
+        return true;
     }
 
     /// <summary>Marks each field with its error and lists the reasons at the bottom, each after its field's caption.</summary>

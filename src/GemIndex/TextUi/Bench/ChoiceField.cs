@@ -33,8 +33,11 @@ internal sealed class ChoiceField : View
     /// <summary>Raised when the user picks or clears the answer.</summary>
     public event Action<ChoiceField>? Picked;
 
-    /// <summary>Raised with a digit, point or sign typed here that no answer takes: it belongs to the next field.</summary>
-    public event Action<string>? TypedAhead;
+    /// <summary>
+    /// Asked with a digit, point or sign typed here that no answer takes: it belongs to the next field. Returns whether
+    /// the page took it (it does not when that field already holds a value, which a stray key must not replace).
+    /// </summary>
+    public Func<string, bool>? TypedAhead { get; set; }
 
     /// <summary>Shows a word without raising <see cref="Picked"/> (when a stone is loaded).</summary>
     public void Show(string? word)
@@ -57,8 +60,7 @@ internal sealed class ChoiceField : View
         if (Choice.WordFor((char)rune.Value) is not { } word)
         {
             if (!char.IsAsciiDigit((char)rune.Value) && rune.Value != '.' && rune.Value != '-' || TypedAhead is null) return false;
-            TypedAhead((char)rune.Value + "");
-            return true;
+            return TypedAhead((char)rune.Value + "");
         }
         Pick(word);
         return true;

@@ -294,6 +294,24 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void A_digit_typed_on_a_choice_never_replaces_a_value_farther_down()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F5);
+        var absorption = window.Pages[3].Fields.Single(f => f.Field == BenchFields.Absorption);
+        absorption.Edit.SetFocus();
+        Type(app, "694 668 659");
+        window.Pages[3].Choices.Single(c => c.Choice.Field == BenchFields.UvLong).SetFocus();   // a choice with another choice after it
+        Type(app, "4");
+        window.Pages[3].Choices.Single(c => c.Choice.Field == BenchFields.UvShort).SetFocus(); // the last choice before the lines
+        Type(app, "4");
+        Settle();
+        Assert.Equal("694 668 659", _session.Form.Text(BenchFields.Absorption));
+        Assert.Null(_session.Form.Choice(BenchFields.UvLong));
+        Close(app, window, token);
+    }
+
+    [Fact]
     public void F10_reaches_the_answer_and_the_arrows_reach_the_third_candidate()
     {
         var (app, window, token) = Open();
