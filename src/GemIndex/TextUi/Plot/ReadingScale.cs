@@ -66,7 +66,7 @@ internal sealed class ReadingScale(string title, string format, double value, do
         foreach ((_, PropertyRange? r) in candidates)
             if (r is { } range) { low = Math.Min(low, range.Minimum); high = Math.Max(high, range.Maximum); }
         double margin = Math.Max((high - low) * 0.05, widest / 200);
-        (low, high) = (low - margin, high + margin);
+        (low, high) = (Math.Max(0, low - margin), high + margin);   // an index, a birefringence or an SG is never negative
         if (high - low > widest)
         {
             double left = Math.Clamp(value - widest / 2, low, high - widest);

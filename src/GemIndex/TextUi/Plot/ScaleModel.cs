@@ -1,4 +1,5 @@
 using GemIndex.Cli.TextUi.Bench;
+using GemIndex.Cli.TextUi.Results;
 using GemIndex.Core.Bench;
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Identification;
@@ -27,7 +28,8 @@ internal sealed class ScaleModel
         var scales = new List<Func<int, ReadingScale>>();
         // The best entry of each species first, then the next entries (as the answer's leaders): four varieties of one
         // species share its ranges and say nothing against a rival species'. Each keeps its rank in the answer.
-        IReadOnlyList<RankedCandidate> ranked = assessment?.Result?.Candidates ?? [];
+        IReadOnlyList<RankedCandidate> all = assessment?.Result?.Candidates ?? [];
+        IReadOnlyList<RankedCandidate> ranked = [.. all.Take(ResultsModel.ListedOf(all))];   // only the candidates the answer lists
         IReadOnlyList<int> order = [.. LeadingCandidates.Order(ranked).Take(MostCandidates)];
         IReadOnlyList<Material> top = [.. order.Select(i => ranked[i].Material)];
         IReadOnlyList<int> ranks = [.. order.Select(i => i + 1)];

@@ -46,14 +46,14 @@ internal sealed class ResultsModel
     public string? WaitingReason { get; set; }
 
     /// <summary>How many candidates the pane lists.</summary>
-    public int Listed
+    public int Listed => ListedOf(Candidates);
+
+    /// <summary>How many of these candidates the answer lists: at least <see cref="CandidatesListed"/>, through the last holding <see cref="ListedShare"/>.</summary>
+    public static int ListedOf(IReadOnlyList<RankedCandidate> candidates)
     {
-        get
-        {
-            int last = -1;
-            for (int i = 0; i < Candidates.Count; i++) if (Candidates[i].Confidence >= ListedShare) last = i;
-            return Math.Min(Candidates.Count, Math.Max(CandidatesListed, last + 1));
-        }
+        int last = -1;
+        for (int i = 0; i < candidates.Count; i++) if (candidates[i].Confidence >= ListedShare) last = i;
+        return Math.Min(candidates.Count, Math.Max(CandidatesListed, last + 1));
     }
 
     /// <summary>The first row of the answer, unwrapped (the species and its total, or why there is none).</summary>

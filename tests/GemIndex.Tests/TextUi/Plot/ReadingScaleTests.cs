@@ -179,6 +179,31 @@ public class ReadingScaleTests
     }
 
     [Fact]
+    public void The_scales_draw_only_candidates_the_answer_lists()
+    {
+        // Six quartz entries fill the answer's list; a spinel at 0.1 % comes seventh and is not listed, so not drawn.
+        Material quartz = TestMaterials.All[0], spinel = TestMaterials.All[1];
+        RankedCandidate[] ranked =
+        [
+            .. Enumerable.Range(1, 6).Select(k => new RankedCandidate { Material = quartz with { Name = $"quartz {k}" }, Confidence = 0.16, Fit = 0.9 }),
+            new() { Material = spinel, Confidence = 0.001, Fit = 0.1 },
+        ];
+        var result = new IdentificationResult { Id = "x", Candidates = ranked, NotInCatalogue = 0, NoGoodMatch = false, Warnings = [] };
+        var a = new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 2.65 }, Result = result,
+            SpecificGravity = new SpecificGravity(2.65, 0.01) };
+        ReadingScale sg = Assert.Single(new ScaleModel(a).Scales(5));
+        Assert.DoesNotContain(sg.Candidates, c => c.Name == "spinel");
+    }
+
+    [Fact]
+    public void A_scale_never_runs_below_zero()
+    {
+        // A birefringence of 0.001 against a range from 0 (an isotropic material's): no negative axis label.
+        var scale = new ReadingScale("birefringence", "0.000", 0.001, 0.001, ScaleModel.WidestBirefringence, [("glass", new PropertyRange(0, 0))]);
+        Assert.True(scale.Window().Low >= 0);
+    }
+
+    [Fact]
     public void Without_readings_the_model_says_what_it_needs()
     {
         var model = new ScaleModel(null);
