@@ -80,6 +80,11 @@ public static class BenchReader
                         Error(field, text, "a value only with a refractometer reading", "is given, but there is no refractometer reading (steps, spot or over the limit) to apply it to.");
                 return null;
             }
+            // A spot reading is one number; rotation steps are facet readings. Read as edges, a "spot" step would be scored
+            // as a crystal's constant edge, not as a spot reading's blur between a material's extreme indices.
+            if (method == RefractometerMethod.Spot && r.Steps.Count > 0)
+                Error(BenchField.Method, r.Text(BenchField.Method) ?? "", "facet with rotation steps, or spot with one spot reading",
+                    "is spot, but rotation steps are given: a spot reading goes in the spot field as one number; steps are read on a facet.");
             if (over == true && r.Text(BenchField.Spot) is not null)
                 Error(BenchField.OverLimit, "yes", "over the limit, or a spot reading, not both",
                     $"says no edge was seen, but a spot reading {BenchText.Shown(r.Text(BenchField.Spot))} is given too.");
@@ -88,7 +93,7 @@ public static class BenchReader
             if (over == true && r.Steps.FindIndex(s => s.High.Trim().Length > 0) is int withHigh and >= 0)
                 Error(BenchField.OverLimit, "yes", "over the limit only when the high edge was not seen",
                     $"says the high edge was not seen, but step {withHigh + 1} ({BenchField.Step(withHigh)}) gives one.");
-            if (!anyReading || HasError(BenchField.OverLimit)) return null;
+            if (!anyReading || HasError(BenchField.OverLimit) || HasError(BenchField.Method)) return null;
             var observation = new Dictionary<string, double?>
             {
                 [BenchField.LightNm] = light, [BenchField.LiquidLimit] = liquidGiven, [BenchField.Precision] = precision,

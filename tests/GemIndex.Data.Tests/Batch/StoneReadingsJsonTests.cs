@@ -67,6 +67,7 @@ public class StoneReadingsJsonTests
     [InlineData("""{"id":{}}""", "id")]
     [InlineData("""{"id":"x","refractometer":1}""", "refractometer")]
     [InlineData("""{"id":"x","refractometer":{"method":"sideways","spot":1.5}}""", "refractometer.method")]
+    [InlineData("""{"id":"x","refractometer":{"method":"spot","readings":[{"low":1.61}]}}""", "refractometer.method")]
     [InlineData("""{"id":"x","refractometer":{"readings":[{"low":1.5x}]}}""", "$")]
     [InlineData("""{"id":"x","refractometer":{"readings":[{"low":"1.54"}]}}""", "refractometer.readings[0].low")]
     [InlineData("""{"id":"x","refractometer":{"readings":[{"low":1.553,"high":1.544}]}}""", "refractometer.readings[0]")]
