@@ -97,7 +97,9 @@ internal static class IdentifyCommand
             var errors = shapeErrors.Concat(outcome.Reading.Errors).ToList();
             if (errors.Count > 0 || outcome.Result is not { } result)
             {
-                foreach (var e in errors) error.WriteLine($"gemindex: {OptionOf(e.Field)}: {InOptions(e.Sentence)}");
+                foreach (var e in errors)
+                    error.WriteLine(e.Field == "$" ? $"gemindex: {InOptions(e.Sentence).TrimEnd('.')}; 'identify --help' lists the reading options"
+                        : $"gemindex: {OptionOf(e.Field)}: {InOptions(e.Sentence)}");
                 return ExitCodes.BadInput;
             }
             if (pr.GetValue(json)) output.WriteLine(ResultDocument.Line(result, explain: true));

@@ -48,6 +48,23 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void A_stone_with_no_readings_is_refused_rather_than_ranked_by_the_catalogues_frequencies_alone()
+    {
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run);
+        Assert.Equal(3, exit);
+        Assert.Equal("", output);
+        Assert.Contains("no readings were given", error, StringComparison.Ordinal);
+        Assert.Contains("'identify --help' lists the reading options", error, StringComparison.Ordinal);
+        string file = Batch(run, """{"id":"empty"}""", """{"id":"red","colour":"red"}""");
+        var (batchExit, lines, _) = Identify(run, "--batch", file);
+        Assert.Equal(3, batchExit);
+        var answers = lines.Split('\n', StringSplitOptions.RemoveEmptyEntries).Select(l => JsonDocument.Parse(l).RootElement).ToArray();
+        Assert.StartsWith("$: no readings were given", answers[0].GetProperty("error").GetString(), StringComparison.Ordinal);
+        Assert.True(answers[1].TryGetProperty("species", out _));   // a colour alone is a reading, if a weak one
+    }
+
+    [Fact]
     public void A_bad_line_gets_an_error_line_naming_the_field_and_the_batch_goes_on_with_exit_3()
     {
         using var run = new CommandRun();

@@ -54,7 +54,7 @@ public sealed class BadValueMatrixTests(ITestOutputHelper log) : IDisposable
             ["catalogue import"] = ["catalogue", "import", CommandRun.Fixture("user-good.csv"), "--catalogue-dir", catalogueDir],
             ["catalogue build"] = ["catalogue", "build", "--output", output, "--source", CommandRun.Fixture("families"), "--catalogue-dir", catalogueDir],
             ["identify"] = ["identify", "--sg", "2.65", "--catalogue-dir", catalogueDir],
-            ["identify --batch"] = ["identify", "--catalogue-dir", catalogueDir],   // a batch takes no reading options
+            ["identify --batch"] = ["identify", "--batch", batch, "--catalogue-dir", catalogueDir],   // a batch takes no reading options
             ["report stone"] = ["report", "stone", "--readings", batch, "--catalogue-dir", catalogueDir],
             ["report stone/workbook"] = ["report", "stone", "--workbook", workbook, "--stone", "lot 3 / 1", "--catalogue-dir", catalogueDir],
             ["report workbook"] = ["report", "workbook", "--workbook", workbook, "--catalogue-dir", catalogueDir],
