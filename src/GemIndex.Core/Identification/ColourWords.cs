@@ -39,6 +39,8 @@ public static class ColourWords
         "light", "dark", "pale", "deep", "medium", "vivid", "bright", "intense", "very", "slightly", "faint", "strong", "rich",
         "play", "of", "colour", "color", "with", "and", "multicolour", "multicolor", "iridescent", "opalescent", "sheen",
         "schiller", "chatoyant", "star", "flash", "flashes", "fire",
+        // Trade names of a shade before its hue ("sky blue", "royal blue", "apple green"): the hue word says the colour.
+        "sky", "royal", "baby", "powder", "apple", "bottle", "grass", "forest", "sea",
     };
 
     /// <summary>The hues the tool knows (the bench's rough colour wheel).</summary>

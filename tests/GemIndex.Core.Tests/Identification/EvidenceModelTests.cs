@@ -182,6 +182,8 @@ public class EvidenceModelTests
     [InlineData("green and red", "green red")]
     [InlineData("bluish", "blue")]
     [InlineData("light blue", "blue")]
+    [InlineData("sky blue", "blue")]
+    [InlineData("apple green", "green")]
     [InlineData("zorbish", "")]
     public void A_colour_description_names_its_last_hue_and_a_tint_only_tones_it(string description, string expected)
     {
@@ -220,6 +222,15 @@ public class EvidenceModelTests
         // Still a probability over the known hues, and an entry that is its species' only one is unchanged.
         Assert.Equal(1, ColourWords.KnownHues.Sum(h => ColourWords.EntryProbability([h], own, species)), 9);
         Assert.Equal(ColourWords.Probability(["pink"], own), ColourWords.EntryProbability(["pink"], own, own), 12);
+    }
+
+    [Theory]
+    [InlineData("sky blue", "")]
+    [InlineData("royal blue", "")]
+    [InlineData("light zorbish green", "zorbish")]
+    public void Trade_names_of_a_shade_are_no_unknown_colour_words(string description, string unknown)
+    {
+        Assert.Equal(unknown.Split(' ', StringSplitOptions.RemoveEmptyEntries), ColourWords.UnknownWords(description));
     }
 
     [Fact]

@@ -33,6 +33,9 @@ internal sealed class FormField : View
         _mark = new PlainLabel { X = Pos.Right(Edit) + 1, Width = Dim.Fill(), Text = hint };
         Add(caption, Edit, _mark);
         _mark.ViewportChanged += (_, _) => ShowMark();
+        // A value longer than its box shows its start when the cursor leaves (it scrolled to its end while typed:
+        // "694, 668, 659" read as "4, 668, 659").
+        Edit.HasFocusChanged += (_, e) => { if (!e.NewValue) Edit.InsertionPoint = 0; };
     }
 
     public string Field { get; }

@@ -370,6 +370,7 @@ public sealed class MainWindowTests : IDisposable
         string caution = System.Text.RegularExpressions.Regex.Replace(window.Gravity.Caution.Text, @"\s+", " ");
         Assert.Contains("Do not immerse: opal is among the top candidates.", caution);
         Assert.EndsWith("rely on the other tests.", caution);
+        Assert.Contains("tests.", FormText(app.Driver!.ToString()!));   // drawn whole, not cut by the label's height
         Close(app, window, token);
     }
 
