@@ -70,9 +70,4 @@ public static class BenchDefaults
     /// <summary>The longest colour description read ("greenish yellow with brown zones" is 32).</summary>
     public const int LongestColour = 40;
 
-    /// <summary>
-    /// The most characters of magnification words an error lists as allowed (two lines of a terminal); the rest are
-    /// counted, since the whole vocabulary would bury the one word that was wrong.
-    /// </summary>
-    public const int LongestFeatureList = 160;
 }

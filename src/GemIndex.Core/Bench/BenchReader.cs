@@ -288,24 +288,18 @@ public static class BenchReader
             foreach (string word in BenchSyntax.Features(text))
             {
                 if (MagnificationVocabulary.Find(word) is { } feature) { if (!features.Contains(feature)) features.Add(feature); }
-                else Error(field, word, allowed, $"'{BenchText.Shown(word)}' is not a magnification feature; allowed: {allowed}.");
+                else
+                {
+                    IReadOnlyList<string> meant = Spelling.Near(word, MagnificationVocabulary.Words);
+                    string guess = meant.Count > 0 ? $" did you mean {string.Join(" or ", meant)}?" : "";
+                    Error(field, word, allowed, $"'{BenchText.Shown(word)}' is not a magnification feature;{guess} allowed: {allowed}.");
+                }
             }
             return features;
         }
 
-        /// <summary>The vocabulary's words, shortened to fit one message (the full list is in the vocabulary's help).</summary>
-        private static string AllowedFeatures()
-        {
-            var shown = new List<string>();
-            int length = 0;
-            foreach (string word in MagnificationVocabulary.Words)
-            {
-                if (length + word.Length + 2 > BenchDefaults.LongestFeatureList) return string.Join(", ", shown) + $", … ({MagnificationVocabulary.Words.Count} in all)";
-                shown.Add(word);
-                length += word.Length + 2;
-            }
-            return string.Join(", ", shown);
-        }
+        /// <summary>The vocabulary's words, every one of them (the error is where the command line lists them).</summary>
+        private static string AllowedFeatures() => string.Join(", ", MagnificationVocabulary.Words);
 
         private string? Colour()
         {

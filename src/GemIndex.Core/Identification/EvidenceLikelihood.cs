@@ -160,7 +160,8 @@ public static class EvidenceLikelihood
         if (acc.Explaining)
         {
             string expected = m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial
-                ? (m.Pleochroism == PleochroismStrength.None ? "no pleochroism" : $"{m.Pleochroism.ToString().ToLowerInvariant()} pleochroism") + $" ({(m.OpticCharacter == OpticCharacter.Biaxial ? "up to three colours" : "two colours at most")}) expected"
+                ? (m.Pleochroism == PleochroismStrength.None ? "no pleochroism expected"
+                    : $"{m.Pleochroism.ToString().ToLowerInvariant()} pleochroism ({(m.OpticCharacter == OpticCharacter.Biaxial ? "up to three colours" : "two colours at most")}) expected")
                 : "none expected (singly refractive)";
             acc.Say($"pleochroism {seen.ToString().ToLowerInvariant()}; {expected}");
         }
@@ -322,6 +323,9 @@ public static class EvidenceLikelihood
             acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : string.Join(", ", m.Colours) + " usual, most usual first")}");
     }
 
+    /// <summary>Up to this many standard uncertainties outside a range, a reading is said to lie within its uncertainty of it (two: the usual reading of a normal error).</summary>
+    private const double WithinUncertaintySigmas = 2;
+
     /// <summary>Where a value lies against a range: "lies in 3.95–4.05" or "lies 0.12 below 3.95–4.05 (8σ)".</summary>
     internal static string Where(double value, PropertyRange range, double sigma, string format)
     {
@@ -329,7 +333,11 @@ public static class EvidenceLikelihood
         double below = range.Minimum - value, above = value - range.Maximum;
         double distance = Math.Max(below, above);
         string side = below > 0 ? "below" : "above";
-        return $"lies {distance.ToString(format, CultureInfo.InvariantCulture)} {side} {range.ToString(format)} ({(distance / sigma).ToString("0.#", CultureInfo.InvariantCulture)}σ)";
+        double sigmas = distance / sigma;
+        // Just outside a range, within the reading's own uncertainty, still counts for the material: said, so that "for"
+        // beside "lies below" does not read as a contradiction.
+        string within = sigmas <= WithinUncertaintySigmas ? ", within the reading's uncertainty" : "";
+        return $"lies {distance.ToString(format, CultureInfo.InvariantCulture)} {side} {range.ToString(format)} ({sigmas.ToString("0.#", CultureInfo.InvariantCulture)}σ{within})";
     }
 
     internal static string Word<T>(T value) where T : struct, Enum => value.ToString() switch

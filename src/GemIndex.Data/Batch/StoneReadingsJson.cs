@@ -77,7 +77,7 @@ public static class StoneReadingsJson
             {
                 if (known.Contains(property.Name, StringComparer.Ordinal)) continue;
                 string name = SafeName(property);
-                Unread.Add(new UnreadField(path.Length == 0 ? name : $"{path}.{name}", FieldNames.Near(name, known), known));
+                Unread.Add(new UnreadField(path.Length == 0 ? name : $"{path}.{name}", Spelling.Near(name, known), known));
             }
         }
 

@@ -233,6 +233,16 @@ public class EvidenceModelTests
         Assert.Equal(unknown.Split(' ', StringSplitOptions.RemoveEmptyEntries), ColourWords.UnknownWords(description));
     }
 
+    [Theory]
+    [InlineData(2.65, "lies in 2.64–2.66")]
+    [InlineData(2.63, "lies 0.01 below 2.64–2.66 (1σ, within the reading's uncertainty)")]
+    [InlineData(2.70, "lies 0.04 above 2.64–2.66 (4σ)")]
+    public void A_reading_just_outside_a_range_is_said_to_lie_within_its_uncertainty(double sg, string expected)
+    {
+        // Quartz SG 2.64–2.66 (from memory), read to ± 0.01.
+        Assert.Equal(expected, EvidenceLikelihood.Where(sg, new PropertyRange(2.64, 2.66), 0.01, "0.00"));
+    }
+
     [Fact]
     public void A_strong_listed_line_not_seen_costs_far_more_than_a_weak_one()
     {

@@ -154,7 +154,7 @@ public class StoneReadingsJsonTests
     [InlineData("uv_long", "uv_long", 0)]
     public void Edits_count_letters_changed_added_or_dropped(string a, string b, int edits)
     {
-        Assert.Equal(edits, FieldNames.Edits(a, b));
-        Assert.Equal(edits, FieldNames.Edits(b, a));
+        Assert.Equal(edits, Spelling.Edits(a, b));
+        Assert.Equal(edits, Spelling.Edits(b, a));
     }
 }

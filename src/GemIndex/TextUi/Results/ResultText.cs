@@ -73,7 +73,9 @@ internal static class ResultText
         if (origins.Count > 1) lines.Add(Inseparable(r, lead, origins));
         else if (r.Candidates.Where(c => c.Material.Species == lead.Species && c.Confidence >= BenchWarnings.Relevant).ToList() is [var only]
                  && only.Material.Name != lead.Species)
-            lines.Add($"  {only.Material.Name}, {Origin(only.Material.Origin)}");   // the variety beneath its species: "Forsterite" / "peridot"
+            // The variety beneath its species ("Forsterite" / "peridot, natural"); a name that says its origin says it once.
+            lines.Add(only.Material.Name.Contains(Origin(only.Material.Origin), StringComparison.OrdinalIgnoreCase)
+                ? $"  {only.Material.Name}" : $"  {only.Material.Name}, {Origin(only.Material.Origin)}");
         else if (origins is [var one])
             lines.Add($"  {Origin(one.Key)} {Percent(one.Value)}");   // several entries, one origin left (melt-growth signs seen: "synthetic 96%")
         foreach (SpeciesResult other in r.Species.Skip(1).Where(s => s.Confidence >= BenchWarnings.Relevant).Take(2))

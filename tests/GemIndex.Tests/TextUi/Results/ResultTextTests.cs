@@ -105,6 +105,19 @@ public class ResultTextTests
         Assert.Equal(["Corundum 97%", "  synthetic 96%"], ResultText.Lead(r));
     }
 
+    [Theory]
+    [InlineData("flame-fusion synthetic sapphire", OriginClass.Synthetic, "  flame-fusion synthetic sapphire")]
+    [InlineData("padparadscha sapphire", OriginClass.Natural, "  padparadscha sapphire, natural")]
+    public void The_variety_under_its_species_names_its_origin_once(string name, OriginClass origin, string expected)
+    {
+        IdentificationResult r = CorundumAnswer(null) with
+        {
+            Species = [new SpeciesResult { Species = "corundum", Confidence = 0.97, Origins = new Dictionary<OriginClass, double> { [origin] = 0.97 } }],
+            Candidates = [new() { Material = Corundum(name, origin), Confidence = 0.97, Fit = 0.9 }],
+        };
+        Assert.Equal(["Corundum 97%", expected], ResultText.Lead(r));
+    }
+
     [Fact]
     public void When_the_next_test_separates_the_origins_the_lead_names_it()
     {

@@ -1,7 +1,7 @@
-namespace GemIndex.Data.Batch;
+namespace GemIndex.Core.Bench;
 
-/// <summary>Which known field names a name that the format does not know was likely meant to be.</summary>
-public static class FieldNames
+/// <summary>Which known words a word the tool does not know was likely meant to be (a batch line's field, a magnification feature).</summary>
+public static class Spelling
 {
     /// <summary>Most letters changed, added or dropped for a name still to count as a misspelling (one for names of three letters or fewer).</summary>
     private const int MostEdits = 2;
