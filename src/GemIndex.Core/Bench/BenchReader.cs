@@ -145,8 +145,9 @@ public static class BenchReader
                 EdgeStepText s = r.Steps[i];
                 string field = BenchField.Step(i);
                 double? rotation = unrotated ? i * 180.0 / r.Steps.Count : s.Rotation.Trim().Length == 0 ? 0 : Parse(field, "rotation", s.Rotation);
-                double? low = rotation is null ? null : Parse(field, "low", s.Low);
-                double? high = low is null || s.High.Trim().Length == 0 ? null : Parse(field, "high", s.High);
+                // Every part is read, so that one pass names each bad one (a bad rotation hid a bad edge).
+                double? low = Parse(field, "low", s.Low);
+                double? high = s.High.Trim().Length == 0 ? null : Parse(field, "high", s.High);
                 if (rotation is null || low is null || s.High.Trim().Length > 0 && high is null) continue;
                 ShadowEdgeStep step;
                 try { step = new ShadowEdgeStep(rotation.Value, low.Value, high); }
@@ -200,7 +201,14 @@ public static class BenchReader
             Mass? inWater = waterCt is { } w ? Checked(BenchField.WaterCt, water!, () => BenchDefaults.Weighed(w)) : null;
             Temperature? temperature = celsius is not null && waterC is null ? null
                 : Checked(BenchField.WaterC, celsius ?? "", () => WaterDensity.At(Temperature.FromCelsius(waterC ?? BenchDefaults.WaterCelsius)).Temperature);
-            if (inAir is not { } m1 || inWater is not { } m2 || temperature is not { } t) return null;
+            if (inAir is not { } m1 || inWater is not { } m2) return null;
+            if (temperature is not { } t)
+            {
+                // The temperature is refused; the weights are still checked against each other (at the usual water
+                // temperature), so that one pass names every fault.
+                Checked(BenchField.WaterCt, water!, () => HydrostaticWeighing.SpecificGravityOf(m1, m2, Temperature.FromCelsius(BenchDefaults.WaterCelsius)));
+                return null;
+            }
             return Checked(BenchField.WaterCt, water!, () => HydrostaticWeighing.SpecificGravityOf(m1, m2, t));
         }
 

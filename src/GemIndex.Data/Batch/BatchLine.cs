@@ -11,6 +11,12 @@ public sealed record BatchLine(BenchReadings Readings, IReadOnlyList<BenchFieldE
 {
     /// <summary>Fields the format does not know, in the order written; a field the user meant is lost unless they are told.</summary>
     public IReadOnlyList<UnreadField> Unread { get; init; } = [];
+
+    /// <summary>
+    /// The errors of the line's form and, read on, of every value that could be read: one pass names every fault (a
+    /// refused "sg" hid an edge above the liquid limit). Empty when the line is sound.
+    /// </summary>
+    public IReadOnlyList<BenchFieldError> AllErrors() => Errors.Count == 0 ? [] : [.. Errors, .. BenchReader.Read(Readings).Errors];
 }
 
 /// <summary>A field of a batch line the format does not know: its path, and the known fields of that object it may have meant.</summary>

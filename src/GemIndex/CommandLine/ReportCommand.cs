@@ -217,7 +217,7 @@ internal static class ReportCommand
         BenchOutcome? outcome = read.Errors.Count == 0 ? BenchIdentification.Identify(new Identifier(catalogue), read.Readings, Request) : null;
         if (outcome?.Result is not { } result)
         {
-            foreach (var x in outcome?.Reading.Errors ?? read.Errors) e.WriteLine($"gemindex: {BenchText.Shown(file.Name)} line {lineNumber}: {x}");
+            foreach (var x in outcome?.Reading.Errors ?? read.AllErrors()) e.WriteLine($"gemindex: {BenchText.Shown(file.Name)} line {lineNumber}: {x}");
             return ExitCodes.BadInput;
         }
         StoneReadings stored = StoneReadingsConverter.FromReadings(read.Readings, lenient: false);

@@ -71,7 +71,7 @@ internal static class BatchIdentification
         string? unread = read.Unread.Count > 0 ? read.Unread[0].Path : null;
         try
         {
-            if (read.Errors.Count > 0) return (ResultDocument.Error(lineNumber, id, read.Errors), true, unread);
+            if (read.Errors.Count > 0) return (ResultDocument.Error(lineNumber, id, read.AllErrors()), true, unread);
             BenchOutcome outcome = BenchIdentification.Identify(identifier, read.Readings, request);
             return outcome.Result is { } result
                 ? (ResultDocument.Line(WithUnread(result, read), request.ExplainTop > 0), false, unread)

@@ -42,6 +42,18 @@ public class BenchReaderTests
     }
 
     [Fact]
+    public void A_refused_part_does_not_hide_the_fault_of_another()
+    {
+        // A bad water temperature still lets the weights be checked against each other (water 0.6 ct above air 0.5 ct).
+        var weighing = BenchReader.Read(R((BenchField.AirCt, "0.5"), (BenchField.WaterCt, "0.6"), (BenchField.WaterC, "95")));
+        Assert.Equal([BenchField.WaterC, BenchField.WaterCt], Fields(weighing).Order(StringComparer.Ordinal));
+        // A step with a comma in its low edge and letters for its high edge: both parts are named.
+        var step = BenchReader.Read(Steps(R(), "0:1,544/abc"));
+        Assert.Equal(2, step.Errors.Count(e => e.Field == BenchField.Step(0)));
+        Assert.Contains(step.Errors, e => e.Sentence.StartsWith("high:", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void An_edge_above_the_usual_liquid_is_an_error_asking_for_the_liquid_never_a_guess()
     {
         var reading = BenchReader.Read(Steps(new BenchReadings(), "0:1.81", "90:1.81"));

@@ -110,6 +110,15 @@ public class StoneReadingsJsonTests
     }
 
     [Fact]
+    public void A_line_with_a_fault_of_form_still_has_its_values_checked()
+    {
+        // "sg" as text is a fault of form; the edge 1.9 above the usual 1.79 liquid is named in the same pass.
+        BatchLine read = StoneReadingsJson.Read("""{"id":"x","sg":"2,65","refractometer":{"readings":[{"low":1.9}]}}""");
+        Assert.Equal([BenchField.Sg, BenchField.Step(0)], read.AllErrors().Select(e => e.Field));
+        Assert.Empty(StoneReadingsJson.Read("""{"id":"x","sg":2.65}""").AllErrors());
+    }
+
+    [Fact]
     public void An_unknown_field_is_no_error_but_is_named_as_not_read()
     {
         const string line = """{"id":"x","sg":2.65,"lustre":"vitreous"}""";
