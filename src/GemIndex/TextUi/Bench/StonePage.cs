@@ -6,6 +6,9 @@ internal sealed class StonePage : BenchPage
     /// <summary>Under the examiner's field: what it is for and that it is not the stone's.</summary>
     public const string ExaminerNote = "  on every report from this workbook";
 
+    /// <summary>Under the stone's fields: which of them the answer weighs (the others describe the stone in its report).</summary>
+    public const string WeighedNote = "  only colour is used in the answer";
+
     public StonePage() : base("Stone", FieldKeys)
     {
         AddField(BenchFields.Reference, "Reference", 24);
@@ -16,6 +19,7 @@ internal sealed class StonePage : BenchPage
         AddField(BenchFields.Colour, "Colour", 24);
         AddField(BenchFields.Transparency, "Transparency", 20);
         AddField(BenchFields.Notes, "Notes", 24);
+        AddNote(WeighedNote);
         AddNote();
         AddField(BenchFields.Examiner, "Examiner", 24);
         AddNote(ExaminerNote);

@@ -568,6 +568,7 @@ public sealed class MainWindowTests : IDisposable
         string screen = app.Driver!.ToString()!;
         Assert.Contains("Examiner      A. Example", screen);
         Assert.Contains(StonePage.ExaminerNote.Trim(), screen);
+        Assert.Contains(StonePage.WeighedNote.Trim(), screen);   // what of the stone page the answer uses
         Assert.True(_session.Flush());
         Assert.Equal("A. Example", _workbook.Setting(BenchSession.ExaminerSetting));
         Close(app, window, token);
