@@ -15,8 +15,8 @@ public static class BenchIdentification
     {
         QuantityOutOfRangeException.ThrowIfOutside("candidates", request.Candidates, 1, BenchDefaults.MostCandidates);
         BenchReading reading = BenchReader.Read(readings);
-        // Nothing to rank by: the catalogue's frequencies alone are no answer (the text UI asks for readings itself).
-        if (!request.RankDespiteErrors && reading.Errors.Count == 0 && reading.IsEmpty)
+        // Nothing to rank by: the catalogue's frequencies alone are no answer to a single stone typed on the command line.
+        if (request.RefuseEmpty && reading.Errors.Count == 0 && reading.IsEmpty)
             reading = reading with { Errors = [new BenchFieldError("$", "", "at least one reading",
                 "no readings were given: give at least one (refractometer, SG, polariscope, dichroscope, UV, spectroscope, probes, colour or magnification).")] };
         bool rank = reading.Errors.Count == 0 || request.RankDespiteErrors && reading.HasReadings;

@@ -15,10 +15,8 @@ public sealed record BenchReading
     public required IReadOnlyList<BenchFieldError> Errors { get; init; }
 
     /// <summary>True when the sheet holds nothing at all to rank by: no test's reading, no colour, no magnification.</summary>
-    public bool IsEmpty => !HasReadings && Sheet.Colour is null && Sheet.Magnification is null;
+    public bool IsEmpty => Sheet.IsEmpty;
 
     /// <summary>True when the sheet holds at least one test's reading.</summary>
-    public bool HasReadings => Sheet.Refractometer is not null || Sheet.SpecificGravity is not null || Sheet.HeavyLiquids.Count > 0
-        || Sheet.Polariscope is not null || Sheet.Pleochroism is not null || Sheet.Dispersion is not null || Sheet.ThermalProbe is not null
-        || Sheet.Electrical is not null || Sheet.UvLong is not null || Sheet.UvShort is not null || Sheet.AbsorptionLinesNanometres is not null;
+    public bool HasReadings => Sheet.HasTestReadings;
 }

@@ -17,4 +17,10 @@ public sealed record BenchRequest
     /// fields); otherwise any error means no ranking (the command line and the batch refuse the stone).
     /// </summary>
     public bool RankDespiteErrors { get; init; }
+
+    /// <summary>
+    /// Whether a stone with nothing at all to rank by is refused (a single stone on the command line, where it is a
+    /// usage slip); otherwise it is ranked on the catalogue's frequencies alone and a warning says so (a batch line).
+    /// </summary>
+    public bool RefuseEmpty { get; init; }
 }

@@ -51,4 +51,12 @@ public sealed record BenchSheet
 
     /// <summary>What was looked for under magnification; null when nothing was.</summary>
     public MagnificationObservation? Magnification { get; init; }
+
+    /// <summary>True when the sheet holds at least one test's reading (colour and magnification aside).</summary>
+    public bool HasTestReadings => Refractometer is not null || SpecificGravity is not null || HeavyLiquids.Count > 0 || Polariscope is not null
+        || Pleochroism is not null || Dispersion is not null || ThermalProbe is not null || Electrical is not null || UvLong is not null
+        || UvShort is not null || AbsorptionLinesNanometres is not null;
+
+    /// <summary>True when the sheet holds nothing at all to rank by: no test's reading, no colour, no magnification.</summary>
+    public bool IsEmpty => !HasTestReadings && Colour is null && Magnification is null;
 }

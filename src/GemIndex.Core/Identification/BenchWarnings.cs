@@ -10,6 +10,12 @@ public static class BenchWarnings
     /// <summary>A candidate at or above this confidence is worth warning about.</summary>
     public const double Relevant = 0.05;
 
+    /// <summary>
+    /// A test weighing this much or more against the leading candidate, with its reading outside what the candidate shows,
+    /// is named in a warning (ten to one against: log₂ 10 bits; a judgement, docs/ranking.md §3, warnings).
+    /// </summary>
+    public const double ContradictionBits = 3.32;
+
     /// <summary>An origin holding at least this share of its species' total is one the tests have not ruled out.</summary>
     public const double OriginShare = 0.05;
 
@@ -20,10 +26,13 @@ public static class BenchWarnings
     /// <param name="noGoodMatch">Whether nothing fits.</param>
     /// <param name="species">Species totals over the whole catalogue, best first.</param>
     /// <param name="separation">The test that would best tell the leading species' entries apart, if any.</param>
+    /// <param name="leaderReasons">The leading candidate's reasons, each test weighed (empty: none worked out).</param>
     public static IReadOnlyList<string> For(AnalysedSheet sheet, IReadOnlyList<RankedCandidate> candidates, double notInCatalogue, bool noGoodMatch,
-        IReadOnlyList<SpeciesResult>? species = null, NextTestAdvice? separation = null)
+        IReadOnlyList<SpeciesResult>? species = null, NextTestAdvice? separation = null, IReadOnlyList<EvidenceContribution>? leaderReasons = null)
     {
         var warnings = new List<string>();
+        if (sheet.Sheet.IsEmpty)
+            warnings.Add("No readings were given: this ranking is the catalogue's frequencies alone, not an identification.");
         if (noGoodMatch)
             warnings.Add($"Nothing in the catalogue fits these readings well (best fit {P(candidates[0].Fit)}, not in the catalogue {P(notInCatalogue)}): re-check the readings, or the stone may be a material the catalogue lacks.");
         if (sheet.Series is { } series)
@@ -37,6 +46,11 @@ public static class BenchWarnings
         if (sheet.Sheet.SpecificGravity is { } measured)
             foreach (var h in sheet.Sheet.HeavyLiquids.Where(h => Contradicts(measured, h)))
                 warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");
+        // A reading that speaks strongly against the answer's own leader: most often a misreading, so it is named.
+        if (!noGoodMatch && candidates.Count > 0)
+            // Colour aside: a colour outside a variety's usual ones names another variety, not a misreading.
+            foreach (var reason in (leaderReasons ?? []).Where(r => !r.Agrees && r.WeightBits <= -ContradictionBits && r.Test != Bench.BenchField.Colour))
+                warnings.Add($"Unusual for {candidates[0].Material.Name}, {Bench.BenchTestWords.DisplayOfWire(reason.Test)}: {reason.Text}. Re-check it; the answer weighs it as read.");
         if (sheet.Sheet.SpecificGravity is { StandardUncertainty: > 0.03 } sg)
             warnings.Add($"SG uncertainty ±{sg.StandardUncertainty.ToString("0.00", CultureInfo.InvariantCulture)} is large (a small stone or a coarse balance): SG separates little here.");
         var relevant = candidates.Where(c => c.Confidence >= Relevant).ToList();

@@ -392,7 +392,8 @@ public sealed class Identifier
             NotInCatalogue = other,
             NoGoodMatch = noGoodMatch,
             NextTest = adviseNextTest ? NextTestAdvisor.Advise(sheet, weighted) : null,
-            Warnings = BenchWarnings.For(analysed, candidates, other, noGoodMatch, species, separation),
+            Warnings = BenchWarnings.For(analysed, candidates, other, noGoodMatch, species, separation,
+                candidates.Count > 0 ? Evaluated(order.First(i => shown[i]), explain: true).Contributions : []),
             InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
                 ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
             Series = analysed.Series,

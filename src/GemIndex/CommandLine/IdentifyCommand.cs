@@ -93,7 +93,7 @@ internal static class IdentifyCommand
             }
             if (pr.GetValue(explain)) return Refuse(error, "--explain is used only with --batch (the single-stone output always gives the reasons).");
             var identifier = new Identifier(MergedCatalogue.Load(CatalogueCommand.Locations(pr, catalogueDirectory)));
-            BenchOutcome outcome = BenchIdentification.Identify(identifier, readings, new BenchRequest { Candidates = candidates });
+            BenchOutcome outcome = BenchIdentification.Identify(identifier, readings, new BenchRequest { Candidates = candidates, RefuseEmpty = true });
             var errors = shapeErrors.Concat(outcome.Reading.Errors).ToList();
             if (errors.Count > 0 || outcome.Result is not { } result)
             {

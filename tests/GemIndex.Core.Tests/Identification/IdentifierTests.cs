@@ -53,6 +53,24 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_reading_strongly_against_the_leader_is_named_in_a_warning()
+    {
+        // Quartz series (ω 1.544, ε 1.553, from memory) with lines at 694 and 659 nm, which quartz never shows (its entry
+        // lists none): quartz still leads on the refractometer, and the lines are named as the reading to re-check.
+        var sheet = new BenchSheet
+        {
+            Refractometer = Facet((0, 1.544, 1.553), (30, 1.544, 1.552), (60, 1.544, 1.550), (90, 1.544, 1.548), (120, 1.544, 1.549), (150, 1.544, 1.551)),
+            AbsorptionLinesNanometres = [694, 659],
+            Colour = "purple",   // a colour outside the entry's list names another variety, never a misreading
+        };
+        var result = Engine.Identify(sheet, explainTop: 0);
+        Assert.Equal("quartz", result.Candidates[0].Material.Species);
+        string warning = Assert.Single(result.Warnings, w => w.StartsWith("Unusual for", StringComparison.Ordinal));
+        Assert.StartsWith("Unusual for rock crystal, hand spectroscope (absorption lines): lines seen at 694, 659 nm", warning);
+        Assert.DoesNotContain(result.Warnings, w => w.StartsWith("No readings", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void Species_totals_cover_the_whole_catalogue_and_split_by_origin()
     {
         // Corundum ω 1.770, ε 1.762 (common practice): natural and synthetic sapphire share the species' total.

@@ -48,7 +48,7 @@ public class IdentifyCommandTests
     }
 
     [Fact]
-    public void A_stone_with_no_readings_is_refused_rather_than_ranked_by_the_catalogues_frequencies_alone()
+    public void A_single_stone_with_no_readings_is_refused_and_an_empty_batch_line_is_answered_with_a_warning()
     {
         using var run = new CommandRun();
         var (exit, output, error) = Identify(run);
@@ -56,12 +56,13 @@ public class IdentifyCommandTests
         Assert.Equal("", output);
         Assert.Contains("no readings were given", error, StringComparison.Ordinal);
         Assert.Contains("'identify --help' lists the reading options", error, StringComparison.Ordinal);
+        // A batch answers every line: an empty one with a warning that the ranking is the frequencies alone.
         string file = Batch(run, """{"id":"empty"}""", """{"id":"red","colour":"red"}""");
         var (batchExit, lines, _) = Identify(run, "--batch", file);
-        Assert.Equal(3, batchExit);
+        Assert.Equal(0, batchExit);
         var answers = lines.Split('\n', StringSplitOptions.RemoveEmptyEntries).Select(l => JsonDocument.Parse(l).RootElement).ToArray();
-        Assert.StartsWith("$: no readings were given", answers[0].GetProperty("error").GetString(), StringComparison.Ordinal);
-        Assert.True(answers[1].TryGetProperty("species", out _));   // a colour alone is a reading, if a weak one
+        Assert.StartsWith("No readings were given", answers[0].GetProperty("warnings")[0].GetString(), StringComparison.Ordinal);
+        Assert.DoesNotContain(answers[1].GetProperty("warnings").EnumerateArray(), w => w.GetString()!.StartsWith("No readings", StringComparison.Ordinal));
     }
 
     [Fact]
