@@ -21,10 +21,21 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
 
     public IReadOnlyList<Material> Shown { get; private set; } = materials;
 
+    /// <summary>Why the search found nothing when the text itself is the fault (a decimal comma), or null.</summary>
+    public string? Problem { get; private set; }
+
     public void Search(string text)
     {
         string q = text.Trim();
+        Problem = null;
         if (q.Length == 0) { Shown = catalogue; return; }
+        // "1,762" is an index with a decimal comma, not the numbers 1 and 762: said, not searched.
+        if (System.Text.RegularExpressions.Regex.Match(q, @"\d,\d") is { Success: true })
+        {
+            Shown = [];
+            Problem = $"'{q}': a dot is the decimal mark (1.762), not a comma";
+            return;
+        }
         if (Numbers(q) is { } numbers)
         {
             (double? Index, double? Sg) typed = numbers.Count == 2 ? (numbers[0], numbers[1])

@@ -15,7 +15,7 @@ internal sealed class CatalogueBrowserView : FullScreenDialog
     public CatalogueBrowserView(CatalogueBrowserModel model)
     {
         _model = model;
-        Title = "Catalogue: a name, an index, an SG or both (1.544 2.65); Esc closes";
+        Title = "Catalogue: a name, an index, an SG or both (1.544 2.65); Tab: list, entry; Esc closes";
         var label = new PlainLabel { Text = "Search:" };
         Search = new TextField { X = 8, Width = 24 };
         Count = new PlainLabel { X = Pos.Right(Search) + 2, Width = Dim.Fill() };
@@ -46,7 +46,7 @@ internal sealed class CatalogueBrowserView : FullScreenDialog
         _rows.Clear();
         int nameWidth = _model.NameWidth(Math.Max(List.Viewport.Width, 76));
         foreach (var m in _model.Shown) _rows.Add(_model.Line(m, nameWidth));
-        Count.Text = $"{_model.Shown.Count} entries";
+        Count.Text = _model.Problem ?? (_model.Shown.Count == 1 ? "1 entry" : $"{_model.Shown.Count} entries");
         if (_rows.Count > 0) List.SelectedItem = 0;
         ShowEntry();
     }

@@ -36,6 +36,18 @@ public class CatalogueBrowserModelTests
     }
 
     [Fact]
+    public void A_decimal_comma_is_said_rather_than_searched_as_two_numbers()
+    {
+        var model = new CatalogueBrowserModel(TestMaterials.All);
+        model.Search("1,544");
+        Assert.Empty(model.Shown);
+        Assert.Contains("a dot is the decimal mark", model.Problem);
+        model.Search("1.544 2.65");
+        Assert.Null(model.Problem);
+        Assert.NotEmpty(model.Shown);
+    }
+
+    [Fact]
     public void A_number_below_2_5_searches_by_index_and_above_by_SG()
     {
         var model = new CatalogueBrowserModel(TestMaterials.All);
