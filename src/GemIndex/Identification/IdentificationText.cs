@@ -31,9 +31,13 @@ internal static class IdentificationText
         }
         o.WriteLine(result.NoGoodMatch
             ? "NO GOOD MATCH: nothing in the catalogue fits these readings; the list below is only the least bad."
-            : "Candidates:");
+            : "Candidates, by species:");
+        bool grouped = result.Candidates.Select(c => c.Material.Species).Distinct().Skip(1).Any();
         foreach (var (c, i) in result.Candidates.Select((c, i) => (c, i)))
         {
+            // Each species' entries under its name and total, so that a rank after another species' varieties reads as its own species'.
+            if (grouped && (i == 0 || c.Material.Species != result.Candidates[i - 1].Material.Species))
+                o.WriteLine($"  {c.Material.Species}{(result.Species.FirstOrDefault(s => s.Species == c.Material.Species) is { } total ? " " + ReportNumbers.Percent(total.Confidence) : "")}:");
             string bar = new('#', (int)Math.Round(c.Confidence * 20));
             o.WriteLine($"{i + 1,2}. {c.Material.Name,-36} {ReportNumbers.Percent(c.Confidence),7} {bar,-20} fit {ReportNumbers.Fixed(c.Fit, "0.00")}  ({c.Material.Species}, {BenchWords.Word(c.Material.Origin)})");
             foreach (var r in c.Reasons) o.WriteLine($"      {GemIndex.Cli.Reports.ReportDerived.Verdict(r)}: {r.Text}");

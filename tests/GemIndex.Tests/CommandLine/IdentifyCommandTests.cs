@@ -66,6 +66,21 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void The_candidates_of_a_single_stone_stand_under_their_species_and_its_total()
+    {
+        using var run = new CommandRun();
+        // Two heavy liquids (3.32 floats, 3.05 sinks: invented) fit many species alike, so several are listed.
+        var (exit, output, _) = Identify(run, "--heavy-liquid", "3.32 floats", "--heavy-liquid", "3.05 sinks");
+        Assert.Equal(0, exit);
+        string[] lines = output.Split('\n');
+        int first = Array.FindIndex(lines, l => l.StartsWith(" 1. ", StringComparison.Ordinal));
+        Assert.Equal("Candidates, by species:", lines[first - 2]);
+        Assert.Matches(@"^  [a-z -]+ [0-9.<>]+ %:$", lines[first - 1]);
+        string species = lines[first - 1].Trim().Split(' ')[0];
+        Assert.Contains($"({species}, ", lines[first]);
+    }
+
+    [Fact]
     public void A_bad_line_gets_an_error_line_naming_the_field_and_the_batch_goes_on_with_exit_3()
     {
         using var run = new CommandRun();
