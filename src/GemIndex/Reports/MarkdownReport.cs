@@ -84,7 +84,8 @@ internal static class MarkdownReport
         {
             if (ch is '\r' or '\n') sb.Append(' ');
             else if (char.IsControl(ch)) sb.Append($"\\u{(int)ch:x4}");   // an escape sequence is shown, never passed to a viewer
-            else if ("\\`*_[]<>|".Contains(ch)) sb.Append('\\').Append(ch);
+            // '>' opens a quotation only at the start of a line: a share such as ">99.9 %" within a line stays as written.
+            else if ("\\`*_[]<|".Contains(ch) || ch == '>' && sb.Length == 0) sb.Append('\\').Append(ch);
             else sb.Append(ch);
         }
         return sb.ToString();

@@ -84,6 +84,9 @@ public class StoneReportTests
     {
         string md = MarkdownReport.Write(ReportFixtures.Report(ReportFixtures.QuartzLine, "a|b*c"));
         Assert.Contains(@"a\|b\*c", md);
+        // '>' is escaped only where it would open a quotation, at the start: a share ">99.9 %" reads as written.
+        Assert.Equal(@"\>99.9 % \<- not \<b>", MarkdownReport.Escape(">99.9 % <- not <b>"));   // "<" always: no tag reaches a viewer
+        Assert.Equal("Quartz >99.9 %", MarkdownReport.Escape("Quartz >99.9 %"));
     }
 
     [Fact]
