@@ -13,6 +13,10 @@ internal sealed class EdgePlotModel(IReadOnlyList<EdgeReadingEntry> steps)
     public IReadOnlyList<(double Rotation, double Index)> High { get; } =
         [.. steps.Where(s => s.High is not null).OrderBy(s => s.RotationDeg).Select(s => (s.RotationDeg, s.High!.Value))];
 
+    /// <summary>Steps whose two edges were read as one value (they meet there: one mark stands for both).</summary>
+    public IReadOnlyList<(double Rotation, double Index)> Meeting { get; } =
+        [.. steps.Where(s => s.High is { } h && Math.Abs(h - s.Low) < 0.0005).OrderBy(s => s.RotationDeg).Select(s => (s.RotationDeg, s.Low))];
+
     public bool IsEmpty => Low.Count == 0;
 
     public double Bottom => IsEmpty ? 1.5 : Low.Concat(High).Min(p => p.Index) - Margin;

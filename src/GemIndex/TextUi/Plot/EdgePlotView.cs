@@ -8,7 +8,7 @@ using Terminal.Gui.Views;
 
 namespace GemIndex.Cli.TextUi.Plot;
 
-/// <summary>The two shadow edges against rotation: 'l' marks the low edge, 'h' the high edge.</summary>
+/// <summary>The two shadow edges against rotation: 'l' marks the low edge, 'h' the high edge, 'x' a step where they meet.</summary>
 internal sealed class EdgePlotView : FullScreenDialog
 {
     public EdgePlotView(EdgePlotModel model)
@@ -31,7 +31,10 @@ internal sealed class EdgePlotView : FullScreenDialog
         Graph.ScrollOffset = new PointF((float)model.LeftEdge, (float)model.Bottom);
         Line(model.Low, 'l');
         Line(model.High, 'h');
-        Add(Graph, new PlainLabel { Y = Pos.AnchorEnd(1), Text = "l = low edge   h = high edge   (index against rotation)" });
+        // Where the edges meet, one mark for both (the high edge's 'h' hid the low edge's 'l').
+        if (model.Meeting.Count > 0)
+            Graph.Series.Add(new ScatterSeries { Points = [.. model.Meeting.Select(x => new PointF((float)x.Rotation, (float)x.Index))], Fill = new GraphCellToRender(new Rune('x')) });
+        Add(Graph, new PlainLabel { Y = Pos.AnchorEnd(1), Text = "l = low edge   h = high edge   x = both   (index against rotation)" });
     }
 
     public GraphView? Graph { get; }

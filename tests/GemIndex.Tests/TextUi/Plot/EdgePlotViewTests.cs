@@ -41,6 +41,15 @@ public sealed class EdgePlotViewTests
     }
 
     [Fact]
+    public void Where_the_edges_meet_one_mark_stands_for_both()
+    {
+        // Quartz with its optic axis in the facet (from memory: ω 1.544, ε 1.553): the edges meet at 90°.
+        string[] lines = Draw([Step("0:1.544:1.553"), Step("45:1.544:1.549"), Step("90:1.544:1.544"), Step("135:1.544:1.549")], 80, 24);
+        Assert.Single(lines, l => l.Contains('x') && !l.Contains("x = both", StringComparison.Ordinal));
+        Assert.Contains(lines, l => l.Contains("x = both", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void Every_label_is_a_round_multiple_of_its_spacing()
     {
         string[] lines = Draw([Step("0:1.762:1.770"), Step("90:1.768:1.770")], 80, 24);
