@@ -63,6 +63,9 @@ internal static class StoneHistoryText
 
     private const string ReadingsPrefix = "readings.";
 
+    /// <summary>The stored fields that hold a refractive index.</summary>
+    private static readonly HashSet<string> IndexKeys = new(StringComparer.Ordinal) { "low", "high", "spot", "liquid_limit" };
+
     /// <summary>
     /// "refractometer.readings[2].low" → "RI step 3 low edge"; the store's "readings." before a reading is left out
     /// ("readings.colour" → "colour"), since every such field is a reading.
@@ -127,6 +130,10 @@ internal static class StoneHistoryText
                 break;
             case JsonValueKind.True: map[path] = "yes"; break;
             case JsonValueKind.False: map[path] = "no"; break;
+            // An index is stored as a number (1.770 as 1.77): shown to the thousandth, as it was read.
+            case JsonValueKind.Number when IndexKeys.Contains(path[(path.LastIndexOf('.') + 1)..]):
+                map[path] = e.GetDouble().ToString("0.000#", CultureInfo.InvariantCulture);
+                break;
             default: map[path] = e.GetRawText(); break;
         }
     }

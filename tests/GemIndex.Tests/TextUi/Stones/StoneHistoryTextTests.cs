@@ -41,6 +41,15 @@ public class StoneHistoryTextTests
     }
 
     [Fact]
+    public void An_index_stored_as_a_number_is_told_to_the_thousandth_as_read()
+    {
+        // 1.770 is stored as the number 1.77; the history shows it as it was read.
+        const string before = """{"id":"b","refractometer":{"method":"facet","readings":[{"rotation_deg":0,"low":1.762}]}}""";
+        const string after = """{"id":"b","refractometer":{"method":"facet","readings":[{"rotation_deg":0,"low":1.762,"high":1.77}]}}""";
+        Assert.Equal(["RI step 1 high edge set to '1.770'"], StoneHistoryText.Describe(new StoneEdit(At, "readings", before, after)));
+    }
+
+    [Fact]
     public void Magnification_features_are_told_by_their_names_as_seen_or_looked_for_and_not_seen()
     {
         const string before = """{"id":"b","sg":4.0}""";
