@@ -127,6 +127,22 @@ internal sealed class LoupeModel
     /// <summary>The index of the first feature row, or -1 when nothing matches.</summary>
     public int FirstFeatureRow => IndexOf(r => !r.IsHeading);
 
+    /// <summary>
+    /// Where the cursor goes once the filter changed: it stays on its feature while the typed words name it; else to the
+    /// first feature they name ("crystal" finds crystal inclusions before a zoning whose description mentions crystals);
+    /// else it stays on its feature while the filter still shows it; else to the first match.
+    /// </summary>
+    public int RowAfterFilter(MagnificationFeature? current)
+    {
+        string[] words = Normal(Filter).Split(' ', StringSplitOptions.RemoveEmptyEntries);
+        bool Named(LoupeRow r) => words.Length > 0 && r.Feature is { } f && Normal($"{f.Word} {f.Name}") is var name
+            && words.All(w => name.Contains(w, StringComparison.Ordinal));
+        int here = current is { } c ? RowOf(c) : -1;
+        if (here >= 0 && Named(Rows[here])) return here;
+        if (IndexOf(Named) is >= 0 and var named) return named;
+        return here >= 0 ? here : FirstFeatureRow;
+    }
+
     /// <summary>The row of a feature, or -1 when it is filtered out.</summary>
     public int RowOf(MagnificationFeature feature) => IndexOf(r => r.Feature?.Feature == feature);
 

@@ -112,8 +112,7 @@ internal sealed class LoupePage : BenchPage
         var at = Current?.Feature?.Feature;
         Model.SetFilter(text);
         Fill();
-        // The cursor stays on its feature while the filter still shows it, else goes to the first match.
-        Select(at is { } f && Model.RowOf(f) is >= 0 and var row ? row : Model.FirstFeatureRow);
+        Select(Model.RowAfterFilter(at));
     }
 
     private void Fill()

@@ -144,6 +144,19 @@ public class LoupeModelTests
         Assert.Equal("INCLUSIONS", model.Line(model.Rows[0]));
     }
 
+    [Fact]
+    public void Typing_puts_the_cursor_on_a_feature_the_words_name_before_one_that_only_mentions_them()
+    {
+        var model = new LoupeModel();
+        const MagnificationFeature zoning = MagnificationFeature.AngularGrowthZoning;
+        model.SetFilter("crystal");
+        // The cursor was on angular zoning (its description mentions crystals): it goes to crystal inclusions.
+        Assert.Equal("crystal inclusions", model.Rows[model.RowAfterFilter(zoning)].Feature!.Name);
+        // On a feature the words name, it stays.
+        int named = model.RowAfterFilter(null);
+        Assert.Equal(named, model.RowAfterFilter(model.Rows[named].Feature!.Feature));
+    }
+
     [Theory]
     [InlineData("nail-head", "nail-head spicules")]
     [InlineData("NAIL HEAD", "nail-head spicules")]
