@@ -30,4 +30,16 @@ public static class LeadingCandidates
 
     /// <summary>The same for a result's candidates.</summary>
     public static bool[] Explained(IReadOnlyList<RankedCandidate> candidates, int count) => Explained([.. candidates.Select(c => c.Material.Species)], count);
+
+    /// <summary>
+    /// Whether a list in the answer's order needs species headings: when it holds several species and the species-first
+    /// order puts a larger share after a smaller one (a rival species after the leader's many varieties). A list already
+    /// in order of share reads right without them.
+    /// </summary>
+    public static bool NeedsSpeciesHeadings(IReadOnlyList<RankedCandidate> candidates) =>
+        candidates.Select(c => c.Material.Species).Distinct().Skip(1).Any()
+        && candidates.Zip(candidates.Skip(1)).Any(p => p.Second.Confidence > p.First.Confidence && p.Second.Confidence >= VisibleShare);
+
+    /// <summary>Shares below this print as "&lt;1%": their order among themselves is not seen, so it needs no heading.</summary>
+    public const double VisibleShare = 0.005;
 }

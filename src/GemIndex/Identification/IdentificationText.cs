@@ -31,8 +31,9 @@ internal static class IdentificationText
         }
         o.WriteLine(result.NoGoodMatch
             ? "NO GOOD MATCH: nothing in the catalogue fits these readings; the list below is only the least bad."
-            : "Candidates, by species:");
-        bool grouped = result.Candidates.Select(c => c.Material.Species).Distinct().Skip(1).Any();
+            : "Candidates:");
+        // Headings when the species-first order puts a larger share after a smaller one, as in the text UI.
+        bool grouped = LeadingCandidates.NeedsSpeciesHeadings(result.Candidates);
         foreach (var (c, i) in result.Candidates.Select((c, i) => (c, i)))
         {
             // Each species' entries under its name and total, so that a rank after another species' varieties reads as its own species'.

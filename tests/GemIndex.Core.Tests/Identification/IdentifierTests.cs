@@ -136,6 +136,16 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void Species_headings_are_needed_only_when_the_order_puts_a_larger_share_after_a_smaller_one()
+    {
+        RankedCandidate C(string species, double p) => new() { Material = Catalogue[0] with { Species = species }, Confidence = p, Fit = 1 };
+        Assert.True(LeadingCandidates.NeedsSpeciesHeadings([C("a", 0.4), C("a", 0.05), C("b", 0.2)]));
+        Assert.False(LeadingCandidates.NeedsSpeciesHeadings([C("a", 0.4), C("a", 0.3), C("b", 0.2)]));
+        Assert.False(LeadingCandidates.NeedsSpeciesHeadings([C("a", 0.4), C("a", 0.5)]));   // one species: its order is its own
+        Assert.False(LeadingCandidates.NeedsSpeciesHeadings([C("a", 0.99), C("b", 0.001), C("c", 0.002)]));   // all read "<1%"
+    }
+
+    [Fact]
     public void Leading_candidates_take_the_first_entry_of_each_species_then_the_rest_in_order()
     {
         string[] species = ["beryl", "beryl", "beryl", "glass", "beryl", "quartz"];

@@ -74,7 +74,7 @@ public class IdentifyCommandTests
         Assert.Equal(0, exit);
         string[] lines = output.Split('\n');
         int first = Array.FindIndex(lines, l => l.StartsWith(" 1. ", StringComparison.Ordinal));
-        Assert.Equal("Candidates, by species:", lines[first - 2]);
+        Assert.Equal("Candidates:", lines[first - 2]);
         Assert.Matches(@"^  [a-z -]+ [0-9.<>]+ %:$", lines[first - 1]);
         string species = lines[first - 1].Trim().Split(' ')[0];
         Assert.Contains($"({species}, ", lines[first]);

@@ -89,9 +89,10 @@ internal sealed class ResultsModel
         rows.Add(new AnswerRow(CandidatesHeading));
         bool bars = width >= WidthForBars;
         IReadOnlyList<RankedCandidate> shown = [.. Candidates.Take(Listed)];
-        // With more than one species listed, each species' entries go under its name and total, indented, so that an
-        // entry's rank after another species' many varieties reads as part of its own species.
-        bool grouped = shown.Select(c => c.Material.Species).Distinct().Skip(1).Any();
+        // When the species-first order puts a larger share after a smaller one (a rival species after the leader's many
+        // varieties), each species' entries go under its name and total, indented, so that the order reads as meant;
+        // a list already in order of share needs no headings and keeps its rows for the readings below.
+        bool grouped = LeadingCandidates.NeedsSpeciesHeadings(shown);
         string indent = grouped ? SpeciesIndent : "";
         int rankWidth = shown.Count.ToString(System.Globalization.CultureInfo.InvariantCulture).Length;   // "10" aligns with " 9"
         int nameWidth = width - 6 - rankWidth - indent.Length - (bars ? ResultText.BarWidth + 1 : 0);
