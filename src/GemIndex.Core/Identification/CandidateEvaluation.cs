@@ -16,6 +16,12 @@ public sealed record CandidateEvaluation
     /// </summary>
     public required double Fit { get; init; }
 
+    /// <summary>
+    /// How many tests other than colour weigh ten to one or more against the candidate with a reading outside what it
+    /// shows (<see cref="BenchWarnings.ContradictionBits"/>): counted without words.
+    /// </summary>
+    public int StronglyAgainst { get; init; }
+
     /// <summary>Each test's contribution in words (only when asked for).</summary>
     public IReadOnlyList<EvidenceContribution> Contributions { get; init; } = [];
 }

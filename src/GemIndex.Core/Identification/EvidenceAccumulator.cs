@@ -26,10 +26,13 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
     /// <summary>How much a correlated test adds beyond the strongest of its group (a judgement; docs/ranking.md §3).</summary>
     public const double CorrelatedShare = 0.5;
 
+    /// <summary>A reading whose tail is below this is unusual for the candidate (outside its range by more than 2σ, an unexpected reaction).</summary>
+    public const double AgreesTail = 0.05;
+
     private List<EvidenceContribution>? _contributions = explaining ? [] : null;
     private readonly List<double>[] _groups = [[], [], []];
     private double _independent, _logOther, _lastBits, _lastTail, _sumLogTails;
-    private int _tests, _colourAt = -1;
+    private int _tests, _colourAt = -1, _stronglyAgainst;
     private string _lastTest = "";
 
     public bool Explaining => _contributions is not null;
@@ -45,6 +48,7 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
         _independent = _logOther = _lastBits = _lastTail = _sumLogTails = 0;
         _tests = 0;
         _colourAt = -1;
+        _stronglyAgainst = 0;
         _lastTest = "";
     }
 
@@ -78,7 +82,12 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
             _groups[group].Add(ratio);
         }
         _logOther += logBroad;
-        if (Fitting) _sumLogTails += Math.Log(Math.Clamp(tail, 1e-300, 1));
+        if (Fitting)
+        {
+            _sumLogTails += Math.Log(Math.Clamp(tail, 1e-300, 1));
+            // Counted without words, so that the warning on a reading against the leader needs the reasons only when one is there.
+            if (ratio / Math.Log(2) <= -BenchWarnings.ContradictionBits && tail < AgreesTail && test != Bench.BenchField.Colour) _stronglyAgainst++;
+        }
         _tests++;
         _lastTest = test;
         if (_contributions is not null) { _lastBits = ratio / Math.Log(2); _lastTail = tail; }
@@ -87,7 +96,7 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
     /// <summary>Words for the test added last.</summary>
     public void Say(string text)
     {
-        _contributions?.Add(new EvidenceContribution(_lastTest, text, _lastBits, _lastTail >= 0.05));
+        _contributions?.Add(new EvidenceContribution(_lastTest, text, _lastBits, _lastTail >= AgreesTail));
     }
 
     /// <summary>ln p(sheet | candidate), the correlated groups counted as in <see cref="Result"/>.</summary>
@@ -133,6 +142,7 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
             LogLikelihood = LogLikelihood,
             LogLikelihoodNotInCatalogue = _logOther,
             Fit = FisherCombination(-_sumLogTails, _tests),
+            StronglyAgainst = _stronglyAgainst,
             Contributions = _contributions ?? (IReadOnlyList<EvidenceContribution>)[],
         };
     }

@@ -393,7 +393,9 @@ public sealed class Identifier
             NoGoodMatch = noGoodMatch,
             NextTest = adviseNextTest ? NextTestAdvisor.Advise(sheet, weighted) : null,
             Warnings = BenchWarnings.For(analysed, candidates, other, noGoodMatch, species, separation,
-                candidates.Count > 0 ? Evaluated(order.First(i => shown[i]), explain: true).Contributions : []),
+                // The leader's reasons in words only when a reading speaks strongly against it (its fit's evaluation counts them).
+                candidates.Count > 0 && order.First(i => shown[i]) is var leader && Evaluated(leader, explain: false).StronglyAgainst > 0
+                    ? Evaluated(leader, explain: true).Contributions : []),
             InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
                 ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
             Series = analysed.Series,

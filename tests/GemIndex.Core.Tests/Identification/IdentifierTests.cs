@@ -68,6 +68,9 @@ public class IdentifierTests
         string warning = Assert.Single(result.Warnings, w => w.StartsWith("Unusual for", StringComparison.Ordinal));
         Assert.StartsWith("Unusual for rock crystal, hand spectroscope (absorption lines): lines seen at 694, 659 nm", warning);
         Assert.DoesNotContain(result.Warnings, w => w.StartsWith("No readings", StringComparison.Ordinal));
+        // Without the lines nothing speaks against quartz: no such warning.
+        var clean = Engine.Identify(sheet with { AbsorptionLinesNanometres = null }, explainTop: 0);
+        Assert.DoesNotContain(clean.Warnings, w => w.StartsWith("Unusual for", StringComparison.Ordinal));
     }
 
     [Fact]
