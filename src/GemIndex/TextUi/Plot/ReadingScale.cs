@@ -24,6 +24,12 @@ internal sealed class ReadingScale(string title, string format, double value, do
     public const char MarkerOnBar = '#';
     /// <summary>Room for a rank and a name; a longer name is cut so that no two rows read the same (<see cref="CandidateNames"/>).</summary>
     public const int NameWidth = 24;
+
+    /// <summary>On a wide screen (100 columns or more) the names get a third of it, up to this, so that they are not cut while the tracks have room to spare.</summary>
+    public const int WidestNameWidth = 40;
+
+    /// <summary>The room for a rank and a name at this width.</summary>
+    public static int NameWidthFor(int width) => width >= 100 ? Math.Clamp(width / 3, NameWidth, WidestNameWidth) : NameWidth;
     public const int VerdictWidth = 5;
     public const int NarrowestTrack = 12;
 
@@ -78,22 +84,23 @@ internal sealed class ReadingScale(string title, string format, double value, do
     /// <summary>The lines of this scale for <paramref name="width"/> columns: title with the axis labels, the reading (value ± u), one row per candidate.</summary>
     public IReadOnlyList<string> Render(int width)
     {
-        int track = Math.Max(NarrowestTrack, width - NameWidth - VerdictWidth);
+        int nameWidth = NameWidthFor(width);
+        int track = Math.Max(NarrowestTrack, width - nameWidth - VerdictWidth);
         (double low, double high) = Window();
         // Rounded to 9 places first, so that rounding noise cannot put a value and an equal range end in neighbouring columns.
         int Column(double x) => (int)Math.Round(Math.Round((x - low) / (high - low) * (track - 1), 9), MidpointRounding.AwayFromZero);
         string Number(double x) => x.ToString(format, CultureInfo.InvariantCulture);
 
-        var lines = new List<string> { ResultText.Clip(title, NameWidth - 1).PadRight(NameWidth) + Axis(track, Number(low), Number((low + high) / 2), Number(high)) };
+        var lines = new List<string> { ResultText.Clip(title, nameWidth - 1).PadRight(nameWidth) + Axis(track, Number(low), Number((low + high) / 2), Number(high)) };
         var reading = new StringBuilder(new string(' ', track));
         int from = Math.Max(0, Column(value - uncertainty)), to = Math.Min(track - 1, Column(value + uncertainty));
         for (int c = from; c <= to; c++) reading[c] = '-';
         if (to > from) { reading[from] = '<'; reading[to] = '>'; }
         int at = Column(value);
         if (at >= 0 && at < track) reading[at] = Marker;
-        lines.Add(ResultText.Clip($"{Number(value)} ± {Number(uncertainty)}", NameWidth - 1).PadRight(NameWidth) + reading);
+        lines.Add(ResultText.Clip($"{Number(value)} ± {Number(uncertainty)}", nameWidth - 1).PadRight(nameWidth) + reading);
         int rankWidth = candidates.Count == 0 ? 1 : Enumerable.Range(0, candidates.Count).Max(i => Rank(i).ToString(CultureInfo.InvariantCulture).Length);   // "10" aligns with " 8"
-        IReadOnlyList<string> names = CandidateNames.Fit([.. candidates.Select(c => c.Name)], NameWidth - 2 - rankWidth);
+        IReadOnlyList<string> names = CandidateNames.Fit([.. candidates.Select(c => c.Name)], nameWidth - 2 - rankWidth);
         for (int i = 0; i < candidates.Count; i++)
         {
             (_, PropertyRange? range) = candidates[i];
@@ -110,7 +117,7 @@ internal sealed class ReadingScale(string title, string format, double value, do
             }
             if (at >= 0 && at < track) row[at] = row[at] == Bar ? MarkerOnBar : Marker;
             string label = $"{Rank(i).ToString(CultureInfo.InvariantCulture).PadLeft(rankWidth)} {name}";
-            lines.Add(label.PadRight(NameWidth) + row + " " + Verdict(range));
+            lines.Add(label.PadRight(nameWidth) + row + " " + Verdict(range));
         }
         return lines;
     }

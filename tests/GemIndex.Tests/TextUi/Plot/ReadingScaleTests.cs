@@ -196,6 +196,15 @@ public class ReadingScaleTests
     }
 
     [Fact]
+    public void On_a_wide_screen_a_long_name_is_not_cut()
+    {
+        var scale = new ReadingScale("SG", "0.00", 4.0, 0.01, ScaleModel.WidestGravity, [("flame-fusion synthetic sapphire", new PropertyRange(3.98, 4.02))]);
+        Assert.DoesNotContain(scale.Render(118), l => l.Contains('…'));          // 120 columns: the names get a third
+        Assert.Contains(scale.Render(76), l => l.Contains('…'));                 // 80 columns: cut to keep the track
+        Assert.Equal(ReadingScale.NameWidth, ReadingScale.NameWidthFor(76));
+    }
+
+    [Fact]
     public void A_scale_never_runs_below_zero()
     {
         // A birefringence of 0.001 against a range from 0 (an isotropic material's): no negative axis label.
