@@ -61,10 +61,14 @@ internal static class MaterialText
     {
         output.WriteLine("sources");
         foreach (IGrouping<ValueSource, string> g in m.Sources.GroupBy(s => s.Value, s => s.Key))
-            output.WriteLine($"  {string.Join(", ", g)}: {g.Key.Citation} [{g.Key.Key}, {Word(g.Key.Kind)}]");
+            output.WriteLine($"  {string.Join(", ", g)}: {g.Key.Citation} [{Label(g.Key)}]");
         string[] missing = [.. CatalogueFields.NumericOf(m).Where(f => !m.Sources.ContainsKey(f))];
         if (missing.Length > 0) output.WriteLine($"  {string.Join(", ", missing)}: no source named");
     }
+
+    // The reference's key and its kind, the kind alone when the key only repeats it ("practice, common practice").
+    private static string Label(ValueSource source) =>
+        Word(source.Kind).Contains(source.Key, StringComparison.OrdinalIgnoreCase) ? Word(source.Kind) : $"{source.Key}, {Word(source.Kind)}";
 
     public static string Character(Material m) =>
         m.Sign == Core.Optics.Indicatrix.OpticSign.None ? Word(m.OpticCharacter) : $"{Word(m.OpticCharacter)} {Word(m.Sign)}";

@@ -146,6 +146,10 @@ public class CatalogueCommandTests
         Assert.Contains("heated, from a test parcel", output, StringComparison.Ordinal);
         Assert.Contains("your own (user catalogue)", output, StringComparison.Ordinal);
         Assert.Contains("own measurements (invented test data) [user: my test citrine, from memory]", output, StringComparison.Ordinal);
+        // A shipped entry's kind alone where its key only repeats it.
+        var (_, ruby, _) = run.Catalogue("show", "ruby");
+        Assert.Contains("[common practice]", ruby, StringComparison.Ordinal);
+        Assert.DoesNotContain("[practice, common practice]", ruby, StringComparison.Ordinal);
     }
 
     [Fact]
