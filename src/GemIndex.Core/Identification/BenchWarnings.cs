@@ -16,6 +16,14 @@ public static class BenchWarnings
     /// </summary>
     public const double ContradictionBits = 3.32;
 
+    /// <summary>
+    /// Whether a test's reading speaks strongly against a candidate: weighing <see cref="ContradictionBits"/> or more
+    /// against it, its reading outside what the candidate shows. Colour aside: a colour outside a variety's usual ones
+    /// names another variety, not a misreading.
+    /// </summary>
+    internal static bool SpeaksAgainst(string test, double weightBits, bool agrees) =>
+        !agrees && weightBits <= -ContradictionBits && test != Bench.BenchField.Colour;
+
     /// <summary>An origin holding at least this share of its species' total is one the tests have not ruled out.</summary>
     public const double OriginShare = 0.05;
 
@@ -48,8 +56,7 @@ public static class BenchWarnings
                 warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");
         // A reading that speaks strongly against the answer's own leader: most often a misreading, so it is named.
         if (!noGoodMatch && candidates.Count > 0)
-            // Colour aside: a colour outside a variety's usual ones names another variety, not a misreading.
-            foreach (var reason in (leaderReasons ?? []).Where(r => !r.Agrees && r.WeightBits <= -ContradictionBits && r.Test != Bench.BenchField.Colour))
+            foreach (var reason in (leaderReasons ?? []).Where(r => SpeaksAgainst(r.Test, r.WeightBits, r.Agrees)))
                 warnings.Add($"Unusual for {candidates[0].Material.Name}, {Bench.BenchTestWords.DisplayOfWire(reason.Test)}: {reason.Text}. Re-check it; the answer weighs it as read.");
         if (sheet.Sheet.SpecificGravity is { StandardUncertainty: > 0.03 } sg)
             warnings.Add($"SG uncertainty ±{sg.StandardUncertainty.ToString("0.00", CultureInfo.InvariantCulture)} is large (a small stone or a coarse balance): SG separates little here.");

@@ -74,7 +74,7 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
             ? SectionLikelihood.LogSum.Add(Math.Log(1 - BroadDensities.MisreadingShare) + logLikelihood, Math.Log(BroadDensities.MisreadingShare) + logBroad)
             : logLikelihood;
         mixed = Math.Max(mixed, logBroad - 690);
-        double ratio = mixed - logBroad;
+        double ratio = mixed - logBroad, bits = ratio / Math.Log(2);
         if (group == Independent) _independent += ratio;
         else
         {
@@ -86,11 +86,11 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
         {
             _sumLogTails += Math.Log(Math.Clamp(tail, 1e-300, 1));
             // Counted without words, so that the warning on a reading against the leader needs the reasons only when one is there.
-            if (ratio / Math.Log(2) <= -BenchWarnings.ContradictionBits && tail < AgreesTail && test != Bench.BenchField.Colour) _stronglyAgainst++;
+            if (BenchWarnings.SpeaksAgainst(test, bits, tail >= AgreesTail)) _stronglyAgainst++;
         }
         _tests++;
         _lastTest = test;
-        if (_contributions is not null) { _lastBits = ratio / Math.Log(2); _lastTail = tail; }
+        if (_contributions is not null) { _lastBits = bits; _lastTail = tail; }
     }
 
     /// <summary>Words for the test added last.</summary>

@@ -11,6 +11,9 @@ public sealed record IdentificationResult
     /// <summary>Species best first, each with its total over the whole catalogue and its split by origin.</summary>
     public IReadOnlyList<SpeciesResult> Species { get; init; } = [];
 
+    /// <summary>A species' total over the whole catalogue, or null when the answer holds no total for it.</summary>
+    public double? SpeciesConfidence(string species) => Species.FirstOrDefault(s => s.Species == species)?.Confidence;
+
     /// <summary>Candidates, best first (at most the number asked for).</summary>
     public required IReadOnlyList<RankedCandidate> Candidates { get; init; }
 

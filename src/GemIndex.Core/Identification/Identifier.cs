@@ -363,11 +363,11 @@ public sealed class Identifier
         int[] byEntry = Ranked(posterior);
         int[] order = SpeciesFirst(posterior, byEntry);
         var shown = Shown(posterior, byEntry, order, Math.Min(maximumCandidates, n));
-        var candidates = new List<RankedCandidate>(Math.Min(maximumCandidates, n));
-        bool[] explainAt = LeadingCandidates.Explained([.. order.Where(i => shown[i]).Select(i => _materials[i].Species)], explainTop);
-        foreach (int i in order)
+        int[] shownInOrder = [.. order.Where(i => shown[i])];
+        var candidates = new List<RankedCandidate>(shownInOrder.Length);
+        bool[] explainAt = LeadingCandidates.Explained([.. shownInOrder.Select(i => _materials[i].Species)], explainTop);
+        foreach (int i in shownInOrder)
         {
-            if (!shown[i]) continue;
             bool explain = explainAt[candidates.Count];
             var e = Evaluated(i, explain);
             candidates.Add(new RankedCandidate
@@ -394,8 +394,8 @@ public sealed class Identifier
             NextTest = adviseNextTest ? NextTestAdvisor.Advise(sheet, weighted) : null,
             Warnings = BenchWarnings.For(analysed, candidates, other, noGoodMatch, species, separation,
                 // The leader's reasons in words only when a reading speaks strongly against it (its fit's evaluation counts them).
-                candidates.Count > 0 && order.First(i => shown[i]) is var leader && Evaluated(leader, explain: false).StronglyAgainst > 0
-                    ? Evaluated(leader, explain: true).Contributions : []),
+                shownInOrder.Length > 0 && Evaluated(shownInOrder[0], explain: false).StronglyAgainst > 0
+                    ? Evaluated(shownInOrder[0], explain: true).Contributions : []),
             InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
                 ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
             Series = analysed.Series,

@@ -89,8 +89,7 @@ public static class NextTestAdvisor
     {
         var serious = weighted.Where(c => c.P >= LeaderShare).ToList();
         if (byGroup) return [.. serious.Take(LeaderCount)];
-        var firstOfSpecies = serious.GroupBy(c => c.Material.Species).Select(g => g.First()).Take(LeaderCount).ToList();
-        return [.. firstOfSpecies.Concat(serious.Where(c => !firstOfSpecies.Contains(c))).Take(LeaderCount)];
+        return [.. LeadingCandidates.Order([.. serious.Select(c => c.Material.Species)]).Take(LeaderCount).Select(i => serious[i])];
     }
 
     /// <summary>One group's candidates, renormalised within it, their outcome tables, and the group's share.</summary>

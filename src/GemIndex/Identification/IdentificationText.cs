@@ -38,7 +38,7 @@ internal static class IdentificationText
         {
             // Each species' entries under its name and total, so that a rank after another species' varieties reads as its own species'.
             if (grouped && (i == 0 || c.Material.Species != result.Candidates[i - 1].Material.Species))
-                o.WriteLine($"  {c.Material.Species}{(result.Species.FirstOrDefault(s => s.Species == c.Material.Species) is { } total ? " " + ReportNumbers.Percent(total.Confidence) : "")}:");
+                o.WriteLine($"  {c.Material.Species}{(result.SpeciesConfidence(c.Material.Species) is { } total ? " " + ReportNumbers.Percent(total) : "")}:");
             string bar = new('#', (int)Math.Round(c.Confidence * 20));
             o.WriteLine($"{i + 1,2}. {c.Material.Name,-36} {ReportNumbers.Percent(c.Confidence),7} {bar,-20} fit {ReportNumbers.Fixed(c.Fit, "0.00")}  ({c.Material.Species}, {BenchWords.Word(c.Material.Origin)})");
             foreach (var r in c.Reasons) o.WriteLine($"      {GemIndex.Cli.Reports.ReportDerived.Verdict(r)}: {r.Text}");

@@ -119,7 +119,7 @@ internal sealed class ResultsModel
 
     /// <summary>A species' heading over its entries: its name and its total over the whole catalogue.</summary>
     public static string SpeciesHeading(IdentificationResult r, string species) =>
-        r.Species.FirstOrDefault(s => s.Species == species) is { } found ? $"{species} {ResultText.Percent(found.Confidence)}" : species;
+        r.SpeciesConfidence(species) is { } total ? $"{species} {ResultText.Percent(total)}" : species;
 
     /// <summary>The answer's line for entries refused and left out of it.</summary>
     public static string RefusedLine(int count) =>
