@@ -72,7 +72,7 @@ internal static partial class MagnificationHabits
     private static FeatureHabit H(string word, double held) => new(word, held);
 
     /// <summary>Every row: for each species and origin of the property table, one row per method.</summary>
-    public static IReadOnlyList<MagnificationHabit> All { get; } = [.. FirstRows(), .. CrystalRows(), .. OrnamentalRows(), .. OrganicAndManMadeRows()];
+    public static IReadOnlyList<MagnificationHabit> All { get; } = [.. FirstRows(), .. CrystalRows(), .. OrnamentalRows(), .. OrganicAndManMadeRows(), .. CollectorRaritiesRows(), .. OrnamentalMineralsRows()];
 
     private static MagnificationHabit[] FirstRows() =>
     [

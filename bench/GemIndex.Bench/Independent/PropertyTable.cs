@@ -11,7 +11,7 @@ namespace GemIndex.Bench.Independent;
 internal static partial class PropertyTable
 {
     /// <summary>Every row: the first rows here, then the families kept in files of their own (PropertyTable.*.cs).</summary>
-    public static IReadOnlyList<SpeciesProperties> Species { get; } = [.. FirstRows(), .. CrystalRows(), .. OrnamentalRows(), .. OrganicAndManMadeRows()];
+    public static IReadOnlyList<SpeciesProperties> Species { get; } = [.. FirstRows(), .. CrystalRows(), .. OrnamentalRows(), .. OrganicAndManMadeRows(), .. CollectorRaritiesRows(), .. OrnamentalMineralsRows()];
 
     private static SpeciesProperties[] FirstRows() =>
     [
