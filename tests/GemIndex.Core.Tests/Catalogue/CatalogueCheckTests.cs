@@ -313,6 +313,21 @@ public class CatalogueCheckTests
     }
 
     [Fact]
+    public void A_treated_or_synthetic_range_outside_its_species_is_accepted_only_with_a_published_source()
+    {
+        // A chromium-diffused skin reads above corundum (reference-db/README.md, the check's list): a published reading
+        // may put a treated or synthetic variety outside the mineral's range; memory may not, nor may a natural variety.
+        Material species = Uniaxial("corundum") with { SpecificGravity = new(3.97, 4.05) };
+        var published = new Dictionary<string, ValueSource> { ["sg"] = new("paper", SourceKind.Published, "a paper read") };
+        var memory = new Dictionary<string, ValueSource> { ["sg"] = new("memory", SourceKind.FromMemory, "from memory") };
+        Material treated = Uniaxial("diffused corundum") with { Origin = OriginClass.Treated, SpecificGravity = new(3.97, 4.10), StatedFields = ["sg"] };
+        Assert.Empty(CatalogueCheck.CheckAgainstSpecies(treated with { Sources = published }, species));
+        Assert.Empty(CatalogueCheck.CheckAgainstSpecies(treated with { Origin = OriginClass.Synthetic, Sources = published }, species));
+        Assert.Equal("sg", Assert.Single(CatalogueCheck.CheckAgainstSpecies(treated with { Sources = memory }, species)).Field);
+        Assert.Equal("sg", Assert.Single(CatalogueCheck.CheckAgainstSpecies(treated with { Origin = OriginClass.Natural, Sources = published }, species)).Field);
+    }
+
+    [Fact]
     public void The_whole_catalogue_check_compares_each_variety_with_its_species()
     {
         Material species = Uniaxial("quartz species");
