@@ -51,14 +51,19 @@ internal static class OriginBalance
             if (serious.Count == 0) continue;
             var tests = TestsAlone(entries, materials, logLikelihood);
             if (tests[leading] >= Decided) continue;
-            // Hold the leading origin to the cap; share the rest among the serious alternatives by what the tests say.
+            // Hold the leading origin to the cap; share the rest among the serious alternatives by what the tests say of
+            // each, colour included: colour may not decide an origin, but among the alternatives a purple quartz's mass goes
+            // to the synthetic amethyst rather than to heated citrine.
             double keep = Cap * total, give = posteriorShare[leading] - keep;
-            double weights = serious.Sum(o => tests[o]);
+            var said = WithColour(entries, materials, posterior, logPrior);
+            bool colourSays = serious.Sum(o => said.GetValueOrDefault(o)) > 0;
+            double Weight(OriginClass o) => colourSays ? said.GetValueOrDefault(o) : tests[o];
+            double weights = serious.Sum(Weight);
             if (!(weights > 0)) continue;
             foreach (int i in entries.Where(i => materials[i].Origin == leading)) posterior[i] *= keep / posteriorShare[leading];
             foreach (var origin in serious)
             {
-                double add = give * tests[origin] / weights;
+                double add = give * Weight(origin) / weights;
                 int[] members = [.. entries.Where(i => materials[i].Origin == origin)];
                 // Within the origin, by the entries' own posterior, or their prior where the posterior is nil.
                 double own = members.Sum(i => posterior[i]);
@@ -66,6 +71,20 @@ internal static class OriginBalance
                 foreach (int i in members) posterior[i] += add * (own > 1e-300 ? posterior[i] / own : Math.Exp(logPrior[i]) / prior);
             }
         }
+    }
+
+    /// <summary>
+    /// What all the tests, colour included, say of each origin: its best entry's posterior over its prior (proportional to
+    /// the entry's likelihood, the prior's frequency judgement taken out).
+    /// </summary>
+    private static Dictionary<OriginClass, double> WithColour(int[] entries, Material[] materials, double[] posterior, double[] logPrior)
+    {
+        double top = entries.Max(i => Math.Log(posterior[i]) - logPrior[i]);
+        var said = new Dictionary<OriginClass, double>();
+        if (double.IsNegativeInfinity(top)) return said;
+        foreach (int i in entries)
+            said[materials[i].Origin] = Math.Max(said.GetValueOrDefault(materials[i].Origin), Math.Exp(Math.Log(posterior[i]) - logPrior[i] - top));
+        return said;
     }
 
     private static Dictionary<OriginClass, double> Totals(int[] entries, Func<int, double> value, Material[] materials)

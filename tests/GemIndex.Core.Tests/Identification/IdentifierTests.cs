@@ -363,6 +363,27 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void The_share_held_back_from_an_undecided_origin_goes_to_the_alternative_whose_colour_fits()
+    {
+        // Invented entries after quartz: natural purple (very common), a heated yellow (common) and a synthetic purple
+        // (rare), alike in every other test. Nothing decides the origin, so natural is held at the cap; of the rest,
+        // the purple stone's colour sends most to the purple synthetic, not to the yellow treated entry (before, the two
+        // shared it by the tests without colour, half each).
+        var indices = OpticalIndices.Uniaxial(new(1.544, 1.545), new(1.553, 1.554));
+        Material natural = Make("purple natural", "purple species", indices, 2.64, 2.66, OpticSign.Positive, new(0.009, 0.009),
+            frequency: BenchFrequency.VeryCommon) with { Colours = ["purple"] };
+        Material heated = Make("yellow heated", "purple species", indices, 2.64, 2.66, OpticSign.Positive, new(0.009, 0.009),
+            frequency: BenchFrequency.Common, origin: OriginClass.Treated) with { Colours = ["yellow"] };
+        Material synthetic = Make("purple synthetic", "purple species", indices, 2.64, 2.66, OpticSign.Positive, new(0.009, 0.009),
+            frequency: BenchFrequency.Rare, origin: OriginClass.Synthetic) with { Colours = ["purple"] };
+        var sheet = new BenchSheet { SpecificGravity = new SpecificGravity(2.65, 0.01), Colour = "purple" };
+        var species = new Identifier([natural, heated, synthetic, Catalogue[0]]).Identify(sheet).Species.Single(s => s.Species == "purple species");
+        Assert.Equal(OriginBalance.Cap * species.Confidence, species.Origins[OriginClass.Natural], 9);
+        Assert.True(species.Origins[OriginClass.Synthetic] > 3 * species.Origins[OriginClass.Treated],
+            $"synthetic {species.Origins[OriginClass.Synthetic]:0.000}, treated {species.Origins[OriginClass.Treated]:0.000}");
+    }
+
+    [Fact]
     public void The_test_named_to_separate_origins_tells_origins_apart_not_varieties_of_one_origin()
     {
         // Two natural varieties told apart only by the heat probe, and a treated entry told from both only by SG (invented
