@@ -39,6 +39,14 @@ internal static class RefractometerEvidence
     internal const double AggregateShowsSharpSeries = 0.2;
 
     /// <summary>
+    /// P(a rotation series of single sharp edges | a blinking aggregate, <see cref="BlinkSpan"/>): the grains of a strongly
+    /// birefringent mineral make the shadow blink between the ends of its span as the stone or the eye moves, so a sharp
+    /// edge held at one place round the stone is as foreign to it as two sharp edges (a judgement from common practice;
+    /// docs/ranking.md §1, form term).
+    /// </summary>
+    internal const double BlinkingAggregateShowsSharpSeries = 0.02;
+
+    /// <summary>
     /// An aggregate whose index span is wider than this is a strongly birefringent mineral in grains (calcite and aragonite
     /// in coral, pearl and shell; rhodochrosite, smithsonite, malachite, magnesite): on the spot its reading blinks between
     /// the two ends (a judgement from common practice; docs/ranking.md §2).
@@ -104,7 +112,7 @@ internal static class RefractometerEvidence
         double form = FormFactor(m, series);
         acc.AddLog(BenchField.Refractometer, outcome.LogLikelihood + Math.Log(form), broad, outcome.Tail * Math.Min(1, 2 * form), robust: true);
         if (acc.Explaining)
-            acc.Say(SeriesText(m, sheet, outcome, form));
+            acc.Say(SeriesText(m, sheet, series, outcome, form));
     }
 
     /// <summary>
@@ -134,14 +142,17 @@ internal static class RefractometerEvidence
     /// <summary>
     /// The form term: a series with two sharp edges comes from a single crystal, so it is strong evidence against a material
     /// met only as an aggregate (<see cref="AggregateShowsTwoEdges"/>); a series of single sharp edges read at several
-    /// steps is weaker evidence against it (<see cref="AggregateShowsSharpSeries"/>); a spot reading fits both.
+    /// steps is weaker evidence against it (<see cref="AggregateShowsSharpSeries"/>), unless its grains make the edge blink
+    /// (<see cref="BlinkingAggregateShowsSharpSeries"/>); a spot reading fits both.
     /// </summary>
     internal static double FormFactor(Material m, SeriesObservation series)
     {
         bool aggregateOnly = (m.Forms & MaterialForm.Aggregate) != 0 && (m.Forms & MaterialForm.Crystal) == 0;
         if (!aggregateOnly) return 1;
         if (series.LargestSeparation > 0) return AggregateShowsTwoEdges;
-        return series.Low.Length > 1 ? AggregateShowsSharpSeries : 1;
+        if (series.Low.Length <= 1) return 1;
+        return IsBlinkingAggregate(m, new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum))
+            ? BlinkingAggregateShowsSharpSeries : AggregateShowsSharpSeries;
     }
 
     /// <summary>
@@ -160,14 +171,16 @@ internal static class RefractometerEvidence
         return text + $" over {steps.Count} steps";
     }
 
-    private static string SeriesText(Material m, AnalysedSheet sheet, SectionLikelihood.Outcome outcome, double form)
+    private static string SeriesText(Material m, AnalysedSheet sheet, SeriesObservation series, SectionLikelihood.Outcome outcome, double form)
     {
         string expected = string.Join(", ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString("0.000")}"));
         string summary = ReadingsText(sheet);
         string verdict = double.IsNegativeInfinity(outcome.LogLikelihood) ? "no orientation of it can give these readings"
             : outcome.Tail >= 0.05 ? "an orientation of it gives these readings" : "its best orientation fits these readings poorly";
-        return $"{summary}; {verdict} ({expected})" + (form == AggregateShowsTwoEdges ? "; two sharp edges come from a single crystal, and it is met only as an aggregate"
-            : form < 1 ? "; a sharp edge followed round the stone is rarely seen on an aggregate, which gives a vague edge" : "");
+        return $"{summary}; {verdict} ({expected})" + (form >= 1 ? ""
+            : series.LargestSeparation > 0 ? "; two sharp edges come from a single crystal, and it is met only as an aggregate"
+            : form == BlinkingAggregateShowsSharpSeries ? "; a sharp edge held round the stone is not seen on this aggregate, whose grains make the edge blink"
+            : "; a sharp edge followed round the stone is rarely seen on an aggregate, which gives a vague edge");
     }
 
     private static Part Index(string symbol, double observed, double sigma, PropertyRange range, double shift, double shiftSigma, bool words, bool fitting)

@@ -74,6 +74,21 @@ public class EvidenceModelTests
     }
 
     [Fact]
+    public void A_sharp_single_edge_held_round_the_stone_weighs_ten_times_more_against_a_blinking_aggregate()
+    {
+        // Common practice: coral's calcite grains (1.486–1.658) make the edge blink; a narrow aggregate (1.510–1.520) can
+        // give a flat-polished sharp edge now and then (docs/ranking.md §1, form term).
+        var coral = Entry("coral", "coral", OpticalIndices.SingleIndex(new(1.486, 1.658), OpticCharacter.Aggregate), forms: MaterialForm.Aggregate);
+        var narrow = Entry("narrow", "narrow", OpticalIndices.SingleIndex(new(1.510, 1.520), OpticCharacter.Aggregate), forms: MaterialForm.Aggregate);
+        var series = new RefractometerObservation(RefractometerMethod.Facet, [new(0, 1.515), new(45, 1.515), new(90, 1.515), new(135, 1.515)]);
+        var seriesObservation = new SeriesObservation(series.Steps, 0.001, 0, 1.79);
+        Assert.Equal(RefractometerEvidence.BlinkingAggregateShowsSharpSeries, RefractometerEvidence.FormFactor(coral, seriesObservation));
+        Assert.Equal(RefractometerEvidence.AggregateShowsSharpSeries, RefractometerEvidence.FormFactor(narrow, seriesObservation));
+        var reasons = new Identifier([coral, narrow]).Identify(new BenchSheet { Refractometer = series }).Candidates.Single(c => c.Material.Name == "coral").Reasons;
+        Assert.Contains(reasons, r => r.Text.Contains("whose grains make the edge blink", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void A_spot_reading_fits_a_crystal_and_an_aggregate_alike()
     {
         var crystal = Entry("rock crystal", "quartz", QuartzIndices, new(0.009, 0.009), OpticSign.Positive);
