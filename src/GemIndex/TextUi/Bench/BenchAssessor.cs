@@ -47,6 +47,18 @@ internal sealed class BenchAssessor(Identifier? identifier)
         };
     }
 
+    /// <summary>
+    /// A stored stone's answer in a few words (<see cref="Results.ResultText.Short"/>) for the list of stones: ranked as the
+    /// answer pane ranks it, without reasons or the next test; empty when it has no readings or no catalogue is in use.
+    /// </summary>
+    public string Answer(StoneReadings readings)
+    {
+        if (identifier is null) return "";
+        BenchOutcome outcome = BenchIdentification.Identify(identifier, StoneReadingsConverter.ToReadings(readings),
+            Request with { ExplainTop = 1, AdviseNextTest = false });
+        return outcome.Reading.HasReadings && outcome.Result is { } result ? Results.ResultText.Short(result) : "";
+    }
+
     /// <summary>The stone's weight is a description, not a reading; it is checked here as a mass.</summary>
     private static void CheckWeight(BenchSnapshot form, Dictionary<string, string> errors)
     {

@@ -97,6 +97,9 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     /// <summary>Assesses a snapshot with the current catalogue (any thread; the assessor keeps no state).</summary>
     public BenchAssessment Assess(BenchSnapshot snapshot) => _assessor.Assess(snapshot);
 
+    /// <summary>A stored stone's answer in a few words, for the list of stones (empty if it is gone or has no readings).</summary>
+    public string Answer(long id) => WithWorkbook(w => w.Get(id)) is { } sheet ? _assessor.Answer(sheet.Readings) : "";
+
     /// <summary>True once a catalogue is in use (see <see cref="UseAssessor"/>).</summary>
     public bool HasCatalogue => _assessor.HasCatalogue;
 

@@ -381,7 +381,7 @@ internal sealed class MainWindow : Window
 
     private void ShowStones()
     {
-        var model = new StoneListModel(q => _session.WithWorkbook(w => w.List(q)));
+        var model = new StoneListModel(q => _session.WithWorkbook(w => w.List(q)), _session.Answer);
         using var view = new StoneListView(model, id => _session.WithWorkbook(w => w.Duplicate(id).Id), id => _session.WithWorkbook(w => w.Delete(id)),
             id => _session.WithWorkbook(w => StoneHistoryText.Lines(w.Get(id)?.Reference ?? "", w.History(id))));
         App!.Run(view);

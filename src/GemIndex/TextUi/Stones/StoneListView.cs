@@ -66,7 +66,7 @@ internal sealed class StoneListView : FullScreenDialog
     private void Fill()
     {
         _rows.Clear();
-        foreach (var s in _model.Shown) _rows.Add(StoneListModel.Line(s));
+        foreach (var s in _model.Shown) _rows.Add(_model.LineOf(s));
         if (_rows.Count == 0) _rows.Add(_model.Query.Length > 0 ? "(no stone matches the search)" : "(no stones: Ctrl+N starts one)");
         List.SelectedItem = 0;
     }
