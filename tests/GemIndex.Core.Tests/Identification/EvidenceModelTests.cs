@@ -291,9 +291,11 @@ public class EvidenceModelTests
         Assert.Equal(0, unexplained);
         Assert.Equal(0, missedStrong);
         Assert.Equal(AbsorptionLines.LogLikelihood([doublet[0]], [694], out _, out _), one, 12);
-        // Seeing neither is still both missed, and a good instrument's two lines still both pair.
-        AbsorptionLines.LogLikelihood(doublet, [], out _, out int missedBoth);
-        Assert.Equal(2, missedBoth);
+        // Seeing neither misses one line, the group, with its strongest member's chance; a good instrument's two lines
+        // still both pair.
+        double none = AbsorptionLines.LogLikelihood(doublet, [], out _, out int missedBoth);
+        Assert.Equal(1, missedBoth);
+        Assert.Equal(AbsorptionLines.LogLikelihood([doublet[0]], [], out _, out _), none, 12);
         AbsorptionLines.LogLikelihood(doublet, [694.2, 692.8], out int unexplainedTwo, out _);
         Assert.Equal(0, unexplainedTwo);
         // Emerald's 683 and 680 nm (3 nm apart; from memory) are resolved: one seen, the other missed.
@@ -308,8 +310,29 @@ public class EvidenceModelTests
         var outcomes = AbsorptionLines.Outcomes(ruby).ToList();
         Assert.Equal(4, outcomes.Count);
         Assert.Equal(1, outcomes.Sum(o => o.Probability), 12);
-        // Nothing seen: the doublet missed by both lines (0.05²) and the weak line missed (0.7), by the model's numbers.
-        Assert.Equal(0.05 * 0.05 * 0.7, outcomes[0].Probability, 12);
+        // Nothing seen: the doublet missed as one strong line (0.05) and the weak line missed (0.7), by the model's numbers.
+        Assert.Equal(0.05 * 0.7, outcomes[0].Probability, 12);
+    }
+
+    [Fact]
+    public void A_pair_of_lines_within_the_resolution_not_seen_costs_what_one_line_not_seen_costs()
+    {
+        // Ruby's blue lines 476.5 and 475 nm (moderate, from memory) show as one line: missing it costs ln(1 − 0.7), not
+        // twice that; a red corundum with the chromium doublet alone and its blue lines unseen then ranks the ruby entry
+        // above the pink sapphire entry that lists no blue lines (invented entries with the catalogue's lines and shares;
+        // counting the pair as two chances put pink sapphire first).
+        AbsorptionLine[] blue = [new(476.5, LineStrength.Moderate), new(475, LineStrength.Moderate)];
+        Assert.Equal(Math.Log(1 - AbsorptionLines.Detection(LineStrength.Moderate)) - AbsorptionLines.SpuriousLineRate,
+            AbsorptionLines.LogLikelihood(blue, [], out _, out _), 12);
+        AbsorptionLine[] chromium = [new(694.2, LineStrength.Strong), new(692.8, LineStrength.Strong)];
+        var indices = OpticalIndices.Uniaxial(new(1.767, 1.772), new(1.759, 1.763));
+        var ruby = Entry("ruby", "corundum", indices, new(0.008, 0.009), OpticSign.Negative, colours: ["red"], lines: [.. chromium, .. blue],
+            frequency: BenchFrequency.VeryCommon);   // as the catalogue's heated ruby against its pink sapphire (common)
+        AbsorptionLine[] pinkLines = [new(694.2, LineStrength.Moderate), new(692.8, LineStrength.Moderate)];
+        var pink = Entry("pink sapphire", "corundum", indices, new(0.008, 0.009), OpticSign.Negative, colours: ["pink"], lines: pinkLines);
+        var result = new Identifier([ruby, pink]).Identify(new BenchSheet { AbsorptionLinesNanometres = [694], Colour = "red" });
+        Assert.True(result.Candidates[0].Material.Name == "ruby", string.Join("; ", result.Candidates.Select(c => $"{c.Material.Name} {c.Confidence:0.000} "
+            + string.Join(", ", c.Reasons.Select(r => $"{r.Test} {r.WeightBits:0.00}")))));
     }
 
     [Fact]
