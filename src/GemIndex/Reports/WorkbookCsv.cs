@@ -5,7 +5,7 @@ using nietras.SeparatedValues;
 namespace GemIndex.Cli.Reports;
 
 /// <summary>
-/// A whole workbook as CSV, written by the Sep library (comma-separated, a field quoted when it holds a comma, a
+/// A whole workbook as CSV (the leading species and its share first, then the best entry), written by the Sep library (comma-separated, a field quoted when it holds a comma, a
 /// quote or a line break, quotes doubled, as RFC 4180 says), one row per stone after a header row. Numbers in the
 /// invariant culture, units in the column names. A stone not identified (no result) has empty identification
 /// columns. A cell that a spreadsheet would run as a formula is neutralised (<see cref="Neutralised"/>).
@@ -15,7 +15,8 @@ internal static class WorkbookCsv
     public static readonly IReadOnlyList<string> Columns =
     [
         "reference", "weight_carats", "colour", "refractive_index_low", "refractive_index_high", "birefringence",
-        "optic_character", "specific_gravity", "polariscope", "best_candidate", "confidence", "no_good_match",
+        "optic_character", "specific_gravity", "polariscope", "species", "species_confidence", "best_candidate", "confidence",
+        "no_good_match",
     ];
 
     /// <summary>Characters that make a spreadsheet read a cell as a formula when they lead it.</summary>
@@ -51,6 +52,7 @@ internal static class WorkbookCsv
         ReportInterpretation? best = report?.Interpretations.FirstOrDefault();
         double? spot = sheet.Readings.Refractometer?.Spot;
         RankedCandidate? top = result?.Candidates.FirstOrDefault();
+        SpeciesResult? lead = result?.Species.FirstOrDefault();
         return
         [
             sheet.Reference,
@@ -62,6 +64,8 @@ internal static class WorkbookCsv
             report?.Character ?? "",
             report?.SpecificGravity is { } sg ? ReportNumbers.Gravity(sg.Value) : sheet.Readings.Sg is { } given ? ReportNumbers.Gravity(given) : "",
             sheet.Readings.Polariscope is { } p ? StoneReport.Word(p) : "",
+            lead?.Species ?? "",
+            lead is not null ? ReportNumbers.Fixed(lead.Confidence, "0.000") : "",
             top?.Material.Name ?? "",
             top is not null ? ReportNumbers.Fixed(top.Confidence, "0.000") : "",
             result is null ? "" : result.NoGoodMatch ? "true" : "false",

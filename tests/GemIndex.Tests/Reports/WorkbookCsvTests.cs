@@ -61,9 +61,12 @@ public class WorkbookCsvTests
         string[] rows = text.Split(Environment.NewLine);
         Assert.Equal(string.Join(",", WorkbookCsv.Columns), rows[0]);
         Assert.StartsWith("\"lot 7, \"\"A\"\"\",2.65,colourless,1.544,1.553,", rows[1]);
-        Assert.EndsWith(",quartz," + ReportFixtures.Identify(identified).Candidates[0].Confidence.ToString("0.000", System.Globalization.CultureInfo.InvariantCulture) + ",false", rows[1]);
+        var result = ReportFixtures.Identify(identified);
+        string Share(double p) => p.ToString("0.000", System.Globalization.CultureInfo.InvariantCulture);
+        Assert.EndsWith($",{result.Species[0].Species},{Share(result.Species[0].Confidence)},{result.Candidates[0].Material.Name},{Share(result.Candidates[0].Confidence)},false", rows[1]);
+        Assert.Equal("quartz", result.Species[0].Species);
         // The line break inside the quoted colour is the stone's, the last one ends the file (Sep writes the platform's line end).
-        Assert.EndsWith(Environment.NewLine + "x,2.65,\"blue\ngreen\",,,,,,,,," + Environment.NewLine, text);
+        Assert.EndsWith(Environment.NewLine + "x,2.65,\"blue\ngreen\",,,,,,,,,,," + Environment.NewLine, text);
     }
 
     private static readonly Gen<string> Cell =
