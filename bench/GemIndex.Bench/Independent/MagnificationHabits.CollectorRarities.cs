@@ -5,6 +5,10 @@ internal static partial class MagnificationHabits
     /// <summary>Magnification rows for the species of PropertyTable.CollectorRarities.cs.</summary>
     private static MagnificationHabit[] CollectorRaritiesRows() =>
     [
+        new() { Species = "dioptase", Origin = "natural", Method = "natural", Clean = .1,
+            Features = [H("healed_fractures", .6), H("crystals", .1), H("fluid_inclusions", .1)],
+            Source = "gemdictionary.blogspot.com dioptase (three-directional cleavage cracks, doubling); gemstones.com gemopedia dioptase (noted for visible internal "
+                + "cleavage planes); cleavage cracks written as fractures and shares: judgement; crystals and fluids: from memory" },
         new() { Species = "datolite", Origin = "natural", Method = "natural", Clean = .5,
             Features = [H("healed_fractures", .25), H("fluid_inclusions", .2), H("crystals", .1)],
             Source = "from memory" },

@@ -12,6 +12,23 @@ internal static partial class PropertyTable
     [
         new()
         {
+            Name = "dioptase", BenchWeight = 0.15,
+            Indices = PrincipalValues.Uniaxial(new(1.644, 1.658), new(0.051, 0.053), positive: true, epsilon: new(1.697, 1.710)),
+            SpecificGravity = new(3.25, 3.35), Pleochroism = PleochroismHabit.Weak, Dispersion = 0.030,
+            UvLong = [new("inert", 1)], UvShort = [new("inert", 1)],
+            Lines = [new(550, true)],
+            Hues = [new("green", .85), new("blue", .15)],
+            Citation = "gemfame.com 'Dioptase: gemstones information': ω 1.644–1.658, ε 1.697–1.709, uniaxial +, birefringence about 0.053, SG 3.28–3.35, only a broad band "
+                + "centred near 550 nm with strong absorption of blue and violet, many specimens translucent at best; gemdictionary.blogspot.com dioptase: 1.644–1.697 (range "
+                + "1.633–1.710), birefringence 0.053, SG 3.28–3.35, weak pleochroism, dispersion 0.036, inert in UV, emerald green to bluish green; gemologyproject.com Dioptase: "
+                + "uniaxial +, 1.644–1.709, birefringence 0.053, dispersion 0.030, SG 3.28–3.35; gemmologue.ch dioptase: 1.655–1.708 (±0.012), birefringence 0.051–0.053, "
+                + "SG 3.30 (±0.05), no fluorescence, band at 550; Wikipedia 'Dioptase' infobox (review.clateway.com and mineralru.com copies): nω 1.652–1.658, nε 1.704–1.710",
+            Judgement = "ω as gemfame's range (the Wikipedia copies' narrower one inside it); ε 1.697–1.710 as the union; SG from gemmologue's tolerance (3.25) to 3.35; "
+                + "dispersion 0.030 of the two values read (gemologyproject and gemology101.org agree; gemdictionary 0.036); the 550 nm band written strong (the only feature "
+                + "named); hue weights and bench weight: judgement",
+        },
+        new()
+        {
             Name = "datolite", BenchWeight = 0.1,
             Indices = PrincipalValues.Biaxial(new(1.618, 1.626), new(0.044, 0.047), new(0.52, 0.73)),
             SpecificGravity = new(2.90, 3.00), Dispersion = 0.016,

@@ -1,6 +1,6 @@
 namespace GemIndex.Core.Magnification;
 
-/// <summary>The kinds of features a loupe shows, grouped as a bench user looks for them.</summary>
+/// <summary>The kinds of features a loupe or the eye shows, grouped as a bench user looks for them.</summary>
 public enum FeatureGroup
 {
     /// <summary>Growth features: striae, zoning, banding.</summary>
@@ -14,4 +14,7 @@ public enum FeatureGroup
 
     /// <summary>Signs of an assembled stone: joins, cement, two lustres.</summary>
     Composite,
+
+    /// <summary>Optical phenomena the eye sees with one light: a cat's-eye, a star, play of colour, a change of colour.</summary>
+    Phenomenon,
 }

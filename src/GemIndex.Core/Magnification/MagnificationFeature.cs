@@ -71,4 +71,25 @@ public enum MagnificationFeature
 
     /// <summary>Flattened bubbles in one plane: the cement layer of an assembled stone.</summary>
     CementLayerBubbles,
+
+    /// <summary>Chatoyancy: one band of light across a cabochon (a cat's-eye).</summary>
+    Chatoyancy,
+
+    /// <summary>Asterism: a star of four, six or twelve rays of light on a cabochon.</summary>
+    Asterism,
+
+    /// <summary>Play of colour: patches of spectral colour that change as the stone moves (opal).</summary>
+    PlayOfColour,
+
+    /// <summary>A change of colour between daylight and incandescent light.</summary>
+    ColourChange,
+
+    /// <summary>Adularescence: a soft bluish-white sheen floating below the surface (moonstone).</summary>
+    Adularescence,
+
+    /// <summary>Labradorescence: broad flashes of colour from within, in one direction (labradorite).</summary>
+    Labradorescence,
+
+    /// <summary>Aventurescence: glittering spangles of platelets (sunstone, aventurine).</summary>
+    Aventurescence,
 }

@@ -2,7 +2,7 @@ namespace GemIndex.Core.Magnification;
 
 /// <summary>One feature of the magnification vocabulary, in the words shown to a bench user.</summary>
 /// <param name="Feature">The feature.</param>
-/// <param name="Group">Growth, inclusion, treatment or composite.</param>
+/// <param name="Group">Growth, inclusion, treatment, composite or phenomenon.</param>
 /// <param name="Word">The word on the command line and in the batch format ("curved_striae").</param>
 /// <param name="Name">The display name ("curved striae").</param>
 /// <param name="LookFor">One plain line: what to look for.</param>
@@ -15,4 +15,8 @@ namespace GemIndex.Core.Magnification;
 /// </param>
 public sealed record MagnificationFeatureInfo(
     MagnificationFeature Feature, FeatureGroup Group, string Word, string Name, string LookFor, string Lighting,
-    string Meaning, string Source, double Visibility);
+    string Meaning, string Source, double Visibility)
+{
+    /// <summary>How a sighting is named: a phenomenon is seen by eye, the rest under magnification.</summary>
+    public string SeenHow => Group == FeatureGroup.Phenomenon ? "Seen by eye" : "Seen under magnification";
+}

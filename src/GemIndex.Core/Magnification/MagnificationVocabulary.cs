@@ -82,12 +82,36 @@ public static class MagnificationVocabulary
         new(MagnificationFeature.CementLayerBubbles, FeatureGroup.Composite, "cement_bubbles", "bubbles in a cement layer",
             "flattened bubbles all in one plane, in a thin layer of cement", "darkfield, looking through the girdle",
             "assembled stone joined with cement", GiaMicroWorld2023Doublet, Plain),
+        // Phenomena: seen by eye with one light (a penlight) as the stone is turned; when a stone has one it is hard to miss
+        // (Obvious), except a change of colour, which needs two lights (Plain). Meanings: facts of the trade.
+        new(MagnificationFeature.Chatoyancy, FeatureGroup.Phenomenon, "chatoyancy", "cat's-eye (chatoyancy)",
+            "one sharp band of light across a cabochon, gliding over it as the stone is turned", "one point light from above",
+            "parallel fibres or needles: cat's-eye chrysoberyl, tiger's-eye, cat's-eye apatite, scapolite, kornerupine, now and then other species; fibre-optic glass imitates it",
+            CommonPractice, Obvious),
+        new(MagnificationFeature.Asterism, FeatureGroup.Phenomenon, "asterism", "star (asterism)",
+            "a star of four or six rays (rarely twelve) gliding over a cabochon", "one point light from above",
+            "needles in two or three directions: star corundum (natural and synthetic), star diopside, star garnet, rose quartz", CommonPractice, Obvious),
+        new(MagnificationFeature.PlayOfColour, FeatureGroup.Phenomenon, "play_of_colour", "play of colour",
+            "patches of spectral colour that change as the stone is turned", "light from above, turning the stone",
+            "opal, natural or synthetic, and its imitations (the cell pattern of made opal is mosaic colour patches)", CommonPractice, Obvious),
+        new(MagnificationFeature.ColourChange, FeatureGroup.Phenomenon, "colour_change", "colour change",
+            "one colour in daylight and another in warm incandescent light", "daylight or a daylight lamp, then an incandescent lamp",
+            "alexandrite (natural and synthetic), colour-change sapphire, garnet and diaspore, synthetic colour-change corundum", CommonPractice, Plain),
+        new(MagnificationFeature.Adularescence, FeatureGroup.Phenomenon, "adularescence", "adularescence",
+            "a soft bluish-white sheen floating just below the surface", "one light from above, turning the stone",
+            "moonstone feldspar", CommonPractice, Obvious),
+        new(MagnificationFeature.Labradorescence, FeatureGroup.Phenomenon, "labradorescence", "labradorescence",
+            "broad flashes of blue, green or gold from within, seen in one direction", "light from above, turning the stone",
+            "labradorite (and rainbow moonstone)", CommonPractice, Obvious),
+        new(MagnificationFeature.Aventurescence, FeatureGroup.Phenomenon, "aventurescence", "aventurescence",
+            "glittering spangles of small reflecting platelets", "light from above, turning the stone",
+            "sunstone feldspar, aventurine quartz, aventurine (goldstone) glass", CommonPractice, Obvious),
     ];
 
     private static readonly Dictionary<MagnificationFeature, MagnificationFeatureInfo> ByFeature = Table.ToDictionary(i => i.Feature);
     private static readonly Dictionary<string, MagnificationFeatureInfo> ByWord = Table.ToDictionary(i => i.Word, StringComparer.OrdinalIgnoreCase);
 
-    /// <summary>Every feature, grouped as the bench looks for them (growth, inclusions, treatment, composite).</summary>
+    /// <summary>Every feature, grouped as the bench looks for them (growth, inclusions, treatment, composite, phenomena).</summary>
     public static IReadOnlyList<MagnificationFeatureInfo> All => Table;
 
     /// <summary>The words accepted, in table order.</summary>

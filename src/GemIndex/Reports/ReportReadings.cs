@@ -41,7 +41,7 @@ internal static class ReportReadings
             fields.Add(new("absorption", "Spectroscope", lines.Count == 0 ? "looked; no lines seen"
                 : "lines or bands at " + string.Join(", ", lines.Select(ReportNumbers.Nanometres))));
         foreach (var info in Features(r.FeaturesPresent))
-            fields.Add(new($"feature_seen_{info.Word}", $"Seen under magnification: {info.Name}", info.Meaning));
+            fields.Add(new($"feature_seen_{info.Word}", $"{info.SeenHow}: {info.Name}", info.Meaning));
         foreach (var info in Features(r.FeaturesAbsent))
             fields.Add(new($"feature_not_seen_{info.Word}", $"Looked for, not seen: {info.Name}", info.Meaning));
         return fields;

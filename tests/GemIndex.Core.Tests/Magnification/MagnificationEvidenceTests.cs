@@ -45,6 +45,21 @@ public class MagnificationEvidenceTests
     }
 
     [Fact]
+    public void A_cats_eye_seen_favours_the_variety_named_for_it_and_none_seen_the_plain_one()
+    {
+        // Common practice: a cat's-eye chrysoberyl shows its eye whenever looked for with one light; a plain chrysoberyl
+        // only by rare coincidence (the default for an unlisted feature). The eye is obvious, so not seeing it counts.
+        var catsEye = new MagnificationProfile(OriginClass.Natural, new Dictionary<MagnificationFeature, double> { [MagnificationFeature.Chatoyancy] = 0.95 });
+        var plain = MagnificationProfile.ForOrigin(OriginClass.Natural);
+        double Ratio(MagnificationObservation look) => MagnificationEvidence.LogLikelihood(look, catsEye) - MagnificationEvidence.LogLikelihood(look, plain);
+        Assert.True(Ratio(new([MagnificationFeature.Chatoyancy], [])) > Math.Log(20), "seen");   // 0.856 against 0.019 by the model's numbers
+        Assert.True(Ratio(new([], [MagnificationFeature.Chatoyancy])) < -Math.Log(5), "looked for, not seen");
+        Assert.Equal(FeatureGroup.Phenomenon, MagnificationVocabulary.Of(MagnificationFeature.Chatoyancy).Group);
+        Assert.Equal(MagnificationFeature.Asterism, MagnificationVocabulary.Find("asterism"));
+        Assert.Equal("Seen by eye", MagnificationVocabulary.Of(MagnificationFeature.PlayOfColour).SeenHow);
+    }
+
+    [Fact]
     public void A_listed_probability_outside_zero_to_one_is_refused()
     {
         var e = Assert.Throws<ArgumentOutOfRangeException>(() => new MagnificationProfile(OriginClass.Natural,

@@ -31,8 +31,11 @@ public sealed record PublishedCase(string Line, IReadOnlyList<string> Species, i
     /// <summary>Magnification features the source says it looked for and did not see, as vocabulary words (from the batch line).</summary>
     public IReadOnlyList<string> FeaturesAbsent => Magnification("absent");
 
-    /// <summary>True when the source says which features under magnification decided origin or treatment.</summary>
-    public bool IsMagnificationCase => FeaturesPresent.Count > 0 || FeaturesAbsent.Count > 0 || Origins.Count > 0;
+    /// <summary>
+    /// True when the source says which features under magnification decided origin or treatment: it records the origin.
+    /// A case whose only look is a phenomenon the source names (a cat's-eye, a star) decides no origin and is not one.
+    /// </summary>
+    public bool IsMagnificationCase => Origins.Count > 0;
 
     private List<string> Magnification(string part)
     {

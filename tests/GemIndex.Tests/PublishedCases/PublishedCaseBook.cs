@@ -30,7 +30,7 @@ public static class PublishedCaseBook
 
         // Gems & Gemology (GIA) Lab Notes, Gem News International and other laboratories' notes, read in the search
         // tool's stored pages (docs/benchmark.md, "Published cases"; every page looked at is in the ledger there).
-        new("""{"id":"gg-2015-gni-synthetic-star-sapphire","refractometer":{"method":"spot","spot":1.76},"sg":4.00,"colour":"blue","magnification":{"present":["needles_silk","round_bubbles"]}}""", ["corundum"], 2,
+        new("""{"id":"gg-2015-gni-synthetic-star-sapphire","refractometer":{"method":"spot","spot":1.76},"sg":4.00,"colour":"blue","magnification":{"present":["needles_silk","round_bubbles","asterism"]}}""", ["corundum"], 2,
             "Gems & Gemology, Summer 2015 (Vol. 51, No. 2), Gem News International, 'Unusual Combination of Inclusions in Synthetic Star Sapphire' "
             + "(gia.edu/gems-gemology/summer-2015-gemnews-unusual-combination-inclusions-synthetic-star-sapphire): 8.975 ct blue star cabochon, spot RI 1.76, "
             + "hydrostatic SG 4.00; three-directional needles and a hexagonal boundary of gas bubbles; gas bubbles and chalky blue SWUV confirmed synthetic. "
@@ -120,10 +120,11 @@ public static class PublishedCaseBook
             + "lost in that copy, so no refractometer reading is entered), distinct pleochroism green and olive brown, broad band centred at 455 nm, faint "
             + "line at 470 nm, cut-off from 430 nm (left out); 'proved that the stone is epidote'."),
 
-        new("""{"id":"gg-2017-ln-cats-eye-kornerupine","refractometer":{"method":"spot","spot":1.67},"sg":3.32,"colour":"yellowish green"}""", ["kornerupine"], 2,
+        new("""{"id":"gg-2017-ln-cats-eye-kornerupine","refractometer":{"method":"spot","spot":1.67},"sg":3.32,"colour":"yellowish green","magnification":{"present":["chatoyancy"]}}""", ["kornerupine"], 2,
             "Gems & Gemology, Summer 2017 (Vol. 53, No. 2), Lab Notes, 'Cat's-Eye Kornerupine' (gia.edu/gems-gemology/summer-2017-labnotes-cats-eye-kornerupine): "
-            + "1.44 ct dark yellowish green cabochon, spot RI 1.67, hydrostatic SG 3.32, 'identified as kornerupine'; Raman (not a bench test) confirmed it."),
-        new("""{"id":"jgem-2019-star-enstatite","refractometer":{"method":"facet","readings":[{"low":1.660,"high":1.670}]},"sg":3.25,"pleochroism":"trichroic","uv_long":"inert","uv_short":"inert","absorption_nm":[505,545],"colour":"light brown"}""", ["enstatite"], 6,
+            + "1.44 ct dark yellowish green cabochon, spot RI 1.67, hydrostatic SG 3.32, 'identified as kornerupine'; Raman (not a bench test) confirmed it. "
+            + "The cat's-eye is recorded as chatoyancy."),
+        new("""{"id":"jgem-2019-star-enstatite","refractometer":{"method":"facet","readings":[{"low":1.660,"high":1.670}]},"sg":3.25,"pleochroism":"trichroic","uv_long":"inert","uv_short":"inert","absorption_nm":[505,545],"colour":"light brown","magnification":{"present":["asterism"]}}""", ["enstatite"], 6,
             "The Journal of Gemmology, 36(8), 2019, Gem Notes, a six-rayed star enstatite cabochon from Madagascar (fliphtml5.com/bfyz/utyf/..._Volume_36_Issue_8_(Winter_2019)/15): "
             + "1.24 ct, colour light brown, pleochroism strong orangey brown, greyish green and grey (three colours: trichroic), RI 1.660–1.670, birefringence 0.010, "
             + "biaxial positive, hydrostatic SG 3.25, inert to LW and SW, hand spectroscope sharp bands at about 505 and 545 nm; 'consistent with enstatite'. "
@@ -162,7 +163,7 @@ public static class PublishedCaseBook
             + "fingerprints. FTIR, Raman and UV-Vis-NIR are not bench tests.")
         { Origins = [OriginClass.Natural] },
 
-        new("""{"id":"gg-2018-ln-cats-eye-demantoid","refractometer":{"method":"spot","over_limit":true},"sg":3.84,"colour":"green","magnification":{"present":["needles_silk"]}}""", ["andradite"], 2,
+        new("""{"id":"gg-2018-ln-cats-eye-demantoid","refractometer":{"method":"spot","over_limit":true},"sg":3.84,"colour":"green","magnification":{"present":["needles_silk","chatoyancy"]}}""", ["andradite"], 2,
             "Gems & Gemology, Spring 2018 (Vol. 54, No. 1), Lab Notes, 'Cat's-Eye Demantoid and Brown Andradite with Horsetail Inclusions' (Tokyo; "
             + "gia.edu/gems-gemology/spring-2018-labnotes-cats-eye-demantoid-and-brown-andradite-with-horsetail-inclusions): 2.51 ct green cabochon, RI over the "
             + "limits of the refractometer, hydrostatic SG 3.84; horsetail inclusions (radiating fibres), 'regarded as diagnostic for natural demantoid'. Raman "

@@ -123,7 +123,7 @@ public class LoupeModelTests
     {
         var model = new LoupeModel();
         Assert.Equal(MagnificationVocabulary.All.Select(f => f.Feature), model.Rows.Where(r => !r.IsHeading).Select(r => r.Feature!.Feature));
-        Assert.Equal(["GROWTH", "INCLUSIONS", "SIGNS OF TREATMENT", "SIGNS OF A COMPOSITE STONE"],
+        Assert.Equal(["GROWTH", "INCLUSIONS", "SIGNS OF TREATMENT", "SIGNS OF A COMPOSITE STONE", "PHENOMENA (by eye, one light)"],
             model.Rows.Where(r => r.IsHeading).Select(model.Line));
         Assert.All(model.Rows.Where(r => !r.IsHeading), r => Assert.Equal(r.Group, r.Feature!.Group));
         Assert.Equal(1, model.FirstFeatureRow);
@@ -182,7 +182,7 @@ public class LoupeModelTests
         Assert.StartsWith("── nothing matches 'zzz' ─", model.Rule(null, PageWidth));
         string find = model.FindLine(PageWidth);
         Assert.StartsWith("Find: zzz_ ", find);
-        Assert.EndsWith(" 0 of 22", find);
+        Assert.EndsWith($" 0 of {GemIndex.Core.Magnification.MagnificationVocabulary.All.Count}", find);
         Assert.Equal(PageWidth, find.Length);
     }
 
