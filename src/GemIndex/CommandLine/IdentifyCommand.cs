@@ -51,7 +51,7 @@ internal static class IdentifyCommand
         var liquids = new Option<string[]>("--heavy-liquid") { Description = "DENSITY RESULT, RESULT floats | sinks | suspends, e.g. \"3.32 floats\" (repeat per liquid)" };
         var features = new Option<string[]>("--feature")
         {
-            Description = "A magnification feature seen, e.g. curved_striae (repeat per feature; the words are listed by an unknown one's error)",
+            Description = "A magnification feature or phenomenon seen, e.g. curved_striae, chatoyancy (repeat per feature; the words are listed by an unknown one's error)",
             AllowMultipleArgumentsPerToken = false,
         };
         var noFeatures = new Option<string[]>("--no-feature")
