@@ -4,11 +4,15 @@ using GemIndex.Data.Workbook;
 namespace GemIndex.Cli.TextUi.Stones;
 
 /// <summary>
-/// The workbook's stones as a searchable list of lines, each with its answer in a few words (worked out once per stone
-/// and change, so a search does not rank them again).
+/// The workbook's stones as a searchable list of lines, each with its answer in a few words. The answers are worked
+/// out away from the UI thread (<see cref="Compute"/>, thread-safe when the function given is) and kept once per stone
+/// and change (<see cref="Store"/>, on the UI thread), so the list opens at once and a search does not rank again.
 /// </summary>
 internal sealed class StoneListModel(Func<string, IReadOnlyList<StoneSummary>> list, Func<long, string>? answer = null)
 {
+    /// <summary>What a line shows where its answer is still being worked out.</summary>
+    public const string Pending = "…";
+
     private readonly Dictionary<(long, DateTimeOffset), string> _answers = [];
 
     public IReadOnlyList<StoneSummary> Shown { get; private set; } = list("");
@@ -22,13 +26,18 @@ internal sealed class StoneListModel(Func<string, IReadOnlyList<StoneSummary>> l
     /// <summary>The columns' names over the list, in the columns of <see cref="Line"/>.</summary>
     public static readonly string Heading = $"{"Reference",-18} {"Colour",-14} {"Weight",9} {"Answer",-18} Changed (UTC)";
 
-    /// <summary>One stone's line, with its answer.</summary>
-    public string LineOf(StoneSummary s)
-    {
-        if (answer is null) return Line(s, "");
-        if (!_answers.TryGetValue((s.Id, s.Modified), out string? text)) _answers[(s.Id, s.Modified)] = text = answer(s.Id);
-        return Line(s, text);
-    }
+    /// <summary>The shown stones whose answers are not known yet, in the order shown (none without an answer function).</summary>
+    public IReadOnlyList<StoneSummary> Missing() => answer is null ? [] : [.. Shown.Where(s => !_answers.ContainsKey((s.Id, s.Modified)))];
+
+    /// <summary>Works out one stone's answer (any thread).</summary>
+    public string Compute(long id) => answer?.Invoke(id) ?? "";
+
+    /// <summary>Keeps a stone's answer for this version of it.</summary>
+    public void Store(StoneSummary s, string text) => _answers[(s.Id, s.Modified)] = text;
+
+    /// <summary>One stone's line, with its answer, or <see cref="Pending"/> while it is worked out.</summary>
+    public string LineOf(StoneSummary s) =>
+        Line(s, answer is null ? "" : _answers.TryGetValue((s.Id, s.Modified), out string? text) ? text : Pending);
 
     /// <summary>One stone: reference, colour, weight, answer, day of the last change (UTC, as the workbook stores it; F3 shows the times).</summary>
     public static string Line(StoneSummary s, string answer) =>

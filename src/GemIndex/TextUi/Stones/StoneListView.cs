@@ -1,5 +1,6 @@
 using GemIndex.Cli.TextUi.Main;
 using System.Collections.ObjectModel;
+using GemIndex.Data.Workbook;
 using Terminal.Gui.App;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
@@ -12,10 +13,15 @@ internal sealed class StoneListView : FullScreenDialog
 {
     private readonly StoneListModel _model;
     private readonly ObservableCollection<string> _rows = [];
+    private readonly Action<Action>? _toUi;
+    private int _fill;               // which fill of the rows the answers being worked out belong to (UI thread)
+    private volatile bool _closed;
 
-    public StoneListView(StoneListModel model, Func<long, long> duplicate, Func<long, bool> delete, Func<long, IReadOnlyList<string>> history)
+    public StoneListView(StoneListModel model, Func<long, long> duplicate, Func<long, bool> delete, Func<long, IReadOnlyList<string>> history,
+        Action<Action>? toUi = null)
     {
         _model = model;
+        _toUi = toUi;
         Title = "Stones: Enter open ^N new ^D duplicate F3 history Del delete";
         var label = new PlainLabel { Text = "Search:" };
         Search = new TextField { X = 8, Width = 24 };
@@ -69,5 +75,47 @@ internal sealed class StoneListView : FullScreenDialog
         foreach (var s in _model.Shown) _rows.Add(_model.LineOf(s));
         if (_rows.Count == 0) _rows.Add(_model.Query.Length > 0 ? "(no stone matches the search)" : "(no stones: Ctrl+N starts one)");
         List.SelectedItem = 0;
+        AnswerInBackground();
+    }
+
+    /// <summary>
+    /// Works out the shown stones' answers one by one away from the UI thread, each put in its row as it comes, so a
+    /// large workbook's list opens at once; a new fill (a search, a deletion) or closing the list stops the old work.
+    /// Without a way back to the UI thread (tests), they are worked out here.
+    /// </summary>
+    private void AnswerInBackground()
+    {
+        var missing = _model.Missing();
+        if (missing.Count == 0) return;
+        int fill = Interlocked.Increment(ref _fill);
+        if (_toUi is null)
+        {
+            foreach (var s in missing) Put(s, _model.Compute(s.Id), fill);
+            return;
+        }
+        Task.Run(() =>
+        {
+            foreach (var s in missing)
+            {
+                if (_closed || Volatile.Read(ref _fill) != fill) return;
+                string text = _model.Compute(s.Id);
+                _toUi(() => Put(s, text, fill));
+            }
+        });
+    }
+
+    private void Put(StoneSummary s, string text, int fill)
+    {
+        if (_closed) return;
+        _model.Store(s, text);
+        if (fill != Volatile.Read(ref _fill)) return;
+        for (int i = 0; i < _model.Shown.Count && i < _rows.Count; i++)
+            if (_model.Shown[i].Id == s.Id) { _rows[i] = _model.LineOf(_model.Shown[i]); break; }
+    }
+
+    protected override void Dispose(bool disposing)
+    {
+        _closed = true;
+        base.Dispose(disposing);
     }
 }

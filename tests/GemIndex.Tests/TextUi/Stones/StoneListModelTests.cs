@@ -12,6 +12,8 @@ public class StoneListModelTests
     {
         var stone = new StoneSummary(7, "ring, centre stone of the estate piece", "yellowish green", 1.234, Noon);
         var model = new StoneListModel(_ => [stone], id => id == 7 ? "chrysoberyl 97%" : "");
+        Assert.Contains(StoneListModel.Pending, model.LineOf(stone), StringComparison.Ordinal);   // shown at once, worked out after
+        model.Store(stone, model.Compute(stone.Id));
         string line = model.LineOf(stone);
         Assert.Equal(StoneListModel.Heading.IndexOf("Answer", StringComparison.Ordinal), line.IndexOf("chrysoberyl 97%", StringComparison.Ordinal));
         Assert.EndsWith("2026-12-03", line, StringComparison.Ordinal);
@@ -20,20 +22,27 @@ public class StoneListModelTests
     }
 
     [Fact]
-    public void A_stones_answer_is_worked_out_once_per_change_not_on_every_search()
+    public void A_stones_answer_is_kept_once_per_change_and_only_the_unknown_ones_are_asked_for()
     {
         var first = new StoneSummary(1, "a", "red", null, Noon);
-        var changed = first with { Modified = Noon.AddMinutes(5) };
-        var shown = first;
-        int asked = 0;
-        var model = new StoneListModel(_ => [shown], _ => { asked++; return "corundum 92%"; });
-        model.LineOf(model.Shown[0]);
+        var other = new StoneSummary(2, "b", "blue", null, Noon);
+        var shown = new List<StoneSummary> { first, other };
+        var model = new StoneListModel(_ => [.. shown], _ => "corundum 92%");
+        Assert.Equal([1L, 2L], model.Missing().Select(s => s.Id));
+        model.Store(first, "corundum 92%");
         model.Search("a");
-        model.LineOf(model.Shown[0]);
-        Assert.Equal(1, asked);
-        shown = changed;
+        Assert.Equal([2L], model.Missing().Select(s => s.Id));            // a search keeps what was worked out
+        shown[0] = first with { Modified = Noon.AddMinutes(5) };           // the stone changed: its answer is asked for again
         model.Refresh();
-        model.LineOf(model.Shown[0]);
-        Assert.Equal(2, asked);
+        Assert.Equal([1L, 2L], model.Missing().Select(s => s.Id));
+    }
+
+    [Fact]
+    public void Without_an_answer_function_the_column_stays_empty_and_nothing_is_missing()
+    {
+        var stone = new StoneSummary(1, "a", "red", null, Noon);
+        var model = new StoneListModel(_ => [stone]);
+        Assert.Empty(model.Missing());
+        Assert.DoesNotContain(StoneListModel.Pending, model.LineOf(stone), StringComparison.Ordinal);
     }
 }
