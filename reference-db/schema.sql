@@ -78,10 +78,10 @@ CREATE TABLE material_colour (
     PRIMARY KEY (material_id, position)
 ) STRICT;
 
--- The references values name: a published work, 'from_memory' or 'common_practice', with its citation.
+-- The references values name: a published work, 'from_memory', 'common_practice' or a 'judgement' from published works, with its citation.
 CREATE TABLE reference (
     key      TEXT PRIMARY KEY,
-    kind     TEXT NOT NULL CHECK (kind IN ('published', 'from_memory', 'common_practice')),
+    kind     TEXT NOT NULL CHECK (kind IN ('published', 'from_memory', 'common_practice', 'judgement')),
     citation TEXT NOT NULL
 ) STRICT;
 

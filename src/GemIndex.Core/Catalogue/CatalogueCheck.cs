@@ -166,11 +166,12 @@ public static class CatalogueCheck
 
     // An assembled stone's index is its top's and its SG the assembly's: outside the species' own ranges by nature. A
     // treated or synthetic stone may carry a layer unlike the mineral (a chromium-diffused skin, a synthetic overgrowth)
-    // that the bench reads: outside the species' range only where a published source says so.
+    // that the bench reads: outside the species' range only where a published source, or a judgement whose reference
+    // states its reasoning from published works, says so.
     private static string? OutsideSpecies(Material variety, string field, Material species) =>
         variety.Origin != OriginClass.Composite
             && !(variety.Origin is OriginClass.Treated or OriginClass.Synthetic
-                && variety.Sources.TryGetValue(field, out var source) && source.Kind == SourceKind.Published)
+                && variety.Sources.TryGetValue(field, out var source) && source.Kind is SourceKind.Published or SourceKind.Judgement)
             && MaterialFieldText.RangeOf(variety, field) is { } r && MaterialFieldText.RangeOf(species, field) is { } whole
             && (r.Minimum < whole.Minimum || r.Maximum > whole.Maximum)
             ? $"{r.ToString("0.####")} lies outside its species' range {whole.ToString("0.####")}"

@@ -11,4 +11,10 @@ public enum SourceKind
 
     /// <summary>A fact of the trade (a polariscope reaction, a do-not-immerse habit), not a numeric range.</summary>
     CommonPractice,
+
+    /// <summary>
+    /// A value inferred from published works, the reasoning stated in the reference (a chromium-rich overgrowth read like
+    /// a chromium-diffused skin): counted apart from published values, never as a published entry.
+    /// </summary>
+    Judgement,
 }

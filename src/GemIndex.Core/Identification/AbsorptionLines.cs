@@ -51,12 +51,14 @@ internal static class AbsorptionLines
             if (matched[i] is not { } x) continue;
             unexplained--;
             double z = (x - listed[i].Nanometres) / PositionSigmaNanometres;
-            log += Math.Log(Detection(listed[i].Strength)) - 0.5 * z * z - Math.Log(PositionSigmaNanometres * Math.Sqrt(2 * Math.PI));
+            log += -0.5 * z * z - Math.Log(PositionSigmaNanometres * Math.Sqrt(2 * Math.PI));
         }
+        // Each group is one line to the instrument: seen (any member paired) or missed, once, by the same chance.
         foreach (int[] group in Groups(listed))
         {
-            if (group.Any(i => matched[i] is not null)) continue;
-            log += Math.Log(1 - GroupDetection(listed, group));
+            double seenChance = GroupDetection(listed, group);
+            if (group.Any(i => matched[i] is not null)) { log += Math.Log(seenChance); continue; }
+            log += Math.Log(1 - seenChance);
             if (group.Any(i => listed[i].Strength == LineStrength.Strong)) missedStrong++;
         }
         return log + unexplained * Math.Log(SpuriousLineRate / VisibleSpanNanometres);

@@ -8,7 +8,7 @@ namespace GemIndex.Core.Identification;
 /// separate the origins, those shares alone would put one origin above 80 %, which no bench answer can support. So when the
 /// tests alone (the origins taken as equally likely) leave the leading origin below <see cref="Decided"/>, its share of
 /// the species is held to at most <see cref="Cap"/> and the rest goes to the origins the catalogue holds as serious
-/// alternatives, in proportion to what the tests say of them. The species' total does not change.
+/// alternatives, in proportion to what the tests, colour included, say of them. The species' total does not change.
 /// </summary>
 internal static class OriginBalance
 {

@@ -15,6 +15,6 @@ public enum FeatureGroup
     /// <summary>Signs of an assembled stone: joins, cement, two lustres.</summary>
     Composite,
 
-    /// <summary>Optical phenomena the eye sees with one light: a cat's-eye, a star, play of colour, a change of colour.</summary>
+    /// <summary>Optical phenomena the eye sees: a cat's-eye or a star under one light, play of colour, a change of colour between two lights.</summary>
     Phenomenon,
 }

@@ -49,6 +49,6 @@ internal static class CatalogueCheckCommand
         output.WriteLine($"sourced entries: {s.SourcedEntries} of {s.Entries} ({(100 * s.SourcedEntryShare).ToString("0.0", CultureInfo.InvariantCulture)} %)" +
             " have every index, birefringence, SG and dispersion from a published work");
         output.WriteLine($"numeric values: {s.Values}: published {s.PublishedValues}, from memory {s.MemoryValues}, " +
-            $"common practice {s.PracticeValues}, no source {s.UnsourcedValues}");
+            $"common practice {s.PracticeValues}, judgement {s.JudgementValues}, no source {s.UnsourcedValues}");
     }
 }

@@ -194,7 +194,8 @@ public class LikeVarietyTests
     [Fact]
     public void The_check_refuses_a_like_variety_whose_range_leaves_its_species()
     {
-        // From memory: a published reading outside the species may stand for a treated stone (CatalogueCheck.OutsideSpecies).
+        // The SG is cited to memory on purpose: a treated variety may leave its species' range only on a published source
+        // or a stated judgement (CatalogueCheck.OutsideSpecies), so this one is still refused.
         FamilyCatalogue c = Read(With("\"pleochroism\": \"moderate\", \"sources\": { \"pleochroism\": \"practice\" }",
             "\"pleochroism\": \"moderate\", \"sg\": [2.65, 2.75], \"sources\": { \"pleochroism\": \"practice\", \"sg\": \"memory\" }"));
         CatalogueFinding f = Assert.Single(c.Check());

@@ -215,7 +215,7 @@ public class CatalogueCommandTests
             Assert.True(exit == 0, error);
             Assert.Matches(@"(?m)^\d+ entries checked, no findings$", output);
             Assert.Matches(@"(?m)^sourced entries: \d+ of \d+ \(\d+\.\d %\) have every index, birefringence, SG and dispersion from a published work$", output);
-            Assert.Matches(@"(?m)^numeric values: \d+: published \d+, from memory \d+, common practice \d+, no source 0$", output);
+            Assert.Matches(@"(?m)^numeric values: \d+: published \d+, from memory \d+, common practice \d+, judgement \d+, no source 0$", output);
         }
     }
 
@@ -250,7 +250,7 @@ public class CatalogueCommandTests
         Assert.True(entries >= 3);
         JsonElement sourcing = doc.RootElement.GetProperty("sourcing");
         Assert.Equal(entries, sourcing.GetProperty("entries").GetInt32());
-        Assert.Equal(sourcing.GetProperty("values").GetInt32(), new[] { "published_values", "memory_values", "practice_values", "unsourced_values" }
+        Assert.Equal(sourcing.GetProperty("values").GetInt32(), new[] { "published_values", "memory_values", "practice_values", "judgement_values", "unsourced_values" }
             .Sum(p => sourcing.GetProperty(p).GetInt32()));
         Assert.Equal(JsonValueKind.Array, doc.RootElement.GetProperty("findings").ValueKind);
     }

@@ -179,7 +179,7 @@ internal sealed class LoupeModel
         FeatureGroup.Inclusion => "INCLUSIONS",
         FeatureGroup.Treatment => "SIGNS OF TREATMENT",
         FeatureGroup.Composite => "SIGNS OF A COMPOSITE STONE",
-        FeatureGroup.Phenomenon => "PHENOMENA (by eye, one light)",
+        FeatureGroup.Phenomenon => "PHENOMENA (by eye)",
         _ => group.ToString().ToUpperInvariant(),
     };
 

@@ -97,8 +97,16 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     /// <summary>Assesses a snapshot with the current catalogue (any thread; the assessor keeps no state).</summary>
     public BenchAssessment Assess(BenchSnapshot snapshot) => _assessor.Assess(snapshot);
 
-    /// <summary>A stored stone's answer in a few words, for the list of stones (empty if it is gone or has no readings).</summary>
-    public string Answer(long id) => WithWorkbook(w => w.Get(id)) is { } sheet ? _assessor.Answer(sheet.Readings) : "";
+    /// <summary>
+    /// A stored stone's answer in a few words, for the list of stones: empty if it is gone or has no readings, null while
+    /// no catalogue is loaded (so that the list asks again later).
+    /// </summary>
+    public string? Answer(long id)
+    {
+        BenchAssessor assessor = _assessor;
+        if (!assessor.HasCatalogue) return null;
+        return WithWorkbook(w => w.Get(id)) is { } sheet ? assessor.Answer(sheet.Readings) : "";
+    }
 
     /// <summary>True once a catalogue is in use (see <see cref="UseAssessor"/>).</summary>
     public bool HasCatalogue => _assessor.HasCatalogue;

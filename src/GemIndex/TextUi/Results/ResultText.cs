@@ -22,14 +22,14 @@ internal static class ResultText
 
     public static string Index(double n) => n.ToString("0.000", CultureInfo.InvariantCulture);
 
-    /// <summary>
-    /// A probability in whole percent; what would print as 0 % or 100 % prints as "&lt;1%" or "&gt;99%", since bench readings
-    /// never make a material impossible or certain (and a listed candidate at "0%" reads as ruled out).
-    /// </summary>
     /// <summary>The answer in a few words for a list of stones: the leading species and its share, or "nothing fits".</summary>
     public static string Short(IdentificationResult r) =>
         r.NoGoodMatch ? "nothing fits" : r.Species.Count > 0 ? $"{r.Species[0].Species} {Percent(r.Species[0].Confidence)}" : "";
 
+    /// <summary>
+    /// A probability in whole percent; what would print as 0 % or 100 % prints as "&lt;1%" or "&gt;99%", since bench readings
+    /// never make a material impossible or certain (and a listed candidate at "0%" reads as ruled out).
+    /// </summary>
     public static string Percent(double p) => p is > 0 and < 0.005 ? "<1%" : p is >= 0.995 and < 1 ? ">99%" : GemIndex.Cli.Reports.ReportNumbers.WholePercent(p);
 
     public static string Gravity(SpecificGravity? sg) => sg is { } g

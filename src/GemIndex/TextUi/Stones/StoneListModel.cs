@@ -8,7 +8,7 @@ namespace GemIndex.Cli.TextUi.Stones;
 /// out away from the UI thread (<see cref="Compute"/>, thread-safe when the function given is) and kept once per stone
 /// and change (<see cref="Store"/>, on the UI thread), so the list opens at once and a search does not rank again.
 /// </summary>
-internal sealed class StoneListModel(Func<string, IReadOnlyList<StoneSummary>> list, Func<long, string>? answer = null)
+internal sealed class StoneListModel(Func<string, IReadOnlyList<StoneSummary>> list, Func<long, string?>? answer = null)
 {
     /// <summary>What a line shows where its answer is still being worked out.</summary>
     public const string Pending = "…";
@@ -29,8 +29,8 @@ internal sealed class StoneListModel(Func<string, IReadOnlyList<StoneSummary>> l
     /// <summary>The shown stones whose answers are not known yet, in the order shown (none without an answer function).</summary>
     public IReadOnlyList<StoneSummary> Missing() => answer is null ? [] : [.. Shown.Where(s => !_answers.ContainsKey((s.Id, s.Modified)))];
 
-    /// <summary>Works out one stone's answer (any thread).</summary>
-    public string Compute(long id) => answer?.Invoke(id) ?? "";
+    /// <summary>Works out one stone's answer (any thread); null when none can be worked out yet (no catalogue loaded).</summary>
+    public string? Compute(long id) => answer?.Invoke(id);
 
     /// <summary>Keeps a stone's answer for this version of it.</summary>
     public void Store(StoneSummary s, string text) => _answers[(s.Id, s.Modified)] = text;

@@ -98,19 +98,21 @@ internal sealed class StoneListView : FullScreenDialog
             foreach (var s in missing)
             {
                 if (_closed || Volatile.Read(ref _fill) != fill) return;
-                string text = _model.Compute(s.Id);
+                string? text;
+                try { text = _model.Compute(s.Id); }
+                catch (Exception e) when (e is not OutOfMemoryException) { text = "(not ranked)"; }   // one stone's fault leaves the others' answers
                 _toUi(() => Put(s, text, fill));
             }
         });
     }
 
-    private void Put(StoneSummary s, string text, int fill)
+    private void Put(StoneSummary s, string? text, int fill)
     {
         if (_closed) return;
-        _model.Store(s, text);
+        if (text is not null) _model.Store(s, text);   // none while no catalogue is loaded: asked again next time
         if (fill != Volatile.Read(ref _fill)) return;
         for (int i = 0; i < _model.Shown.Count && i < _rows.Count; i++)
-            if (_model.Shown[i].Id == s.Id) { _rows[i] = _model.LineOf(_model.Shown[i]); break; }
+            if (_model.Shown[i].Id == s.Id) { _rows[i] = text is null ? StoneListModel.Line(s, "") : _model.LineOf(_model.Shown[i]); break; }
     }
 
     protected override void Dispose(bool disposing)

@@ -13,7 +13,7 @@ public class StoneListModelTests
         var stone = new StoneSummary(7, "ring, centre stone of the estate piece", "yellowish green", 1.234, Noon);
         var model = new StoneListModel(_ => [stone], id => id == 7 ? "chrysoberyl 97%" : "");
         Assert.Contains(StoneListModel.Pending, model.LineOf(stone), StringComparison.Ordinal);   // shown at once, worked out after
-        model.Store(stone, model.Compute(stone.Id));
+        model.Store(stone, model.Compute(stone.Id)!);
         string line = model.LineOf(stone);
         Assert.Equal(StoneListModel.Heading.IndexOf("Answer", StringComparison.Ordinal), line.IndexOf("chrysoberyl 97%", StringComparison.Ordinal));
         Assert.EndsWith("2026-12-03", line, StringComparison.Ordinal);
