@@ -12,7 +12,7 @@ namespace GemIndex.Core.Catalogue;
 /// <param name="JudgementValues">Numeric values inferred from published works, the reasoning stated.</param>
 /// <param name="UnsourcedValues">Numeric values with no source at all (each is also a check finding).</param>
 public sealed record SourcingSummary(int Entries, int SourcedEntries, int PublishedValues, int MemoryValues, int PracticeValues, int UnsourcedValues,
-    int JudgementValues = 0)
+    int JudgementValues)
 {
     /// <summary>All numeric values counted.</summary>
     public int Values => PublishedValues + MemoryValues + PracticeValues + JudgementValues + UnsourcedValues;

@@ -40,7 +40,12 @@ internal static class AbsorptionLines
     /// listed lines within the instrument's resolution shows as one line, so it is missed as one line, with the detection
     /// of its strongest member (<see cref="GroupDetection"/>), once.
     /// </summary>
-    public static double LogLikelihood(IReadOnlyList<AbsorptionLine> listed, IReadOnlyList<double> seen, out int unexplained, out int missedStrong)
+    public static double LogLikelihood(IReadOnlyList<AbsorptionLine> listed, IReadOnlyList<double> seen, out int unexplained, out int missedStrong) =>
+        LogLikelihood(listed, Groups(listed), seen, out unexplained, out missedStrong);
+
+    /// <summary>The same, with the listed lines' groups (<see cref="Groups"/>) worked out once per catalogue entry.</summary>
+    internal static double LogLikelihood(IReadOnlyList<AbsorptionLine> listed, IReadOnlyList<int[]> groups, IReadOnlyList<double> seen,
+        out int unexplained, out int missedStrong)
     {
         var matched = Pair(listed, seen);
         double log = -SpuriousLineRate;
@@ -54,7 +59,7 @@ internal static class AbsorptionLines
             log += -0.5 * z * z - Math.Log(PositionSigmaNanometres * Math.Sqrt(2 * Math.PI));
         }
         // Each group is one line to the instrument: seen (any member paired) or missed, once, by the same chance.
-        foreach (int[] group in Groups(listed))
+        foreach (int[] group in groups)
         {
             double seenChance = GroupDetection(listed, group);
             if (group.Any(i => matched[i] is not null)) { log += Math.Log(seenChance); continue; }
@@ -135,11 +140,7 @@ internal static class AbsorptionLines
     {
         var groups = Groups(listed);
         int n = Math.Min(groups.Count, 10);
-        var detection = new double[n];
-        for (int g = 0; g < n; g++)
-        {
-            detection[g] = GroupDetection(listed, groups[g]);
-        }
+        double[] detection = [.. groups.Take(n).Select(g => GroupDetection(listed, g))];
         for (int mask = 0; mask < 1 << n; mask++)
         {
             double p = 1;

@@ -52,7 +52,7 @@ public static class EvidenceLikelihood
         if (s.Electrical is { } e) Electrical(material, e, acc);
         if (s.UvLong is { } ul) Fluorescence(BenchField.UvLong, "long-wave UV", material.UvLong, profile.UvLong, ul, acc);
         if (s.UvShort is { } us) Fluorescence(BenchField.UvShort, "short-wave UV", material.UvShort, profile.UvShort, us, acc);
-        if (s.AbsorptionLinesNanometres is { } lines) Absorption(material, lines, acc);
+        if (s.AbsorptionLinesNanometres is { } lines) Absorption(profile, lines, acc);
         if (sheet.ColourHues.Count > 0) Colour(profile, s.Colour!, sheet.ColourHueList, acc);
         if (s.Magnification is { IsEmpty: false } look)
         {
@@ -297,9 +297,10 @@ public static class EvidenceLikelihood
         return mine / total;
     }
 
-    private static void Absorption(Material m, IReadOnlyList<double> seen, EvidenceAccumulator acc)
+    private static void Absorption(MaterialProfile profile, IReadOnlyList<double> seen, EvidenceAccumulator acc)
     {
-        double logF = AbsorptionLines.LogLikelihood(m.AbsorptionLines, seen, out int unexplained, out int missedStrong);
+        Material m = profile.Material;
+        double logF = AbsorptionLines.LogLikelihood(m.AbsorptionLines, profile.LineGroups, seen, out int unexplained, out int missedStrong);
         double logG = AbsorptionLines.LogBroad(seen);
         double tail = acc.Fitting ? Math.Pow(0.07, unexplained) * Math.Pow(1 - AbsorptionLines.Detection(LineStrength.Strong), missedStrong) : 1;
         acc.AddLog(BenchField.Absorption, logF, logG, tail, robust: false, EvidenceAccumulator.ChromophoreGroup);

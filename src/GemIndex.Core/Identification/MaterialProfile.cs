@@ -32,7 +32,11 @@ public sealed class MaterialProfile
         PleochroismLargestColourless = EvidenceLikelihood.PleochroismRow(material.OpticCharacter, PleochroismStrength.None).Max();
         UvLong = new FluorescenceTable(material.UvLong);
         UvShort = new FluorescenceTable(material.UvShort);
+        LineGroups = AbsorptionLines.Groups(material.AbsorptionLines);
     }
+
+    /// <summary>Its listed absorption lines as the hand spectroscope shows them: groups within the resolution, each one line.</summary>
+    internal IReadOnlyList<int[]> LineGroups { get; }
 
     /// <summary>Where its principal indices may lie, for the section model (shared among entries with the same optical data).</summary>
     internal IndicatrixPrior Prior { get; }

@@ -50,14 +50,14 @@ internal static class OriginBalance
             var serious = priorShare.Where(kv => kv.Key != leading && kv.Value >= SeriousShare * priorShare[leading]).Select(kv => kv.Key).ToList();
             if (serious.Count == 0) continue;
             var tests = TestsAlone(entries, materials, logLikelihood);
-            if (tests[leading] >= Decided) continue;
+            if (tests.GetValueOrDefault(leading) >= Decided) continue;
             // Hold the leading origin to the cap; share the rest among the serious alternatives by what the tests say of
             // each, colour included: colour may not decide an origin, but among the alternatives a purple quartz's mass goes
             // to the synthetic amethyst rather than to heated citrine.
             double keep = Cap * total, give = posteriorShare[leading] - keep;
             var said = WithColour(entries, materials, posterior, logPrior);
             bool colourSays = serious.Sum(o => said.GetValueOrDefault(o)) > 0;
-            double Weight(OriginClass o) => colourSays ? said.GetValueOrDefault(o) : tests[o];
+            double Weight(OriginClass o) => (colourSays ? said : tests).GetValueOrDefault(o);
             double weights = serious.Sum(Weight);
             if (!(weights > 0)) continue;
             foreach (int i in entries.Where(i => materials[i].Origin == leading)) posterior[i] *= keep / posteriorShare[leading];
@@ -77,14 +77,18 @@ internal static class OriginBalance
     /// What all the tests, colour included, say of each origin: its best entry's posterior over its prior (proportional to
     /// the entry's likelihood, the prior's frequency judgement taken out).
     /// </summary>
-    private static Dictionary<OriginClass, double> WithColour(int[] entries, Material[] materials, double[] posterior, double[] logPrior)
+    private static Dictionary<OriginClass, double> WithColour(int[] entries, Material[] materials, double[] posterior, double[] logPrior) =>
+        BestByOrigin(entries, materials, i => Math.Log(posterior[i]) - logPrior[i]);
+
+    /// <summary>Each origin's best entry by <paramref name="logScore"/>, as a ratio to the best of all (empty when none scores).</summary>
+    private static Dictionary<OriginClass, double> BestByOrigin(int[] entries, Material[] materials, Func<int, double> logScore)
     {
-        double top = entries.Max(i => Math.Log(posterior[i]) - logPrior[i]);
-        var said = new Dictionary<OriginClass, double>();
-        if (double.IsNegativeInfinity(top)) return said;
+        double top = entries.Max(logScore);
+        var best = new Dictionary<OriginClass, double>();
+        if (double.IsNegativeInfinity(top)) return best;
         foreach (int i in entries)
-            said[materials[i].Origin] = Math.Max(said.GetValueOrDefault(materials[i].Origin), Math.Exp(Math.Log(posterior[i]) - logPrior[i] - top));
-        return said;
+            best[materials[i].Origin] = Math.Max(best.GetValueOrDefault(materials[i].Origin), Math.Exp(logScore(i) - top));
+        return best;
     }
 
     private static Dictionary<OriginClass, double> Totals(int[] entries, Func<int, double> value, Material[] materials)
@@ -104,10 +108,7 @@ internal static class OriginBalance
     /// </summary>
     private static Dictionary<OriginClass, double> TestsAlone(int[] entries, Material[] materials, double[] logLikelihood)
     {
-        double top = entries.Max(i => logLikelihood[i]);
-        var evidence = new Dictionary<OriginClass, double>();
-        foreach (int i in entries)
-            evidence[materials[i].Origin] = Math.Max(evidence.GetValueOrDefault(materials[i].Origin), Math.Exp(logLikelihood[i] - top));
+        var evidence = BestByOrigin(entries, materials, i => logLikelihood[i]);
         double sum = evidence.Values.Sum();
         return evidence.ToDictionary(kv => kv.Key, kv => sum > 0 ? kv.Value / sum : 0);
     }

@@ -59,6 +59,9 @@ internal static class RefractometerEvidence
     /// <summary>How wide each end of the span is taken to be (the grains' own index spread and the reading's: a judgement).</summary>
     internal const double BlinkEndWidth = 0.01;
 
+    /// <summary>Where a spot reading may fall on a material: anywhere from its lowest to its highest index.</summary>
+    private static PropertyRange SpotSpan(Material m) => new(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum);
+
     private static bool IsBlinkingAggregate(Material m, PropertyRange span) =>
         (m.Forms & MaterialForm.Aggregate) != 0 && (m.Forms & MaterialForm.Crystal) == 0 && span.Width > BlinkSpan;
 
@@ -151,7 +154,7 @@ internal static class RefractometerEvidence
         if (!aggregateOnly) return 1;
         if (series.LargestSeparation > 0) return AggregateShowsTwoEdges;
         if (series.Low.Length <= 1) return 1;
-        return IsBlinkingAggregate(m, new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum))
+        return IsBlinkingAggregate(m, SpotSpan(m))
             ? BlinkingAggregateShowsSharpSeries : AggregateShowsSharpSeries;
     }
 
@@ -208,7 +211,7 @@ internal static class RefractometerEvidence
     private static void Spot(Material m, double spot, double sigma, double shift, double shiftSigma, EvidenceAccumulator acc)
     {
         // A spot reading on a doubly refractive stone averages its edges: anywhere from the lowest to the highest index.
-        var span = new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum);
+        var span = SpotSpan(m);
         var part = Index("spot reading", spot, sigma, span, shift, shiftSigma, acc.Explaining, acc.Fitting);
         if (IsBlinkingAggregate(m, span))
         {
@@ -232,7 +235,7 @@ internal static class RefractometerEvidence
         double limit = r.LiquidLimit;
         const double sigma = 0.003; // where exactly the liquid's own edge hides a stone edge
         double p = RangeLikelihood.ProbabilityAbove(limit, range, sigma);
-        var span = new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum);
+        var span = SpotSpan(m);
         bool blinking = !hasReadings && r.Method == RefractometerMethod.Spot && IsBlinkingAggregate(m, span);
         if (blinking)
         {

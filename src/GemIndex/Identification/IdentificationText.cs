@@ -18,7 +18,7 @@ internal static class IdentificationText
         var o = new StringWriter { NewLine = "\n" };
         if (magnification is { IsEmpty: false } look)
         {
-            foreach (var f in look.Present.Order()) o.WriteLine($"{MagnificationVocabulary.Of(f).SeenHow}: {MagnificationVocabulary.Of(f).Name}: {MagnificationVocabulary.Of(f).Meaning}");
+            foreach (var info in look.Present.Order().Select(MagnificationVocabulary.Of)) o.WriteLine($"{info.SeenHow}: {info.Name}: {info.Meaning}");
             foreach (var f in look.Absent.Order()) o.WriteLine($"Looked for, not seen: {MagnificationVocabulary.Of(f).Name}: {MagnificationVocabulary.Of(f).Meaning}");
         }
         foreach (SpeciesResult s in ResultDocument.SpeciesShown(result))

@@ -13,12 +13,12 @@ internal sealed class StoneListView : FullScreenDialog
 {
     private readonly StoneListModel _model;
     private readonly ObservableCollection<string> _rows = [];
-    private readonly Action<Action>? _toUi;
+    private readonly Action<Action> _toUi;
     private int _fill;               // which fill of the rows the answers being worked out belong to (UI thread)
     private volatile bool _closed;
 
     public StoneListView(StoneListModel model, Func<long, long> duplicate, Func<long, bool> delete, Func<long, IReadOnlyList<string>> history,
-        Action<Action>? toUi = null)
+        Action<Action> toUi)
     {
         _model = model;
         _toUi = toUi;
@@ -81,18 +81,12 @@ internal sealed class StoneListView : FullScreenDialog
     /// <summary>
     /// Works out the shown stones' answers one by one away from the UI thread, each put in its row as it comes, so a
     /// large workbook's list opens at once; a new fill (a search, a deletion) or closing the list stops the old work.
-    /// Without a way back to the UI thread (tests), they are worked out here.
     /// </summary>
     private void AnswerInBackground()
     {
+        int fill = Interlocked.Increment(ref _fill);   // every fill, so that the work for an older one stops
         var missing = _model.Missing();
         if (missing.Count == 0) return;
-        int fill = Interlocked.Increment(ref _fill);
-        if (_toUi is null)
-        {
-            foreach (var s in missing) Put(s, _model.Compute(s.Id), fill);
-            return;
-        }
         Task.Run(() =>
         {
             foreach (var s in missing)
@@ -112,7 +106,7 @@ internal sealed class StoneListView : FullScreenDialog
         if (text is not null) _model.Store(s, text);   // none while no catalogue is loaded: asked again next time
         if (fill != Volatile.Read(ref _fill)) return;
         for (int i = 0; i < _model.Shown.Count && i < _rows.Count; i++)
-            if (_model.Shown[i].Id == s.Id) { _rows[i] = text is null ? StoneListModel.Line(s, "") : _model.LineOf(_model.Shown[i]); break; }
+            if (_model.Shown[i].Id == s.Id) { _rows[i] = text is null ? StoneListModel.Line(s, "") : _model.LineOf(s); break; }
     }
 
     protected override void Dispose(bool disposing)
