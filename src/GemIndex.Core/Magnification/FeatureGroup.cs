@@ -15,6 +15,9 @@ public enum FeatureGroup
     /// <summary>Signs of an assembled stone: joins, cement, two lustres.</summary>
     Composite,
 
+    /// <summary>The structure of organic materials under a loupe: nacre, Schreger lines, bone canals, plant cells, coral growth, pigment spots.</summary>
+    OrganicStructure,
+
     /// <summary>Optical phenomena the eye sees: a cat's-eye or a star under one light, play of colour, a change of colour between two lights.</summary>
     Phenomenon,
 }

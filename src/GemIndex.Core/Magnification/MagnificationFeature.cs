@@ -72,6 +72,24 @@ public enum MagnificationFeature
     /// <summary>Flattened bubbles in one plane: the cement layer of an assembled stone.</summary>
     CementLayerBubbles,
 
+    /// <summary>The serrated edges of overlapping nacre layers on a pearl's or mother-of-pearl's surface.</summary>
+    NacrePlatelets,
+
+    /// <summary>Schreger lines: crossing arcs on a cross-section of elephant or mammoth ivory.</summary>
+    SchregerLines,
+
+    /// <summary>Haversian canals: the pits and short dashes of bone's vessels on a polished surface.</summary>
+    HaversianCanals,
+
+    /// <summary>The fibrous grain of a palm nut's thick-walled cells (vegetable ivory).</summary>
+    PlantCells,
+
+    /// <summary>Coral's growth: fine parallel lines along a branch, concentric rings across it.</summary>
+    CoralGrowth,
+
+    /// <summary>Tortoiseshell's mottling seen as small round spots of pigment.</summary>
+    PigmentSpots,
+
     /// <summary>Chatoyancy: one band of light across a cabochon (a cat's-eye).</summary>
     Chatoyancy,
 

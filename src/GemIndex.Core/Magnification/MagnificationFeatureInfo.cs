@@ -2,7 +2,7 @@ namespace GemIndex.Core.Magnification;
 
 /// <summary>One feature of the magnification vocabulary, in the words shown to a bench user.</summary>
 /// <param name="Feature">The feature.</param>
-/// <param name="Group">Growth, inclusion, treatment, composite or phenomenon.</param>
+/// <param name="Group">Growth, inclusion, treatment, composite, organic structure or phenomenon.</param>
 /// <param name="Word">The word on the command line and in the batch format ("curved_striae").</param>
 /// <param name="Name">The display name ("curved striae").</param>
 /// <param name="LookFor">One plain line: what to look for.</param>

@@ -50,6 +50,22 @@ public static class MagnificationSources
     public const string Shigley1995 =
         "Shigley J.E., Fritsch E., Reinitz I., Moses T.M. (1995) A chart for the separation of natural and synthetic diamonds. Gems & Gemology 31(4), 256-264";
 
+    /// <summary>The Schreger pattern of elephant and mammoth ivory; bone's Haversian canals seen with a 10x lens.</summary>
+    public const string EspinozaMann1999 =
+        "Espinoza E.O., Mann M.-J., Identification guide for ivory and ivory substitutes, U.S. National Fish and Wildlife Forensics Laboratory (reprinted 1999)";
+
+    /// <summary>Nacre laid in thin overlapping layers whose edges form serrated outlines on the surface of pearls and mother-of-pearl.</summary>
+    public const string KunzStevenson1908 =
+        "Kunz G.F., Stevenson C.H. (1908) The Book of the Pearl, the structure of pearls (overlapping laminae with serrated outlines)";
+
+    /// <summary>Tortoiseshell's small spherical reddish particles, absent from its imitations.</summary>
+    public const string NewmanTortoiseshell =
+        "Newman H., An Illustrated Dictionary of Jewelry (Thames and Hudson), 'Tortoise shell'";
+
+    /// <summary>Vegetable ivory's fibrous microscopic structure.</summary>
+    public const string CameoVegetableIvory =
+        "Museum of Fine Arts Boston, CAMEO, 'Vegetable ivory' (fibrous microscopic structure; citing Thornton 1981, The structure of ivory and ivory substitutes)";
+
     /// <summary>A fact of the trade with no single source.</summary>
     public const string CommonPractice = "common practice";
 }

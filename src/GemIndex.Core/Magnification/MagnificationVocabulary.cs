@@ -82,6 +82,26 @@ public static class MagnificationVocabulary
         new(MagnificationFeature.CementLayerBubbles, FeatureGroup.Composite, "cement_bubbles", "bubbles in a cement layer",
             "flattened bubbles all in one plane, in a thin layer of cement", "darkfield, looking through the girdle",
             "assembled stone joined with cement", GiaMicroWorld2023Doublet, Plain),
+        // Organic structure: what tells the organic materials and their imitations apart under a 10x loupe, where the
+        // refractometer and SG barely separate them. All lie on the surface, so an opaque piece shows them too.
+        new(MagnificationFeature.NacrePlatelets, FeatureGroup.OrganicStructure, "nacre_platelets", "nacre platelet edges",
+            "fine wavy, serrated lines over the surface, like the contour lines of a map, where overlapping nacre layers end", "reflected light on the surface, 10x or more",
+            "nacre: natural, cultured and dyed pearls and mother-of-pearl; coated glass, plastic or shell beads look smooth or granular", KunzStevenson1908, Plain),
+        new(MagnificationFeature.SchregerLines, FeatureGroup.OrganicStructure, "schreger_lines", "Schreger lines",
+            "crossing arcs, a chequered pattern of V shapes like engine turning, on a cross-section or an end", "reflected light on a cross-section or a polished end",
+            "elephant and mammoth ivory; not bone, vegetable ivory or plastic (a moulded imitation copies straight lines at most)", EspinozaMann1999, Plain),
+        new(MagnificationFeature.HaversianCanals, FeatureGroup.OrganicStructure, "haversian_canals", "Haversian canals",
+            "small pits, dots or short scratch-like dashes, often darkened with dirt, on a polished surface", "reflected light, 10x",
+            "bone; ivory and vegetable ivory have none", EspinozaMann1999, Plain),
+        new(MagnificationFeature.PlantCells, FeatureGroup.OrganicStructure, "plant_cells", "plant cell grain",
+            "a fine fibrous grain of tiny elongated cells, plainer where dye has gone in", "reflected light, 10x or more",
+            "vegetable ivory (tagua and other palm nuts)", CameoVegetableIvory, Subtle),
+        new(MagnificationFeature.CoralGrowth, FeatureGroup.OrganicStructure, "coral_growth", "coral growth lines",
+            "fine parallel lines along a branch and concentric rings across it, like a tree's", "reflected light along the piece and on a drilled or broken end",
+            "coral (red, pink, black, golden); plastic, glass and dyed stone imitations have none", CommonPractice, Plain),
+        new(MagnificationFeature.PigmentSpots, FeatureGroup.OrganicStructure, "pigment_spots", "spots of pigment",
+            "the mottling made of small round reddish-brown spots, closer together where the colour is deeper", "transmitted light through a thin edge, or diffused light",
+            "tortoiseshell; plastic and dyed horn imitations show streaks or clouds of colour without spots", NewmanTortoiseshell, Plain),
         // Phenomena: seen by eye with one light (a penlight) as the stone is turned; when a stone has one it is hard to miss
         // (Obvious), except a change of colour, which needs two lights (Plain). Meanings: facts of the trade.
         new(MagnificationFeature.Chatoyancy, FeatureGroup.Phenomenon, "chatoyancy", "cat's-eye (chatoyancy)",
@@ -111,7 +131,7 @@ public static class MagnificationVocabulary
     private static readonly Dictionary<MagnificationFeature, MagnificationFeatureInfo> ByFeature = Table.ToDictionary(i => i.Feature);
     private static readonly Dictionary<string, MagnificationFeatureInfo> ByWord = Table.ToDictionary(i => i.Word, StringComparer.OrdinalIgnoreCase);
 
-    /// <summary>Every feature, grouped as the bench looks for them (growth, inclusions, treatment, composite, phenomena).</summary>
+    /// <summary>Every feature, grouped as the bench looks for them (growth, inclusions, treatment, composite, organic structure, phenomena).</summary>
     public static IReadOnlyList<MagnificationFeatureInfo> All => Table;
 
     /// <summary>The words accepted, in table order.</summary>

@@ -60,6 +60,19 @@ public class MagnificationEvidenceTests
     }
 
     [Fact]
+    public void The_organic_structures_are_a_group_seen_under_magnification_that_no_origin_holds_by_default()
+    {
+        // Each structure belongs to one organic material (Espinoza and Mann; Kunz and Stevenson 1908; Newman; CAMEO):
+        // an entry holds it only where reference-db/magnification.json says so, whatever its origin.
+        var organic = MagnificationVocabulary.All.Where(f => f.Group == FeatureGroup.OrganicStructure).Select(f => f.Word).ToList();
+        Assert.Equal(["nacre_platelets", "schreger_lines", "haversian_canals", "plant_cells", "coral_growth", "pigment_spots"], organic);
+        Assert.All(Enum.GetValues<OriginClass>(), origin => Assert.All(organic,
+            w => Assert.Equal(MagnificationProfile.Foreign, MagnificationProfile.ForOrigin(origin).ProbabilityOf(MagnificationVocabulary.Find(w)!.Value))));
+        Assert.Equal("Seen under magnification", MagnificationVocabulary.Of(MagnificationFeature.SchregerLines).SeenHow);
+        Assert.Equal(MagnificationFeature.HaversianCanals, MagnificationVocabulary.Find("Haversian canals"));
+    }
+
+    [Fact]
     public void A_listed_probability_outside_zero_to_one_is_refused()
     {
         var e = Assert.Throws<ArgumentOutOfRangeException>(() => new MagnificationProfile(OriginClass.Natural,

@@ -46,4 +46,49 @@ public class IdentifyMagnificationTests
         Assert.Equal(3, exit);
         Assert.Contains("--no-feature:", error);
     }
+
+    [Fact]
+    public void Schreger_lines_or_bone_canals_separate_ivory_from_bone_and_the_loupe_is_the_next_test()
+    {
+        // A white carving, spot 1.54, SG 1.80: inside both ivory's and bone's handbook ranges (from memory), so only the
+        // structure tells them (Espinoza and Mann, USFWS ivory identification guide: Schreger lines in elephant and
+        // mammoth ivory, Haversian canals in bone).
+        using var run = new CommandRun();
+        double Share(string species, params string[] looks) => SpeciesOf(run, ["--spot", "1.54", "--sg", "1.80", "--colour", "white", .. looks])
+            .Where(s => s.GetProperty("species").GetString() == species).Select(s => s.GetProperty("confidence").GetDouble()).SingleOrDefault();
+        Assert.True(Share("ivory") is > 0.1 and < 0.8, "without a look neither leads by far");
+        Assert.True(Share("ivory", "--feature", "schreger_lines") > 0.9);
+        Assert.True(Share("bone", "--feature", "haversian_canals") > 0.9);
+        Assert.True(Share("bone", "--no-feature", "haversian_canals") < Share("bone"), "looked for and not seen counts against bone");
+
+        var (_, text, _) = CommandRun.Plain("identify", "--spot", "1.54", "--sg", "1.80", "--colour", "white", "--catalogue-dir", run.Folder);
+        string next = text.Split('\n').Single(l => l.StartsWith("Next test:", StringComparison.Ordinal));
+        Assert.Contains("Haversian canals", next);
+        Assert.Contains("Schreger lines", next);
+    }
+
+    [Fact]
+    public void Nacre_platelet_edges_seen_rule_out_the_coated_bead_imitations()
+    {
+        // A white bead, spot 1.53 (one end of aragonite's blink), SG 2.71: pearl, mother-of-pearl and the coated shell bead
+        // alike by index and weight (from memory). Overlapping nacre layers end in serrated lines on a pearl's surface
+        // (Kunz and Stevenson 1908); a coating looks smooth.
+        using var run = new CommandRun();
+        double Entry(string name, params string[] looks) => SpeciesOf(run, ["--spot", "1.53", "--sg", "2.71", "--colour", "white", .. looks])
+            .SelectMany(s => s.GetProperty("candidates").EnumerateArray())
+            .Where(c => c.GetProperty("name").GetString() == name).Select(c => c.GetProperty("confidence").GetDouble()).SingleOrDefault();
+        double before = Entry("coated shell bead imitation pearl");
+        Assert.True(before > 0.02, $"without a look the coated bead holds {before}");
+        Assert.True(Entry("coated shell bead imitation pearl", "--feature", "nacre_platelets") < before / 20);
+        Assert.True(Entry("freshwater cultured pearl", "--feature", "nacre_platelets") > Entry("freshwater cultured pearl"));
+    }
+
+    /// <summary>The answer's species list for <c>identify</c> with these readings, as JSON.</summary>
+    private static List<JsonElement> SpeciesOf(CommandRun run, string[] readings)
+    {
+        var (exit, stdout, error) = CommandRun.Plain(["identify", .. readings, "--json", "--catalogue-dir", run.Folder]);
+        Assert.True(exit == 0, error);
+        using var doc = JsonDocument.Parse(stdout);
+        return [.. doc.RootElement.GetProperty("species").EnumerateArray().Select(s => s.Clone())];
+    }
 }

@@ -179,6 +179,7 @@ internal sealed class LoupeModel
         FeatureGroup.Inclusion => "INCLUSIONS",
         FeatureGroup.Treatment => "SIGNS OF TREATMENT",
         FeatureGroup.Composite => "SIGNS OF A COMPOSITE STONE",
+        FeatureGroup.OrganicStructure => "ORGANIC STRUCTURE",
         FeatureGroup.Phenomenon => "PHENOMENA (by eye)",
         _ => group.ToString().ToUpperInvariant(),
     };
