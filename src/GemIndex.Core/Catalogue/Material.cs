@@ -96,6 +96,12 @@ public sealed record Material
     public string Notes { get; init; } = "";
 
     /// <summary>
+    /// A rule that restricts trade in the material (a CITES listing), in a few words, or empty: shown as a caution
+    /// whenever the material is a serious candidate, never weighed as evidence.
+    /// </summary>
+    public TradeRule? TradeRule { get; init; }
+
+    /// <summary>
     /// The source of each value, by field name as the family files spell it ("omega", "sg", "uv_long"); a field
     /// missing here has no source. Keys are <see cref="CatalogueFields"/> names.
     /// </summary>

@@ -90,11 +90,7 @@ public sealed class MagnificationTable
     }
 
     /// <summary>The names in the table that are not entries of the given catalogue.</summary>
-    public IReadOnlyList<string> Unmatched(IEnumerable<Material> catalogue)
-    {
-        var names = catalogue.Select(m => m.Name).ToHashSet(StringComparer.Ordinal);
-        return [.. Entries.Keys.Where(n => !names.Contains(n)).Order(StringComparer.Ordinal)];
-    }
+    public IReadOnlyList<string> Unmatched(IEnumerable<Material> catalogue) => EntryNames.Unmatched(Entries.Keys, catalogue);
 
     /// <summary>The materials with their listed profiles attached (user entries and unlisted ones keep their origin's defaults).</summary>
     public IReadOnlyList<Material> Attach(IReadOnlyList<Material> materials) =>

@@ -49,6 +49,7 @@ internal static class MaterialText
         lines.Add(("share of species", Word(m.Frequency)));
         lines.Add(("do not immerse", m.DoNotImmerse ? "yes: never weigh in water" : "no"));
         lines.Add(("notes", m.Notes.Length == 0 ? "-" : m.Notes));
+        if (m.TradeRule is { } rule) lines.Add(("trade", $"{rule.Text} (a summary, not legal advice; {rule.Citation})"));
         lines.Add(("entry", m.IsUserEntry ? "your own (user catalogue)" : "shipped catalogue"));
         if (m.StatedFields.Count > 0) lines.Add(("own fields", $"{string.Join(", ", m.StatedFields)} (the rest from species '{m.Species}')"));
         int width = lines.Max(l => l.Label.Length);

@@ -263,6 +263,21 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_candidate_under_a_trade_rule_brings_the_rule_as_a_caution_said_once_for_the_entries_that_share_it()
+    {
+        // Invented entries: two opals sharing one invented rule, and a look-alike without one. The rule is a caution,
+        // never evidence: the confidences are those of the same catalogue without it.
+        var rule = new TradeRule("trade restricted by an invented listing for this test", "invented");
+        Material[] ruled = [.. Catalogue.Select(m => m.Name == "opal" ? m with { TradeRule = rule } : m), Catalogue.Single(m => m.Name == "opal") with { Name = "opal two", TradeRule = rule }];
+        Material[] plain = [.. Catalogue, Catalogue.Single(m => m.Name == "opal") with { Name = "opal two" }];
+        var sheet = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.45) };
+        var result = new Identifier(ruled).Identify(sheet);
+        var cautions = result.Warnings.Where(w => w.Contains("trade restricted", StringComparison.Ordinal)).ToList();
+        Assert.Equal(["Possible opal and opal two: trade restricted by an invented listing for this test. Check the rules where you buy, sell or ship it (a summary, not legal advice)."], cautions);
+        Assert.Equal(new Identifier(plain).Identify(sheet).Candidates.Select(c => c.Confidence), result.Candidates.Select(c => c.Confidence));
+    }
+
+    [Fact]
     public void Weighing_in_water_is_never_suggested_while_a_porous_material_leads()
     {
         // Spot 1.45: opal (porous) leads; SG would separate it but must not be suggested.
