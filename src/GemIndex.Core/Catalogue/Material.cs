@@ -96,7 +96,7 @@ public sealed record Material
     public string Notes { get; init; } = "";
 
     /// <summary>
-    /// A rule that restricts trade in the material (a CITES listing), in a few words, or empty: shown as a caution
+    /// A rule that restricts trade in the material (a CITES listing, or national rules), or null: shown as a caution
     /// whenever the material is a serious candidate, never weighed as evidence.
     /// </summary>
     public TradeRule? TradeRule { get; init; }

@@ -64,8 +64,8 @@ public static class BenchWarnings
         foreach (var c in relevant.Where(c => c.Material.DoNotImmerse))
             warnings.Add($"Possible {c.Material.Name}: do not immerse (no water or heavy liquids){(c.Material.Notes.Length > 0 ? " — " + c.Material.Notes.TrimEnd('.') : "")}.");
         // Entries that share a rule (red and dyed coral) are named together, the rule said once.
-        foreach (var rule in relevant.Where(c => c.Material.TradeRule is not null).GroupBy(c => c.Material.TradeRule!.Text))
-            warnings.Add($"Possible {Listed([.. rule.Select(c => c.Material.Name)])}: {rule.Key}. Check the rules where you buy, sell or ship it (a summary, not legal advice).");
+        foreach (var rule in relevant.Where(c => c.Material.TradeRule is not null).GroupBy(c => c.Material.TradeRule!))
+            warnings.Add($"Possible {Listed([.. rule.Select(c => c.Material.Name)])}: {rule.Key.Text}. Check the rules where you buy, sell or ship {(rule.Count() > 1 ? "them" : "it")} (a summary, not legal advice).");
         if (sheet.UnknownColourWords.Count > 0)
             warnings.Add($"Colour word{(sheet.UnknownColourWords.Count > 1 ? "s" : "")} '{string.Join("', '", sheet.UnknownColourWords)}' not known: no colour evidence taken from {(sheet.UnknownColourWords.Count > 1 ? "them" : "it")} (known hues: {string.Join(", ", ColourWords.KnownHues)}).");
         var leading = species ?? [.. relevant.GroupBy(c => c.Material.Species).Select(g => new SpeciesResult

@@ -82,8 +82,9 @@ public static class MagnificationVocabulary
         new(MagnificationFeature.CementLayerBubbles, FeatureGroup.Composite, "cement_bubbles", "bubbles in a cement layer",
             "flattened bubbles all in one plane, in a thin layer of cement", "darkfield, looking through the girdle",
             "assembled stone joined with cement", GiaMicroWorld2023Doublet, Plain),
-        // Organic structure: what tells the organic materials and their imitations apart under a 10x loupe, where the
-        // refractometer and SG barely separate them. All lie on the surface, so an opaque piece shows them too.
+        // Organic structure: what tells organic materials from look-alikes that index and SG do not part (ivory from
+        // bone, a pearl from a coated shell bead) under a 10x loupe. Seen on the surface (the pigment spots through a
+        // thin edge), so an opaque piece shows them too.
         new(MagnificationFeature.NacrePlatelets, FeatureGroup.OrganicStructure, "nacre_platelets", "nacre platelet edges",
             "fine wavy, serrated lines over the surface, like the contour lines of a map, where overlapping nacre layers end", "reflected light on the surface, 10x or more",
             "nacre: natural, cultured and dyed pearls and mother-of-pearl; coated glass, plastic or shell beads look smooth or granular", KunzStevenson1908, Plain),

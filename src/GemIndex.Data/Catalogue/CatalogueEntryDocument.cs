@@ -22,6 +22,9 @@ public sealed record CatalogueEntryDocument : EntryFieldsDocument
     public required ReferenceDocument[] References { get; init; }
     public required bool IsUserEntry { get; init; }
 
+    /// <summary>The rule that restricts trade in the material (trade-rules.json), or null.</summary>
+    public TradeRuleDocument? TradeRule { get; init; }
+
     /// <summary>The document of a material: every field it has, its sources by key, and the references they name.</summary>
     public static CatalogueEntryDocument From(Material m)
     {
@@ -46,8 +49,12 @@ public sealed record CatalogueEntryDocument : EntryFieldsDocument
             References = [.. m.Sources.Values.Distinct().OrderBy(s => s.Key, StringComparer.Ordinal)
                 .Select(s => new ReferenceDocument { Key = s.Key, Kind = CatalogueWords.Of(s.Kind), Citation = s.Citation })],
             IsUserEntry = m.IsUserEntry,
+            TradeRule = m.TradeRule is { } rule ? new TradeRuleDocument(rule.Text, rule.Citation) : null,
         };
     }
 
     private static double[]? Pair(PropertyRange? r) => r is { } v ? [v.Minimum, v.Maximum] : null;
 }
+
+/// <summary>A trade rule as <c>catalogue show/list --json</c> write it: what restricts the trade, and the work it summarises.</summary>
+public sealed record TradeRuleDocument(string Text, string Citation);

@@ -6,10 +6,10 @@ using GemIndex.Data.Catalogue;
 namespace GemIndex.Data.TradeRules;
 
 /// <summary>
-/// reference-db/trade-rules.json: the trade rules (CITES listings, an open treaty) that restrict buying, selling or
-/// shipping some organic materials, by catalogue entry name. Read once from the embedded file and attached to the
-/// shipped entries after the catalogue loads, as the magnification table is (the SQLite schema does not hold it); the
-/// answer shows each as a caution, never as evidence.
+/// reference-db/trade-rules.json: the rules (CITES listings, and national rules for mammoth ivory) that restrict buying,
+/// selling or shipping some organic materials. Each rule is written once and given to entries by name (shipped entries)
+/// or by species (every entry of the species, the user's own included); attached after the catalogue loads (the SQLite
+/// schema does not hold it). The answer shows each as a caution, never as evidence.
 /// </summary>
 public sealed class TradeRuleTable
 {
@@ -20,54 +20,83 @@ public sealed class TradeRuleTable
 
     private static readonly JsonSerializerOptions Options = new() { UnmappedMemberHandling = JsonUnmappedMemberHandling.Disallow };
 
-    private TradeRuleTable(IReadOnlyDictionary<string, TradeRule> rules) => Rules = rules;
+    private TradeRuleTable(IReadOnlyDictionary<string, TradeRule> byName, IReadOnlyDictionary<string, TradeRule> bySpecies) =>
+        (ByName, BySpecies) = (byName, bySpecies);
 
     /// <summary>The embedded table, read once.</summary>
     /// <exception cref="CatalogueFormatException">The embedded file cannot be read (every fault named).</exception>
     public static TradeRuleTable Embedded => EmbeddedTable.Value;
 
-    /// <summary>The rule by entry name (ordinal, as the catalogue names entries).</summary>
-    public IReadOnlyDictionary<string, TradeRule> Rules { get; }
+    /// <summary>The rule of each entry named (ordinal, as the catalogue names entries); shipped entries only.</summary>
+    public IReadOnlyDictionary<string, TradeRule> ByName { get; }
 
-    /// <summary>Reads the table's text; a missing rule, an unknown source or a name given twice is an error naming the entry.</summary>
+    /// <summary>The rule of every entry of each species named, the user's own entries included.</summary>
+    public IReadOnlyDictionary<string, TradeRule> BySpecies { get; }
+
+    /// <summary>Reads the table's text; a rule without text or a known source, an entry naming an unknown rule, or a name given twice is an error naming it.</summary>
     /// <exception cref="CatalogueFormatException">The text has faults (all of them named).</exception>
     public static TradeRuleTable Read(string json)
     {
         TableDocument? table;
         try { table = JsonSerializer.Deserialize<TableDocument>(json, Options); }
         catch (JsonException e) { throw new CatalogueFormatException([$"trade-rules.json: not valid: {e.Message}"]); }
-        if (table?.Entries is null) throw new CatalogueFormatException(["trade-rules.json: \"entries\" must be a list."]);
+        if (table?.Rules is null || table.Entries is null) throw new CatalogueFormatException(["trade-rules.json: \"rules\" and \"entries\" must be lists."]);
         var citations = new Dictionary<string, string>(StringComparer.Ordinal);
         foreach (var r in table.References ?? []) citations.TryAdd(r.Key, r.Citation ?? r.Key);
         var errors = new List<string>();
         var rules = new Dictionary<string, TradeRule>(StringComparer.Ordinal);
+        for (int i = 0; i < table.Rules.Length; i++)
+        {
+            var r = table.Rules[i];
+            string at = $"trade-rules.json: rules[{i}]{(string.IsNullOrWhiteSpace(r.Key) ? "" : $" ({r.Key})")}";
+            if (string.IsNullOrWhiteSpace(r.Key)) errors.Add($"{at}: \"key\" must name the rule.");
+            else if (string.IsNullOrWhiteSpace(r.Text)) errors.Add($"{at}: \"text\" must say what restricts the trade.");
+            else if (r.Source is null || !citations.TryGetValue(r.Source, out string? citation)) errors.Add($"{at}: \"source\" must be one of the file's reference keys.");
+            else if (!rules.TryAdd(r.Key, new TradeRule(r.Key, r.Text.Trim(), citation))) errors.Add($"{at}: the rule is given twice.");
+        }
+        var byName = new Dictionary<string, TradeRule>(StringComparer.Ordinal);
+        var bySpecies = new Dictionary<string, TradeRule>(StringComparer.Ordinal);
         for (int i = 0; i < table.Entries.Length; i++)
         {
             var e = table.Entries[i];
-            string at = $"trade-rules.json: entries[{i}]{(string.IsNullOrWhiteSpace(e.Name) ? "" : $" ({e.Name})")}";
-            if (string.IsNullOrWhiteSpace(e.Name)) errors.Add($"{at}: \"name\" must name a catalogue entry.");
-            else if (string.IsNullOrWhiteSpace(e.Rule)) errors.Add($"{at}: \"rule\" must say what restricts the trade.");
-            else if (e.Source is null || !citations.ContainsKey(e.Source)) errors.Add($"{at}: \"source\" must be one of the file's reference keys.");
-            else if (!rules.TryAdd(e.Name, new TradeRule(e.Rule.Trim(), citations[e.Source]))) errors.Add($"{at}: the entry is named twice.");
+            bool named = !string.IsNullOrWhiteSpace(e.Name), species = !string.IsNullOrWhiteSpace(e.Species);
+            string at = $"trade-rules.json: entries[{i}]{(named ? $" ({e.Name})" : species ? $" (species {e.Species})" : "")}";
+            if (named == species) errors.Add($"{at}: give either \"name\" (one entry) or \"species\" (all its entries).");
+            else if (e.Rule is null || !rules.TryGetValue(e.Rule, out var rule)) errors.Add($"{at}: \"rule\" must be the key of one of the file's rules.");
+            else if (!(named ? byName : bySpecies).TryAdd(named ? e.Name! : e.Species!, rule)) errors.Add($"{at}: named twice.");
         }
         if (errors.Count > 0) throw new CatalogueFormatException(errors);
-        return new TradeRuleTable(rules);
+        return new TradeRuleTable(byName, bySpecies);
     }
 
-    /// <summary>The names in the table that are not entries of the given catalogue.</summary>
-    public IReadOnlyList<string> Unmatched(IEnumerable<Material> catalogue) => EntryNames.Unmatched(Rules.Keys, catalogue);
+    /// <summary>The entry names and species in the table that the given catalogue does not have.</summary>
+    public IReadOnlyList<string> Unmatched(IEnumerable<Material> catalogue)
+    {
+        var materials = catalogue.ToList();
+        var species = materials.Select(m => m.Species).ToHashSet(StringComparer.Ordinal);
+        return [.. EntryNames.Unmatched(ByName.Keys, materials), .. BySpecies.Keys.Where(s => !species.Contains(s)).Order(StringComparer.Ordinal).Select(s => $"species {s}")];
+    }
 
-    /// <summary>The materials with their trade rules attached (user entries keep none).</summary>
+    /// <summary>The rule that applies to an entry: its species' rule, else (shipped entries only) its own by name.</summary>
+    public TradeRule? For(Material material) =>
+        BySpecies.TryGetValue(material.Species, out var bySpecies) ? bySpecies
+        : !material.IsUserEntry && ByName.TryGetValue(material.Name, out var byName) ? byName : null;
+
+    /// <summary>The materials with their trade rules attached.</summary>
     public IReadOnlyList<Material> Attach(IReadOnlyList<Material> materials) =>
-        [.. materials.Select(m => !m.IsUserEntry && Rules.TryGetValue(m.Name, out TradeRule? rule) ? m with { TradeRule = rule } : m)];
+        [.. materials.Select(m => For(m) is { } rule ? m with { TradeRule = rule } : m)];
 
     private sealed record TableDocument(
         [property: JsonPropertyName("about")] string? About,
         [property: JsonPropertyName("references")] ReferenceDocument[]? References,
+        [property: JsonPropertyName("rules")] RuleDocument[]? Rules,
         [property: JsonPropertyName("entries")] EntryDocument[]? Entries);
 
     private sealed record ReferenceDocument([property: JsonPropertyName("key")] string Key, [property: JsonPropertyName("citation")] string? Citation);
 
+    private sealed record RuleDocument(
+        [property: JsonPropertyName("key")] string? Key, [property: JsonPropertyName("text")] string? Text, [property: JsonPropertyName("source")] string? Source);
+
     private sealed record EntryDocument(
-        [property: JsonPropertyName("name")] string? Name, [property: JsonPropertyName("rule")] string? Rule, [property: JsonPropertyName("source")] string? Source);
+        [property: JsonPropertyName("name")] string? Name, [property: JsonPropertyName("species")] string? Species, [property: JsonPropertyName("rule")] string? Rule);
 }

@@ -267,14 +267,18 @@ public class IdentifierTests
     {
         // Invented entries: two opals sharing one invented rule, and a look-alike without one. The rule is a caution,
         // never evidence: the confidences are those of the same catalogue without it.
-        var rule = new TradeRule("trade restricted by an invented listing for this test", "invented");
+        var rule = new TradeRule("invented", "trade restricted by an invented listing for this test", "invented");
         Material[] ruled = [.. Catalogue.Select(m => m.Name == "opal" ? m with { TradeRule = rule } : m), Catalogue.Single(m => m.Name == "opal") with { Name = "opal two", TradeRule = rule }];
         Material[] plain = [.. Catalogue, Catalogue.Single(m => m.Name == "opal") with { Name = "opal two" }];
         var sheet = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.45) };
         var result = new Identifier(ruled).Identify(sheet);
         var cautions = result.Warnings.Where(w => w.Contains("trade restricted", StringComparison.Ordinal)).ToList();
-        Assert.Equal(["Possible opal and opal two: trade restricted by an invented listing for this test. Check the rules where you buy, sell or ship it (a summary, not legal advice)."], cautions);
+        Assert.Equal(["Possible opal and opal two: trade restricted by an invented listing for this test. Check the rules where you buy, sell or ship them (a summary, not legal advice)."], cautions);
         Assert.Equal(new Identifier(plain).Identify(sheet).Candidates.Select(c => c.Confidence), result.Candidates.Select(c => c.Confidence));
+        // A sheet that rules the opals out (spinel's spot 1.72) names no rule: only serious candidates (≥ 5 %) bring one.
+        var spinel = new Identifier(ruled).Identify(new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.72) });
+        Assert.True(spinel.Candidates.Where(c => c.Material.TradeRule is not null).All(c => c.Confidence < BenchWarnings.Relevant));
+        Assert.DoesNotContain(spinel.Warnings, w => w.Contains("trade restricted", StringComparison.Ordinal));
     }
 
     [Fact]

@@ -187,6 +187,22 @@ public class CatalogueCommandTests
     }
 
     [Fact]
+    public void Show_names_a_protected_material_s_trade_rule_in_text_and_json_and_leaves_it_out_elsewhere()
+    {
+        // The hawksbill is in CITES Appendix I (the CITES appendices, as reference-db/trade-rules.json cites them).
+        using var run = new CommandRun();
+        var (exit, text, _) = run.Catalogue("show", "tortoiseshell");
+        Assert.Equal(0, exit);
+        Assert.Contains("trade ", text);
+        Assert.Contains("Appendix I (a summary, not legal advice; Convention on International Trade", text);
+        var (_, json, _) = run.Catalogue("show", "tortoiseshell", "--json");
+        using JsonDocument doc = JsonDocument.Parse(json);
+        Assert.Matches(@"Appendix I$", doc.RootElement.GetProperty("trade_rule").GetProperty("text").GetString());
+        var (_, quartz, _) = run.Catalogue("show", "rock crystal", "--json");
+        Assert.DoesNotContain("trade_rule", quartz);
+    }
+
+    [Fact]
     public void Show_of_an_unknown_name_is_one_line_on_stderr_and_exit_3()
     {
         using var run = new CommandRun();

@@ -50,9 +50,9 @@ public class IdentifyMagnificationTests
     [Fact]
     public void Schreger_lines_or_bone_canals_separate_ivory_from_bone_and_the_loupe_is_the_next_test()
     {
-        // A white carving, spot 1.54, SG 1.80: inside both ivory's and bone's handbook ranges (from memory), so only the
-        // structure tells them (Espinoza and Mann, USFWS ivory identification guide: Schreger lines in elephant and
-        // mammoth ivory, Haversian canals in bone).
+        // A white carving, spot 1.54, SG 1.80: inside both ivory's published ranges (gemdat, citing Lazzarelli and
+        // Schumann) and bone's (SG after Bukanov; its index from memory), so only the structure tells them (Espinoza and
+        // Mann, USFWS ivory identification guide: Schreger lines in elephant and mammoth ivory, Haversian canals in bone).
         using var run = new CommandRun();
         double Share(string species, params string[] looks) => SpeciesOf(run, ["--spot", "1.54", "--sg", "1.80", "--colour", "white", .. looks])
             .Where(s => s.GetProperty("species").GetString() == species).Select(s => s.GetProperty("confidence").GetDouble()).SingleOrDefault();
@@ -70,8 +70,8 @@ public class IdentifyMagnificationTests
     [Fact]
     public void Nacre_platelet_edges_seen_rule_out_the_coated_bead_imitations()
     {
-        // A white bead, spot 1.53 (one end of aragonite's blink), SG 2.71: pearl, mother-of-pearl and the coated shell bead
-        // alike by index and weight (from memory). Overlapping nacre layers end in serrated lines on a pearl's surface
+        // A white bead, spot 1.53 (one end of aragonite's blink), SG 2.71: inside the catalogue's ranges of pearl,
+        // mother-of-pearl and the coated shell bead alike (aragonite's index and SG, from handbooks, from memory). Overlapping nacre layers end in serrated lines on a pearl's surface
         // (Kunz and Stevenson 1908); a coating looks smooth.
         using var run = new CommandRun();
         double Entry(string name, params string[] looks) => SpeciesOf(run, ["--spot", "1.53", "--sg", "2.71", "--colour", "white", .. looks])
