@@ -27,6 +27,12 @@ public static class BenchWarnings
     /// <summary>An origin holding at least this share of its species' total is one the tests have not ruled out.</summary>
     public const double OriginShare = 0.05;
 
+    /// <summary>
+    /// Entries of the leading species' leading origin that each hold at least this share of the species are varieties the
+    /// answer has not settled (a fifth: a judgement, docs/ranking.md §5, "Varieties").
+    /// </summary>
+    public const double VarietyShare = 0.2;
+
     /// <summary>Warnings for one answer, most important first.</summary>
     /// <param name="sheet">The analysed sheet.</param>
     /// <param name="candidates">The candidates shown.</param>
@@ -35,8 +41,10 @@ public static class BenchWarnings
     /// <param name="species">Species totals over the whole catalogue, best first.</param>
     /// <param name="separation">The test that would best tell the leading species' entries apart, if any.</param>
     /// <param name="leaderReasons">The leading candidate's reasons, each test weighed (empty: none worked out).</param>
+    /// <param name="varieties">The leading species' unsettled varieties (<see cref="InseparableVarieties"/>) and the test that best tells them apart.</param>
     public static IReadOnlyList<string> For(AnalysedSheet sheet, IReadOnlyList<RankedCandidate> candidates, double notInCatalogue, bool noGoodMatch,
-        IReadOnlyList<SpeciesResult>? species = null, NextTestAdvice? separation = null, IReadOnlyList<EvidenceContribution>? leaderReasons = null)
+        IReadOnlyList<SpeciesResult>? species = null, NextTestAdvice? separation = null, IReadOnlyList<EvidenceContribution>? leaderReasons = null,
+        (IReadOnlyList<RankedCandidate> Entries, NextTestAdvice? Test)? varieties = null)
     {
         var warnings = new List<string>();
         if (sheet.Sheet.IsEmpty)
@@ -82,6 +90,15 @@ public static class BenchWarnings
                 : i == 0 ? "no bench test left here separates them" : "";
             warnings.Add($"{Capital(leading[i].Species)}: {Listed(origins)} cannot be separated by these tests{(test.Length > 0 ? "; " + test : "")}; for a valuable stone refer it to a qualified laboratory.");
         }
+        // Varieties of one origin the tests leave open (cat's-eye or plain chrysoberyl, CVD or HPHT growth), and what would tell them.
+        if (!noGoodMatch && varieties is { Entries.Count: > 1 } open && leading.Count > 0)
+        {
+            // Colour is no test the advisor weighs (it is always seen): when it was not written and the varieties' usual
+            // colours differ, writing it down is the advice.
+            bool colourWouldHelp = sheet.ColourHues.Count == 0 && open.Entries.Select(c => string.Join('|', c.Material.Colours)).Distinct().Count() > 1;
+            warnings.Add($"{Capital(leading[0].Species)}: {Listed([.. open.Entries.Select(c => c.Material.Name)])} cannot be separated by these tests; "
+                + (open.Test is { } tells ? $"the {tells.Description} would help." : colourWouldHelp ? "its colour, written down, would help." : "no bench test left here separates them."));
+        }
         if (leading.Count > 0 && LaboratoryCaution(leading[0], sheet) is { } caution) warnings.Add(caution);
         if (relevant.Any(c => c.Material.Origin == OriginClass.Composite))
             warnings.Add(sheet.Sheet.Magnification?.Present.Contains(Magnification.MagnificationFeature.JoinPlane) == true
@@ -97,6 +114,19 @@ public static class BenchWarnings
     {
         if (species.Confidence < Relevant) return null;
         var held = species.Origins.Where(o => o.Value >= OriginShare * species.Confidence).Select(o => o.Key).ToList();
+        return held.Count < 2 ? null : held;
+    }
+
+    /// <summary>
+    /// The entries of the leading species' leading origin that each hold at least <see cref="VarietyShare"/> of the
+    /// species, among the candidates shown (a species' entries follow its total), when there are two or more; else null.
+    /// </summary>
+    internal static IReadOnlyList<RankedCandidate>? InseparableVarieties(IReadOnlyList<SpeciesResult> species, IReadOnlyList<RankedCandidate> candidates)
+    {
+        if (species.Count == 0 || species[0].Confidence < Relevant || species[0].Origins.Count == 0) return null;
+        var lead = species[0];
+        OriginClass origin = lead.Origins.MaxBy(o => o.Value).Key;
+        var held = candidates.Where(c => c.Material.Species == lead.Species && c.Material.Origin == origin && c.Confidence >= VarietyShare * lead.Confidence).ToList();
         return held.Count < 2 ? null : held;
     }
 

@@ -282,6 +282,31 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void Varieties_of_one_origin_the_tests_leave_open_are_named_with_the_test_that_would_tell_them()
+    {
+        // Invented entries of one species and origin, alike in every reading: one holds a cat's-eye (0.95, as the
+        // catalogue's cat's-eye varieties do), one is plain; two more differ only in their usual colour.
+        var eye = new GemIndex.Core.Magnification.MagnificationProfile(OriginClass.Natural,
+            new Dictionary<GemIndex.Core.Magnification.MagnificationFeature, double> { [GemIndex.Core.Magnification.MagnificationFeature.Chatoyancy] = 0.95 });
+        var plain = Make("plain stone", "invented", OpticalIndices.SingleIndex(new(1.70, 1.71)), 3.50, 3.52);
+        Material[] catalogue = [plain, plain with { Name = "eye stone", Variety = "eye stone", Magnification = eye },
+            Make("green kind", "other", OpticalIndices.SingleIndex(new(1.60, 1.61)), 3.00, 3.02) with { Colours = ["green"] },
+            Make("white kind", "other", OpticalIndices.SingleIndex(new(1.60, 1.61)), 3.00, 3.02) with { Colours = ["white"] }];
+        var engine = new Identifier(catalogue);
+        IReadOnlyList<string> Open(BenchSheet sheet) => [.. engine.Identify(sheet).Warnings.Where(w => w.Contains("cannot be separated", StringComparison.Ordinal))];
+
+        var sheet = new BenchSheet { SpecificGravity = new SpecificGravity(3.51, 0.01), Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.705) };
+        string said = Assert.Single(Open(sheet));
+        Assert.StartsWith("Invented: plain stone and eye stone cannot be separated by these tests; the loupe or microscope (magnification): look for cat's-eye", said);
+        // The eye seen settles it: no warning.
+        Assert.Empty(Open(sheet with { Magnification = new([GemIndex.Core.Magnification.MagnificationFeature.Chatoyancy], []) }));
+
+        var pale = new BenchSheet { SpecificGravity = new SpecificGravity(3.01, 0.01), Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.605) };
+        Assert.Equal(["Other: green kind and white kind cannot be separated by these tests; its colour, written down, would help."], Open(pale));
+        Assert.Empty(Open(pale with { Colour = "green" }));
+    }
+
+    [Fact]
     public void Weighing_in_water_is_never_suggested_while_a_porous_material_leads()
     {
         // Spot 1.45: opal (porous) leads; SG would separate it but must not be suggested.
