@@ -28,10 +28,16 @@ public static class BenchWarnings
     public const double OriginShare = 0.05;
 
     /// <summary>
-    /// Entries of the leading species' leading origin that each hold at least this share of the species are varieties the
+    /// Entries of the leading species' leading origin that each hold at least this share of that origin are varieties the
     /// answer has not settled (a fifth: a judgement, docs/ranking.md §5, "Varieties").
     /// </summary>
     public const double VarietyShare = 0.2;
+
+    /// <summary>
+    /// Varieties are named only once the species is settled this far (half: a judgement, docs/ranking.md §5,
+    /// "Varieties"); while the species is open the next test is about the species.
+    /// </summary>
+    public const double SettledSpecies = 0.5;
 
     /// <summary>Warnings for one answer, most important first.</summary>
     /// <param name="sheet">The analysed sheet.</param>
@@ -44,7 +50,7 @@ public static class BenchWarnings
     /// <param name="varieties">The leading species' unsettled varieties (<see cref="InseparableVarieties"/>) and the test that best tells them apart.</param>
     public static IReadOnlyList<string> For(AnalysedSheet sheet, IReadOnlyList<RankedCandidate> candidates, double notInCatalogue, bool noGoodMatch,
         IReadOnlyList<SpeciesResult>? species = null, NextTestAdvice? separation = null, IReadOnlyList<EvidenceContribution>? leaderReasons = null,
-        (IReadOnlyList<RankedCandidate> Entries, NextTestAdvice? Test)? varieties = null)
+        (IReadOnlyList<Material> Entries, NextTestAdvice? Test)? varieties = null)
     {
         var warnings = new List<string>();
         if (sheet.Sheet.IsEmpty)
@@ -71,7 +77,7 @@ public static class BenchWarnings
         var relevant = candidates.Where(c => c.Confidence >= Relevant).ToList();
         foreach (var c in relevant.Where(c => c.Material.DoNotImmerse))
             warnings.Add($"Possible {c.Material.Name}: do not immerse (no water or heavy liquids){(c.Material.Notes.Length > 0 ? " — " + c.Material.Notes.TrimEnd('.') : "")}.");
-        // Entries that share a rule (red and dyed coral) are named together, the rule said once.
+        // Entries that share a rule (black and golden coral) are named together, the rule said once.
         foreach (var rule in relevant.Where(c => c.Material.TradeRule is not null).GroupBy(c => c.Material.TradeRule!))
             warnings.Add($"Possible {Listed([.. rule.Select(c => c.Material.Name)])}: {rule.Key.Text}. Check the rules where you buy, sell or ship {(rule.Count() > 1 ? "them" : "it")} (a summary, not legal advice).");
         if (sheet.UnknownColourWords.Count > 0)
@@ -91,12 +97,15 @@ public static class BenchWarnings
             warnings.Add($"{Capital(leading[i].Species)}: {Listed(origins)} cannot be separated by these tests{(test.Length > 0 ? "; " + test : "")}; for a valuable stone refer it to a qualified laboratory.");
         }
         // Varieties of one origin the tests leave open (cat's-eye or plain chrysoberyl, CVD or HPHT growth), and what would tell them.
-        if (!noGoodMatch && varieties is { Entries.Count: > 1 } open && leading.Count > 0)
+        // The test the origin warning names already tells these varieties apart too: one line says it.
+        if (!noGoodMatch && varieties is { Entries.Count: > 1 } open && leading.Count > 0
+            && !(open.Test is { } same && separation is { } origin && Inseparable(leading[0]) is not null && same.Test == origin.Test && same.LookFor.SequenceEqual(origin.LookFor)))
         {
-            // Colour is no test the advisor weighs (it is always seen): when it was not written and the varieties' usual
-            // colours differ, writing it down is the advice.
-            bool colourWouldHelp = sheet.ColourHues.Count == 0 && open.Entries.Select(c => string.Join('|', c.Material.Colours)).Distinct().Count() > 1;
-            warnings.Add($"{Capital(leading[0].Species)}: {Listed([.. open.Entries.Select(c => c.Material.Name)])} cannot be separated by these tests; "
+            // Colour is no test the advisor weighs (it is always seen): when none was written and the varieties' usual
+            // colours begin with different hues, writing it down is the advice.
+            bool colourWouldHelp = string.IsNullOrWhiteSpace(sheet.Sheet.Colour)
+                && open.Entries.Select(m => string.Join('|', m.Colours.Take(1).SelectMany(ColourWords.PrincipalHues).Order())).Distinct().Count() > 1;
+            warnings.Add($"{Capital(leading[0].Species)}: {Listed([.. open.Entries.Select(m => m.Name)])} are not told apart by these tests; "
                 + (open.Test is { } tells ? $"the {tells.Description} would help." : colourWouldHelp ? "its colour, written down, would help." : "no bench test left here separates them."));
         }
         if (leading.Count > 0 && LaboratoryCaution(leading[0], sheet) is { } caution) warnings.Add(caution);
@@ -118,16 +127,20 @@ public static class BenchWarnings
     }
 
     /// <summary>
-    /// The entries of the leading species' leading origin that each hold at least <see cref="VarietyShare"/> of the
-    /// species, among the candidates shown (a species' entries follow its total), when there are two or more; else null.
+    /// The entries of the leading species' leading origin (the first on a tie) that each hold at least
+    /// <see cref="VarietyShare"/> of that origin, with their posteriors over the whole catalogue, when the species is
+    /// settled (<see cref="SettledSpecies"/>) and there are two or more; else null.
     /// </summary>
-    internal static IReadOnlyList<RankedCandidate>? InseparableVarieties(IReadOnlyList<SpeciesResult> species, IReadOnlyList<RankedCandidate> candidates)
+    internal static IReadOnlyList<(Material Material, double Probability)>? InseparableVarieties(IReadOnlyList<SpeciesResult> species,
+        IReadOnlyList<Material> materials, IReadOnlyList<double> posterior)
     {
-        if (species.Count == 0 || species[0].Confidence < Relevant || species[0].Origins.Count == 0) return null;
+        if (species.Count == 0 || species[0].Confidence < SettledSpecies || species[0].Origins.Count == 0) return null;
         var lead = species[0];
-        OriginClass origin = lead.Origins.MaxBy(o => o.Value).Key;
-        var held = candidates.Where(c => c.Material.Species == lead.Species && c.Material.Origin == origin && c.Confidence >= VarietyShare * lead.Confidence).ToList();
-        return held.Count < 2 ? null : held;
+        var (origin, total) = lead.Origins.MaxBy(o => o.Value);
+        var held = new List<(Material, double)>();
+        for (int i = 0; i < materials.Count; i++)
+            if (materials[i].Species == lead.Species && materials[i].Origin == origin && posterior[i] >= VarietyShare * total) held.Add((materials[i], posterior[i]));
+        return held.Count < 2 ? null : [.. held.OrderByDescending(h => h.Item2)];   // likeliest first; a tie keeps the catalogue's order
     }
 
     /// <summary>

@@ -384,7 +384,7 @@ public sealed class Identifier
             || (other > species[0].Confidence && Odds(other) >= NothingFitsOdds * Odds(BroadDensities.NotInCataloguePrior));
         var weighted = order.Where(i => posterior[i] >= 1e-3).Select(i => (_materials[i], posterior[i])).ToList();
         var separation = Separation(sheet, posterior, species);
-        var varieties = BenchWarnings.InseparableVarieties(species, candidates);
+        var varieties = BenchWarnings.InseparableVarieties(species, _materials, posterior);
         return new IdentificationResult
         {
             Id = sheet.Id,
@@ -397,7 +397,7 @@ public sealed class Identifier
                 // The leader's reasons in words only when a reading speaks strongly against it (its fit's evaluation counts them).
                 shownInOrder.Length > 0 && Evaluated(shownInOrder[0], explain: false).StronglyAgainst > 0
                     ? Evaluated(shownInOrder[0], explain: true).Contributions : [],
-                varieties is null ? null : (varieties, NextTestAdvisor.Advise(sheet, [.. varieties.Select(c => (c.Material, c.Confidence))]))),
+                varieties is null ? null : ([.. varieties.Select(v => v.Material)], NextTestAdvisor.Advise(sheet, varieties))),
             InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
                 ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
             Series = analysed.Series,

@@ -8,7 +8,7 @@ namespace GemIndex.Data.TradeRules;
 /// <summary>
 /// reference-db/trade-rules.json: the rules (CITES listings, and national rules for mammoth ivory) that restrict buying,
 /// selling or shipping some organic materials. Each rule is written once and given to entries by name (shipped entries)
-/// or by species (every entry of the species, the user's own included); attached after the catalogue loads (the SQLite
+/// or by species (every natural or treated entry of the species, the user's own included); attached after the catalogue loads (the SQLite
 /// schema does not hold it). The answer shows each as a caution, never as evidence.
 /// </summary>
 public sealed class TradeRuleTable
@@ -77,10 +77,13 @@ public sealed class TradeRuleTable
         return [.. EntryNames.Unmatched(ByName.Keys, materials), .. BySpecies.Keys.Where(s => !species.Contains(s)).Order(StringComparer.Ordinal).Select(s => $"species {s}")];
     }
 
-    /// <summary>The rule that applies to an entry: its species' rule, else (shipped entries only) its own by name.</summary>
+    /// <summary>
+    /// The rule that applies to an entry: (shipped entries) its own by name, else (natural or treated entries) its
+    /// species' rule; an imitation or a laboratory-grown entry filed under the species is not the protected animal.
+    /// </summary>
     public TradeRule? For(Material material) =>
-        BySpecies.TryGetValue(material.Species, out var bySpecies) ? bySpecies
-        : !material.IsUserEntry && ByName.TryGetValue(material.Name, out var byName) ? byName : null;
+        !material.IsUserEntry && ByName.TryGetValue(material.Name, out var byName) ? byName
+        : material.Origin is OriginClass.Natural or OriginClass.Treated && BySpecies.TryGetValue(material.Species, out var bySpecies) ? bySpecies : null;
 
     /// <summary>The materials with their trade rules attached.</summary>
     public IReadOnlyList<Material> Attach(IReadOnlyList<Material> materials) =>

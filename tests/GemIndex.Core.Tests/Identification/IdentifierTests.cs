@@ -285,25 +285,40 @@ public class IdentifierTests
     public void Varieties_of_one_origin_the_tests_leave_open_are_named_with_the_test_that_would_tell_them()
     {
         // Invented entries of one species and origin, alike in every reading: one holds a cat's-eye (0.95, as the
-        // catalogue's cat's-eye varieties do), one is plain; two more differ only in their usual colour.
+        // catalogue's cat's-eye varieties do), one is plain; two more differ only in their usual colour, two more in nothing.
         var eye = new GemIndex.Core.Magnification.MagnificationProfile(OriginClass.Natural,
             new Dictionary<GemIndex.Core.Magnification.MagnificationFeature, double> { [GemIndex.Core.Magnification.MagnificationFeature.Chatoyancy] = 0.95 });
         var plain = Make("plain stone", "invented", OpticalIndices.SingleIndex(new(1.70, 1.71)), 3.50, 3.52);
         Material[] catalogue = [plain, plain with { Name = "eye stone", Variety = "eye stone", Magnification = eye },
             Make("green kind", "other", OpticalIndices.SingleIndex(new(1.60, 1.61)), 3.00, 3.02) with { Colours = ["green"] },
-            Make("white kind", "other", OpticalIndices.SingleIndex(new(1.60, 1.61)), 3.00, 3.02) with { Colours = ["white"] }];
+            Make("white kind", "other", OpticalIndices.SingleIndex(new(1.60, 1.61)), 3.00, 3.02) with { Colours = ["white"] },
+            Make("first twin", "twin", OpticalIndices.SingleIndex(new(1.50, 1.51)), 2.00, 2.02),
+            Make("second twin", "twin", OpticalIndices.SingleIndex(new(1.50, 1.51)), 2.00, 2.02),
+            Make("near rival", "rival", OpticalIndices.SingleIndex(new(1.50, 1.51)), 2.00, 2.02)];
         var engine = new Identifier(catalogue);
-        IReadOnlyList<string> Open(BenchSheet sheet) => [.. engine.Identify(sheet).Warnings.Where(w => w.Contains("cannot be separated", StringComparison.Ordinal))];
+        IReadOnlyList<string> Open(BenchSheet sheet, int shown = 10) =>
+            [.. engine.Identify(sheet, shown).Warnings.Where(w => w.Contains("not told apart", StringComparison.Ordinal))];
 
         var sheet = new BenchSheet { SpecificGravity = new SpecificGravity(3.51, 0.01), Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.705) };
         string said = Assert.Single(Open(sheet));
-        Assert.StartsWith("Invented: plain stone and eye stone cannot be separated by these tests; the loupe or microscope (magnification): look for cat's-eye", said);
+        Assert.StartsWith("Invented: plain stone and eye stone are not told apart by these tests; the loupe or microscope (magnification): look for cat's-eye", said);
+        // Worked out over the whole catalogue, not the candidates shown: one shown candidate names the pair all the same.
+        Assert.Equal([said], Open(sheet, shown: 1));
         // The eye seen settles it: no warning.
         Assert.Empty(Open(sheet with { Magnification = new([GemIndex.Core.Magnification.MagnificationFeature.Chatoyancy], []) }));
 
         var pale = new BenchSheet { SpecificGravity = new SpecificGravity(3.01, 0.01), Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.605) };
-        Assert.Equal(["Other: green kind and white kind cannot be separated by these tests; its colour, written down, would help."], Open(pale));
+        Assert.Equal(["Other: green kind and white kind are not told apart by these tests; its colour, written down, would help."], Open(pale));
         Assert.Empty(Open(pale with { Colour = "green" }));
+        // A colour word the tool does not know is still a colour written: no request for one.
+        Assert.Equal(["Other: green kind and white kind are not told apart by these tests; no bench test left here separates them."], Open(pale with { Colour = "mauvish" }));
+
+        // Three entries alike in everything across two species: the species itself is open (a third each is below a
+        // half), so no variety line; without the rival, the twins are named with no test left.
+        var alike = new BenchSheet { SpecificGravity = new SpecificGravity(2.01, 0.01), Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.505) };
+        Assert.Empty(Open(alike));
+        var twins = new Identifier([.. catalogue.Where(m => m.Species != "rival")]).Identify(alike).Warnings;
+        Assert.Contains("Twin: first twin and second twin are not told apart by these tests; no bench test left here separates them.", twins);
     }
 
     [Fact]

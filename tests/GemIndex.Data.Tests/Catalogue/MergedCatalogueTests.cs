@@ -22,4 +22,21 @@ public class MergedCatalogueTests
         Assert.Equal(0.7, merged[0].MagnificationProfile.ProbabilityOf(MagnificationFeature.SchregerLines));
         Assert.Same(MagnificationProfile.ForOrigin(odd.Origin), merged[1].MagnificationProfile);
     }
+
+    [Fact]
+    public void Load_gives_a_user_entry_its_species_trade_rule_and_looks()
+    {
+        // A user's own tortoiseshell (invented test data, inside the shipped species' ranges) takes the marine-turtle
+        // rule (CITES Appendix I, as reference-db/trade-rules.json cites it) and the shipped entry's pigment spots.
+        using var temp = new TempDirectory();
+        var locations = CatalogueLocations.Under(temp.Path);
+        const string csv = "name,species,variety,origin,crystal_system,optic_character,n_min,n_max,sg_min,sg_max,forms,polariscope,colours,frequency,source,source_kind\n"
+            + "my shell comb,tortoiseshell,comb,natural,amorphous,amorphous,1.54,1.56,1.26,1.35,amorphous,singly_refractive,brown;yellow,rare,own measurements (invented test data),from_memory\n";
+        var imported = new UserCatalogue(locations.UserCataloguePath).Import(new StringReader(csv), ShippedCatalogue.Families);
+        Assert.True(imported.Errors.Count == 0, string.Join("; ", imported.Errors.Select(e => e.ToString())));
+        Material mine = MergedCatalogue.Load(locations).Single(m => m.Name == "my shell comb");
+        Assert.True(mine.IsUserEntry);
+        Assert.Equal("marine-turtle", mine.TradeRule?.Key);
+        Assert.Equal(0.85, mine.MagnificationProfile.ProbabilityOf(MagnificationFeature.PigmentSpots));
+    }
 }

@@ -41,6 +41,7 @@ public class TradeRuleTableTests
             SpecificGravity = new(1.3, 1.4), IsUserEntry = user,
         };
         Assert.Equal("r1", table.For(Entry("my shell comb", "tortoiseshell", user: true))?.Key);
+        Assert.Null(table.For(Entry("my plastic comb", "tortoiseshell", user: true) with { Origin = OriginClass.Imitation }));
         Assert.Null(table.For(Entry("red coral", "calcareous coral", user: true)));
         Assert.Equal("r2", table.For(Entry("red coral", "calcareous coral", user: false))?.Key);
     }
@@ -53,6 +54,8 @@ public class TradeRuleTableTests
     [InlineData("""{"references":[{"key":"a","citation":"A"}],"rules":[{"key":"r","text":"t","source":"a"}],"entries":[{"rule":"r"}]}""", "entries[0]: give either \"name\"")]
     [InlineData("""{"references":[{"key":"a","citation":"A"}],"rules":[{"key":"r","text":"t","source":"a"}],"entries":[{"name":"x","species":"y","rule":"r"}]}""", "give either")]
     [InlineData("""{"references":[{"key":"a","citation":"A"}],"rules":[{"key":"r","text":"t","source":"a"}],"entries":[{"name":"x","rule":"r"},{"name":"x","rule":"r"}]}""", "entries[1] (x): named twice")]
+    [InlineData("""{"references":[{"key":"a","citation":"A"}],"rules":[{"text":"t","source":"a"}],"entries":[]}""", "rules[0]: \"key\" must name the rule")]
+    [InlineData("""{"references":[{"key":"a","citation":"A"}],"rules":[{"key":"r","text":"t","source":"a"}],"entries":[{"species":"y","rule":"r"},{"species":"y","rule":"r"}]}""", "entries[1] (species y): named twice")]
     [InlineData("""{"references":[],"rules":[],"entries":[],"extra":1}""", "trade-rules.json: not valid")]
     [InlineData("""{"references":[],"rules":[]}""", "\"rules\" and \"entries\" must be lists")]
     public void A_faulty_table_is_refused_naming_the_fault(string json, string expected)
