@@ -52,6 +52,14 @@ start() {
 }
 
 keys() { tmux send-keys -t "$session" "$@"; sleep 0.15; }
+# scroll_until TEXT: ↓ one line at a time (the answer scrolls) until TEXT is on the screen; fail after 40 lines.
+scroll_until() {
+  local lines=0
+  until screen | grep -qF -- "$1"; do
+    (( lines++ < 40 )) || fail "did not see '$1' scrolling down"
+    keys Down
+  done
+}
 text() { tmux send-keys -t "$session" -l "$1"; sleep 0.15; }
 
 # step LOW HIGH: types one rotation step on the RI page's edit line (the cursor is in the low edge) and stores it.
@@ -128,11 +136,10 @@ keys F3; keys Tab Tab Tab Tab; text "y"
 wait_for "Over limit    [yes]"
 keys F4; text "5.80"
 wait_match "│Cubic zirconia [<>]?[0-9]+%"
-# The readings used sit below the candidates (grouped by species under their headings): F10 and PgDn reach them.
+# The readings used sit below the candidates (grouped by species under their headings): F10 and ↓ reach them.
 keys F10
 wait_for "Enter detail │ F10 or Esc back"
-keys NPage
-wait_for "Over the limit: index above the"
+scroll_until "Over the limit: index above the"
 echo "---- 80x24 stone 2 ----"; screen
 keys Escape
 wait_for "Tab next field │"
