@@ -12,7 +12,7 @@ public static class BenchWarnings
 
     /// <summary>
     /// A test weighing this much or more against the leading candidate, with its reading outside what the candidate shows,
-    /// is named in a warning (ten to one against: log₂ 10 bits; a judgement, docs/ranking.md §3, warnings).
+    /// is named in a warning (ten to one against: log₂ 10 bits; a judgement, docs/ranking.md §5, a reading against the leader).
     /// </summary>
     public const double ContradictionBits = 3.32;
 
@@ -23,6 +23,9 @@ public static class BenchWarnings
     /// </summary>
     internal static bool SpeaksAgainst(string test, double weightBits, bool agrees) =>
         !agrees && weightBits <= -ContradictionBits && test != Bench.BenchField.Colour;
+
+    /// <summary>An SG standard uncertainty above this is named as large: SG then separates little (a judgement, docs/ranking.md §5).</summary>
+    public const double LargeGravityUncertainty = 0.03;
 
     /// <summary>An origin holding at least this share of its species' total is one the tests have not ruled out.</summary>
     public const double OriginShare = 0.05;
@@ -72,7 +75,7 @@ public static class BenchWarnings
         if (!noGoodMatch && candidates.Count > 0)
             foreach (var reason in (leaderReasons ?? []).Where(r => SpeaksAgainst(r.Test, r.WeightBits, r.Agrees)))
                 warnings.Add($"Unusual for {candidates[0].Material.Name}, {Bench.BenchTestWords.DisplayOfWire(reason.Test)}: {reason.Text}. Re-check it; the answer weighs it as read.");
-        if (sheet.Sheet.SpecificGravity is { StandardUncertainty: > 0.03 } sg)
+        if (sheet.Sheet.SpecificGravity is { StandardUncertainty: > LargeGravityUncertainty } sg)
             warnings.Add($"SG uncertainty ±{sg.StandardUncertainty.ToString("0.00", CultureInfo.InvariantCulture)} is large (a small stone or a coarse balance): SG separates little here.");
         var relevant = candidates.Where(c => c.Confidence >= Relevant).ToList();
         foreach (var c in relevant.Where(c => c.Material.DoNotImmerse))

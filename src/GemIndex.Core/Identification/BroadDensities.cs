@@ -13,11 +13,11 @@ public static class BroadDensities
     /// <summary>Birefringence: flat over 0–0.30.</summary>
     public const double Birefringence = 1 / 0.3;
 
-    /// <summary>Chance that an unknown stone shows no second edge (is singly refractive or nearly so).</summary>
-    public const double SingleEdge = 0.4;
-
-    /// <summary>Chance that an unknown stone is over the refractometer's limit.</summary>
+    /// <summary>Chance that an unknown stone is over the refractometer's limit, no edge read (a judgement, docs/ranking.md §3).</summary>
     public const double OverLimit = 0.2;
+
+    /// <summary>Chance that an unknown stone with edges read has its highest edge over the limit (a judgement, docs/ranking.md §3).</summary>
+    public const double OverLimitWithReadings = 0.3;
 
     /// <summary>Specific gravity: flat over 1–8.</summary>
     public const double SpecificGravity = 1 / 7.0;

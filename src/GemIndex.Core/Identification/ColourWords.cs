@@ -2,7 +2,7 @@ namespace GemIndex.Core.Identification;
 
 /// <summary>
 /// Compares the loose colour words of a bench sheet ("greenish blue", "colourless", "violet") with a material's
-/// usual colours: by hue words, with synonyms folded and "-ish" modifiers counted as hues too.
+/// usual colours: by hue words, with synonyms folded; an "-ish" or "-y" word only tints the hue it precedes (docs/ranking.md §2, colour).
 /// </summary>
 public static class ColourWords
 {

@@ -74,9 +74,12 @@ public static class EvidenceLikelihood
             acc.Say($"SG {F2(value)} ± {F2(sigma)} {Where(value, range, s, "0.00")}");
     }
 
+    /// <summary>σ of a heavy liquid's density, doubled for a suspended stone (a judgement, docs/ranking.md §5, other named values).</summary>
+    private const double HeavyLiquidSigma = 0.01;
+
     private static void HeavyLiquid(Material m, HeavyLiquidResult liquid, EvidenceAccumulator acc)
     {
-        const double sigma = 0.01;
+        const double sigma = HeavyLiquidSigma;
         var range = m.SpecificGravity;
         double density = liquid.Liquid.Value;
         bool fitting = acc.Fitting;
@@ -297,12 +300,18 @@ public static class EvidenceLikelihood
         return mine / total;
     }
 
+    /// <summary>
+    /// The fit's factor for each line seen that the entry does not list (a judgement, docs/ranking.md §4): about a
+    /// spurious line's chance against a listed line's, so two unexplained lines make the fit poor.
+    /// </summary>
+    private const double UnexplainedLineFit = 0.07;
+
     private static void Absorption(MaterialProfile profile, IReadOnlyList<double> seen, EvidenceAccumulator acc)
     {
         Material m = profile.Material;
         double logF = AbsorptionLines.LogLikelihood(m.AbsorptionLines, profile.LineGroups, seen, out int unexplained, out int missedStrong);
         double logG = AbsorptionLines.LogBroad(seen);
-        double tail = acc.Fitting ? Math.Pow(0.07, unexplained) * Math.Pow(1 - AbsorptionLines.Detection(LineStrength.Strong), missedStrong) : 1;
+        double tail = acc.Fitting ? Math.Pow(UnexplainedLineFit, unexplained) * Math.Pow(1 - AbsorptionLines.Detection(LineStrength.Strong), missedStrong) : 1;
         acc.AddLog(BenchField.Absorption, logF, logG, tail, robust: false, EvidenceAccumulator.ChromophoreGroup);
         if (acc.Explaining)
         {

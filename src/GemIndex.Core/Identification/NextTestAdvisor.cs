@@ -196,11 +196,14 @@ public static class NextTestAdvisor
         q[3] = (1 - a) * (1 - b);
     }
 
+    /// <summary>A look is said to be likely, possible or not expected at these chances of seeing it (docs/ranking.md §5).</summary>
+    private const double LikelyLook = 0.5, PossibleLook = 0.1;
+
     private static string ExpectedLook(MagnificationFeature[] features, Material m) => string.Join(", ", features.Select(f =>
     {
         double p = MagnificationEvidence.ProbabilityOfSeeing(m.MagnificationProfile, f);
         string name = MagnificationVocabulary.Of(f).Name;
-        return p >= 0.5 ? $"{name} likely" : p >= 0.1 ? $"{name} possible" : $"{name} not expected";
+        return p >= LikelyLook ? $"{name} likely" : p >= PossibleLook ? $"{name} possible" : $"{name} not expected";
     }));
 
     /// <summary>The tests the advisor weighs, in the order it weighs them (of equal gains the first is kept).</summary>

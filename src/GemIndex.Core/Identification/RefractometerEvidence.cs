@@ -246,7 +246,7 @@ internal static class RefractometerEvidence
                 + (1 - 2 * BlinkEndShare) * RangeLikelihood.ProbabilityAbove(limit, span, sigma);
         }
         double tail = acc.Fitting ? RangeLikelihood.TwoSidedTail(Math.Max(0, limit - (blinking ? span : range).Maximum) / sigma) : 1;
-        acc.Add(BenchField.Refractometer, p, hasReadings ? 0.3 : BroadDensities.OverLimit, tail, robust: true);
+        acc.Add(BenchField.Refractometer, p, hasReadings ? BroadDensities.OverLimitWithReadings : BroadDensities.OverLimit, tail, robust: true);
         if (acc.Explaining)
             acc.Say($"over the limit (n > {limit.ToString("0.000", CultureInfo.InvariantCulture)}): {(hasReadings ? "highest" : "lowest")} index {range.ToString("0.000")} expected");
     }

@@ -5,7 +5,7 @@ using System.Runtime.CompilerServices;
 namespace GemIndex.Core.Identification;
 
 /// <summary>
-/// Laplace's method around the best points of the coarse set (docs/ranking.md §1): from each, Newton's method climbs the
+/// Laplace's method around the best points of the coarse set (docs/ranking.md §1): from each, Levenberg–Marquardt climbs the
 /// log-integrand over the facet orientation (three angles; two for a uniaxial material, whose indicatrix is round about
 /// its optic axis) and the shape (birefringence, β − α, where the catalogue lets them vary), and the integral over that
 /// peak is exp(ℓ*) (2π)^(d/2) |−H|^(−1/2). Distinct peaks (different predicted series) are added; the same peak reached
@@ -16,8 +16,14 @@ internal static class SectionRefinement
     /// <summary>How many of the coarse set's best points are climbed from (a judgement between speed and finding every peak).</summary>
     public const int Starts = 4;
 
-    /// <summary>Newton steps at most from each start.</summary>
+    /// <summary>Levenberg–Marquardt steps at most from each start.</summary>
     private const int Iterations = 10;
+
+    /// <summary>
+    /// The largest step of one climb: 0.15 rad for an orientation angle, 5 units (0.005 in index) for a shape parameter,
+    /// so that a step cannot jump to another peak (numerical judgements, docs/ranking.md §1).
+    /// </summary>
+    private const double AngleStepCap = 0.15, ValueStepCap = 5.0;
 
     /// <summary>A start this far (in ln) below the best cannot add a peak that matters.</summary>
     private const double Negligible = 12;
@@ -70,7 +76,7 @@ internal static class SectionRefinement
         return true;
     }
 
-    /// <summary>One climb: the log-integrand as a function of the free coordinates, and Newton's method on it.</summary>
+    /// <summary>One climb: the log-integrand as a function of the free coordinates, and Levenberg–Marquardt on it.</summary>
     private sealed class Peak
     {
         private readonly IndicatrixPrior _prior;
@@ -459,7 +465,7 @@ internal static class SectionRefinement
             int angles = _biaxial ? 3 : 2;
             for (int i = 0; i < step.Length; i++)
             {
-                double cap = i < angles ? 0.15 : 5.0;
+                double cap = i < angles ? AngleStepCap : ValueStepCap;
                 step[i] = Math.Clamp(step[i], -cap, cap);
             }
         }
