@@ -44,10 +44,15 @@ internal static class ReportDerived
         ? $"{i.Character} (chance {ReportNumbers.WholePercent(i.Weight)}): {i.Description}"
         : $"{i.Character}, sign {i.Sign} (chance {ReportNumbers.WholePercent(i.Weight)}): {i.Description}";
 
-    /// <summary>How strongly a test speaks for or against a candidate, in words (a likelihood ratio of 10 is "strongly", of 2 plain).</summary>
+    /// <summary>
+    /// How strongly a test speaks for or against a candidate, in words (a likelihood ratio of 10 is "strongly", of 2
+    /// plain); "neither for nor against" when the candidate and an unknown material explain the reading alike (a feature
+    /// seen that neither holds).
+    /// </summary>
     public static string Strength(EvidenceContribution reason)
     {
         double ratio = Math.Abs(reason.WeightBits);
+        if (ratio < NeutralBits) return "neither for nor against";
         string how = ratio >= StrongBits ? "strongly " : ratio >= ClearBits ? "" : "slightly ";
         return how + (reason.WeightBits >= 0 ? "for" : "against");
     }
@@ -63,6 +68,9 @@ internal static class ReportDerived
 
     /// <summary>Two to one: below it, "slightly".</summary>
     private const double ClearBits = 1;
+
+    /// <summary>Below a tenth of a bit (a likelihood ratio within 7 %), no weight either way.</summary>
+    private const double NeutralBits = 0.1;
 
     /// <summary>A reason in a line: "strongly for (refractometer): …".</summary>
     public static string ReasonLine(EvidenceContribution reason) =>

@@ -1,0 +1,31 @@
+using GemIndex.Core.Identification;
+using GemIndex.Cli.Reports;
+
+namespace GemIndex.Tests.Reports;
+
+public class ReportDerivedTests
+{
+    [Theory]
+    // Likelihood ratios: 10 to 1 is "strongly" (log2 10 = 3.32 bits), 2 to 1 plain (1 bit), below a tenth of a bit none.
+    [InlineData(5.0, true, "strongly for")]
+    [InlineData(-3.4, false, "strongly against, unusual")]
+    [InlineData(1.5, true, "for")]
+    [InlineData(0.4, true, "slightly for")]
+    [InlineData(-0.4, true, "slightly against")]
+    [InlineData(0.0, false, "neither for nor against, unusual")]
+    [InlineData(0.05, true, "neither for nor against")]
+    public void A_reason_s_verdict_names_its_weight_in_words(double bits, bool agrees, string expected) =>
+        Assert.Equal(expected, ReportDerived.Verdict(new EvidenceContribution("magnification", "a look", bits, agrees)));
+
+    [Fact]
+    public void A_feature_seen_that_neither_the_candidate_nor_an_unknown_material_holds_is_weighed_as_neither_for_nor_against()
+    {
+        // Bone with Schreger lines seen: bone holds them at the rate of an unlisted feature (0.01), as an unknown material
+        // does, so the look moves bone only against ivory, which holds them (Espinoza and Mann's ivory guide).
+        using var run = new CommandLine.CommandRun();
+        var (exit, text, error) = CommandLine.CommandRun.Plain("identify", "--spot", "1.54", "--sg", "1.80", "--colour", "white",
+            "--feature", "schreger_lines", "--catalogue-dir", run.Folder);
+        Assert.True(exit == 0, error);
+        Assert.Contains("neither for nor against, unusual: magnification: Schreger lines seen (held by 1 % of such stones)", text);
+    }
+}
