@@ -63,8 +63,6 @@ public static class BenchField
     public const string Absorption = "absorption_nm";
     /// <summary>The body colour in plain words.</summary>
     public const string Colour = "colour";
-    /// <summary>How much light passes (<see cref="Observations.Diaphaneity"/>): transparent … opaque.</summary>
-    public const string Transparency = "transparency";
     /// <summary>Magnification features seen: vocabulary words separated like absorption lines (<see cref="BenchSyntax"/>).</summary>
     public const string FeaturesPresent = "magnification.present";
     /// <summary>Magnification features looked for and not seen, written the same way.</summary>
@@ -75,7 +73,7 @@ public static class BenchField
     [
         Id, Method, Spot, OverLimit, LiquidLimit, LightNm, Precision, CalibrationOffset, Sg, AirCt, WaterCt, WaterC, HeavyLiquids,
         Polariscope, Pleochroism, Dispersion, IndexAtB, IndexAtG, ThermalProbe, Electrical, UvLong, UvShort, Absorption, Colour,
-        Transparency, FeaturesPresent, FeaturesAbsent,
+        FeaturesPresent, FeaturesAbsent,
     ];
 
     /// <summary>The field of one rotation step (0 = the first).</summary>

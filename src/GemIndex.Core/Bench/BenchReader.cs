@@ -48,7 +48,6 @@ public static class BenchReader
                 UvShort = Word<FluorescenceStrength>(BenchField.UvShort),
                 AbsorptionLinesNanometres = Absorption(),
                 Colour = Colour(),
-                Transparency = Word<Diaphaneity>(BenchField.Transparency),
                 Magnification = Magnification(),
             };
             return new BenchReading { Sheet = sheet, Errors = [.. _errors.OrderBy(e => Order(e.Field)).ThenBy(e => e.Field, StringComparer.Ordinal)] };

@@ -27,8 +27,6 @@ public enum BenchTest
     Absorption,
     /// <summary>Body colour.</summary>
     Colour,
-    /// <summary>How much light passes through the stone.</summary>
-    Transparency,
     /// <summary>Loupe or microscope.</summary>
     Magnification,
 }

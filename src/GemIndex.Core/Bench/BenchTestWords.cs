@@ -20,7 +20,6 @@ public static class BenchTestWords
         (BenchTest.UvShort, BenchField.UvShort, "short-wave UV lamp (254 nm)"),
         (BenchTest.Absorption, BenchField.Absorption, "hand spectroscope (absorption lines)"),
         (BenchTest.Colour, BenchField.Colour, "colour"),
-        (BenchTest.Transparency, BenchField.Transparency, "transparency"),
         (BenchTest.Magnification, BenchField.Magnification, "loupe or microscope (magnification)"),
     ];
 

@@ -49,9 +49,6 @@ public sealed record BenchSheet
     /// <summary>The body colour in a plain word or two ("blue", "greenish yellow").</summary>
     public string? Colour { get; init; }
 
-    /// <summary>How much light passes through the stone, or null when not written.</summary>
-    public Diaphaneity? Transparency { get; init; }
-
     /// <summary>What was looked for under magnification; null when nothing was.</summary>
     public MagnificationObservation? Magnification { get; init; }
 
@@ -61,5 +58,5 @@ public sealed record BenchSheet
         || UvShort is not null || AbsorptionLinesNanometres is not null;
 
     /// <summary>True when the sheet holds nothing at all to rank by: no test's reading, no colour, no magnification.</summary>
-    public bool IsEmpty => !HasTestReadings && Colour is null && Transparency is null && Magnification is null;
+    public bool IsEmpty => !HasTestReadings && Colour is null && Magnification is null;
 }

@@ -54,7 +54,6 @@ public static class EvidenceLikelihood
         if (s.UvShort is { } us) Fluorescence(BenchField.UvShort, "short-wave UV", material.UvShort, profile.UvShort, us, acc);
         if (s.AbsorptionLinesNanometres is { } lines) Absorption(profile, lines, acc);
         if (sheet.ColourHues.Count > 0) Colour(profile, s.Colour!, sheet.ColourHueList, acc);
-        if (s.Transparency is { } seen) Transparency(material, seen, acc);
         if (s.Magnification is { IsEmpty: false } look)
         {
             // docs/ranking.md, "Magnification": "not in the catalogue" is the natural/imitation average.
@@ -306,45 +305,6 @@ public static class EvidenceLikelihood
     /// spurious line's chance against a listed line's, so two unexplained lines make the fit poor.
     /// </summary>
     private const double UnexplainedLineFit = 0.07;
-
-    // P(transparent, semi-transparent, translucent, semi-translucent, opaque) by how a material is met (judgements,
-    // docs/ranking.md §2, transparency): a single crystal is mostly clear, an aggregate mostly translucent, an amorphous
-    // material (glass, opal, amber, plastic) between; an opaque material lets light through only at thin edges.
-    private static readonly double[] CrystalDiaphaneity = [0.55, 0.25, 0.12, 0.05, 0.03];
-    private static readonly double[] AggregateDiaphaneity = [0.02, 0.08, 0.40, 0.30, 0.20];
-    private static readonly double[] AmorphousDiaphaneity = [0.45, 0.20, 0.20, 0.08, 0.07];
-    private static readonly double[] OpaqueDiaphaneity = [0.005, 0.005, 0.04, 0.15, 0.80];
-
-    /// <summary>P(each grade of transparency) for a material: an opaque one's row, else the mean of the rows of the forms it is met in.</summary>
-    internal static double[] DiaphaneityRow(Material m)
-    {
-        if (m.IsOpaque) return OpaqueDiaphaneity;
-        var rows = new List<double[]>(3);
-        if ((m.Forms & MaterialForm.Crystal) != 0) rows.Add(CrystalDiaphaneity);
-        if ((m.Forms & MaterialForm.Aggregate) != 0) rows.Add(AggregateDiaphaneity);
-        if ((m.Forms & MaterialForm.Amorphous) != 0) rows.Add(AmorphousDiaphaneity);
-        if (rows.Count == 0) rows.Add(CrystalDiaphaneity);
-        return [.. Enumerable.Range(0, CrystalDiaphaneity.Length).Select(k => rows.Average(r => r[k]))];
-    }
-
-    private static void Transparency(Material m, Diaphaneity seen, EvidenceAccumulator acc)
-    {
-        double[] row = DiaphaneityRow(m);
-        double f = row[(int)seen];
-        acc.Add(BenchField.Transparency, f, 1.0 / row.Length, f / row.Max(), robust: true);
-        if (acc.Explaining)
-            acc.Say($"transparency {Grade(seen)}; {(m.IsOpaque ? "an opaque material" : string.Join(" or ", FormWords(m.Forms)))}: {Grade((Diaphaneity)Array.IndexOf(row, row.Max()))} most often");
-    }
-
-    private static string Grade(Diaphaneity d) => BenchWords.Word(d).Replace('_', '-');
-
-    private static IEnumerable<string> FormWords(MaterialForm forms)
-    {
-        if ((forms & MaterialForm.Crystal) != 0) yield return "single crystals";
-        if ((forms & MaterialForm.Aggregate) != 0) yield return "an aggregate";
-        if ((forms & MaterialForm.Amorphous) != 0) yield return "amorphous";
-        if (forms == MaterialForm.None) yield return "single crystals";
-    }
 
     private static void Absorption(MaterialProfile profile, IReadOnlyList<double> seen, EvidenceAccumulator acc)
     {

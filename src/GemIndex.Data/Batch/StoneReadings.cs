@@ -28,7 +28,6 @@ public sealed record StoneReadings
     /// <summary>Null: not looked; empty: looked and saw none.</summary>
     public IReadOnlyList<double>? AbsorptionNm { get; init; }
     public string? Colour { get; init; }
-    public string? Transparency { get; init; }
     /// <summary>Magnification features seen (the vocabulary's words); empty: none given.</summary>
     public IReadOnlyList<string> FeaturesPresent { get; init; } = [];
     /// <summary>Magnification features looked for and not seen.</summary>

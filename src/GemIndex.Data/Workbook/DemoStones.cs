@@ -54,7 +54,7 @@ public static class DemoStones
             Transparency = Text("transparency"),
             Notes = Text("notes"),
             Readings = StoneReadingsJson.Parse(root.GetProperty("readings").GetRawText()),
-        }.WithTransparencyInReadings();
+        };
     }
 
     /// <summary>Adds the demo stones to a workbook (one transaction each) and returns how many were added.</summary>

@@ -35,16 +35,6 @@ public sealed record StoneSheet
     /// <summary>The readings; <see cref="StoneReadings.Id"/> mirrors <see cref="Reference"/>.</summary>
     public StoneReadings Readings { get; init; } = new();
 
-    /// <summary>
-    /// The sheet with its transparency among the readings where the readings lack one and the sheet's word is one of the
-    /// trade's grades: stones saved before transparency was weighed (and the demo stones) hold it on the sheet only,
-    /// and every front end must weigh the same readings. A word that is no grade stays a description.
-    /// </summary>
-    public StoneSheet WithTransparencyInReadings() =>
-        Readings.Transparency is null && Core.Bench.BenchWords.Parse<Core.Observations.Diaphaneity>(Transparency) is not null
-            ? this with { Readings = Readings with { Transparency = Transparency.Trim() } }
-            : this;
-
     /// <summary>When the stone was first saved (UTC).</summary>
     public DateTimeOffset Created { get; init; }
 

@@ -295,7 +295,7 @@ public sealed class StoneWorkbook : IDisposable
             Id = r.GetInt64(0), Reference = reference, WeightCarats = Number(r, 2, id, reference),
             Dimensions = r.GetString(3), Shape = r.GetString(4), CuttingStyle = r.GetString(5), Transparency = r.GetString(6),
             Notes = r.GetString(7), Readings = readings, Created = Time(r.GetString(9)), Modified = Time(r.GetString(10)),
-        }.WithTransparencyInReadings();
+        };
     });
 
     /// <summary>Adds a new stone (its <see cref="StoneSheet.Id"/> is ignored) and returns it as stored.</summary>

@@ -36,7 +36,6 @@ internal static class IdentifyCommand
         ("--uv-short", BenchField.UvShort, BenchWords.Choices<Core.Observations.FluorescenceStrength>()),
         ("--lines", BenchField.Absorption, "Absorption lines seen, nm, separated by spaces or commas (\"none\" if none)"),
         ("--colour", BenchField.Colour, "The colour in plain words, e.g. yellow, \"bluish green\" (the last hue named is the colour; an -ish word only tones it)"),
-        ("--transparency", BenchField.Transparency, "How much light passes: " + BenchWords.Choices<Core.Observations.Diaphaneity>()),
     ];
 
     public static Command Create(Option<DirectoryInfo?> catalogueDirectory)

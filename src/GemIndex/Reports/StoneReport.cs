@@ -95,7 +95,7 @@ internal sealed record StoneReport
         new("shape", "Shape", Shown(sheet.Shape)),
         new("cutting_style", "Cutting style", Shown(sheet.CuttingStyle)),
         new("colour", "Colour", Shown(sheet.Readings.Colour)),
-        new("transparency", "Transparency", Shown(sheet.Readings.Transparency ?? sheet.Transparency)),
+        new("transparency", "Transparency", Shown(sheet.Transparency)),
         new("notes", "Notes", Shown(sheet.Notes)),
     ];
 

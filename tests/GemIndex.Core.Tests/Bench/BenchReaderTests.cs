@@ -29,18 +29,6 @@ public class BenchReaderTests
     }
 
     [Fact]
-    public void Transparency_takes_the_trade_s_five_grades_and_refuses_another_word_naming_them()
-    {
-        Assert.Equal(Diaphaneity.SemiTransparent, BenchReader.Read(R((BenchField.Transparency, "semi-transparent"))).Sheet.Transparency);
-        Assert.Equal(Diaphaneity.Opaque, BenchReader.Read(R((BenchField.Transparency, "Opaque"))).Sheet.Transparency);
-        var cloudy = BenchReader.Read(R((BenchField.Transparency, "cloudy")));
-        BenchFieldError error = Assert.Single(cloudy.Errors);
-        Assert.Equal(BenchField.Transparency, error.Field);
-        Assert.Equal("transparent | semi_transparent | translucent | semi_translucent | opaque", error.Allowed);
-        Assert.Null(cloudy.Sheet.Transparency);
-    }
-
-    [Fact]
     public void Every_bad_field_is_reported_at_once_with_its_name_value_range_and_sentence()
     {
         var reading = BenchReader.Read(R((BenchField.Sg, "50"), (BenchField.Polariscope, "sparkly"), (BenchField.Absorption, "900"), (BenchField.UvLong, "")));

@@ -322,33 +322,6 @@ public class IdentifierTests
     }
 
     [Fact]
-    public void Transparency_weighs_a_single_crystal_against_an_aggregate_and_an_opaque_material()
-    {
-        // Invented entries alike in index and SG: met as single crystals, as an aggregate, and an opaque material. A
-        // crystal is mostly transparent, an aggregate translucent, an opaque material lets light through at thin edges
-        // only (common practice; the rows are judgements, docs/ranking.md §2).
-        var crystal = Make("clear kind", "clear", OpticalIndices.SingleIndex(new(1.60, 1.61)), 3.00, 3.02) with { Forms = MaterialForm.Crystal };
-        Material[] catalogue = [crystal, crystal with { Name = "massive kind", Species = "massive", Variety = "massive kind", Forms = MaterialForm.Aggregate },
-            crystal with { Name = "dark kind", Species = "dark", Variety = "dark kind", IsOpaque = true }];
-        var engine = new Identifier(catalogue);
-        double Share(string species, Diaphaneity? seen) => engine.Identify(new BenchSheet
-        {
-            SpecificGravity = new SpecificGravity(3.01, 0.01),
-            Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.605),
-            Transparency = seen,
-        }).Species.Single(x => x.Species == species).Confidence;
-        // Odds of one kind against another, with the transparency written over without it: the rows' ratio, each mixed
-        // with the broad 0.2 at the 2 % misreading share (docs/ranking.md §3), raised to 1 / Identifier.Temperature.
-        double Shift(string a, string b, Diaphaneity seen) => Share(a, seen) / Share(b, seen) / (Share(a, null) / Share(b, null));
-        double Expected(double pa, double pb) => Math.Pow((0.98 * pa + 0.02 * 0.2) / (0.98 * pb + 0.02 * 0.2), 1 / Identifier.Temperature);
-        Assert.Equal(Expected(0.55, 0.02), Shift("clear", "massive", Diaphaneity.Transparent), 6);
-        Assert.Equal(Expected(0.40, 0.12), Shift("massive", "clear", Diaphaneity.Translucent), 6);
-        Assert.Equal(Expected(0.80, 0.03), Shift("dark", "clear", Diaphaneity.Opaque), 6);
-        Assert.All(new[] { crystal, catalogue[1], catalogue[2], crystal with { Forms = MaterialForm.Crystal | MaterialForm.Amorphous } },
-            m => Assert.Equal(1.0, EvidenceLikelihood.DiaphaneityRow(m).Sum(), 12));
-    }
-
-    [Fact]
     public void Weighing_in_water_is_never_suggested_while_a_porous_material_leads()
     {
         // Spot 1.45: opal (porous) leads; SG would separate it but must not be suggested.

@@ -28,7 +28,6 @@ public class StoneReadingsJsonTests
         from precision in Gen.Elements<double?>(null, 0.002)
         from present in Gen.Elements<List<string>>([], ["curved_striae", "round_bubbles"], ["flux_residue"])
         from absent in Gen.Elements<List<string>>([], ["needles_silk"], ["chevron_growth", "healed_fractures"])
-        from transparency in Gen.Elements<string?>(null, "transparent", "semi_translucent", "opaque")
         select new StoneReadings
         {
             Id = id,
@@ -39,7 +38,6 @@ public class StoneReadingsJsonTests
             Polariscope = polariscope,
             AbsorptionNm = lines,
             Colour = "greenish yellow",
-            Transparency = transparency,
             FeaturesPresent = present,
             FeaturesAbsent = absent,
         };

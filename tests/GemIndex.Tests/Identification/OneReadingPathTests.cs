@@ -35,11 +35,11 @@ public class OneReadingPathTests
         S("pyrope", ["0:1.746", "90:1.746"], ("sg", "3.78"), ("polariscope", "singly_refractive"), ("colour", "red")),
         S("glass", ["0:1.520", "90:1.520"], ("sg", "2.50"), ("polariscope", "anomalous")),
         S("opal", [], ("spot", "1.45"), ("sg", "2.10"), ("polariscope", "singly_refractive")),
-        S("jadeite", [], ("spot", "1.66"), ("sg", "3.33"), ("polariscope", "aggregate"), ("colour", "green"), ("transparency", "semi_translucent")),
+        S("jadeite", [], ("spot", "1.66"), ("sg", "3.33"), ("polariscope", "aggregate"), ("colour", "green")),
         S("nephrite", [], ("spot", "1.62"), ("sg", "2.95"), ("polariscope", "aggregate")),
         S("cubic zirconia", [], ("over", "yes"), ("thermal", "negative"), ("sg", "5.80"), ("dispersion", "strong")),
         S("moissanite", [], ("over", "yes"), ("thermal", "positive"), ("electrical", "conductive"), ("sg", "3.22")),
-        S("chrysoberyl", ["0:1.746/1.755", "90:1.748/1.755"], ("sg", "3.73"), ("colour", "yellow"), ("transparency", "transparent")),
+        S("chrysoberyl", ["0:1.746/1.755", "90:1.748/1.755"], ("sg", "3.73"), ("colour", "yellow")),
         S("zircon", [], ("over", "yes"), ("sg", "4.69"), ("lines", "653")),
         S("orthoclase", ["0:1.518/1.526", "90:1.520/1.526"], ("sg", "2.57"), ("colour", "colourless")),
         S("fluorite", ["0:1.434"], ("sg", "3.18"), ("uv_long", "strong"), ("polariscope", "singly_refractive")),
@@ -72,7 +72,7 @@ public class OneReadingPathTests
                 "sg" => "--sg", "air" => "--in-air-ct", "water" => "--in-water-ct", "water_c" => "--water-c", "spot" => "--spot",
                 "polariscope" => "--polariscope", "pleochroism" => "--pleochroism", "dispersion" => "--dispersion", "thermal" => "--thermal-probe",
                 "electrical" => "--electrical", "uv_long" => "--uv-long", "colour" => "--colour", "precision" => "--precision", "offset" => "--calibration-offset",
-                "lines" => "--lines", "transparency" => "--transparency",
+                "lines" => "--lines",
                 _ => throw new ArgumentException(field),
             };
             // Lines as a shell user writes them: commas.
@@ -103,7 +103,7 @@ public class OneReadingPathTests
         if (v.TryGetValue("liquids", out string? liquids))
             parts.Add("\"heavy_liquids\":[" + string.Join(",", liquids.Split("; ").Select(e => e.Split(' ')).Select(e => $"{{\"density\":{e[0]},\"result\":\"{e[1]}\"}}")) + "]");
         foreach (var (field, key) in new[] { ("polariscope", "polariscope"), ("pleochroism", "pleochroism"), ("dispersion", "dispersion"), ("thermal", "thermal_probe"),
-            ("electrical", "electrical"), ("uv_long", "uv_long"), ("colour", "colour"), ("transparency", "transparency") })
+            ("electrical", "electrical"), ("uv_long", "uv_long"), ("colour", "colour") })
             if (v.TryGetValue(field, out string? word)) parts.Add($"\"{key}\":\"{word}\"");
         if (v.TryGetValue("lines", out string? lines))
             parts.Add("\"absorption_nm\":[" + (lines == "none" ? "" : string.Join(",", lines.Split(' '))) + "]");
@@ -136,7 +136,6 @@ public class OneReadingPathTests
                     {
                         "sg" => BenchFields.Sg, "air" => BenchFields.AirCt, "water" => BenchFields.WaterCt, "water_c" => BenchFields.WaterC,
                         "spot" => BenchFields.Spot, "colour" => BenchFields.Colour, "lines" => BenchFields.Absorption, "liquids" => BenchFields.HeavyLiquids,
-                        "transparency" => BenchFields.Transparency,
                         "precision" => BenchFields.Precision, "offset" => BenchFields.CalibrationOffset,
                         _ => throw new ArgumentException(field),
                     }, value);

@@ -7,7 +7,7 @@ internal sealed class StonePage : BenchPage
     public const string ExaminerNote = "  on every report from this workbook";
 
     /// <summary>Under the stone's fields: which of them the answer weighs (the others describe the stone in its report).</summary>
-    public const string WeighedNote = "  colour and transparency are weighed";
+    public const string WeighedNote = "  only colour is used in the answer";
 
     public StonePage() : base("Stone", FieldKeys)
     {

@@ -38,24 +38,11 @@ public class BenchAssessorTests
         form.Choose(BenchFields.Polariscope, "doubly_refractive");
         form.SetText(BenchFields.Absorption, "none");
         form.SetText(BenchFields.Colour, "yellow");
-        form.SetText(BenchFields.Transparency, "transparent");
         BenchAssessment a = Assessor.Assess(form.Snapshot());
         IReadOnlyList<string> derived = ResultText.Derived(a);
         Assert.Contains("Polariscope: doubly refractive", derived);
         Assert.Contains("Absorption: no lines", derived);
         Assert.Contains("Colour: yellow", derived);
-        Assert.Contains("Transparency: transparent", derived);
-        Assert.Contains(a.Result!.Candidates[0].Reasons, r => r.Test == GemIndex.Core.Bench.BenchField.Transparency);
-    }
-
-    [Fact]
-    public void A_transparency_the_reader_does_not_know_is_marked_at_its_field_and_the_rest_still_ranks()
-    {
-        var form = QuartzForm();
-        form.SetText(BenchFields.Transparency, "cloudy");
-        BenchAssessment a = Assessor.Assess(form.Snapshot());
-        Assert.True(a.Errors.ContainsKey(BenchFields.Transparency), string.Join("; ", a.Errors.Keys));
-        Assert.Equal("quartz", a.Result!.Candidates[0].Material.Species);
     }
 
     [Fact]
