@@ -58,7 +58,7 @@ internal static class CommandTree
 
     private static RootCommand Build(IReadOnlyList<Func<Command>> subcommands)
     {
-        var root = new RootCommand("gemindex: identify gem materials from bench readings (refractometer, SG, polariscope, spectroscope, UV, probes)");
+        var root = new RootCommand("gemindex: identify gem materials from bench readings (refractometer, SG, polariscope, dichroscope, spectroscope, UV, probes, loupe)");
         var workbook = new Option<string?>("--workbook") { Description = "The workbook file of your stones (default: your data folder, gemindex/workbook.db)" };
         var demo = new Option<bool>("--demo") { Description = "Add the invented demo stones to the workbook, then exit (open it with --workbook PATH)" };
         var createNew = new Option<bool>("--new") { Description = "Create the workbook if there is none at the path (otherwise you are asked; without a terminal, nothing is created)" };
