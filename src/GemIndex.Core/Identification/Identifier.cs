@@ -397,7 +397,8 @@ public sealed class Identifier
                 // The leader's reasons in words only when a reading speaks strongly against it (its fit's evaluation counts them).
                 shownInOrder.Length > 0 && Evaluated(shownInOrder[0], explain: false).StronglyAgainst > 0
                     ? Evaluated(shownInOrder[0], explain: true).Contributions : [],
-                varieties is null ? null : ([.. varieties.Select(v => v.Material)], NextTestAdvisor.Advise(sheet, varieties))),
+                // The varieties' test only where their warning can be given (never when nothing fits).
+                varieties is null || noGoodMatch ? null : ([.. varieties.Select(v => v.Material)], NextTestAdvisor.Advise(sheet, varieties))),
             InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
                 ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
             Series = analysed.Series,

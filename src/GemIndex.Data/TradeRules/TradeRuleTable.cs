@@ -73,8 +73,7 @@ public sealed class TradeRuleTable
     public IReadOnlyList<string> Unmatched(IEnumerable<Material> catalogue)
     {
         var materials = catalogue.ToList();
-        var species = materials.Select(m => m.Species).ToHashSet(StringComparer.Ordinal);
-        return [.. EntryNames.Unmatched(ByName.Keys, materials), .. BySpecies.Keys.Where(s => !species.Contains(s)).Order(StringComparer.Ordinal).Select(s => $"species {s}")];
+        return [.. EntryNames.Unmatched(ByName.Keys, materials), .. EntryNames.Unmatched(BySpecies.Keys, materials, m => m.Species).Select(s => $"species {s}")];
     }
 
     /// <summary>
