@@ -33,7 +33,16 @@ public readonly record struct SpecificGravity
     public double StandardUncertainty { get; }
 
     /// <inheritdoc />
-    public override string ToString() => StandardUncertainty == 0
-        ? Value.ToString("0.00", CultureInfo.InvariantCulture)
-        : $"{Value.ToString("0.00", CultureInfo.InvariantCulture)} ± {StandardUncertainty.ToString("0.00", CultureInfo.InvariantCulture)}";
+    public override string ToString() => Text(Value, StandardUncertainty);
+
+    /// <summary>
+    /// An SG with its uncertainty as the trade writes it: two decimals, or three when the uncertainty is under 0.005
+    /// (a careful hydrostatic weighing), so that it never reads "± 0.00".
+    /// </summary>
+    public static string Text(double value, double standardUncertainty)
+    {
+        if (standardUncertainty == 0) return value.ToString("0.00", CultureInfo.InvariantCulture);
+        string format = standardUncertainty < 0.005 ? "0.000" : "0.00";
+        return $"{value.ToString(format, CultureInfo.InvariantCulture)} ± {standardUncertainty.ToString(format, CultureInfo.InvariantCulture)}";
+    }
 }

@@ -71,7 +71,7 @@ public static class EvidenceLikelihood
         double stray = RangeStrays.SpecificGravityShare * value;
         acc.Add(BenchField.Sg, RangeStrays.Density(value, range, s, stray), BroadDensities.SpecificGravity, acc.Fitting ? RangeStrays.Tail(value, range, s, stray) : 1, robust: true, group);
         if (acc.Explaining)
-            acc.Say($"SG {F2(value)} ± {F2(sigma)} {Where(value, range, s, "0.00")}");
+            acc.Say($"SG {Gravity.SpecificGravity.Text(value, sigma)} {Where(value, range, s, "0.00")}");
     }
 
     /// <summary>σ of a heavy liquid's density, doubled for a suspended stone (a judgement, docs/ranking.md §5, other named values).</summary>

@@ -82,7 +82,7 @@ public static class RotationSeriesAnalysis
                 {
                     Character = null, Lowest = Index(lo, Extreme(sigma)), Highest = Index(hi, Extreme(sigma)),
                     Birefringence = new Birefringence(hi - lo, sigma * Math.Sqrt(2)), SamplingShortfall = 1,
-                    Description = $"one moving edge {F(lo)}–{F(hi)}: birefringence at least {F(hi - lo)}",
+                    Description = $"one moving edge {F(lo)}–{F(hi)}: birefringence at least {Difference(hi, lo)}",
                 }],
                 Misreadings = misreadings,
                 LargestGapDegrees = gap,
@@ -117,7 +117,7 @@ public static class RotationSeriesAnalysis
             {
                 Character = null, Lowest = Index(lo, Extreme(sigma)), Highest = Index(hi, Extreme(sigma)),
                 Birefringence = new Birefringence(hi - lo, sigma * Math.Sqrt(2)), SamplingShortfall = 1,
-                Description = $"two edges {F(lo)} and {F(hi)}: doubly refractive, birefringence at least {F(hi - lo)}",
+                Description = $"two edges {F(lo)} and {F(hi)}: doubly refractive, birefringence at least {Difference(hi, lo)}",
             }],
             Misreadings = misreadings,
             LargestGapDegrees = gap,
@@ -140,7 +140,7 @@ public static class RotationSeriesAnalysis
                 Character = OpticCharacter.Uniaxial, Weight = weight, Sign = OpticSign.Positive, Constant = omega, Lowest = omega, Highest = epsilon,
                 Birefringence = new Birefringence(Math.Max(0, epsilon.Value - lowMean), double.Hypot(epsilon.StandardUncertainty, sigma / 2)),
                 SamplingShortfall = highConstant ? 0 : highEdge.Shortfall,
-                Description = $"uniaxial positive: ω {F(lowMean)} constant, ε {F(epsilon.Value)}, birefringence {F(epsilon.Value - lowMean)}",
+                Description = $"uniaxial positive: ω {F(lowMean)} constant, ε {F(epsilon.Value)}, birefringence {Difference(epsilon.Value, lowMean)}",
             });
         }
         if (highConstant)
@@ -152,7 +152,7 @@ public static class RotationSeriesAnalysis
                 Character = OpticCharacter.Uniaxial, Weight = weight, Sign = OpticSign.Negative, Constant = omega, Highest = omega, Lowest = epsilon,
                 Birefringence = new Birefringence(Math.Max(0, highMean - epsilon.Value), double.Hypot(epsilon.StandardUncertainty, sigma / 2)),
                 SamplingShortfall = lowConstant ? 0 : lowEdge.Shortfall,
-                Description = $"uniaxial negative: ω {F(highMean)} constant, ε {F(epsilon.Value)}, birefringence {F(highMean - epsilon.Value)}",
+                Description = $"uniaxial negative: ω {F(highMean)} constant, ε {F(epsilon.Value)}, birefringence {Difference(highMean, epsilon.Value)}",
             });
         }
         return new RotationSeriesResult
@@ -186,7 +186,7 @@ public static class RotationSeriesAnalysis
             {
                 Character = OpticCharacter.Biaxial, Weight = 0.5, Sign = positive ? OpticSign.Positive : OpticSign.Negative,
                 Lowest = alpha, Highest = gamma, Beta = beta, Birefringence = birefringence, SamplingShortfall = shortfall,
-                Description = $"biaxial {(positive ? "positive" : "negative")} if β is the {which}: α {F(alpha.Value)}, β {F(beta.Value)}, γ {F(gamma.Value)}, birefringence {F(gamma.Value - alpha.Value)}",
+                Description = $"biaxial {(positive ? "positive" : "negative")} if β is the {which}: α {F(alpha.Value)}, β {F(beta.Value)}, γ {F(gamma.Value)}, birefringence {Difference(gamma.Value, alpha.Value)}",
             };
         }
         return new RotationSeriesResult
@@ -309,6 +309,13 @@ public static class RotationSeriesAnalysis
     private static RefractiveIndex Index(double value, double sigma) => new(value, sigma);
 
     private static string F(double v) => v.ToString("0.000", CultureInfo.InvariantCulture);
+
+    /// <summary>
+    /// A birefringence in words is the difference of the two indices as shown beside it (1.770 and 1.762 read 0.008, not
+    /// the 0.007 of the unrounded means 1.76975 and 1.76225), so the line adds up for the reader.
+    /// </summary>
+    private static string Difference(double high, double low) =>
+        F(Math.Max(0, double.Parse(F(high), CultureInfo.InvariantCulture) - double.Parse(F(low), CultureInfo.InvariantCulture)));
 
     private static string D(double degrees) => degrees.ToString("0.#", CultureInfo.InvariantCulture) + "°";
 }

@@ -56,6 +56,18 @@ public class RotationSeriesAnalysisTests
     }
 
     [Fact]
+    public void The_birefringence_in_words_is_the_difference_of_the_indices_shown_beside_it()
+    {
+        // A sapphire read at four steps, both edges held (published readings of corundum: ω 1.770, ε 1.762, common
+        // practice): the means are 1.76225 and 1.76975, 0.0075 apart, but the line shows 1.762 and 1.770, so it says 0.008.
+        ShadowEdgeStep[] steps = [new(0, 1.762, 1.770), new(45, 1.762, 1.769), new(90, 1.762, 1.770), new(135, 1.763, 1.770)];
+        var result = RotationSeriesAnalysis.Analyse(steps, 0.001);
+        Assert.Equal(2, result.Interpretations.Count);
+        Assert.Contains(result.Interpretations, h => h.Description == "uniaxial positive: ω 1.762 constant, ε 1.770, birefringence 0.008");
+        Assert.Contains(result.Interpretations, h => h.Description == "uniaxial negative: ω 1.770 constant, ε 1.762, birefringence 0.008");
+    }
+
+    [Fact]
     public void A_biaxial_series_carries_both_beta_hypotheses_and_one_is_right()
     {
         // Peridot-like α 1.654, β 1.672, γ 1.690 (from memory); β is either the highest low or the lowest high edge.
