@@ -380,12 +380,17 @@ public static class NextTestAdvisor
     // Which listed lines are seen, each with its own detection probability from its strength (the likelihood's model).
     private static IEnumerable<(long, double)> Absorption(Material m) => AbsorptionLines.Outcomes(m.AbsorptionLines);
 
+    /// <summary>What an opaque entry shows in a test that needs light through the stone.</summary>
+    internal const string OpaqueExpectation = "opaque: no light through it, nothing to read";
+
     private static string Expected(string test, Material m) => test switch
     {
         BenchField.Sg => $"SG {m.SpecificGravity.ToString("0.00")}",
         BenchField.Refractometer => m.Indices.Lowest.Minimum > RefractometerObservation.DefaultLiquidLimit
             ? "over the limit"
             : string.Join(", ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString("0.000")}")),
+        // An opaque entry's outcome table is flat (the test cannot be taken), so it expects no reaction either.
+        BenchField.Polariscope or BenchField.Pleochroism when m.IsOpaque => OpaqueExpectation,
         BenchField.Polariscope => string.Join(" or ", EvidenceLikelihood.UsualReactions(m).Select(EvidenceLikelihood.Word)),
         BenchField.Pleochroism => m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial && m.Pleochroism != PleochroismStrength.None ? $"{EvidenceLikelihood.Word(m.Pleochroism)} pleochroism" : "no pleochroism",
         BenchField.Dispersion => m.Dispersion is { } d ? $"nG − nB {d.ToString("0.000", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(EvidenceLikelihood.DispersionBand(d))})" : "not known",

@@ -465,6 +465,23 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void An_opaque_candidate_is_not_said_to_show_a_polariscope_reaction()
+    {
+        // A spot reading shared by a singly refractive, a doubly refractive and an opaque entry (invented entries): the
+        // polariscope tells the first two apart, and the opaque one, whose outcome table is flat, is said to show nothing.
+        var index = OpticalIndices.SingleIndex(new(1.52, 1.53));
+        Material glassy = Make("glassy", "a", index, 2.50, 2.60);
+        Material crystal = Make("crystal", "b", OpticalIndices.Uniaxial(new(1.52, 1.53), new(1.529, 1.535)), 2.50, 2.60, OpticSign.Positive, new(0.006, 0.009));
+        Material opaque = Make("opaque", "c", index, 2.50, 2.60) with { IsOpaque = true };
+        var sheet = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.525), SpecificGravity = new(2.55, 0.01) };
+        var advice = NextTestAdvisor.Advise(sheet, [(glassy, 0.4), (crystal, 0.4), (opaque, 0.2)])!;
+        Assert.Equal(GemIndex.Core.Bench.BenchField.Polariscope, advice.Test);
+        Assert.Contains("glassy: singly refractive", advice.Expectations);
+        Assert.Contains("crystal: doubly refractive", advice.Expectations);
+        Assert.Contains($"opaque: {NextTestAdvisor.OpaqueExpectation}", advice.Expectations);
+    }
+
+    [Fact]
     public void The_next_test_names_a_rival_species_not_only_the_varieties_of_the_leading_one()
     {
         // Six varieties of one species lead, each ahead of the one rival species' entry; the probe tells the species
