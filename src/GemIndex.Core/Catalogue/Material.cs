@@ -102,6 +102,12 @@ public sealed record Material
     public TradeRule? TradeRule { get; init; }
 
     /// <summary>
+    /// The mineral group the species belongs to ("tourmaline", "garnet", "feldspar"), or null: species of one group
+    /// that the bench tests leave open are named together in the answer, never weighed as evidence.
+    /// </summary>
+    public string? MineralGroup { get; init; }
+
+    /// <summary>
     /// The source of each value, by field name as the family files spell it ("omega", "sg", "uv_long"); a field
     /// missing here has no source. Keys are <see cref="CatalogueFields"/> names.
     /// </summary>

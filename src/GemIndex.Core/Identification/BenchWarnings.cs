@@ -51,9 +51,10 @@ public static class BenchWarnings
     /// <param name="separation">The test that would best tell the leading species' entries apart, if any.</param>
     /// <param name="leaderReasons">The leading candidate's reasons, each test weighed (empty: none worked out).</param>
     /// <param name="varieties">The leading species' unsettled varieties (<see cref="InseparableVarieties"/>) and the test that best tells them apart.</param>
+    /// <param name="group">The species of the leading species' mineral group that the answer leaves open (<see cref="InseparableGroup"/>) and the test that best tells them apart.</param>
     public static IReadOnlyList<string> For(AnalysedSheet sheet, IReadOnlyList<RankedCandidate> candidates, double notInCatalogue, bool noGoodMatch,
         IReadOnlyList<SpeciesResult>? species = null, NextTestAdvice? separation = null, IReadOnlyList<EvidenceContribution>? leaderReasons = null,
-        (IReadOnlyList<Material> Entries, NextTestAdvice? Test)? varieties = null)
+        (IReadOnlyList<Material> Entries, NextTestAdvice? Test)? varieties = null, (GroupSpecies Open, NextTestAdvice? Test)? group = null)
     {
         var warnings = new List<string>();
         if (sheet.Sheet.IsEmpty)
@@ -99,6 +100,10 @@ public static class BenchWarnings
                 : i == 0 ? "no bench test left here separates them" : "";
             warnings.Add($"{Capital(leading[i].Species)}: {Listed(origins)} cannot be separated by these tests{(test.Length > 0 ? "; " + test : "")}; for a valuable stone refer it to a qualified laboratory.");
         }
+        // Species of one mineral group the tests leave open (elbaite, uvite and dravite of the tourmalines), and what would tell them.
+        if (!noGoodMatch && group is { } g)
+            warnings.Add($"{Capital(g.Open.Group)} group: {Listed(g.Open.Species)} are not told apart by these tests; "
+                + (g.Test is { } tells ? $"the {tells.Description} would help." : "no bench test left here separates them."));
         // Varieties of one origin the tests leave open (cat's-eye or plain chrysoberyl, CVD or HPHT growth), and what would tell them.
         // The test the origin warning names already tells these varieties apart too: one line says it.
         if (!noGoodMatch && varieties is { Entries.Count: > 1 } open && leading.Count > 0
@@ -144,6 +149,29 @@ public static class BenchWarnings
         for (int i = 0; i < materials.Count; i++)
             if (materials[i].Species == lead.Species && materials[i].Origin == origin && posterior[i] >= VarietyShare * total) held.Add((materials[i], posterior[i]));
         return held.Count < 2 ? null : [.. held.OrderByDescending(h => h.Item2)];   // likeliest first; a tie keeps the catalogue's order
+    }
+
+    /// <summary>
+    /// The species of the leading species' mineral group that each hold at least <see cref="VarietyShare"/> of the group's
+    /// total, with the group's entries of those species and their posteriors, when the group is settled
+    /// (<see cref="SettledSpecies"/>) and there are two or more such species; else null. The same shares as for varieties:
+    /// a group's species left open are to the group what varieties are to a species.
+    /// </summary>
+    internal static (GroupSpecies Open, IReadOnlyList<(Material Material, double Probability)> Entries)? InseparableGroup(
+        IReadOnlyList<SpeciesResult> species, IReadOnlyList<Material> materials, IReadOnlyList<double> posterior)
+    {
+        if (species.Count == 0) return null;
+        var groupOf = new Dictionary<string, string?>(StringComparer.Ordinal);
+        foreach (var m in materials) groupOf.TryAdd(m.Species, m.MineralGroup);
+        if (groupOf.GetValueOrDefault(species[0].Species) is not { } group) return null;
+        var members = species.Where(s => groupOf.GetValueOrDefault(s.Species) == group).ToList();
+        double total = members.Sum(s => s.Confidence);
+        var held = members.Where(s => s.Confidence >= VarietyShare * total).Select(s => s.Species).ToList();
+        if (total < SettledSpecies || held.Count < 2) return null;
+        var entries = new List<(Material, double)>();
+        for (int i = 0; i < materials.Count; i++)
+            if (held.Contains(materials[i].Species) && posterior[i] > 1e-4) entries.Add((materials[i], posterior[i]));
+        return (new GroupSpecies(group, total, held), entries);
     }
 
     /// <summary>

@@ -385,6 +385,7 @@ public sealed class Identifier
         var weighted = order.Where(i => posterior[i] >= 1e-3).Select(i => (_materials[i], posterior[i])).ToList();
         var separation = Separation(sheet, posterior, species);
         var varieties = BenchWarnings.InseparableVarieties(species, _materials, posterior);
+        var group = noGoodMatch ? null : BenchWarnings.InseparableGroup(species, _materials, posterior);
         return new IdentificationResult
         {
             Id = sheet.Id,
@@ -398,7 +399,9 @@ public sealed class Identifier
                 shownInOrder.Length > 0 && Evaluated(shownInOrder[0], explain: false).StronglyAgainst > 0
                     ? Evaluated(shownInOrder[0], explain: true).Contributions : [],
                 // The varieties' test only where their warning can be given (never when nothing fits).
-                varieties is null || noGoodMatch ? null : ([.. varieties.Select(v => v.Material)], NextTestAdvisor.Advise(sheet, varieties))),
+                varieties is null || noGoodMatch ? null : ([.. varieties.Select(v => v.Material)], NextTestAdvisor.Advise(sheet, varieties)),
+                // The group's test tells its species apart, not merely one species' varieties.
+                group is { } open ? (open.Open, NextTestAdvisor.Advise(sheet, open.Entries, m => open.Open.IndexOf(m.Species))) : null),
             InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
                 ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
             Series = analysed.Series,

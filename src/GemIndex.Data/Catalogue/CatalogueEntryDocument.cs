@@ -25,6 +25,9 @@ public sealed record CatalogueEntryDocument : EntryFieldsDocument
     /// <summary>The rule that restricts trade in the material (trade-rules.json), or null.</summary>
     public TradeRuleDocument? TradeRule { get; init; }
 
+    /// <summary>The mineral group of the entry's species (mineral-groups.json), or null.</summary>
+    public string? MineralGroup { get; init; }
+
     /// <summary>The document of a material: every field it has, its sources by key, and the references they name.</summary>
     public static CatalogueEntryDocument From(Material m)
     {
@@ -50,6 +53,7 @@ public sealed record CatalogueEntryDocument : EntryFieldsDocument
                 .Select(s => new ReferenceDocument { Key = s.Key, Kind = CatalogueWords.Of(s.Kind), Citation = s.Citation })],
             IsUserEntry = m.IsUserEntry,
             TradeRule = m.TradeRule is { } rule ? new TradeRuleDocument(rule.Text, rule.Citation) : null,
+            MineralGroup = m.MineralGroup,
         };
     }
 

@@ -1,4 +1,5 @@
 using GemIndex.Core.Catalogue;
+using GemIndex.Data.MineralGroups;
 using GemIndex.Data.TradeRules;
 
 namespace GemIndex.Data.Catalogue;
@@ -8,7 +9,7 @@ public static class MergedCatalogue
 {
     /// <summary>
     /// Loads both catalogues, building the shipped one into the cache folder first if needed; a user entry takes its
-    /// species' trade rule and its species' magnification profile (<see cref="WithSpeciesLooks"/>).
+    /// species' trade rule, mineral group and magnification profile (<see cref="WithSpeciesLooks"/>).
     /// </summary>
     /// <exception cref="CatalogueFormatException">An embedded family file cannot be read.</exception>
     /// <exception cref="CatalogueStoreException">A catalogue file cannot be read.</exception>
@@ -16,7 +17,7 @@ public static class MergedCatalogue
     public static IReadOnlyList<Material> Load(CatalogueLocations locations)
     {
         var shipped = ShippedCatalogue.Load(locations.CacheDirectory);
-        var user = TradeRuleTable.Embedded.Attach(new UserCatalogue(locations.UserCataloguePath).Load());
+        var user = MineralGroupTable.Embedded.Attach(TradeRuleTable.Embedded.Attach(new UserCatalogue(locations.UserCataloguePath).Load()));
         return [.. shipped, .. WithSpeciesLooks(user, shipped)];
     }
 

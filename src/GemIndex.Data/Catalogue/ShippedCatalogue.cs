@@ -1,6 +1,7 @@
 using System.Security.Cryptography;
 using GemIndex.Core.Catalogue;
 using GemIndex.Data.Magnification;
+using GemIndex.Data.MineralGroups;
 using GemIndex.Data.TradeRules;
 
 namespace GemIndex.Data.Catalogue;
@@ -53,11 +54,11 @@ public static class ShippedCatalogue
         return path;
     }
 
-    /// <summary>Every shipped material with its magnification profile and trade rule attached, building the cache file first if needed.</summary>
+    /// <summary>Every shipped material with its magnification profile, trade rule and mineral group attached, building the cache file first if needed.</summary>
     public static IReadOnlyList<Material> Load(string cacheDirectory)
     {
         using CatalogueStore store = CatalogueStore.Open(EnsureBuilt(cacheDirectory));
-        return TradeRuleTable.Embedded.Attach(MagnificationTable.Embedded.Attach(store.LoadAll()));
+        return MineralGroupTable.Embedded.Attach(TradeRuleTable.Embedded.Attach(MagnificationTable.Embedded.Attach(store.LoadAll())));
     }
 
     private static IReadOnlyList<FamilySource> LoadSources() =>

@@ -26,7 +26,7 @@ internal static class MaterialText
     {
         var lines = new List<(string Label, string Value)>
         {
-            ("name", m.Name), ("species", m.Species), ("variety", m.Variety), ("family", m.Family),
+            ("name", m.Name), ("species", m.Species), ("variety", m.Variety), ("family", m.Family), ("mineral group", m.MineralGroup ?? "-"),
             ("origin", Word(m.Origin)), ("crystal system", Word(m.CrystalSystem)), ("optic character", Character(m)),
         };
         lines.AddRange(m.Indices.Named().Select(x => ($"{x.Name} at 589.3 nm", x.Range.ToString(IndexFormat))));

@@ -322,6 +322,32 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void Species_of_one_mineral_group_the_tests_leave_open_are_named_with_the_test_that_would_tell_them()
+    {
+        // Invented entries: two species of one group alike in index and SG, told apart only by the thermal probe, and a
+        // third species of the group far from the readings; a species of no group with the same readings as a control.
+        Material first = Make("first member", "first", OpticalIndices.SingleIndex(new(1.70, 1.71)), 3.50, 3.52) with { MineralGroup = "invented" };
+        Material second = Make("second member", "second", OpticalIndices.SingleIndex(new(1.70, 1.71)), 3.50, 3.52, thermal: ThermalProbeResult.Positive) with { MineralGroup = "invented" };
+        Material far = Make("far member", "third", OpticalIndices.SingleIndex(new(1.50, 1.51)), 2.50, 2.52) with { MineralGroup = "invented" };
+        var sheet = new BenchSheet { SpecificGravity = new SpecificGravity(3.51, 0.01), Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.705) };
+        IReadOnlyList<string> Open(IEnumerable<Material> catalogue, BenchSheet s) =>
+            [.. new Identifier([.. catalogue]).Identify(s).Warnings.Where(w => w.Contains("group:", StringComparison.Ordinal))];
+
+        Assert.Equal(["Invented group: first and second are not told apart by these tests; the thermal probe would help."], Open([first, second, far], sheet));
+        // The probe read settles it: no line. Without the group, two open species are left to the species lines.
+        Assert.Empty(Open([first, second, far], sheet with { ThermalProbe = ThermalProbeResult.Negative }));
+        Assert.Empty(Open([first, second with { MineralGroup = null }, far], sheet));
+        // The confidences are the same with or without the group: it is never evidence.
+        var grouped = new Identifier([first, second, far]).Identify(sheet);
+        var ungrouped = new Identifier([first with { MineralGroup = null }, second with { MineralGroup = null }, far with { MineralGroup = null }]).Identify(sheet);
+        Assert.Equal(ungrouped.Candidates.Select(c => c.Confidence), grouped.Candidates.Select(c => c.Confidence));
+        // Nothing in the group fits (the third's readings far off, an unlisted index): no line.
+        var nowhere = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.30), SpecificGravity = new SpecificGravity(6.9, 0.01) };
+        Assert.True(new Identifier([first, second, far]).Identify(nowhere).NoGoodMatch);
+        Assert.Empty(Open([first, second, far], nowhere));
+    }
+
+    [Fact]
     public void Weighing_in_water_is_never_suggested_while_a_porous_material_leads()
     {
         // Spot 1.45: opal (porous) leads; SG would separate it but must not be suggested.
