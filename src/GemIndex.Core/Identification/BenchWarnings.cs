@@ -160,11 +160,8 @@ public static class BenchWarnings
     internal static (GroupSpecies Open, IReadOnlyList<(Material Material, double Probability)> Entries)? InseparableGroup(
         IReadOnlyList<SpeciesResult> species, IReadOnlyList<Material> materials, IReadOnlyList<double> posterior)
     {
-        if (species.Count == 0) return null;
-        var groupOf = new Dictionary<string, string?>(StringComparer.Ordinal);
-        foreach (var m in materials) groupOf.TryAdd(m.Species, m.MineralGroup);
-        if (groupOf.GetValueOrDefault(species[0].Species) is not { } group) return null;
-        var members = species.Where(s => groupOf.GetValueOrDefault(s.Species) == group).ToList();
+        if (species.Count == 0 || species[0].MineralGroup is not { } group) return null;
+        var members = species.Where(s => s.MineralGroup == group).ToList();
         double total = members.Sum(s => s.Confidence);
         var held = members.Where(s => s.Confidence >= VarietyShare * total).Select(s => s.Species).ToList();
         if (total < SettledSpecies || held.Count < 2) return null;

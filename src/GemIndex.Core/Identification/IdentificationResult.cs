@@ -14,6 +14,15 @@ public sealed record IdentificationResult
     /// <summary>A species' total over the whole catalogue, or null when the answer holds no total for it.</summary>
     public double? SpeciesConfidence(string species) => Species.FirstOrDefault(s => s.Species == species)?.Confidence;
 
+    /// <summary>
+    /// The leading species' mineral group, with its total over every species of the group and the group's species that
+    /// hold at least <see cref="BenchWarnings.Relevant"/>, likeliest first, when two or more do (elbaite and uvite: the
+    /// stone is a tourmaline); else null. The answer's headline names it beside the species.
+    /// </summary>
+    public GroupSpecies? LeadingGroup => Species.Count > 0 && Species[0].MineralGroup is { } group
+        && Species.Where(s => s.MineralGroup == group && s.Confidence >= BenchWarnings.Relevant).Select(s => s.Species).ToList() is { Count: >= 2 } held
+        ? new GroupSpecies(group, Species.Where(s => s.MineralGroup == group).Sum(s => s.Confidence), held) : null;
+
     /// <summary>Candidates, best first (at most the number asked for).</summary>
     public required IReadOnlyList<RankedCandidate> Candidates { get; init; }
 

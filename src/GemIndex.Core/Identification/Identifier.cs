@@ -236,11 +236,12 @@ public sealed class Identifier
         var totals = new double[_speciesCount];
         var origins = new Dictionary<OriginClass, double>[_speciesCount];
         var names = new string[_speciesCount];
+        var groups = new string?[_speciesCount];
         for (int i = 0; i < posterior.Length; i++)
         {
             var m = _materials[i];
             int k = _speciesOf[i];
-            if (origins[k] is not { } o) { origins[k] = o = []; names[k] = m.Species; }
+            if (origins[k] is not { } o) { origins[k] = o = []; names[k] = m.Species; groups[k] = m.MineralGroup; }
             o[m.Origin] = o.GetValueOrDefault(m.Origin) + posterior[i];
             totals[k] += posterior[i];
         }
@@ -248,7 +249,7 @@ public sealed class Identifier
         for (int k = 0; k < order.Length; k++) order[k] = k;
         Array.Sort(order, (a, b) => totals[b].CompareTo(totals[a]) is var c && c != 0 ? c : a.CompareTo(b));
         var result = new List<SpeciesResult>(order.Length);
-        foreach (int k in order) result.Add(new SpeciesResult { Species = names[k], Confidence = totals[k], Origins = origins[k] });
+        foreach (int k in order) result.Add(new SpeciesResult { Species = names[k], Confidence = totals[k], Origins = origins[k], MineralGroup = groups[k] });
         return result;
     }
 

@@ -16,4 +16,7 @@ public sealed record SpeciesResult
 
     /// <summary>The species' total split by origin; the shares add up to <see cref="Confidence"/>.</summary>
     public required IReadOnlyDictionary<OriginClass, double> Origins { get; init; }
+
+    /// <summary>The mineral group the species belongs to (<see cref="Material.MineralGroup"/>), or null.</summary>
+    public string? MineralGroup { get; init; }
 }

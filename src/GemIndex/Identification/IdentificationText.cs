@@ -24,6 +24,8 @@ internal static class IdentificationText
         foreach (SpeciesResult s in ResultDocument.SpeciesShown(result))
             o.WriteLine($"Species: {s.Species} {ReportNumbers.Percent(s.Confidence)}"
                 + (s.Origins.Count > 0 ? " (" + string.Join(", ", s.Origins.OrderByDescending(x => x.Value).Select(x => $"{BenchWords.Word(x.Key)} {ReportNumbers.Percent(x.Value)}")) + ")" : ""));
+        if (!result.NoGoodMatch && result.LeadingGroup is { } group)
+            o.WriteLine($"Mineral group: {group.Group} {ReportNumbers.Percent(group.Total)} in all ({string.Join(", ", group.Species)})");
         if (result.Series is { } series)
         {
             o.WriteLine(series.Character is { } c ? $"Optic character: {c.ToString().ToLowerInvariant()}" : "Optic character: undetermined");

@@ -48,6 +48,7 @@ internal static class ResultDocument
             w.WriteStartObject();
             w.WriteString("species", species.Species);
             w.WriteNumber("confidence", Probability(species.Confidence));
+            if (species.MineralGroup is { } group) w.WriteString("mineral_group", group);
             w.WriteStartObject("origins");
             foreach (var (origin, share) in species.Origins.OrderBy(o => o.Key)) w.WriteNumber(BenchWords.Word(origin), Probability(share));
             w.WriteEndObject();

@@ -76,12 +76,18 @@ internal static class ReportDerived
     public static string ReasonLine(EvidenceContribution reason) =>
         $"{Verdict(reason)} ({BenchTestWords.DisplayOfWire(reason.Test)}): {reason.Text}";
 
-    /// <summary>The answer by species, best first: "Corundum 93.0 % — natural 41.0 %, synthetic 48.0 %".</summary>
+    /// <summary>
+    /// The answer by species, best first: "Corundum 93.0 % — natural 41.0 %, synthetic 48.0 %"; then, when two or more
+    /// species of the leading species' mineral group share it, the group's total: "Tourmaline group 99.9 % in all (elbaite, uvite)".
+    /// </summary>
     public static IReadOnlyList<string> SpeciesLines(StoneReport report) =>
         [.. report.Result.Species.Where(s => s.Confidence >= ShownSpeciesShare).Take(ShownSpecies).Select(s =>
             $"{char.ToUpperInvariant(s.Species[0])}{s.Species[1..]} {ReportNumbers.Percent(s.Confidence)}" +
             (s.Origins.Count > 1 ? " — " + string.Join(", ", s.Origins.OrderByDescending(o => o.Value)
-                .Select(o => $"{BenchWords.Word(o.Key)} {ReportNumbers.Percent(o.Value)}")) : $" ({BenchWords.Word(s.Origins.Keys.First())})"))];
+                .Select(o => $"{BenchWords.Word(o.Key)} {ReportNumbers.Percent(o.Value)}")) : $" ({BenchWords.Word(s.Origins.Keys.First())})")),
+         .. !report.Result.NoGoodMatch && report.Result.LeadingGroup is { } g
+            ? [$"{char.ToUpperInvariant(g.Group[0])}{g.Group[1..]} group {ReportNumbers.Percent(g.Total)} in all ({string.Join(", ", g.Species)})"]
+            : Array.Empty<string>()];
 
     /// <summary>Species below this share are not listed in the answer (a judgement: 1 %).</summary>
     private const double ShownSpeciesShare = 0.01;

@@ -123,6 +123,26 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void A_tourmaline_s_answer_names_its_mineral_group_in_text_and_json()
+    {
+        // A green tourmaline: ω 1.657–1.658, ε 1.640 within gem tourmaline's published 1.635–1.675 / 1.610–1.650 and SG 3.02
+        // within 3.02–3.26 (GIA Gem Reference Guide values, as the catalogue cites them); elbaite, uvite and dravite share it.
+        string[] stone = ["--edge", "0:1.640/1.656", "--edge", "30:1.641/1.656", "--edge", "60:1.643/1.657", "--edge", "90:1.645/1.658",
+            "--edge", "120:1.643/1.656", "--edge", "150:1.641/1.656", "--sg", "3.02", "--polariscope", "doubly_refractive", "--colour", "green"];
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, stone);
+        Assert.True(exit == 0, error);
+        Assert.Matches(@"Mineral group: tourmaline (>99\.9|\d+\.\d) % in all \(elbaite, uvite", output);
+        Assert.Contains("Tourmaline group: elbaite and uvite are not told apart by these tests", output, StringComparison.Ordinal);
+        var (_, json, _) = Identify(run, [.. stone, "--json"]);
+        using var doc = System.Text.Json.JsonDocument.Parse(json);
+        var species = doc.RootElement.GetProperty("species").EnumerateArray().ToList();
+        Assert.All(species.Where(s => s.GetProperty("species").GetString() is "elbaite" or "uvite" or "dravite"),
+            s => Assert.Equal("tourmaline", s.GetProperty("mineral_group").GetString()));
+        Assert.Equal("elbaite", species[0].GetProperty("species").GetString());
+    }
+
+    [Fact]
     public void A_bad_edge_option_names_the_option()
     {
         using var run = new CommandRun();

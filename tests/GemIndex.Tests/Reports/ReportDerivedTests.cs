@@ -28,4 +28,22 @@ public class ReportDerivedTests
         Assert.True(exit == 0, error);
         Assert.Contains("neither for nor against, unusual: magnification: Schreger lines seen (held by 1 % of such stones)", text);
     }
+
+    [Fact]
+    public void The_species_lines_end_with_the_mineral_group_when_two_of_its_species_share_the_answer()
+    {
+        // Invented shares: two species of the tourmaline group (Henry et al. 2011, as reference-db/mineral-groups.json cites it).
+        var sheet = ReportFixtures.Sheet(ReportFixtures.QuartzLine);
+        var result = ReportFixtures.Identify(sheet) with
+        {
+            Species =
+            [
+                new SpeciesResult { Species = "elbaite", Confidence = 0.6, Origins = new Dictionary<Core.Catalogue.OriginClass, double> { [Core.Catalogue.OriginClass.Natural] = 0.6 }, MineralGroup = "tourmaline" },
+                new SpeciesResult { Species = "uvite", Confidence = 0.4, Origins = new Dictionary<Core.Catalogue.OriginClass, double> { [Core.Catalogue.OriginClass.Natural] = 0.4 }, MineralGroup = "tourmaline" },
+            ],
+        };
+        Assert.Equal(["Elbaite 60.0 % (natural)", "Uvite 40.0 % (natural)", "Tourmaline group 100.0 % in all (elbaite, uvite)"],
+            ReportDerived.SpeciesLines(StoneReport.Build(sheet, result)));
+        Assert.Equal(2, ReportDerived.SpeciesLines(StoneReport.Build(sheet, result with { NoGoodMatch = true })).Count);
+    }
 }

@@ -84,6 +84,8 @@ internal static class ResultText
             lines.Add($"  {Origin(one.Key)} {Percent(one.Value)}");   // several entries, one origin left (melt-growth signs seen: "synthetic 96%")
         foreach (SpeciesResult other in r.Species.Skip(1).Where(s => s.Confidence >= BenchWarnings.Relevant).Take(2))
             lines.Add($"or {other.Species} {Percent(other.Confidence)}");
+        // Two species of one group share the answer: the group's total says what the stone is ("tourmaline group 99%").
+        if (r.LeadingGroup is { } group) lines.Add($"{group.Group} group {Percent(group.Total)} in all");
         return lines;
     }
 

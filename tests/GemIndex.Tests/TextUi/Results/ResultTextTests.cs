@@ -86,6 +86,32 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void Two_species_of_one_mineral_group_in_the_lead_bring_the_group_s_total()
+    {
+        // Elbaite and uvite share a tourmaline's answer (tourmaline supergroup: Henry et al. 2011, as reference-db/mineral-groups.json
+        // cites it); dravite holds under 5 %, so it is counted in the total but not named.
+        IdentificationResult r = CorundumAnswer(null) with
+        {
+            Species =
+            [
+                new SpeciesResult { Species = "elbaite", Confidence = 0.57, Origins = new Dictionary<OriginClass, double> { [OriginClass.Natural] = 0.57 }, MineralGroup = "tourmaline" },
+                new SpeciesResult { Species = "uvite", Confidence = 0.39, Origins = new Dictionary<OriginClass, double> { [OriginClass.Natural] = 0.39 }, MineralGroup = "tourmaline" },
+                new SpeciesResult { Species = "dravite", Confidence = 0.03, Origins = new Dictionary<OriginClass, double> { [OriginClass.Natural] = 0.03 }, MineralGroup = "tourmaline" },
+                new SpeciesResult { Species = "spodumene", Confidence = 0.01, Origins = new Dictionary<OriginClass, double> { [OriginClass.Natural] = 0.01 } },
+            ],
+            Candidates = [],
+        };
+        Assert.Equal("tourmaline", r.LeadingGroup!.Group);
+        Assert.Equal(["elbaite", "uvite"], r.LeadingGroup.Species);
+        Assert.Equal(0.99, r.LeadingGroup.Total, 12);
+        Assert.Equal(["Elbaite 57%", "  natural 57%", "or uvite 39%", "tourmaline group 99% in all"], ResultText.Lead(r));
+        // One species of the group alone: no group line.
+        var alone = r with { Species = [.. r.Species.Select(s => s.Species == "uvite" ? s with { MineralGroup = null } : s)] };
+        Assert.Null(alone.LeadingGroup);
+        Assert.DoesNotContain(ResultText.Lead(alone), l => l.Contains("group", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void When_one_origin_is_left_among_several_entries_the_lead_still_names_it()
     {
         // Melt-growth signs seen under magnification: the natural and treated entries fall away, two synthetics remain.
