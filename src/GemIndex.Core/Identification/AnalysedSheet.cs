@@ -24,8 +24,13 @@ public sealed record AnalysedSheet
             Series = RotationSeriesAnalysis.Analyse(r.Steps, r.ReadingPrecision, r.CalibrationOffset);
             Observation = new SeriesObservation(r.Steps, r.ReadingPrecision, r.CalibrationOffset, r.LiquidLimit);
             _broad = new Lazy<double>(() => SectionLikelihood.Evaluate(IndicatrixPrior.Broad(Observation), Observation, 0, 0).LogLikelihood);
+            var observation = Observation;
+            Character = new Lazy<OpticCharacterPosterior>(() => OpticCharacterPosterior.Of(observation));
         }
     }
+
+    /// <summary>What the series alone says of the optic character, worked out only when a front end shows it.</summary>
+    internal Lazy<OpticCharacterPosterior>? Character { get; }
 
     private readonly Lazy<double>? _broad;
     // One stone is ranked on one thread, so a plain dictionary under an uncontended lock (cheaper per stone than a

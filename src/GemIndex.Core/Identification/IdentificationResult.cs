@@ -43,4 +43,15 @@ public sealed record IdentificationResult
 
     /// <summary>The rotation series' analysis, when there were readings.</summary>
     public RotationSeriesResult? Series { get; init; }
+
+    /// <summary>
+    /// What the rotation series alone says of the optic character (<see cref="OpticCharacterPosterior"/>), or null
+    /// without a series; worked out on first use (a batch line never asks for it).
+    /// </summary>
+    public OpticCharacterPosterior? SeriesCharacter => _seriesCharacter?.Value;
+
+    /// <summary>The lazily worked-out <see cref="SeriesCharacter"/>.</summary>
+    internal Lazy<OpticCharacterPosterior>? SeriesCharacterSource { init => _seriesCharacter = value; }
+
+    private readonly Lazy<OpticCharacterPosterior>? _seriesCharacter;
 }

@@ -406,6 +406,7 @@ public sealed class Identifier
             InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
                 ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
             Series = analysed.Series,
+            SeriesCharacterSource = analysed.Character,
         };
     }
 }

@@ -152,6 +152,19 @@ internal sealed class IndicatrixPrior
         return new([.. shapes], families, BroadDensities.Index, level.Minimum, level.Maximum, bHigh);
     }
 
+    /// <summary>
+    /// The broad prior's parts, each keeping its own share of the prior: isotropic, uniaxial positive, uniaxial negative,
+    /// biaxial. Their likelihoods, set against each other, are what the readings alone say of the optic character.
+    /// </summary>
+    internal static IReadOnlyList<(OpticCharacter Character, OpticSign Sign, IndicatrixPrior Prior)> BroadParts(SeriesObservation series)
+    {
+        var broad = Broad(series);
+        IndicatrixPrior Only(int group) => new([.. broad.Shapes.Where(s => s.Group == group)], broad.Families, broad.LevelDensity,
+            broad.LowestIndex, broad.HighestIndex, broad.LargestBirefringence);
+        return [(OpticCharacter.Isotropic, OpticSign.None, Only(-1)), (OpticCharacter.Uniaxial, OpticSign.Positive, Only(0)),
+            (OpticCharacter.Uniaxial, OpticSign.Negative, Only(1)), (OpticCharacter.Biaxial, OpticSign.None, Only(2))];
+    }
+
     /// <summary>The family's shapes at Gauss–Legendre nodes, each weighted by its density times the node's share.</summary>
     private static IEnumerable<Shape> Nodes(IReadOnlyList<Family> families, int group)
     {

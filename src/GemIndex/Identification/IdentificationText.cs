@@ -28,7 +28,9 @@ internal static class IdentificationText
             o.WriteLine($"Mineral group: {group.Group} {ReportNumbers.Percent(group.Total)} in all ({string.Join(", ", group.Species)})");
         if (result.Series is { } series)
         {
-            o.WriteLine(series.Character is { } c ? $"Optic character: {c.ToString().ToLowerInvariant()}" : "Optic character: undetermined");
+            o.WriteLine(result.SeriesCharacter is { } character
+                ? $"Optic character, from the readings alone: {ReportDerived.CharacterOdds(character)}"
+                : series.Character is { } c ? $"Optic character: {c.ToString().ToLowerInvariant()}" : "Optic character: undetermined");
             foreach (var h in series.Interpretations) o.WriteLine($"  {h.Description}");
         }
         o.WriteLine(result.NoGoodMatch

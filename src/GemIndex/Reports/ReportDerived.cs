@@ -8,7 +8,8 @@ internal static class ReportDerived
 {
     public static IEnumerable<ReportField> Fields(StoneReport report)
     {
-        if (report.Character is { } c) yield return new("optic_character", "Optic character", c);
+        if (report.CharacterOdds is { } odds) yield return new("optic_character", "Optic character (from the readings alone)", CharacterOdds(odds));
+        else if (report.Character is { } c) yield return new("optic_character", "Optic character", c);
         else if (report.Interpretations.Count > 0)
             yield return new("optic_character", "Optic character", "not fixed by the series" + (report.UndeterminedReason.Length > 0 ? ": " + report.UndeterminedReason : ""));
         if (report.Interpretations.Count > 0 && report.Interpretations[0] is var best)
@@ -88,6 +89,22 @@ internal static class ReportDerived
          .. !report.Result.NoGoodMatch && report.Result.LeadingGroup is { } g
             ? [$"{char.ToUpperInvariant(g.Group[0])}{g.Group[1..]} group {ReportNumbers.Percent(g.Total)} in all ({string.Join(", ", g.Species)})"]
             : Array.Empty<string>()];
+
+    /// <summary>
+    /// What the series alone says of the optic character, likeliest first: "uniaxial 97.0 % (negative 96.0 %, positive
+    /// 1.0 %), biaxial 3.0 %, singly refractive &lt;0.1 %" (isotropic or amorphous, in the bench's word); a uniaxial
+    /// sign is named when uniaxial holds 1 % or more.
+    /// </summary>
+    public static string CharacterOdds(OpticCharacterPosterior p, Func<double, string>? percent = null)
+    {
+        percent ??= ReportNumbers.Percent;
+        string uniaxial = "uniaxial " + percent(p.Uniaxial) + (p.Uniaxial >= 0.01
+            ? " (" + string.Join(", ", new[] { ("positive", p.UniaxialPositive), ("negative", p.UniaxialNegative) }
+                .OrderByDescending(x => x.Item2).Select(x => $"{x.Item1} {percent(x.Item2)}")) + ")"
+            : "");
+        return string.Join(", ", new[] { (uniaxial, p.Uniaxial), ("biaxial " + percent(p.Biaxial), p.Biaxial), ("singly refractive " + percent(p.Isotropic), p.Isotropic) }
+            .OrderByDescending(x => x.Item2).Select(x => x.Item1));
+    }
 
     /// <summary>Species below this share are not listed in the answer (a judgement: 1 %).</summary>
     private const double ShownSpeciesShare = 0.01;

@@ -30,6 +30,8 @@ internal sealed record StoneReport
     public required IReadOnlyList<ReportField> ReadingFields { get; init; }
     /// <summary>Optic character from the series, or null when it does not fix one.</summary>
     public string? Character { get; init; }
+    /// <summary>What the series alone says of the optic character (the section model's posterior), or null without a series.</summary>
+    public OpticCharacterPosterior? CharacterOdds { get; init; }
     /// <summary>Why the character could not be fixed, or empty.</summary>
     public string UndeterminedReason { get; init; } = "";
     /// <summary>The rotation series' interpretations, heaviest first.</summary>
@@ -65,6 +67,7 @@ internal sealed record StoneReport
             Readings = sheet.Readings,
             ReadingFields = ReportReadings.Fields(sheet.Readings),
             Character = series?.Character is { } c ? Word(c.ToString()) : null,
+            CharacterOdds = result.SeriesCharacter,
             UndeterminedReason = series?.UndeterminedReason ?? "",
             Interpretations = [.. (series?.Interpretations ?? []).OrderByDescending(i => i.Weight).Select(Interpretation)],
             Misreadings = series?.Misreadings ?? [],

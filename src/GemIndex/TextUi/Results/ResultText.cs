@@ -138,7 +138,7 @@ internal static class ResultText
     public static IReadOnlyList<string> Derived(BenchAssessment a)
     {
         var lines = new List<string>();
-        if (a.Result?.Series is { } series) lines.AddRange(Series(series));
+        if (a.Result?.Series is { } series) lines.AddRange(Series(series, a.Result.SeriesCharacter));
         else if (a.Readings.Refractometer?.Spot is { } spot && !a.Errors.ContainsKey(BenchFields.Spot) && a.Result is not null)
             lines.Add($"Spot reading: {Index(spot)}");
         if (a.Readings.Refractometer is { OverLimit: true } && !a.Errors.ContainsKey(BenchFields.OverLimit)) lines.Add("Over the limit: index above the contact liquid");
@@ -167,16 +167,19 @@ internal static class ResultText
             yield return $"Loupe: {r.FeaturesPresent.Count} seen, {r.FeaturesAbsent.Count} looked for and not seen";
     }
 
-    private static IEnumerable<string> Series(RotationSeriesResult s)
+    private static IEnumerable<string> Series(RotationSeriesResult s, OpticCharacterPosterior? odds)
     {
+        // What the readings alone say of the character, by the section model; the interpretations below give the indices.
+        if (odds is not null) yield return "Optic character: " + GemIndex.Cli.Reports.ReportDerived.CharacterOdds(odds, Percent);
         if (s.Interpretations.Count == 0)
         {
             yield return "Optic character: not fixed by the series" + (s.UndeterminedReason.Length > 0 ? ": " + s.UndeterminedReason : "");
             yield break;
         }
         SeriesInterpretation best = s.Interpretations.MaxBy(i => i.Weight)!;
-        yield return "Optic character: " + (s.Character is { } c ? Character(c)
-            : "not fixed by the series" + (s.UndeterminedReason.Length > 0 ? ": " + s.UndeterminedReason : ""));
+        if (odds is null)
+            yield return "Optic character: " + (s.Character is { } c ? Character(c)
+                : "not fixed by the series" + (s.UndeterminedReason.Length > 0 ? ": " + s.UndeterminedReason : ""));
         bool single = best.Beta is null && best.Lowest.Value == best.Highest.Value;
         yield return (single ? "Refractive index: " : "Refractive indices: ") + (best.Beta is { } beta
             ? $"α {Index(best.Lowest.Value)}, β {Index(beta.Value)}, γ {Index(best.Highest.Value)}{TwoV(best)}"

@@ -1,0 +1,142 @@
+using GemIndex.Core.Identification;
+using GemIndex.Core.Optics;
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Quantities;
+using GemIndex.Core.Readings;
+
+namespace GemIndex.Core.Tests.Identification;
+
+using IndicatrixModel = GemIndex.Core.Optics.Indicatrix.Indicatrix;
+
+public class OpticCharacterPosteriorTests
+{
+    // Readings simulated from the indicatrix section model on random facets at 22.5° steps over the half turn, rounded to
+    // 0.001 as a bench reading is, edges closer than 0.0015 written as one (DOMAIN.md §6b); the indices are handbook
+    // values from memory: quartz ω 1.544, ε 1.553 (+); corundum ω 1.770, ε 1.762 (−); peridot α 1.654, β 1.672, γ 1.690;
+    // spinel n 1.718.
+    private static SeriesObservation Series(IndicatrixModel truth, Direction facet, double stepDegrees = 22.5, int steps = 8) =>
+        new([.. RotationSeries.Simulate(truth, facet, Enumerable.Range(0, steps).Select(k => Angle.FromDegrees(k * stepDegrees))).Select(s =>
+        {
+            double low = Math.Round(s.Low.Value, 3), high = Math.Round(s.High.Value, 3);
+            return high - low < 0.0015 ? new ShadowEdgeStep(s.Rotation.Degrees, Math.Round((low + high) / 2, 3))
+                : new ShadowEdgeStep(s.Rotation.Degrees, low, high);
+        })], 0.001, 0, 1.79);
+
+    private static readonly IndicatrixModel Quartz = IndicatrixModel.Uniaxial(new RefractiveIndex(1.544), new RefractiveIndex(1.553));
+    private static readonly IndicatrixModel Corundum = IndicatrixModel.Uniaxial(new RefractiveIndex(1.770), new RefractiveIndex(1.762));
+    private static readonly IndicatrixModel Peridot = IndicatrixModel.Biaxial(new RefractiveIndex(1.654), new RefractiveIndex(1.672), new RefractiveIndex(1.690));
+    private static readonly IndicatrixModel Spinel = IndicatrixModel.Isotropic(new RefractiveIndex(1.718));
+
+    [Theory]
+    [InlineData(1)]
+    [InlineData(2)]
+    [InlineData(3)]
+    public void A_full_series_of_each_character_is_read_as_that_character(int seed)
+    {
+        var facet = Direction.RandomUniform(new Random(seed));
+        var quartz = OpticCharacterPosterior.Of(Series(Quartz, facet));
+        Assert.True(quartz.Uniaxial > 0.5 && quartz.UniaxialPositive > quartz.UniaxialNegative, $"quartz {quartz}");
+        var corundum = OpticCharacterPosterior.Of(Series(Corundum, facet));
+        Assert.True(corundum.Uniaxial > 0.5 && corundum.UniaxialNegative > corundum.UniaxialPositive, $"corundum {corundum}");
+        var peridot = OpticCharacterPosterior.Of(Series(Peridot, facet));
+        Assert.True(peridot.Biaxial > 0.9, $"peridot {peridot}");
+        var spinel = OpticCharacterPosterior.Of(Series(Spinel, facet));
+        Assert.True(spinel.Isotropic > 0.9, $"spinel {spinel}");
+        foreach (var p in new[] { quartz, corundum, peridot, spinel })
+            Assert.Equal(1, p.Isotropic + p.Uniaxial + p.Biaxial, 12);
+    }
+
+    [Fact]
+    public void One_step_leaves_the_character_open()
+    {
+        // A single step with two edges: any doubly refractive crystal could give it, so neither uniaxial nor biaxial is
+        // settled (the old classification called it "undetermined"); singly refractive is ruled out.
+        var p = OpticCharacterPosterior.Of(new SeriesObservation([new ShadowEdgeStep(0, 1.640, 1.656)], 0.001, 0, 1.79));
+        Assert.True(p.Uniaxial is > 0.2 and < 0.8 && p.Biaxial is > 0.2 and < 0.8, $"{p}");
+        Assert.True(p.Isotropic < 0.01, $"{p}");
+    }
+
+    public static TheoryData<string, int, int> Stones => new()
+    {
+        // Four steps of quartz leave a biaxial crystal with β near α in play; eight of peridot, a single step of corundum.
+        { "quartz", 4, 3 },
+        { "quartz", 8, 5 },
+        { "corundum", 8, 7 },
+        { "peridot", 8, 2 },
+        { "corundum", 1, 9 },
+    };
+
+    [Theory]
+    [MemberData(nameof(Stones))]
+    public void The_posterior_agrees_with_brute_force_Monte_Carlo(string name, int steps, int seed)
+    {
+        var truth = name switch { "quartz" => Quartz, "corundum" => Corundum, _ => Peridot };
+        var series = Series(truth, Direction.RandomUniform(new Random(seed)), 180.0 / steps, steps);
+        var engine = OpticCharacterPosterior.Of(series);
+        var brute = MonteCarlo(series, 400_000, seed);
+        // Tolerance: the quadrature agrees with Monte Carlo within about 1.7 nats per evaluation (docs/ranking.md §1,
+        // SectionLikelihoodTests), so each part's log-odds against the others may move by that much.
+        foreach (var (e, b, what) in new[] { (engine.Uniaxial, brute.Uniaxial, "uniaxial"), (engine.Biaxial, brute.Biaxial, "biaxial") })
+            if (b is > 0.01 and < 0.99)
+                Assert.True(Math.Abs(LogOdds(e) - LogOdds(b)) < 1.7, $"{what}: engine {e:0.000}, Monte Carlo {b:0.000} ({engine} / {brute})");
+            else
+                Assert.True(Math.Abs(e - b) < 0.02, $"{what}: engine {e:0.000}, Monte Carlo {b:0.000}");
+    }
+
+    private static double LogOdds(double p) => Math.Log(p / (1 - p));
+
+    /// <summary>
+    /// The posterior by brute force: each part of the broad prior (singly refractive a quarter, uniaxial of each sign an
+    /// eighth, biaxial a quarter; B flat over 0–0.30, so a part's mass in B's window is its share × window / 0.30; β flat
+    /// between α and γ) sampled with a uniform facet normal, start and level within the readings' window, each reading's
+    /// probability as the engine's reading model gives it (two edges, or one written for two, or a lone low edge whose
+    /// high edge the liquid hides). The level's window and flat density are common to every part and cancel.
+    /// </summary>
+    private static OpticCharacterPosterior MonteCarlo(SeriesObservation series, int samples, int seed)
+    {
+        var random = new Random(seed);
+        double sd = Math.Sqrt(series.NoiseVariance), levelLow = series.LowestReading - 0.01, levelHigh = series.HighestReading + 0.01;
+        double spread = series.HighestReading - series.LowestReading;
+        double bLow = Math.Max(0, spread - 0.002), bHigh = spread + 0.006 + (series.HighestReading > series.LiquidLimit - 0.03 ? 0.02 : 0);
+        double Likelihood(double alpha, double beta, double gamma)
+        {
+            var indicatrix = gamma - alpha < 1e-9 ? IndicatrixModel.Isotropic(new RefractiveIndex(alpha))
+                : beta - alpha < 1e-9 ? IndicatrixModel.Uniaxial(new RefractiveIndex(alpha), new RefractiveIndex(gamma))   // positive: ω = α = β, ε = γ
+                : gamma - beta < 1e-9 ? IndicatrixModel.Uniaxial(new RefractiveIndex(gamma), new RefractiveIndex(alpha))   // negative: ω = β = γ, ε = α
+                : IndicatrixModel.Biaxial(new RefractiveIndex(alpha), new RefractiveIndex(beta), new RefractiveIndex(gamma));
+            var normal = Direction.RandomUniform(random);
+            double start = random.NextDouble() * 180, log = 0;
+            for (int k = 0; k < series.Count; k++)
+            {
+                var section = indicatrix.Section(normal, Angle.FromDegrees(start + Math.Atan2(series.Sin[k], series.Cos[k]) * 180 / Math.PI));
+                double low = section.Low.Value, high = section.High.Value, two = SectionLikelihood.SeenAsTwo(high - low, Math.Sqrt(2 * series.NoiseVariance));
+                double p = series.TwoEdges[k]
+                    ? two * Normal(series.Low[k] - low, sd) * Normal(series.High[k] - high, sd)
+                    : (1 - two) * Normal(series.Low[k] - (low + high) / 2, sd)
+                      + RangeLikelihood.Phi((high - (series.LiquidLimit - SeriesObservation.LiquidEdgeMargin)) / sd) * Normal(series.Low[k] - low, sd);
+                log += Math.Log(Math.Max(p, 1e-300));
+            }
+            return Math.Exp(log);
+        }
+        double Level() => levelLow + random.NextDouble() * (levelHigh - levelLow);
+        double B() => bLow + random.NextDouble() * (bHigh - bLow);
+        double window = (bHigh - bLow) * BroadDensities.Birefringence;
+        double isotropic = 0, positive = 0, negative = 0, biaxial = 0;
+        for (int n = 0; n < samples; n++)
+        {
+            double level = Level();
+            isotropic += Likelihood(level, level, level);
+            level = Level(); double b = B();
+            positive += Likelihood(level, level, level + b);
+            level = Level(); b = B();
+            negative += Likelihood(level, level + b, level + b);
+            level = Level(); b = B();
+            biaxial += Likelihood(level, level + random.NextDouble() * b, level + b);
+        }
+        double[] part = [0.25 * isotropic, 0.125 * window * positive, 0.125 * window * negative, 0.25 * window * biaxial];
+        double total = part.Sum();
+        return new(part[0] / total, part[1] / total, part[2] / total, part[3] / total);
+    }
+
+    private static double Normal(double x, double sd) => RangeLikelihood.PhiDensity(x / sd) / sd;
+}
