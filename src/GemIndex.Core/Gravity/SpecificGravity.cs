@@ -36,13 +36,15 @@ public readonly record struct SpecificGravity
     public override string ToString() => Text(Value, StandardUncertainty);
 
     /// <summary>
-    /// An SG with its uncertainty as the trade writes it: two decimals, or three when the uncertainty is under 0.005
-    /// (a careful hydrostatic weighing), so that it never reads "± 0.00".
+    /// An SG with its uncertainty as the trade writes it, the one way every front end writes it: two decimals, or three
+    /// when the uncertainty is under 0.005 (a careful hydrostatic weighing), so that it never reads "± 0.00"; an
+    /// uncertainty that would still round to nothing (a large stone on a fine balance) reads "± &lt;0.001".
     /// </summary>
     public static string Text(double value, double standardUncertainty)
     {
         if (standardUncertainty == 0) return value.ToString("0.00", CultureInfo.InvariantCulture);
         string format = standardUncertainty < 0.005 ? "0.000" : "0.00";
-        return $"{value.ToString(format, CultureInfo.InvariantCulture)} ± {standardUncertainty.ToString(format, CultureInfo.InvariantCulture)}";
+        string spread = standardUncertainty < 0.0005 ? "<0.001" : standardUncertainty.ToString(format, CultureInfo.InvariantCulture);
+        return $"{value.ToString(format, CultureInfo.InvariantCulture)} ± {spread}";
     }
 }

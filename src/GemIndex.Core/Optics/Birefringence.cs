@@ -25,6 +25,16 @@ public readonly record struct Birefringence
     /// <summary>Standard uncertainty (k = 1).</summary>
     public double StandardUncertainty { get; }
 
+    /// <summary>
+    /// The birefringence a reader works out from two indices written to three decimals, as they are shown beside it
+    /// (1.770 and 1.762 give 0.008, not the 0.007 of unrounded means 1.76975 and 1.76225): every line that shows both
+    /// indices and the birefringence uses it, so the line adds up.
+    /// </summary>
+    public static double OfShownIndices(double highest, double lowest) =>
+        Math.Max(0, Shown(highest) - Shown(lowest));
+
+    private static double Shown(double index) => double.Parse(index.ToString("0.000", CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+
     /// <inheritdoc />
     public override string ToString() => StandardUncertainty == 0
         ? Value.ToString("0.000", CultureInfo.InvariantCulture)

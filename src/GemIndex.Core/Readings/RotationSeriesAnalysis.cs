@@ -310,12 +310,8 @@ public static class RotationSeriesAnalysis
 
     private static string F(double v) => v.ToString("0.000", CultureInfo.InvariantCulture);
 
-    /// <summary>
-    /// A birefringence in words is the difference of the two indices as shown beside it (1.770 and 1.762 read 0.008, not
-    /// the 0.007 of the unrounded means 1.76975 and 1.76225), so the line adds up for the reader.
-    /// </summary>
-    private static string Difference(double high, double low) =>
-        F(Math.Max(0, double.Parse(F(high), CultureInfo.InvariantCulture) - double.Parse(F(low), CultureInfo.InvariantCulture)));
+    /// <summary>A birefringence in words: the difference of the two indices as shown beside it (<see cref="Birefringence.OfShownIndices"/>).</summary>
+    private static string Difference(double high, double low) => F(Birefringence.OfShownIndices(high, low));
 
     private static string D(double degrees) => degrees.ToString("0.#", CultureInfo.InvariantCulture) + "°";
 }

@@ -17,11 +17,13 @@ internal static class ReportDerived
             yield return new("indices", "Refractive indices (most likely reading)", best.Beta is { } beta
                 ? $"α {ReportNumbers.Index(best.Lowest)}, β {ReportNumbers.Index(beta)}, γ {ReportNumbers.Index(best.Highest)}"
                 : best.Lowest == best.Highest ? ReportNumbers.Index(best.Lowest) : $"{ReportNumbers.Index(best.Lowest)} to {ReportNumbers.Index(best.Highest)}");
-            yield return new("birefringence", "Birefringence", ReportNumbers.WithUncertainty(best.Birefringence, best.BirefringenceUncertainty, "0.000"));
+            // The difference of the indices shown on the line above, so the two lines add up.
+            yield return new("birefringence", "Birefringence", ReportNumbers.WithUncertainty(
+                Core.Optics.Birefringence.OfShownIndices(best.Highest, best.Lowest), best.BirefringenceUncertainty, "0.000"));
             yield return new("optic_sign", "Optic sign", SignText(report));
         }
         if (report.SpecificGravity is { } sg)
-            yield return new("specific_gravity", "Specific gravity", $"{ReportNumbers.WithUncertainty(sg.Value, sg.StandardUncertainty, "0.00")} (standard uncertainty; {report.SpecificGravitySource})");
+            yield return new("specific_gravity", "Specific gravity", $"{sg} (standard uncertainty; {report.SpecificGravitySource})");
         if (report.Interpretations.Count == 0 && report.SpecificGravity is null)
             yield return new("derived", "Derived", "none: no rotation series and no specific gravity");
     }

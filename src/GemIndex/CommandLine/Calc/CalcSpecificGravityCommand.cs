@@ -59,7 +59,7 @@ internal static class CalcSpecificGravityCommand
         Func<double, string> weight = r.EnteredUnit == "g" ? ct => Grams(Mass.FromCarats(ct).Grams) : Carats;
         output.WriteLine($"in air {weight(r.WeightInAirCarats!.Value)}, in water {weight(r.WeightInWaterCarats!.Value)}" +
             (r.BalanceResolutionCarats is { } step ? $", balance resolution {weight(step)}" : ""));
-        output.WriteLine($"specific gravity {Fixed(sg, "0.000")} ± {Fixed(r.SpecificGravityUncertainty!.Value, "0.000")} " +
+        output.WriteLine($"specific gravity {SpecificGravity.Text(sg, r.SpecificGravityUncertainty!.Value)} " +
             "(relative to water at 4 °C, no unit)");
     }
 }

@@ -33,7 +33,7 @@ internal static class ResultText
     public static string Percent(double p) => p is > 0 and < 0.005 ? "<1%" : p is >= 0.995 and < 1 ? ">99%" : GemIndex.Cli.Reports.ReportNumbers.WholePercent(p);
 
     public static string Gravity(SpecificGravity? sg) => sg is { } g
-        ? $"SG {g.Value.ToString("0.000", CultureInfo.InvariantCulture)} ± {g.StandardUncertainty.ToString("0.000", CultureInfo.InvariantCulture)}"
+        ? $"SG {g}"
         : "SG -";
 
     /// <summary>A confidence bar of <see cref="BarWidth"/> cells, '#' filled and '.' empty (readable without colour).</summary>
@@ -184,7 +184,7 @@ internal static class ResultText
         yield return (single ? "Refractive index: " : "Refractive indices: ") + (best.Beta is { } beta
             ? $"α {Index(best.Lowest.Value)}, β {Index(beta.Value)}, γ {Index(best.Highest.Value)}{TwoV(best)}"
             : best.Lowest.Value == best.Highest.Value ? Index(best.Lowest.Value) : $"{Index(best.Lowest.Value)} to {Index(best.Highest.Value)}");
-        if (best.Birefringence.Value > 0) yield return $"Birefringence: {Index(best.Birefringence.Value)}";
+        if (best.Birefringence.Value > 0) yield return $"Birefringence: {Index(GemIndex.Core.Optics.Birefringence.OfShownIndices(best.Highest.Value, best.Lowest.Value))}";
         if (Sign(s) is { } sign) yield return "Optic sign: " + sign;
     }
 

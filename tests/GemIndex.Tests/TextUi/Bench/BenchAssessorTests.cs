@@ -28,7 +28,7 @@ public class BenchAssessorTests
         IReadOnlyList<string> derived = ResultText.Derived(a);
         Assert.Contains("Refractive indices: 1.544 to 1.553", derived);
         Assert.Contains("Birefringence: 0.009", derived);
-        Assert.Contains("Specific gravity: 2.650 ± 0.010", derived);
+        Assert.Contains("Specific gravity: 2.65 ± 0.01", derived);
     }
 
     [Fact]

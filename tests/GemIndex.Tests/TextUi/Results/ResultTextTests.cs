@@ -389,7 +389,7 @@ public class ResultTextTests
         BenchAssessment a = new BenchAssessor(new Identifier(TestMaterials.All)).Assess(form.Snapshot());
         Assert.True(a.Errors.ContainsKey(BenchFields.Spot));
         Assert.DoesNotContain(ResultText.Derived(a), l => l.Contains("90", StringComparison.Ordinal));
-        Assert.Contains("Specific gravity: 2.650 ± 0.010", ResultText.Derived(a));
+        Assert.Contains("Specific gravity: 2.65 ± 0.01", ResultText.Derived(a));
     }
 
     [Fact]
