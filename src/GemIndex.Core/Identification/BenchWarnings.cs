@@ -42,6 +42,12 @@ public static class BenchWarnings
     /// </summary>
     public const double SettledSpecies = 0.5;
 
+    /// <summary>
+    /// Entries below this posterior are left out when a test is sought to tell a species' origins or a group's species
+    /// apart (a ten-thousandth: a judgement, docs/ranking.md §5, other named values); they could not move the answer.
+    /// </summary>
+    public const double AdvisedEntryShare = 1e-4;
+
     /// <summary>Warnings for one answer, most important first.</summary>
     /// <param name="sheet">The analysed sheet.</param>
     /// <param name="candidates">The candidates shown.</param>
@@ -102,8 +108,10 @@ public static class BenchWarnings
         }
         // Species of one mineral group the tests leave open (elbaite, uvite and dravite of the tourmalines), and what would tell them.
         if (!noGoodMatch && group is { } g)
+            // A group's species differ in chemistry: a bench test can only hint (through the entries' listed lines or
+            // glow), and a laboratory's analysis settles them.
             warnings.Add($"{Capital(g.Open.Group)} group: {Listed(g.Open.Species)} are not told apart by these tests; "
-                + (g.Test is { } tells ? $"the {tells.Description} would help." : "no bench test left here separates them."));
+                + (g.Test is { } tells ? $"the {tells.Description} may hint, and a laboratory's analysis settles it." : "a laboratory's analysis settles it."));
         // Varieties of one origin the tests leave open (cat's-eye or plain chrysoberyl, CVD or HPHT growth), and what would tell them.
         // The test the origin warning names already tells these varieties apart too: one line says it.
         if (!noGoodMatch && varieties is { Entries.Count: > 1 } open && leading.Count > 0
@@ -167,7 +175,7 @@ public static class BenchWarnings
         if (total < SettledSpecies || held.Count < 2) return null;
         var entries = new List<(Material, double)>();
         for (int i = 0; i < materials.Count; i++)
-            if (held.Contains(materials[i].Species) && posterior[i] > 1e-4) entries.Add((materials[i], posterior[i]));
+            if (held.Contains(materials[i].Species) && posterior[i] > AdvisedEntryShare) entries.Add((materials[i], posterior[i]));
         return (new GroupSpecies(group, total, held), entries);
     }
 

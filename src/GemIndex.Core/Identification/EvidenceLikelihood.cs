@@ -214,10 +214,12 @@ public static class EvidenceLikelihood
             return;
         }
         var seen = d.Seen!.Value;
-        if (m.Dispersion is not { } value)
+        if (m.Dispersion is not { } value || m.IsOpaque)
         {
+            // Fire is judged in light that has passed through the stone: an opaque one shows none whatever its
+            // dispersion, so the word says nothing of it (as the polariscope and dichroscope say nothing of it).
             acc.Add(BenchField.Dispersion, 0.2, 0.2, 1, robust: false);
-            if (acc.Explaining) acc.Say($"dispersion {Word(seen)}; not known for this material");
+            if (acc.Explaining) acc.Say($"dispersion {Word(seen)}; {(m.IsOpaque ? "no fire to judge in an opaque stone" : "not known for this material")}");
             return;
         }
         var expected = DispersionBand(value);

@@ -224,7 +224,7 @@ public sealed class Identifier
         string leading = species[0].Species;
         var entries = new List<(Material, double)>();
         for (int i = 0; i < posterior.Length; i++)
-            if (_materials[i].Species == leading && posterior[i] > 1e-4) entries.Add((_materials[i], posterior[i]));
+            if (_materials[i].Species == leading && posterior[i] > BenchWarnings.AdvisedEntryShare) entries.Add((_materials[i], posterior[i]));
         // The test that tells the species' origins apart, not merely its varieties.
         return entries.Count < 2 ? null : NextTestAdvisor.Advise(sheet, entries, m => (int)m.Origin);
     }

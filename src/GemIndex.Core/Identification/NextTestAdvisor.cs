@@ -369,7 +369,7 @@ public static class NextTestAdvisor
         ? Enumerable.Range(0, 3).Select(o => ((long)o, 1 / 3.0))
         : EvidenceLikelihood.PleochroismRow(m.OpticCharacter, m.Pleochroism).Select((p, o) => ((long)o, p));
 
-    private static IEnumerable<(long, double)> Dispersion(Material m) => m.Dispersion is { } d
+    private static IEnumerable<(long, double)> Dispersion(Material m) => m.Dispersion is { } d && !m.IsOpaque
         ? EvidenceLikelihood.DispersionRow(EvidenceLikelihood.DispersionBand(d)).Select((p, o) => ((long)o, p))
         : Enumerable.Range(0, 5).Select(o => ((long)o, 0.2));
 
@@ -380,8 +380,11 @@ public static class NextTestAdvisor
     // Which listed lines are seen, each with its own detection probability from its strength (the likelihood's model).
     private static IEnumerable<(long, double)> Absorption(Material m) => AbsorptionLines.Outcomes(m.AbsorptionLines);
 
-    /// <summary>What an opaque entry shows in a test that needs light through the stone.</summary>
-    internal const string OpaqueExpectation = "opaque: no light through it, nothing to read";
+    /// <summary>What an opaque entry shows in the polariscope: dark throughout, which is easily written down wrongly.</summary>
+    internal const string OpaqueInPolariscope = "stays dark throughout, opaque — no reaction to read (not 'singly refractive')";
+
+    /// <summary>What an opaque entry shows in the dichroscope, or as fire: no light through it.</summary>
+    internal const string OpaqueExpectation = "opaque — no light through it, nothing to read";
 
     private static string Expected(string test, Material m) => test switch
     {
@@ -390,7 +393,8 @@ public static class NextTestAdvisor
             ? "over the limit"
             : string.Join(", ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString("0.000")}")),
         // An opaque entry's outcome table is flat (the test cannot be taken), so it expects no reaction either.
-        BenchField.Polariscope or BenchField.Pleochroism when m.IsOpaque => OpaqueExpectation,
+        BenchField.Polariscope when m.IsOpaque => OpaqueInPolariscope,
+        BenchField.Pleochroism or BenchField.Dispersion when m.IsOpaque => OpaqueExpectation,
         BenchField.Polariscope => string.Join(" or ", EvidenceLikelihood.UsualReactions(m).Select(EvidenceLikelihood.Word)),
         BenchField.Pleochroism => m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial && m.Pleochroism != PleochroismStrength.None ? $"{EvidenceLikelihood.Word(m.Pleochroism)} pleochroism" : "no pleochroism",
         BenchField.Dispersion => m.Dispersion is { } d ? $"nG − nB {d.ToString("0.000", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(EvidenceLikelihood.DispersionBand(d))})" : "not known",

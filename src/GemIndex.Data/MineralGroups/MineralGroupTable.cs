@@ -6,7 +6,7 @@ using GemIndex.Data.Catalogue;
 namespace GemIndex.Data.MineralGroups;
 
 /// <summary>
-/// reference-db/mineral-groups.json: the mineral groups (tourmaline, garnet, feldspar, spinel, quartz) whose member
+/// reference-db/mineral-groups.json: the mineral groups (tourmaline, garnet, feldspar, spinel) whose member
 /// species the catalogue keeps apart; attached to every entry of a listed species after the catalogue loads, the user's
 /// own included (the SQLite schema does not hold it). The answer names the group's species that stay open together,
 /// never weighs the group as evidence.
@@ -40,16 +40,19 @@ public sealed class MineralGroupTable
         var keys = new HashSet<string>((table.References ?? []).Select(r => r.Key), StringComparer.Ordinal);
         var errors = new List<string>();
         var bySpecies = new Dictionary<string, string>(StringComparer.Ordinal);
+        var names = new HashSet<string>(StringComparer.Ordinal);
         for (int i = 0; i < table.Groups.Length; i++)
         {
             var g = table.Groups[i];
-            string at = $"mineral-groups.json: groups[{i}]{(string.IsNullOrWhiteSpace(g.Group) ? "" : $" ({g.Group})")}";
-            if (string.IsNullOrWhiteSpace(g.Group)) errors.Add($"{at}: \"group\" must name the group.");
-            else if (g.Source is null || !keys.Contains(g.Source)) errors.Add($"{at}: \"source\" must be one of the file's reference keys.");
-            else if (g.Species is not { Length: >= 2 }) errors.Add($"{at}: \"species\" must list two or more species.");
-            else
+            bool named = !string.IsNullOrWhiteSpace(g.Group);
+            string at = $"mineral-groups.json: groups[{i}]{(named ? $" ({g.Group})" : "")}";
+            if (!named) errors.Add($"{at}: \"group\" must name the group.");
+            else if (!names.Add(g.Group!)) errors.Add($"{at}: the group is given twice.");
+            if (g.Source is null || !keys.Contains(g.Source)) errors.Add($"{at}: \"source\" must be one of the file's reference keys.");
+            if (g.Species is not { Length: >= 2 }) errors.Add($"{at}: \"species\" must list two or more species.");
+            else if (named)
                 foreach (string species in g.Species)
-                    if (string.IsNullOrWhiteSpace(species) || !bySpecies.TryAdd(species, g.Group))
+                    if (string.IsNullOrWhiteSpace(species) || !bySpecies.TryAdd(species, g.Group!))
                         errors.Add($"{at}: species '{species}' is blank or already in a group.");
         }
         if (errors.Count > 0) throw new CatalogueFormatException(errors);

@@ -23,6 +23,8 @@ public class SpecificGravityTests
         Assert.Equal("2.745 ± 0.003", new SpecificGravity(2.745, 0.0034).ToString());
         Assert.Equal("2.75 ± 0.01", new SpecificGravity(2.745, 0.01).ToString());
         Assert.Equal("2.745 ± 0.005", SpecificGravity.Text(2.7449, 0.0049)); // under 0.005: still three decimals
+        // A 100 ct stone on a 0.001 ct balance: σ about 0.0002, which three decimals would write as nothing.
+        Assert.Equal("2.648 ± <0.001", SpecificGravity.Text(2.6481, 0.0002));
     }
 
     [Theory]

@@ -333,7 +333,7 @@ public class IdentifierTests
         IReadOnlyList<string> Open(IEnumerable<Material> catalogue, BenchSheet s) =>
             [.. new Identifier([.. catalogue]).Identify(s).Warnings.Where(w => w.Contains("group:", StringComparison.Ordinal))];
 
-        Assert.Equal(["Invented group: first and second are not told apart by these tests; the thermal probe would help."], Open([first, second, far], sheet));
+        Assert.Equal(["Invented group: first and second are not told apart by these tests; the thermal probe may hint, and a laboratory's analysis settles it."], Open([first, second, far], sheet));
         // The probe read settles it: no line. Without the group, two open species are left to the species lines.
         Assert.Empty(Open([first, second, far], sheet with { ThermalProbe = ThermalProbeResult.Negative }));
         Assert.Empty(Open([first, second with { MineralGroup = null }, far], sheet));
@@ -504,7 +504,23 @@ public class IdentifierTests
         Assert.Equal(GemIndex.Core.Bench.BenchField.Polariscope, advice.Test);
         Assert.Contains("glassy: singly refractive", advice.Expectations);
         Assert.Contains("crystal: doubly refractive", advice.Expectations);
-        Assert.Contains($"opaque: {NextTestAdvisor.OpaqueExpectation}", advice.Expectations);
+        Assert.Contains($"opaque: {NextTestAdvisor.OpaqueInPolariscope}", advice.Expectations);
+    }
+
+    [Fact]
+    public void An_opaque_entry_takes_no_evidence_from_fire_judged_by_eye()
+    {
+        // Fire is judged in light that has passed through the stone (common practice): an opaque entry with a strong
+        // dispersion (invented, like a black andradite's 0.057) is neither helped nor hurt by "no fire", while the same
+        // entry transparent is.
+        var index = OpticalIndices.SingleIndex(new(1.52, 1.53));
+        Material plain = Make("plain", "a", index, 2.50, 2.60);
+        Material dark = Make("dark", "b", index, 2.50, 2.60, dispersion: 0.057) with { IsOpaque = true };
+        var sheet = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.525), SpecificGravity = new(2.55, 0.01) };
+        var noFire = sheet with { Dispersion = DispersionObservation.ByEye(DispersionStrength.None) };
+        double Share(Material[] catalogue, BenchSheet s) => new Identifier(catalogue).Identify(s).Candidates.Single(c => c.Material.Name == "dark").Confidence;
+        Assert.Equal(Share([plain, dark], sheet), Share([plain, dark], noFire), 9);
+        Assert.True(Share([plain, dark with { IsOpaque = false }], noFire) < 0.5 * Share([plain, dark with { IsOpaque = false }], sheet));
     }
 
     [Fact]

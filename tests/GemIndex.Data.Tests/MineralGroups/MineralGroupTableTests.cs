@@ -20,6 +20,9 @@ public class MineralGroupTableTests
         // Man-made garnet-structured simulants are their own species, not members of the garnet group.
         Assert.Null(shipped.First(m => m.Species == "yttrium aluminium garnet").MineralGroup);
         Assert.Equal("garnet", shipped.First(m => m.Species == "pyrope-almandine").MineralGroup);
+        // A laboratory-grown stone filed under a member species is a member with it.
+        Assert.Equal("spinel", shipped.First(m => m.Species == "spinel" && m.Origin == OriginClass.Synthetic).MineralGroup);
+        Assert.Null(shipped.First(m => m.Species == "quartz").MineralGroup);
     }
 
     [Fact]
@@ -42,6 +45,8 @@ public class MineralGroupTableTests
     [InlineData("""{"references":[{"key":"a","citation":"A"}],"groups":[{"source":"a","species":["x","y"]}]}""", "groups[0]: \"group\" must name the group")]
     [InlineData("""{"references":[{"key":"a","citation":"A"}],"groups":[{"group":"g","source":"a","species":["x"]}]}""", "\"species\" must list two or more")]
     [InlineData("""{"references":[{"key":"a","citation":"A"}],"groups":[{"group":"g","source":"a","species":["x","y"]},{"group":"h","source":"a","species":["y","z"]}]}""", "groups[1] (h): species 'y' is blank or already in a group")]
+    [InlineData("""{"references":[{"key":"a","citation":"A"}],"groups":[{"group":"g","source":"a","species":["x","y"]},{"group":"g","source":"a","species":["z","w"]}]}""", "groups[1] (g): the group is given twice")]
+    [InlineData("""{"references":[{"key":"a","citation":"A"}],"groups":[{"group":"g","source":"b","species":["x"]}]}""", "\"species\" must list two or more")]
     [InlineData("""{"references":[],"groups":[],"extra":1}""", "mineral-groups.json: not valid")]
     [InlineData("""{"references":[]}""", "\"groups\" must be a list")]
     public void A_faulty_table_is_refused_naming_the_fault(string json, string expected)
