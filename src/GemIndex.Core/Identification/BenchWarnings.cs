@@ -58,9 +58,15 @@ public static class BenchWarnings
     /// <param name="leaderReasons">The leading candidate's reasons, each test weighed (empty: none worked out).</param>
     /// <param name="varieties">The leading species' unsettled varieties (<see cref="InseparableVarieties"/>) and the test that best tells them apart.</param>
     /// <param name="group">The species of the leading species' mineral group that the answer leaves open (<see cref="InseparableGroup"/>) and the test that best tells them apart.</param>
+    /// <param name="serious">
+    /// Every entry of the whole catalogue holding at least <see cref="Relevant"/>, likeliest first: the cautions (do not
+    /// immerse, trade rules, composites, treatments) come from these, so none is lost when fewer candidates are shown;
+    /// without it, the candidates shown.
+    /// </param>
     public static IReadOnlyList<string> For(AnalysedSheet sheet, IReadOnlyList<RankedCandidate> candidates, double notInCatalogue, bool noGoodMatch,
         IReadOnlyList<SpeciesResult>? species = null, NextTestAdvice? separation = null, IReadOnlyList<EvidenceContribution>? leaderReasons = null,
-        (IReadOnlyList<Material> Entries, NextTestAdvice? Test)? varieties = null, (GroupSpecies Open, NextTestAdvice? Test)? group = null)
+        (IReadOnlyList<Material> Entries, NextTestAdvice? Test)? varieties = null, (GroupSpecies Open, NextTestAdvice? Test)? group = null,
+        IReadOnlyList<(Material Material, double Confidence)>? serious = null)
     {
         var warnings = new List<string>();
         if (sheet.Sheet.IsEmpty)
@@ -84,9 +90,10 @@ public static class BenchWarnings
                 warnings.Add($"Unusual for {candidates[0].Material.Name}, {Bench.BenchTestWords.DisplayOfWire(reason.Test)}: {reason.Text}. Re-check it; the answer weighs it as read.");
         if (sheet.Sheet.SpecificGravity is { StandardUncertainty: > LargeGravityUncertainty } sg)
             warnings.Add($"SG uncertainty ±{sg.StandardUncertainty.ToString("0.00", CultureInfo.InvariantCulture)} is large (a small stone or a coarse balance): SG separates little here.");
-        var relevant = candidates.Where(c => c.Confidence >= Relevant).ToList();
+        var relevant = serious?.ToList() ?? [.. candidates.Where(c => c.Confidence >= Relevant).Select(c => (c.Material, c.Confidence))];
+        // The reason, not the entry's notes (an emerald's chromium lines say nothing of why it must stay dry).
         foreach (var c in relevant.Where(c => c.Material.DoNotImmerse))
-            warnings.Add($"Possible {c.Material.Name}: do not immerse (no water or heavy liquids){(c.Material.Notes.Length > 0 ? " — " + c.Material.Notes.TrimEnd('.') : "")}.");
+            warnings.Add($"Possible {c.Material.Name}: do not immerse (no water or heavy liquids) — a porous, soft or filled stone can take in liquid or be harmed, and its SG in a liquid misleads.");
         // Entries that share a rule (black and golden coral) are named together, the rule said once.
         foreach (var rule in relevant.Where(c => c.Material.TradeRule is not null).GroupBy(c => c.Material.TradeRule!))
             warnings.Add($"Possible {Listed([.. rule.Select(c => c.Material.Name)])}: {rule.Key.Text}. Check the rules where you buy, sell or ship {(rule.Count() > 1 ? "them" : "it")} (a summary, not legal advice).");

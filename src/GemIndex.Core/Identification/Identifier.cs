@@ -402,7 +402,9 @@ public sealed class Identifier
                 // The varieties' test only where their warning can be given (never when nothing fits).
                 varieties is null || noGoodMatch ? null : ([.. varieties.Select(v => v.Material)], NextTestAdvisor.Advise(sheet, varieties)),
                 // The group's test tells its species apart, not merely one species' varieties.
-                group is { } open ? (open.Open, NextTestAdvisor.Advise(sheet, open.Entries, m => open.Open.IndexOf(m.Species))) : null),
+                group is { } open ? (open.Open, NextTestAdvisor.Advise(sheet, open.Entries, m => open.Open.IndexOf(m.Species))) : null,
+                // Cautions from every serious entry, shown or not.
+                [.. order.Where(i => posterior[i] >= BenchWarnings.Relevant).Select(i => (_materials[i], posterior[i]))]),
             InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
                 ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
             Series = analysed.Series,
