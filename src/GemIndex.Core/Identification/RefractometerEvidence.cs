@@ -80,7 +80,7 @@ internal static class RefractometerEvidence
         var m = profile.Material;
         double shift = WavelengthShift(m, r.LightNanometres, out double shiftSigma);
         if (sheet.Observation is { } series) Series(profile, sheet, series, shift, shiftSigma, acc);
-        if (r.Spot is { } spot) Spot(m, spot, r.ReadingPrecision, shift, shiftSigma, acc);
+        if (r.Spot is { } spot) Spot(m, spot, r.SpotPrecision, shift, shiftSigma, acc);
         // With a series, an edge hidden above the liquid is censored within the section model itself.
         if (r.OverLimit && sheet.Observation is null) OverLimit(m, r, hasReadings: r.Spot is not null, acc);
     }

@@ -47,6 +47,7 @@ public sealed record RefractometerObservation
         Method = method;
         Steps = steps;
         Spot = spot;
+        SpotPrecision = readingPrecision ?? DefaultSpotPrecision;
         OverLimit = overLimit;
     }
 
@@ -73,6 +74,12 @@ public sealed record RefractometerObservation
 
     /// <summary>Standard uncertainty of one reading.</summary>
     public double ReadingPrecision => Profile.ReadingPrecision;
+
+    /// <summary>
+    /// Standard uncertainty of the spot reading: the precision given, else the spot method's own (<see cref="DefaultSpotPrecision"/>)
+    /// even beside facet steps, since a spot is read on a blurred edge by eye whatever else was read on the stone.
+    /// </summary>
+    public double SpotPrecision { get; }
 
     /// <summary>Added to every reading (from a calibration on a standard).</summary>
     public double CalibrationOffset => Profile.CalibrationOffset;

@@ -508,6 +508,38 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_spot_reading_beside_facet_steps_keeps_the_spot_s_own_precision()
+    {
+        // A bench may take a quick spot reading and then read a facet (a published mauve taaffeite: spot 1.71, facet
+        // 1.713–1.720). The spot is judged at the spot method's σ 0.006 (a 90 % bound of about ±0.01, common practice), not
+        // at the facet's 0.001; a precision the user gives applies to both.
+        var both = new RefractometerObservation(RefractometerMethod.Facet, [new ShadowEdgeStep(0, 1.713, 1.720)], spot: 1.71);
+        Assert.Equal(RefractometerObservation.DefaultSpotPrecision, both.SpotPrecision);
+        Assert.Equal(RefractometerObservation.DefaultFacetPrecision, both.ReadingPrecision);
+        Assert.Equal(0.002, new RefractometerObservation(RefractometerMethod.Facet, [new ShadowEdgeStep(0, 1.713, 1.720)], spot: 1.71, readingPrecision: 0.002).SpotPrecision);
+        // Opal (n 1.43–1.46 as this test catalogue holds it) with a spot 0.01 below its range beside a step: within the
+        // spot's uncertainty, not ten standard deviations out.
+        var result = Engine.Identify(new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Facet, [new ShadowEdgeStep(0, 1.45)], spot: 1.42) }, 10, explainTop: 10);
+        var spotReason = result.Candidates.Single(c => c.Material.Name == "opal").Reasons.Single(r => r.Text.StartsWith("spot reading", StringComparison.Ordinal));
+        Assert.Contains("within the reading's uncertainty", spotReason.Text);
+    }
+
+    [Fact]
+    public void A_caution_stays_however_few_candidates_are_shown()
+    {
+        // Two invented entries alike in every reading, the porous one less common: shown one candidate, the answer still
+        // says not to immerse the porous one, which holds a serious share (at least 5 %).
+        var index = OpticalIndices.SingleIndex(new(1.52, 1.53));
+        Material common = Make("common kind", "a", index, 2.50, 2.60, frequency: BenchFrequency.VeryCommon);
+        Material porous = Make("porous kind", "b", index, 2.50, 2.60, porous: true, frequency: BenchFrequency.Occasional);
+        var sheet = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.525) };
+        var one = new Identifier([common, porous]).Identify(sheet, 1);
+        Assert.Equal(["common kind"], one.Candidates.Select(c => c.Material.Name));
+        Assert.Contains(one.Warnings, w => w.StartsWith("Possible porous kind: do not immerse", StringComparison.Ordinal));
+        Assert.Equal(new Identifier([common, porous]).Identify(sheet).Warnings, one.Warnings);
+    }
+
+    [Fact]
     public void An_opaque_entry_takes_no_evidence_from_fire_judged_by_eye()
     {
         // Fire is judged in light that has passed through the stone (common practice): an opaque entry with a strong
