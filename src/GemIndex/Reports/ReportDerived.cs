@@ -62,9 +62,12 @@ internal static class ReportDerived
 
     /// <summary>
     /// The one verdict on a reason that every front end gives: how strongly it speaks for or against the candidate, and
-    /// "unusual" when the reading lies well outside the candidate's range or is a reaction it rarely shows.
+    /// "unusual" when the reading lies well outside the candidate's range or is a reaction it rarely shows. An unusual
+    /// reading is never said to speak "for" the candidate, though it may weigh more for it than for an unknown material
+    /// (its weight in bits says so): "unusual for it", or "… against, unusual" when it weighs against.
     /// </summary>
-    public static string Verdict(EvidenceContribution reason) => Strength(reason) + (reason.Agrees ? "" : ", unusual");
+    public static string Verdict(EvidenceContribution reason) =>
+        reason.Agrees ? Strength(reason) : reason.WeightBits <= -NeutralBits ? Strength(reason) + ", unusual" : "unusual for it";
 
     /// <summary>Ten to one in favour or against (log2 10): "strongly".</summary>
     private const double StrongBits = 3.32;

@@ -12,7 +12,9 @@ public class ReportDerivedTests
     [InlineData(1.5, true, "for")]
     [InlineData(0.4, true, "slightly for")]
     [InlineData(-0.4, true, "slightly against")]
-    [InlineData(0.0, false, "neither for nor against, unusual")]
+    [InlineData(0.0, false, "unusual for it")]
+    [InlineData(5.0, false, "unusual for it")]
+    [InlineData(0.4, false, "unusual for it")]
     [InlineData(0.05, true, "neither for nor against")]
     public void A_reason_s_verdict_names_its_weight_in_words(double bits, bool agrees, string expected) =>
         Assert.Equal(expected, ReportDerived.Verdict(new EvidenceContribution("magnification", "a look", bits, agrees)));
@@ -26,7 +28,7 @@ public class ReportDerivedTests
         var (exit, text, error) = CommandLine.CommandRun.Plain("identify", "--spot", "1.54", "--sg", "1.80", "--colour", "white",
             "--feature", "schreger_lines", "--catalogue-dir", run.Folder);
         Assert.True(exit == 0, error);
-        Assert.Contains("neither for nor against, unusual: magnification: Schreger lines seen (held by 1 % of such stones)", text);
+        Assert.Contains("unusual for it: magnification: Schreger lines seen (held by 1 % of such stones)", text);
     }
 
     [Fact]
