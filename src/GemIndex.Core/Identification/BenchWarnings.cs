@@ -1,5 +1,7 @@
 using System.Globalization;
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Readings;
 
 namespace GemIndex.Core.Identification;
 
@@ -84,6 +86,9 @@ public static class BenchWarnings
         if (sheet.Sheet.SpecificGravity is { } measured)
             foreach (var h in sheet.Sheet.HeavyLiquids.Where(h => Contradicts(measured, h)))
                 warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");
+        // A series whose pattern shows one uniaxial sign while the leader has the other: the likelihood may still favour the
+        // leader (no entry of the other sign has its indices), but the bench should look again at which edge stays still.
+        if (!noGoodMatch && candidates.Count > 0 && SignClash(sheet.Series, candidates[0].Material) is { } clash) warnings.Add(clash);
         // A reading that speaks strongly against the answer's own leader: most often a misreading, so it is named.
         if (!noGoodMatch && candidates.Count > 0)
             foreach (var reason in (leaderReasons ?? []).Where(r => SpeaksAgainst(r.Test, r.WeightBits, r.Agrees)))
@@ -139,6 +144,22 @@ public static class BenchWarnings
         if (relevant.Any(c => c.Material.Origin == OriginClass.Treated))
             warnings.Add("A treated material is among the candidates: treatments are mostly not detectable with these tests.");
         return warnings;
+    }
+
+    /// <summary>
+    /// "The readings show a uniaxial positive pattern (the low edge stays still), but corundum is uniaxial negative", when
+    /// every reading of the series that has a sign gives the one the leader lacks; else null. A summary of the readings
+    /// for the bench to re-check, never evidence: the ranking weighs the raw readings.
+    /// </summary>
+    private static string? SignClash(RotationSeriesResult? series, Material leader)
+    {
+        if (series is not { Character: OpticCharacter.Uniaxial } || leader.OpticCharacter != OpticCharacter.Uniaxial
+            || leader.Sign is not (OpticSign.Positive or OpticSign.Negative)) return null;
+        var signs = series.Interpretations.Where(i => i.Character == OpticCharacter.Uniaxial).Select(i => i.Sign).Distinct().ToList();
+        if (signs is not [var shown] || shown == leader.Sign) return null;
+        string Word(OpticSign s) => s == OpticSign.Positive ? "positive" : "negative";
+        string still = shown == OpticSign.Positive ? "low" : "high";
+        return $"The readings show a uniaxial {Word(shown)} pattern (the {still} edge stays still as the stone turns), but {leader.Species} is uniaxial {Word(leader.Sign)}: re-check which edge stays still, or the stone is not {leader.Species}. The answer weighs the readings as read.";
     }
 
     /// <summary>The species' origins that each hold at least <see cref="OriginShare"/> of it, when there are two or more and the species is relevant; else null.</summary>

@@ -525,6 +525,21 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_series_of_the_other_uniaxial_sign_than_the_leader_s_is_named()
+    {
+        // Sapphire readings with the low edge held still: the pattern of a positive stone, while corundum is uniaxial
+        // negative (ω 1.770 the constant high edge, ε 1.762; common practice). The test catalogue has no positive stone at
+        // these indices, so sapphire still leads; the warning asks for the edges to be looked at again.
+        var swapped = new BenchSheet { Refractometer = Facet((0, 1.762, 1.770), (45, 1.762, 1.768), (90, 1.762, 1.765), (135, 1.762, 1.769)), SpecificGravity = new SpecificGravity(4.00, 0.01) };
+        var result = Engine.Identify(swapped);
+        Assert.Equal("corundum", result.Species[0].Species);
+        Assert.Contains(result.Warnings, w => w.StartsWith("The readings show a uniaxial positive pattern (the low edge stays still as the stone turns), but corundum is uniaxial negative", StringComparison.Ordinal));
+        // The usual negative pattern (the high edge still): no warning.
+        var usual = swapped with { Refractometer = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770)) };
+        Assert.DoesNotContain(Engine.Identify(usual).Warnings, w => w.Contains("pattern", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void A_caution_stays_however_few_candidates_are_shown()
     {
         // Two invented entries alike in every reading, the porous one less common: shown one candidate, the answer still
