@@ -44,9 +44,10 @@ public readonly record struct PropertyRange
     public bool Contains(double value) => value >= Minimum && value <= Maximum;
 
     /// <summary>The range as text with <paramref name="format"/> applied to both ends ("1.544–1.553").</summary>
-    public string ToString(string format) => Width == 0
-        ? Minimum.ToString(format, CultureInfo.InvariantCulture)
-        : $"{Minimum.ToString(format, CultureInfo.InvariantCulture)}–{Maximum.ToString(format, CultureInfo.InvariantCulture)}";
+    public string ToString(string format) =>
+        // A range narrower than the shown decimals reads as one number ("2.20", not "2.20–2.20").
+        Minimum.ToString(format, CultureInfo.InvariantCulture) is var low && Maximum.ToString(format, CultureInfo.InvariantCulture) is var high && low != high
+            ? $"{low}–{high}" : low;
 
     /// <inheritdoc />
     public override string ToString() => ToString("0.###");

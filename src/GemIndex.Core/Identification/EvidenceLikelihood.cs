@@ -338,6 +338,9 @@ public static class EvidenceLikelihood
     /// <summary>Up to this many standard uncertainties outside a range, a reading is said to lie within its uncertainty of it (two: the usual reading of a normal error).</summary>
     private const double WithinUncertaintySigmas = 2;
 
+    /// <summary>Beyond this many standard uncertainties a reading is said to lie "over 10σ" outside a range (a display choice).</summary>
+    private const double FarSigmas = 10;
+
     /// <summary>Where a value lies against a range: "lies in 3.95–4.05" or "lies 0.12 below 3.95–4.05 (8σ)".</summary>
     internal static string Where(double value, PropertyRange range, double sigma, string format)
     {
@@ -349,7 +352,9 @@ public static class EvidenceLikelihood
         // Just outside a range, within the reading's own uncertainty, still counts for the material: said, so that "for"
         // beside "lies below" does not read as a contradiction.
         string within = sigmas <= WithinUncertaintySigmas ? ", within the reading's uncertainty" : "";
-        return $"lies {distance.ToString(format, CultureInfo.InvariantCulture)} {side} {range.ToString(format)} ({sigmas.ToString("0.#", CultureInfo.InvariantCulture)}σ{within})";
+        // Beyond ten standard uncertainties the count says nothing more ("206σ" reads as false precision).
+        string how = sigmas > FarSigmas ? $"over {FarSigmas.ToString(CultureInfo.InvariantCulture)}σ" : $"{sigmas.ToString("0.#", CultureInfo.InvariantCulture)}σ{within}";
+        return $"lies {distance.ToString(format, CultureInfo.InvariantCulture)} {side} {range.ToString(format)} ({how})";
     }
 
     internal static string Word<T>(T value) where T : struct, Enum => value.ToString() switch

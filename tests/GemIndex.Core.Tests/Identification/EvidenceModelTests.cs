@@ -252,10 +252,20 @@ public class EvidenceModelTests
     [InlineData(2.65, "lies in 2.64–2.66")]
     [InlineData(2.63, "lies 0.01 below 2.64–2.66 (1σ, within the reading's uncertainty)")]
     [InlineData(2.70, "lies 0.04 above 2.64–2.66 (4σ)")]
+    [InlineData(3.52, "lies 0.86 above 2.64–2.66 (over 10σ)")]
     public void A_reading_just_outside_a_range_is_said_to_lie_within_its_uncertainty(double sg, string expected)
     {
         // Quartz SG 2.64–2.66 (from memory), read to ± 0.01.
         Assert.Equal(expected, EvidenceLikelihood.Where(sg, new PropertyRange(2.64, 2.66), 0.01, "0.00"));
+    }
+
+    [Fact]
+    public void A_range_narrower_than_the_shown_decimals_reads_as_one_number()
+    {
+        // Silica glass SG 2.200–2.203 (the catalogue's entry) shown to two decimals.
+        Assert.Equal("2.20", new PropertyRange(2.2, 2.203).ToString("0.00"));
+        Assert.Equal("2.200–2.203", new PropertyRange(2.2, 2.203).ToString("0.000"));
+        Assert.Equal("lies 0.10 below 2.20 (over 10σ)", EvidenceLikelihood.Where(2.1, new PropertyRange(2.2, 2.203), 0.01, "0.00"));
     }
 
     [Fact]

@@ -65,7 +65,8 @@ internal static class CalcIndicatrixCommand
             ? $"uniaxial: ω {Index(o)}, ε {Index(e)} {NoUnit}"
             : $"biaxial: α {Index(r.Alpha)}, β {Index(r.Beta)}, γ {Index(r.Gamma)} {NoUnit}");
         output.WriteLine($"birefringence {Fixed(r.Birefringence, "0.0000")} {NoUnit}; optic sign {r.Sign}" +
-            (r.OpticAxialAngleDegrees is { } v ? $"; 2Vz {Degrees(v)}" : ""));
+            // A uniaxial crystal's optic axes coincide: 2V = 0° in the trade's words, whichever axis the angle is taken about.
+            (r is { Omega: not null } ? "; 2V 0° (uniaxial: one optic axis)" : r.OpticAxialAngleDegrees is { } v ? $"; 2Vz {Degrees(v)}" : ""));
         if (r.Rotation is not { } rows) return;
         output.WriteLine($"facet normal ({string.Join(", ", r.Facet!.Select(c => Fixed(c, "0.####")))}); rotation series:");
         output.WriteLine("  rotation    low index  high index  difference");

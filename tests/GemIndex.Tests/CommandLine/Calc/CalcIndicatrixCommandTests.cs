@@ -22,6 +22,10 @@ public class CalcIndicatrixCommandTests
     {
         // Calcite ω 1.658, ε 1.486, uniaxial − (DOMAIN.md §7, Handbook of Mineralogy from memory).
         Assert.Equal("negative", Json("indicatrix", "--omega", "1.658", "--epsilon", "1.486").GetProperty("sign").GetString());
+        // A uniaxial crystal's one optic axis: 2V = 0° as the trade says it, never "2Vz 180°".
+        var (_, output, _) = Text("indicatrix", "--omega", "1.658", "--epsilon", "1.486");
+        Assert.Contains("2V 0° (uniaxial: one optic axis)", output, StringComparison.Ordinal);
+        Assert.DoesNotContain("180", output, StringComparison.Ordinal);
     }
 
     [Fact]
