@@ -143,6 +143,18 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void Turquoise_s_432_nm_line_counts_for_turquoise()
+    {
+        // A blue cabochon, spot 1.61, with turquoise's iron line at 432 nm seen in reflected light (handbook value, from
+        // memory; measured reflectance bands near 425–428 nm in Qiu et al. 2016, Minerals 7(1):3): the line speaks for turquoise.
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--spot", "1.61", "--colour", "blue", "--lines", "432");
+        Assert.True(exit == 0, error);
+        Assert.StartsWith("Species: turquoise", output, StringComparison.Ordinal);
+        Assert.Contains("strongly for: lines seen at 432 nm; lines at 432 (strong), 420 (weak), 460 (weak) nm listed", output, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_bad_edge_option_names_the_option()
     {
         using var run = new CommandRun();
