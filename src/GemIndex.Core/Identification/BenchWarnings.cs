@@ -221,10 +221,14 @@ public static class BenchWarnings
             .Select(o => o == OriginClass.Treated ? "treated" : "laboratory-grown").ToList();
         if (hidden.Count == 0) return null;
         string looked = sheet.Sheet.Magnification is { IsEmpty: false } ? "even with the magnification recorded, " : "";
+        // Only what the hidden origins can hide: a spinel met laboratory-grown is not told of fillers.
+        bool treated = hidden.Contains("treated"), grown = hidden.Contains("laboratory-grown");
         string unseen = leading.Species == "diamond"
             ? "HPHT and CVD growth and HPHT colour treatment leave no sign these tests find"
-            : "heating, many fillers and some laboratory growth leave no sign these tests find";
-        return $"{Capital(leading.Species)} is also met {string.Join(" and ", hidden)}: {looked}{unseen}; for a valuable stone refer it to a qualified laboratory.";
+            : treated && grown ? "heating, many fillers and some laboratory growth leave no sign these tests find"
+            : treated ? "heating and many fillers leave no sign these tests find"
+            : "some laboratory growth leaves no sign these tests find";
+        return $"{Capital(leading.Species)} is also found {string.Join(" and ", hidden)}: {looked}{unseen}; for a valuable stone refer it to a qualified laboratory.";
     }
 
     /// <summary>Words joined as a list is read: "natural and synthetic", "natural, treated and synthetic".</summary>
