@@ -82,7 +82,7 @@ public static class BenchWarnings
                 warnings.Add("Optic character undetermined: " + series.UndeterminedReason + ".");
         }
         if (sheet.Sheet.Refractometer is { OverLimit: true } r)
-            warnings.Add($"Over the limit: no stone edge below {r.LiquidLimit.ToString("0.00", CultureInfo.InvariantCulture)}; the index is only known to be higher. SG, dispersion, the thermal probe or a reflectance or prism method can go further.");
+            warnings.Add($"Over the limit: no stone edge below {r.LiquidLimit.ToString("0.00", CultureInfo.InvariantCulture)}; the index is only known to be higher. {OverLimitHelp(sheet.Sheet)} can go further.");
         if (sheet.Sheet.SpecificGravity is { } measured)
             foreach (var h in sheet.Sheet.HeavyLiquids.Where(h => Contradicts(measured, h)))
                 warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");
@@ -229,6 +229,17 @@ public static class BenchWarnings
             : treated ? "heating and many fillers leave no sign these tests find"
             : "some laboratory growth leaves no sign these tests find";
         return $"{Capital(leading.Species)} is also found {string.Join(" and ", hidden)}: {looked}{unseen}; for a valuable stone refer it to a qualified laboratory.";
+    }
+
+    /// <summary>"SG, dispersion, the thermal probe or a reflectance or prism method": the tests that go beyond a refractometer's limit, leaving out those already done.</summary>
+    private static string OverLimitHelp(BenchSheet s)
+    {
+        List<string> help = [];
+        if (s.SpecificGravity is null && s.HeavyLiquids.Count == 0) help.Add("SG");
+        if (s.Dispersion is null) help.Add("dispersion");
+        if (s.ThermalProbe is null) help.Add("the thermal probe");
+        help.Add("a reflectance or prism method");
+        return Capital(help.Count == 1 ? help[0] : string.Join(", ", help.Take(help.Count - 1)) + " or " + help[^1]);
     }
 
     /// <summary>Words joined as a list is read: "natural and synthetic", "natural, treated and synthetic".</summary>

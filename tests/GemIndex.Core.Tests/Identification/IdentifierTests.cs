@@ -542,6 +542,16 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void Over_the_limit_the_answer_names_only_the_tests_not_yet_done()
+    {
+        // Over the limit (common practice: SG, fire, the thermal probe, or a reflectance meter go beyond a refractometer).
+        var over = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Facet, overLimit: true) };
+        Assert.Contains(Engine.Identify(over).Warnings, w => w.EndsWith("SG, dispersion, the thermal probe or a reflectance or prism method can go further.", StringComparison.Ordinal));
+        var done = over with { SpecificGravity = new SpecificGravity(3.52, 0.01), ThermalProbe = ThermalProbeResult.Positive, Dispersion = DispersionObservation.ByEye(DispersionStrength.Strong) };
+        Assert.Contains(Engine.Identify(done).Warnings, w => w.EndsWith("higher. A reflectance or prism method can go further.", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void A_caution_stays_however_few_candidates_are_shown()
     {
         // Two invented entries alike in every reading, the porous one less common: shown one candidate, the answer still
