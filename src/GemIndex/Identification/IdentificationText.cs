@@ -12,6 +12,9 @@ namespace GemIndex.Cli.Identification;
 /// </summary>
 internal static class IdentificationText
 {
+    /// <summary>A species' origins are listed from this share up: below it every origin would read "&lt;0.1 %".</summary>
+    private const double OriginsShownFrom = 0.0005;
+
     /// <summary>Writes the answer; the features looked for under magnification, when given, are listed with their meaning.</summary>
     public static void Write(IdentificationResult result, TextWriter output, MagnificationObservation? magnification = null)
     {
@@ -21,9 +24,10 @@ internal static class IdentificationText
             foreach (var info in look.Present.Order().Select(MagnificationVocabulary.Of)) o.WriteLine($"{info.SeenHow}: {info.Name}: {info.Meaning}");
             foreach (var f in look.Absent.Order()) o.WriteLine($"Looked for, not seen: {MagnificationVocabulary.Of(f).Name}: {MagnificationVocabulary.Of(f).Meaning}");
         }
+        // A species under 0.1 % says nothing more by its origins ("natural <0.1 %, synthetic <0.1 %, …" is clutter).
         foreach (SpeciesResult s in ResultDocument.SpeciesShown(result))
             o.WriteLine($"Species: {s.Species} {ReportNumbers.Percent(s.Confidence)}"
-                + (s.Origins.Count > 0 ? " (" + string.Join(", ", s.Origins.OrderByDescending(x => x.Value).Select(x => $"{BenchWords.Word(x.Key)} {ReportNumbers.Percent(x.Value)}")) + ")" : ""));
+                + (s.Origins.Count > 0 && s.Confidence >= OriginsShownFrom ? " (" + string.Join(", ", s.Origins.OrderByDescending(x => x.Value).Select(x => $"{BenchWords.Word(x.Key)} {ReportNumbers.Percent(x.Value)}")) + ")" : ""));
         if (!result.NoGoodMatch && result.LeadingGroup is { } group)
             o.WriteLine($"Mineral group: {group.Group} {ReportNumbers.Percent(group.Total)} in all ({string.Join(", ", group.Species)})");
         if (result.Series is { } series)

@@ -155,6 +155,18 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void A_species_under_a_tenth_of_a_percent_is_listed_without_its_origins()
+    {
+        // Synthetic moissanite: over the limit, SG 3.22, probe positive, conductive (common practice); diamond trails far
+        // behind, and its origins would all read "<0.1 %".
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--over-limit", "--sg", "3.22", "--thermal-probe", "positive", "--electrical", "conductive", "--colour", "colourless");
+        Assert.True(exit == 0, error);
+        Assert.StartsWith("Species: moissanite >99.9 % (synthetic >99.9 %)", output, StringComparison.Ordinal);
+        Assert.Contains("Species: diamond <0.1 %" + Environment.NewLine, output, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_bad_edge_option_names_the_option()
     {
         using var run = new CommandRun();
