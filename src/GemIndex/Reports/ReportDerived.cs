@@ -122,5 +122,5 @@ internal static class ReportDerived
         : "None suggested: no remaining test would separate the candidates.";
 
     /// <summary>How well the next test separates the leading candidates, in words (1 bit halves the doubt).</summary>
-    private static string Separation(double gainBits) => gainBits >= 1 ? "clearly separate" : gainBits >= 0.3 ? "partly separate" : "slightly separate";
+    public static string Separation(double gainBits) => gainBits >= 1 ? "clearly separate" : gainBits >= 0.3 ? "partly separate" : "slightly separate";
 }

@@ -227,7 +227,8 @@ internal static class ResultText
     public static IReadOnlyList<string> NextTest(NextTestAdvice? advice) => advice is null ? [] :
     [
         $"Next test: {advice.Description}",
-        .. advice.Separates.Count > 1 ? [$"  it separates {Listed(advice.Separates)}"] : Array.Empty<string>(),
+        // How well, in the same words as the reports ("it would partly separate"): a colour call is not settled by a loupe.
+        .. advice.Separates.Count > 1 ? [$"  it would {GemIndex.Cli.Reports.ReportDerived.Separation(advice.GainBits)} {Listed(advice.Separates)}"] : Array.Empty<string>(),
         .. advice.Expectations.Select(e => "  " + e),
     ];
 

@@ -85,6 +85,16 @@ public class ResultTextTests
         Assert.Equal("or spinel 7%", lead[3]);
     }
 
+    [Theory]
+    [InlineData(1.3, "  it would clearly separate flame-fusion synthetic ruby and ruby")]
+    [InlineData(0.5, "  it would partly separate flame-fusion synthetic ruby and ruby")]
+    public void The_next_test_says_how_well_it_would_separate_in_the_reports_words(double bits, string expected)
+    {
+        // The same words as the reports (ReportDerived.Separation): 1 bit halves the doubt.
+        var next = new NextTestAdvice { Test = "absorption_nm", GainBits = bits, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = [] };
+        Assert.Equal(expected, ResultText.NextTest(next)[1]);
+    }
+
     [Fact]
     public void Two_species_of_one_mineral_group_in_the_lead_bring_the_group_s_total()
     {
