@@ -16,8 +16,7 @@ public sealed class MagnificationTable
 {
     private const string ResourceName = "GemIndex.Catalogue.magnification.json";
 
-    private static readonly Lazy<MagnificationTable> EmbeddedTable = new(() =>
-        Read(System.Text.Encoding.UTF8.GetString(CatalogueSchema.EmbeddedBytes(ResourceName))));
+    private static readonly Lazy<MagnificationTable> EmbeddedTable = new(() => Read(ReferenceTableJson.Embedded(ResourceName)));
 
     private MagnificationTable(IReadOnlyDictionary<string, IReadOnlyDictionary<MagnificationFeature, double>> entries) => Entries = entries;
 

@@ -1,4 +1,3 @@
-using System.Text.Json;
 using System.Text.Json.Serialization;
 using GemIndex.Core.Catalogue;
 using GemIndex.Data.Catalogue;
@@ -15,10 +14,7 @@ public sealed class MineralGroupTable
 {
     private const string ResourceName = "GemIndex.Catalogue.mineral-groups.json";
 
-    private static readonly Lazy<MineralGroupTable> EmbeddedTable = new(() =>
-        Read(System.Text.Encoding.UTF8.GetString(CatalogueSchema.EmbeddedBytes(ResourceName))));
-
-    private static readonly JsonSerializerOptions Options = new() { UnmappedMemberHandling = JsonUnmappedMemberHandling.Disallow };
+    private static readonly Lazy<MineralGroupTable> EmbeddedTable = new(() => Read(ReferenceTableJson.Embedded(ResourceName)));
 
     private MineralGroupTable(IReadOnlyDictionary<string, string> bySpecies) => BySpecies = bySpecies;
 
@@ -33,9 +29,7 @@ public sealed class MineralGroupTable
     /// <exception cref="CatalogueFormatException">The text has faults (all of them named).</exception>
     public static MineralGroupTable Read(string json)
     {
-        TableDocument? table;
-        try { table = JsonSerializer.Deserialize<TableDocument>(json, Options); }
-        catch (JsonException e) { throw new CatalogueFormatException([$"mineral-groups.json: not valid: {e.Message}"]); }
+        var table = ReferenceTableJson.Parse<TableDocument>(json, "mineral-groups.json");
         if (table?.Groups is null) throw new CatalogueFormatException(["mineral-groups.json: \"groups\" must be a list."]);
         var keys = new HashSet<string>((table.References ?? []).Select(r => r.Key), StringComparer.Ordinal);
         var errors = new List<string>();

@@ -1,4 +1,3 @@
-using System.Text.Json;
 using System.Text.Json.Serialization;
 using GemIndex.Core.Catalogue;
 using GemIndex.Data.Catalogue;
@@ -15,10 +14,7 @@ public sealed class TradeRuleTable
 {
     private const string ResourceName = "GemIndex.Catalogue.trade-rules.json";
 
-    private static readonly Lazy<TradeRuleTable> EmbeddedTable = new(() =>
-        Read(System.Text.Encoding.UTF8.GetString(CatalogueSchema.EmbeddedBytes(ResourceName))));
-
-    private static readonly JsonSerializerOptions Options = new() { UnmappedMemberHandling = JsonUnmappedMemberHandling.Disallow };
+    private static readonly Lazy<TradeRuleTable> EmbeddedTable = new(() => Read(ReferenceTableJson.Embedded(ResourceName)));
 
     private TradeRuleTable(IReadOnlyDictionary<string, TradeRule> byName, IReadOnlyDictionary<string, TradeRule> bySpecies) =>
         (ByName, BySpecies) = (byName, bySpecies);
@@ -37,9 +33,7 @@ public sealed class TradeRuleTable
     /// <exception cref="CatalogueFormatException">The text has faults (all of them named).</exception>
     public static TradeRuleTable Read(string json)
     {
-        TableDocument? table;
-        try { table = JsonSerializer.Deserialize<TableDocument>(json, Options); }
-        catch (JsonException e) { throw new CatalogueFormatException([$"trade-rules.json: not valid: {e.Message}"]); }
+        var table = ReferenceTableJson.Parse<TableDocument>(json, "trade-rules.json");
         if (table?.Rules is null || table.Entries is null) throw new CatalogueFormatException(["trade-rules.json: \"rules\" and \"entries\" must be lists."]);
         var citations = new Dictionary<string, string>(StringComparer.Ordinal);
         foreach (var r in table.References ?? []) citations.TryAdd(r.Key, r.Citation ?? r.Key);
