@@ -55,7 +55,8 @@ internal static class IdentificationText
         o.WriteLine($"Not in the catalogue: {ReportNumbers.Percent(result.NotInCatalogue)}");
         if (result.NextTest is { } next)
         {
-            o.WriteLine($"Next test: {next.Description} (expected gain {ReportNumbers.Fixed(next.GainBits, "0.00")} bits)");
+            // In words first, as the reports and the text UI say it; the gain in bits for those who weigh it.
+            o.WriteLine($"Next test: {next.Description} — it would {ReportDerived.Separation(next.GainBits)} the leading candidates (expected gain {ReportNumbers.Fixed(next.GainBits, "0.00")} bits)");
             foreach (string e in next.Expectations) o.WriteLine($"  {e}");
         }
         foreach (string w in result.Warnings) o.WriteLine($"Warning: {w}");

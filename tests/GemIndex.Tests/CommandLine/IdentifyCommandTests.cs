@@ -151,6 +151,8 @@ public class IdentifyCommandTests
         var (exit, output, error) = Identify(run, "--spot", "1.61", "--colour", "blue", "--lines", "432");
         Assert.True(exit == 0, error);
         Assert.StartsWith("Species: turquoise", output, StringComparison.Ordinal);
+        // The next test in words first (the reports' words), its gain in bits after.
+        Assert.Matches(@"Next test: .+ — it would (clearly|partly|slightly) separate the leading candidates \(expected gain \d\.\d\d bits\)", output);
         Assert.Contains("strongly for: lines seen at 432 nm; lines at 432 (strong), 420 (weak), 460 (weak) nm listed", output, StringComparison.Ordinal);
     }
 
