@@ -32,6 +32,8 @@ internal static class HelpText
     [
         "The answer leads with the species and its total over the whole catalogue, then how it splits by origin (natural, synthetic, treated, composite, imitation). The candidates follow grouped by species, best first within each; Enter on one opens why.",
         "<1% and >99%: bench readings never make a material impossible or certain, so no probability short of that is shown as 0% or 100%.",
+        "Species of one mineral group (the tourmalines, the garnets, the feldspars, spinel and its kin) that share the answer are given their group's total too (\"tourmaline group 99% in all\"): a bench test may hint which species, a laboratory's analysis settles it.",
+        "Optic character, under readings used: what the rotation series alone says (uniaxial, biaxial or singly refractive, each with its chance), worked out from the edges as read, not from a fixed rule.",
         "Polariscope and dichroscope: leave them blank when no light passes through the stone. A reaction written for an opaque stone is taken as a sign that light passed, which counts against the opaque materials.",
         "Colour: plain words, as you would say them (yellow, bluish green, blue-green). The last hue named is the colour; an -ish or -y word only tones it (bluish green is a green). A word the tool does not know is named in a warning and given no weight.",
         "SG: type it, or weigh the stone in air and in water. With both filled in neither is used until one is cleared; the SG page says both values and whether they agree.",
