@@ -61,7 +61,7 @@ public static class BenchWarnings
     /// <param name="varieties">The leading species' unsettled varieties (<see cref="InseparableVarieties"/>) and the test that best tells them apart.</param>
     /// <param name="group">The species of the leading species' mineral group that the answer leaves open (<see cref="InseparableGroup"/>) and the test that best tells them apart.</param>
     /// <param name="serious">
-    /// Every entry of the whole catalogue holding at least <see cref="Relevant"/>, likeliest first: the cautions (do not
+    /// Every entry of the whole catalogue holding at least <see cref="Relevant"/>, in the answer's order: the cautions (do not
     /// immerse, trade rules, composites, treatments) come from these, so none is lost when fewer candidates are shown;
     /// without it, the candidates shown.
     /// </param>
@@ -82,7 +82,9 @@ public static class BenchWarnings
                 warnings.Add("Optic character undetermined: " + series.UndeterminedReason + ".");
         }
         if (sheet.Sheet.Refractometer is { OverLimit: true } r)
-            warnings.Add($"Over the limit: no stone edge below {r.LiquidLimit.ToString("0.00", CultureInfo.InvariantCulture)}; the index is only known to be higher. {OverLimitHelp(sheet.Sheet)} can go further.");
+            warnings.Add(r.Steps.Count > 0
+                ? $"Over the limit: the high edge lies above the liquid's {r.LiquidLimit.ToString("0.00", CultureInfo.InvariantCulture)}; only the low edge was read, so the highest index is only known to be higher. {OverLimitHelp(sheet.Sheet)} can go further."
+                : $"Over the limit: no stone edge below {r.LiquidLimit.ToString("0.00", CultureInfo.InvariantCulture)}; the index is only known to be higher. {OverLimitHelp(sheet.Sheet)} can go further.");
         if (sheet.Sheet.SpecificGravity is { } measured)
             foreach (var h in sheet.Sheet.HeavyLiquids.Where(h => Contradicts(measured, h)))
                 warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");
@@ -96,9 +98,10 @@ public static class BenchWarnings
         if (sheet.Sheet.SpecificGravity is { StandardUncertainty: > LargeGravityUncertainty } sg)
             warnings.Add($"SG uncertainty ±{sg.StandardUncertainty.ToString("0.00", CultureInfo.InvariantCulture)} is large (a small stone or a coarse balance): SG separates little here.");
         var relevant = serious?.ToList() ?? [.. candidates.Where(c => c.Confidence >= Relevant).Select(c => (c.Material, c.Confidence))];
-        // The reason, not the entry's notes (an emerald's chromium lines say nothing of why it must stay dry).
-        foreach (var c in relevant.Where(c => c.Material.DoNotImmerse))
-            warnings.Add($"Possible {c.Material.Name}: do not immerse (no water or heavy liquids) — a porous, soft or filled stone can take in liquid or be harmed, and its SG in a liquid misleads.");
+        // The reason, not the entry's notes (an emerald's chromium lines say nothing of why it must stay dry); one line
+        // for all such entries, as for the trade rules.
+        if (relevant.Where(c => c.Material.DoNotImmerse).Select(c => c.Material.Name).ToList() is { Count: > 0 } dry)
+            warnings.Add($"Possible {Listed(dry)}: do not immerse (no water or heavy liquids) — a porous, soft or filled stone can take in liquid or be harmed, and its SG in a liquid misleads.");
         // Entries that share a rule (black and golden coral) are named together, the rule said once.
         foreach (var rule in relevant.Where(c => c.Material.TradeRule is not null).GroupBy(c => c.Material.TradeRule!))
             warnings.Add($"Possible {Listed([.. rule.Select(c => c.Material.Name)])}: {rule.Key.Text}. Check the rules where you buy, sell or ship {(rule.Count() > 1 ? "them" : "it")} (a summary, not legal advice).");
@@ -142,7 +145,7 @@ public static class BenchWarnings
                 ? "Assembled stone: a join plane was seen; the refractometer reads only the part it touches, and the SG of a composite means little."
                 : "Possible composite: the refractometer reads only the facet it touches, and the SG of a composite means little; look at the girdle and for a join under magnification.");
         if (relevant.Any(c => c.Material.Origin == OriginClass.Treated))
-            warnings.Add("A treated material is among the candidates: treatments are mostly not detectable with these tests.");
+            warnings.Add("A treated material is among the likely materials (5 % or more): treatments are mostly not detectable with these tests.");
         return warnings;
     }
 
@@ -224,7 +227,8 @@ public static class BenchWarnings
         // Only what the hidden origins can hide: a spinel met laboratory-grown is not told of fillers.
         bool treated = hidden.Contains("treated"), grown = hidden.Contains("laboratory-grown");
         string unseen = leading.Species == "diamond"
-            ? "HPHT and CVD growth and HPHT colour treatment leave no sign these tests find"
+            ? treated && grown ? "HPHT and CVD growth and HPHT colour treatment leave no sign these tests find"
+            : grown ? "HPHT and CVD growth leave no sign these tests find" : "HPHT colour treatment leaves no sign these tests find"
             : treated && grown ? "heating, many fillers and some laboratory growth leave no sign these tests find"
             : treated ? "heating and many fillers leave no sign these tests find"
             : "some laboratory growth leaves no sign these tests find";
@@ -235,7 +239,7 @@ public static class BenchWarnings
     private static string OverLimitHelp(BenchSheet s)
     {
         List<string> help = [];
-        if (s.SpecificGravity is null && s.HeavyLiquids.Count == 0) help.Add("SG");
+        if (s.SpecificGravity is null) help.Add("SG");   // heavy liquids bound it; a measured SG still parts diamond, YAG and CZ
         if (s.Dispersion is null) help.Add("dispersion");
         if (s.ThermalProbe is null) help.Add("the thermal probe");
         help.Add("a reflectance or prism method");

@@ -47,7 +47,9 @@ public sealed record RefractometerObservation
         Method = method;
         Steps = steps;
         Spot = spot;
-        SpotPrecision = readingPrecision ?? DefaultSpotPrecision;
+        // A precision given is the facet's when steps are read (the text UI keeps 0.001 as a saved setting): a spot read
+        // beside them keeps the spot method's own.
+        SpotPrecision = method == RefractometerMethod.Spot ? readingPrecision ?? DefaultSpotPrecision : DefaultSpotPrecision;
         OverLimit = overLimit;
     }
 
@@ -76,8 +78,9 @@ public sealed record RefractometerObservation
     public double ReadingPrecision => Profile.ReadingPrecision;
 
     /// <summary>
-    /// Standard uncertainty of the spot reading: the precision given, else the spot method's own (<see cref="DefaultSpotPrecision"/>)
-    /// even beside facet steps, since a spot is read on a blurred edge by eye whatever else was read on the stone.
+    /// Standard uncertainty of the spot reading: for the spot method the precision given, else its own
+    /// (<see cref="DefaultSpotPrecision"/>); beside facet steps always its own, since a spot is read on a blurred edge by
+    /// eye whatever else was read on the stone, and a precision given there is the facet's.
     /// </summary>
     public double SpotPrecision { get; }
 

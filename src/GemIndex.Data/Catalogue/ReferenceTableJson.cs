@@ -4,8 +4,9 @@ using System.Text.Json.Serialization;
 namespace GemIndex.Data.Catalogue;
 
 /// <summary>
-/// The one way the small reference tables beside the catalogue (trade rules, mineral groups, magnification) are read:
-/// embedded text, parsed strictly (an unknown field is a fault, not ignored), every fault named with its file.
+/// How the small reference tables beside the catalogue are read: the embedded text for all three (trade rules, mineral
+/// groups, magnification), and for the first two a strict parse (an unknown field is a fault, not ignored) with every
+/// fault named with its file; the magnification table walks its JSON itself, feature by feature.
 /// </summary>
 internal static class ReferenceTableJson
 {

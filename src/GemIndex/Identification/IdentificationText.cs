@@ -12,9 +12,6 @@ namespace GemIndex.Cli.Identification;
 /// </summary>
 internal static class IdentificationText
 {
-    /// <summary>A species' origins are listed from this share up: below it every origin would read "&lt;0.1 %".</summary>
-    private const double OriginsShownFrom = 0.0005;
-
     /// <summary>Writes the answer; the features looked for under magnification, when given, are listed with their meaning.</summary>
     public static void Write(IdentificationResult result, TextWriter output, MagnificationObservation? magnification = null)
     {
@@ -27,7 +24,7 @@ internal static class IdentificationText
         // A species under 0.1 % says nothing more by its origins ("natural <0.1 %, synthetic <0.1 %, …" is clutter).
         foreach (SpeciesResult s in ResultDocument.SpeciesShown(result))
             o.WriteLine($"Species: {s.Species} {ReportNumbers.Percent(s.Confidence)}"
-                + (s.Origins.Count > 0 && s.Confidence >= OriginsShownFrom ? " (" + string.Join(", ", s.Origins.OrderByDescending(x => x.Value).Select(x => $"{BenchWords.Word(x.Key)} {ReportNumbers.Percent(x.Value)}")) + ")" : ""));
+                + (s.Origins.Count > 0 && s.Confidence >= ReportNumbers.SmallestShown ? " (" + string.Join(", ", s.Origins.OrderByDescending(x => x.Value).Select(x => $"{BenchWords.Word(x.Key)} {ReportNumbers.Percent(x.Value)}")) + ")" : ""));
         if (!result.NoGoodMatch && result.LeadingGroup is { } group)
             o.WriteLine($"Mineral group: {group.Group} {ReportNumbers.Percent(group.Total)} in all ({string.Join(", ", group.Species)})");
         if (result.Series is { } series)
@@ -36,7 +33,7 @@ internal static class IdentificationText
                 ? $"Optic character, from the readings alone: {ReportDerived.CharacterOdds(character)}"
                 : series.Character is { } c ? $"Optic character: {c.ToString().ToLowerInvariant()}" : "Optic character: undetermined");
             // Beneath the posterior, each pattern's indices are a reading of the edges, not a verdict ("read as …").
-            foreach (var h in series.Interpretations) o.WriteLine(result.SeriesCharacter is null ? $"  {h.Description}" : $"  read as {h.Description}");
+            foreach (var h in series.Interpretations) o.WriteLine(result.SeriesCharacter is null || h.Character is null ? $"  {h.Description}" : $"  read as {h.Description}");
         }
         o.WriteLine(result.NoGoodMatch
             ? "NO GOOD MATCH: nothing in the catalogue fits these readings; the list below is only the least bad."

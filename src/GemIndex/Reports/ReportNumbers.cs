@@ -30,6 +30,9 @@ internal static class ReportNumbers
     public static string WithUncertainty(double value, double standardUncertainty, string format) =>
         $"{Fixed(value, format)} ± {Fixed(standardUncertainty, format)}";
 
+    /// <summary>The smallest probability <see cref="Percent"/> writes as a number (0.1 %, rounded); below it, "&lt;0.1 %".</summary>
+    public const double SmallestShown = 0.0005;
+
     /// <summary>
     /// A probability (0–1) as a percentage, the one percent format of text, Markdown and HTML: 87.3 %. Bench readings
     /// never make a material certain or impossible, so a probability short of 1 or above 0 that would round to 100.0 %
@@ -37,7 +40,7 @@ internal static class ReportNumbers
     /// </summary>
     public static string Percent(double probability) => probability switch
     {
-        > 0 and < 0.0005 => "<0.1 %",
+        > 0 and < SmallestShown => "<0.1 %",
         >= 0.9995 and < 1 => ">99.9 %",
         _ => Fixed(probability * 100, "0.0") + " %",
     };

@@ -514,11 +514,12 @@ public class IdentifierTests
     {
         // A bench may take a quick spot reading and then read a facet (a published mauve taaffeite: spot 1.71, facet
         // 1.713–1.720). The spot is judged at the spot method's σ 0.006 (a 90 % bound of about ±0.01, common practice), not
-        // at the facet's 0.001; a precision the user gives applies to both.
+        // at the facet's 0.001; a precision the user gives beside steps is the facet's, and a spot alone takes the one given.
         var both = new RefractometerObservation(RefractometerMethod.Facet, [new ShadowEdgeStep(0, 1.713, 1.720)], spot: 1.71);
         Assert.Equal(RefractometerObservation.DefaultSpotPrecision, both.SpotPrecision);
         Assert.Equal(RefractometerObservation.DefaultFacetPrecision, both.ReadingPrecision);
-        Assert.Equal(0.002, new RefractometerObservation(RefractometerMethod.Facet, [new ShadowEdgeStep(0, 1.713, 1.720)], spot: 1.71, readingPrecision: 0.002).SpotPrecision);
+        Assert.Equal(RefractometerObservation.DefaultSpotPrecision, new RefractometerObservation(RefractometerMethod.Facet, [new ShadowEdgeStep(0, 1.713, 1.720)], spot: 1.71, readingPrecision: 0.001).SpotPrecision);
+        Assert.Equal(0.004, new RefractometerObservation(RefractometerMethod.Spot, spot: 1.71, readingPrecision: 0.004).SpotPrecision);
         // Opal (n 1.43–1.46 as this test catalogue holds it) with a spot 0.01 below its range beside a step: within the
         // spot's uncertainty, not ten standard deviations out.
         var result = Engine.Identify(new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Facet, [new ShadowEdgeStep(0, 1.45)], spot: 1.42) }, 10, explainTop: 10);
@@ -549,6 +550,12 @@ public class IdentifierTests
         Assert.Contains(Engine.Identify(over).Warnings, w => w.EndsWith("SG, dispersion, the thermal probe or a reflectance or prism method can go further.", StringComparison.Ordinal));
         var done = over with { SpecificGravity = new SpecificGravity(3.52, 0.01), ThermalProbe = ThermalProbeResult.Positive, Dispersion = DispersionObservation.ByEye(DispersionStrength.Strong) };
         Assert.Contains(Engine.Identify(done).Warnings, w => w.EndsWith("higher. A reflectance or prism method can go further.", StringComparison.Ordinal));
+        // A heavy liquid only bounds the SG: a measured one is still offered (it parts diamond 3.52, YAG 4.55 and CZ 5.8).
+        var sank = over with { HeavyLiquids = [new HeavyLiquidResult(new SpecificGravity(3.32), HeavyLiquidOutcome.Sinks)] };
+        Assert.Contains(Engine.Identify(sank).Warnings, w => w.EndsWith("SG, dispersion, the thermal probe or a reflectance or prism method can go further.", StringComparison.Ordinal));
+        // Low edges read, the high edge above the liquid: the warning says so rather than "no stone edge".
+        var lowOnly = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Facet, [new ShadowEdgeStep(0, 1.780), new ShadowEdgeStep(90, 1.781)], overLimit: true) };
+        Assert.Contains(Engine.Identify(lowOnly).Warnings, w => w.StartsWith("Over the limit: the high edge lies above the liquid's 1.79; only the low edge was read", StringComparison.Ordinal));
     }
 
     [Fact]

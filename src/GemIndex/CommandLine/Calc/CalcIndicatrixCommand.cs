@@ -49,7 +49,8 @@ internal static class CalcIndicatrixCommand
 
     private static IndicatrixResult Describe(IndicatrixModel x, double? omega, double? epsilon) => new(x.Character.ToString().ToLowerInvariant(),
         x.Alpha.Value, x.Beta.Value, x.Gamma.Value, x.Birefringence.Value, x.Sign.ToString().ToLowerInvariant(),
-        x.OpticAxialAngle?.Degrees, omega, epsilon, null, null);
+        // A uniaxial crystal's one optic axis: 2V 0°, in the JSON as in the text (the angle about Z would read 180° for a negative one).
+        omega is not null ? 0 : x.OpticAxialAngle?.Degrees, omega, epsilon, null, null);
 
     private static IndicatrixResult Rotate(IndicatrixResult result, IndicatrixModel indicatrix, double[] xyz, double stepDegrees)
     {

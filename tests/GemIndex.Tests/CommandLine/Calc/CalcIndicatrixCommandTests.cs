@@ -26,6 +26,7 @@ public class CalcIndicatrixCommandTests
         var (_, output, _) = Text("indicatrix", "--omega", "1.658", "--epsilon", "1.486");
         Assert.Contains("2V 0° (uniaxial: one optic axis)", output, StringComparison.Ordinal);
         Assert.DoesNotContain("180", output, StringComparison.Ordinal);
+        Assert.Equal(0, Json("indicatrix", "--omega", "1.658", "--epsilon", "1.486").Number("optic_axial_angle_degrees"));
     }
 
     [Fact]
