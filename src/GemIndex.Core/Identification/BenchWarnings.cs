@@ -90,7 +90,10 @@ public static class BenchWarnings
                 warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");
         // A series whose pattern shows one uniaxial sign while the leader has the other: the likelihood may still favour the
         // leader (no entry of the other sign has its indices), but the bench should look again at which edge stays still.
-        if (!noGoodMatch && candidates.Count > 0 && SignClash(sheet.Series, candidates[0].Material) is { } clash) warnings.Add(clash);
+        // Only when the leading species has one sign among the candidates (a user's own entry may give it the other).
+        if (!noGoodMatch && candidates.Count > 0 && SignClash(sheet.Series, candidates[0].Material) is { } clash
+            && candidates.Where(c => c.Material.Species == candidates[0].Material.Species).All(c => c.Material.Sign == candidates[0].Material.Sign))
+            warnings.Add(clash);
         // A reading that speaks strongly against the answer's own leader: most often a misreading, so it is named.
         if (!noGoodMatch && candidates.Count > 0)
             foreach (var reason in (leaderReasons ?? []).Where(r => SpeaksAgainst(r.Test, r.WeightBits, r.Agrees)))

@@ -540,6 +540,14 @@ public class IdentifierTests
         // The usual negative pattern (the high edge still): no warning.
         var usual = swapped with { Refractometer = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770)) };
         Assert.DoesNotContain(Engine.Identify(usual).Warnings, w => w.Contains("pattern", StringComparison.Ordinal));
+        // A user's own corundum entry of the other sign among the candidates (far from these readings, so sapphire still
+        // leads): the species holds both signs, so no warning.
+        Material odd = Make("my odd corundum", "corundum", OpticalIndices.Uniaxial(new(1.600, 1.602), new(1.608, 1.610)), 3.99, 4.01, OpticSign.Positive, new(0.008, 0.008));
+        var mixed = new Identifier([.. Catalogue, odd]).Identify(swapped);
+        Assert.Equal("corundum", mixed.Species[0].Species);
+        Assert.NotEqual(OpticSign.Positive, mixed.Candidates[0].Material.Sign);
+        Assert.Contains(mixed.Candidates, c => c.Material.Name == "my odd corundum");
+        Assert.DoesNotContain(mixed.Warnings, w => w.Contains("pattern", StringComparison.Ordinal));
     }
 
     [Fact]
