@@ -215,7 +215,7 @@ public static class BenchWarnings
 
     /// <summary>
     /// When one origin leads its species but the species is also met treated or laboratory-grown, the answer is only as
-    /// good as the tests done: heating, many fillers and some growth methods (HPHT and CVD diamond among them) leave no
+    /// good as the tests done: many treatments and some growth methods (HPHT and CVD diamond among them) leave no
     /// sign a loupe can find, so the laboratory caution stays even after magnification.
     /// </summary>
     private static string? LaboratoryCaution(SpeciesResult leading, AnalysedSheet sheet)
@@ -232,8 +232,8 @@ public static class BenchWarnings
         string unseen = leading.Species == "diamond"
             ? treated && grown ? "HPHT and CVD growth and HPHT colour treatment leave no sign these tests find"
             : grown ? "HPHT and CVD growth leave no sign these tests find" : "HPHT colour treatment leaves no sign these tests find"
-            : treated && grown ? "heating, many fillers and some laboratory growth leave no sign these tests find"
-            : treated ? "heating and many fillers leave no sign these tests find"
+            : treated && grown ? "many treatments and some laboratory growth leave no sign these tests find"
+            : treated ? "many treatments (heating, filling, dyeing, irradiation, coating) leave no sign these tests find"
             : "some laboratory growth leaves no sign these tests find";
         return $"{Capital(leading.Species)} is also found {string.Join(" and ", hidden)}: {looked}{unseen}; for a valuable stone refer it to a qualified laboratory.";
     }

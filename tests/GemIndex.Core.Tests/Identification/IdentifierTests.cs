@@ -567,6 +567,20 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_species_also_found_treated_is_cautioned_of_treatments_not_of_growth()
+    {
+        // Invented entries: a natural kind and a treated one of the same species that the SG rules out. The caution stays
+        // (a treatment can leave no sign these tests find) and speaks of treatments only, with no laboratory growth.
+        var index = OpticalIndices.SingleIndex(new(1.52, 1.53));
+        Material plain = Make("plain kind", "x", index, 2.50, 2.60);
+        Material treated = Make("treated kind", "x", index, 2.90, 3.00, origin: OriginClass.Treated);
+        var sheet = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.525), SpecificGravity = new SpecificGravity(2.55, 0.01) };
+        var caution = Assert.Single(new Identifier([plain, treated]).Identify(sheet).Warnings, w => w.StartsWith("X is also found", StringComparison.Ordinal));
+        Assert.StartsWith("X is also found treated: many treatments (heating, filling, dyeing, irradiation, coating) leave no sign these tests find", caution);
+        Assert.DoesNotContain("growth", caution);
+    }
+
+    [Fact]
     public void A_caution_stays_however_few_candidates_are_shown()
     {
         // Two invented entries alike in every reading, the porous one less common: shown one candidate, the answer still
