@@ -90,10 +90,7 @@ public static class BenchWarnings
                 warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");
         // A series whose pattern shows one uniaxial sign while the leader has the other: the likelihood may still favour the
         // leader (no entry of the other sign has its indices), but the bench should look again at which edge stays still.
-        // Only when the leading species has one sign among the candidates (a user's own entry may give it the other).
-        if (!noGoodMatch && candidates.Count > 0 && SignClash(sheet.Series, candidates[0].Material) is { } clash
-            && candidates.Where(c => c.Material.Species == candidates[0].Material.Species).All(c => c.Material.Sign == candidates[0].Material.Sign))
-            warnings.Add(clash);
+        if (!noGoodMatch && candidates.Count > 0 && SignClash(sheet.Series, candidates) is { } clash) warnings.Add(clash);
         // A reading that speaks strongly against the answer's own leader: most often a misreading, so it is named.
         if (!noGoodMatch && candidates.Count > 0)
             foreach (var reason in (leaderReasons ?? []).Where(r => SpeaksAgainst(r.Test, r.WeightBits, r.Agrees)))
@@ -157,10 +154,13 @@ public static class BenchWarnings
     /// every reading of the series that has a sign gives the one the leader lacks; else null. A summary of the readings
     /// for the bench to re-check, never evidence: the ranking weighs the raw readings.
     /// </summary>
-    private static string? SignClash(RotationSeriesResult? series, Material leader)
+    private static string? SignClash(RotationSeriesResult? series, IReadOnlyList<RankedCandidate> candidates)
     {
+        Material leader = candidates[0].Material;
         if (series is not { Character: OpticCharacter.Uniaxial } || leader.OpticCharacter != OpticCharacter.Uniaxial
             || leader.Sign is not (OpticSign.Positive or OpticSign.Negative)) return null;
+        // Only when the leading species has one sign among the candidates (a user's own entry may give it the other).
+        if (candidates.Any(c => c.Material.Species == leader.Species && c.Material.Sign != leader.Sign)) return null;
         var signs = series.Interpretations.Where(i => i.Character == OpticCharacter.Uniaxial).Select(i => i.Sign).Distinct().ToList();
         if (signs is not [var shown] || shown == leader.Sign) return null;
         string Word(OpticSign s) => s == OpticSign.Positive ? "positive" : "negative";
@@ -246,12 +246,12 @@ public static class BenchWarnings
         if (s.Dispersion is null) help.Add("dispersion");
         if (s.ThermalProbe is null) help.Add("the thermal probe");
         help.Add("a reflectance or prism method");
-        return Capital(help.Count == 1 ? help[0] : string.Join(", ", help.Take(help.Count - 1)) + " or " + help[^1]);
+        return Capital(Listed(help, "or"));
     }
 
     /// <summary>Words joined as a list is read: "natural and synthetic", "natural, treated and synthetic".</summary>
-    private static string Listed(IReadOnlyList<string> words) =>
-        words.Count < 2 ? string.Join("", words) : string.Join(", ", words.Take(words.Count - 1)) + " and " + words[^1];
+    public static string Listed(IReadOnlyList<string> words, string conjunction = "and") =>
+        words.Count < 2 ? string.Join("", words) : string.Join(", ", words.Take(words.Count - 1)) + $" {conjunction} " + words[^1];
 
     private static string P(double p) => p.ToString("0.00", CultureInfo.InvariantCulture);
 

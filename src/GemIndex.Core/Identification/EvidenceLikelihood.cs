@@ -214,10 +214,8 @@ public static class EvidenceLikelihood
             return;
         }
         var seen = d.Seen!.Value;
-        if (m.Dispersion is not { } value || m.IsOpaque)
+        if (FireToJudge(m) is not { } value)
         {
-            // Fire is judged in light that has passed through the stone: an opaque one shows none whatever its
-            // dispersion, so the word says nothing of it (as the polariscope and dichroscope say nothing of it).
             acc.Add(BenchField.Dispersion, 0.2, 0.2, 1, robust: false);
             if (acc.Explaining) acc.Say($"dispersion {Word(seen)}; {(m.IsOpaque ? "no fire to judge in an opaque stone" : "not known for this material")}");
             return;
@@ -228,6 +226,13 @@ public static class EvidenceLikelihood
         acc.Add(BenchField.Dispersion, f, 0.2, f / row[(int)expected], robust: false);
         if (acc.Explaining) acc.Say($"dispersion {Word(seen)}; nG − nB {F3(value)} ({Word(DispersionBand(value))}) expected");
     }
+
+    /// <summary>
+    /// The dispersion a fire judged by eye is weighed against, or null when the word says nothing of the entry: none
+    /// given, or an opaque entry (fire is judged in light that has passed through the stone, as the polariscope and
+    /// dichroscope need). The likelihood and the next-test advice both ask here.
+    /// </summary>
+    internal static double? FireToJudge(Material m) => m.IsOpaque ? null : m.Dispersion;
 
     /// <summary>The words a bench user gives the dispersion nG − nB (bands of <see cref="DispersionStrength"/>).</summary>
     public static DispersionStrength DispersionBand(double nGminusB) => nGminusB switch

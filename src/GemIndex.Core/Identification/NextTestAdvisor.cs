@@ -369,7 +369,7 @@ public static class NextTestAdvisor
         ? Enumerable.Range(0, 3).Select(o => ((long)o, 1 / 3.0))
         : EvidenceLikelihood.PleochroismRow(m.OpticCharacter, m.Pleochroism).Select((p, o) => ((long)o, p));
 
-    private static IEnumerable<(long, double)> Dispersion(Material m) => m.Dispersion is { } d && !m.IsOpaque
+    private static IEnumerable<(long, double)> Dispersion(Material m) => EvidenceLikelihood.FireToJudge(m) is { } d
         ? EvidenceLikelihood.DispersionRow(EvidenceLikelihood.DispersionBand(d)).Select((p, o) => ((long)o, p))
         : Enumerable.Range(0, 5).Select(o => ((long)o, 0.2));
 

@@ -1,6 +1,4 @@
 using GemIndex.Core.Catalogue;
-using GemIndex.Data.MineralGroups;
-using GemIndex.Data.TradeRules;
 
 namespace GemIndex.Data.Catalogue;
 
@@ -17,7 +15,7 @@ public static class MergedCatalogue
     public static IReadOnlyList<Material> Load(CatalogueLocations locations)
     {
         var shipped = ShippedCatalogue.Load(locations.CacheDirectory);
-        var user = MineralGroupTable.Embedded.Attach(TradeRuleTable.Embedded.Attach(new UserCatalogue(locations.UserCataloguePath).Load()));
+        var user = ShippedCatalogue.WithRulesAndGroups(new UserCatalogue(locations.UserCataloguePath).Load());
         return [.. shipped, .. WithSpeciesLooks(user, shipped)];
     }
 

@@ -58,8 +58,15 @@ public static class ShippedCatalogue
     public static IReadOnlyList<Material> Load(string cacheDirectory)
     {
         using CatalogueStore store = CatalogueStore.Open(EnsureBuilt(cacheDirectory));
-        return MineralGroupTable.Embedded.Attach(TradeRuleTable.Embedded.Attach(MagnificationTable.Embedded.Attach(store.LoadAll())));
+        return WithRulesAndGroups(MagnificationTable.Embedded.Attach(store.LoadAll()));
     }
+
+    /// <summary>
+    /// Entries with their trade rule and mineral group attached (trade-rules.json, mineral-groups.json): the shipped
+    /// entries here, the user's own in <see cref="MergedCatalogue"/>, by the same two tables.
+    /// </summary>
+    internal static IReadOnlyList<Material> WithRulesAndGroups(IReadOnlyList<Material> materials) =>
+        MineralGroupTable.Embedded.Attach(TradeRuleTable.Embedded.Attach(materials));
 
     private static IReadOnlyList<FamilySource> LoadSources() =>
         [.. typeof(ShippedCatalogue).Assembly.GetManifestResourceNames()

@@ -47,9 +47,8 @@ internal static class ResultText
 
     public static string Origin(OriginClass o) => o.ToString().ToLowerInvariant();
 
-    /// <summary>"a, b and c".</summary>
-    public static string Listed(IReadOnlyList<string> words) =>
-        words.Count <= 1 ? string.Concat(words) : string.Join(", ", words.Take(words.Count - 1)) + " and " + words[^1];
+    /// <summary>"a, b and c" (<see cref="BenchWarnings.Listed"/>, the one list-in-words).</summary>
+    public static string Listed(IReadOnlyList<string> words) => BenchWarnings.Listed(words);
 
     /// <summary>
     /// The lead: the species best supported and its total over the whole catalogue, how the total splits by origin,
