@@ -95,7 +95,7 @@ public class OpticCharacterPosteriorTests
     private static OpticCharacterPosterior MonteCarlo(SeriesObservation series, int samples, int seed)
     {
         var random = new Random(seed);
-        double sd = Math.Sqrt(series.NoiseVariance), levelLow = series.LowestReading - 0.01, levelHigh = series.HighestReading + 0.01;
+        double levelLow = series.LowestReading - 0.01, levelHigh = series.HighestReading + 0.01;
         double spread = series.HighestReading - series.LowestReading;
         double bLow = Math.Max(0, spread - 0.002), bHigh = spread + 0.006 + (series.HighestReading > series.LiquidLimit - 0.03 ? 0.02 : 0);
         double Likelihood(double alpha, double beta, double gamma)
@@ -105,18 +105,8 @@ public class OpticCharacterPosteriorTests
                 : gamma - beta < 1e-9 ? IndicatrixModel.Uniaxial(new RefractiveIndex(gamma), new RefractiveIndex(alpha))   // negative: ω = β = γ, ε = α
                 : IndicatrixModel.Biaxial(new RefractiveIndex(alpha), new RefractiveIndex(beta), new RefractiveIndex(gamma));
             var normal = Direction.RandomUniform(random);
-            double start = random.NextDouble() * 180, log = 0;
-            for (int k = 0; k < series.Count; k++)
-            {
-                var section = indicatrix.Section(normal, Angle.FromDegrees(start + Math.Atan2(series.Sin[k], series.Cos[k]) * 180 / Math.PI));
-                double low = section.Low.Value, high = section.High.Value, two = SectionLikelihood.SeenAsTwo(high - low, Math.Sqrt(2 * series.NoiseVariance));
-                double p = series.TwoEdges[k]
-                    ? two * Normal(series.Low[k] - low, sd) * Normal(series.High[k] - high, sd)
-                    : (1 - two) * Normal(series.Low[k] - (low + high) / 2, sd)
-                      + RangeLikelihood.Phi((high - (series.LiquidLimit - SeriesObservation.LiquidEdgeMargin)) / sd) * Normal(series.Low[k] - low, sd);
-                log += Math.Log(Math.Max(p, 1e-300));
-            }
-            return Math.Exp(log);
+            double start = random.NextDouble() * 180;
+            return Math.Exp(BruteForceReadings.LogLikelihood(indicatrix, normal, start, series));
         }
         double Level() => levelLow + random.NextDouble() * (levelHigh - levelLow);
         double B() => bLow + random.NextDouble() * (bHigh - bLow);
@@ -138,5 +128,4 @@ public class OpticCharacterPosteriorTests
         return new(part[0] / total, part[1] / total, part[2] / total, part[3] / total);
     }
 
-    private static double Normal(double x, double sd) => RangeLikelihood.PhiDensity(x / sd) / sd;
 }

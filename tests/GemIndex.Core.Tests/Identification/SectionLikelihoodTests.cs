@@ -61,7 +61,6 @@ public class SectionLikelihoodTests(ITestOutputHelper output)
     {
         var random = new Random(seed);
         var prior = IndicatrixPrior.For(m, RefractometerEvidence.BirefringenceRange(m));
-        double noise = series.NoiseVariance, sd = Math.Sqrt(noise);
         double shiftSd = Math.Sqrt(SectionLikelihood.OffsetVariance(series, 0));
         var values = new double[samples];
         for (int n = 0; n < samples; n++)
@@ -85,18 +84,7 @@ public class SectionLikelihoodTests(ITestOutputHelper output)
                 : Indicatrix.Uniaxial(new RefractiveIndex(level), new RefractiveIndex(level + family.Sign * b));
             var normal = Direction.RandomUniform(random);
             double start = random.NextDouble() * 180;
-            double log = Math.Log(shape.Weight * width);
-            for (int k = 0; k < series.Count; k++)
-            {
-                var section = indicatrix.Section(normal, Angle.FromDegrees(start + Math.Atan2(series.Sin[k], series.Cos[k]) * 180 / Math.PI));
-                double low = section.Low.Value, high = section.High.Value, two = SectionLikelihood.SeenAsTwo(high - low, Math.Sqrt(2 * noise));
-                double p = series.TwoEdges[k]
-                    ? two * Normal(series.Low[k] - low, sd) * Normal(series.High[k] - high, sd)
-                    : (1 - two) * Normal(series.Low[k] - (low + high) / 2, sd)
-                      + RangeLikelihood.Phi((high - (Limit - SeriesObservation.LiquidEdgeMargin)) / sd) * Normal(series.Low[k] - low, sd);
-                log += Math.Log(Math.Max(p, 1e-300));
-            }
-            values[n] = log;
+            values[n] = Math.Log(shape.Weight * width) + BruteForceReadings.LogLikelihood(indicatrix, normal, start, series);
         }
         double max = values.Max();
         double mean = values.Average(v => Math.Exp(v - max));
@@ -115,7 +103,6 @@ public class SectionLikelihoodTests(ITestOutputHelper output)
     private static double Gaussian(Random random) =>
         Math.Sqrt(-2 * Math.Log(1 - random.NextDouble())) * Math.Cos(2 * Math.PI * random.NextDouble());
 
-    private static double Normal(double x, double sd) => RangeLikelihood.PhiDensity(x / sd) / sd;
 
     public static TheoryData<string, double, double, double, double> Stones => new()
     {
