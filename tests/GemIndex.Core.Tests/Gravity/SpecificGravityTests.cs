@@ -18,7 +18,7 @@ public class SpecificGravityTests
     [Fact]
     public void A_careful_weighing_shows_a_third_decimal_rather_than_plus_or_minus_nothing()
     {
-        // 5.210 ct in air and 3.312 ct in water, each ± 0.002 ct: the uncorrected ratio 2.745, σ about 0.0034 (first-order
+        // An invented weighing (a display check, no reference value): 5.210 ct in air and 3.312 ct in water, each ± 0.002 ct: the uncorrected ratio 2.745, σ about 0.0034 (first-order
         // propagation; the water's density at 20 °C would give 2.740).
         Assert.Equal("2.745 ± 0.003", new SpecificGravity(2.745, 0.0034).ToString());
         Assert.Equal("2.75 ± 0.01", new SpecificGravity(2.745, 0.01).ToString());

@@ -262,7 +262,7 @@ public class EvidenceModelTests
     [Fact]
     public void A_range_narrower_than_the_shown_decimals_reads_as_one_number()
     {
-        // Silica glass SG 2.200–2.203 (the catalogue's entry) shown to two decimals.
+        // Silica glass SG 2.200–2.203 (the catalogue's entry, from memory) shown to two decimals: a display check.
         Assert.Equal("2.20", new PropertyRange(2.2, 2.203).ToString("0.00"));
         Assert.Equal("2.200–2.203", new PropertyRange(2.2, 2.203).ToString("0.000"));
         Assert.Equal("lies 0.10 below 2.20 (over 10σ)", EvidenceLikelihood.Where(2.1, new PropertyRange(2.2, 2.203), 0.01, "0.00"));

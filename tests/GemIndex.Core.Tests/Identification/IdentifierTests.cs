@@ -558,7 +558,7 @@ public class IdentifierTests
         Assert.Contains(Engine.Identify(over).Warnings, w => w.EndsWith("SG, dispersion, the thermal probe or a reflectance or prism method can go further.", StringComparison.Ordinal));
         var done = over with { SpecificGravity = new SpecificGravity(3.52, 0.01), ThermalProbe = ThermalProbeResult.Positive, Dispersion = DispersionObservation.ByEye(DispersionStrength.Strong) };
         Assert.Contains(Engine.Identify(done).Warnings, w => w.EndsWith("higher. A reflectance or prism method can go further.", StringComparison.Ordinal));
-        // A heavy liquid only bounds the SG: a measured one is still offered (it parts diamond 3.52, YAG 4.55 and CZ 5.8).
+        // A heavy liquid only bounds the SG: a measured one is still offered (it parts diamond 3.52, YAG 4.55 and CZ 5.8, from memory).
         var sank = over with { HeavyLiquids = [new HeavyLiquidResult(new SpecificGravity(3.32), HeavyLiquidOutcome.Sinks)] };
         Assert.Contains(Engine.Identify(sank).Warnings, w => w.EndsWith("SG, dispersion, the thermal probe or a reflectance or prism method can go further.", StringComparison.Ordinal));
         // Low edges read, the high edge above the liquid: the warning says so rather than "no stone edge".
