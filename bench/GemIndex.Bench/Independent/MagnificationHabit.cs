@@ -10,7 +10,7 @@ internal sealed record MagnificationHabit
     /// <summary>The property table's species name.</summary>
     public required string Species { get; init; }
 
-    /// <summary>The property table's origin word: natural, synthetic, treated, imitation or composite.</summary>
+    /// <summary>The property table's origin word: natural, synthetic, treated, imitation, composite or cultured.</summary>
     public required string Origin { get; init; }
 
     /// <summary>How the stone was grown or treated ("flame fusion", "flux", "glass filled", "doublet"); "natural" for untouched stones.</summary>

@@ -532,10 +532,10 @@ internal static partial class PropertyTable
             SpecificGravity = new(2.60, 2.85),
             UvLong = [new("weak", .4), new("moderate", .4), new("inert", .2)],
             Hues = [new("white", .6), new("black", .15), new("yellow", .1), new("pink", .1), new("grey", .05)],
-            Origins = [new("natural", .85), new("treated", .15)],
+            Origins = [new("cultured", .8), new("natural", .05), new("treated", .15)],
             Citation = "sco.wikipedia.org 'Pairl' infobox (cites Schumann, Gemstones of the World; Lazzarelli, Blue Chart): RI 1.52–1.66, black pearl 1.53–1.69, birefringence 0.156, SG 2.60–2.85, "
                 + "white pearls light blue to light yellow in UV, black pink to orange-red; blog.bhoma.com pearl: RI 1.530–1.685, SG 2.6–2.78; mgc-labs.ru pearl: aragonite and conchiolin, SG 2.60–2.85",
-            Judgement = "cultured pearls counted as natural (nacre grown by the mollusc); β's place from aragonite (gemsociety.org aragonite: α 1.530, β 1.681, γ 1.685); the spot read at either end; "
+            Judgement = "cultured pearls most pearls at a bench, natural ones few (shares: judgement; the nacre alike, so every property drawn alike); β's place from aragonite (gemsociety.org aragonite: α 1.530, β 1.681, γ 1.685); the spot read at either end; "
                 + "not immersed (common practice for pearls at a general bench); UV strengths, dyed or irradiated share, hue weights: judgement",
         },
         new()

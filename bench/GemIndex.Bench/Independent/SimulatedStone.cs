@@ -5,7 +5,7 @@ internal sealed record SimulatedStone
 {
     public required SpeciesProperties Species { get; init; }
 
-    /// <summary>"natural", "synthetic", "treated", "imitation" or "composite".</summary>
+    /// <summary>"natural", "synthetic", "treated", "imitation", "composite" or "cultured".</summary>
     public required string Origin { get; init; }
 
     /// <summary>The hue drawn for the stone (the colour word written, when written).</summary>

@@ -49,7 +49,7 @@ internal sealed record SpeciesProperties
 
     public required IReadOnlyList<Weighted> Hues { get; init; }
 
-    /// <summary>Share of natural, synthetic, treated, imitation, composite stones of the species at a bench.</summary>
+    /// <summary>Share of natural, synthetic, treated, imitation, composite and cultured stones of the species at a bench.</summary>
     public IReadOnlyList<Weighted> Origins { get; init; } = [new("natural", 1)];
 
     /// <summary>How often the species reaches a general bench, relative (judgement).</summary>

@@ -23,7 +23,7 @@ public sealed record Material
     /// <summary>The family file this entry came from ("corundum", "glass-and-plastics").</summary>
     public string Family { get; init; } = "";
 
-    /// <summary>Natural, synthetic, imitation, treated or composite.</summary>
+    /// <summary>Natural, synthetic, imitation, treated, composite or cultured.</summary>
     public required OriginClass Origin { get; init; }
 
     /// <summary>Crystal system, or amorphous.</summary>

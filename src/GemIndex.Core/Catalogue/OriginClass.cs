@@ -17,4 +17,10 @@ public enum OriginClass
 
     /// <summary>Made of two or more parts joined together (doublets, triplets).</summary>
     Composite,
+
+    /// <summary>
+    /// Grown by a living animal after a person started the growth: cultured pearls. The trade names them apart from
+    /// natural pearls, and no bench test here tells the two apart (a laboratory's X-radiography does).
+    /// </summary>
+    Cultured,
 }

@@ -168,11 +168,12 @@ public static class BenchWarnings
         return $"The readings show a uniaxial {Word(shown)} pattern (the {still} edge stays still as the stone turns), but {leader.Species} is uniaxial {Word(leader.Sign)}: re-check which edge stays still, or the stone is not {leader.Species}. The answer weighs the readings as read.";
     }
 
-    /// <summary>The species' origins that each hold at least <see cref="OriginShare"/> of it, when there are two or more and the species is relevant; else null.</summary>
+    /// <summary>The species' origins that each hold at least <see cref="OriginShare"/> of it, likeliest first, when there are two or more and the species is relevant; else null.</summary>
     internal static IReadOnlyList<OriginClass>? Inseparable(SpeciesResult species)
     {
         if (species.Confidence < Relevant) return null;
-        var held = species.Origins.Where(o => o.Value >= OriginShare * species.Confidence).Select(o => o.Key).ToList();
+        // Likeliest first, as the species line lists them.
+        var held = species.Origins.Where(o => o.Value >= OriginShare * species.Confidence).OrderByDescending(o => o.Value).Select(o => o.Key).ToList();
         return held.Count < 2 ? null : held;
     }
 
@@ -223,18 +224,25 @@ public static class BenchWarnings
         if (leading.Confidence < Relevant) return null;
         var held = leading.Origins.Where(o => o.Value >= OriginShare * leading.Confidence).Select(o => o.Key).ToList();
         if (held.Count != 1) return null; // several origins held: the warning above already says they cannot be separated
-        var hidden = leading.Origins.Keys.Where(o => o != held[0] && o is OriginClass.Treated or OriginClass.Synthetic)
-            .Select(o => o == OriginClass.Treated ? "treated" : "laboratory-grown").ToList();
+        var hidden = leading.Origins.Keys.Where(o => o != held[0] && o is OriginClass.Treated or OriginClass.Synthetic or OriginClass.Cultured)
+            .Select(o => o switch { OriginClass.Treated => "treated", OriginClass.Synthetic => "laboratory-grown", _ => "cultured" }).ToList();
         if (hidden.Count == 0) return null;
         string looked = sheet.Sheet.Magnification is { IsEmpty: false } ? "even with the magnification recorded, " : "";
         // Only what the hidden origins can hide: a spinel met laboratory-grown is not told of fillers.
-        bool treated = hidden.Contains("treated"), grown = hidden.Contains("laboratory-grown");
-        string unseen = leading.Species == "diamond"
-            ? treated && grown ? "HPHT and CVD growth and HPHT colour treatment leave no sign these tests find"
-            : grown ? "HPHT and CVD growth leave no sign these tests find" : "HPHT colour treatment leaves no sign these tests find"
-            : treated && grown ? "many treatments and some laboratory growth leave no sign these tests find"
-            : treated ? "many treatments (heating, filling, dyeing, irradiation, coating) leave no sign these tests find"
-            : "some laboratory growth leaves no sign these tests find";
+        bool treated = hidden.Contains("treated"), grown = hidden.Contains("laboratory-grown"), cultured = hidden.Contains("cultured");
+        string unseen;
+        if (leading.Species == "diamond")
+            unseen = treated && grown ? "HPHT and CVD growth and HPHT colour treatment leave no sign these tests find"
+                : grown ? "HPHT and CVD growth leave no sign these tests find" : "HPHT colour treatment leaves no sign these tests find";
+        else
+        {
+            var hiders = new List<string>();
+            if (treated) hiders.Add(hidden.Count == 1 ? "many treatments (heating, filling, dyeing, irradiation, coating)" : "many treatments");
+            if (grown) hiders.Add("some laboratory growth");
+            // A pearl's nucleus or its lack shows on X-radiographs, not at the bench.
+            if (cultured) hiders.Add("culturing");
+            unseen = $"{Listed(hiders, "and")} {(treated || hiders.Count > 1 ? "leave" : "leaves")} no sign these tests find";
+        }
         return $"{Capital(leading.Species)} is also found {string.Join(" and ", hidden)}: {looked}{unseen}; for a valuable stone refer it to a qualified laboratory.";
     }
 

@@ -39,8 +39,8 @@ public sealed class MagnificationProfile
 
     /// <summary>
     /// Defaults by origin (common practice): natural stones usually show nature's inclusions and never melt or flux
-    /// growth; synthetics of unstated method may show any growth signature; treated stones keep their natural
-    /// inclusions; imitations (glass, plastic) often hold gas bubbles; assembled stones show their join.
+    /// growth; synthetics of unstated method may show any growth signature; treated stones and cultured pearls keep
+    /// nature's inclusions; imitations (glass, plastic) often hold gas bubbles; assembled stones show their join.
     /// </summary>
     private static double DefaultFor(OriginClass origin, MagnificationFeature feature)
     {
@@ -50,7 +50,7 @@ public sealed class MagnificationProfile
             or MagnificationFeature.ColourBanding;
         return origin switch
         {
-            OriginClass.Natural or OriginClass.Treated when natureInclusion => feature switch
+            OriginClass.Natural or OriginClass.Treated or OriginClass.Cultured when natureInclusion => feature switch
             {
                 MagnificationFeature.CrystalInclusions => 0.4,
                 MagnificationFeature.HealedFractures => 0.3,

@@ -71,12 +71,12 @@ public sealed class TradeRuleTable
     }
 
     /// <summary>
-    /// The rule that applies to an entry: (shipped entries) its own by name, else (natural or treated entries) its
+    /// The rule that applies to an entry: (shipped entries) its own by name, else (natural, treated or cultured entries) its
     /// species' rule; an imitation or a laboratory-grown entry filed under the species is not the protected animal.
     /// </summary>
     public TradeRule? For(Material material) =>
         !material.IsUserEntry && ByName.TryGetValue(material.Name, out var byName) ? byName
-        : material.Origin is OriginClass.Natural or OriginClass.Treated && BySpecies.TryGetValue(material.Species, out var bySpecies) ? bySpecies : null;
+        : material.Origin is OriginClass.Natural or OriginClass.Treated or OriginClass.Cultured && BySpecies.TryGetValue(material.Species, out var bySpecies) ? bySpecies : null;
 
     /// <summary>The materials with their trade rules attached.</summary>
     public IReadOnlyList<Material> Attach(IReadOnlyList<Material> materials) =>

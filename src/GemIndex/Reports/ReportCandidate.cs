@@ -6,7 +6,7 @@ namespace GemIndex.Cli.Reports;
 /// <param name="Rank">1 for the best.</param>
 /// <param name="Name">The catalogue name.</param>
 /// <param name="Species">Its species (or, for a man-made material, the trade's plain name).</param>
-/// <param name="Origin">natural, synthetic, imitation, treated or composite.</param>
+/// <param name="Origin">natural, synthetic, imitation, treated, composite or cultured.</param>
 /// <param name="Confidence">Posterior probability, 0–1.</param>
 /// <param name="Fit">How plausible the evidence is for this material on its own, 0–1.</param>
 /// <param name="Reasons">Each test's contribution (filled for the explained candidates only: <see cref="LeadingCandidates"/>).</param>

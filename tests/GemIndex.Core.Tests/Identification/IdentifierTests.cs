@@ -581,6 +581,22 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_species_also_found_cultured_is_cautioned_of_culturing()
+    {
+        // Invented entries: a natural kind, and a cultured and a treated one of the same species that the SG rules out.
+        // Both hidden origins are named, in the order of the species' origins, with what can hide them.
+        var index = OpticalIndices.SingleIndex(new(1.52, 1.53));
+        Material plain = Make("plain kind", "x", index, 2.50, 2.60);
+        Material cultured = Make("cultured kind", "x", index, 2.90, 3.00, origin: OriginClass.Cultured);
+        Material treated = Make("treated kind", "x", index, 2.90, 3.00, origin: OriginClass.Treated);
+        var sheet = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.525), SpecificGravity = new SpecificGravity(2.55, 0.01) };
+        var caution = Assert.Single(new Identifier([plain, cultured, treated]).Identify(sheet).Warnings, w => w.StartsWith("X is also found", StringComparison.Ordinal));
+        Assert.StartsWith("X is also found cultured and treated: many treatments and culturing leave no sign these tests find", caution);
+        var onlyCultured = Assert.Single(new Identifier([plain, cultured]).Identify(sheet).Warnings, w => w.StartsWith("X is also found", StringComparison.Ordinal));
+        Assert.StartsWith("X is also found cultured: culturing leaves no sign these tests find", onlyCultured);
+    }
+
+    [Fact]
     public void A_caution_stays_however_few_candidates_are_shown()
     {
         // Two invented entries alike in every reading, the porous one less common: shown one candidate, the answer still

@@ -137,7 +137,7 @@ public class FamilyFileReaderTests
     [Fact]
     public void An_unknown_word_names_the_file_the_species_the_variety_the_field_and_the_allowed_words()
     {
-        Assert.Equal("fam.json: species 'quartz', variety 't2', field origin: 'naturel' is not one of natural, synthetic, imitation, treated, composite",
+        Assert.Equal("fam.json: species 'quartz', variety 't2', field origin: 'naturel' is not one of natural, synthetic, imitation, treated, composite, cultured",
             ErrorOf(With("\"variety\": \"amethyst\", \"origin\": \"natural\"", "\"variety\": \"amethyst\", \"origin\": \"naturel\"")));
     }
 

@@ -47,7 +47,7 @@ public class UserCatalogueTests
         [
             "line 3, field n_min: '1,50' has a comma: use a dot as the decimal mark (1.544)",
             "line 4, field sg_min/sg_max: specific gravity 2.3–40 is outside the physical range 0.5 to 25 (both excluded)",
-            "line 5, field origin: 'imitaton' is not one of natural, synthetic, imitation, treated, composite",
+            "line 5, field origin: 'imitaton' is not one of natural, synthetic, imitation, treated, composite, cultured",
         ], result.Errors.Select(e => e.ToString()));
         Assert.False(File.Exists(user.Path));
         Assert.Empty(user.Load());

@@ -30,7 +30,7 @@ internal static class HelpText
     /// <summary>How to read the answer and the rules a user meets on the pages.</summary>
     public static IReadOnlyList<string> Reading { get; } =
     [
-        "The answer leads with the species and its total over the whole catalogue, then how it splits by origin (natural, synthetic, treated, composite, imitation). The candidates follow grouped by species, best first within each; Enter on one opens why.",
+        "The answer leads with the species and its total over the whole catalogue, then how it splits by origin (natural, synthetic, treated, composite, imitation, cultured). The candidates follow grouped by species, best first within each; Enter on one opens why.",
         "<1% and >99%: bench readings never make a material impossible or certain, so no probability short of that is shown as 0% or 100%.",
         "Species of one mineral group (the tourmalines, the garnets, the feldspars, spinel and its kin) that share the answer are given their group's total too (\"tourmaline group 99% in all\"): a bench test may hint which species, a laboratory's analysis settles it.",
         "Optic character, under readings used: what the rotation series alone says (uniaxial, biaxial or singly refractive, each with its chance), worked out from the edges as read, not from a fixed rule.",
