@@ -48,10 +48,11 @@ internal static class MarkdownReport
     {
         Section(md, "Candidates");
         if (report.NoGoodMatch) md.Append("**").Append(Escape(StoneReport.NoGoodMatchStatement)).AppendLine("**").AppendLine();
-        md.AppendLine("| Rank | Material | Species | Origin | Confidence | Agreement with the entry |").AppendLine("|---:|---|---|---|---:|---:|");
+        md.AppendLine("| Rank | Material | Species | Origin | Confidence | Fit with the entry |").AppendLine("|---:|---|---|---|---:|---:|");
         foreach (var c in report.Candidates)
-            md.AppendLine($"| {c.Rank} | {Escape(c.Name)} | {Escape(c.Species)} | {Escape(c.Origin)} | {ReportNumbers.Percent(c.Confidence)} | {ReportNumbers.Fixed(c.Fit, "0.000")} |");
-        md.AppendLine().Append("Not in the catalogue: ").AppendLine(ReportNumbers.Percent(report.NotInCatalogue)).AppendLine();
+            md.AppendLine($"| {c.Rank} | {Escape(c.Name)} | {Escape(c.Species)} | {Escape(c.Origin)} | {ReportNumbers.Percent(c.Confidence)} | {ReportNumbers.Fixed(c.Fit, "0.00")} |");
+        md.AppendLine().Append("Fit with the entry: ").Append(StoneReport.FitMeaning).AppendLine(".").AppendLine();
+        md.Append("Not in the catalogue: ").AppendLine(ReportNumbers.Percent(report.NotInCatalogue)).AppendLine();
         foreach (var c in report.Candidates.Where(c => c.Reasons.Count > 0))
         {
             md.Append("Reasons for ").Append(Escape(c.Name)).AppendLine(":").AppendLine();

@@ -14,6 +14,9 @@ namespace GemIndex.Cli.Reports;
 /// </summary>
 internal sealed record StoneReport
 {
+    /// <summary>What a candidate's fit means, in every front end that explains it.</summary>
+    public const string FitMeaning = "1 = every reading typical of the entry, 0 = none";
+
     /// <summary>What the report says when nothing in the catalogue fits.</summary>
     public const string NoGoodMatchStatement =
         "No good match: no catalogue material fits these readings well. The stone may be something the catalogue does not hold, " +

@@ -66,6 +66,8 @@ public class StoneReportTests
         foreach (string caution in ReportCautions.All) Assert.Contains(format == "html" ? HtmlReport.E(caution) : caution, text);
         Assert.Contains("1.553", text); // a high edge of the rotation series
         Assert.Contains(format == "json" ? "weight_carats" : "2.65 ct", text);
+        // The fit is named as everywhere else and, in a printed report, said what it means.
+        if (format != "json") Assert.Contains($"Fit with the entry: {StoneReport.FitMeaning}.", text);
     }
 
     [Fact]

@@ -14,7 +14,7 @@ internal static class CandidateDetail
     [
         $"{rank}. {c.Material.Name} ({c.Material.Species}, {ResultText.Origin(c.Material.Origin)})",
         $"  probability {ResultText.Percent(c.Confidence)} {ResultText.Bar(c.Confidence)}",
-        $"  agreement with the catalogue entry {Fixed(c.Fit, "0.00")} (1 = every reading typical of it, 0 = none)",
+        $"  fit with the catalogue entry {Fixed(c.Fit, "0.00")} ({GemIndex.Cli.Reports.StoneReport.FitMeaning})",
         "",
         "WHY (weight of evidence in bits: + for this material, − against, 1 bit = twice as likely)",
         .. c.Reasons.Count == 0 ? ["  (reasons are worked out for the leading candidates only)"]
