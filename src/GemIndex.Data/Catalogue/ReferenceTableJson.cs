@@ -4,9 +4,8 @@ using System.Text.Json.Serialization;
 namespace GemIndex.Data.Catalogue;
 
 /// <summary>
-/// How the small reference tables beside the catalogue are read: the embedded text for all three (trade rules, mineral
-/// groups, magnification), and for the first two a strict parse (an unknown field is a fault, not ignored) with every
-/// fault named with its file; the magnification table walks its JSON itself, feature by feature.
+/// How the small reference tables beside the catalogue are read (trade rules, mineral groups, magnification): the
+/// embedded text, and a strict parse (an unknown field is a fault, not ignored) with every fault named with its file.
 /// </summary>
 internal static class ReferenceTableJson
 {

@@ -1,4 +1,4 @@
-using System.Text.Json;
+using System.Text.Json.Serialization;
 using GemIndex.Core.Catalogue;
 using GemIndex.Core.Magnification;
 using GemIndex.Data.Catalogue;
@@ -11,6 +11,7 @@ namespace GemIndex.Data.Magnification;
 /// loads, keyed by entry name (the SQLite schema does not hold it); every other entry keeps its origin's defaults. An
 /// entry may give <c>"like": "other entry"</c> instead of its features (a heated stone keeps its natural sibling's
 /// inclusions) and takes that entry's listed features; the other entry must list features of its own (no chains).
+/// Read strictly, as the other reference tables are: a field the table does not know is a fault, not ignored.
 /// </summary>
 public sealed class MagnificationTable
 {
@@ -31,59 +32,47 @@ public sealed class MagnificationTable
     /// <exception cref="CatalogueFormatException">The text has faults (all of them named).</exception>
     public static MagnificationTable Read(string json)
     {
+        var table = ReferenceTableJson.Parse<TableDocument>(json, "magnification.json");
+        if (table?.Entries is null) throw new CatalogueFormatException(["magnification.json: \"entries\" must be a list."]);
+        var keys = (table.References ?? []).Select(r => r.Key).ToHashSet(StringComparer.Ordinal);
         var errors = new List<string>();
         var entries = new Dictionary<string, IReadOnlyDictionary<MagnificationFeature, double>>(StringComparer.Ordinal);
-        try
+        var names = new HashSet<string>(StringComparer.Ordinal);
+        var likes = new List<(string At, string Name, string Sibling)>();
+        for (int index = 0; index < table.Entries.Length; index++)
         {
-            using var doc = JsonDocument.Parse(json);
-            var keys = doc.RootElement.TryGetProperty("references", out var refs) && refs.ValueKind == JsonValueKind.Array
-                ? refs.EnumerateArray().Where(r => r.ValueKind == JsonValueKind.Object && r.TryGetProperty("key", out _))
-                    .Select(r => r.GetProperty("key").GetString() ?? "").ToHashSet(StringComparer.Ordinal)
-                : [];
-            if (!doc.RootElement.TryGetProperty("entries", out var list) || list.ValueKind != JsonValueKind.Array)
-                throw new CatalogueFormatException(["magnification.json: \"entries\" must be a list."]);
-            int index = 0;
-            var names = new HashSet<string>(StringComparer.Ordinal);
-            var likes = new List<(string At, string Name, string Sibling)>();
-            foreach (var entry in list.EnumerateArray())
+            var entry = table.Entries[index];
+            string at = $"magnification.json: entries[{index}]";
+            if (entry is null || string.IsNullOrWhiteSpace(entry.Name)) { errors.Add($"{at}: must be an object with a \"name\"."); continue; }
+            string name = entry.Name;
+            at += $" ({name})";
+            if (entry.Source is null || !keys.Contains(entry.Source)) errors.Add($"{at}: \"source\" must be one of the file's reference keys.");
+            if (entry.Like is not null)
             {
-                string at = $"magnification.json: entries[{index++}]";
-                if (entry.ValueKind != JsonValueKind.Object || !entry.TryGetProperty("name", out var nameElement) || nameElement.ValueKind != JsonValueKind.String)
-                { errors.Add($"{at}: must be an object with a \"name\"."); continue; }
-                string name = nameElement.GetString()!;
-                at += $" ({name})";
-                if (!entry.TryGetProperty("source", out var source) || source.ValueKind != JsonValueKind.String || !keys.Contains(source.GetString()!))
-                    errors.Add($"{at}: \"source\" must be one of the file's reference keys.");
-                if (entry.TryGetProperty("like", out var like))
-                {
-                    // A treated stone that keeps its natural sibling's inclusions takes the sibling's listed features.
-                    if (like.ValueKind != JsonValueKind.String || entry.TryGetProperty("features", out _))
-                        errors.Add($"{at}: \"like\" must be the name of another entry of the table, given instead of \"features\".");
-                    else if (!names.Add(name)) errors.Add($"{at}: the entry is named twice.");
-                    else likes.Add((at, name, like.GetString()!));
-                    continue;
-                }
-                if (!entry.TryGetProperty("features", out var features) || features.ValueKind != JsonValueKind.Object)
-                { errors.Add($"{at}: \"features\" must be an object of word: probability."); continue; }
-                var probabilities = new Dictionary<MagnificationFeature, double>();
-                foreach (var feature in features.EnumerateObject())
-                {
-                    if (MagnificationVocabulary.Find(feature.Name) is not { } known || feature.Name != MagnificationVocabulary.Of(known).Word)
-                        errors.Add($"{at}: '{feature.Name}' is not a word of the magnification vocabulary.");
-                    else if (feature.Value.ValueKind != JsonValueKind.Number || feature.Value.GetDouble() is < 0 or > 1)
-                        errors.Add($"{at}: {feature.Name} must be a probability, 0–1.");
-                    else probabilities[known] = feature.Value.GetDouble();
-                }
-                if (!names.Add(name) || !entries.TryAdd(name, probabilities)) errors.Add($"{at}: the entry is named twice.");
+                // A treated stone that keeps its natural sibling's inclusions takes the sibling's listed features.
+                if (entry.Features is not null) errors.Add($"{at}: \"like\" must be the name of another entry of the table, given instead of \"features\".");
+                else if (!names.Add(name)) errors.Add($"{at}: the entry is named twice.");
+                else likes.Add((at, name, entry.Like));
+                continue;
             }
-            var own = new Dictionary<string, IReadOnlyDictionary<MagnificationFeature, double>>(entries, StringComparer.Ordinal);
-            foreach ((string at, string name, string sibling) in likes)
+            if (entry.Features is null) { errors.Add($"{at}: \"features\" must be an object of word: probability."); continue; }
+            var probabilities = new Dictionary<MagnificationFeature, double>();
+            foreach (var (word, value) in entry.Features)
             {
-                if (own.TryGetValue(sibling, out var listed)) entries[name] = listed;
-                else errors.Add($"{at}: \"like\" names '{sibling}', which is not an entry of the table with features of its own.");
+                if (MagnificationVocabulary.Find(word) is not { } known || word != MagnificationVocabulary.Of(known).Word)
+                    errors.Add($"{at}: '{word}' is not a word of the magnification vocabulary.");
+                else if (value is < 0 or > 1 || double.IsNaN(value))
+                    errors.Add($"{at}: {word} must be a probability, 0–1.");
+                else probabilities[known] = value;
             }
+            if (!names.Add(name) || !entries.TryAdd(name, probabilities)) errors.Add($"{at}: the entry is named twice.");
         }
-        catch (JsonException e) { errors.Add($"magnification.json: not valid JSON: {e.Message}"); }
+        var own = new Dictionary<string, IReadOnlyDictionary<MagnificationFeature, double>>(entries, StringComparer.Ordinal);
+        foreach ((string at, string name, string sibling) in likes)
+        {
+            if (own.TryGetValue(sibling, out var listed)) entries[name] = listed;
+            else errors.Add($"{at}: \"like\" names '{sibling}', which is not an entry of the table with features of its own.");
+        }
         if (errors.Count > 0) throw new CatalogueFormatException(errors);
         return new MagnificationTable(entries);
     }
@@ -94,4 +83,19 @@ public sealed class MagnificationTable
     /// <summary>The materials with their listed profiles attached (user entries and unlisted ones keep their origin's defaults).</summary>
     public IReadOnlyList<Material> Attach(IReadOnlyList<Material> materials) =>
         [.. materials.Select(m => !m.IsUserEntry && Entries.TryGetValue(m.Name, out var listed) ? m with { Magnification = new MagnificationProfile(m.Origin, listed) } : m)];
+
+    private sealed record TableDocument(
+        [property: JsonPropertyName("about")] string? About,
+        [property: JsonPropertyName("references")] ReferenceDocument[]? References,
+        [property: JsonPropertyName("entries")] EntryDocument?[]? Entries);
+
+    private sealed record ReferenceDocument([property: JsonPropertyName("key")] string Key, [property: JsonPropertyName("citation")] string? Citation);
+
+    /// <summary>One entry: its features with their probabilities, or the entry it is like; the note says why, for readers.</summary>
+    private sealed record EntryDocument(
+        [property: JsonPropertyName("name")] string? Name,
+        [property: JsonPropertyName("features")] Dictionary<string, double>? Features,
+        [property: JsonPropertyName("like")] string? Like,
+        [property: JsonPropertyName("source")] string? Source,
+        [property: JsonPropertyName("note")] string? Note);
 }

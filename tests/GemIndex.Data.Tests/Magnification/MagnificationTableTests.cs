@@ -49,6 +49,18 @@ public class MagnificationTableTests
         Assert.Contains(expected, e.Errors[0]);
     }
 
+    [Theory]
+    [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"x","source":"a","featurs":{"curved_striae":0.5}}]}""", "featurs")]
+    [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"x","source":"a","features":{"curved_striae":"often"}}]}""", "curved_striae")]
+    [InlineData("""{"referenses":[{"key":"a"}],"entries":[]}""", "referenses")]
+    public void A_field_the_table_does_not_know_or_a_probability_not_a_number_is_an_error_naming_it(string json, string named)
+    {
+        // Read strictly, as the trade rules and mineral groups are: a misspelt field is not silently left out.
+        var e = Assert.Throws<CatalogueFormatException>(() => MagnificationTable.Read(json));
+        Assert.StartsWith("magnification.json: not valid", e.Errors[0]);
+        Assert.Contains(named, e.Errors[0]);
+    }
+
     [Fact]
     public void An_entry_like_another_takes_its_listed_features()
     {
