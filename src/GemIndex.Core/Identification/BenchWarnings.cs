@@ -119,7 +119,8 @@ public static class BenchWarnings
             string test = i == 0 && separation is { } next
                 ? $"the {next.Description} would help"
                 : i == 0 ? "no bench test left here separates them" : "";
-            warnings.Add($"{Capital(leading[i].Species)}: {Listed(origins)} cannot be separated by these tests{(test.Length > 0 ? "; " + test : "")}; for a valuable stone refer it to a qualified laboratory.");
+            string laboratory = held.Contains(OriginClass.Cultured) && held.Contains(OriginClass.Natural) ? " (its X-radiography tells cultured from natural)" : "";
+            warnings.Add($"{Capital(leading[i].Species)}: {Listed(origins)} cannot be separated by these tests{(test.Length > 0 ? "; " + test : "")}; for a valuable stone refer it to a qualified laboratory{laboratory}.");
         }
         // Species of one mineral group the tests leave open (elbaite, uvite and dravite of the tourmalines), and what would tell them.
         if (!noGoodMatch && group is { } g)
