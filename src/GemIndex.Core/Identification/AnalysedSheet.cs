@@ -26,11 +26,18 @@ public sealed record AnalysedSheet
             _broad = new Lazy<double>(() => SectionLikelihood.Evaluate(IndicatrixPrior.Broad(Observation), Observation, 0, 0).LogLikelihood);
             var observation = Observation;
             Character = new Lazy<OpticCharacterPosterior>(() => OpticCharacterPosterior.Of(observation));
+            var analysed = Series;
+            var character = Character;
+            SeriesShown = new Lazy<RotationSeriesResult>(() => SeriesAsRead.Weighed(analysed,
+                RotationSeriesAnalysis.EveryCharacter(r.Steps, r.ReadingPrecision, r.CalibrationOffset), character.Value));
         }
     }
 
     /// <summary>What the series alone says of the optic character, worked out only when a front end shows it.</summary>
     internal Lazy<OpticCharacterPosterior>? Character { get; }
+
+    /// <summary>The series' readings weighted by <see cref="Character"/> (<see cref="SeriesAsRead"/>), worked out only when a front end shows them.</summary>
+    internal Lazy<RotationSeriesResult>? SeriesShown { get; }
 
     private readonly Lazy<double>? _broad;
     // One stone is ranked on one thread, so a plain dictionary under an uncontended lock (cheaper per stone than a

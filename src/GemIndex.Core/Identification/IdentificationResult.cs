@@ -41,8 +41,17 @@ public sealed record IdentificationResult
     /// <summary>The leading species' origins these tests cannot separate, and the test that best would; null when they can.</summary>
     public InseparableOrigins? InseparableOrigins { get; init; }
 
-    /// <summary>The rotation series' analysis, when there were readings.</summary>
-    public RotationSeriesResult? Series { get; init; }
+    /// <summary>
+    /// The rotation series' readings as the front ends show them, when there were readings: each optic character's
+    /// indices weighted by <see cref="SeriesCharacter"/> (<see cref="SeriesAsRead"/>); worked out on first use (a batch
+    /// line never asks for it).
+    /// </summary>
+    public RotationSeriesResult? Series { get => _series?.Value; init => _series = value is null ? null : new Lazy<RotationSeriesResult>(() => value); }
+
+    /// <summary>The lazily worked-out <see cref="Series"/>.</summary>
+    internal Lazy<RotationSeriesResult>? SeriesSource { init => _series = value; }
+
+    private readonly Lazy<RotationSeriesResult>? _series;
 
     /// <summary>
     /// What the rotation series alone says of the optic character (<see cref="OpticCharacterPosterior"/>), or null

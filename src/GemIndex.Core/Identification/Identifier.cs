@@ -410,7 +410,7 @@ public sealed class Identifier
                 [.. order.Where(i => posterior[i] >= BenchWarnings.Relevant).Select(i => (_materials[i], posterior[i]))]),
             InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
                 ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
-            Series = analysed.Series,
+            SeriesSource = analysed.SeriesShown,
             SeriesCharacterSource = analysed.Character,
         };
     }

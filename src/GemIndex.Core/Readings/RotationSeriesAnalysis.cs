@@ -38,13 +38,7 @@ public static class RotationSeriesAnalysis
     /// <exception cref="QuantityOutOfRangeException">No steps, or precision or offset out of range.</exception>
     public static RotationSeriesResult Analyse(IReadOnlyList<ShadowEdgeStep> steps, double readingPrecision, double calibrationOffset = 0)
     {
-        QuantityOutOfRangeException.ThrowIfOutside("number of rotation steps", steps.Count, 1, 1000);
-        QuantityOutOfRangeException.ThrowIfOutside("reading precision", readingPrecision, 0.0001, 0.05);
-        QuantityOutOfRangeException.ThrowIfOutside("calibration offset", calibrationOffset, -0.05, 0.05);
-        var s = steps.Select(x => new ShadowEdgeStep(x.RotationDegrees, x.Low + calibrationOffset, x.High + calibrationOffset)).ToList();
-        double sigma = readingPrecision;
-        double band = ConstantBandSigmas * sigma;
-        double gap = LargestGap(s.Select(x => x.RotationDegrees));
+        var (s, sigma, band, gap) = Prepared(steps, readingPrecision, calibrationOffset);
         var misreadings = new List<string>();
 
         bool twoEdges = s.Any(x => x.High is { } h && h - x.Low > band);
@@ -64,6 +58,45 @@ public static class RotationSeriesAnalysis
         if (lowConstant || highConstant)
             return Uniaxial(lows, highs, lowEdge, highEdge, lowConstant, highConstant, sigma, gap, misreadings);
         return Biaxial(lows, highs, lowEdge, highEdge, sigma, band, gap, misreadings);
+    }
+
+    /// <summary>
+    /// The readings of a two-edge series as each doubly refractive character would give them, whatever the constant-edge
+    /// band says: uniaxial positive (the low edge as ω), uniaxial negative (the high edge as ω) and biaxial (β at either
+    /// inner extreme). For weighing by what the readings say of the character (its posterior), never for ranking; null
+    /// when the series cannot show which edge moves (one edge, one step with both edges, or a gap over 90°).
+    /// </summary>
+    /// <param name="steps">The steps in any order; at least one.</param>
+    /// <param name="readingPrecision">Standard uncertainty of one reading (0.0001–0.05).</param>
+    /// <param name="calibrationOffset">Added to every reading (−0.05 to 0.05).</param>
+    /// <exception cref="QuantityOutOfRangeException">No steps, or precision or offset out of range.</exception>
+    public static IReadOnlyList<SeriesInterpretation>? EveryCharacter(IReadOnlyList<ShadowEdgeStep> steps, double readingPrecision, double calibrationOffset = 0)
+    {
+        var (s, sigma, band, gap) = Prepared(steps, readingPrecision, calibrationOffset);
+        var both = s.Where(x => x.High is not null).ToList();
+        if (!s.Any(x => x.High is { } h && h - x.Low > band) || gap > MaximumGapForCharacter || both.Count < 2) return null;
+        // The misreadings are the analysis' own to report; here only the readings left after them count.
+        var unreported = new List<string>();
+        var lows = EdgeValues(both, x => x.Low, band, "low", unreported);
+        var highs = EdgeValues(both, x => x.High!.Value, band, "high", unreported);
+        var lowEdge = MovingEdge.Of(lows, sigma, gap);
+        var highEdge = MovingEdge.Of(highs, sigma, gap);
+        return
+        [
+            .. Uniaxial(lows, highs, lowEdge, highEdge, lowConstant: true, highConstant: false, sigma, gap, unreported).Interpretations,
+            .. Uniaxial(lows, highs, lowEdge, highEdge, lowConstant: false, highConstant: true, sigma, gap, unreported).Interpretations,
+            .. Biaxial(lows, highs, lowEdge, highEdge, sigma, band, gap, unreported).Interpretations,
+        ];
+    }
+
+    /// <summary>The steps with the calibration applied, the reading's σ, the constant-edge band and the largest gap.</summary>
+    private static (List<ShadowEdgeStep> Steps, double Sigma, double Band, double Gap) Prepared(IReadOnlyList<ShadowEdgeStep> steps, double readingPrecision, double calibrationOffset)
+    {
+        QuantityOutOfRangeException.ThrowIfOutside("number of rotation steps", steps.Count, 1, 1000);
+        QuantityOutOfRangeException.ThrowIfOutside("reading precision", readingPrecision, 0.0001, 0.05);
+        QuantityOutOfRangeException.ThrowIfOutside("calibration offset", calibrationOffset, -0.05, 0.05);
+        var s = steps.Select(x => new ShadowEdgeStep(x.RotationDegrees, x.Low + calibrationOffset, x.High + calibrationOffset)).ToList();
+        return (s, readingPrecision, ConstantBandSigmas * readingPrecision, LargestGap(s.Select(x => x.RotationDegrees)));
     }
 
     private static RotationSeriesResult SingleEdge(List<ShadowEdgeStep> s, double sigma, double band, double gap, List<string> misreadings)

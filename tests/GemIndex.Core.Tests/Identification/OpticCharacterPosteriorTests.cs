@@ -128,4 +128,37 @@ public class OpticCharacterPosteriorTests
         return new(part[0] / total, part[1] / total, part[2] / total, part[3] / total);
     }
 
+    /// <summary>An invented entry: the readings shown depend on the readings alone, whatever the catalogue holds.</summary>
+    private static readonly GemIndex.Core.Catalogue.Material Anything = new()
+    {
+        Name = "x", Species = "x", Variety = "x", Origin = GemIndex.Core.Catalogue.OriginClass.Natural, CrystalSystem = GemIndex.Core.Catalogue.CrystalSystem.Cubic,
+        Indices = GemIndex.Core.Catalogue.OpticalIndices.SingleIndex(new(1.50, 1.51)), SpecificGravity = new(2.5, 2.6),
+    };
+
+    [Fact]
+    public void The_readings_shown_follow_the_characters_odds_not_the_constant_edge_band()
+    {
+        // Four steps whose high edge wanders by 0.004 (1.686–1.690, invented readings near peridot's handbook values,
+        // from memory): the constant-edge band (4σ) calls that edge moving, and the series biaxial, by a rounding hair,
+        // while the readings alone favour a uniaxial negative crystal (a lone high edge 4σ off costs less than a third
+        // free index). The indices shown lead with that reading, each weighted by its character's posterior share.
+        var steps = new List<ShadowEdgeStep> { new(0, 1.654, 1.690), new(45, 1.660, 1.688), new(90, 1.672, 1.690), new(135, 1.662, 1.686) };
+        Assert.Equal(OpticCharacter.Biaxial, RotationSeriesAnalysis.Analyse(steps, 0.001).Character);
+        var result = new Identifier([Anything]).Identify(new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Facet, steps) });
+        var odds = result.SeriesCharacter!;
+        Assert.True(odds.UniaxialNegative > 0.5, $"{odds}");
+        var shown = result.Series!;
+        Assert.Equal(OpticCharacter.Uniaxial, shown.Character);
+        Assert.Equal(OpticSign.Negative, shown.Interpretations[0].Sign);
+        Assert.Equal(odds.UniaxialNegative, shown.Interpretations[0].Weight);
+        Assert.Equal(1.6885, shown.Interpretations[0].Highest.Value, 9);   // ω, the high edges' mean
+        Assert.All(shown.Interpretations, i => Assert.True(i.Weight >= BenchWarnings.Relevant));
+        Assert.All(shown.Interpretations.Where(i => i.Character == OpticCharacter.Biaxial), i => Assert.Equal(odds.Biaxial / 2, i.Weight));
+        Assert.Equal(shown.Interpretations.OrderByDescending(i => i.Weight), shown.Interpretations);
+
+        // One constant edge: the analysis stands as it is (singly refractive).
+        var one = new Identifier([Anything]).Identify(new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Facet, [new(0, 1.718), new(90, 1.718)]) });
+        Assert.Equal(OpticCharacter.Isotropic, Assert.Single(one.Series!.Interpretations).Character);
+    }
 }
+

@@ -1,0 +1,32 @@
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Readings;
+
+namespace GemIndex.Core.Identification;
+
+/// <summary>
+/// The rotation series as the front ends show it: the readings of the edges under each optic character (α, β, γ or ω,
+/// ε, the birefringence and the sign), weighted by what the readings alone say of the character
+/// (<see cref="OpticCharacterPosterior"/>), so that the indices shown never contradict the character's odds shown above
+/// them. The constant-edge band of <see cref="RotationSeriesAnalysis"/> only chose which readings to name; here it no
+/// longer decides. A summary, never a gate: the ranking weighs the raw readings.
+/// </summary>
+internal static class SeriesAsRead
+{
+    /// <summary>
+    /// The analysis with its interpretations replaced by every character's reading that holds at least
+    /// <see cref="BenchWarnings.Relevant"/> of the posterior (each weighted by its share; a biaxial reading's share is
+    /// halved between its two places for β), likeliest first, and its character the likeliest reading's. A series that
+    /// cannot show which edge moves, or shows one edge only, keeps the analysis as it is.
+    /// </summary>
+    public static RotationSeriesResult Weighed(RotationSeriesResult analysed, IReadOnlyList<SeriesInterpretation>? everyCharacter, OpticCharacterPosterior odds)
+    {
+        if (everyCharacter is null || analysed.Character is not (OpticCharacter.Uniaxial or OpticCharacter.Biaxial)) return analysed;
+        double Share(SeriesInterpretation i) => i.Character == OpticCharacter.Biaxial ? odds.Biaxial / 2
+            : i.Sign == OpticSign.Positive ? odds.UniaxialPositive : odds.UniaxialNegative;
+        var weighed = everyCharacter.Select(i => i with { Weight = Share(i) }).ToList();
+        // Stable: on a tie the analysis' order (uniaxial positive, negative, biaxial) stands.
+        var shown = weighed.Where(i => i.Weight >= BenchWarnings.Relevant).OrderByDescending(i => i.Weight).ToList();
+        if (shown.Count == 0) shown = [weighed.MaxBy(i => i.Weight)!];
+        return analysed with { Character = shown[0].Character, Interpretations = shown };
+    }
+}
