@@ -14,9 +14,8 @@ internal static class ReportDerived
             yield return new("optic_character", "Optic character", "not fixed by the series" + (report.UndeterminedReason.Length > 0 ? ": " + report.UndeterminedReason : ""));
         if (report.Interpretations.Count > 0 && report.Interpretations[0] is var best)
         {
-            yield return new("indices", "Refractive indices (most likely reading)", best.Beta is { } beta
-                ? $"α {ReportNumbers.Index(best.Lowest)}, β {ReportNumbers.Index(beta)}, γ {ReportNumbers.Index(best.Highest)}"
-                : best.Lowest == best.Highest ? ReportNumbers.Index(best.Lowest) : $"{ReportNumbers.Index(best.Lowest)} to {ReportNumbers.Index(best.Highest)}");
+            yield return new("indices", "Refractive indices (most likely reading)",
+                Indices(best.Character == "uniaxial", SignText(report), best.Lowest, best.Highest, best.Beta));   // ω and ε only under a settled sign
             // The difference of the indices shown on the line above, so the two lines add up.
             yield return new("birefringence", "Birefringence", ReportNumbers.WithUncertainty(
                 Core.Optics.Birefringence.OfShownIndices(best.Highest, best.Lowest), best.BirefringenceUncertainty, "0.000"));
@@ -27,6 +26,17 @@ internal static class ReportDerived
         if (report.Interpretations.Count == 0 && report.SpecificGravity is null)
             yield return new("derived", "Derived", "none: no rotation series and no specific gravity");
     }
+
+    /// <summary>
+    /// The principal indices of one reading of a series by their names: α, β, γ; ω and ε for a uniaxial reading whose
+    /// sign is settled ("positive" or "negative": ω the constant edge); else the lowest and highest, or the one index.
+    /// </summary>
+    public static string Indices(bool uniaxial, string sign, double lowest, double highest, double? beta) =>
+        beta is { } b ? $"α {ReportNumbers.Index(lowest)}, β {ReportNumbers.Index(b)}, γ {ReportNumbers.Index(highest)}"
+        : lowest == highest ? ReportNumbers.Index(lowest)
+        : uniaxial && sign == "positive" ? $"ω {ReportNumbers.Index(lowest)}, ε {ReportNumbers.Index(highest)}"
+        : uniaxial && sign == "negative" ? $"ω {ReportNumbers.Index(highest)}, ε {ReportNumbers.Index(lowest)}"
+        : $"{ReportNumbers.Index(lowest)} to {ReportNumbers.Index(highest)}";
 
     /// <summary>A reading is called settled when it carries at least this share of the weight (a judgement).</summary>
     private const double SettledShare = 0.9;

@@ -19,6 +19,17 @@ public class ReportDerivedTests
     public void A_reason_s_verdict_names_its_weight_in_words(double bits, bool agrees, string expected) =>
         Assert.Equal(expected, ReportDerived.Verdict(new EvidenceContribution("magnification", "a look", bits, agrees)));
 
+    [Theory]
+    // ω is the edge that stays still: the low one of a positive stone (quartz, ω 1.544, ε 1.553), the high one of a
+    // negative stone (corundum, ω 1.770, ε 1.762); handbook values from memory. No settled sign: no names.
+    [InlineData(true, "positive", 1.544, 1.553, null, "ω 1.544, ε 1.553")]
+    [InlineData(true, "negative", 1.762, 1.770, null, "ω 1.770, ε 1.762")]
+    [InlineData(true, "not fixed by the series: positive (50%) or negative (50%)", 1.544, 1.553, null, "1.544 to 1.553")]
+    [InlineData(false, "negative", 1.654, 1.690, 1.672, "α 1.654, β 1.672, γ 1.690")]
+    [InlineData(false, "none", 1.718, 1.718, null, "1.718")]
+    public void The_indices_are_named_as_the_optic_character_and_a_settled_sign_name_them(bool uniaxial, string sign, double lowest, double highest, double? beta, string expected) =>
+        Assert.Equal(expected, ReportDerived.Indices(uniaxial, sign, lowest, highest, beta));
+
     [Fact]
     public void A_feature_seen_that_neither_the_candidate_nor_an_unknown_material_holds_is_weighed_as_neither_for_nor_against()
     {

@@ -180,9 +180,9 @@ internal static class ResultText
             yield return "Optic character: " + (s.Character is { } c ? Character(c)
                 : "not fixed by the series" + (s.UndeterminedReason.Length > 0 ? ": " + s.UndeterminedReason : ""));
         bool single = best.Beta is null && best.Lowest.Value == best.Highest.Value;
-        yield return (single ? "Refractive index: " : "Refractive indices: ") + (best.Beta is { } beta
-            ? $"α {Index(best.Lowest.Value)}, β {Index(beta.Value)}, γ {Index(best.Highest.Value)}{TwoV(best)}"
-            : best.Lowest.Value == best.Highest.Value ? Index(best.Lowest.Value) : $"{Index(best.Lowest.Value)} to {Index(best.Highest.Value)}");
+        // ω and ε only under a settled sign: which edge is ω is the sign.
+        yield return (single ? "Refractive index: " : "Refractive indices: ") + GemIndex.Cli.Reports.ReportDerived.Indices(best.Character == OpticCharacter.Uniaxial,
+            Sign(s) ?? "", best.Lowest.Value, best.Highest.Value, best.Beta?.Value) + (best.Beta is not null ? TwoV(best) : "");
         if (best.Birefringence.Value > 0) yield return $"Birefringence: {Index(GemIndex.Core.Optics.Birefringence.OfShownIndices(best.Highest.Value, best.Lowest.Value))}";
         if (Sign(s) is { } sign) yield return "Optic sign: " + sign;
     }

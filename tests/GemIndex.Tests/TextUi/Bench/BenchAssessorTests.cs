@@ -26,7 +26,7 @@ public class BenchAssessorTests
         Assert.Equal("quartz", a.Result!.Candidates[0].Material.Name);
         Assert.False(a.Result.NoGoodMatch);
         IReadOnlyList<string> derived = ResultText.Derived(a);
-        Assert.Contains("Refractive indices: 1.544 to 1.553", derived);
+        Assert.Contains("Refractive indices: ω 1.544, ε 1.553", derived);
         Assert.Contains("Birefringence: 0.009", derived);
         Assert.Contains("Specific gravity: 2.65 ± 0.01", derived);
     }
