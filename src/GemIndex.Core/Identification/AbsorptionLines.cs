@@ -27,12 +27,30 @@ internal static class AbsorptionLines
     /// <summary>The visible span a line may be seen in, nm.</summary>
     private const double VisibleSpanNanometres = 300;
 
+    /// <summary>P(a strong listed line is seen) (judgement, docs/ranking.md §2).</summary>
+    public const double StrongLineDetection = 0.95;
+
+    /// <summary>P(a moderate listed line is seen) (judgement, docs/ranking.md §2).</summary>
+    public const double ModerateLineDetection = 0.7;
+
+    /// <summary>P(a weak listed line is seen) (judgement, docs/ranking.md §2).</summary>
+    public const double WeakLineDetection = 0.3;
+
+    /// <summary>A seen line is paired with a listed one only within this many σ of it (judgement, docs/ranking.md §2).</summary>
+    public const double PairingSigmas = 4;
+
+    /// <summary>The advice's line outcomes name a line by its wavelength rounded to this many nm (judgement, docs/ranking.md §5).</summary>
+    public const double OutcomeRoundingNanometres = 5;
+
+    /// <summary>The advice weighs at most this many line groups of an entry (judgement, docs/ranking.md §5).</summary>
+    public const int OutcomeGroupLimit = 10;
+
     /// <summary>P(a listed line is seen | its strength): strong 0.95, moderate 0.7, weak 0.3 (judgements; docs/ranking.md §2).</summary>
     public static double Detection(LineStrength strength) => strength switch
     {
-        LineStrength.Strong => 0.95,
-        LineStrength.Moderate => 0.7,
-        _ => 0.3,
+        LineStrength.Strong => StrongLineDetection,
+        LineStrength.Moderate => ModerateLineDetection,
+        _ => WeakLineDetection,
     };
 
     /// <summary>
@@ -118,7 +136,7 @@ internal static class AbsorptionLines
             for (int j = 0; j < seen.Count; j++)
             {
                 double distance = Math.Abs(listed[i].Nanometres - seen[j]);
-                if (!(distance <= 4 * PositionSigmaNanometres)) continue;
+                if (!(distance <= PairingSigmas * PositionSigmaNanometres)) continue;
                 int at = count++;
                 while (at > 0 && pairs[at - 1].Distance > distance) { pairs[at] = pairs[at - 1]; at--; }
                 pairs[at] = (distance, i, j);
@@ -139,7 +157,7 @@ internal static class AbsorptionLines
     public static IEnumerable<(long Outcome, double Probability)> Outcomes(IReadOnlyList<AbsorptionLine> listed)
     {
         var groups = Groups(listed);
-        int n = Math.Min(groups.Count, 10);
+        int n = Math.Min(groups.Count, OutcomeGroupLimit);
         double[] detection = [.. groups.Take(n).Select(g => GroupDetection(listed, g))];
         for (int mask = 0; mask < 1 << n; mask++)
         {
@@ -149,7 +167,7 @@ internal static class AbsorptionLines
             {
                 bool seen = (mask & (1 << g)) != 0;
                 p *= seen ? detection[g] : 1 - detection[g];
-                if (seen) key = key * 131 + (long)Math.Round(listed[groups[g][0]].Nanometres / 5);
+                if (seen) key = key * 131 + (long)Math.Round(listed[groups[g][0]].Nanometres / OutcomeRoundingNanometres);
             }
             yield return (key, p);
         }

@@ -77,6 +77,12 @@ public static class EvidenceLikelihood
     /// <summary>σ of a heavy liquid's density, doubled for a suspended stone (a judgement, docs/ranking.md §5, other named values).</summary>
     private const double HeavyLiquidSigma = 0.01;
 
+    /// <summary>"Not in the catalogue": the chance a stone floats, and that it sinks (judgement, docs/ranking.md §2).</summary>
+    internal const double BroadFloatsOrSinks = 0.5;
+
+    /// <summary>A suspended stone's SG is taken within a window this many σ wide (judgement, docs/ranking.md §2).</summary>
+    internal const double SuspensionWindowSigmas = 4;
+
     private static void HeavyLiquid(Material m, HeavyLiquidResult liquid, EvidenceAccumulator acc)
     {
         const double sigma = HeavyLiquidSigma;
@@ -85,11 +91,12 @@ public static class EvidenceLikelihood
         bool fitting = acc.Fitting;
         (double f, double g, double tail) = liquid.Outcome switch
         {
-            HeavyLiquidOutcome.Floats => (RangeLikelihood.ProbabilityBelow(density, range, sigma), 0.5,
+            HeavyLiquidOutcome.Floats => (RangeLikelihood.ProbabilityBelow(density, range, sigma), BroadFloatsOrSinks,
                 fitting ? RangeLikelihood.TwoSidedTail(Math.Max(0, range.Minimum - density) / sigma) : 1),
-            HeavyLiquidOutcome.Sinks => (RangeLikelihood.ProbabilityAbove(density, range, sigma), 0.5,
+            HeavyLiquidOutcome.Sinks => (RangeLikelihood.ProbabilityAbove(density, range, sigma), BroadFloatsOrSinks,
                 fitting ? RangeLikelihood.TwoSidedTail(Math.Max(0, density - range.Maximum) / sigma) : 1),
-            _ => (RangeLikelihood.Density(density, range, 2 * sigma) * 4 * sigma, 4 * sigma * BroadDensities.SpecificGravity,
+            _ => (RangeLikelihood.Density(density, range, 2 * sigma) * SuspensionWindowSigmas * sigma,
+                SuspensionWindowSigmas * sigma * BroadDensities.SpecificGravity,
                 fitting ? RangeLikelihood.TwoSidedTail(RangeLikelihood.StandardDeviationsOutside(density, range, 2 * sigma)) : 1),
         };
         acc.Add(BenchField.HeavyLiquids, f, g, tail, robust: true);
@@ -125,10 +132,13 @@ public static class EvidenceLikelihood
     internal static IReadOnlyList<PolariscopeReaction> UsualReactions(Material m) =>
         m.Polariscope.Count > 0 ? m.Polariscope : DefaultReactions(m.OpticCharacter);
 
+    /// <summary>P(each polariscope reaction) from misreading: a skilled person still misreads now and then (judgement, docs/ranking.md §2).</summary>
+    internal const double PolariscopeMisreading = 0.015;
+
     /// <summary>P(reaction seen | usual reactions): 0.94 shared among the usual ones, 0.015 for each reaction (misreadings).</summary>
     internal static double PolariscopeProbability(IReadOnlyList<PolariscopeReaction> usual, PolariscopeReaction seen)
     {
-        const double error = 0.015; // per reaction: a skilled person still misreads now and then
+        const double error = PolariscopeMisreading;
         return (usual.Contains(seen) ? (1 - 4 * error) / usual.Count : 0) + error;
     }
 
@@ -206,8 +216,8 @@ public static class EvidenceLikelihood
         if (d.Measured is { } measured)
         {
             if (m.Dispersion is not { } known) { acc.Add(BenchField.Dispersion, BroadDensities.Dispersion, BroadDensities.Dispersion, 1, false); return; }
-            var range = new PropertyRange(0.9 * known, 1.1 * known);
-            double sigma = 0.0015;
+            var range = new PropertyRange(MeasuredDispersionLow * known, MeasuredDispersionHigh * known);
+            double sigma = MeasuredDispersionSigma;
             double z = RangeLikelihood.StandardDeviationsOutside(measured, range, sigma);
             acc.Add(BenchField.Dispersion, RangeLikelihood.Density(measured, range, sigma), BroadDensities.Dispersion, acc.Fitting ? RangeLikelihood.TwoSidedTail(z) : 1, robust: true);
             if (acc.Explaining) acc.Say($"dispersion nG − nB {F3(measured)} {Where(measured, range, sigma, "0.000")}");
@@ -227,6 +237,15 @@ public static class EvidenceLikelihood
         if (acc.Explaining) acc.Say($"dispersion {Word(seen)}; nG − nB {F3(value)} ({Word(DispersionBand(value))}) expected");
     }
 
+    /// <summary>A measured dispersion's range runs from this times the catalogue value (judgement, docs/ranking.md §2).</summary>
+    internal const double MeasuredDispersionLow = 0.9;
+
+    /// <summary>A measured dispersion's range runs to this times the catalogue value (judgement, docs/ranking.md §2).</summary>
+    internal const double MeasuredDispersionHigh = 1.1;
+
+    /// <summary>σ of a measured dispersion nG − nB (judgement, docs/ranking.md §2).</summary>
+    internal const double MeasuredDispersionSigma = 0.0015;
+
     /// <summary>
     /// The dispersion a fire judged by eye is weighed against, or null when the word says nothing of the entry: none
     /// given, or an opaque entry (fire is judged in light that has passed through the stone, as the polariscope and
@@ -234,21 +253,45 @@ public static class EvidenceLikelihood
     /// </summary>
     internal static double? FireToJudge(Material m) => m.IsOpaque ? null : m.Dispersion;
 
+    /// <summary>nG − nB from which a fire is called weak (judgement, docs/ranking.md §2).</summary>
+    internal const double DispersionWeakFrom = 0.010;
+
+    /// <summary>nG − nB from which a fire is called moderate (judgement, docs/ranking.md §2).</summary>
+    internal const double DispersionModerateFrom = 0.020;
+
+    /// <summary>nG − nB from which a fire is called strong (judgement, docs/ranking.md §2).</summary>
+    internal const double DispersionStrongFrom = 0.035;
+
+    /// <summary>nG − nB from which a fire is called very strong (judgement, docs/ranking.md §2).</summary>
+    internal const double DispersionVeryStrongFrom = 0.070;
+
     /// <summary>The words a bench user gives the dispersion nG − nB (bands of <see cref="DispersionStrength"/>).</summary>
     public static DispersionStrength DispersionBand(double nGminusB) => nGminusB switch
     {
-        < 0.010 => DispersionStrength.None,
-        < 0.020 => DispersionStrength.Weak,
-        < 0.035 => DispersionStrength.Moderate,
-        < 0.070 => DispersionStrength.Strong,
+        < DispersionWeakFrom => DispersionStrength.None,
+        < DispersionModerateFrom => DispersionStrength.Weak,
+        < DispersionStrongFrom => DispersionStrength.Moderate,
+        < DispersionVeryStrongFrom => DispersionStrength.Strong,
         _ => DispersionStrength.VeryStrong,
     };
 
     /// <summary>P(a heat-conduction probe reads positive | the material's usual reading): 0.97 for a diamond-like conductor (a probe can miss on a small or dirty stone), 0.02 otherwise (a judgement; docs/ranking.md §2).</summary>
-    internal static double ThermalPositive(Material m) => m.ThermalProbe == ThermalProbeResult.Positive ? 0.97 : 0.02;
+    internal static double ThermalPositive(Material m) => m.ThermalProbe == ThermalProbeResult.Positive ? ThermalPositiveWhenListed : ThermalPositiveOtherwise;
+
+    /// <summary>P(probe positive) for a material listed as a heat conductor (judgement, docs/ranking.md §2).</summary>
+    internal const double ThermalPositiveWhenListed = 0.97;
+
+    /// <summary>P(probe positive) for any other material (judgement, docs/ranking.md §2).</summary>
+    internal const double ThermalPositiveOtherwise = 0.02;
 
     /// <summary>P(the conductivity tester reads conductive | the material's usual reading): 0.9 for a conductor (poor contact fails), 0.03 otherwise (a judgement; docs/ranking.md §2).</summary>
-    internal static double ElectricalConductive(Material m) => m.Electrical == ElectricalResult.Conductive ? 0.9 : 0.03;
+    internal static double ElectricalConductive(Material m) => m.Electrical == ElectricalResult.Conductive ? ConductiveWhenListed : ConductiveOtherwise;
+
+    /// <summary>P(conductive) for a material listed as an electrical conductor (judgement, docs/ranking.md §2).</summary>
+    internal const double ConductiveWhenListed = 0.9;
+
+    /// <summary>P(conductive) for any other material (judgement, docs/ranking.md §2).</summary>
+    internal const double ConductiveOtherwise = 0.03;
 
     /// <summary>"Not in the catalogue": P(probe positive) 0.05, P(conductive) 0.1 (few bench stones conduct heat or electricity).</summary>
     private const double BroadThermalPositive = 0.05, BroadConductive = 0.1;
@@ -285,6 +328,15 @@ public static class EvidenceLikelihood
         if (acc.Explaining) acc.Say($"{lamp} {Word(seen)}; {string.Join(" or ", usual.Select(Word))} usual");
     }
 
+    /// <summary>UV: the weight the listed strengths share (judgement, docs/ranking.md §2).</summary>
+    internal const double FluorescenceListedShare = 0.8;
+
+    /// <summary>UV: the weight of a strength next to a listed one, a common judgement slip (judgement, docs/ranking.md §2).</summary>
+    internal const double FluorescenceNeighbourWeight = 0.06;
+
+    /// <summary>UV: the weight every strength has, listed or not (judgement, docs/ranking.md §2).</summary>
+    internal const double FluorescenceFloor = 0.02;
+
     /// <summary>
     /// P(strength seen | usual strengths): a listed strength takes most of the mass (0.8 shared), a neighbouring strength
     /// is a common judgement slip (0.06), anything else 0.02; normalised over the four strengths.
@@ -300,7 +352,7 @@ public static class EvidenceLikelihood
                 listed |= u == s;
                 neighbour |= Math.Abs((int)u - (int)s) == 1;
             }
-            double w = (listed ? 0.8 / usual.Count : 0) + (neighbour ? 0.06 : 0) + 0.02;
+            double w = (listed ? FluorescenceListedShare / usual.Count : 0) + (neighbour ? FluorescenceNeighbourWeight : 0) + FluorescenceFloor;
             total += w;
             if (s == seen) mine = w;
         }

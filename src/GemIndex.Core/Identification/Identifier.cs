@@ -43,6 +43,9 @@ public sealed class Identifier
     /// </summary>
     public const double Temperature = 0.9;
 
+    /// <summary>Entries below this posterior are left out of the general next-test advice (judgement, docs/ranking.md §5).</summary>
+    public const double NextTestEntryShare = 1e-3;
+
     private readonly Material[] _materials;
     private readonly MaterialProfile[] _profiles;
     private readonly double[] _logPriors;
@@ -386,7 +389,7 @@ public sealed class Identifier
         // Species first: "not in the catalogue" is set against the leading species, not against one of its many entries.
         bool noGoodMatch = BestSeriousFit(posterior, i => Evaluated(i, explain: false).Fit) < MinimumFit
             || (other > species[0].Confidence && Odds(other) >= NothingFitsOdds * Odds(BroadDensities.NotInCataloguePrior));
-        var weighted = order.Where(i => posterior[i] >= 1e-3).Select(i => (_materials[i], posterior[i])).ToList();
+        var weighted = order.Where(i => posterior[i] >= NextTestEntryShare).Select(i => (_materials[i], posterior[i])).ToList();
         var separation = Separation(sheet, posterior, species);
         var varieties = BenchWarnings.InseparableVarieties(species, _materials, posterior);
         var group = noGoodMatch ? null : BenchWarnings.InseparableGroup(species, _materials, posterior);

@@ -130,6 +130,24 @@ internal sealed class IndicatrixPrior
         return new([.. shapes], [.. families], 0, lowest, highest, families.Max(f => f.BirefringenceHigh));
     }
 
+    /// <summary>The broad prior's birefringence box reaches this far below the readings' spread (judgement, docs/ranking.md §1).</summary>
+    internal const double BroadBirefringenceBelowSpread = 0.002;
+
+    /// <summary>The broad prior's birefringence box reaches this far above the readings' spread (judgement, docs/ranking.md §1).</summary>
+    internal const double BroadBirefringenceAboveSpread = 0.006;
+
+    /// <summary>A highest reading within this of the liquid's limit may have a high edge hidden above it (judgement, docs/ranking.md §1).</summary>
+    internal const double BroadNearLimitReach = 0.03;
+
+    /// <summary>Birefringence added to the broad box when the highest reading is near the liquid's limit (judgement, docs/ranking.md §1).</summary>
+    internal const double BroadHiddenEdgeBirefringence = 0.02;
+
+    /// <summary>The broad prior's share for each kind of crystal: isotropic, uniaxial, biaxial (judgement, docs/ranking.md §1).</summary>
+    internal const double BroadKindShare = 0.25;
+
+    /// <summary>Each optic sign's half of the broad prior's uniaxial share (judgement, docs/ranking.md §1).</summary>
+    internal const double BroadUniaxialSignShare = 0.5;
+
     /// <summary>
     /// "Something not in the catalogue" for this series: an isotropic, uniaxial (either sign) or biaxial crystal, each a
     /// quarter, its level flat over 1.30–3.00 and its birefringence flat over 0–0.30 (<see cref="BroadDensities"/>),
@@ -140,14 +158,15 @@ internal sealed class IndicatrixPrior
         const double window = 0.01; // beyond the readings by more than this, the likelihood is nil
         var level = new PropertyRange(series.LowestReading - window, series.HighestReading + window);
         double spread = series.HighestReading - series.LowestReading;
-        double bLow = Math.Max(0, spread - 0.002), bHigh = spread + 0.006 + (series.HighestReading > series.LiquidLimit - 0.03 ? 0.02 : 0);
+        double bLow = Math.Max(0, spread - BroadBirefringenceBelowSpread), bHigh = spread + BroadBirefringenceAboveSpread
+            + (series.HighestReading > series.LiquidLimit - BroadNearLimitReach ? BroadHiddenEdgeBirefringence : 0);
         Family[] families =
         [
-            new(false, +1, bLow, bHigh, 0.25 * 0.5, [level], true),
-            new(false, -1, bLow, bHigh, 0.25 * 0.5, [level], true),
-            new(true, 0, bLow, bHigh, 0.25, [level], true),
+            new(false, +1, bLow, bHigh, BroadKindShare * BroadUniaxialSignShare, [level], true),
+            new(false, -1, bLow, bHigh, BroadKindShare * BroadUniaxialSignShare, [level], true),
+            new(true, 0, bLow, bHigh, BroadKindShare, [level], true),
         ];
-        var shapes = new List<Shape> { Isotropic(level.Minimum, level.Maximum, 0.25) };
+        var shapes = new List<Shape> { Isotropic(level.Minimum, level.Maximum, BroadKindShare) };
         for (int g = 0; g < families.Length; g++) shapes.AddRange(Nodes(families, g));
         return new([.. shapes], families, BroadDensities.Index, level.Minimum, level.Maximum, bHigh);
     }

@@ -328,17 +328,36 @@ public static class NextTestAdvisor
 
     private static IEnumerable<(long, double)> Binary(double pFirst) => [(0, pFirst), (1, 1 - pFirst)];
 
-    private static IEnumerable<(long, double)> SpecificGravity(Material m) => Binned(m.SpecificGravity, 0.01, 0.03, 0);
+    /// <summary>σ of an SG reading in the advice's outcomes (judgement, docs/ranking.md §5).</summary>
+    internal const double SpecificGravityOutcomeSigma = 0.01;
+
+    /// <summary>Width of the advice's SG outcome bins (judgement, docs/ranking.md §5).</summary>
+    internal const double SpecificGravityOutcomeBin = 0.03;
+
+    /// <summary>σ of the lowest index against the liquid's limit in the advice's "over the limit" outcome (judgement, docs/ranking.md §5).</summary>
+    internal const double OverLimitOutcomeSigma = 0.002;
+
+    /// <summary>Above this chance of "over the limit" the advice takes the refractometer as always over it (judgement, docs/ranking.md §5).</summary>
+    internal const double CertainlyOverLimit = 0.999;
+
+    /// <summary>σ of an edge reading in the advice's refractometer outcomes (judgement, docs/ranking.md §5).</summary>
+    internal const double RefractometerOutcomeSigma = 0.0015;
+
+    /// <summary>Width of the advice's bins for the lowest index and the birefringence (judgement, docs/ranking.md §5).</summary>
+    internal const double RefractometerOutcomeBin = 0.004;
+
+    private static IEnumerable<(long, double)> SpecificGravity(Material m) =>
+        Binned(m.SpecificGravity, SpecificGravityOutcomeSigma, SpecificGravityOutcomeBin, 0);
 
     private static IEnumerable<(long, double)> Refractometer(Material m)
     {
         var lowest = m.Indices.Lowest;
-        double over = RangeLikelihood.ProbabilityAbove(RefractometerObservation.DefaultLiquidLimit, lowest, 0.002);
-        if (over > 0.999) return [(-1, 1)];
-        // Readable: the lowest index binned at 0.004, times the birefringence binned at 0.004 (edges read at ±0.001).
+        double over = RangeLikelihood.ProbabilityAbove(RefractometerObservation.DefaultLiquidLimit, lowest, OverLimitOutcomeSigma);
+        if (over > CertainlyOverLimit) return [(-1, 1)];
+        // Readable: the lowest index binned, times the birefringence binned (RefractometerOutcomeBin, RefractometerOutcomeSigma).
         var birefringence = RefractometerEvidence.BirefringenceRange(m);
-        var indexBins = Binned(lowest, 0.0015, 0.004, 0).ToList();
-        var birefringenceBins = Binned(birefringence, 0.0015, 0.004, 0).ToList();
+        var indexBins = Binned(lowest, RefractometerOutcomeSigma, RefractometerOutcomeBin, 0).ToList();
+        var birefringenceBins = Binned(birefringence, RefractometerOutcomeSigma, RefractometerOutcomeBin, 0).ToList();
         var result = new List<(long, double)> { (-1, over) };
         foreach (var (i, p) in indexBins)
             foreach (var (b, q) in birefringenceBins)

@@ -72,6 +72,12 @@ internal static class RefractometerEvidence
     /// <summary>The cheap screen's width, in standard deviations of a reading with its offset and soft edges (DOMAIN.md §6b: 4σ).</summary>
     internal const double ScreenSigmas = 4;
 
+    /// <summary>The series' fit takes the form term times this, at most 1 (judgement, docs/ranking.md §4).</summary>
+    internal const double FormFitMultiplier = 2;
+
+    /// <summary>σ of where the liquid's own edge hides a stone's edge, for "over the limit" with no series (judgement, docs/ranking.md §2).</summary>
+    internal const double OverLimitSigma = 0.003;
+
     private readonly record struct Part(double Likelihood, double Broad, double Tail, string Text);
 
     public static void Add(MaterialProfile profile, AnalysedSheet sheet, EvidenceAccumulator acc)
@@ -100,8 +106,8 @@ internal static class RefractometerEvidence
     /// <summary>
     /// The rotation series by the section model: ln p(raw readings | m) against the same under "not in the catalogue"
     /// (<see cref="SectionLikelihood"/>), after a cheap screen that leaves out materials no orientation can fit: the lowest
-    /// reading at least the lowest index − 6σ, the highest at most the highest index + 6σ, the widest step at most the
-    /// birefringence + 6σ (σ with the offset, the soft edges and the light's correction). A screened-out material gets
+    /// reading at least the lowest index − 4σ, the highest at most the highest index + 4σ, the widest step at most the
+    /// birefringence + 4σ√2 (σ with the offset, the soft edges and the light's correction). A screened-out material gets
     /// no likelihood of its own; the robust mixture leaves it the misreading share of the broad one.
     /// </summary>
     private static void Series(MaterialProfile profile, AnalysedSheet sheet, SeriesObservation series, double shift, double shiftSigma, EvidenceAccumulator acc)
@@ -113,7 +119,7 @@ internal static class RefractometerEvidence
             ? new(double.NegativeInfinity, 0)
             : sheet.SeriesOutcome(prior, shift, shiftSigma);
         double form = FormFactor(m, series);
-        acc.AddLog(BenchField.Refractometer, outcome.LogLikelihood + Math.Log(form), broad, outcome.Tail * Math.Min(1, 2 * form), robust: true);
+        acc.AddLog(BenchField.Refractometer, outcome.LogLikelihood + Math.Log(form), broad, outcome.Tail * Math.Min(1, FormFitMultiplier * form), robust: true);
         if (acc.Explaining)
             acc.Say(SeriesText(m, sheet, series, outcome, form));
     }
@@ -179,7 +185,7 @@ internal static class RefractometerEvidence
         string expected = string.Join(", ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString("0.000")}"));
         string summary = ReadingsText(sheet);
         string verdict = double.IsNegativeInfinity(outcome.LogLikelihood) ? "no orientation of it can give these readings"
-            : outcome.Tail >= 0.05 ? "an orientation of it gives these readings" : "its best orientation fits these readings poorly";
+            : outcome.Tail >= EvidenceAccumulator.AgreesTail ? "an orientation of it gives these readings" : "its best orientation fits these readings poorly";
         return $"{summary}; {verdict} ({expected})" + (form >= 1 ? ""
             : series.LargestSeparation > 0 ? "; two sharp edges come from a single crystal, and it is met only as an aggregate"
             : form == BlinkingAggregateShowsSharpSeries ? "; a sharp edge held round the stone is not seen on this aggregate, whose grains make the edge blink"
@@ -233,7 +239,7 @@ internal static class RefractometerEvidence
         // Censored: with no edge at all the lowest index is above the liquid; with edges read, the highest one is.
         var range = hasReadings ? m.Indices.Highest : m.Indices.Lowest;
         double limit = r.LiquidLimit;
-        const double sigma = 0.003; // where exactly the liquid's own edge hides a stone edge
+        const double sigma = OverLimitSigma;
         double p = RangeLikelihood.ProbabilityAbove(limit, range, sigma);
         var span = SpotSpan(m);
         bool blinking = !hasReadings && r.Method == RefractometerMethod.Spot && IsBlinkingAggregate(m, span);

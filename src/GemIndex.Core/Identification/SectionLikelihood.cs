@@ -36,6 +36,12 @@ internal static class SectionLikelihood
     /// </summary>
     public const double EdgeCountMisread = 0.02;
 
+    /// <summary>A one-edge step within the largest birefringence + this many σ + the margin of the limit may hide its high edge (judgement, docs/ranking.md §1).</summary>
+    public const double HiddenEdgeReachSigmas = 8;
+
+    /// <summary>The series' fit takes the edge-count factor over this, at most 1 (judgement, docs/ranking.md §4).</summary>
+    public const double EdgeCountFullFit = 0.5;
+
     /// <summary>What the series says under one prior.</summary>
     /// <param name="LogLikelihood">ln p(readings | prior).</param>
     /// <param name="Tail">The best orientation's goodness of fit, 0–1 (χ² of the residuals and the level's distance outside its range).</param>
@@ -347,7 +353,7 @@ internal static class SectionLikelihood
     {
         if (prior.IsIsotropic) return null;
         bool[]? near = null;
-        double reach = prior.LargestBirefringence + 8 * Math.Sqrt(series.NoiseVariance) + SeriesObservation.LiquidEdgeMargin;
+        double reach = prior.LargestBirefringence + HiddenEdgeReachSigmas * Math.Sqrt(series.NoiseVariance) + SeriesObservation.LiquidEdgeMargin;
         for (int k = 0; k < series.Count; k++)
             if (!series.TwoEdges[k] && series.Low[k] + reach > series.LiquidLimit)
                 (near ??= new bool[series.Count])[k] = true;
@@ -432,7 +438,7 @@ internal static class SectionLikelihood
             : RangeStrays.Tail(mean, level, spread.Sigma, RangeStrays.IndexScale);
         int freedom = Math.Max(1, n - 4); // three orientation angles and the level are fitted
         double tail = SpecialFunctions.GammaUpperRegularized(freedom / 2.0, squares / noise / 2) * levelTail
-                      * Math.Min(1, Math.Exp(logFactor) / 0.5);
+                      * Math.Min(1, Math.Exp(logFactor) / EdgeCountFullFit);
         return new PointFit(gaussian + logFactor + Math.Log(density), tail, n);
     }
 

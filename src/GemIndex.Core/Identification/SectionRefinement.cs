@@ -31,6 +31,9 @@ internal static class SectionRefinement
     /// <summary>Shape parameters are moved in units of 0.001 so that all coordinates have similar curvature.</summary>
     private const double ShapeUnit = 0.001;
 
+    /// <summary>Two climbs whose predicted series agree within this reached the same peak (judgement, docs/ranking.md §1).</summary>
+    private const double SamePeakTolerance = 3e-4;
+
     /// <summary>A coarse point to climb from.</summary>
     internal readonly record struct Start(int Point, int Shape, double Value);
 
@@ -72,7 +75,7 @@ internal static class SectionRefinement
 
     private static bool Same(double[] a, double[] b)
     {
-        for (int i = 0; i < a.Length; i++) if (Math.Abs(a[i] - b[i]) > 3e-4) return false;
+        for (int i = 0; i < a.Length; i++) if (Math.Abs(a[i] - b[i]) > SamePeakTolerance) return false;
         return true;
     }
 
