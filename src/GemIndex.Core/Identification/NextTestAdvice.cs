@@ -25,6 +25,17 @@ public sealed record NextTestAdvice
     /// <summary>The leading candidates this test tells apart, best first.</summary>
     public required IReadOnlyList<string> Separates { get; init; }
 
+    /// <summary><see cref="Separates"/> grouped by what they would show (one group per line of <see cref="Expectations"/>).</summary>
+    public IReadOnlyList<IReadOnlyList<string>> Groups { get; init; } = [];
+
+    /// <summary>
+    /// Whom the test tells apart, in words: "A and B from C" when the candidates fall into two groups that would show
+    /// different things, else the candidates listed.
+    /// </summary>
+    public string SeparatesInWords => Groups.Count == 2 && Groups.Any(g => g.Count > 1)
+        ? $"{BenchWarnings.Listed(Groups[0])} from {BenchWarnings.Listed(Groups[1])}"
+        : BenchWarnings.Listed(Separates);
+
     /// <summary>What each of them would show ("ruby: SG 3.97–4.05").</summary>
     public required IReadOnlyList<string> Expectations { get; init; }
 }

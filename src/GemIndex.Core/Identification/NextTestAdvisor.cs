@@ -53,25 +53,55 @@ public static class NextTestAdvisor
             if (best is null || gain > best.Value.Gain + 1e-9) best = (Tests[test].Field, gain);
         }
         var look = Look(sheet, weighted, tables, groups);
-        var leaders = Leaders(weighted, byGroup: groups is not null);
+        bool byGroup = groups is not null;
         if (look is { } l && l.Gain > (best?.Gain ?? 0) + 1e-9 && l.Gain >= minimum)
+        {
+            var (names, lines, alike) = Shown(weighted, byGroup, m => ExpectedLook(l.Features, m));
             return new NextTestAdvice
             {
                 Test = BenchField.Magnification,
                 GainBits = Math.Round(l.Gain, 3),
-                Separates = [.. leaders.Select(c => c.Material.Name)],
-                Expectations = [.. leaders.Select(c => $"{c.Material.Name}: {ExpectedLook(l.Features, c.Material)}")],
+                Separates = names,
+                Groups = alike,
+                Expectations = lines,
                 LookFor = [.. l.Features.Select(f => MagnificationVocabulary.Of(f).Name)],
                 Lighting = [.. l.Features.Select(f => MagnificationVocabulary.Of(f).Lighting)],
             };
+        }
         if (best is not { } chosen || chosen.Gain < minimum) return null;
-        return new NextTestAdvice
+        var (separates, expectations, alikeGroups) = Shown(weighted, byGroup, m => Expected(chosen.Test, m));
+        return new NextTestAdvice { Test = chosen.Test, GainBits = Math.Round(chosen.Gain, 3), Separates = separates, Groups = alikeGroups, Expectations = expectations };
+    }
+
+    /// <summary>
+    /// The candidates the advice names and what they would show: the leaders (<see cref="Leaders"/>), those that would
+    /// show the same on one line ("ruby, heated ruby and star ruby: lines at 694.2 …"), so that the lines show what the
+    /// test tells apart; when every leader would show the same, the likeliest other candidate that would not joins them,
+    /// since the test's worth lies in telling them from it.
+    /// </summary>
+    private static (List<string> Names, List<string> Lines, List<IReadOnlyList<string>> Groups) Shown(List<(Material Material, double P)> weighted, bool byGroup, Func<Material, string> expected)
+    {
+        var leaders = Leaders(weighted, byGroup);
+        var lines = new List<(string Outcome, List<string> Names)>();
+        foreach (var (material, _) in leaders)
         {
-            Test = chosen.Test,
-            GainBits = Math.Round(chosen.Gain, 3),
-            Separates = [.. leaders.Select(c => c.Material.Name)],
-            Expectations = [.. leaders.Select(c => $"{c.Material.Name}: {Expected(chosen.Test, c.Material)}")],
-        };
+            string outcome = expected(material);
+            int at = lines.FindIndex(x => x.Outcome == outcome);
+            if (at < 0) lines.Add((outcome, [material.Name]));
+            else lines[at].Names.Add(material.Name);
+        }
+        if (lines.Count == 1)
+        {
+            var named = leaders.Select(c => c.Material).ToHashSet();
+            foreach (var (material, _) in weighted.Where(c => !named.Contains(c.Material)).OrderByDescending(c => c.P))
+            {
+                string outcome = expected(material);
+                if (outcome == lines[0].Outcome) continue;
+                lines.Add((outcome, [material.Name]));
+                break;
+            }
+        }
+        return ([.. lines.SelectMany(x => x.Names)], [.. lines.Select(x => $"{BenchWarnings.Listed(x.Names)}: {x.Outcome}")], [.. lines.Select(x => (IReadOnlyList<string>)x.Names)]);
     }
 
     /// <summary>A candidate counts among the leaders the advice names when it holds at least this share (a judgement).</summary>
@@ -81,7 +111,7 @@ public static class NextTestAdvisor
     private const int LeaderCount = 5;
 
     /// <summary>
-    /// The candidates the advice names with what each would show: when the test tells materials apart, the best entry of
+    /// The candidates the advice names with what they would show: when the test tells materials apart, the best entry of
     /// each leading species first (the test's worth lies between species, and five varieties of one species that would all
     /// show the same say nothing), then the next entries; when it tells a species' origins apart, the leading entries.
     /// </summary>

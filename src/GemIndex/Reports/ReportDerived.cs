@@ -128,7 +128,7 @@ internal static class ReportDerived
     private const int ShownSpecies = 5;
 
     public static string NextTestLine(StoneReport report) => report.NextTest is { } n
-        ? $"{n.Description}: it would {Separation(n.GainBits)} {string.Join(", ", n.Separates)}."
+        ? $"{n.Description}: it would {Separation(n.GainBits)} {n.SeparatesInWords}."
         : "None suggested: no remaining test would separate the candidates.";
 
     /// <summary>How well the next test separates the leading candidates, in words (1 bit halves the doubt).</summary>

@@ -638,8 +638,29 @@ public class IdentifierTests
         var sheet = new BenchSheet { Refractometer = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770)) };
         var advice = NextTestAdvisor.Advise(sheet, [.. varieties, (rival, 0.1)])!;
         Assert.Equal(GemIndex.Core.Bench.BenchField.ThermalProbe, advice.Test);
-        Assert.Equal(["variety 1", "rival"], advice.Separates.Take(2).ToArray());
-        Assert.Contains(advice.Expectations, e => e.StartsWith("rival: positive", StringComparison.Ordinal));
+        Assert.Equal("variety 1", advice.Separates[0]);
+        Assert.Contains("rival", advice.Separates);
+        // The varieties that would all read the same share one line; the rival's reading stands apart.
+        Assert.Equal(2, advice.Expectations.Count);
+        Assert.StartsWith("variety 1, variety 2, variety 3 and variety 4: negative", advice.Expectations[0]);
+        Assert.StartsWith("rival: positive", advice.Expectations[1]);
+        Assert.Equal("variety 1, variety 2, variety 3 and variety 4 from rival", advice.SeparatesInWords);
+    }
+
+    [Fact]
+    public void When_every_leader_would_show_the_same_the_advice_names_what_the_test_tells_them_from()
+    {
+        // Five invented entries of one species lead alike; a sixth, less likely than the advice's leader share, is the one
+        // the probe would tell apart. The lines must show that contrast rather than five identical readings.
+        var indices = OpticalIndices.Uniaxial(new(1.767, 1.772), new(1.759, 1.763));
+        var alike = Enumerable.Range(1, 5).Select(k => (Make($"variety {k}", "leading", indices, 3.99, 4.01, OpticSign.Negative, new(0.008, 0.009)), 0.19)).ToList();
+        Material apart = Make("conductor", "leading", indices, 3.99, 4.01, OpticSign.Negative, new(0.008, 0.009), thermal: ThermalProbeResult.Positive);
+        var sheet = new BenchSheet { Refractometer = Facet((0, 1.762, 1.770), (45, 1.764, 1.770), (90, 1.767, 1.770), (135, 1.765, 1.770)) };
+        var advice = NextTestAdvisor.Advise(sheet, [.. alike, (apart, 0.015)])!;
+        Assert.Equal(GemIndex.Core.Bench.BenchField.ThermalProbe, advice.Test);
+        Assert.Equal(["variety 1, variety 2, variety 3, variety 4 and variety 5: negative", "conductor: positive"],
+            advice.Expectations.Select(e => e.Split(" (")[0]).ToArray());
+        Assert.Equal("variety 1, variety 2, variety 3, variety 4 and variety 5 from conductor", advice.SeparatesInWords);
     }
 
     [Fact]

@@ -227,7 +227,7 @@ internal static class ResultText
     [
         $"Next test: {advice.Description}",
         // How well, in the same words as the reports ("it would partly separate"): a colour call is not settled by a loupe.
-        .. advice.Separates.Count > 1 ? [$"  it would {GemIndex.Cli.Reports.ReportDerived.Separation(advice.GainBits)} {Listed(advice.Separates)}"] : Array.Empty<string>(),
+        .. advice.Separates.Count > 1 ? [$"  it would {GemIndex.Cli.Reports.ReportDerived.Separation(advice.GainBits)} {advice.SeparatesInWords}"] : Array.Empty<string>(),
         .. advice.Expectations.Select(e => "  " + e),
     ];
 
