@@ -16,10 +16,14 @@ internal static class SeriesAsRead
     /// The analysis with its interpretations replaced by every character's reading that holds at least
     /// <see cref="BenchWarnings.Relevant"/> of the posterior (each weighted by its share; a biaxial reading's share is
     /// halved between its two places for β), likeliest first, and its character the likeliest reading's. A series that
-    /// cannot show which edge moves, or shows one edge only, keeps the analysis as it is.
+    /// cannot show which edge moves keeps the analysis as it is; one constant edge keeps its reading, weighted by the
+    /// posterior's "singly refractive".
     /// </summary>
     public static RotationSeriesResult Weighed(RotationSeriesResult analysed, IReadOnlyList<SeriesInterpretation>? everyCharacter, OpticCharacterPosterior odds)
     {
+        // One constant edge has one reading, n; its share is the posterior's "singly refractive".
+        if (analysed is { Character: OpticCharacter.Isotropic, Interpretations: [{ Character: OpticCharacter.Isotropic } single] })
+            return analysed with { Interpretations = [single with { Weight = odds.Isotropic }] };
         if (everyCharacter is null || analysed.Character is not (OpticCharacter.Uniaxial or OpticCharacter.Biaxial)) return analysed;
         double Share(SeriesInterpretation i) => i.Character == OpticCharacter.Biaxial ? odds.Biaxial / 2
             : i.Sign == OpticSign.Positive ? odds.UniaxialPositive : odds.UniaxialNegative;

@@ -33,9 +33,9 @@ internal static class IdentificationText
                 ? $"Optic character, from the readings alone: {ReportDerived.CharacterOdds(character)}"
                 : series.Character is { } c ? $"Optic character: {c.ToString().ToLowerInvariant()}" : "Optic character: undetermined");
             // Beneath the posterior, each pattern's indices are a reading of the edges, not a verdict ("read as …"),
-            // with its share of the posterior.
+            // after its share of the posterior.
             foreach (var h in series.Interpretations)
-                o.WriteLine(result.SeriesCharacter is null || h.Character is null ? $"  {h.Description}" : $"  read as {h.Description} ({ReportNumbers.Percent(h.Weight)})");
+                o.WriteLine(result.SeriesCharacter is null || h.Character is null ? $"  {h.Description}" : $"  {ReportNumbers.Percent(h.Weight),7} read as {h.Description}");
         }
         o.WriteLine(result.NoGoodMatch
             ? "NO GOOD MATCH: nothing in the catalogue fits these readings; the list below is only the least bad."

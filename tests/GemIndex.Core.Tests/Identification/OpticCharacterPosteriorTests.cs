@@ -156,9 +156,11 @@ public class OpticCharacterPosteriorTests
         Assert.All(shown.Interpretations.Where(i => i.Character == OpticCharacter.Biaxial), i => Assert.Equal(odds.Biaxial / 2, i.Weight));
         Assert.Equal(shown.Interpretations.OrderByDescending(i => i.Weight), shown.Interpretations);
 
-        // One constant edge: the analysis stands as it is (singly refractive).
+        // One constant edge: its one reading stands (singly refractive), weighted by the posterior's singly refractive share.
         var one = new Identifier([Anything]).Identify(new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Facet, [new(0, 1.718), new(90, 1.718)]) });
-        Assert.Equal(OpticCharacter.Isotropic, Assert.Single(one.Series!.Interpretations).Character);
+        var single = Assert.Single(one.Series!.Interpretations);
+        Assert.Equal(OpticCharacter.Isotropic, single.Character);
+        Assert.Equal(one.SeriesCharacter!.Isotropic, single.Weight);
     }
 }
 
