@@ -196,10 +196,10 @@ public static class BenchWarnings
     }
 
     /// <summary>
-    /// The species of the leading species' mineral group that each hold at least <see cref="VarietyShare"/> of the group's
-    /// total, with the group's entries of those species and their posteriors, when the group is settled
-    /// (<see cref="SettledSpecies"/>) and there are two or more such species; else null. The same shares as for varieties:
-    /// a group's species left open are to the group what varieties are to a species.
+    /// The species of the leading species' mineral group that each hold at least <see cref="Relevant"/>, with the group's
+    /// entries of those species and their posteriors, when the group is settled (<see cref="SettledSpecies"/>) and there
+    /// are two or more such species; else null. The same species as the answer's group line
+    /// (<see cref="IdentificationResult.LeadingGroup"/>).
     /// </summary>
     internal static (GroupSpecies Open, IReadOnlyList<(Material Material, double Probability)> Entries)? InseparableGroup(
         IReadOnlyList<SpeciesResult> species, IReadOnlyList<Material> materials, IReadOnlyList<double> posterior)
@@ -207,7 +207,8 @@ public static class BenchWarnings
         if (species.Count == 0 || species[0].MineralGroup is not { } group) return null;
         var members = species.Where(s => s.MineralGroup == group).ToList();
         double total = members.Sum(s => s.Confidence);
-        var held = members.Where(s => s.Confidence >= VarietyShare * total).Select(s => s.Species).ToList();
+        // The species the answer's group line names (IdentificationResult.LeadingGroup): the warning names the same.
+        var held = members.Where(s => s.Confidence >= Relevant).Select(s => s.Species).ToList();
         if (total < SettledSpecies || held.Count < 2) return null;
         var entries = new List<(Material, double)>();
         for (int i = 0; i < materials.Count; i++)
