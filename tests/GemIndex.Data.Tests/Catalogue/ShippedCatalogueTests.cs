@@ -79,7 +79,9 @@ public class ShippedCatalogueTests
     [InlineData("heated ruby", "ruby")]
     [InlineData("heated aquamarine", "aquamarine")]
     [InlineData("heated pink topaz", "pink topaz")]
-    public void A_heated_entry_is_written_like_its_unheated_sibling_and_reads_with_its_lines_and_sources(string name, string sibling)
+    // A filler sits in fissures and leaves the crystal's indices, SG and chromium spectrum as they were (common practice).
+    [InlineData("resin-filled emerald", "emerald")]
+    public void A_heated_or_filled_entry_is_written_like_its_untreated_sibling_and_reads_with_its_lines_and_sources(string name, string sibling)
     {
         // Built and loaded as the engine sees it; the likeness from the family files.
         using var temp = new TempDirectory();
