@@ -81,6 +81,7 @@ public class ShippedCatalogueTests
     [InlineData("heated pink topaz", "pink topaz")]
     // A filler sits in fissures and leaves the crystal's indices, SG and chromium spectrum as they were (common practice).
     [InlineData("resin-filled emerald", "emerald")]
+    [InlineData("fracture-filled diamond", "diamond")]
     public void A_heated_or_filled_entry_is_written_like_its_untreated_sibling_and_reads_with_its_lines_and_sources(string name, string sibling)
     {
         // Built and loaded as the engine sees it; the likeness from the family files.
