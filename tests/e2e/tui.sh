@@ -93,8 +93,8 @@ echo "---- 80x24 stone 1 ----"; screen
 # The readings used sit below the lead and the candidates at 80x24: reached by scrolling the answer from the keyboard.
 keys F10
 wait_for "Enter detail │ F10 or Esc back"
-for _ in 1 2 3 4 5 6 7 8; do screen | grep -qF "Refractive indices: 1.544 to 1.553" && break; keys Down Down Down; sleep 0.3; done
-wait_for "Refractive indices: 1.544 to 1.553"
+for _ in 1 2 3 4 5 6 7 8; do screen | grep -qF "Refractive indices: ω 1.544, ε 1.553" && break; keys Down Down Down; sleep 0.3; done
+wait_for "Refractive indices: ω 1.544, ε 1.553"
 keys PgUp PgUp PgUp
 keys Escape
 wait_for "Tab next field │"
