@@ -119,7 +119,7 @@ public static class BenchWarnings
             string test = i == 0 && separation is { } next
                 ? $"the {next.Description} would help"
                 : i == 0 ? "no bench test left here separates them" : "";
-            string laboratory = held.Contains(OriginClass.Cultured) && held.Contains(OriginClass.Natural) ? " (its X-radiography tells cultured from natural)" : "";
+            string laboratory = OnlyLaboratoryTells(held) ? " (its X-radiography tells cultured from natural)" : "";
             warnings.Add($"{Capital(leading[i].Species)}: {Listed(origins)} cannot be separated by these tests{(test.Length > 0 ? "; " + test : "")}; for a valuable stone refer it to a qualified laboratory{laboratory}.");
         }
         // Species of one mineral group the tests leave open (elbaite, uvite and dravite of the tourmalines), and what would tell them.
@@ -168,6 +168,12 @@ public static class BenchWarnings
         string still = shown == OpticSign.Positive ? "low" : "high";
         return $"The readings show a uniaxial {Word(shown)} pattern (the {still} edge stays still as the stone turns), but {leader.Species} is uniaxial {Word(leader.Sign)}: re-check which edge stays still, or the stone is not {leader.Species}. The answer weighs the readings as read.";
     }
+
+    /// <summary>
+    /// Whether these inseparable origins include a cultured and a natural kind: they differ in their core, which only a
+    /// laboratory's X-radiography shows (common practice), so no bench test is offered for them.
+    /// </summary>
+    internal static bool OnlyLaboratoryTells(IReadOnlyList<OriginClass> held) => held.Contains(OriginClass.Cultured) && held.Contains(OriginClass.Natural);
 
     /// <summary>The species' origins that each hold at least <see cref="OriginShare"/> of it, likeliest first, when there are two or more and the species is relevant; else null.</summary>
     internal static IReadOnlyList<OriginClass>? Inseparable(SpeciesResult species)

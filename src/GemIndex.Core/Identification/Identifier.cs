@@ -224,9 +224,9 @@ public sealed class Identifier
         // The leading species by its total, not the species of the single likeliest entry: one lone entry of another
         // species can outweigh each of a species' many varieties while the species as a whole leads.
         if (species.Count == 0) return null;
-        // A cultured pearl and a natural one differ in their core, which only a laboratory's X-radiography shows; a test
-        // whose catalogue outcomes differ between them (a glow listed for one kind only) would be advice the trade does not take.
-        if (BenchWarnings.Inseparable(species[0]) is { } held && held.Contains(OriginClass.Cultured) && held.Contains(OriginClass.Natural)) return null;
+        // A test whose catalogue outcomes differ between a cultured and a natural pearl (a glow listed for one kind only)
+        // would be advice the trade does not take.
+        if (BenchWarnings.Inseparable(species[0]) is { } held && BenchWarnings.OnlyLaboratoryTells(held)) return null;
         string leading = species[0].Species;
         var entries = new List<(Material, double)>();
         for (int i = 0; i < posterior.Length; i++)

@@ -49,12 +49,9 @@ public static class RotationSeriesAnalysis
         if (gap > MaximumGapForCharacter || both.Count < 2)
             return Partial(both, sigma, gap, misreadings);
 
-        var lows = EdgeValues(both, x => x.Low, band, "low", misreadings);
-        var highs = EdgeValues(both, x => x.High!.Value, band, "high", misreadings);
+        var (lows, highs, lowEdge, highEdge) = Edges(both, sigma, band, gap, misreadings);
         bool lowConstant = Spread(lows) <= band;
         bool highConstant = Spread(highs) <= band;
-        var lowEdge = MovingEdge.Of(lows, sigma, gap);
-        var highEdge = MovingEdge.Of(highs, sigma, gap);
         if (lowConstant || highConstant)
             return Uniaxial(lows, highs, lowEdge, highEdge, lowConstant, highConstant, sigma, gap, misreadings);
         return Biaxial(lows, highs, lowEdge, highEdge, sigma, band, gap, misreadings);
@@ -77,16 +74,22 @@ public static class RotationSeriesAnalysis
         if (!s.Any(x => x.High is { } h && h - x.Low > band) || gap > MaximumGapForCharacter || both.Count < 2) return null;
         // The misreadings are the analysis' own to report; here only the readings left after them count.
         var unreported = new List<string>();
-        var lows = EdgeValues(both, x => x.Low, band, "low", unreported);
-        var highs = EdgeValues(both, x => x.High!.Value, band, "high", unreported);
-        var lowEdge = MovingEdge.Of(lows, sigma, gap);
-        var highEdge = MovingEdge.Of(highs, sigma, gap);
+        var (lows, highs, lowEdge, highEdge) = Edges(both, sigma, band, gap, unreported);
         return
         [
             .. Uniaxial(lows, highs, lowEdge, highEdge, lowConstant: true, highConstant: false, sigma, gap, unreported).Interpretations,
             .. Uniaxial(lows, highs, lowEdge, highEdge, lowConstant: false, highConstant: true, sigma, gap, unreported).Interpretations,
             .. Biaxial(lows, highs, lowEdge, highEdge, sigma, band, gap, unreported).Interpretations,
         ];
+    }
+
+    /// <summary>The low and the high edges of the steps that show both, a lone stray of each left out (and named), and each edge's extremes.</summary>
+    private static (List<EdgeValue> Lows, List<EdgeValue> Highs, MovingEdge LowEdge, MovingEdge HighEdge) Edges(
+        List<ShadowEdgeStep> both, double sigma, double band, double gap, List<string> misreadings)
+    {
+        var lows = EdgeValues(both, x => x.Low, band, "low", misreadings);
+        var highs = EdgeValues(both, x => x.High!.Value, band, "high", misreadings);
+        return (lows, highs, MovingEdge.Of(lows, sigma, gap), MovingEdge.Of(highs, sigma, gap));
     }
 
     /// <summary>The steps with the calibration applied, the reading's σ, the constant-edge band and the largest gap.</summary>
