@@ -148,7 +148,7 @@ public static class RotationSeriesAnalysis
             Character = null,
             UndeterminedReason = both.Count < 2
                 ? "a single rotation step cannot show which edge moves"
-                : $"the steps leave a gap of {gap.ToString("0", CultureInfo.InvariantCulture)}° in the half turn: rotate through 180° to fix the optic character",
+                : $"the steps leave {gap.ToString("0", CultureInfo.InvariantCulture)}° of the half turn unread: read on round the half turn, leaving no gap over {MaximumGapForCharacter.ToString("0", CultureInfo.InvariantCulture)}°, to fix the optic character",
             Interpretations = [new SeriesInterpretation
             {
                 Character = null, Lowest = Index(lo, Extreme(sigma)), Highest = Index(hi, Extreme(sigma)),

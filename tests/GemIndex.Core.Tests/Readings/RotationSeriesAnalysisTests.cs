@@ -133,6 +133,16 @@ public class RotationSeriesAnalysisTests
     }
 
     [Fact]
+    public void Steps_over_too_little_of_the_half_turn_say_how_much_is_unread_and_how_far_to_go_on()
+    {
+        // Four steps 15° apart (0–45°) leave 135° of the half turn unread; no gap may exceed 90° for the character.
+        var result = RotationSeriesAnalysis.Analyse([new(0, 1.544, 1.553), new(15, 1.544, 1.551), new(30, 1.544, 1.548), new(45, 1.544, 1.550)], 0.001);
+        Assert.Null(result.Character);
+        Assert.Equal("the steps leave 135° of the half turn unread: read on round the half turn, leaving no gap over 90°, to fix the optic character",
+            result.UndeterminedReason);
+    }
+
+    [Fact]
     public void The_largest_gap_wraps_around_the_half_turn() =>
         // Steps at 0, 45, 90, 135: gaps of 45° including 135 → 180 (= 0).
         Assert.Equal(45, RotationSeriesAnalysis.LargestGap([0, 45, 90, 135]), 9);
