@@ -40,6 +40,27 @@ public static class LeadingCandidates
         candidates.Select(c => c.Material.Species).Distinct().Skip(1).Any()
         && candidates.Zip(candidates.Skip(1)).Any(p => p.Second.Confidence > p.First.Confidence && p.Second.Confidence >= VisibleShare);
 
+    /// <summary>
+    /// The least share an answer lists a candidate or a species at: what rounds to 0.1 % (a judgement: below it the line
+    /// would print as "&lt;0.1 %", and a peridot's list would end with a heated ruby at 10⁻⁴⁰). docs/ranking.md §3,
+    /// "Listed candidates".
+    /// </summary>
+    public const double ListedShare = 0.0005;
+
+    /// <summary>
+    /// Positions, in the answer's order, of the candidates every front end lists: the leader always, each other holding
+    /// <see cref="ListedShare"/> or more; every one when nothing fits (the list is then only the least bad, and all of it
+    /// is what the readings leave). The result document keeps every candidate.
+    /// </summary>
+    public static int[] Listed(IReadOnlyList<RankedCandidate> candidates, bool noGoodMatch) =>
+        [.. Enumerable.Range(0, candidates.Count).Where(i => i == 0 || noGoodMatch || candidates[i].Confidence >= ListedShare)];
+
+    /// <summary>The same for a result.</summary>
+    public static int[] Listed(IdentificationResult result) => Listed(result.Candidates, result.NoGoodMatch);
+
+    /// <summary>Whether an answer lists a species of this total: the leading species always, every one when nothing fits.</summary>
+    public static bool SpeciesListed(int position, double total, bool noGoodMatch) => position == 0 || noGoodMatch || total >= ListedShare;
+
     /// <summary>Shares below this print as "&lt;1%": their order among themselves is not seen, so it needs no heading.</summary>
     public const double VisibleShare = 0.005;
 }

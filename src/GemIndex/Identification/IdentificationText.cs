@@ -22,7 +22,7 @@ internal static class IdentificationText
             foreach (var f in look.Absent.Order()) o.WriteLine($"Looked for, not seen: {MagnificationVocabulary.Of(f).Name}: {MagnificationVocabulary.Of(f).Meaning}");
         }
         // A species under 0.1 % says nothing more by its origins ("natural <0.1 %, synthetic <0.1 %, …" is clutter).
-        foreach (SpeciesResult s in ResultDocument.SpeciesShown(result))
+        foreach (SpeciesResult s in ResultDocument.SpeciesShown(result).Where((s, i) => LeadingCandidates.SpeciesListed(i, s.Confidence, result.NoGoodMatch)))
             o.WriteLine($"Species: {s.Species} {ReportNumbers.Percent(s.Confidence)}"
                 + (s.Origins.Count > 0 && s.Confidence >= ReportNumbers.SmallestShown ? " (" + string.Join(", ", s.Origins.OrderByDescending(x => x.Value).Select(x => $"{BenchWords.Word(x.Key)} {ReportNumbers.Percent(x.Value)}")) + ")" : ""));
         if (!result.NoGoodMatch && result.LeadingGroup is { } group)
@@ -41,11 +41,14 @@ internal static class IdentificationText
             ? "NO GOOD MATCH: nothing in the catalogue fits these readings; the list below is only the least bad."
             : "Candidates:");
         // Headings when the species-first order puts a larger share after a smaller one, as in the text UI.
-        bool grouped = LeadingCandidates.NeedsSpeciesHeadings(result.Candidates);
-        foreach (var (c, i) in result.Candidates.Select((c, i) => (c, i)))
+        // Only the candidates the readings leave in play (LeadingCandidates.Listed); each keeps its rank in the answer.
+        int[] listed = LeadingCandidates.Listed(result);
+        bool grouped = LeadingCandidates.NeedsSpeciesHeadings([.. listed.Select(i => result.Candidates[i])]);
+        foreach (var (i, k) in listed.Select((i, k) => (i, k)))
         {
+            RankedCandidate c = result.Candidates[i];
             // Each species' entries under its name and total, so that a rank after another species' varieties reads as its own species'.
-            if (grouped && (i == 0 || c.Material.Species != result.Candidates[i - 1].Material.Species))
+            if (grouped && (k == 0 || c.Material.Species != result.Candidates[listed[k - 1]].Material.Species))
                 o.WriteLine($"  {c.Material.Species}{(result.SpeciesConfidence(c.Material.Species) is { } total ? " " + ReportNumbers.Percent(total) : "")}:");
             string bar = new('#', (int)Math.Round(c.Confidence * 20));
             o.WriteLine($"{i + 1,2}. {c.Material.Name,-36} {ReportNumbers.Percent(c.Confidence),7} {bar,-20} fit {ReportNumbers.Fixed(c.Fit, "0.00")}  ({c.Material.Species}, {BenchWords.Word(c.Material.Origin)})");

@@ -76,10 +76,10 @@ internal sealed record StoneReport
             Misreadings = series?.Misreadings ?? [],
             SpecificGravity = bench.SpecificGravity,
             SpecificGravitySource = sheet.Readings.Sg is not null ? "given directly" : sheet.Readings.SgWeighing is not null ? "hydrostatic weighing" : "",
-            // A candidate that would print as 0.0 % says nothing on paper; it stays in the JSON's result document.
+            // The candidates every answer lists (LeadingCandidates.Listed); the rest stay in the JSON's result document.
             // Reasons for the explained candidates only, whoever worked out more (the text UI does for its detail view).
-            Candidates = [.. result.Candidates.Select((c, i) => new ReportCandidate(i + 1, c.Material.Name, c.Material.Species, Word(c.Material.Origin.ToString()),
-                c.Confidence, c.Fit, explained[i] ? c.Reasons : [])).Where(c => c.Confidence >= ShownConfidence)],
+            Candidates = [.. LeadingCandidates.Listed(result).Select(i => (c: result.Candidates[i], i)).Select(x => new ReportCandidate(x.i + 1, x.c.Material.Name,
+                x.c.Material.Species, Word(x.c.Material.Origin.ToString()), x.c.Confidence, x.c.Fit, explained[x.i] ? x.c.Reasons : []))],
             NotInCatalogue = result.NotInCatalogue,
             NoGoodMatch = result.NoGoodMatch,
             NextTest = result.NextTest,
@@ -108,9 +108,6 @@ internal sealed record StoneReport
     private static ReportInterpretation Interpretation(SeriesInterpretation i) => new(
         i.Character is { } c ? Word(c.ToString()) : ReportInterpretation.Undetermined, Word(i.Sign.ToString()), i.Weight,
         i.Lowest.Value, i.Highest.Value, i.Beta?.Value, i.Birefringence.Value, i.Birefringence.StandardUncertainty, i.Description);
-
-    /// <summary>The least confidence a printed report lists: what rounds to 0.1 % (below it the line would read 0.0 %).</summary>
-    public const double ShownConfidence = 0.0005;
 
     /// <summary>Shown for a description field left empty.</summary>
     public const string NotRecorded = "not recorded";

@@ -149,6 +149,23 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void The_listed_candidates_are_the_leader_and_those_rounding_to_a_tenth_of_a_percent_or_more_each_at_its_place()
+    {
+        RankedCandidate C(string species, double p) => new() { Material = Catalogue[0] with { Species = species }, Confidence = p, Fit = 1 };
+        // A species' tiny variety between two shares that print is left out, the next species keeps its place (rank 4).
+        RankedCandidate[] answer = [C("a", 0.9), C("a", 0.0004999), C("b", 0.0005), C("c", 0.0996), C("d", 1e-40)];
+        Assert.Equal([0, 2, 3], LeadingCandidates.Listed(answer, noGoodMatch: false));
+        // When nothing fits, the whole least-bad list is what the readings leave.
+        Assert.Equal([0, 1, 2, 3, 4], LeadingCandidates.Listed(answer, noGoodMatch: true));
+        // The leader is listed however small its share (a sheet that says next to nothing).
+        Assert.Equal([0], LeadingCandidates.Listed([C("a", 0.0001), C("b", 0.00009)], noGoodMatch: false));
+        Assert.Empty(LeadingCandidates.Listed([], noGoodMatch: false));
+        Assert.True(LeadingCandidates.SpeciesListed(0, 1e-9, noGoodMatch: false));
+        Assert.False(LeadingCandidates.SpeciesListed(1, 0.0004999, noGoodMatch: false));
+        Assert.True(LeadingCandidates.SpeciesListed(1, 0.0004999, noGoodMatch: true));
+    }
+
+    [Fact]
     public void Leading_candidates_take_the_first_entry_of_each_species_then_the_rest_in_order()
     {
         string[] species = ["beryl", "beryl", "beryl", "glass", "beryl", "quartz"];

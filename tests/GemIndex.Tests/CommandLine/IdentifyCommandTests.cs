@@ -168,15 +168,20 @@ public class IdentifyCommandTests
     }
 
     [Fact]
-    public void A_species_under_a_tenth_of_a_percent_is_listed_without_its_origins()
+    public void Species_and_candidates_the_readings_rule_out_are_not_listed_and_the_JSON_keeps_them()
     {
         // Synthetic moissanite: over the limit, SG 3.22, probe positive, conductive (common practice); diamond trails far
-        // behind, and its origins would all read "<0.1 %".
+        // behind (it would read "<0.1 %"), so it is neither a species line nor a candidate line.
         using var run = new CommandRun();
-        var (exit, output, error) = Identify(run, "--over-limit", "--sg", "3.22", "--thermal-probe", "positive", "--electrical", "conductive", "--colour", "colourless");
+        string[] readings = ["--over-limit", "--sg", "3.22", "--thermal-probe", "positive", "--electrical", "conductive", "--colour", "colourless"];
+        var (exit, output, error) = Identify(run, readings);
         Assert.True(exit == 0, error);
         Assert.StartsWith("Species: moissanite >99.9 % (synthetic >99.9 %)", output, StringComparison.Ordinal);
-        Assert.Contains("Species: diamond <0.1 %" + Environment.NewLine, output, StringComparison.Ordinal);
+        Assert.DoesNotContain("Species: diamond", output, StringComparison.Ordinal);
+        Assert.DoesNotContain("<0.1 %  ", output, StringComparison.Ordinal);
+        Assert.DoesNotContain("(diamond, natural)", output, StringComparison.Ordinal);
+        var (_, json, _) = Identify(run, [.. readings, "--json"]);
+        Assert.Contains("\"species\":\"diamond\"", json.Replace(" ", "", StringComparison.Ordinal), StringComparison.Ordinal);
     }
 
     [Fact]

@@ -140,7 +140,7 @@ public class StoneReportTests
         Assert.All(report.Candidates, c => Assert.NotEqual("0.0 %", ReportNumbers.Percent(c.Confidence)));
         Assert.DoesNotContain("| 0.0 % |", MarkdownReport.Write(report));
         // The quartz readings leave the fixture's other materials far below 0.05 %: they are in the result, not on paper.
-        int tiny = report.Result.Candidates.Count(c => c.Confidence < StoneReport.ShownConfidence);
+        int tiny = report.Result.Candidates.Count(c => c.Confidence < LeadingCandidates.ListedShare);
         Assert.True(tiny > 0);
         Assert.Equal(report.Result.Candidates.Count - tiny, report.Candidates.Count);
     }

@@ -28,11 +28,12 @@ internal sealed class ScaleModel
         var scales = new List<Func<int, ReadingScale>>();
         // The best entry of each species first, then the next entries (as the answer's leaders): four varieties of one
         // species share its ranges and say nothing against a rival species'. Each keeps its rank in the answer.
-        IReadOnlyList<RankedCandidate> all = assessment?.Result?.Candidates ?? [];
-        IReadOnlyList<RankedCandidate> ranked = [.. all.Take(ResultsModel.ListedOf(all))];   // only the candidates the answer lists
+        IdentificationResult? result = assessment?.Result;
+        int[] listed = result is null ? [] : LeadingCandidates.Listed(result);   // only the candidates the answer lists
+        IReadOnlyList<RankedCandidate> ranked = [.. listed.Select(i => result!.Candidates[i])];
         IReadOnlyList<int> order = [.. LeadingCandidates.Order(ranked).Take(MostCandidates)];
         IReadOnlyList<Material> top = [.. order.Select(i => ranked[i].Material)];
-        IReadOnlyList<int> ranks = [.. order.Select(i => i + 1)];
+        IReadOnlyList<int> ranks = [.. order.Select(i => listed[i] + 1)];
         if (top.Count > 0 && assessment is { } a)
         {
             if (a.Result?.Series?.Interpretations.MaxBy(i => i.Weight) is SeriesInterpretation best)

@@ -10,15 +10,6 @@ namespace GemIndex.Cli.TextUi.Results;
 /// </summary>
 internal sealed class ResultsModel
 {
-    /// <summary>
-    /// Candidates always listed (when the catalogue has them); the list goes on through the last of the engine's candidates
-    /// that holds at least <see cref="ListedShare"/>, so a species shown after another's many varieties is not cut off.
-    /// </summary>
-    public const int CandidatesListed = 6;
-
-    /// <summary>The least share a candidate beyond the first six needs to be listed (a judgement).</summary>
-    public const double ListedShare = 0.005;
-
     /// <summary>The heading over the candidates: the list is grouped by species (the species' order of the lead), best entry first within each.</summary>
     public const string CandidatesHeading = "Candidates by species (Enter: detail)";
 
@@ -45,16 +36,8 @@ internal sealed class ResultsModel
     /// <summary>Why <see cref="Waiting"/> lasts (a catalogue that failed to load), shown in full.</summary>
     public string? WaitingReason { get; set; }
 
-    /// <summary>How many candidates the pane lists.</summary>
-    public int Listed => ListedOf(Candidates);
-
-    /// <summary>How many of these candidates the answer lists: at least <see cref="CandidatesListed"/>, through the last holding <see cref="ListedShare"/>.</summary>
-    public static int ListedOf(IReadOnlyList<RankedCandidate> candidates)
-    {
-        int last = -1;
-        for (int i = 0; i < candidates.Count; i++) if (candidates[i].Confidence >= ListedShare) last = i;
-        return Math.Min(candidates.Count, Math.Max(CandidatesListed, last + 1));
-    }
+    /// <summary>Positions of the candidates the pane lists: those every front end lists (<see cref="LeadingCandidates.Listed(IdentificationResult)"/>).</summary>
+    public IReadOnlyList<int> Listed => Latest?.Result is { } r ? LeadingCandidates.Listed(r) : [];
 
     /// <summary>The first row of the answer, unwrapped (the species and its total, or why there is none).</summary>
     public string Headline => Rows(int.MaxValue / 2)[0].Text;
@@ -88,13 +71,14 @@ internal sealed class ResultsModel
         rows.Add(new AnswerRow(""));
         rows.Add(new AnswerRow(CandidatesHeading));
         bool bars = width >= WidthForBars;
-        IReadOnlyList<RankedCandidate> shown = [.. Candidates.Take(Listed)];
+        IReadOnlyList<int> listed = Listed;   // each keeps its rank in the answer
+        IReadOnlyList<RankedCandidate> shown = [.. listed.Select(i => Candidates[i])];
         // When the species-first order puts a larger share after a smaller one (a rival species after the leader's many
         // varieties), each species' entries go under its name and total, indented, so that the order reads as meant;
         // a list already in order of share needs no headings and keeps its rows for the readings below.
         bool grouped = LeadingCandidates.NeedsSpeciesHeadings(shown);
         string indent = grouped ? SpeciesIndent : "";
-        int rankWidth = shown.Count.ToString(System.Globalization.CultureInfo.InvariantCulture).Length;   // "10" aligns with " 9"
+        int rankWidth = (listed.Count > 0 ? listed[^1] + 1 : 1).ToString(System.Globalization.CultureInfo.InvariantCulture).Length;   // "10" aligns with " 9"
         int nameWidth = width - 6 - rankWidth - indent.Length - (bars ? ResultText.BarWidth + 1 : 0);
         // A name too long for its column goes on under itself, whole (every row of it opens the candidate's detail).
         List<string>[] names = [.. shown.Select(c => TextWrap.Lines([c.Material.Name], nameWidth).ToList())];
@@ -103,8 +87,8 @@ internal sealed class ResultsModel
         {
             if (grouped && (i == 0 || shown[i].Material.Species != shown[i - 1].Material.Species))
                 foreach (string l in TextWrap.Lines([SpeciesHeading(r, shown[i].Material.Species)], width)) rows.Add(new AnswerRow(l, PassedOver: true));
-            rows.Add(new AnswerRow(indent + ResultText.Candidate(i + 1, names[i][0], used, shown[i].Confidence, bars, rankWidth), i));
-            foreach (string more in names[i].Skip(1)) rows.Add(new AnswerRow(indent + new string(' ', rankWidth + 1) + more, i, PassedOver: true));
+            rows.Add(new AnswerRow(indent + ResultText.Candidate(listed[i] + 1, names[i][0], used, shown[i].Confidence, bars, rankWidth), listed[i]));
+            foreach (string more in names[i].Skip(1)) rows.Add(new AnswerRow(indent + new string(' ', rankWidth + 1) + more, listed[i], PassedOver: true));
         }
         Text([$"  not in the catalogue {ResultText.Percent(r.NotInCatalogue)}"]);
         IReadOnlyList<string> derived = ResultText.Derived(a);

@@ -92,7 +92,7 @@ internal sealed class ResultsView : FrameView
         _rows = _model.Rows(_builtAt > 0 ? _builtAt : 40);
         _shown.Clear();
         foreach (AnswerRow r in _rows) _shown.Add(r.Text);
-        if (candidate is { } c && c < _model.Listed) SelectCandidate(c);
+        if (candidate is { } c && _model.Listed.Contains(c)) SelectCandidate(c);
         else if (row is { } at && _rows.Count > 0) List.SelectedItem = Math.Min(at, _rows.Count - 1);
     }
 }

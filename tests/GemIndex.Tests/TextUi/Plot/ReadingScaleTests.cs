@@ -181,18 +181,20 @@ public class ReadingScaleTests
     [Fact]
     public void The_scales_draw_only_candidates_the_answer_lists()
     {
-        // Six quartz entries fill the answer's list; a spinel at 0.1 % comes seventh and is not listed, so not drawn.
-        Material quartz = TestMaterials.All[0], spinel = TestMaterials.All[1];
+        // Two quartz entries and a glass at 0.1 % are listed; a spinel at 0.04 % is not listed (LeadingCandidates.Listed), so not drawn.
+        Material quartz = TestMaterials.All[0], spinel = TestMaterials.All[1], glass = TestMaterials.All[3];
         RankedCandidate[] ranked =
         [
-            .. Enumerable.Range(1, 6).Select(k => new RankedCandidate { Material = quartz with { Name = $"quartz {k}" }, Confidence = 0.16, Fit = 0.9 }),
-            new() { Material = spinel, Confidence = 0.001, Fit = 0.1 },
+            .. Enumerable.Range(1, 2).Select(k => new RankedCandidate { Material = quartz with { Name = $"quartz {k}" }, Confidence = 0.4995, Fit = 0.9 }),
+            new() { Material = spinel, Confidence = 0.0004, Fit = 0.1 },
+            new() { Material = glass, Confidence = 0.001, Fit = 0.1 },
         ];
         var result = new IdentificationResult { Id = "x", Candidates = ranked, NotInCatalogue = 0, NoGoodMatch = false, Warnings = [] };
         var a = new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 2.65 }, Result = result,
             SpecificGravity = new SpecificGravity(2.65, 0.01) };
         ReadingScale sg = Assert.Single(new ScaleModel(a).Scales(5));
         Assert.DoesNotContain(sg.Candidates, c => c.Name == "spinel");
+        Assert.Contains(sg.Candidates, c => c.Name == "glass");
     }
 
     [Fact]

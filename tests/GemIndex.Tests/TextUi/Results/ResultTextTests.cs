@@ -253,8 +253,32 @@ public class ResultTextTests
         };
         var model = new ResultsModel();
         model.Accept(new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 4.0 }, Result = r });
-        Assert.Equal(9, model.Listed);
+        Assert.Equal(Enumerable.Range(0, 9), model.Listed);
         Assert.Contains(model.Rows(60), x => x.Candidate == 8);
+    }
+
+    [Fact]
+    public void A_candidate_the_readings_rule_out_is_not_listed_and_the_next_keeps_its_rank()
+    {
+        // A corundum variety at 10⁻⁴⁰ between the leader and a spinel at 2 %: left out; the spinel is still number 3.
+        IdentificationResult r = CorundumAnswer(null) with
+        {
+            Candidates =
+            [
+                new() { Material = Corundum("ruby", OriginClass.Natural), Confidence = 0.98, Fit = 0.9 },
+                new() { Material = Corundum("heated ruby", OriginClass.Treated), Confidence = 1e-40, Fit = 0 },
+                new() { Material = TestMaterials.All[1], Confidence = 0.02, Fit = 0.5 },
+            ],
+        };
+        var model = new ResultsModel();
+        model.Accept(new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 4.0 }, Result = r });
+        IReadOnlyList<AnswerRow> rows = model.Rows(60);
+        Assert.Equal([0, 2], model.Listed);
+        Assert.DoesNotContain(rows, x => x.Text.Contains("heated ruby", StringComparison.Ordinal));
+        Assert.Contains(rows, x => x.Candidate == 2 && x.Text.TrimStart().StartsWith("3 spinel", StringComparison.Ordinal));
+        // When nothing fits, the whole least-bad list is shown.
+        model.Accept(new BenchAssessment { Version = 2, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 4.0 }, Result = r with { NoGoodMatch = true } });
+        Assert.Contains(model.Rows(60), x => x.Candidate == 1);
     }
 
     [Fact]
