@@ -63,6 +63,8 @@ public static class BenchField
     public const string Absorption = "absorption_nm";
     /// <summary>The body colour in plain words.</summary>
     public const string Colour = "colour";
+    /// <summary>How the stone is cut (faceted, cabochon, other): a faceted stone shows no star and no cat's-eye.</summary>
+    public const string Cut = "cut";
     /// <summary>Magnification features seen: vocabulary words separated like absorption lines (<see cref="BenchSyntax"/>).</summary>
     public const string FeaturesPresent = "magnification.present";
     /// <summary>Magnification features looked for and not seen, written the same way.</summary>
@@ -73,7 +75,7 @@ public static class BenchField
     [
         Id, Method, Spot, OverLimit, LiquidLimit, LightNm, Precision, CalibrationOffset, Sg, AirCt, WaterCt, WaterC, HeavyLiquids,
         Polariscope, Pleochroism, Dispersion, IndexAtB, IndexAtG, ThermalProbe, Electrical, UvLong, UvShort, Absorption, Colour,
-        FeaturesPresent, FeaturesAbsent,
+        Cut, FeaturesPresent, FeaturesAbsent,
     ];
 
     /// <summary>The field of one rotation step (0 = the first).</summary>

@@ -33,6 +33,9 @@ public static class BenchReader
         {
             foreach (string field in r.Values.Keys.Where(k => !Known.Contains(k)))
                 Error(field, r.Text(field), "the fields of a stone's readings", "is not a field of a stone's readings.");
+            // The cut first: a faceted stone adds the star and the cat's-eye to what was looked for and not seen.
+            StoneCut? cut = Word<StoneCut>(BenchField.Cut);
+            MagnificationObservation? magnification = Magnification(cut);
             var sheet = new BenchSheet
             {
                 Id = r.Text(BenchField.Id)?.Trim() ?? "",
@@ -48,7 +51,8 @@ public static class BenchReader
                 UvShort = Word<FluorescenceStrength>(BenchField.UvShort),
                 AbsorptionLinesNanometres = Absorption(),
                 Colour = Colour(),
-                Magnification = Magnification(),
+                Cut = HasError(BenchField.Cut) ? null : cut,
+                Magnification = magnification,
             };
             return new BenchReading { Sheet = sheet, Errors = [.. _errors.OrderBy(e => Order(e.Field)).ThenBy(e => e.Field, StringComparer.Ordinal)] };
         }
@@ -270,11 +274,23 @@ public static class BenchReader
             return lines;
         }
 
-        private MagnificationObservation? Magnification()
+        private MagnificationObservation? Magnification(StoneCut? cut)
         {
             var present = Features(BenchField.FeaturesPresent);
             var absent = Features(BenchField.FeaturesAbsent);
+            if (cut == StoneCut.Faceted && !HasError(BenchField.FeaturesPresent))
+            {
+                // A faceted stone is a stone on which no star or cat's-eye can be seen: as if looked for and not seen.
+                if ((present ?? []).Intersect(MagnificationVocabulary.DomedPhenomena).ToList() is { Count: > 0 } seen)
+                {
+                    string words = string.Join(", ", seen.Select(f => MagnificationVocabulary.Of(f).Word));
+                    Error(BenchField.Cut, "faceted", "cabochon or other with a star or cat's-eye seen",
+                        $"'faceted' cannot show the {words} given in {BenchField.FeaturesPresent}: a star or cat's-eye glides over a domed top and never shows on facets; check which was meant.");
+                }
+                else if (!HasError(BenchField.FeaturesAbsent)) absent = [.. absent ?? [], .. MagnificationVocabulary.DomedPhenomena.Where(f => !(absent ?? []).Contains(f))];
+            }
             if (present is null && absent is null) return null;
+            bool faceted = cut == StoneCut.Faceted && !HasError(BenchField.Cut);
             var both = (present ?? []).Intersect(absent ?? []).ToList();
             if (both.Count > 0)
             {
@@ -284,7 +300,7 @@ public static class BenchReader
                 return null;
             }
             if (HasError(BenchField.FeaturesPresent) || HasError(BenchField.FeaturesAbsent)) return null;
-            return new MagnificationObservation(present ?? [], absent ?? []);
+            return new MagnificationObservation(present ?? [], absent ?? []) { Faceted = faceted };
         }
 
         private List<MagnificationFeature>? Features(string field)

@@ -52,6 +52,9 @@ public sealed record BenchSheet
     /// <summary>What was looked for under magnification; null when nothing was.</summary>
     public MagnificationObservation? Magnification { get; init; }
 
+    /// <summary>How the stone is cut; a faceted cut puts the star and the cat's-eye among the features not seen (<see cref="Magnification"/>).</summary>
+    public StoneCut? Cut { get; init; }
+
     /// <summary>True when the sheet holds at least one test's reading (colour and magnification aside).</summary>
     public bool HasTestReadings => Refractometer is not null || SpecificGravity is not null || HeavyLiquids.Count > 0 || Polariscope is not null
         || Pleochroism is not null || Dispersion is not null || ThermalProbe is not null || Electrical is not null || UvLong is not null

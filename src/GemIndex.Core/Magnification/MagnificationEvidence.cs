@@ -64,7 +64,9 @@ public static class MagnificationEvidence
     {
         static string Percent(double p) => (100 * p).ToString("0", System.Globalization.CultureInfo.InvariantCulture) + " %";
         var parts = observation.Present.Order().Select(f => $"{MagnificationVocabulary.Of(f).Name} seen (held by {Percent(profile.ProbabilityOf(f))} of such stones)")
-            .Concat(observation.Absent.Order().Select(f => $"{MagnificationVocabulary.Of(f).Name} not seen (held by {Percent(profile.ProbabilityOf(f))} of such stones)"));
+            .Concat(observation.Absent.Order().Select(f => observation.Faceted && MagnificationVocabulary.DomedPhenomena.Contains(f)
+                ? $"no {MagnificationVocabulary.Of(f).Name} on a faceted stone (held by {Percent(profile.ProbabilityOf(f))} of such stones)"
+                : $"{MagnificationVocabulary.Of(f).Name} not seen (held by {Percent(profile.ProbabilityOf(f))} of such stones)"));
         return "magnification: " + string.Join(", ", parts);
     }
 }

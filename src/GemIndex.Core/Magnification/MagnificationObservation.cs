@@ -24,6 +24,9 @@ public sealed record MagnificationObservation
     /// <summary>Features looked for and not seen.</summary>
     public IReadOnlySet<MagnificationFeature> Absent { get; }
 
+    /// <summary>The stone is faceted: the star and the cat's-eye among <see cref="Absent"/> are not seen because no facet can show them.</summary>
+    public bool Faceted { get; init; }
+
     /// <summary>True when nothing was looked for.</summary>
     public bool IsEmpty => Present.Count == 0 && Absent.Count == 0;
 }

@@ -135,6 +135,9 @@ public static class MagnificationVocabulary
     /// <summary>Every feature, grouped as the bench looks for them (growth, inclusions, treatment, composite, organic structure, phenomena).</summary>
     public static IReadOnlyList<MagnificationFeatureInfo> All => Table;
 
+    /// <summary>The phenomena only a domed surface shows (common practice): a faceted stone shows neither, as if looked for and not seen.</summary>
+    public static IReadOnlyList<MagnificationFeature> DomedPhenomena { get; } = [MagnificationFeature.Asterism, MagnificationFeature.Chatoyancy];
+
     /// <summary>The words accepted, in table order.</summary>
     public static IReadOnlyList<string> Words => [.. Table.Select(i => i.Word)];
 

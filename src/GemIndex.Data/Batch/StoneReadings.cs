@@ -1,3 +1,5 @@
+using GemIndex.Core.Bench;
+
 namespace GemIndex.Data.Batch;
 
 /// <summary>
@@ -28,10 +30,19 @@ public sealed record StoneReadings
     /// <summary>Null: not looked; empty: looked and saw none.</summary>
     public IReadOnlyList<double>? AbsorptionNm { get; init; }
     public string? Colour { get; init; }
+    /// <summary>How the stone is cut (faceted | cabochon | other).</summary>
+    public string? Cut { get; init; }
     /// <summary>Magnification features seen (the vocabulary's words); empty: none given.</summary>
     public IReadOnlyList<string> FeaturesPresent { get; init; } = [];
     /// <summary>Magnification features looked for and not seen.</summary>
     public IReadOnlyList<string> FeaturesAbsent { get; init; } = [];
+
+    /// <summary>The answers picked from a list of words, each with its field (Core's BenchField), in the order of the reading pages; null when not given.</summary>
+    public IReadOnlyList<(string Field, string? Word)> ChoiceWords =>
+    [
+        (BenchField.Cut, Cut), (BenchField.Polariscope, Polariscope), (BenchField.Pleochroism, Pleochroism), (BenchField.Dispersion, Dispersion),
+        (BenchField.ThermalProbe, ThermalProbe), (BenchField.Electrical, Electrical), (BenchField.UvLong, UvLong), (BenchField.UvShort, UvShort),
+    ];
 }
 
 /// <summary>The refractometer part of <see cref="StoneReadings"/>.</summary>

@@ -36,6 +36,7 @@ internal static class IdentifyCommand
         ("--uv-short", BenchField.UvShort, BenchWords.Choices<Core.Observations.FluorescenceStrength>()),
         ("--lines", BenchField.Absorption, "Absorption lines seen, nm, separated by spaces or commas (\"none\" if none)"),
         ("--colour", BenchField.Colour, "The colour in plain words, e.g. yellow, \"bluish green\" (the last hue named is the colour; an -ish word only tones it)"),
+        ("--cut", BenchField.Cut, BenchWords.Choices<Core.Observations.StoneCut>() + "; a faceted stone shows no star or cat's-eye"),
     ];
 
     public static Command Create(Option<DirectoryInfo?> catalogueDirectory)
@@ -103,7 +104,7 @@ internal static class IdentifyCommand
                 return ExitCodes.BadInput;
             }
             if (pr.GetValue(json)) output.WriteLine(ResultDocument.Line(result, explain: true));
-            else IdentificationText.Write(result, output, outcome.Reading.Sheet.Magnification);
+            else IdentificationText.Write(result, output, outcome.Reading.Sheet.Magnification, outcome.Reading.Sheet.Cut);
             return ExitCodes.Ok;
         }));
         return command;

@@ -2,6 +2,7 @@ using GemIndex.Cli.Reports;
 using GemIndex.Core.Bench;
 using GemIndex.Core.Identification;
 using GemIndex.Core.Magnification;
+using GemIndex.Core.Observations;
 
 namespace GemIndex.Cli.Identification;
 
@@ -12,14 +13,21 @@ namespace GemIndex.Cli.Identification;
 /// </summary>
 internal static class IdentificationText
 {
+    /// <summary>The line of a faceted stone: what its cut rules out.</summary>
+    public const string FacetedLine = "Cut: faceted: no star or cat's-eye can show on facets, so star and cat's-eye varieties are weighed as not seen";
+
     /// <summary>Writes the answer; the features looked for under magnification, when given, are listed with their meaning.</summary>
-    public static void Write(IdentificationResult result, TextWriter output, MagnificationObservation? magnification = null)
+    public static void Write(IdentificationResult result, TextWriter output, MagnificationObservation? magnification = null, StoneCut? cut = null)
     {
         var o = new StringWriter { NewLine = "\n" };
+        // A faceted cut stands for the star and the cat's-eye not seen (the reader counts them so): said once, as the cut.
+        bool faceted = cut == StoneCut.Faceted;
+        if (faceted) o.WriteLine(FacetedLine);
         if (magnification is { IsEmpty: false } look)
         {
             foreach (var info in look.Present.Order().Select(MagnificationVocabulary.Of)) o.WriteLine($"{info.SeenHow}: {info.Name}: {info.Meaning}");
-            foreach (var f in look.Absent.Order()) o.WriteLine($"Looked for, not seen: {MagnificationVocabulary.Of(f).Name}: {MagnificationVocabulary.Of(f).Meaning}");
+            foreach (var f in look.Absent.Order().Where(f => !faceted || !MagnificationVocabulary.DomedPhenomena.Contains(f)))
+                o.WriteLine($"Looked for, not seen: {MagnificationVocabulary.Of(f).Name}: {MagnificationVocabulary.Of(f).Meaning}");
         }
         // A species under 0.1 % says nothing more by its origins ("natural <0.1 %, synthetic <0.1 %, …" is clutter).
         foreach (SpeciesResult s in ResultDocument.SpeciesShown(result).Where((s, i) => LeadingCandidates.SpeciesListed(i, s.Confidence, result.NoGoodMatch)))

@@ -40,6 +40,7 @@ internal static class ReportReadings
         if (r.AbsorptionNm is { } lines)
             fields.Add(new("absorption", "Spectroscope", lines.Count == 0 ? "looked; no lines seen"
                 : "lines or bands at " + string.Join(", ", lines.Select(ReportNumbers.Nanometres))));
+        AddWord(fields, BenchField.Cut, "Cut", r.Cut);
         foreach (var info in Features(r.FeaturesPresent))
             fields.Add(new($"feature_seen_{info.Word}", $"{info.SeenHow}: {info.Name}", info.Meaning));
         foreach (var info in Features(r.FeaturesAbsent))

@@ -28,6 +28,53 @@ public class BenchMagnificationReaderTests
     }
 
     [Fact]
+    public void A_faceted_stone_counts_the_star_and_the_cats_eye_as_not_seen()
+    {
+        // A star or cat's-eye glides over a domed top and never shows on facets (common practice).
+        var reading = BenchReader.Read(R((BenchField.Cut, "faceted"), (BenchField.FeaturesAbsent, "needles_silk asterism")));
+        Assert.Empty(reading.Errors);
+        Assert.Equal(Core.Observations.StoneCut.Faceted, reading.Sheet.Cut);
+        Assert.Equal(new HashSet<MagnificationFeature> { MagnificationFeature.NeedlesAndSilk, MagnificationFeature.Asterism, MagnificationFeature.Chatoyancy },
+            reading.Sheet.Magnification!.Absent);
+        Assert.Empty(reading.Sheet.Magnification.Present);
+        // Alone, the cut is an observation of its own.
+        Assert.Equal(MagnificationVocabulary.DomedPhenomena.ToHashSet(), BenchReader.Read(R((BenchField.Cut, "faceted"))).Sheet.Magnification!.Absent);
+    }
+
+    [Theory]
+    [InlineData("cabochon")]
+    [InlineData("other")]
+    public void A_cabochon_or_another_cut_says_nothing_on_its_own(string cut)
+    {
+        var reading = BenchReader.Read(R((BenchField.Cut, cut), (BenchField.Sg, "3.99")));
+        Assert.Empty(reading.Errors);
+        Assert.NotNull(reading.Sheet.Cut);
+        Assert.Null(reading.Sheet.Magnification);
+    }
+
+    [Fact]
+    public void A_star_seen_on_a_faceted_stone_is_an_error_at_the_cut_and_the_sighting_is_kept()
+    {
+        var reading = BenchReader.Read(R((BenchField.Cut, "faceted"), (BenchField.FeaturesPresent, "asterism curved_striae")));
+        var error = Assert.Single(reading.Errors);
+        Assert.Equal(BenchField.Cut, error.Field);
+        Assert.Contains("never shows on facets", error.Sentence);
+        Assert.Contains(BenchField.FeaturesPresent, error.Sentence);
+        Assert.Null(reading.Sheet.Cut);
+        Assert.Contains(MagnificationFeature.Asterism, reading.Sheet.Magnification!.Present);
+        Assert.Empty(reading.Sheet.Magnification.Absent);
+    }
+
+    [Fact]
+    public void An_unknown_cut_names_the_allowed_words()
+    {
+        var error = Assert.Single(BenchReader.Read(R((BenchField.Cut, "brilliant"))).Errors);
+        Assert.Equal(BenchField.Cut, error.Field);
+        Assert.Contains("faceted", error.Allowed);
+        Assert.Contains("cabochon", error.Allowed);
+    }
+
+    [Fact]
     public void Only_absent_features_are_an_observation_too()
     {
         var observation = BenchReader.Read(R((BenchField.FeaturesAbsent, "curved_striae"))).Sheet.Magnification!;

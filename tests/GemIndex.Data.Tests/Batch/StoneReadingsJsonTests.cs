@@ -28,6 +28,7 @@ public class StoneReadingsJsonTests
         from precision in Gen.Elements<double?>(null, 0.002)
         from present in Gen.Elements<List<string>>([], ["curved_striae", "round_bubbles"], ["flux_residue"])
         from absent in Gen.Elements<List<string>>([], ["needles_silk"], ["chevron_growth", "healed_fractures"])
+        from cut in Gen.Elements<string?>(null, "faceted", "cabochon", "other")
         select new StoneReadings
         {
             Id = id,
@@ -40,6 +41,7 @@ public class StoneReadingsJsonTests
             Colour = "greenish yellow",
             FeaturesPresent = present,
             FeaturesAbsent = absent,
+            Cut = cut,
         };
 
     [FsCheck.Xunit.Property(MaxTest = 200)]

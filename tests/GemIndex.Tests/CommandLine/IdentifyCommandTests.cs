@@ -185,6 +185,30 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void A_faceted_ruby_is_no_longer_weighed_as_a_star_ruby()
+    {
+        // Ruby readings (ω 1.770, ε 1.762, SG 4.00, red: common practice). A star shows only on a domed top, so on a
+        // faceted stone the star varieties fall back by what "star not seen" weighs, and the plain ones take their share.
+        using var run = new CommandRun();
+        string[] readings = ["--edge", "0:1.762/1.770", "--edge", "45:1.764/1.770", "--edge", "90:1.768/1.770", "--edge", "135:1.765/1.770",
+            "--sg", "4.00", "--colour", "red", "--json", "--candidates", "50"];
+        double Share(string json, string name)
+        {
+            using var doc = System.Text.Json.JsonDocument.Parse(json);
+            return doc.RootElement.GetProperty("species").EnumerateArray().SelectMany(s => s.GetProperty("candidates").EnumerateArray())
+                .Where(c => c.GetProperty("name").GetString() == name).Select(c => c.GetProperty("confidence").GetDouble()).Single();
+        }
+        var (exit, unknown, error) = Identify(run, readings);
+        Assert.True(exit == 0, error);
+        var (_, faceted, _) = Identify(run, [.. readings, "--cut", "faceted"]);
+        Assert.True(Share(faceted, "star ruby") < Share(unknown, "star ruby") / 5);
+        Assert.True(Share(faceted, "ruby") > Share(unknown, "ruby"));
+        var (_, text, _) = Identify(run, [.. readings[..^3], "--cut", "faceted"]);
+        Assert.StartsWith("Cut: faceted: no star or cat's-eye can show on facets", text, StringComparison.Ordinal);
+        Assert.DoesNotContain("Looked for, not seen: star", text, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_bad_edge_option_names_the_option()
     {
         using var run = new CommandRun();

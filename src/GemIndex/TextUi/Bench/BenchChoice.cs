@@ -13,6 +13,7 @@ internal sealed record BenchChoice(string Field, string Label, IReadOnlyList<(ch
     public static IReadOnlyList<BenchChoice> All { get; } =
     [
         new(BenchFields.OverLimit, "Over limit", [('y', "yes", "yes")]),
+        new(BenchFields.Cut, "Cut", [('f', "faceted", "faceted"), ('c', "cabochon", "cabochon (domed)"), ('o', "other", "other (bead, carving…)")]),
         new(BenchFields.Polariscope, "Polariscope", [('i', "singly_refractive", "singly refractive"), ('d', "doubly_refractive", "doubly refractive"), ('a', "aggregate", "aggregate"), ('x', "anomalous", "anomalous (strain)")]),
         new(BenchFields.Pleochroism, "Pleochroism", [('n', "none", "none"), ('b', "dichroic", "dichroic"), ('t', "trichroic", "trichroic")]),
         new(BenchFields.Dispersion, "Fire (eye)", [('n', "none", "none"), ('w', "weak", "weak"), ('m', "moderate", "moderate"), ('s', "strong", "strong"), ('v', "very_strong", "very strong")]),

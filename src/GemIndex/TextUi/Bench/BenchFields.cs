@@ -14,6 +14,7 @@ internal static class BenchFields
     public const string Shape = "shape";
     public const string CuttingStyle = "cutting_style";
     public const string Colour = BenchField.Colour;
+    public const string Cut = BenchField.Cut;
     public const string Transparency = "transparency";
     public const string Notes = "notes";
 

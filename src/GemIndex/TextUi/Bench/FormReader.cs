@@ -19,7 +19,7 @@ internal static class FormReader
     private static readonly string[] ChoiceFields =
     [
         BenchFields.OverLimit, BenchFields.Polariscope, BenchFields.Pleochroism, BenchFields.Dispersion, BenchFields.ThermalProbe,
-        BenchFields.Electrical, BenchFields.UvLong, BenchFields.UvShort,
+        BenchFields.Electrical, BenchFields.UvLong, BenchFields.UvShort, BenchFields.Cut,
     ];
 
     public static BenchReadings Read(BenchSnapshot form)

@@ -51,11 +51,7 @@ internal static class StoneFormText
     public static IEnumerable<KeyValuePair<string, string>> Choices(StoneReadings r)
     {
         if (r.Refractometer is { OverLimit: true }) yield return new(BenchFields.OverLimit, "yes");
-        foreach (var (field, word) in new[]
-        {
-            (BenchFields.Polariscope, r.Polariscope), (BenchFields.Pleochroism, r.Pleochroism), (BenchFields.Dispersion, r.Dispersion),
-            (BenchFields.ThermalProbe, r.ThermalProbe), (BenchFields.Electrical, r.Electrical), (BenchFields.UvLong, r.UvLong), (BenchFields.UvShort, r.UvShort),
-        })
+        foreach (var (field, word) in r.ChoiceWords)
             if (word is { Length: > 0 }) yield return new(field, word);
     }
 }

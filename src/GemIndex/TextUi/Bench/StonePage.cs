@@ -7,7 +7,7 @@ internal sealed class StonePage : BenchPage
     public const string ExaminerNote = "  on every report from this workbook";
 
     /// <summary>Under the stone's fields: which of them the answer weighs (the others describe the stone in its report).</summary>
-    public const string WeighedNote = "  only colour is used in the answer";
+    public const string WeighedNote = "  the answer uses cut and colour only";
 
     public StonePage() : base("Stone", FieldKeys)
     {
@@ -16,6 +16,7 @@ internal sealed class StonePage : BenchPage
         AddField(BenchFields.Dimensions, "Dimensions", 20, "mm");
         AddField(BenchFields.Shape, "Shape", 20);
         AddField(BenchFields.CuttingStyle, "Cutting style", 20);
+        AddChoice(BenchFields.Cut);
         AddField(BenchFields.Colour, "Colour", 24);
         AddField(BenchFields.Transparency, "Transparency", 20);
         AddField(BenchFields.Notes, "Notes", 24);

@@ -151,12 +151,7 @@ internal static class ResultText
     private static IEnumerable<string> OtherTests(StoneReadings r)
     {
         if (r.HeavyLiquids.Count > 0) yield return $"Heavy liquids: {r.HeavyLiquids.Count}";
-        (string Field, string? Word)[] choices =
-        [
-            (BenchFields.Polariscope, r.Polariscope), (BenchFields.Pleochroism, r.Pleochroism), (BenchFields.Dispersion, r.Dispersion),
-            (BenchFields.ThermalProbe, r.ThermalProbe), (BenchFields.Electrical, r.Electrical), (BenchFields.UvLong, r.UvLong), (BenchFields.UvShort, r.UvShort),
-        ];
-        foreach (var (field, word) in choices)
+        foreach (var (field, word) in r.ChoiceWords)
             if (word is not null && BenchChoice.For(field) is var choice) yield return $"{choice.Label}: {choice.Show(word)}";
         if (r.DispersionIndices is { } nb) yield return $"Dispersion: RI at B {Index(nb.NB)}, at G {Index(nb.NG)}";
         if (r.AbsorptionNm is { } lines)

@@ -134,6 +134,29 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void The_cut_is_picked_on_the_stone_page_and_reaches_the_answer()
+    {
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(_session, TestMaterials.All);
+        _session.Start();
+        window.FillFromModel();
+        SessionToken token = app.Begin(window)!;
+        window.ShowPage(0);
+        window.Pages[0].Choices[0].SetFocus();
+        app.InjectKey(new Key('f'));
+        _session.Form.SetText(BenchFields.Sg, "2.65");
+        _session.Changed();
+        Settle();
+        app.LayoutAndDraw();
+        Assert.Equal("faceted", _session.Form.Choice(BenchFields.Cut));
+        Assert.Contains("Cut           [faceted]", app.Driver!.ToString()!);
+        // The answer's readings say it, and the reader counts the star and the cat's-eye as not seen.
+        Assert.Contains(window.Results.Rows, r => r.Text.Contains("Cut: faceted", StringComparison.Ordinal));
+        Assert.True(_session.Results.Latest!.Readings.Cut == "faceted");
+        app.End(token);
+    }
+
+    [Fact]
     public void A_choice_is_picked_with_one_letter()
     {
         using IApplication app = Headless.Start();
@@ -563,7 +586,7 @@ public sealed class MainWindowTests : IDisposable
     {
         var (app, window, token) = Open();
         app.InjectKey(Key.F2);
-        for (int i = 0; i < 8; i++) app.InjectKey(Key.Tab);
+        for (int i = 0; i < 9; i++) app.InjectKey(Key.Tab);   // past the stone's eight fields and its cut
         Type(app, "A. Example");
         Settle();
         app.InjectKey(Key.N.WithCtrl);                        // a new stone: the bench's examiner stays
