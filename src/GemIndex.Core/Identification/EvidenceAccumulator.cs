@@ -93,6 +93,9 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
         if (_contributions is not null) { _lastBits = bits; _lastTail = tail; }
     }
 
+    /// <summary>The weight of the test added last, bits (while explaining).</summary>
+    public double LastBits => _lastBits;
+
     /// <summary>Words for the test added last.</summary>
     public void Say(string text)
     {

@@ -9,4 +9,8 @@ namespace GemIndex.Core.Identification;
 /// <param name="Text">The evidence in words ("SG 3.99 ± 0.01 lies in 3.95–4.05").</param>
 /// <param name="WeightBits">log₂(likelihood under the candidate / likelihood under "not in the catalogue").</param>
 /// <param name="Agrees">False when the observation is unusual for the candidate (outside its range by more than 2σ, or an unexpected reaction).</param>
-public sealed record EvidenceContribution(string Test, string Text, double WeightBits, bool Agrees);
+public sealed record EvidenceContribution(string Test, string Text, double WeightBits, bool Agrees)
+{
+    /// <summary>Below this weight (bits, either way) a test speaks neither for nor against the candidate: a likelihood ratio within 7 % of one.</summary>
+    public const double NeutralBits = 0.1;
+}

@@ -60,7 +60,9 @@ public static class EvidenceLikelihood
             var expected = material.MagnificationProfile;
             acc.AddLog(BenchField.Magnification, MagnificationEvidence.LogLikelihood(look, expected), sheet.LogBroadLook,
                 acc.Fitting ? MagnificationEvidence.Fit(look, expected) : 1, robust: false);
-            if (acc.Explaining) acc.Say(MagnificationEvidence.Reason(look, expected));
+            // A faceted stone's star and cat's-eye that the entry would not show anyway say nothing worth a line.
+            if (acc.Explaining && !(look.OnlyWhatTheCutSays && Math.Abs(acc.LastBits) < EvidenceContribution.NeutralBits))
+                acc.Say(MagnificationEvidence.Reason(look, expected));
         }
     }
 

@@ -27,6 +27,9 @@ public sealed record MagnificationObservation
     /// <summary>The stone is faceted: the star and the cat's-eye among <see cref="Absent"/> are not seen because no facet can show them.</summary>
     public bool Faceted { get; init; }
 
+    /// <summary>True when the observation is only what a faceted cut says (no star, no cat's-eye), nothing looked at.</summary>
+    public bool OnlyWhatTheCutSays => Faceted && Present.Count == 0 && Absent.All(MagnificationVocabulary.DomedPhenomena.Contains);
+
     /// <summary>True when nothing was looked for.</summary>
     public bool IsEmpty => Present.Count == 0 && Absent.Count == 0;
 }

@@ -86,7 +86,7 @@ internal static class ReportDerived
     private const double ClearBits = 1;
 
     /// <summary>Below a tenth of a bit (a likelihood ratio within 7 %), no weight either way.</summary>
-    private const double NeutralBits = 0.1;
+    private const double NeutralBits = EvidenceContribution.NeutralBits;
 
     /// <summary>A reason in a line: "strongly for (refractometer): …".</summary>
     public static string ReasonLine(EvidenceContribution reason) =>

@@ -37,8 +37,11 @@ public class BenchMagnificationReaderTests
         Assert.Equal(new HashSet<MagnificationFeature> { MagnificationFeature.NeedlesAndSilk, MagnificationFeature.Asterism, MagnificationFeature.Chatoyancy },
             reading.Sheet.Magnification!.Absent);
         Assert.Empty(reading.Sheet.Magnification.Present);
+        Assert.False(reading.Sheet.Magnification.OnlyWhatTheCutSays);   // the silk was looked for
         // Alone, the cut is an observation of its own.
-        Assert.Equal(MagnificationVocabulary.DomedPhenomena.ToHashSet(), BenchReader.Read(R((BenchField.Cut, "faceted"))).Sheet.Magnification!.Absent);
+        MagnificationObservation alone = BenchReader.Read(R((BenchField.Cut, "faceted"))).Sheet.Magnification!;
+        Assert.Equal(MagnificationVocabulary.DomedPhenomena.ToHashSet(), alone.Absent);
+        Assert.True(alone.OnlyWhatTheCutSays);
     }
 
     [Theory]

@@ -206,6 +206,8 @@ public class IdentifyCommandTests
         var (_, text, _) = Identify(run, [.. readings[..^3], "--cut", "faceted"]);
         Assert.StartsWith("Cut: faceted: no star or cat's-eye can show on facets", text, StringComparison.Ordinal);
         Assert.DoesNotContain("Looked for, not seen: star", text, StringComparison.Ordinal);
+        // The explained leaders would show no star anyway: the cut gives them no line of reasons.
+        Assert.DoesNotContain("on a faceted stone", text, StringComparison.Ordinal);
     }
 
     [Fact]
