@@ -13,6 +13,9 @@ namespace GemIndex.Cli.Identification;
 /// </summary>
 internal static class IdentificationText
 {
+    /// <summary>The least width of the candidates' name column.</summary>
+    public const int NameColumn = 36;
+
     /// <summary>The line of a faceted stone: what its cut rules out.</summary>
     public const string FacetedLine = "Cut: faceted: no star or cat's-eye can show on facets, so star and cat's-eye varieties are weighed as not seen";
 
@@ -52,6 +55,8 @@ internal static class IdentificationText
         // Only the candidates the readings leave in play (LeadingCandidates.Listed); each keeps its rank in the answer.
         int[] listed = LeadingCandidates.Listed(result);
         bool grouped = LeadingCandidates.NeedsSpeciesHeadings([.. listed.Select(i => result.Candidates[i])]);
+        // The name column as wide as the longest listed name (at least NameColumn), so the percentages stay in line.
+        int nameWidth = Math.Max(NameColumn, listed.Select(i => result.Candidates[i].Material.Name.Length).DefaultIfEmpty(0).Max());
         foreach (var (i, k) in listed.Select((i, k) => (i, k)))
         {
             RankedCandidate c = result.Candidates[i];
@@ -59,7 +64,7 @@ internal static class IdentificationText
             if (grouped && (k == 0 || c.Material.Species != result.Candidates[listed[k - 1]].Material.Species))
                 o.WriteLine($"  {c.Material.Species}{(result.SpeciesConfidence(c.Material.Species) is { } total ? " " + ReportNumbers.Percent(total) : "")}:");
             string bar = new('#', (int)Math.Round(c.Confidence * 20));
-            o.WriteLine($"{i + 1,2}. {c.Material.Name,-36} {ReportNumbers.Percent(c.Confidence),7} {bar,-20} fit {ReportNumbers.Fixed(c.Fit, "0.00")}  ({c.Material.Species}, {BenchWords.Word(c.Material.Origin)})");
+            o.WriteLine($"{i + 1,2}. {c.Material.Name.PadRight(nameWidth)} {ReportNumbers.Percent(c.Confidence),7} {bar,-20} fit {ReportNumbers.Fixed(c.Fit, "0.00")}  ({c.Material.Species}, {BenchWords.Word(c.Material.Origin)})");
             foreach (var r in c.Reasons) o.WriteLine($"      {GemIndex.Cli.Reports.ReportDerived.Verdict(r)}: {r.Text}");
         }
         o.WriteLine($"Not in the catalogue: {ReportNumbers.Percent(result.NotInCatalogue)}");

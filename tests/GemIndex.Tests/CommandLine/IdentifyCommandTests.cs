@@ -211,6 +211,18 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void A_name_longer_than_the_column_widens_it_and_the_shares_stay_in_line()
+    {
+        // A blue corundum cabochon (spot 1.76, SG 4.00: common practice) lists "flame-fusion synthetic colour-change sapphire" (45 letters).
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--spot", "1.76", "--sg", "4.00", "--colour", "blue", "--cut", "cabochon");
+        Assert.True(exit == 0, error);
+        string[] rows = [.. output.Split('\n').Where(l => System.Text.RegularExpressions.Regex.IsMatch(l, @"^\s*\d+\. "))];
+        Assert.Contains(rows, r => r.Contains("colour-change sapphire", StringComparison.Ordinal));
+        Assert.Single(rows.Select(r => r.IndexOf(" % ", StringComparison.Ordinal)).Distinct());
+    }
+
+    [Fact]
     public void A_bad_edge_option_names_the_option()
     {
         using var run = new CommandRun();
