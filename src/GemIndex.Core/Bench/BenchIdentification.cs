@@ -18,7 +18,9 @@ public static class BenchIdentification
         // Nothing to rank by: the catalogue's frequencies alone are no answer to a single stone typed on the command line.
         if (request.RefuseEmpty && reading.Errors.Count == 0 && reading.IsEmpty)
             reading = reading with { Errors = [new BenchFieldError("$", "", "at least one reading",
-                "no readings were given: give at least one (refractometer, SG, polariscope, dichroscope, UV, spectroscope, probes, colour or magnification).")] };
+                reading.Sheet.Cut is null
+                    ? "no readings were given: give at least one (refractometer, SG, polariscope, dichroscope, UV, spectroscope, probes, colour or magnification)."
+                    : "only the cut was given, which alone tells no material: give at least one reading besides (refractometer, SG, polariscope, dichroscope, UV, spectroscope, probes, colour or magnification).")] };
         bool rank = reading.Errors.Count == 0 || request.RankDespiteErrors && reading.HasReadings;
         return new BenchOutcome(reading, rank
             ? identifier.Identify(reading.Sheet, request.Candidates, request.ExplainTop, request.AdviseNextTest)

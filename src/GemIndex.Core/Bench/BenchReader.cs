@@ -278,16 +278,22 @@ public static class BenchReader
         {
             var present = Features(BenchField.FeaturesPresent);
             var absent = Features(BenchField.FeaturesAbsent);
-            if (cut == StoneCut.Faceted && !HasError(BenchField.FeaturesPresent))
+            List<MagnificationFeature> implied = [];
+            if (cut == StoneCut.Faceted)
             {
-                // A faceted stone is a stone on which no star or cat's-eye can be seen: as if looked for and not seen.
-                if ((present ?? []).Intersect(MagnificationVocabulary.DomedPhenomena).ToList() is { Count: > 0 } seen)
+                // A faceted stone is a stone on which no star or cat's-eye can be seen: as if looked for and not seen. The
+                // check reads the words that parsed even beside a bad one, so that both errors are found in one pass.
+                if ((present ?? ParsedFeatures(BenchField.FeaturesPresent)).Intersect(MagnificationVocabulary.DomedPhenomena).ToList() is { Count: > 0 } seen)
                 {
                     string words = string.Join(", ", seen.Select(f => MagnificationVocabulary.Of(f).Word));
                     Error(BenchField.Cut, "faceted", "cabochon or other with a star or cat's-eye seen",
                         $"'faceted' cannot show the {words} given in {BenchField.FeaturesPresent}: a star or cat's-eye glides over a domed top and never shows on facets; check which was meant.");
                 }
-                else if (!HasError(BenchField.FeaturesAbsent)) absent = [.. absent ?? [], .. MagnificationVocabulary.DomedPhenomena.Where(f => !(absent ?? []).Contains(f))];
+                else if (!HasError(BenchField.FeaturesPresent) && !HasError(BenchField.FeaturesAbsent))
+                {
+                    implied = [.. MagnificationVocabulary.DomedPhenomena.Where(f => !(absent ?? []).Contains(f))];
+                    absent = [.. absent ?? [], .. implied];
+                }
             }
             if (present is null && absent is null) return null;
             bool faceted = cut == StoneCut.Faceted && !HasError(BenchField.Cut);
@@ -300,8 +306,12 @@ public static class BenchReader
                 return null;
             }
             if (HasError(BenchField.FeaturesPresent) || HasError(BenchField.FeaturesAbsent)) return null;
-            return new MagnificationObservation(present ?? [], absent ?? []) { Faceted = faceted };
+            return new MagnificationObservation(present ?? [], absent ?? []) { Faceted = faceted, ImpliedByCut = implied.ToHashSet() };
         }
+
+        /// <summary>The feature words of a field that name a feature, whatever the others are.</summary>
+        private List<MagnificationFeature> ParsedFeatures(string field) =>
+            [.. BenchSyntax.Features(r.Text(field) ?? "").Select(MagnificationVocabulary.Find).OfType<MagnificationFeature>()];
 
         private List<MagnificationFeature>? Features(string field)
         {

@@ -60,6 +60,9 @@ public sealed record BenchSheet
         || Pleochroism is not null || Dispersion is not null || ThermalProbe is not null || Electrical is not null || UvLong is not null
         || UvShort is not null || AbsorptionLinesNanometres is not null;
 
-    /// <summary>True when the sheet holds nothing at all to rank by: no test's reading, no colour, no magnification.</summary>
-    public bool IsEmpty => !HasTestReadings && Colour is null && Magnification is null;
+    /// <summary>
+    /// True when the sheet holds nothing at all to rank by: no test's reading, no colour, no look under magnification (a
+    /// cut alone, faceted or not, is none: it only rules out the star and cat's-eye varieties).
+    /// </summary>
+    public bool IsEmpty => !HasTestReadings && Colour is null && Magnification is not { AnyLooked: true };
 }

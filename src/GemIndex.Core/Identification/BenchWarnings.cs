@@ -235,7 +235,7 @@ public static class BenchWarnings
         var hidden = leading.Origins.Keys.Where(o => o != held[0] && o is OriginClass.Treated or OriginClass.Synthetic or OriginClass.Cultured)
             .Select(o => o switch { OriginClass.Treated => "treated", OriginClass.Synthetic => "laboratory-grown", _ => "cultured" }).ToList();
         if (hidden.Count == 0) return null;
-        string looked = sheet.Sheet.Magnification is { IsEmpty: false } ? "even with the magnification recorded, " : "";
+        string looked = sheet.Sheet.Magnification is { AnyLooked: true } ? "even with the magnification recorded, " : "";
         // Only what the hidden origins can hide: a spinel met laboratory-grown is not told of fillers.
         bool treated = hidden.Contains("treated"), grown = hidden.Contains("laboratory-grown"), cultured = hidden.Contains("cultured");
         string unseen;

@@ -68,7 +68,9 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
     /// Adds one test given as natural logs (densities of many readings overflow a double): the robust mixture is
     /// ln((1 − ρ) e^f + ρ e^g).
     /// </summary>
-    public void AddLog(string test, double logLikelihood, double logBroad, double tail, bool robust, int group = Independent)
+    /// <remarks>With <c>inFit</c> false (a test that is no test of typicality: the cut's implied absences alone) the test
+    /// weighs in the likelihood but stays out of the fit.</remarks>
+    public void AddLog(string test, double logLikelihood, double logBroad, double tail, bool robust, int group = Independent, bool inFit = true)
     {
         double mixed = robust
             ? SectionLikelihood.LogSum.Add(Math.Log(1 - BroadDensities.MisreadingShare) + logLikelihood, Math.Log(BroadDensities.MisreadingShare) + logBroad)
@@ -82,13 +84,13 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
             _groups[group].Add(ratio);
         }
         _logOther += logBroad;
-        if (Fitting)
+        if (Fitting && inFit)
         {
             _sumLogTails += Math.Log(Math.Clamp(tail, 1e-300, 1));
             // Counted without words, so that the warning on a reading against the leader needs the reasons only when one is there.
             if (BenchWarnings.SpeaksAgainst(test, bits, tail >= AgreesTail)) _stronglyAgainst++;
         }
-        _tests++;
+        if (inFit) _tests++;
         _lastTest = test;
         if (_contributions is not null) { _lastBits = bits; _lastTail = tail; }
     }

@@ -58,8 +58,10 @@ public static class EvidenceLikelihood
         {
             // docs/ranking.md, "Magnification": "not in the catalogue" is the natural/imitation average.
             var expected = material.MagnificationProfile;
+            // The cut's implied absences weigh in the likelihood; with no look taken by hand the test stays out of the fit,
+            // where a tail of 1 would only raise every candidate's combined fit.
             acc.AddLog(BenchField.Magnification, MagnificationEvidence.LogLikelihood(look, expected), sheet.LogBroadLook,
-                acc.Fitting ? MagnificationEvidence.Fit(look, expected) : 1, robust: false);
+                acc.Fitting ? MagnificationEvidence.Fit(look, expected) : 1, robust: false, inFit: look.AnyLooked);
             // A faceted stone's star and cat's-eye that the entry would not show anyway say nothing worth a line.
             if (acc.Explaining && !(look.OnlyWhatTheCutSays && Math.Abs(acc.LastBits) < EvidenceContribution.NeutralBits))
                 acc.Say(MagnificationEvidence.Reason(look, expected));

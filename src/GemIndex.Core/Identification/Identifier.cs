@@ -372,7 +372,8 @@ public sealed class Identifier
         var shown = Shown(posterior, byEntry, order, Math.Min(maximumCandidates, n));
         int[] shownInOrder = [.. order.Where(i => shown[i])];
         var candidates = new List<RankedCandidate>(shownInOrder.Length);
-        bool[] explainAt = LeadingCandidates.Explained([.. shownInOrder.Select(i => _materials[i].Species)], explainTop);
+        bool[] explainAt = LeadingCandidates.Explained([.. shownInOrder.Select(i => _materials[i].Species)], explainTop,
+            [.. shownInOrder.Select((i, k) => LeadingCandidates.IsListed(k, posterior[i]))]);
         foreach (int i in shownInOrder)
         {
             bool explain = explainAt[candidates.Count];

@@ -20,16 +20,26 @@ public static class LeadingCandidates
     /// <summary>The same for a result's candidates.</summary>
     public static int[] Order(IReadOnlyList<RankedCandidate> candidates) => Order([.. candidates.Select(c => c.Material.Species)]);
 
-    /// <summary>Which candidates have their reasons written: the first <paramref name="count"/> of <see cref="Order(IReadOnlyList{string})"/>.</summary>
-    public static bool[] Explained(IReadOnlyList<string> species, int count)
+    /// <summary>
+    /// Which candidates have their reasons written: the first <paramref name="count"/> of <see cref="Order(IReadOnlyList{string})"/>,
+    /// those the answers list (<paramref name="listed"/>, when given) before the rest: reasons for an entry no front end
+    /// shows are words nobody reads.
+    /// </summary>
+    public static bool[] Explained(IReadOnlyList<string> species, int count, IReadOnlyList<bool>? listed = null)
     {
         var explained = new bool[species.Count];
-        foreach (int i in Order(species).Take(count)) explained[i] = true;
+        int[] order = Order(species);
+        IEnumerable<int> first = listed is null ? order : [.. order.Where(i => listed[i]), .. order.Where(i => !listed[i])];
+        foreach (int i in first.Take(count)) explained[i] = true;
         return explained;
     }
 
-    /// <summary>The same for a result's candidates.</summary>
-    public static bool[] Explained(IReadOnlyList<RankedCandidate> candidates, int count) => Explained([.. candidates.Select(c => c.Material.Species)], count);
+    /// <summary>The same for a result's candidates, those the answers list (the leader and each holding <see cref="ListedShare"/>) first.</summary>
+    public static bool[] Explained(IReadOnlyList<RankedCandidate> candidates, int count) =>
+        Explained([.. candidates.Select(c => c.Material.Species)], count, [.. candidates.Select((c, i) => IsListed(i, c.Confidence))]);
+
+    /// <summary>Whether a candidate at this position with this share is listed when something fits.</summary>
+    public static bool IsListed(int position, double confidence) => position == 0 || confidence >= ListedShare;
 
     /// <summary>
     /// Whether a list in the answer's order needs species headings: when it holds several species and the species-first
@@ -53,7 +63,7 @@ public static class LeadingCandidates
     /// is what the readings leave). The result document keeps every candidate.
     /// </summary>
     public static int[] Listed(IReadOnlyList<RankedCandidate> candidates, bool noGoodMatch) =>
-        [.. Enumerable.Range(0, candidates.Count).Where(i => i == 0 || noGoodMatch || candidates[i].Confidence >= ListedShare)];
+        [.. Enumerable.Range(0, candidates.Count).Where(i => noGoodMatch || IsListed(i, candidates[i].Confidence))];
 
     /// <summary>The same for a result.</summary>
     public static int[] Listed(IdentificationResult result) => Listed(result.Candidates, result.NoGoodMatch);

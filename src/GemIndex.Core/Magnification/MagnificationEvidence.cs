@@ -48,13 +48,21 @@ public static class MagnificationEvidence
     /// </summary>
     public static double Fit(MagnificationObservation observation, MagnificationProfile profile)
     {
-        double best = 0;
-        foreach (var feature in observation.Present.Concat(observation.Absent))
+        // Only the looks taken by hand: the cut's implied absences are no look at the stone (MagnificationObservation.ImpliedByCut).
+        double best = 0, log = 0;
+        foreach (var feature in observation.Present)
         {
             double p = ProbabilityOfSeeing(profile, feature);
             best += Math.Log(Math.Max(p, 1 - p));
+            log += Math.Log(p);
         }
-        return Math.Min(1, Math.Exp(LogLikelihood(observation, profile) - best));
+        foreach (var feature in observation.Absent.Where(f => !observation.ImpliedByCut.Contains(f)))
+        {
+            double p = ProbabilityOfSeeing(profile, feature);
+            best += Math.Log(Math.Max(p, 1 - p));
+            log += Math.Log(1 - p);
+        }
+        return Math.Min(1, Math.Exp(log - best));
     }
 
     /// <summary>

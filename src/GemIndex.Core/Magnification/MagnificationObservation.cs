@@ -27,6 +27,15 @@ public sealed record MagnificationObservation
     /// <summary>The stone is faceted: the star and the cat's-eye among <see cref="Absent"/> are not seen because no facet can show them.</summary>
     public bool Faceted { get; init; }
 
+    /// <summary>
+    /// The features among <see cref="Absent"/> that only the faceted cut put there (not typed as looked for): they weigh in
+    /// the likelihood, but a look nobody took is no test of how typical the stone is, so they stay out of the fit.
+    /// </summary>
+    public IReadOnlySet<MagnificationFeature> ImpliedByCut { get; init; } = new HashSet<MagnificationFeature>();
+
+    /// <summary>True when something was looked for by hand (a feature beyond what the cut implies).</summary>
+    public bool AnyLooked => Present.Count > 0 || Absent.Any(f => !ImpliedByCut.Contains(f));
+
     /// <summary>True when the observation is only what a faceted cut says (no star, no cat's-eye), nothing looked at.</summary>
     public bool OnlyWhatTheCutSays => Faceted && Present.Count == 0 && Absent.All(MagnificationVocabulary.DomedPhenomena.Contains);
 

@@ -47,7 +47,7 @@ public static class RotationSeriesAnalysis
 
         var both = s.Where(x => x.High is not null).ToList();
         if (gap > MaximumGapForCharacter || both.Count < 2)
-            return Partial(both, sigma, gap, misreadings);
+            return Partial(both, LargestGapSpan(s.Select(x => x.RotationDegrees)), sigma, misreadings);
 
         var (lows, highs, lowEdge, highEdge) = Edges(both, sigma, band, gap, misreadings);
         bool lowConstant = Spread(lows) <= band;
@@ -140,15 +140,17 @@ public static class RotationSeriesAnalysis
         };
     }
 
-    private static RotationSeriesResult Partial(List<ShadowEdgeStep> both, double sigma, double gap, List<string> misreadings)
+    private static RotationSeriesResult Partial(List<ShadowEdgeStep> both, (double Size, double From, double To) gapSpan, double sigma, List<string> misreadings)
     {
+        double gap = gapSpan.Size;
+        static string Degrees(double d) => d.ToString("0.#", CultureInfo.InvariantCulture) + "°";
         double lo = both.Min(x => x.Low), hi = both.Max(x => x.High!.Value);
         return new RotationSeriesResult
         {
             Character = null,
             UndeterminedReason = both.Count < 2
                 ? "a single rotation step cannot show which edge moves"
-                : $"the steps leave {gap.ToString("0", CultureInfo.InvariantCulture)}° of the half turn unread: read on round the half turn, leaving no gap over {MaximumGapForCharacter.ToString("0", CultureInfo.InvariantCulture)}°, to fix the optic character",
+                : $"the steps leave {gap.ToString("0", CultureInfo.InvariantCulture)}° of the half turn unread, from {Degrees(gapSpan.From)} to {Degrees(gapSpan.To)}: read steps in that gap, leaving none over {MaximumGapForCharacter.ToString("0", CultureInfo.InvariantCulture)}°, to fix the optic character",
             Interpretations = [new SeriesInterpretation
             {
                 Character = null, Lowest = Index(lo, Extreme(sigma)), Highest = Index(hi, Extreme(sigma)),
@@ -327,12 +329,17 @@ public static class RotationSeriesAnalysis
     }
 
     /// <summary>Largest gap between rotation angles taken modulo 180° (the series repeats every half turn).</summary>
-    internal static double LargestGap(IEnumerable<double> rotationsDegrees)
+    internal static double LargestGap(IEnumerable<double> rotationsDegrees) => LargestGapSpan(rotationsDegrees).Size;
+
+    /// <summary>The largest gap and the angles it lies between (modulo 180°; one wrapping round the half turn ends past 180°).</summary>
+    internal static (double Size, double From, double To) LargestGapSpan(IEnumerable<double> rotationsDegrees)
     {
         var angles = rotationsDegrees.Select(a => ((a % 180) + 180) % 180).Distinct().Order().ToArray();
-        if (angles.Length < 2) return 180;
-        double largest = 180 - angles[^1] + angles[0];
-        for (int i = 1; i < angles.Length; i++) largest = Math.Max(largest, angles[i] - angles[i - 1]);
+        if (angles.Length == 0) return (180, 0, 180);
+        if (angles.Length < 2) return (180, angles[0], angles[0] + 180);
+        var largest = (Size: 180 - angles[^1] + angles[0], From: angles[^1], To: angles[0] + 180);
+        for (int i = 1; i < angles.Length; i++)
+            if (angles[i] - angles[i - 1] > largest.Size) largest = (angles[i] - angles[i - 1], angles[i - 1], angles[i]);
         return largest;
     }
 

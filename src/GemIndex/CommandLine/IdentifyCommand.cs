@@ -116,6 +116,9 @@ internal static class IdentifyCommand
         // Only the dotted names: a plain one ("colour", "sg") is also an everyday word of the sentences.
         foreach (var (option, field, _) in Values.Where(v => v.Field.Contains('.', StringComparison.Ordinal)).OrderByDescending(v => v.Field.Length))
             sentence = sentence.Replace(field, option, StringComparison.Ordinal);
+        // The fields with an option of their own (not in Values): the magnification lists.
+        foreach (string field in new[] { BenchField.FeaturesPresent, BenchField.FeaturesAbsent })
+            sentence = sentence.Replace(field, OptionOf(field), StringComparison.Ordinal);
         return System.Text.RegularExpressions.Regex.Replace(sentence, System.Text.RegularExpressions.Regex.Escape(BenchField.Readings) + @"\[\d+\]", m => OptionOf(m.Value));
     }
 

@@ -1,4 +1,5 @@
 using GemIndex.Core.Bench;
+using GemIndex.Core.Catalogue;
 using System.Globalization;
 using System.Net;
 using System.Text;
@@ -95,7 +96,9 @@ internal static class HtmlReport
     /// <summary>The lowest index and the SG as read, against the ranges of three leading candidates, the best entry of each species first.</summary>
     private static void Scales(StringBuilder h, StoneReport report)
     {
-        var leading = LeadingCandidates.Order(report.Result.Candidates).Take(ScaleCandidates).Select(i => report.Result.Candidates[i].Material).ToList();
+        // Only candidates the report lists (LeadingCandidates.Listed), as on the text UI's scales.
+        List<Material> listed = [.. LeadingCandidates.Listed(report.Result).Select(i => report.Result.Candidates[i].Material)];
+        var leading = LeadingCandidates.Order([.. listed.Select(m => m.Species)]).Take(ScaleCandidates).Select(i => listed[i]).ToList();
         if (leading.Count == 0) return;
         if (report.Readings.Refractometer is { Readings.Count: > 0 } rf)
         {

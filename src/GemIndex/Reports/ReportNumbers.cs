@@ -31,7 +31,7 @@ internal static class ReportNumbers
         $"{Fixed(value, format)} ± {Fixed(standardUncertainty, format)}";
 
     /// <summary>The smallest probability <see cref="Percent"/> writes as a number (0.1 %, rounded); below it, "&lt;0.1 %".</summary>
-    public const double SmallestShown = 0.0005;
+    public const double SmallestShown = GemIndex.Core.Identification.LeadingCandidates.ListedShare;
 
     /// <summary>
     /// A probability (0–1) as a percentage, the one percent format of text, Markdown and HTML: 87.3 %. Bench readings

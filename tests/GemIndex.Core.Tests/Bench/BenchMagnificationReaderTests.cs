@@ -69,6 +69,29 @@ public class BenchMagnificationReaderTests
     }
 
     [Fact]
+    public void A_star_on_a_faceted_stone_is_found_beside_a_bad_feature_word_in_one_pass()
+    {
+        var reading = BenchReader.Read(R((BenchField.Cut, "faceted"), (BenchField.FeaturesPresent, "asterism sparkles")));
+        Assert.Equal([BenchField.Cut, BenchField.FeaturesPresent], reading.Errors.Select(e => e.Field).Order().ToArray());
+    }
+
+    [Fact]
+    public void The_cuts_implied_absences_are_no_look_taken_by_hand()
+    {
+        MagnificationObservation alone = BenchReader.Read(R((BenchField.Cut, "faceted"))).Sheet.Magnification!;
+        Assert.False(alone.AnyLooked);
+        Assert.Equal(alone.Absent, alone.ImpliedByCut);
+        Assert.True(BenchReader.Read(R((BenchField.Cut, "faceted"))).IsEmpty);   // a cut alone is nothing to rank by
+        // A star typed as looked for on a faceted stone is a look; the cat's-eye stays implied.
+        MagnificationObservation typed = BenchReader.Read(R((BenchField.Cut, "faceted"), (BenchField.FeaturesAbsent, "asterism"))).Sheet.Magnification!;
+        Assert.True(typed.AnyLooked);
+        Assert.Equal(new HashSet<MagnificationFeature> { MagnificationFeature.Chatoyancy }, typed.ImpliedByCut);
+        // The fit leaves the implied looks out: a profile that holds the star fits the cut alone fully.
+        var star = MagnificationProfile.ForOrigin(Core.Catalogue.OriginClass.Natural);
+        Assert.Equal(1.0, MagnificationEvidence.Fit(alone, star), 12);
+    }
+
+    [Fact]
     public void An_unknown_cut_names_the_allowed_words()
     {
         var error = Assert.Single(BenchReader.Read(R((BenchField.Cut, "brilliant"))).Errors);

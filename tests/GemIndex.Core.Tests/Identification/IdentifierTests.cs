@@ -160,6 +160,9 @@ public class IdentifierTests
         // The leader is listed however small its share (a sheet that says next to nothing).
         Assert.Equal([0], LeadingCandidates.Listed([C("a", 0.0001), C("b", 0.00009)], noGoodMatch: false));
         Assert.Empty(LeadingCandidates.Listed([], noGoodMatch: false));
+        // Reasons go to listed candidates first: the second species at 10⁻⁴⁰ waits behind the leader's listed variety.
+        Assert.Equal([true, false, false, false, false], LeadingCandidates.Explained([C("a", 0.9), C("b", 1e-40), C("a", 0.05), C("c", 1e-40), C("d", 1e-40)], 1));
+        Assert.Equal([true, false, true, false, false], LeadingCandidates.Explained([C("a", 0.9), C("b", 1e-40), C("a", 0.05), C("c", 1e-40), C("d", 1e-40)], 2));
         Assert.True(LeadingCandidates.SpeciesListed(0, 1e-9, noGoodMatch: false));
         Assert.False(LeadingCandidates.SpeciesListed(1, 0.0004999, noGoodMatch: false));
         Assert.True(LeadingCandidates.SpeciesListed(1, 0.0004999, noGoodMatch: true));

@@ -138,8 +138,11 @@ public class RotationSeriesAnalysisTests
         // Four steps 15° apart (0–45°) leave 135° of the half turn unread; no gap may exceed 90° for the character.
         var result = RotationSeriesAnalysis.Analyse([new(0, 1.544, 1.553), new(15, 1.544, 1.551), new(30, 1.544, 1.548), new(45, 1.544, 1.550)], 0.001);
         Assert.Null(result.Character);
-        Assert.Equal("the steps leave 135° of the half turn unread: read on round the half turn, leaving no gap over 90°, to fix the optic character",
+        Assert.Equal("the steps leave 135° of the half turn unread, from 45° to 180°: read steps in that gap, leaving none over 90°, to fix the optic character",
             result.UndeterminedReason);
+        // A gap in the middle is named by its ends: reading on past the last step would not close it.
+        var middle = RotationSeriesAnalysis.Analyse([new(0, 1.544, 1.553), new(20, 1.544, 1.551), new(130, 1.544, 1.548), new(170, 1.544, 1.550)], 0.001);
+        Assert.Contains("110° of the half turn unread, from 20° to 130°", middle.UndeterminedReason, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -211,6 +211,47 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void A_faceted_cut_leaves_the_fit_and_nothing_fits_as_they_were()
+    {
+        // Quartz's edges (1.544/1.553: common practice) with an SG of 2.94 no quartz has: nothing fits. The cut's implied
+        // "no star, no cat's-eye" is no look at the stone, so it must not raise every candidate's combined fit.
+        using var run = new CommandRun();
+        string[] readings = ["--edge", "0:1.544/1.553", "--edge", "90:1.544/1.553", "--sg", "2.94", "--json"];
+        var (_, plain, _) = Identify(run, readings);
+        var (_, faceted, _) = Identify(run, [.. readings, "--cut", "faceted"]);
+        using var a = System.Text.Json.JsonDocument.Parse(plain);
+        using var b = System.Text.Json.JsonDocument.Parse(faceted);
+        Assert.True(a.RootElement.GetProperty("no_good_match").GetBoolean());
+        Assert.True(b.RootElement.GetProperty("no_good_match").GetBoolean());
+        Assert.Equal(a.RootElement.GetProperty("not_in_catalogue").GetDouble(), b.RootElement.GetProperty("not_in_catalogue").GetDouble());
+        double Fit(System.Text.Json.JsonDocument d) => d.RootElement.GetProperty("species")[0].GetProperty("candidates")[0].GetProperty("fit").GetDouble();
+        Assert.Equal(Fit(a), Fit(b));
+    }
+
+    [Fact]
+    public void A_cut_alone_is_refused_naming_the_cut_and_a_star_on_facets_names_the_feature_option()
+    {
+        using var run = new CommandRun();
+        var (exit, _, error) = Identify(run, "--cut", "cabochon");
+        Assert.Equal(3, exit);
+        Assert.Contains("only the cut was given", error, StringComparison.Ordinal);
+        (exit, _, error) = Identify(run, "--sg", "4.00", "--cut", "faceted", "--feature", "asterism");
+        Assert.Equal(3, exit);
+        Assert.Contains("--cut: 'faceted' cannot show the asterism given in --feature", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void The_laboratory_caution_does_not_claim_a_look_when_only_the_cut_was_given()
+    {
+        // Peridot (common practice: α 1.654, γ 1.690, SG 3.34), faceted, nothing looked at under magnification.
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--edge", "0:1.654/1.690", "--edge", "90:1.670/1.690", "--sg", "3.34", "--colour", "green", "--cut", "faceted");
+        Assert.True(exit == 0, error);
+        Assert.Contains("laboratory-grown", output, StringComparison.Ordinal);
+        Assert.DoesNotContain("even with the magnification recorded", output, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_name_longer_than_the_column_widens_it_and_the_shares_stay_in_line()
     {
         // A blue corundum cabochon (spot 1.76, SG 4.00: common practice) lists "flame-fusion synthetic colour-change sapphire" (45 letters).

@@ -25,6 +25,8 @@ public class OneReadingPathTests
     [
         S("quartz", ["0:1.544/1.553", "45:1.544/1.551", "90:1.544/1.548", "135:1.544/1.551"], ("sg", "2.65"), ("polariscope", "doubly_refractive"), ("colour", "colourless")),
         S("ruby", ["0:1.762/1.770", "45:1.764/1.770", "90:1.767/1.770", "135:1.765/1.770"], ("sg", "4.00"), ("colour", "red"), ("lines", "694 668 659")),
+        // The same ruby noted as faceted (its star varieties weighed as showing no star).
+        S("faceted ruby", ["0:1.762/1.770", "45:1.764/1.770", "90:1.767/1.770", "135:1.765/1.770"], ("sg", "4.00"), ("colour", "red"), ("cut", "faceted")),
         S("blue sapphire", ["0:1.762/1.770", "90:1.766/1.770"], ("sg", "4.00"), ("colour", "blue"), ("lines", "450"), ("pleochroism", "dichroic")),
         S("spinel", ["0:1.718", "90:1.718"], ("sg", "3.60"), ("polariscope", "singly_refractive"), ("colour", "red")),
         S("diamond", [], ("over", "yes"), ("thermal", "positive"), ("sg", "3.52")),
@@ -72,6 +74,7 @@ public class OneReadingPathTests
                 "sg" => "--sg", "air" => "--in-air-ct", "water" => "--in-water-ct", "water_c" => "--water-c", "spot" => "--spot",
                 "polariscope" => "--polariscope", "pleochroism" => "--pleochroism", "dispersion" => "--dispersion", "thermal" => "--thermal-probe",
                 "electrical" => "--electrical", "uv_long" => "--uv-long", "colour" => "--colour", "precision" => "--precision", "offset" => "--calibration-offset",
+                "cut" => "--cut",
                 "lines" => "--lines",
                 _ => throw new ArgumentException(field),
             };
@@ -103,7 +106,7 @@ public class OneReadingPathTests
         if (v.TryGetValue("liquids", out string? liquids))
             parts.Add("\"heavy_liquids\":[" + string.Join(",", liquids.Split("; ").Select(e => e.Split(' ')).Select(e => $"{{\"density\":{e[0]},\"result\":\"{e[1]}\"}}")) + "]");
         foreach (var (field, key) in new[] { ("polariscope", "polariscope"), ("pleochroism", "pleochroism"), ("dispersion", "dispersion"), ("thermal", "thermal_probe"),
-            ("electrical", "electrical"), ("uv_long", "uv_long"), ("colour", "colour") })
+            ("electrical", "electrical"), ("uv_long", "uv_long"), ("colour", "colour"), ("cut", "cut") })
             if (v.TryGetValue(field, out string? word)) parts.Add($"\"{key}\":\"{word}\"");
         if (v.TryGetValue("lines", out string? lines))
             parts.Add("\"absorption_nm\":[" + (lines == "none" ? "" : string.Join(",", lines.Split(' '))) + "]");
@@ -131,6 +134,7 @@ public class OneReadingPathTests
                 case "thermal": form.Choose(BenchFields.ThermalProbe, value); break;
                 case "electrical": form.Choose(BenchFields.Electrical, value); break;
                 case "uv_long": form.Choose(BenchFields.UvLong, value); break;
+                case "cut": form.Choose(BenchFields.Cut, value); break;
                 default:
                     form.SetText(field switch
                     {

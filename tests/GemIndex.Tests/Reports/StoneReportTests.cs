@@ -146,6 +146,21 @@ public class StoneReportTests
     }
 
     [Fact]
+    public void The_html_scales_draw_only_the_candidates_the_report_lists_and_the_cut_is_a_reading()
+    {
+        // The quartz readings leave corundum and glass far below 0.05 %: not in the table, so not on the scales either.
+        string line = ReportFixtures.QuartzLine.Replace("\"colour\":\"colourless\"", "\"colour\":\"colourless\",\"cut\":\"faceted\"", StringComparison.Ordinal);
+        var report = ReportFixtures.Report(line);
+        Assert.Equal(["quartz"], report.Candidates.Select(c => c.Name));
+        string html = HtmlReport.Write(report);
+        Assert.Contains("<figure>", html, StringComparison.Ordinal);
+        Assert.DoesNotContain(">corundum<", html, StringComparison.Ordinal);
+        Assert.DoesNotContain(">glass<", html, StringComparison.Ordinal);
+        Assert.Contains(report.ReadingFields, f => f.Label == "Cut" && f.Value == "faceted");
+        Assert.Contains("**Cut:** faceted", MarkdownReport.Write(report), StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void The_report_gives_reasons_for_the_best_entry_of_each_species_first_and_names_each_candidates_species()
     {
         // Every candidate comes with its reasons (as the text UI works them out); the report writes out three of them:

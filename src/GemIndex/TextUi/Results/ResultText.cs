@@ -143,16 +143,17 @@ internal static class ResultText
         if (a.Readings.Refractometer is { OverLimit: true } && !a.Errors.ContainsKey(BenchFields.OverLimit)) lines.Add("Over the limit: index above the contact liquid");
         if (a.SpecificGravity is { } sg) lines.Add("Specific gravity: " + Gravity(sg)[3..]);
         else if (GravityFields.Any(a.Errors.ContainsKey)) lines.Add("Specific gravity: none used (the SG page, F4, says why)");
-        if (a.Result is not null) lines.AddRange(OtherTests(a.Readings));
+        if (a.Result is not null) lines.AddRange(OtherTests(a.Readings, a.Errors));
         return lines;
     }
 
     /// <summary>The other tests the answer used, in the words of the pages they were typed on (every reading that parsed is weighed).</summary>
-    private static IEnumerable<string> OtherTests(StoneReadings r)
+    private static IEnumerable<string> OtherTests(StoneReadings r, IReadOnlyDictionary<string, string> refused)
     {
         if (r.HeavyLiquids.Count > 0) yield return $"Heavy liquids: {r.HeavyLiquids.Count}";
+        // A refused answer was left out of the answer: not listed as used.
         foreach (var (field, word) in r.ChoiceWords)
-            if (word is not null && BenchChoice.For(field) is var choice) yield return $"{choice.Label}: {choice.Show(word)}";
+            if (word is not null && !refused.ContainsKey(field) && BenchChoice.For(field) is var choice) yield return $"{choice.Label}: {choice.Show(word)}";
         if (r.DispersionIndices is { } nb) yield return $"Dispersion: RI at B {Index(nb.NB)}, at G {Index(nb.NG)}";
         if (r.AbsorptionNm is { } lines)
             yield return lines.Count == 0 ? "Absorption: no lines" : "Absorption: " + string.Join(", ", lines.Select(n => n.ToString("0.#", CultureInfo.InvariantCulture))) + " nm";

@@ -415,6 +415,16 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void A_refused_cut_is_not_shown_as_used_and_an_accepted_one_is()
+    {
+        var readings = new GemIndex.Data.Batch.StoneReadings { Sg = 4.0, Cut = "faceted" };
+        var accepted = new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = readings, Result = CorundumAnswer(null) };
+        Assert.Contains("Cut: faceted", ResultText.Derived(accepted));
+        var refused = accepted with { Errors = new Dictionary<string, string> { [BenchFields.Cut] = "'faceted' cannot show the asterism given" } };
+        Assert.DoesNotContain(ResultText.Derived(refused), l => l.StartsWith("Cut:", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void A_refused_spot_reading_is_not_shown_as_used()
     {
         var form = new BenchModel();
