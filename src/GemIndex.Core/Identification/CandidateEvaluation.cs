@@ -17,17 +17,6 @@ public sealed record CandidateEvaluation
     public required double Fit { get; init; }
 
     /// <summary>
-    /// The log-likelihood ratio against "not in the catalogue" with each range test (index, SG, dispersion, heavy liquids)
-    /// counted by its tail instead of its density: a reading inside a range counts alike however narrow the range, so a
-    /// synthetic entry measured on one producer's stones does not outweigh a natural one spanning every deposit. The
-    /// origin balance weighs the origins of a species by it (docs/ranking.md §3, "Origin within a species").
-    /// </summary>
-    public double LogRatioInRange { get; init; }
-
-    /// <summary>The same without the colour test (colour never decides an origin).</summary>
-    public double LogRatioInRangeWithoutColour { get; init; }
-
-    /// <summary>
     /// How many tests other than colour weigh ten to one or more against the candidate with a reading outside what it
     /// shows (<see cref="BenchWarnings.ContradictionBits"/>): counted without words.
     /// </summary>

@@ -32,10 +32,6 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
     private List<EvidenceContribution>? _contributions = explaining ? [] : null;
     private readonly List<double>[] _groups = [[], [], []];
     private double _independent, _logOther, _lastBits, _lastTail, _sumLogTails;
-    // The same sums with each range test (index, SG, dispersion, heavy liquids) counted by its tail rather than its
-    // density: what the origin balance weighs (docs/ranking.md §3, "Origin within a species").
-    private readonly List<double>[] _groupsInRange = [[], [], []];
-    private double _independentInRange;
     private int _tests, _colourAt = -1, _stronglyAgainst;
     private string _lastTest = "";
 
@@ -49,8 +45,7 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
     {
         if (_contributions is not null) _contributions = [];
         foreach (var group in _groups) group.Clear();
-        foreach (var group in _groupsInRange) group.Clear();
-        _independent = _logOther = _lastBits = _lastTail = _sumLogTails = _independentInRange = 0;
+        _independent = _logOther = _lastBits = _lastTail = _sumLogTails = 0;
         _tests = 0;
         _colourAt = -1;
         _stronglyAgainst = 0;
@@ -89,19 +84,11 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
             _groups[group].Add(ratio);
         }
         _logOther += logBroad;
-        if (Fitting)
+        if (Fitting && inFit)
         {
-            double logTail = Math.Log(Math.Clamp(tail, 1e-300, 1));
-            // The origins' weighing takes every test (the cut's implied absences too), each range by its tail.
-            double inRange = IsRangeTest(test) ? logTail : ratio;
-            if (group == Independent) _independentInRange += inRange;
-            else _groupsInRange[group].Add(inRange);
-            if (inFit)
-            {
-                _sumLogTails += logTail;
-                // Counted without words, so that the warning on a reading against the leader needs the reasons only when one is there.
-                if (BenchWarnings.SpeaksAgainst(test, bits, tail >= AgreesTail)) _stronglyAgainst++;
-            }
+            _sumLogTails += Math.Log(Math.Clamp(tail, 1e-300, 1));
+            // Counted without words, so that the warning on a reading against the leader needs the reasons only when one is there.
+            if (BenchWarnings.SpeaksAgainst(test, bits, tail >= AgreesTail)) _stronglyAgainst++;
         }
         if (inFit) _tests++;
         _lastTest = test;
@@ -121,25 +108,18 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
     public double LogLikelihood => _logOther + Ratio(skip: -1);
 
     /// <summary>
-    /// The tests a range is read against, whose likelihood is a density: a reading inside a narrow range scores higher than
-    /// inside a wide one though it is typical of both. Colour stays a likelihood: an entry's colour list is what the
-    /// variety is (a heated yellow sapphire is yellow, a flame-fusion sapphire any colour), and weighing colours by their
-    /// tails moved the benchmark's heated corundum to synthetic (origin right on heated corundum without magnification
-    /// 40.6 % → 5.8 %, seed 2).
+    /// The same without the colour test: what the other tests say (the origin balance asks whether a test other than
+    /// colour decides an origin; docs/ranking.md §3).
     /// </summary>
-    private static bool IsRangeTest(string test) =>
-        test is Bench.BenchField.Refractometer or Bench.BenchField.Sg or Bench.BenchField.Dispersion or Bench.BenchField.HeavyLiquids;
+    public double LogLikelihoodWithoutColour => _logOther + Ratio(skip: _colourAt);
 
     /// <summary>The summed log-likelihood ratio, the chromophore group's element <paramref name="skip"/> left out (−1: none).</summary>
-    private double Ratio(int skip) => Combined(_independent, _groups, skip);
-
-    /// <summary>Independent terms in full; within each group the strongest in full and the rest by <see cref="CorrelatedShare"/>.</summary>
-    private static double Combined(double independent, List<double>[] groups, int skip)
+    private double Ratio(int skip)
     {
-        double ratio = independent;
-        for (int g = 0; g < groups.Length; g++)
+        double ratio = _independent;
+        for (int g = 0; g < _groups.Length; g++)
         {
-            var group = groups[g];
+            var group = _groups[g];
             int skipHere = g == ChromophoreGroup ? skip : -1;
             // The strongest by size (the first of equal sizes), and the group's sum in the order the tests came.
             double strongest = 0, sum = 0;
@@ -167,8 +147,6 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
             LogLikelihood = LogLikelihood,
             LogLikelihoodNotInCatalogue = _logOther,
             Fit = FisherCombination(-_sumLogTails, _tests),
-            LogRatioInRange = Combined(_independentInRange, _groupsInRange, skip: -1),
-            LogRatioInRangeWithoutColour = Combined(_independentInRange, _groupsInRange, skip: _colourAt),
             StronglyAgainst = _stronglyAgainst,
             Contributions = _contributions ?? (IReadOnlyList<EvidenceContribution>)[],
         };

@@ -308,12 +308,13 @@ public sealed class Identifier
         static int Cost(IndicatrixPrior prior) => prior.Shapes.Length * (prior.Families.Any(f => f.Biaxial) ? 2 : 1);
     }
 
-    /// <summary>Entry <paramref name="i"/>'s log posterior, without its fit.</summary>
-    private void Weigh(int i, AnalysedSheet analysed, EvidenceAccumulator acc, double[] logPosterior)
+    /// <summary>Entry <paramref name="i"/>'s log posterior and its tempered log-likelihood ratio without colour, without its fit.</summary>
+    private void Weigh(int i, AnalysedSheet analysed, EvidenceAccumulator acc, double[] logLikelihoodWithoutColour, double[] logPosterior)
     {
         EvidenceLikelihood.Weigh(_profiles[i], analysed, acc);
         double logOther = acc.LogLikelihoodNotInCatalogue;
         // Tempered: the ratio to "not in the catalogue" is divided by the temperature.
+        logLikelihoodWithoutColour[i] = (acc.LogLikelihoodWithoutColour - logOther) / Temperature;
         logPosterior[i] = _logPriors[i] + (acc.LogLikelihood - logOther) / Temperature;
     }
 
@@ -332,17 +333,20 @@ public sealed class Identifier
         if (SeriesOnEveryCore) SeriesInParallel(analysed);
         int n = _materials.Length;
         var logPosterior = new double[n];
+        // The same without colour: the origin balance's "tests alone" (colour lists by origin are the market's usual
+        // colours, never a physical separation of origins).
+        var logLikelihoodWithoutColour = new double[n];
         double logOther, max = double.NegativeInfinity;
         // The likelihoods of every entry, without their fits: only the best entry's fit and the shown candidates' are
         // read, and a fit costs the tails of every test. Those few are weighed again in full (the same sums). Each entry
         // is weighed on its own (an accumulator per thread, emptied for every entry), so on every core too.
         if (SeriesOnEveryCore)
             Parallel.For(0, n, () => new EvidenceAccumulator(explaining: false, fitting: false),
-                (i, _, acc) => { Weigh(i, analysed, acc, logPosterior); return acc; }, _ => { });
+                (i, _, acc) => { Weigh(i, analysed, acc, logLikelihoodWithoutColour, logPosterior); return acc; }, _ => { });
         else
         {
             var acc = new EvidenceAccumulator(explaining: false, fitting: false);
-            for (int i = 0; i < n; i++) Weigh(i, analysed, acc, logPosterior);
+            for (int i = 0; i < n; i++) Weigh(i, analysed, acc, logLikelihoodWithoutColour, logPosterior);
         }
         for (int i = 0; i < n; i++) max = Math.Max(max, logPosterior[i]);
         var evaluations = new CandidateEvaluation?[n];
@@ -361,7 +365,7 @@ public sealed class Identifier
         for (int i = 0; i < n; i++) posterior[i] /= sum;
         double other = Math.Exp(logOther - max) / sum;
         other = DiscountPoorFit(posterior, i => Evaluated(i, explain: false).Fit, other);
-        OriginBalance.Apply(_materials, _originGroups, posterior, _logPriors, i => Evaluated(i, explain: false));
+        OriginBalance.Apply(_materials, _originGroups, posterior, logLikelihoodWithoutColour, _logPriors);
 
         int[] byEntry = Ranked(posterior);
         int[] order = SpeciesFirst(posterior, byEntry);
