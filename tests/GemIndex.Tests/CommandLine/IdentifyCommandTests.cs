@@ -287,6 +287,21 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void The_textbook_flame_fusion_spinel_reads_synthetic()
+    {
+        // Flame-fusion synthetic spinel: n 1.728 and SG 3.64, above most natural spinel's (its excess alumina: common
+        // practice). Natural spinel's catalogue range reaches 1.736, so only the synthetic's narrow range tells them
+        // apart; a weighing that ignored range widths called this stone natural at 68 % (tried and dropped, docs/ranking.md §3).
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--spot", "1.728", "--sg", "3.64", "--json");
+        Assert.True(exit == 0, error);
+        using var doc = System.Text.Json.JsonDocument.Parse(output);
+        var spinel = doc.RootElement.GetProperty("species").EnumerateArray().Single(s => s.GetProperty("species").GetString() == "spinel");
+        var origins = spinel.GetProperty("origins");
+        Assert.True(origins.GetProperty("synthetic").GetDouble() > origins.GetProperty("natural").GetDouble(), origins.ToString());
+    }
+
+    [Fact]
     public void A_bad_edge_option_names_the_option()
     {
         using var run = new CommandRun();
