@@ -9,6 +9,9 @@ namespace GemIndex.Core.Bench;
 /// </summary>
 public static class BenchIdentification
 {
+    /// <summary>The readings that give something to rank by, as the refusal of an empty sheet names them.</summary>
+    private const string ReadingKinds = "(refractometer, SG, polariscope, dichroscope, UV, spectroscope, probes, colour or magnification)";
+
     /// <summary>Reads and ranks one stone.</summary>
     /// <exception cref="QuantityOutOfRangeException">The request asks for candidates outside 1–<see cref="BenchDefaults.MostCandidates"/>.</exception>
     public static BenchOutcome Identify(Identifier identifier, BenchReadings readings, BenchRequest request)
@@ -19,8 +22,8 @@ public static class BenchIdentification
         if (request.RefuseEmpty && reading.Errors.Count == 0 && reading.IsEmpty)
             reading = reading with { Errors = [new BenchFieldError("$", "", "at least one reading",
                 reading.Sheet.Cut is null
-                    ? "no readings were given: give at least one (refractometer, SG, polariscope, dichroscope, UV, spectroscope, probes, colour or magnification)."
-                    : "only the cut was given, which alone tells no material: give at least one reading besides (refractometer, SG, polariscope, dichroscope, UV, spectroscope, probes, colour or magnification).")] };
+                    ? $"no readings were given: give at least one {ReadingKinds}."
+                    : $"only the cut was given, which alone tells no material: give at least one reading besides {ReadingKinds}.")] };
         bool rank = reading.Errors.Count == 0 || request.RankDespiteErrors && reading.HasReadings;
         return new BenchOutcome(reading, rank
             ? identifier.Identify(reading.Sheet, request.Candidates, request.ExplainTop, request.AdviseNextTest)

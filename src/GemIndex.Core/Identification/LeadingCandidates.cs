@@ -69,7 +69,7 @@ public static class LeadingCandidates
     public static int[] Listed(IdentificationResult result) => Listed(result.Candidates, result.NoGoodMatch);
 
     /// <summary>Whether an answer lists a species of this total: the leading species always, every one when nothing fits.</summary>
-    public static bool SpeciesListed(int position, double total, bool noGoodMatch) => position == 0 || noGoodMatch || total >= ListedShare;
+    public static bool SpeciesListed(int position, double total, bool noGoodMatch) => noGoodMatch || IsListed(position, total);
 
     /// <summary>Shares below this print as "&lt;1%": their order among themselves is not seen, so it needs no heading.</summary>
     public const double VisibleShare = 0.005;

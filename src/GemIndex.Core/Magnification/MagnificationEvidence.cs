@@ -49,20 +49,15 @@ public static class MagnificationEvidence
     public static double Fit(MagnificationObservation observation, MagnificationProfile profile)
     {
         // Only the looks taken by hand: the cut's implied absences are no look at the stone (MagnificationObservation.ImpliedByCut).
-        double best = 0, log = 0;
-        foreach (var feature in observation.Present)
+        var looked = observation.ImpliedByCut.Count == 0 ? observation
+            : new MagnificationObservation(observation.Present, observation.Absent.Except(observation.ImpliedByCut));
+        double best = 0;
+        foreach (var feature in looked.Present.Concat(looked.Absent))
         {
             double p = ProbabilityOfSeeing(profile, feature);
             best += Math.Log(Math.Max(p, 1 - p));
-            log += Math.Log(p);
         }
-        foreach (var feature in observation.Absent.Where(f => !observation.ImpliedByCut.Contains(f)))
-        {
-            double p = ProbabilityOfSeeing(profile, feature);
-            best += Math.Log(Math.Max(p, 1 - p));
-            log += Math.Log(1 - p);
-        }
-        return Math.Min(1, Math.Exp(log - best));
+        return Math.Min(1, Math.Exp(LogLikelihood(looked, profile) - best));
     }
 
     /// <summary>
