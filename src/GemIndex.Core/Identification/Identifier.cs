@@ -22,10 +22,11 @@ public sealed class Identifier
     public const double PoorFit = 0.05;
 
     /// <summary>
-    /// A candidate with at least this share of the leader's posterior is a serious one: "nothing fits" and the poor-fit
-    /// discount look at the best fit among the serious candidates, not only the leader's, since a leader that wins on SG
-    /// and colour while its refractometer reading is impossible must not hide a rival that fits every test (a judgement;
-    /// docs/ranking.md §4).
+    /// A candidate with at least this share of the leader's posterior, or an entry of a species with at least this share of
+    /// the leading species' total, is a serious one: "nothing fits" and the poor-fit discount look at the best fit among the
+    /// serious candidates, not only the leader's, since a leader that wins on SG and colour while its refractometer reading
+    /// is impossible must not hide a rival that fits every test, nor a variety of the leading species that fits (a
+    /// judgement; docs/ranking.md §4).
     /// </summary>
     public const double SeriousCandidate = 0.1;
 
@@ -160,7 +161,7 @@ public sealed class Identifier
     }
 
     /// <summary>Moves mass to "not in the catalogue" when even the best-fitting serious candidate fits poorly (<see cref="PoorFit"/>).</summary>
-    private static double DiscountPoorFit(double[] posterior, Func<int, double> fit, double other)
+    private double DiscountPoorFit(double[] posterior, Func<int, double> fit, double other)
     {
         double keep = Math.Min(1, BestSeriousFit(posterior, fit) / PoorFit);
         if (keep >= 1) return other;
@@ -171,12 +172,25 @@ public sealed class Identifier
 
     private static double Odds(double p) => p / (1 - p);
 
-    /// <summary>The best fit among the candidates with at least <see cref="SeriousCandidate"/> of the leader's posterior (their fits worked out only here).</summary>
-    private static double BestSeriousFit(double[] posterior, Func<int, double> fit)
+    /// <summary>
+    /// The best fit among the serious candidates, worked out only here and only as far as needed: an entry with at least
+    /// <see cref="SeriousCandidate"/> of the leader's posterior, or any entry of a species with at least that share of the
+    /// leading species' total (docs/ranking.md §4). The entries are tried most probable first and the search stops at a fit
+    /// of <see cref="PoorFit"/> or more, since neither the discount nor "nothing fits" looks beyond it.
+    /// </summary>
+    private double BestSeriousFit(double[] posterior, Func<int, double> fit)
     {
-        double top = posterior.Max(), best = 0;
+        double top = posterior.Max();
+        var totals = new double[_speciesCount];
+        for (int i = 0; i < posterior.Length; i++) totals[_speciesOf[i]] += posterior[i];
+        double topSpecies = totals.Max();
+        var serious = new List<int>();
         for (int i = 0; i < posterior.Length; i++)
-            if (posterior[i] >= SeriousCandidate * top) best = Math.Max(best, fit(i));
+            if (posterior[i] >= SeriousCandidate * top || totals[_speciesOf[i]] >= SeriousCandidate * topSpecies) serious.Add(i);
+        serious.Sort((a, b) => posterior[b].CompareTo(posterior[a]) is var c && c != 0 ? c : a.CompareTo(b));
+        double best = 0;
+        foreach (int i in serious)
+            if ((best = Math.Max(best, fit(i))) >= PoorFit) break;
         return best;
     }
 
