@@ -346,6 +346,39 @@ public class EvidenceModelTests
     }
 
     [Fact]
+    public void A_variety_of_the_leading_species_that_fits_keeps_nothing_fits_away()
+    {
+        // Beryl's indices and density rise with its alkali content (the catalogue's beryl references: indices to ω 1.602,
+        // SG to 2.92 over the species, emerald's own SG 2.67-2.78), so a chromium emerald may read beyond the emerald entries.
+        // Invented entries in that shape: the lines and the colour favour the emerald entry, which cannot give a stone that
+        // sinks in a 2.85 liquid, while a green beryl entry of the same species, listing no lines, fits every reading. The
+        // species is beryl either way; before the species counted, the emerald's misfit alone called it "nothing fits".
+        var emerald = Entry("emerald", "beryl", OpticalIndices.Uniaxial(new(1.570, 1.599), new(1.565, 1.592)), new(0.005, 0.007),
+            OpticSign.Negative, colours: ["green"], lines: [new(683, LineStrength.Strong), new(680, LineStrength.Strong), new(637, LineStrength.Moderate)],
+            frequency: BenchFrequency.VeryCommon) with { SpecificGravity = new(2.67, 2.78) };
+        var greenBeryl = Entry("green beryl", "beryl", OpticalIndices.Uniaxial(new(1.570, 1.602), new(1.565, 1.595)), new(0.004, 0.008),
+            OpticSign.Negative, colours: ["green", "yellow", "blue", "pink", "colourless"], frequency: BenchFrequency.VeryRare)
+            with { SpecificGravity = new(2.63, 2.92) };
+        var other = Entry("other", "other", OpticalIndices.SingleIndex(new(1.715, 1.720)), colours: ["green"]);
+        var sheet = new BenchSheet
+        {
+            Refractometer = new RefractometerObservation(RefractometerMethod.Facet,
+                [new(0, 1.596, 1.600), new(22.5, 1.594, 1.598), new(45, 1.594, 1.598), new(67.5, 1.594, 1.599), new(90, 1.595, 1.598),
+                 new(112.5, 1.597, 1.599), new(135, 1.598), new(157.5, 1.597, 1.599)]),
+            HeavyLiquids = [HeavyLiquidResult.Of(3.05, HeavyLiquidOutcome.Floats), HeavyLiquidResult.Of(2.85, HeavyLiquidOutcome.Sinks)],
+            AbsorptionLinesNanometres = [680, 683],
+            Colour = "green",
+        };
+        var result = new Identifier([emerald, greenBeryl, other]).Identify(sheet);
+        var fits = string.Join("; ", result.Candidates.Select(c => $"{c.Material.Name} {c.Confidence:0.000} fit {c.Fit:0.000}"));
+        Assert.True(result.Candidates[0].Material.Name == "emerald" && result.Candidates[0].Fit < Identifier.MinimumFit, fits);
+        Assert.True(result.Candidates[1].Confidence < Identifier.SeriousCandidate * result.Candidates[0].Confidence
+            && result.Candidates[1].Fit >= Identifier.MinimumFit, fits);
+        Assert.False(result.NoGoodMatch, fits);
+        Assert.Equal("beryl", result.Species[0].Species);
+    }
+
+    [Fact]
     public void A_high_edge_hidden_above_the_liquid_at_some_steps_is_censored_evidence_not_a_misfit()
     {
         // An invented uniaxial + material, ω 1.770, ε 1.797: with a 1.79 liquid the high edge shows only where it is below
