@@ -34,6 +34,8 @@ CREATE TABLE material (
     do_not_immerse    INTEGER NOT NULL CHECK (do_not_immerse IN (0, 1)),
     notes             TEXT NOT NULL,
     stated_fields     TEXT NOT NULL,  -- space-separated field names the variety states instead of inheriting
+    sg_usual_min      REAL,           -- the part of the SG range where most stones lie (schema 3; null: the whole range alike)
+    sg_usual_max      REAL,
     CHECK (sg_min <= sg_max)
 ) STRICT;
 

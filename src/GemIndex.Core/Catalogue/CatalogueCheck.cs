@@ -255,6 +255,8 @@ public static class CatalogueCheck
         foreach ((string name, PropertyRange range) in m.Indices.Named())
             CheckInside(add, CatalogueFields.IndexField(name), range, IndexLowerBound, IndexUpperBound, "refractive index");
         CheckInside(add, "sg", m.SpecificGravity, SpecificGravityLowerBound, SpecificGravityUpperBound, "specific gravity");
+        if (m.SpecificGravityUsual is { } usual && !(usual.Minimum >= m.SpecificGravity.Minimum && usual.Maximum <= m.SpecificGravity.Maximum))
+            add("sg_usual", $"{usual} lies outside the SG range {m.SpecificGravity}; the usual part is within the whole range");
         if (m.Birefringence is { Minimum: < 0 } b) add("birefringence", $"{b} is negative; birefringence is 0 or more");
         if (m.Hardness is { } h && !(h.Minimum >= 1 && h.Maximum <= 10)) add("hardness", $"{h} is outside the Mohs scale 1 to 10");
         if (m.Dispersion is { } d && !(d >= 0 && d < 1)) add("dispersion", $"{Format(d)} is outside 0 to below 1");

@@ -13,12 +13,12 @@ public static class CatalogueFields
     public static IReadOnlyList<string> Sourced { get; } = [.. Indices, "birefringence", "sg", "dispersion"];
 
     /// <summary>Every numeric field: each must name a source.</summary>
-    public static IReadOnlyList<string> Numeric { get; } = [.. Sourced, "hardness"];
+    public static IReadOnlyList<string> Numeric { get; } = [.. Sourced, "sg_usual", "hardness"];
 
     /// <summary>Every field a variety may state instead of inheriting from its species, in file order.</summary>
     public static IReadOnlyList<string> Inheritable { get; } =
     [
-        "optic_sign", "forms", "opaque", .. Indices, "birefringence", "sg", "dispersion", "hardness", "pleochroism",
+        "optic_sign", "forms", "opaque", .. Indices, "birefringence", "sg", "sg_usual", "dispersion", "hardness", "pleochroism",
         "polariscope", "thermal_probe", "electrical", "uv_long", "uv_short", "absorption", "colours", "do_not_immerse", "notes",
     ];
 
@@ -29,6 +29,7 @@ public static class CatalogueFields
         foreach ((string symbol, _) in material.Indices.Named()) yield return IndexField(symbol);
         if (material.Birefringence is not null) yield return "birefringence";
         yield return "sg";
+        if (material.SpecificGravityUsual is not null) yield return "sg_usual";
         if (material.Dispersion is not null) yield return "dispersion";
         if (material.Hardness is not null) yield return "hardness";
     }

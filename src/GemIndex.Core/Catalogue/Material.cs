@@ -41,6 +41,12 @@ public sealed record Material
     /// <summary>Specific gravity range.</summary>
     public required PropertyRange SpecificGravity { get; init; }
 
+    /// <summary>
+    /// The part of <see cref="SpecificGravity"/> where most stones lie, where a source says so ("usually about 2.15"); the
+    /// rest of the range holds the rare extremes. Null: the whole range alike.
+    /// </summary>
+    public PropertyRange? SpecificGravityUsual { get; init; }
+
     /// <summary>Dispersion nG − nB (430.8 nm and 686.7 nm), where known.</summary>
     public double? Dispersion { get; init; }
 

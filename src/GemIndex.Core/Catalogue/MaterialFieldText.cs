@@ -16,7 +16,7 @@ public static class MaterialFieldText
         if (RangeOf(material, field) is { } r) return $"[{Number(r.Minimum)}, {Number(r.Maximum)}]";
         return field switch
         {
-            "n" or "omega" or "epsilon" or "alpha" or "beta" or "gamma" or "birefringence" or "hardness" => "-",
+            "n" or "omega" or "epsilon" or "alpha" or "beta" or "gamma" or "birefringence" or "sg_usual" or "hardness" => "-",
             "optic_sign" => Word(material.Sign),
             "forms" => Word(material.Forms),
             "opaque" => material.IsOpaque ? "true" : "false",
@@ -35,7 +35,7 @@ public static class MaterialFieldText
         };
     }
 
-    /// <summary>The field's range (an index, birefringence, sg or hardness), or null when it has none.</summary>
+    /// <summary>The field's range (an index, birefringence, sg, sg_usual or hardness), or null when it has none.</summary>
     public static PropertyRange? RangeOf(Material material, string field)
     {
         ArgumentNullException.ThrowIfNull(material);
@@ -43,6 +43,7 @@ public static class MaterialFieldText
         {
             "birefringence" => material.Birefringence,
             "sg" => material.SpecificGravity,
+            "sg_usual" => material.SpecificGravityUsual,
             "hardness" => material.Hardness,
             _ => material.Indices.Named().Where(x => CatalogueFields.IndexField(x.Name) == field).Select(x => (PropertyRange?)x.Range).FirstOrDefault(),
         };

@@ -73,9 +73,11 @@ public static class EvidenceLikelihood
         double s = double.Hypot(sigma, SpecificGravityFloor);
         var range = m.SpecificGravity;
         double stray = RangeStrays.SpecificGravityShare * value;
-        acc.Add(BenchField.Sg, RangeStrays.Density(value, range, s, stray), BroadDensities.SpecificGravity, acc.Fitting ? RangeStrays.Tail(value, range, s, stray) : 1, robust: true, group);
+        // A reading among the rare extremes of the range is no misfit: the fit's tail is the whole range's.
+        acc.Add(BenchField.Sg, UsualPart.Mixed(range, m.SpecificGravityUsual, r => RangeStrays.Density(value, r, s, stray)), BroadDensities.SpecificGravity,
+            acc.Fitting ? RangeStrays.Tail(value, range, s, stray) : 1, robust: true, group);
         if (acc.Explaining)
-            acc.Say($"SG {Gravity.SpecificGravity.Text(value, sigma)} {Where(value, range, s, "0.00")}");
+            acc.Say($"SG {Gravity.SpecificGravity.Text(value, sigma)} {Where(value, range, s, "0.00")}{Usually(value, range, m.SpecificGravityUsual, s)}");
     }
 
     /// <summary>σ of a heavy liquid's density, doubled for a suspended stone (a judgement, docs/ranking.md §5, other named values).</summary>
@@ -93,19 +95,21 @@ public static class EvidenceLikelihood
         var range = m.SpecificGravity;
         double density = liquid.Liquid.Value;
         bool fitting = acc.Fitting;
+        var usual = m.SpecificGravityUsual;
         (double f, double g, double tail) = liquid.Outcome switch
         {
-            HeavyLiquidOutcome.Floats => (RangeLikelihood.ProbabilityBelow(density, range, sigma), BroadFloatsOrSinks,
+            HeavyLiquidOutcome.Floats => (UsualPart.Mixed(range, usual, r => RangeLikelihood.ProbabilityBelow(density, r, sigma)), BroadFloatsOrSinks,
                 fitting ? RangeLikelihood.TwoSidedTail(Math.Max(0, range.Minimum - density) / sigma) : 1),
-            HeavyLiquidOutcome.Sinks => (RangeLikelihood.ProbabilityAbove(density, range, sigma), BroadFloatsOrSinks,
+            HeavyLiquidOutcome.Sinks => (UsualPart.Mixed(range, usual, r => RangeLikelihood.ProbabilityAbove(density, r, sigma)), BroadFloatsOrSinks,
                 fitting ? RangeLikelihood.TwoSidedTail(Math.Max(0, density - range.Maximum) / sigma) : 1),
-            _ => (RangeLikelihood.Density(density, range, 2 * sigma) * SuspensionWindowSigmas * sigma,
+            _ => (UsualPart.Mixed(range, usual, r => RangeLikelihood.Density(density, r, 2 * sigma)) * SuspensionWindowSigmas * sigma,
                 SuspensionWindowSigmas * sigma * BroadDensities.SpecificGravity,
                 fitting ? RangeLikelihood.TwoSidedTail(RangeLikelihood.StandardDeviationsOutside(density, range, 2 * sigma)) : 1),
         };
         acc.Add(BenchField.HeavyLiquids, f, g, tail, robust: true);
         if (acc.Explaining)
-            acc.Say($"{Word(liquid.Outcome)} in liquid of density {F2(density)}: SG {range.ToString("0.00")} expected");
+            acc.Say($"{Word(liquid.Outcome)} in liquid of density {F2(density)}: SG {range.ToString("0.00")} expected"
+                + (usual is { } u ? $", usually {u.ToString("0.00")}" : ""));
     }
 
     /// <summary>
@@ -417,6 +421,11 @@ public static class EvidenceLikelihood
         string how = sigmas > FarSigmas ? $"over {FarSigmas.ToString(CultureInfo.InvariantCulture)}σ" : $"{sigmas.ToString("0.#", CultureInfo.InvariantCulture)}σ{within}";
         return $"lies {distance.ToString(format, CultureInfo.InvariantCulture)} {side} {range.ToString(format)} ({how})";
     }
+
+    /// <summary>", among its rare extremes (usually 1.98–2.25)" for a reading in the range but clear of its usual part; else "".</summary>
+    private static string Usually(double value, PropertyRange range, PropertyRange? usual, double sigma) =>
+        usual is { } u && range.Contains(value) && RangeLikelihood.StandardDeviationsOutside(value, u, sigma) > WithinUncertaintySigmas
+            ? $", among its rare extremes (usually {u.ToString("0.00")})" : "";
 
     internal static string Word<T>(T value) where T : struct, Enum => value.ToString() switch
     {

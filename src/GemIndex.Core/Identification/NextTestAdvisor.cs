@@ -377,7 +377,7 @@ public static class NextTestAdvisor
     internal const double RefractometerOutcomeBin = 0.004;
 
     private static IEnumerable<(long, double)> SpecificGravity(Material m) =>
-        Binned(m.SpecificGravity, SpecificGravityOutcomeSigma, SpecificGravityOutcomeBin, 0);
+        Binned(m.SpecificGravity, SpecificGravityOutcomeSigma, SpecificGravityOutcomeBin, 0, m.SpecificGravityUsual);
 
     private static IEnumerable<(long, double)> Refractometer(Material m)
     {
@@ -396,12 +396,12 @@ public static class NextTestAdvisor
     }
 
     /// <summary>Probability of each bin of width <paramref name="width"/> for a reading with noise σ of a value in the range.</summary>
-    private static IEnumerable<(long, double)> Binned(PropertyRange range, double sigma, double width, long offset)
+    private static IEnumerable<(long, double)> Binned(PropertyRange range, double sigma, double width, long offset, PropertyRange? usual = null)
     {
         long first = (long)Math.Floor((range.Minimum - 3 * sigma) / width), last = (long)Math.Floor((range.Maximum + 3 * sigma) / width);
         for (long k = first; k <= last; k++)
         {
-            double p = RangeLikelihood.ProbabilityAbove(k * width, range, sigma) - RangeLikelihood.ProbabilityAbove((k + 1) * width, range, sigma);
+            double p = UsualPart.Mixed(range, usual, r => RangeLikelihood.ProbabilityAbove(k * width, r, sigma) - RangeLikelihood.ProbabilityAbove((k + 1) * width, r, sigma));
             if (p > 1e-6) yield return (k + offset, p);
         }
     }

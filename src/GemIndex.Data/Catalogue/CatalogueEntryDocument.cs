@@ -41,7 +41,7 @@ public sealed record CatalogueEntryDocument : EntryFieldsDocument
             Forms = [.. CatalogueWords.OfForms(m.Forms)], Opaque = m.IsOpaque,
             N = Pair(m.Indices.Single), Omega = Pair(m.Indices.Omega), Epsilon = Pair(m.Indices.Epsilon),
             Alpha = Pair(m.Indices.Alpha), Beta = Pair(m.Indices.Beta), Gamma = Pair(m.Indices.Gamma),
-            Birefringence = Pair(m.Birefringence), Sg = Pair(m.SpecificGravity), Dispersion = m.Dispersion, Hardness = Pair(m.Hardness),
+            Birefringence = Pair(m.Birefringence), Sg = Pair(m.SpecificGravity), SgUsual = Pair(m.SpecificGravityUsual), Dispersion = m.Dispersion, Hardness = Pair(m.Hardness),
             Pleochroism = CatalogueWords.Of(m.Pleochroism), Polariscope = [.. m.Polariscope.Select(CatalogueWords.Of)],
             ThermalProbe = CatalogueWords.Of(m.ThermalProbe), Electrical = CatalogueWords.Of(m.Electrical),
             UvLong = [.. m.UvLong.Select(CatalogueWords.Of)], UvShort = [.. m.UvShort.Select(CatalogueWords.Of)],

@@ -6,7 +6,10 @@ namespace GemIndex.Data.Catalogue;
 public static class CatalogueSchema
 {
     /// <summary>The schema version this build reads and writes (PRAGMA user_version and meta 'schema_version').</summary>
-    public const int Version = 2;
+    public const int Version = 3;
+
+    /// <summary>The earlier schema this build still reads, and brings up to <see cref="Version"/> before it writes a user catalogue.</summary>
+    public const int PreviousVersion = 2;
 
     /// <summary>PRAGMA application_id marking a catalogue built by GemIndex ("GICA"), so a build never replaces another file.</summary>
     public const int ApplicationId = 0x47494341;
@@ -26,6 +29,22 @@ public static class CatalogueSchema
         meta.Parameters.AddWithValue("$v", Version.ToString(System.Globalization.CultureInfo.InvariantCulture));
         meta.Parameters.AddWithValue("$kind", kind);
         meta.Parameters.AddWithValue("$hash", sourceHash);
+        meta.ExecuteNonQuery();
+    }
+
+    /// <summary>
+    /// Brings a catalogue of <see cref="PreviousVersion"/> up to <see cref="Version"/> inside <paramref name="transaction"/>:
+    /// the usual SG part's two columns, empty (every entry's whole range alike, as before). Only a user catalogue is
+    /// upgraded; the shipped one is rebuilt from its files.
+    /// </summary>
+    public static void UpgradePrevious(SqliteConnection connection, SqliteTransaction transaction)
+    {
+        Execute(connection, transaction, "ALTER TABLE material ADD COLUMN sg_usual_min REAL; ALTER TABLE material ADD COLUMN sg_usual_max REAL;");
+        Execute(connection, transaction, $"PRAGMA user_version = {Version}");
+        using SqliteCommand meta = connection.CreateCommand();
+        meta.Transaction = transaction;
+        meta.CommandText = "UPDATE meta SET value = $v WHERE key = 'schema_version'";
+        meta.Parameters.AddWithValue("$v", Version.ToString(System.Globalization.CultureInfo.InvariantCulture));
         meta.ExecuteNonQuery();
     }
 

@@ -13,12 +13,16 @@ public sealed class CatalogueStore : IDisposable
 {
     private readonly SqliteConnection _connection;
 
-    private CatalogueStore(SqliteConnection connection, string path, string kind)
+    private CatalogueStore(SqliteConnection connection, string path, string kind, long version)
     {
         _connection = connection;
         Path = path;
         Kind = kind;
+        SchemaVersion = version;
     }
+
+    /// <summary>The file's schema version: <see cref="CatalogueSchema.Version"/>, or the previous one for a user catalogue not yet written to by this build.</summary>
+    public long SchemaVersion { get; }
 
     /// <summary>The file opened.</summary>
     public string Path { get; }
@@ -35,9 +39,9 @@ public sealed class CatalogueStore : IDisposable
         try
         {
             long version = ReadVersion(connection, path);
-            if (version != CatalogueSchema.Version)
+            if (version is not (CatalogueSchema.Version or CatalogueSchema.PreviousVersion))
                 throw new CatalogueSchemaVersionException(path, version);
-            return new CatalogueStore(connection, path, Meta(connection, "kind") ?? "shipped");
+            return new CatalogueStore(connection, path, Meta(connection, "kind") ?? "shipped", version);
         }
         catch (SqliteException e)
         {
@@ -85,11 +89,11 @@ public sealed class CatalogueStore : IDisposable
     /// <exception cref="CatalogueStoreException">The file cannot be read.</exception>
     public IReadOnlyList<Material> LoadAll()
     {
-        try { return Load(_connection, Kind == "user"); }
+        try { return Load(_connection, Kind == "user", SchemaVersion == CatalogueSchema.PreviousVersion); }
         catch (SqliteException e) { throw new CatalogueStoreException($"{Path}: cannot read the catalogue: {e.Message}", e); }
     }
 
-    internal static IReadOnlyList<Material> Load(SqliteConnection c, bool isUser)
+    internal static IReadOnlyList<Material> Load(SqliteConnection c, bool isUser, bool previousSchema)
     {
         var indices = Children(c, "SELECT material_id, axis, min, max FROM material_index",
             r => (Axis: r.GetString(1), Range: new PropertyRange(r.GetDouble(2), r.GetDouble(3))));
@@ -104,11 +108,14 @@ public sealed class CatalogueStore : IDisposable
             ORDER BY s.material_id, s.field
             """, r => (Field: r.GetString(1), Source: new ValueSource(r.GetString(2), CatalogueWords.Stored<SourceKind>(r.GetString(3)), r.GetString(4))));
         var colours = Children(c, "SELECT material_id, colour FROM material_colour ORDER BY material_id, position", r => r.GetString(1));
+        // A user catalogue of the previous schema has no usual SG part: read as null, the whole range alike.
+        string usual = previousSchema ? "NULL, NULL" : "sg_usual_min, sg_usual_max";
         using SqliteCommand cmd = c.CreateCommand();
-        cmd.CommandText = """
+        cmd.CommandText = $"""
             SELECT id, name, species, variety, family, origin, crystal_system, optic_character, optic_sign,
                    birefringence_min, birefringence_max, sg_min, sg_max, dispersion, hardness_min, hardness_max,
-                   pleochroism, thermal_probe, electrical, frequency, share, forms, opaque, do_not_immerse, notes, stated_fields
+                   pleochroism, thermal_probe, electrical, frequency, share, forms, opaque, do_not_immerse, notes, stated_fields,
+                   {usual}
             FROM material ORDER BY id
             """;
         using SqliteDataReader r = cmd.ExecuteReader();
@@ -129,6 +136,7 @@ public sealed class CatalogueStore : IDisposable
                 SpecificGravity = new PropertyRange(r.GetDouble(11), r.GetDouble(12)),
                 Dispersion = r.IsDBNull(13) ? null : r.GetDouble(13),
                 Hardness = OptionalRange(r, 14),
+                SpecificGravityUsual = OptionalRange(r, 26),
                 Pleochroism = CatalogueWords.Stored<PleochroismStrength>(r.GetString(16)),
                 ThermalProbe = CatalogueWords.Stored<ThermalProbeResult>(r.GetString(17)),
                 Electrical = CatalogueWords.Stored<ElectricalResult>(r.GetString(18)),

@@ -9,10 +9,12 @@ internal static class CatalogueWriter
     private const string InsertMaterial = """
         INSERT INTO material(name, species, variety, family, origin, crystal_system, optic_character, optic_sign,
             birefringence_min, birefringence_max, sg_min, sg_max, dispersion, hardness_min, hardness_max,
-            pleochroism, thermal_probe, electrical, frequency, share, forms, opaque, do_not_immerse, notes, stated_fields)
+            pleochroism, thermal_probe, electrical, frequency, share, forms, opaque, do_not_immerse, notes, stated_fields,
+            sg_usual_min, sg_usual_max)
         VALUES ($name, $species, $variety, $family, $origin, $system, $character, $sign,
             $bmin, $bmax, $sgmin, $sgmax, $dispersion, $hmin, $hmax,
-            $pleochroism, $thermal, $electrical, $frequency, $share, $forms, $opaque, $immerse, $notes, $stated)
+            $pleochroism, $thermal, $electrical, $frequency, $share, $forms, $opaque, $immerse, $notes, $stated,
+            $sgumin, $sgumax)
         RETURNING id
         """;
 
@@ -48,6 +50,8 @@ internal static class CatalogueWriter
         p.AddWithValue("$bmax", (object?)m.Birefringence?.Maximum ?? DBNull.Value);
         p.AddWithValue("$sgmin", m.SpecificGravity.Minimum);
         p.AddWithValue("$sgmax", m.SpecificGravity.Maximum);
+        p.AddWithValue("$sgumin", (object?)m.SpecificGravityUsual?.Minimum ?? DBNull.Value);
+        p.AddWithValue("$sgumax", (object?)m.SpecificGravityUsual?.Maximum ?? DBNull.Value);
         p.AddWithValue("$dispersion", (object?)m.Dispersion ?? DBNull.Value);
         p.AddWithValue("$hmin", (object?)m.Hardness?.Minimum ?? DBNull.Value);
         p.AddWithValue("$hmax", (object?)m.Hardness?.Maximum ?? DBNull.Value);

@@ -19,6 +19,9 @@ public record EntryFieldsDocument
     public double[]? Gamma { get; init; }
     public double[]? Birefringence { get; init; }
     public double[]? Sg { get; init; }
+
+    /// <summary>The part of <see cref="Sg"/> where most stones lie, where a source says so (reference-db/README.md).</summary>
+    public double[]? SgUsual { get; init; }
     public double? Dispersion { get; init; }
     public double[]? Hardness { get; init; }
     public string? Pleochroism { get; init; }
@@ -42,7 +45,7 @@ public record EntryFieldsDocument
         (string Name, object? Value)[] all =
         [
             ("optic_sign", OpticSign), ("forms", Forms), ("opaque", Opaque), ("n", N), ("omega", Omega), ("epsilon", Epsilon),
-            ("alpha", Alpha), ("beta", Beta), ("gamma", Gamma), ("birefringence", Birefringence), ("sg", Sg),
+            ("alpha", Alpha), ("beta", Beta), ("gamma", Gamma), ("birefringence", Birefringence), ("sg", Sg), ("sg_usual", SgUsual),
             ("dispersion", Dispersion), ("hardness", Hardness), ("pleochroism", Pleochroism), ("polariscope", Polariscope),
             ("thermal_probe", ThermalProbe), ("electrical", Electrical), ("uv_long", UvLong), ("uv_short", UvShort),
             ("absorption", Absorption), ("colours", Colours), ("do_not_immerse", DoNotImmerse), ("notes", Notes),
@@ -57,6 +60,8 @@ public record EntryFieldsDocument
         N = N ?? inherited.N, Omega = Omega ?? inherited.Omega, Epsilon = Epsilon ?? inherited.Epsilon,
         Alpha = Alpha ?? inherited.Alpha, Beta = Beta ?? inherited.Beta, Gamma = Gamma ?? inherited.Gamma,
         Birefringence = Birefringence ?? inherited.Birefringence, Sg = Sg ?? inherited.Sg,
+        // The usual part belongs to the range it qualifies: a variety with its own SG range keeps none of its species'.
+        SgUsual = SgUsual ?? (Sg is null ? inherited.SgUsual : null),
         Dispersion = Dispersion ?? inherited.Dispersion, Hardness = Hardness ?? inherited.Hardness,
         Pleochroism = Pleochroism ?? inherited.Pleochroism, Polariscope = Polariscope ?? inherited.Polariscope,
         ThermalProbe = ThermalProbe ?? inherited.ThermalProbe, Electrical = Electrical ?? inherited.Electrical,

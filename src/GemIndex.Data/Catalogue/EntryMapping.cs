@@ -55,6 +55,7 @@ internal static class EntryMapping
             Sign = e.OpticSign is null ? OpticSign.None : Word<OpticSign>("optic_sign", e.OpticSign, Fail),
             Birefringence = Range("birefringence", e.Birefringence, Fail),
             SpecificGravity = Range("sg", e.Sg, Fail) ?? default,
+            SpecificGravityUsual = Range("sg_usual", e.SgUsual, Fail),
             Dispersion = e.Dispersion,
             Hardness = Range("hardness", e.Hardness, Fail),
             Pleochroism = e.Pleochroism is null ? PleochroismStrength.None : Word<PleochroismStrength>("pleochroism", e.Pleochroism, Fail),

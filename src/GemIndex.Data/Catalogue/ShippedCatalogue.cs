@@ -42,8 +42,8 @@ public static class ShippedCatalogue
         {
             try
             {
-                using CatalogueStore store = CatalogueStore.Open(path);
-                return path;
+                using (CatalogueStore store = CatalogueStore.Open(path))
+                    if (store.SchemaVersion == CatalogueSchema.Version) return path;
             }
             catch (Exception e) when (e is CatalogueStoreException or CatalogueSchemaVersionException)
             {

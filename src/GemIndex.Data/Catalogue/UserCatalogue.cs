@@ -72,7 +72,8 @@ public sealed class UserCatalogue(string path)
             else
             {
                 long version = CatalogueStore.ReadVersion(c, Path);
-                if (version != CatalogueSchema.Version) throw new CatalogueSchemaVersionException(Path, version);
+                if (version == CatalogueSchema.PreviousVersion) CatalogueSchema.UpgradePrevious(c, tx);
+                else if (version != CatalogueSchema.Version) throw new CatalogueSchemaVersionException(Path, version);
             }
             CatalogueWriter.Insert(c, tx, materials);
             tx.Commit();

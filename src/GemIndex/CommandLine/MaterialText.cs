@@ -31,7 +31,8 @@ internal static class MaterialText
         };
         lines.AddRange(m.Indices.Named().Select(x => ($"{x.Name} at 589.3 nm", x.Range.ToString(IndexFormat))));
         lines.Add(("birefringence", m.Birefringence?.ToString(IndexFormat) ?? "none (one index)"));
-        lines.Add(("specific gravity", m.SpecificGravity.ToString("0.00")));
+        lines.Add(("specific gravity", m.SpecificGravity.ToString("0.00")
+            + (m.SpecificGravityUsual is { } usual ? $", usually {usual.ToString("0.00")} (the rest rare extremes)" : "")));
         lines.Add(("dispersion", m.Dispersion is { } d ? $"{d.ToString("0.000", CultureInfo.InvariantCulture)} (nG − nB, 430.8 and 686.7 nm)" : "not given"));
         lines.Add(("hardness", m.Hardness is { } h ? $"{h.ToString("0.#")} (Mohs)" : "not given"));
         lines.Add(("pleochroism", Word(m.Pleochroism)));

@@ -151,6 +151,13 @@ public class CatalogueCheckTests
     }
 
     [Fact]
+    public void A_usual_sg_part_outside_the_sg_range_is_reported()
+    {
+        AssertOnlyFinding(Biaxial() with { SpecificGravityUsual = new(3.30, 3.40) }, "sg_usual");   // the range is 3.32-3.37
+        Assert.Empty(CatalogueCheck.CheckEntry(Biaxial() with { SpecificGravityUsual = new(3.33, 3.35) }));
+    }
+
+    [Fact]
     public void Either_sign_is_accepted_whatever_the_indices()
     {
         Assert.Empty(CatalogueCheck.CheckEntry(Uniaxial() with { Sign = OpticSign.Either }));

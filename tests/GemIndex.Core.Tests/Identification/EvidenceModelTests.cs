@@ -346,6 +346,25 @@ public class EvidenceModelTests
     }
 
     [Fact]
+    public void A_usual_sg_part_weighs_a_reading_among_the_rare_extremes_lower_but_never_as_a_misfit()
+    {
+        // Opal: SG 1.25-2.23, usually about 2.15 (GIA Gem Reference Guide 1995, as quoted in the catalogue's opal-sg-span):
+        // an invented entry with that range, with and without its usual part (1.98-2.25 in the catalogue).
+        var whole = Entry("opal", "opal", OpticalIndices.SingleIndex(new(1.37, 1.47), OpticCharacter.Amorphous), forms: MaterialForm.Amorphous)
+            with { SpecificGravity = new(1.25, 2.25) };
+        var usual = whole with { SpecificGravityUsual = new(1.98, 2.25) };
+        CandidateEvaluation Weigh(Material m, double sg) =>
+            EvidenceLikelihood.Evaluate(m, new AnalysedSheet(new BenchSheet { SpecificGravity = new(sg, 0.01) }));
+        // Inside the usual part the density is (1 - r)/1.98-2.25's width + r/the whole width, far above the flat whole range's.
+        Assert.True(Weigh(usual, 2.15).LogLikelihood > Weigh(whole, 2.15).LogLikelihood + 1);
+        // Among the extremes it is r times the whole range's: ln 0.1 = -2.3 below, as the share says.
+        double drop = Weigh(usual, 1.60).LogLikelihood - Weigh(whole, 1.60).LogLikelihood;
+        Assert.InRange(drop, Math.Log(UsualPart.RareShare) - 0.01, Math.Log(UsualPart.RareShare) + 0.05); // the 2 % misreading share lifts it a little
+        // Neither is a misfit: the fit's tail is the whole range's.
+        Assert.Equal(Weigh(whole, 1.60).Fit, Weigh(usual, 1.60).Fit, 12);
+    }
+
+    [Fact]
     public void A_variety_of_the_leading_species_that_fits_keeps_nothing_fits_away()
     {
         // Beryl's indices and density rise with its alkali content (the catalogue's beryl references: indices to ω 1.602,

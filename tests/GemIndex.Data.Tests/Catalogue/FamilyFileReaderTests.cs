@@ -53,6 +53,21 @@ public class FamilyFileReaderTests
     }
 
     [Fact]
+    public void A_usual_sg_part_is_read_and_inherited_only_by_varieties_that_keep_the_species_range()
+    {
+        string json = With("\"sg\": [2.65, 2.66],", "\"sg\": [2.55, 2.70], \"sg_usual\": [2.65, 2.66],")
+            .Replace("\"sources\": { \"*\": \"memory\", \"sg\": \"book\" }", "\"sources\": { \"*\": \"memory\", \"sg\": \"book\", \"sg_usual\": \"book\" }", StringComparison.Ordinal)
+            .Replace("\"colours\": [\"purple\"],", "\"colours\": [\"purple\"], \"sg\": [2.60, 2.62],", StringComparison.Ordinal)
+            .Replace("\"sources\": { \"colours\": \"practice\" }", "\"sources\": { \"colours\": \"practice\", \"sg\": \"book\" }", StringComparison.Ordinal);
+        var all = FamilyFileReader.ReadAll([new FamilySource("fam.json", json)]);
+        Material rock = all.Single(m => m.Name == "t"), amethyst = all.Single(m => m.Name == "t2");
+        Assert.Equal((new PropertyRange(2.55, 2.70), new PropertyRange(2.65, 2.66)), (rock.SpecificGravity, rock.SpecificGravityUsual));
+        Assert.Equal("book", rock.Sources["sg_usual"].Key);
+        // The variety's own range has no usual part of its own, and the species' belongs to the species' range.
+        Assert.Equal((new PropertyRange(2.60, 2.62), (PropertyRange?)null), (amethyst.SpecificGravity, amethyst.SpecificGravityUsual));
+    }
+
+    [Fact]
     public void A_variety_inherits_its_species_fields_with_their_sources_and_its_own_with_its_own()
     {
         Material amethyst = FamilyFileReader.ReadAll(Fixtures.FamilySources).Single(m => m.Name == "sample amethyst");

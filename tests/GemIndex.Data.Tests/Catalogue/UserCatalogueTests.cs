@@ -137,4 +137,31 @@ public class UserCatalogueTests
         Assert.Throws<CatalogueSchemaVersionException>(user.Load);
         Assert.Throws<CatalogueSchemaVersionException>(() => Import(user, "user-good.csv"));
     }
+
+    [Fact]
+    public void A_user_catalogue_of_the_previous_schema_is_read_and_brought_up_to_date_by_the_next_import()
+    {
+        // Schema 2 had no usual SG part: the file as an earlier build left it, with its entries untouched.
+        using var temp = new TempDirectory();
+        var user = new UserCatalogue(temp.File("user-catalogue.db"));
+        Assert.True(Import(user, "user-good.csv").Succeeded);
+        using (var c = new Microsoft.Data.Sqlite.SqliteConnection($"Data Source={user.Path};Pooling=False"))
+        {
+            c.Open();
+            using var cmd = c.CreateCommand();
+            cmd.CommandText = "ALTER TABLE material DROP COLUMN sg_usual_min; ALTER TABLE material DROP COLUMN sg_usual_max; UPDATE meta SET value = '2' WHERE key = 'schema_version';";
+            cmd.ExecuteNonQuery();
+        }
+        CatalogueStoreTests.SetUserVersion(user.Path, CatalogueSchema.PreviousVersion);
+        var before = user.Load();
+        Assert.Equal(["my test citrine", "my test glass", "my test amethyst"], before.Select(m => m.Name));
+        Assert.All(before, m => Assert.Null(m.SpecificGravityUsual));
+
+        var more = ImportText(user, "name,species,variety,origin,crystal_system,optic_character,n_min,n_max,sg_min,sg_max,forms,polariscope,colours,frequency,source,source_kind,share\n"
+            + "my second test glass,glass,glass,imitation,amorphous,amorphous,1.51,1.52,2.45,2.50,amorphous,singly_refractive,green,very_common,invented test data,from_memory,common\n");
+        Assert.True(more.Succeeded, string.Join("\n", more.Errors));
+        using (CatalogueStore store = CatalogueStore.Open(user.Path)) Assert.Equal(CatalogueSchema.Version, store.SchemaVersion);
+        Assert.Equal(before.Select(MaterialSnapshot.Of), user.Load().Take(3).Select(MaterialSnapshot.Of));
+        Assert.Equal(4, user.Load().Count);
+    }
 }
