@@ -12,7 +12,8 @@ namespace GemIndex.Bench.Accuracy;
 /// </summary>
 internal sealed class BatchLineAdapter(IReadOnlyList<Material> catalogue)
 {
-    private readonly Identifier _identifier = new(catalogue);
+    // One stone on one core, as a batch ranks it (docs/ranking.md §6): the figure of stones per second is one core's.
+    private readonly Identifier _identifier = new Identifier(catalogue).WithSeriesOnEveryCore(false);
 
     /// <summary>The catalogue's species names, for the species-name map's report.</summary>
     public IReadOnlySet<string> SpeciesNames { get; } = catalogue.Select(m => m.Species).ToHashSet(StringComparer.Ordinal);
