@@ -24,12 +24,12 @@ public static class CatalogueCsvReader
     [
         "inherits", .. SpeciesColumns, "share", "family", "optic_sign", "forms", "opaque", "n_min", "n_max", "omega_min", "omega_max",
         "epsilon_min", "epsilon_max", "alpha_min", "alpha_max", "beta_min", "beta_max", "gamma_min", "gamma_max",
-        "birefringence_min", "birefringence_max", "sg_min", "sg_max", "dispersion", "hardness_min", "hardness_max", "pleochroism",
+        "birefringence_min", "birefringence_max", "sg_min", "sg_max", "sg_usual_min", "sg_usual_max", "dispersion", "hardness_min", "hardness_max", "pleochroism",
         "polariscope", "thermal_probe", "electrical", "uv_long", "uv_short", "absorption", "colours", "do_not_immerse", "notes",
         "source", "source_kind",
     ];
 
-    private static readonly HashSet<string> RangeFields = ["n", "omega", "epsilon", "alpha", "beta", "gamma", "birefringence", "sg", "hardness"];
+    private static readonly HashSet<string> RangeFields = ["n", "omega", "epsilon", "alpha", "beta", "gamma", "birefringence", "sg", "sg_usual", "hardness"];
 
     /// <summary>
     /// The rows that could be read, and every error; the caller imports nothing unless there are no errors.
@@ -152,7 +152,7 @@ public static class CatalogueCsvReader
             OpticSign = Text("optic_sign") is "none" ? null : Text("optic_sign"), Forms = List("forms"), Opaque = Flag("opaque"),
             N = Range("n"), Omega = Range("omega"), Epsilon = Range("epsilon"),
             Alpha = Range("alpha"), Beta = Range("beta"), Gamma = Range("gamma"),
-            Birefringence = Range("birefringence"), Sg = Range("sg"), Dispersion = Number("dispersion"),
+            Birefringence = Range("birefringence"), Sg = Range("sg"), SgUsual = Range("sg_usual"), Dispersion = Number("dispersion"),
             Hardness = Range("hardness"), Pleochroism = Text("pleochroism"), Polariscope = List("polariscope"),
             ThermalProbe = Text("thermal_probe"), Electrical = Text("electrical"),
             UvLong = List("uv_long"), UvShort = List("uv_short"), Absorption = Lines("absorption"),

@@ -164,4 +164,19 @@ public class UserCatalogueTests
         Assert.Equal(before.Select(MaterialSnapshot.Of), user.Load().Take(3).Select(MaterialSnapshot.Of));
         Assert.Equal(4, user.Load().Count);
     }
+
+    [Fact]
+    public void A_row_may_give_the_usual_part_of_its_sg_range_and_a_part_outside_the_range_is_refused()
+    {
+        using var temp = new TempDirectory();
+        var user = new UserCatalogue(temp.File("user-catalogue.db"));
+        const string Header = "name,species,variety,origin,crystal_system,optic_character,n_min,n_max,sg_min,sg_max,sg_usual_min,sg_usual_max,forms,polariscope,colours,frequency,source,source_kind,share\n";
+        var bad = ImportText(user, Header + "my porous test glass,glass,glass,imitation,amorphous,amorphous,1.50,1.52,2.0,2.5,2.4,2.6,amorphous,singly_refractive,white,rare,invented test data,from_memory,rare\n");
+        Assert.False(bad.Succeeded);
+        Assert.Contains(bad.Errors, e => e.ToString().Contains("sg_usual", StringComparison.Ordinal));
+        var good = ImportText(user, Header + "my porous test glass,glass,glass,imitation,amorphous,amorphous,1.50,1.52,2.0,2.5,2.3,2.5,amorphous,singly_refractive,white,rare,invented test data,from_memory,rare\n");
+        Assert.True(good.Succeeded, string.Join("\n", good.Errors));
+        Material read = Assert.Single(user.Load());
+        Assert.Equal((new PropertyRange(2.0, 2.5), (PropertyRange?)new PropertyRange(2.3, 2.5)), (read.SpecificGravity, read.SpecificGravityUsual));
+    }
 }
