@@ -172,7 +172,8 @@ public static class CatalogueCheck
         variety.Origin != OriginClass.Composite
             && !(variety.Origin is OriginClass.Treated or OriginClass.Synthetic
                 && variety.Sources.TryGetValue(field, out var source) && source.Kind is SourceKind.Published or SourceKind.Judgement)
-            && MaterialFieldText.RangeOf(variety, field) is { } r && MaterialFieldText.RangeOf(species, field) is { } whole
+            // A usual part is held to the species' whole SG range: the species' own usual part may be narrower than the variety's.
+            && MaterialFieldText.RangeOf(variety, field) is { } r && MaterialFieldText.RangeOf(species, field == "sg_usual" ? "sg" : field) is { } whole
             && (r.Minimum < whole.Minimum || r.Maximum > whole.Maximum)
             ? $"{r.ToString("0.####")} lies outside its species' range {whole.ToString("0.####")}"
             : null;

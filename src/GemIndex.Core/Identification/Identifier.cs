@@ -176,7 +176,7 @@ public sealed class Identifier
     /// The best fit among the serious candidates, worked out only here and only as far as needed: an entry with at least
     /// <see cref="SeriousCandidate"/> of the leader's posterior, or any entry of a species with at least that share of the
     /// leading species' total (docs/ranking.md §4). The entries are tried most probable first and the search stops at a fit
-    /// of <see cref="PoorFit"/> or more, since neither the discount nor "nothing fits" looks beyond it.
+    /// of <see cref="PoorFit"/> (and <see cref="MinimumFit"/>) or more, since neither the discount nor "nothing fits" looks beyond it.
     /// </summary>
     private double BestSeriousFit(double[] posterior, Func<int, double> fit)
     {
@@ -190,7 +190,7 @@ public sealed class Identifier
         serious.Sort((a, b) => posterior[b].CompareTo(posterior[a]) is var c && c != 0 ? c : a.CompareTo(b));
         double best = 0;
         foreach (int i in serious)
-            if ((best = Math.Max(best, fit(i))) >= PoorFit) break;
+            if ((best = Math.Max(best, fit(i))) >= Math.Max(PoorFit, MinimumFit)) break;
         return best;
     }
 

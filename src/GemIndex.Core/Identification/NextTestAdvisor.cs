@@ -437,7 +437,7 @@ public static class NextTestAdvisor
 
     private static string Expected(string test, Material m) => test switch
     {
-        BenchField.Sg => $"SG {m.SpecificGravity.ToString("0.00")}",
+        BenchField.Sg => $"SG {m.SpecificGravity.ToString("0.00")}" + (m.SpecificGravityUsual is { } usual ? $" (usually {usual.ToString("0.00")})" : ""),
         BenchField.Refractometer => m.Indices.Lowest.Minimum > RefractometerObservation.DefaultLiquidLimit
             ? "over the limit"
             : string.Join(", ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString("0.000")}")),

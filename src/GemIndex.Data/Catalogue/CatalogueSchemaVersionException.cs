@@ -5,8 +5,9 @@ public sealed class CatalogueSchemaVersionException : Exception
 {
     /// <summary>Creates the exception for a file and the version found in it.</summary>
     public CatalogueSchemaVersionException(string path, long found)
-        : base($"{path}: catalogue schema version {found}, but this GemIndex reads version {CatalogueSchema.Version}; " +
-               "rebuild it ('gemindex catalogue build --output FILE') or use a matching GemIndex")
+        : base($"{path}: catalogue schema version {found}, but this GemIndex reads versions {CatalogueSchema.PreviousVersion} " +
+               $"and {CatalogueSchema.Version}; use a matching GemIndex (a newer one made this file), or, for a catalogue " +
+               "built from family files, rebuild it ('gemindex catalogue build --output FILE')")
     {
         Path = path;
         Found = found;

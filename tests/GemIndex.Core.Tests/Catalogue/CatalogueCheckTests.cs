@@ -158,6 +158,17 @@ public class CatalogueCheckTests
     }
 
     [Fact]
+    public void A_varietys_usual_sg_part_is_held_to_its_species_whole_range_not_to_the_species_usual_part()
+    {
+        var species = Biaxial() with { SpecificGravity = new(1.25, 2.25), SpecificGravityUsual = new(1.98, 2.25) };
+        var variety = species with { Name = "test variety", SpecificGravityUsual = new(1.90, 2.00), StatedFields = ["sg_usual"] };
+        Assert.Empty(CatalogueCheck.CheckAgainstSpecies(variety, species));
+        // Beyond the species' whole range it is reported.
+        var beyond = variety with { SpecificGravity = new(1.20, 2.25), SpecificGravityUsual = new(1.20, 2.00) };
+        Assert.Contains(CatalogueCheck.CheckAgainstSpecies(beyond, species), f => f.Field == "sg_usual");
+    }
+
+    [Fact]
     public void Either_sign_is_accepted_whatever_the_indices()
     {
         Assert.Empty(CatalogueCheck.CheckEntry(Uniaxial() with { Sign = OpticSign.Either }));

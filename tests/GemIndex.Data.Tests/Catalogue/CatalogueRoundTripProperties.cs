@@ -39,6 +39,7 @@ public class CatalogueRoundTripProperties
             Name = $"entry {i} with 'quotes', \"double\" and ω", Species = "s", Variety = "v", Family = "f" + r.Next(3),
             Origin = Pick<OriginClass>(r), CrystalSystem = Pick<CrystalSystem>(r), Indices = indices, Sign = Pick<OpticSign>(r),
             Birefringence = Maybe(r, 0, 0.1), SpecificGravity = new(1 + r.NextDouble(), 3 + r.NextDouble()),
+            SpecificGravityUsual = r.Next(2) == 0 ? null : new(1.5 + r.NextDouble() / 2, 2.5 + r.NextDouble() / 2),
             Dispersion = r.Next(2) == 0 ? null : r.NextDouble() / 10, Hardness = Maybe(r, 1, 5),
             Pleochroism = Pick<PleochroismStrength>(r), Polariscope = [.. Enumerable.Range(0, r.Next(4)).Select(_ => Pick<PolariscopeReaction>(r))],
             ThermalProbe = Pick<ThermalProbeResult>(r), Electrical = Pick<ElectricalResult>(r),

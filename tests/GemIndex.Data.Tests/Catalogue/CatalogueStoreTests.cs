@@ -51,7 +51,7 @@ public class CatalogueStoreTests
         SetUserVersion(path, 99);
         var e = Assert.Throws<CatalogueSchemaVersionException>(() => CatalogueStore.Open(path));
         Assert.Contains("schema version 99", e.Message, StringComparison.Ordinal);
-        Assert.Contains($"reads version {CatalogueSchema.Version}", e.Message, StringComparison.Ordinal);
+        Assert.Contains($"reads versions {CatalogueSchema.PreviousVersion} and {CatalogueSchema.Version}", e.Message, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -9,7 +9,7 @@ public static class MaterialSnapshot
     public static string Of(Material m) => string.Join(" | ",
         m.Name, m.Species, m.Variety, m.Family, m.Origin, m.CrystalSystem, m.OpticCharacter, m.Sign,
         string.Join(" ", m.Indices.Named().Select(x => $"{x.Name}={R(x.Range)}")),
-        R(m.Birefringence), R(m.SpecificGravity), m.Dispersion?.ToString("R", CultureInfo.InvariantCulture) ?? "-", R(m.Hardness),
+        R(m.Birefringence), R(m.SpecificGravity), R(m.SpecificGravityUsual), m.Dispersion?.ToString("R", CultureInfo.InvariantCulture) ?? "-", R(m.Hardness),
         m.Pleochroism, string.Join(";", m.Polariscope), m.ThermalProbe, m.Electrical,
         string.Join(";", m.UvLong), string.Join(";", m.UvShort),
         string.Join(";", m.AbsorptionLines.Select(x => $"{x.Nanometres.ToString("R", CultureInfo.InvariantCulture)} {x.Strength}")),
