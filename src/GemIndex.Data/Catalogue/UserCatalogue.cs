@@ -34,8 +34,8 @@ public sealed class UserCatalogue(string path)
         IReadOnlyList<Material> existing = Load();
         errors.AddRange(CheckRows(rows, shipped, existing));
         if (errors.Count > 0) return new(0, [.. errors.OrderBy(e => e.Line)]);
-        Write(rows.Select(r => r.Material with { IsUserEntry = true }).ToList());
-        return new(rows.Count, []);
+        bool upgraded = Write(rows.Select(r => r.Material with { IsUserEntry = true }).ToList());
+        return new(rows.Count, []) { Upgraded = upgraded };
     }
 
     private static IEnumerable<CatalogueImportError> CheckRows(IReadOnlyList<CatalogueCsvRow> rows, FamilyCatalogue shipped, IReadOnlyList<Material> existing)
@@ -61,22 +61,25 @@ public sealed class UserCatalogue(string path)
         }
     }
 
-    private void Write(IReadOnlyList<Material> materials)
+    /// <summary>Adds the entries; true when the file was of the previous schema and was brought up to date first.</summary>
+    private bool Write(IReadOnlyList<Material> materials)
     {
         Directory.CreateDirectory(System.IO.Path.GetDirectoryName(Path)!);
         try
         {
             using SqliteConnection c = CatalogueStore.Connect(Path, SqliteOpenMode.ReadWriteCreate);
             using SqliteTransaction tx = c.BeginTransaction();
+            bool upgraded = false;
             if (IsEmptyFile(c, tx)) CatalogueSchema.Create(c, tx, "user", "");
             else
             {
                 long version = CatalogueStore.ReadVersion(c, Path);
-                if (version == CatalogueSchema.PreviousVersion) CatalogueSchema.UpgradePrevious(c, tx);
+                if (version == CatalogueSchema.PreviousVersion) { CatalogueSchema.UpgradePrevious(c, tx); upgraded = true; }
                 else if (version != CatalogueSchema.Version) throw new CatalogueSchemaVersionException(Path, version);
             }
             CatalogueWriter.Insert(c, tx, materials);
             tx.Commit();
+            return upgraded;
         }
         catch (SqliteException e)
         {

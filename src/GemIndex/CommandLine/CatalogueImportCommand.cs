@@ -32,7 +32,10 @@ internal static class CatalogueImportCommand
                 error.WriteLine($"gemindex: nothing imported: {result.Errors.Count} problem(s) in {csv.Name}");
                 return ExitCodes.BadInput;
             }
-            if (!pr.GetValue(json)) output.WriteLine($"imported {result.Imported} entries into {user.Path}");
+            if (!pr.GetValue(json)) output.WriteLine($"imported {result.Imported} {(result.Imported == 1 ? "entry" : "entries")} into {user.Path}");
+            if (result.Upgraded)
+                error.WriteLine($"gemindex: {user.Path} was brought up to catalogue schema {CatalogueSchema.Version} (a usual SG part per entry); " +
+                    $"GemIndex versions that read only schema {CatalogueSchema.PreviousVersion} no longer open it");
             return ExitCodes.Ok;
         }));
         return command;

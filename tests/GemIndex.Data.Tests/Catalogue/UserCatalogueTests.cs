@@ -160,9 +160,12 @@ public class UserCatalogueTests
         var more = ImportText(user, "name,species,variety,origin,crystal_system,optic_character,n_min,n_max,sg_min,sg_max,forms,polariscope,colours,frequency,source,source_kind,share\n"
             + "my second test glass,glass,glass,imitation,amorphous,amorphous,1.51,1.52,2.45,2.50,amorphous,singly_refractive,green,very_common,invented test data,from_memory,common\n");
         Assert.True(more.Succeeded, string.Join("\n", more.Errors));
+        Assert.True(more.Upgraded);
+        Assert.False(ImportText(user, "name,species,variety,origin,crystal_system,optic_character,n_min,n_max,sg_min,sg_max,forms,polariscope,colours,frequency,source,source_kind,share\n"
+            + "my third test glass,glass,glass,imitation,amorphous,amorphous,1.51,1.52,2.45,2.50,amorphous,singly_refractive,green,very_common,invented test data,from_memory,common\n").Upgraded);
         using (CatalogueStore store = CatalogueStore.Open(user.Path)) Assert.Equal(CatalogueSchema.Version, store.SchemaVersion);
         Assert.Equal(before.Select(MaterialSnapshot.Of), user.Load().Take(3).Select(MaterialSnapshot.Of));
-        Assert.Equal(4, user.Load().Count);
+        Assert.Equal(5, user.Load().Count);
     }
 
     [Fact]
