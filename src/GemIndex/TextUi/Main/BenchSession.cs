@@ -125,8 +125,8 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
         return task;
     }
 
-    /// <summary>Waits for the background saves still running (at exit), at most five seconds.</summary>
-    public bool Flush() => _pending.Wait(TimeSpan.FromSeconds(5));
+    /// <summary>Waits for the background saves still running (at exit), at most five seconds or <paramref name="within"/>.</summary>
+    public bool Flush(TimeSpan? within = null) => _pending.Wait(within ?? TimeSpan.FromSeconds(5));
 
     private void Process(BenchSnapshot snapshot, bool save)
     {

@@ -28,7 +28,7 @@ public class BenchSessionTests
                 await session.Changed();
                 Assert.Equal("quartz", session.Results.Candidates[0].Material.Name);
                 Assert.Null(session.SaveProblem);
-                Assert.True(session.Flush());
+                Assert.True(session.Flush(TestHost.SaveWait));
             }
             using (var wb = StoneWorkbook.Open(path, TimeProvider.System, WorkbookOpening.CreateIfMissing))
             {
@@ -40,7 +40,7 @@ public class BenchSessionTests
                 session.Start();
                 Assert.Equal(id, session.Form.StoneId);
                 Assert.Equal("2x", session.Form.Text(BenchFields.WaterC));
-                Assert.True(session.Flush()); // the background save Start began must end before the workbook closes
+                Assert.True(session.Flush(TestHost.SaveWait)); // the background save Start began must end before the workbook closes
             }
         }
         finally
@@ -63,7 +63,7 @@ public class BenchSessionTests
             session.Form.SetText(BenchFields.Notes, "second");
             await session.Changed();
             await session.Changed();   // same version again: skipped
-            Assert.True(session.Flush());
+            Assert.True(session.Flush(TestHost.SaveWait));
             Assert.Equal("second", wb.Get(session.Form.StoneId)!.Notes);
         }
         finally
@@ -86,7 +86,7 @@ public class BenchSessionTests
                 await session.Changed();
                 session.New();                                       // another stone: the bench's examiner stays
                 Assert.Equal("A. Example", session.Form.Text(BenchFields.Examiner));
-                Assert.True(session.Flush());
+                Assert.True(session.Flush(TestHost.SaveWait));
                 Assert.Equal("A. Example", wb.Setting(BenchSession.ExaminerSetting));
             }
             using (var wb = StoneWorkbook.Open(path, TimeProvider.System, WorkbookOpening.CreateIfMissing))
@@ -96,7 +96,7 @@ public class BenchSessionTests
                 Assert.Equal("A. Example", session.Form.Text(BenchFields.Examiner));
                 session.Open(wb.List().Last().Id);                   // and stays whichever stone is opened
                 Assert.Equal("A. Example", session.Form.Text(BenchFields.Examiner));
-                Assert.True(session.Flush());
+                Assert.True(session.Flush(TestHost.SaveWait));
             }
         }
         finally

@@ -27,7 +27,7 @@ public sealed class MainWindowTests : IDisposable
 
     public void Dispose()
     {
-        _session.Flush();
+        _session.Flush(TestHost.SaveWait);
         _workbook.Dispose();
         foreach (string f in new[] { _path, _path + "-wal", _path + "-shm" }) File.Delete(f);
     }
@@ -35,7 +35,7 @@ public sealed class MainWindowTests : IDisposable
     /// <summary>Waits for the background assessments, then runs their UI updates here (the test is the UI thread).</summary>
     private void Settle()
     {
-        Assert.True(_session.Flush());
+        Assert.True(_session.Flush(TestHost.SaveWait));
         while (_uiQueue.TryDequeue(out Action? a)) a();
     }
 
@@ -227,7 +227,7 @@ public sealed class MainWindowTests : IDisposable
         var session = new BenchSession(_workbook, new BenchAssessor(null), _uiQueue.Enqueue);
         void SettleThis()
         {
-            Assert.True(session.Flush());
+            Assert.True(session.Flush(TestHost.SaveWait));
             while (_uiQueue.TryDequeue(out Action? a)) a();
         }
         using IApplication app = Headless.Start();
@@ -596,7 +596,7 @@ public sealed class MainWindowTests : IDisposable
         Assert.Contains("Examiner      A. Example", screen);
         Assert.Contains(StonePage.ExaminerNote.Trim(), screen);
         Assert.Contains(StonePage.WeighedNote.Trim(), screen);   // what of the stone page the answer uses
-        Assert.True(_session.Flush());
+        Assert.True(_session.Flush(TestHost.SaveWait));
         Assert.Equal("A. Example", _workbook.Setting(BenchSession.ExaminerSetting));
         Close(app, window, token);
     }
