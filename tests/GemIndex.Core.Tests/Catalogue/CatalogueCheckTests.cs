@@ -169,6 +169,19 @@ public class CatalogueCheckTests
     }
 
     [Fact]
+    public void A_biaxial_sign_the_ranges_cannot_decide_is_taken_from_the_source()
+    {
+        // Andalusite, biaxial negative with 2Vx 71-88° (MinTS, University of the Western Cape): nx 1.629-1.640,
+        // ny 1.634-1.644, nz 1.638-1.650. The centres' γ − β and β − α differ by 0.0005, less than β's half-width.
+        var andalusite = Biaxial() with
+        {
+            Indices = OpticalIndices.Biaxial(new(1.629, 1.640), new(1.634, 1.644), new(1.638, 1.650)), Sign = OpticSign.Negative,
+            Birefringence = new(0.009, 0.012),
+        };
+        Assert.DoesNotContain(CatalogueCheck.CheckEntry(andalusite), f => f.Field == "optic_sign");
+    }
+
+    [Fact]
     public void Either_sign_is_accepted_whatever_the_indices()
     {
         Assert.Empty(CatalogueCheck.CheckEntry(Uniaxial() with { Sign = OpticSign.Either }));
