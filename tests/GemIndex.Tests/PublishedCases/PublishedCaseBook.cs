@@ -23,6 +23,26 @@ public static class PublishedCaseBook
             "F. B. Wade, A Text-Book of Precious Stones (1918), Lesson XVI 'How to test an unknown gem', pp. 110–114 (fliphtml5.com copy, p. 131; jennyjade.com paraphrase): "
             + "a green ring stone, dichroic in the dichroscope, refraction double, SG 2.70 (mean of two specific-gravity-bottle determinations); identified as emerald. "
             + "'Refraction double' is written as the polariscope reaction doubly_refractive, the batch format's word for that observation."),
+        new("""{"id":"wade-1918-red-spinel","pleochroism":"none","polariscope":"singly_refractive","colour":"slightly yellowish red"}""", ["spinel"], 2,
+            "F. B. Wade, A Text-Book of Precious Stones (1918), Lesson XVI, 'Testing Other Stones' (bitlit.ru copy, "
+            + "bitlit.ru/page/en/frank-bertram-wade/a-text-book-of-precious-stones-for-jewelers-and-the-gem-loving-public/37): a pear-shaped brilliant of a "
+            + "'peculiar, slightly yellowish, red color', no dichroism in the dichroscope, singly refracting by the sunlight-card test (written as the "
+            + "polariscope reaction, as for Wade's emerald); it barely scratched topaz and was attacked by sapphire (hardness: no field, a destructive test); "
+            + "'judged to be a red spinel'."),
+        new("""{"id":"gg-ln-coated-cats-eye-gypsum","refractometer":{"method":"spot","spot":1.56},"uv_long":"strong","uv_short":"weak","colour":"saturated blue","magnification":{"present":["chatoyancy","coating_wear"]}}""", ["gypsum"], 3,
+            "Gems & Gemology, Lab Notes, 'Coated Cat's-Eye Gypsum' (Carlsbad; read as reprinted at lj24magazine.com/article/article_000337/1.aspx, "
+            + "'Courtesy of GIA (c) 2012'; the issue is not named there): 30.45 ct translucent saturated blue oval cabochon with a sharp eye, spot RI 1.56, "
+            + "'moderately strong' blue LW (written strong, the modifier dropped as elsewhere), weak blue SW; a blue coating on the top with decolorized areas at "
+            + "surface damage (coating_wear) and a delaminating colourless coating on the base; Raman (not a bench test) gave polymer resin for the coatings and "
+            + "gypsum for the substrate. The spot RI is copied as published: it lies above gypsum's index and is likely the coating's.")
+        { Origins = [OriginClass.Treated] },
+        new("""{"id":"gg-2022-ln-glass-rough-sapphire-imitation","sg":2.48,"polariscope":"anomalous","colour":"blue","magnification":{"present":["round_bubbles"]}}""", Glass, 2,
+            "Gems & Gemology, Summer 2022, Lab Notes (N. Anjomani, Carlsbad), as reported by National Jeweler "
+            + "(nationaljeweler.com/articles/11241-gia-finds-lab-growns-simulant-in-parcel-of-natural-sapphires): of four rough blue stones submitted as natural "
+            + "sapphires, the 48.63 ct one, partially fashioned: hydrostatic SG 2.48, weak snake-pattern bands in the polariscope (written anomalous), gas "
+            + "bubbles (shape not stated: round_bubbles, as for the glass bangle), flow marks and conchoidal fractures (no vocabulary words); a glass "
+            + "imitation, confirmed by infrared (not a bench test).")
+        { Origins = [OriginClass.Imitation] },
         new("""{"id":"mllopis-24-1821-ruby","refractometer":{"method":"facet","readings":[{"low":1.762,"high":1.770}]},"sg":4.02,"absorption_nm":[692,694],"colour":"red-orange"}""", ["corundum"], 3,
             "gemologiamllopis.com certificate 24-1821-CO-PR-8451-16 (2016): 4.82 ct ruby, glass-filled; refractive indices 1.770–1.762, birefringence 0.008, optic sign −, density 4.02, "
             + "doublet at 694 and 692 nm; colour red-orange (OR 7/3). The optic sign has no field in the batch format and is left out."),
@@ -202,6 +222,14 @@ public static class PublishedCaseBook
         { Origins = [OriginClass.Natural, OriginClass.Synthetic] },
 
         // One bench test: reported, not required (a single SG cannot separate the species of a general catalogue).
+        new("""{"id":"wade-1918-iolite","pleochroism":"dichroic","colour":"bluish"}""", ["cordierite"], 1,
+            "F. B. Wade (1918), Lesson XVI (as wade-1918-red-spinel): 'the large bluish stone ... proved to be iolite, sometimes called cordierite'; marked "
+            + "dichroism, smoky blue in one direction and yellowish white in another."),
+        new("""{"id":"wade-1918-small-rubies","pleochroism":"dichroic","colour":"red","magnification":{"present":["needles_silk"],"absent":["curved_striae"]}}""", ["corundum"], 1,
+            "F. B. Wade (1918), Lesson XVI (as wade-1918-red-spinel): 'the small red stones' (one case for the set): abundant silk, its fibres 'straight and "
+            + "parallel, not curved and parallel as in synthetic ruby' (needles_silk seen, curved striae looked for and not seen), tiny bubbles of angular shape "
+            + "(no vocabulary word), dichroism; they scratched topaz (no field); 'decided that they at least were genuine'.")
+        { Origins = [OriginClass.Natural] },
         new("""{"id":"bauer-quartz","sg":2.66}""", ["quartz"], 1,
             "M. Bauer, Precious Stones (trans. L. J. Spencer), p. 19 (afripics.com page copy): worked hydrostatic example, SG 2.66, 'the stone may therefore be identified as quartz'"),
         new("""{"id":"church-emerald-muzo-1","sg":2.710}""", ["beryl"], 1, ChurchBeryl + ": emerald from Muzo 2.710"),

@@ -13,10 +13,13 @@ public class PublishedCaseTests(ITestOutputHelper output)
 {
     /// <summary>
     /// Cases with two or more bench tests that the engine still misses: listed and printed, never dropped; any other miss
-    /// fails the test. None now: the synthetic forsterite sold as tanzanite (RI 1.635–1.647 and "dichroic" only), the last
-    /// one, ranks forsterite second since tourmaline took its published ranges.
+    /// fails the test. Two since 4 December, both decided by a test the tool does not take:
+    /// wade-1918-red-spinel (no pleochroism, singly refractive, red) was told from garnet by a scratch test, and ranks
+    /// spinel sixth (about 3 %) behind the three red garnet species the same readings fit;
+    /// gg-ln-coated-cats-eye-gypsum read its spot RI 1.56 on a resin coating, well above gypsum's index, and was named by
+    /// Raman spectroscopy.
     /// </summary>
-    private static readonly HashSet<string> KnownMisses = [];
+    private static readonly HashSet<string> KnownMisses = ["wade-1918-red-spinel", "gg-ln-coated-cats-eye-gypsum"];
 
     [Fact]
     public void Every_published_case_with_two_bench_tests_has_its_species_in_the_top_three()
