@@ -65,7 +65,7 @@ internal static class ReportDerived
     public static string Strength(EvidenceContribution reason)
     {
         double ratio = Math.Abs(reason.WeightBits);
-        if (ratio < NeutralBits) return "neither for nor against";
+        if (ratio < EvidenceContribution.NeutralBits) return "neither for nor against";
         string how = ratio >= StrongBits ? "strongly " : ratio >= ClearBits ? "" : "slightly ";
         return how + (reason.WeightBits >= 0 ? "for" : "against");
     }
@@ -77,16 +77,13 @@ internal static class ReportDerived
     /// (its weight in bits says so): "unusual for it", or "… against, unusual" when it weighs against.
     /// </summary>
     public static string Verdict(EvidenceContribution reason) =>
-        reason.Agrees ? Strength(reason) : reason.WeightBits <= -NeutralBits ? Strength(reason) + ", unusual" : "unusual for it";
+        reason.Agrees ? Strength(reason) : reason.WeightBits <= -EvidenceContribution.NeutralBits ? Strength(reason) + ", unusual" : "unusual for it";
 
     /// <summary>Ten to one in favour or against (log2 10): "strongly".</summary>
     private const double StrongBits = 3.32;
 
     /// <summary>Two to one: below it, "slightly".</summary>
     private const double ClearBits = 1;
-
-    /// <summary>Below a tenth of a bit (a likelihood ratio within 7 %), no weight either way.</summary>
-    private const double NeutralBits = EvidenceContribution.NeutralBits;
 
     /// <summary>A reason in a line: "strongly for (refractometer): …".</summary>
     public static string ReasonLine(EvidenceContribution reason) =>

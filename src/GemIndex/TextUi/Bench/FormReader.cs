@@ -16,18 +16,13 @@ internal static class FormReader
         BenchFields.FeaturesPresent, BenchFields.FeaturesAbsent,
     ];
 
-    private static readonly string[] ChoiceFields =
-    [
-        BenchFields.OverLimit, BenchFields.Polariscope, BenchFields.Pleochroism, BenchFields.Dispersion, BenchFields.ThermalProbe,
-        BenchFields.Electrical, BenchFields.UvLong, BenchFields.UvShort, BenchFields.Cut,
-    ];
-
     public static BenchReadings Read(BenchSnapshot form)
     {
         var readings = new BenchReadings().With(BenchField.Id, form.Text(BenchFields.Reference).Trim());
         foreach (string field in TextFields)
             if (form.Text(field) is { } text && !string.IsNullOrWhiteSpace(text)) readings = readings.With(field, text);
-        foreach (string field in ChoiceFields)
+        // Every one-key choice of the pages (BenchChoice.All): a choice added there is read here too.
+        foreach (string field in BenchChoice.All.Select(c => c.Field))
             if (form.Choice(field) is { Length: > 0 } word) readings = readings.With(field, word);
         foreach (StepText step in form.Steps) readings = readings.WithStep(new EdgeStepText(step.Rotation, step.Low, step.High));
         bool refractometer = readings.Steps.Count > 0 || readings.Text(BenchField.Spot) is not null || readings.Text(BenchField.OverLimit) is not null;
