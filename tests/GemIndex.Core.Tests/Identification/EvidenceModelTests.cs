@@ -367,8 +367,10 @@ public class EvidenceModelTests
     [Fact]
     public void A_variety_of_the_leading_species_that_fits_keeps_nothing_fits_away()
     {
-        // Beryl's indices and density rise with its alkali content (the catalogue's beryl references: indices to ω 1.602,
-        // SG to 2.92 over the species, emerald's own SG 2.67-2.78), so a chromium emerald may read beyond the emerald entries.
+        // Beryl's indices and density rise with its alkali content, so a chromium emerald may read beyond the emerald entries:
+        // emerald 1.565-1.599 with origin (vincenzotaormina.net, 'What is the RI of Emerald?'), beryl's ω to 1.600
+        // (Laboratoire Francais de Gemmologie, Gemstone library: Beryl), emerald's SG 2.67-2.78 (Amezin, Emerald) against
+        // the species' 2.63-2.92 (Wikipedia's Beryl infobox): the catalogue's beryl-span, emerald-sg-span references.
         // Invented entries in that shape: the lines and the colour favour the emerald entry, which cannot give a stone that
         // sinks in a 2.85 liquid, while a green beryl entry of the same species, listing no lines, fits every reading. The
         // species is beryl either way; before the species counted, the emerald's misfit alone called it "nothing fits".
