@@ -36,7 +36,12 @@ CREATE TABLE material (
     stated_fields     TEXT NOT NULL,  -- space-separated field names the variety states instead of inheriting
     sg_usual_min      REAL,           -- the part of the SG range where most stones lie (schema 3; null: the whole range alike)
     sg_usual_max      REAL,
-    CHECK (sg_min <= sg_max)
+    CHECK (sg_min <= sg_max),
+    -- a range's two ends are stated together or not at all
+    CHECK ((hardness_min IS NULL) = (hardness_max IS NULL) AND (hardness_min IS NULL OR hardness_min <= hardness_max)),
+    CHECK ((birefringence_min IS NULL) = (birefringence_max IS NULL) AND (birefringence_min IS NULL OR birefringence_min <= birefringence_max)),
+    CHECK ((sg_usual_min IS NULL) = (sg_usual_max IS NULL)
+           AND (sg_usual_min IS NULL OR (sg_min <= sg_usual_min AND sg_usual_min <= sg_usual_max AND sg_usual_max <= sg_max)))
 ) STRICT;
 
 -- Principal refractive indices at 589.3 nm: 'n' | 'omega','epsilon' | 'alpha','beta','gamma'.

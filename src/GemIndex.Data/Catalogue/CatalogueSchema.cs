@@ -39,7 +39,11 @@ public static class CatalogueSchema
     /// </summary>
     public static void UpgradePrevious(SqliteConnection connection, SqliteTransaction transaction)
     {
-        Execute(connection, transaction, "ALTER TABLE material ADD COLUMN sg_usual_min REAL; ALTER TABLE material ADD COLUMN sg_usual_max REAL;");
+        // A column's CHECK may name other columns; it holds the same rule as the table's CHECK in schema.sql.
+        Execute(connection, transaction,
+            "ALTER TABLE material ADD COLUMN sg_usual_min REAL; " +
+            "ALTER TABLE material ADD COLUMN sg_usual_max REAL CHECK ((sg_usual_min IS NULL) = (sg_usual_max IS NULL) " +
+            "AND (sg_usual_min IS NULL OR (sg_min <= sg_usual_min AND sg_usual_min <= sg_usual_max AND sg_usual_max <= sg_max)));");
         Execute(connection, transaction, $"PRAGMA user_version = {Version}");
         using SqliteCommand meta = connection.CreateCommand();
         meta.Transaction = transaction;

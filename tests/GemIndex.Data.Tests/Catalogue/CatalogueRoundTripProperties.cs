@@ -24,7 +24,7 @@ public class CatalogueRoundTripProperties
     private static PropertyRange? Maybe(Random r, double low, double span) =>
         r.Next(3) == 0 ? null : new PropertyRange(low, low + r.NextDouble() * span);
 
-    // Any field combination the model allows, consistent or not: the store must keep whatever it is given.
+    // Any field combination the model and the schema's checks allow, consistent or not: the store must keep whatever it is given.
     private static Material Random(Random r, int i)
     {
         double n = 1.3 + r.NextDouble();
@@ -34,12 +34,14 @@ public class CatalogueRoundTripProperties
             1 => OpticalIndices.Uniaxial(new(n, n), new(n + 0.02, n + 0.03)),
             _ => OpticalIndices.Biaxial(new(n, n), new(n + 0.01, n + 0.01), new(n + 0.02, n + 0.05)),
         };
+        PropertyRange sg = new(1 + r.NextDouble(), 3 + r.NextDouble());
         return new Material
         {
             Name = $"entry {i} with 'quotes', \"double\" and ω", Species = "s", Variety = "v", Family = "f" + r.Next(3),
             Origin = Pick<OriginClass>(r), CrystalSystem = Pick<CrystalSystem>(r), Indices = indices, Sign = Pick<OpticSign>(r),
-            Birefringence = Maybe(r, 0, 0.1), SpecificGravity = new(1 + r.NextDouble(), 3 + r.NextDouble()),
-            SpecificGravityUsual = r.Next(2) == 0 ? null : new(1.5 + r.NextDouble() / 2, 2.5 + r.NextDouble() / 2),
+            Birefringence = Maybe(r, 0, 0.1), SpecificGravity = sg,
+            // The schema's one cross-field rule: a usual part lies inside the SG range.
+            SpecificGravityUsual = r.Next(2) == 0 ? null : new(sg.Minimum + r.NextDouble() * 0.45 * (sg.Maximum - sg.Minimum), sg.Maximum - r.NextDouble() * 0.45 * (sg.Maximum - sg.Minimum)),
             Dispersion = r.Next(2) == 0 ? null : r.NextDouble() / 10, Hardness = Maybe(r, 1, 5),
             Pleochroism = Pick<PleochroismStrength>(r), Polariscope = [.. Enumerable.Range(0, r.Next(4)).Select(_ => Pick<PolariscopeReaction>(r))],
             ThermalProbe = Pick<ThermalProbeResult>(r), Electrical = Pick<ElectricalResult>(r),

@@ -149,7 +149,7 @@ public class UserCatalogueTests
         {
             c.Open();
             using var cmd = c.CreateCommand();
-            cmd.CommandText = "ALTER TABLE material DROP COLUMN sg_usual_min; ALTER TABLE material DROP COLUMN sg_usual_max; UPDATE meta SET value = '2' WHERE key = 'schema_version';";
+            cmd.CommandText = SchemaTwoMaterialTable;
             cmd.ExecuteNonQuery();
         }
         CatalogueStoreTests.SetUserVersion(user.Path, CatalogueSchema.PreviousVersion);
@@ -166,6 +166,87 @@ public class UserCatalogueTests
         using (CatalogueStore store = CatalogueStore.Open(user.Path)) Assert.Equal(CatalogueSchema.Version, store.SchemaVersion);
         Assert.Equal(before.Select(MaterialSnapshot.Of), user.Load().Take(3).Select(MaterialSnapshot.Of));
         Assert.Equal(5, user.Load().Count);
+
+        // The upgrade adds the usual part's rule with its columns.
+        using var upgraded = new Microsoft.Data.Sqlite.SqliteConnection($"Data Source={user.Path};Pooling=False");
+        upgraded.Open();
+        using var half = upgraded.CreateCommand();
+        half.CommandText = "UPDATE material SET sg_usual_min = sg_min WHERE rowid = (SELECT min(rowid) FROM material)";
+        Assert.Contains("CHECK", Assert.Throws<Microsoft.Data.Sqlite.SqliteException>(() => half.ExecuteNonQuery()).Message, StringComparison.Ordinal);
+    }
+
+    /// <summary>
+    /// Rebuilds <c>material</c> as schema 2 declared it (reference-db/schema.sql before e6095ad), keeping its rows: the
+    /// columns cannot simply be dropped, since schema 3's table CHECK names them.
+    /// </summary>
+    private const string SchemaTwoMaterialTable = """
+        PRAGMA foreign_keys = OFF;
+        CREATE TABLE material_schema_two (
+            id                INTEGER PRIMARY KEY,
+            name              TEXT NOT NULL UNIQUE COLLATE NOCASE,
+            species           TEXT NOT NULL,
+            variety           TEXT NOT NULL,
+            family            TEXT NOT NULL,
+            origin            TEXT NOT NULL,
+            crystal_system    TEXT NOT NULL,
+            optic_character   TEXT NOT NULL,
+            optic_sign        TEXT NOT NULL,
+            birefringence_min REAL,
+            birefringence_max REAL,
+            sg_min            REAL NOT NULL,
+            sg_max            REAL NOT NULL,
+            dispersion        REAL,
+            hardness_min      REAL,
+            hardness_max      REAL,
+            pleochroism       TEXT NOT NULL,
+            thermal_probe     TEXT NOT NULL,
+            electrical        TEXT NOT NULL,
+            frequency         TEXT NOT NULL,
+            share             TEXT NOT NULL,
+            forms             TEXT NOT NULL,
+            opaque            INTEGER NOT NULL CHECK (opaque IN (0, 1)),
+            do_not_immerse    INTEGER NOT NULL CHECK (do_not_immerse IN (0, 1)),
+            notes             TEXT NOT NULL,
+            stated_fields     TEXT NOT NULL,
+            CHECK (sg_min <= sg_max)
+        ) STRICT;
+        INSERT INTO material_schema_two
+            SELECT id, name, species, variety, family, origin, crystal_system, optic_character, optic_sign,
+                   birefringence_min, birefringence_max, sg_min, sg_max, dispersion, hardness_min, hardness_max,
+                   pleochroism, thermal_probe, electrical, frequency, share, forms, opaque, do_not_immerse, notes, stated_fields
+            FROM material;
+        DROP TABLE material;
+        ALTER TABLE material_schema_two RENAME TO material;
+        UPDATE meta SET value = '2' WHERE key = 'schema_version';
+        """;
+
+    [Fact]
+    public void The_schema_refuses_a_usual_sg_part_with_one_end_or_outside_the_range_and_a_hardness_with_one_end()
+    {
+        // The importer's check refuses these first; the schema holds the rule for any other writer of the file.
+        using var temp = new TempDirectory();
+        var user = new UserCatalogue(temp.File("user-catalogue.db"));
+        Assert.True(Import(user, "user-good.csv").Succeeded);
+        using var c = new Microsoft.Data.Sqlite.SqliteConnection($"Data Source={user.Path};Pooling=False");
+        c.Open();
+        foreach (string assignment in new[]
+        {
+            "sg_usual_min = sg_min",                                  // one end only
+            "sg_usual_min = sg_min - 0.1, sg_usual_max = sg_max",     // below the range
+            "sg_usual_min = sg_min, sg_usual_max = sg_max + 0.1",     // above the range
+            "sg_usual_min = sg_max, sg_usual_max = sg_min",           // reversed
+            "hardness_min = NULL, hardness_max = 7",                  // one end only
+            "birefringence_min = 0.02, birefringence_max = 0.01",     // reversed
+        })
+        {
+            using var cmd = c.CreateCommand();
+            cmd.CommandText = $"UPDATE material SET {assignment} WHERE rowid = (SELECT min(rowid) FROM material)";
+            var refused = Assert.Throws<Microsoft.Data.Sqlite.SqliteException>(() => cmd.ExecuteNonQuery());
+            Assert.Contains("CHECK", refused.Message, StringComparison.Ordinal);
+        }
+        using var allowed = c.CreateCommand();
+        allowed.CommandText = "UPDATE material SET sg_usual_min = sg_min, sg_usual_max = sg_max WHERE rowid = (SELECT min(rowid) FROM material)";
+        Assert.Equal(1, allowed.ExecuteNonQuery());
     }
 
     [Fact]
