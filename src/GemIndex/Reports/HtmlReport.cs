@@ -109,7 +109,8 @@ internal static class HtmlReport
         }
         if (report.SpecificGravity is { } sg)
             h.Append("<figure>").Append(ReportPlots.Scale("SG", sg.Value, sg.StandardUncertainty,
-                [.. leading.Select(m => (m.Name, m.SpecificGravity.Minimum, m.SpecificGravity.Maximum))])).AppendLine("</figure>");
+                [.. leading.Select(m => (m.Name, m.SpecificGravity.Minimum, m.SpecificGravity.Maximum))],
+                [.. leading.Select(m => m.SpecificGravityUsual is { } u ? ((double, double)?)(u.Minimum, u.Maximum) : null)])).AppendLine("</figure>");
     }
 
     /// <summary>How many leading candidates the scales show.</summary>

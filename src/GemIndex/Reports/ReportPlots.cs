@@ -39,14 +39,20 @@ internal static class ReportPlots
         return svg.Append("</svg>").ToString();
     }
 
-    /// <summary>A reading (with its uncertainty) against candidates' ranges, one bar each.</summary>
-    public static string Scale(string title, double reading, double uncertainty, IReadOnlyList<(string Name, double Minimum, double Maximum)> ranges)
+    /// <summary>
+    /// A reading (with its uncertainty) against candidates' ranges, one bar each. Where a range has a usual part
+    /// (<paramref name="usual"/>, an SG range's <c>sg_usual</c>), the usual part is the dark bar and the rest, the range's
+    /// rare extremes, a light one, as the ranking weighs them (docs/ranking.md §2).
+    /// </summary>
+    public static string Scale(string title, double reading, double uncertainty, IReadOnlyList<(string Name, double Minimum, double Maximum)> ranges,
+        IReadOnlyList<(double Minimum, double Maximum)?>? usual = null)
     {
         double lo = Math.Min(reading - 3 * uncertainty, ranges.Min(r => r.Minimum)), hi = Math.Max(reading + 3 * uncertainty, ranges.Max(r => r.Maximum));
         double pad = Math.Max(1e-3, (hi - lo) * 0.08);
         lo -= pad; hi += pad;
-        const int nameWidth = 170, row = 18;
-        int height = Top + row * ranges.Count + Bottom;
+        const int nameWidth = 170, row = 18, legendRow = 14;
+        bool anyUsual = usual is not null && usual.Any(u => u is not null);
+        int height = Top + row * ranges.Count + Bottom + (anyUsual ? legendRow : 0);
         double X(double v) => nameWidth + (Width - nameWidth - Right) * (v - lo) / (hi - lo);
         var svg = new StringBuilder($"<svg width=\"{Width}\" height=\"{height}\" viewBox=\"0 0 {Width} {height}\" role=\"img\" aria-label=\"{HtmlReport.E(title)}\">");
         for (int i = 0; i < ranges.Count; i++)
@@ -54,15 +60,22 @@ internal static class ReportPlots
             var r = ranges[i];
             double y = Top + row * i;
             svg.Append(Text(nameWidth - 6, y + 12, r.Name.Length > 26 ? r.Name[..25] + "…" : r.Name, "end"));
-            svg.Append($"<rect x=\"{F(X(r.Minimum))}\" y=\"{F(y + 4)}\" width=\"{F(Math.Max(2, X(r.Maximum) - X(r.Minimum)))}\" height=\"10\" fill=\"#bbb\" stroke=\"#444\"/>");
+            (double Minimum, double Maximum)? part = usual is not null && i < usual.Count ? usual[i] : null;
+            svg.Append($"<rect x=\"{F(X(r.Minimum))}\" y=\"{F(y + 4)}\" width=\"{F(Math.Max(2, X(r.Maximum) - X(r.Minimum)))}\" height=\"10\" fill=\"{(part is null ? "#bbb" : "#eee")}\" stroke=\"#444\"/>");
+            if (part is { } u)
+                svg.Append($"<rect x=\"{F(X(u.Minimum))}\" y=\"{F(y + 4)}\" width=\"{F(Math.Max(2, X(u.Maximum) - X(u.Minimum)))}\" height=\"10\" fill=\"#bbb\" stroke=\"#444\"/>");
         }
         double bottom = Top + row * ranges.Count;
         svg.Append($"<rect x=\"{F(X(reading - uncertainty))}\" y=\"{F(Top)}\" width=\"{F(Math.Max(1, X(reading + uncertainty) - X(reading - uncertainty)))}\" height=\"{F(bottom - Top)}\" fill=\"none\" stroke=\"#111\" stroke-dasharray=\"3 2\"/>");
         svg.Append($"<line x1=\"{F(X(reading))}\" y1=\"{F(Top)}\" x2=\"{F(X(reading))}\" y2=\"{F(bottom)}\" stroke=\"#111\" stroke-width=\"2\"/>");
         svg.Append(Text(X(reading), bottom + 14, $"{title}: {F(reading, "0.000")} ± {F(uncertainty, "0.000")}", "middle"));
         svg.Append(Text(nameWidth, bottom + 28, F(lo, "0.000"), "start")).Append(Text(Width - Right, bottom + 28, F(hi, "0.000"), "end"));
+        if (anyUsual) svg.Append(Text(nameWidth, bottom + 28 + legendRow, RareExtremesLegend, "start"));
         return svg.Append("</svg>").ToString();
     }
+
+    /// <summary>The scale's legend line when a range has a usual part.</summary>
+    public const string RareExtremesLegend = "dark: where most stones lie; light: the range's rare extremes";
 
     private static StringBuilder Open(string title) =>
         new($"<svg width=\"{Width}\" height=\"{Height}\" viewBox=\"0 0 {Width} {Height}\" role=\"img\" aria-label=\"{HtmlReport.E(title)}\">");

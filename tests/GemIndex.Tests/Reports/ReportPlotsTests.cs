@@ -35,6 +35,26 @@ public class ReportPlotsTests
     }
 
     [Fact]
+    public void A_range_with_a_usual_part_draws_it_dark_over_its_light_rare_extremes_and_says_so()
+    {
+        // Natural opal's SG 1.25-2.25, usually 1.98-2.25 (reference-db opal.json, opal-sg-span), beside a flat range.
+        XNamespace svg = "";
+        static double Attr(XElement e, string name) => double.Parse(e.Attribute(name)!.Value, System.Globalization.CultureInfo.InvariantCulture);
+        var plot = XElement.Parse(ReportPlots.Scale("SG", 2.10, 0.01, [("white opal", 1.25, 2.25), ("flat", 1.25, 2.25)], [(1.98, 2.25), null]));
+        var bars = plot.Descendants(svg + "rect").Where(r => r.Attribute("height")?.Value == "10").ToList();
+        Assert.Equal(3, bars.Count);   // the opal's whole range and its usual part, the flat range
+        (XElement whole, XElement part, XElement flat) = (bars[0], bars[1], bars[2]);
+        Assert.Equal("#eee", (string?)whole.Attribute("fill"));
+        Assert.Equal("#bbb", (string?)part.Attribute("fill"));
+        Assert.Equal("#bbb", (string?)flat.Attribute("fill"));
+        Assert.Equal(Attr(whole, "x") + Attr(whole, "width"), Attr(part, "x") + Attr(part, "width"), 6);   // both end at 2.25
+        Assert.True(Attr(part, "x") > Attr(whole, "x") + 0.6 * Attr(whole, "width"), "1.98 lies about three quarters along 1.25-2.25");
+        Assert.Contains(plot.Descendants(svg + "text"), t => t.Value == ReportPlots.RareExtremesLegend);
+        var plain = XElement.Parse(ReportPlots.Scale("SG", 2.10, 0.01, [("flat", 1.25, 2.25)]));
+        Assert.DoesNotContain(plain.Descendants(svg + "text"), t => t.Value == ReportPlots.RareExtremesLegend);
+    }
+
+    [Fact]
     public void Names_and_labels_are_escaped_in_the_svg()
     {
         string text = ReportPlots.Scale("SG", 2.65, 0.01, [("<b>&\"glass", 2.4, 2.6)]);

@@ -9,16 +9,22 @@ namespace GemIndex.Cli.TextUi.Plot;
 /// One measured quantity drawn as a horizontal character scale against the candidates' ranges: the reading's row shows
 /// the value as '*' with its ± standard uncertainty as '&lt;---&gt;', each candidate's row shows its range as '=' on a '.'
 /// track with the value's '*' on top ('#' where it falls on the bar), and a word says whether the reading falls in the range. Shapes only, no colour.
+/// Where a candidate's range has a usual part (an SG range with <c>sg_usual</c>), the usual part is the '=' bar and the
+/// rest of the range, its rare extremes, is drawn '-'; a reading there is "rare", as the ranking weighs it (docs/ranking.md §2).
 /// </summary>
 /// <param name="title">What is measured, e.g. "lowest index".</param>
 /// <param name="format">Number format of the axis labels and the reading.</param>
 /// <param name="widest">The widest window shown; wider ranges are cut at the edges and marked '&lt;' or '&gt;'.</param>
 /// <param name="ranks">Each candidate's rank in the answer (null: 1, 2, 3 … in the order given).</param>
+/// <param name="usual">Each candidate's usual part of its range, or null (null: none has one).</param>
 internal sealed class ReadingScale(string title, string format, double value, double uncertainty, double widest,
-    IReadOnlyList<(string Name, PropertyRange? Range)> candidates, IReadOnlyList<int>? ranks = null)
+    IReadOnlyList<(string Name, PropertyRange? Range)> candidates, IReadOnlyList<int>? ranks = null,
+    IReadOnlyList<PropertyRange?>? usual = null)
 {
     public const char Track = '.';
     public const char Bar = '=';
+    /// <summary>The rare extremes of a range that has a usual part.</summary>
+    public const char RareBar = '-';
     public const char Marker = '*';
     /// <summary>The marker where it falls on a candidate's bar (so a bar one cell wide does not vanish under it).</summary>
     public const char MarkerOnBar = '#';
@@ -35,6 +41,8 @@ internal sealed class ReadingScale(string title, string format, double value, do
 
     /// <summary>Said when the range holds the value.</summary>
     public const string In = "in";
+    /// <summary>Said when the range holds the value only among its rare extremes, outside its usual part.</summary>
+    public const string Rare = "rare";
     /// <summary>Said when the range misses the value but comes within two standard uncertainties of it.</summary>
     public const string Near = "near";
     /// <summary>Said when the range is further away.</summary>
@@ -43,6 +51,12 @@ internal sealed class ReadingScale(string title, string format, double value, do
     public string Title => title;
     public double Value => value;
     public IReadOnlyList<(string Name, PropertyRange? Range)> Candidates => candidates;
+
+    /// <summary>The usual part of the candidate's range at this row, if it has one.</summary>
+    public PropertyRange? UsualPart(int row) => usual is not null && row < usual.Count ? usual[row] : null;
+
+    /// <summary>Whether any candidate's range has a usual part (the legend then explains the rare extremes).</summary>
+    public bool HasUsualParts => usual is not null && usual.Any(u => u is not null);
 
     /// <summary>The answer's rank of the candidate at this row.</summary>
     public int Rank(int row) => ranks is not null && row < ranks.Count ? ranks[row] : row + 1;
@@ -59,9 +73,10 @@ internal sealed class ReadingScale(string title, string format, double value, do
     /// </summary>
     private double Shown => Math.Round(value, format.Contains('.') ? format.Length - format.IndexOf('.') - 1 : 0, MidpointRounding.AwayFromZero);
 
-    /// <summary>In, near or out (see the constants); "-" when the candidate has no range for this quantity.</summary>
-    public string Verdict(PropertyRange? range) => range is not { } r ? "-"
-        : Shown >= r.Minimum - Noise && Shown <= r.Maximum + Noise ? In
+    /// <summary>In, rare, near or out (see the constants); "-" when the candidate has no range for this quantity.</summary>
+    public string Verdict(PropertyRange? range, PropertyRange? usualPart = null) => range is not { } r ? "-"
+        : Shown >= r.Minimum - Noise && Shown <= r.Maximum + Noise
+            ? usualPart is { } u && (Shown < u.Minimum - Noise || Shown > u.Maximum + Noise) ? Rare : In
         : value + 2 * uncertainty >= r.Minimum && value - 2 * uncertainty <= r.Maximum ? Near
         : Out;
 
@@ -109,15 +124,17 @@ internal sealed class ReadingScale(string title, string format, double value, do
             if (range is { } r)
             {
                 int left = Column(r.Minimum), right = Column(r.Maximum);
-                for (int c = Math.Max(0, left); c <= Math.Min(track - 1, right); c++) row[c] = Bar;
+                PropertyRange? part = UsualPart(i);
+                int usualLeft = part is { } u ? Column(u.Minimum) : left, usualRight = part is { } v ? Column(v.Maximum) : right;
+                for (int c = Math.Max(0, left); c <= Math.Min(track - 1, right); c++) row[c] = c >= usualLeft && c <= usualRight ? Bar : RareBar;
                 if (left < 0) row[0] = '<';
                 if (right >= track) row[track - 1] = '>';
                 if (right < 0) row[0] = '<';
                 if (left >= track) row[track - 1] = '>';
             }
-            if (at >= 0 && at < track) row[at] = row[at] == Bar ? MarkerOnBar : Marker;
+            if (at >= 0 && at < track) row[at] = row[at] is Bar or RareBar ? MarkerOnBar : Marker;
             string label = $"{Rank(i).ToString(CultureInfo.InvariantCulture).PadLeft(rankWidth)} {name}";
-            lines.Add(label.PadRight(nameWidth) + row + " " + Verdict(range));
+            lines.Add(label.PadRight(nameWidth) + row + " " + Verdict(range, UsualPart(i)));
         }
         return lines;
     }

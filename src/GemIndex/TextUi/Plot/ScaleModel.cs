@@ -21,6 +21,9 @@ internal sealed class ScaleModel
 
     public const string Legend = "* reading (# on a range)  <-> uncertainty  === range  near: just outside";
 
+    /// <summary>The legend's second line, when a scale draws a range's rare extremes.</summary>
+    public const string RareLegend = "--- the range's rare extremes (most stones lie on ===)  rare: reading there";
+
     private readonly IReadOnlyList<Func<int, ReadingScale>> _scales;
 
     public ScaleModel(BenchAssessment? assessment)
@@ -51,18 +54,19 @@ internal sealed class ScaleModel
                     [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum)))], ranks));
             if (a.SpecificGravity is { } sg)
                 scales.Add(n => new ReadingScale("SG", "0.00", sg.Value, sg.StandardUncertainty, WidestGravity,
-                    [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)m.SpecificGravity))], ranks));
+                    [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)m.SpecificGravity))], ranks,
+                    [.. top.Take(n).Select(m => m.SpecificGravityUsual)]));
         }
         _scales = scales;
     }
 
     public bool IsEmpty => _scales.Count == 0;
 
-    /// <summary>How many candidates per scale fit in <paramref name="height"/> rows (two rows, the candidates and a blank line per scale, then the legend).</summary>
+    /// <summary>How many candidates per scale fit in <paramref name="height"/> rows (two rows, the candidates and a blank line per scale, then the legend: one line, two when a scale draws rare extremes).</summary>
     public int CandidatesFor(int height)
     {
         for (int n = MostCandidates; n > 1; n--)
-            if (_scales.Count * (3 + n) + 1 <= height) return n;
+            if (_scales.Count * (3 + n) + LegendLines(Scales(n)) <= height) return n;
         return 1;
     }
 
@@ -73,12 +77,16 @@ internal sealed class ScaleModel
     {
         if (IsEmpty) return ["No reading to scale yet: the scales need a rotation series (F3) or an SG (F4), and a ranked candidate."];
         var lines = new List<string>();
-        foreach (ReadingScale scale in Scales(CandidatesFor(height)))
+        IReadOnlyList<ReadingScale> scales = Scales(CandidatesFor(height));
+        foreach (ReadingScale scale in scales)
         {
             lines.AddRange(scale.Render(width));
             lines.Add("");
         }
         lines.Add(Legend);
+        if (LegendLines(scales) == 2) lines.Add(RareLegend);
         return lines;
     }
+
+    private static int LegendLines(IReadOnlyList<ReadingScale> scales) => scales.Any(s => s.HasUsualParts) ? 2 : 1;
 }

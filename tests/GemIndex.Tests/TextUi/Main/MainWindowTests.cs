@@ -204,7 +204,7 @@ public sealed class MainWindowTests : IDisposable
         Assert.Contains("1 quartz", screen);
         int shown = Math.Min(candidates, _session.Results.Candidates.Count);   // the test catalogue holds four materials
         string[] lines = screen.Split('\n');
-        int RowsOfRank(int rank) => lines.Count(l => System.Text.RegularExpressions.Regex.IsMatch(l, $@"^\W*{rank} \S.*\.\.\..* (in|near|out|-)\W*$"));
+        int RowsOfRank(int rank) => lines.Count(l => System.Text.RegularExpressions.Regex.IsMatch(l, $@"^\W*{rank} \S.*\.\.\..* (in|rare|near|out|-)\W*$"));
         Assert.Equal(3, RowsOfRank(shown));
         Assert.Equal(0, RowsOfRank(shown + 1));
         Assert.Contains(GemIndex.Cli.TextUi.Plot.ScaleModel.Legend, screen);   // everything fits: the legend is the last line

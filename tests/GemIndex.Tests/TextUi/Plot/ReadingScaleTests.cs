@@ -214,6 +214,50 @@ public class ReadingScaleTests
         Assert.True(scale.Window().Low >= 0);
     }
 
+    [Theory]
+    // Natural opal's SG 1.25-2.25 with its usual part 1.98-2.25 (reference-db opal.json, opal-sg-span): a plastic's
+    // 1.54 lies among the rare extremes, 2.10 in the usual part, 2.40 beyond the range.
+    [InlineData(1.54, ReadingScale.Rare)]
+    [InlineData(2.10, ReadingScale.In)]
+    [InlineData(2.40, ReadingScale.Out)]
+    public void A_range_with_a_usual_part_draws_its_rare_extremes_thin_and_names_a_reading_there(double sg, string expected)
+    {
+        var scale = new ReadingScale("SG", "0.00", sg, 0.01, ScaleModel.WidestGravity,
+            [("white opal", new PropertyRange(1.25, 2.25)), ("flat range", new PropertyRange(1.25, 2.25))], null,
+            [new PropertyRange(1.98, 2.25), null]);
+        Assert.True(scale.HasUsualParts);
+        IReadOnlyList<string> lines = scale.Render(76);
+        Assert.EndsWith(" " + expected, lines[2]);
+        Assert.EndsWith(" " + (expected == ReadingScale.Rare ? ReadingScale.In : expected), lines[3]);   // the same range without a usual part
+        string opal = Track(lines[2], 76), flat = Track(lines[3], 76);
+        // The rare extremes run from the range's lower end up to the usual part; the usual part is the bar.
+        int firstRare = opal.IndexOf(ReadingScale.RareBar), lastRare = opal.LastIndexOf(ReadingScale.RareBar);
+        int firstBar = opal.IndexOf(ReadingScale.Bar), lastBar = opal.LastIndexOf(ReadingScale.Bar);
+        Assert.True(firstRare >= 0 && lastRare < firstBar && lastBar > firstBar, opal);
+        Assert.Equal(flat.IndexOf(ReadingScale.Bar), firstRare);      // the whole range starts where the flat one does
+        Assert.Equal(flat.LastIndexOf(ReadingScale.Bar), lastBar);   // and ends where it does (the usual part reaches 2.25)
+        Assert.DoesNotContain(ReadingScale.RareBar, flat);
+        if (expected == ReadingScale.Rare) Assert.Equal(ReadingScale.MarkerOnBar, opal[opal.IndexOfAny([ReadingScale.Marker, ReadingScale.MarkerOnBar])]);
+    }
+
+    [Fact]
+    public void The_legend_explains_the_rare_extremes_only_when_a_scale_draws_them()
+    {
+        // The shipped catalogue's natural opal carries a usual part (opal-sg-span); a natural opal's spot 1.45 and SG 2.00
+        // (values from memory) put one of its entries first among the species' shown on the scale.
+        var form = new BenchModel();
+        form.SetText(BenchFields.Spot, "1.45");
+        form.SetText(BenchFields.Sg, "2.00");
+        IReadOnlyList<Material> catalogue = GemIndex.Data.Catalogue.ShippedCatalogue.Families.Materials;
+        BenchAssessment a = new BenchAssessor(new Identifier(catalogue)).Assess(form.Snapshot());
+        IReadOnlyList<string> screen = new ScaleModel(a).Lines(76, 20);
+        Assert.True(screen.Count <= 20, string.Join('\n', screen));
+        ReadingScale sg = new ScaleModel(a).Scales(5).Single(s => s.Title == "SG");
+        Assert.Equal(sg.HasUsualParts, screen[^1] == ScaleModel.RareLegend);
+        Assert.True(sg.HasUsualParts, string.Join('\n', screen));   // an opal is among the candidates of such a stone
+        Assert.All(screen, l => Assert.True(l.Length <= 76, l));
+    }
+
     [Fact]
     public void Without_readings_the_model_says_what_it_needs()
     {
