@@ -130,8 +130,9 @@ public sealed class Identifier
 
     /// <summary>
     /// The shown candidates, then grouped species first: the best entry of each of the <see cref="SpeciesAlwaysShown"/>
-    /// leading species and of every further species whose total reaches the list (at least the share of the list's last
-    /// entry), most probable species first, then the most probable entries. A species with many varieties must not fill
+    /// leading species that the answer lists (the leader, and each holding <see cref="LeadingCandidates.ListedShare"/>) and
+    /// of every further species whose total reaches the list (at least the share of the list's last entry), most probable
+    /// species first, then the most probable entries. A species with many varieties must not fill
     /// the list with entries the readings rule out while another species' likely entry is left off, and a species whose
     /// mass is spread over many small entries must not be left off while a species of one small entry is shown.
     /// Read off the species-first order (<see cref="SpeciesFirst"/>): its runs are the species by total, each run's
@@ -148,7 +149,10 @@ public sealed class Identifier
             int species = _speciesOf[order[start]];
             double total = 0;
             for (end = start; end < order.Length && _speciesOf[order[end]] == species; end++) total += posterior[order[end]];
-            if ((taken >= SpeciesAlwaysShown && total < cut) || total <= 0) break;
+            // Past the leader, a species the answer would not list (under LeadingCandidates.ListedShare) is never put in
+            // before the leader's own likelier entries: a list of three for a corundum must not read ruby, staurolite 0 %.
+            bool always = taken == 0 || (taken < SpeciesAlwaysShown && total >= LeadingCandidates.ListedShare);
+            if ((!always && total < cut) || total <= 0) break;
             shown[order[start]] = true;
             taken++;
         }

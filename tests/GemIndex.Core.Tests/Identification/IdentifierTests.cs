@@ -129,6 +129,28 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_rival_species_the_answer_would_not_list_never_displaces_the_leaders_likelier_entries()
+    {
+        // Ten varieties of one species at SG 2.40-2.60 and two rivals whose ranges lie far from an SG of 2.50 (invented,
+        // for the rule only): the rivals hold far less than LeadingCandidates.ListedShare, so a list of three is the
+        // leader's three varieties, ranked as in a longer list, not "variety, second 0 %, third 0 %".
+        var glassLike = OpticalIndices.SingleIndex(new(1.50, 1.53), OpticCharacter.Amorphous);
+        Material[] catalogue =
+        [
+            .. Enumerable.Range(1, 10).Select(k => Make($"variety {k}", "many", glassLike, 2.4, 2.6) with { SpeciesFrequency = BenchFrequency.VeryCommon }),
+            Make("second", "second", glassLike, 3.9, 4.0),
+            Make("third", "third", glassLike, 4.5, 4.6),
+        ];
+        var sheet = new BenchSheet { SpecificGravity = new(2.5, 0.01) };
+        var three = new Identifier(catalogue).Identify(sheet, maximumCandidates: 3);
+        var ten = new Identifier(catalogue).Identify(sheet, maximumCandidates: 10);
+        Assert.Equal(3, ten.Species.Count);   // totals over the whole catalogue, listed or not
+        Assert.All(ten.Species.Where(s => s.Species != "many"), s => Assert.True(s.Confidence < LeadingCandidates.ListedShare, $"{s.Species} {s.Confidence}"));
+        Assert.Equal(["many"], three.Candidates.Select(c => c.Material.Species).Distinct().ToArray());
+        Assert.Equal(ten.Candidates.Take(3).Select(c => c.Material.Name), three.Candidates.Select(c => c.Material.Name));
+    }
+
+    [Fact]
     public void The_reasons_are_written_for_the_best_entry_of_each_leading_species_first()
     {
         // As above: the leading species' varieties fill the top of the list; the reasons worth reading are the rivals'.
