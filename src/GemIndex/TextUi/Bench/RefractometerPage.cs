@@ -97,11 +97,26 @@ internal sealed class RefractometerPage : BenchPage
     public void BeginStep(int? index, StepText? step, string nextRotation)
     {
         _editing = index;
+        _offeredRotation = step is null ? nextRotation : null;
         Rotation.Text = step?.Rotation ?? nextRotation;
         Low.Text = step?.Low ?? "";
         High.Text = step?.High ?? "";
         Editing.Text = index is { } i ? $"editing step {i + 1}" : "";
         Low.SetFocus();
+    }
+
+    /// <summary>The rotation offered for a new step, while the examiner has not typed another (null: none offered).</summary>
+    private string? _offeredRotation;
+
+    /// <summary>
+    /// Offers <paramref name="nextRotation"/> on a new step whose offered rotation is still untouched: a rotation step set
+    /// after a step was stored applies to the next one (it stayed at the old step's 15° and every later step followed it).
+    /// </summary>
+    public void OfferRotation(string nextRotation)
+    {
+        if (_editing is not null || _offeredRotation is null || Rotation.Text != _offeredRotation) return;
+        _offeredRotation = nextRotation;
+        Rotation.Text = nextRotation;
     }
 
     public void ShowSteps(IReadOnlyList<StepText> steps, IReadOnlyDictionary<string, string> errors)

@@ -221,6 +221,10 @@ internal sealed class MainWindow : Window
             _session.Changed();
         };
         RefractometerPage rf = Refractometer;
+        rf.StepField.Edit.TextChanged += (_, _) =>
+        {
+            if (!_filling) rf.OfferRotation(_session.Form.NextRotation());
+        };
         rf.StoreRequested += (index, step) =>
         {
             if (step.Low.Length == 0) return;

@@ -89,6 +89,40 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void A_rotation_step_set_after_the_first_step_applies_to_the_next_step_offered()
+    {
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(_session, TestMaterials.All);
+        _session.Start();
+        window.FillFromModel();
+        SessionToken token = app.Begin(window)!;
+        window.ShowPage(1);
+        window.Refractometer.Low.SetFocus();
+        Type(app, "1.762");
+        app.InjectKey(Key.Tab);
+        Type(app, "1.770");
+        app.InjectKey(Key.Enter);
+        Assert.Equal("15", window.Refractometer.Rotation.Text);   // the default step offered
+        window.Refractometer.StepField.Edit.SetFocus();
+        Type(app, "30");
+        Assert.Equal("30", window.Refractometer.Rotation.Text);   // the offer follows the new step
+        window.Refractometer.Low.SetFocus();
+        Type(app, "1.763");
+        app.InjectKey(Key.Tab);
+        Type(app, "1.770");
+        app.InjectKey(Key.Enter);
+        Assert.Equal(["0", "30"], _session.Form.Steps.Select(s => s.Rotation));
+        Assert.Equal("60", window.Refractometer.Rotation.Text);
+        // A rotation the examiner typed is theirs: a later change of the step leaves it.
+        window.Refractometer.Rotation.SetFocus();
+        window.Refractometer.Rotation.Text = "75";
+        window.Refractometer.StepField.Edit.SetFocus();
+        window.Refractometer.StepField.Edit.Text = "45";
+        Assert.Equal("75", window.Refractometer.Rotation.Text);
+        app.End(token);
+    }
+
+    [Fact]
     public void A_bad_entry_is_marked_at_its_field_and_the_candidates_stay()
     {
         using IApplication app = Headless.Start();
