@@ -25,6 +25,22 @@ public sealed record BenchReadings
     /// <summary>These readings with one more rotation step.</summary>
     public BenchReadings WithStep(EdgeStepText step) => this with { Steps = Steps.Add(step) };
 
+    /// <summary>
+    /// These readings without the fields and steps <paramref name="refused"/> names (<see cref="BenchReader"/>'s errors):
+    /// what a ranking that goes on despite errors used, so that what is kept of a stone is what its answer was worked out on.
+    /// </summary>
+    public BenchReadings WithoutRefused(IEnumerable<BenchFieldError> refused)
+    {
+        var fields = refused.Select(e => e.Field).ToHashSet(StringComparer.Ordinal);
+        if (fields.Count == 0) return this;
+        bool StepRefused(int i) => fields.Contains(BenchField.Step(i)) || fields.Any(f => f.StartsWith(BenchField.Step(i) + ".", StringComparison.Ordinal));
+        return this with
+        {
+            Values = Values.RemoveRange(fields),
+            Steps = [.. Steps.Where((_, i) => !StepRefused(i))],
+        };
+    }
+
     /// <summary>Equal when every field and step is equal.</summary>
     public bool Equals(BenchReadings? other) =>
         other is not null && Values.Count == other.Values.Count && Values.All(p => other.Text(p.Key) == p.Value) && Steps.SequenceEqual(other.Steps);

@@ -29,6 +29,26 @@ public class BenchReaderTests
     }
 
     [Fact]
+    public void Without_the_refused_entries_the_readings_read_clean_to_the_same_sheet()
+    {
+        // Quartz (from memory) with a bad SG, a line list with one bad line and a step above any contact liquid: the reader
+        // goes on without them, and the readings without them are exactly what it went on with.
+        var readings = Steps(R((BenchField.Sg, "50"), (BenchField.Absorption, "432 4b0"), (BenchField.Polariscope, "doubly refractive")),
+            "0:1.544/1.553", "45:2.5", "90:1.544/1.548");
+        var reading = BenchReader.Read(readings);
+        Assert.Equal(3, reading.Errors.Count);
+        BenchReadings kept = readings.WithoutRefused(reading.Errors);
+        var again = BenchReader.Read(kept);
+        Assert.Empty(again.Errors);
+        Assert.Equal(["0:1.544/1.553", "90:1.544/1.548"], kept.Steps.Select(BenchSyntax.Step));
+        Assert.Null(kept.Text(BenchField.Sg));
+        Assert.Null(kept.Text(BenchField.Absorption));
+        Assert.Equal(reading.Sheet.Refractometer!.Steps, again.Sheet.Refractometer!.Steps);
+        Assert.Equal(reading.Sheet.ToString(), again.Sheet.ToString());   // every other field (the lists print by type only)
+        Assert.Same(readings, readings.WithoutRefused([]));
+    }
+
+    [Fact]
     public void Every_bad_field_is_reported_at_once_with_its_name_value_range_and_sentence()
     {
         var reading = BenchReader.Read(R((BenchField.Sg, "50"), (BenchField.Polariscope, "sparkly"), (BenchField.Absorption, "900"), (BenchField.UvLong, "")));

@@ -39,7 +39,9 @@ internal sealed class BenchAssessor(Identifier? identifier)
         {
             Version = form.Version,
             Errors = errors,
-            Readings = StoneReadingsConverter.FromReadings(readings, lenient: true),
+            // What the answer was worked out on, never a refused entry's parseable part ("432" of "432 4b0"): the stone
+            // list, the reports and the command line then give the answer the pane gives. The typed text stays in the draft.
+            Readings = StoneReadingsConverter.FromReadings(readings.WithoutRefused(outcome.Reading.Errors), lenient: true),
             SpecificGravity = outcome.Reading.Sheet.SpecificGravity,
             Result = result,
             DoNotImmerse = result is null ? [] : [.. result.Candidates.Take(5)

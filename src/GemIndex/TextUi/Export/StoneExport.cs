@@ -34,13 +34,19 @@ internal static class StoneExport
             StoneSheet sheet = BenchModel.ToStoneSheet(snapshot, assessment.Readings);
             IReadOnlyList<string> paths = StoneReportFiles.Write(workbookPath, sheet, result, header);   // never over an earlier file: a numbered name instead
             IReadOnlyList<string> warnings = StoneReportFiles.ReferenceWarnings(sheet, workbookStones());
-            return ("Reports written", string.Join('\n', [.. paths, ExaminerLine(header), .. warnings]));
+            return ("Reports written", string.Join('\n', [.. paths, ExaminerLine(header), .. RefusedLines(assessment), .. warnings]));
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or BatchInputException or QuantityOutOfRangeException or WorkbookException)
         {
             return ("Export failed", $"The reports were not written to {StoneReportFiles.FolderFor(workbookPath)}:\n{e.Message}");
         }
     }
+
+    /// <summary>The confirmation's words for entries refused on the form: the reports, like the answer, leave them out.</summary>
+    public const string RefusedPrefix = "Left out of the reports, refused: ";
+
+    private static IEnumerable<string> RefusedLines(BenchAssessment assessment) =>
+        assessment.Errors.Values.Select(reason => RefusedPrefix + reason);
 
     /// <summary>"Examiner: A. Example" as printed in the header, or where to set it.</summary>
     public static string ExaminerLine(ReportHeader header) => header.Examiner is { } name ? $"Examiner: {name}" : NoExaminer;

@@ -31,6 +31,31 @@ public class BenchAssessorTests
         Assert.Contains("Specific gravity: 2.65 ± 0.01", derived);
     }
 
+    [Theory]
+    // Entries the reader refuses in whole or in part: a list with one bad line, a step above the contact liquid, a
+    // liquid limit beyond what a contact liquid reaches, a heavy liquid without a result.
+    [InlineData("absorption", "432 4b0")]
+    [InlineData("step", "2.5")]
+    [InlineData("liquid", "2.6")]
+    [InlineData("heavy", "3.32 maybe")]
+    public void What_is_kept_of_a_stone_gives_the_answer_the_pane_gives_when_an_entry_is_refused(string field, string text)
+    {
+        var form = QuartzForm();
+        switch (field)
+        {
+            case "absorption": form.SetText(BenchFields.Absorption, text); break;
+            case "step": form.PutStep(form.Steps.Count, new StepText("30", text, "")); break;
+            case "liquid": form.SetText(BenchFields.LiquidLimit, text); break;
+            default: form.SetText(BenchFields.HeavyLiquids, text); break;
+        }
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.NotEmpty(a.Errors);
+        // The stone list, the reports and the command line rank what is kept; the pane ranked the form without the entry.
+        BenchAssessment without = Assessor.Assess(QuartzForm().Snapshot());
+        Assert.Equal(GemIndex.Data.Batch.StoneReadingsConverter.ToReadings(without.Readings), GemIndex.Data.Batch.StoneReadingsConverter.ToReadings(a.Readings));
+        Assert.Equal(ResultText.Short(a.Result!), Assessor.Answer(a.Readings));
+    }
+
     [Fact]
     public void The_readings_used_name_every_test_the_answer_weighed_not_only_the_numbers()
     {

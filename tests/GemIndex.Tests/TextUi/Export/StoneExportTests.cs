@@ -54,6 +54,27 @@ public sealed class StoneExportTests : IDisposable
     }
 
     [Fact]
+    public void A_refused_entry_is_left_out_of_the_reports_as_of_the_answer_and_the_confirmation_says_so()
+    {
+        // "432 4b0" typed as lines: the answer leaves the field out, so the reports must not list the 432 that parses.
+        var model = new BenchModel();
+        model.SetText(BenchFields.Reference, "ring 7");
+        model.PutStep(0, new StepText("0", "1.544", "1.553"));
+        model.SetText(BenchFields.Sg, "2.65");
+        model.SetText(BenchFields.Examiner, "A. Example");
+        model.SetText(BenchFields.Absorption, "432 4b0");
+        BenchSnapshot snapshot = model.Snapshot();
+        BenchAssessment assessment = new BenchAssessor(new Identifier(TestMaterials.All)).Assess(snapshot);
+        Assert.Single(assessment.Errors);
+        Assert.Null(assessment.Readings.AbsorptionNm);
+        var (title, text) = StoneExport.Write(Path.Combine(_folder, "bench.db"), snapshot, assessment, hasCatalogue: true, () => [], Day);
+        Assert.Equal("Reports written", title);
+        Assert.Contains(text.Split('\n'), l => l.StartsWith(StoneExport.RefusedPrefix, StringComparison.Ordinal) && l.Contains("4b0", StringComparison.Ordinal));
+        string md = File.ReadAllText(Reports().Single(p => p.EndsWith(".md", StringComparison.Ordinal)));
+        Assert.DoesNotContain("432", md);
+    }
+
+    [Fact]
     public void Without_an_examiner_the_report_says_not_recorded_and_the_confirmation_says_where_to_set_one()
     {
         var (title, text) = Export("");
