@@ -73,6 +73,7 @@ internal static class IdentificationText
             // In words first, as the reports and the text UI say it; the gain in bits for those who weigh it.
             o.WriteLine($"Next test: {next.Description} — it would {ReportDerived.Separation(next.GainBits)} the leading candidates (expected gain {ReportNumbers.Fixed(next.GainBits, "0.00")} bits)");
             foreach (string e in next.Expectations) o.WriteLine($"  {e}");
+            if (ReportCautions.ForTest(next.Test) is { } caution) o.WriteLine($"  {caution}");
         }
         foreach (string w in result.Warnings) o.WriteLine($"Warning: {w}");
         o.WriteLine("An identification from bench tests is an aid, not a certificate.");

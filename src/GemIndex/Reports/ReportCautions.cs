@@ -15,6 +15,27 @@ internal static class ReportCautions
     public const string Laboratory =
         "Refer valuable stones to a qualified gem-testing laboratory, and defer to local regulations and licensed practice.";
 
+    /// <summary>The contact liquid's caution in a few words, for the refractometer page.</summary>
+    public const string ContactLiquidShort = "! Contact liquid is toxic: avoid skin contact and fumes; follow its safety data sheet and local rules.";
+
+    /// <summary>The same for the heavy liquids, on the SG page.</summary>
+    public const string HeavyLiquidShort = "! Heavy liquids are toxic: avoid skin contact and fumes; follow their safety data sheets and local rules.";
+
+    /// <summary>The ultraviolet caution in a few words, for the page where the lamp's results are typed.</summary>
+    public const string UltravioletShort = "! UV lamp: never look into it; shield your eyes and skin while testing.";
+
+    /// <summary>
+    /// The caution to give beside advice to take a test (the next test), or null: the contact liquid for the
+    /// refractometer, the heavy liquids', the UV lamps'. Taking the advice is where the hazard is met.
+    /// </summary>
+    public static string? ForTest(string wire) => GemIndex.Core.Bench.BenchTestWords.FromWire(wire) switch
+    {
+        GemIndex.Core.Bench.BenchTest.Refractometer => ContactLiquidShort,
+        GemIndex.Core.Bench.BenchTest.HeavyLiquids => HeavyLiquidShort,
+        GemIndex.Core.Bench.BenchTest.UvLong or GemIndex.Core.Bench.BenchTest.UvShort => UltravioletShort,
+        _ => null,
+    };
+
     /// <summary>All of them, in the order printed.</summary>
     public static IReadOnlyList<string> All { get; } = [Liquids, Ultraviolet, Scope, Laboratory];
 }

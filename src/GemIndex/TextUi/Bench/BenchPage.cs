@@ -118,6 +118,12 @@ internal class BenchPage : View
 
     private IReadOnlyList<(string Key, string Line)> _problemLines = [];
 
+    /// <summary>
+    /// A safety caution shown in the rows kept for the reasons while no entry is refused (the contact liquid's, the UV
+    /// lamp's): where the work is done, without taking rows from the form. The reports and F1 say it in full.
+    /// </summary>
+    protected IReadOnlyList<string> FootCaution { get; init; } = [];
+
     /// <summary>Said on the last row when the reasons need more rows than the page has for them.</summary>
     public const string MoreProblems = "! more: move to a '!' to read it";
 
@@ -133,6 +139,11 @@ internal class BenchPage : View
     protected void WrapProblems()
     {
         int width = Math.Max(20, Viewport.Width);
+        if (_problemLines.Count == 0)
+        {
+            _problems.Text = string.Join('\n', Main.TextWrap.Lines(FootCaution, width).Take(_problemRows));
+            return;
+        }
         string? focused = FocusedProblemKey;
         var ordered = _problemLines.Where(p => p.Key == focused).Concat(_problemLines.Where(p => p.Key != focused));
         List<List<string>> reasons = [.. ordered.Select(p => Main.TextWrap.Lines([p.Line], width).ToList())];

@@ -45,7 +45,8 @@ internal sealed class GravityPage : BenchPage
     {
         int width = Math.Max(20, Viewport.Width);
         Result.Text = string.Join('\n', TextWrap.Lines([_result], width));
-        IReadOnlyList<string> lines = _caution.Length == 0 ? [] : [.. TextWrap.Lines(["!! " + _caution], width)];
+        // Without a stone to keep dry, the rows say the heavy liquids' own caution.
+        IReadOnlyList<string> lines = _caution.Length == 0 ? [.. TextWrap.Lines([Reports.ReportCautions.HeavyLiquidShort], width)] : [.. TextWrap.Lines(["!! " + _caution], width)];
         // As tall as the caution wraps to: with many candidates named it runs past the rows kept for it, never cut.
         Caution.Height = Math.Max(CautionRows, lines.Count);
         Caution.Text = string.Join('\n', lines);

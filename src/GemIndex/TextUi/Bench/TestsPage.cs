@@ -5,6 +5,7 @@ internal sealed class TestsPage : BenchPage
 {
     public TestsPage() : base("Tests", "a key picks, Space clears")
     {
+        FootCaution = [Reports.ReportCautions.UltravioletShort];
         AddChoice(BenchFields.Polariscope);
         AddChoice(BenchFields.Pleochroism);
         AddChoice(BenchFields.Dispersion);

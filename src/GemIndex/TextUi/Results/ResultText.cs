@@ -225,6 +225,7 @@ internal static class ResultText
         // How well, in the same words as the reports ("it would partly separate"): a colour call is not settled by a loupe.
         .. advice.Separates.Count > 1 ? [$"  it would {GemIndex.Cli.Reports.ReportDerived.Separation(advice.GainBits)} {advice.SeparatesInWords}"] : Array.Empty<string>(),
         .. advice.Expectations.Select(e => "  " + e),
+        .. GemIndex.Cli.Reports.ReportCautions.ForTest(advice.Test) is { } caution ? ["  " + caution] : Array.Empty<string>(),
     ];
 
     public static string Clip(string s, int width) => s.Length <= width ? s : s[..Math.Max(0, width - 1)] + "…";

@@ -86,6 +86,23 @@ public class ResultTextTests
     }
 
     [Theory]
+    // Where taking the advice meets a hazard (common practice): the contact liquid, the heavy liquids, the UV lamps.
+    [InlineData("refractometer", GemIndex.Cli.Reports.ReportCautions.ContactLiquidShort)]
+    [InlineData("heavy_liquids", GemIndex.Cli.Reports.ReportCautions.HeavyLiquidShort)]
+    [InlineData("uv_long", GemIndex.Cli.Reports.ReportCautions.UltravioletShort)]
+    [InlineData("uv_short", GemIndex.Cli.Reports.ReportCautions.UltravioletShort)]
+    [InlineData("absorption_nm", null)]
+    [InlineData("polariscope", null)]
+    public void Advice_to_take_a_hazardous_test_carries_its_caution(string test, string? caution)
+    {
+        var next = new NextTestAdvice { Test = test, GainBits = 1, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = ["ruby: something"] };
+        IReadOnlyList<string> lines = ResultText.NextTest(next);
+        if (caution is null) Assert.DoesNotContain(lines, l => l.Contains("! ", StringComparison.Ordinal));
+        else Assert.Equal("  " + caution, lines[^1]);
+        Assert.Equal(caution, GemIndex.Cli.Reports.ReportCautions.ForTest(test));
+    }
+
+    [Theory]
     [InlineData(1.3, "  it would clearly separate flame-fusion synthetic ruby and ruby")]
     [InlineData(0.5, "  it would partly separate flame-fusion synthetic ruby and ruby")]
     public void The_next_test_says_how_well_it_would_separate_in_the_reports_words(double bits, string expected)
