@@ -201,6 +201,19 @@ public static class BenchReader
             if (air is null) Error(BenchField.AirCt, "", "a weight in carats", "is missing: a hydrostatic weighing needs the weight in air as well as in water.");
             if (water is null) Error(BenchField.WaterCt, "", "a weight in carats", "is missing: a hydrostatic weighing needs the weight in water as well as in air.");
             double? airCt = Number(BenchField.AirCt), waterCt = Number(BenchField.WaterCt), waterC = Number(BenchField.WaterC);
+            // Each weight is judged on its own field and in the bench's words ("weight in air", not "mass"): a weight in
+            // air of 0 was reported on the weight in water.
+            if (airCt is <= 0)
+            {
+                Error(BenchField.AirCt, air, "above 0 ct", $"weight in air is {BenchText.Shown(air)} ct; allowed: above 0 ct.");
+                airCt = null;
+            }
+            if (waterCt is < 0)
+            {
+                Error(BenchField.WaterCt, water, "0 ct or more, below the weight in air",
+                    $"weight in water is {BenchText.Shown(water)} ct; allowed: 0 ct or more, below the weight in air (a stone that sinks weighs less in water).");
+                waterCt = null;
+            }
             Mass? inAir = airCt is { } a ? Checked(BenchField.AirCt, air!, () => BenchDefaults.Weighed(a)) : null;
             Mass? inWater = waterCt is { } w ? Checked(BenchField.WaterCt, water!, () => BenchDefaults.Weighed(w)) : null;
             Temperature? temperature = celsius is not null && waterC is null ? null
@@ -213,7 +226,16 @@ public static class BenchReader
                 Checked(BenchField.WaterCt, water!, () => HydrostaticWeighing.SpecificGravityOf(m1, m2, Temperature.FromCelsius(BenchDefaults.WaterCelsius)));
                 return null;
             }
-            return Checked(BenchField.WaterCt, water!, () => HydrostaticWeighing.SpecificGravityOf(m1, m2, t));
+            // Weights too small for the balance give an SG uncertainty beyond what an SG can carry: said as the stone's
+            // weight being too small, on the weight in air, with what to do instead.
+            try { return HydrostaticWeighing.SpecificGravityOf(m1, m2, t); }
+            catch (QuantityOutOfRangeException e) when (e.Quantity == "specific gravity uncertainty")
+            {
+                Error(BenchField.AirCt, air, "a stone heavy enough for the balance",
+                    $"weight in air {BenchText.Shown(air)} ct is too small to weigh hydrostatically on this balance (±{BenchDefaults.WeighingUncertaintyCarats.ToString("0.###", CultureInfo.InvariantCulture)} ct): the SG would be uncertain by more than ±5; use heavy liquids instead.");
+                return null;
+            }
+            catch (QuantityOutOfRangeException e) { Error(BenchField.WaterCt, water, e.Allowed, e.Message); return null; }
         }
 
         private List<HeavyLiquidResult> HeavyLiquids()

@@ -48,6 +48,23 @@ public class BenchReaderTests
         Assert.Same(readings, readings.WithoutRefused([]));
     }
 
+    [Theory]
+    // Each weighing fault on its own field, in the bench's words (weights invented for the rule).
+    [InlineData("0", "0", BenchField.AirCt, "weight in air is 0 ct; allowed: above 0 ct")]
+    [InlineData("-1", "0.5", BenchField.AirCt, "weight in air is -1 ct; allowed: above 0 ct")]
+    [InlineData("3", "-2.1", BenchField.WaterCt, "weight in water is -2.1 ct; allowed: 0 ct or more, below the weight in air")]
+    [InlineData("2", "2.5", BenchField.WaterCt, "weight in water is 2.5 ct; allowed: 0 to below the weight in air 2 ct")]
+    [InlineData("0.001", "0.0005", BenchField.AirCt, "weight in air 0.001 ct is too small to weigh hydrostatically")]
+    public void A_weighing_fault_is_named_on_its_own_field_in_the_benchs_words(string air, string water, string field, string sentence)
+    {
+        var reading = BenchReader.Read(R((BenchField.AirCt, air), (BenchField.WaterCt, water)));
+        BenchFieldError error = Assert.Single(reading.Errors);
+        Assert.Equal(field, error.Field);
+        Assert.StartsWith(sentence, error.Sentence);
+        Assert.DoesNotContain("mass", error.Sentence);
+        Assert.Null(reading.Sheet.SpecificGravity);
+    }
+
     [Fact]
     public void Every_bad_field_is_reported_at_once_with_its_name_value_range_and_sentence()
     {

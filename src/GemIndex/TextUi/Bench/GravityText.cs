@@ -15,6 +15,15 @@ internal static class GravityText
     /// <summary>Coverage factor for "the two disagree": two combined standard uncertainties (about 95 %, common practice in measurement).</summary>
     public const double ClashCoverage = 2;
 
+    /// <summary>
+    /// Above this standard uncertainty a hydrostatic SG hardly tells gem materials apart (most lie within 1.0–4.5 of each
+    /// other in steps of a few tenths; judgement): the line then says the stone is too light for the balance.
+    /// </summary>
+    public const double UsefulWeighingUncertainty = 0.1;
+
+    /// <summary>Added to the SG line of a weighing less certain than <see cref="UsefulWeighingUncertainty"/>.</summary>
+    public const string TooLight = ": the stone is too light to weigh usefully; heavy liquids tell more";
+
     /// <summary>What the SG line says when there is no SG to use and nothing clashes.</summary>
     public const string None = "SG -";
 
@@ -27,7 +36,8 @@ internal static class GravityText
         // The typed SG read alone, once: refused or not, and its value.
         BenchReading? typedAlone = typedText.Length > 0 ? BenchReader.Read(new BenchReadings().With(BenchField.Sg, typedText)) : null;
         if (used is { } sg)
-            return ResultText.Gravity(sg) + (typedAlone is null ? " from the weights" : typedAlone.Errors.Count > 0 ? " from the weights (the SG typed is refused)" : " as typed");
+            return ResultText.Gravity(sg) + (typedAlone is null ? " from the weights" : typedAlone.Errors.Count > 0 ? " from the weights (the SG typed is refused)" : " as typed")
+                + (typedAlone is null && sg.StandardUncertainty > UsefulWeighingUncertainty ? TooLight : "");
         bool weighing = new[] { BenchFields.AirCt, BenchFields.WaterCt }.Any(f => form.Text(f).Trim().Length > 0);
         if (typedAlone is null || !weighing) return None;
         SpecificGravity? typed = typedAlone.Sheet.SpecificGravity;

@@ -1,0 +1,27 @@
+using GemIndex.Cli.TextUi.Bench;
+using GemIndex.Core.Bench;
+
+namespace GemIndex.Tests.TextUi.Bench;
+
+public class GravityTextTests
+{
+    private static string Line(string air, string water)
+    {
+        var form = new BenchModel();
+        form.SetText(BenchFields.AirCt, air);
+        form.SetText(BenchFields.WaterCt, water);
+        BenchSnapshot snapshot = form.Snapshot();
+        var reading = BenchReader.Read(new BenchReadings().With(BenchField.AirCt, air).With(BenchField.WaterCt, water));
+        return GravityText.Describe(snapshot, reading.Sheet.SpecificGravity);
+    }
+
+    [Fact]
+    public void A_weighing_too_light_for_the_balance_says_so_and_a_usual_one_does_not()
+    {
+        // 0.004 ct in air, 0.002 in water: SG 2.0 uncertain by about ±2 at the balance's ±0.002 ct (BenchDefaults);
+        // 3.000 and 2.000 ct: SG about 3.0 within a few hundredths (weights invented for the rule).
+        Assert.EndsWith(GravityText.TooLight, Line("0.004", "0.002"));
+        Assert.DoesNotContain(GravityText.TooLight, Line("3.000", "2.000"));
+        Assert.Matches(@"^SG (2\.99|3\.00)\d* ± 0\.0\d+ from the weights$", Line("3.000", "2.000"));   // water at 20 °C: 2.99x
+    }
+}
