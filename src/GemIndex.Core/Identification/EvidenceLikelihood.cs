@@ -54,6 +54,7 @@ public static class EvidenceLikelihood
         if (s.UvShort is { } us) Fluorescence(BenchField.UvShort, "short-wave UV", material.UvShort, profile.UvShort, us, acc);
         if (s.AbsorptionLinesNanometres is { } lines) Absorption(profile, lines, acc);
         if (sheet.ColourHues.Count > 0) Colour(profile, s.Colour!, sheet.ColourHueList, acc);
+        if (s.Cut == StoneCut.Faceted) FacetedCut(material, acc);
         if (s.Magnification is { IsEmpty: false } look)
         {
             // docs/ranking.md, "Magnification": "not in the catalogue" is the natural/imitation average.
@@ -303,6 +304,22 @@ public static class EvidenceLikelihood
 
     /// <summary>"Not in the catalogue": P(probe positive) 0.05, P(conductive) 0.1 (few bench stones conduct heat or electricity).</summary>
     private const double BroadThermalPositive = 0.05, BroadConductive = 0.1;
+
+    /// <summary>
+    /// P(faceted | a material met only as an aggregate), against 1 for a crystal, a glass and "not in the catalogue":
+    /// massive and granular materials are cut as cabochons, beads and carvings, and a faceted one is occasional
+    /// (judgement, docs/ranking.md §2, "Form term"). Before, a faceted red stone with one edge at 1.718 read massive
+    /// rhodonite first.
+    /// </summary>
+    internal const double AggregateFaceted = 0.1;
+
+    private static void FacetedCut(Material m, EvidenceAccumulator acc)
+    {
+        bool aggregateOnly = (m.Forms & MaterialForm.Aggregate) != 0 && (m.Forms & MaterialForm.Crystal) == 0;
+        // How common a cut is for a material, not how typical a reading: it stays out of the fit.
+        acc.AddLog(BenchField.Cut, aggregateOnly ? Math.Log(AggregateFaceted) : 0, 0, 1, robust: false, inFit: false);
+        if (acc.Explaining && aggregateOnly) acc.Say("cut faceted: a massive or granular material is seldom faceted (mostly cabochons, beads and carvings)");
+    }
 
     private static void Thermal(Material m, ThermalProbeResult seen, EvidenceAccumulator acc)
     {

@@ -42,6 +42,26 @@ public class EvidenceModelTests
     }
 
     [Fact]
+    public void A_faceted_cut_weighs_against_a_material_met_only_as_an_aggregate_and_nothing_else()
+    {
+        // Massive rhodonite against transparent rhodonite and a glass (invented entries of one index range): a faceted
+        // stone costs the aggregate-only entry ln 0.1 (AggregateFaceted), a cabochon costs nothing, and the fit stays.
+        var indices = OpticalIndices.SingleIndex(new(1.71, 1.75), OpticCharacter.Aggregate);
+        var massive = Entry("massive", "rhodonite", indices, forms: MaterialForm.Aggregate);
+        var both = Entry("either", "rhodonite", indices, forms: MaterialForm.Aggregate | MaterialForm.Crystal);
+        var crystal = Entry("crystal", "spinel", OpticalIndices.SingleIndex(new(1.71, 1.75), OpticCharacter.Isotropic));
+        CandidateEvaluation Weigh(Material m, StoneCut? cut) =>
+            EvidenceLikelihood.Evaluate(m, new AnalysedSheet(new BenchSheet { SpecificGravity = new SpecificGravity(2.63, 0.01), Cut = cut }), explain: true);
+        Assert.Equal(Math.Log(EvidenceLikelihood.AggregateFaceted), Weigh(massive, StoneCut.Faceted).LogLikelihood - Weigh(massive, null).LogLikelihood, 9);
+        Assert.Equal(Weigh(massive, null).LogLikelihood, Weigh(massive, StoneCut.Cabochon).LogLikelihood, 9);
+        Assert.Equal(Weigh(massive, null).Fit, Weigh(massive, StoneCut.Faceted).Fit, 9);
+        foreach (Material m in new[] { both, crystal })
+            Assert.Equal(Weigh(m, null).LogLikelihood, Weigh(m, StoneCut.Faceted).LogLikelihood, 9);
+        Assert.Contains(Weigh(massive, StoneCut.Faceted).Contributions, c => c.Text.StartsWith("cut faceted", StringComparison.Ordinal));
+        Assert.DoesNotContain(Weigh(crystal, StoneCut.Faceted).Contributions, c => c.Text.StartsWith("cut faceted", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void A_blinking_aggregate_whose_high_end_is_above_the_liquid_can_give_no_spot_edge_at_all()
     {
         // Smithsonite-like grains, ε 1.62 and ω 1.85 (from memory; ω above a 1.80 liquid): the spot is read at the high end, so lost,
