@@ -114,8 +114,9 @@ internal static class ReportDerived
             ? " (" + string.Join(", ", new[] { ("positive", p.UniaxialPositive), ("negative", p.UniaxialNegative) }
                 .OrderByDescending(x => x.Item2).Select(x => $"{x.Item1} {percent(x.Item2)}")) + ")"
             : "");
+        // A character the readings rule out (two edges apart rule out one index) is left out, not shown as "0%".
         return string.Join(", ", new[] { (uniaxial, p.Uniaxial), ("biaxial " + percent(p.Biaxial), p.Biaxial), ("singly refractive " + percent(p.Isotropic), p.Isotropic) }
-            .OrderByDescending(x => x.Item2).Select(x => x.Item1));
+            .Where(x => x.Item2 > 0).OrderByDescending(x => x.Item2).Select(x => x.Item1));
     }
 
     /// <summary>Species below this share are not listed in the answer (a judgement: 1 %).</summary>

@@ -336,6 +336,17 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void A_character_the_readings_rule_out_is_left_out_of_the_odds_not_shown_as_none()
+    {
+        // Quartz-like edges 1.544 and 1.553 (from memory): two edges apart rule out one index, so "singly refractive"
+        // has no share at all and is not listed as "0%"; the others keep their order of share.
+        var odds = new OpticCharacterPosterior(0, 0.5, 0.2, 0.3);
+        string line = GemIndex.Cli.Reports.ReportDerived.CharacterOdds(odds, ResultText.Percent);
+        Assert.Equal("uniaxial 70% (positive 50%, negative 20%), biaxial 30%", line);
+        Assert.Contains("singly refractive <1%", GemIndex.Cli.Reports.ReportDerived.CharacterOdds(odds with { Isotropic = 0.001 }, ResultText.Percent));
+    }
+
+    [Fact]
     public void The_answer_pane_names_no_jargon_and_keeps_the_numbers_for_the_detail_view()
     {
         var next = new NextTestAdvice { Test = "absorption_nm", GainBits = 1.3, Separates = ["flame-fusion synthetic ruby", "ruby"], Expectations = ["ruby: lines at 694 nm"] };
