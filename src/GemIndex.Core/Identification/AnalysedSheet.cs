@@ -21,7 +21,7 @@ public sealed record AnalysedSheet
         if (sheet.Magnification is { IsEmpty: false } look) LogBroadLook = MagnificationEvidence.LogBroad(look);
         if (sheet.Refractometer is { Steps.Count: > 0 } r)
         {
-            Series = RotationSeriesAnalysis.Analyse(r.Steps, r.ReadingPrecision, r.CalibrationOffset);
+            Series = RotationSeriesAnalysis.ReadAgainst(RotationSeriesAnalysis.Analyse(r.Steps, r.ReadingPrecision, r.CalibrationOffset), r.LiquidLimit);
             Observation = new SeriesObservation(r.Steps, r.ReadingPrecision, r.CalibrationOffset, r.LiquidLimit);
             _broad = new Lazy<double>(() => SectionLikelihood.Evaluate(IndicatrixPrior.Broad(Observation), Observation, 0, 0).LogLikelihood);
             var observation = Observation;
@@ -29,7 +29,8 @@ public sealed record AnalysedSheet
             var analysed = Series;
             var character = Character;
             SeriesShown = new Lazy<RotationSeriesResult>(() => SeriesAsRead.Weighed(analysed,
-                RotationSeriesAnalysis.EveryCharacter(r.Steps, r.ReadingPrecision, r.CalibrationOffset), character.Value));
+                RotationSeriesAnalysis.EveryCharacter(r.Steps, r.ReadingPrecision, r.CalibrationOffset)?.Select(i => RotationSeriesAnalysis.ReadAgainst(i, r.LiquidLimit)).ToList(),
+                character.Value));
         }
     }
 

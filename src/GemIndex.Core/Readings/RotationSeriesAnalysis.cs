@@ -351,6 +351,30 @@ public static class RotationSeriesAnalysis
 
     private static RefractiveIndex Index(double value, double sigma) => new(value, sigma);
 
+    /// <summary>
+    /// A series read against a contact liquid of index <paramref name="liquidLimit"/>: an interpretation whose fitted
+    /// highest index (ε, γ: the extreme of the harmonic through the moving edge) lies above the liquid is marked and said
+    /// as "above the liquid", its birefringence as the least the readings show. A high edge passing the liquid at some
+    /// steps otherwise came out as "γ 1.796" beside a 1.79 liquid, as if read.
+    /// </summary>
+    public static RotationSeriesResult ReadAgainst(RotationSeriesResult series, double liquidLimit) =>
+        series with { Interpretations = [.. series.Interpretations.Select(i => ReadAgainst(i, liquidLimit))] };
+
+    /// <summary>One interpretation as <see cref="ReadAgainst(RotationSeriesResult, double)"/> reads it.</summary>
+    public static SeriesInterpretation ReadAgainst(SeriesInterpretation i, double liquidLimit)
+    {
+        if (!(i.Highest.Value > liquidLimit) || i.Character is not (OpticCharacter.Uniaxial or OpticCharacter.Biaxial)) return i;
+        string name = i.Character == OpticCharacter.Biaxial ? "γ" : "ε";
+        string fitted = $"{name} {F(i.Highest.Value)}", birefringence = $"birefringence {Difference(i.Highest.Value, i.Lowest.Value)}";
+        return i with
+        {
+            AboveLiquidLimit = liquidLimit,
+            Description = i.Description
+                .Replace(fitted, $"{name} above the liquid {F(liquidLimit)} (about {F(i.Highest.Value)} by the fitted edge)", StringComparison.Ordinal)
+                .Replace(birefringence, $"birefringence at least {Difference(liquidLimit, i.Lowest.Value)}", StringComparison.Ordinal),
+        };
+    }
+
     private static string F(double v) => v.ToString("0.000", CultureInfo.InvariantCulture);
 
     /// <summary>A birefringence in words: the difference of the two indices as shown beside it (<see cref="Birefringence.OfShownIndices"/>).</summary>

@@ -40,6 +40,12 @@ public sealed record SeriesInterpretation
     /// </summary>
     public double SamplingShortfall { get; init; }
 
+    /// <summary>
+    /// The contact liquid's limit when <see cref="Highest"/> is a fitted estimate above it: no edge can be read there, so
+    /// the series shows only that the index lies above the liquid (null: the highest index lies within the scale).
+    /// </summary>
+    public double? AboveLiquidLimit { get; init; }
+
     /// <summary>The interpretation in plain words, with numbers.</summary>
     public required string Description { get; init; }
 }

@@ -123,6 +123,7 @@ internal static class JsonReport
             Number(w, "lowest_index", i.Lowest);
             Number(w, "beta_index", i.Beta);
             Number(w, "highest_index", i.Highest);
+            Number(w, "highest_above_liquid_limit", i.AboveLiquidLimit);
             Number(w, "birefringence", i.Birefringence);
             Number(w, "birefringence_uncertainty", i.BirefringenceUncertainty);
             w.WriteString("description", i.Description);

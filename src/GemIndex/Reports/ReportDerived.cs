@@ -15,10 +15,11 @@ internal static class ReportDerived
         if (report.Interpretations.Count > 0 && report.Interpretations[0] is var best)
         {
             yield return new("indices", "Refractive indices (most likely reading)",
-                Indices(best.Character == "uniaxial", SignText(report), best.Lowest, best.Highest, best.Beta));   // ω and ε only under a settled sign
-            // The difference of the indices shown on the line above, so the two lines add up.
-            yield return new("birefringence", "Birefringence", ReportNumbers.WithUncertainty(
-                Core.Optics.Birefringence.OfShownIndices(best.Highest, best.Lowest), best.BirefringenceUncertainty, "0.000"));
+                Indices(best.Character == "uniaxial", SignText(report), best.Lowest, best.Highest, best.Beta, best.AboveLiquidLimit));   // ω and ε only under a settled sign
+            // The difference of the indices shown on the line above, so the two lines add up; past the liquid, the least.
+            yield return new("birefringence", "Birefringence", best.AboveLiquidLimit is { } limit
+                ? AtLeast(best.Lowest, limit, best.Highest)
+                : ReportNumbers.WithUncertainty(Core.Optics.Birefringence.OfShownIndices(best.Highest, best.Lowest), best.BirefringenceUncertainty, "0.000"));
             yield return new("optic_sign", "Optic sign", SignText(report));
         }
         if (report.SpecificGravity is { } sg)
@@ -31,12 +32,22 @@ internal static class ReportDerived
     /// The principal indices of one reading of a series by their names: α, β, γ; ω and ε for a uniaxial reading whose
     /// sign is settled ("positive" or "negative": ω the constant edge); else the lowest and highest, or the one index.
     /// </summary>
-    public static string Indices(bool uniaxial, string sign, double lowest, double highest, double? beta) =>
-        beta is { } b ? $"α {ReportNumbers.Index(lowest)}, β {ReportNumbers.Index(b)}, γ {ReportNumbers.Index(highest)}"
-        : lowest == highest ? ReportNumbers.Index(lowest)
-        : uniaxial && sign == "positive" ? $"ω {ReportNumbers.Index(lowest)}, ε {ReportNumbers.Index(highest)}"
-        : uniaxial && sign == "negative" ? $"ω {ReportNumbers.Index(highest)}, ε {ReportNumbers.Index(lowest)}"
-        : $"{ReportNumbers.Index(lowest)} to {ReportNumbers.Index(highest)}";
+    public static string Indices(bool uniaxial, string sign, double lowest, double highest, double? beta, double? aboveLiquidLimit = null)
+    {
+        // A highest index fitted above the contact liquid was never read: it is said as lying above the liquid.
+        string high = aboveLiquidLimit is { } limit
+            ? $"above the liquid {ReportNumbers.Index(limit)} (about {ReportNumbers.Index(highest)})"
+            : ReportNumbers.Index(highest);
+        return beta is { } b ? $"α {ReportNumbers.Index(lowest)}, β {ReportNumbers.Index(b)}, γ {high}"
+            : lowest == highest ? ReportNumbers.Index(lowest)
+            : uniaxial && sign == "positive" ? $"ω {ReportNumbers.Index(lowest)}, ε {high}"
+            : uniaxial && sign == "negative" ? $"ω {high}, ε {ReportNumbers.Index(lowest)}"
+            : $"{ReportNumbers.Index(lowest)} to {high}";
+    }
+
+    /// <summary>The birefringence of a reading whose highest index lies above the liquid: at least the liquid less the lowest.</summary>
+    public static string AtLeast(double lowest, double liquidLimit, double fittedHighest) =>
+        $"at least {ReportNumbers.Index(Core.Optics.Birefringence.OfShownIndices(liquidLimit, lowest))} (about {ReportNumbers.Index(Core.Optics.Birefringence.OfShownIndices(fittedHighest, lowest))} by the fitted edge)";
 
     /// <summary>A reading is called settled when it carries at least this share of the weight (a judgement).</summary>
     private const double SettledShare = 0.9;

@@ -11,7 +11,7 @@ namespace GemIndex.Cli.Reports;
 /// <param name="BirefringenceUncertainty">Its standard uncertainty.</param>
 /// <param name="Description">The interpretation in words, from Core.</param>
 internal sealed record ReportInterpretation(string Character, string Sign, double Weight, double Lowest, double Highest, double? Beta,
-    double Birefringence, double BirefringenceUncertainty, string Description)
+    double Birefringence, double BirefringenceUncertainty, string Description, double? AboveLiquidLimit = null)
 {
     /// <summary>The character word of a reading the series leaves open (it has no sign to give).</summary>
     public const string Undetermined = "undetermined";

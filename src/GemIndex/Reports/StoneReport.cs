@@ -107,7 +107,7 @@ internal sealed record StoneReport
 
     private static ReportInterpretation Interpretation(SeriesInterpretation i) => new(
         i.Character is { } c ? Word(c.ToString()) : ReportInterpretation.Undetermined, Word(i.Sign.ToString()), i.Weight,
-        i.Lowest.Value, i.Highest.Value, i.Beta?.Value, i.Birefringence.Value, i.Birefringence.StandardUncertainty, i.Description);
+        i.Lowest.Value, i.Highest.Value, i.Beta?.Value, i.Birefringence.Value, i.Birefringence.StandardUncertainty, i.Description, i.AboveLiquidLimit);
 
     /// <summary>Shown for a description field left empty.</summary>
     public const string NotRecorded = "not recorded";

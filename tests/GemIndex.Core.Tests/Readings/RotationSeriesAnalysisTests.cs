@@ -33,6 +33,30 @@ public class RotationSeriesAnalysisTests
     }
 
     [Fact]
+    public void A_high_edge_fitted_above_the_contact_liquid_is_said_as_above_it_not_as_read()
+    {
+        // Epidote-like edges (invented readings): the high edge passes a 1.79 liquid at 60° and 90° and is read elsewhere.
+        // The fitted γ (about 1.796) lies above the liquid: the reading says so, and the birefringence is at least
+        // 1.790 − α; read against a 1.81 liquid nothing changes.
+        ShadowEdgeStep[] steps = [new(0, 1.733, 1.770), new(30, 1.738, 1.781), new(60, 1.742, null), new(90, 1.745, null), new(120, 1.740, 1.786), new(150, 1.735, 1.776)];
+        var analysed = RotationSeriesAnalysis.Analyse(steps, 0.001);
+        SeriesInterpretation fitted = analysed.Interpretations[0];
+        Assert.True(fitted.Highest.Value > 1.79, $"fitted highest {fitted.Highest.Value}");
+        var read = RotationSeriesAnalysis.ReadAgainst(analysed, 1.79);
+        Assert.All(read.Interpretations, i =>
+        {
+            Assert.Equal(1.79, i.AboveLiquidLimit);
+            Assert.Contains("γ above the liquid 1.790 (about ", i.Description);
+            Assert.Contains($"birefringence at least {1.790 - i.Lowest.Value:0.000}", i.Description);
+            Assert.Equal(fitted.Highest, i.Highest);   // the estimate is kept for the ranking's summaries; only its words change
+        });
+        Assert.All(RotationSeriesAnalysis.ReadAgainst(analysed, 1.81).Interpretations, i => Assert.Null(i.AboveLiquidLimit));
+        // A uniaxial series read well below the liquid is left as it was.
+        var quartz = RotationSeriesAnalysis.Analyse([new(0, 1.544, 1.553), new(45, 1.544, 1.551), new(90, 1.544, 1.548), new(135, 1.544, 1.550)], 0.001);
+        Assert.Equal(quartz.Interpretations.Select(i => i.Description), RotationSeriesAnalysis.ReadAgainst(quartz, 1.79).Interpretations.Select(i => i.Description));
+    }
+
+    [Fact]
     public void Corundum_reads_uniaxial_negative_with_omega_1_770()
     {
         // Corundum ω 1.770, ε 1.762, uniaxial − (common practice, from memory).

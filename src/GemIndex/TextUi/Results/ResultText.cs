@@ -178,8 +178,9 @@ internal static class ResultText
         bool single = best.Beta is null && best.Lowest.Value == best.Highest.Value;
         // ω and ε only under a settled sign: which edge is ω is the sign.
         yield return (single ? "Refractive index: " : "Refractive indices: ") + GemIndex.Cli.Reports.ReportDerived.Indices(best.Character == OpticCharacter.Uniaxial,
-            Sign(s) ?? "", best.Lowest.Value, best.Highest.Value, best.Beta?.Value) + (best.Beta is not null ? TwoV(best) : "");
-        if (best.Birefringence.Value > 0) yield return $"Birefringence: {Index(GemIndex.Core.Optics.Birefringence.OfShownIndices(best.Highest.Value, best.Lowest.Value))}";
+            Sign(s) ?? "", best.Lowest.Value, best.Highest.Value, best.Beta?.Value, best.AboveLiquidLimit) + (best.Beta is not null && best.AboveLiquidLimit is null ? TwoV(best) : "");
+        if (best.AboveLiquidLimit is { } limit) yield return "Birefringence: " + GemIndex.Cli.Reports.ReportDerived.AtLeast(best.Lowest.Value, limit, best.Highest.Value);
+        else if (best.Birefringence.Value > 0) yield return $"Birefringence: {Index(GemIndex.Core.Optics.Birefringence.OfShownIndices(best.Highest.Value, best.Lowest.Value))}";
         if (Sign(s) is { } sign) yield return "Optic sign: " + sign;
     }
 

@@ -336,6 +336,18 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void A_high_edge_above_the_liquid_is_said_so_in_the_readings_used_with_the_least_birefringence()
+    {
+        // Invented epidote-like steps whose high edge passes the default 1.79 liquid at 60° and 90°.
+        var form = new BenchModel();
+        foreach (var (rotation, low, high) in new[] { ("0", "1.733", "1.770"), ("30", "1.738", "1.781"), ("60", "1.742", ""), ("90", "1.745", ""), ("120", "1.740", "1.786"), ("150", "1.735", "1.776") })
+            form.PutStep(form.Steps.Count, new StepText(rotation, low, high));
+        IReadOnlyList<string> derived = ResultText.Derived(new BenchAssessor(new Identifier(TestMaterials.All)).Assess(form.Snapshot()));
+        Assert.Contains(derived, l => l.StartsWith("Refractive indices: α 1.733, ", StringComparison.Ordinal) && l.Contains("γ above the liquid 1.790 (about 1.79", StringComparison.Ordinal) && !l.Contains("2V", StringComparison.Ordinal));
+        Assert.Contains(derived, l => l.StartsWith("Birefringence: at least 0.057 (about 0.06", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void A_character_the_readings_rule_out_is_left_out_of_the_odds_not_shown_as_none()
     {
         // Quartz-like edges 1.544 and 1.553 (from memory): two edges apart rule out one index, so "singly refractive"
