@@ -65,6 +65,8 @@ public static class BenchField
     public const string Colour = "colour";
     /// <summary>How the stone is cut (faceted, cabochon, other): a faceted stone shows no star and no cat's-eye.</summary>
     public const string Cut = "cut";
+    /// <summary>How much light passes (transparent, translucent, opaque): an opaque stone cannot take the tests in transmitted light.</summary>
+    public const string Transparency = "transparency";
     /// <summary>Magnification features seen: vocabulary words separated like absorption lines (<see cref="BenchSyntax"/>).</summary>
     public const string FeaturesPresent = "magnification.present";
     /// <summary>Magnification features looked for and not seen, written the same way.</summary>
@@ -75,7 +77,7 @@ public static class BenchField
     [
         Id, Method, Spot, OverLimit, LiquidLimit, LightNm, Precision, CalibrationOffset, Sg, AirCt, WaterCt, WaterC, HeavyLiquids,
         Polariscope, Pleochroism, Dispersion, IndexAtB, IndexAtG, ThermalProbe, Electrical, UvLong, UvShort, Absorption, Colour,
-        Cut, FeaturesPresent, FeaturesAbsent,
+        Cut, Transparency, FeaturesPresent, FeaturesAbsent,
     ];
 
     /// <summary>The field of one rotation step (0 = the first).</summary>

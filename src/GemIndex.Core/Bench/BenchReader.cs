@@ -52,6 +52,7 @@ public static class BenchReader
                 AbsorptionLinesNanometres = Absorption(),
                 Colour = Colour(),
                 Cut = HasError(BenchField.Cut) ? null : cut,
+                Transparency = Word<StoneTransparency>(BenchField.Transparency),
                 Magnification = magnification,
             };
             return new BenchReading { Sheet = sheet, Errors = [.. _errors.OrderBy(e => Order(e.Field)).ThenBy(e => e.Field, StringComparer.Ordinal)] };

@@ -55,6 +55,9 @@ public sealed record BenchSheet
     /// <summary>How the stone is cut; a faceted cut puts the star and the cat's-eye among the features not seen (<see cref="Magnification"/>).</summary>
     public StoneCut? Cut { get; init; }
 
+    /// <summary>How much light passes through the stone; an opaque stone is advised no test in transmitted light.</summary>
+    public StoneTransparency? Transparency { get; init; }
+
     /// <summary>True when the sheet holds at least one test's reading (colour and magnification aside).</summary>
     public bool HasTestReadings => Refractometer is not null || SpecificGravity is not null || HeavyLiquids.Count > 0 || Polariscope is not null
         || Pleochroism is not null || Dispersion is not null || ThermalProbe is not null || Electrical is not null || UvLong is not null

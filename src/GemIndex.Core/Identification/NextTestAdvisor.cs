@@ -155,6 +155,13 @@ public static class NextTestAdvisor
     /// largest gain, joined by a second when looking for both adds at least <see cref="MinimumGainBits"/> (features are
     /// independent given the material, as in the likelihood, so the pair's outcomes are the four seen/not-seen pairs).
     /// </summary>
+    /// <summary>
+    /// What a loupe can find on an opaque stone: everything but the inclusions and the growth features seen through the
+    /// stone (colour banding shows on its surface too; common practice).
+    /// </summary>
+    internal static bool SeenOnTheSurface(MagnificationFeatureInfo feature) =>
+        feature.Group is not (FeatureGroup.Inclusion or FeatureGroup.Growth) || feature.Feature == MagnificationFeature.ColourBanding;
+
     private static (MagnificationFeature[] Features, double Gain)? Look(BenchSheet sheet, List<(Material Material, double P)> candidates, OutcomeTables[] tables,
         List<Group>? groups)
     {
@@ -162,7 +169,8 @@ public static class NextTestAdvisor
         var done = sheet.Magnification is { } m ? m.Present.Concat(m.Absent).ToHashSet() : [];
         var open = new List<int>();
         for (int f = 0; f < MagnificationVocabulary.All.Count; f++)
-            if (!done.Contains(MagnificationVocabulary.All[f].Feature)) open.Add(f);
+            if (!done.Contains(MagnificationVocabulary.All[f].Feature) && (sheet.Transparency != StoneTransparency.Opaque || SeenOnTheSurface(MagnificationVocabulary.All[f])))
+                open.Add(f);
         if (open.Count == 0) return null;
         // Of equal gains the first is kept (as MaxBy does).
         int first = open[0];
@@ -254,16 +262,19 @@ public static class NextTestAdvisor
     /// <summary>Indices into <see cref="Tests"/> of the tests not on the sheet.</summary>
     private static IEnumerable<int> TestsNotDone(BenchSheet s, bool immersionUnsafe)
     {
+        // An opaque stone lets no light through: the polariscope, the dichroscope, fire and the hand spectroscope
+        // (transmitted light) have nothing to show, whatever the candidates would show in a clear piece.
+        bool lightPasses = s.Transparency != StoneTransparency.Opaque;
         if (s.Refractometer is null) yield return 0;
         if (s.SpecificGravity is null && s.HeavyLiquids.Count == 0 && !immersionUnsafe) yield return 1;
-        if (s.Polariscope is null) yield return 2;
-        if (s.Pleochroism is null) yield return 3;
-        if (s.Dispersion is null) yield return 4;
+        if (s.Polariscope is null && lightPasses) yield return 2;
+        if (s.Pleochroism is null && lightPasses) yield return 3;
+        if (s.Dispersion is null && lightPasses) yield return 4;
         if (s.ThermalProbe is null) yield return 5;
         if (s.Electrical is null) yield return 6;
         if (s.UvLong is null) yield return 7;
         if (s.UvShort is null) yield return 8;
-        if (s.AbsorptionLinesNanometres is null) yield return 9;
+        if (s.AbsorptionLinesNanometres is null && lightPasses) yield return 9;
     }
 
     /// <summary>

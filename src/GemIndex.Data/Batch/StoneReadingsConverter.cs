@@ -28,7 +28,7 @@ public static class StoneReadingsConverter
         if (s.DispersionIndices is { } d) r = r.With(BenchField.IndexAtB, Number(d.NB)).With(BenchField.IndexAtG, Number(d.NG));
         r = r.With(BenchField.Polariscope, s.Polariscope).With(BenchField.Pleochroism, s.Pleochroism).With(BenchField.Dispersion, s.Dispersion)
             .With(BenchField.ThermalProbe, s.ThermalProbe).With(BenchField.Electrical, s.Electrical).With(BenchField.UvLong, s.UvLong)
-            .With(BenchField.UvShort, s.UvShort).With(BenchField.Colour, s.Colour).With(BenchField.Cut, s.Cut);
+            .With(BenchField.UvShort, s.UvShort).With(BenchField.Colour, s.Colour).With(BenchField.Cut, s.Cut).With(BenchField.Transparency, s.Transparency);
         if (s.AbsorptionNm is { } lines) r = r.With(BenchField.Absorption, BenchSyntax.Lines(lines.Select(l => Number(l)!)));
         if (s.FeaturesPresent.Count > 0) r = r.With(BenchField.FeaturesPresent, BenchSyntax.Features(s.FeaturesPresent));
         if (s.FeaturesAbsent.Count > 0) r = r.With(BenchField.FeaturesAbsent, BenchSyntax.Features(s.FeaturesAbsent));
@@ -107,6 +107,7 @@ public static class StoneReadingsConverter
             AbsorptionNm = lines,
             Colour = r.Text(BenchField.Colour),
             Cut = r.Text(BenchField.Cut),
+            Transparency = r.Text(BenchField.Transparency),
             FeaturesPresent = [.. BenchSyntax.Features(r.Text(BenchField.FeaturesPresent) ?? "")],
             FeaturesAbsent = [.. BenchSyntax.Features(r.Text(BenchField.FeaturesAbsent) ?? "")],
         };

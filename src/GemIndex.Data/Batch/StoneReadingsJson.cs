@@ -128,7 +128,7 @@ public static class StoneReadingsJson
                 }
                 r = r.With(BenchField.HeavyLiquids, BenchSyntax.HeavyLiquids(texts));
             }
-            foreach (string word in new[] { BenchField.Polariscope, BenchField.Pleochroism, BenchField.ThermalProbe, BenchField.Electrical, BenchField.UvLong, BenchField.UvShort, BenchField.Colour, BenchField.Cut })
+            foreach (string word in new[] { BenchField.Polariscope, BenchField.Pleochroism, BenchField.ThermalProbe, BenchField.Electrical, BenchField.UvLong, BenchField.UvShort, BenchField.Colour, BenchField.Cut, BenchField.Transparency })
                 r = r.With(word, Value(root, word, word));
             if (Child(root, BenchField.Dispersion) is { } dispersion)
             {
@@ -326,6 +326,7 @@ public static class StoneReadingsJson
             }
             WriteWord(w, BenchField.Colour, r.Colour);
             WriteWord(w, BenchField.Cut, r.Cut);
+            WriteWord(w, BenchField.Transparency, r.Transparency);
             if (r.FeaturesPresent.Count > 0 || r.FeaturesAbsent.Count > 0)
             {
                 w.WriteStartObject(Magnification);

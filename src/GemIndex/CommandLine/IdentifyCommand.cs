@@ -37,6 +37,7 @@ internal static class IdentifyCommand
         ("--lines", BenchField.Absorption, "Absorption lines seen, nm, separated by spaces or commas (\"none\" if none)"),
         ("--colour", BenchField.Colour, "The colour in plain words, e.g. yellow, \"bluish green\" (the last hue named is the colour; an -ish word only tones it)"),
         ("--cut", BenchField.Cut, BenchWords.Choices<Core.Observations.StoneCut>() + "; a faceted stone shows no star or cat's-eye"),
+        ("--transparency", BenchField.Transparency, BenchWords.Choices<Core.Observations.StoneTransparency>() + "; an opaque stone is advised no test in transmitted light"),
     ];
 
     public static Command Create(Option<DirectoryInfo?> catalogueDirectory)

@@ -65,6 +65,20 @@ public class BenchReaderTests
         Assert.Null(reading.Sheet.SpecificGravity);
     }
 
+    [Theory]
+    [InlineData("opaque", StoneTransparency.Opaque)]
+    [InlineData("Translucent", StoneTransparency.Translucent)]
+    [InlineData("transparent", StoneTransparency.Transparent)]
+    public void The_transparency_is_read_as_one_of_three_words(string word, StoneTransparency expected)
+    {
+        var reading = BenchReader.Read(R((BenchField.Transparency, word)));
+        Assert.Empty(reading.Errors);
+        Assert.Equal(expected, reading.Sheet.Transparency);
+        BenchFieldError error = Assert.Single(BenchReader.Read(R((BenchField.Transparency, "cloudy"))).Errors);
+        Assert.Equal(BenchField.Transparency, error.Field);
+        Assert.Equal("transparent | translucent | opaque", error.Allowed);
+    }
+
     [Fact]
     public void Every_bad_field_is_reported_at_once_with_its_name_value_range_and_sentence()
     {

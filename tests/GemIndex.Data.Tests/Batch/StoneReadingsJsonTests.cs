@@ -29,6 +29,7 @@ public class StoneReadingsJsonTests
         from present in Gen.Elements<List<string>>([], ["curved_striae", "round_bubbles"], ["flux_residue"])
         from absent in Gen.Elements<List<string>>([], ["needles_silk"], ["chevron_growth", "healed_fractures"])
         from cut in Gen.Elements<string?>(null, "faceted", "cabochon", "other")
+        from transparency in Gen.Elements<string?>(null, "transparent", "translucent", "opaque")
         select new StoneReadings
         {
             Id = id,
@@ -42,6 +43,7 @@ public class StoneReadingsJsonTests
             FeaturesPresent = present,
             FeaturesAbsent = absent,
             Cut = cut,
+            Transparency = transparency,
         };
 
     [FsCheck.Xunit.Property(MaxTest = 200)]

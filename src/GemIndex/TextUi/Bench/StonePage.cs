@@ -7,7 +7,10 @@ internal sealed class StonePage : BenchPage
     public const string ExaminerNote = "  on every report from this workbook";
 
     /// <summary>Under the stone's fields: which of them the answer weighs (the others describe the stone in its report).</summary>
-    public const string WeighedNote = "  the answer uses cut and colour only";
+    public const string WeighedNote = "  the answer uses cut and colour;";
+
+    /// <summary>The second line of <see cref="WeighedNote"/>: what the transparency does.</summary>
+    public const string TransparencyNote = "  'opaque' drops light-through tests";
 
     public StonePage() : base("Stone", FieldKeys)
     {
@@ -21,6 +24,7 @@ internal sealed class StonePage : BenchPage
         AddField(BenchFields.Transparency, "Transparency", 20);
         AddField(BenchFields.Notes, "Notes", 24);
         AddNote(WeighedNote);
+        AddNote(TransparencyNote);
         AddNote();
         AddField(BenchFields.Examiner, "Examiner", 24);
         AddNote(ExaminerNote);
