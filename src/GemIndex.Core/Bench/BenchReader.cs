@@ -239,6 +239,15 @@ public static class BenchReader
             catch (QuantityOutOfRangeException e) { Error(BenchField.WaterCt, water, e.Allowed, e.Message); return null; }
         }
 
+        /// <summary>"float", "sink" and "suspend" as a bench note writes them: the outcome words they mean.</summary>
+        private static string PlainVerb(string result) => result.Trim().ToLowerInvariant() switch
+        {
+            "float" => "floats",
+            "sink" => "sinks",
+            "suspend" or "suspended" => "suspends",
+            _ => result,
+        };
+
         private List<HeavyLiquidResult> HeavyLiquids()
         {
             var results = new List<HeavyLiquidResult>();
@@ -254,7 +263,7 @@ public static class BenchReader
                 { Error(BenchField.HeavyLiquids, entry, allowed, $"{which}'{BenchText.Shown(entry)}' is not a density and a result (e.g. 3.32 floats)."); continue; }
                 if (!BenchNumber.TryParse(parts.Density, out double density, out string problem))
                 { Error(BenchField.HeavyLiquids, entry, allowed, which + Sentence(problem, parts.Density)); continue; }
-                if (BenchWords.Parse<HeavyLiquidOutcome>(parts.Result) is not { } outcome)
+                if (BenchWords.Parse<HeavyLiquidOutcome>(PlainVerb(parts.Result)) is not { } outcome)
                 { Error(BenchField.HeavyLiquids, entry, allowed, $"{which}'{BenchText.Shown(parts.Result)}' is not one of {BenchWords.Choices<HeavyLiquidOutcome>()}."); continue; }
                 if (Checked(BenchField.HeavyLiquids, entry, () => HeavyLiquidResult.Of(density, outcome)) is { } result) results.Add(result);
             }

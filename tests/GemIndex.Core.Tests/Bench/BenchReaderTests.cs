@@ -65,6 +65,17 @@ public class BenchReaderTests
         Assert.Null(reading.Sheet.SpecificGravity);
     }
 
+    [Fact]
+    public void A_heavy_liquid_result_may_be_written_as_the_plain_verb()
+    {
+        // "3.32 float; 2.89 sink" as a bench note writes it: the same as floats and sinks.
+        var plain = BenchReader.Read(R((BenchField.HeavyLiquids, "3.32 float; 2.89 sink; 3.05 suspend")));
+        var usual = BenchReader.Read(R((BenchField.HeavyLiquids, "3.32 floats; 2.89 sinks; 3.05 suspends")));
+        Assert.Empty(plain.Errors);
+        Assert.Equal(usual.Sheet.HeavyLiquids, plain.Sheet.HeavyLiquids);
+        Assert.Single(BenchReader.Read(R((BenchField.HeavyLiquids, "3.32 hovers"))).Errors);
+    }
+
     [Theory]
     [InlineData("opaque", StoneTransparency.Opaque)]
     [InlineData("Translucent", StoneTransparency.Translucent)]
