@@ -34,7 +34,7 @@ internal sealed class StoneListView : FullScreenDialog
             long? id = Selected;
             if (key == Key.Enter && id is not null) { Chosen = id; App!.RequestStop(); }
             else if (key == Key.N.WithCtrl) { WantsNew = true; App!.RequestStop(); }
-            else if (key == Key.D.WithCtrl && id is { } d) { duplicate(d); Reload(); }
+            else if (key == Key.D.WithCtrl && id is { } d) Reload(select: duplicate(d));   // the copy, to open or rename next
             else if (key == Key.F3 && id is { } h) Main.TextScreen.Show(App!, "Edit history", string.Join('\n', history(h)));
             // The last button is the default: Enter keeps the stone; deleting takes Tab or D. The list stays in view after.
             else if (key == Key.Delete && sender == List && id is { } x && MessageBox.Query(App!, "Delete stone",
@@ -60,12 +60,13 @@ internal sealed class StoneListView : FullScreenDialog
 
     private long? Selected => List.SelectedItem is { } i && i < _model.Shown.Count ? _model.Shown[i].Id : null;
 
-    private void Reload()
+    private void Reload(long? select = null)
     {
         int at = List.SelectedItem ?? 0;
         _model.Refresh();
         Fill();
-        if (_rows.Count > 0) List.SelectedItem = Math.Min(at, _rows.Count - 1);
+        int shown = select is { } id ? _model.Shown.ToList().FindIndex(s => s.Id == id) : -1;
+        if (_rows.Count > 0) List.SelectedItem = shown >= 0 ? shown : Math.Min(at, _rows.Count - 1);
         List.SetFocus();
     }
 

@@ -1,0 +1,45 @@
+using GemIndex.Cli.TextUi.Stones;
+using GemIndex.Data.Workbook;
+using GemIndex.Tests.TextUi.Main;
+using Terminal.Gui.App;
+using Terminal.Gui.Input;
+using Terminal.Gui.Testing;
+
+namespace GemIndex.Tests.TextUi.Stones;
+
+/// <summary>The list of stones (F8) drawn headless, on a workbook of invented stones.</summary>
+[Collection(Headless.Collection)]
+public sealed class StoneListViewTests : IDisposable
+{
+    private readonly string _path = Path.Combine(Path.GetTempPath(), "gemindex-list-" + Guid.NewGuid().ToString("N") + ".db");
+    private readonly StoneWorkbook _workbook;
+
+    public StoneListViewTests() => _workbook = StoneWorkbook.Open(_path, TimeProvider.System, WorkbookOpening.CreateIfMissing);
+
+    public void Dispose()
+    {
+        _workbook.Dispose();
+        foreach (string f in new[] { _path, _path + "-wal", _path + "-shm" }) File.Delete(f);
+    }
+
+    [Fact]
+    public void A_duplicated_stone_is_selected_so_that_Enter_opens_the_copy()
+    {
+        foreach (string reference in new[] { "lot A", "lot B", "lot C" }) _workbook.Create(new StoneSheet { Reference = reference });
+        using IApplication app = Headless.Start();
+        var model = new StoneListModel(q => _workbook.List(q));
+        using var view = new StoneListView(model, id => _workbook.Duplicate(id).Id, id => _workbook.Delete(id), _ => [], a => a());
+        SessionToken token = app.Begin(view)!;
+        view.List.SetFocus();
+        view.List.SelectedItem = 1;
+        long original = model.Shown[1].Id;
+        app.InjectKey(Key.D.WithCtrl);
+        long selected = model.Shown[view.List.SelectedItem!.Value].Id;
+        Assert.NotEqual(original, selected);
+        Assert.Equal(4, model.Shown.Count);
+        Assert.Equal(_workbook.Get(original)!.Reference + " (copy)", _workbook.Get(selected)!.Reference);
+        app.InjectKey(Key.Enter);
+        Assert.Equal(selected, view.Chosen);
+        app.End(token);
+    }
+}
