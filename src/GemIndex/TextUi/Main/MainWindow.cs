@@ -190,10 +190,27 @@ internal sealed class MainWindow : Window
         return line;
     }
 
+    /// <summary>The page and the view that had the cursor when F10 went to the answer.</summary>
+    private (int Page, View? View) _leftAt = (-1, null);
+
+    /// <summary>From the answer back to the form: to the field left there, else the page's first field.</summary>
+    private void BackToTheForm()
+    {
+        if (_leftAt is (int page, { } view) && page == CurrentPage && view.Visible && view.CanFocus)
+        {
+            view.SetFocus();
+            ShowBars();
+        }
+        else ShowPage(CurrentPage);
+        _leftAt = (-1, null);
+    }
+
     /// <summary>F10: the cursor to the answer (on the selected candidate, or the first), or back to the form.</summary>
     public void ToggleAnswer()
     {
-        if (Results.HasFocus) { ShowPage(CurrentPage); return; }
+        if (Results.HasFocus) { BackToTheForm(); return; }
+        // The field left, to come back to: a look at the answer is no change of page.
+        _leftAt = (CurrentPage, Pages[CurrentPage].MostFocused);
         Results.List.SetFocus();
         if (Results.Rows.Count > 0 && (Results.List.SelectedItem is not { } row || Results.Rows[Math.Min(row, Results.Rows.Count - 1)].Candidate is null))
             Results.SelectCandidate(0);
@@ -343,7 +360,7 @@ internal sealed class MainWindow : Window
         else if (key == Key.F8) ShowStones();
         else if (key == Key.F9) ShowDetail(Results.SelectedCandidate);
         else if (key == Key.F10) ToggleAnswer();
-        else if (key == Key.Esc && Results.HasFocus) ShowPage(CurrentPage);
+        else if (key == Key.Esc && Results.HasFocus) BackToTheForm();
         else if (key == Key.E.WithCtrl) Export();
         else if (key == Key.N.WithCtrl) NewStone();
         else if (key == Key.Q.WithCtrl) App!.RequestStop();

@@ -397,6 +397,27 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void From_the_answer_F10_or_Esc_go_back_to_the_field_left_and_a_page_key_to_its_first_field()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F4);
+        var inWater = window.Gravity.WaterField.Edit;
+        inWater.SetFocus();
+        app.InjectKey(Key.F10);
+        Assert.True(window.Results.List.HasFocus);
+        app.InjectKey(Key.Esc);
+        Assert.Same(inWater, window.MostFocused);
+        app.InjectKey(Key.F10);
+        app.InjectKey(Key.F10);
+        Assert.Same(inWater, window.MostFocused);
+        // Another page is another matter: its first reading field, as always.
+        app.InjectKey(Key.F10);
+        app.InjectKey(Key.F3);
+        Assert.Same(window.Refractometer.Low, window.MostFocused);
+        Close(app, window, token);
+    }
+
+    [Fact]
     public void Below_80_by_24_the_window_says_it_is_too_small_instead_of_cutting_numbers()
     {
         var (app, window, token) = Open(60, 20);
