@@ -50,4 +50,15 @@ internal static class BenchFields
 
     /// <summary>The key of one rotation step's row.</summary>
     public static string Step(int index) => BenchField.Step(index);
+
+    /// <summary>The page key and name that holds a field, as the page bar shows it ("F4 SG"), for words that send the user there.</summary>
+    public static string PageOf(string field) => field switch
+    {
+        _ when field.StartsWith(BenchField.Readings, StringComparison.Ordinal) => "F3 RI",
+        Reference or Weight or Dimensions or Shape or CuttingStyle or Colour or Cut or Transparency or Notes or Examiner => "F2 Stone",
+        Spot or OverLimit or LiquidLimit or LightNm or Precision or CalibrationOffset or BenchField.Method or TextUi.Bench.RefractometerPage.RotationStepField => "F3 RI",
+        Sg or AirCt or WaterCt or WaterC or HeavyLiquids => "F4 SG",
+        FeaturesPresent or FeaturesAbsent => "^L Loupe",
+        _ => "F5 Tests",
+    };
 }

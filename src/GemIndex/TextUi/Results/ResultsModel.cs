@@ -66,7 +66,7 @@ internal sealed class ResultsModel
         }
         Text(ResultText.Lead(r));
         // A refused entry is left out of the answer: said at its top, so an answer is never read as using it.
-        if (a.Errors.Count > 0) Text([RefusedLine(a.Errors.Count)]);
+        if (a.Errors.Count > 0) Text([RefusedLine([.. a.Errors.Keys])]);
         if (TopWarning(r) is { } top) Text(["! " + Short(top)]);
         rows.Add(new AnswerRow(""));
         rows.Add(new AnswerRow(CandidatesHeading));
@@ -106,8 +106,14 @@ internal sealed class ResultsModel
         r.SpeciesConfidence(species) is { } total ? $"{species} {ResultText.Percent(total)}" : species;
 
     /// <summary>The answer's line for entries refused and left out of it.</summary>
-    public static string RefusedLine(int count) =>
-        count == 1 ? "! 1 entry refused and not used: see the entry marked '!'." : $"! {count} entries refused and not used: see the entries marked '!'.";
+    public static string RefusedLine(IReadOnlyCollection<string> fields)
+    {
+        // Where to look: the pages that hold them, in the page bar's order.
+        string[] order = ["F2 Stone", "F3 RI", "F4 SG", "F5 Tests", "^L Loupe"];
+        string pages = string.Join(", ", fields.Select(BenchFields.PageOf).Distinct().OrderBy(p => Array.IndexOf(order, p)));
+        return fields.Count == 1 ? $"! 1 entry refused and not used: see the entry marked '!' on {pages}."
+            : $"! {fields.Count} entries refused and not used: see the entries marked '!' on {pages}.";
+    }
 
     /// <summary>The words of the engine's warning that a species' origins cannot be told apart (the lead says it in its own words).</summary>
     public const string CannotBeSeparated = "cannot be separated by these tests";

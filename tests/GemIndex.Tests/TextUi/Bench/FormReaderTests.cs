@@ -22,3 +22,21 @@ public class FormReaderTests
         Assert.Equal(reading, FormReader.Read(form.Snapshot()).Text(BenchField.Transparency));
     }
 }
+
+public class BenchFieldsPageTests
+{
+    [Theory]
+    [InlineData(GemIndex.Cli.TextUi.Bench.BenchFields.WaterCt, "F4 SG")]
+    [InlineData("refractometer.readings[3]", "F3 RI")]
+    [InlineData(GemIndex.Cli.TextUi.Bench.BenchFields.LiquidLimit, "F3 RI")]
+    [InlineData(GemIndex.Cli.TextUi.Bench.BenchFields.Absorption, "F5 Tests")]
+    [InlineData(GemIndex.Cli.TextUi.Bench.BenchFields.Weight, "F2 Stone")]
+    [InlineData(GemIndex.Cli.TextUi.Bench.BenchFields.FeaturesAbsent, "^L Loupe")]
+    public void A_refused_entry_is_sent_to_the_page_that_holds_it(string field, string page)
+    {
+        Assert.Equal(page, GemIndex.Cli.TextUi.Bench.BenchFields.PageOf(field));
+        Assert.EndsWith($"on {page}.", GemIndex.Cli.TextUi.Results.ResultsModel.RefusedLine([field]));
+        Assert.Equal("! 2 entries refused and not used: see the entries marked '!' on F3 RI, F4 SG.",
+            GemIndex.Cli.TextUi.Results.ResultsModel.RefusedLine([GemIndex.Cli.TextUi.Bench.BenchFields.Sg, "refractometer.readings[0]"]));
+    }
+}

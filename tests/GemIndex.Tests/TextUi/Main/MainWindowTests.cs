@@ -620,7 +620,7 @@ public sealed class MainWindowTests : IDisposable
         Settle();
         app.LayoutAndDraw();
         string answer = System.Text.RegularExpressions.Regex.Replace(string.Join(" ", window.Results.Rows.Select(r => r.Text)), @"\s+", " ");
-        Assert.Contains(GemIndex.Cli.TextUi.Results.ResultsModel.RefusedLine(1), answer);
+        Assert.Contains("! 1 entry refused and not used: see the entry marked '!' on F4 SG.", answer);   // the page named
         Close(app, window, token);
     }
 
