@@ -38,6 +38,13 @@ public sealed record IdentificationResult
     /// <summary>What a bench user must know (misreadings, porous candidates, natural versus synthetic, …).</summary>
     public required IReadOnlyList<string> Warnings { get; init; }
 
+    /// <summary>
+    /// The entries to keep out of water and heavy liquids: every entry of the catalogue holding at least
+    /// <see cref="BenchWarnings.Relevant"/> that must not be immersed, most probable first; the "do not immerse" warning
+    /// names the same ones, so that every place that says it names the same stones.
+    /// </summary>
+    public IReadOnlyList<string> KeepDry { get; init; } = [];
+
     /// <summary>The leading species' origins these tests cannot separate, and the test that best would; null when they can.</summary>
     public InseparableOrigins? InseparableOrigins { get; init; }
 

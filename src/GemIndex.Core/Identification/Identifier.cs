@@ -430,6 +430,7 @@ public sealed class Identifier
                 group is { } open ? (open.Open, NextTestAdvisor.Advise(sheet, open.Entries, m => open.Open.IndexOf(m.Species))) : null,
                 // Cautions from every serious entry, shown or not.
                 [.. order.Where(i => posterior[i] >= BenchWarnings.Relevant).Select(i => (_materials[i], posterior[i]))]),
+            KeepDry = [.. order.Where(i => posterior[i] >= BenchWarnings.Relevant && _materials[i].DoNotImmerse).Select(i => _materials[i].Name)],
             InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
                 ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
             SeriesSource = analysed.SeriesShown,

@@ -12,9 +12,6 @@ namespace GemIndex.Cli.TextUi.Bench;
 /// </summary>
 internal sealed class BenchAssessor(Identifier? identifier)
 {
-    /// <summary>Candidates at or above this confidence count as "among the top ones" for the immersion caution.</summary>
-    public const double ImmersionCautionConfidence = 0.05;
-
     /// <summary>
     /// What the text UI asks for: the bad fields are shown at their places and the rest is ranked; every listed
     /// candidate can be opened, so every one has its reasons.
@@ -44,8 +41,7 @@ internal sealed class BenchAssessor(Identifier? identifier)
             Readings = StoneReadingsConverter.FromReadings(readings.WithoutRefused(outcome.Reading.Errors), lenient: true),
             SpecificGravity = outcome.Reading.Sheet.SpecificGravity,
             Result = result,
-            DoNotImmerse = result is null ? [] : [.. result.Candidates.Take(5)
-                .Where(c => c.Confidence >= ImmersionCautionConfidence && c.Material.DoNotImmerse).Select(c => c.Material.Name)],
+            DoNotImmerse = result?.KeepDry ?? [],   // the same stones as the answer's "do not immerse" warning
         };
     }
 

@@ -57,6 +57,19 @@ public class BenchAssessorTests
     }
 
     [Fact]
+    public void The_SG_pages_caution_names_the_same_stones_as_the_answers_do_not_immerse_warning()
+    {
+        // A natural opal's spot 1.45 and SG 2.00 (from memory) against the shipped catalogue: many opal entries, all porous.
+        var form = new BenchModel();
+        form.SetText(BenchFields.Spot, "1.45");
+        form.SetText(BenchFields.Sg, "2.00");
+        BenchAssessment a = new BenchAssessor(new Identifier(GemIndex.Data.Catalogue.ShippedCatalogue.Families.Materials)).Assess(form.Snapshot());
+        Assert.True(a.DoNotImmerse.Count > 5, string.Join(", ", a.DoNotImmerse));   // more than the top five candidates
+        string warning = Assert.Single(a.Result!.Warnings, w => w.Contains("do not immerse", StringComparison.Ordinal));
+        Assert.StartsWith($"Possible {BenchWarnings.Listed(a.DoNotImmerse)}: do not immerse", warning);
+    }
+
+    [Fact]
     public void The_readings_used_name_every_test_the_answer_weighed_not_only_the_numbers()
     {
         var form = QuartzForm();
