@@ -126,7 +126,7 @@ internal sealed class RefractometerPage : BenchPage
         _rows.Clear();
         _stepCount = steps.Count;
         for (int i = 0; i < steps.Count; i++)
-            _rows.Add($"{steps[i].Rotation,6}°  {steps[i].Low,-8}  {steps[i].High,-8}{(errors.ContainsKey(BenchFields.Step(i)) ? FormField.SeeBelow : "")}");   // the reason whole at the page's foot
+            _rows.Add($"{steps[i].Rotation,7}°  {steps[i].Low,-8}  {steps[i].High,-7}{(errors.ContainsKey(BenchFields.Step(i)) ? FormField.SeeBelow : "")}");   // the reason whole at the page's foot
         if (_rows.Count == 0) _rows.Add("(no steps yet: low high, then Enter)");
         else _rows.Add("(Enter edits, Del removes, ^Z undo)");
         if (selected is { } s) Grid.SelectedItem = Math.Min(s, _rows.Count - 1);

@@ -15,7 +15,7 @@ internal sealed class CatalogueBrowserView : FullScreenDialog
     public CatalogueBrowserView(CatalogueBrowserModel model)
     {
         _model = model;
-        Title = "Catalogue: a name, an index, an SG or both (1.544 2.65); Tab: list, entry; Esc closes";
+        Title = "Catalogue: name, index, SG or both (1.544 2.65); Tab list, entry; Esc closes";
         var label = new PlainLabel { Text = "Search:" };
         Search = new TextField { X = 8, Width = 24 };
         Count = new PlainLabel { X = Pos.Right(Search) + 2, Width = Dim.Fill() };

@@ -74,6 +74,12 @@ public sealed class MainWindowTests : IDisposable
         app.InjectKey(Key.Enter);
         app.LayoutAndDraw();
         Assert.Contains("0°  1.544     1.553", app.Driver!.ToString()!);
+        // The step's values stand under their headings.
+        string[] lines = app.Driver!.ToString()!.Split('\n');
+        string heading = lines.First(l => l.Contains("Rotation  Low edge  High edge", StringComparison.Ordinal));
+        string row = lines.First(l => l.Contains("0°  1.544", StringComparison.Ordinal));
+        Assert.Equal(heading.IndexOf("Low edge", StringComparison.Ordinal), row.IndexOf("1.544", StringComparison.Ordinal));
+        Assert.Equal(heading.IndexOf("High edge", StringComparison.Ordinal), row.IndexOf("1.553", StringComparison.Ordinal));
         app.InjectKey(Key.F4);
         Type(app, "2.65");
         Settle();
@@ -522,7 +528,7 @@ public sealed class MainWindowTests : IDisposable
         Settle();
         app.LayoutAndDraw();
         string screen = app.Driver!.ToString()!;
-        Assert.Matches(@"15°  1\.95      2\.0     ! see below│", screen);   // the step row says where its reason is
+        Assert.Matches(@" 15°  1\.95      2\.0    ! see below│", screen);   // the step row says where its reason is
         string page = FormText(screen);
         IReadOnlyDictionary<string, string> errors = _session.Results.Latest!.Errors;
         Assert.True(errors.Count >= 2);
