@@ -321,6 +321,13 @@ public static class EvidenceLikelihood
         if (acc.Explaining && aggregateOnly) acc.Say("cut faceted: a massive or granular material is seldom faceted (mostly cabochons, beads and carvings)");
     }
 
+    /// <summary>How many of an entry's colours a reason names: a glass of any colour lists twenty-two (the rest are counted).</summary>
+    internal const int ColoursNamed = 6;
+
+    private static string UsualColours(IReadOnlyList<string> colours) => colours.Count <= ColoursNamed
+        ? string.Join(", ", colours)
+        : string.Join(", ", colours.Take(ColoursNamed)) + $" and {colours.Count - ColoursNamed} more";
+
     private static void Thermal(Material m, ThermalProbeResult seen, EvidenceAccumulator acc)
     {
         double pPositive = ThermalPositive(m);
@@ -414,7 +421,7 @@ public static class EvidenceLikelihood
         double best = profile.ColourHues.Count == 0 ? f : profile.ColourFirstHue;
         acc.Add(BenchField.Colour, f, ColourWords.BroadProbability, Math.Min(1, f / best), robust: false, EvidenceAccumulator.ChromophoreGroup);
         if (acc.Explaining)
-            acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : string.Join(", ", m.Colours) + " usual, most usual first")}");
+            acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : UsualColours(m.Colours) + " usual, most usual first")}");
     }
 
     /// <summary>Up to this many standard uncertainties outside a range, a reading is said to lie within its uncertainty of it (two: the usual reading of a normal error).</summary>

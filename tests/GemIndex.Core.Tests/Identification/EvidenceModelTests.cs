@@ -42,6 +42,16 @@ public class EvidenceModelTests
     }
 
     [Fact]
+    public void A_colour_reason_names_the_first_colours_and_counts_the_rest()
+    {
+        // An invented catch-all of ten colours: the reason names six, most usual first, and counts four more.
+        string[] colours = ["green", "blue", "red", "yellow", "brown", "black", "white", "pink", "orange", "purple"];
+        var many = Entry("many", "many", QuartzIndices, colours: colours);
+        var reasons = EvidenceLikelihood.Evaluate(many, new AnalysedSheet(new BenchSheet { Colour = "green" }), explain: true).Contributions;
+        Assert.Contains(reasons, r => r.Text == "colour green; green, blue, red, yellow, brown, black and 4 more usual, most usual first");
+    }
+
+    [Fact]
     public void A_faceted_cut_weighs_against_a_material_met_only_as_an_aggregate_and_nothing_else()
     {
         // Massive rhodonite against transparent rhodonite and a glass (invented entries of one index range): a faceted
