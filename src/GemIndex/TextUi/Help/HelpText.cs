@@ -8,7 +8,7 @@ internal static class HelpText
         ("F1", "this help"),
         ("F2 F3 F4 F5", "stone sheet / refractometer / SG and liquids / other tests; each opens at its first reading"),
         ("Ctrl+L", "magnification (loupe or microscope): the features, grouped; opens on the first, with every feature listed"),
-        ("F10", "the cursor to the answer and back (Esc also returns); arrows and PgUp/PgDn scroll it"),
+        ("F10", "the cursor to the answer and back to the field left (Esc also returns); arrows and PgUp/PgDn scroll it"),
         ("F9, Enter", "on a candidate: its detail: reasons with their numbers, and its catalogue entry"),
         ("F6", "edge plot (two shadow edges against rotation)"),
         ("Ctrl+R", "scales: lowest index, birefringence and SG as read (with their uncertainty) against the ranges of the best entry of each leading species, then the next entries, each under its rank in the answer"),
