@@ -42,7 +42,7 @@ public sealed record StoneReadings
     /// <summary>The answers picked from a list of words, each with its field (Core's BenchField), in the order of the reading pages; null when not given.</summary>
     public IReadOnlyList<(string Field, string? Word)> ChoiceWords =>
     [
-        (BenchField.Cut, Cut), (BenchField.Transparency, Transparency), (BenchField.Polariscope, Polariscope), (BenchField.Pleochroism, Pleochroism), (BenchField.Dispersion, Dispersion),
+        (BenchField.Cut, Cut), (BenchField.Polariscope, Polariscope), (BenchField.Pleochroism, Pleochroism), (BenchField.Dispersion, Dispersion),
         (BenchField.ThermalProbe, ThermalProbe), (BenchField.Electrical, Electrical), (BenchField.UvLong, UvLong), (BenchField.UvShort, UvShort),
     ];
 }

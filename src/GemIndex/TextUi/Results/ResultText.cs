@@ -158,6 +158,7 @@ internal static class ResultText
         if (r.AbsorptionNm is { } lines)
             yield return lines.Count == 0 ? "Absorption: no lines" : "Absorption: " + string.Join(", ", lines.Select(n => n.ToString("0.#", CultureInfo.InvariantCulture))) + " nm";
         if (r.Colour is { } c) yield return $"Colour: {c}";
+        if (r.Transparency is { } light) yield return $"Transparency: {light}";
         if (r.FeaturesPresent.Count + r.FeaturesAbsent.Count > 0)
             yield return $"Loupe: {r.FeaturesPresent.Count} seen, {r.FeaturesAbsent.Count} looked for and not seen";
     }

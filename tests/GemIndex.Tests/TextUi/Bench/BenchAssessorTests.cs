@@ -57,6 +57,21 @@ public class BenchAssessorTests
     }
 
     [Fact]
+    public void A_stone_described_as_opaque_is_answered_and_its_transparency_listed_among_the_readings_used()
+    {
+        // The stone page's transparency description is a reading when it starts with one of the three words; the answer's
+        // lines must take it (a reading that is no one-key choice once stopped the text UI).
+        var form = QuartzForm();
+        form.SetText(BenchFields.Transparency, "opaque, waxy");
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.Equal("opaque", a.Readings.Transparency);
+        Assert.Contains("Transparency: opaque", ResultText.Derived(a));
+        var model = new ResultsModel();
+        Assert.True(model.Accept(a));
+        Assert.Contains(model.Rows(76), row => row.Text.Contains("Transparency: opaque", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void The_SG_pages_caution_names_the_same_stones_as_the_answers_do_not_immerse_warning()
     {
         // A natural opal's spot 1.45 and SG 2.00 (from memory) against the shipped catalogue: many opal entries, all porous.
