@@ -251,7 +251,7 @@ wait_for " no  needles and silk"
 wait_for "── looked for, not seen ─"
 keys Escape                               # the filter cleared: every feature listed again, with the counts
 wait_for "Type to find        1 seen, 1 not seen"
-wait_match "│1 flame-fusion synthetic"     # melt growth: the flame-fusion synthetic leads
+wait_match "│ ?1 flame-fusion synthetic"   # melt growth: the flame-fusion synthetic leads (rank " 1" when ten are listed)
 echo "---- 80x24 loupe ----"; screen
 keys C-q
 wait_for "EXIT=0" 15
