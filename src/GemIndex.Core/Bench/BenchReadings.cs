@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using GemIndex.Core.Identification;
 
 namespace GemIndex.Core.Bench;
 
@@ -39,6 +40,46 @@ public sealed record BenchReadings
             Values = Values.RemoveRange(fields),
             Steps = [.. Steps.Where((_, i) => !StepRefused(i))],
         };
+    }
+
+    /// <summary>
+    /// These readings as <paramref name="reading"/> (their reading by <see cref="BenchReader"/>) used them: without the
+    /// refused fields and steps, without every field of a test the reader left out whole (an SG typed beside weights
+    /// drops both; "over the limit" beside a high edge drops the refractometer; fire by eye beside measured indices drops
+    /// the dispersion), and with only the heavy-liquid entries it took. What is kept of a stone is then what its answer
+    /// was worked out on: ranked again, it gives the same answer.
+    /// </summary>
+    public BenchReadings AsUsedBy(BenchReading reading)
+    {
+        BenchReadings kept = WithoutRefused(reading.Errors);
+        BenchSheet s = reading.Sheet;
+        var drop = new List<string>();
+        void DropUnless(bool used, params string[] fields) { if (!used) drop.AddRange(fields); }
+        DropUnless(s.Refractometer is not null, BenchField.Method, BenchField.Spot, BenchField.OverLimit, BenchField.LiquidLimit,
+            BenchField.LightNm, BenchField.Precision, BenchField.CalibrationOffset);
+        DropUnless(s.SpecificGravity is not null, BenchField.Sg, BenchField.AirCt, BenchField.WaterCt, BenchField.WaterC);
+        DropUnless(s.Polariscope is not null, BenchField.Polariscope);
+        DropUnless(s.Pleochroism is not null, BenchField.Pleochroism);
+        DropUnless(s.Dispersion is not null, BenchField.Dispersion, BenchField.IndexAtB, BenchField.IndexAtG);
+        DropUnless(s.ThermalProbe is not null, BenchField.ThermalProbe);
+        DropUnless(s.Electrical is not null, BenchField.Electrical);
+        DropUnless(s.UvLong is not null, BenchField.UvLong);
+        DropUnless(s.UvShort is not null, BenchField.UvShort);
+        DropUnless(s.AbsorptionLinesNanometres is not null, BenchField.Absorption);
+        DropUnless(s.Colour is not null, BenchField.Colour);
+        DropUnless(s.Cut is not null, BenchField.Cut);
+        DropUnless(s.Transparency is not null, BenchField.Transparency);
+        DropUnless(s.Magnification is not null, BenchField.FeaturesPresent, BenchField.FeaturesAbsent);
+        var values = kept.Values.RemoveRange(drop);
+        // A bad heavy-liquid entry beside good ones drops only itself: each entry kept as typed if it reads alone.
+        if (Text(BenchField.HeavyLiquids) is { } liquids)
+        {
+            var taken = BenchSyntax.HeavyLiquidEntries(liquids)
+                .Where(e => BenchReader.Read(new BenchReadings().With(BenchField.HeavyLiquids, e)).Errors.Count == 0).ToList();
+            values = s.HeavyLiquids.Count == 0 || taken.Count == 0 ? values.Remove(BenchField.HeavyLiquids)
+                : values.SetItem(BenchField.HeavyLiquids, BenchSyntax.HeavyLiquids(taken));
+        }
+        return kept with { Values = values, Steps = s.Refractometer is null ? [] : kept.Steps };
     }
 
     /// <summary>Equal when every field and step is equal.</summary>

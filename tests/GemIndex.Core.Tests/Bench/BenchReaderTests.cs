@@ -48,6 +48,27 @@ public class BenchReaderTests
         Assert.Same(readings, readings.WithoutRefused([]));
     }
 
+    [Fact]
+    public void As_used_by_its_reading_a_stone_keeps_only_what_the_reader_took()
+    {
+        // An SG typed beside weights (both left out), a heavy liquid without a result beside a good one (the good one kept),
+        // fire by eye beside measured indices (both left out), a good polariscope answer (kept); quartz values from memory.
+        var readings = Steps(R((BenchField.Sg, "2.65"), (BenchField.AirCt, "3.5"), (BenchField.WaterCt, "2.5"),
+            (BenchField.HeavyLiquids, "2.89 sinks; 3.32 maybe"), (BenchField.Dispersion, "weak"), (BenchField.IndexAtB, "1.541"),
+            (BenchField.IndexAtG, "1.553"), (BenchField.Polariscope, "doubly refractive")), "0:1.544/1.553");
+        var reading = BenchReader.Read(readings);
+        BenchReadings used = readings.AsUsedBy(reading);
+        var again = BenchReader.Read(used);
+        Assert.Empty(again.Errors);
+        Assert.Equal(reading.Sheet.ToString(), again.Sheet.ToString());
+        Assert.Equal(reading.Sheet.HeavyLiquids, again.Sheet.HeavyLiquids);
+        Assert.Equal("2.89 sinks", used.Text(BenchField.HeavyLiquids));
+        Assert.All(new[] { BenchField.Sg, BenchField.AirCt, BenchField.WaterCt, BenchField.Dispersion, BenchField.IndexAtB, BenchField.IndexAtG },
+            f => Assert.Null(used.Text(f)));
+        Assert.Equal("doubly refractive", used.Text(BenchField.Polariscope));
+        Assert.Single(used.Steps);
+    }
+
     [Theory]
     // Each weighing fault on its own field, in the bench's words (weights invented for the rule).
     [InlineData("0", "0", BenchField.AirCt, "weight in air is 0 ct; allowed: above 0 ct")]

@@ -38,7 +38,7 @@ internal sealed class BenchAssessor(Identifier? identifier)
             Errors = errors,
             // What the answer was worked out on, never a refused entry's parseable part ("432" of "432 4b0"): the stone
             // list, the reports and the command line then give the answer the pane gives. The typed text stays in the draft.
-            Readings = StoneReadingsConverter.FromReadings(readings.WithoutRefused(outcome.Reading.Errors), lenient: true),
+            Readings = StoneReadingsConverter.FromReadings(readings.AsUsedBy(outcome.Reading), lenient: true),
             SpecificGravity = outcome.Reading.Sheet.SpecificGravity,
             Result = result,
             DoNotImmerse = result?.KeepDry ?? [],   // the same stones as the answer's "do not immerse" warning

@@ -32,27 +32,43 @@ public class BenchAssessorTests
     }
 
     [Theory]
-    // Entries the reader refuses in whole or in part: a list with one bad line, a step above the contact liquid, a
-    // liquid limit beyond what a contact liquid reaches, a heavy liquid without a result.
-    [InlineData("absorption", "432 4b0")]
-    [InlineData("step", "2.5")]
-    [InlineData("liquid", "2.6")]
-    [InlineData("heavy", "3.32 maybe")]
-    public void What_is_kept_of_a_stone_gives_the_answer_the_pane_gives_when_an_entry_is_refused(string field, string text)
+    // Entries the reader refuses in whole or in part, and clashes that make it leave a whole test out: a list with one
+    // bad line, a step above the contact liquid, a liquid limit beyond what a contact liquid reaches, a heavy liquid
+    // without a result beside a good one, an SG typed beside weights, "over the limit" beside high edges, fire by eye
+    // beside measured indices. Each: what the form holds, and the form the answer was in fact worked out on.
+    [InlineData("absorption")]
+    [InlineData("step")]
+    [InlineData("liquid")]
+    [InlineData("heavy")]
+    [InlineData("sg and weights")]
+    [InlineData("over the limit")]
+    [InlineData("fire and indices")]
+    public void What_is_kept_of_a_stone_gives_the_answer_the_pane_gives_when_an_entry_is_refused(string fault)
     {
-        var form = QuartzForm();
-        switch (field)
+        BenchModel form = QuartzForm(), used = QuartzForm();
+        switch (fault)
         {
-            case "absorption": form.SetText(BenchFields.Absorption, text); break;
-            case "step": form.PutStep(form.Steps.Count, new StepText("30", text, "")); break;
-            case "liquid": form.SetText(BenchFields.LiquidLimit, text); break;
-            default: form.SetText(BenchFields.HeavyLiquids, text); break;
+            case "absorption": form.SetText(BenchFields.Absorption, "432 4b0"); break;
+            case "step": form.PutStep(form.Steps.Count, new StepText("30", "2.5", "")); break;
+            case "liquid": form.SetText(BenchFields.LiquidLimit, "2.6"); break;
+            case "heavy": form.SetText(BenchFields.HeavyLiquids, "2.89 sinks; 3.32 maybe"); used.SetText(BenchFields.HeavyLiquids, "2.89 sinks"); break;
+            case "sg and weights":
+                form.SetText(BenchFields.AirCt, "3.500"); form.SetText(BenchFields.WaterCt, "2.500");
+                used.SetText(BenchFields.Sg, ""); break;
+            case "over the limit":
+                form.Choose(BenchFields.OverLimit, "yes");
+                foreach (int i in Enumerable.Range(0, used.Steps.Count).Reverse()) used.RemoveStep(i);
+                break;
+            default:
+                form.Choose(BenchFields.Dispersion, "weak"); form.SetText(BenchFields.IndexAtB, "1.541"); form.SetText(BenchFields.IndexAtG, "1.553");
+                break;
         }
         BenchAssessment a = Assessor.Assess(form.Snapshot());
         Assert.NotEmpty(a.Errors);
-        // The stone list, the reports and the command line rank what is kept; the pane ranked the form without the entry.
-        BenchAssessment without = Assessor.Assess(QuartzForm().Snapshot());
-        Assert.Equal(GemIndex.Data.Batch.StoneReadingsConverter.ToReadings(without.Readings), GemIndex.Data.Batch.StoneReadingsConverter.ToReadings(a.Readings));
+        // The stone list, the reports and the command line rank what is kept; the pane ranked the form as the reader used it.
+        BenchAssessment clean = Assessor.Assess(used.Snapshot());
+        Assert.Empty(clean.Errors);
+        Assert.Equal(GemIndex.Data.Batch.StoneReadingsConverter.ToReadings(clean.Readings), GemIndex.Data.Batch.StoneReadingsConverter.ToReadings(a.Readings));
         Assert.Equal(ResultText.Short(a.Result!), Assessor.Answer(a.Readings));
     }
 
