@@ -151,17 +151,23 @@ public static class NextTestAdvisor
     }
 
     /// <summary>
+    /// What a loupe can find on an opaque stone, by reflected light (common practice): colour banding, the treatments that
+    /// reach the surface (dye in fractures, a worn coating), a composite's join and its two lustres, the organic
+    /// structures and the phenomena; not the inclusions, the growth features seen through the stone, nor what lies in its
+    /// fractures or its cement (flash effect, flattened bubbles, cement bubbles, colour at facet junctions in immersion).
+    /// </summary>
+    internal static bool SeenOnTheSurface(MagnificationFeatureInfo feature) => feature.Feature switch
+    {
+        MagnificationFeature.ColourBanding or MagnificationFeature.DyeInFractures or MagnificationFeature.CoatingWear
+            or MagnificationFeature.JoinPlane or MagnificationFeature.LustreChangeAtGirdle => true,
+        _ => feature.Group is FeatureGroup.OrganicStructure or FeatureGroup.Phenomenon,
+    };
+
+    /// <summary>
     /// The most informative look under magnification among the features not yet looked for: the single feature with the
     /// largest gain, joined by a second when looking for both adds at least <see cref="MinimumGainBits"/> (features are
     /// independent given the material, as in the likelihood, so the pair's outcomes are the four seen/not-seen pairs).
     /// </summary>
-    /// <summary>
-    /// What a loupe can find on an opaque stone: everything but the inclusions and the growth features seen through the
-    /// stone (colour banding shows on its surface too; common practice).
-    /// </summary>
-    internal static bool SeenOnTheSurface(MagnificationFeatureInfo feature) =>
-        feature.Group is not (FeatureGroup.Inclusion or FeatureGroup.Growth) || feature.Feature == MagnificationFeature.ColourBanding;
-
     private static (MagnificationFeature[] Features, double Gain)? Look(BenchSheet sheet, List<(Material Material, double P)> candidates, OutcomeTables[] tables,
         List<Group>? groups)
     {
@@ -262,8 +268,9 @@ public static class NextTestAdvisor
     /// <summary>Indices into <see cref="Tests"/> of the tests not on the sheet.</summary>
     private static IEnumerable<int> TestsNotDone(BenchSheet s, bool immersionUnsafe)
     {
-        // An opaque stone lets no light through: the polariscope, the dichroscope, fire and the hand spectroscope
-        // (transmitted light) have nothing to show, whatever the candidates would show in a clear piece.
+        // An opaque stone lets no light through: the polariscope, the dichroscope and fire have nothing to show, whatever
+        // the candidates would show in a clear piece. The hand spectroscope stays: it is read by reflected light too
+        // (turquoise's band near 432 nm).
         bool lightPasses = s.Transparency != StoneTransparency.Opaque;
         if (s.Refractometer is null) yield return 0;
         if (s.SpecificGravity is null && s.HeavyLiquids.Count == 0 && !immersionUnsafe) yield return 1;
@@ -274,7 +281,7 @@ public static class NextTestAdvisor
         if (s.Electrical is null) yield return 6;
         if (s.UvLong is null) yield return 7;
         if (s.UvShort is null) yield return 8;
-        if (s.AbsorptionLinesNanometres is null && lightPasses) yield return 9;
+        if (s.AbsorptionLinesNanometres is null) yield return 9;
     }
 
     /// <summary>

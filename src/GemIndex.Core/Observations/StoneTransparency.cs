@@ -13,6 +13,6 @@ public enum StoneTransparency
     /// <summary>Light passes diffusely: the tests in transmitted light can be taken, less clearly.</summary>
     Translucent,
 
-    /// <summary>No light passes: the polariscope, the dichroscope, fire and the spectroscope in transmitted light show nothing.</summary>
+    /// <summary>No light passes: the polariscope, the dichroscope and fire show nothing (a spectroscope can still read reflected light).</summary>
     Opaque,
 }
