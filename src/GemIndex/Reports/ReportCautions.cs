@@ -21,6 +21,9 @@ internal static class ReportCautions
     /// <summary>The same for the heavy liquids, on the SG page.</summary>
     public const string HeavyLiquidShort = "! Heavy liquids are toxic: avoid skin contact and fumes; follow their safety data sheets and local rules.";
 
+    /// <summary>Beside advice to take the SG, which may be done with heavy liquids.</summary>
+    public const string SpecificGravityShort = "! If by heavy liquids: they are toxic; avoid skin contact and fumes; follow their safety data sheets and local rules.";
+
     /// <summary>The ultraviolet caution in a few words, for the page where the lamp's results are typed.</summary>
     public const string UltravioletShort = "! UV lamp: never look into it; shield your eyes and skin while testing.";
 
@@ -32,6 +35,8 @@ internal static class ReportCautions
     {
         GemIndex.Core.Bench.BenchTest.Refractometer => ContactLiquidShort,
         GemIndex.Core.Bench.BenchTest.HeavyLiquids => HeavyLiquidShort,
+        // The advisor's SG is weighing in water or heavy liquids alike: the caution for the toxic way.
+        GemIndex.Core.Bench.BenchTest.SpecificGravity => SpecificGravityShort,
         GemIndex.Core.Bench.BenchTest.UvLong or GemIndex.Core.Bench.BenchTest.UvShort => UltravioletShort,
         _ => null,
     };

@@ -16,6 +16,25 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void Advice_to_take_the_SG_carries_the_heavy_liquids_caution_and_an_opaque_stone_is_advised_no_polariscope()
+    {
+        using var run = new CommandRun();
+        // A green aggregate read at 1.54 (invented readings): the SG is the telling test, and it may be taken in heavy liquids.
+        var (exit, output, error) = Identify(run, "--spot", "1.54", "--colour", "green", "--polariscope", "aggregate");
+        Assert.True(exit == 0, error);
+        Assert.Contains("Next test: specific gravity", output);
+        Assert.Contains(GemIndex.Cli.Reports.ReportCautions.SpecificGravityShort, output);
+        // A blue cabochon read at 1.62, SG 2.70 (invented): translucent, the polariscope; opaque, never.
+        (exit, output, error) = Identify(run, "--spot", "1.62", "--sg", "2.70", "--colour", "blue", "--cut", "cabochon", "--transparency", "translucent");
+        Assert.True(exit == 0, error);
+        Assert.Contains("Next test: polariscope", output);
+        (exit, output, error) = Identify(run, "--spot", "1.62", "--sg", "2.70", "--colour", "blue", "--cut", "cabochon", "--transparency", "opaque");
+        Assert.True(exit == 0, error);
+        Assert.DoesNotContain("Next test: polariscope", output);
+        Assert.DoesNotContain("Next test: dichroscope", output);
+    }
+
+    [Fact]
     public void A_batch_gives_one_line_per_stone_in_order_in_the_fixed_format()
     {
         using var run = new CommandRun();

@@ -89,6 +89,7 @@ public class ResultTextTests
     // Where taking the advice meets a hazard (common practice): the contact liquid, the heavy liquids, the UV lamps.
     [InlineData("refractometer", GemIndex.Cli.Reports.ReportCautions.ContactLiquidShort)]
     [InlineData("heavy_liquids", GemIndex.Cli.Reports.ReportCautions.HeavyLiquidShort)]
+    [InlineData("sg", GemIndex.Cli.Reports.ReportCautions.SpecificGravityShort)]   // what the advisor names for weighing or heavy liquids
     [InlineData("uv_long", GemIndex.Cli.Reports.ReportCautions.UltravioletShort)]
     [InlineData("uv_short", GemIndex.Cli.Reports.ReportCautions.UltravioletShort)]
     [InlineData("absorption_nm", null)]
