@@ -78,7 +78,7 @@ public static class EvidenceLikelihood
         acc.Add(BenchField.Sg, UsualPart.Mixed(range, m.SpecificGravityUsual, r => RangeStrays.Density(value, r, s, stray)), BroadDensities.SpecificGravity,
             acc.Fitting ? RangeStrays.Tail(value, range, s, stray) : 1, robust: true, group);
         if (acc.Explaining)
-            acc.Say($"SG {Gravity.SpecificGravity.Text(value, sigma)} {Where(value, range, s, "0.00")}{Usually(value, range, m.SpecificGravityUsual, s)}");
+            acc.Say($"SG {Gravity.SpecificGravity.Text(value, sigma)} {Where(value, range, s, "0.00")}{Usually(value, sigma, range, m.SpecificGravityUsual)}");
     }
 
     /// <summary>σ of a heavy liquid's density, doubled for a suspended stone (a judgement, docs/ranking.md §5, other named values).</summary>
@@ -447,9 +447,8 @@ public static class EvidenceLikelihood
     }
 
     /// <summary>", among its rare extremes (usually 1.98–2.25)" for a reading in the range but clear of its usual part; else "".</summary>
-    private static string Usually(double value, PropertyRange range, PropertyRange? usual, double sigma) =>
-        usual is { } u && range.Contains(value) && RangeLikelihood.StandardDeviationsOutside(value, u, sigma) > WithinUncertaintySigmas
-            ? $", among its rare extremes (usually {u.ToString("0.00")})" : "";
+    private static string Usually(double value, double sigma, PropertyRange range, PropertyRange? usual) =>
+        UsualPart.AmongRareExtremes(value, sigma, range, usual) ? $", among its rare extremes (usually {usual!.Value.ToString("0.00")})" : "";
 
     internal static string Word<T>(T value) where T : struct, Enum => value.ToString() switch
     {

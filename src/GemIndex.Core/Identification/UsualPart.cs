@@ -16,6 +16,19 @@ public static class UsualPart
     public const double RareShare = 0.1;
 
     /// <summary>
+    /// Whether an SG reading lies among a range's rare extremes, as the reasons say it: inside the whole range and more
+    /// than two standard uncertainties (the reading's with the SG floor, as the likelihood takes it) outside the usual
+    /// part. The scales call the same readings "rare".
+    /// </summary>
+    public static bool AmongRareExtremes(double specificGravity, double standardUncertainty, PropertyRange whole, PropertyRange? usual) =>
+        usual is { } u && whole.Contains(specificGravity)
+        && RangeLikelihood.StandardDeviationsOutside(specificGravity, u, Math.Sqrt(standardUncertainty * standardUncertainty
+            + EvidenceLikelihood.SpecificGravityFloor * EvidenceLikelihood.SpecificGravityFloor)) > WithinUncertaintySigmas;
+
+    /// <summary>How far outside the usual part, in standard uncertainties, a reading must lie to be called rare (about 95 %).</summary>
+    public const double WithinUncertaintySigmas = 2;
+
+    /// <summary>
     /// <paramref name="chance"/> (a density or a probability of the reading, given a range) under the whole range, or,
     /// where <paramref name="usual"/> is given, mixed: the usual part with 1 − <see cref="RareShare"/>, the whole range with the rest.
     /// </summary>

@@ -74,9 +74,11 @@ internal sealed class ReadingScale(string title, string format, double value, do
     private double Shown => Math.Round(value, format.Contains('.') ? format.Length - format.IndexOf('.') - 1 : 0, MidpointRounding.AwayFromZero);
 
     /// <summary>In, rare, near or out (see the constants); "-" when the candidate has no range for this quantity.</summary>
+    /// <remarks>"Rare" by the reasons' own rule (<see cref="GemIndex.Core.Identification.UsualPart.AmongRareExtremes"/>): a
+    /// reading within its uncertainty of the usual part is no rare extreme.</remarks>
     public string Verdict(PropertyRange? range, PropertyRange? usualPart = null) => range is not { } r ? "-"
         : Shown >= r.Minimum - Noise && Shown <= r.Maximum + Noise
-            ? usualPart is { } u && (Shown < u.Minimum - Noise || Shown > u.Maximum + Noise) ? Rare : In
+            ? GemIndex.Core.Identification.UsualPart.AmongRareExtremes(value, uncertainty, r, usualPart) ? Rare : In
         : value + 2 * uncertainty >= r.Minimum && value - 2 * uncertainty <= r.Maximum ? Near
         : Out;
 

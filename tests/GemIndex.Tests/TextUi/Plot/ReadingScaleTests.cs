@@ -219,6 +219,7 @@ public class ReadingScaleTests
     // 1.54 lies among the rare extremes, 2.10 in the usual part, 2.40 beyond the range.
     [InlineData(1.54, ReadingScale.Rare)]
     [InlineData(2.10, ReadingScale.In)]
+    [InlineData(1.97, ReadingScale.In)]      // within two uncertainties of the usual part: no rare extreme, as the reasons say
     [InlineData(2.40, ReadingScale.Out)]
     public void A_range_with_a_usual_part_draws_its_rare_extremes_thin_and_names_a_reading_there(double sg, string expected)
     {
