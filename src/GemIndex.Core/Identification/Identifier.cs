@@ -151,7 +151,9 @@ public sealed class Identifier
             for (end = start; end < order.Length && _speciesOf[order[end]] == species; end++) total += posterior[order[end]];
             // Past the leader, a species the answer would not list (under LeadingCandidates.ListedShare) is never put in
             // before the leader's own likelier entries: a list of three for a corundum must not read ruby, staurolite 0 %.
-            bool always = taken == 0 || (taken < SpeciesAlwaysShown && total >= LeadingCandidates.ListedShare);
+            // The best entry's own share decides, since the answers list entries by it (a species of 0.06 % over two
+            // entries would take a slot and then not be listed).
+            bool always = taken == 0 || (taken < SpeciesAlwaysShown && posterior[order[start]] >= LeadingCandidates.ListedShare);
             if ((!always && total < cut) || total <= 0) break;
             shown[order[start]] = true;
             taken++;
