@@ -104,17 +104,15 @@ internal class BenchPage : View
     /// <summary>Marks each field with its error and lists the reasons at the bottom, each after its field's caption.</summary>
     public virtual void ShowErrors(IReadOnlyDictionary<string, string> errors)
     {
-        var mine = new List<(string Key, string Text)>();
-        foreach (FormField f in Fields)
-        {
-            string? reason = errors.GetValueOrDefault(f.Field);
-            f.ShowError(reason);
-            if (reason is not null) mine.Add((f.Field, $"{f.Label}: {InCaptions(reason)}"));
-        }
-        mine.AddRange(OwnErrors(errors));
-        _problemLines = [.. mine.Select(m => (m.Key, "! " + m.Text))];
+        foreach (FormField f in Fields) f.ShowError(errors.GetValueOrDefault(f.Field));
+        _problemLines = [.. ReasonsInWords(errors).Select(m => (m.Key, "! " + m.Text))];
         WrapProblems();
     }
+
+    /// <summary>The reasons of this page's refused entries as the page words them: "In water: …", "step 2: …".</summary>
+    public IEnumerable<(string Key, string Text)> ReasonsInWords(IReadOnlyDictionary<string, string> errors) =>
+        Fields.Where(f => errors.ContainsKey(f.Field)).Select(f => (f.Field, $"{f.Label}: {InCaptions(errors[f.Field])}"))
+            .Concat(OwnErrors(errors));
 
     private IReadOnlyList<(string Key, string Line)> _problemLines = [];
 

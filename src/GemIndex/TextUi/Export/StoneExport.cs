@@ -20,8 +20,9 @@ internal static class StoneExport
     /// Writes the reports of the assessed form and returns the confirmation's title and text (or why nothing was
     /// written). <paramref name="date"/> is today's date, read by the caller.
     /// </summary>
+    /// <param name="refusedInWords">The refused entries' reasons as the pages word them (null: the reasons as the reader gives them).</param>
     public static (string Title, string Text) Write(string workbookPath, BenchSnapshot snapshot, BenchAssessment assessment, bool hasCatalogue,
-        Func<IEnumerable<StoneSummary>> workbookStones, DateOnly date)
+        Func<IEnumerable<StoneSummary>> workbookStones, DateOnly date, IReadOnlyList<string>? refusedInWords = null)
     {
         if (assessment.Result is not { } result)
             return ("Nothing exported", "No identification yet: enter readings first" + (hasCatalogue ? "." : " (the catalogue is still loading)."));
@@ -34,7 +35,7 @@ internal static class StoneExport
             StoneSheet sheet = BenchModel.ToStoneSheet(snapshot, assessment.Readings);
             IReadOnlyList<string> paths = StoneReportFiles.Write(workbookPath, sheet, result, header);   // never over an earlier file: a numbered name instead
             IReadOnlyList<string> warnings = StoneReportFiles.ReferenceWarnings(sheet, workbookStones());
-            return ("Reports written", string.Join('\n', [.. paths, ExaminerLine(header), .. RefusedLines(assessment), .. warnings]));
+            return ("Reports written", string.Join('\n', [.. paths, ExaminerLine(header), .. (refusedInWords ?? [.. assessment.Errors.Values]).Select(r => RefusedPrefix + r), .. warnings]));
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or BatchInputException or QuantityOutOfRangeException or WorkbookException)
         {
@@ -44,9 +45,6 @@ internal static class StoneExport
 
     /// <summary>The confirmation's words for entries refused on the form: the reports, like the answer, leave them out.</summary>
     public const string RefusedPrefix = "Left out of the reports, refused: ";
-
-    private static IEnumerable<string> RefusedLines(BenchAssessment assessment) =>
-        assessment.Errors.Values.Select(reason => RefusedPrefix + reason);
 
     /// <summary>"Examiner: A. Example" as printed in the header, or where to set it.</summary>
     public static string ExaminerLine(ReportHeader header) => header.Examiner is { } name ? $"Examiner: {name}" : NoExaminer;

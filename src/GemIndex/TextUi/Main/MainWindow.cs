@@ -397,8 +397,20 @@ internal sealed class MainWindow : Window
     }
 
     private (string Title, string Text) ExportNow(BenchSnapshot snapshot, string workbook) =>
-        StoneExport.Write(workbook, snapshot, _session.Assess(snapshot), _session.HasCatalogue, () => _session.WithWorkbook(w => w.List()),
-            DateOnly.FromDateTime(TimeProvider.System.GetLocalNow().Date));   // the report's date, read here at the edge
+        ExportWith(workbook, snapshot, _session.Assess(snapshot));
+
+    private (string Title, string Text) ExportWith(string workbook, BenchSnapshot snapshot, BenchAssessment assessment) =>
+        StoneExport.Write(workbook, snapshot, assessment, _session.HasCatalogue, () => _session.WithWorkbook(w => w.List()),
+            DateOnly.FromDateTime(TimeProvider.System.GetLocalNow().Date),   // the report's date, read here at the edge
+            RefusedInWords(assessment.Errors));
+
+    /// <summary>Each refused entry in its page's words, with the page that holds it; one no page words, as the reader gives it.</summary>
+    internal List<string> RefusedInWords(IReadOnlyDictionary<string, string> errors)
+    {
+        var worded = Pages.SelectMany(p => p.ReasonsInWords(errors)).ToList();
+        var keys = worded.Select(w => w.Key).ToHashSet(StringComparer.Ordinal);
+        return [.. worded.Concat(errors.Where(e => !keys.Contains(e.Key)).Select(e => (e.Key, e.Value))).Select(r => $"{r.Item2} ({BenchFields.PageOf(r.Item1)})")];
+    }
 
     private void ShowStones()
     {

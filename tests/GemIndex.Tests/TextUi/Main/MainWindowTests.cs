@@ -616,6 +616,24 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void The_exports_refused_entries_are_said_in_the_pages_words_with_their_page()
+    {
+        var (app, window, token) = Open();
+        _session.Form.SetText(BenchFields.Sg, "2.65");
+        _session.Form.SetText(BenchFields.AirCt, "3.500");
+        _session.Form.SetText(BenchFields.WaterCt, "2.500");
+        _session.Changed();
+        Settle();
+        var lines = window.RefusedInWords(_session.Results.Latest!.Errors);
+        string sg = Assert.Single(lines);
+        Assert.StartsWith("SG: ", sg);
+        Assert.Contains("(In air, In water)", sg);          // the captions, not the batch format's names
+        Assert.DoesNotContain("sg.air_ct", sg);
+        Assert.EndsWith("(F4 SG)", sg);
+        Close(app, window, token);
+    }
+
+    [Fact]
     public void A_refused_entry_is_said_at_the_top_of_the_answer()
     {
         var (app, window, token) = Open();
