@@ -215,8 +215,8 @@ public static class BenchReader
                     $"weight in water is {BenchText.Shown(water)} ct; allowed: 0 ct or more, below the weight in air (a stone that sinks weighs less in water).");
                 waterCt = null;
             }
-            Mass? inAir = airCt is { } a ? Checked(BenchField.AirCt, air!, () => BenchDefaults.Weighed(a)) : null;
-            Mass? inWater = waterCt is { } w ? Checked(BenchField.WaterCt, water!, () => BenchDefaults.Weighed(w)) : null;
+            Mass? inAir = airCt is { } a ? Weighed(BenchField.AirCt, "weight in air", air!, a) : null;
+            Mass? inWater = waterCt is { } w ? Weighed(BenchField.WaterCt, "weight in water", water!, w) : null;
             Temperature? temperature = celsius is not null && waterC is null ? null
                 : Checked(BenchField.WaterC, celsius ?? "", () => WaterDensity.At(Temperature.FromCelsius(waterC ?? BenchDefaults.WaterCelsius)).Temperature);
             if (inAir is not { } m1 || inWater is not { } m2) return null;
@@ -237,6 +237,17 @@ public static class BenchReader
                 return null;
             }
             catch (QuantityOutOfRangeException e) { Error(BenchField.WaterCt, water, e.Allowed, e.Message); return null; }
+        }
+
+        /// <summary>A weighing as a mass, its refusal said as the weight it is ("weight in air is 600000 ct"), not as a "mass".</summary>
+        private Mass? Weighed(string field, string name, string text, double carats)
+        {
+            try { return BenchDefaults.Weighed(carats); }
+            catch (QuantityOutOfRangeException e) when (e.Quantity == "mass")
+            {
+                Error(field, text, e.Allowed, $"{name} is {BenchText.Shown(text)} ct; allowed: {e.Allowed}.");
+                return null;
+            }
         }
 
         /// <summary>"float", "sink" and "suspend" as a bench note writes them: the outcome words they mean.</summary>

@@ -308,7 +308,7 @@ public static class EvidenceLikelihood
     /// <summary>
     /// P(faceted | a material met only as an aggregate), against 1 for a crystal, a glass and "not in the catalogue":
     /// massive and granular materials are cut as cabochons, beads and carvings, and a faceted one is occasional
-    /// (judgement, docs/ranking.md §2, "Form term"). Before, a faceted red stone with one edge at 1.718 read massive
+    /// (judgement, docs/ranking.md §1, "Form term"). Before, a faceted red stone with one edge at 1.718 read massive
     /// rhodonite first.
     /// </summary>
     internal const double AggregateFaceted = 0.1;
@@ -317,16 +317,23 @@ public static class EvidenceLikelihood
     {
         bool aggregateOnly = (m.Forms & MaterialForm.Aggregate) != 0 && (m.Forms & MaterialForm.Crystal) == 0;
         // How common a cut is for a material, not how typical a reading: it stays out of the fit.
-        acc.AddLog(BenchField.Cut, aggregateOnly ? Math.Log(AggregateFaceted) : 0, 0, 1, robust: false, inFit: false);
+        // Unusual for an aggregate (said as against it), yet no misfit: it stays out of the fit.
+        acc.AddLog(BenchField.Cut, aggregateOnly ? Math.Log(AggregateFaceted) : 0, 0, aggregateOnly ? 0 : 1, robust: false, inFit: false);
         if (acc.Explaining && aggregateOnly) acc.Say("cut faceted: a massive or granular material is seldom faceted (mostly cabochons, beads and carvings)");
     }
 
     /// <summary>How many of an entry's colours a reason names: a glass of any colour lists twenty-two (the rest are counted).</summary>
     internal const int ColoursNamed = 6;
 
-    private static string UsualColours(IReadOnlyList<string> colours) => colours.Count <= ColoursNamed
-        ? string.Join(", ", colours)
-        : string.Join(", ", colours.Take(ColoursNamed)) + $" and {colours.Count - ColoursNamed} more";
+    private static string UsualColours(IReadOnlyList<string> colours, string seen)
+    {
+        if (colours.Count <= ColoursNamed) return string.Join(", ", colours);
+        // A colour of the reading's among the ones not named is named after the count, so the reason still shows it.
+        var hues = ColourWords.PrincipalHues(seen).ToHashSet();
+        var hidden = colours.Skip(ColoursNamed).Where(c => ColourWords.PrincipalHues(c).Any(hues.Contains)).ToList();
+        return string.Join(", ", colours.Take(ColoursNamed)) + $" and {colours.Count - ColoursNamed} more"
+            + (hidden.Count > 0 ? $" ({string.Join(", ", hidden)} among them)" : "");
+    }
 
     private static void Thermal(Material m, ThermalProbeResult seen, EvidenceAccumulator acc)
     {
@@ -421,7 +428,7 @@ public static class EvidenceLikelihood
         double best = profile.ColourHues.Count == 0 ? f : profile.ColourFirstHue;
         acc.Add(BenchField.Colour, f, ColourWords.BroadProbability, Math.Min(1, f / best), robust: false, EvidenceAccumulator.ChromophoreGroup);
         if (acc.Explaining)
-            acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : UsualColours(m.Colours) + " usual, most usual first")}");
+            acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : UsualColours(m.Colours, colour) + " usual, most usual first")}");
     }
 
     /// <summary>Up to this many standard uncertainties outside a range, a reading is said to lie within its uncertainty of it (two: the usual reading of a normal error).</summary>

@@ -105,7 +105,7 @@ internal static class IdentifyCommand
                 return ExitCodes.BadInput;
             }
             if (pr.GetValue(json)) output.WriteLine(ResultDocument.Line(result, explain: true));
-            else IdentificationText.Write(result, output, outcome.Reading.Sheet.Magnification, outcome.Reading.Sheet.Cut);
+            else IdentificationText.Write(result, output, outcome.Reading.Sheet.Magnification, outcome.Reading.Sheet.Cut, outcome.Reading.Sheet.Transparency);
             return ExitCodes.Ok;
         }));
         return command;

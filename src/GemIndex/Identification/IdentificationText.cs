@@ -19,10 +19,15 @@ internal static class IdentificationText
     /// <summary>The line of a faceted stone: what its cut rules out.</summary>
     public const string FacetedLine = "Cut: faceted: no star or cat's-eye can show on facets, so star and cat's-eye varieties are weighed as not seen";
 
+    /// <summary>The line of an opaque stone: what its transparency leaves out of the advice.</summary>
+    public const string OpaqueLine = "Transparency: opaque: no polariscope, dichroscope or fire is advised, and under the loupe only what shows on a surface";
+
     /// <summary>Writes the answer; the features looked for under magnification, when given, are listed with their meaning.</summary>
-    public static void Write(IdentificationResult result, TextWriter output, MagnificationObservation? magnification = null, StoneCut? cut = null)
+    public static void Write(IdentificationResult result, TextWriter output, MagnificationObservation? magnification = null, StoneCut? cut = null,
+        StoneTransparency? transparency = null)
     {
         var o = new StringWriter { NewLine = "\n" };
+        if (transparency == StoneTransparency.Opaque) o.WriteLine(OpaqueLine);
         // A faceted cut stands for the star and the cat's-eye not seen (the reader counts them so): said once, as the cut.
         bool faceted = cut == StoneCut.Faceted;
         if (faceted) o.WriteLine(FacetedLine);

@@ -123,7 +123,7 @@ internal static class ReportDerived
         percent ??= ReportNumbers.Percent;
         string uniaxial = "uniaxial " + percent(p.Uniaxial) + (p.Uniaxial >= 0.01
             ? " (" + string.Join(", ", new[] { ("positive", p.UniaxialPositive), ("negative", p.UniaxialNegative) }
-                .OrderByDescending(x => x.Item2).Select(x => $"{x.Item1} {percent(x.Item2)}")) + ")"
+                .Where(x => x.Item2 > 0).OrderByDescending(x => x.Item2).Select(x => $"{x.Item1} {percent(x.Item2)}")) + ")"
             : "");
         // A character the readings rule out (two edges apart rule out one index) is left out, not shown as "0%".
         return string.Join(", ", new[] { (uniaxial, p.Uniaxial), ("biaxial " + percent(p.Biaxial), p.Biaxial), ("singly refractive " + percent(p.Isotropic), p.Isotropic) }

@@ -76,6 +76,7 @@ public class BenchReaderTests
     [InlineData("3", "-2.1", BenchField.WaterCt, "weight in water is -2.1 ct; allowed: 0 ct or more, below the weight in air")]
     [InlineData("2", "2.5", BenchField.WaterCt, "weight in water is 2.5 ct; allowed: 0 to below the weight in air 2 ct")]
     [InlineData("0.001", "0.0005", BenchField.AirCt, "weight in air 0.001 ct is too small to weigh hydrostatically")]
+    [InlineData("600000", "1", BenchField.AirCt, "weight in air is 600000 ct; allowed: 0 to 500000 ct")]
     public void A_weighing_fault_is_named_on_its_own_field_in_the_benchs_words(string air, string water, string field, string sentence)
     {
         var reading = BenchReader.Read(R((BenchField.AirCt, air), (BenchField.WaterCt, water)));

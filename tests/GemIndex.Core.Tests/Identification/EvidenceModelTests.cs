@@ -49,6 +49,9 @@ public class EvidenceModelTests
         var many = Entry("many", "many", QuartzIndices, colours: colours);
         var reasons = EvidenceLikelihood.Evaluate(many, new AnalysedSheet(new BenchSheet { Colour = "green" }), explain: true).Contributions;
         Assert.Contains(reasons, r => r.Text == "colour green; green, blue, red, yellow, brown, black and 4 more usual, most usual first");
+        // A colour of the reading's beyond the six is named after the count.
+        var purple = EvidenceLikelihood.Evaluate(many, new AnalysedSheet(new BenchSheet { Colour = "purple" }), explain: true).Contributions;
+        Assert.Contains(purple, r => r.Text == "colour purple; green, blue, red, yellow, brown, black and 4 more (purple among them) usual, most usual first");
     }
 
     [Fact]
@@ -67,7 +70,7 @@ public class EvidenceModelTests
         Assert.Equal(Weigh(massive, null).Fit, Weigh(massive, StoneCut.Faceted).Fit, 9);
         foreach (Material m in new[] { both, crystal })
             Assert.Equal(Weigh(m, null).LogLikelihood, Weigh(m, StoneCut.Faceted).LogLikelihood, 9);
-        Assert.Contains(Weigh(massive, StoneCut.Faceted).Contributions, c => c.Text.StartsWith("cut faceted", StringComparison.Ordinal));
+        Assert.Contains(Weigh(massive, StoneCut.Faceted).Contributions, c => c.Text.StartsWith("cut faceted", StringComparison.Ordinal) && !c.Agrees);
         Assert.DoesNotContain(Weigh(crystal, StoneCut.Faceted).Contributions, c => c.Text.StartsWith("cut faceted", StringComparison.Ordinal));
     }
 

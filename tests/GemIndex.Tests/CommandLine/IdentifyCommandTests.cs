@@ -32,6 +32,7 @@ public class IdentifyCommandTests
         Assert.True(exit == 0, error);
         Assert.DoesNotContain("Next test: polariscope", output);
         Assert.DoesNotContain("Next test: dichroscope", output);
+        Assert.StartsWith(GemIndex.Cli.Identification.IdentificationText.OpaqueLine, output);
     }
 
     [Fact]

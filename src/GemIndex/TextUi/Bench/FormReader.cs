@@ -23,7 +23,9 @@ internal static class FormReader
     /// </summary>
     public static string? TransparencyWord(string description)
     {
-        string first = description.Trim().Split([' ', ',', ';'], 2)[0].ToLowerInvariant();
+        // The leading letters: "Opaque." and "opaque/waxy" read as opaque.
+        string first = new([.. description.Trim().TakeWhile(char.IsLetter)]);
+        first = first.ToLowerInvariant();
         return first switch
         {
             "transparent" => "transparent",

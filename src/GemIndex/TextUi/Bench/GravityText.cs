@@ -22,7 +22,7 @@ internal static class GravityText
     public const double UsefulWeighingUncertainty = 0.1;
 
     /// <summary>Added to the SG line of a weighing less certain than <see cref="UsefulWeighingUncertainty"/>.</summary>
-    public const string TooLight = ": the stone is too light to weigh usefully; heavy liquids tell more";
+    public const string TooLight = ": too uncertain to tell much (a light stone, or weights that lie close together); heavy liquids tell more";
 
     /// <summary>What the SG line says when there is no SG to use and nothing clashes.</summary>
     public const string None = "SG -";

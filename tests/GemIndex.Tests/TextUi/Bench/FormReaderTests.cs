@@ -8,6 +8,8 @@ public class FormReaderTests
     [Theory]
     [InlineData("opaque", "opaque")]
     [InlineData("Opaque, waxy lustre", "opaque")]
+    [InlineData("Opaque.", "opaque")]
+    [InlineData("opaque/waxy", "opaque")]
     [InlineData("  translucent at the edges", "translucent")]
     [InlineData("transparent", "transparent")]
     [InlineData("semi-translucent", null)]
