@@ -134,12 +134,23 @@ internal class BenchPage : View
     /// order, only whole ones, and when they need more rows than the page has, as many as fit with a last row saying there
     /// are more.
     /// </summary>
+    /// <summary>How many of the foot's rows the refused entries' reasons take now (0: none refused).</summary>
+    protected int ReasonRows { get; private set; }
+
+    /// <summary>The rows kept at the page's foot for the reasons (and, while none is refused, the safety caution).</summary>
+    protected int FootRows => _problemRows;
+
+    /// <summary>Called after the foot's reasons are laid out, for a page whose own rows must leave them room.</summary>
+    protected virtual void ProblemsWrapped() { }
+
     protected void WrapProblems()
     {
         int width = Math.Max(20, Viewport.Width);
         if (_problemLines.Count == 0)
         {
             _problems.Text = string.Join('\n', Main.TextWrap.Lines(FootCaution, width).Take(_problemRows));
+            ReasonRows = 0;
+            ProblemsWrapped();
             return;
         }
         string? focused = FocusedProblemKey;
@@ -166,6 +177,8 @@ internal class BenchPage : View
             else lines.Add(MoreProblems);
         }
         _problems.Text = string.Join('\n', lines);
+        ReasonRows = lines.Count;
+        ProblemsWrapped();
     }
 
     /// <summary>A reason as the page shows it: the fields it names by their wire names ("sg.air_ct") named by their captions ("In air").</summary>

@@ -47,9 +47,18 @@ internal sealed class GravityPage : BenchPage
         Result.Text = string.Join('\n', TextWrap.Lines([_result], width));
         // Without a stone to keep dry, the rows say the heavy liquids' own caution.
         IReadOnlyList<string> lines = _caution.Length == 0 ? [.. TextWrap.Lines([Reports.ReportCautions.HeavyLiquidShort], width)] : [.. TextWrap.Lines(["!! " + _caution], width)];
-        // As tall as the caution wraps to: with many candidates named it runs past the rows kept for it, never cut.
-        Caution.Height = Math.Max(CautionRows, lines.Count);
+        // As tall as the caution wraps to, but never over the reasons of refused entries at the page's foot: then it
+        // ends where they begin, with a pointer to the answer's warnings, which say it whole.
+        int room = ReasonRows == 0 ? int.MaxValue : Math.Max(2, Viewport.Height - Caution.Frame.Y - FootRows);
+        if (lines.Count > room) lines = [.. lines.Take(room - 1), "  (more under Warnings)"];
+        Caution.Height = Math.Max(ReasonRows == 0 ? CautionRows : 1, Math.Min(lines.Count, room));
         Caution.Text = string.Join('\n', lines);
+    }
+
+    // The base lays out its foot before this page's labels exist (while it is built): nothing to fit then.
+    protected override void ProblemsWrapped()
+    {
+        if (Caution is not null && Result is not null) Wrap();
     }
 
     public Label Caution { get; }

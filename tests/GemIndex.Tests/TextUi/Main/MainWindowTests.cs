@@ -616,6 +616,39 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void On_the_SG_page_a_long_immersion_caution_leaves_room_for_the_reason_of_a_refused_entry()
+    {
+        // A porous candidate's caution (turquoise: spot 1.62, the shipped catalogue) and an SG typed beside weights
+        // (values invented): at 80x24 both are read, the caution ending with a pointer to the answer's warnings.
+        var materials = GemIndex.Data.Catalogue.ShippedCatalogue.Families.Materials;
+        var session = new BenchSession(_workbook, new BenchAssessor(new Identifier(materials)), _uiQueue.Enqueue);
+        IApplication app = Headless.Start(80, 24);
+        var window = new MainWindow(session, materials);
+        session.Start();
+        window.FillFromModel();
+        SessionToken token = app.Begin(window)!;
+        session.Form.SetText(BenchFields.Spot, "1.62");
+        session.Form.SetText(BenchFields.Colour, "blue");
+        session.Form.SetText(BenchFields.Sg, "2.70");
+        session.Form.SetText(BenchFields.AirCt, "3.000");
+        session.Form.SetText(BenchFields.WaterCt, "2.000");
+        session.Changed();
+        Assert.True(session.Flush(TestHost.SaveWait));
+        while (_uiQueue.TryDequeue(out Action? a)) a();
+        app.InjectKey(Key.F4);
+        app.LayoutAndDraw();
+        string page = FormText(app.Driver!.ToString()!);
+        Assert.Contains("!! Do not immerse", page);
+        Assert.Contains("(more under Warnings)", page);
+        Assert.Contains("! SG: is given directly (2.70) and by", page);   // the reason's first line, not hidden under the caution
+        Assert.Contains("one of them.", page);
+        window.Dispose();
+        app.End(token);
+        app.Dispose();
+        session.Flush(TestHost.SaveWait);
+    }
+
+    [Fact]
     public void The_exports_refused_entries_are_said_in_the_pages_words_with_their_page()
     {
         var (app, window, token) = Open();
