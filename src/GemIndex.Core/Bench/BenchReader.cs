@@ -68,9 +68,11 @@ public static class BenchReader
         private RefractometerObservation? Refractometer()
         {
             double? liquidGiven = Number(BenchField.LiquidLimit);
-            bool liquidBad = r.Text(BenchField.LiquidLimit) is not null && liquidGiven is null;
-            double liquid = BenchDefaults.LiquidLimitOrDefault(liquidGiven);
-            var steps = Steps(liquid, checkAboveLiquid: !liquidBad && liquid is >= 1.5 and <= 2.2);
+            // A liquid limit the observation refuses (outside 1.5–2.2) leaves the default in use: the steps are held to
+            // that, each at its own row (they were left unchecked, and one above the default then refused the whole
+            // series at no step).
+            double liquid = liquidGiven is >= 1.5 and <= 2.2 ? liquidGiven.Value : BenchDefaults.LiquidLimit;
+            var steps = Steps(liquid, checkAboveLiquid: true);
             double? spot = Number(BenchField.Spot);
             bool? over = YesNo(BenchField.OverLimit);
             double? light = Number(BenchField.LightNm), precision = Number(BenchField.Precision), offset = Number(BenchField.CalibrationOffset);

@@ -49,6 +49,17 @@ public class BenchReaderTests
     }
 
     [Fact]
+    public void With_a_refused_liquid_limit_a_step_above_the_default_liquid_is_refused_at_its_own_row()
+    {
+        // A liquid limit of 2.6 (beyond a contact liquid) and a step read at 2.5 beside a quartz step (from memory): the
+        // default 1.79 stays in use, the 2.5 step is refused at its row and the quartz step is read.
+        var reading = BenchReader.Read(Steps(R((BenchField.LiquidLimit, "2.6")), "0:2.5", "45:1.544/1.553"));
+        Assert.Equal([BenchField.LiquidLimit, BenchField.Step(0)], Fields(reading).Order(StringComparer.Ordinal));
+        Assert.Single(reading.Sheet.Refractometer!.Steps);
+        Assert.Equal(BenchDefaults.LiquidLimit, reading.Sheet.Refractometer.LiquidLimit);
+    }
+
+    [Fact]
     public void As_used_by_its_reading_a_stone_keeps_only_what_the_reader_took()
     {
         // An SG typed beside weights (both left out), a heavy liquid without a result beside a good one (the good one kept),
