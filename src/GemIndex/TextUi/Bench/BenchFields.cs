@@ -51,14 +51,17 @@ internal static class BenchFields
     /// <summary>The key of one rotation step's row.</summary>
     public static string Step(int index) => BenchField.Step(index);
 
+    /// <summary>The pages as the page bar names them, in its order: stone, refractometer, SG, tests, loupe.</summary>
+    public static IReadOnlyList<string> PageNames { get; } = ["F2 Stone", "F3 RI", "F4 SG", "F5 Tests", "^L Loupe"];
+
     /// <summary>The page key and name that holds a field, as the page bar shows it ("F4 SG"), for words that send the user there.</summary>
-    public static string PageOf(string field) => field switch
+    public static string PageOf(string field) => PageNames[field switch
     {
-        _ when field.StartsWith(BenchField.Readings, StringComparison.Ordinal) => "F3 RI",
-        Reference or Weight or Dimensions or Shape or CuttingStyle or Colour or Cut or Transparency or Notes or Examiner => "F2 Stone",
-        Spot or OverLimit or LiquidLimit or LightNm or Precision or CalibrationOffset or BenchField.Method or TextUi.Bench.RefractometerPage.RotationStepField => "F3 RI",
-        Sg or AirCt or WaterCt or WaterC or HeavyLiquids => "F4 SG",
-        FeaturesPresent or FeaturesAbsent => "^L Loupe",
-        _ => "F5 Tests",
-    };
+        _ when field.StartsWith(BenchField.Readings, StringComparison.Ordinal) => 1,
+        Reference or Weight or Dimensions or Shape or CuttingStyle or Colour or Cut or Transparency or Notes or Examiner => 0,
+        Spot or OverLimit or LiquidLimit or LightNm or Precision or CalibrationOffset or BenchField.Method or TextUi.Bench.RefractometerPage.RotationStepField => 1,
+        Sg or AirCt or WaterCt or WaterC or HeavyLiquids => 2,
+        FeaturesPresent or FeaturesAbsent => 4,
+        _ => 3,
+    }];
 }

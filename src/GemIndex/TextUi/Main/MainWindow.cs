@@ -123,12 +123,12 @@ internal sealed class MainWindow : Window
 
     public string KeyLine => _keyLine.Text;
 
-    private static readonly string[] PageNames = ["F2 Stone", "F3 RI", "F4 SG", "F5 Tests", "^L Loupe"];
+    private static IReadOnlyList<string> PageNames => BenchFields.PageNames;
 
     private int PageAt(int x)
     {
         int at = 0;
-        for (int i = 0; i < PageNames.Length; i++)
+        for (int i = 0; i < PageNames.Count; i++)
         {
             at += PageNames[i].Length + 3;
             if (x < at) return i;
@@ -397,9 +397,9 @@ internal sealed class MainWindow : Window
     }
 
     private (string Title, string Text) ExportNow(BenchSnapshot snapshot, string workbook) =>
-        ExportWith(workbook, snapshot, _session.Assess(snapshot));
+        ExportNow(snapshot, workbook, _session.Assess(snapshot));
 
-    private (string Title, string Text) ExportWith(string workbook, BenchSnapshot snapshot, BenchAssessment assessment) =>
+    private (string Title, string Text) ExportNow(BenchSnapshot snapshot, string workbook, BenchAssessment assessment) =>
         StoneExport.Write(workbook, snapshot, assessment, _session.HasCatalogue, () => _session.WithWorkbook(w => w.List()),
             DateOnly.FromDateTime(TimeProvider.System.GetLocalNow().Date),   // the report's date, read here at the edge
             RefusedInWords(assessment.Errors));

@@ -109,8 +109,7 @@ internal sealed class ResultsModel
     public static string RefusedLine(IReadOnlyCollection<string> fields)
     {
         // Where to look: the pages that hold them, in the page bar's order.
-        string[] order = ["F2 Stone", "F3 RI", "F4 SG", "F5 Tests", "^L Loupe"];
-        string pages = string.Join(", ", fields.Select(BenchFields.PageOf).Distinct().OrderBy(p => Array.IndexOf(order, p)));
+        string pages = string.Join(", ", fields.Select(BenchFields.PageOf).Distinct().OrderBy(p => BenchFields.PageNames.ToList().IndexOf(p)));
         return fields.Count == 1 ? $"! 1 entry refused and not used: see the entry marked '!' on {pages}."
             : $"! {fields.Count} entries refused and not used: see the entries marked '!' on {pages}.";
     }
