@@ -26,7 +26,7 @@ public sealed record StoneSheet
     /// <summary>Cutting style ("mixed cut", "brilliant", "cabochon").</summary>
     public string CuttingStyle { get; init; } = "";
 
-    /// <summary>Transparency ("transparent", "translucent", "opaque").</summary>
+    /// <summary>Transparency as described ("transparent", "opaque, waxy lustre"); its first word is the reading (<see cref="TransparencyWord"/>).</summary>
     public string Transparency { get; init; } = "";
 
     /// <summary>Free notes.</summary>
@@ -40,4 +40,23 @@ public sealed record StoneSheet
 
     /// <summary>When the stone was last changed (UTC).</summary>
     public DateTimeOffset Modified { get; init; }
+
+    /// <summary>
+    /// The reading in a stone's transparency description: its first word when that is transparent, translucent or opaque,
+    /// else none. The description stays as typed for the report; "semi-
+    /// translucent" and the like say nothing the advice can use.
+    /// </summary>
+    public static string? TransparencyWord(string description)
+    {
+        // The leading letters: "Opaque." and "opaque/waxy" read as opaque.
+        string first = new([.. description.Trim().TakeWhile(char.IsLetter)]);
+        first = first.ToLowerInvariant();
+        return first switch
+        {
+            "transparent" => "transparent",
+            "translucent" => "translucent",
+            "opaque" => "opaque",
+            _ => null,
+        };
+    }
 }

@@ -290,6 +290,9 @@ public sealed class StoneWorkbook : IDisposable
         StoneReadings readings;
         try { readings = StoneReadingsJson.Parse(r.GetString(8)); }
         catch (BatchInputException e) { throw new WorkbookException($"{Path}: stone '{reference}' (id {id}) has unreadable readings: {e.Message}", e); }
+        // A stone saved before transparency was a reading carries it only in its description: read it from there, as the
+        // text UI's form does, so the stone list and the reports answer as the form will.
+        if (readings.Transparency is null && StoneSheet.TransparencyWord(r.GetString(6)) is { } light) readings = readings with { Transparency = light };
         return new StoneSheet
         {
             Id = r.GetInt64(0), Reference = reference, WeightCarats = Number(r, 2, id, reference),

@@ -41,7 +41,7 @@ internal static class ReportReadings
             fields.Add(new("absorption", "Spectroscope", lines.Count == 0 ? "looked; no lines seen"
                 : "lines or bands at " + string.Join(", ", lines.Select(ReportNumbers.Nanometres))));
         AddWord(fields, BenchField.Cut, "Cut", r.Cut);
-        AddWord(fields, BenchField.Transparency, "Transparency", r.Transparency);
+        // The transparency is said once, in the description (StoneReport.DescriptionOf).
         foreach (var info in Features(r.FeaturesPresent))
             fields.Add(new($"feature_seen_{info.Word}", $"{info.SeenHow}: {info.Name}", info.Meaning));
         foreach (var info in Features(r.FeaturesAbsent))

@@ -101,7 +101,9 @@ internal sealed record StoneReport
         new("shape", "Shape", Shown(sheet.Shape)),
         new("cutting_style", "Cutting style", Shown(sheet.CuttingStyle)),
         new("colour", "Colour", Shown(sheet.Readings.Colour)),
-        new("transparency", "Transparency", Shown(sheet.Transparency)),
+        // The description's words when typed (the text UI reads the transparency from their first word), else the reading's
+        // word (a readings file has no description): one line, never "not recorded" above a reading that says it.
+        new("transparency", "Transparency", Shown(string.IsNullOrWhiteSpace(sheet.Transparency) ? sheet.Readings.Transparency : sheet.Transparency)),
         new("notes", "Notes", Shown(sheet.Notes)),
     ];
 

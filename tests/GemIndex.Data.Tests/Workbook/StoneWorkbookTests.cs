@@ -33,6 +33,27 @@ public class StoneWorkbookTests
         Assert.Equal(new EdgeReadingEntry(90, 1.544, 1.549), s.Readings.Refractometer!.Readings[1]);
     }
 
+    [Theory]
+    [InlineData("Opaque, waxy lustre", "opaque")]
+    [InlineData("translucent", "translucent")]
+    [InlineData("semi-translucent", null)]   // says nothing the advice can use
+    public void A_stone_saved_with_its_transparency_only_described_reads_back_with_the_reading(string described, string? reading)
+    {
+        using var dir = new TempDirectory();
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing);
+        StoneSheet saved = wb.Create(Quartz() with { Transparency = described });   // as stones were saved before it was a reading
+        using (var db = new SqliteConnection($"Data Source={dir.File("wb.db")};Pooling=False"))
+        {
+            db.Open();
+            using var cmd = db.CreateCommand();
+            cmd.CommandText = "SELECT readings FROM stone";
+            Assert.DoesNotContain("transparency", (string)cmd.ExecuteScalar()!);   // the stored readings carry none
+        }
+        StoneSheet read = wb.Get(saved.Id)!;
+        Assert.Equal(reading, read.Readings.Transparency);
+        Assert.Equal(described, read.Transparency);
+    }
+
     [Fact]
     public void The_default_path_follows_XDG_DATA_HOME_when_it_is_absolute() =>
         Assert.EndsWith(Path.Combine("gemindex", "workbook.db"), WorkbookLocation.Default());

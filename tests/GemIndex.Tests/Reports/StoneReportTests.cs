@@ -30,6 +30,20 @@ public class StoneReportTests
         Assert.Equal(shown, report.Description.Single(f => f.Key == "dimensions").Value);
     }
 
+    [Theory]
+    [InlineData("", "opaque")]                          // a readings file: no description, the reading's word
+    [InlineData("opaque, waxy lustre", "opaque, waxy lustre")] // the text UI: the description's words, whose first word is the reading
+    public void The_transparency_is_said_once_and_never_not_recorded_beside_a_reading(string described, string shown)
+    {
+        string line = ReportFixtures.QuartzLine.Replace("\"colour\"", "\"transparency\":\"opaque\",\"colour\"");
+        var sheet = ReportFixtures.Sheet(line) with { Transparency = described };
+        var report = StoneReport.Build(sheet, ReportFixtures.Identify(sheet));
+        Assert.Equal(shown, report.Description.Single(f => f.Key == "transparency").Value);
+        string markdown = MarkdownReport.Write(report);
+        Assert.Single(System.Text.RegularExpressions.Regex.Matches(markdown, "Transparency"));
+        Assert.DoesNotContain("Transparency:** not recorded", markdown);
+    }
+
     [Fact]
     public void A_reading_whose_character_the_series_leaves_open_names_no_sign()
     {

@@ -16,25 +16,6 @@ internal static class FormReader
         BenchFields.FeaturesPresent, BenchFields.FeaturesAbsent,
     ];
 
-    /// <summary>
-    /// The reading in a stone's transparency description: its first word when that is transparent, translucent or opaque,
-    /// else none. The description stays as typed for the report; "semi-
-    /// translucent" and the like say nothing the advice can use.
-    /// </summary>
-    public static string? TransparencyWord(string description)
-    {
-        // The leading letters: "Opaque." and "opaque/waxy" read as opaque.
-        string first = new([.. description.Trim().TakeWhile(char.IsLetter)]);
-        first = first.ToLowerInvariant();
-        return first switch
-        {
-            "transparent" => "transparent",
-            "translucent" => "translucent",
-            "opaque" => "opaque",
-            _ => null,
-        };
-    }
-
     public static BenchReadings Read(BenchSnapshot form)
     {
         var readings = new BenchReadings().With(BenchField.Id, form.Text(BenchFields.Reference).Trim());
@@ -43,7 +24,7 @@ internal static class FormReader
         // Every one-key choice of the pages (BenchChoice.All): a choice added there is read here too.
         foreach (string field in BenchChoice.All.Select(c => c.Field))
             if (form.Choice(field) is { Length: > 0 } word) readings = readings.With(field, word);
-        if (TransparencyWord(form.Text(BenchFields.Transparency)) is { } light) readings = readings.With(BenchField.Transparency, light);
+        if (GemIndex.Data.Workbook.StoneSheet.TransparencyWord(form.Text(BenchFields.Transparency)) is { } light) readings = readings.With(BenchField.Transparency, light);
         foreach (StepText step in form.Steps) readings = readings.WithStep(new EdgeStepText(step.Rotation, step.Low, step.High));
         bool refractometer = readings.Steps.Count > 0 || readings.Text(BenchField.Spot) is not null || readings.Text(BenchField.OverLimit) is not null;
         if (refractometer)

@@ -17,7 +17,7 @@ public class FormReaderTests
     [InlineData("", null)]
     public void The_stones_transparency_description_gives_a_reading_only_when_it_starts_with_one_of_the_three_words(string description, string? reading)
     {
-        Assert.Equal(reading, FormReader.TransparencyWord(description));
+        Assert.Equal(reading, GemIndex.Data.Workbook.StoneSheet.TransparencyWord(description));
         var form = new BenchModel();
         form.SetText(BenchFields.Transparency, description);
         form.SetText(BenchFields.Sg, "2.70");
