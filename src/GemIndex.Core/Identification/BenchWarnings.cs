@@ -1,5 +1,6 @@
 using System.Globalization;
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Observations;
 using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Readings;
 
@@ -97,6 +98,13 @@ public static class BenchWarnings
                 warnings.Add($"Unusual for {candidates[0].Material.Name}, {Bench.BenchTestWords.DisplayOfWire(reason.Test)}: {reason.Text}. Re-check it; the answer weighs it as read.");
         if (sheet.Sheet.SpecificGravity is { StandardUncertainty: > LargeGravityUncertainty } sg)
             warnings.Add($"SG uncertainty ±{sg.StandardUncertainty.ToString("0.00", CultureInfo.InvariantCulture)} is large (a small stone or a coarse balance): SG separates little here.");
+        var (dark, oneColour, noFire) = EvidenceLikelihood.SaysNothingOfAnOpaqueStone(sheet.Sheet);
+        if (new[] { (dark, "the polariscope's 'stays dark'"), (oneColour, "the dichroscope's one colour"), (noFire, "no fire") }
+                .Where(x => x.Item1).Select(x => x.Item2).ToList() is { Count: > 0 } nothing)
+            warnings.Add($"Opaque stone: {Listed(nothing)} {(nothing.Count > 1 ? "are" : "is")} what any opaque stone shows, so {(nothing.Count > 1 ? "they are" : "it is")} not weighed.");
+        if (ReadThroughAnOpaqueStone(sheet.Sheet) is { Count: > 0 } through)
+            warnings.Add($"Opaque stone, yet {Listed(through)} {(through.Count > 1 ? "were" : "was")} read: {(through.Count > 1 ? "these need" : "it needs")} light through the stone. "
+                + $"If light passes at a thin edge, call it translucent; else leave {(through.Count > 1 ? "them" : "it")} out. The answer weighs {(through.Count > 1 ? "them" : "it")} as read.");
         var relevant = serious?.ToList() ?? [.. candidates.Where(c => c.Confidence >= Relevant).Select(c => (c.Material, c.Confidence))];
         // The reason, not the entry's notes (an emerald's chromium lines say nothing of why it must stay dry); one line
         // for all such entries, as for the trade rules.
@@ -148,6 +156,21 @@ public static class BenchWarnings
         if (relevant.Any(c => c.Material.Origin == OriginClass.Treated))
             warnings.Add("A treated material is among the likely materials (5 % or more): treatments are mostly not detectable with these tests.");
         return warnings;
+    }
+
+    /// <summary>
+    /// The readings of an opaque stone that only light through a stone shows: a polariscope reaction but "stays dark",
+    /// two or three colours in the dichroscope, fire seen by eye. Measured nB and nG are refractometer readings, taken
+    /// by reflection, and stay out.
+    /// </summary>
+    internal static List<string> ReadThroughAnOpaqueStone(BenchSheet s)
+    {
+        var read = new List<string>();
+        if (s.Transparency != StoneTransparency.Opaque) return read;
+        if (s.Polariscope is { } p and not PolariscopeReaction.SinglyRefractive) read.Add($"the polariscope ({EvidenceLikelihood.Word(p)})");
+        if (s.Pleochroism is { } d and not PleochroismObservation.None) read.Add($"the dichroscope ({EvidenceLikelihood.Word(d)})");
+        if (s.Dispersion?.Seen is { } fire and not DispersionStrength.None) read.Add($"fire by eye ({EvidenceLikelihood.Word(fire)})");
+        return read;
     }
 
     /// <summary>

@@ -45,9 +45,14 @@ public static class EvidenceLikelihood
         int gravityGroup = (material.Forms & MaterialForm.Aggregate) != 0 && s.Refractometer?.Spot is not null ? EvidenceAccumulator.AggregateGroup : EvidenceAccumulator.Independent;
         if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc, gravityGroup);
         for (int i = 0; i < s.HeavyLiquids.Count; i++) HeavyLiquid(material, s.HeavyLiquids[i], acc);
-        if (s.Polariscope is { } pol) Polariscope(profile, pol, acc);
-        if (s.Pleochroism is { } pl) Pleochroism(profile, pl, sheet.IsColourless, lightCounted: s.Polariscope is not null, acc);
-        if (s.Dispersion is { } d) Dispersion(material, d, acc);
+        // A stone the bench calls opaque stays dark between crossed polarisers, shows one colour in the dichroscope and no
+        // fire, whatever it is: those readings say nothing of the material and are not weighed (docs/ranking.md §2, "An
+        // opaque stone"). A reaction that needs light through the stone is weighed as read, and warned of.
+        PolariscopeReaction? polariscope = SaysNothingOfAnOpaqueStone(s) is { Polariscope: true } ? null : s.Polariscope;
+        if (polariscope is { } pol) Polariscope(profile, pol, acc);
+        if (s.Pleochroism is { } pl && SaysNothingOfAnOpaqueStone(s) is not { Pleochroism: true })
+            Pleochroism(profile, pl, sheet.IsColourless, lightCounted: polariscope is not null, acc);
+        if (s.Dispersion is { } d && SaysNothingOfAnOpaqueStone(s) is not { Fire: true }) Dispersion(material, d, acc);
         if (s.ThermalProbe is { } t) Thermal(material, t, acc);
         if (s.Electrical is { } e) Electrical(material, e, acc);
         if (s.UvLong is { } ul) Fluorescence(BenchField.UvLong, "long-wave UV", material.UvLong, profile.UvLong, ul, acc);
@@ -68,6 +73,14 @@ public static class EvidenceLikelihood
                 acc.Say(MagnificationEvidence.Reason(look, expected));
         }
     }
+
+    /// <summary>
+    /// Which of the sheet's transmitted-light readings are what any opaque stone shows: the polariscope's "stays dark"
+    /// (written singly refractive), the dichroscope's one colour, no fire by eye. All false unless the stone is read opaque.
+    /// </summary>
+    internal static (bool Polariscope, bool Pleochroism, bool Fire) SaysNothingOfAnOpaqueStone(BenchSheet s) =>
+        s.Transparency != StoneTransparency.Opaque ? default
+            : (s.Polariscope == PolariscopeReaction.SinglyRefractive, s.Pleochroism == PleochroismObservation.None, s.Dispersion?.Seen == DispersionStrength.None);
 
     private static void SpecificGravity(Material m, double value, double sigma, EvidenceAccumulator acc, int group)
     {

@@ -170,6 +170,33 @@ public class EvidenceModelTests
     }
 
     [Fact]
+    public void On_a_stone_read_opaque_stays_dark_one_colour_and_no_fire_are_not_weighed_and_what_needs_light_through_it_is()
+    {
+        // Common practice: an opaque stone stays dark between crossed polarisers, shows one colour in the dichroscope and no
+        // fire whatever it is, so those readings cannot tell an opaque material from a clear one; two colours can.
+        var opaque = Entry("opaque stone", "opaque", OpticalIndices.SingleIndex(new(1.60, 1.62)), opaque: true);
+        var clear = Entry("clear stone", "clear", OpticalIndices.SingleIndex(new(1.60, 1.62)));
+        var engine = new Identifier([opaque, clear]);
+        var spot = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.61);
+        var nothingElse = engine.Identify(new BenchSheet { Refractometer = spot, Transparency = StoneTransparency.Opaque });
+        var dark = engine.Identify(new BenchSheet
+        {
+            Refractometer = spot, Transparency = StoneTransparency.Opaque, Polariscope = PolariscopeReaction.SinglyRefractive,
+            Pleochroism = PleochroismObservation.None, Dispersion = DispersionObservation.ByEye(DispersionStrength.None),
+        });
+        double Share(IdentificationResult r, string name) => r.Candidates.Single(c => c.Material.Name == name).Confidence;
+        Assert.Equal(Share(nothingElse, "opaque stone"), Share(dark, "opaque stone"), 12);
+        Assert.Contains(dark.Warnings, w => w.StartsWith("Opaque stone: the polariscope's 'stays dark', the dichroscope's one colour and no fire are what any opaque stone shows", StringComparison.Ordinal));
+        // The same readings on a stone not called opaque are weighed: "stays dark" favours the clear singly refractive stone.
+        var notCalledOpaque = engine.Identify(new BenchSheet { Refractometer = spot, Polariscope = PolariscopeReaction.SinglyRefractive });
+        Assert.True(Share(notCalledOpaque, "clear stone") > Share(nothingElse, "clear stone") + 0.2);
+        // Two colours on a stone called opaque need light through it: weighed as read, and warned of.
+        var twoColours = engine.Identify(new BenchSheet { Refractometer = spot, Transparency = StoneTransparency.Opaque, Pleochroism = PleochroismObservation.Dichroic });
+        Assert.NotEqual(Share(nothingElse, "opaque stone"), Share(twoColours, "opaque stone"), 3);
+        Assert.Contains(twoColours.Warnings, w => w.StartsWith("Opaque stone, yet the dichroscope (dichroic) was read", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void The_prior_sits_on_the_species_so_many_entries_give_it_no_extra_mass()
     {
         // Two species with identical data: one has three entries (origins), the other one.
