@@ -101,12 +101,23 @@ internal sealed class MainWindow : Window
     /// A text field takes Ctrl+E as "end of line" (End does the same), a list Ctrl+N as "down" (the arrow does the
     /// same): let them reach the window as "export" and "new stone", whatever has the cursor.
     /// </summary>
-    private static void FreeWindowKeys(View view)
+    private void FreeWindowKeys(View view)
     {
-        if (view is TextField field) field.KeyBindings.Remove(Key.E.WithCtrl);
+        if (view is TextField field)
+        {
+            field.KeyBindings.Remove(Key.E.WithCtrl);
+            // Ctrl+C stays the field's copy; seen first here (KeyDown comes before the bindings) to say what it did.
+            field.KeyDown += (_, key) => { if (key == Key.C.WithCtrl) SayCopyKey(field.SelectedLength > 0); };
+        }
         if (view is ListView list) list.KeyBindings.Remove(Key.N.WithCtrl);
         foreach (View sub in view.SubViews) FreeWindowKeys(sub);
     }
+
+    /// <summary>Said on the key line when Ctrl+C is pressed (at most 79 characters): many terminal programs quit on it, this one copies.</summary>
+    public static string CopyKeyLine(bool copied) =>
+        (copied ? "Copied." : "Nothing selected to copy (Shift+arrows select).") + " Ctrl+Q quits; all is saved.";
+
+    private void SayCopyKey(bool copied) => _keyLine.Text = CopyKeyLine(copied);
 
     public RefractometerPage Refractometer => (RefractometerPage)Pages[1];
 
@@ -364,6 +375,7 @@ internal sealed class MainWindow : Window
         else if (key == Key.E.WithCtrl) Export();
         else if (key == Key.N.WithCtrl) NewStone();
         else if (key == Key.Q.WithCtrl) App!.RequestStop();
+        else if (key == Key.C.WithCtrl) SayCopyKey(false);   // outside a text field there is nothing to copy
         else if (key == Key.Esc) { }                       // Esc quits the application by default: keep the bench open
         else return;
         key.Handled = true;

@@ -262,6 +262,23 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void Ctrl_C_copies_in_a_field_and_says_so_with_how_to_quit_never_silently()
+    {
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(_session, TestMaterials.All);
+        var field = window.Refractometer.Low;
+        field.Text = "1.544";
+        field.NewKeyDownEvent(Key.C.WithCtrl);
+        Assert.Equal(MainWindow.CopyKeyLine(copied: false), window.KeyLine);
+        field.SelectAll();
+        field.NewKeyDownEvent(Key.C.WithCtrl);
+        Assert.Equal(MainWindow.CopyKeyLine(copied: true), window.KeyLine);
+        Assert.Equal("1.544", field.Text);   // copying leaves the reading as typed
+        Assert.All(new[] { true, false }, c => Assert.True(MainWindow.CopyKeyLine(c).Length < 80));
+        Assert.Contains("Ctrl+Q quits", MainWindow.CopyKeyLine(false));
+    }
+
+    [Fact]
     public void The_bench_draws_while_the_catalogue_loads_and_ranks_once_it_arrives()
     {
         var session = new BenchSession(_workbook, new BenchAssessor(null), _uiQueue.Enqueue);
