@@ -13,31 +13,71 @@ internal sealed class StoneListModel(Func<string, IReadOnlyList<StoneSummary>> l
     /// <summary>What a line shows where its answer is still being worked out.</summary>
     public const string Pending = "…";
 
-    private readonly Dictionary<(long, DateTimeOffset), string> _answers = [];
+    private readonly Dictionary<(long, DateTimeOffset), string?> _answers = [];   // null: none could be worked out (no catalogue yet)
+    private IReadOnlyList<StoneSummary> _all = list("");
+    private HashSet<long> _textMatches = [];
 
     public IReadOnlyList<StoneSummary> Shown { get; private set; } = list("");
 
     public string Query { get; private set; } = "";
 
-    public void Search(string text) => Shown = list(Query = text);
+    /// <summary>
+    /// The stones whose reference, colour or notes hold <paramref name="text"/> (the workbook's search), and those whose
+    /// answer does once it is worked out ("spinel" finds the stones answered spinel).
+    /// </summary>
+    public void Search(string text)
+    {
+        Query = text;
+        Refresh();
+    }
 
-    public void Refresh() => Shown = list(Query);
+    public void Refresh()
+    {
+        _all = list("");
+        _textMatches = Query.Trim().Length == 0 ? [] : [.. list(Query).Select(s => s.Id)];
+        Shown = Filtered();
+    }
+
+    private IReadOnlyList<StoneSummary> Filtered()
+    {
+        string q = Query.Trim();
+        if (q.Length == 0) return _all;
+        return [.. _all.Where(s => _textMatches.Contains(s.Id)
+            || (_answers.TryGetValue((s.Id, s.Modified), out string? a) && a is not null && a.Contains(q, StringComparison.OrdinalIgnoreCase)))];
+    }
+
+    /// <summary>True while a search may still find stones by answers not yet tried (one that could not be worked out counts as tried).</summary>
+    public bool AnswersPending => Query.Trim().Length > 0 && _all.Any(s => !_answers.ContainsKey((s.Id, s.Modified)));
 
     /// <summary>The columns' names over the list, in the columns of <see cref="Line"/>.</summary>
     public static readonly string Heading = $"{"Reference",-18} {"Colour",-14} {"Weight",9} {"Answer",-18} Changed (UTC)";
 
-    /// <summary>The shown stones whose answers are not known yet, in the order shown (none without an answer function).</summary>
-    public IReadOnlyList<StoneSummary> Missing() => answer is null ? [] : [.. Shown.Where(s => !_answers.ContainsKey((s.Id, s.Modified)))];
+    /// <summary>
+    /// The stones whose answers are not known yet (none without an answer function): the shown ones first, in the order
+    /// shown, then, while searching, the others, since a search looks in the answers too.
+    /// </summary>
+    public IReadOnlyList<StoneSummary> Missing() => answer is null ? []
+        : [.. Shown.Concat(Query.Trim().Length > 0 ? _all.Except(Shown) : []).Where(s => _answers.GetValueOrDefault((s.Id, s.Modified)) is null)];
 
     /// <summary>Works out one stone's answer (any thread); null when none can be worked out yet (no catalogue loaded).</summary>
     public string? Compute(long id) => answer?.Invoke(id);
 
-    /// <summary>Keeps a stone's answer for this version of it.</summary>
-    public void Store(StoneSummary s, string text) => _answers[(s.Id, s.Modified)] = text;
+    /// <summary>
+    /// Keeps a stone's answer for this version of it (null: none could be worked out yet, asked again at the next fill of
+    /// the list); true when that changes which stones a search shows.
+    /// </summary>
+    public bool Store(StoneSummary s, string? text)
+    {
+        _answers[(s.Id, s.Modified)] = text;
+        var now = Filtered();
+        if (now.Select(x => x.Id).SequenceEqual(Shown.Select(x => x.Id))) return false;
+        Shown = now;
+        return true;
+    }
 
     /// <summary>One stone's line, with its answer, or <see cref="Pending"/> while it is worked out.</summary>
     public string LineOf(StoneSummary s) =>
-        Line(s, answer is null ? "" : _answers.TryGetValue((s.Id, s.Modified), out string? text) ? text : Pending);
+        Line(s, answer is null ? "" : _answers.TryGetValue((s.Id, s.Modified), out string? text) ? text ?? "" : Pending);
 
     /// <summary>One stone: reference, colour, weight, answer, day of the last change (UTC, as the workbook stores it; F3 shows the times).</summary>
     public static string Line(StoneSummary s, string answer) =>

@@ -72,11 +72,27 @@ internal sealed class StoneListView : FullScreenDialog
 
     private void Fill()
     {
-        _rows.Clear();
-        foreach (var s in _model.Shown) _rows.Add(_model.LineOf(s));
-        if (_rows.Count == 0) _rows.Add(_model.Query.Length > 0 ? "(no stone matches the search)" : "(no stones: Ctrl+N starts one)");
+        Rows();
         List.SelectedItem = 0;
         AnswerInBackground();
+    }
+
+    private void Rows()
+    {
+        _rows.Clear();
+        foreach (var s in _model.Shown) _rows.Add(_model.LineOf(s));
+        if (_rows.Count == 0)
+            _rows.Add(_model.Query.Length == 0 ? "(no stones: Ctrl+N starts one)"
+                : _model.AnswersPending ? "(no stone matches yet: the answers are being worked out)" : "(no stone matches the search)");
+    }
+
+    /// <summary>The rows again, the same stone kept selected, when an answer worked out changes what a search shows.</summary>
+    private void ShowMatches()
+    {
+        long? selected = Selected;
+        Rows();
+        int at = selected is { } id ? _model.Shown.ToList().FindIndex(s => s.Id == id) : -1;
+        List.SelectedItem = Math.Max(0, at);
     }
 
     /// <summary>
@@ -104,10 +120,11 @@ internal sealed class StoneListView : FullScreenDialog
     private void Put(StoneSummary s, string? text, int fill)
     {
         if (_closed) return;
-        if (text is not null) _model.Store(s, text);   // none while no catalogue is loaded: asked again next time
+        bool matchesChanged = _model.Store(s, text);   // null while no catalogue is loaded: asked again at the next fill
         if (fill != Volatile.Read(ref _fill)) return;
+        if (matchesChanged || (_model.Query.Length > 0 && !_model.AnswersPending && _model.Shown.Count == 0)) { ShowMatches(); return; }
         for (int i = 0; i < _model.Shown.Count && i < _rows.Count; i++)
-            if (_model.Shown[i].Id == s.Id) { _rows[i] = text is null ? StoneListModel.Line(s, "") : _model.LineOf(s); break; }
+            if (_model.Shown[i].Id == s.Id) { _rows[i] = _model.LineOf(s); break; }
     }
 
     protected override void Dispose(bool disposing)

@@ -38,6 +38,41 @@ public class StoneListModelTests
     }
 
     [Fact]
+    public void A_search_finds_stones_by_their_answer_once_it_is_worked_out()
+    {
+        var red = new StoneSummary(1, "lot 4 / 1", "red", null, Noon);
+        var blue = new StoneSummary(2, "lot 4 / 2", "blue", null, Noon);
+        var all = new[] { red, blue };
+        // The workbook's own search looks at the reference, colour and notes only.
+        var model = new StoneListModel(q => [.. all.Where(s => q.Length == 0 || s.Colour.Contains(q) || s.Reference.Contains(q))],
+            id => id == 1 ? "spinel 91%" : id == 2 ? "corundum 88%" : null);
+        model.Search("SPINEL");
+        Assert.Empty(model.Shown);
+        Assert.True(model.AnswersPending);
+        Assert.Equal([1L, 2L], model.Missing().Select(s => s.Id));         // a search asks for every stone's answer
+        Assert.True(model.Store(red, model.Compute(1)));                    // the match appears as its answer comes
+        Assert.Equal([1L], model.Shown.Select(s => s.Id));
+        Assert.False(model.Store(blue, model.Compute(2)));
+        Assert.False(model.AnswersPending);
+        model.Search("blue");                                               // the workbook's matches stay
+        Assert.Equal([2L], model.Shown.Select(s => s.Id));
+        model.Search("");
+        Assert.Equal([1L, 2L], model.Shown.Select(s => s.Id));
+    }
+
+    [Fact]
+    public void An_answer_that_cannot_be_worked_out_yet_is_asked_again_and_ends_the_wait()
+    {
+        var stone = new StoneSummary(1, "a", "red", null, Noon);
+        var model = new StoneListModel(_ => [stone], _ => null);            // no catalogue loaded
+        model.Search("spinel");
+        Assert.False(model.Store(stone, null));
+        Assert.False(model.AnswersPending);                                 // the list says "no stone matches", not "being worked out"
+        Assert.Equal([1L], model.Missing().Select(s => s.Id));              // asked again at the next fill
+        Assert.DoesNotContain(StoneListModel.Pending, model.LineOf(stone), StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Without_an_answer_function_the_column_stays_empty_and_nothing_is_missing()
     {
         var stone = new StoneSummary(1, "a", "red", null, Noon);
