@@ -21,6 +21,15 @@ internal static class ReportCautions
     /// <summary>The same for the heavy liquids, on the SG page.</summary>
     public const string HeavyLiquidShort = "! Heavy liquids are toxic: avoid skin contact and fumes; follow their safety data sheets and local rules.";
 
+    /// <summary>The contact liquid's caution in one row of the narrowest form (36 characters), kept while entries are refused.</summary>
+    public const string ContactLiquidLine = "! Contact liquid is toxic: see F1.";
+
+    /// <summary>The heavy liquids' caution in one row, kept beside a do-not-immerse caution.</summary>
+    public const string HeavyLiquidLine = "! Heavy liquids are toxic: see F1.";
+
+    /// <summary>The UV lamp's caution in one row, kept while entries are refused.</summary>
+    public const string UltravioletLine = "! UV: never look into the lamp.";
+
     /// <summary>Beside advice to take the SG, which may be done with heavy liquids.</summary>
     public const string SpecificGravityShort = "! If by heavy liquids: they are toxic; avoid skin contact and fumes; follow their safety data sheets and local rules.";
 

@@ -122,6 +122,9 @@ internal class BenchPage : View
     /// </summary>
     protected IReadOnlyList<string> FootCaution { get; init; } = [];
 
+    /// <summary>The same caution in one row (at most the form's width), kept on the foot's last row while entries are refused.</summary>
+    protected string FootCautionLine { get; init; } = "";
+
     /// <summary>Said on the last row when the reasons need more rows than the page has for them.</summary>
     public const string MoreProblems = "! more: move to a '!' to read it";
 
@@ -157,25 +160,28 @@ internal class BenchPage : View
         var ordered = _problemLines.Where(p => p.Key == focused).Concat(_problemLines.Where(p => p.Key != focused));
         List<List<string>> reasons = [.. ordered.Select(p => Main.TextWrap.Lines([p.Line], width).ToList())];
         List<string> lines = [.. reasons.SelectMany(r => r)];
-        if (lines.Count > _problemRows)
+        // The safety caution keeps the last row, in a few words: refusing an entry must not take it off the page.
+        int rows = FootCautionLine.Length > 0 ? Math.Max(1, _problemRows - 1) : _problemRows;
+        if (lines.Count > rows)
         {
             lines = [];
             foreach (List<string> reason in reasons)
             {
-                if (lines.Count + reason.Count > _problemRows - 1) break;
+                if (lines.Count + reason.Count > rows - 1) break;
                 lines.AddRange(reason);
             }
             // The first reason is always given: whole when the page's rows hold it (the other entries keep their '!'),
             // else as much as they hold.
-            if (lines.Count == 0 && reasons[0].Count <= _problemRows) lines.AddRange(reasons[0]);
+            if (lines.Count == 0 && reasons[0].Count <= rows) lines.AddRange(reasons[0]);
             else if (lines.Count == 0)
             {
-                lines.AddRange(reasons[0].Take(_problemRows - 1));
+                lines.AddRange(reasons[0].Take(rows - 1));
                 lines[^1] = lines[^1].TrimEnd() + "…";
                 lines.Add(MoreProblems);
             }
             else lines.Add(MoreProblems);
         }
+        if (FootCautionLine.Length > 0) lines.Add(FootCautionLine);
         _problems.Text = string.Join('\n', lines);
         ReasonRows = lines.Count;
         ProblemsWrapped();

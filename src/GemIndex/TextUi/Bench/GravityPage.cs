@@ -45,12 +45,15 @@ internal sealed class GravityPage : BenchPage
     {
         int width = Math.Max(20, Viewport.Width);
         Result.Text = string.Join('\n', TextWrap.Lines([_result], width));
-        // Without a stone to keep dry, the rows say the heavy liquids' own caution.
+        // Without a stone to keep dry, the rows say the heavy liquids' own caution; with one, that caution and the heavy
+        // liquids' in one row after it (a stone the bench judges safe to immerse is still weighed in a toxic liquid).
         IReadOnlyList<string> lines = _caution.Length == 0 ? [.. TextWrap.Lines([Reports.ReportCautions.HeavyLiquidShort], width)] : [.. TextWrap.Lines(["!! " + _caution], width)];
         // As tall as the caution wraps to, but never over the reasons of refused entries at the page's foot: then it
         // ends where they begin, with a pointer to the answer's warnings, which say it whole.
         int room = ReasonRows == 0 ? int.MaxValue : Math.Max(2, Viewport.Height - Caution.Frame.Y - FootRows);
+        if (_caution.Length > 0) room = Math.Max(2, room - 1);
         if (lines.Count > room) lines = [.. lines.Take(room - 1), "  (more under Warnings)"];
+        if (_caution.Length > 0) lines = [.. lines, Reports.ReportCautions.HeavyLiquidLine];
         Caution.Height = Math.Max(ReasonRows == 0 ? CautionRows : 1, Math.Min(lines.Count, room));
         Caution.Text = string.Join('\n', lines);
     }

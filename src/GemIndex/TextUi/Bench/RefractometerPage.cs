@@ -30,6 +30,7 @@ internal sealed class RefractometerPage : BenchPage
     public RefractometerPage() : base("Refractometer", "Enter stores the step", problemRows: 5)
     {
         FootCaution = [Reports.ReportCautions.ContactLiquidShort];
+        FootCautionLine = Reports.ReportCautions.ContactLiquidLine;
         NextRow();
         Add(new PlainLabel { Y = 0, Text = "Rotation  Low edge  High edge" });
         Rotation = new TextField { X = 0, Y = NextRow(), Width = 7 };

@@ -6,6 +6,7 @@ internal sealed class TestsPage : BenchPage
     public TestsPage() : base("Tests", "a key picks, Space clears")
     {
         FootCaution = [Reports.ReportCautions.UltravioletShort];
+        FootCautionLine = Reports.ReportCautions.UltravioletLine;
         AddChoice(BenchFields.Polariscope);
         AddChoice(BenchFields.Pleochroism);
         AddChoice(BenchFields.Dispersion);

@@ -474,7 +474,8 @@ public sealed class MainWindowTests : IDisposable
         Assert.Equal("1.1", _session.Form.Text(BenchFields.WaterCt));
         string caution = System.Text.RegularExpressions.Regex.Replace(window.Gravity.Caution.Text, @"\s+", " ");
         Assert.Contains("Do not immerse: opal is among the top candidates.", caution);
-        Assert.EndsWith("rely on the other tests.", caution);
+        Assert.Contains("rely on the other tests.", caution);
+        Assert.EndsWith(GemIndex.Cli.Reports.ReportCautions.HeavyLiquidLine, caution);   // the heavy liquids' caution stays too
         Assert.Contains("tests.", FormText(app.Driver!.ToString()!));   // drawn whole, not cut by the label's height
         Close(app, window, token);
     }
@@ -575,7 +576,15 @@ public sealed class MainWindowTests : IDisposable
         app.LayoutAndDraw();
         string page = FormText(app.Driver!.ToString()!);
         Assert.Contains("! step 3: edge 2.1 is above the liquid limit 1.790, where no edge can be seen (a denser liquid? give its index in Liquid limit).", page);
+        // Its four rows leave none for the pointer to the others (their steps keep their marks); the contact liquid's
+        // caution keeps the last row.
+        Assert.Contains(GemIndex.Cli.Reports.ReportCautions.ContactLiquidLine, page);
+        app.InjectKey(Key.Home);           // step 1: a shorter reason, with the pointer to the others
+        app.LayoutAndDraw();
+        page = FormText(app.Driver!.ToString()!);
+        Assert.Contains("! step 1:", page);
         Assert.Contains(BenchPage.MoreProblems, page);
+        Assert.Contains(GemIndex.Cli.Reports.ReportCautions.ContactLiquidLine, page);
         Close(app, window, token);
     }
 
