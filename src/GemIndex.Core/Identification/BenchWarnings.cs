@@ -61,6 +61,7 @@ public static class BenchWarnings
     /// <param name="leaderReasons">The leading candidate's reasons, each test weighed (empty: none worked out).</param>
     /// <param name="varieties">The leading species' unsettled varieties (<see cref="InseparableVarieties"/>) and the test that best tells them apart.</param>
     /// <param name="group">The species of the leading species' mineral group that the answer leaves open (<see cref="InseparableGroup"/>) and the test that best tells them apart.</param>
+    /// <param name="keepDry">The entries to keep dry (<see cref="IdentificationResult.KeepDry"/>); without it, those among <paramref name="serious"/>.</param>
     /// <param name="serious">
     /// Every entry of the whole catalogue holding at least <see cref="Relevant"/>, in the answer's order: the cautions (do not
     /// immerse, trade rules, composites, treatments) come from these, so none is lost when fewer candidates are shown;
@@ -69,7 +70,7 @@ public static class BenchWarnings
     public static IReadOnlyList<string> For(AnalysedSheet sheet, IReadOnlyList<RankedCandidate> candidates, double notInCatalogue, bool noGoodMatch,
         IReadOnlyList<SpeciesResult>? species = null, NextTestAdvice? separation = null, IReadOnlyList<EvidenceContribution>? leaderReasons = null,
         (IReadOnlyList<Material> Entries, NextTestAdvice? Test)? varieties = null, (GroupSpecies Open, NextTestAdvice? Test)? group = null,
-        IReadOnlyList<(Material Material, double Confidence)>? serious = null)
+        IReadOnlyList<(Material Material, double Confidence)>? serious = null, IReadOnlyList<string>? keepDry = null)
     {
         var warnings = new List<string>();
         if (sheet.Sheet.IsEmpty)
@@ -108,7 +109,7 @@ public static class BenchWarnings
         var relevant = serious?.ToList() ?? [.. candidates.Where(c => c.Confidence >= Relevant).Select(c => (c.Material, c.Confidence))];
         // The reason, not the entry's notes (an emerald's chromium lines say nothing of why it must stay dry); one line
         // for all such entries, as for the trade rules.
-        if (relevant.Where(c => c.Material.DoNotImmerse).Select(c => c.Material.Name).ToList() is { Count: > 0 } dry)
+        if ((keepDry ?? [.. relevant.Where(c => c.Material.DoNotImmerse).Select(c => c.Material.Name)]) is { Count: > 0 } dry)
             warnings.Add($"Possible {Listed(dry)}: do not immerse (no water or heavy liquids) — a porous, soft or filled stone can take in liquid or be harmed, and its SG in a liquid misleads.");
         // Entries that share a rule (black and golden coral) are named together, the rule said once.
         foreach (var rule in relevant.Where(c => c.Material.TradeRule is not null).GroupBy(c => c.Material.TradeRule!))

@@ -39,9 +39,9 @@ public sealed record IdentificationResult
     public required IReadOnlyList<string> Warnings { get; init; }
 
     /// <summary>
-    /// The entries to keep out of water and heavy liquids: every entry of the catalogue holding at least
-    /// <see cref="BenchWarnings.Relevant"/> that must not be immersed, most probable first; the "do not immerse" warning
-    /// names the same ones, so that every place that says it names the same stones.
+    /// The entries to keep out of water and heavy liquids: every entry of the catalogue that must not be immersed holding
+    /// at least <see cref="BenchWarnings.Relevant"/>, or a tenth of it in a species holding that much, most probable first;
+    /// the "do not immerse" warning names the same ones, so that every place that says it names the same stones.
     /// </summary>
     public IReadOnlyList<string> KeepDry { get; init; } = [];
 

@@ -414,6 +414,12 @@ public sealed class Identifier
         var separation = Separation(sheet, posterior, species);
         var varieties = BenchWarnings.InseparableVarieties(species, _materials, posterior);
         var group = noGoodMatch ? null : BenchWarnings.InseparableGroup(species, _materials, posterior);
+        // Stones to keep dry: every such entry at the warnings' share, and those of a species that holds it at a tenth of
+        // that (natural turquoise at 4 % beside its treated kin, when turquoise leads), most probable first.
+        var speciesTotal = species.ToDictionary(x => x.Species, x => x.Confidence);
+        List<string> keepDry = [.. order.Where(i => _materials[i].DoNotImmerse && (posterior[i] >= BenchWarnings.Relevant
+            || (posterior[i] >= BenchWarnings.Relevant / 10 && speciesTotal.GetValueOrDefault(_materials[i].Species) >= BenchWarnings.Relevant)))
+            .OrderByDescending(i => posterior[i]).Select(i => _materials[i].Name)];
         return new IdentificationResult
         {
             Id = sheet.Id,
@@ -431,8 +437,8 @@ public sealed class Identifier
                 // The group's test tells its species apart, not merely one species' varieties.
                 group is { } open ? (open.Open, NextTestAdvisor.Advise(sheet, open.Entries, m => open.Open.IndexOf(m.Species))) : null,
                 // Cautions from every serious entry, shown or not.
-                [.. order.Where(i => posterior[i] >= BenchWarnings.Relevant).Select(i => (_materials[i], posterior[i]))]),
-            KeepDry = [.. order.Where(i => posterior[i] >= BenchWarnings.Relevant && _materials[i].DoNotImmerse).Select(i => _materials[i].Name)],
+                [.. order.Where(i => posterior[i] >= BenchWarnings.Relevant).Select(i => (_materials[i], posterior[i]))], keepDry),
+            KeepDry = keepDry,
             InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
                 ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
             SeriesSource = analysed.SeriesShown,
