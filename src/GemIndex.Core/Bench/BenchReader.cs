@@ -153,21 +153,32 @@ public static class BenchReader
                 string field = BenchField.Step(i);
                 double? rotation = unrotated ? i * 180.0 / r.Steps.Count : s.Rotation.Trim().Length == 0 ? 0 : Parse(field, "rotation", s.Rotation);
                 // Every part is read, so that one pass names each bad one (a bad rotation hid a bad edge).
-                double? low = Parse(field, "low", s.Low);
-                double? high = s.High.Trim().Length == 0 ? null : Parse(field, "high", s.High);
+                double? edgeLimit = checkAboveLiquid ? liquid : null;
+                double? low = Parse(field, "low", s.Low, edgeLimit);
+                double? high = s.High.Trim().Length == 0 ? null : Parse(field, "high", s.High, edgeLimit);
                 if (rotation is null || low is null || s.High.Trim().Length > 0 && high is null) continue;
+                // Each edge against the scale first, so that an edge no refractometer shows is named as such, both when
+                // both are (not "high below low" for a low edge typed above the liquid).
+                string limit = liquid.ToString("0.000", CultureInfo.InvariantCulture);
+                var edges = new[] { ("low", low), ("high", high) }.Where(e => e.Item2 is not null).Select(e => (Part: e.Item1, Value: e.Item2!.Value)).ToList();
+                if (checkAboveLiquid && edges.Where(e => e.Value > liquid + BenchDefaults.EdgeSlackAboveLiquid).ToList() is { Count: > 0 } above)
+                {
+                    string named = string.Join(" and ", above.Select(e => $"{e.Part} edge {e.Value.ToString("0.####", CultureInfo.InvariantCulture)}"));
+                    Error(field, BenchSyntax.Step(s), $"at most the liquid limit {limit}",
+                        $"{named} {(above.Count > 1 ? "are" : "is")} above the liquid limit {limit}, where no edge shows"
+                        + (r.Text(BenchField.LiquidLimit) is null ? $" (a denser liquid? set {BenchField.LiquidLimit})." : "."));
+                    continue;
+                }
+                if (edges.Where(e => e.Value < RefractometerProfile.ScaleBottom).ToList() is { Count: > 0 } below)
+                {
+                    string named = string.Join(" and ", below.Select(e => $"{e.Part} edge {e.Value.ToString("0.####", CultureInfo.InvariantCulture)}"));
+                    Error(field, BenchSyntax.Step(s), $"at least the scale's {RefractometerProfile.ScaleBottom.ToString("0.00", CultureInfo.InvariantCulture)}",
+                        $"{named} {(below.Count > 1 ? "are" : "is")} below the scale's lowest index {RefractometerProfile.ScaleBottom.ToString("0.00", CultureInfo.InvariantCulture)}, where no refractometer reads.");
+                    continue;
+                }
                 ShadowEdgeStep step;
                 try { step = new ShadowEdgeStep(rotation.Value, low.Value, high); }
                 catch (QuantityOutOfRangeException e) { Error(field, BenchSyntax.Step(s), e.Allowed, e.Message); continue; }
-                double highest = Math.Max(step.Low, step.High ?? 0);
-                if (checkAboveLiquid && highest > liquid + BenchDefaults.EdgeSlackAboveLiquid)
-                {
-                    string limit = liquid.ToString("0.000", CultureInfo.InvariantCulture);
-                    Error(field, BenchSyntax.Step(s), $"at most the liquid limit {limit}",
-                        $"edge {highest.ToString("0.####", CultureInfo.InvariantCulture)} is above the liquid limit {limit}, where no edge can be seen"
-                        + (r.Text(BenchField.LiquidLimit) is null ? $" (a denser liquid? give its index in {BenchField.LiquidLimit})." : "."));
-                    continue;
-                }
                 steps.Add(step);
             }
             return steps;
@@ -422,11 +433,11 @@ public static class BenchReader
             return Parse(field, "", text);
         }
 
-        private double? Parse(string field, string part, string text)
+        private double? Parse(string field, string part, string text, double? liquidLimit = null)
         {
             if (BenchNumber.TryParse(text, out double value, out string problem)) return value;
             string prefix = part.Length > 0 ? part + ": " : "";
-            string? range = AllowedRange(field, part);
+            string? range = AllowedRange(field, part, liquidLimit);
             Error(field, text, range is null ? "a number" : $"a number, {range}", prefix + Sentence(problem, text) + (range is null ? "" : $"; allowed: {range}."));
             return null;
         }
@@ -435,8 +446,12 @@ public static class BenchReader
         /// The range a numeric field allows, for the message on text that is not a number: asked of the very check the
         /// field's value meets (with a value no field allows), so the range is stated in one place only.
         /// </summary>
-        private static string? AllowedRange(string field, string part)
+        private static string? AllowedRange(string field, string part, double? liquidLimit = null)
         {
+            // A step's edge is read on the same scale as a spot reading: the same range, to the liquid in use.
+            if (part is "low" or "high" && liquidLimit is { } liquid)
+                try { _ = new RefractometerObservation(RefractometerMethod.Spot, spot: 1e300, liquidLimit: liquid); }
+                catch (QuantityOutOfRangeException e) { return e.Allowed; }
             const double Far = 1e300;
             Action? check = (field, part) switch
             {

@@ -28,6 +28,22 @@ public class BenchReaderTests
         Assert.Equal(BenchDefaults.LiquidLimit, reading.Sheet.Refractometer.LiquidLimit);
     }
 
+    [Theory]
+    // A step's edges are read on the spot reading's scale: the same range to the liquid in use, each edge beyond it named.
+    [InlineData("0:1.7a6/1.770", "low: '1.7a6' is not a number; allowed: 1.3 to 1.79.")]
+    [InlineData("0:2.5/1.770", "low edge 2.5 is above the liquid limit 1.790, where no edge shows")]
+    [InlineData("0:1.80/1.81", "low edge 1.8 and high edge 1.81 are above the liquid limit 1.790")]
+    [InlineData("0:1.2/1.25", "low edge 1.2 and high edge 1.25 are below the scale's lowest index 1.30, where no refractometer reads.")]
+    public void A_steps_edge_off_the_scale_is_named_with_the_range_a_spot_reading_takes(string step, string sentence)
+    {
+        var reading = BenchReader.Read(Steps(new BenchReadings(), step));
+        var error = Assert.Single(reading.Errors);
+        Assert.Equal(BenchField.Step(0), error.Field);
+        Assert.Contains(sentence, error.Sentence, StringComparison.Ordinal);
+        var spot = Assert.Single(BenchReader.Read(R((BenchField.Spot, "1.7a"))).Errors);
+        Assert.EndsWith("allowed: 1.3 to 1.79.", spot.Sentence, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void Without_the_refused_entries_the_readings_read_clean_to_the_same_sheet()
     {

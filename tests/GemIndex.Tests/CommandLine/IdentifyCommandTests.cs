@@ -399,7 +399,7 @@ public class IdentifyCommandTests
         using var run = new CommandRun();
         var (exit, _, error) = Identify(run, "--edge", "0:1.81", "--edge", "90:1.81");
         Assert.Equal(3, exit);
-        Assert.Contains("--edge #1: edge 1.81 is above the liquid limit 1.790, where no edge can be seen (a denser liquid? give its index in --liquid-limit).", error, StringComparison.Ordinal);
+        Assert.Contains("--edge #1: low edge 1.81 is above the liquid limit 1.790, where no edge shows (a denser liquid? set --liquid-limit).", error, StringComparison.Ordinal);
         var (ok, _, okError) = Identify(run, "--edge", "0:1.81", "--edge", "90:1.81", "--liquid-limit", "1.81");
         Assert.True(ok == 0, okError);
     }

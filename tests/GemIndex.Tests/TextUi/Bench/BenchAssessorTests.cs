@@ -128,7 +128,7 @@ public class BenchAssessorTests
         BenchModel form = QuartzForm();
         form.PutStep(1, new StepText("45", "1.5x", "1.551"));
         BenchAssessment a = Assessor.Assess(form.Snapshot());
-        Assert.Equal("low: '1.5x' is not a number; allowed: 1 to 4.", a.Errors[BenchFields.Step(1)]);   // the range of the low edge's own check
+        Assert.Equal("low: '1.5x' is not a number; allowed: 1.3 to 1.79.", a.Errors[BenchFields.Step(1)]);   // a spot reading's range, to the liquid in use
         Assert.Single(a.Errors);
         Assert.Equal("quartz", a.Result!.Candidates[0].Material.Name);
         Assert.Equal(4, a.Readings.Refractometer!.Readings.Count);

@@ -575,7 +575,7 @@ public sealed class MainWindowTests : IDisposable
         app.InjectKey(Key.CursorDown);     // step 3
         app.LayoutAndDraw();
         string page = FormText(app.Driver!.ToString()!);
-        Assert.Contains("! step 3: edge 2.1 is above the liquid limit 1.790, where no edge can be seen (a denser liquid? give its index in Liquid limit).", page);
+        Assert.Contains("! step 3: low edge 1.96 and high edge 2.1 are above the liquid limit 1.790, where no edge shows (a denser liquid? set Liquid limit).", page);
         // Its four rows leave none for the pointer to the others (their steps keep their marks); the contact liquid's
         // caution keeps the last row.
         Assert.Contains(GemIndex.Cli.Reports.ReportCautions.ContactLiquidLine, page);
