@@ -31,6 +31,12 @@ internal static class SeriesAsRead
         // Stable: on a tie the analysis' order (uniaxial positive, negative, biaxial) stands.
         var shown = weighed.Where(i => i.Weight >= BenchWarnings.Relevant).OrderByDescending(i => i.Weight).ToList();
         if (shown.Count == 0) shown = [weighed.MaxBy(i => i.Weight)!];
-        return analysed with { Character = shown[0].Character, Interpretations = shown };
+        // A biaxial reading with 2V near 0° is a uniaxial one to these readings: the character is then uniaxial whenever
+        // the two together lead, and the uniaxial readings come first (the numbers stay the section model's).
+        bool looksUniaxial = shown.Any(i => i.Character == OpticCharacter.Biaxial) && shown.Where(i => i.Character == OpticCharacter.Biaxial).All(i => i.LooksUniaxial)
+            && shown.Any(i => i.Character == OpticCharacter.Uniaxial);
+        if (looksUniaxial && odds.Uniaxial + odds.Biaxial > odds.Isotropic)
+            shown = [.. shown.OrderByDescending(i => i.Character == OpticCharacter.Uniaxial).ThenByDescending(i => i.Weight)];
+        return analysed with { Character = shown[0].Character, Interpretations = shown, BiaxialLooksUniaxial = looksUniaxial };
     }
 }

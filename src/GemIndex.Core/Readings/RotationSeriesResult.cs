@@ -8,6 +8,12 @@ public sealed record RotationSeriesResult
     /// <summary>The optic character when the series fixes it; null when undetermined (see <see cref="UndeterminedReason"/>).</summary>
     public OpticCharacter? Character { get; init; }
 
+    /// <summary>
+    /// Every biaxial reading of the series has β within the edges' resolution of α or γ (<see cref="SeriesInterpretation.LooksUniaxial"/>):
+    /// the series cannot tell a biaxial crystal from a uniaxial one, and the bench calls it uniaxial.
+    /// </summary>
+    public bool BiaxialLooksUniaxial { get; init; }
+
     /// <summary>Why the character could not be fixed, or empty.</summary>
     public string UndeterminedReason { get; init; } = "";
 

@@ -31,6 +31,13 @@ public sealed record SeriesInterpretation
     /// <summary>β, for a biaxial interpretation.</summary>
     public RefractiveIndex? Beta { get; init; }
 
+    /// <summary>
+    /// A biaxial reading whose β lies within the edges' resolution (<see cref="SeriesObservation.EdgeResolution"/>) of α or
+    /// γ: a 2V near 0°, which the same readings show as a uniaxial crystal's, so they cannot tell the two apart.
+    /// </summary>
+    public bool LooksUniaxial => Character == OpticCharacter.Biaxial && Beta is { } b
+        && (b.Value - Lowest.Value <= SeriesObservation.EdgeResolution || Highest.Value - b.Value <= SeriesObservation.EdgeResolution);
+
     /// <summary>Birefringence read from the series (γ − α, |ε − ω|; the largest edge separation for a partial series).</summary>
     public required Birefringence Birefringence { get; init; }
 

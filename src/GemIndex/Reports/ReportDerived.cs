@@ -1,5 +1,7 @@
 using GemIndex.Core.Bench;
 using GemIndex.Core.Identification;
+using GemIndex.Core.Optics.Indicatrix;
+using GemIndex.Core.Readings;
 
 namespace GemIndex.Cli.Reports;
 
@@ -8,7 +10,7 @@ internal static class ReportDerived
 {
     public static IEnumerable<ReportField> Fields(StoneReport report)
     {
-        if (report.CharacterOdds is { } odds) yield return new("optic_character", "Optic character (from the readings alone)", CharacterOdds(odds));
+        if (report.CharacterOdds is { } odds) yield return new("optic_character", "Optic character (from the readings alone)", CharacterOdds(odds, series: report.Result.Series));
         else if (report.Character is { } c) yield return new("optic_character", "Optic character", c);
         else if (report.Interpretations.Count > 0)
             yield return new("optic_character", "Optic character", "not fixed by the series" + (report.UndeterminedReason.Length > 0 ? ": " + report.UndeterminedReason : ""));
@@ -118,9 +120,24 @@ internal static class ReportDerived
     /// 1.0 %), biaxial 3.0 %, singly refractive &lt;0.1 %" (isotropic or amorphous, in the bench's word); a uniaxial
     /// sign is named when uniaxial holds 1 % or more.
     /// </summary>
-    public static string CharacterOdds(OpticCharacterPosterior p, Func<double, string>? percent = null)
+    public static string CharacterOdds(OpticCharacterPosterior p, Func<double, string>? percent = null, RotationSeriesResult? series = null)
     {
         percent ??= ReportNumbers.Percent;
+        // Biaxial with 2V near 0° is what a uniaxial crystal shows to these readings: said together, with the signs both show.
+        if (series is { BiaxialLooksUniaxial: true })
+        {
+            var biaxial = series.Interpretations.Where(i => i.Character == OpticCharacter.Biaxial).ToList();
+            double share = biaxial.Sum(i => i.Weight) is var s && s > 0 ? p.Biaxial / s : 0;
+            double positive = p.UniaxialPositive + share * biaxial.Where(i => i.Sign == OpticSign.Positive).Sum(i => i.Weight);
+            double negative = p.UniaxialNegative + share * biaxial.Where(i => i.Sign == OpticSign.Negative).Sum(i => i.Weight);
+            // Short of certain while the readings leave any chance of an isotropic stone (the sum can round to 1).
+            double alike = p.Isotropic > 0 ? Math.Min(p.Uniaxial + p.Biaxial, Math.BitDecrement(1.0)) : p.Uniaxial + p.Biaxial;
+            string signs = string.Join(", ", new[] { ("positive", positive), ("negative", negative) }.Where(x => x.Item2 >= 0.01)
+                .OrderByDescending(x => x.Item2).Select(x => $"{x.Item1} {percent(x.Item2)}"));
+            string both = $"uniaxial (or biaxial, 2V near 0°: not told apart) {percent(alike)}" + (signs.Length > 0 ? $" ({signs})" : "");
+            return string.Join(", ", new[] { (both, alike), ("singly refractive " + percent(p.Isotropic), p.Isotropic) }
+                .Where(x => x.Item2 > 0).OrderByDescending(x => x.Item2).Select(x => x.Item1));
+        }
         string uniaxial = "uniaxial " + percent(p.Uniaxial) + (p.Uniaxial >= 0.01
             ? " (" + string.Join(", ", new[] { ("positive", p.UniaxialPositive), ("negative", p.UniaxialNegative) }
                 .Where(x => x.Item2 > 0).OrderByDescending(x => x.Item2).Select(x => $"{x.Item1} {percent(x.Item2)}")) + ")"

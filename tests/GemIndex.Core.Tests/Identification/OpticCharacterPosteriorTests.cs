@@ -162,5 +162,30 @@ public class OpticCharacterPosteriorTests
         Assert.Equal(OpticCharacter.Isotropic, single.Character);
         Assert.Equal(one.SeriesCharacter!.Isotropic, single.Weight);
     }
-}
 
+    /// <summary>
+    /// A corundum read at eight steps with its optic axis in the facet (common practice: the high edge ω 1.768 stays, the
+    /// low edge runs from ε 1.761 at 0° to meet it at 90°; the intermediate readings follow 1/n² = cos²ψ/ω² + sin²ψ/ε²
+    /// to the 0.001 read): a biaxial crystal fits it only with β at γ (2V near 0°), which these readings show alike.
+    /// </summary>
+    [Fact]
+    public void A_textbook_uniaxial_series_is_read_uniaxial_when_its_biaxial_readings_have_2V_near_0()
+    {
+        var steps = new List<ShadowEdgeStep>
+        {
+            new(0, 1.761, 1.768), new(22.5, 1.762, 1.768), new(45, 1.7645, 1.768), new(67.5, 1.767, 1.768),
+            new(90, 1.768, 1.768), new(112.5, 1.767, 1.768), new(135, 1.7645, 1.768), new(157.5, 1.762, 1.768),
+        };
+        var result = new Identifier([Anything]).Identify(new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Facet, steps) });
+        var shown = result.Series!;
+        Assert.True(shown.BiaxialLooksUniaxial);
+        Assert.Equal(OpticCharacter.Uniaxial, shown.Character);
+        Assert.Equal(OpticSign.Negative, shown.Interpretations[0].Sign);
+        Assert.All(shown.Interpretations.Where(i => i.Character == OpticCharacter.Biaxial), i => Assert.True(i.LooksUniaxial));
+        // A quartz read at four steps leaves a biaxial reading with β well inside (1.548): no such claim.
+        var quartz = new Identifier([Anything]).Identify(new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Facet,
+            [new(0, 1.544, 1.553), new(45, 1.544, 1.551), new(90, 1.544, 1.548), new(135, 1.544, 1.551)]) });
+        Assert.Contains(quartz.Series!.Interpretations, i => i.Character == OpticCharacter.Biaxial && !i.LooksUniaxial);
+        Assert.False(quartz.Series!.BiaxialLooksUniaxial);
+    }
+}

@@ -45,6 +45,28 @@ public class StoneReportTests
     }
 
     [Fact]
+    public void A_series_whose_biaxial_readings_have_2V_near_0_is_said_uniaxial_with_them_in_every_front_end()
+    {
+        // Common practice: a corundum with its optic axis in the facet, read at eight steps (ω 1.768 stays, ε 1.761 at 0°).
+        var p = new OpticCharacterPosterior(0, 0, 0.47, 0.53);
+        var series = new GemIndex.Core.Readings.RotationSeriesResult
+        {
+            Character = GemIndex.Core.Optics.Indicatrix.OpticCharacter.Uniaxial, BiaxialLooksUniaxial = true,
+            Interpretations =
+            [
+                new() { Character = GemIndex.Core.Optics.Indicatrix.OpticCharacter.Uniaxial, Sign = GemIndex.Core.Optics.Indicatrix.OpticSign.Negative, Weight = 0.47,
+                    Lowest = new(1.761), Highest = new(1.768), Birefringence = new(0.007, 0.001), Description = "uniaxial negative" },
+                new() { Character = GemIndex.Core.Optics.Indicatrix.OpticCharacter.Biaxial, Sign = GemIndex.Core.Optics.Indicatrix.OpticSign.Negative, Weight = 0.265,
+                    Lowest = new(1.761), Highest = new(1.768), Beta = new(1.768), Birefringence = new(0.007, 0.001), Description = "biaxial" },
+                new() { Character = GemIndex.Core.Optics.Indicatrix.OpticCharacter.Biaxial, Sign = GemIndex.Core.Optics.Indicatrix.OpticSign.Negative, Weight = 0.265,
+                    Lowest = new(1.761), Highest = new(1.768), Beta = new(1.7675), Birefringence = new(0.007, 0.001), Description = "biaxial" },
+            ],
+        };
+        Assert.Equal("uniaxial (or biaxial, 2V near 0°: not told apart) 100.0 % (negative 100.0 %)", ReportDerived.CharacterOdds(p, series: series));
+        Assert.Equal("biaxial 53.0 %, uniaxial 47.0 % (negative 47.0 %)", ReportDerived.CharacterOdds(p));   // without the readings: the posterior as it is
+    }
+
+    [Fact]
     public void A_reading_whose_character_the_series_leaves_open_names_no_sign()
     {
         var open = new ReportInterpretation("undetermined", "none", 1, 1.617, 1.621, null, 0.004, 0.001, "one step: which edge moves is not seen");
