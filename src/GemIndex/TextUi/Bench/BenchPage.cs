@@ -105,6 +105,7 @@ internal class BenchPage : View
     public virtual void ShowErrors(IReadOnlyDictionary<string, string> errors)
     {
         foreach (FormField f in Fields) f.ShowError(errors.GetValueOrDefault(f.Field));
+        foreach (ChoiceField c in Choices) c.ShowError(errors.GetValueOrDefault(c.Choice.Field));
         _problemLines = [.. ReasonsInWords(errors).Select(m => (m.Key, "! " + m.Text))];
         WrapProblems();
     }
@@ -112,6 +113,7 @@ internal class BenchPage : View
     /// <summary>The reasons of this page's refused entries as the page words them: "In water: …", "step 2: …".</summary>
     public IEnumerable<(string Key, string Text)> ReasonsInWords(IReadOnlyDictionary<string, string> errors) =>
         Fields.Where(f => errors.ContainsKey(f.Field)).Select(f => (f.Field, $"{f.Label}: {InCaptions(errors[f.Field])}"))
+            .Concat(Choices.Where(c => errors.ContainsKey(c.Choice.Field)).Select(c => (c.Choice.Field, $"{c.Choice.Label}: {InCaptions(errors[c.Choice.Field])}")))
             .Concat(OwnErrors(errors));
 
     private IReadOnlyList<(string Key, string Line)> _problemLines = [];
@@ -129,7 +131,7 @@ internal class BenchPage : View
     public const string MoreProblems = "! more: move to a '!' to read it";
 
     /// <summary>The error key of the field or step under the cursor (its reason is shown first), or null.</summary>
-    protected virtual string? FocusedProblemKey => Fields.FirstOrDefault(f => f.Edit.HasFocus)?.Field;
+    protected virtual string? FocusedProblemKey => Fields.FirstOrDefault(f => f.Edit.HasFocus)?.Field ?? Choices.FirstOrDefault(c => c.HasFocus)?.Choice.Field;
 
     /// <summary>
     /// The reasons word-wrapped to the page's width, each continuation indented under its "!": the reason of the field or

@@ -43,8 +43,19 @@ internal sealed class ChoiceField : View
     public void Show(string? word)
     {
         Word = word;
-        // The keys while nothing is chosen; the key line lists them in words while the choice has the cursor.
-        Text = $"{Choice.Label.PadRight(_labelWidth)}[{Choice.Show(word)}]" + (word is null ? "  " + Choice.KeyHint : "");
+        // The keys while nothing is chosen; the key line lists them in words while the choice has the cursor. A refused
+        // answer says where its reason is, as a field's mark does.
+        Text = $"{Choice.Label.PadRight(_labelWidth)}[{Choice.Show(word)}]" + (Refused ? "  " + FormField.SeeBelow : word is null ? "  " + Choice.KeyHint : "");
+    }
+
+    /// <summary>Whether the reader refused this answer (its reason is at the page's foot).</summary>
+    public bool Refused { get; private set; }
+
+    /// <summary>Marks the answer refused (a reason) or not (null).</summary>
+    public void ShowError(string? reason)
+    {
+        Refused = reason is not null;
+        Show(Word);
     }
 
     private void Pick(string? word)

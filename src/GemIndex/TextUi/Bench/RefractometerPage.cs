@@ -143,8 +143,7 @@ internal sealed class RefractometerPage : BenchPage
 
     protected override IEnumerable<(string Key, string Text)> OwnErrors(IReadOnlyDictionary<string, string> errors) =>
         errors.Where(p => p.Key.StartsWith("refractometer.readings[", StringComparison.Ordinal))
-            .Select(p => (p.Key, $"step {int.Parse(p.Key[23..p.Key.IndexOf(']')], System.Globalization.CultureInfo.InvariantCulture) + 1}: {InCaptions(p.Value)}"))
-            .Concat(errors.Where(p => p.Key == BenchFields.OverLimit).Select(p => (p.Key, p.Value)));
+            .Select(p => (p.Key, $"step {int.Parse(p.Key[23..p.Key.IndexOf(']')], System.Globalization.CultureInfo.InvariantCulture) + 1}: {InCaptions(p.Value)}"));
 
     /// <summary>The step selected in the list, while the list has the cursor; else the field under it.</summary>
     protected override string? FocusedProblemKey =>

@@ -559,6 +559,23 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void A_refused_choice_is_marked_at_its_row_and_its_reason_named_by_its_caption()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        window.Refractometer.Fields.Single(f => f.Field == BenchFields.Spot).Edit.SetFocus();
+        Type(app, "1.62");
+        app.InjectKey(Key.Tab);            // the over-limit choice
+        app.InjectKey(Key.Y);              // "no edge seen" beside a spot reading: the over-limit answer is refused
+        Settle();
+        app.LayoutAndDraw();
+        string page = FormText(app.Driver!.ToString()!);
+        Assert.Matches(@"Over limit\s+\[yes\]\s+" + System.Text.RegularExpressions.Regex.Escape(FormField.SeeBelow), page);
+        Assert.Contains("! Over limit: says no edge was seen, but a spot reading 1.62 is given too.", page);
+        Close(app, window, token);
+    }
+
+    [Fact]
     public void The_reason_of_the_step_under_the_cursor_is_shown_first_so_every_marked_entry_can_be_read()
     {
         var (app, window, token) = Open();
