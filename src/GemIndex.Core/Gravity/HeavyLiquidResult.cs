@@ -87,4 +87,20 @@ public readonly record struct HeavyLiquidResult
         HeavyLiquidOutcome.Sinks => specificGravity.Value > Liquid.Value,
         _ => Math.Abs(specificGravity.Value - Liquid.Value) <= Tolerance,
     };
+
+    /// <summary>
+    /// What several results say of the SG together, in words: "above 3.32", "below 2.89", "between 2.89 and 3.05",
+    /// "about 3.32" (suspends), or null when they contradict each other (no SG meets them all) or there are none.
+    /// </summary>
+    public static string? Together(IReadOnlyList<HeavyLiquidResult> results)
+    {
+        if (results.Count == 0) return null;
+        double low = results.Max(r => r.LowestSpecificGravity), high = results.Min(r => r.HighestSpecificGravity);
+        if (low > high) return null;
+        static string F(double x) => x.ToString("0.00", System.Globalization.CultureInfo.InvariantCulture);
+        foreach (var r in results)
+            if (r.Outcome == HeavyLiquidOutcome.Suspends) return $"about {F(r.Liquid.Value)}";
+        bool bottom = low <= SpecificGravity.Minimum, top = high >= SpecificGravity.Maximum;
+        return bottom && top ? null : bottom ? $"below {F(high)}" : top ? $"above {F(low)}" : $"between {F(low)} and {F(high)}";
+    }
 }

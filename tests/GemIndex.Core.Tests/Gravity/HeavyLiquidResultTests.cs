@@ -70,4 +70,16 @@ public class HeavyLiquidResultTests
         var error = Assert.Throws<ArgumentOutOfRangeException>(() => new HeavyLiquidResult(new SpecificGravity(3.32), (HeavyLiquidOutcome)7));
         Assert.StartsWith("heavy liquid outcome must be floats, suspends or sinks.", error.Message);
     }
+
+    [Fact]
+    public void Several_results_together_bound_the_SG_or_say_they_contradict()
+    {
+        // Common practice: a stone that sinks in 2.89 and floats in 3.32 lies between them (a quartz would, at 2.65 it would not).
+        Assert.Equal("between 2.89 and 3.32", HeavyLiquidResult.Together([HeavyLiquidResult.Of(3.32, HeavyLiquidOutcome.Floats), HeavyLiquidResult.Of(2.89, HeavyLiquidOutcome.Sinks)]));
+        Assert.Equal("above 3.32", HeavyLiquidResult.Together([HeavyLiquidResult.Of(3.32, HeavyLiquidOutcome.Sinks), HeavyLiquidResult.Of(2.89, HeavyLiquidOutcome.Sinks)]));
+        Assert.Equal("below 2.89", HeavyLiquidResult.Together([HeavyLiquidResult.Of(2.89, HeavyLiquidOutcome.Floats)]));
+        Assert.Equal("about 3.05", HeavyLiquidResult.Together([HeavyLiquidResult.Of(3.05, HeavyLiquidOutcome.Suspends), HeavyLiquidResult.Of(2.89, HeavyLiquidOutcome.Sinks)]));
+        Assert.Null(HeavyLiquidResult.Together([HeavyLiquidResult.Of(3.32, HeavyLiquidOutcome.Sinks), HeavyLiquidResult.Of(2.89, HeavyLiquidOutcome.Floats)]));
+        Assert.Null(HeavyLiquidResult.Together([]));
+    }
 }

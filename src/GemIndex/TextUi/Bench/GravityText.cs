@@ -39,12 +39,22 @@ internal static class GravityText
             return ResultText.Gravity(sg) + (typedAlone is null ? " from the weights" : typedAlone.Errors.Count > 0 ? " from the weights (the SG typed is refused)" : " as typed")
                 + (typedAlone is null && sg.StandardUncertainty > UsefulWeighingUncertainty ? TooLight : "");
         bool weighing = new[] { BenchFields.AirCt, BenchFields.WaterCt }.Any(f => form.Text(f).Trim().Length > 0);
+        if (typedAlone is null && !weighing && HeavyLiquidsSay(form) is { } said) return said;
         if (typedAlone is null || !weighing) return None;
         SpecificGravity? typed = typedAlone.Sheet.SpecificGravity;
         string typedWords = typed is { } t ? $"SG typed {Value(t)}" : $"SG typed '{BenchText.Shown(typedText)}'";
         if (Weighed(form) is not { } w) return $"!! {typedWords} and a weighing begun. {NeitherUsed}";
         string verdict = typed is not { } both ? "." : Disagree(both, w) ? ": they disagree." : ": they agree.";
         return $"!! {typedWords}, weighed {Value(w)}{verdict} {NeitherUsed}";
+    }
+
+    /// <summary>"SG above 3.32 (heavy liquids)" when only heavy liquids were used and they read clean; else null.</summary>
+    private static string? HeavyLiquidsSay(BenchSnapshot form)
+    {
+        if (form.Text(BenchFields.HeavyLiquids).Trim() is not { Length: > 0 } text) return null;
+        BenchReading reading = BenchReader.Read(new BenchReadings().With(BenchField.HeavyLiquids, text));
+        if (reading.Errors.Count > 0) return null;
+        return HeavyLiquidResult.Together(reading.Sheet.HeavyLiquids) is { } bounds ? $"SG {bounds} (heavy liquids)" : "SG - (the heavy liquids contradict each other: check them)";
     }
 
     /// <summary>True when a typed and a weighed SG lie further apart than <see cref="ClashCoverage"/> combined standard uncertainties.</summary>

@@ -150,7 +150,8 @@ internal static class ResultText
     /// <summary>The other tests the answer used, in the words of the pages they were typed on (every reading that parsed is weighed).</summary>
     private static IEnumerable<string> OtherTests(StoneReadings r, IReadOnlyDictionary<string, string> refused)
     {
-        if (r.HeavyLiquids.Count > 0) yield return $"Heavy liquids: {r.HeavyLiquids.Count}";
+        if (r.HeavyLiquids.Count > 0)
+            yield return "Heavy liquids: " + string.Join("; ", r.HeavyLiquids.Select(h => $"{h.Density.ToString("0.00", System.Globalization.CultureInfo.InvariantCulture)} {h.Result.Replace('_', ' ')}"));
         // A refused answer was left out of the answer: not listed as used.
         foreach (var (field, word) in r.ChoiceWords)
             if (word is not null && !refused.ContainsKey(field) && BenchChoice.For(field) is var choice) yield return $"{choice.Label}: {choice.Show(word)}";

@@ -24,4 +24,16 @@ public class GravityTextTests
         Assert.DoesNotContain(GravityText.TooLight, Line("3.000", "2.000"));
         Assert.Matches(@"^SG (2\.99|3\.00)\d* ± 0\.0\d+ from the weights$", Line("3.000", "2.000"));   // water at 20 °C: 2.99x
     }
+
+    [Theory]
+    [InlineData("3.32 sinks", "SG above 3.32 (heavy liquids)")]
+    [InlineData("3.32 floats; 2.89 sinks", "SG between 2.89 and 3.32 (heavy liquids)")]
+    [InlineData("3.05 suspends", "SG about 3.05 (heavy liquids)")]
+    [InlineData("3.32 sinks; 2.89 floats", "SG - (the heavy liquids contradict each other: check them)")]
+    public void Heavy_liquids_alone_say_what_they_bound_on_the_SG_line(string liquids, string line)
+    {
+        var form = new BenchModel();
+        form.SetText(BenchFields.HeavyLiquids, liquids);
+        Assert.Equal(line, GravityText.Describe(form.Snapshot(), null));
+    }
 }
