@@ -49,7 +49,7 @@ internal static class HtmlReport
             h.AppendLine("<table><caption>Rotation series (refractive indices of the shadow edges)</caption>");
             h.AppendLine("<tr><th>Rotation</th><th>Low edge</th><th>High edge</th></tr>");
             foreach (var s in rf.Readings)
-                h.AppendLine($"<tr>{Number(ReportNumbers.Degrees(s.RotationDeg))}{Number(ReportNumbers.Index(s.Low))}{Number(s.High is { } hi ? ReportNumbers.Index(hi) : "—")}</tr>");
+                h.AppendLine($"<tr>{Number(ReportNumbers.Degrees(s.RotationDeg))}{Number(ReportNumbers.Index(s.Low))}{Number(report.HighEdgeCell(s.High))}</tr>");
             h.AppendLine("</table>");
             h.Append("<figure>").Append(ReportPlots.EdgePlot(rf.Readings)).AppendLine("<figcaption>The shadow edges against rotation.</figcaption></figure>");
         }

@@ -19,7 +19,7 @@ internal static class MarkdownReport
             md.AppendLine("Rotation series (refractive indices of the shadow edges):").AppendLine();
             md.AppendLine("| Rotation | Low edge | High edge |").AppendLine("|---:|---:|---:|");
             foreach (var s in rf.Readings)
-                md.AppendLine($"| {ReportNumbers.Degrees(s.RotationDeg)} | {ReportNumbers.Index(s.Low)} | {(s.High is { } h ? ReportNumbers.Index(h) : "—")} |");
+                md.AppendLine($"| {ReportNumbers.Degrees(s.RotationDeg)} | {ReportNumbers.Index(s.Low)} | {report.HighEdgeCell(s.High)} |");
             md.AppendLine();
         }
         if (report.ReadingFields.Count == 0 && report.Readings.Refractometer is null) md.AppendLine("No readings recorded.").AppendLine();

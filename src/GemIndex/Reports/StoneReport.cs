@@ -111,6 +111,18 @@ internal sealed record StoneReport
         i.Character is { } c ? Word(c.ToString()) : ReportInterpretation.Undetermined, Word(i.Sign.ToString()), i.Weight,
         i.Lowest.Value, i.Highest.Value, i.Beta?.Value, i.Birefringence.Value, i.Birefringence.StandardUncertainty, i.Description, i.AboveLiquidLimit);
 
+    /// <summary>
+    /// A step's high edge as the step tables show it: the index read; "not seen" where other steps read two edges (hidden
+    /// above the liquid, or met by the low edge), with the liquid's limit when the series' highest index lies above it;
+    /// "—" when no step read a second edge.
+    /// </summary>
+    public string HighEdgeCell(double? high)
+    {
+        if (high is { } h) return ReportNumbers.Index(h);
+        if (Readings.Refractometer?.Readings.Any(r => r.High is not null) != true) return "—";
+        return Interpretations.FirstOrDefault()?.AboveLiquidLimit is { } limit ? $"not seen (liquid {ReportNumbers.Index(limit)})" : "not seen";
+    }
+
     /// <summary>Shown for a description field left empty.</summary>
     public const string NotRecorded = "not recorded";
 

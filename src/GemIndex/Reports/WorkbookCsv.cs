@@ -16,7 +16,7 @@ internal static class WorkbookCsv
     [
         "reference", "weight_carats", "colour", "refractive_index_low", "refractive_index_high", "birefringence",
         "optic_character", "specific_gravity", "polariscope", "species", "species_confidence", "best_candidate", "confidence",
-        "no_good_match",
+        "no_good_match", "high_above_liquid_limit",
     ];
 
     /// <summary>Characters that make a spreadsheet read a cell as a formula when they lead it.</summary>
@@ -59,8 +59,10 @@ internal static class WorkbookCsv
             sheet.WeightCarats is { } ct ? ReportNumbers.Fixed(ct, "0.00#") : "",
             sheet.Readings.Colour ?? "",
             best is not null ? ReportNumbers.Index(best.Lowest) : spot is { } s ? ReportNumbers.Index(s) : "",
-            best is not null ? ReportNumbers.Index(best.Highest) : "",
-            best is not null ? ReportNumbers.Index(best.Birefringence) : "",
+            // A highest index fitted above the contact liquid was not read: no number for it or the birefringence; the
+            // last column gives the liquid's limit it lies above.
+            best is { AboveLiquidLimit: null } ? ReportNumbers.Index(best.Highest) : "",
+            best is { AboveLiquidLimit: null } ? ReportNumbers.Index(best.Birefringence) : "",
             report?.Character ?? "",
             report?.SpecificGravity is { } sg ? ReportNumbers.Gravity(sg.Value) : sheet.Readings.Sg is { } given ? ReportNumbers.Gravity(given) : "",
             sheet.Readings.Polariscope is { } p ? StoneReport.Word(p) : "",
@@ -69,6 +71,7 @@ internal static class WorkbookCsv
             top?.Material.Name ?? "",
             top is not null ? ReportNumbers.Fixed(top.Confidence, "0.000") : "",
             result is null ? "" : result.NoGoodMatch ? "true" : "false",
+            best?.AboveLiquidLimit is { } limit ? ReportNumbers.Index(limit) : "",
         ];
     }
 }

@@ -67,6 +67,19 @@ public class StoneReportTests
     }
 
     [Fact]
+    public void A_high_edge_hidden_above_the_liquid_is_not_seen_in_the_step_table_not_a_blank()
+    {
+        // Invented readings: the high edge rises above a 1.79 liquid at three of eight steps.
+        var report = ReportFixtures.Report("""{"id":"h","refractometer":{"method":"facet","liquid_limit":1.79,"readings":[{"rotation_deg":0,"low":1.757,"high":1.762},{"rotation_deg":22.5,"low":1.757,"high":1.77},{"rotation_deg":45,"low":1.757,"high":1.782},{"rotation_deg":67.5,"low":1.757},{"rotation_deg":90,"low":1.757},{"rotation_deg":112.5,"low":1.757},{"rotation_deg":135,"low":1.757,"high":1.785},{"rotation_deg":157.5,"low":1.757,"high":1.768}]}}""");
+        string markdown = MarkdownReport.Write(report);
+        Assert.Contains("| 90° | 1.757 | not seen (liquid 1.790) |", markdown);
+        Assert.Contains("not seen (liquid 1.790)", HtmlReport.Write(report));
+        // One edge at every step: no second edge to miss.
+        var single = ReportFixtures.Report("""{"id":"s","refractometer":{"method":"facet","readings":[{"rotation_deg":0,"low":1.718},{"rotation_deg":90,"low":1.718}]}}""");
+        Assert.Contains("| 1.718 | — |", MarkdownReport.Write(single));
+    }
+
+    [Fact]
     public void A_reading_whose_character_the_series_leaves_open_names_no_sign()
     {
         var open = new ReportInterpretation("undetermined", "none", 1, 1.617, 1.621, null, 0.004, 0.001, "one step: which edge moves is not seen");

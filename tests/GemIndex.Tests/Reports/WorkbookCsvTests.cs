@@ -63,10 +63,27 @@ public class WorkbookCsvTests
         Assert.StartsWith("\"lot 7, \"\"A\"\"\",2.65,colourless,1.544,1.553,", rows[1]);
         var result = ReportFixtures.Identify(identified);
         string Share(double p) => p.ToString("0.000", System.Globalization.CultureInfo.InvariantCulture);
-        Assert.EndsWith($",{result.Species[0].Species},{Share(result.Species[0].Confidence)},{result.Candidates[0].Material.Name},{Share(result.Candidates[0].Confidence)},false", rows[1]);
+        Assert.EndsWith($",{result.Species[0].Species},{Share(result.Species[0].Confidence)},{result.Candidates[0].Material.Name},{Share(result.Candidates[0].Confidence)},false,", rows[1]);
         Assert.Equal("quartz", result.Species[0].Species);
         // The line break inside the quoted colour is the stone's, the last one ends the file (Sep writes the platform's line end).
-        Assert.EndsWith(Environment.NewLine + "x,2.65,\"blue\ngreen\",,,,,,,,,,," + Environment.NewLine, text);
+        Assert.EndsWith(Environment.NewLine + "x,2.65,\"blue\ngreen\",,,,,,,,,,,," + Environment.NewLine, text);
+    }
+
+    [Fact]
+    public void A_highest_index_fitted_above_the_liquid_is_no_number_in_the_sheet_and_its_limit_is_given()
+    {
+        // Invented readings of a strongly birefringent stone whose high edge rises above a 1.79 liquid at three steps.
+        StoneSheet hidden = ReportFixtures.Sheet("""{"id":"h","refractometer":{"method":"facet","liquid_limit":1.79,"readings":[{"rotation_deg":0,"low":1.757,"high":1.762},{"rotation_deg":22.5,"low":1.757,"high":1.77},{"rotation_deg":45,"low":1.757,"high":1.782},{"rotation_deg":67.5,"low":1.757},{"rotation_deg":90,"low":1.757},{"rotation_deg":112.5,"low":1.757},{"rotation_deg":135,"low":1.757,"high":1.785},{"rotation_deg":157.5,"low":1.757,"high":1.768}]}}""");
+        var result = ReportFixtures.Identify(hidden);
+        Assert.NotNull(result.Series!.Interpretations[0].AboveLiquidLimit);
+        var w = new StringWriter();
+        WorkbookCsv.Write(w, [(hidden, result)]);
+        string[] cells = w.ToString().Split(Environment.NewLine)[1].Split(',');
+        int Column(string name) => WorkbookCsv.Columns.ToList().IndexOf(name);
+        Assert.Equal("1.757", cells[Column("refractive_index_low")]);
+        Assert.Equal("", cells[Column("refractive_index_high")]);
+        Assert.Equal("", cells[Column("birefringence")]);
+        Assert.Equal("1.790", cells[Column("high_above_liquid_limit")]);
     }
 
     private static readonly Gen<string> Cell =

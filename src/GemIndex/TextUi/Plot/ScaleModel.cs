@@ -43,7 +43,8 @@ internal sealed class ScaleModel
             {
                 scales.Add(n => new ReadingScale("lowest index", "0.000", best.Lowest.Value, best.Lowest.StandardUncertainty, WidestIndex,
                     [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)m.Indices.Lowest))], ranks));
-                if (best.Birefringence.Value > 0)
+                // A highest index fitted above the liquid is no reading: its birefringence is only a lower bound, not drawn.
+                if (best.Birefringence.Value > 0 && best.AboveLiquidLimit is null)
                     scales.Add(n => new ReadingScale("birefringence", "0.000", best.Birefringence.Value, best.Birefringence.StandardUncertainty, WidestBirefringence,
                         [.. top.Take(n).Select(m => (m.Name, m.Birefringence ?? new PropertyRange(0, 0)))], ranks));
             }

@@ -144,6 +144,20 @@ public class ReadingScaleTests
     }
 
     [Fact]
+    public void A_highest_index_fitted_above_the_liquid_draws_no_birefringence_scale()
+    {
+        // Invented readings of a strongly birefringent stone whose high edge rises above a 1.79 liquid at three of eight
+        // steps: the fitted birefringence is a bound, not a reading, so only the lowest index is scaled.
+        var form = new BenchModel();
+        foreach (var (rotation, low, high) in new[] { ("0", "1.757", "1.762"), ("22.5", "1.757", "1.77"), ("45", "1.757", "1.782"), ("67.5", "1.757", ""),
+                     ("90", "1.757", ""), ("112.5", "1.757", ""), ("135", "1.757", "1.785"), ("157.5", "1.757", "1.768") })
+            form.PutStep(form.Steps.Count, new StepText(rotation, low, high));
+        BenchAssessment a = new BenchAssessor(new Identifier(TestMaterials.All)).Assess(form.Snapshot());
+        Assert.NotNull(a.Result!.Series!.Interpretations.MaxBy(i => i.Weight)!.AboveLiquidLimit);
+        Assert.Equal(["lowest index"], new ScaleModel(a).Scales(3).Select(s => s.Title));
+    }
+
+    [Fact]
     public void A_spot_reading_is_scaled_against_each_candidates_whole_index_span()
     {
         var form = new BenchModel();
