@@ -81,9 +81,10 @@ internal static class HtmlReport
         if (report.NoGoodMatch) h.Append("<p class=\"no-match\">").Append(E(StoneReport.NoGoodMatchStatement)).AppendLine("</p>");
         h.AppendLine("<table>").AppendLine("<tr><th>Rank</th><th>Material</th><th>Species</th><th>Origin</th><th>Confidence</th><th>Fit with the entry</th></tr>");
         foreach (var c in report.Candidates)
-            h.AppendLine($"<tr>{Number(c.Rank.ToString(CultureInfo.InvariantCulture))}<td>{E(c.Name)}</td><td>{E(c.Species)}</td><td>{E(c.Origin)}</td>" +
+            h.AppendLine($"<tr>{Number(c.Rank.ToString(CultureInfo.InvariantCulture))}<td>{E(c.Name)}</td><td>{E(report.SpeciesWithTotal(c.Species))}</td><td>{E(c.Origin)}</td>" +
                 $"{Number(ReportNumbers.Percent(c.Confidence))}{Number(ReportNumbers.Fixed(c.Fit, "0.00"))}</tr>");
         h.AppendLine("</table>");
+        h.Append("<p>").Append(E(StoneReport.CandidateOrder)).AppendLine("</p>");
         h.Append("<p>Fit with the entry: ").Append(E(StoneReport.FitMeaning)).AppendLine(".</p>");
         h.Append("<p>Not in the catalogue: ").Append(E(ReportNumbers.Percent(report.NotInCatalogue))).AppendLine("</p>");
         foreach (var c in report.Candidates.Where(c => c.Reasons.Count > 0))

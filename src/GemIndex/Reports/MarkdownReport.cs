@@ -50,8 +50,9 @@ internal static class MarkdownReport
         if (report.NoGoodMatch) md.Append("**").Append(Escape(StoneReport.NoGoodMatchStatement)).AppendLine("**").AppendLine();
         md.AppendLine("| Rank | Material | Species | Origin | Confidence | Fit with the entry |").AppendLine("|---:|---|---|---|---:|---:|");
         foreach (var c in report.Candidates)
-            md.AppendLine($"| {c.Rank} | {Escape(c.Name)} | {Escape(c.Species)} | {Escape(c.Origin)} | {ReportNumbers.Percent(c.Confidence)} | {ReportNumbers.Fixed(c.Fit, "0.00")} |");
-        md.AppendLine().Append("Fit with the entry: ").Append(StoneReport.FitMeaning).AppendLine(".").AppendLine();
+            md.AppendLine($"| {c.Rank} | {Escape(c.Name)} | {Escape(report.SpeciesWithTotal(c.Species))} | {Escape(c.Origin)} | {ReportNumbers.Percent(c.Confidence)} | {ReportNumbers.Fixed(c.Fit, "0.00")} |");
+        md.AppendLine().AppendLine(Escape(StoneReport.CandidateOrder)).AppendLine();
+        md.Append("Fit with the entry: ").Append(StoneReport.FitMeaning).AppendLine(".").AppendLine();
         md.Append("Not in the catalogue: ").AppendLine(ReportNumbers.Percent(report.NotInCatalogue)).AppendLine();
         foreach (var c in report.Candidates.Where(c => c.Reasons.Count > 0))
         {

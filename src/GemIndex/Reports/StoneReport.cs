@@ -123,6 +123,13 @@ internal sealed record StoneReport
         return Interpretations.FirstOrDefault()?.AboveLiquidLimit is { } limit ? $"not seen (liquid {ReportNumbers.Index(limit)})" : "not seen";
     }
 
+    /// <summary>What the candidate tables say under them of their order: species first, so a rank may hold less than the next.</summary>
+    public const string CandidateOrder = "Ranked by species first (each species' total over the whole catalogue in brackets), then by entry within it.";
+
+    /// <summary>A candidate's species with its total over the whole catalogue: "vesuvianite (12.3 %)".</summary>
+    public string SpeciesWithTotal(string species) =>
+        Result.Species.FirstOrDefault(x => x.Species == species) is { } total ? $"{species} ({ReportNumbers.Percent(total.Confidence)})" : species;
+
     /// <summary>Shown for a description field left empty.</summary>
     public const string NotRecorded = "not recorded";
 

@@ -229,9 +229,12 @@ public class StoneReportTests
         Assert.Equal(["rock crystal", "citrine", "crown glass"], report.Candidates.Where(c => c.Reasons.Count > 0).Select(c => c.Name));
         string markdown = MarkdownReport.Write(report);
         Assert.Contains("| Rank | Material | Species | Origin |", markdown);
-        Assert.Contains("| 4 | crown glass | glass | natural |", markdown);
+        // Each species with its total, so that a rank holding less than the next reads as the species-first order it is.
+        string glass = $"glass ({ReportNumbers.Percent(result.Species.Single(x => x.Species == "glass").Confidence)})";
+        Assert.Contains($"| 4 | crown glass | {MarkdownReport.Escape(glass)} | natural |", markdown);
+        Assert.Contains(StoneReport.CandidateOrder, markdown);
         Assert.Contains("Reasons for crown glass:", markdown);
         Assert.DoesNotContain("Reasons for amethyst:", markdown);
-        Assert.Contains("<td>crown glass</td><td>glass</td>", HtmlReport.Write(report));
+        Assert.Contains("<td>crown glass</td><td>glass (", HtmlReport.Write(report));
     }
 }
