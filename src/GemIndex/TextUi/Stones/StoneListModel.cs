@@ -49,8 +49,17 @@ internal sealed class StoneListModel(Func<string, IReadOnlyList<StoneSummary>> l
     /// <summary>True while a search may still find stones by answers not yet tried (one that could not be worked out counts as tried).</summary>
     public bool AnswersPending => Query.Trim().Length > 0 && _all.Any(s => !_answers.ContainsKey((s.Id, s.Modified)));
 
+    /// <summary>The answer column's narrowest width, and the columns around it with their spaces (the list's frame aside).</summary>
+    public const int NarrowestAnswer = 18, OtherColumns = 18 + 1 + 14 + 1 + 9 + 1 + 1 + 13;
+
+    /// <summary>The answer column's width: what the list's width leaves (at 120 columns a long species name and its share fit).</summary>
+    public int AnswerWidth { get; private set; } = NarrowestAnswer;
+
+    /// <summary>The width of the list's rows; the answer column takes what the other columns leave.</summary>
+    public int Width { set => AnswerWidth = Math.Max(NarrowestAnswer, value - OtherColumns); }
+
     /// <summary>The columns' names over the list, in the columns of <see cref="Line"/>.</summary>
-    public static readonly string Heading = $"{"Reference",-18} {"Colour",-14} {"Weight",9} {"Answer",-18} Changed (UTC)";
+    public string Heading => $"{"Reference",-18} {"Colour",-14} {"Weight",9} {"Answer".PadRight(AnswerWidth)} Changed (UTC)";
 
     /// <summary>
     /// The stones whose answers are not known yet (none without an answer function): the shown ones first, in the order
@@ -77,11 +86,11 @@ internal sealed class StoneListModel(Func<string, IReadOnlyList<StoneSummary>> l
 
     /// <summary>One stone's line, with its answer, or <see cref="Pending"/> while it is worked out.</summary>
     public string LineOf(StoneSummary s) =>
-        Line(s, answer is null ? "" : _answers.TryGetValue((s.Id, s.Modified), out string? text) ? text ?? "" : Pending);
+        Line(s, answer is null ? "" : _answers.TryGetValue((s.Id, s.Modified), out string? text) ? text ?? "" : Pending, AnswerWidth);
 
     /// <summary>One stone: reference, colour, weight, answer, day of the last change (UTC, as the workbook stores it; F3 shows the times).</summary>
-    public static string Line(StoneSummary s, string answer) =>
+    public static string Line(StoneSummary s, string answer, int answerWidth = NarrowestAnswer) =>
         $"{Results.ResultText.Clip(s.Reference.Length == 0 ? "(no reference)" : s.Reference, 18),-18} {Results.ResultText.Clip(s.Colour, 14),-14} "
-        + $"{(s.WeightCarats is { } w ? w.ToString("0.00", CultureInfo.InvariantCulture) + " ct" : ""),9} {Results.ResultText.Clip(answer, 18),-18} "
+        + $"{(s.WeightCarats is { } w ? w.ToString("0.00", CultureInfo.InvariantCulture) + " ct" : ""),9} {Results.ResultText.Clip(answer, answerWidth).PadRight(answerWidth)} "
         + s.Modified.ToUniversalTime().ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
 }

@@ -25,7 +25,7 @@ internal sealed class StoneListView : FullScreenDialog
         Title = "Stones: Enter open ^N new ^D duplicate F3 history Del delete";
         var label = new PlainLabel { Text = "Search:" };
         Search = new TextField { X = 8, Width = 24 };
-        var heading = new PlainLabel { Y = 1, Width = Dim.Fill(), Text = StoneListModel.Heading };
+        var heading = new PlainLabel { Y = 1, Width = Dim.Fill(), Text = _model.Heading };
         List = new ListView { Y = 2, Width = Dim.Fill(), Height = Dim.Fill() };
         List.SetSource(_rows);
         Search.TextChanged += (_, _) => { _model.Search(Search.Text); Fill(); };
@@ -45,6 +45,15 @@ internal sealed class StoneListView : FullScreenDialog
         List.KeyDown += keys;      // on the focused views: Enter would otherwise close the dialog first
         Search.KeyDown += keys;
         Add(label, Search, heading, List);
+        // The answer column widens with the screen (a long species name and its share were cut at 18 characters).
+        ViewportChanged += (_, _) =>
+        {
+            int before = _model.AnswerWidth;
+            _model.Width = Viewport.Width;
+            if (_model.AnswerWidth == before) return;
+            heading.Text = _model.Heading;
+            ShowMatches();
+        };
         Fill();
     }
 

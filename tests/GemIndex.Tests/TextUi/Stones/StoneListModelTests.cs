@@ -15,10 +15,25 @@ public class StoneListModelTests
         Assert.Contains(StoneListModel.Pending, model.LineOf(stone), StringComparison.Ordinal);   // shown at once, worked out after
         model.Store(stone, model.Compute(stone.Id)!);
         string line = model.LineOf(stone);
-        Assert.Equal(StoneListModel.Heading.IndexOf("Answer", StringComparison.Ordinal), line.IndexOf("chrysoberyl 97%", StringComparison.Ordinal));
+        Assert.Equal(model.Heading.IndexOf("Answer", StringComparison.Ordinal), line.IndexOf("chrysoberyl 97%", StringComparison.Ordinal));
         Assert.EndsWith("2026-12-03", line, StringComparison.Ordinal);
         Assert.Contains("1.23 ct", line, StringComparison.Ordinal);
         Assert.True(line.Length <= 78, $"{line.Length} columns: {line}");   // inside the dialog's frame at 80 columns
+    }
+
+    [Theory]
+    [InlineData(78, 20)]     // 80 columns inside the frame
+    [InlineData(118, 60)]    // 120 columns: a long species name and its share fit
+    public void The_answer_column_takes_the_width_the_other_columns_leave(int width, int answerWidth)
+    {
+        var stone = new StoneSummary(7, "lot 9", "red", 1.2, Noon);
+        var model = new StoneListModel(_ => [stone], _ => "pyrope-almandine garnet 88%") { Width = width };
+        model.Store(stone, model.Compute(7)!);
+        Assert.Equal(answerWidth, model.AnswerWidth);
+        string line = model.LineOf(stone);
+        Assert.Equal(model.Heading.IndexOf("Changed", StringComparison.Ordinal), line.IndexOf("2026-12-03", StringComparison.Ordinal));
+        Assert.True(line.Length <= width, $"{line.Length}: {line}");
+        Assert.Equal(answerWidth >= 27, line.Contains("pyrope-almandine garnet 88%", StringComparison.Ordinal));
     }
 
     [Fact]
