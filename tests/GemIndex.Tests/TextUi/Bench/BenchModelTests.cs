@@ -17,6 +17,24 @@ public class BenchModelTests
     }
 
     [Fact]
+    public void After_a_half_turn_the_next_rotation_fills_the_widest_gap_rather_than_repeat_0()
+    {
+        // Common practice: the shadow edges repeat every 180°, so a step at 180° reads what 0° read.
+        var form = new BenchModel();
+        form.SetText(RefractometerPage.RotationStepField, "22.5");
+        for (int i = 0; i < 8; i++) form.PutStep(i, new StepText((i * 22.5).ToString(System.Globalization.CultureInfo.InvariantCulture), "1.761", "1.768"));
+        Assert.Equal("11.25", form.NextRotation());   // 0–157.5° read: the middle of the first of the equal gaps
+        var some = new BenchModel();
+        some.SetText(RefractometerPage.RotationStepField, "45");
+        some.PutStep(0, new StepText("0", "1.544", "1.553"));
+        some.PutStep(1, new StepText("135", "1.544", "1.551"));
+        Assert.Equal("67.5", some.NextRotation());    // 180° is 0° again: the widest gap, 0–135°, is halved
+        var beyond = new BenchModel();
+        beyond.PutStep(0, new StepText("200", "1.544", "1.553"));
+        Assert.Equal("35", beyond.NextRotation());    // round the half turn (200 + 15 = 215 → 35)
+    }
+
+    [Fact]
     public void Every_change_bumps_the_version_and_a_repeat_does_not()
     {
         var form = new BenchModel();
