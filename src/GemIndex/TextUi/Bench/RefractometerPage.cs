@@ -47,7 +47,8 @@ internal sealed class RefractometerPage : BenchPage
         StepField = AddField(RotationStepField, "Rotation step", 8, "°, default 15");
         AddField(BenchFields.LiquidLimit, "Liquid limit", 8, "default 1.79");
         AddField(BenchFields.LightNm, "Light", 8, "nm (589.3)");
-        AddField(BenchFields.Precision, "Precision", 8, "default 0.001");
+        // Both defaults: a spot reading is read to about ±0.01, an edge to 0.001.
+        AddField(BenchFields.Precision, "Precision", 8, $"{Fixed(BenchDefaults.FacetPrecision)}, spot {Fixed(BenchDefaults.SpotPrecision)}");
         AddField(BenchFields.CalibrationOffset, "Calibration", 8, "offset (0)");
         foreach (TextField box in new[] { Rotation, Low, High })
             box.KeyDown += (_, key) =>
@@ -148,4 +149,7 @@ internal sealed class RefractometerPage : BenchPage
     /// <summary>The step selected in the list, while the list has the cursor; else the field under it.</summary>
     protected override string? FocusedProblemKey =>
         Grid.HasFocus && Grid.SelectedItem is { } i && i < _stepCount ? BenchFields.Step(i) : base.FocusedProblemKey;
+
+    /// <summary>".001": the hint's room at 80 columns is 15 characters.</summary>
+    private static string Fixed(double value) => value.ToString(".000", System.Globalization.CultureInfo.InvariantCulture);
 }
