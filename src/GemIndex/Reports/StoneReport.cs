@@ -69,7 +69,7 @@ internal sealed record StoneReport
             Description = DescriptionOf(sheet),
             Readings = sheet.Readings,
             ReadingFields = ReportReadings.Fields(sheet.Readings),
-            Character = series?.Character is { } c ? Word(c.ToString()) : null,
+            Character = series?.Character is { } c ? TextUi.Results.ResultText.Character(c) : null,   // the bench's words, as the text UI says it
             CharacterOdds = result.SeriesCharacter,
             UndeterminedReason = series?.UndeterminedReason ?? "",
             Interpretations = [.. (series?.Interpretations ?? []).OrderByDescending(i => i.Weight).Select(Interpretation)],
@@ -108,7 +108,7 @@ internal sealed record StoneReport
     ];
 
     private static ReportInterpretation Interpretation(SeriesInterpretation i) => new(
-        i.Character is { } c ? Word(c.ToString()) : ReportInterpretation.Undetermined, Word(i.Sign.ToString()), i.Weight,
+        i.Character is { } c ? TextUi.Results.ResultText.Character(c) : ReportInterpretation.Undetermined, Word(i.Sign.ToString()), i.Weight,
         i.Lowest.Value, i.Highest.Value, i.Beta?.Value, i.Birefringence.Value, i.Birefringence.StandardUncertainty, i.Description, i.AboveLiquidLimit);
 
     /// <summary>

@@ -86,6 +86,23 @@ public class WorkbookCsvTests
         Assert.Equal("1.790", cells[Column("high_above_liquid_limit")]);
     }
 
+    [Fact]
+    public void The_sheet_and_the_reports_name_the_optic_character_and_the_conductivity_in_the_text_UIs_words()
+    {
+        // One index read at two steps (invented, near spinel's handbook 1.718 from memory): singly refractive, as the
+        // polariscope and the text UI say it, not "isotropic" alone.
+        StoneSheet one = ReportFixtures.Sheet("""{"id":"s","refractometer":{"method":"facet","readings":[{"rotation_deg":0,"low":1.718},{"rotation_deg":90,"low":1.718}]},"electrical":"insulating"}""");
+        var w = new StringWriter();
+        WorkbookCsv.Write(w, [(one, ReportFixtures.Identify(one))]);
+        string[] cells = w.ToString().Split(Environment.NewLine)[1].Split(',');
+        Assert.Equal(GemIndex.Cli.TextUi.Results.ResultText.Character(GemIndex.Core.Optics.Indicatrix.OpticCharacter.Isotropic),
+            cells[WorkbookCsv.Columns.ToList().IndexOf("optic_character")]);
+        Assert.Equal("singly refractive (isotropic)", cells[WorkbookCsv.Columns.ToList().IndexOf("optic_character")]);
+        string markdown = MarkdownReport.Write(StoneReport.Build(one, ReportFixtures.Identify(one)));
+        Assert.Contains("Electrical conductivity:** insulating", markdown);
+        Assert.Equal("insulating", GemIndex.Cli.TextUi.Bench.BenchChoice.For(GemIndex.Core.Bench.BenchField.Electrical).Show("insulating"));
+    }
+
     private static readonly Gen<string> Cell =
         Gen.Elements("a", "b", ",", "\"", "\r", "\n", "\r\n", " ", "=", "+", "-", "@", "\t", "'", ";", "é", "1.544")
             .ListOf().Select(parts => string.Concat(parts));

@@ -18,7 +18,7 @@ internal sealed record BenchChoice(string Field, string Label, IReadOnlyList<(ch
         new(BenchFields.Pleochroism, "Pleochroism", [('n', "none", "none"), ('b', "dichroic", "dichroic"), ('t', "trichroic", "trichroic")]),
         new(BenchFields.Dispersion, "Fire (eye)", [('n', "none", "none"), ('w', "weak", "weak"), ('m', "moderate", "moderate"), ('s', "strong", "strong"), ('v', "very_strong", "very strong")]),
         new(BenchFields.ThermalProbe, "Thermal probe", [('+', "positive", "positive"), ('-', "negative", "negative")]),
-        new(BenchFields.Electrical, "Conductivity", [('+', "conductive", "conductive"), ('-', "insulating", "non-conductive")]),
+        new(BenchFields.Electrical, "Conductivity", [('+', "conductive", "conductive"), ('-', "insulating", "insulating")]),
         new(BenchFields.UvLong, "UV long wave", Fluorescence),
         new(BenchFields.UvShort, "UV short wave", Fluorescence),
     ];
