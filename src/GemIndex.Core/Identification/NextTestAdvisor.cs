@@ -469,7 +469,7 @@ public static class NextTestAdvisor
         BenchField.Electrical => EvidenceLikelihood.Word(m.Electrical),
         BenchField.UvLong => m.UvLong.Count == 0 ? "not known" : string.Join(" or ", m.UvLong.Select(EvidenceLikelihood.Word)),
         BenchField.UvShort => m.UvShort.Count == 0 ? "not known" : string.Join(" or ", m.UvShort.Select(EvidenceLikelihood.Word)),
-        BenchField.Absorption => m.AbsorptionLinesNanometres.Count == 0 ? "no diagnostic lines" : "lines at " + string.Join(", ", m.AbsorptionLinesNanometres.Select(l => l.ToString("0.#", CultureInfo.InvariantCulture))) + " nm",
+        BenchField.Absorption => m.AbsorptionLinesNanometres.Count == 0 ? "no diagnostic lines" : "lines at " + string.Join(", ", m.AbsorptionLinesNanometres.Order().Select(l => l.ToString("0.#", CultureInfo.InvariantCulture))) + " nm",   // along the spectrum, as the scale reads
         _ => "",
     };
 }

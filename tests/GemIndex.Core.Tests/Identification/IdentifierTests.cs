@@ -399,6 +399,18 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void The_advice_lists_a_materials_lines_along_the_spectrum_as_the_scale_reads()
+    {
+        // Invented entries alike but for their lines, listed strongest first in the catalogue (turquoise-like 432, 420, 460).
+        var index = OpticalIndices.SingleIndex(new(1.61, 1.62));
+        Material lined = Make("lined", "a", index, 2.60, 2.80) with { AbsorptionLines = [new(432, LineStrength.Strong), new(420), new(460, LineStrength.Weak)] };
+        Material plain = Make("plain", "b", index, 2.60, 2.80);
+        var advice = NextTestAdvisor.Advise(new BenchSheet { SpecificGravity = new SpecificGravity(2.70, 0.01) }, [(lined, 0.5), (plain, 0.5)]);
+        var next = Assert.IsType<NextTestAdvice>(advice);
+        Assert.Contains("lined: lines at 420, 432, 460 nm", next.Expectations);
+    }
+
+    [Fact]
     public void When_only_origin_is_open_the_advice_names_a_look_under_magnification()
     {
         // Natural and synthetic sapphire share every bench reading here; only what is inside tells them apart (nature's
