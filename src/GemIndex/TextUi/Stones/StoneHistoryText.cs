@@ -40,10 +40,12 @@ internal static class StoneHistoryText
     public static IEnumerable<string> Describe(StoneEdit e)
     {
         if (e.Field == "created") return [$"stone created as '{e.After}'"];
+        // The transparency reading is the description's first word, whose own change is already said.
+        if (e.Field == ReadingsPrefix + "transparency") return [];
         // A reading is stored as JSON ("readings.colour" holds "\"blue\""): its text is read as JSON too.
         bool reading = e.Field == "readings" || e.Field.StartsWith(ReadingsPrefix, StringComparison.Ordinal);
         if (Flatten(e.Before, reading) is { } before && Flatten(e.After, reading) is { } after)
-            return before.Keys.Union(after.Keys).Where(k => k != "id" && before.GetValueOrDefault(k) != after.GetValueOrDefault(k))
+            return before.Keys.Union(after.Keys).Where(k => k != "id" && !(e.Field == "readings" && k == "transparency") && before.GetValueOrDefault(k) != after.GetValueOrDefault(k))
                 .Select(k => Change(PathWords(k.Length == 0 ? e.Field : e.Field + "." + k), before.GetValueOrDefault(k), after.GetValueOrDefault(k)));
         return [Change(Label(e.Field), e.Before, e.After)];
     }

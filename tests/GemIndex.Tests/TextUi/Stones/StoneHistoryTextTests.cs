@@ -25,6 +25,18 @@ public class StoneHistoryTextTests
     }
 
     [Fact]
+    public void The_transparency_is_told_once_by_its_description_not_again_as_the_reading_taken_from_it()
+    {
+        IReadOnlyList<string> lines = StoneHistoryText.Lines("lot 7",
+        [
+            new StoneEdit(At, "transparency", "", "transparent"),
+            new StoneEdit(At, "readings.transparency", "", "\"transparent\""),
+            new StoneEdit(At.AddMinutes(1), "readings", """{"id":"a"}""", """{"id":"a","transparency":"opaque","colour":"blue"}"""),
+        ]);
+        Assert.Equal(["2026-03-01 09:05:00  Transparency set to 'transparent'", "2026-03-01 09:06:00  Colour set to 'blue'"], lines.Skip(2));
+    }
+
+    [Fact]
     public void Readings_kept_as_JSON_are_told_field_by_field_and_the_JSON_is_never_shown()
     {
         const string before = """{"id":"b","refractometer":{"method":"facet","readings":[{"rotation_deg":0,"low":1.544,"high":1.553}]},"sg":2.65}""";
