@@ -14,6 +14,9 @@ internal static class ReportNumbers
     /// <summary>A mass in carats: 1.27 ct.</summary>
     public static string Carats(double value) => Fixed(value, "0.00#") + " ct";
 
+    /// <summary>A weighing on the hydrostatic balance, to its thousandth: 1.520 ct beside 1.258 ct.</summary>
+    public static string WeighedCarats(double value) => Fixed(value, "0.000") + " ct";
+
     /// <summary>An angle of rotation: 45°.</summary>
     public static string Degrees(double value) => Fixed(value, "0.#") + "°";
 

@@ -21,8 +21,8 @@ internal static class ReportReadings
         if (r.Sg is { } sg) fields.Add(new("sg_given", "Specific gravity (given)", ReportNumbers.Gravity(sg)));
         if (r.SgWeighing is { } w)
         {
-            fields.Add(new("weight_in_air", "Weight in air", w.AirCt is { } air ? ReportNumbers.Carats(air) : StoneReport.NotRecorded));
-            fields.Add(new("weight_in_water", "Weight in water", w.WaterCt is { } water ? ReportNumbers.Carats(water) : StoneReport.NotRecorded));
+            fields.Add(new("weight_in_air", "Weight in air", w.AirCt is { } air ? ReportNumbers.WeighedCarats(air) : StoneReport.NotRecorded));
+            fields.Add(new("weight_in_water", "Weight in water", w.WaterCt is { } water ? ReportNumbers.WeighedCarats(water) : StoneReport.NotRecorded));
             fields.Add(new("water_temperature", "Water temperature", w.WaterC is { } t ? ReportNumbers.Celsius(t)
                 : $"not given ({ReportNumbers.Celsius(BenchDefaults.WaterCelsius)} assumed)"));
         }

@@ -80,6 +80,14 @@ public class StoneReportTests
     }
 
     [Fact]
+    public void Hydrostatic_weights_are_given_to_the_balances_thousandth()
+    {
+        var report = ReportFixtures.Report("""{"id":"w","sg":{"air_ct":1.520,"water_ct":1.258}}""");
+        Assert.Equal("1.520 ct", report.ReadingFields.Single(f => f.Key == "weight_in_air").Value);
+        Assert.Equal("1.258 ct", report.ReadingFields.Single(f => f.Key == "weight_in_water").Value);
+    }
+
+    [Fact]
     public void A_reading_whose_character_the_series_leaves_open_names_no_sign()
     {
         var open = new ReportInterpretation("undetermined", "none", 1, 1.617, 1.621, null, 0.004, 0.001, "one step: which edge moves is not seen");

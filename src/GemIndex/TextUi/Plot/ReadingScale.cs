@@ -82,6 +82,14 @@ internal sealed class ReadingScale(string title, string format, double value, do
         : value + 2 * uncertainty >= r.Minimum && value - 2 * uncertainty <= r.Maximum ? Near
         : Out;
 
+    /// <summary>An uncertainty with a decimal more (two at most) where the value's format would round it to 0: "± 0.004", not "± 0.00".</summary>
+    public static string Uncertainty(double u, string format)
+    {
+        string f = format;
+        for (int more = 0; more < 2 && u > 0 && double.Parse(u.ToString(f, CultureInfo.InvariantCulture), CultureInfo.InvariantCulture) == 0; more++) f += "0";
+        return u.ToString(f, CultureInfo.InvariantCulture);
+    }
+
     /// <summary>The window shown: every range and the reading ± 2u, with a small margin, at most <c>widest</c> wide around the value.</summary>
     public (double Low, double High) Window()
     {
@@ -115,7 +123,7 @@ internal sealed class ReadingScale(string title, string format, double value, do
         if (to > from) { reading[from] = '<'; reading[to] = '>'; }
         int at = Column(value);
         if (at >= 0 && at < track) reading[at] = Marker;
-        lines.Add(ResultText.Clip($"{Number(value)} ± {Number(uncertainty)}", nameWidth - 1).PadRight(nameWidth) + reading);
+        lines.Add(ResultText.Clip($"{Number(value)} ± {Uncertainty(uncertainty, format)}", nameWidth - 1).PadRight(nameWidth) + reading);
         int rankWidth = candidates.Count == 0 ? 1 : Enumerable.Range(0, candidates.Count).Max(i => Rank(i).ToString(CultureInfo.InvariantCulture).Length);   // "10" aligns with " 8"
         IReadOnlyList<string> names = CandidateNames.Fit([.. candidates.Select(c => c.Name)], nameWidth - 2 - rankWidth);
         for (int i = 0; i < candidates.Count; i++)

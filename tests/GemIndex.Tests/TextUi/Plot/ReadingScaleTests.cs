@@ -143,6 +143,14 @@ public class ReadingScaleTests
         Assert.Equal(ScaleModel.Legend, screen[^1]);
     }
 
+    [Theory]
+    [InlineData(0.004, "0.00", "0.004")]     // an SG weighed to ±0.004 was shown "± 0.00"
+    [InlineData(0.02, "0.00", "0.02")]
+    [InlineData(0.0004, "0.000", "0.0004")]
+    [InlineData(0.00004, "0.00", "0.0000")]  // two decimals more at most
+    public void An_uncertainty_keeps_a_significant_digit_the_values_format_would_round_away(double u, string format, string shown) =>
+        Assert.Equal(shown, ReadingScale.Uncertainty(u, format));
+
     [Fact]
     public void A_highest_index_fitted_above_the_liquid_draws_no_birefringence_scale()
     {

@@ -326,6 +326,15 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void A_spot_reading_is_shown_as_read_to_the_hundredth()
+    {
+        var form = new BenchModel();
+        form.SetText(BenchFields.Spot, "1.61");   // a spot reading is read to about 0.01 (common practice)
+        BenchAssessment a = new BenchAssessor(new Identifier(TestMaterials.All)).Assess(form.Snapshot());
+        Assert.Contains("Spot reading: 1.61", ResultText.Derived(a));
+    }
+
+    [Fact]
     public void A_single_edge_is_one_refractive_index()
     {
         var form = new BenchModel();
