@@ -364,7 +364,7 @@ internal sealed class MainWindow : Window
         else if (key == Key.F4) ShowPage(2);
         else if (key == Key.F5) ShowPage(3);
         else if (key == Key.L.WithCtrl) ShowPage(LoupePageIndex);
-        else if (key == Key.F6) EdgePlotView.Show(App!, new EdgePlotModel(_session.Results.Latest?.Readings.Refractometer?.Readings ?? []));
+        else if (key == Key.F6) EdgePlotView.Show(App!, new EdgePlotModel(_session.Results.Latest?.Readings.Refractometer?.Readings ?? [], _session.Results.Latest?.Readings.Refractometer?.LiquidLimit));
         else if (key == Key.R.WithCtrl) ScaleView.Show(App!, new ScaleModel(_session.Results.Latest));
         else if (key == Key.F7 && _catalogue.Count == 0) _keyLine.Text = "F7: " + (_session.Results.WaitingReason ?? _session.Results.Waiting ?? "the catalogue is empty");   // no pop-up to swallow the next keys
         else if (key == Key.F7) CatalogueBrowserView.Show(App!, new CatalogueBrowserModel(_catalogue));

@@ -2,8 +2,11 @@ using GemIndex.Data.Batch;
 
 namespace GemIndex.Cli.TextUi.Plot;
 
-/// <summary>The two shadow edges against rotation, and the index window that frames them (with a margin of one reading step).</summary>
-internal sealed class EdgePlotModel(IReadOnlyList<EdgeReadingEntry> steps)
+/// <summary>
+/// The two shadow edges against rotation, and the index window that frames them (with a margin of one reading step);
+/// with the contact liquid's limit when a high edge went unseen beside steps that read one (it rose above the liquid).
+/// </summary>
+internal sealed class EdgePlotModel(IReadOnlyList<EdgeReadingEntry> steps, double? liquidLimit = null)
 {
     /// <summary>Margin above and below the edges, in index units (a few thousandths: the reading precision of a bench refractometer).</summary>
     public const double Margin = 0.004;
@@ -19,9 +22,35 @@ internal sealed class EdgePlotModel(IReadOnlyList<EdgeReadingEntry> steps)
 
     public bool IsEmpty => Low.Count == 0;
 
-    public double Bottom => IsEmpty ? 1.5 : Low.Concat(High).Min(p => p.Index) - Margin;
+    /// <summary>Steps with no high edge while others read one: a high edge unseen there, drawn at the liquid's limit.</summary>
+    public IReadOnlyList<double> HighUnseen { get; } = steps.Any(s => s.High is not null)
+        ? [.. steps.Where(s => s.High is null).Select(s => s.RotationDeg).Order()] : [];
 
-    public double Top => IsEmpty ? 1.6 : Low.Concat(High).Max(p => p.Index) + Margin;
+    /// <summary>The liquid's limit, shown when a high edge went unseen (<see cref="HighUnseen"/>); else null.</summary>
+    public double? LiquidLimit => HighUnseen.Count > 0 ? liquidLimit ?? Core.Bench.BenchDefaults.LiquidLimit : null;
+
+    /// <summary>The high edge's runs of consecutive steps that read it: its line is not drawn across a step that did not.</summary>
+    public IReadOnlyList<IReadOnlyList<(double Rotation, double Index)>> HighRuns { get; } = Runs(steps);
+
+    private static List<IReadOnlyList<(double Rotation, double Index)>> Runs(IReadOnlyList<EdgeReadingEntry> steps)
+    {
+        var runs = new List<IReadOnlyList<(double Rotation, double Index)>>();
+        var run = new List<(double Rotation, double Index)>();
+        foreach (var s in steps.OrderBy(s => s.RotationDeg))
+        {
+            if (s.High is { } h) { run.Add((s.RotationDeg, h)); continue; }
+            if (run.Count > 0) runs.Add(run);
+            run = [];
+        }
+        if (run.Count > 0) runs.Add(run);
+        return runs;
+    }
+
+    private IEnumerable<double> Shown => Low.Concat(High).Select(p => p.Index).Concat(LiquidLimit is { } l ? [l] : []);
+
+    public double Bottom => IsEmpty ? 1.5 : Shown.Min() - Margin;
+
+    public double Top => IsEmpty ? 1.6 : Shown.Max() + Margin;
 
     /// <summary>Rotation shown: 0–180° unless readings go beyond.</summary>
     public double RightEdge => IsEmpty ? 180 : Math.Max(180, Low.Max(p => p.Rotation));

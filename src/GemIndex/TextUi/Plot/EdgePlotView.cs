@@ -30,11 +30,27 @@ internal sealed class EdgePlotView : FullScreenDialog
         Graph.AxisY.LabelGetter = v => v.Value.ToString("0.000", CultureInfo.InvariantCulture);
         Graph.ScrollOffset = new PointF((float)model.LeftEdge, (float)model.Bottom);
         Line(model.Low, 'l');
-        Line(model.High, 'h');
+        // The high edge's line stops at a step that did not read it; there a '^' on the liquid's dashed limit says it
+        // rose above the liquid (it is not drawn flat across, as if read).
+        foreach (var run in model.HighRuns) Line(run, 'h');
+        if (model.LiquidLimit is { } limit)
+        {
+            Graph.Annotations.Add(new PathAnnotation
+            {
+                Points = [new PointF((float)model.LeftEdge, (float)limit), new PointF((float)model.RightEdge, (float)limit)], LineRune = new Rune('-'), BeforeSeries = true,
+            });
+            Graph.Series.Add(new ScatterSeries { Points = [.. model.HighUnseen.Select(r => new PointF((float)r, (float)limit))], Fill = new GraphCellToRender(new Rune('^')) });
+        }
         // Where the edges meet, one mark for both (the high edge's 'h' hid the low edge's 'l').
         if (model.Meeting.Count > 0)
             Graph.Series.Add(new ScatterSeries { Points = [.. model.Meeting.Select(x => new PointF((float)x.Rotation, (float)x.Index))], Fill = new GraphCellToRender(new Rune('x')) });
-        Add(Graph, new PlainLabel { Y = Pos.AnchorEnd(1), Text = "l = low edge   h = high edge   x = both   (index against rotation)" });
+        Add(Graph, new PlainLabel
+        {
+            Y = Pos.AnchorEnd(1),
+            Text = model.LiquidLimit is { } at
+                ? $"l low  h high  x both  ^ high above the liquid  - liquid {at.ToString("0.000", CultureInfo.InvariantCulture)}"
+                : "l = low edge   h = high edge   x = both   (index against rotation)",
+        });
     }
 
     public GraphView? Graph { get; }

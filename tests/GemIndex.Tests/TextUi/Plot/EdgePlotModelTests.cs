@@ -22,4 +22,20 @@ public class EdgePlotModelTests
         Assert.True(bottom + step * (rows - 1) >= Corundum.Top - EdgePlotModel.Margin - 1e-9);   // the highest edge is on a row of the window
         Assert.Equal(0, Math.Round(bottom / step, 6) % 1);   // every label lands on a multiple of the step: even ticks
     }
+
+    [Fact]
+    public void A_high_edge_unseen_beside_steps_that_read_one_is_drawn_at_the_liquid_and_its_line_not_across()
+    {
+        // Invented readings: the high edge rises above a 1.79 liquid at 67.5–112.5°.
+        var model = new EdgePlotModel([new(0, 1.757, 1.762), new(45, 1.757, 1.782), new(67.5, 1.757, null), new(90, 1.757, null),
+            new(112.5, 1.757, null), new(135, 1.757, 1.785), new(157.5, 1.757, 1.768)], 1.79);
+        Assert.Equal([67.5, 90, 112.5], model.HighUnseen);
+        Assert.Equal(1.79, model.LiquidLimit);
+        Assert.Equal([2, 2], model.HighRuns.Select(r => r.Count));   // 0–45° and 135–157.5°, not one line across
+        Assert.True(model.Top >= 1.79);
+        // One edge at every step (a singly refractive stone): nothing unseen, no liquid line.
+        var single = new EdgePlotModel([new(0, 1.718, null), new(90, 1.718, null)], 1.79);
+        Assert.Empty(single.HighUnseen);
+        Assert.Null(single.LiquidLimit);
+    }
 }
