@@ -133,6 +133,10 @@ internal static class ReportCommand
                 foreach (var x in outcome.Reading.Errors) e.WriteLine($"gemindex: stone '{BenchText.Shown(reference)}': {x}");
                 return ExitCodes.BadInput;
             }
+            // What was typed in the text UI and refused is in no report (the stone holds what its answer used): said, so
+            // that the report is not taken for everything read at the bench.
+            foreach (var x in TextUi.Bench.BenchDraft.Refused(summary.Id, workbook.Setting(TextUi.Main.BenchSession.DraftSetting(summary.Id))))
+                e.WriteLine($"gemindex: stone '{BenchText.Shown(reference)}': typed but refused, so not in this report: {x}");
             return Write(StoneReport.Build(sheet, result, header), sheet.Reference, format, output, o);
         }
         catch (WorkbookException x)

@@ -167,6 +167,24 @@ public sealed class ReportCommandTests : IDisposable
     }
 
     [Fact]
+    public void A_workbook_stones_report_names_what_was_typed_in_the_text_UI_and_refused_which_it_leaves_out()
+    {
+        string path = Path.Combine(_dir, "draft.db");
+        using (var wb = GemIndex.Data.Workbook.StoneWorkbook.Open(path, TimeProvider.System, GemIndex.Data.Workbook.WorkbookOpening.CreateIfMissing))
+        {
+            long id = wb.Create(ReportFixtures.Sheet(ReportFixtures.QuartzLine, "lot 7 / 3")).Id;
+            // The form as typed: the SG field holds a word, which the reader refuses (the stone holds what the answer used).
+            var form = new GemIndex.Cli.TextUi.Bench.BenchModel();
+            form.SetText(GemIndex.Cli.TextUi.Bench.BenchFields.Sg, "2.6x");
+            wb.SetSetting(GemIndex.Cli.TextUi.Main.BenchSession.DraftSetting(id), GemIndex.Cli.TextUi.Bench.BenchDraft.Write(form.Snapshot() with { StoneId = id }));
+        }
+        var (exit, stdout, err) = Run("report", "stone", "--workbook", path, "--stone", "lot 7 / 3");
+        Assert.True(exit == 0, err);
+        Assert.Contains("gemindex: stone 'lot 7 / 3': typed but refused, so not in this report: sg: '2.6x' is not a number", err);
+        Assert.Contains("# Stone report: lot 7 / 3", stdout);
+    }
+
+    [Fact]
     public void The_header_carries_the_date_given_the_examiner_and_the_program_and_catalogue_versions()
     {
         var (exit, stdout, err) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine), "--date", "2026-03-14", "--examiner", "A. Example");

@@ -53,6 +53,17 @@ internal static class BenchDraft
         }
     }
 
+    /// <summary>
+    /// The entries of a stone's draft that the reader refuses (the stone as saved holds only what its answer used, so
+    /// they are in no report); none when there is no draft or it is not one of ours.
+    /// </summary>
+    public static IReadOnlyList<GemIndex.Core.Bench.BenchFieldError> Refused(long stoneId, string? json)
+    {
+        if (json is null || Read(json) is not { } draft) return [];
+        var snapshot = new BenchSnapshot(stoneId, 0, draft.Texts, draft.Choices, draft.Steps);
+        return GemIndex.Core.Bench.BenchReader.Read(FormReader.Read(snapshot)).Errors;
+    }
+
     private static ImmutableDictionary<string, string> Map(JsonElement e) =>
         ImmutableDictionary.CreateRange(e.EnumerateObject().Select(p => new KeyValuePair<string, string>(p.Name, p.Value.GetString()!)));
 }
