@@ -60,6 +60,16 @@ internal sealed class RefractometerPage : BenchPage
                 StoreRequested?.Invoke(_editing, new StepText(Rotation.Text.Trim(), low, high));
                 key.Handled = true;
             };
+        // A space or '/' after a low edge goes on into the high edge's box, which is empty: the two edges typed in one
+        // go stay in sight (the low box is eight wide, and "1.716 1.71" showed as "16 1.71").
+        Low.KeyDown += (_, key) =>
+        {
+            if ((key == Key.Space || key.AsRune.Value == '/') && High.Text.Length == 0 && Low.Text.Trim().Length > 0 && Low.InsertionPoint >= Low.Text.TrimEnd().Length)
+            {
+                High.SetFocus();
+                key.Handled = true;
+            }
+        };
         Grid.KeyDown += (_, key) =>
         {
             if (key == Key.Z.WithCtrl && RestoreRequested is not null) { RestoreRequested(); key.Handled = true; return; }   // with or without a step selected

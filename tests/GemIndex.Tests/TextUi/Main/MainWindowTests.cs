@@ -559,6 +559,20 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void Both_edges_typed_in_one_go_stay_in_sight_the_second_going_on_into_the_high_box()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        Type(app, "1.716 1.721");
+        Assert.Equal("1.716", window.Refractometer.Low.Text);
+        Assert.Equal("1.721", window.Refractometer.High.Text);
+        app.InjectKey(Key.Enter);
+        Settle();
+        Assert.Equal(new StepText("0", "1.716", "1.721"), _session.Form.Steps[0]);
+        Close(app, window, token);
+    }
+
+    [Fact]
     public void A_refused_choice_is_marked_at_its_row_and_its_reason_named_by_its_caption()
     {
         var (app, window, token) = Open();
