@@ -175,7 +175,7 @@ echo "---- 80x24 stone 3 ----"; screen
 keys F2; keys Tab Tab Tab Tab Tab Tab Tab Tab; text "typed before the kill"
 wait_for "Notes         typed before the"
 keys F3; text "1.660"; keys Tab; text "1.687"   # a step half done: typed, Enter not pressed
-wait_match "^.(1?[0-9]{2,3}|[0-9]) +1\.660 +1\.687"
+wait_match "^.[0-9]{1,3}(\.[0-9]+)? +1\.660 +1\.687"
 sleep 1                                   # the save runs in the background a moment after each key
 pane=$(tmux display-message -p -t "$session" '#{pane_pid}')
 app=$(pgrep -P "$pane" -f gemindex.dll | head -n 1 || true)
@@ -187,7 +187,7 @@ start
 wait_for "e2e peridot"
 wait_for "0°  1.654     1.690"
 wait_for "135°  1.664     1.685"
-wait_match "^.(1?[0-9]{2,3}|[0-9]) +1\.660 +1\.687"   # the half-typed step is back on the edit line
+wait_match "^.[0-9]{1,3}(\.[0-9]+)? +1\.660 +1\.687"   # the half-typed step is back on the edit line
 keys F2
 wait_for "Notes         typed before the"
 keys F4
