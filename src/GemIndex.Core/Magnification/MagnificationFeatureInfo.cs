@@ -19,4 +19,10 @@ public sealed record MagnificationFeatureInfo(
 {
     /// <summary>How a sighting is named: a phenomenon is seen by eye, the rest under magnification.</summary>
     public string SeenHow => Group == FeatureGroup.Phenomenon ? "Seen by eye" : "Seen under magnification";
+
+    /// <summary>What a sighting suggests, worded as an indication beside the observation, never as a finding: "points to: natural stone".</summary>
+    public string WhenSeen => "points to: " + Meaning;
+
+    /// <summary>The same for a feature looked for and not seen: what it would have suggested; its absence alone decides nothing.</summary>
+    public string WhenNotSeen => "had it been seen, it would point to: " + Meaning;
 }

@@ -33,9 +33,9 @@ internal static class IdentificationText
         if (faceted) o.WriteLine(FacetedLine);
         if (magnification is { IsEmpty: false } look)
         {
-            foreach (var info in look.Present.Order().Select(MagnificationVocabulary.Of)) o.WriteLine($"{info.SeenHow}: {info.Name}: {info.Meaning}");
+            foreach (var info in look.Present.Order().Select(MagnificationVocabulary.Of)) o.WriteLine($"{info.SeenHow}: {info.Name}: {info.WhenSeen}");
             foreach (var f in look.Absent.Order().Where(f => !faceted || !MagnificationVocabulary.DomedPhenomena.Contains(f)))
-                o.WriteLine($"Looked for, not seen: {MagnificationVocabulary.Of(f).Name}: {MagnificationVocabulary.Of(f).Meaning}");
+                o.WriteLine($"Looked for, not seen: {MagnificationVocabulary.Of(f).Name}: {MagnificationVocabulary.Of(f).WhenNotSeen}");
         }
         // A species under 0.1 % says nothing more by its origins ("natural <0.1 %, synthetic <0.1 %, …" is clutter).
         foreach (SpeciesResult s in ResultDocument.SpeciesShown(result).Where((s, i) => LeadingCandidates.SpeciesListed(i, s.Confidence, result.NoGoodMatch)))

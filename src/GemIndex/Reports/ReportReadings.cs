@@ -43,9 +43,9 @@ internal static class ReportReadings
         AddWord(fields, BenchField.Cut, "Cut", r.Cut);
         // The transparency is said once, in the description (StoneReport.DescriptionOf).
         foreach (var info in Features(r.FeaturesPresent))
-            fields.Add(new($"feature_seen_{info.Word}", $"{info.SeenHow}: {info.Name}", info.Meaning));
+            fields.Add(new($"feature_seen_{info.Word}", $"{info.SeenHow}: {info.Name}", info.WhenSeen));
         foreach (var info in Features(r.FeaturesAbsent))
-            fields.Add(new($"feature_not_seen_{info.Word}", $"Looked for, not seen: {info.Name}", info.Meaning));
+            fields.Add(new($"feature_not_seen_{info.Word}", $"Looked for, not seen: {info.Name}", info.WhenNotSeen));
         return fields;
     }
 

@@ -25,8 +25,10 @@ public class IdentifyMagnificationTests
         var (exit, stdout, error) = CommandRun.Plain("identify", "--sg", "4.00", "--feature", "curved_striae", "--no-feature", "needles_silk", "--catalogue-dir", run.Folder);
         Assert.True(exit == 0, error);
         var striae = GemIndex.Core.Magnification.MagnificationVocabulary.Of(GemIndex.Core.Magnification.MagnificationFeature.CurvedStriae);
-        Assert.Contains($"Seen under magnification: {striae.Name}: {striae.Meaning}", stdout);
-        Assert.Contains("Looked for, not seen: needles and silk:", stdout);
+        // Each worded as an indication beside the observation, not as a finding (a report may go to a client).
+        Assert.Contains($"Seen under magnification: {striae.Name}: points to: {striae.Meaning}", stdout);
+        var silk = GemIndex.Core.Magnification.MagnificationVocabulary.Of(GemIndex.Core.Magnification.MagnificationFeature.NeedlesAndSilk);
+        Assert.Contains($"Looked for, not seen: needles and silk: had it been seen, it would point to: {silk.Meaning}", stdout);
     }
 
     [Fact]
