@@ -90,6 +90,9 @@ public static class BenchWarnings
         if (sheet.Sheet.SpecificGravity is { } measured)
             foreach (var h in sheet.Sheet.HeavyLiquids.Where(h => Contradicts(measured, h)))
                 warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");
+        // Heavy liquids no SG satisfies together (sinks in the lighter, floats in the denser): one of them is misread.
+        if (sheet.Sheet.HeavyLiquids.Count > 1 && Gravity.HeavyLiquidResult.Together(sheet.Sheet.HeavyLiquids) is null)
+            warnings.Add($"The heavy liquids contradict each other ({string.Join("; ", sheet.Sheet.HeavyLiquids.Select(h => $"{h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} {EvidenceLikelihood.Word(h.Outcome)}"))}): no SG does all of that. Check them; the answer weighs them as read.");
         // A series whose pattern shows one uniaxial sign while the leader has the other: the likelihood may still favour the
         // leader (no entry of the other sign has its indices), but the bench should look again at which edge stays still.
         if (!noGoodMatch && candidates.Count > 0 && SignClash(sheet.Series, candidates) is { } clash) warnings.Add(clash);

@@ -399,6 +399,16 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void Heavy_liquids_no_SG_satisfies_together_are_named_in_a_warning()
+    {
+        // Common practice: a stone that floats in 2.62 cannot sink in 2.67; one of the two is misread.
+        var sheet = new BenchSheet { HeavyLiquids = [HeavyLiquidResult.Of(2.62, HeavyLiquidOutcome.Floats), HeavyLiquidResult.Of(2.67, HeavyLiquidOutcome.Sinks)] };
+        Assert.Contains(Engine.Identify(sheet).Warnings, w => w.StartsWith("The heavy liquids contradict each other (2.62 floats; 2.67 sinks)", StringComparison.Ordinal));
+        var agreeing = sheet with { HeavyLiquids = [HeavyLiquidResult.Of(2.62, HeavyLiquidOutcome.Sinks), HeavyLiquidResult.Of(2.67, HeavyLiquidOutcome.Floats)] };
+        Assert.DoesNotContain(Engine.Identify(agreeing).Warnings, w => w.Contains("contradict each other", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void The_advice_lists_a_materials_lines_along_the_spectrum_as_the_scale_reads()
     {
         // Invented entries alike but for their lines, listed strongest first in the catalogue (turquoise-like 432, 420, 460).

@@ -54,7 +54,7 @@ internal static class GravityText
         if (form.Text(BenchFields.HeavyLiquids).Trim() is not { Length: > 0 } text) return null;
         BenchReading reading = BenchReader.Read(new BenchReadings().With(BenchField.HeavyLiquids, text));
         if (reading.Errors.Count > 0) return null;
-        return HeavyLiquidResult.Together(reading.Sheet.HeavyLiquids) is { } bounds ? $"SG {bounds} (heavy liquids)" : "SG - (the heavy liquids contradict each other: check them)";
+        return HeavyLiquidResult.Together(reading.Sheet.HeavyLiquids) is { } bounds ? $"SG {bounds} (heavy liquids)" : "SG - (the heavy liquids contradict each other: check them; the answer weighs them as read)";
     }
 
     /// <summary>True when a typed and a weighed SG lie further apart than <see cref="ClashCoverage"/> combined standard uncertainties.</summary>
