@@ -40,7 +40,7 @@ public sealed record IdentificationResult
 
     /// <summary>
     /// The entries to keep out of water and heavy liquids: every entry of the catalogue that must not be immersed holding
-    /// at least <see cref="BenchWarnings.Relevant"/>, or a tenth of it in a species holding that much, most probable first;
+    /// at least <see cref="BenchWarnings.Relevant"/>, or a tenth of it in the leading species, most probable first;
     /// the "do not immerse" warning names the same ones, so that every place that says it names the same stones.
     /// </summary>
     public IReadOnlyList<string> KeepDry { get; init; } = [];

@@ -414,11 +414,11 @@ public sealed class Identifier
         var separation = Separation(sheet, posterior, species);
         var varieties = BenchWarnings.InseparableVarieties(species, _materials, posterior);
         var group = noGoodMatch ? null : BenchWarnings.InseparableGroup(species, _materials, posterior);
-        // Stones to keep dry: every such entry at the warnings' share, and those of a species that holds it at a tenth of
-        // that (natural turquoise at 4 % beside its treated kin, when turquoise leads), most probable first.
-        var speciesTotal = species.ToDictionary(x => x.Species, x => x.Confidence);
+        // Stones to keep dry: every such entry at the warnings' share, and those of the leading species at a tenth of that
+        // (natural turquoise at 4 % beside its treated kin, when turquoise leads), most probable first.
+        string? leadingSpecies = species.Count > 0 && species[0].Confidence >= BenchWarnings.Relevant ? species[0].Species : null;
         List<string> keepDry = [.. order.Where(i => _materials[i].DoNotImmerse && (posterior[i] >= BenchWarnings.Relevant
-            || (posterior[i] >= BenchWarnings.Relevant / 10 && speciesTotal.GetValueOrDefault(_materials[i].Species) >= BenchWarnings.Relevant)))
+            || (posterior[i] >= BenchWarnings.Relevant / 10 && _materials[i].Species == leadingSpecies)))
             .OrderByDescending(i => posterior[i]).Select(i => _materials[i].Name)];
         return new IdentificationResult
         {

@@ -94,9 +94,19 @@ internal sealed class ResultsModel
         IReadOnlyList<string> derived = ResultText.Derived(a);
         if (derived.Count > 0) { rows.Add(new AnswerRow("")); Text(["Readings used", .. derived.Select(d => "  " + d)]); }
         if (r.NextTest is not null) { rows.Add(new AnswerRow("")); Text(ResultText.NextTest(r.NextTest)); }
-        if (r.Warnings.Count > 0) { rows.Add(new AnswerRow("")); Text(["Warnings", .. r.Warnings.Select(x => "! " + Sentence(x))]); }
+        if (r.Warnings.Count > 0)
+        {
+            rows.Add(new AnswerRow(""));
+            Text(["Warnings", .. r.Warnings.Select(x => "! " + Sentence(x)), .. Reports.ReportCautions.ForWarnings(r.Warnings, r.NextTest?.Test)]);
+        }
+        // The answer ends as every answer does: what it is and is not.
+        rows.Add(new AnswerRow(""));
+        Text([ScopeLine]);
         return rows;
     }
+
+    /// <summary>The answer pane's last line, as the command line's and the reports' answers end.</summary>
+    public const string ScopeLine = "An identification from bench tests is an aid, not a certificate.";
 
     /// <summary>The indent of a species' entries under its heading.</summary>
     public const string SpeciesIndent = "  ";

@@ -276,6 +276,23 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void The_answer_pane_ends_as_every_answer_does_and_a_test_a_warning_advises_carries_its_caution()
+    {
+        IdentificationResult r = CorundumAnswer(null) with
+        {
+            Warnings = ["Turquoise: treated and natural cannot be separated by these tests; the long-wave UV lamp (365 nm) would help; for a valuable stone refer it to a qualified laboratory."],
+        };
+        var model = new ResultsModel();
+        model.Accept(new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 4.0 }, Result = r });
+        IReadOnlyList<AnswerRow> rows = model.Rows(200);
+        Assert.Equal(ResultsModel.ScopeLine, rows[^1].Text);
+        Assert.Contains(rows, x => x.Text == GemIndex.Cli.Reports.ReportCautions.UltravioletShort);
+        // Beside the next test that is the same lamp, the caution is said there and not again.
+        Assert.Empty(GemIndex.Cli.Reports.ReportCautions.ForWarnings(r.Warnings, GemIndex.Core.Bench.BenchField.UvLong));
+        Assert.Empty(GemIndex.Cli.Reports.ReportCautions.ForWarnings(["Beryl: natural and synthetic cannot be separated by these tests."], null));
+    }
+
+    [Fact]
     public void A_candidate_the_readings_rule_out_is_not_listed_and_the_next_keeps_its_rank()
     {
         // A corundum variety at 10⁻⁴⁰ between the leader and a spinel at 2 %: left out; the spinel is still number 3.
