@@ -26,7 +26,10 @@ public static class MagnificationEvidence
     {
         double log = 0;
         foreach (var feature in observation.Present) log += Math.Log(ProbabilityOfSeeing(profile, feature));
-        foreach (var feature in observation.Absent) log += Math.Log(1 - ProbabilityOfSeeing(profile, feature));
+        foreach (var feature in observation.Absent)
+            log += Math.Log(observation.Faceted && MagnificationVocabulary.DomedPhenomena.Contains(feature)
+                ? 1 - (1 - FalseSighting) * profile.ProbabilityOf(feature)   // the cut excludes it: no sighting to miss
+                : 1 - ProbabilityOfSeeing(profile, feature));
         return log;
     }
 

@@ -34,6 +34,19 @@ public class MagnificationEvidenceTests
     }
 
     [Fact]
+    public void On_a_faceted_stone_a_star_is_excluded_by_the_cut_not_merely_missed()
+    {
+        // Common practice: a star (or a cat's-eye) shows only on a domed top, so a faceted stone cannot show one, however
+        // well it is looked at: the entry's share of stones without one is all that is left (no visibility discount).
+        var star = new MagnificationProfile(OriginClass.Synthetic, new Dictionary<MagnificationFeature, double> { [MagnificationFeature.Asterism] = 0.95 });
+        var faceted = new MagnificationObservation([], [MagnificationFeature.Asterism]) { Faceted = true, ImpliedByCut = new HashSet<MagnificationFeature> { MagnificationFeature.Asterism } };
+        Assert.Equal(Math.Log(1 - (1 - MagnificationEvidence.FalseSighting) * 0.95), MagnificationEvidence.LogLikelihood(faceted, star), 12);
+        // Looked for by hand on a cabochon and not seen: a sighting missed now and then, weaker evidence.
+        double looked = MagnificationEvidence.LogLikelihood(new([], [MagnificationFeature.Asterism]), star);
+        Assert.True(looked > MagnificationEvidence.LogLikelihood(faceted, star));
+    }
+
+    [Fact]
     public void Nothing_looked_for_is_no_evidence() =>
         Assert.Equal(0, MagnificationEvidence.LogLikelihood(new([], []), FlameFusion));
 
