@@ -118,7 +118,7 @@ public static class BenchWarnings
         foreach (var rule in relevant.Where(c => c.Material.TradeRule is not null).GroupBy(c => c.Material.TradeRule!))
             warnings.Add($"Possible {Listed([.. rule.Select(c => c.Material.Name)])}: {rule.Key.Text}. Check the rules where you buy, sell or ship {(rule.Count() > 1 ? "them" : "it")} (a summary, not legal advice).");
         if (sheet.UnknownColourWords.Count > 0)
-            warnings.Add($"Colour word{(sheet.UnknownColourWords.Count > 1 ? "s" : "")} '{string.Join("', '", sheet.UnknownColourWords)}' not known: no colour evidence taken from {(sheet.UnknownColourWords.Count > 1 ? "them" : "it")} (known hues: {string.Join(", ", ColourWords.KnownHues)}).");
+            warnings.Add($"Colour word{(sheet.UnknownColourWords.Count > 1 ? "s" : "")} '{string.Join("', '", sheet.UnknownColourWords)}' not known: no colour evidence taken from {(sheet.UnknownColourWords.Count > 1 ? "them" : "it")} (known hues: {ColourWords.KnownHuesInWords}).");
         var leading = species ?? [.. relevant.GroupBy(c => c.Material.Species).Select(g => new SpeciesResult
         {
             Species = g.Key, Confidence = g.Sum(c => c.Confidence),

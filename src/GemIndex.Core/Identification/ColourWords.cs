@@ -14,6 +14,7 @@ public static class ColourWords
         ["rose"] = "pink", ["salmon"] = "pink", ["crimson"] = "red", ["scarlet"] = "red", ["teal"] = "blue",
         ["turquoise"] = "blue", ["cyan"] = "blue", ["aqua"] = "blue", ["olive"] = "green", ["emerald"] = "green",
         ["tan"] = "brown", ["cognac"] = "brown", ["amber"] = "orange", ["peach"] = "orange", ["orangy"] = "orange", ["pinky"] = "pink",
+        ["cream"] = "yellow",   // a yellowish white, as pearls and ivory are described
     };
 
     // "-ish" forms with the suffix cut: "bluish" → "blu", "reddish" → "redd".
@@ -41,7 +42,12 @@ public static class ColourWords
         "schiller", "chatoyant", "star", "flash", "flashes", "fire",
         // Trade names of a shade before its hue ("sky blue", "royal blue", "apple green"): the hue word says the colour.
         "sky", "royal", "baby", "powder", "apple", "bottle", "grass", "forest", "sea",
+        // How the colour lies or how near it comes ("green, mottled", "near colourless", "white, pinkish overtone").
+        "mottled", "patchy", "banded", "zoned", "uneven", "even", "overtone", "tinge", "tint", "hint", "cast", "near", "nearly", "almost",
     };
+
+    /// <summary>How the known hues are named to a user: the wheel, and the words read as colourless.</summary>
+    public static string KnownHuesInWords => string.Join(", ", KnownHues) + " (white and clear read as colourless)";
 
     /// <summary>The hues the tool knows (the bench's rough colour wheel).</summary>
     public static IReadOnlyCollection<string> KnownHues => Neighbours.Keys;

@@ -260,10 +260,21 @@ public class EvidenceModelTests
     [InlineData("sky blue", "blue")]
     [InlineData("apple green", "green")]
     [InlineData("zorbish", "")]
+    [InlineData("green, mottled", "green")]          // how the colour lies, not which
+    [InlineData("near colourless", "colourless")]
+    [InlineData("cream", "yellow")]                  // a yellowish white, as pearls and ivory are described
     public void A_colour_description_names_its_last_hue_and_a_tint_only_tones_it(string description, string expected)
     {
         Assert.Equal(expected.Split(' ', StringSplitOptions.RemoveEmptyEntries), ColourWords.PrincipalHues(description).ToArray());
     }
+
+    [Theory]
+    [InlineData("green, mottled")]
+    [InlineData("white, pinkish overtone")]
+    [InlineData("near colourless")]
+    [InlineData("cream")]
+    public void Bench_descriptions_of_how_a_colour_lies_are_no_unknown_words(string description) =>
+        Assert.Empty(ColourWords.UnknownWords(description));
 
     [Fact]
     public void A_tint_in_an_entrys_colours_does_not_list_that_hue()
