@@ -109,12 +109,12 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
     private const int NumbersWidth = 28;
 
     public string Line(Material m, int nameWidth) =>
-        $"{Results.ResultText.Clip(m.Name, nameWidth).PadRight(nameWidth)} {m.Indices.Lowest.Minimum.ToString("0.000", CultureInfo.InvariantCulture)}–{m.Indices.Highest.Maximum.ToString("0.000", CultureInfo.InvariantCulture)}  SG {Range(m.SpecificGravity)}";
+        $"{Results.ResultText.Clip(m.Name, nameWidth).PadRight(nameWidth)} {Range(new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum), "0.000").PadRight(11)}  SG {Range(m.SpecificGravity, "0.00")}";
 
-    /// <summary>An SG range at two decimals; one number when both ends print the same.</summary>
-    private static string Range(PropertyRange r)
+    /// <summary>A range at the given decimals; one number when both ends print the same ("copal 1.540", not "1.540–1.540").</summary>
+    private static string Range(PropertyRange r, string format)
     {
-        string low = r.Minimum.ToString("0.00", CultureInfo.InvariantCulture), high = r.Maximum.ToString("0.00", CultureInfo.InvariantCulture);
+        string low = r.Minimum.ToString(format, CultureInfo.InvariantCulture), high = r.Maximum.ToString(format, CultureInfo.InvariantCulture);
         return low == high ? low : $"{low}–{high}";
     }
 

@@ -290,6 +290,7 @@ internal sealed class MainWindow : Window
             EditGoesOnAsNewStep();
             _session.Changed();
             rf.ShowSteps(_session.Form.Steps, new Dictionary<string, string>());
+            rf.OfferRotation(_session.Form.NextRotation());   // an offer not typed over follows the steps left ("0" when none)
         };
         rf.RestoreRequested += () =>
         {

@@ -33,7 +33,7 @@ internal static class StoneHistoryText
     public static IReadOnlyList<string> Lines(string reference, IReadOnlyList<StoneEdit> edits)
     {
         List<string> changes = [.. edits.SelectMany(e => Describe(e).Select(d => $"{e.At.ToString("yyyy-MM-dd HH:mm:ss", CultureInfo.InvariantCulture)}  {d}"))];
-        return [$"History of '{reference}' ({changes.Count} changes, times in UTC)", "", .. changes];
+        return [$"History of '{reference}' ({changes.Count} change{(changes.Count == 1 ? "" : "s")}, times in UTC)", "", .. changes];
     }
 
     /// <summary>One sentence per changed field (several when a JSON value changed in several places).</summary>

@@ -33,6 +33,10 @@ public class CatalogueBrowserModelTests
         var silica = TestMaterials.All[0] with { SpecificGravity = new(2.199, 2.201) };
         var model = new CatalogueBrowserModel([silica]);
         Assert.EndsWith("SG 2.20", model.Line(silica, 20));
+        // An index given as one value (copal's 1.540, from memory) prints once too.
+        var one = TestMaterials.All[0] with { Indices = GemIndex.Core.Catalogue.OpticalIndices.SingleIndex(new(1.540, 1.540)) };
+        Assert.Contains(" 1.540        SG", new CatalogueBrowserModel([one]).Line(one, 20));
+        Assert.DoesNotContain("1.540–1.540", new CatalogueBrowserModel([one]).Line(one, 20));
     }
 
     [Fact]

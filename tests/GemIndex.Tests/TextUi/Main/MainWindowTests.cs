@@ -559,6 +559,24 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void With_every_step_removed_the_rotation_offered_is_0_again()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        Type(app, "1.544 1.553");
+        app.InjectKey(Key.Enter);
+        Settle();
+        Assert.NotEqual("0", window.Refractometer.Rotation.Text);
+        window.Refractometer.Grid.SetFocus();
+        window.Refractometer.Grid.SelectedItem = 0;
+        app.InjectKey(Key.Delete);
+        Settle();
+        Assert.Empty(_session.Form.Steps);
+        Assert.Equal("0", window.Refractometer.Rotation.Text);
+        Close(app, window, token);
+    }
+
+    [Fact]
     public void Both_edges_typed_in_one_go_stay_in_sight_the_second_going_on_into_the_high_box()
     {
         var (app, window, token) = Open();

@@ -34,6 +34,7 @@ public class StoneHistoryTextTests
             new StoneEdit(At.AddMinutes(1), "readings", """{"id":"a"}""", """{"id":"a","transparency":"opaque","colour":"blue"}"""),
         ]);
         Assert.Equal(["2026-03-01 09:05:00  Transparency set to 'transparent'", "2026-03-01 09:06:00  Colour set to 'blue'"], lines.Skip(2));
+        Assert.Equal("History of 'lot 7' (1 change, times in UTC)", StoneHistoryText.Lines("lot 7", [new StoneEdit(At, "notes", "", "clean")])[0]);
     }
 
     [Fact]
