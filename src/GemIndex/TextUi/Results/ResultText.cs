@@ -178,9 +178,19 @@ internal static class ResultText
             yield return "Optic character: " + (s.Character is { } c ? Character(c)
                 : "not fixed by the series" + (s.UndeterminedReason.Length > 0 ? ": " + s.UndeterminedReason : ""));
         bool single = best.Beta is null && best.Lowest.Value == best.Highest.Value;
-        // ω and ε only under a settled sign: which edge is ω is the sign.
-        yield return (single ? "Refractive index: " : "Refractive indices: ") + GemIndex.Cli.Reports.ReportDerived.Indices(best.Character == OpticCharacter.Uniaxial,
-            Sign(s) ?? "", best.Lowest.Value, best.Highest.Value, best.Beta?.Value, best.AboveLiquidLimit) + (best.Beta is not null && best.AboveLiquidLimit is null ? TwoV(best) : "");
+        // A biaxial reading whose β the series leaves at one of two values (the highest low edge or the lowest high edge)
+        // says both, and no 2V: picking one would give a 2V and a sign the readings do not fix.
+        var betas = s.Interpretations.Where(i => i.Character == OpticCharacter.Biaxial && i.Beta is not null && i.Weight >= BenchWarnings.Relevant)
+            .Select(i => i.Beta!.Value.Value).Distinct().Order().ToList();
+        if (best.Beta is not null && betas.Count > 1)
+        {
+            string high = best.AboveLiquidLimit is { } above ? $"above the liquid {Index(above)} (about {Index(best.Highest.Value)})" : Index(best.Highest.Value);
+            yield return $"Refractive indices: α {Index(best.Lowest.Value)}, β {string.Join(" or ", betas.Select(Index))}, γ {high}";
+        }
+        else
+            // ω and ε only under a settled sign: which edge is ω is the sign.
+            yield return (single ? "Refractive index: " : "Refractive indices: ") + GemIndex.Cli.Reports.ReportDerived.Indices(best.Character == OpticCharacter.Uniaxial,
+                Sign(s) ?? "", best.Lowest.Value, best.Highest.Value, best.Beta?.Value, best.AboveLiquidLimit) + (best.Beta is not null && best.AboveLiquidLimit is null ? TwoV(best) : "");
         if (best.AboveLiquidLimit is { } limit) yield return "Birefringence: " + GemIndex.Cli.Reports.ReportDerived.AtLeast(best.Lowest.Value, limit, best.Highest.Value);
         else if (best.Birefringence.Value > 0) yield return $"Birefringence: {Index(GemIndex.Core.Optics.Birefringence.OfShownIndices(best.Highest.Value, best.Lowest.Value))}";
         if (Sign(s) is { } sign) yield return "Optic sign: " + sign;

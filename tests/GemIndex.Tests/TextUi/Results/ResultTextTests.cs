@@ -352,6 +352,21 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void A_biaxial_reading_whose_beta_is_one_of_two_values_says_both_and_no_2V()
+    {
+        // Invented readings near peridot's handbook indices (from memory): six steps, the low edge up to 1.668 and the high
+        // edge down to 1.677, so β is the highest low edge or the lowest high edge.
+        var form = new BenchModel();
+        foreach (var (rotation, low, high) in new[] { ("0", "1.654", "1.690"), ("30", "1.658", "1.686"), ("60", "1.664", "1.681"), ("90", "1.668", "1.677"), ("120", "1.664", "1.681"), ("150", "1.658", "1.686") })
+            form.PutStep(form.Steps.Count, new StepText(rotation, low, high));
+        BenchAssessment a = new BenchAssessor(new Identifier(TestMaterials.All)).Assess(form.Snapshot());
+        Assert.Equal(OpticCharacter.Biaxial, a.Result!.Series!.Interpretations.MaxBy(i => i.Weight)!.Character);
+        IReadOnlyList<string> lines = ResultText.Derived(a);
+        Assert.Contains("Refractive indices: α 1.654, β 1.668 or 1.677, γ 1.690", lines);
+        Assert.DoesNotContain(lines, l => l.Contains("2V", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void A_single_edge_is_one_refractive_index()
     {
         var form = new BenchModel();
