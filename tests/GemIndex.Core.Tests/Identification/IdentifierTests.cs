@@ -718,6 +718,8 @@ public class IdentifierTests
         Assert.True(result.Species.Single(x => x.Species == "r").Confidence < BenchWarnings.Relevant);
         Assert.Equal(["common t", "rare t"], result.KeepDry);
         Assert.Contains(result.Warnings, w => w.StartsWith("Possible common t and rare t: do not immerse", StringComparison.Ordinal));
+        // Heavy liquids never; water only where the stone is known to take it (common practice: amber's salt-water float test).
+        Assert.Contains(result.Warnings, w => w.Contains("do not immerse (no heavy liquids, and no water unless the stone is known to take it", StringComparison.Ordinal));
     }
 
     [Fact]
