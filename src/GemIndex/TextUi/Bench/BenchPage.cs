@@ -80,6 +80,9 @@ internal class BenchPage : View
         return c;
     }
 
+    /// <summary>Raised with a sentence for the key line when a key typed on the page is not taken.</summary>
+    public event Action<string>? KeyNotTaken;
+
     public Label AddNote(string text = "")
     {
         var l = new PlainLabel { Y = NextRow(), Width = Dim.Fill(), Text = text };
@@ -94,7 +97,14 @@ internal class BenchPage : View
     /// </summary>
     private bool TypeIntoNextField(ChoiceField from, string text)
     {
-        if (_inOrder.ElementAtOrDefault(_inOrder.IndexOf(from) + 1) is not FormField next || next.Edit.Text.Length > 0) return false;
+        var following = _inOrder.ElementAtOrDefault(_inOrder.IndexOf(from) + 1) as FormField;
+        if (following is not { } next || next.Edit.Text.Length > 0)
+        {
+            // Said, never dropped silently: a reading typed here would otherwise be lost without a word.
+            KeyNotTaken?.Invoke($"'{text}' not taken: {from.Choice.Label} takes one of {from.Choice.KeyHint}"
+                + (following is { } held ? $"; {held.Label} already holds {held.Edit.Text} (Tab to it to change it)." : "."));
+            return false;
+        }
         next.Edit.SetFocus();
         next.Edit.Text = text;
         next.Edit.InsertionPoint = text.Length;

@@ -248,6 +248,7 @@ internal sealed class MainWindow : Window
             _session.Form.SetText(BenchFields.FeaturesAbsent, page.Model.AbsentText);
             _session.Changed();
         };
+        foreach (BenchPage page in Pages) page.KeyNotTaken += said => _keyLine.Text = said;
         RefractometerPage rf = Refractometer;
         rf.StepField.Edit.TextChanged += (_, _) =>
         {

@@ -559,6 +559,19 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void A_digit_a_choice_cannot_pass_on_is_said_on_the_key_line_not_dropped_silently()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F5);
+        var tests = window.Pages[3];
+        var choice = tests.Choices.First(c => tests.Choices.IndexOf(c) + 1 < tests.Choices.Count);   // a choice followed by another
+        choice.SetFocus();
+        app.InjectKey(new Key('5'));
+        Assert.StartsWith($"'5' not taken: {choice.Choice.Label} takes one of {choice.Choice.KeyHint}", window.KeyLine);
+        Close(app, window, token);
+    }
+
+    [Fact]
     public void With_every_step_removed_the_rotation_offered_is_0_again()
     {
         var (app, window, token) = Open();
