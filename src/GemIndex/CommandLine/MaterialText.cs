@@ -72,8 +72,16 @@ internal static class MaterialText
     private static string Label(ValueSource source) =>
         Word(source.Kind).Contains(source.Key, StringComparison.OrdinalIgnoreCase) ? Word(source.Kind) : $"{source.Key}, {Word(source.Kind)}";
 
-    public static string Character(Material m) =>
-        m.Sign == Core.Optics.Indicatrix.OpticSign.None ? Word(m.OpticCharacter) : $"{Word(m.OpticCharacter)} {Word(m.Sign)}";
+    /// <summary>
+    /// The optic character in the bench's words ("singly refractive (amorphous)", as the text UI says it) with the sign
+    /// when one is fixed ("biaxial, either sign" where the catalogue lets it be either).
+    /// </summary>
+    public static string Character(Material m) => m.Sign switch
+    {
+        Core.Optics.Indicatrix.OpticSign.None => TextUi.Results.ResultText.Character(m.OpticCharacter),
+        Core.Optics.Indicatrix.OpticSign.Either => $"{TextUi.Results.ResultText.Character(m.OpticCharacter)}, either sign",
+        _ => $"{TextUi.Results.ResultText.Character(m.OpticCharacter)} {Word(m.Sign)}",
+    };
 
     private static string Indices(Material m) =>
         string.Join(" ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString(IndexFormat)}"));

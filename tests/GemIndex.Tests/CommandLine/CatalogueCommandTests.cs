@@ -319,4 +319,14 @@ public class CatalogueCommandTests
         Assert.Equal(3, exit);
         Assert.Contains("no catalogue entries to build", error, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void An_entrys_optic_character_is_said_in_the_benchs_words_with_either_sign_in_words()
+    {
+        var glass = GemIndex.Tests.TextUi.TestMaterials.All[0] with { Indices = OpticalIndices.SingleIndex(new(1.50, 1.52), OpticCharacter.Amorphous), Sign = OpticSign.None };
+        Assert.Equal("singly refractive (amorphous)", GemIndex.Cli.CommandLine.MaterialText.Character(glass));
+        var either = GemIndex.Tests.TextUi.TestMaterials.All[0] with { Sign = OpticSign.Either };
+        Assert.StartsWith(GemIndex.Cli.TextUi.Results.ResultText.Character(either.OpticCharacter), GemIndex.Cli.CommandLine.MaterialText.Character(either));
+        Assert.EndsWith(", either sign", GemIndex.Cli.CommandLine.MaterialText.Character(either));
+    }
 }
