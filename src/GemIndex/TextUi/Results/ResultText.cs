@@ -22,9 +22,19 @@ internal static class ResultText
 
     public static string Index(double n) => n.ToString("0.000", CultureInfo.InvariantCulture);
 
-    /// <summary>The answer in a few words for a list of stones: the leading species and its share, or "nothing fits".</summary>
-    public static string Short(IdentificationResult r) =>
-        r.NoGoodMatch ? "nothing fits" : r.Species.Count > 0 ? $"{r.Species[0].Species} {Percent(r.Species[0].Confidence)}" : "";
+    /// <summary>
+    /// The answer in a few words for a list of stones: the leading species and its share, then its likeliest entry when
+    /// that has a name of its own ("corundum >99%: flame-fusion synthetic sapphire"; the list's search finds both), or
+    /// "nothing fits".
+    /// </summary>
+    public static string Short(IdentificationResult r)
+    {
+        if (r.NoGoodMatch) return "nothing fits";
+        if (r.Species.Count == 0) return "";
+        string species = $"{r.Species[0].Species} {Percent(r.Species[0].Confidence)}";
+        string? entry = r.Candidates.FirstOrDefault(c => c.Material.Species == r.Species[0].Species)?.Material.Name;
+        return entry is null || entry == r.Species[0].Species ? species : $"{species}: {entry}";
+    }
 
     /// <summary>
     /// A probability in whole percent; what would print as 0 % or 100 % prints as "&lt;1%" or "&gt;99%", since bench readings

@@ -367,6 +367,18 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void The_stone_lists_answer_names_the_species_and_its_likeliest_entry_so_a_search_finds_either()
+    {
+        IdentificationResult r = CorundumAnswer(null) with
+        {
+            Candidates = [new() { Material = Corundum("flame-fusion synthetic sapphire", OriginClass.Synthetic), Confidence = 0.92, Fit = 0.9 }],
+            Species = [new SpeciesResult { Species = "corundum", Confidence = 0.999, Origins = new Dictionary<OriginClass, double> { [OriginClass.Synthetic] = 0.999 } }],
+        };
+        Assert.Equal("corundum >99%: flame-fusion synthetic sapphire", ResultText.Short(r));
+        Assert.Equal("nothing fits", ResultText.Short(r with { NoGoodMatch = true }));
+    }
+
+    [Fact]
     public void A_single_edge_is_one_refractive_index()
     {
         var form = new BenchModel();
