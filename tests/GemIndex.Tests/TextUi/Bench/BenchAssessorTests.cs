@@ -85,6 +85,9 @@ public class BenchAssessorTests
         var model = new ResultsModel();
         Assert.True(model.Accept(a));
         Assert.Contains(model.Rows(76), row => row.Text.Contains("Transparency: opaque", StringComparison.Ordinal));
+        // "Stays dark" on a stone said to be opaque is listed but not weighed, and the list says so.
+        form.Choose(BenchFields.Polariscope, "singly_refractive");
+        Assert.Contains("Polariscope: singly refractive (not weighed: the stone is opaque)", ResultText.Derived(Assessor.Assess(form.Snapshot())));
     }
 
     [Fact]
