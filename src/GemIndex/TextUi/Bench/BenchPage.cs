@@ -53,6 +53,9 @@ internal class BenchPage : View
     /// <summary>Opens the page at its first reading (never at the field used last: readings would go astray).</summary>
     public virtual void FocusFirst() => FirstReading.SetFocus();
 
+    /// <summary>The rows the page's own views take, from its top (the foot's rows aside).</summary>
+    protected int RowsUsed => _row;
+
     protected int NextRow(int rows = 1)
     {
         int row = _row;

@@ -50,6 +50,17 @@ internal sealed class RefractometerPage : BenchPage
         // Both defaults: a spot reading is read to about ±0.01, an edge to 0.001.
         AddField(BenchFields.Precision, "Precision", 8, $"{Fixed(BenchDefaults.FacetPrecision)}, spot {Fixed(BenchDefaults.SpotPrecision)}");
         AddField(BenchFields.CalibrationOffset, "Calibration", 8, "offset (0)");
+        // The list of steps takes the rows a taller window leaves (six at 80x24, where an eight-step series scrolls); the
+        // fields under it move down with it.
+        int gridRow = ((PosAbsolute)Grid.Y).Position;
+        List<(View View, int Row)> below = [.. SubViews.Where(v => v.Y is PosAbsolute a && a.Position > gridRow).Select(v => (v, ((PosAbsolute)v.Y).Position))];
+        ViewportChanged += (_, _) =>
+        {
+            int extra = Math.Max(0, Viewport.Height - FootRows - RowsUsed);
+            if (Grid.Height is DimAbsolute h && h.Size == GridRows + extra) return;
+            Grid.Height = GridRows + extra;
+            foreach (var (view, row) in below) view.Y = row + extra;
+        };
         foreach (TextField box in new[] { Rotation, Low, High })
             box.KeyDown += (_, key) =>
             {

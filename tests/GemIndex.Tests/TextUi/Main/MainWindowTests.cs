@@ -572,6 +572,20 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void The_list_of_steps_takes_the_rows_a_taller_window_leaves_and_the_fields_move_down_with_it()
+    {
+        using IApplication app = Headless.Start(120, 40);
+        using var window = new MainWindow(_session, TestMaterials.All);
+        SessionToken token = app.Begin(window)!;
+        app.LayoutAndDraw();
+        var rf = window.Refractometer;
+        Assert.True(rf.Grid.Frame.Height > RefractometerPage.GridRows, $"{rf.Grid.Frame.Height} rows at 120x40");
+        var spot = rf.Fields.Single(f => f.Field == BenchFields.Spot);
+        Assert.Equal(rf.Grid.Frame.Bottom, spot.Frame.Y);   // the spot reading right under the list
+        app.End(token);
+    }
+
+    [Fact]
     public void With_every_step_removed_the_rotation_offered_is_0_again()
     {
         var (app, window, token) = Open();
