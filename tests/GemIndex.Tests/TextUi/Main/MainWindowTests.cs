@@ -475,6 +475,7 @@ public sealed class MainWindowTests : IDisposable
         string caution = System.Text.RegularExpressions.Regex.Replace(window.Gravity.Caution.Text, @"\s+", " ");
         Assert.Contains("Do not immerse: opal is among the top candidates.", caution);
         Assert.Contains("rely on the other tests.", caution);
+        Assert.Contains("water unless the stone is known to take it", caution);   // as the answer's warning says it
         Assert.EndsWith(GemIndex.Cli.Reports.ReportCautions.HeavyLiquidLine, caution);   // the heavy liquids' caution stays too
         Assert.Contains("tests.", FormText(app.Driver!.ToString()!));   // drawn whole, not cut by the label's height
         Close(app, window, token);
