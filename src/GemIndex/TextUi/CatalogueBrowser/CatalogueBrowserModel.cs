@@ -6,8 +6,9 @@ namespace GemIndex.Cli.TextUi.CatalogueBrowser;
 
 /// <summary>
 /// The catalogue list filtered by a search over name, species, variety and colours, or by numbers: one number is an
-/// index (below 2.5) or an SG; two numbers ("1.544 2.65") are an index and an SG. Number searches list the entries
-/// whose ranges hold every number (within the tolerances), closest first.
+/// SG below the refractometer's scale (1.30) and from 2.5, and from 1.30 to 2.5 an index first, then an SG; two numbers
+/// ("1.544 2.65") are an index and an SG. Number searches list the entries whose ranges hold every number (within the
+/// tolerances), closest first.
 /// </summary>
 internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
 {
@@ -16,7 +17,7 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
     /// <summary>How far a typed number may lie outside an entry's index (±0.01) or SG (±0.05) range and still match: common practice tolerances.</summary>
     public const double IndexTolerance = 0.01, SgTolerance = 0.05;
 
-    /// <summary>A single number below this is an index, above it an SG.</summary>
+    /// <summary>A single number from the scale's bottom to this is read as an index first, then as an SG; above it, an SG.</summary>
     public const double HighestIndex = 2.5;
 
     public IReadOnlyList<Material> Shown { get; private set; } = materials;
@@ -38,11 +39,14 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
         }
         if (Numbers(q) is { } numbers)
         {
-            (double? Index, double? Sg) typed = numbers.Count == 2 ? (numbers[0], numbers[1])
-                : numbers[0] < HighestIndex ? (numbers[0], null) : (null, numbers[0]);
-            (double? index, double? sg) = typed;
-            Shown = [.. catalogue.Select(m => (m, Distance: Distance(m, index, sg))).Where(p => p.Distance is not null)
-                .OrderBy(p => p.Distance).Select(p => p.m)];
+            IEnumerable<Material> Near(double? index, double? sg) =>
+                catalogue.Select(m => (m, Distance: Distance(m, index, sg))).Where(p => p.Distance is not null).OrderBy(p => p.Distance).Select(p => p.m);
+            double x = numbers[0];
+            // Two numbers are an index and an SG. One below the refractometer's scale (1.30) can only be an SG (amber's
+            // 1.08); one from there to 2.5 is read as an index first, then as an SG (opal's 2.15 after the index 2.15).
+            Shown = numbers.Count == 2 ? [.. Near(numbers[0], numbers[1])]
+                : x < Core.Optics.Refractometer.RefractometerProfile.ScaleBottom || x >= HighestIndex ? [.. Near(null, x)]
+                : [.. Near(x, null).Concat(Near(null, x)).Distinct()];
             return;
         }
         Shown = [.. catalogue.Where(m => Matches(m, q)).OrderBy(m => Closeness(m, q))];   // stable: the catalogue's order within each kind

@@ -107,4 +107,17 @@ public class CatalogueBrowserModelTests
         Assert.Contains("do not immerse", details);
         Assert.Contains("yes: never weigh in water", details);
     }
+
+    [Fact]
+    public void One_number_below_the_scale_is_an_SG_and_one_on_it_an_index_first_then_an_SG()
+    {
+        var amber = TestMaterials.All[0] with { Name = "amber", Species = "amber", Indices = GemIndex.Core.Catalogue.OpticalIndices.SingleIndex(new(1.539, 1.545)), SpecificGravity = new(1.05, 1.10) };
+        var model = new CatalogueBrowserModel([.. TestMaterials.All, amber]);
+        model.Search("1.08");   // below the refractometer's 1.30: amber's SG (from memory, 1.05–1.10)
+        Assert.Equal(["amber"], model.Shown.Select(m => m.Name));
+        model.Search("2.15");   // opal's SG 1.98–2.20 (test values): no index that high here, so the SG finds it
+        Assert.Contains(model.Shown, m => m.Name == "opal");
+        model.Search("1.544");  // quartz by its index first
+        Assert.Equal("quartz", model.Shown[0].Name);
+    }
 }
