@@ -159,21 +159,21 @@ public static class BenchReader
                 if (rotation is null || low is null || s.High.Trim().Length > 0 && high is null) continue;
                 // Each edge against the scale first, so that an edge no refractometer shows is named as such, both when
                 // both are (not "high below low" for a low edge typed above the liquid).
-                string limit = liquid.ToString("0.000", CultureInfo.InvariantCulture);
                 var edges = new[] { ("low", low), ("high", high) }.Where(e => e.Item2 is not null).Select(e => (Part: e.Item1, Value: e.Item2!.Value)).ToList();
-                if (checkAboveLiquid && edges.Where(e => e.Value > liquid + BenchDefaults.EdgeSlackAboveLiquid).ToList() is { Count: > 0 } above)
+                // "low edge 1.8 and high edge 1.81 are", "low edge 2.5 is": the edges the predicate picks, or null.
+                string? Named(Func<double, bool> off) => edges.Where(e => off(e.Value)).ToList() is { Count: > 0 } picked
+                    ? string.Join(" and ", picked.Select(e => $"{e.Part} edge {e.Value.ToString("0.####", CultureInfo.InvariantCulture)}")) + (picked.Count > 1 ? " are" : " is")
+                    : null;
+                string limit = liquid.ToString("0.000", CultureInfo.InvariantCulture), bottom = RefractometerProfile.ScaleBottom.ToString("0.00", CultureInfo.InvariantCulture);
+                if (checkAboveLiquid && Named(e => e > liquid + BenchDefaults.EdgeSlackAboveLiquid) is { } above)
                 {
-                    string named = string.Join(" and ", above.Select(e => $"{e.Part} edge {e.Value.ToString("0.####", CultureInfo.InvariantCulture)}"));
-                    Error(field, BenchSyntax.Step(s), $"at most the liquid limit {limit}",
-                        $"{named} {(above.Count > 1 ? "are" : "is")} above the liquid limit {limit}, where no edge shows"
+                    Error(field, BenchSyntax.Step(s), $"at most the liquid limit {limit}", $"{above} above the liquid limit {limit}, where no edge shows"
                         + (r.Text(BenchField.LiquidLimit) is null ? $" (a denser liquid? set {BenchField.LiquidLimit})." : "."));
                     continue;
                 }
-                if (edges.Where(e => e.Value < RefractometerProfile.ScaleBottom).ToList() is { Count: > 0 } below)
+                if (Named(e => e < RefractometerProfile.ScaleBottom) is { } below)
                 {
-                    string named = string.Join(" and ", below.Select(e => $"{e.Part} edge {e.Value.ToString("0.####", CultureInfo.InvariantCulture)}"));
-                    Error(field, BenchSyntax.Step(s), $"at least the scale's {RefractometerProfile.ScaleBottom.ToString("0.00", CultureInfo.InvariantCulture)}",
-                        $"{named} {(below.Count > 1 ? "are" : "is")} below the scale's lowest index {RefractometerProfile.ScaleBottom.ToString("0.00", CultureInfo.InvariantCulture)}, where no refractometer reads.");
+                    Error(field, BenchSyntax.Step(s), $"at least the scale's {bottom}", $"{below} below the scale's lowest index {bottom}, where no refractometer reads.");
                     continue;
                 }
                 ShadowEdgeStep step;
@@ -448,11 +448,11 @@ public static class BenchReader
         /// </summary>
         private static string? AllowedRange(string field, string part, double? liquidLimit = null)
         {
+            const double Far = 1e300;
             // A step's edge is read on the same scale as a spot reading: the same range, to the liquid in use.
             if (part is "low" or "high" && liquidLimit is { } liquid)
-                try { _ = new RefractometerObservation(RefractometerMethod.Spot, spot: 1e300, liquidLimit: liquid); }
+                try { _ = new RefractometerObservation(RefractometerMethod.Spot, spot: Far, liquidLimit: liquid); }
                 catch (QuantityOutOfRangeException e) { return e.Allowed; }
-            const double Far = 1e300;
             Action? check = (field, part) switch
             {
                 (BenchField.Sg, _) => () => _ = new SpecificGravity(Far, BenchDefaults.DirectSpecificGravityUncertainty),

@@ -10,6 +10,7 @@ public sealed record AnalysedSheet
     public AnalysedSheet(BenchSheet sheet)
     {
         Sheet = sheet;
+        OpaqueStoneShows = EvidenceLikelihood.SaysNothingOfAnOpaqueStone(sheet);
         if (!string.IsNullOrWhiteSpace(sheet.Colour))
         {
             var hues = ColourWords.PrincipalHues(sheet.Colour).ToHashSet();
@@ -83,6 +84,9 @@ public sealed record AnalysedSheet
 
     /// <summary>True when the colour given describes a colourless stone (which shows no pleochroism).</summary>
     public bool IsColourless { get; }
+
+    /// <summary>The readings of a stone read opaque that any opaque stone shows, not weighed (worked out once per stone).</summary>
+    internal (bool Polariscope, bool Pleochroism, bool Fire) OpaqueStoneShows { get; }
 
     /// <summary>The rotation series' summary for display (character, sign, indices read from the readings; never a gate).</summary>
     public RotationSeriesResult? Series { get; }

@@ -61,6 +61,7 @@ public static class BenchWarnings
     /// <param name="leaderReasons">The leading candidate's reasons, each test weighed (empty: none worked out).</param>
     /// <param name="varieties">The leading species' unsettled varieties (<see cref="InseparableVarieties"/>) and the test that best tells them apart.</param>
     /// <param name="group">The species of the leading species' mineral group that the answer leaves open (<see cref="InseparableGroup"/>) and the test that best tells them apart.</param>
+    /// <param name="advisedTests">Filled with the tests the warnings advise (batch words), whose cautions go with them.</param>
     /// <param name="keepDry">The entries to keep dry (<see cref="IdentificationResult.KeepDry"/>); without it, those among <paramref name="serious"/>.</param>
     /// <param name="serious">
     /// Every entry of the whole catalogue holding at least <see cref="Relevant"/>, in the answer's order: the cautions (do not
@@ -70,7 +71,8 @@ public static class BenchWarnings
     public static IReadOnlyList<string> For(AnalysedSheet sheet, IReadOnlyList<RankedCandidate> candidates, double notInCatalogue, bool noGoodMatch,
         IReadOnlyList<SpeciesResult>? species = null, NextTestAdvice? separation = null, IReadOnlyList<EvidenceContribution>? leaderReasons = null,
         (IReadOnlyList<Material> Entries, NextTestAdvice? Test)? varieties = null, (GroupSpecies Open, NextTestAdvice? Test)? group = null,
-        IReadOnlyList<(Material Material, double Confidence)>? serious = null, IReadOnlyList<string>? keepDry = null)
+        IReadOnlyList<(Material Material, double Confidence)>? serious = null, IReadOnlyList<string>? keepDry = null,
+        ICollection<string>? advisedTests = null)
     {
         var warnings = new List<string>();
         if (sheet.Sheet.IsEmpty)
@@ -102,7 +104,7 @@ public static class BenchWarnings
                 warnings.Add($"Unusual for {candidates[0].Material.Name}, {Bench.BenchTestWords.DisplayOfWire(reason.Test)}: {reason.Text}. Re-check it; the answer weighs it as read.");
         if (sheet.Sheet.SpecificGravity is { StandardUncertainty: > LargeGravityUncertainty } sg)
             warnings.Add($"SG uncertainty ±{sg.StandardUncertainty.ToString("0.00", CultureInfo.InvariantCulture)} is large (a small stone or a coarse balance): SG separates little here.");
-        var (dark, oneColour, noFire) = EvidenceLikelihood.SaysNothingOfAnOpaqueStone(sheet.Sheet);
+        var (dark, oneColour, noFire) = sheet.OpaqueStoneShows;
         if (new[] { (dark, "the polariscope's 'stays dark'"), (oneColour, "the dichroscope's one colour"), (noFire, "no fire") }
                 .Where(x => x.Item1).Select(x => x.Item2).ToList() is { Count: > 0 } nothing)
             warnings.Add($"Opaque stone: {Listed(nothing)} {(nothing.Count > 1 ? "are" : "is")} what any opaque stone shows, so {(nothing.Count > 1 ? "they are" : "it is")} not weighed.");
@@ -131,15 +133,19 @@ public static class BenchWarnings
             string test = i == 0 && separation is { } next
                 ? $"the {next.Description} would help"
                 : i == 0 ? "no bench test left here separates them" : "";
+            if (i == 0 && separation is { } advised) advisedTests?.Add(advised.Test);
             string laboratory = OnlyLaboratoryTells(held) ? " (its X-radiography tells cultured from natural)" : "";
             warnings.Add($"{Capital(leading[i].Species)}: {Listed(origins)} cannot be separated by these tests{(test.Length > 0 ? "; " + test : "")}; for a valuable stone refer it to a qualified laboratory{laboratory}.");
         }
         // Species of one mineral group the tests leave open (elbaite, uvite and dravite of the tourmalines), and what would tell them.
         if (!noGoodMatch && group is { } g)
+        {
             // A group's species differ in chemistry: a bench test can only hint (through the entries' listed lines or
             // glow), and a laboratory's analysis settles them.
+            if (g.Test is { } hinting) advisedTests?.Add(hinting.Test);
             warnings.Add($"{Capital(g.Open.Group)} group: {Listed(g.Open.Species)} are not told apart by these tests; "
                 + (g.Test is { } tells ? $"the {tells.Description} may hint, and a laboratory's analysis settles it." : "a laboratory's analysis settles it."));
+        }
         // Varieties of one origin the tests leave open (cat's-eye or plain chrysoberyl, CVD or HPHT growth), and what would tell them.
         // The test the origin warning names already tells these varieties apart too: one line says it.
         if (!noGoodMatch && varieties is { Entries.Count: > 1 } open && leading.Count > 0
@@ -149,6 +155,7 @@ public static class BenchWarnings
             // colours begin with different hues, writing it down is the advice.
             bool colourWouldHelp = string.IsNullOrWhiteSpace(sheet.Sheet.Colour)
                 && open.Entries.Select(m => string.Join('|', m.Colours.Take(1).SelectMany(ColourWords.PrincipalHues).Order())).Distinct().Count() > 1;
+            if (open.Test is { } helping) advisedTests?.Add(helping.Test);
             warnings.Add($"{Capital(leading[0].Species)}: {Listed([.. open.Entries.Select(m => m.Name)])} are not told apart by these tests; "
                 + (open.Test is { } tells ? $"the {tells.Description} would help." : colourWouldHelp ? "its colour, written down, would help." : "no bench test left here separates them."));
         }

@@ -48,11 +48,11 @@ public static class EvidenceLikelihood
         // A stone the bench calls opaque stays dark between crossed polarisers, shows one colour in the dichroscope and no
         // fire, whatever it is: those readings say nothing of the material and are not weighed (docs/ranking.md §2, "An
         // opaque stone"). A reaction that needs light through the stone is weighed as read, and warned of.
-        PolariscopeReaction? polariscope = SaysNothingOfAnOpaqueStone(s) is { Polariscope: true } ? null : s.Polariscope;
+        var opaque = sheet.OpaqueStoneShows;
+        PolariscopeReaction? polariscope = opaque.Polariscope ? null : s.Polariscope;
         if (polariscope is { } pol) Polariscope(profile, pol, acc);
-        if (s.Pleochroism is { } pl && SaysNothingOfAnOpaqueStone(s) is not { Pleochroism: true })
-            Pleochroism(profile, pl, sheet.IsColourless, lightCounted: polariscope is not null, acc);
-        if (s.Dispersion is { } d && SaysNothingOfAnOpaqueStone(s) is not { Fire: true }) Dispersion(material, d, acc);
+        if (s.Pleochroism is { } pl && !opaque.Pleochroism) Pleochroism(profile, pl, sheet.IsColourless, lightCounted: polariscope is not null, acc);
+        if (s.Dispersion is { } d && !opaque.Fire) Dispersion(material, d, acc);
         if (s.ThermalProbe is { } t) Thermal(material, t, acc);
         if (s.Electrical is { } e) Electrical(material, e, acc);
         if (s.UvLong is { } ul) Fluorescence(BenchField.UvLong, "long-wave UV", material.UvLong, profile.UvLong, ul, acc);
@@ -75,12 +75,22 @@ public static class EvidenceLikelihood
     }
 
     /// <summary>
-    /// Which of the sheet's transmitted-light readings are what any opaque stone shows: the polariscope's "stays dark"
-    /// (written singly refractive), the dichroscope's one colour, no fire by eye. All false unless the stone is read opaque.
+    /// Whether a reading (field and batch word) is what any opaque stone shows: the polariscope's "stays dark" (written
+    /// singly refractive), the dichroscope's one colour, no fire by eye. The one statement of the rule; the front ends
+    /// mark such readings as not weighed by it.
+    /// </summary>
+    public static bool ShownByAnyOpaqueStone(string field, string word) =>
+        (field, word) is (BenchField.Polariscope, "singly_refractive") or (BenchField.Pleochroism, "none") or (BenchField.Dispersion, "none");
+
+    /// <summary>
+    /// Which of the sheet's transmitted-light readings are what any opaque stone shows (<see cref="ShownByAnyOpaqueStone"/>);
+    /// all false unless the stone is read opaque.
     /// </summary>
     internal static (bool Polariscope, bool Pleochroism, bool Fire) SaysNothingOfAnOpaqueStone(BenchSheet s) =>
         s.Transparency != StoneTransparency.Opaque ? default
-            : (s.Polariscope == PolariscopeReaction.SinglyRefractive, s.Pleochroism == PleochroismObservation.None, s.Dispersion?.Seen == DispersionStrength.None);
+            : (s.Polariscope is { } p && ShownByAnyOpaqueStone(BenchField.Polariscope, BenchWords.Word(p)),
+               s.Pleochroism is { } d && ShownByAnyOpaqueStone(BenchField.Pleochroism, BenchWords.Word(d)),
+               s.Dispersion?.Seen is { } f && ShownByAnyOpaqueStone(BenchField.Dispersion, BenchWords.Word(f)));
 
     private static void SpecificGravity(Material m, double value, double sigma, EvidenceAccumulator acc, int group)
     {

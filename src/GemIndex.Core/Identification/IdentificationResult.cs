@@ -45,6 +45,9 @@ public sealed record IdentificationResult
     /// </summary>
     public IReadOnlyList<string> KeepDry { get; init; } = [];
 
+    /// <summary>The tests the warnings advise (batch words, each once), so that their cautions go with the advice.</summary>
+    public IReadOnlyList<string> WarningTests { get; init; } = [];
+
     /// <summary>The leading species' origins these tests cannot separate, and the test that best would; null when they can.</summary>
     public InseparableOrigins? InseparableOrigins { get; init; }
 

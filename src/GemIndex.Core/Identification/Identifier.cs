@@ -420,6 +420,7 @@ public sealed class Identifier
         List<string> keepDry = [.. order.Where(i => _materials[i].DoNotImmerse && (posterior[i] >= BenchWarnings.Relevant
             || (posterior[i] >= BenchWarnings.Relevant / 10 && _materials[i].Species == leadingSpecies)))
             .OrderByDescending(i => posterior[i]).Select(i => _materials[i].Name)];
+        var advised = new List<string>();
         return new IdentificationResult
         {
             Id = sheet.Id,
@@ -437,8 +438,9 @@ public sealed class Identifier
                 // The group's test tells its species apart, not merely one species' varieties.
                 group is { } open ? (open.Open, NextTestAdvisor.Advise(sheet, open.Entries, m => open.Open.IndexOf(m.Species))) : null,
                 // Cautions from every serious entry, shown or not.
-                [.. order.Where(i => posterior[i] >= BenchWarnings.Relevant).Select(i => (_materials[i], posterior[i]))], keepDry),
+                [.. order.Where(i => posterior[i] >= BenchWarnings.Relevant).Select(i => (_materials[i], posterior[i]))], keepDry, advised),
             KeepDry = keepDry,
+            WarningTests = [.. advised.Distinct()],
             InseparableOrigins = species.Count > 0 && BenchWarnings.Inseparable(species[0]) is { } held
                 ? new InseparableOrigins { Species = species[0].Species, Origins = held, Test = separation } : null,
             SeriesSource = analysed.SeriesShown,

@@ -81,7 +81,7 @@ internal static class IdentificationText
             if (ReportCautions.ForTest(next.Test) is { } caution) o.WriteLine($"  {caution}");
         }
         foreach (string w in result.Warnings) o.WriteLine($"Warning: {w}");
-        foreach (string c in ReportCautions.ForWarnings(result.Warnings, result.NextTest?.Test)) o.WriteLine(c);
+        foreach (string c in ReportCautions.ForWarnings(result.WarningTests, result.NextTest?.Test)) o.WriteLine(c);
         o.WriteLine("An identification from bench tests is an aid, not a certificate.");
         output.Write(BenchText.ForTerminal(o.ToString()).Replace("\n", output.NewLine, StringComparison.Ordinal));
     }

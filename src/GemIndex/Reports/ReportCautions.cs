@@ -51,15 +51,11 @@ internal static class ReportCautions
     };
 
     /// <summary>
-    /// The cautions for the tests the warnings advise ("… the long-wave UV lamp (365 nm) would help"), each once, leaving
-    /// out the next test's, which is said beside it: taking the advice is where the hazard is met.
+    /// The cautions for the tests the warnings advise (<see cref="GemIndex.Core.Identification.IdentificationResult.WarningTests"/>),
+    /// each once, leaving out the next test's, which is said beside it: taking the advice is where the hazard is met.
     /// </summary>
-    public static IReadOnlyList<string> ForWarnings(IEnumerable<string> warnings, string? nextTest) =>
-        [.. Enum.GetValues<GemIndex.Core.Bench.BenchTest>()
-            .Where(t => warnings.Any(w => w.Contains("the " + GemIndex.Core.Bench.BenchTestWords.Display(t) + " would help", StringComparison.Ordinal)
-                || w.Contains("the " + GemIndex.Core.Bench.BenchTestWords.Display(t) + " may hint", StringComparison.Ordinal)))
-            .Select(t => ForTest(GemIndex.Core.Bench.BenchTestWords.Wire(t)))
-            .OfType<string>().Where(c => nextTest is null || c != ForTest(nextTest)).Distinct()];
+    public static IReadOnlyList<string> ForWarnings(IEnumerable<string> advisedTests, string? nextTest) =>
+        [.. advisedTests.Select(ForTest).OfType<string>().Where(c => nextTest is null || c != ForTest(nextTest)).Distinct()];
 
     /// <summary>All of them, in the order printed.</summary>
     public static IReadOnlyList<string> All { get; } = [Liquids, Ultraviolet, Scope, Laboratory];

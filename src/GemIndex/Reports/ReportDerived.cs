@@ -132,20 +132,21 @@ internal static class ReportDerived
             double negative = p.UniaxialNegative + share * biaxial.Where(i => i.Sign == OpticSign.Negative).Sum(i => i.Weight);
             // Short of certain while the readings leave any chance of an isotropic stone (the sum can round to 1).
             double alike = p.Isotropic > 0 ? Math.Min(p.Uniaxial + p.Biaxial, Math.BitDecrement(1.0)) : p.Uniaxial + p.Biaxial;
-            string signs = string.Join(", ", new[] { ("positive", positive), ("negative", negative) }.Where(x => x.Item2 >= 0.01)
-                .OrderByDescending(x => x.Item2).Select(x => $"{x.Item1} {percent(x.Item2)}"));
+            string signs = Signs(positive, negative, 0.01, percent);
             string both = $"uniaxial (or biaxial, 2V near 0°: not told apart) {percent(alike)}" + (signs.Length > 0 ? $" ({signs})" : "");
             return string.Join(", ", new[] { (both, alike), ("singly refractive " + percent(p.Isotropic), p.Isotropic) }
                 .Where(x => x.Item2 > 0).OrderByDescending(x => x.Item2).Select(x => x.Item1));
         }
-        string uniaxial = "uniaxial " + percent(p.Uniaxial) + (p.Uniaxial >= 0.01
-            ? " (" + string.Join(", ", new[] { ("positive", p.UniaxialPositive), ("negative", p.UniaxialNegative) }
-                .Where(x => x.Item2 > 0).OrderByDescending(x => x.Item2).Select(x => $"{x.Item1} {percent(x.Item2)}")) + ")"
-            : "");
+        string uniaxial = "uniaxial " + percent(p.Uniaxial) + (p.Uniaxial >= 0.01 ? $" ({Signs(p.UniaxialPositive, p.UniaxialNegative, double.Epsilon, percent)})" : "");
         // A character the readings rule out (two edges apart rule out one index) is left out, not shown as "0%".
         return string.Join(", ", new[] { (uniaxial, p.Uniaxial), ("biaxial " + percent(p.Biaxial), p.Biaxial), ("singly refractive " + percent(p.Isotropic), p.Isotropic) }
             .Where(x => x.Item2 > 0).OrderByDescending(x => x.Item2).Select(x => x.Item1));
     }
+
+    /// <summary>"negative 96.0 %, positive 1.0 %": each sign holding at least <paramref name="least"/>, likeliest first.</summary>
+    private static string Signs(double positive, double negative, double least, Func<double, string> percent) =>
+        string.Join(", ", new[] { ("positive", positive), ("negative", negative) }.Where(x => x.Item2 >= least)
+            .OrderByDescending(x => x.Item2).Select(x => $"{x.Item1} {percent(x.Item2)}"));
 
     /// <summary>Species below this share are not listed in the answer (a judgement: 1 %).</summary>
     private const double ShownSpeciesShare = 0.01;

@@ -262,7 +262,7 @@ public class EvidenceModelTests
     [InlineData("zorbish", "")]
     [InlineData("green, mottled", "green")]          // how the colour lies, not which
     [InlineData("near colourless", "colourless")]
-    [InlineData("cream", "yellow")]                  // a yellowish white, as pearls and ivory are described
+    [InlineData("cream", "yellow")]                  // a yellowish white, as pearls and ivory are described (common practice)
     public void A_colour_description_names_its_last_hue_and_a_tint_only_tones_it(string description, string expected)
     {
         Assert.Equal(expected.Split(' ', StringSplitOptions.RemoveEmptyEntries), ColourWords.PrincipalHues(description).ToArray());

@@ -394,6 +394,18 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void A_test_a_warning_advises_carries_its_caution()
+    {
+        // A blue cabochon read at 1.61 with SG 2.70 (invented): turquoise's origins are told apart by the long-wave UV lamp,
+        // which the warning names; its caution goes with it (the next test is another).
+        using var run = new CommandRun();
+        var (exit, stdout, error) = Identify(run, "--spot", "1.61", "--sg", "2.70", "--colour", "blue", "--cut", "cabochon");
+        Assert.True(exit == 0, error);
+        Assert.Contains("long-wave UV lamp (365 nm) would help", stdout);
+        Assert.Contains(GemIndex.Cli.Reports.ReportCautions.UltravioletShort, stdout);
+    }
+
+    [Fact]
     public void An_edge_above_the_usual_liquid_is_refused_as_the_text_UI_refuses_it()
     {
         using var run = new CommandRun();

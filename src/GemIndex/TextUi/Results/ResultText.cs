@@ -165,7 +165,8 @@ internal static class ResultText
         // A refused answer was left out of the answer: not listed as used.
         foreach (var (field, word) in r.ChoiceWords)
             if (word is not null && !refused.ContainsKey(field) && BenchChoice.For(field) is var choice)
-                yield return $"{choice.Label}: {choice.Show(word)}" + (NotWeighedOnAnOpaqueStone(r, field, word) ? " (not weighed: the stone is opaque)" : "");
+                yield return $"{choice.Label}: {choice.Show(word)}"
+                    + (r.Transparency == "opaque" && EvidenceLikelihood.ShownByAnyOpaqueStone(field, word) ? " (not weighed: the stone is opaque)" : "");
         if (r.DispersionIndices is { } nb) yield return $"Dispersion: RI at B {Index(nb.NB)}, at G {Index(nb.NG)}";
         if (r.AbsorptionNm is { } lines)
             yield return lines.Count == 0 ? "Absorption: no lines" : "Absorption: " + string.Join(", ", lines.Select(n => n.ToString("0.#", CultureInfo.InvariantCulture))) + " nm";
@@ -206,10 +207,6 @@ internal static class ResultText
         else if (best.Birefringence.Value > 0) yield return $"Birefringence: {Index(GemIndex.Core.Optics.Birefringence.OfShownIndices(best.Highest.Value, best.Lowest.Value))}";
         if (Sign(s) is { } sign) yield return "Optic sign: " + sign;
     }
-
-    /// <summary>What any opaque stone shows, read on one said to be opaque: listed, but not weighed (EvidenceLikelihood.SaysNothingOfAnOpaqueStone).</summary>
-    private static bool NotWeighedOnAnOpaqueStone(StoneReadings r, string field, string word) =>
-        r.Transparency == "opaque" && (field, word) is (BenchField.Polariscope, "singly_refractive") or (BenchField.Pleochroism, "none") or (BenchField.Dispersion, "none");
 
     /// <summary>The optic character in the bench's words: one index is "singly refractive", as the polariscope says it.</summary>
     public static string Character(OpticCharacter c) => c switch

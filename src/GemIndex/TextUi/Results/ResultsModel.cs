@@ -97,7 +97,7 @@ internal sealed class ResultsModel
         if (r.Warnings.Count > 0)
         {
             rows.Add(new AnswerRow(""));
-            Text(["Warnings", .. r.Warnings.Select(x => "! " + Sentence(x)), .. Reports.ReportCautions.ForWarnings(r.Warnings, r.NextTest?.Test)]);
+            Text(["Warnings", .. r.Warnings.Select(x => "! " + Sentence(x)), .. Reports.ReportCautions.ForWarnings(r.WarningTests, r.NextTest?.Test)]);
         }
         // The answer ends as every answer does: what it is and is not.
         rows.Add(new AnswerRow(""));

@@ -8,34 +8,47 @@ namespace GemIndex.Cli.TextUi.Stones;
 /// out away from the UI thread (<see cref="Compute"/>, thread-safe when the function given is) and kept once per stone
 /// and change (<see cref="Store"/>, on the UI thread), so the list opens at once and a search does not rank again.
 /// </summary>
-internal sealed class StoneListModel(Func<string, IReadOnlyList<StoneSummary>> list, Func<long, string?>? answer = null)
+internal sealed class StoneListModel
 {
+    private readonly Func<string, IReadOnlyList<StoneSummary>> list;
+    private readonly Func<long, string?>? answer;
+
+    /// <summary>The workbook's stones (<paramref name="list"/>: those a search's text matches, all for ""), every one shown at first.</summary>
+    public StoneListModel(Func<string, IReadOnlyList<StoneSummary>> list, Func<long, string?>? answer = null)
+    {
+        this.list = list;
+        this.answer = answer;
+        Shown = _all = list("");
+    }
+
     /// <summary>What a line shows where its answer is still being worked out.</summary>
     public const string Pending = "…";
 
     private readonly Dictionary<(long, DateTimeOffset), string?> _answers = [];   // null: none could be worked out (no catalogue yet)
-    private IReadOnlyList<StoneSummary> _all = list("");
+    private IReadOnlyList<StoneSummary> _all;
     private HashSet<long> _textMatches = [];
 
-    public IReadOnlyList<StoneSummary> Shown { get; private set; } = list("");
+    public IReadOnlyList<StoneSummary> Shown { get; private set; }
 
     public string Query { get; private set; } = "";
 
     /// <summary>
     /// The stones whose reference, colour or notes hold <paramref name="text"/> (the workbook's search), and those whose
-    /// answer does once it is worked out ("spinel" finds the stones answered spinel).
+    /// answer does once it is worked out ("spinel" finds the stones answered spinel). The workbook is asked for the
+    /// text matches only; the stones themselves are read again by <see cref="Refresh"/>.
     /// </summary>
     public void Search(string text)
     {
         Query = text;
-        Refresh();
+        _textMatches = Query.Trim().Length == 0 ? [] : [.. list(Query).Select(s => s.Id)];
+        Shown = Filtered();
     }
 
+    /// <summary>Reads the workbook's stones again (after a deletion or a copy) and searches them as before.</summary>
     public void Refresh()
     {
         _all = list("");
-        _textMatches = Query.Trim().Length == 0 ? [] : [.. list(Query).Select(s => s.Id)];
-        Shown = Filtered();
+        Search(Query);
     }
 
     private IReadOnlyList<StoneSummary> Filtered()

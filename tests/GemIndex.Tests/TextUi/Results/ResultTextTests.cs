@@ -281,6 +281,7 @@ public class ResultTextTests
         IdentificationResult r = CorundumAnswer(null) with
         {
             Warnings = ["Turquoise: treated and natural cannot be separated by these tests; the long-wave UV lamp (365 nm) would help; for a valuable stone refer it to a qualified laboratory."],
+            WarningTests = [GemIndex.Core.Bench.BenchField.UvLong],
         };
         var model = new ResultsModel();
         model.Accept(new BenchAssessment { Version = 1, Errors = new Dictionary<string, string>(), Readings = new() { Sg = 4.0 }, Result = r });
@@ -288,8 +289,8 @@ public class ResultTextTests
         Assert.Equal(ResultsModel.ScopeLine, rows[^1].Text);
         Assert.Contains(rows, x => x.Text == GemIndex.Cli.Reports.ReportCautions.UltravioletShort);
         // Beside the next test that is the same lamp, the caution is said there and not again.
-        Assert.Empty(GemIndex.Cli.Reports.ReportCautions.ForWarnings(r.Warnings, GemIndex.Core.Bench.BenchField.UvLong));
-        Assert.Empty(GemIndex.Cli.Reports.ReportCautions.ForWarnings(["Beryl: natural and synthetic cannot be separated by these tests."], null));
+        Assert.Empty(GemIndex.Cli.Reports.ReportCautions.ForWarnings(r.WarningTests, GemIndex.Core.Bench.BenchField.UvLong));
+        Assert.Empty(GemIndex.Cli.Reports.ReportCautions.ForWarnings([], null));   // a warning that advises no test
     }
 
     [Fact]
