@@ -47,8 +47,15 @@ internal static class StoneHistoryText
         if (Flatten(e.Before, reading) is { } before && Flatten(e.After, reading) is { } after)
             return before.Keys.Union(after.Keys).Where(k => k != "id" && !(e.Field == "readings" && k == "transparency") && before.GetValueOrDefault(k) != after.GetValueOrDefault(k))
                 .Select(k => Change(PathWords(k.Length == 0 ? e.Field : e.Field + "." + k), before.GetValueOrDefault(k), after.GetValueOrDefault(k)));
-        return [Change(Label(e.Field), e.Before, e.After)];
+        return [Change(Label(e.Field), AsRead(e.Field, e.Before), AsRead(e.Field, e.After))];
     }
+
+    /// <summary>A stored number of a field in <see cref="NumberFormats"/> to the places it is read to; anything else as it is.</summary>
+    private static string? AsRead(string field, string? value) =>
+        value is not null && NumberFormats.TryGetValue(field[(field.LastIndexOf('.') + 1)..], out string? format)
+            && double.TryParse(value, NumberStyles.Float, CultureInfo.InvariantCulture, out double number)
+            ? number.ToString(format, CultureInfo.InvariantCulture)
+            : value;
 
     private static string Change(string what, string? before, string? after) =>
         (before ?? "", after ?? "") switch
@@ -65,8 +72,16 @@ internal static class StoneHistoryText
 
     private const string ReadingsPrefix = "readings.";
 
-    /// <summary>The stored fields that hold a refractive index.</summary>
-    private static readonly HashSet<string> IndexKeys = new(StringComparer.Ordinal) { "low", "high", "spot", "liquid_limit" };
+    /// <summary>
+    /// The stored numbers and the places they are read to (a number is stored as 1.77 for 1.770, 4 for an SG of 4.00):
+    /// edges and the liquid to the thousandth, a spot reading and an SG to the hundredth, weights to the thousandth of a
+    /// carat, as they are typed and shown everywhere else.
+    /// </summary>
+    private static readonly Dictionary<string, string> NumberFormats = new(StringComparer.Ordinal)
+    {
+        ["low"] = "0.000#", ["high"] = "0.000#", ["liquid_limit"] = "0.000#", ["spot"] = "0.00#",
+        ["sg"] = "0.00#", ["density"] = "0.00#", ["air_ct"] = "0.000#", ["water_ct"] = "0.000#",
+    };
 
     /// <summary>
     /// "refractometer.readings[2].low" → "RI step 3 low edge"; the store's "readings." before a reading is left out
@@ -132,9 +147,8 @@ internal static class StoneHistoryText
                 break;
             case JsonValueKind.True: map[path] = "yes"; break;
             case JsonValueKind.False: map[path] = "no"; break;
-            // An index is stored as a number (1.770 as 1.77): shown to the thousandth, as it was read.
-            case JsonValueKind.Number when IndexKeys.Contains(path[(path.LastIndexOf('.') + 1)..]):
-                map[path] = e.GetDouble().ToString("0.000#", CultureInfo.InvariantCulture);
+            case JsonValueKind.Number when NumberFormats.TryGetValue(path[(path.LastIndexOf('.') + 1)..], out string? format):
+                map[path] = e.GetDouble().ToString(format, CultureInfo.InvariantCulture);
                 break;
             default: map[path] = e.GetRawText(); break;
         }

@@ -63,6 +63,20 @@ public class StoneHistoryTextTests
     }
 
     [Fact]
+    public void An_SG_a_spot_reading_and_weights_stored_as_numbers_are_told_to_the_places_they_are_read_to()
+    {
+        // An SG of 4.00 is stored as 4, a spot of 1.61 as 1.61, weights in carats as 1.67: told as typed (SG and spot to
+        // the hundredth, weights to the thousandth of a carat).
+        const string before = """{"id":"b"}""";
+        const string typed = """{"id":"b","refractometer":{"method":"spot","spot":1.61},"sg":4}""";
+        const string weighed = """{"id":"b","sg":{"air_ct":1.67,"water_ct":1.17}}""";
+        string[] said = [.. StoneHistoryText.Describe(new StoneEdit(At, "readings", before, typed))];
+        Assert.Contains("SG set to '4.00'", said);
+        Assert.Contains("RI spot reading set to '1.61'", said);
+        Assert.Contains("SG weight in air (ct) set to '1.670'", StoneHistoryText.Describe(new StoneEdit(At, "readings", before, weighed)));
+    }
+
+    [Fact]
     public void Magnification_features_are_told_by_their_names_as_seen_or_looked_for_and_not_seen()
     {
         const string before = """{"id":"b","sg":4.0}""";
@@ -82,7 +96,7 @@ public class StoneHistoryTextTests
         Assert.Equal(["Colour set to 'blue'"], StoneHistoryText.Describe(new StoneEdit(At, "readings.colour", "", "\"blue\"")));
         Assert.Equal(["Polariscope changed from 'singly refractive' to 'doubly refractive'"],
             StoneHistoryText.Describe(new StoneEdit(At, "readings.polariscope", "\"singly_refractive\"", "\"doubly_refractive\"")));
-        Assert.Equal(["SG set to '4'"], StoneHistoryText.Describe(new StoneEdit(At, "readings.sg", "", "4")));
+        Assert.Equal(["SG set to '4.00'"], StoneHistoryText.Describe(new StoneEdit(At, "readings.sg", "", "4")));
         Assert.Equal(["Features seen under magnification set to 'curved striae'"],
             StoneHistoryText.Describe(new StoneEdit(At, "readings.magnification", "", """{"present":["curved_striae"]}""")));
         Assert.Equal(["Notes set to '\"as found\"'"], StoneHistoryText.Describe(new StoneEdit(At, "notes", "", "\"as found\"")));   // a note is text, never JSON
@@ -92,6 +106,6 @@ public class StoneHistoryTextTests
     public void A_field_path_from_the_store_is_named_in_words()
     {
         Assert.Equal(["RI step 2 low edge set to '1.762'"], StoneHistoryText.Describe(new StoneEdit(At, "refractometer.readings[1].low", "", "1.762")));
-        Assert.Equal(["SG weight in water (ct) changed from '1.1' to '1.2'"], StoneHistoryText.Describe(new StoneEdit(At, "sg.water_ct", "1.1", "1.2")));
+        Assert.Equal(["SG weight in water (ct) changed from '1.100' to '1.200'"], StoneHistoryText.Describe(new StoneEdit(At, "sg.water_ct", "1.1", "1.2")));
     }
 }
