@@ -25,15 +25,20 @@ internal static class ResultText
     /// <summary>
     /// The answer in a few words for a list of stones: the leading species and its share, then its likeliest entry when
     /// that has a name of its own ("corundum >99%: flame-fusion synthetic sapphire"; the list's search finds both), or
-    /// "nothing fits".
+    /// "nothing fits". When several origins share the species the entry is only the likeliest of them, and is said so
+    /// ("beryl >99%, origin open (likeliest resin-filled emerald)"): the list must not read as if the bench had found a
+    /// treatment or a synthetic it cannot tell.
     /// </summary>
     public static string Short(IdentificationResult r)
     {
         if (r.NoGoodMatch) return "nothing fits";
         if (r.Species.Count == 0) return "";
-        string species = $"{r.Species[0].Species} {Percent(r.Species[0].Confidence)}";
-        string? entry = r.Candidates.FirstOrDefault(c => c.Material.Species == r.Species[0].Species)?.Material.Name;
-        return entry is null || entry == r.Species[0].Species ? species : $"{species}: {entry}";
+        SpeciesResult lead = r.Species[0];
+        string species = $"{lead.Species} {Percent(lead.Confidence)}";
+        string? entry = r.Candidates.FirstOrDefault(c => c.Material.Species == lead.Species)?.Material.Name;
+        bool originOpen = Origins(lead).Count > 1;
+        return entry is null || entry == lead.Species ? (originOpen ? $"{species}, origin open" : species)
+            : originOpen ? $"{species}, origin open (likeliest {entry})" : $"{species}: {entry}";
     }
 
     /// <summary>
