@@ -17,7 +17,7 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
     /// <summary>No group: an independent test.</summary>
     public const int Independent = 0;
 
-    /// <summary>Colour, UV fluorescence and absorption lines: one chromophore causes all three.</summary>
+    /// <summary>UV fluorescence and absorption lines: one chromophore causes both (the colour it gives counts in full, docs/ranking.md §3).</summary>
     public const int ChromophoreGroup = 1;
 
     /// <summary>An aggregate's spot index and SG: both follow its mix of minerals and its porosity.</summary>
@@ -31,8 +31,8 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
 
     private List<EvidenceContribution>? _contributions = explaining ? [] : null;
     private readonly List<double>[] _groups = [[], [], []];
-    private double _independent, _logOther, _lastBits, _lastTail, _sumLogTails;
-    private int _tests, _colourAt = -1, _stronglyAgainst;
+    private double _independent, _colour, _logOther, _lastBits, _lastTail, _sumLogTails;
+    private int _tests, _stronglyAgainst;
     private string _lastTest = "";
 
     public bool Explaining => _contributions is not null;
@@ -45,9 +45,8 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
     {
         if (_contributions is not null) _contributions = [];
         foreach (var group in _groups) group.Clear();
-        _independent = _logOther = _lastBits = _lastTail = _sumLogTails = 0;
+        _independent = _colour = _logOther = _lastBits = _lastTail = _sumLogTails = 0;
         _tests = 0;
-        _colourAt = -1;
         _stronglyAgainst = 0;
         _lastTest = "";
     }
@@ -77,12 +76,11 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
             : logLikelihood;
         mixed = Math.Max(mixed, logBroad - 690);
         double ratio = mixed - logBroad, bits = ratio / Math.Log(2);
-        if (group == Independent) _independent += ratio;
-        else
-        {
-            if (test == Bench.BenchField.Colour && group == ChromophoreGroup) _colourAt = _groups[group].Count;
-            _groups[group].Add(ratio);
-        }
+        // Colour is kept apart so that the origin balance can leave it out (LogLikelihoodWithoutColour); it counts in full
+        // (docs/ranking.md §3): between entries that share a chromophore the hue tells their varieties apart.
+        if (test == Bench.BenchField.Colour) _colour += ratio;
+        else if (group == Independent) _independent += ratio;
+        else _groups[group].Add(ratio);
         _logOther += logBroad;
         if (Fitting && inFit)
         {
@@ -105,28 +103,26 @@ internal sealed class EvidenceAccumulator(bool explaining, bool fitting = true)
     }
 
     /// <summary>ln p(sheet | candidate), the correlated groups counted as in <see cref="Result"/>.</summary>
-    public double LogLikelihood => _logOther + Ratio(skip: -1);
+    public double LogLikelihood => _logOther + Ratio(withColour: true);
 
     /// <summary>
     /// The same without the colour test: what the other tests say (the origin balance asks whether a test other than
     /// colour decides an origin; docs/ranking.md §3).
     /// </summary>
-    public double LogLikelihoodWithoutColour => _logOther + Ratio(skip: _colourAt);
+    public double LogLikelihoodWithoutColour => _logOther + Ratio(withColour: false);
 
-    /// <summary>The summed log-likelihood ratio, the chromophore group's element <paramref name="skip"/> left out (−1: none).</summary>
-    private double Ratio(int skip)
+    /// <summary>The summed log-likelihood ratio, the correlated groups counted by their rule and colour in full (or left out).</summary>
+    private double Ratio(bool withColour)
     {
-        double ratio = _independent;
+        double ratio = _independent + (withColour ? _colour : 0);
         for (int g = 0; g < _groups.Length; g++)
         {
             var group = _groups[g];
-            int skipHere = g == ChromophoreGroup ? skip : -1;
             // The strongest by size (the first of equal sizes), and the group's sum in the order the tests came.
             double strongest = 0, sum = 0;
             bool any = false;
             for (int i = 0; i < group.Count; i++)
             {
-                if (i == skipHere) continue;
                 if (!any || Math.Abs(group[i]).CompareTo(Math.Abs(strongest)) > 0) strongest = group[i];
                 sum += group[i];
                 any = true;

@@ -449,7 +449,7 @@ public static class EvidenceLikelihood
         var m = profile.Material;
         double f = ColourWords.EntryProbability(seen, profile.ColourHues, profile.SpeciesHues);
         double best = profile.ColourHues.Count == 0 ? f : profile.ColourFirstHue;
-        acc.Add(BenchField.Colour, f, ColourWords.BroadProbability, Math.Min(1, f / best), robust: false, EvidenceAccumulator.ChromophoreGroup);
+        acc.Add(BenchField.Colour, f, ColourWords.BroadProbability, Math.Min(1, f / best), robust: false);
         if (acc.Explaining)
             acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : UsualColours(m.Colours, colour) + " usual, most usual first")}");
     }

@@ -231,6 +231,24 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void A_blue_corundum_with_iron_lines_names_the_blue_variety_before_the_green()
+    {
+        // Blue sapphire's readings (ω 1.770, ε 1.762, SG 4.00, dichroic, the iron lines at 450, 460 and 471 nm: common
+        // practice, handbook values). Green sapphire shares the chromophore and the lines, so only the hue tells the two
+        // varieties apart; with colour halved beside the lines the green one came first (18 % against 16 %).
+        using var run = new CommandRun();
+        var (exit, json, error) = Identify(run, "--edge", "0:1.762/1.770", "--edge", "45:1.764/1.770", "--edge", "90:1.766/1.770",
+            "--sg", "4.00", "--colour", "blue", "--lines", "450 460 470", "--pleochroism", "dichroic", "--uv-long", "inert",
+            "--cut", "faceted", "--json", "--candidates", "50");
+        Assert.True(exit == 0, error);
+        using var doc = System.Text.Json.JsonDocument.Parse(json);
+        Dictionary<string, double> share = doc.RootElement.GetProperty("species").EnumerateArray().SelectMany(s => s.GetProperty("candidates").EnumerateArray())
+            .ToDictionary(c => c.GetProperty("name").GetString()!, c => c.GetProperty("confidence").GetDouble());
+        Assert.True(share["sapphire"] > 2 * share["green sapphire"], $"sapphire {share["sapphire"]}, green sapphire {share["green sapphire"]}");
+        Assert.True(share["heated sapphire"] > 2 * share["green sapphire"]);
+    }
+
+    [Fact]
     public void A_faceted_cut_leaves_the_fit_and_nothing_fits_as_they_were()
     {
         // Quartz's edges (1.544/1.553: common practice) with an SG of 2.94 no quartz has: nothing fits. The cut's implied
