@@ -25,9 +25,10 @@ internal static class ResultText
     /// <summary>
     /// The answer in a few words for a list of stones: the leading species and its share, then its likeliest entry when
     /// that has a name of its own ("corundum >99%: flame-fusion synthetic sapphire"; the list's search finds both), or
-    /// "nothing fits". When several origins share the species the entry is only the likeliest of them, and is said so
-    /// ("beryl >99%, origin open (likeliest resin-filled emerald)"): the list must not read as if the bench had found a
-    /// treatment or a synthetic it cannot tell.
+    /// "nothing fits". When several origins share the species, the list names the likeliest natural variety and says
+    /// the origin is open ("beryl >99%: emerald, origin open"), as the trade names an emerald whose enhancement is
+    /// undetermined: the likeliest entry there is the market's most frequent one ("resin-filled emerald"), and the list
+    /// must not read as if the bench had found a treatment or a synthetic it cannot tell.
     /// </summary>
     public static string Short(IdentificationResult r)
     {
@@ -35,10 +36,10 @@ internal static class ResultText
         if (r.Species.Count == 0) return "";
         SpeciesResult lead = r.Species[0];
         string species = $"{lead.Species} {Percent(lead.Confidence)}";
-        string? entry = r.Candidates.FirstOrDefault(c => c.Material.Species == lead.Species)?.Material.Name;
         bool originOpen = Origins(lead).Count > 1;
-        return entry is null || entry == lead.Species ? (originOpen ? $"{species}, origin open" : species)
-            : originOpen ? $"{species}, origin open (likeliest {entry})" : $"{species}: {entry}";
+        string? entry = r.Candidates.FirstOrDefault(c => c.Material.Species == lead.Species && (!originOpen || c.Material.Origin == OriginClass.Natural))?.Material.Name;
+        string named = entry is null || entry == lead.Species ? species : $"{species}: {entry}";
+        return originOpen ? $"{named}, origin open" : named;
     }
 
     /// <summary>

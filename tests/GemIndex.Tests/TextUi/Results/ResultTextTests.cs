@@ -383,14 +383,15 @@ public class ResultTextTests
     public void The_stone_lists_answer_leaves_the_origin_open_when_the_tests_leave_several()
     {
         // A blue corundum with no sign of its origin: the catalogue's market shares put the heated entry first, which the
-        // bench has not found; the list says the origin is open and which entry is only the likeliest.
+        // bench has not found; the list names the natural variety and says the origin is open.
         IdentificationResult r = CorundumAnswer(null) with
         {
             Candidates = [new() { Material = Corundum("heated sapphire", OriginClass.Treated), Confidence = 0.64, Fit = 0.9 },
                           new() { Material = Corundum("sapphire", OriginClass.Natural), Confidence = 0.35, Fit = 0.9 }],
             Species = [new SpeciesResult { Species = "corundum", Confidence = 0.999, Origins = new Dictionary<OriginClass, double> { [OriginClass.Treated] = 0.64, [OriginClass.Natural] = 0.359 } }],
         };
-        Assert.Equal("corundum >99%, origin open (likeliest heated sapphire)", ResultText.Short(r));
+        Assert.Equal("corundum >99%: sapphire, origin open", ResultText.Short(r));
+        Assert.Equal("corundum >99%, origin open", ResultText.Short(r with { Candidates = r.Candidates.Take(1).ToList() }));
     }
 
     [Fact]
