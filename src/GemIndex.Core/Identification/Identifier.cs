@@ -129,12 +129,14 @@ public sealed class Identifier
     public const int SpeciesAlwaysShown = 3;
 
     /// <summary>
-    /// The shown candidates, then grouped species first: the best entry of each of the <see cref="SpeciesAlwaysShown"/>
-    /// leading species that the answer lists (the leader, and each holding <see cref="LeadingCandidates.ListedShare"/>) and
-    /// of every further species whose total reaches the list (at least the share of the list's last entry), most probable
-    /// species first, then the most probable entries. A species with many varieties must not fill
-    /// the list with entries the readings rule out while another species' likely entry is left off, and a species whose
-    /// mass is spread over many small entries must not be left off while a species of one small entry is shown.
+    /// The shown candidates, then grouped species first: the most probable entries, with the best entry of each of the
+    /// <see cref="SpeciesAlwaysShown"/> leading species that the answer lists (the leader, and each holding
+    /// <see cref="LeadingCandidates.ListedShare"/>) put in, and the best entry of every further species whose total is
+    /// larger than the least probable entry it would displace, most probable species first. A species with many
+    /// varieties must not fill the list with entries the readings rule out while another species' likely entry is left
+    /// off, and a species whose mass is spread over many small entries must not be left off while a species of one small
+    /// entry is shown; but no species' best entry displaces an entry more probable than the whole species (an amber's
+    /// pressed amber at 16 % was left off for the best entries of species at 0.1 %).
     /// Read off the species-first order (<see cref="SpeciesFirst"/>): its runs are the species by total, each run's
     /// first entry the species' best.
     /// </summary>
@@ -142,26 +144,27 @@ public sealed class Identifier
     {
         var shown = new bool[posterior.Length];
         if (count == 0) return shown;
-        double cut = posterior[byEntry[count - 1]];
-        int taken = 0;
-        for (int start = 0, end; start < order.Length && taken < count; start = end)
+        for (int k = 0; k < count; k++) shown[byEntry[k]] = true;
+        // The shown entries a species' best entry may displace, least probable last (byEntry's order), and those put in.
+        var kept = new bool[posterior.Length];
+        int last = count - 1, taken = 0;
+        for (int start = 0, end; start < order.Length; start = end)
         {
-            int species = _speciesOf[order[start]];
+            int best = order[start];
             double total = 0;
-            for (end = start; end < order.Length && _speciesOf[order[end]] == species; end++) total += posterior[order[end]];
+            for (end = start; end < order.Length && _speciesOf[order[end]] == _speciesOf[best]; end++) total += posterior[order[end]];
             // Past the leader, a species the answer would not list (under LeadingCandidates.ListedShare) is never put in
             // before the leader's own likelier entries: a list of three for a corundum must not read ruby, staurolite 0 %.
-            // The best entry's own share decides, since the answers list entries by it (a species of 0.06 % over two
-            // entries would take a slot and then not be listed).
-            bool always = taken == 0 || (taken < SpeciesAlwaysShown && posterior[order[start]] >= LeadingCandidates.ListedShare);
-            if ((!always && total < cut) || total <= 0) break;
-            shown[order[start]] = true;
+            // The best entry's own share decides, since the answers list entries by it.
+            bool always = taken == 0 || (taken < SpeciesAlwaysShown && posterior[best] >= LeadingCandidates.ListedShare);
             taken++;
-        }
-        foreach (int i in byEntry)
-        {
-            if (taken == count) break;
-            if (!shown[i]) { shown[i] = true; taken++; }
+            if (shown[best]) { kept[best] = true; continue; }
+            // A best entry the answers would not list (under LeadingCandidates.ListedShare) would only leave a gap in their ranks.
+            if (!always && posterior[best] < LeadingCandidates.ListedShare) continue;
+            while (last >= 0 && (kept[byEntry[last]] || !shown[byEntry[last]])) last--;
+            if (last < 0 || total <= 0 || (!always && total <= posterior[byEntry[last]])) break;
+            shown[byEntry[last]] = false;
+            shown[best] = kept[best] = true;
         }
         return shown;
     }

@@ -249,6 +249,21 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void An_amber_s_likely_treated_entries_are_listed_and_the_ranks_run_without_gaps()
+    {
+        // Amber: spot 1.54 and floating in saturated salt water (SG about 1.13), yellow (common practice). Pressed and
+        // heated amber hold 16 % and 14 %; they had been left off for the best entries of species at 0.1 %, and those
+        // entries' unlisted ranks left gaps ("1, 2, 4, 5").
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--spot", "1.54", "--heavy-liquid", "1.13 floats", "--colour", "yellow");
+        Assert.True(exit == 0, error);
+        Assert.Matches(@"(?m)^ 2\. pressed amber ", output);
+        Assert.Matches(@"(?m)^ 3\. heated amber ", output);
+        int[] ranks = [.. System.Text.RegularExpressions.Regex.Matches(output, @"(?m)^\s?(\d+)\. ").Select(m => int.Parse(m.Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture))];
+        Assert.Equal(Enumerable.Range(1, ranks.Length), ranks);
+    }
+
+    [Fact]
     public void A_faceted_cut_leaves_the_fit_and_nothing_fits_as_they_were()
     {
         // Quartz's edges (1.544/1.553: common practice) with an SG of 2.94 no quartz has: nothing fits. The cut's implied
