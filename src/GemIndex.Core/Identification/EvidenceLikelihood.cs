@@ -207,7 +207,12 @@ public static class EvidenceLikelihood
             string expected = m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial
                 ? (m.Pleochroism == PleochroismStrength.None ? "no pleochroism expected"
                     : $"{m.Pleochroism.ToString().ToLowerInvariant()} pleochroism ({(m.OpticCharacter == OpticCharacter.Biaxial ? "up to three colours" : "two colours at most")}) expected")
-                : "none expected (singly refractive)";
+                : m.OpticCharacter switch
+                {
+                    OpticCharacter.Aggregate => "none expected (an aggregate: its many crystals' colours mix)",
+                    OpticCharacter.Amorphous => "none expected (amorphous: singly refractive)",
+                    _ => "none expected (singly refractive)",
+                };
             acc.Say($"pleochroism {seen.ToString().ToLowerInvariant()}; {expected}");
         }
     }

@@ -38,13 +38,13 @@ internal static class ReportNumbers
 
     /// <summary>
     /// A probability (0–1) as a percentage, the one percent format of text, Markdown and HTML: 87.3 %. Bench readings
-    /// never make a material certain or impossible, so a probability short of 1 or above 0 that would round to 100.0 %
-    /// or 0.0 % is given as ">99.9 %" or "<0.1 %".
+    /// never make a material certain or impossible, so a probability above 0 that would round to 0.0 % is given as
+    /// "&lt;0.1 %", and one that would round to 100.0 % as "&gt;99.9 %", even where the rest underflowed to nothing.
     /// </summary>
     public static string Percent(double probability) => probability switch
     {
         > 0 and < SmallestShown => "<0.1 %",
-        >= 0.9995 and < 1 => ">99.9 %",
+        >= 0.9995 => ">99.9 %",
         _ => Fixed(probability * 100, "0.0") + " %",
     };
 

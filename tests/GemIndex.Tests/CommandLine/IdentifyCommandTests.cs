@@ -264,6 +264,19 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void An_aggregate_s_missing_pleochroism_is_explained_as_an_aggregate_s_not_as_singly_refractive()
+    {
+        // Jadeite: spot 1.66, SG 3.33, aggregate reaction, green (common practice): its reason for "no pleochroism" named it
+        // singly refractive, which an aggregate of pyroxene crystals is not.
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--spot", "1.66", "--sg", "3.33", "--polariscope", "aggregate", "--pleochroism", "none", "--colour", "green");
+        Assert.True(exit == 0, error);
+        Assert.StartsWith("Species: jadeite", output, StringComparison.Ordinal);
+        Assert.Contains("pleochroism none; none expected (an aggregate: its many crystals' colours mix)", output, StringComparison.Ordinal);
+        Assert.DoesNotContain("100.0 %", output, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_faceted_cut_leaves_the_fit_and_nothing_fits_as_they_were()
     {
         // Quartz's edges (1.544/1.553: common practice) with an SG of 2.94 no quartz has: nothing fits. The cut's implied

@@ -55,7 +55,7 @@ public class ReportDerivedTests
                 new SpeciesResult { Species = "uvite", Confidence = 0.4, Origins = new Dictionary<Core.Catalogue.OriginClass, double> { [Core.Catalogue.OriginClass.Natural] = 0.4 }, MineralGroup = "tourmaline" },
             ],
         };
-        Assert.Equal(["Elbaite 60.0 % (natural)", "Uvite 40.0 % (natural)", "Tourmaline group 100.0 % in all (elbaite, uvite)"],
+        Assert.Equal(["Elbaite 60.0 % (natural)", "Uvite 40.0 % (natural)", "Tourmaline group >99.9 % in all (elbaite, uvite)"],
             ReportDerived.SpeciesLines(StoneReport.Build(sheet, result)));
         Assert.Equal(2, ReportDerived.SpeciesLines(StoneReport.Build(sheet, result with { NoGoodMatch = true })).Count);
     }

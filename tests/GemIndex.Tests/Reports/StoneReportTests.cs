@@ -62,7 +62,7 @@ public class StoneReportTests
                     Lowest = new(1.761), Highest = new(1.768), Beta = new(1.7675), Birefringence = new(0.007, 0.001), Description = "biaxial" },
             ],
         };
-        Assert.Equal("uniaxial (or biaxial, 2V near 0°: not told apart) 100.0 % (negative 100.0 %)", ReportDerived.CharacterOdds(p, series: series));
+        Assert.Equal("uniaxial (or biaxial, 2V near 0°: not told apart) >99.9 % (negative >99.9 %)", ReportDerived.CharacterOdds(p, series: series));
         Assert.Equal("biaxial 53.0 %, uniaxial 47.0 % (negative 47.0 %)", ReportDerived.CharacterOdds(p));   // without the readings: the posterior as it is
     }
 
@@ -97,13 +97,14 @@ public class StoneReportTests
     }
 
     [Theory]
-    // Bench readings never make a material certain or impossible: no probability short of 1 (above 0) reads 100 % (0 %).
+    // Bench readings never make a material certain or impossible: no probability above 0 reads 0 %, and none reads 100 %,
+    // not even a 1 whose rest underflowed (a ruby's species total printed "100.0 %").
     [InlineData(0.9996, ">99.9 %")]
     [InlineData(0.9994, "99.9 %")]
     [InlineData(0.0004, "<0.1 %")]
     [InlineData(0.0006, "0.1 %")]
     [InlineData(0.5, "50.0 %")]
-    [InlineData(1.0, "100.0 %")]
+    [InlineData(1.0, ">99.9 %")]
     [InlineData(0.0, "0.0 %")]
     public void A_percentage_never_rounds_to_certain_or_impossible(double probability, string expected) =>
         Assert.Equal(expected, ReportNumbers.Percent(probability));

@@ -46,7 +46,7 @@ internal static class ResultText
     /// A probability in whole percent; what would print as 0 % or 100 % prints as "&lt;1%" or "&gt;99%", since bench readings
     /// never make a material impossible or certain (and a listed candidate at "0%" reads as ruled out).
     /// </summary>
-    public static string Percent(double p) => p is > 0 and < 0.005 ? "<1%" : p is >= 0.995 and < 1 ? ">99%" : GemIndex.Cli.Reports.ReportNumbers.WholePercent(p);
+    public static string Percent(double p) => p is > 0 and < 0.005 ? "<1%" : p >= 0.995 ? ">99%" : GemIndex.Cli.Reports.ReportNumbers.WholePercent(p);
 
     public static string Gravity(SpecificGravity? sg) => sg is { } g
         ? $"SG {g}"
