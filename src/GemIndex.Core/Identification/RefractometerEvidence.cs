@@ -165,12 +165,13 @@ internal static class RefractometerEvidence
     }
 
     /// <summary>
-    /// The series in words that hold under every reading of it: the one interpretation when the readings fix it,
-    /// otherwise the edges as read (a material's reason never takes one of two equally likely readings as its own).
+    /// The series in words that hold under every reading of it: the one interpretation when the readings fix it and it
+    /// is of the material's own optic character, otherwise the edges as read (a material's reason never takes one of two
+    /// equally likely readings as its own, and a biaxial feldspar's reason does not read "uniaxial positive").
     /// </summary>
-    private static string ReadingsText(AnalysedSheet sheet)
+    private static string ReadingsText(Material m, AnalysedSheet sheet)
     {
-        if (sheet.Series?.Interpretations is [var only]) return only.Description;
+        if (sheet.Series?.Interpretations is [var only] && (only.Character is null || only.Character == m.OpticCharacter)) return only.Description;
         var steps = sheet.Sheet.Refractometer?.Steps ?? [];
         if (steps.Count == 0) return "rotation series";
         string Range(double a, double b) => a == b ? a.ToString("0.000", CultureInfo.InvariantCulture) : $"{a.ToString("0.000", CultureInfo.InvariantCulture)}–{b.ToString("0.000", CultureInfo.InvariantCulture)}";
@@ -183,7 +184,7 @@ internal static class RefractometerEvidence
     private static string SeriesText(Material m, AnalysedSheet sheet, SeriesObservation series, SectionLikelihood.Outcome outcome, double form)
     {
         string expected = string.Join(", ", m.Indices.Named().Select(x => $"{x.Name} {x.Range.ToString("0.000")}"));
-        string summary = ReadingsText(sheet);
+        string summary = ReadingsText(m, sheet);
         string verdict = double.IsNegativeInfinity(outcome.LogLikelihood) ? "no orientation of it can give these readings"
             : outcome.Tail >= EvidenceAccumulator.AgreesTail ? "an orientation of it gives these readings" : "its best orientation fits these readings poorly";
         return $"{summary}; {verdict} ({expected})" + (form >= 1 ? ""

@@ -277,6 +277,23 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void A_biaxial_candidate_s_reason_gives_the_edges_as_read_not_a_uniaxial_reading()
+    {
+        // Quartz's edges (ω 1.544 constant, ε' up to 1.553: common practice) at three steps: the series reads uniaxial
+        // positive, and a biaxial rival's reason had repeated "uniaxial positive" before "an orientation of it gives these
+        // readings", as if iolite were uniaxial.
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--edge", "0:1.544/1.553", "--edge", "45:1.544/1.549", "--edge", "90:1.544/1.553");
+        Assert.True(exit == 0, error);
+        string[] lines = output.Split('\n');
+        int iolite = Array.FindIndex(lines, l => l.Contains("(cordierite, natural)", StringComparison.Ordinal));
+        Assert.True(iolite > 0, output);
+        Assert.StartsWith("      strongly for: low edge 1.544, high edge 1.549–1.553 over 3 steps; an orientation of it gives these readings", lines[iolite + 1]);
+        int rockCrystal = Array.FindIndex(lines, l => l.Contains(". rock crystal ", StringComparison.Ordinal));
+        Assert.StartsWith("      strongly for: uniaxial positive: ω 1.544 constant", lines[rockCrystal + 1]);
+    }
+
+    [Fact]
     public void A_faceted_cut_leaves_the_fit_and_nothing_fits_as_they_were()
     {
         // Quartz's edges (1.544/1.553: common practice) with an SG of 2.94 no quartz has: nothing fits. The cut's implied
