@@ -48,14 +48,24 @@ internal static class GravityText
         return $"!! {typedWords}, weighed {Value(w)}{verdict} {NeitherUsed}";
     }
 
-    /// <summary>"SG above 3.32 (heavy liquids)" when only heavy liquids were used and they read clean; else null.</summary>
+    /// <summary>
+    /// "SG above 3.32 (heavy liquids)" when only heavy liquids were used and they read clean; else null. A liquid lighter
+    /// than <see cref="LightestHeavyLiquid"/> is no heavy liquid (amber's saturated salt water, about 1.13): a float test.
+    /// </summary>
     private static string? HeavyLiquidsSay(BenchSnapshot form)
     {
         if (form.Text(BenchFields.HeavyLiquids).Trim() is not { Length: > 0 } text) return null;
         BenchReading reading = BenchReader.Read(new BenchReadings().With(BenchField.HeavyLiquids, text));
         if (reading.Errors.Count > 0) return null;
-        return HeavyLiquidResult.Together(reading.Sheet.HeavyLiquids) is { } bounds ? $"SG {bounds} (heavy liquids)" : "SG - (the heavy liquids contradict each other: check them; the answer weighs them as read)";
+        string how = reading.Sheet.HeavyLiquids.All(h => h.Liquid.Value >= LightestHeavyLiquid) ? "heavy liquids" : "float test";
+        return HeavyLiquidResult.Together(reading.Sheet.HeavyLiquids) is { } bounds ? $"SG {bounds} ({how})" : "SG - (the heavy liquids contradict each other: check them; the answer weighs them as read)";
     }
+
+    /// <summary>
+    /// The lightest liquid called a heavy liquid (common practice: the bench's heavy liquids run from about 2.6 up, diluted
+    /// sets from about 2; salt water and water are float tests).
+    /// </summary>
+    public const double LightestHeavyLiquid = 2.0;
 
     /// <summary>True when a typed and a weighed SG lie further apart than <see cref="ClashCoverage"/> combined standard uncertainties.</summary>
     public static bool Disagree(SpecificGravity typed, SpecificGravity weighed) =>

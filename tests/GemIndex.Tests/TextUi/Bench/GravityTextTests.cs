@@ -29,6 +29,7 @@ public class GravityTextTests
     [InlineData("3.32 sinks", "SG above 3.32 (heavy liquids)")]
     [InlineData("3.32 floats; 2.89 sinks", "SG between 2.89 and 3.32 (heavy liquids)")]
     [InlineData("3.05 suspends", "SG about 3.05 (heavy liquids)")]
+    [InlineData("1.13 floats", "SG below 1.13 (float test)")]   // amber in saturated salt water: no heavy liquid
     [InlineData("3.32 sinks; 2.89 floats", "SG - (the heavy liquids contradict each other: check them; the answer weighs them as read)")]
     public void Heavy_liquids_alone_say_what_they_bound_on_the_SG_line(string liquids, string line)
     {
