@@ -457,7 +457,7 @@ public static class BenchReader
             {
                 (BenchField.Sg, _) => () => _ = new SpecificGravity(Far, BenchDefaults.DirectSpecificGravityUncertainty),
                 (BenchField.AirCt or BenchField.WaterCt, _) => () => _ = BenchDefaults.Weighed(Far),
-                (BenchField.WaterC, _) => () => _ = Temperature.FromCelsius(Far),
+                (BenchField.WaterC, _) => () => _ = WaterDensity.At(Temperature.FromCelsius(WaterDensity.MaximumCelsius + 1)),
                 (BenchField.LiquidLimit, _) => () => _ = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.5, liquidLimit: Far),
                 (BenchField.LightNm, _) => () => _ = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.5, lightNanometres: Far),
                 (BenchField.Spot, _) => () => _ = new RefractometerObservation(RefractometerMethod.Spot, spot: Far),

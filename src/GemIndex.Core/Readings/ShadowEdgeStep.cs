@@ -21,7 +21,7 @@ public readonly record struct ShadowEdgeStep
             QuantityOutOfRangeException.ThrowIfOutside("high edge", h, 1, 4);
             if (h < low)
                 throw new QuantityOutOfRangeException("high edge", h,
-                    $"not below the low edge {low.ToString("0.0000", CultureInfo.InvariantCulture)} of the same step");
+                    $"not below the low edge {low.ToString("0.000#", CultureInfo.InvariantCulture)} of the same step");
         }
         RotationDegrees = rotationDegrees;
         Low = low;

@@ -250,7 +250,7 @@ public class BenchReaderTests
     // Text that is not a number is told the field's range, the range its value's own check states.
     [InlineData(BenchField.Sg, "2.7x", "allowed: 0.5 to 25.")]
     [InlineData(BenchField.LiquidLimit, "1.8x", "allowed: 1.5 to 2.2.")]
-    [InlineData(BenchField.WaterC, "2x", "allowed: -50 to 150 °C.")]
+    [InlineData(BenchField.WaterC, "2x", "allowed: 0 to 40 °C.")]   // the water table's range, as for a number outside it
     public void Text_that_is_not_a_number_is_told_the_fields_range(string field, string text, string allowed)
     {
         var readings = R((field, text));

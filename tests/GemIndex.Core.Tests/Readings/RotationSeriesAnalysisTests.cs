@@ -178,7 +178,7 @@ public class RotationSeriesAnalysisTests
     public void A_high_edge_below_the_low_edge_is_refused_naming_both()
     {
         var e = Assert.Throws<QuantityOutOfRangeException>(() => new ShadowEdgeStep(0, 1.553, 1.544));
-        Assert.Equal("high edge is 1.544; allowed: not below the low edge 1.5530 of the same step.", e.Message);
+        Assert.Equal("high edge is 1.544; allowed: not below the low edge 1.553 of the same step.", e.Message);
     }
 
     [Fact]

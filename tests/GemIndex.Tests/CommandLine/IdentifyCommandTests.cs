@@ -121,7 +121,7 @@ public class IdentifyCommandTests
         Assert.Equal("A", lines[0].GetProperty("id").GetString());
         Assert.Equal(2, lines[1].GetProperty("line").GetInt32());
         Assert.StartsWith("$: not valid JSON", lines[1].GetProperty("error").GetString());
-        Assert.Equal("refractometer.readings[0]: high edge is 1.544; allowed: not below the low edge 1.5530 of the same step.", lines[2].GetProperty("error").GetString());
+        Assert.Equal("refractometer.readings[0]: high edge is 1.544; allowed: not below the low edge 1.553 of the same step.", lines[2].GetProperty("error").GetString());
         Assert.Equal("polariscope: 'sparkly' is not one of singly_refractive | doubly_refractive | aggregate | anomalous.", lines[3].GetProperty("error").GetString());
         Assert.Equal("sg.water_ct: weight in water is 1.2 ct; allowed: 0 to below the weight in air 1 ct.", lines[4].GetProperty("error").GetString());
         Assert.Equal("sg: must be a number or {\"air_ct\", \"water_ct\", \"water_c\"}, not the text \"2.65\".", lines[5].GetProperty("error").GetString());
