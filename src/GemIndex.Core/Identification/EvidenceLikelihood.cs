@@ -443,7 +443,7 @@ public static class EvidenceLikelihood
         {
             var listed = m.AbsorptionLines;
             string expected = listed.Count == 0 ? "no diagnostic lines listed"
-                : "lines at " + string.Join(", ", listed.Select(l => l.Nanometres.ToString("0.#", CultureInfo.InvariantCulture) + (l.Strength == LineStrength.Moderate ? "" : $" ({l.Strength.ToString().ToLowerInvariant()})"))) + " nm listed";
+                : "lines at " + string.Join(", ", listed.Select(l => l.Nanometres.ToString("0.#", CultureInfo.InvariantCulture) + " nm" + (l.Strength == LineStrength.Moderate ? "" : $" ({l.Strength.ToString().ToLowerInvariant()})"))) + " listed";
             string observed = seen.Count == 0 ? "no lines seen" : "lines seen at " + string.Join(", ", seen.Select(l => l.ToString("0.#", CultureInfo.InvariantCulture))) + " nm";
             acc.Say($"{observed}; {expected}");
         }

@@ -16,7 +16,7 @@ internal static class WorkbookCsv
     [
         "reference", "weight_carats", "colour", "refractive_index_low", "refractive_index_high", "birefringence",
         "optic_character", "specific_gravity", "polariscope", "species", "species_confidence", "best_candidate", "confidence",
-        "no_good_match", "high_above_liquid_limit",
+        "no_good_match", "high_above_liquid_limit", "refractometer_method",
     ];
 
     /// <summary>Characters that make a spreadsheet read a cell as a formula when they lead it.</summary>
@@ -46,6 +46,19 @@ internal static class WorkbookCsv
     public static string Neutralised(string cell) =>
         cell.Length > 0 && FormulaTriggers.Contains(cell[0], StringComparison.Ordinal) ? "'" + cell : cell;
 
+    /// <summary>
+    /// How the refractive indices were read: "facet" (a rotation series), "spot", "over limit" (no edge below the contact
+    /// liquid: its limit in high_above_liquid_limit), or empty with no refractometer reading.
+    /// </summary>
+    private static string Method(GemIndex.Data.Batch.RefractometerReadings? r) => r switch
+    {
+        null => "",
+        { OverLimit: true } => "over limit",
+        { Spot: not null } => "spot",
+        { Readings.Count: > 0 } => "facet",
+        _ => "",
+    };
+
     private static List<string> Cells(StoneSheet sheet, IdentificationResult? result)
     {
         StoneReport? report = result is null ? null : StoneReport.Build(sheet, result);
@@ -58,7 +71,8 @@ internal static class WorkbookCsv
             sheet.Reference,
             sheet.WeightCarats is { } ct ? ReportNumbers.Fixed(ct, "0.00#") : "",
             sheet.Readings.Colour ?? "",
-            best is not null ? ReportNumbers.Index(best.Lowest) : spot is { } s ? ReportNumbers.Index(s) : "",
+            // A spot reading is read to the hundredth (refractometer_method says which it was).
+            best is not null ? ReportNumbers.Index(best.Lowest) : spot is { } s ? ReportNumbers.Fixed(s, "0.00#") : "",
             // A highest index fitted above the contact liquid was not read: no number for it or the birefringence; the
             // last column gives the liquid's limit it lies above.
             best is { AboveLiquidLimit: null } ? ReportNumbers.Index(best.Highest) : "",
@@ -71,7 +85,9 @@ internal static class WorkbookCsv
             top?.Material.Name ?? "",
             top is not null ? ReportNumbers.Fixed(top.Confidence, "0.000") : "",
             result is null ? "" : result.NoGoodMatch ? "true" : "false",
-            best?.AboveLiquidLimit is { } limit ? ReportNumbers.Index(limit) : "",
+            best?.AboveLiquidLimit is { } limit ? ReportNumbers.Index(limit)
+                : sheet.Readings.Refractometer is { OverLimit: true } over ? ReportNumbers.Index(GemIndex.Core.Bench.BenchDefaults.LiquidLimitOrDefault(over.LiquidLimit)) : "",
+            Method(sheet.Readings.Refractometer),
         ];
     }
 }

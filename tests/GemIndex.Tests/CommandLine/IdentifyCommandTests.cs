@@ -184,7 +184,7 @@ public class IdentifyCommandTests
         Assert.True(Share(none) > 0.5 * Share(plain), $"turquoise {Share(plain)} % without a spectrum, {Share(none)} % with none seen");
         // The next test in words first (the reports' words), its gain in bits after.
         Assert.Matches(@"Next test: .+ — it would (clearly|partly|slightly) separate the leading candidates \(expected gain \d\.\d\d bits\)", output);
-        Assert.Matches(@"(strongly )?for: lines seen at 432 nm; lines at 432 \(weak\), 420 \(weak\), 460 \(weak\) nm listed", output);
+        Assert.Matches(@"(strongly )?for: lines seen at 432 nm; lines at 432 nm \(weak\), 420 nm \(weak\), 460 nm \(weak\) listed", output);
     }
 
     [Fact]

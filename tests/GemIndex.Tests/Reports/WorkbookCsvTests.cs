@@ -63,10 +63,26 @@ public class WorkbookCsvTests
         Assert.StartsWith("\"lot 7, \"\"A\"\"\",2.65,colourless,1.544,1.553,", rows[1]);
         var result = ReportFixtures.Identify(identified);
         string Share(double p) => p.ToString("0.000", System.Globalization.CultureInfo.InvariantCulture);
-        Assert.EndsWith($",{result.Species[0].Species},{Share(result.Species[0].Confidence)},{result.Candidates[0].Material.Name},{Share(result.Candidates[0].Confidence)},false,", rows[1]);
+        Assert.EndsWith($",{result.Species[0].Species},{Share(result.Species[0].Confidence)},{result.Candidates[0].Material.Name},{Share(result.Candidates[0].Confidence)},false,,facet", rows[1]);
         Assert.Equal("quartz", result.Species[0].Species);
         // The line break inside the quoted colour is the stone's, the last one ends the file (Sep writes the platform's line end).
-        Assert.EndsWith(Environment.NewLine + "x,2.65,\"blue\ngreen\",,,,,,,,,,,," + Environment.NewLine, text);
+        Assert.EndsWith(Environment.NewLine + "x,2.65,\"blue\ngreen\",,,,,,,,,,,,," + Environment.NewLine, text);
+    }
+
+    [Fact]
+    public void A_spot_reading_and_a_stone_over_the_limit_say_how_they_were_read()
+    {
+        // A jadeite-like cabochon read by spot at 1.66 and a diamond over the limit (common practice): the spot is written
+        // as read, to the hundredth, and marked spot; over the limit leaves the indices empty and gives the liquid's limit.
+        StoneSheet spot = ReportFixtures.Sheet("""{"id":"s","refractometer":{"method":"spot","spot":1.66},"sg":3.33}""");
+        StoneSheet over = ReportFixtures.Sheet("""{"id":"o","refractometer":{"method":"facet","liquid_limit":1.79,"over_limit":true},"sg":3.52}""");
+        var w = new StringWriter();
+        WorkbookCsv.Write(w, [(spot, ReportFixtures.Identify(spot)), (over, ReportFixtures.Identify(over))]);
+        string[] rows = w.ToString().Split(Environment.NewLine);
+        Assert.StartsWith("s,2.65,,1.66,,", rows[1]);
+        Assert.EndsWith(",spot", rows[1]);
+        Assert.StartsWith("o,2.65,,,,,", rows[2]);
+        Assert.EndsWith(",1.790,over limit", rows[2]);
     }
 
     [Fact]
