@@ -8,6 +8,9 @@ internal static class ReportNumbers
     /// <summary>A refractive index to the refractometer's printed precision: 1.544.</summary>
     public static string Index(double value) => Fixed(value, "0.000");
 
+    /// <summary>A spot reading as read, to the hundredth (a third decimal only when one was typed): 1.61.</summary>
+    public static string SpotIndex(double value) => Fixed(value, "0.00#");
+
     /// <summary>A specific gravity (dimensionless): 3.99.</summary>
     public static string Gravity(double value) => Fixed(value, "0.00");
 

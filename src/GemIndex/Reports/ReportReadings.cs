@@ -15,7 +15,7 @@ internal static class ReportReadings
             fields.Add(new("refractometer_method", "Refractometer method", StoneReport.Word(rf.Method)));
             if (rf.LightNm is { } light) fields.Add(new("light", "Light", ReportNumbers.Nanometres(light)));
             if (rf.LiquidLimit is { } limit) fields.Add(new("liquid_limit", "Contact-liquid limit", $"refractive index {ReportNumbers.Index(limit)}"));
-            if (rf.Spot is { } spot) fields.Add(new("spot", "Spot reading", $"refractive index {ReportNumbers.Index(spot)}"));
+            if (rf.Spot is { } spot) fields.Add(new("spot", "Spot reading", $"refractive index {ReportNumbers.SpotIndex(spot)}"));
             if (rf.OverLimit) fields.Add(new("over_limit", "Over the limit", "yes: no shadow edge below the contact liquid's limit"));
         }
         if (r.Sg is { } sg) fields.Add(new("sg_given", "Specific gravity (given)", ReportNumbers.Gravity(sg)));

@@ -72,7 +72,7 @@ internal static class WorkbookCsv
             sheet.WeightCarats is { } ct ? ReportNumbers.Fixed(ct, "0.00#") : "",
             sheet.Readings.Colour ?? "",
             // A spot reading is read to the hundredth (refractometer_method says which it was).
-            best is not null ? ReportNumbers.Index(best.Lowest) : spot is { } s ? ReportNumbers.Fixed(s, "0.00#") : "",
+            best is not null ? ReportNumbers.Index(best.Lowest) : spot is { } s ? ReportNumbers.SpotIndex(s) : "",
             // A highest index fitted above the contact liquid was not read: no number for it or the birefringence; the
             // last column gives the liquid's limit it lies above.
             best is { AboveLiquidLimit: null } ? ReportNumbers.Index(best.Highest) : "",

@@ -88,6 +88,14 @@ public class StoneReportTests
     }
 
     [Fact]
+    public void A_spot_reading_is_given_as_read_to_the_hundredth()
+    {
+        // A spot reading is read to 0.01 on the scale (common practice): "1.610" claimed a third decimal never read.
+        var report = ReportFixtures.Report("""{"id":"s","refractometer":{"method":"spot","spot":1.61},"sg":2.7}""");
+        Assert.Equal("refractive index 1.61", report.ReadingFields.Single(f => f.Key == "spot").Value);
+    }
+
+    [Fact]
     public void A_reading_whose_character_the_series_leaves_open_names_no_sign()
     {
         var open = new ReportInterpretation("undetermined", "none", 1, 1.617, 1.621, null, 0.004, 0.001, "one step: which edge moves is not seen");

@@ -155,7 +155,7 @@ internal static class ResultText
         var lines = new List<string>();
         if (a.Result?.Series is { } series) lines.AddRange(Series(series, a.Result.SeriesCharacter));
         else if (a.Readings.Refractometer?.Spot is { } spot && !a.Errors.ContainsKey(BenchFields.Spot) && a.Result is not null)
-            lines.Add($"Spot reading: {spot.ToString("0.00#", CultureInfo.InvariantCulture)}");   // read to 0.01, as typed
+            lines.Add($"Spot reading: {GemIndex.Cli.Reports.ReportNumbers.SpotIndex(spot)}");   // read to 0.01, as typed
         if (a.Readings.Refractometer is { OverLimit: true } && !a.Errors.ContainsKey(BenchFields.OverLimit)) lines.Add("Over the limit: index above the contact liquid");
         if (a.SpecificGravity is { } sg) lines.Add("Specific gravity: " + Gravity(sg)[3..]);
         else if (GravityFields.Any(a.Errors.ContainsKey)) lines.Add("Specific gravity: none used (the SG page, F4, says why)");
