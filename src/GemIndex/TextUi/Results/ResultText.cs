@@ -23,7 +23,7 @@ internal static class ResultText
     public static string Index(double n) => n.ToString("0.000", CultureInfo.InvariantCulture);
 
     /// <summary>
-    /// The answer in a few words for a list of stones: the leading species and its share, then its likeliest entry when
+    /// The answer in a few words for a list of stones: the leading species (with its mineral group) and its share, then its likeliest entry when
     /// that has a name of its own ("corundum >99%: flame-fusion synthetic sapphire"; the list's search finds both), or
     /// "nothing fits". When several origins share the species, the list names the likeliest natural variety and says
     /// the origin is open ("beryl >99%: emerald, origin open"), as the trade names an emerald whose enhancement is
@@ -35,7 +35,9 @@ internal static class ResultText
         if (r.NoGoodMatch) return "nothing fits";
         if (r.Species.Count == 0) return "";
         SpeciesResult lead = r.Species[0];
-        string species = $"{lead.Species} {Percent(lead.Confidence)}";
+        // The species' mineral group beside it, as the trade names it ("pyrope (garnet)"); a search for the group finds it.
+        string group = lead.MineralGroup is { } g && g != lead.Species ? $" ({g})" : "";
+        string species = $"{lead.Species}{group} {Percent(lead.Confidence)}";
         bool originOpen = Origins(lead).Count > 1;
         string? entry = r.Candidates.FirstOrDefault(c => c.Material.Species == lead.Species && (!originOpen || c.Material.Origin == OriginClass.Natural))?.Material.Name;
         string named = entry is null || entry == lead.Species ? species : $"{species}: {entry}";

@@ -391,6 +391,9 @@ public class ResultTextTests
             Species = [new SpeciesResult { Species = "corundum", Confidence = 0.999, Origins = new Dictionary<OriginClass, double> { [OriginClass.Treated] = 0.64, [OriginClass.Natural] = 0.359 } }],
         };
         Assert.Equal("corundum >99%: sapphire, origin open", ResultText.Short(r));
+        // A species of a mineral group is named with it, so that a search for "garnet" finds a pyrope.
+        SpeciesResult pyrope = new() { Species = "pyrope", Confidence = 0.98, Origins = new Dictionary<OriginClass, double> { [OriginClass.Natural] = 0.98 }, MineralGroup = "garnet" };
+        Assert.Equal("pyrope (garnet) 98%", ResultText.Short(r with { Species = [pyrope], Candidates = [] }));
         Assert.Equal("corundum >99%, origin open", ResultText.Short(r with { Candidates = r.Candidates.Take(1).ToList() }));
     }
 
