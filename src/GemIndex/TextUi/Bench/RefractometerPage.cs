@@ -66,18 +66,22 @@ internal sealed class RefractometerPage : BenchPage
             {
                 if (key != Key.Enter) return;
                 string low = Low.Text.Trim(), high = High.Text.Trim();
-                // Both edges typed in the low box ("1.624 1.644" or "1.624/1.644") are the two edges.
-                if (high.Length == 0 && BenchSyntax.EdgePair(low) is { } pair) (low, high) = pair;
+                // Both edges typed in the low box ("1.624 1.644" or "1.624/1.644") are the two edges, also over a step's
+                // old high edge while it is edited (the pair had been stored as a low edge "not a number").
+                if (BenchSyntax.EdgePair(low) is { } pair) (low, high) = pair;
                 StoreRequested?.Invoke(_editing, new StepText(Rotation.Text.Trim(), low, high));
                 key.Handled = true;
             };
         // A space or '/' after a low edge goes on into the high edge's box, which is empty: the two edges typed in one
         // go stay in sight (the low box is eight wide, and "1.716 1.71" showed as "16 1.71").
+        // While a step is edited its old high edge is in the box: it is selected, so the edge typed next replaces it.
         Low.KeyDown += (_, key) =>
         {
-            if ((key == Key.Space || key.AsRune.Value == '/') && High.Text.Length == 0 && Low.Text.Trim().Length > 0 && Low.InsertionPoint >= Low.Text.TrimEnd().Length)
+            if ((key == Key.Space || key.AsRune.Value == '/') && (High.Text.Length == 0 || _editing is not null)
+                && Low.Text.Trim().Length > 0 && Low.InsertionPoint >= Low.Text.TrimEnd().Length)
             {
                 High.SetFocus();
+                if (High.Text.Length > 0) High.SelectAll();
                 key.Handled = true;
             }
         };

@@ -852,6 +852,36 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void Both_edges_typed_in_one_go_over_a_stored_step_replace_both_of_its_edges()
+    {
+        // Editing a stored step, the examiner retypes "1.618 1.623" in the low box: the space moves on to the old high
+        // edge, selected, and what is typed replaces it; the pair typed whole in the low box is the two edges too (it was
+        // stored as a low edge "not a number").
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        TypeSteps(app, ("1.616", "1.621"), ("1.617", "1.622"));
+        app.InjectKey(Key.Tab);
+        app.InjectKey(Key.Tab);            // the list of steps
+        app.InjectKey(Key.Home);
+        app.InjectKey(Key.Enter);          // edit step 1
+        window.Refractometer.Low.Text = "";
+        Type(app, "1.618 1.623");
+        app.InjectKey(Key.Enter);
+        Settle();
+        Assert.Equal(2, _session.Form.Steps.Count);
+        Assert.Equal(("1.618", "1.623"), (_session.Form.Steps[0].Low, _session.Form.Steps[0].High));
+        app.InjectKey(Key.Tab);
+        app.InjectKey(Key.Tab);
+        app.InjectKey(Key.Home);
+        app.InjectKey(Key.Enter);          // edit step 1 again, the pair pasted whole in the low box
+        window.Refractometer.Low.Text = "1.619 1.624";
+        window.Refractometer.Low.NewKeyDownEvent(Key.Enter);
+        Settle();
+        Assert.Equal(("1.619", "1.624"), (_session.Form.Steps[0].Low, _session.Form.Steps[0].High));
+        Close(app, window, token);
+    }
+
+    [Fact]
     public void An_edit_of_a_stored_step_interrupted_by_a_closed_terminal_comes_back_as_that_edit()
     {
         var (app, window, token) = Open();
