@@ -35,8 +35,27 @@ internal sealed class FormField : View
         _mark.ViewportChanged += (_, _) => ShowMark();
         // A value longer than its box shows its start when the cursor leaves (it scrolled to its end while typed:
         // "694, 668, 659" read as "4, 668, 659").
-        Edit.HasFocusChanged += (_, e) => { if (!e.NewValue) Edit.InsertionPoint = 0; };
+        Edit.HasFocusChanged += (_, e) =>
+        {
+            if (!e.NewValue) Edit.InsertionPoint = 0;
+            else { _onEntry = Edit.Text; _typed = null; }
+        };
+        // Ctrl+Z puts back the value the box held when the cursor came into it, and a second Ctrl+Z what was typed over
+        // it: one step each way, which an examiner can predict (the box's own history of keystrokes went back through
+        // values of earlier stones and never to the one overtyped).
+        Edit.KeyDown += (_, key) =>
+        {
+            if (key != Terminal.Gui.Input.Key.Z.WithCtrl) return;
+            key.Handled = true;
+            if (Edit.Text != _onEntry) { _typed = Edit.Text; Edit.Text = _onEntry; }
+            else if (_typed is not null) { Edit.Text = _typed; _typed = null; }
+            Edit.InsertionPoint = Edit.Text.Length;
+        };
     }
+
+    /// <summary>The box's text when the cursor came into it, and what was typed over it before a Ctrl+Z put it back.</summary>
+    private string _onEntry = "";
+    private string? _typed;
 
     public string Field { get; }
 

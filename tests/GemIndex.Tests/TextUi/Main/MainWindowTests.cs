@@ -154,6 +154,37 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void Ctrl_Z_in_a_field_puts_back_the_value_it_held_when_the_cursor_came_in_and_again_what_was_typed()
+    {
+        // A water temperature of 22 overtyped by mistake with a heavy liquid's words: Ctrl+Z brings the 22 back (the
+        // box's own keystroke history went back through older values and never to it), a second Ctrl+Z the words.
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(_session, TestMaterials.All);
+        _session.Start();
+        window.FillFromModel();
+        SessionToken token = app.Begin(window)!;
+        window.ShowPage(2);
+        Type(app, "2.65");
+        app.InjectKey(Key.Tab);             // weight in air
+        app.InjectKey(Key.Tab);             // weight in water
+        app.InjectKey(Key.Tab);             // water temperature
+        Type(app, "22");
+        app.InjectKey(Key.Tab);
+        app.InjectKey(Key.Tab.WithShift);   // back into the water temperature
+        for (int i = 0; i < 2; i++) app.InjectKey(Key.Backspace);
+        Type(app, "3.32 float");
+        Settle();
+        Assert.Equal("3.32 float", _session.Form.Text(BenchFields.WaterC));
+        app.InjectKey(Key.Z.WithCtrl);
+        Settle();
+        Assert.Equal("22", _session.Form.Text(BenchFields.WaterC));
+        app.InjectKey(Key.Z.WithCtrl);
+        Settle();
+        Assert.Equal("3.32 float", _session.Form.Text(BenchFields.WaterC));
+        app.End(token);
+    }
+
+    [Fact]
     public void A_mouse_click_on_the_page_bar_changes_page_and_a_click_on_a_choice_cycles_it()
     {
         using IApplication app = Headless.Start();
