@@ -45,8 +45,20 @@ internal sealed class ChoiceField : View
         Word = word;
         // The keys while nothing is chosen; the key line lists them in words while the choice has the cursor. A refused
         // answer says where its reason is, as a field's mark does.
-        Text = $"{Choice.Label.PadRight(_labelWidth)}[{Choice.Show(word)}]" + (Refused ? "  " + FormField.SeeBelow : word is null ? "  " + Choice.KeyHint : "");
+        Text = $"{Choice.Label.PadRight(_labelWidth)}[{Choice.Show(word)}]" + (Refused ? "  " + FormField.SeeBelow : word is null ? "  " + (Note ?? Choice.KeyHint) : "");
     }
+
+    /// <summary>
+    /// A note shown in place of the keys while nothing is chosen (an opaque stone's polariscope: it needs light through
+    /// the stone); null: the keys. The key line still lists the keys while the choice has the cursor.
+    /// </summary>
+    public string? Note
+    {
+        get => _note;
+        set { if (_note == value) return; _note = value; Show(Word); }
+    }
+
+    private string? _note;
 
     /// <summary>Whether the reader refused this answer (its reason is at the page's foot).</summary>
     public bool Refused { get; private set; }

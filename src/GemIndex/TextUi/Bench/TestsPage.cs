@@ -18,4 +18,17 @@ internal sealed class TestsPage : BenchPage
         AddChoice(BenchFields.UvShort);
         AddField(BenchFields.Absorption, "Absorption", 12, "nm, or none");
     }
+
+    /// <summary>What an opaque stone's polariscope, dichroscope and fire are told instead of their keys.</summary>
+    public const string OpaqueNote = "opaque: not advised";
+
+    /// <summary>
+    /// On an opaque stone the polariscope, the dichroscope and fire are not advised (they need light through the stone;
+    /// "stays dark", one colour and no fire are what any opaque stone shows): each says so beside its box while unset.
+    /// </summary>
+    public void ShowTransparency(string? transparency)
+    {
+        foreach (ChoiceField c in Choices.Where(c => c.Choice.Field is BenchFields.Polariscope or BenchFields.Pleochroism or BenchFields.Dispersion))
+            c.Note = transparency == "opaque" ? OpaqueNote : null;
+    }
 }

@@ -123,6 +123,8 @@ internal sealed class MainWindow : Window
 
     public GravityPage Gravity => (GravityPage)Pages[2];
 
+    public TestsPage Tests => (TestsPage)Pages[3];
+
     public LoupePage Loupe => (LoupePage)Pages[LoupePageIndex];
 
     /// <summary>The loupe page's place; Ctrl+L opens it (L for loupe: the function keys next in line are taken or, F11, kept by many terminals for full screen).</summary>
@@ -341,6 +343,7 @@ internal sealed class MainWindow : Window
     private void ShowAssessment()
     {
         BenchAssessment? a = _session.Results.Latest;
+        Tests.ShowTransparency(GemIndex.Data.Workbook.StoneSheet.TransparencyWord(_session.Form.Text(BenchFields.Transparency)));
         if (a is null) return;
         IReadOnlyDictionary<string, string> errors = _session.Form.RotationStepProblem is { } step
             ? new Dictionary<string, string>(a.Errors) { [RefractometerPage.RotationStepField] = step } : a.Errors;

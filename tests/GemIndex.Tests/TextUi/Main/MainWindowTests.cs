@@ -185,6 +185,38 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void An_opaque_stone_s_polariscope_dichroscope_and_fire_say_they_are_not_advised()
+    {
+        // The transparency typed on the stone's page: an opaque stone's light-through tests say so on F5 (the command line's
+        // "no polariscope, dichroscope or fire is advised" had no counterpart in the text UI); the other tests keep their keys.
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(_session, TestMaterials.All);
+        _session.Start();
+        window.FillFromModel();
+        SessionToken token = app.Begin(window)!;
+        window.ShowPage(0);
+        window.Pages[0].Fields.Single(f => f.Field == BenchFields.Transparency).Edit.SetFocus();
+        Type(app, "opaque");
+        window.ShowPage(1);
+        window.Refractometer.Low.SetFocus();
+        Type(app, "1.61");
+        app.InjectKey(Key.Enter);
+        Settle();
+        string Line(string field) => window.Tests.Choices.Single(c => c.Choice.Field == field).Text;
+        Assert.EndsWith(TestsPage.OpaqueNote, Line(BenchFields.Polariscope));
+        Assert.EndsWith(TestsPage.OpaqueNote, Line(BenchFields.Pleochroism));
+        Assert.EndsWith(TestsPage.OpaqueNote, Line(BenchFields.Dispersion));
+        Assert.DoesNotContain(TestsPage.OpaqueNote, Line(BenchFields.UvLong));
+        window.ShowPage(0);
+        var transparency = window.Pages[0].Fields.Single(f => f.Field == BenchFields.Transparency).Edit;
+        transparency.SetFocus();
+        transparency.Text = "transparent";
+        Settle();
+        Assert.DoesNotContain(TestsPage.OpaqueNote, Line(BenchFields.Polariscope));
+        app.End(token);
+    }
+
+    [Fact]
     public void A_mouse_click_on_the_page_bar_changes_page_and_a_click_on_a_choice_cycles_it()
     {
         using IApplication app = Headless.Start();
