@@ -76,7 +76,7 @@ internal static class WorkbookCsv
             // A highest index fitted above the contact liquid was not read: no number for it or the birefringence; the
             // last column gives the liquid's limit it lies above.
             best is { AboveLiquidLimit: null } ? ReportNumbers.Index(best.Highest) : "",
-            best is { AboveLiquidLimit: null } ? ReportNumbers.Index(best.Birefringence) : "",
+            best is { AboveLiquidLimit: null } ? ReportNumbers.Index(GemIndex.Core.Optics.Birefringence.OfShownIndices(best.Highest, best.Lowest)) : "",   // as the two indices shown, so the row adds up
             report?.Character ?? "",
             report?.SpecificGravity is { } sg ? ReportNumbers.Gravity(sg.Value) : sheet.Readings.Sg is { } given ? ReportNumbers.Gravity(given) : "",
             sheet.Readings.Polariscope is { } p ? StoneReport.Word(p) : "",

@@ -70,6 +70,17 @@ public class WorkbookCsvTests
     }
 
     [Fact]
+    public void The_birefringence_is_the_difference_of_the_two_indices_in_the_row()
+    {
+        // Invented readings near peridot's handbook indices (from memory), twelve steps: the fitted birefringence 0.0355
+        // was written 0.035 beside α 1.654 and γ 1.690, where the answer and the reports say 0.036.
+        StoneSheet peridot = ReportFixtures.Sheet("""{"id":"p","refractometer":{"method":"facet","readings":[{"rotation_deg":0,"low":1.654,"high":1.686},{"rotation_deg":15,"low":1.656,"high":1.688},{"rotation_deg":30,"low":1.66,"high":1.69},{"rotation_deg":45,"low":1.664,"high":1.69},{"rotation_deg":60,"low":1.668,"high":1.689},{"rotation_deg":75,"low":1.67,"high":1.686},{"rotation_deg":90,"low":1.671,"high":1.682},{"rotation_deg":105,"low":1.669,"high":1.679},{"rotation_deg":120,"low":1.666,"high":1.68},{"rotation_deg":135,"low":1.662,"high":1.682},{"rotation_deg":150,"low":1.658,"high":1.684},{"rotation_deg":165,"low":1.655,"high":1.685}]},"sg":3.34}""");
+        var w = new StringWriter();
+        WorkbookCsv.Write(w, [(peridot, ReportFixtures.Identify(peridot))]);
+        Assert.StartsWith("p,2.65,,1.654,1.690,0.036,", w.ToString().Split(Environment.NewLine)[1]);
+    }
+
+    [Fact]
     public void A_spot_reading_and_a_stone_over_the_limit_say_how_they_were_read()
     {
         // A jadeite-like cabochon read by spot at 1.66 and a diamond over the limit (common practice): the spot is written

@@ -1,3 +1,4 @@
+using GemIndex.Core.Optics;
 using GemIndex.Cli.TextUi.Bench;
 using GemIndex.Cli.TextUi.Results;
 using GemIndex.Core.Bench;
@@ -44,8 +45,9 @@ internal sealed class ScaleModel
                 scales.Add(n => new ReadingScale("lowest index", "0.000", best.Lowest.Value, best.Lowest.StandardUncertainty, WidestIndex,
                     [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)m.Indices.Lowest))], ranks));
                 // A highest index fitted above the liquid is no reading: its birefringence is only a lower bound, not drawn.
+                // The birefringence as the answer and the reports give it: the difference of the indices as shown.
                 if (best.Birefringence.Value > 0 && best.AboveLiquidLimit is null)
-                    scales.Add(n => new ReadingScale("birefringence", "0.000", best.Birefringence.Value, best.Birefringence.StandardUncertainty, WidestBirefringence,
+                    scales.Add(n => new ReadingScale("birefringence", "0.000", Birefringence.OfShownIndices(best.Highest.Value, best.Lowest.Value), best.Birefringence.StandardUncertainty, WidestBirefringence,
                         [.. top.Take(n).Select(m => (m.Name, m.Birefringence ?? new PropertyRange(0, 0)))], ranks));
             }
             else if (a.Readings.Refractometer?.Spot is { } spot && a.Result is not null)
