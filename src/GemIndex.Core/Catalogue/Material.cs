@@ -134,8 +134,12 @@ public sealed record Material
     /// </summary>
     public MagnificationProfile? Magnification { get; init; }
 
-    /// <summary>The entry's magnification profile: its own, or its origin's defaults.</summary>
-    public MagnificationProfile MagnificationProfile => Magnification ?? MagnificationProfile.ForOrigin(Origin);
+    /// <summary>
+    /// The entry's magnification profile: its own, or its origin's defaults, with the doubling of facet edges its
+    /// birefringence gives (<see cref="Magnification.FacetDoubling"/>).
+    /// </summary>
+    public MagnificationProfile MagnificationProfile =>
+        (Magnification ?? MagnificationProfile.ForOrigin(Origin)).With(MagnificationFeature.FacetDoubling, FacetDoubling.Held(this));
 
     /// <summary>Optic character, from the indices.</summary>
     public OpticCharacter OpticCharacter => Indices.Character;

@@ -18,6 +18,9 @@ public enum FeatureGroup
     /// <summary>The structure of organic materials under a loupe: nacre, Schreger lines, bone canals, plant cells, coral growth, pigment spots.</summary>
     OrganicStructure,
 
+    /// <summary>Optics seen through the stone under magnification: the doubling of facet edges and inclusions.</summary>
+    Optics,
+
     /// <summary>Optical phenomena the eye sees: a cat's-eye or a star under one light, play of colour, a change of colour between two lights.</summary>
     Phenomenon,
 }

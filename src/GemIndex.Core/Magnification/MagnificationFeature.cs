@@ -90,6 +90,9 @@ public enum MagnificationFeature
     /// <summary>Tortoiseshell's mottling seen as small round spots of pigment.</summary>
     PigmentSpots,
 
+    /// <summary>Doubling: the back facet edges or an inclusion seen twice through the stone (strong birefringence).</summary>
+    FacetDoubling,
+
     /// <summary>Chatoyancy: one band of light across a cabochon (a cat's-eye).</summary>
     Chatoyancy,
 

@@ -37,6 +37,17 @@ public sealed class MagnificationProfile
     /// <summary>The probability that a stone of this material holds the feature.</summary>
     public double ProbabilityOf(MagnificationFeature feature) => _probabilities[(int)feature];
 
+    private MagnificationProfile(double[] probabilities) => _probabilities = probabilities;
+
+    /// <summary>The same profile with one feature's probability replaced (this one when it is already that).</summary>
+    public MagnificationProfile With(MagnificationFeature feature, double probability)
+    {
+        if (_probabilities[(int)feature] == probability) return this;
+        double[] copy = [.. _probabilities];
+        copy[(int)feature] = probability;
+        return new MagnificationProfile(copy);
+    }
+
     /// <summary>
     /// Defaults by origin (common practice): natural stones usually show nature's inclusions and never melt or flux
     /// growth; synthetics of unstated method may show any growth signature; treated stones and cultured pearls keep
@@ -67,6 +78,9 @@ public sealed class MagnificationProfile
             OriginClass.Imitation when feature is MagnificationFeature.ElongatedGasBubbles => 0.15,
             OriginClass.Composite when group == FeatureGroup.Composite => 0.6,
             OriginClass.Composite when natureInclusion => 0.2,
+            // A stone the catalogue lacks: crystals of every birefringence, half of them plainly doubling (a judgement;
+            // every catalogue entry takes its own from its birefringence, FacetDoubling).
+            OriginClass.Natural when feature is MagnificationFeature.FacetDoubling => FacetDoubling.UnknownCrystal,
             _ => Foreign,
         };
     }

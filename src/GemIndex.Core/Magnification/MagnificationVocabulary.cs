@@ -103,6 +103,11 @@ public static class MagnificationVocabulary
         new(MagnificationFeature.PigmentSpots, FeatureGroup.OrganicStructure, "pigment_spots", "spots of pigment",
             "the mottling made of small round reddish-brown spots, closer together where the colour is deeper", "transmitted light through a thin edge, or diffused light",
             "tortoiseshell; plastic and dyed horn imitations show streaks or clouds of colour without spots", NewmanTortoiseshell, Plain),
+        // Doubling: how often it is held follows the material's birefringence (FacetDoubling), not a table.
+        new(MagnificationFeature.FacetDoubling, FeatureGroup.Optics, "doubling", "doubling of facet edges",
+            "the back facet edges, or an inclusion, seen twice as two images side by side through the table", "diffused light through the table, turning the stone (along an optic axis there is none)",
+            "strong double refraction (birefringence from about 0.01, plain from about 0.02): zircon, peridot, sphene, tourmaline, synthetic moissanite; never in singly refractive stones, glass or fine aggregates",
+            CommonPractice, Obvious),
         // Phenomena: seen by eye with one light (a penlight) as the stone is turned; when a stone has one it is hard to miss
         // (Obvious), except a change of colour, which needs two lights (Plain). Meanings: facts of the trade.
         new(MagnificationFeature.Chatoyancy, FeatureGroup.Phenomenon, "chatoyancy", "cat's-eye (chatoyancy)",

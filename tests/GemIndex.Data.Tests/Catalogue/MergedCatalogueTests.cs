@@ -18,9 +18,9 @@ public class MergedCatalogueTests
         Material mine = ivory with { Name = "my ivory", IsUserEntry = true, Magnification = null, Frequency = BenchFrequency.Rare };
         Material odd = mine with { Name = "my odd", Species = "no such species" };
         var merged = MergedCatalogue.WithSpeciesLooks([mine, odd], shipped);
-        Assert.Same(ivory.MagnificationProfile, merged[0].MagnificationProfile);
+        Assert.Same(ivory.Magnification, merged[0].Magnification);
         Assert.Equal(0.7, merged[0].MagnificationProfile.ProbabilityOf(MagnificationFeature.SchregerLines));
-        Assert.Same(MagnificationProfile.ForOrigin(odd.Origin), merged[1].MagnificationProfile);
+        Assert.Null(merged[1].Magnification);   // its origin's defaults
     }
 
     [Fact]

@@ -27,7 +27,9 @@ public class MagnificationTableTests
         {
             if (table.Entries.TryGetValue(m.Name, out var listed))
                 foreach (var (feature, p) in listed) Assert.Equal(p, m.MagnificationProfile.ProbabilityOf(feature));
-            else Assert.Same(MagnificationProfile.ForOrigin(m.Origin), m.MagnificationProfile);
+            else Assert.Null(m.Magnification);   // its origin's defaults
+            // Doubling follows the entry's own birefringence, listed or not.
+            Assert.Equal(FacetDoubling.Held(m), m.MagnificationProfile.ProbabilityOf(MagnificationFeature.FacetDoubling));
         }
         // Flame-fusion synthetic ruby: curved striae in virtually all stones (Hughes & Koivula 2005, as the table cites it).
         Material flameFusion = shipped.Single(m => m.Name == "flame-fusion synthetic ruby");

@@ -70,6 +70,22 @@ public class IdentifyMagnificationTests
     }
 
     [Fact]
+    public void Doubling_of_facet_edges_parts_a_colourless_zircon_from_cubic_zirconia_over_the_limit()
+    {
+        // A colourless stone over the limit, thermal probe negative (common practice: zircon, cubic zirconia and the other
+        // high-index simulants). Zircon's birefringence of about 0.04–0.06 doubles the back facet edges under a loupe, which
+        // singly refractive cubic zirconia never does (common practice).
+        using var run = new CommandRun();
+        string[] readings = ["--over-limit", "--colour", "colourless", "--thermal-probe", "negative"];
+        string Leader(params string[] looks) => SpeciesOf(run, [.. readings, .. looks])[0].GetProperty("species").GetString()!;
+        Assert.Equal("cubic zirconia", Leader());
+        Assert.Equal("zircon", Leader("--feature", "doubling"));
+        Assert.Equal("cubic zirconia", Leader("--no-feature", "doubling"));
+        var (_, text, _) = CommandRun.Plain(["identify", .. readings, "--feature", "doubling", "--catalogue-dir", run.Folder]);
+        Assert.Contains("Seen under magnification: doubling of facet edges: points to: strong double refraction", text);
+    }
+
+    [Fact]
     public void Nacre_platelet_edges_seen_rule_out_the_coated_bead_imitations()
     {
         // A white bead, spot 1.53 (one end of aragonite's blink), SG 2.71: inside the catalogue's ranges of pearl,

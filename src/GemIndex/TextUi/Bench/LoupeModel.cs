@@ -180,6 +180,7 @@ internal sealed class LoupeModel
         FeatureGroup.Treatment => "SIGNS OF TREATMENT",
         FeatureGroup.Composite => "SIGNS OF A COMPOSITE STONE",
         FeatureGroup.OrganicStructure => "ORGANIC STRUCTURE",
+        FeatureGroup.Optics => "OPTICS (through the stone)",
         FeatureGroup.Phenomenon => "PHENOMENA (by eye)",
         _ => group.ToString().ToUpperInvariant(),
     };

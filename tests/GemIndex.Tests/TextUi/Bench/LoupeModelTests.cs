@@ -123,7 +123,7 @@ public class LoupeModelTests
     {
         var model = new LoupeModel();
         Assert.Equal(MagnificationVocabulary.All.Select(f => f.Feature), model.Rows.Where(r => !r.IsHeading).Select(r => r.Feature!.Feature));
-        Assert.Equal(["GROWTH", "INCLUSIONS", "SIGNS OF TREATMENT", "SIGNS OF A COMPOSITE STONE", "ORGANIC STRUCTURE", "PHENOMENA (by eye)"],
+        Assert.Equal(["GROWTH", "INCLUSIONS", "SIGNS OF TREATMENT", "SIGNS OF A COMPOSITE STONE", "ORGANIC STRUCTURE", "OPTICS (through the stone)", "PHENOMENA (by eye)"],
             model.Rows.Where(r => r.IsHeading).Select(model.Line));
         Assert.All(model.Rows.Where(r => !r.IsHeading), r => Assert.Equal(r.Group, r.Feature!.Group));
         Assert.Equal(1, model.FirstFeatureRow);
