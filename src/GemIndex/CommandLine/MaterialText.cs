@@ -9,13 +9,16 @@ internal static class MaterialText
 {
     private const string IndexFormat = "0.000";
 
+    /// <summary>A catalogue family in words ("sulfides-and-oxides", its file's name, as "sulfides and oxides").</summary>
+    public static string FamilyWords(string family) => family.Replace('-', ' ');
+
     public static void WriteTable(TextWriter output, IReadOnlyList<Material> materials)
     {
         string[] header = ["name", "character", "RI at 589.3 nm", "birefringence", "SG", "origin", "source"];
         List<string[]> rows = [header, .. materials.Select(m => new[]
         {
             m.Name, Character(m), Indices(m), m.Birefringence?.ToString(IndexFormat) ?? "-",
-            m.SpecificGravity.ToString("0.00"), Word(m.Origin), m.IsUserEntry ? "user" : m.Family,
+            m.SpecificGravity.ToString("0.00"), Word(m.Origin), m.IsUserEntry ? "user" : FamilyWords(m.Family),
         })];
         int[] widths = [.. Enumerable.Range(0, header.Length).Select(c => rows.Max(r => r[c].Length))];
         foreach (string[] row in rows)
@@ -26,7 +29,7 @@ internal static class MaterialText
     {
         var lines = new List<(string Label, string Value)>
         {
-            ("name", m.Name), ("species", m.Species), ("variety", m.Variety), ("family", m.Family), ("mineral group", m.MineralGroup ?? "-"),
+            ("name", m.Name), ("species", m.Species), ("variety", m.Variety), ("family", FamilyWords(m.Family)), ("mineral group", m.MineralGroup ?? "none"),
             ("origin", Word(m.Origin)), ("crystal system", Word(m.CrystalSystem)), ("optic character", Character(m)),
         };
         lines.AddRange(m.Indices.Named().Select(x => ($"{x.Name} at 589.3 nm", x.Range.ToString(IndexFormat))));

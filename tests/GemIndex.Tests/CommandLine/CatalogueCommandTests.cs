@@ -150,6 +150,10 @@ public class CatalogueCommandTests
         var (_, ruby, _) = run.Catalogue("show", "ruby");
         Assert.Contains("[common practice]", ruby, StringComparison.Ordinal);
         Assert.DoesNotContain("[practice, common practice]", ruby, StringComparison.Ordinal);
+        // The family in words, not its file's name; a species of no mineral group says so.
+        var (_, nephrite, _) = run.Catalogue("show", "green nephrite");
+        Assert.Matches(@"family\s+jade and ornamentals", nephrite);
+        Assert.Matches(@"mineral group\s+none", nephrite);
     }
 
     [Fact]
