@@ -35,7 +35,8 @@ internal static class IndependentAccuracyRun
 
         var random = new Random(seed);
         // Magnification draws from a stream of its own, so the other readings of a seed are those drawn without it.
-        var simulator = new IndependentStoneSimulator(random, new LoupeExaminer(new Random(unchecked(seed * 7919 + 104729)), lookShare), beyondRangeShare);
+        var simulator = new IndependentStoneSimulator(random, new LoupeExaminer(new Random(unchecked(seed * 7919 + 104729)), lookShare), beyondRangeShare,
+            doubling: new Random(unchecked(seed * 6143 + 86969)));
         double[] weights = [.. usable.Select(s => s.BenchWeight)];
         var cases = new List<(SimulatedStone Stone, EngineAnswer Answer, IReadOnlyList<Material> Baseline, bool Separable, IReadOnlyList<string> Confusers)>();
         var stopwatch = Stopwatch.StartNew();

@@ -8,7 +8,8 @@ namespace GemIndex.Bench.Independent;
 /// Magnification comes from a <see cref="LoupeExaminer"/> with its own random stream, so the other readings of a seed
 /// do not depend on it. Nothing here reads the catalogue or the engine's likelihood tables.
 /// </summary>
-internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? loupe = null, double beyondRangeShare = IndependentStoneSimulator.BeyondRangeShare)
+internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? loupe = null, double beyondRangeShare = IndependentStoneSimulator.BeyondRangeShare,
+    Random? doubling = null)
 {
     /// <summary>
     /// Share of stones drawn beyond the published ranges (index, SG or both): 7 %, inside the brief's 5–10 % (the
@@ -68,7 +69,13 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
             (principal, sg) = method.Apply(species, principal, sg);
         var readings = Readings(species, id, principal, sg, origin, hue);
         if (magnification is { Looked: true })
+        {
             readings = readings with { FeaturesPresent = magnification.Present, FeaturesAbsent = magnification.Absent };
+            // Doubling, from the true principal values, on its own stream (DoublingSighting).
+            if (doubling is not null && DoublingSighting.Look(doubling, species, principal, magnification.Microscope, species.Opaque || hue == "black") is { } seen)
+                readings = seen ? readings with { FeaturesPresent = [.. readings.FeaturesPresent ?? [], DoublingSighting.Word] }
+                    : readings with { FeaturesAbsent = [.. readings.FeaturesAbsent ?? [], DoublingSighting.Word] };
+        }
         return new SimulatedStone
         {
             Species = species, Origin = origin, Hue = hue, Principal = principal, SpecificGravity = sg, BeyondRange = beyond,
