@@ -52,7 +52,7 @@ internal static class TextUiCommand
                     exitCode = ExitCodes.BadFile;
                     return null;
                 }
-                output.Write($"No workbook at {missing.Path}. Create a new one there? [y/N] ");
+                output.Write($"No workbook at {missing.Path}.{output.NewLine}Create a new one there? [y/N] ");   // the question on a line of its own: a long path wrapped "[y/N" and "]" apart
                 output.Flush();
                 string answer = (input.ReadLine() ?? "").Trim();
                 if (!answer.Equals("y", StringComparison.OrdinalIgnoreCase) && !answer.Equals("yes", StringComparison.OrdinalIgnoreCase))
