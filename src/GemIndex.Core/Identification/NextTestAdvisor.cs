@@ -150,18 +150,6 @@ public static class NextTestAdvisor
         return Math.Max(0, overall - inside);
     }
 
-    /// <summary>
-    /// What a loupe can find on an opaque stone, by reflected light (common practice): colour banding, the treatments that
-    /// reach the surface (dye in fractures, a worn coating), a composite's join and its two lustres, the organic
-    /// structures and the phenomena; not the inclusions, the growth features seen through the stone, nor what lies in its
-    /// fractures or its cement (flash effect, flattened bubbles, cement bubbles, colour at facet junctions in immersion).
-    /// </summary>
-    internal static bool SeenOnTheSurface(MagnificationFeatureInfo feature) => feature.Feature switch
-    {
-        MagnificationFeature.ColourBanding or MagnificationFeature.DyeInFractures or MagnificationFeature.CoatingWear
-            or MagnificationFeature.JoinPlane or MagnificationFeature.LustreChangeAtGirdle => true,
-        _ => feature.Group is FeatureGroup.OrganicStructure or FeatureGroup.Phenomenon,
-    };
 
     /// <summary>
     /// The most informative look under magnification among the features not yet looked for: the single feature with the
@@ -175,7 +163,7 @@ public static class NextTestAdvisor
         var done = sheet.Magnification is { } m ? m.Present.Concat(m.Absent).ToHashSet() : [];
         var open = new List<int>();
         for (int f = 0; f < MagnificationVocabulary.All.Count; f++)
-            if (!done.Contains(MagnificationVocabulary.All[f].Feature) && (sheet.Transparency != StoneTransparency.Opaque || SeenOnTheSurface(MagnificationVocabulary.All[f])))
+            if (!done.Contains(MagnificationVocabulary.All[f].Feature) && (sheet.Transparency != StoneTransparency.Opaque || MagnificationVocabulary.All[f].SeenOnTheSurface))
                 open.Add(f);
         if (open.Count == 0) return null;
         // Of equal gains the first is kept (as MaxBy does).

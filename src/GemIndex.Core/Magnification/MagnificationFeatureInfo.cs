@@ -17,6 +17,21 @@ public sealed record MagnificationFeatureInfo(
     MagnificationFeature Feature, FeatureGroup Group, string Word, string Name, string LookFor, string Lighting,
     string Meaning, string Source, double Visibility)
 {
+    /// <summary>
+    /// What a loupe can find on an opaque stone, by reflected light (common practice): colour banding, a made opal's mosaic
+    /// of colour patches (seen from above in reflected light), the treatments that
+    /// reach the surface (dye in fractures, a worn coating), a composite's join and its two lustres, the organic
+    /// structures and the phenomena; not the inclusions, the growth features seen through the stone, the doubling, nor
+    /// what lies in its fractures or its cement (flash effect, flattened bubbles, cement bubbles, colour at facet
+    /// junctions in immersion).
+    /// </summary>
+    public bool SeenOnTheSurface => Feature switch
+    {
+        MagnificationFeature.ColourBanding or MagnificationFeature.MosaicColourPatches or MagnificationFeature.DyeInFractures or MagnificationFeature.CoatingWear
+            or MagnificationFeature.JoinPlane or MagnificationFeature.LustreChangeAtGirdle => true,
+        _ => Group is FeatureGroup.OrganicStructure or FeatureGroup.Phenomenon,
+    };
+
     /// <summary>How a sighting is named: a phenomenon is seen by eye, the rest under magnification.</summary>
     public string SeenHow => Group == FeatureGroup.Phenomenon ? "Seen by eye" : "Seen under magnification";
 

@@ -610,10 +610,10 @@ public class IdentifierTests
         Assert.NotNull(opaque);
         Assert.Equal(GemIndex.Core.Bench.BenchField.ThermalProbe, opaque.Test);
         // The loupe's choices for an opaque stone: surface features only.
-        Assert.True(NextTestAdvisor.SeenOnTheSurface(GemIndex.Core.Magnification.MagnificationVocabulary.Of(GemIndex.Core.Magnification.MagnificationFeature.ColourBanding)));
-        Assert.True(NextTestAdvisor.SeenOnTheSurface(GemIndex.Core.Magnification.MagnificationVocabulary.Of(GemIndex.Core.Magnification.MagnificationFeature.DyeInFractures)));
-        Assert.False(NextTestAdvisor.SeenOnTheSurface(GemIndex.Core.Magnification.MagnificationVocabulary.Of(GemIndex.Core.Magnification.MagnificationFeature.RoundGasBubbles)));
-        Assert.False(NextTestAdvisor.SeenOnTheSurface(GemIndex.Core.Magnification.MagnificationVocabulary.Of(GemIndex.Core.Magnification.MagnificationFeature.FilledFractureFlash)));
+        Assert.True(GemIndex.Core.Magnification.MagnificationVocabulary.Of(GemIndex.Core.Magnification.MagnificationFeature.ColourBanding).SeenOnTheSurface);
+        Assert.True(GemIndex.Core.Magnification.MagnificationVocabulary.Of(GemIndex.Core.Magnification.MagnificationFeature.DyeInFractures).SeenOnTheSurface);
+        Assert.False(GemIndex.Core.Magnification.MagnificationVocabulary.Of(GemIndex.Core.Magnification.MagnificationFeature.RoundGasBubbles).SeenOnTheSurface);
+        Assert.False(GemIndex.Core.Magnification.MagnificationVocabulary.Of(GemIndex.Core.Magnification.MagnificationFeature.FilledFractureFlash).SeenOnTheSurface);
     }
 
     [Fact]

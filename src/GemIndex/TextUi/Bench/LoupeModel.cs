@@ -216,9 +216,22 @@ internal sealed class LoupeModel
     /// <summary>The rule under the list, naming the state of the feature under the cursor.</summary>
     public string Rule(LoupeRow? row, int width)
     {
-        string text = row?.Feature is { } f ? $"── {Words(State(f.Feature))} " : Rows.Count == 0 ? $"── nothing matches '{Filter}' " : "";
+        // Not yet looked for on an opaque stone, a feature seen only through a stone says it is not advised there (the
+        // room is the 80-column page's left half); once marked, the mark is said as usual.
+        string text = row?.Feature is { } f
+            ? (Opaque && !f.SeenOnTheSurface && State(f.Feature) == FeatureState.NotLookedFor ? $"── {NotOnAnOpaqueStone} " : $"── {Words(State(f.Feature))} ")
+            : Rows.Count == 0 ? $"── nothing matches '{Filter}' " : "";
         return text.Length >= width ? text[..width] : text + new string('─', width - text.Length);
     }
+
+    /// <summary>
+    /// The stone is typed opaque: a feature seen only through the stone says so on its rule (the command line says
+    /// "under the loupe only what shows on a surface"; the next test never advises such a look on an opaque stone).
+    /// </summary>
+    public bool Opaque { get; set; }
+
+    /// <summary>The rule of a feature seen only through a stone, not yet looked for on an opaque one.</summary>
+    public const string NotOnAnOpaqueStone = "opaque stone: not advised";
 
     /// <summary>What to look for and the lighting (and, when <paramref name="meaning"/>, what it means), wrapped to the width.</summary>
     public static IReadOnlyList<string> Description(MagnificationFeatureInfo feature, int width, bool meaning) =>

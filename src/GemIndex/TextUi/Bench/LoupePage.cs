@@ -162,6 +162,15 @@ internal sealed class LoupePage : BenchPage
         Describe();
     }
 
+    /// <summary>Tells the page whether the stone is opaque (the batch word of its transparency, or null), for the rule under the list.</summary>
+    public void ShowTransparency(string? transparency)
+    {
+        bool opaque = transparency == "opaque";
+        if (Model.Opaque == opaque) return;
+        Model.Opaque = opaque;
+        Describe();
+    }
+
     private void Describe()
     {
         int width = Math.Max(20, Viewport.Width);

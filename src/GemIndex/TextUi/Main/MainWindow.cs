@@ -343,7 +343,9 @@ internal sealed class MainWindow : Window
     private void ShowAssessment()
     {
         BenchAssessment? a = _session.Results.Latest;
-        Tests.ShowTransparency(GemIndex.Data.Workbook.StoneSheet.TransparencyWord(_session.Form.Text(BenchFields.Transparency)));
+        string? transparency = GemIndex.Data.Workbook.StoneSheet.TransparencyWord(_session.Form.Text(BenchFields.Transparency));
+        Tests.ShowTransparency(transparency);
+        Loupe.ShowTransparency(transparency);
         if (a is null) return;
         IReadOnlyDictionary<string, string> errors = _session.Form.RotationStepProblem is { } step
             ? new Dictionary<string, string>(a.Errors) { [RefractometerPage.RotationStepField] = step } : a.Errors;

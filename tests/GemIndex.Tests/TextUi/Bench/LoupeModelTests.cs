@@ -130,6 +130,21 @@ public class LoupeModelTests
     }
 
     [Fact]
+    public void On_an_opaque_stone_a_feature_seen_only_through_it_says_so_on_its_rule()
+    {
+        // Common practice: on an opaque stone the loupe finds only what shows on the surface (colour banding, dye, a join),
+        // not inclusions nor the doubling of facet edges, which are seen through the stone.
+        var model = new LoupeModel { Opaque = true };
+        LoupeRow Row(MagnificationFeature f) => model.Rows.Single(r => r.Feature?.Feature == f);
+        Assert.Contains(LoupeModel.NotOnAnOpaqueStone, model.Rule(Row(MagnificationFeature.RoundGasBubbles), 60));
+        Assert.Contains(LoupeModel.NotOnAnOpaqueStone, model.Rule(Row(MagnificationFeature.FacetDoubling), 60));
+        Assert.DoesNotContain(LoupeModel.NotOnAnOpaqueStone, model.Rule(Row(MagnificationFeature.DyeInFractures), 60));
+        Assert.True(model.Rule(Row(MagnificationFeature.RoundGasBubbles), 38).TrimEnd('─').Length < 38, "the words fit the 80-column page's left half");
+        model.Opaque = false;
+        Assert.DoesNotContain(LoupeModel.NotOnAnOpaqueStone, model.Rule(Row(MagnificationFeature.RoundGasBubbles), 60));
+    }
+
+    [Fact]
     public void Typing_narrows_the_list_to_features_whose_name_or_description_holds_every_word()
     {
         var model = new LoupeModel();
