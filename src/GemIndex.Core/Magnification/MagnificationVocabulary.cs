@@ -51,7 +51,7 @@ public static class MagnificationVocabulary
             "natural stone as a rule; synthetics seldom hold crystals of other minerals", CommonPractice, Plain),
         new(MagnificationFeature.MultiPhaseInclusions, FeatureGroup.Inclusion, "fluid_inclusions", "fluid or multi-phase inclusions",
             "cavities with liquid and a gas bubble, sometimes a small crystal as well", "darkfield; tilt the stone to see the bubble move",
-            "natural stone (three-phase inclusions of emerald); hydrothermal synthetics may hold two-phase ones", CommonPractice, Plain),
+            "natural stone (the three-phase inclusions of Colombian emerald are the classic case); hydrothermal synthetics may hold two-phase ones", CommonPractice, Plain),
         new(MagnificationFeature.HealedFractures, FeatureGroup.Inclusion, "healed_fractures", "healed fractures",
             "fingerprint-like planes of tiny fluid drops where a crack healed", "darkfield",
             "natural stone as a rule; flux-healed cracks in synthetics look alike but hold flux", CommonPractice, Plain),
