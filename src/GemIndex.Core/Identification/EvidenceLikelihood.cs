@@ -435,7 +435,7 @@ public static class EvidenceLikelihood
     private static void Absorption(MaterialProfile profile, IReadOnlyList<double> seen, EvidenceAccumulator acc)
     {
         Material m = profile.Material;
-        double logF = AbsorptionLines.LogLikelihood(m.AbsorptionLines, profile.LineGroups, seen, out int unexplained, out int missedStrong);
+        double logF = AbsorptionLines.LogLikelihood(m.AbsorptionLines, profile.LineGroups, seen, profile.UnexplainedLineRate, out int unexplained, out int missedStrong);
         double logG = AbsorptionLines.LogBroad(seen);
         double tail = acc.Fitting ? Math.Pow(UnexplainedLineFit, unexplained) * Math.Pow(1 - AbsorptionLines.Detection(LineStrength.Strong), missedStrong) : 1;
         acc.AddLog(BenchField.Absorption, logF, logG, tail, robust: false, EvidenceAccumulator.ChromophoreGroup);

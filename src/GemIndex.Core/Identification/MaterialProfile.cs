@@ -33,7 +33,11 @@ public sealed class MaterialProfile
         UvLong = new FluorescenceTable(material.UvLong);
         UvShort = new FluorescenceTable(material.UvShort);
         LineGroups = AbsorptionLines.Groups(material.AbsorptionLines);
+        UnexplainedLineRate = AbsorptionLines.UnexplainedLineRate(material, ColourHues);
     }
+
+    /// <summary>The rate of seen lines its listed lines do not explain (<see cref="AbsorptionLines.UnexplainedLineRate"/>).</summary>
+    internal double UnexplainedLineRate { get; }
 
     /// <summary>Its listed absorption lines as the hand spectroscope shows them: groups within the resolution, each one line.</summary>
     internal IReadOnlyList<int[]> LineGroups { get; }

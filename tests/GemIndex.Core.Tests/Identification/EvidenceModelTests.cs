@@ -486,4 +486,22 @@ public class EvidenceModelTests
         Assert.Equal("high", result.Candidates[0].Material.Name);
         Assert.False(result.NoGoodMatch);
     }
+
+    [Fact]
+    public void A_line_seen_on_a_coloured_entry_that_lists_none_is_likelier_than_a_stray_on_a_colourless_or_listed_one()
+    {
+        // Most entries carry no spectrum in the catalogue at all (docs/ranking.md §2): on a coloured one a line seen may be
+        // its own, unlisted; a colourless entry has no chromophore, and an entry with listed lines has its known ones.
+        Material Entry(string[] colours, AbsorptionLine[] lines) => new()
+        {
+            Name = "e", Species = "e", Variety = "e", Origin = OriginClass.Natural, CrystalSystem = CrystalSystem.Cubic,
+            Indices = OpticalIndices.SingleIndex(new(1.50, 1.52), OpticCharacter.Isotropic), SpecificGravity = new(2.5, 2.6),
+            Colours = colours, AbsorptionLines = lines,
+        };
+        Assert.Equal(AbsorptionLines.NoLinesListedRate, AbsorptionLines.UnexplainedLineRate(Entry(["green"], []), ["green"]));
+        Assert.Equal(AbsorptionLines.NoLinesListedRate, AbsorptionLines.UnexplainedLineRate(Entry([], []), []));
+        Assert.Equal(AbsorptionLines.SpuriousLineRate, AbsorptionLines.UnexplainedLineRate(Entry(["colourless"], []), ["colourless"]));
+        Assert.Equal(AbsorptionLines.SpuriousLineRate, AbsorptionLines.UnexplainedLineRate(Entry(["green"], [new(683)]), ["green"]));
+        Assert.True(AbsorptionLines.NoLinesListedRate > AbsorptionLines.SpuriousLineRate);
+    }
 }

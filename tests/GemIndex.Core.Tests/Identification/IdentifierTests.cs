@@ -55,22 +55,32 @@ public class IdentifierTests
     [Fact]
     public void A_reading_strongly_against_the_leader_is_named_in_a_warning()
     {
-        // Quartz series (ω 1.544, ε 1.553, from memory) with lines at 694 and 659 nm, which quartz never shows (its entry
-        // lists none): quartz still leads on the refractometer, and the lines are named as the reading to re-check.
+        // Quartz series (ω 1.544, ε 1.553, from memory) with lines at 694 and 659 nm, which colourless quartz never shows (its
+        // entry lists none, and a colourless stone has no chromophore to give one): quartz still leads on the
+        // refractometer, and the lines are named as the reading to re-check.
+        var engine = new Identifier([.. Catalogue.Select(m => m.Name == "rock crystal" ? m with { Colours = ["colourless"] } : m)]);
         var sheet = new BenchSheet
         {
             Refractometer = Facet((0, 1.544, 1.553), (30, 1.544, 1.552), (60, 1.544, 1.550), (90, 1.544, 1.548), (120, 1.544, 1.549), (150, 1.544, 1.551)),
             AbsorptionLinesNanometres = [694, 659],
-            Colour = "purple",   // a colour outside the entry's list names another variety, never a misreading
+            Colour = "colourless",
         };
-        var result = Engine.Identify(sheet, explainTop: 0);
+        var result = engine.Identify(sheet, explainTop: 0);
         Assert.Equal("quartz", result.Candidates[0].Material.Species);
         string warning = Assert.Single(result.Warnings, w => w.StartsWith("Unusual for", StringComparison.Ordinal));
         Assert.StartsWith("Unusual for rock crystal, hand spectroscope (absorption lines): lines seen at 694, 659 nm", warning);
         Assert.DoesNotContain(result.Warnings, w => w.StartsWith("No readings", StringComparison.Ordinal));
         // Without the lines nothing speaks against quartz: no such warning.
-        var clean = Engine.Identify(sheet with { AbsorptionLinesNanometres = null }, explainTop: 0);
+        var clean = engine.Identify(sheet with { AbsorptionLinesNanometres = null }, explainTop: 0);
         Assert.DoesNotContain(clean.Warnings, w => w.StartsWith("Unusual for", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void A_colour_outside_the_leaders_list_names_another_variety_and_is_never_called_a_misreading()
+    {
+        // Any weight and tail: a colour against the leader is never named as the reading to re-check, whatever else is.
+        Assert.False(BenchWarnings.SpeaksAgainst(GemIndex.Core.Bench.BenchField.Colour, -20, agrees: false));
+        Assert.True(BenchWarnings.SpeaksAgainst(GemIndex.Core.Bench.BenchField.Absorption, -20, agrees: false));
     }
 
     [Fact]
