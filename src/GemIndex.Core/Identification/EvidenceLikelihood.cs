@@ -63,7 +63,7 @@ public static class EvidenceLikelihood
         if (s.Magnification is { IsEmpty: false } look)
         {
             // docs/ranking.md, "Magnification": "not in the catalogue" is the natural/imitation average.
-            var expected = material.MagnificationProfile;
+            var expected = profile.Magnification;
             // The cut's implied absences weigh in the likelihood; with no look taken by hand the test stays out of the fit,
             // where a tail of 1 would only raise every candidate's combined fit.
             acc.AddLog(BenchField.Magnification, MagnificationEvidence.LogLikelihood(look, expected), sheet.LogBroadLook,

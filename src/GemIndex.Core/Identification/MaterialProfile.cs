@@ -34,7 +34,11 @@ public sealed class MaterialProfile
         UvShort = new FluorescenceTable(material.UvShort);
         LineGroups = AbsorptionLines.Groups(material.AbsorptionLines);
         UnexplainedLineRate = AbsorptionLines.UnexplainedLineRate(material, ColourHues);
+        Magnification = material.MagnificationProfile;
     }
+
+    /// <summary>Its magnification profile, with the doubling its birefringence gives, made once per catalogue (not per stone).</summary>
+    internal Magnification.MagnificationProfile Magnification { get; }
 
     /// <summary>The rate of seen lines its listed lines do not explain (<see cref="AbsorptionLines.UnexplainedLineRate"/>).</summary>
     internal double UnexplainedLineRate { get; }
