@@ -90,21 +90,31 @@ internal sealed class BenchModel
     /// turn (the edges repeat every 180°, so 180° would read 0° again); once that rotation has been read, the middle of
     /// the widest gap left between the rotations read, which makes the series denser where it is thinnest.
     /// </summary>
-    public string NextRotation()
+    public string NextRotation() => NextRotationOffer().Rotation;
+
+    /// <summary>
+    /// Whether the rotation offered next fills a gap of a half turn already read round, rather than going on by the
+    /// rotation step (the edit line says so: a reading meant for 180° had gone in at 15° unremarked).
+    /// </summary>
+    public bool NextRotationFillsGap => NextRotationOffer().FillsGap;
+
+    private (string Rotation, bool FillsGap) NextRotationOffer()
     {
-        if (_steps.Count == 0) return "0";
-        if (!double.TryParse(_steps[^1].Rotation, NumberStyles.Float, CultureInfo.InvariantCulture, out double last)) return "";
+        if (_steps.Count == 0) return ("0", false);
+        if (!double.TryParse(_steps[^1].Rotation, NumberStyles.Float, CultureInfo.InvariantCulture, out double last)) return ("", false);
         double next = ((last + RotationStep) % 180 + 180) % 180;
         var read = _steps.Select(st => double.TryParse(st.Rotation, NumberStyles.Float, CultureInfo.InvariantCulture, out double r) ? ((r % 180) + 180) % 180 : double.NaN)
             .Where(r => !double.IsNaN(r)).Distinct().Order().ToList();
+        bool fillsGap = false;
         if (read.Any(r => Math.Abs(r - next) < 0.01 || Math.Abs(r - next) > 179.99))
         {
+            fillsGap = true;
             // The widest gap, the one across 180° included: its middle, on the half turn.
             var gaps = read.Select((r, i) => (Start: r, Width: (i + 1 < read.Count ? read[i + 1] : read[0] + 180) - r)).ToList();
             var widest = gaps.MaxBy(g => g.Width);
             next = (widest.Start + widest.Width / 2) % 180;
         }
-        return next.ToString("0.##", CultureInfo.InvariantCulture);
+        return (next.ToString("0.##", CultureInfo.InvariantCulture), fillsGap);
     }
 
     /// <summary>Bumps <see cref="Version"/> without an edit, so that results worked out before (with an older catalogue) count as stale.</summary>

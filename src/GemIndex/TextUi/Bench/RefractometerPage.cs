@@ -40,6 +40,7 @@ internal sealed class RefractometerPage : BenchPage
         Grid = new ListView { X = 0, Y = NextRow(GridRows), Width = Dim.Fill(), Height = GridRows };
         Grid.SetSource(_rows);
         Add(Rotation, Low, High, Editing, Grid);
+        Rotation.TextChanged += (_, _) => ShowNote();   // a rotation typed over the offer is the examiner's own
         Grid.HasFocusChanged += (_, _) => WrapProblems();
         Grid.ValueChanged += (_, _) => WrapProblems();
         AddField(BenchFields.Spot, "Spot reading", 8, "curved stones");
@@ -129,9 +130,19 @@ internal sealed class RefractometerPage : BenchPage
         Rotation.Text = step?.Rotation ?? nextRotation;
         Low.Text = step?.Low ?? "";
         High.Text = step?.High ?? "";
-        Editing.Text = index is { } i ? $"editing step {i + 1}" : "";
+        ShowNote();
         Low.SetFocus();
     }
+
+    /// <summary>Whether the rotation offered next fills a gap of a half turn already read (the window's model knows).</summary>
+    public Func<bool>? OfferFillsGap { get; set; }
+
+    /// <summary>The word beside the edit line's boxes: the step being edited, or that the offered rotation fills a gap.</summary>
+    public const string FillsGapNote = "fills gap";
+
+    private void ShowNote() =>
+        Editing.Text = _editing is { } i ? $"editing step {i + 1}"
+            : _offeredRotation is not null && Rotation.Text == _offeredRotation && OfferFillsGap?.Invoke() == true ? FillsGapNote : "";
 
     /// <summary>The rotation offered for a new step, while the examiner has not typed another (null: none offered).</summary>
     private string? _offeredRotation;
@@ -145,6 +156,7 @@ internal sealed class RefractometerPage : BenchPage
         if (_editing is not null || _offeredRotation is null || Rotation.Text != _offeredRotation) return;
         _offeredRotation = nextRotation;
         Rotation.Text = nextRotation;
+        ShowNote();
     }
 
     public void ShowSteps(IReadOnlyList<StepText> steps, IReadOnlyDictionary<string, string> errors)

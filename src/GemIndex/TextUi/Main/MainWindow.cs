@@ -252,6 +252,7 @@ internal sealed class MainWindow : Window
         };
         foreach (BenchPage page in Pages) page.KeyNotTaken += said => _keyLine.Text = said;
         RefractometerPage rf = Refractometer;
+        rf.OfferFillsGap = () => _session.Form.NextRotationFillsGap;
         rf.StepField.Edit.TextChanged += (_, _) =>
         {
             if (!_filling) rf.OfferRotation(_session.Form.NextRotation());

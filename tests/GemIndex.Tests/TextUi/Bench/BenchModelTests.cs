@@ -14,6 +14,7 @@ public class BenchModelTests
         form.PutStep(0, new StepText("0", "1.544", "1.553"));
         form.PutStep(1, new StepText("30", "1.544", "1.552"));
         Assert.Equal("45", form.NextRotation());
+        Assert.False(form.NextRotationFillsGap);
     }
 
     [Fact]
@@ -24,6 +25,7 @@ public class BenchModelTests
         form.SetText(RefractometerPage.RotationStepField, "22.5");
         for (int i = 0; i < 8; i++) form.PutStep(i, new StepText((i * 22.5).ToString(System.Globalization.CultureInfo.InvariantCulture), "1.761", "1.768"));
         Assert.Equal("11.25", form.NextRotation());   // 0–157.5° read: the middle of the first of the equal gaps
+        Assert.True(form.NextRotationFillsGap);        // and the edit line says so
         var some = new BenchModel();
         some.SetText(RefractometerPage.RotationStepField, "45");
         some.PutStep(0, new StepText("0", "1.544", "1.553"));
@@ -32,6 +34,7 @@ public class BenchModelTests
         var beyond = new BenchModel();
         beyond.PutStep(0, new StepText("200", "1.544", "1.553"));
         Assert.Equal("35", beyond.NextRotation());    // round the half turn (200 + 15 = 215 → 35)
+        Assert.False(beyond.NextRotationFillsGap);
     }
 
     [Fact]

@@ -945,6 +945,24 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void Past_a_half_turn_the_edit_line_says_the_rotation_offered_fills_a_gap()
+    {
+        // Six steps of 30° read the half turn round; the next offer, 15°, fills a gap (180° is 0° again), and the edit line
+        // says so: a reading meant for 180° had gone in at 15° unremarked. A rotation typed over the offer drops the note.
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        _session.Form.SetText(RefractometerPage.RotationStepField, "30");
+        window.Refractometer.OfferRotation(_session.Form.NextRotation());
+        TypeSteps(app, ("1.616", "1.621"), ("1.617", "1.622"), ("1.618", "1.623"), ("1.617", "1.622"), ("1.616", "1.621"), ("1.616", "1.622"));
+        Settle();
+        Assert.Equal("15", window.Refractometer.Rotation.Text);
+        Assert.Equal(RefractometerPage.FillsGapNote, window.Refractometer.Editing.Text);
+        window.Refractometer.Rotation.Text = "180";
+        Assert.Equal("", window.Refractometer.Editing.Text);
+        Close(app, window, token);
+    }
+
+    [Fact]
     public void An_edit_of_a_stored_step_interrupted_by_a_closed_terminal_comes_back_as_that_edit()
     {
         var (app, window, token) = Open();
