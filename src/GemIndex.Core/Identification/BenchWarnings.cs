@@ -89,6 +89,10 @@ public static class BenchWarnings
             warnings.Add(r.Steps.Count > 0
                 ? $"Over the limit: the high edge lies above the liquid's {r.LiquidLimit.ToString("0.00", CultureInfo.InvariantCulture)}; only the low edge was read, so the highest index is only known to be higher. {OverLimitHelp(sheet.Sheet)} can go further."
                 : $"Over the limit: no stone edge below {r.LiquidLimit.ToString("0.00", CultureInfo.InvariantCulture)}; the index is only known to be higher. {OverLimitHelp(sheet.Sheet)} can go further.");
+        // A spot reading is the method for curved surfaces; a faceted stone's table gives the sharp edges of a rotation series
+        // (common practice), which tell far more (the optic character, the birefringence).
+        if (sheet.Sheet.Refractometer is { Spot: not null, Steps.Count: 0 } && sheet.Sheet.Cut == StoneCut.Faceted)
+            warnings.Add("A spot reading on a faceted stone: a facet (the table) gives sharp shadow edges; read them as the stone turns, which the answer weighs far more than a spot.");
         if (sheet.Sheet.SpecificGravity is { } measured)
             foreach (var h in sheet.Sheet.HeavyLiquids.Where(h => Contradicts(measured, h)))
                 warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");

@@ -84,6 +84,17 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_spot_reading_on_a_faceted_stone_advises_the_table_s_sharp_edges()
+    {
+        // Common practice: the spot method is for curved surfaces; a faceted stone's table gives a rotation series.
+        var spot = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Spot, spot: 1.72), SpecificGravity = new(3.60, 0.01) };
+        static bool Advises(IdentificationResult r) => r.Warnings.Any(w => w.StartsWith("A spot reading on a faceted stone", StringComparison.Ordinal));
+        Assert.True(Advises(Engine.Identify(spot with { Cut = StoneCut.Faceted })));
+        Assert.False(Advises(Engine.Identify(spot)));
+        Assert.False(Advises(Engine.Identify(spot with { Cut = StoneCut.Cabochon })));
+    }
+
+    [Fact]
     public void Species_totals_cover_the_whole_catalogue_and_split_by_origin()
     {
         // Corundum ω 1.770, ε 1.762 (common practice): natural and synthetic sapphire share the species' total.
