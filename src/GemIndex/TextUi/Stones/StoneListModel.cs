@@ -68,11 +68,25 @@ internal sealed class StoneListModel
     /// <summary>The answer column's width: what the list's width leaves (at 120 columns a long species name and its share fit).</summary>
     public int AnswerWidth { get; private set; } = NarrowestAnswer;
 
-    /// <summary>The width of the list's rows; the answer column takes what the other columns leave.</summary>
-    public int Width { set => AnswerWidth = Math.Max(NarrowestAnswer, value - OtherColumns); }
+    /// <summary>The colour column's narrowest width, and how much wider it grows once the answer has 40 columns (judgement).</summary>
+    public const int NarrowestColour = 14, ColourGrowth = 10;
+
+    /// <summary>The colour column's width: 14, and up to 24 on a wide screen ("yellowish green" was cut even at 120 columns).</summary>
+    public int ColourWidth { get; private set; } = NarrowestColour;
+
+    /// <summary>The width of the list's rows; the answer column takes what the other columns leave, the colour column a little of a wide screen's.</summary>
+    public int Width
+    {
+        set
+        {
+            int free = value - OtherColumns;
+            ColourWidth = NarrowestColour + Math.Clamp(free - 40, 0, ColourGrowth);
+            AnswerWidth = Math.Max(NarrowestAnswer, free - (ColourWidth - NarrowestColour));
+        }
+    }
 
     /// <summary>The columns' names over the list, in the columns of <see cref="Line"/>.</summary>
-    public string Heading => $"{"Reference",-18} {"Colour",-14} {"Weight",9} {"Answer".PadRight(AnswerWidth)} Changed (UTC)";
+    public string Heading => $"{"Reference",-18} {"Colour".PadRight(ColourWidth)} {"Weight",9} {"Answer".PadRight(AnswerWidth)} Changed (UTC)";
 
     /// <summary>
     /// The stones whose answers are not known yet (none without an answer function): the shown ones first, in the order
@@ -99,11 +113,11 @@ internal sealed class StoneListModel
 
     /// <summary>One stone's line, with its answer, or <see cref="Pending"/> while it is worked out.</summary>
     public string LineOf(StoneSummary s) =>
-        Line(s, answer is null ? "" : _answers.TryGetValue((s.Id, s.Modified), out string? text) ? text ?? "" : Pending, AnswerWidth);
+        Line(s, answer is null ? "" : _answers.TryGetValue((s.Id, s.Modified), out string? text) ? text ?? "" : Pending, AnswerWidth, ColourWidth);
 
     /// <summary>One stone: reference, colour, weight, answer, day of the last change (UTC, as the workbook stores it; F3 shows the times).</summary>
-    public static string Line(StoneSummary s, string answer, int answerWidth = NarrowestAnswer) =>
-        $"{Results.ResultText.Clip(s.Reference.Length == 0 ? "(no reference)" : s.Reference, 18),-18} {Results.ResultText.Clip(s.Colour, 14),-14} "
+    public static string Line(StoneSummary s, string answer, int answerWidth = NarrowestAnswer, int colourWidth = NarrowestColour) =>
+        $"{Results.ResultText.Clip(s.Reference.Length == 0 ? "(no reference)" : s.Reference, 18),-18} {Results.ResultText.Clip(s.Colour, colourWidth).PadRight(colourWidth)} "
         + $"{(s.WeightCarats is { } w ? w.ToString("0.00", CultureInfo.InvariantCulture) + " ct" : ""),9} {Results.ResultText.Clip(answer, answerWidth).PadRight(answerWidth)} "
         + s.Modified.ToUniversalTime().ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
 }

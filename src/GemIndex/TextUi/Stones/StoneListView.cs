@@ -48,9 +48,9 @@ internal sealed class StoneListView : FullScreenDialog
         // The answer column widens with the screen (a long species name and its share were cut at 18 characters).
         ViewportChanged += (_, _) =>
         {
-            int before = _model.AnswerWidth;
+            (int, int) before = (_model.AnswerWidth, _model.ColourWidth);
             _model.Width = Viewport.Width;
-            if (_model.AnswerWidth == before) return;
+            if ((_model.AnswerWidth, _model.ColourWidth) == before) return;
             heading.Text = _model.Heading;
             ShowMatches();
         };

@@ -23,7 +23,7 @@ public class StoneListModelTests
 
     [Theory]
     [InlineData(78, 20)]     // 80 columns inside the frame
-    [InlineData(118, 60)]    // 120 columns: a long species name and its share fit
+    [InlineData(118, 50)]    // 120 columns: a long species name and its share fit, and the colour column has ten more
     public void The_answer_column_takes_the_width_the_other_columns_leave(int width, int answerWidth)
     {
         var stone = new StoneSummary(7, "lot 9", "red", 1.2, Noon);
@@ -34,6 +34,20 @@ public class StoneListModelTests
         Assert.Equal(model.Heading.IndexOf("Changed", StringComparison.Ordinal), line.IndexOf("2026-12-03", StringComparison.Ordinal));
         Assert.True(line.Length <= width, $"{line.Length}: {line}");
         Assert.Equal(answerWidth >= 27, line.Contains("pyrope-almandine garnet 88%", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void A_long_colour_is_whole_on_a_wide_screen_and_cut_at_80_columns()
+    {
+        var stone = new StoneSummary(7, "lot 9", "yellowish green", 1.2, Noon);
+        var wide = new StoneListModel(_ => [stone], _ => "forsterite >99%: peridot") { Width = 118 };
+        wide.Store(stone, wide.Compute(7)!);
+        Assert.Contains("yellowish green ", wide.LineOf(stone), StringComparison.Ordinal);
+        Assert.Equal(wide.Heading.IndexOf("Weight", StringComparison.Ordinal) + "Weight".Length, wide.LineOf(stone).IndexOf(" ct", StringComparison.Ordinal) + " ct".Length);
+        var narrow = new StoneListModel(_ => [stone], _ => "forsterite >99%: peridot") { Width = 78 };
+        narrow.Store(stone, narrow.Compute(7)!);
+        Assert.DoesNotContain("yellowish green", narrow.LineOf(stone), StringComparison.Ordinal);
+        Assert.True(narrow.LineOf(stone).Length <= 78);
     }
 
     [Fact]
