@@ -52,10 +52,12 @@ internal static class StoneHistoryText
 
     /// <summary>A stored number of a field in <see cref="NumberFormats"/> to the places it is read to; anything else as it is.</summary>
     private static string? AsRead(string field, string? value) =>
-        value is not null && NumberFormats.TryGetValue(field[(field.LastIndexOf('.') + 1)..], out string? format)
-            && double.TryParse(value, NumberStyles.Float, CultureInfo.InvariantCulture, out double number)
-            ? number.ToString(format, CultureInfo.InvariantCulture)
-            : value;
+        value is not null && double.TryParse(value, NumberStyles.Float, CultureInfo.InvariantCulture, out double number)
+            && AsRead(field, number) is { } read ? read : value;
+
+    /// <summary>A number of a field (a path's last part names it) in <see cref="NumberFormats"/>, to its places; null for another field.</summary>
+    private static string? AsRead(string field, double number) =>
+        NumberFormats.TryGetValue(field[(field.LastIndexOf('.') + 1)..], out string? format) ? number.ToString(format, CultureInfo.InvariantCulture) : null;
 
     private static string Change(string what, string? before, string? after) =>
         (before ?? "", after ?? "") switch
@@ -147,8 +149,8 @@ internal static class StoneHistoryText
                 break;
             case JsonValueKind.True: map[path] = "yes"; break;
             case JsonValueKind.False: map[path] = "no"; break;
-            case JsonValueKind.Number when NumberFormats.TryGetValue(path[(path.LastIndexOf('.') + 1)..], out string? format):
-                map[path] = e.GetDouble().ToString(format, CultureInfo.InvariantCulture);
+            case JsonValueKind.Number when AsRead(path, e.GetDouble()) is { } read:
+                map[path] = read;
                 break;
             default: map[path] = e.GetRawText(); break;
         }

@@ -158,11 +158,7 @@ public sealed class MainWindowTests : IDisposable
     {
         // A water temperature of 22 overtyped by mistake with a heavy liquid's words: Ctrl+Z brings the 22 back (the
         // box's own keystroke history went back through older values and never to it), a second Ctrl+Z the words.
-        using IApplication app = Headless.Start();
-        using var window = new MainWindow(_session, TestMaterials.All);
-        _session.Start();
-        window.FillFromModel();
-        SessionToken token = app.Begin(window)!;
+        var (app, window, token) = Open();
         window.ShowPage(2);
         Type(app, "2.65");
         app.InjectKey(Key.Tab);             // weight in air
@@ -181,7 +177,7 @@ public sealed class MainWindowTests : IDisposable
         app.InjectKey(Key.Z.WithCtrl);
         Settle();
         Assert.Equal("3.32 float", _session.Form.Text(BenchFields.WaterC));
-        app.End(token);
+        Close(app, window, token);
     }
 
     [Fact]
@@ -189,11 +185,7 @@ public sealed class MainWindowTests : IDisposable
     {
         // The transparency typed on the stone's page: an opaque stone's light-through tests say so on F5 (the command line's
         // "no polariscope, dichroscope or fire is advised" had no counterpart in the text UI); the other tests keep their keys.
-        using IApplication app = Headless.Start();
-        using var window = new MainWindow(_session, TestMaterials.All);
-        _session.Start();
-        window.FillFromModel();
-        SessionToken token = app.Begin(window)!;
+        var (app, window, token) = Open();
         window.ShowPage(0);
         window.Pages[0].Fields.Single(f => f.Field == BenchFields.Transparency).Edit.SetFocus();
         Type(app, "opaque");
@@ -213,7 +205,7 @@ public sealed class MainWindowTests : IDisposable
         transparency.Text = "transparent";
         Settle();
         Assert.DoesNotContain(TestsPage.OpaqueNote, Line(BenchFields.Polariscope));
-        app.End(token);
+        Close(app, window, token);
     }
 
     [Fact]
@@ -385,6 +377,15 @@ public sealed class MainWindowTests : IDisposable
         SessionToken token = app.Begin(window)!;
         app.LayoutAndDraw();
         return (app, window, token);
+    }
+
+    /// <summary>From the refractometer page's edit line: down to the list of steps, and Enter on the first to edit it.</summary>
+    private static void EditFirstStep(IApplication app)
+    {
+        app.InjectKey(Key.Tab);
+        app.InjectKey(Key.Tab);
+        app.InjectKey(Key.Home);
+        app.InjectKey(Key.Enter);
     }
 
     /// <summary>Closes the window and the headless application opened by <see cref="Open"/>.</summary>
@@ -923,20 +924,14 @@ public sealed class MainWindowTests : IDisposable
         var (app, window, token) = Open();
         app.InjectKey(Key.F3);
         TypeSteps(app, ("1.616", "1.621"), ("1.617", "1.622"));
-        app.InjectKey(Key.Tab);
-        app.InjectKey(Key.Tab);            // the list of steps
-        app.InjectKey(Key.Home);
-        app.InjectKey(Key.Enter);          // edit step 1
+        EditFirstStep(app);
         window.Refractometer.Low.Text = "";
         Type(app, "1.618 1.623");
         app.InjectKey(Key.Enter);
         Settle();
         Assert.Equal(2, _session.Form.Steps.Count);
         Assert.Equal(("1.618", "1.623"), (_session.Form.Steps[0].Low, _session.Form.Steps[0].High));
-        app.InjectKey(Key.Tab);
-        app.InjectKey(Key.Tab);
-        app.InjectKey(Key.Home);
-        app.InjectKey(Key.Enter);          // edit step 1 again, the pair pasted whole in the low box
+        EditFirstStep(app);                // again, the pair pasted whole in the low box
         window.Refractometer.Low.Text = "1.619 1.624";
         window.Refractometer.Low.NewKeyDownEvent(Key.Enter);
         Settle();
@@ -968,10 +963,7 @@ public sealed class MainWindowTests : IDisposable
         var (app, window, token) = Open();
         app.InjectKey(Key.F3);
         TypeSteps(app, ("1.616", "1.621"), ("1.617", "1.622"));
-        app.InjectKey(Key.Tab);
-        app.InjectKey(Key.Tab);            // the list of steps
-        app.InjectKey(Key.Home);
-        app.InjectKey(Key.Enter);          // edit step 1
+        EditFirstStep(app);
         window.Refractometer.Low.Text = "1.618";
         Settle();
         Close(app, window, token);
