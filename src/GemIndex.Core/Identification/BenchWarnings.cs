@@ -93,6 +93,10 @@ public static class BenchWarnings
         // (common practice), which tell far more (the optic character, the birefringence).
         if (sheet.Sheet.Refractometer is { Spot: not null, Steps.Count: 0 } && sheet.Sheet.Cut == StoneCut.Faceted)
             warnings.Add("A spot reading on a faceted stone: a facet (the table) gives sharp shadow edges; read them as the stone turns, which the answer weighs far more than a spot.");
+        // The same rotation read twice (not a half turn apart, which confirms a reading): both are weighed as two looks
+        // at one orientation; a second reading meant to correct the first should replace it.
+        if (sheet.Sheet.Refractometer is { Steps.Count: > 1 } read && RepeatedRotations(read.Steps) is { Count: > 0 } repeated)
+            warnings.Add($"Rotation {Listed([.. repeated.Select(a => a.ToString("0.#", CultureInfo.InvariantCulture) + "°")])} read more than once: the answer weighs every reading as another look at that orientation; if a later one corrects an earlier, replace it.");
         if (sheet.Sheet.SpecificGravity is { } measured)
             foreach (var h in sheet.Sheet.HeavyLiquids.Where(h => Contradicts(measured, h)))
                 warnings.Add($"SG {measured.Value.ToString("0.00", CultureInfo.InvariantCulture)} and the heavy liquid {h.Liquid.Value.ToString("0.00", CultureInfo.InvariantCulture)} ({EvidenceLikelihood.Word(h.Outcome)}) disagree: a stone of that SG would {Expected(measured, h)} in it. Check both; the answer weighs both as read.");
@@ -193,6 +197,10 @@ public static class BenchWarnings
     /// every reading of the series that has a sign gives the one the leader lacks; else null. A summary of the readings
     /// for the bench to re-check, never evidence: the ranking weighs the raw readings.
     /// </summary>
+    /// <summary>The rotation angles read at more than one step (within a hundredth of a degree), in the order first read.</summary>
+    internal static List<double> RepeatedRotations(IReadOnlyList<ShadowEdgeStep> steps) =>
+        [.. steps.Select(x => x.RotationDegrees).Where((a, i) => steps.Take(i).Count(x => Math.Abs(x.RotationDegrees - a) < 0.01) == 1)];
+
     private static string? SignClash(RotationSeriesResult? series, IReadOnlyList<RankedCandidate> candidates)
     {
         Material leader = candidates[0].Material;

@@ -95,6 +95,20 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_rotation_read_twice_is_named_and_a_half_turn_is_not()
+    {
+        // Quartz ω 1.544, ε 1.553 (Handbook of Mineralogy, from memory). A half turn shows the same section again
+        // (common practice: 180° confirms 0°); the same angle read twice is a second look, named so that a correction
+        // meant to replace the first is not weighed beside it.
+        static string? Named(RefractometerObservation r) =>
+            Engine.Identify(new BenchSheet { Refractometer = r }).Warnings.SingleOrDefault(w => w.StartsWith("Rotation ", StringComparison.Ordinal));
+        Assert.Equal("Rotation 0° read more than once: the answer weighs every reading as another look at that orientation; if a later one corrects an earlier, replace it.",
+            Named(Facet((0, 1.544, 1.553), (0, 1.545, 1.553), (45, 1.544, 1.549))));
+        Assert.StartsWith("Rotation 0° and 22.5° read more than once", Named(Facet((0, 1.544, 1.553), (22.5, 1.544, 1.551), (0, 1.545, 1.553), (22.5, 1.544, 1.552), (0, 1.544, 1.553))));
+        Assert.Null(Named(Facet((0, 1.544, 1.553), (90, 1.544, 1.549), (180, 1.544, 1.553))));
+    }
+
+    [Fact]
     public void Species_totals_cover_the_whole_catalogue_and_split_by_origin()
     {
         // Corundum ω 1.770, ε 1.762 (common practice): natural and synthetic sapphire share the species' total.
