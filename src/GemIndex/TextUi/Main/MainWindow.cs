@@ -138,13 +138,26 @@ internal sealed class MainWindow : Window
 
     private static IReadOnlyList<string> PageNames => BenchFields.PageNames;
 
+    /// <summary>The other screens' keys, on the page bar beside the pages (F1 lists every key).</summary>
+    internal const string OtherScreens = "F6 plot  F7 catalogue  F8 stones";
+
+    /// <summary>The page bar: the pages, the current one in brackets, then the other screens' keys as far as they fit.</summary>
+    internal static string PageBarText(int current, int columns)
+    {
+        string pages = string.Join(" ", PageNames.Select((n, i) => i == current ? $"[{n}]" : $" {n} "));
+        foreach (string others in new[] { OtherScreens, OtherScreens.Replace("  ", " ", StringComparison.Ordinal) })
+            if (pages.Trim().Length + 3 + others.Length <= columns) return pages.Trim() + " │ " + others;
+        return pages;
+    }
+
+    /// <summary>The page whose name (with a column either side) is at column x of the page bar, or −1.</summary>
     private int PageAt(int x)
     {
-        int at = 0;
+        string bar = _pageBar.Text;
         for (int i = 0; i < PageNames.Count; i++)
         {
-            at += PageNames[i].Length + 3;
-            if (x < at) return i;
+            int start = bar.IndexOf(PageNames[i], StringComparison.Ordinal);
+            if (start >= 0 && x >= start - 1 && x <= start + PageNames[i].Length) return i;
         }
         return -1;
     }
@@ -180,8 +193,10 @@ internal sealed class MainWindow : Window
 
     private void ShowBars()
     {
-        _pageBar.Text = string.Join(" ", PageNames.Select((n, i) => i == CurrentPage ? $"[{n}]" : $" {n} "))
-            + $"  {_session.Form.Text(BenchFields.Reference)}";
+        _pageBar.Text = PageBarText(CurrentPage, Math.Max(MinimumColumns, Viewport.Width));
+        // The stone's reference heads its answer: the page bar's room goes to the screens beside the pages.
+        string reference = _session.Form.Text(BenchFields.Reference).Trim();
+        Results.Title = ResultsView.Name + " (F10)" + (reference.Length > 0 ? " for " + reference : "");
         _keyLine.Text = _session.SaveProblem ?? KeysNow();
     }
 

@@ -21,6 +21,7 @@ internal sealed class ResultsView : FrameView
     {
         _model = model;
         Title = Name + " (F10)";
+        HotKeySpecifier = Main.PlainLabel.NoHotKey;   // the title carries the stone's reference, underscores and all
         CanFocus = true;
         List = new ListView { Width = Dim.Fill(), Height = Dim.Fill(), CanFocus = true };
         List.SetSource(_shown);

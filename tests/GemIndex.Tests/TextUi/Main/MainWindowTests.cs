@@ -307,6 +307,21 @@ public sealed class MainWindowTests : IDisposable
         app.End(token);
     }
 
+    [Theory]
+    [InlineData(0)]
+    [InlineData(1)]
+    [InlineData(4)]
+    public void The_page_bar_names_the_other_screens_keys_at_80_columns_on_every_page(int page)
+    {
+        // The key line at 80 columns has room for the most used keys only; the plot, catalogue and stones list are named
+        // on the page bar instead, so that no screen is found only through F1.
+        string bar = MainWindow.PageBarText(page, MainWindow.MinimumColumns);
+        Assert.True(bar.Length <= MainWindow.MinimumColumns, bar);
+        Assert.EndsWith("│ F6 plot F7 catalogue F8 stones", bar);
+        Assert.Contains($"[{GemIndex.Cli.TextUi.Bench.BenchFields.PageNames[page]}]", bar);
+        Assert.EndsWith("│ " + MainWindow.OtherScreens, MainWindow.PageBarText(page, 120));
+    }
+
     [Fact]
     public void Ctrl_E_is_left_to_the_window_as_export_rather_than_taken_by_the_text_fields()
     {
@@ -849,14 +864,14 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
-    public void A_reference_with_underscores_shows_them_on_the_page_bar()
+    public void A_reference_with_underscores_shows_them_in_the_answer_s_title()
     {
         var (app, window, token) = Open();
         app.InjectKey(Key.F2);
         Type(app, "lot_7 a_b");
         Settle();
         app.LayoutAndDraw();
-        Assert.Contains("lot_7 a_b", app.Driver!.ToString()!.Split('\n')[0]);   // Terminal.Gui's label would take the first '_' as a hot key
+        Assert.Contains("Answer (F10) for lot_7 a_b", app.Driver!.ToString()!.Split('\n')[1]);   // Terminal.Gui would take the first '_' as a hot key
         Close(app, window, token);
     }
 
