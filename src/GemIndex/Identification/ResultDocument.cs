@@ -83,6 +83,27 @@ internal static class ResultDocument
         w.WriteEndArray();
         w.WriteNumber("not_in_catalogue", Probability(result.NotInCatalogue));
         w.WriteBoolean("no_good_match", result.NoGoodMatch);
+        // What the series alone says of the optic character (a summary, never a gate), worked out only where the reasons
+        // are: a plain batch line skips it for speed.
+        if (explain && result.Series is { } series && result.SeriesCharacter is { } character)
+        {
+            w.WriteStartObject("optic_character");
+            w.WriteNumber("singly_refractive", Probability(character.Isotropic));
+            w.WriteNumber("uniaxial_positive", Probability(character.UniaxialPositive));
+            w.WriteNumber("uniaxial_negative", Probability(character.UniaxialNegative));
+            w.WriteNumber("biaxial", Probability(character.Biaxial));
+            w.WriteString("summary", Reports.ReportDerived.CharacterOdds(character, series: series));
+            w.WriteStartArray("read_as");
+            foreach (var reading in series.Interpretations.Where(i => i.Character is not null))
+            {
+                w.WriteStartObject();
+                w.WriteNumber("share", Probability(reading.Weight));
+                w.WriteString("description", reading.Description);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
         if (result.NextTest is { } next)
         {
             w.WriteStartObject("next_test");

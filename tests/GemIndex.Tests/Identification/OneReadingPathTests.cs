@@ -177,6 +177,27 @@ public class OneReadingPathTests
     }
 
     [Fact]
+    public void The_result_document_gives_the_optic_character_the_text_gives_and_a_plain_batch_line_leaves_it_out()
+    {
+        // Quartz ω 1.544 constant, ε 1.553 (handbook values, from memory): uniaxial positive.
+        using var run = new CommandRun();
+        Stone quartz = Stones[0];
+        var (_, json, _) = CommandRun.Plain(["identify", .. CommandLine(quartz), "--json", "--catalogue-dir", run.Folder]);
+        var (_, text, _) = CommandRun.Plain(["identify", .. CommandLine(quartz), "--catalogue-dir", run.Folder]);
+        using var doc = JsonDocument.Parse(json);
+        JsonElement character = doc.RootElement.GetProperty("optic_character");
+        double positive = character.GetProperty("uniaxial_positive").GetDouble();
+        Assert.True(positive > 0.5, json);
+        Assert.True(positive > character.GetProperty("biaxial").GetDouble() && positive > character.GetProperty("uniaxial_negative").GetDouble());
+        Assert.Contains("Optic character, from the readings alone: " + character.GetProperty("summary").GetString(), text);
+        Assert.StartsWith("uniaxial positive", character.GetProperty("read_as")[0].GetProperty("description").GetString());
+        string file = Path.Combine(run.Folder, "one.jsonl");
+        File.WriteAllText(file, BatchLine(quartz) + "\n", new UTF8Encoding(false));
+        var (_, plain, _) = CommandRun.Plain("identify", "--batch", file, "--catalogue-dir", run.Folder);
+        Assert.DoesNotContain("optic_character", plain);
+    }
+
+    [Fact]
     public void Three_bad_fields_get_three_errors_at_once_in_every_front_end()
     {
         using var run = new CommandRun();
