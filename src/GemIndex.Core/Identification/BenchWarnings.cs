@@ -123,7 +123,7 @@ public static class BenchWarnings
         // The reason, not the entry's notes (an emerald's chromium lines say nothing of why it must stay dry); one line
         // for all such entries, as for the trade rules.
         if ((keepDry ?? [.. relevant.Where(c => c.Material.DoNotImmerse).Select(c => c.Material.Name)]) is { Count: > 0 } dry)
-            warnings.Add($"Possible {Listed(dry)}: do not immerse (no heavy liquids, and no water unless the stone is known to take it) — a porous, soft, filled or organic stone can take in liquid or be harmed, and its SG in a liquid misleads.");
+            warnings.Add($"Possible {KeepDryListed(dry)}: do not immerse (no heavy liquids, and no water unless the stone is known to take it) — a porous, soft, filled or organic stone can take in liquid or be harmed, and its SG in a liquid misleads.");
         // Entries that share a rule (black and golden coral) are named together, the rule said once.
         foreach (var rule in relevant.Where(c => c.Material.TradeRule is not null).GroupBy(c => c.Material.TradeRule!))
             warnings.Add($"Possible {Listed([.. rule.Select(c => c.Material.Name)])}: {rule.Key.Text}. Check the rules where you buy, sell or ship {(rule.Count() > 1 ? "them" : "it")} (a summary, not legal advice).");
@@ -310,6 +310,16 @@ public static class BenchWarnings
         help.Add("a reflectance or prism method");
         return Capital(Listed(help, "or"));
     }
+
+    /// <summary>The stones to keep dry named in a caution, at most this many before "and N more" (judgement: the caution must be read).</summary>
+    public const int KeepDryNamed = 3;
+
+    /// <summary>
+    /// The stones to keep dry, most probable first, the first <see cref="KeepDryNamed"/> by name and the rest counted
+    /// ("amber, copal, pressed amber and 3 more candidates"): six names had made the caution a paragraph.
+    /// </summary>
+    public static string KeepDryListed(IReadOnlyList<string> names) =>
+        names.Count <= KeepDryNamed + 1 ? Listed(names) : string.Join(", ", names.Take(KeepDryNamed)) + $" and {names.Count - KeepDryNamed} more candidates";
 
     /// <summary>Words joined as a list is read: "natural and synthetic", "natural, treated and synthetic".</summary>
     public static string Listed(IReadOnlyList<string> words, string conjunction = "and") =>

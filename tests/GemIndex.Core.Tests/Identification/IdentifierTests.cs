@@ -754,6 +754,15 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_long_list_of_stones_to_keep_dry_names_the_three_likeliest_and_counts_the_rest()
+    {
+        Assert.Equal("amber", BenchWarnings.KeepDryListed(["amber"]));
+        Assert.Equal("amber, copal, pressed amber and heated amber", BenchWarnings.KeepDryListed(["amber", "copal", "pressed amber", "heated amber"]));
+        Assert.Equal("amber, copal, pressed amber and 3 more candidates",
+            BenchWarnings.KeepDryListed(["amber", "copal", "pressed amber", "heated amber", "blue amber", "autoclave-treated copal"]));
+    }
+
+    [Fact]
     public void A_porous_entry_below_the_warnings_share_is_kept_dry_when_its_species_leads()
     {
         // Invented entries alike in every reading: the leading species, of a common porous kind and a rare porous kind (under
