@@ -61,6 +61,8 @@ internal static class LoupeVisibility
         ["join_plane"] = (0.9, 0.8, Place.Girdle),
         ["two_lustres"] = (0.6, 0.6, Place.Girdle),
         ["cement_bubbles"] = (0.7, 0.4, Place.Girdle),
+        // Long straight channels, plain with a loupe when the stone holds them (gemsociety.org: "easy to distinguish").
+        ["growth_tubes"] = (0.8, 0.6, Place.Inside),
     };
 
     /// <summary>
@@ -91,6 +93,11 @@ internal static class LoupeVisibility
         ("flattened_bubbles", "cement_bubbles", 0.1),
         ("cement_bubbles", "flattened_bubbles", 0.2),
         ("healed_fractures", "join_plane", 0.01),
+        // Tubes and drawn-out bubbles or fine needles are told apart by their straight even sides: judgement.
+        ("elongated_bubbles", "growth_tubes", 0.08),
+        ("growth_tubes", "elongated_bubbles", 0.05),
+        ("needles_silk", "growth_tubes", 0.05),
+        ("growth_tubes", "needles_silk", 0.1),
     ];
 
     /// <summary>The magnification words the examiner may look for: the batch format's vocabulary as the benchmark knows it.</summary>

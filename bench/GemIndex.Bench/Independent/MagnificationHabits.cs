@@ -40,6 +40,8 @@ internal static partial class MagnificationHabits
     private const string SpinelInclusions = "gem-matrix.com 'Inclusions in spinel' (octahedral crystals first to look for; fluid inclusions comparatively uncommon); lotusgemology.com 'Inclusions in spinel'";
     private const string SyntheticSpinel = "adin.be 'Synthetic spinel' (occasional globular gas bubbles); gemstones-guide.com 'Synthetic spinel' (Verneuil growth)";
     private const string Amethyst = "orchid.ganoksin.com 'Synthetic quartz gems' (natural amethyst nearly always shows numerous straight and V zones; synthetic seldom); yourgemologist.com hydrothermal amethyst (seed plate, breadcrumbs, seldom seen)";
+    private const string BerylChannels = "Journal of Gemmology 37(3), 2020, Gem Notes (fliphtml5.com copy, p. 12): elongate growth channels and two-phase inclusions parallel to the c axis 'quite common' in beryl from granitic pegmatites";
+    private const string TourmalineMicroFeatures = "gia.edu G&G in a Flash, 'Micro-Features of Tourmaline' (2024): growth tubes among tourmaline's inclusions, dense ones giving a cat's-eye";
     private const string UniqueInclusions = "artsandculture.google.com 'Unique inclusions, unique gems' (Instituto Gemologico Espanol: amethyst tiger stripes, goethite; demantoid horsetail; peridot lily pads; tourmaline trichites)";
     private const string LilyPads = "professionaljeweler.com 'Lilliputian lily pads' (almost always in peridot); learnaboutgemstones.wordpress.com (also mica flakes and droplets)";
     private const string FilledDiamonds = "Gems & Gemology Spring 1995, McClure et al., 'A visual guide to the identification of filled diamonds' (every filled diamond examined showed flash effects; trapped bubbles in some); diamondlab.org";
@@ -115,8 +117,8 @@ internal static partial class MagnificationHabits
             Features = [H("crystals", .6), H("fluid_inclusions", .55), H("healed_fractures", .55), H("needles_silk", .15), H("colour_banding", .2), H("angular_zoning", .15), H("nail_head_spicules", .02)],
             Source = $"{SyntheticInclusionsBlog}; {EmeraldInclusions}; {GgEmeraldChart}; {EmeraldEnhancement}; {NailHead}" },
         new() { Species = "beryl", Origin = "natural", Method = "natural", Clean = .35,
-            Features = [H("fluid_inclusions", .3), H("needles_silk", .25), H("healed_fractures", .3), H("crystals", .15), H("colour_banding", .1)],
-            Source = $"{EmeraldEnhancement}; {InclusionGlossary}" },
+            Features = [H("fluid_inclusions", .3), H("needles_silk", .25), H("healed_fractures", .3), H("crystals", .15), H("colour_banding", .1), H("growth_tubes", .3)],
+            Source = $"{EmeraldEnhancement}; {InclusionGlossary}; {BerylChannels}" },
         new() { Species = "beryl", Origin = "synthetic", Method = "flux", Share = .45, Clean = .05,
             Features = [H("flux_residue", .7), H("crystals", .3), H("metal_platelets", .15), H("angular_zoning", .25), H("nail_head_spicules", .05)],
             Source = $"{SyntheticInclusionsBlog}; {SyntheticEmeraldPages}; {NailHead}" },
@@ -127,7 +129,7 @@ internal static partial class MagnificationHabits
             Features = [H("flash_effect", .5), H("flattened_bubbles", .3), H("dye_in_fractures", .05), H("crystals", .6), H("fluid_inclusions", .5), H("healed_fractures", .5), H("colour_banding", .2)],
             Source = $"{EmeraldEnhancement}; {GgEmeraldChart}; oil shows less flash than resin: judgement" },
         new() { Species = "beryl", Origin = "treated", Method = "heated or irradiated", Clean = .35,
-            Features = [H("fluid_inclusions", .3), H("needles_silk", .25), H("healed_fractures", .3), H("crystals", .15), H("colour_banding", .1)],
+            Features = [H("fluid_inclusions", .3), H("needles_silk", .25), H("healed_fractures", .3), H("crystals", .15), H("colour_banding", .1), H("growth_tubes", .3)],
             Source = "common practice: heating and irradiation of beryl leave nothing a loupe shows; the stone's own features as the natural row" },
 
         // Chrysoberyl.
@@ -167,8 +169,8 @@ internal static partial class MagnificationHabits
             Source = CoatedTopaz },
 
         new() { Species = "tourmaline", Origin = "natural", Method = "natural", Clean = .15,
-            Features = [H("fluid_inclusions", .45), H("healed_fractures", .45), H("colour_banding", .3), H("needles_silk", .15), H("crystals", .1)],
-            Source = $"{UniqueInclusions} (trichites); colour zoning: common practice" },
+            Features = [H("fluid_inclusions", .45), H("healed_fractures", .45), H("colour_banding", .3), H("needles_silk", .15), H("crystals", .1), H("growth_tubes", .35)],
+            Source = $"{UniqueInclusions} (trichites); {TourmalineMicroFeatures}; colour zoning: common practice" },
 
         // Zircon: heating leaves nothing a loupe shows.
         new() { Species = "zircon", Origin = "natural", Method = "natural", Clean = .25,
@@ -254,7 +256,7 @@ internal static partial class MagnificationHabits
             Source = "from memory" },
 
         new() { Species = "spodumene", Origin = "natural", Method = "natural", Clean = .25,
-            Features = [H("needles_silk", .3), H("fluid_inclusions", .3), H("healed_fractures", .3)],
+            Features = [H("growth_tubes", .3), H("needles_silk", .05), H("fluid_inclusions", .3), H("healed_fractures", .3)],
             Source = "from memory (growth tubes, fingerprints)" },
         new() { Species = "zoisite", Origin = "natural", Method = "natural", Clean = .25,
             Features = [H("fluid_inclusions", .2), H("crystals", .25), H("healed_fractures", .25)],

@@ -113,4 +113,7 @@ public enum MagnificationFeature
 
     /// <summary>Aventurescence: glittering spangles of platelets (sunstone, aventurine).</summary>
     Aventurescence,
+
+    /// <summary>Growth tubes: straight hollow or fluid-filled channels parallel to the crystal's length (beryl, tourmaline).</summary>
+    GrowthTubes,
 }

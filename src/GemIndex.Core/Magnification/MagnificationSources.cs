@@ -3,6 +3,13 @@ namespace GemIndex.Core.Magnification;
 /// <summary>The published works the magnification vocabulary and its probabilities cite (each one read).</summary>
 public static class MagnificationSources
 {
+    /// <summary>
+    /// Growth tubes: beryl and tourmaline develop hollow tubes with even sides running straight a long way, most cut away
+    /// in fashioning; seen, the stone is most likely a beryl, a tourmaline or possibly a spodumene.
+    /// </summary>
+    public const string GemSocietyInclusions =
+        "International Gem Society (n.d.) Identifying inclusions of specific gems: beryl and tourmaline (gemsociety.org/article/identifying-inclusions-of-specific-gems)";
+
     /// <summary>Curved growth lines and gas bubbles of flame-fusion corundum.</summary>
     public const string HughesKoivula2005 =
         "Hughes R.W., Koivula J.I. (2005) Verneuil synthetic corundum: dangerous curves (Lotus Gemology / ruby-sapphire.com)";

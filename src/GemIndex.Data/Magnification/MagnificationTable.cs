@@ -10,7 +10,8 @@ namespace GemIndex.Data.Magnification;
 /// feature, with its source. Read once from the embedded file and attached to the shipped entries after the catalogue
 /// loads, keyed by entry name (the SQLite schema does not hold it); every other entry keeps its origin's defaults. An
 /// entry may give <c>"like": "other entry"</c> instead of its features (a heated stone keeps its natural sibling's
-/// inclusions) and takes that entry's listed features; the other entry must list features of its own (no chains).
+/// inclusions) and takes that entry's listed features; the other entry must list features of its own (no chains). A
+/// feature read in another work than the entry's "source" names it in <c>"feature_sources": {"word": "key"}</c>.
 /// Read strictly, as the other reference tables are: a field the table does not know is a fault, not ignored.
 /// </summary>
 public sealed class MagnificationTable
@@ -56,6 +57,12 @@ public sealed class MagnificationTable
                 continue;
             }
             if (entry.Features is null) { errors.Add($"{at}: \"features\" must be an object of word: probability."); continue; }
+            // A feature read in another work than the entry's others names its own source.
+            foreach (var (word, key) in entry.FeatureSources ?? [])
+            {
+                if (!entry.Features.ContainsKey(word)) errors.Add($"{at}: \"feature_sources\" names '{word}', which is not one of the entry's features.");
+                if (!keys.Contains(key)) errors.Add($"{at}: \"feature_sources\" of '{word}' must be one of the file's reference keys.");
+            }
             var probabilities = new Dictionary<MagnificationFeature, double>();
             foreach (var (word, value) in entry.Features)
             {
@@ -97,5 +104,6 @@ public sealed class MagnificationTable
         [property: JsonPropertyName("features")] Dictionary<string, double>? Features,
         [property: JsonPropertyName("like")] string? Like,
         [property: JsonPropertyName("source")] string? Source,
+        [property: JsonPropertyName("feature_sources")] Dictionary<string, string>? FeatureSources,
         [property: JsonPropertyName("note")] string? Note);
 }

@@ -44,6 +44,8 @@ public class MagnificationTableTests
     [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"x","source":"a","like":"y"}]}""", "'y', which is not an entry of the table")]
     [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"y","source":"a","features":{}},{"name":"x","source":"a","like":"y","features":{}}]}""", "given instead of \"features\"")]
     [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"z","source":"a","features":{}},{"name":"y","source":"a","like":"z"},{"name":"x","source":"a","like":"y"}]}""", "with features of its own")]
+    [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"x","source":"a","features":{"curved_striae":0.5},"feature_sources":{"growth_tubes":"a"}}]}""", "names 'growth_tubes', which is not one of the entry's features")]
+    [InlineData("""{"references":[{"key":"a"}],"entries":[{"name":"x","source":"a","features":{"growth_tubes":0.5},"feature_sources":{"growth_tubes":"b"}}]}""", "\"feature_sources\" of 'growth_tubes' must be one of")]
     public void A_fault_in_the_table_is_an_error_naming_the_entry(string json, string expected)
     {
         var e = Assert.Throws<CatalogueFormatException>(() => MagnificationTable.Read(json));
@@ -61,6 +63,20 @@ public class MagnificationTableTests
         var e = Assert.Throws<CatalogueFormatException>(() => MagnificationTable.Read(json));
         Assert.StartsWith("magnification.json: not valid", e.Errors[0]);
         Assert.Contains(named, e.Errors[0]);
+    }
+
+    [Fact]
+    public void The_shipped_tourmalines_and_beryls_hold_growth_tubes_and_other_species_only_by_default()
+    {
+        // Growth tubes: tourmaline (G&G 2024 micro-features chart) and beryl, now and then spodumene (gemsociety.org), as the table cites them.
+        using var temp = new TempDirectory();
+        IReadOnlyList<Material> shipped = ShippedCatalogue.Load(temp.Path);
+        double Tubes(string name) => shipped.Single(m => m.Name == name).MagnificationProfile.ProbabilityOf(MagnificationFeature.GrowthTubes);
+        Assert.Equal(0.3, Tubes("verdelite"));
+        Assert.Equal(0.2, Tubes("aquamarine"));
+        Assert.Equal(0.1, Tubes("kunzite"));
+        Assert.Equal(MagnificationProfile.Foreign, Tubes("peridot"));
+        Assert.Equal(MagnificationProfile.Foreign, Tubes("hydrothermal synthetic emerald"));
     }
 
     [Fact]

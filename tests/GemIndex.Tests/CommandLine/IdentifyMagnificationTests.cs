@@ -86,6 +86,22 @@ public class IdentifyMagnificationTests
     }
 
     [Fact]
+    public void Growth_tubes_seen_lead_a_green_cabochon_at_1_63_to_the_tourmalines()
+    {
+        // A green cabochon read by spot at 1.63: tourmaline, apatite, nephrite and others share the index (handbook values,
+        // from memory). Tourmaline grows straight tubes parallel to its length (G&G 2024 micro-features chart), apatite and
+        // nephrite do not (common practice), so tubes seen leave the tourmalines in front.
+        using var run = new CommandRun();
+        string[] readings = ["--spot", "1.63", "--colour", "green"];
+        double Tourmaline(params string[] looks) => SpeciesOf(run, [.. readings, .. looks])
+            .Where(s => s.TryGetProperty("mineral_group", out var g) && g.GetString() == "tourmaline").Sum(s => s.GetProperty("confidence").GetDouble());
+        Assert.True(Tourmaline() < 0.3);
+        Assert.True(Tourmaline("--feature", "growth_tubes") > 0.6);
+        Assert.True(Tourmaline("--no-feature", "growth_tubes") < Tourmaline(), "looked for and not seen counts a little against tourmaline");
+        Assert.Equal("elbaite", SpeciesOf(run, [.. readings, "--feature", "growth_tubes"])[0].GetProperty("species").GetString());
+    }
+
+    [Fact]
     public void Nacre_platelet_edges_seen_rule_out_the_coated_bead_imitations()
     {
         // A white bead, spot 1.53 (one end of aragonite's blink), SG 2.71: inside the catalogue's ranges of pearl,
