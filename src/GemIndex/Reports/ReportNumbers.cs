@@ -32,6 +32,12 @@ internal static class ReportNumbers
     /// <summary>A density of a heavy liquid: 3.32 g/cm³.</summary>
     public static string Density(double value) => Fixed(value, "0.00") + " g/cm³";
 
+    /// <summary>
+    /// A probability as a number column writes it, as the result document does (<see cref="Identification.ResultDocument.Probability"/>):
+    /// rounded down to four decimals, so that no share short of certain reads 1 (0.99996 is 0.9999, not 1.000).
+    /// </summary>
+    public static string Probability(double value) => Fixed(Identification.ResultDocument.Probability(value), "0.0000");
+
     /// <summary>A value with its standard uncertainty, both to the same format: 2.650 ± 0.010.</summary>
     public static string WithUncertainty(double value, double standardUncertainty, string format) =>
         $"{Fixed(value, format)} ± {Fixed(standardUncertainty, format)}";

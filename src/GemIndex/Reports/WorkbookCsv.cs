@@ -81,9 +81,9 @@ internal static class WorkbookCsv
             report?.SpecificGravity is { } sg ? ReportNumbers.Gravity(sg.Value) : sheet.Readings.Sg is { } given ? ReportNumbers.Gravity(given) : "",
             sheet.Readings.Polariscope is { } p ? StoneReport.Word(p) : "",
             lead?.Species ?? "",
-            lead is not null ? ReportNumbers.Fixed(lead.Confidence, "0.000") : "",
+            lead is not null ? ReportNumbers.Probability(lead.Confidence) : "",
             top?.Material.Name ?? "",
-            top is not null ? ReportNumbers.Fixed(top.Confidence, "0.000") : "",
+            top is not null ? ReportNumbers.Probability(top.Confidence) : "",
             result is null ? "" : result.NoGoodMatch ? "true" : "false",
             best?.AboveLiquidLimit is { } limit ? ReportNumbers.Index(limit)
                 : sheet.Readings.Refractometer is { OverLimit: true } over ? ReportNumbers.Index(GemIndex.Core.Bench.BenchDefaults.LiquidLimitOrDefault(over.LiquidLimit)) : "",
