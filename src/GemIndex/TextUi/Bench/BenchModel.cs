@@ -17,7 +17,15 @@ internal sealed class BenchModel
     public const double RotationStepDegrees = 15;
 
     /// <summary>The texts that belong to the bench rather than the stone: kept when another stone opens.</summary>
-    private static readonly string[] BenchSettings = [BenchFields.Precision, BenchFields.CalibrationOffset, RefractometerPage.RotationStepField, BenchFields.Examiner];
+    private static readonly string[] BenchSettings = [RefractometerPage.RotationStepField, BenchFields.Examiner];
+
+    /// <summary>
+    /// The refractometer as used: a stone read on it keeps the precision and calibration offset it was read with (its
+    /// indices depend on them); a stone not yet read takes the instrument of the day.
+    /// </summary>
+    public static readonly IReadOnlyList<string> InstrumentFields = [BenchFields.Precision, BenchFields.CalibrationOffset];
+
+    private ImmutableDictionary<string, string> _instrumentAsLoaded = ImmutableDictionary<string, string>.Empty;
 
     private ImmutableDictionary<string, string> _texts = ImmutableDictionary<string, string>.Empty;
     private ImmutableDictionary<string, string> _choices = ImmutableDictionary<string, string>.Empty;
@@ -120,15 +128,22 @@ internal sealed class BenchModel
     /// <summary>Bumps <see cref="Version"/> without an edit, so that results worked out before (with an older catalogue) count as stale.</summary>
     public void Renew() => Version++;
 
-    public BenchSnapshot Snapshot() => new(StoneId, Version, _texts, _choices, _steps);
+    public BenchSnapshot Snapshot() => new(StoneId, Version, _texts, _choices, _steps) { InstrumentAsLoaded = _instrumentAsLoaded };
 
-    /// <summary>Fills the form from a stored stone; bench settings (precision, calibration, rotation step, examiner) are kept.</summary>
-    public void Load(StoneSheet stone)
+    /// <summary>
+    /// Fills the form from a stored stone. The bench settings (rotation step, examiner) are kept; the precision and
+    /// calibration offset are the stone's own when it was read on the refractometer, else <paramref name="today"/>'s
+    /// (the instrument of the day; without it, those the form holds). Opening a stone never changes its readings.
+    /// </summary>
+    public void Load(StoneSheet stone, IEnumerable<KeyValuePair<string, string>>? today = null)
     {
         StoneId = stone.Id;
         _created = stone.Created;
-        var keep = _texts.Where(p => BenchSettings.Contains(p.Key));
+        bool read = stone.Readings.Refractometer is not null;
+        var instrument = read ? [] : (today ?? _texts).Where(p => InstrumentFields.Contains(p.Key)).ToList();
+        var keep = _texts.Where(p => BenchSettings.Contains(p.Key)).Concat(instrument);
         _texts = ImmutableDictionary.CreateRange(keep.Concat(StoneFormText.From(stone)).Where(p => p.Value.Length > 0));
+        _instrumentAsLoaded = ImmutableDictionary.CreateRange(_texts.Where(p => InstrumentFields.Contains(p.Key)));
         _choices = ImmutableDictionary.CreateRange(StoneFormText.Choices(stone.Readings));
         _steps = [.. (stone.Readings.Refractometer?.Readings ?? []).Select(s =>
             new StepText(StoneFormText.Number(s.RotationDeg), StoneFormText.Index(s.Low), s.High is { } h ? StoneFormText.Index(h) : ""))];
@@ -139,8 +154,10 @@ internal sealed class BenchModel
     public bool ApplyDraft(string? json)
     {
         if (json is null || BenchDraft.Read(json) is not { } draft) return false;
-        var bench = _texts.Where(p => BenchSettings.Contains(p.Key));
-        _texts = draft.Texts.RemoveRange(BenchSettings).SetItems(bench);
+        // A draft with nothing read on the refractometer keeps the instrument of the day the stone opened with.
+        bool read = draft.Steps.Count > 0 || draft.Texts.ContainsKey(BenchFields.Spot) || draft.Choices.ContainsKey(BenchFields.OverLimit);
+        var bench = _texts.Where(p => BenchSettings.Contains(p.Key) || (!read && InstrumentFields.Contains(p.Key)));
+        _texts = draft.Texts.RemoveRange(BenchSettings).RemoveRange(read ? [] : InstrumentFields).SetItems(bench);
         _choices = draft.Choices;
         _steps = draft.Steps;
         Version++;

@@ -36,6 +36,8 @@ internal static class StoneFormText
         yield return new(BenchFields.Spot, r.Refractometer?.Spot is { } spot ? Spot(spot) : "");
         yield return new(BenchFields.LiquidLimit, r.Refractometer?.LiquidLimit is { } ll ? Index(ll) : "");
         yield return new(BenchFields.LightNm, r.Refractometer?.LightNm is { } nm ? Number(nm) : "");
+        yield return new(BenchFields.Precision, r.Refractometer?.Precision is { } precision ? Number(precision) : "");
+        yield return new(BenchFields.CalibrationOffset, r.Refractometer?.CalibrationOffset is { } offset ? Number(offset) : "");
         yield return new(BenchFields.Sg, r.Sg is { } sg ? Number(sg) : "");
         yield return new(BenchFields.AirCt, r.SgWeighing?.AirCt is { } a ? Number(a) : "");
         yield return new(BenchFields.WaterCt, r.SgWeighing?.WaterCt is { } b ? Number(b) : "");

@@ -51,8 +51,6 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     {
         lock (_gate)
         {
-            Form.SetText(BenchFields.Precision, workbook.Setting(PrecisionSetting) ?? "");
-            Form.SetText(BenchFields.CalibrationOffset, workbook.Setting(CalibrationSetting) ?? "");
             Form.SetText(RefractometerPage.RotationStepField, workbook.Setting(RotationStepSetting) ?? "");
             Form.SetText(BenchFields.Examiner, workbook.Setting(ExaminerSetting) ?? "");
             StoneSummary? latest = workbook.List().FirstOrDefault();
@@ -79,7 +77,7 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     private void Load(StoneSheet stone)
     {
         _lastRead[stone.Id] = stone;
-        Form.Load(stone);
+        Form.Load(stone, today: [new(BenchFields.Precision, workbook.Setting(PrecisionSetting) ?? ""), new(BenchFields.CalibrationOffset, workbook.Setting(CalibrationSetting) ?? "")]);
         Form.ApplyDraft(workbook.Setting(DraftSetting(stone.Id)));
     }
 
@@ -153,8 +151,9 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
                     ?? throw new WorkbookException($"{workbook.Path}: no stone with id {snapshot.StoneId} (deleted elsewhere?)");
                 StoneSaveResult saved = workbook.Save(lastRead, BenchModel.ToStoneSheet(snapshot, assessment.Readings));
                 _lastRead[snapshot.StoneId] = saved.NextLastRead;
-                Setting(PrecisionSetting, snapshot.Text(BenchFields.Precision));
-                Setting(CalibrationSetting, snapshot.Text(BenchFields.CalibrationOffset));
+                // The instrument of the day follows what the user sets, never what an opened stone was read with.
+                if (snapshot.InstrumentChanged(BenchFields.Precision)) Setting(PrecisionSetting, snapshot.Text(BenchFields.Precision));
+                if (snapshot.InstrumentChanged(BenchFields.CalibrationOffset)) Setting(CalibrationSetting, snapshot.Text(BenchFields.CalibrationOffset));
                 Setting(RotationStepSetting, snapshot.Text(RefractometerPage.RotationStepField));
                 Setting(ExaminerSetting, snapshot.Text(BenchFields.Examiner));
                 _lastSaved = (snapshot.StoneId, snapshot.Version);

@@ -50,6 +50,46 @@ public class BenchSessionTests
     }
 
     [Fact]
+    public async Task Opening_a_stone_keeps_the_precision_and_offset_it_was_read_with_and_a_new_stone_takes_the_day_s()
+    {
+        // A stone's indices depend on the offset it was read with: opening it must not rewrite them (a calibration set
+        // on one stone had been written into every stone opened after it, and its indices moved by the offset).
+        string path = TempFile();
+        try
+        {
+            using var wb = StoneWorkbook.Open(path, TimeProvider.System, WorkbookOpening.CreateIfMissing);
+            var session = new BenchSession(wb, new BenchAssessor(null), a => a());
+            session.Start();
+            long old = session.Form.StoneId;
+            session.Form.PutStep(0, new StepText("0", "1.577", "1.583"));   // read with no offset
+            await session.Changed();
+            session.New();
+            long today = session.Form.StoneId;
+            session.Form.SetText(BenchFields.CalibrationOffset, "0.010");   // the refractometer checked today
+            session.Form.PutStep(0, new StepText("0", "1.544", "1.553"));
+            await session.Changed();
+            Assert.True(session.Flush(TestHost.SaveWait));
+            int edits = wb.History(old).Count;
+
+            session.Open(old);
+            Assert.Equal("", session.Form.Text(BenchFields.CalibrationOffset));
+            Assert.True(session.Flush(TestHost.SaveWait));
+            Assert.Null(wb.Get(old)!.Readings.Refractometer!.CalibrationOffset);
+            Assert.Equal(edits, wb.History(old).Count);
+
+            session.Open(today);
+            Assert.Equal("0.010", session.Form.Text(BenchFields.CalibrationOffset));   // its own, as typed
+            session.New();   // not yet read: the instrument of the day
+            Assert.Equal("0.010", session.Form.Text(BenchFields.CalibrationOffset));
+            Assert.True(session.Flush(TestHost.SaveWait));
+        }
+        finally
+        {
+            foreach (string f in new[] { path, path + "-wal", path + "-shm" }) File.Delete(f);
+        }
+    }
+
+    [Fact]
     public async Task An_older_snapshot_never_overwrites_a_newer_save()
     {
         string path = TempFile();
