@@ -15,6 +15,10 @@ internal static class ReportReadings
             fields.Add(new("refractometer_method", "Refractometer method", StoneReport.Word(rf.Method)));
             if (rf.LightNm is { } light) fields.Add(new("light", "Light", ReportNumbers.Nanometres(light)));
             if (rf.LiquidLimit is { } limit) fields.Add(new("liquid_limit", "Contact-liquid limit", $"refractive index {ReportNumbers.Index(limit)}"));
+            if (rf.Precision is { } precision) fields.Add(new("precision", "Reading precision", $"± {ReportNumbers.Fixed(precision, "0.000#")} (one standard uncertainty)"));
+            // The readings are given as read; the derived indices have the offset added, so the report must say it.
+            if (rf.CalibrationOffset is { } offset and not 0)
+                fields.Add(new("calibration_offset", "Calibration offset", $"{ReportNumbers.Fixed(offset, "+0.000#;−0.000#")}, added to every reading for the derived indices (the readings are given as read)"));
             if (rf.Spot is { } spot) fields.Add(new("spot", "Spot reading", $"refractive index {ReportNumbers.SpotIndex(spot)}"));
             if (rf.OverLimit) fields.Add(new("over_limit", "Over the limit", "yes: no shadow edge below the contact liquid's limit"));
         }

@@ -88,6 +88,18 @@ public class StoneReportTests
     }
 
     [Fact]
+    public void A_calibration_offset_is_given_beside_the_readings_it_shifts()
+    {
+        // The step table gives the edges as read; the derived indices have the offset added (quartz ω 1.544, ε 1.553,
+        // from memory, read 0.010 low): without the offset the two could not be reconciled.
+        var report = ReportFixtures.Report("""{"id":"c","refractometer":{"method":"facet","calibration_offset":0.01,"precision":0.001,"readings":[{"rotation_deg":0,"low":1.534,"high":1.543},{"rotation_deg":90,"low":1.534,"high":1.539}]}}""");
+        Assert.StartsWith("+0.010, added to every reading", report.ReadingFields.Single(f => f.Key == "calibration_offset").Value);
+        Assert.Equal("± 0.001 (one standard uncertainty)", report.ReadingFields.Single(f => f.Key == "precision").Value);
+        Assert.Contains("Calibration offset", MarkdownReport.Write(report));
+        Assert.DoesNotContain(ReportFixtures.Report(ReportFixtures.QuartzLine).ReadingFields, f => f.Key == "calibration_offset");
+    }
+
+    [Fact]
     public void A_spot_reading_is_given_as_read_to_the_hundredth()
     {
         // A spot reading is read to 0.01 on the scale (common practice): "1.610" claimed a third decimal never read.
