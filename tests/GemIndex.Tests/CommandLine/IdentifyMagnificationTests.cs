@@ -102,6 +102,20 @@ public class IdentifyMagnificationTests
     }
 
     [Fact]
+    public void An_alexandrite_s_chromium_and_iron_lines_leave_natural_and_synthetic_open()
+    {
+        // Chrysoberyl α 1.745, γ 1.754, SG 3.73 (handbook values, from memory), trichroic, a colour change, and the
+        // alexandrite spectrum (chromium doublet 680.5/678.5, 665, 655, 645; 473 and 468): synthetic alexandrite shows
+        // the same spectrum as natural (common practice), so the lines must not decide the origin.
+        using var run = new CommandRun();
+        var chrysoberyl = SpeciesOf(run, ["--edge", "0:1.745/1.754", "--edge", "90:1.747/1.754", "--sg", "3.73", "--pleochroism", "trichroic",
+            "--feature", "colour_change", "--lines", "680.5 678.5 665 655 645 473 468"])[0];
+        Assert.Equal("chrysoberyl", chrysoberyl.GetProperty("species").GetString());
+        var origins = chrysoberyl.GetProperty("origins");
+        Assert.True(origins.GetProperty("natural").GetDouble() > 0.2 && origins.GetProperty("synthetic").GetDouble() > 0.2, origins.ToString());
+    }
+
+    [Fact]
     public void Nacre_platelet_edges_seen_rule_out_the_coated_bead_imitations()
     {
         // A white bead, spot 1.53 (one end of aragonite's blink), SG 2.71: inside the catalogue's ranges of pearl,
