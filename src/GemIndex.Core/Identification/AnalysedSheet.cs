@@ -26,7 +26,7 @@ public sealed record AnalysedSheet
             Observation = new SeriesObservation(r.Steps, r.ReadingPrecision, r.CalibrationOffset, r.LiquidLimit);
             _broad = new Lazy<double>(() => SectionLikelihood.Evaluate(IndicatrixPrior.Broad(Observation), Observation, 0, 0).LogLikelihood);
             var observation = Observation;
-            Character = new Lazy<OpticCharacterPosterior>(() => OpticCharacterPosterior.Of(observation));
+            Character = new Lazy<OpticCharacterPosterior>(() => OpticCharacterPosterior.Of(observation, sheet.Pleochroism));
             var analysed = Series;
             var character = Character;
             SeriesShown = new Lazy<RotationSeriesResult>(() => SeriesAsRead.Weighed(analysed,
@@ -35,7 +35,7 @@ public sealed record AnalysedSheet
         }
     }
 
-    /// <summary>What the series alone says of the optic character, worked out only when a front end shows it.</summary>
+    /// <summary>What the series and the dichroscope say of the optic character, worked out only when a front end shows it.</summary>
     internal Lazy<OpticCharacterPosterior>? Character { get; }
 
     /// <summary>The series' readings weighted by <see cref="Character"/> (<see cref="SeriesAsRead"/>), worked out only when a front end shows them.</summary>

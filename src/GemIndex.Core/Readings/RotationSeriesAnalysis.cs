@@ -217,21 +217,24 @@ public static class RotationSeriesAnalysis
         }
         var birefringence = new Birefringence(Math.Max(0, gamma.Value - alpha.Value), double.Hypot(alpha.StandardUncertainty, gamma.StandardUncertainty));
         double shortfall = Math.Max(lowEdge.Shortfall, highEdge.Shortfall);
-        SeriesInterpretation With(RefractiveIndex beta, string which)
+        SeriesInterpretation With(RefractiveIndex beta, string which, double weight)
         {
             bool positive = gamma.Value - beta.Value > beta.Value - alpha.Value;
             return new()
             {
-                Character = OpticCharacter.Biaxial, Weight = 0.5, Sign = positive ? OpticSign.Positive : OpticSign.Negative,
+                Character = OpticCharacter.Biaxial, Weight = weight, Sign = positive ? OpticSign.Positive : OpticSign.Negative,
                 Lowest = alpha, Highest = gamma, Beta = beta, Birefringence = birefringence, SamplingShortfall = shortfall,
-                Description = $"biaxial {(positive ? "positive" : "negative")} if β is the {which}: α {F(alpha.Value)}, β {F(beta.Value)}, γ {F(gamma.Value)}, birefringence {Difference(gamma.Value, alpha.Value)}",
+                Description = $"biaxial {(positive ? "positive" : "negative")} {which}: α {F(alpha.Value)}, β {F(beta.Value)}, γ {F(gamma.Value)}, birefringence {Difference(gamma.Value, alpha.Value)}",
             };
         }
         return new RotationSeriesResult
         {
             Character = OpticCharacter.Biaxial,
             // β is an inner extreme, where the edges can turn sharply (near an optic axis): the readings themselves serve best.
-            Interpretations = [With(Index(lowMax, Extreme(sigma)), "highest low edge"), With(Index(highMin, Extreme(sigma)), "lowest high edge")],
+            // Where the highest low edge and the lowest high edge read the same, the two readings of β are one.
+            Interpretations = F(lowMax) == F(highMin)
+                ? [With(Index(lowMax, Extreme(sigma)), "with β where the low and high edges meet", 1)]
+                : [With(Index(lowMax, Extreme(sigma)), "if β is the highest low edge", 0.5), With(Index(highMin, Extreme(sigma)), "if β is the lowest high edge", 0.5)],
             Misreadings = misreadings,
             LargestGapDegrees = gap,
         };

@@ -1,3 +1,4 @@
+using GemIndex.Core.Observations;
 using GemIndex.Core.Identification;
 using GemIndex.Core.Optics;
 using GemIndex.Core.Optics.Indicatrix;
@@ -44,6 +45,24 @@ public class OpticCharacterPosteriorTests
         Assert.True(spinel.Isotropic > 0.9, $"spinel {spinel}");
         foreach (var p in new[] { quartz, corundum, peridot, spinel })
             Assert.Equal(1, p.Isotropic + p.Uniaxial + p.Biaxial, 12);
+    }
+
+    [Fact]
+    public void Three_colours_in_the_dichroscope_leave_only_a_biaxial_crystal_and_two_rule_out_a_singly_refractive_one()
+    {
+        // Tanzanite-like edges (zoisite α 1.691, β 1.692, γ 1.700, handbook values from memory): β by α reads as a uniaxial
+        // positive crystal on the refractometer alone; only a biaxial crystal shows three colours (common practice).
+        var series = new SeriesObservation([new ShadowEdgeStep(0, 1.691, 1.693), new ShadowEdgeStep(45, 1.691, 1.697),
+            new ShadowEdgeStep(90, 1.692, 1.700), new ShadowEdgeStep(135, 1.691, 1.696)], 0.001, 0, 1.79);
+        var alone = OpticCharacterPosterior.Of(series);
+        var trichroic = OpticCharacterPosterior.Of(series, PleochroismObservation.Trichroic);
+        Assert.True(alone.Uniaxial > 0.4, $"{alone}");
+        Assert.True(trichroic.Biaxial > 0.9, $"{trichroic}");
+        // The factor is the misread's: the odds of uniaxial against biaxial fall by exactly that much.
+        Assert.Equal(alone.Uniaxial / alone.Biaxial * OpticCharacterPosterior.ImpossiblePleochroism, trichroic.Uniaxial / trichroic.Biaxial, 9);
+        var spinelLike = new SeriesObservation([new ShadowEdgeStep(0, 1.718), new ShadowEdgeStep(90, 1.718)], 0.001, 0, 1.79);
+        Assert.True(OpticCharacterPosterior.Of(spinelLike, PleochroismObservation.Dichroic).Isotropic < OpticCharacterPosterior.Of(spinelLike).Isotropic);
+        Assert.Equal(OpticCharacterPosterior.Of(series), OpticCharacterPosterior.Of(series, PleochroismObservation.None));
     }
 
     [Fact]

@@ -104,6 +104,19 @@ public class RotationSeriesAnalysisTests
     }
 
     [Fact]
+    public void Where_the_highest_low_edge_and_the_lowest_high_edge_read_the_same_beta_is_read_once()
+    {
+        // β is the highest low edge or the lowest high edge (DOMAIN.md §3); read the same, the two readings are one, not
+        // two rows with the same indices that add up to more than the biaxial share.
+        ShadowEdgeStep[] steps = [new(0, 1.577, 1.582), new(60, 1.582, 1.586), new(120, 1.579, 1.584)];
+        var biaxial = RotationSeriesAnalysis.EveryCharacter(steps, 0.001)!.Where(i => i.Character == OpticCharacter.Biaxial).ToList();
+        var one = Assert.Single(biaxial);
+        Assert.Equal(1, one.Weight);
+        Assert.Equal(1.582, one.Beta!.Value.Value, 0.0006);
+        Assert.Equal("biaxial negative with β where the low and high edges meet: α 1.577, β 1.582, γ 1.586, birefringence 0.009", one.Description);
+    }
+
+    [Fact]
     public void One_constant_edge_is_isotropic()
     {
         // Spinel n 1.718 (from memory).
