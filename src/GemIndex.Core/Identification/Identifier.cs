@@ -418,8 +418,12 @@ public sealed class Identifier
         var varieties = BenchWarnings.InseparableVarieties(species, _materials, posterior);
         var group = noGoodMatch ? null : BenchWarnings.InseparableGroup(species, _materials, posterior);
         // Stones to keep dry: every such entry at the warnings' share, and those of the leading species at a tenth of that
-        // (natural turquoise at 4 % beside its treated kin, when turquoise leads), most probable first.
-        string? leadingSpecies = species.Count > 0 && species[0].Confidence >= BenchWarnings.Relevant ? species[0].Species : null;
+        // (natural turquoise at 4 % beside its treated kin, when turquoise leads), most probable first; the latter only
+        // when the leading species' stones to keep dry hold the warnings' share together (a blue sapphire's 1 % of
+        // glass-filled ruby and doublet had banned water for the routine weighing of a sapphire).
+        string? leadingSpecies = species.Count > 0 && species[0].Confidence >= BenchWarnings.Relevant
+            && order.Where(i => _materials[i].DoNotImmerse && _materials[i].Species == species[0].Species).Sum(i => posterior[i]) >= BenchWarnings.Relevant
+            ? species[0].Species : null;
         List<string> keepDry = [.. order.Where(i => _materials[i].DoNotImmerse && (posterior[i] >= BenchWarnings.Relevant
             || (posterior[i] >= BenchWarnings.Relevant / 10 && _materials[i].Species == leadingSpecies)))
             .OrderByDescending(i => posterior[i]).Select(i => _materials[i].Name)];

@@ -784,6 +784,14 @@ public class IdentifierTests
         Assert.Contains(result.Warnings, w => w.StartsWith("Possible common t and rare t: do not immerse", StringComparison.Ordinal));
         // Heavy liquids never; water only where the stone is known to take it (common practice: amber's salt-water float test).
         Assert.Contains(result.Warnings, w => w.Contains("do not immerse (no heavy liquids, and no water unless the stone is known to take it", StringComparison.Ordinal));
+
+        // A leading species whose stones to keep dry are a small part of it (a sapphire beside its rare filled and
+        // assembled kin) does not ban the routine weighing: the rare porous kind under 5 % is not named.
+        Material plain = Make("plain t", "t", index, 2.50, 2.60, frequency: BenchFrequency.VeryCommon) with { SpeciesFrequency = BenchFrequency.VeryCommon };
+        var mostlyDry = new Identifier([plain, natural with { SpeciesFrequency = BenchFrequency.VeryCommon }, other]).Identify(sheet);
+        Assert.Equal("t", mostlyDry.Species[0].Species);
+        Assert.InRange(mostlyDry.Candidates.Single(c => c.Material.Name == "rare t").Confidence, BenchWarnings.Relevant / 10, BenchWarnings.Relevant);
+        Assert.Empty(mostlyDry.KeepDry);
     }
 
     [Fact]

@@ -552,7 +552,7 @@ public sealed class MainWindowTests : IDisposable
         Assert.Same(window, app.TopRunnableView);
         Assert.Equal("1.1", _session.Form.Text(BenchFields.WaterCt));
         string caution = System.Text.RegularExpressions.Regex.Replace(window.Gravity.Caution.Text, @"\s+", " ");
-        Assert.Contains("Do not immerse: opal is among the top candidates.", caution);
+        Assert.Contains("Do not immerse: opal is possible here.", caution);
         Assert.Contains("rely on the other tests.", caution);
         Assert.Contains("water unless the stone is known to take it", caution);   // as the answer's warning says it
         Assert.EndsWith(GemIndex.Cli.Reports.ReportCautions.HeavyLiquidLine, caution);   // the heavy liquids' caution stays too
