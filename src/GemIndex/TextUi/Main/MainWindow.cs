@@ -79,6 +79,9 @@ internal sealed class MainWindow : Window
     /// <summary>The step removed last and where it stood, for Ctrl+Z on the list of steps (one level; another stone forgets it).</summary>
     private (int Index, StepText Step)? _removedStep;
 
+    /// <summary>A new step half typed on the edit line when a stored step was opened to edit: it comes back once the edit is stored.</summary>
+    private StepText? _newStepAside;
+
     /// <summary>Says in the identification panel that the catalogue is loading, or why it could not be loaded.</summary>
     public void ShowCatalogueState(string text, string? reason = null)
     {
@@ -280,7 +283,8 @@ internal sealed class MainWindow : Window
             _session.Changed();
             rf.ShowSteps(_session.Form.Steps, _session.Results.Latest?.Errors ?? new Dictionary<string, string>());
             rf.ShowStep(index ?? _session.Form.Steps.Count - 1);   // the step just stored stays in sight (six rows at 80x24)
-            rf.BeginStep(null, null, _session.Form.NextRotation());
+            rf.BeginStep(null, index is null ? null : _newStepAside, _session.Form.NextRotation());
+            if (index is not null) _newStepAside = null;
         };
         foreach ((TextField box, string typingKey) in rf.TypingBoxes)
             box.TextChanged += (_, _) =>
@@ -291,6 +295,9 @@ internal sealed class MainWindow : Window
             };
         rf.EditRequested += i =>
         {
+            // A new step being typed is set aside, not overwritten, and comes back after the edit.
+            if (_session.Form.Text(RefractometerPage.TypingStep).Length == 0 && (rf.Low.Text.Length > 0 || rf.High.Text.Length > 0))
+                _newStepAside = new StepText(rf.Rotation.Text, rf.Low.Text, rf.High.Text);
             _session.Form.SetText(RefractometerPage.TypingStep, (i + 1).ToString(System.Globalization.CultureInfo.InvariantCulture));
             rf.BeginStep(i, _session.Form.Steps[i], _session.Form.NextRotation());
         };

@@ -955,6 +955,28 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void A_new_step_half_typed_when_a_stored_step_is_opened_comes_back_after_the_edit()
+    {
+        // "Lose nothing already typed": a high edge typed for a new step, then a stored step opened to correct it; once
+        // the correction is stored, the new step is back on the edit line as it was.
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F3);
+        TypeSteps(app, ("1.616", "1.621"), ("1.617", "1.622"));
+        string rotation = window.Refractometer.Rotation.Text;
+        window.Refractometer.Low.Text = "1.618";
+        window.Refractometer.High.Text = "1.55";
+        EditFirstStep(app);
+        Assert.Equal("1.616", window.Refractometer.Low.Text);
+        window.Refractometer.Low.Text = "1.615";
+        window.Refractometer.Low.NewKeyDownEvent(Key.Enter);
+        Settle();
+        Assert.Equal("1.615", _session.Form.Steps[0].Low);
+        Assert.Equal((rotation, "1.618", "1.55"), (window.Refractometer.Rotation.Text, window.Refractometer.Low.Text, window.Refractometer.High.Text));
+        Assert.Equal(2, _session.Form.Steps.Count);
+        Close(app, window, token);
+    }
+
+    [Fact]
     public void Past_a_half_turn_the_edit_line_says_the_rotation_offered_fills_a_gap()
     {
         // Six steps of 30° read the half turn round; the next offer, 15°, fills a gap (180° is 0° again), and the edit line
