@@ -100,7 +100,10 @@ public static class BenchReader
             if (over == true && r.Steps.FindIndex(s => s.High.Trim().Length > 0) is int withHigh and >= 0)
                 Error(BenchField.OverLimit, "yes", "over the limit only when the high edge was not seen",
                     $"says the high edge was not seen, but step {withHigh + 1} ({BenchField.Step(withHigh)}) gives one.");
-            if (!anyReading || HasError(BenchField.OverLimit) || HasError(BenchField.Method)) return null;
+            if (HasError(BenchField.OverLimit) || HasError(BenchField.Method)) return null;
+            // Readings given but none readable: the instrument's settings are still checked, each at its field (a liquid
+            // limit of 2.5 had waited for a good step to be refused).
+            bool probe = !anyReading;
             var observation = new Dictionary<string, double?>
             {
                 [BenchField.LightNm] = light, [BenchField.LiquidLimit] = liquidGiven, [BenchField.Precision] = precision,
@@ -112,6 +115,14 @@ public static class BenchReader
                 try
                 {
                     var m = method ?? (observation[BenchField.Spot] is not null && steps.Count == 0 ? RefractometerMethod.Spot : RefractometerMethod.Facet);
+                    if (probe)
+                    {
+                        // Over the limit stands in for the unreadable readings: only the settings are checked.
+                        _ = new RefractometerObservation(m, [], null, true, observation[BenchField.LightNm] ?? BenchDefaults.LightNanometres,
+                            BenchDefaults.LiquidLimitOrDefault(observation[BenchField.LiquidLimit]), observation[BenchField.Precision],
+                            observation[BenchField.CalibrationOffset] ?? BenchDefaults.CalibrationOffset);
+                        return null;
+                    }
                     return new RefractometerObservation(m, steps, observation[BenchField.Spot], over == true,
                         observation[BenchField.LightNm] ?? BenchDefaults.LightNanometres, BenchDefaults.LiquidLimitOrDefault(observation[BenchField.LiquidLimit]),
                         observation[BenchField.Precision], observation[BenchField.CalibrationOffset] ?? BenchDefaults.CalibrationOffset);
@@ -130,7 +141,7 @@ public static class BenchReader
                     Error(field, r.Text(field) ?? "", e.Allowed, e.Message);
                     if (field == BenchField.Readings || observation[field] is null) return null;
                     observation[field] = null;
-                    if (steps.Count == 0 && observation[BenchField.Spot] is null && over != true) return null;
+                    if (!probe && steps.Count == 0 && observation[BenchField.Spot] is null && over != true) return null;
                 }
             }
             return null;

@@ -298,6 +298,17 @@ public class BenchReaderTests
     }
 
     [Fact]
+    public void Instrument_settings_are_checked_while_no_step_is_readable_yet()
+    {
+        // A step not yet a number leaves nothing to read, but a liquid limit of 2.5, a precision of 5 and an offset of
+        // 0.5 are told their ranges now, not once a good step is typed.
+        var r = BenchReader.Read(Steps(R((BenchField.LiquidLimit, "2.5"), (BenchField.Precision, "5"), (BenchField.CalibrationOffset, "0.5")), "0:abc"));
+        Assert.Equal([BenchField.LiquidLimit, BenchField.Precision, BenchField.CalibrationOffset, BenchField.Step(0)], Fields(r));
+        Assert.Null(r.Sheet.Refractometer);
+        Assert.Contains("allowed: 1.5 to 2.2", r.Errors.Single(e => e.Field == BenchField.LiquidLimit).Sentence);
+    }
+
+    [Fact]
     public void Steps_with_no_rotation_are_spread_evenly_over_a_half_turn()
     {
         var r = new BenchReadings().WithStep(new EdgeStepText("", "1.544", "1.553")).WithStep(new EdgeStepText("", "1.544", "1.548"));
