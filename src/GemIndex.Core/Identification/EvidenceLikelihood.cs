@@ -44,7 +44,18 @@ public static class EvidenceLikelihood
         // An aggregate's spot index and SG both follow its mix of minerals: counted as correlated, not independent.
         int gravityGroup = (material.Forms & MaterialForm.Aggregate) != 0 && s.Refractometer?.Spot is not null ? EvidenceAccumulator.AggregateGroup : EvidenceAccumulator.Independent;
         if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc, gravityGroup);
-        for (int i = 0; i < s.HeavyLiquids.Count; i++) HeavyLiquid(material, s.HeavyLiquids[i], acc);
+        // Heavy liquids beside a weighed SG bound the same property: given the SG reading, they say only what the reading
+        // leaves open (docs/ranking.md §2, "Heavy liquids beside an SG"). Read against it, both are weighed as read.
+        if (s.SpecificGravity is { } weighed && s.HeavyLiquids.Count > 0 && s.HeavyLiquids.All(h => !BenchWarnings.Contradicts(weighed, h))
+            && LiquidsGivenGravity(material, weighed, s.HeavyLiquids) is { } given)
+        {
+            acc.Add(BenchField.HeavyLiquids, given.Material, given.Broad, acc.Fitting ? s.HeavyLiquids.Min(h => HeavyLiquidTail(material, h)) : 1, robust: true);
+            if (acc.Explaining)
+                acc.Say($"{string.Join(", ", s.HeavyLiquids.Select(h => $"{Word(h.Outcome)} in {F2(h.Liquid.Value)}"))}, read with SG {F2(weighed.Value)}: "
+                    + $"{(given.Material * 2 < given.Broad ? "the liquids rule out part of what the SG allows; " : "")}SG {material.SpecificGravity.ToString("0.00")} expected");
+        }
+        else
+            for (int i = 0; i < s.HeavyLiquids.Count; i++) HeavyLiquid(material, s.HeavyLiquids[i], acc);
         // A stone the bench calls opaque stays dark between crossed polarisers, shows one colour in the dichroscope and no
         // fire, whatever it is: those readings say nothing of the material and are not weighed (docs/ranking.md §2, "An
         // opaque stone"). A reaction that needs light through the stone is weighed as read, and warned of.
@@ -113,6 +124,37 @@ public static class EvidenceLikelihood
     /// <summary>A suspended stone's SG is taken within a window this many σ wide (judgement, docs/ranking.md §2).</summary>
     internal const double SuspensionWindowSigmas = 4;
 
+    /// <summary>
+    /// P(the liquids' outcomes | the SG reading, the material) and the same for a material the catalogue lacks: the share of
+    /// the reading's spread (the SG's σ with the catalogue floor) that lies within the liquids' bounds and, for the
+    /// material, within its range too, over the share within its range. Null when the reading lies so far outside the
+    /// range that the shares underflow (the liquids are then weighed one by one).
+    /// </summary>
+    internal static (double Material, double Broad)? LiquidsGivenGravity(Material m, Gravity.SpecificGravity sg, IReadOnlyList<HeavyLiquidResult> liquids)
+    {
+        double s = double.Hypot(sg.StandardUncertainty, SpecificGravityFloor);
+        double low = liquids.Max(h => h.LowestSpecificGravity), high = liquids.Min(h => h.HighestSpecificGravity);
+        double Within(double from, double to) => to <= from ? 0 : RangeLikelihood.Phi((to - sg.Value) / s) - RangeLikelihood.Phi((from - sg.Value) / s);
+        var range = m.SpecificGravity;
+        double inRange = Within(range.Minimum, range.Maximum);
+        if (!(inRange > 1e-12)) return null;
+        double broad = Within(low, high);
+        return broad > 0 ? (Within(Math.Max(low, range.Minimum), Math.Min(high, range.Maximum)) / inRange, broad) : null;
+    }
+
+    /// <summary>A liquid's outcome against the range, for the fit: the two-sided tail of how far the range lies on the wrong side.</summary>
+    private static double HeavyLiquidTail(Material m, HeavyLiquidResult liquid)
+    {
+        var range = m.SpecificGravity;
+        double density = liquid.Liquid.Value;
+        return liquid.Outcome switch
+        {
+            HeavyLiquidOutcome.Floats => RangeLikelihood.TwoSidedTail(Math.Max(0, range.Minimum - density) / HeavyLiquidSigma),
+            HeavyLiquidOutcome.Sinks => RangeLikelihood.TwoSidedTail(Math.Max(0, density - range.Maximum) / HeavyLiquidSigma),
+            _ => RangeLikelihood.TwoSidedTail(RangeLikelihood.StandardDeviationsOutside(density, range, 2 * HeavyLiquidSigma)),
+        };
+    }
+
     private static void HeavyLiquid(Material m, HeavyLiquidResult liquid, EvidenceAccumulator acc)
     {
         const double sigma = HeavyLiquidSigma;
@@ -120,15 +162,13 @@ public static class EvidenceLikelihood
         double density = liquid.Liquid.Value;
         bool fitting = acc.Fitting;
         var usual = m.SpecificGravityUsual;
-        (double f, double g, double tail) = liquid.Outcome switch
+        double tail = fitting ? HeavyLiquidTail(m, liquid) : 1;
+        (double f, double g) = liquid.Outcome switch
         {
-            HeavyLiquidOutcome.Floats => (UsualPart.Mixed(range, usual, r => RangeLikelihood.ProbabilityBelow(density, r, sigma)), BroadFloatsOrSinks,
-                fitting ? RangeLikelihood.TwoSidedTail(Math.Max(0, range.Minimum - density) / sigma) : 1),
-            HeavyLiquidOutcome.Sinks => (UsualPart.Mixed(range, usual, r => RangeLikelihood.ProbabilityAbove(density, r, sigma)), BroadFloatsOrSinks,
-                fitting ? RangeLikelihood.TwoSidedTail(Math.Max(0, density - range.Maximum) / sigma) : 1),
+            HeavyLiquidOutcome.Floats => (UsualPart.Mixed(range, usual, r => RangeLikelihood.ProbabilityBelow(density, r, sigma)), BroadFloatsOrSinks),
+            HeavyLiquidOutcome.Sinks => (UsualPart.Mixed(range, usual, r => RangeLikelihood.ProbabilityAbove(density, r, sigma)), BroadFloatsOrSinks),
             _ => (UsualPart.Mixed(range, usual, r => RangeLikelihood.Density(density, r, 2 * sigma)) * SuspensionWindowSigmas * sigma,
-                SuspensionWindowSigmas * sigma * BroadDensities.SpecificGravity,
-                fitting ? RangeLikelihood.TwoSidedTail(RangeLikelihood.StandardDeviationsOutside(density, range, 2 * sigma)) : 1),
+                SuspensionWindowSigmas * sigma * BroadDensities.SpecificGravity),
         };
         acc.Add(BenchField.HeavyLiquids, f, g, tail, robust: true);
         if (acc.Explaining)

@@ -754,6 +754,25 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_heavy_liquid_beside_a_weighed_SG_says_only_what_the_weighing_leaves_open()
+    {
+        // Zoisite's SG 3.15–3.38 (handbook values, from memory). Weighed at 3.35 ± 0.01, "sinks in 3.32" follows from the
+        // weighing itself: it must not count against zoisite as if most of its range floated (weighed alone it had, by a
+        // factor of about (3.38 − 3.32)/(3.38 − 3.15) against the even chance of a stone the catalogue lacks).
+        var index = OpticalIndices.SingleIndex(new(1.69, 1.70));
+        Material zoisite = Make("zoisite", "z", index, 3.15, 3.38);
+        var sinks = new[] { HeavyLiquidResult.Of(3.32, HeavyLiquidOutcome.Sinks) };
+        var (material, broad) = EvidenceLikelihood.LiquidsGivenGravity(zoisite, new SpecificGravity(3.35, 0.01), sinks)!.Value;
+        Assert.Equal(1, material / broad, 0.05);
+        // A coarse weighing (a small stone, ± 0.11) leaves room the liquid closes: a stone that floats in 3.90 is no
+        // corundum (3.97–4.05), though its SG of 3.88 alone would allow one.
+        Material corundum = Make("corundum", "c", index, 3.97, 4.05);
+        var floats = new[] { HeavyLiquidResult.Of(3.90, HeavyLiquidOutcome.Floats) };
+        var (c, cb) = EvidenceLikelihood.LiquidsGivenGravity(corundum, new SpecificGravity(3.88, 0.11), floats)!.Value;
+        Assert.True(c / cb < 0.01, $"{c / cb}");
+    }
+
+    [Fact]
     public void A_long_list_of_stones_to_keep_dry_names_the_three_likeliest_and_counts_the_rest()
     {
         Assert.Equal("amber", BenchWarnings.KeepDryListed(["amber"]));
