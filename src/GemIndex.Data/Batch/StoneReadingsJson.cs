@@ -245,7 +245,15 @@ public static class StoneReadingsJson
         private List<JsonElement>? List(JsonElement e, string path)
         {
             if (e.ValueKind == JsonValueKind.Array) return [.. e.EnumerateArray()];
-            errors.Add(new BenchFieldError(path, BenchText.Shown(e.GetRawText()), "a list", "must be a list."));
+            // The list's own shape, so that a line written as the command line takes it ("3.32 floats") is told what to write.
+            string shape = path switch
+            {
+                BenchField.HeavyLiquids => "a list of {\"density\": 3.32, \"result\": \"floats\"} objects (result floats, sinks or suspends)",
+                BenchField.Absorption => "a list of wavelengths in nm, e.g. [592, 505]",
+                BenchField.Readings => "a list of {\"rotation_deg\": 0, \"low\": 1.544, \"high\": 1.553} objects",
+                _ => "a list",
+            };
+            errors.Add(new BenchFieldError(path, BenchText.Shown(e.GetRawText()), shape, $"must be {shape}."));
             return null;
         }
 

@@ -113,6 +113,18 @@ public class StoneReadingsJsonTests
         Assert.Equal([field], Errors(line));
     }
 
+    [Theory]
+    [InlineData("""{"id":"x","heavy_liquids":"3.32 floats"}""", "{\"density\": 3.32, \"result\": \"floats\"}")]
+    [InlineData("""{"id":"x","absorption_nm":"694"}""", "[592, 505]")]
+    [InlineData("""{"id":"x","refractometer":{"readings":"0:1.544/1.553"}}""", "{\"rotation_deg\": 0, \"low\": 1.544")]
+    public void A_list_written_as_text_is_told_the_list_s_shape(string line, string shape)
+    {
+        // The command line takes "3.32 floats"; a batch line takes the list of objects: the error says which.
+        var error = Assert.Single(StoneReadingsJson.Read(line).Errors);
+        Assert.Contains(shape, error.Allowed);
+        Assert.StartsWith("must be a list of", error.Sentence);
+    }
+
     [Fact]
     public void A_line_with_a_fault_of_form_still_has_its_values_checked()
     {
