@@ -333,7 +333,15 @@ public static class BenchReader
             foreach (string part in BenchSyntax.Lines(text))
             {
                 if (!BenchNumber.TryParse(part, out double nm, out string problem))
-                { Error(BenchField.Absorption, part, "lines in nm, 380–780, or none", Sentence(problem, part)); return null; }
+                {
+                    // A band written by its edges ("520-540"): the reading takes a band by its middle, as a line.
+                    var band = System.Text.RegularExpressions.Regex.Match(part, @"^\s*(\d{3}(?:\.\d+)?)\s*[-–]\s*(\d{3}(?:\.\d+)?)\s*$");
+                    string why = band.Success
+                        ? $"'{BenchText.Shown(part.Trim())}' is a band: write its middle, {((double.Parse(band.Groups[1].Value, CultureInfo.InvariantCulture) + double.Parse(band.Groups[2].Value, CultureInfo.InvariantCulture)) / 2).ToString("0.#", CultureInfo.InvariantCulture)}, as a line"
+                        : Sentence(problem, part).TrimEnd('.');
+                    Error(BenchField.Absorption, part, "lines in nm, 380–780, or none", $"{why}; allowed: lines (or a band's middle) in nm, 380 to 780, or none.");
+                    return null;
+                }
                 if (Checked(BenchField.Absorption, part, () => { QuantityOutOfRangeException.ThrowIfOutside("absorption line", nm, 380, 780, "nm"); return nm; }) is not { } checkedNm)
                     return null;
                 lines.Add(checkedNm);

@@ -324,6 +324,15 @@ public class BenchReaderTests
         Assert.Equal([BenchField.Absorption], Fields(BenchReader.Read(R((BenchField.Absorption, " ")))));
     }
 
+    [Theory]
+    [InlineData("505 520-540", "'520-540' is a band: write its middle, 530, as a line; allowed: lines (or a band's middle) in nm, 380 to 780, or none.")]
+    [InlineData("505 abc", "'abc' is not a number; allowed: lines (or a band's middle) in nm, 380 to 780, or none.")]
+    public void A_line_that_is_not_a_number_is_told_what_to_write_and_a_band_its_middle(string lines, string sentence)
+    {
+        var r = BenchReader.Read(R((BenchField.Absorption, lines)));
+        Assert.Equal(sentence, Assert.Single(r.Errors).Sentence);
+    }
+
     [Fact]
     public void An_unknown_field_is_an_error()
     {
