@@ -82,7 +82,7 @@ internal static class StoneHistoryText
     private static readonly Dictionary<string, string> NumberFormats = new(StringComparer.Ordinal)
     {
         ["low"] = "0.000#", ["high"] = "0.000#", ["liquid_limit"] = "0.000#", ["spot"] = "0.00#",
-        ["sg"] = "0.00#", ["density"] = "0.00#", ["air_ct"] = "0.000#", ["water_ct"] = "0.000#",
+        ["sg"] = "0.00#", ["density"] = "0.00#", ["air_ct"] = "0.000#", ["water_ct"] = "0.000#", ["weight_ct"] = "0.00#",
     };
 
     /// <summary>

@@ -21,7 +21,7 @@ public class StoneHistoryTextTests
         Assert.Equal("2026-03-01 09:05:00  stone created as 'lot 7'", lines[2]);
         Assert.Equal("2026-03-01 09:05:00  Notes set to 'clean'", lines[3]);
         Assert.Equal("2026-03-01 09:06:00  Colour changed from 'blu' to 'blue'", lines[4]);
-        Assert.Equal("2026-03-01 09:07:00  Weight (ct) cleared (was '1.2')", lines[5]);
+        Assert.Equal("2026-03-01 09:07:00  Weight (ct) cleared (was '1.20')", lines[5]);
     }
 
     [Fact]
@@ -97,6 +97,8 @@ public class StoneHistoryTextTests
         Assert.Equal(["Polariscope changed from 'singly refractive' to 'doubly refractive'"],
             StoneHistoryText.Describe(new StoneEdit(At, "readings.polariscope", "\"singly_refractive\"", "\"doubly_refractive\"")));
         Assert.Equal(["SG set to '4.00'"], StoneHistoryText.Describe(new StoneEdit(At, "readings.sg", "", "4")));
+        // The stone's weight to the hundredth of a carat, as the balance gives it (2.30, not 2.3).
+        Assert.Equal(["Weight (ct) set to '2.30'"], StoneHistoryText.Describe(new StoneEdit(At, "weight_ct", "", "2.3")));
         Assert.Equal(["Features seen under magnification set to 'curved striae'"],
             StoneHistoryText.Describe(new StoneEdit(At, "readings.magnification", "", """{"present":["curved_striae"]}""")));
         Assert.Equal(["Notes set to '\"as found\"'"], StoneHistoryText.Describe(new StoneEdit(At, "notes", "", "\"as found\"")));   // a note is text, never JSON
