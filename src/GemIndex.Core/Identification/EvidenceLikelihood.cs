@@ -45,7 +45,7 @@ public static class EvidenceLikelihood
         int gravityGroup = (material.Forms & MaterialForm.Aggregate) != 0 && s.Refractometer?.Spot is not null ? EvidenceAccumulator.AggregateGroup : EvidenceAccumulator.Independent;
         if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc, gravityGroup);
         // Heavy liquids beside a weighed SG bound the same property: given the SG reading, they say only what the reading
-        // leaves open (docs/ranking.md §2, "Heavy liquids beside an SG"). Read against it, both are weighed as read.
+        // leaves open (docs/ranking.md §2, "heavy liquids beside a weighed SG"). Read against it, both are weighed as read.
         if (s.SpecificGravity is { } weighed && s.HeavyLiquids.Count > 0 && s.HeavyLiquids.All(h => !BenchWarnings.Contradicts(weighed, h))
             && LiquidsGivenGravity(material, weighed, s.HeavyLiquids) is { } given)
         {
