@@ -153,16 +153,21 @@ internal static class ReportCommand
             using var workbook = StoneWorkbook.Open(book.FullName, TimeProvider.System, WorkbookOpening.ReadOnly);
             var identifier = new Identifier(materials());
             var rows = new List<(StoneSheet, IdentificationResult?)>();
+            var refused = new Dictionary<long, IReadOnlyList<string>>();
             foreach (var summary in workbook.List())
             {
                 if (workbook.Get(summary.Id) is not { } sheet) continue;
+                // Typed at the bench and refused: only in the stone's draft, so said in its row (and on stderr, as for one stone).
+                var notUsed = TextUi.Bench.BenchDraft.Refused(summary.Id, workbook.Setting(TextUi.Main.BenchSession.DraftSetting(summary.Id)));
+                if (notUsed.Count > 0) refused[summary.Id] = [.. notUsed.Select(x => x.ToString())];
+                foreach (var x in notUsed) e.WriteLine($"gemindex: stone '{BenchText.Shown(sheet.Reference)}': typed but refused, so not in its row: {x}");
                 BenchOutcome outcome = BenchIdentification.Identify(identifier, StoneReadingsConverter.ToReadings(sheet.Readings), Request with { AdviseNextTest = false });
                 foreach (var x in outcome.Reading.Errors)
                     e.WriteLine($"gemindex: stone '{BenchText.Shown(sheet.Reference)}': {x} (row written without a result)");
                 rows.Add((sheet, outcome.Result));
             }
             using var writer = output is null ? null : new StreamWriter(output.FullName);
-            WorkbookCsv.Write(writer ?? o, rows);
+            WorkbookCsv.Write(writer ?? o, rows, refused);
             if (output is not null) o.WriteLine($"wrote {rows.Count} stones to {output.FullName}");
             return ExitCodes.Ok;
         }

@@ -16,14 +16,20 @@ internal static class WorkbookCsv
     [
         "reference", "weight_carats", "colour", "refractive_index_low", "refractive_index_high", "birefringence",
         "optic_character", "specific_gravity", "polariscope", "species", "species_confidence", "best_candidate", "confidence",
-        "no_good_match", "high_above_liquid_limit", "refractometer_method",
+        "no_good_match", "high_above_liquid_limit", "refractometer_method", "refused_entries",
     ];
 
     /// <summary>Characters that make a spreadsheet read a cell as a formula when they lead it.</summary>
     public const string FormulaTriggers = "=+-@\t\r\0";
 
-    public static void Write(TextWriter output, IEnumerable<(StoneSheet Sheet, IdentificationResult? Result)> stones) =>
-        Table(output, Columns, stones.Select(s => (IReadOnlyList<string>)Cells(s.Sheet, s.Result)));
+    /// <summary>
+    /// Writes the stones; <paramref name="refused"/> gives, by stone id, the entries typed at the bench and refused (kept
+    /// only in the stone's draft, so in no other column: "field: reason", joined by " | ").
+    /// </summary>
+    public static void Write(TextWriter output, IEnumerable<(StoneSheet Sheet, IdentificationResult? Result)> stones,
+        IReadOnlyDictionary<long, IReadOnlyList<string>>? refused = null) =>
+        Table(output, Columns, stones.Select(s => (IReadOnlyList<string>)[.. Cells(s.Sheet, s.Result),
+            string.Join(" | ", refused?.GetValueOrDefault(s.Sheet.Id) ?? [])]));
 
     /// <summary>Writes a header and rows of cells, every cell neutralised and quoted as needed.</summary>
     public static void Table(TextWriter output, IReadOnlyList<string> header, IEnumerable<IReadOnlyList<string>> rows)

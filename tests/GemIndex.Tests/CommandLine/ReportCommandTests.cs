@@ -182,6 +182,12 @@ public sealed class ReportCommandTests : IDisposable
         Assert.True(exit == 0, err);
         Assert.Contains("gemindex: stone 'lot 7 / 3': typed but refused, so not in this report: sg: '2.6x' is not a number", err);
         Assert.Contains("# Stone report: lot 7 / 3", stdout);
+        // The workbook's CSV says it in the stone's row too (its last column), and on stderr.
+        var (csvExit, csv, csvErr) = Run("report", "workbook", "--workbook", path);
+        Assert.True(csvExit == 0, csvErr);
+        string row = csv.Split('\n').Single(l => l.StartsWith("lot 7 / 3,", StringComparison.Ordinal)).TrimEnd('\r');
+        Assert.Contains(",facet,sg: '2.6x' is not a number", row);
+        Assert.Contains("typed but refused, so not in its row: sg: '2.6x'", csvErr);
     }
 
     [Fact]

@@ -66,10 +66,10 @@ public class WorkbookCsvTests
         string Share(double p) => (Math.Floor(p * 10000) / 10000).ToString("0.0000", System.Globalization.CultureInfo.InvariantCulture);
         Assert.True(result.Species[0].Confidence < 1);
         Assert.DoesNotContain(",1.0000,", rows[1]);
-        Assert.EndsWith($",{result.Species[0].Species},{Share(result.Species[0].Confidence)},{result.Candidates[0].Material.Name},{Share(result.Candidates[0].Confidence)},false,,facet", rows[1]);
+        Assert.EndsWith($",{result.Species[0].Species},{Share(result.Species[0].Confidence)},{result.Candidates[0].Material.Name},{Share(result.Candidates[0].Confidence)},false,,facet,", rows[1]);
         Assert.Equal("quartz", result.Species[0].Species);
         // The line break inside the quoted colour is the stone's, the last one ends the file (Sep writes the platform's line end).
-        Assert.EndsWith(Environment.NewLine + "x,2.65,\"blue\ngreen\",,,,,,,,,,,,," + Environment.NewLine, text);
+        Assert.EndsWith(Environment.NewLine + "x,2.65,\"blue\ngreen\",,,,,,,,,,,,,," + Environment.NewLine, text);
     }
 
     [Fact]
@@ -94,9 +94,9 @@ public class WorkbookCsvTests
         WorkbookCsv.Write(w, [(spot, ReportFixtures.Identify(spot)), (over, ReportFixtures.Identify(over))]);
         string[] rows = w.ToString().Split(Environment.NewLine);
         Assert.StartsWith("s,2.65,,1.66,,", rows[1]);
-        Assert.EndsWith(",spot", rows[1]);
+        Assert.EndsWith(",spot,", rows[1]);
         Assert.StartsWith("o,2.65,,,,,", rows[2]);
-        Assert.EndsWith(",1.790,over limit", rows[2]);
+        Assert.EndsWith(",1.790,over limit,", rows[2]);
     }
 
     [Fact]
