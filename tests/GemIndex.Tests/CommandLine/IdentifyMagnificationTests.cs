@@ -113,6 +113,12 @@ public class IdentifyMagnificationTests
         Assert.Equal("chrysoberyl", chrysoberyl.GetProperty("species").GetString());
         var origins = chrysoberyl.GetProperty("origins");
         Assert.True(origins.GetProperty("natural").GetDouble() > 0.2 && origins.GetProperty("synthetic").GetDouble() > 0.2, origins.ToString());
+        // The cat's-eye variety shows the same spectrum: on a faceted stone (no eye) the chromium doublet alone leaves it
+        // at the cut's misread share, not lifted by a shorter list of lines.
+        var faceted = SpeciesOf(run, ["--edge", "0:1.745/1.754", "--edge", "90:1.747/1.754", "--sg", "3.73", "--lines", "680.5 678.5", "--cut", "faceted", "--candidates", "20"])[0];
+        double catsEye = faceted.GetProperty("candidates").EnumerateArray().Where(c => c.GetProperty("name").GetString() == "cat's-eye alexandrite")
+            .Sum(c => c.GetProperty("confidence").GetDouble());
+        Assert.True(catsEye < 0.01, $"{catsEye}");
     }
 
     [Fact]
