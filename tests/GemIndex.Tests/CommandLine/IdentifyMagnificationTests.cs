@@ -122,6 +122,19 @@ public class IdentifyMagnificationTests
     }
 
     [Fact]
+    public void A_blue_beryl_s_usual_indices_lead_with_aquamarine_not_the_rarely_met_synthetic()
+    {
+        // Aquamarine's usual RI 1.577-1.583 (gemstone pages, e.g. amezin.com): inside both the natural entries' range and the
+        // narrow published range of hydrothermal synthetic aquamarine, which a bench seldom meets (a small production).
+        using var run = new CommandRun();
+        var beryl = SpeciesOf(run, ["--edge", "0:1.577/1.583", "--edge", "45:1.579/1.583", "--edge", "90:1.582/1.583", "--edge", "135:1.580/1.583", "--colour", "blue"])[0];
+        Assert.Equal("beryl", beryl.GetProperty("species").GetString());
+        var origins = beryl.GetProperty("origins");
+        Assert.True(origins.GetProperty("natural").GetDouble() + origins.GetProperty("treated").GetDouble() > origins.GetProperty("synthetic").GetDouble(), origins.ToString());
+        Assert.NotEqual("hydrothermal synthetic aquamarine", beryl.GetProperty("candidates")[0].GetProperty("name").GetString());
+    }
+
+    [Fact]
     public void Nacre_platelet_edges_seen_rule_out_the_coated_bead_imitations()
     {
         // A white bead, spot 1.53 (one end of aragonite's blink), SG 2.71: inside the catalogue's ranges of pearl,
