@@ -167,9 +167,9 @@ public static class BenchReader
                 double? edgeLimit = checkAboveLiquid ? liquid : null;
                 double? low = Parse(field, "low", s.Low, edgeLimit);
                 double? high = s.High.Trim().Length == 0 ? null : Parse(field, "high", s.High, edgeLimit);
-                if (rotation is null || low is null || s.High.Trim().Length > 0 && high is null) continue;
                 // Each edge against the scale first, so that an edge no refractometer shows is named as such, both when
-                // both are (not "high below low" for a low edge typed above the liquid).
+                // both are (not "high below low" for a low edge typed above the liquid); an edge that is a number is
+                // checked even when the other part of its step is not (a low edge of 180 beside a high edge not a number).
                 var edges = new[] { ("low", low), ("high", high) }.Where(e => e.Item2 is not null).Select(e => (Part: e.Item1, Value: e.Item2!.Value)).ToList();
                 // "low edge 1.8 and high edge 1.81 are", "low edge 2.5 is": the edges the predicate picks, or null.
                 string? Named(Func<double, bool> off) => edges.Where(e => off(e.Value)).ToList() is { Count: > 0 } picked
@@ -187,6 +187,7 @@ public static class BenchReader
                     Error(field, BenchSyntax.Step(s), $"at least the scale's {bottom}", $"{below} below the scale's lowest index {bottom}, where no refractometer reads.");
                     continue;
                 }
+                if (rotation is null || low is null || s.High.Trim().Length > 0 && high is null) continue;
                 ShadowEdgeStep step;
                 try { step = new ShadowEdgeStep(rotation.Value, low.Value, high); }
                 catch (QuantityOutOfRangeException e) { Error(field, BenchSyntax.Step(s), e.Allowed, e.Message); continue; }

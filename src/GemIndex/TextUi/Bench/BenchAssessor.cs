@@ -28,7 +28,9 @@ internal sealed class BenchAssessor(Identifier? identifier)
             ? new BenchOutcome(BenchReader.Read(readings), null)
             : BenchIdentification.Identify(identifier, readings, Request);
         var errors = new Dictionary<string, string>();
-        foreach (BenchFieldError e in outcome.Reading.Errors) errors.TryAdd(e.Field, e.Sentence);
+        // A field with two faults (a step's low edge and its high edge) shows both, one after the other.
+        foreach (BenchFieldError e in outcome.Reading.Errors)
+            errors[e.Field] = errors.TryGetValue(e.Field, out string? first) ? first + " " + e.Sentence : e.Sentence;
         CheckWeight(form, errors);
         if (GemIndex.Cli.Reports.ReportHeader.ExaminerProblem(form.Text(BenchFields.Examiner)) is { } examiner) errors[BenchFields.Examiner] = examiner;
         IdentificationResult? result = outcome.Reading.HasReadings ? outcome.Result : null;

@@ -138,6 +138,19 @@ public class BenchAssessorTests
     }
 
     [Fact]
+    public void A_step_with_two_bad_edges_shows_both_faults_at_its_row()
+    {
+        // The low edge typed as 180 (the rotation in the wrong box) and the pair typed whole in the high box: both are
+        // named at the step, not only the first.
+        BenchModel form = QuartzForm();
+        form.PutStep(1, new StepText("45", "180", "1.691 1.700"));
+        string said = Assessor.Assess(form.Snapshot()).Errors[BenchFields.Step(1)];
+        Assert.Contains("low", said);
+        Assert.Contains("180", said);
+        Assert.Contains("'1.691 1.700'", said);
+    }
+
+    [Fact]
     public void A_high_edge_below_the_low_edge_is_refused_at_that_step_with_Cores_reason()
     {
         BenchModel form = QuartzForm();
