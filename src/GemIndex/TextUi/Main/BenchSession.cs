@@ -17,6 +17,27 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     public const string CalibrationSetting = "refractometer.calibration_offset";
     public const string RotationStepSetting = RefractometerPage.RotationStepField;
 
+    /// <summary>The bench page last shown, so that a restart (after a crash or a closed terminal) opens where the typing was.</summary>
+    public const string PageSetting = "bench.page";
+
+    private bool _started;
+
+    /// <summary>The page shown when the session last ran (0 stone, 1 refractometer, …), or null.</summary>
+    public int? LastPage { get; private set; }
+
+    /// <summary>Keeps the page shown (after <see cref="Start"/>; nothing while the workbook is read-only).</summary>
+    public void RememberPage(int page)
+    {
+        if (!_started || LastPage == page) return;
+        LastPage = page;
+        lock (_gate)
+        {
+            if (workbook.ReadOnlyReason is not null) return;
+            try { Setting(PageSetting, page.ToString(System.Globalization.CultureInfo.InvariantCulture)); }
+            catch (Exception e) when (e is WorkbookException or Microsoft.Data.Sqlite.SqliteException or IOException) { }   // a page is no reading: never worth a message
+        }
+    }
+
     /// <summary>The examiner named in every report exported from this workbook (a workbook is one examiner's bench book).</summary>
     public const string ExaminerSetting = BenchFields.Examiner;
 
@@ -53,6 +74,8 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
         {
             Form.SetText(RefractometerPage.RotationStepField, workbook.Setting(RotationStepSetting) ?? "");
             Form.SetText(BenchFields.Examiner, workbook.Setting(ExaminerSetting) ?? "");
+            LastPage = int.TryParse(workbook.Setting(PageSetting), System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out int page) ? page : null;
+            _started = true;
             StoneSummary? latest = workbook.List().FirstOrDefault();
             Load(latest is not null ? workbook.Get(latest.Id)! : workbook.IsReadOnly ? new StoneSheet() : NewStone());
         }

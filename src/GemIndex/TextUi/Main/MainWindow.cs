@@ -56,7 +56,7 @@ internal sealed class MainWindow : Window
         {
             if (!m.IsSingleClicked || m.Position is not { } p) return;
             int page = PageAt(p.X);
-            if (page >= 0) ShowPage(page);
+            if (page >= 0) GoToPage(page);
             m.Handled = true;
         };
         _left = new FrameView { Y = 1, Width = FormWidth, Height = Dim.Fill(1) };
@@ -333,6 +333,16 @@ internal sealed class MainWindow : Window
         Results.List.HasFocusChanged += (_, _) => ShowBars();
     }
 
+    /// <summary>A page the examiner asked for (a key, a click): shown, and kept for the next start.</summary>
+    private void GoToPage(int index)
+    {
+        ShowPage(index);
+        _session.RememberPage(index);
+    }
+
+    /// <summary>Shows the page the last session ended on (the refractometer's when none, or not a page).</summary>
+    public void ShowLastPage() => ShowPage(_session.LastPage is int page && page >= 0 && page < Pages.Count ? page : 1);
+
     /// <summary>Puts the model's texts into the fields (after a stone is opened), without echoing them back as edits.</summary>
     public void FillFromModel()
     {
@@ -389,11 +399,11 @@ internal sealed class MainWindow : Window
     private void OnGlobalKey(object? sender, Key key)
     {
         if (key == Key.F1) TextScreen.Show(App!, "Help", HelpText.Render());
-        else if (key == Key.F2) ShowPage(0);
-        else if (key == Key.F3) ShowPage(1);
-        else if (key == Key.F4) ShowPage(2);
-        else if (key == Key.F5) ShowPage(3);
-        else if (key == Key.L.WithCtrl) ShowPage(LoupePageIndex);
+        else if (key == Key.F2) GoToPage(0);
+        else if (key == Key.F3) GoToPage(1);
+        else if (key == Key.F4) GoToPage(2);
+        else if (key == Key.F5) GoToPage(3);
+        else if (key == Key.L.WithCtrl) GoToPage(LoupePageIndex);
         else if (key == Key.F6) EdgePlotView.Show(App!, new EdgePlotModel(_session.Results.Latest?.Readings.Refractometer?.Readings ?? [], _session.Results.Latest?.Readings.Refractometer?.LiquidLimit));
         else if (key == Key.R.WithCtrl) ScaleView.Show(App!, new ScaleModel(_session.Results.Latest));
         else if (key == Key.F7 && _catalogue.Count == 0) _keyLine.Text = "F7: " + (_session.Results.WaitingReason ?? _session.Results.Waiting ?? "the catalogue is empty");   // no pop-up to swallow the next keys
@@ -416,7 +426,7 @@ internal sealed class MainWindow : Window
     {
         _session.New();
         FillFromModel();
-        ShowPage(0);
+        GoToPage(0);
         Pages[0].Fields[0].Edit.SelectAll();
     }
 

@@ -39,6 +39,7 @@ internal static class TextUiLauncher
             window.ShowCatalogueState(LoadingCatalogue);
             session.Start();
             window.FillFromModel();
+            window.ShowLastPage();
             _ = loading.ContinueWith(done =>
             {
                 if (done.IsCompletedSuccessfully)

@@ -418,7 +418,25 @@ public sealed class MainWindowTests : IDisposable
         var window = new MainWindow(session, TestMaterials.All);
         session.Start();
         window.FillFromModel();
+        window.ShowLastPage();   // as TextUiLauncher does
         return (session, window);
+    }
+
+    [Fact]
+    public void After_a_closed_terminal_the_bench_opens_on_the_page_where_the_typing_was()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.F2);
+        Type(app, "lot 9");
+        Settle();
+        Assert.Equal(0, window.CurrentPage);
+        Assert.Equal("0", _workbook.Setting(BenchSession.PageSetting));
+        Close(app, window, token);
+
+        var (again, reopened) = Restart();
+        using var _ = reopened;
+        Assert.Equal(0, reopened.CurrentPage);   // the stone page, not the refractometer's
+        Assert.True(again.Flush());
     }
 
     [Fact]
