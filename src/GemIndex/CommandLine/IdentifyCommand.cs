@@ -42,7 +42,7 @@ internal static class IdentifyCommand
 
     public static Command Create(Option<DirectoryInfo?> catalogueDirectory)
     {
-        var batch = new Option<string?>("--batch") { Description = "JSON Lines file of stones (- for standard input); writes one JSON line per stone" };
+        var batch = new Option<string?>("--batch") { Description = "JSON Lines file of stones (- for standard input), one object a line, e.g. {\"id\":\"A1\",\"refractometer\":{\"method\":\"facet\",\"readings\":[{\"rotation_deg\":0,\"low\":1.544,\"high\":1.553}]},\"sg\":2.65,\"heavy_liquids\":[{\"density\":3.32,\"result\":\"floats\"}],\"colour\":\"yellow\"} (every field: the README's \"Batch format\"); writes one JSON line per stone" };
         var explain = new Option<bool>("--explain") { Description = "With --batch: add each leading candidate's reasons ('why')" };
         var edges = new Option<string[]>("--edge")
         {
@@ -64,7 +64,7 @@ internal static class IdentifyCommand
         var values = Values.Select(v => (v.Field, Option: new Option<string?>(v.Option) { Description = v.Description })).ToList();
         var id = new Option<string>("--id") { Description = "The stone's reference", DefaultValueFactory = _ => "stone" };
         var count = new Option<string?>("--candidates") { Description = $"How many candidates to show (1–{BenchDefaults.MostCandidates}, default {BenchDefaults.Candidates})" };
-        var json = new Option<bool>("--json") { Description = "Write the result as one JSON line (the result document, docs/result-document.md)" };
+        var json = new Option<bool>("--json") { Description = "Write the result as one JSON line: the result document, the species first (its fields: docs/result-document.md in the source)" };
         var command = new Command("identify", "Rank catalogue materials for a stone's bench readings, with confidence, reasons and the next test")
         {
             batch, explain, edges, overLimit, liquids, features, noFeatures, id, count, json, catalogueDirectory,
