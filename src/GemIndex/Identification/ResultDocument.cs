@@ -83,8 +83,8 @@ internal static class ResultDocument
         w.WriteEndArray();
         w.WriteNumber("not_in_catalogue", Probability(result.NotInCatalogue));
         w.WriteBoolean("no_good_match", result.NoGoodMatch);
-        // What the series alone says of the optic character (a summary, never a gate), worked out only where the reasons
-        // are: a plain batch line skips it for speed.
+        // What the series (and the dichroscope, when read) says of the optic character (a summary, never a gate), worked
+        // out only where the reasons are: a plain batch line skips it for speed.
         if (explain && result.Series is { } series && result.SeriesCharacter is { } character)
         {
             w.WriteStartObject("optic_character");

@@ -47,7 +47,7 @@ internal static class HelpText
     [
         "Contact liquids for refractometers (and heavy liquids for SG) are toxic: use little, keep the room aired, wear gloves, never let them touch skin, wash off spills at once.",
         "Ultraviolet lamps harm eyes and skin: never look into the lamp, use the viewing cabinet or UV-blocking glasses.",
-        "Do not immerse porous, soluble or fragile stones (opal, turquoise, pearl, amber and the like) in water or heavy liquids; the SG page warns when such a stone is possible here.",
+        "Do not immerse porous, soluble or fragile stones (opal, turquoise, pearl, amber and the like) in water or heavy liquids; the SG page warns when such a stone is among the likely materials.",
         "Trade in elephant ivory, tortoiseshell, black and golden coral, some red corals and conch shell is restricted by CITES, and mammoth ivory by some countries' rules: the answer names the rule when such a material is a candidate; check the rules where you buy, sell or ship.",
         "An identification here is an aid to your own judgement, not a certificate. Defer to local rules and licensed practice; refer valuable or doubtful stones to a qualified laboratory.",
     ];
