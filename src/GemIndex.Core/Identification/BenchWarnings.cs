@@ -82,8 +82,12 @@ public static class BenchWarnings
         if (sheet.Series is { } series)
         {
             warnings.AddRange(series.Misreadings.Select(m => "Likely misreading: " + m + "."));
+            // Three colours in the dichroscope already say biaxial (common practice): the series then leaves open only
+            // what the edges alone give, β and the sign.
             if (series.Character is null && series.UndeterminedReason.Length > 0)
-                warnings.Add("Optic character undetermined: " + series.UndeterminedReason + ".");
+                warnings.Add(sheet.Sheet.Pleochroism == PleochroismObservation.Trichroic
+                    ? "Biaxial by the dichroscope's three colours; the rotation series leaves β and the optic sign open: " + series.UndeterminedReason.Replace("to fix the optic character", "to fix them", StringComparison.Ordinal) + "."
+                    : "Optic character undetermined: " + series.UndeterminedReason + ".");
         }
         if (sheet.Sheet.Refractometer is { OverLimit: true } r)
             warnings.Add(r.Steps.Count > 0

@@ -95,6 +95,18 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_short_series_beside_three_colours_is_said_biaxial_with_beta_and_sign_left_open()
+    {
+        // Zoisite-like edges (α 1.691, γ 1.700, from memory) read over 30° only: the series cannot name the character, but a
+        // trichroic stone is biaxial (common practice), so the warning says what is still open rather than "undetermined".
+        var short30 = Facet((0, 1.691, 1.693), (15, 1.691, 1.696), (30, 1.692, 1.699));
+        string? Said(BenchSheet sheet) => Engine.Identify(sheet).Warnings.SingleOrDefault(w => w.Contains("of the half turn unread", StringComparison.Ordinal));
+        Assert.StartsWith("Optic character undetermined:", Said(new BenchSheet { Refractometer = short30 }));
+        Assert.StartsWith("Biaxial by the dichroscope's three colours; the rotation series leaves β and the optic sign open:",
+            Said(new BenchSheet { Refractometer = short30, Pleochroism = PleochroismObservation.Trichroic }));
+    }
+
+    [Fact]
     public void A_rotation_read_twice_is_named_and_a_half_turn_is_not()
     {
         // Quartz ω 1.544, ε 1.553 (Handbook of Mineralogy, from memory). A half turn shows the same section again
