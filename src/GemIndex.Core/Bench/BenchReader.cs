@@ -326,6 +326,9 @@ public static class BenchReader
             catch (QuantityOutOfRangeException e) { Error(BenchField.IndexAtG, nGText!, e.Allowed, e.Message); return null; }
         }
 
+        /// <summary>A band written by its edges, "520-540" or "520 – 540".</summary>
+        private static readonly System.Text.RegularExpressions.Regex BandByItsEdges = new(@"^\s*(\d{3}(?:\.\d+)?)\s*[-–]\s*(\d{3}(?:\.\d+)?)\s*$");
+
         private List<double>? Absorption()
         {
             if (r.Text(BenchField.Absorption) is not { } text) return null;
@@ -336,7 +339,7 @@ public static class BenchReader
                 if (!BenchNumber.TryParse(part, out double nm, out string problem))
                 {
                     // A band written by its edges ("520-540"): the reading takes a band by its middle, as a line.
-                    var band = System.Text.RegularExpressions.Regex.Match(part, @"^\s*(\d{3}(?:\.\d+)?)\s*[-–]\s*(\d{3}(?:\.\d+)?)\s*$");
+                    var band = BandByItsEdges.Match(part);
                     string why = band.Success
                         ? $"'{BenchText.Shown(part.Trim())}' is a band: write its middle, {((double.Parse(band.Groups[1].Value, CultureInfo.InvariantCulture) + double.Parse(band.Groups[2].Value, CultureInfo.InvariantCulture)) / 2).ToString("0.#", CultureInfo.InvariantCulture)}, as a line"
                         : Sentence(problem, part).TrimEnd('.');

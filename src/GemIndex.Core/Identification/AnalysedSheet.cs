@@ -11,6 +11,7 @@ public sealed record AnalysedSheet
     {
         Sheet = sheet;
         OpaqueStoneShows = EvidenceLikelihood.SaysNothingOfAnOpaqueStone(sheet);
+        LiquidsBesideGravity = EvidenceLikelihood.LiquidBounds(sheet);
         if (!string.IsNullOrWhiteSpace(sheet.Colour))
         {
             var hues = ColourWords.PrincipalHues(sheet.Colour).ToHashSet();
@@ -87,6 +88,12 @@ public sealed record AnalysedSheet
 
     /// <summary>The readings of a stone read opaque that any opaque stone shows, not weighed (worked out once per stone).</summary>
     internal (bool Polariscope, bool Pleochroism, bool Fire) OpaqueStoneShows { get; }
+
+    /// <summary>
+    /// Heavy liquids beside a weighed SG that none of them contradicts: the SG's reading and spread, the liquids' bounds and
+    /// the share of the reading's spread inside them (the same for every entry, so worked out once); null otherwise.
+    /// </summary>
+    internal EvidenceLikelihood.GravityWithLiquids? LiquidsBesideGravity { get; }
 
     /// <summary>The rotation series' summary for display (character, sign, indices read from the readings; never a gate).</summary>
     public RotationSeriesResult? Series { get; }

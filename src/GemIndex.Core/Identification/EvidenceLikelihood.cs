@@ -46,13 +46,12 @@ public static class EvidenceLikelihood
         if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc, gravityGroup);
         // Heavy liquids beside a weighed SG bound the same property: given the SG reading, they say only what the reading
         // leaves open (docs/ranking.md §2, "heavy liquids beside a weighed SG"). Read against it, both are weighed as read.
-        if (s.SpecificGravity is { } weighed && s.HeavyLiquids.Count > 0 && s.HeavyLiquids.All(h => !BenchWarnings.Contradicts(weighed, h))
-            && LiquidsGivenGravity(material, weighed, s.HeavyLiquids) is { } given)
+        if (sheet.LiquidsBesideGravity is { } bounds && LiquidsGivenGravity(material, bounds) is { } given)
         {
-            acc.Add(BenchField.HeavyLiquids, given.Material, given.Broad, acc.Fitting ? s.HeavyLiquids.Min(h => HeavyLiquidTail(material, h)) : 1, robust: true);
+            acc.Add(BenchField.HeavyLiquids, given, bounds.Broad, acc.Fitting ? s.HeavyLiquids.Min(h => HeavyLiquidTail(material, h)) : 1, robust: true);
             if (acc.Explaining)
-                acc.Say($"{string.Join(", ", s.HeavyLiquids.Select(h => $"{Word(h.Outcome)} in {F2(h.Liquid.Value)}"))}, read with SG {F2(weighed.Value)}: "
-                    + $"{(given.Material * 2 < given.Broad ? "the liquids rule out part of what the SG allows; " : "")}SG {material.SpecificGravity.ToString("0.00")} expected");
+                acc.Say($"{string.Join(", ", s.HeavyLiquids.Select(h => $"{Word(h.Outcome)} in {F2(h.Liquid.Value)}"))}, read with SG {F2(bounds.Value)}: "
+                    + $"{(given * 2 < bounds.Broad ? "the liquids rule out part of what the SG allows; " : "")}SG {material.SpecificGravity.ToString("0.00")} expected");
         }
         else
             for (int i = 0; i < s.HeavyLiquids.Count; i++) HeavyLiquid(material, s.HeavyLiquids[i], acc);
@@ -125,21 +124,41 @@ public static class EvidenceLikelihood
     internal const double SuspensionWindowSigmas = 4;
 
     /// <summary>
-    /// P(the liquids' outcomes | the SG reading, the material) and the same for a material the catalogue lacks: the share of
-    /// the reading's spread (the SG's σ with the catalogue floor) that lies within the liquids' bounds and, for the
-    /// material, within its range too, over the share within its range. Null when the reading lies so far outside the
+    /// P(the liquids' outcomes | the SG reading, the material): the share of the reading's spread (the SG's σ with the
+    /// catalogue floor) within the liquids' bounds and the material's range, over the share within its range; for a
+    /// material the catalogue lacks, <see cref="GravityWithLiquids.Broad"/>. Null when the reading lies so far outside the
     /// range that the shares underflow (the liquids are then weighed one by one).
     /// </summary>
-    internal static (double Material, double Broad)? LiquidsGivenGravity(Material m, Gravity.SpecificGravity sg, IReadOnlyList<HeavyLiquidResult> liquids)
+    internal static double? LiquidsGivenGravity(Material m, GravityWithLiquids g)
     {
-        double s = double.Hypot(sg.StandardUncertainty, SpecificGravityFloor);
-        double low = liquids.Max(h => h.LowestSpecificGravity), high = liquids.Min(h => h.HighestSpecificGravity);
-        double Within(double from, double to) => to <= from ? 0 : RangeLikelihood.Phi((to - sg.Value) / s) - RangeLikelihood.Phi((from - sg.Value) / s);
         var range = m.SpecificGravity;
-        double inRange = Within(range.Minimum, range.Maximum);
-        if (!(inRange > 1e-12)) return null;
-        double broad = Within(low, high);
-        return broad > 0 ? (Within(Math.Max(low, range.Minimum), Math.Min(high, range.Maximum)) / inRange, broad) : null;
+        double inRange = g.Within(range.Minimum, range.Maximum);
+        return inRange > 1e-12 ? g.Within(Math.Max(g.Low, range.Minimum), Math.Min(g.High, range.Maximum)) / inRange : null;
+    }
+
+    /// <summary>
+    /// A weighed SG (its value and spread with the catalogue floor) and the bounds of the heavy liquids beside it, with the
+    /// share of the reading's spread inside them (<see cref="Broad"/>, "not in the catalogue").
+    /// </summary>
+    internal sealed record GravityWithLiquids(double Value, double Spread, double Low, double High)
+    {
+        /// <summary>The share of N(Value, Spread) between two SGs.</summary>
+        public double Within(double from, double to) => to <= from ? 0 : RangeLikelihood.Phi((to - Value) / Spread) - RangeLikelihood.Phi((from - Value) / Spread);
+
+        /// <summary>The share inside the liquids' bounds: P(their outcomes | the reading) for a stone the catalogue lacks.</summary>
+        public double Broad { get; private init; }
+
+        /// <summary>The record with <see cref="Broad"/> worked out, once.</summary>
+        public GravityWithLiquids Bounded() => this with { Broad = Within(Low, High) };
+    }
+
+    /// <summary>The weighed SG and the liquids' bounds when both were read and no liquid contradicts the SG, else null.</summary>
+    internal static GravityWithLiquids? LiquidBounds(BenchSheet s)
+    {
+        if (s.SpecificGravity is not { } sg || s.HeavyLiquids.Count == 0 || s.HeavyLiquids.Any(h => BenchWarnings.Contradicts(sg, h))) return null;
+        var bounds = new GravityWithLiquids(sg.Value, double.Hypot(sg.StandardUncertainty, SpecificGravityFloor),
+            s.HeavyLiquids.Max(h => h.LowestSpecificGravity), s.HeavyLiquids.Min(h => h.HighestSpecificGravity)).Bounded();
+        return bounds.Broad > 0 ? bounds : null;
     }
 
     /// <summary>A liquid's outcome against the range, for the fit: the two-sided tail of how far the range lies on the wrong side.</summary>

@@ -773,15 +773,14 @@ public class IdentifierTests
         // factor of about (3.38 − 3.32)/(3.38 − 3.15) against the even chance of a stone the catalogue lacks).
         var index = OpticalIndices.SingleIndex(new(1.69, 1.70));
         Material zoisite = Make("zoisite", "z", index, 3.15, 3.38);
-        var sinks = new[] { HeavyLiquidResult.Of(3.32, HeavyLiquidOutcome.Sinks) };
-        var (material, broad) = EvidenceLikelihood.LiquidsGivenGravity(zoisite, new SpecificGravity(3.35, 0.01), sinks)!.Value;
-        Assert.Equal(1, material / broad, 0.05);
+        var sinks = EvidenceLikelihood.LiquidBounds(new BenchSheet { SpecificGravity = new(3.35, 0.01), HeavyLiquids = [HeavyLiquidResult.Of(3.32, HeavyLiquidOutcome.Sinks)] })!;
+        Assert.Equal(1, EvidenceLikelihood.LiquidsGivenGravity(zoisite, sinks)!.Value / sinks.Broad, 0.05);
         // A coarse weighing (a small stone, ± 0.11) leaves room the liquid closes: a stone that floats in 3.90 is no
         // corundum (3.97–4.05), though its SG of 3.88 alone would allow one.
         Material corundum = Make("corundum", "c", index, 3.97, 4.05);
-        var floats = new[] { HeavyLiquidResult.Of(3.90, HeavyLiquidOutcome.Floats) };
-        var (c, cb) = EvidenceLikelihood.LiquidsGivenGravity(corundum, new SpecificGravity(3.88, 0.11), floats)!.Value;
-        Assert.True(c / cb < 0.01, $"{c / cb}");
+        var floats = EvidenceLikelihood.LiquidBounds(new BenchSheet { SpecificGravity = new(3.88, 0.11), HeavyLiquids = [HeavyLiquidResult.Of(3.90, HeavyLiquidOutcome.Floats)] })!;
+        double ratio = EvidenceLikelihood.LiquidsGivenGravity(corundum, floats)!.Value / floats.Broad;
+        Assert.True(ratio < 0.01, $"{ratio}");
     }
 
     [Fact]
