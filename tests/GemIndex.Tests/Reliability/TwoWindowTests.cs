@@ -51,6 +51,31 @@ public sealed class TwoWindowTests : IDisposable
     }
 
     [Fact]
+    public async Task A_conflict_stays_shown_when_an_earlier_saves_result_reaches_the_screen_after_it()
+    {
+        // The screen takes results in the order they are posted, not the order of the saves: here every result of window A
+        // waits, and they are shown last first, so the opening save's "no problem" comes after the conflict.
+        string path = _folder.Workbook("wb.db", stones: 1);
+        using var workbookA = StoneWorkbook.Open(path, TimeProvider.System);
+        using var workbookB = StoneWorkbook.Open(path, TimeProvider.System);
+        var posted = new List<Action>();
+        var windowA = new BenchSession(workbookA, new BenchAssessor(null), a => { lock (posted) posted.Add(a); });
+        var windowB = new BenchSession(workbookB, new BenchAssessor(null), a => a());
+        windowA.Start();
+        windowB.Start();
+        Assert.True(windowA.Flush());
+        windowB.Form.SetText(BenchFields.Notes, "feather near the culet");
+        await windowB.Changed();
+        windowA.Form.SetText(BenchFields.Notes, "needles in three directions");
+        await windowA.Changed();
+        Assert.Equal(2, posted.Count);
+        foreach (Action show in Enumerable.Reverse(posted)) show();
+        Assert.Equal("notes", Assert.Single(windowA.Conflicts).Field);
+        Assert.Contains("changed in another window", windowA.SaveProblem);
+        Assert.True(windowB.Flush());
+    }
+
+    [Fact]
     public async Task Edits_to_different_fields_in_two_windows_are_both_kept()
     {
         string path = _folder.Workbook("wb.db", stones: 1);

@@ -152,40 +152,55 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     private void Process(BenchSnapshot snapshot, bool save)
     {
         BenchAssessment assessment = Assess(snapshot);
-        (string? problem, IReadOnlyList<FieldConflict> conflicts) = save ? Save(snapshot, assessment) : (SaveProblem, Conflicts);
+        var outcome = save ? Save(snapshot, assessment) : null;
         toUi(() =>
         {
-            if (save) (SaveProblem, Conflicts) = (problem, conflicts);
+            // Only the latest save's outcome is shown: a save overtaken by a newer one, or one whose result arrives after a
+            // newer one's, must not clear the newer save's conflict with its "no problem".
+            if (outcome is { } o)
+                lock (_shownGate)
+                    if (o.Sequence > _shownSequence) (_shownSequence, SaveProblem, Conflicts) = (o.Sequence, o.Problem, o.Conflicts);
             if (Results.Accept(assessment)) Assessed?.Invoke();
         });
     }
 
-    private (string? Problem, IReadOnlyList<FieldConflict> Conflicts) Save(BenchSnapshot snapshot, BenchAssessment assessment)
+    private readonly object _shownGate = new();
+    private long _saveSequence, _shownSequence;
+
+    /// <summary>Saves the snapshot, numbering the outcome in save order; null when a newer save of the stone went first (its outcome stands).</summary>
+    private (long Sequence, string? Problem, IReadOnlyList<FieldConflict> Conflicts)? Save(BenchSnapshot snapshot, BenchAssessment assessment)
     {
         lock (_gate)
         {
-            if (snapshot.StoneId == _lastSaved.Id && snapshot.Version <= _lastSaved.Version) return (null, []);  // overtaken by a newer save
-            if (workbook.ReadOnlyReason is { } why) return ($"READ-ONLY: {why}; nothing typed is saved", []);
-            try
-            {
-                // The draft first: if the process dies between the two commits, the draft is the newer of the two.
-                Setting(DraftSetting(snapshot.StoneId), BenchDraft.Write(snapshot));
-                StoneSheet lastRead = _lastRead.GetValueOrDefault(snapshot.StoneId) ?? workbook.Get(snapshot.StoneId)
-                    ?? throw new WorkbookException($"{workbook.Path}: no stone with id {snapshot.StoneId} (deleted elsewhere?)");
-                StoneSaveResult saved = workbook.Save(lastRead, BenchModel.ToStoneSheet(snapshot, assessment.Readings));
-                _lastRead[snapshot.StoneId] = saved.NextLastRead;
-                // The instrument of the day follows what the user sets, never what an opened stone was read with.
-                if (snapshot.InstrumentChanged(BenchFields.Precision)) Setting(PrecisionSetting, snapshot.Text(BenchFields.Precision));
-                if (snapshot.InstrumentChanged(BenchFields.CalibrationOffset)) Setting(CalibrationSetting, snapshot.Text(BenchFields.CalibrationOffset));
-                Setting(RotationStepSetting, snapshot.Text(RefractometerPage.RotationStepField));
-                Setting(ExaminerSetting, snapshot.Text(BenchFields.Examiner));
-                _lastSaved = (snapshot.StoneId, snapshot.Version);
-                return saved.IsClean ? (null, []) : (ConflictText(saved.Conflicts), saved.Conflicts);
-            }
-            catch (Exception e) when (e is WorkbookException or Microsoft.Data.Sqlite.SqliteException or IOException)
-            {
-                return ("NOT SAVED: " + e.Message, []);
-            }
+            if (snapshot.StoneId == _lastSaved.Id && snapshot.Version <= _lastSaved.Version) return null;  // overtaken by a newer save
+            long sequence = ++_saveSequence;
+            var (problem, conflicts) = Write(snapshot, assessment);
+            return (sequence, problem, conflicts);
+        }
+    }
+
+    private (string? Problem, IReadOnlyList<FieldConflict> Conflicts) Write(BenchSnapshot snapshot, BenchAssessment assessment)
+    {
+        if (workbook.ReadOnlyReason is { } why) return ($"READ-ONLY: {why}; nothing typed is saved", []);
+        try
+        {
+            // The draft first: if the process dies between the two commits, the draft is the newer of the two.
+            Setting(DraftSetting(snapshot.StoneId), BenchDraft.Write(snapshot));
+            StoneSheet lastRead = _lastRead.GetValueOrDefault(snapshot.StoneId) ?? workbook.Get(snapshot.StoneId)
+                ?? throw new WorkbookException($"{workbook.Path}: no stone with id {snapshot.StoneId} (deleted elsewhere?)");
+            StoneSaveResult saved = workbook.Save(lastRead, BenchModel.ToStoneSheet(snapshot, assessment.Readings));
+            _lastRead[snapshot.StoneId] = saved.NextLastRead;
+            // The instrument of the day follows what the user sets, never what an opened stone was read with.
+            if (snapshot.InstrumentChanged(BenchFields.Precision)) Setting(PrecisionSetting, snapshot.Text(BenchFields.Precision));
+            if (snapshot.InstrumentChanged(BenchFields.CalibrationOffset)) Setting(CalibrationSetting, snapshot.Text(BenchFields.CalibrationOffset));
+            Setting(RotationStepSetting, snapshot.Text(RefractometerPage.RotationStepField));
+            Setting(ExaminerSetting, snapshot.Text(BenchFields.Examiner));
+            _lastSaved = (snapshot.StoneId, snapshot.Version);
+            return saved.IsClean ? (null, []) : (ConflictText(saved.Conflicts), saved.Conflicts);
+        }
+        catch (Exception e) when (e is WorkbookException or Microsoft.Data.Sqlite.SqliteException or IOException)
+        {
+            return ("NOT SAVED: " + e.Message, []);
         }
     }
 
