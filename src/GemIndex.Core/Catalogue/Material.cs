@@ -114,6 +114,12 @@ public sealed record Material
     public string? MineralGroup { get; init; }
 
     /// <summary>
+    /// The trade defines the entry's name by its colour (emerald, aquamarine, ruby, a sapphire named by its colour), so a
+    /// stone of another colour is not it: its colour test takes none of its species' other colours (docs/ranking.md §2).
+    /// </summary>
+    public bool NamedByColour { get; init; }
+
+    /// <summary>
     /// The source of each value, by field name as the family files spell it ("omega", "sg", "uv_long"); a field
     /// missing here has no source. Keys are <see cref="CatalogueFields"/> names.
     /// </summary>

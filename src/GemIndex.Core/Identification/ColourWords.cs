@@ -74,11 +74,15 @@ public static class ColourWords
 
     /// <summary>
     /// P(hue | entry) with the species' colours mixed in (<see cref="SpeciesShare"/>): the entry's own list and its
-    /// species' list, each by <see cref="Probability(IReadOnlySet{string}, IReadOnlyList{string})"/>.
+    /// species' list, each by <see cref="Probability(IReadOnlySet{string}, IReadOnlyList{string})"/>. An entry the trade
+    /// names by its colour (<paramref name="namedByColour"/>: emerald, aquamarine, ruby) takes neither its species' colours
+    /// nor its hues' neighbours: a green beryl called blue is by definition no emerald, so such a hue is a misdescription,
+    /// at the floor every hue has (docs/ranking.md §2, colour).
     /// </summary>
-    internal static double EntryProbability(IReadOnlyList<string> seen, IReadOnlyList<string> entry, IReadOnlyList<string> species) =>
-        ReferenceEquals(entry, species) ? Probability(seen, entry)
-            : (1 - SpeciesShare) * Probability(seen, entry) + SpeciesShare * Probability(seen, species);
+    internal static double EntryProbability(IReadOnlyList<string> seen, IReadOnlyList<string> entry, IReadOnlyList<string> species, bool namedByColour = false) =>
+        namedByColour ? Probability(seen, entry, withNeighbours: false)
+        : ReferenceEquals(entry, species) ? Probability(seen, entry)
+        : (1 - SpeciesShare) * Probability(seen, entry) + SpeciesShare * Probability(seen, species);
 
     /// <summary>
     /// P(hue | material) for a material whose colours are <paramref name="listed"/> (most usual first): the listed share
@@ -89,10 +93,11 @@ public static class ColourWords
     public static double Probability(IReadOnlySet<string> seen, IReadOnlyList<string> listed) => Probability([.. seen], listed);
 
     /// <summary><see cref="Probability(IReadOnlySet{string}, IReadOnlyList{string})"/> with the hues seen as a list, in the set's order.</summary>
-    internal static double Probability(IReadOnlyList<string> seen, IReadOnlyList<string> listed)
+    internal static double Probability(IReadOnlyList<string> seen, IReadOnlyList<string> listed, bool withNeighbours = true)
     {
         if (listed.Count == 0) return BroadProbability;
-        var (total, neighbours) = ListedParts.GetValue(listed, Parts);
+        var (total, listedNeighbours) = ListedParts.GetValue(listed, Parts);
+        List<string> neighbours = withNeighbours ? listedNeighbours : [];
         double best = 0;
         for (int i = 0; i < seen.Count; i++)
         {

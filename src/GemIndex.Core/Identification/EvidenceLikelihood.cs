@@ -511,11 +511,12 @@ public static class EvidenceLikelihood
     private static void Colour(MaterialProfile profile, string colour, IReadOnlyList<string> seen, EvidenceAccumulator acc)
     {
         var m = profile.Material;
-        double f = ColourWords.EntryProbability(seen, profile.ColourHues, profile.SpeciesHues);
+        double f = ColourWords.EntryProbability(seen, profile.ColourHues, profile.SpeciesHues, m.NamedByColour);
         double best = profile.ColourHues.Count == 0 ? f : profile.ColourFirstHue;
         acc.Add(BenchField.Colour, f, ColourWords.BroadProbability, Math.Min(1, f / best), robust: false);
         if (acc.Explaining)
-            acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed" : UsualColours(m.Colours, colour) + " usual, most usual first")}");
+            acc.Say($"colour {colour.Trim()}; {(m.Colours.Count == 0 ? "no colours listed"
+                : UsualColours(m.Colours, colour) + (m.NamedByColour ? ", the only colours its name allows" : " usual, most usual first"))}");
     }
 
     /// <summary>Up to this many standard uncertainties outside a range, a reading is said to lie within its uncertainty of it (two: the usual reading of a normal error).</summary>

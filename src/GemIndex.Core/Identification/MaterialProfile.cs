@@ -24,7 +24,7 @@ public sealed class MaterialProfile
         SpeciesHues = speciesHues is null || speciesHues.SequenceEqual(ColourHues) ? ColourHues : speciesHues;
         Birefringence = RefractometerEvidence.BirefringenceRange(material);
         Prior = prior ?? IndicatrixPrior.For(material, Birefringence);
-        if (ColourHues.Count > 0) ColourFirstHue = ColourWords.EntryProbability([ColourHues[0]], ColourHues, SpeciesHues);
+        if (ColourHues.Count > 0) ColourFirstHue = ColourWords.EntryProbability([ColourHues[0]], ColourHues, SpeciesHues, material.NamedByColour);
         var usual = EvidenceLikelihood.UsualReactions(material);
         Polariscope = [.. Enumerable.Range(0, 4).Select(o => EvidenceLikelihood.PolariscopeProbability(usual, (PolariscopeReaction)o))];
         PolariscopeUsual = EvidenceLikelihood.PolariscopeProbability(usual, usual[0]);

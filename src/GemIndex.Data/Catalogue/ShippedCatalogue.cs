@@ -1,5 +1,6 @@
 using System.Security.Cryptography;
 using GemIndex.Core.Catalogue;
+using GemIndex.Data.ColourVarieties;
 using GemIndex.Data.Magnification;
 using GemIndex.Data.MineralGroups;
 using GemIndex.Data.TradeRules;
@@ -62,11 +63,12 @@ public static class ShippedCatalogue
     }
 
     /// <summary>
-    /// Entries with their trade rule and mineral group attached (trade-rules.json, mineral-groups.json): the shipped
-    /// entries here, the user's own in <see cref="MergedCatalogue"/>, by the same two tables.
+    /// Entries with their trade rule, mineral group and colour-named variety attached (trade-rules.json,
+    /// mineral-groups.json, colour-varieties.json): the shipped entries here, the user's own in <see cref="MergedCatalogue"/>,
+    /// by the same tables.
     /// </summary>
     internal static IReadOnlyList<Material> WithRulesAndGroups(IReadOnlyList<Material> materials) =>
-        MineralGroupTable.Embedded.Attach(TradeRuleTable.Embedded.Attach(materials));
+        ColourVarietyTable.Embedded.Attach(MineralGroupTable.Embedded.Attach(TradeRuleTable.Embedded.Attach(materials)));
 
     private static IReadOnlyList<FamilySource> LoadSources() =>
         [.. typeof(ShippedCatalogue).Assembly.GetManifestResourceNames()

@@ -46,7 +46,8 @@ internal static class MaterialText
         lines.Add(("UV short (254 nm)", List(m.UvShort.Select(Word))));
         lines.Add(("absorption", m.AbsorptionLines.Count == 0 ? "none given"
             : string.Join(", ", m.AbsorptionLines.Select(x => $"{x.Nanometres.ToString("0.#", CultureInfo.InvariantCulture)} nm {Word(x.Strength)}"))));
-        lines.Add(("colours", string.Join(", ", m.Colours)));
+        lines.Add(("colours", string.Join(", ", m.Colours)
+            + (m.NamedByColour ? " (the name holds only for these colours: a stone of another colour is not this entry)" : "")));
         lines.Add(("forms", string.Join(", ", CatalogueWords.OfForms(m.Forms))));
         lines.Add(("opaque", m.IsOpaque ? "yes: no polariscope, dichroscope or transmitted-light spectrum" : "no"));
         lines.Add(("species frequency", Word(m.SpeciesFrequency)));

@@ -310,6 +310,28 @@ public class EvidenceModelTests
         Assert.Equal(ColourWords.Probability(["pink"], own), ColourWords.EntryProbability(["pink"], own, own), 12);
     }
 
+    [Fact]
+    public void A_variety_named_by_its_colour_takes_neither_its_species_colours_nor_its_hues_neighbours()
+    {
+        // Common practice of the trade: emerald is green beryl, so a beryl called blue is never an emerald of an odd colour;
+        // an entry the trade names by its colour keeps its own list and the floor every hue has (docs/ranking.md §2, colour).
+        var loose = Entry("loose", "s", QuartzIndices, colours: ["green"]);
+        var named = loose with { Name = "named", NamedByColour = true };
+        var blue = Entry("blue entry", "s", QuartzIndices, colours: ["blue"]);
+        IReadOnlyList<string> species = MaterialProfile.SpeciesHueList([loose, named, blue]);
+        double floor = (1 - ColourWords.ListedShare) * ColourWords.BroadProbability;
+        Assert.Equal(floor, ColourWords.EntryProbability(["blue"], ["green"], species, namedByColour: true), 12);
+        Assert.Equal(ColourWords.ListedShare + floor, ColourWords.EntryProbability(["green"], ["green"], species, namedByColour: true), 12);
+        Assert.Equal(1, ColourWords.KnownHues.Sum(h => ColourWords.EntryProbability([h], ["green"], species, namedByColour: true)), 9);
+        // Alike but for the mark, so their shares differ by the colour test alone (tempered, Identifier.Temperature).
+        var result = new Identifier([loose, named, blue]).Identify(new BenchSheet { Colour = "blue" });
+        double looseShare = result.Candidates.Single(c => c.Material.Name == "loose").Confidence;
+        double namedShare = result.Candidates.Single(c => c.Material.Name == "named").Confidence;
+        double ratio = ColourWords.EntryProbability(["blue"], ["green"], species) / floor;
+        Assert.Equal(Math.Pow(ratio, 1 / Identifier.Temperature), looseShare / namedShare, 6);
+        Assert.True(ratio > 5);
+    }
+
     [Theory]
     [InlineData("sky blue", "")]
     [InlineData("royal blue", "")]
