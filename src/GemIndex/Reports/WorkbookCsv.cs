@@ -15,7 +15,9 @@ internal static class WorkbookCsv
     public static readonly IReadOnlyList<string> Columns =
     [
         "reference", "weight_carats", "colour", "refractive_index_low", "refractive_index_high", "birefringence",
-        "optic_character", "specific_gravity", "polariscope", "species", "species_confidence", "best_candidate", "confidence",
+        "optic_character", "specific_gravity", "polariscope", "heavy_liquids", "pleochroism", "dispersion_by_eye",
+        "thermal_probe", "electrical", "uv_long", "uv_short", "absorption_lines_nm", "magnification_seen",
+        "magnification_not_seen", "species", "species_confidence", "best_candidate", "confidence",
         "no_good_match", "high_above_liquid_limit", "refractometer_method", "refused_entries",
     ];
 
@@ -65,6 +67,8 @@ internal static class WorkbookCsv
         _ => "",
     };
 
+    private static string Word(string? word) => word is null ? "" : StoneReport.Word(word);
+
     private static List<string> Cells(StoneSheet sheet, IdentificationResult? result)
     {
         StoneReport? report = result is null ? null : StoneReport.Build(sheet, result);
@@ -86,6 +90,14 @@ internal static class WorkbookCsv
             report?.Character ?? "",
             report?.SpecificGravity is { } sg ? ReportNumbers.Gravity(sg.Value) : sheet.Readings.Sg is { } given ? ReportNumbers.Gravity(given) : "",
             sheet.Readings.Polariscope is { } p ? StoneReport.Word(p) : "",
+            // Every other reading as written at the bench, so that a row holds the stone's readings (a heavy liquid's
+            // result is an SG bound the specific_gravity column cannot hold).
+            GemIndex.Core.Bench.BenchSyntax.HeavyLiquids(sheet.Readings.HeavyLiquids.Select(h => $"{ReportNumbers.Gravity(h.Density)} {h.Result}")),
+            Word(sheet.Readings.Pleochroism), Word(sheet.Readings.Dispersion), Word(sheet.Readings.ThermalProbe),
+            Word(sheet.Readings.Electrical), Word(sheet.Readings.UvLong), Word(sheet.Readings.UvShort),
+            sheet.Readings.AbsorptionNm is not { } lines ? "" : lines.Count == 0 ? GemIndex.Core.Bench.BenchSyntax.NoLines
+                : string.Join(" ", lines.Select(nm => nm.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture))),
+            string.Join(" ", sheet.Readings.FeaturesPresent), string.Join(" ", sheet.Readings.FeaturesAbsent),
             lead?.Species ?? "",
             lead is not null ? ReportNumbers.Probability(lead.Confidence) : "",
             top?.Material.Name ?? "",

@@ -69,7 +69,7 @@ public class WorkbookCsvTests
         Assert.EndsWith($",{result.Species[0].Species},{Share(result.Species[0].Confidence)},{result.Candidates[0].Material.Name},{Share(result.Candidates[0].Confidence)},false,,facet,", rows[1]);
         Assert.Equal("quartz", result.Species[0].Species);
         // The line break inside the quoted colour is the stone's, the last one ends the file (Sep writes the platform's line end).
-        Assert.EndsWith(Environment.NewLine + "x,2.65,\"blue\ngreen\",,,,,,,,,,,,,," + Environment.NewLine, text);
+        Assert.EndsWith(Environment.NewLine + "x,2.65,\"blue\ngreen\"" + new string(',', WorkbookCsv.Columns.Count - 3) + Environment.NewLine, text);
     }
 
     [Fact]
@@ -114,6 +114,23 @@ public class WorkbookCsvTests
         Assert.Equal("", cells[Column("refractive_index_high")]);
         Assert.Equal("", cells[Column("birefringence")]);
         Assert.Equal("1.790", cells[Column("high_above_liquid_limit")]);
+    }
+
+    [Fact]
+    public void A_row_holds_every_reading_the_heavy_liquids_the_instruments_the_lines_and_the_loupe()
+    {
+        // Invented readings of a peridot-like stone: two heavy liquids (an SG bound, no SG number), the dichroscope, UV,
+        // the spectroscope and the loupe, each in its column as written at the bench.
+        StoneSheet stone = ReportFixtures.Sheet("""{"id":"p","heavy_liquids":[{"density":2.89,"result":"sinks"},{"density":3.32,"result":"floats"}],"pleochroism":"dichroic","dispersion":"weak","thermal_probe":"negative","uv_long":"inert","uv_short":"inert","absorption_nm":[453,473,493],"magnification":{"present":["fluid_inclusions"],"absent":["round_bubbles"]}}""");
+        var w = new StringWriter();
+        WorkbookCsv.Write(w, [(stone, ReportFixtures.Identify(stone))]);
+        string[] cells = w.ToString().Split(Environment.NewLine)[1].Split(',');
+        string Cell(string name) => cells[WorkbookCsv.Columns.ToList().IndexOf(name)];
+        Assert.Equal("", Cell("specific_gravity"));
+        Assert.Equal("2.89 sinks; 3.32 floats", Cell("heavy_liquids"));
+        Assert.Equal(("dichroic", "weak", "negative", "inert", "inert"), (Cell("pleochroism"), Cell("dispersion_by_eye"), Cell("thermal_probe"), Cell("uv_long"), Cell("uv_short")));
+        Assert.Equal("453 473 493", Cell("absorption_lines_nm"));
+        Assert.Equal(("fluid_inclusions", "round_bubbles"), (Cell("magnification_seen"), Cell("magnification_not_seen")));
     }
 
     [Fact]
