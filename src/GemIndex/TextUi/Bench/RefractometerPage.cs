@@ -66,6 +66,8 @@ internal sealed class RefractometerPage : BenchPage
             box.KeyDown += (_, key) =>
             {
                 if (key != Key.Enter) return;
+                // Edges typed in the rotation's box (Tab had stopped there) go to the edges' boxes, not into the rotation.
+                if (Low.Text.Trim().Length == 0 && EdgesInRotationBox() is { } typed) MoveToEdges(typed.Low, typed.High);
                 string low = Low.Text.Trim(), high = High.Text.Trim();
                 // Both edges typed in the low box ("1.624 1.644" or "1.624/1.644") are the two edges, also over a step's
                 // old high edge while it is edited (the pair had been stored as a low edge "not a number").
@@ -76,6 +78,18 @@ internal sealed class RefractometerPage : BenchPage
         // A space or '/' after a low edge goes on into the high edge's box, which is empty: the two edges typed in one
         // go stay in sight (the low box is eight wide, and "1.716 1.71" showed as "16 1.71").
         // While a step is edited its old high edge is in the box: it is selected, so the edge typed next replaces it.
+        // In the rotation's box a space or '/' after the rotation goes on to the low edge; after an edge typed there by
+        // mistake (a number a refractometer shows, 1.30-2.00), the edge moves to the low edge's box and the high edge is next.
+        Rotation.KeyDown += (_, key) =>
+        {
+            if ((key != Key.Space && key.AsRune.Value != '/') || Rotation.InsertionPoint < Rotation.Text.TrimEnd().Length) return;
+            string text = Rotation.Text.Trim();
+            if (text.Length == 0) return;
+            if (LooksLikeEdge(text)) { MoveToEdges(text, ""); High.SetFocus(); }
+            else if (Low.Text.Length == 0) Low.SetFocus();
+            else return;
+            key.Handled = true;
+        };
         Low.KeyDown += (_, key) =>
         {
             if ((key == Key.Space || key.AsRune.Value == '/') && (High.Text.Length == 0 || _editing is not null)
@@ -96,6 +110,30 @@ internal sealed class RefractometerPage : BenchPage
     }
 
     public override View FirstReading => Low;
+
+    /// <summary>A number with a decimal point between 1.30 and 2.00: what a refractometer's scale shows, never a bench rotation.</summary>
+    private static bool LooksLikeEdge(string text) =>
+        text.Contains('.') && double.TryParse(text, System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out double value)
+        && value is >= 1.30 and <= 2.00;
+
+    /// <summary>The edges typed in the rotation's box ("1.622 1.642", "1.622/1.642" or one edge), or null when it holds a rotation.</summary>
+    private (string Low, string High)? EdgesInRotationBox()
+    {
+        string text = Rotation.Text.Trim();
+        if (BenchSyntax.EdgePair(text) is { } pair && LooksLikeEdge(pair.Low)) return pair;
+        return LooksLikeEdge(text) ? (text, "") : null;
+    }
+
+    /// <summary>Puts edges typed in the rotation's box into the edges' boxes and gives the rotation box back the rotation it began with.</summary>
+    private void MoveToEdges(string low, string high)
+    {
+        Low.Text = low;
+        if (high.Length > 0) High.Text = high;
+        Rotation.Text = _rotationAtStart;
+    }
+
+    /// <summary>The rotation the edit line began with (the offer, or the edited step's own), given back when edges typed over it move on.</summary>
+    private string _rotationAtStart = "";
 
     /// <summary>The edit line's boxes with the form keys that keep their text.</summary>
     public IReadOnlyList<(TextField Box, string Key)> TypingBoxes => [(Rotation, TypingRotation), (Low, TypingLow), (High, TypingHigh)];
@@ -128,6 +166,7 @@ internal sealed class RefractometerPage : BenchPage
         _editing = index;
         _offeredRotation = step is null ? nextRotation : null;
         Rotation.Text = step?.Rotation ?? nextRotation;
+        _rotationAtStart = Rotation.Text;
         Low.Text = step?.Low ?? "";
         High.Text = step?.High ?? "";
         ShowNote();
@@ -156,6 +195,7 @@ internal sealed class RefractometerPage : BenchPage
         if (_editing is not null || _offeredRotation is null || Rotation.Text != _offeredRotation) return;
         _offeredRotation = nextRotation;
         Rotation.Text = nextRotation;
+        _rotationAtStart = nextRotation;
         ShowNote();
     }
 

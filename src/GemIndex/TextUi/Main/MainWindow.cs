@@ -277,7 +277,11 @@ internal sealed class MainWindow : Window
         };
         rf.StoreRequested += (index, step) =>
         {
-            if (step.Low.Length == 0) return;
+            if (step.Low.Length == 0)
+            {
+                _keyLine.Text = "Step not stored: the low edge is empty. Type the edges after the rotation (LOW HIGH), then Enter";
+                return;
+            }
             _session.Form.PutStep(index ?? _session.Form.Steps.Count, step);
             _session.Form.SetText(RefractometerPage.TypingStep, "");
             _session.Changed();

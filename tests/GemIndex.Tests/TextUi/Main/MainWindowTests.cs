@@ -129,6 +129,45 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void Edges_typed_in_the_rotation_box_go_to_the_edges_and_the_step_is_stored_at_the_offered_rotation()
+    {
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(_session, TestMaterials.All);
+        _session.Start();
+        window.FillFromModel();
+        SessionToken token = app.Begin(window)!;
+        window.ShowPage(1);
+        // Tab stops at the rotation's box before the edges: both edges typed there with Enter, then one edge, a space
+        // and the high edge in the high edge's box.
+        window.Refractometer.Rotation.SetFocus();
+        window.Refractometer.Rotation.SelectAll();
+        Type(app, "1.622 1.642");
+        app.InjectKey(Key.Enter);
+        Assert.Equal([("0", "1.622", "1.642")], _session.Form.Steps.Select(s => (s.Rotation, s.Low, s.High)));
+        Assert.Equal("15", window.Refractometer.Rotation.Text);
+        window.Refractometer.Rotation.SetFocus();
+        window.Refractometer.Rotation.SelectAll();
+        Type(app, "1.625");
+        app.InjectKey(Key.Space);
+        Assert.Equal(("15", "1.625"), (window.Refractometer.Rotation.Text, window.Refractometer.Low.Text));
+        Assert.True(window.Refractometer.High.HasFocus);
+        Type(app, "1.642");
+        app.InjectKey(Key.Enter);
+        Assert.Equal(("15", "1.625", "1.642"), (_session.Form.Steps[1].Rotation, _session.Form.Steps[1].Low, _session.Form.Steps[1].High));
+        // A rotation typed there and a space go on to the low edge; Enter with no low edge says why nothing was stored.
+        window.Refractometer.Rotation.SetFocus();
+        window.Refractometer.Rotation.SelectAll();
+        Type(app, "40");
+        app.InjectKey(Key.Space);
+        Assert.True(window.Refractometer.Low.HasFocus);
+        app.InjectKey(Key.Enter);
+        app.LayoutAndDraw();
+        Assert.Equal(2, _session.Form.Steps.Count);
+        Assert.Contains("Step not stored: the low edge is empty", app.Driver!.ToString()!);
+        app.End(token);
+    }
+
+    [Fact]
     public void A_bad_entry_is_marked_at_its_field_and_the_candidates_stay()
     {
         using IApplication app = Headless.Start();
