@@ -18,6 +18,12 @@ public sealed record OpticCharacterPosterior(double Isotropic, double UniaxialPo
     /// <summary>P(uniaxial), either sign.</summary>
     public double Uniaxial => UniaxialPositive + UniaxialNegative;
 
+    /// <summary>True when the dichroscope's two or three colours entered beside the rotation series (the front ends say so).</summary>
+    public bool TakesDichroscope { get; init; }
+
+    /// <summary>What the posterior was worked out from, in words: "the readings alone" or "the refractometer and the dichroscope".</summary>
+    public string From => TakesDichroscope ? "the refractometer and the dichroscope" : "the readings alone";
+
     /// <summary>
     /// P(a dichroscope reading | a character that cannot show it): three colours from a uniaxial or a singly refractive
     /// stone, two from a singly refractive one, only by a misread (a judgement; docs/ranking.md §1, "Optic character").
@@ -38,6 +44,9 @@ public sealed record OpticCharacterPosterior(double Isotropic, double UniaxialPo
         if (pleochroism is PleochroismObservation.Dichroic or PleochroismObservation.Trichroic) weight[0] *= ImpossiblePleochroism;
         if (pleochroism is PleochroismObservation.Trichroic) { weight[1] *= ImpossiblePleochroism; weight[2] *= ImpossiblePleochroism; }
         double total = weight.Sum();
-        return new(weight[0] / total, weight[1] / total, weight[2] / total, weight[3] / total);
+        return new(weight[0] / total, weight[1] / total, weight[2] / total, weight[3] / total)
+        {
+            TakesDichroscope = pleochroism is PleochroismObservation.Dichroic or PleochroismObservation.Trichroic,
+        };
     }
 }

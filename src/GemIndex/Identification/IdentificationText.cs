@@ -46,7 +46,7 @@ internal static class IdentificationText
         if (result.Series is { } series)
         {
             o.WriteLine(result.SeriesCharacter is { } character
-                ? $"Optic character, from the readings alone: {ReportDerived.CharacterOdds(character, series: series)}"
+                ? $"Optic character, from {character.From}: {ReportDerived.CharacterOdds(character, series: series)}"
                 : series.Character is { } c ? $"Optic character: {c.ToString().ToLowerInvariant()}" : "Optic character: undetermined");
             // Beneath the posterior, each pattern's indices are a reading of the edges, not a verdict ("read as …"),
             // after its share of the posterior.

@@ -93,6 +93,7 @@ internal static class ResultDocument
             w.WriteNumber("uniaxial_negative", Probability(character.UniaxialNegative));
             w.WriteNumber("biaxial", Probability(character.Biaxial));
             w.WriteString("summary", Reports.ReportDerived.CharacterOdds(character, series: series));
+            w.WriteBoolean("with_dichroscope", character.TakesDichroscope);
             w.WriteStartArray("read_as");
             foreach (var reading in series.Interpretations.Where(i => i.Character is not null))
             {

@@ -10,7 +10,7 @@ internal static class ReportDerived
 {
     public static IEnumerable<ReportField> Fields(StoneReport report)
     {
-        if (report.CharacterOdds is { } odds) yield return new("optic_character", "Optic character (from the readings alone)", CharacterOdds(odds, series: report.Result.Series));
+        if (report.CharacterOdds is { } odds) yield return new("optic_character", $"Optic character (from {odds.From})", CharacterOdds(odds, series: report.Result.Series));
         else if (report.Character is { } c) yield return new("optic_character", "Optic character", c);
         else if (report.Interpretations.Count > 0)
             yield return new("optic_character", "Optic character", "not fixed by the series" + (report.UndeterminedReason.Length > 0 ? ": " + report.UndeterminedReason : ""));

@@ -277,6 +277,20 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void The_optic_character_says_when_the_dichroscope_entered_it()
+    {
+        // Quartz's edges (ω 1.544 constant, ε' to 1.553: common practice) read alone, then beside three colours in the
+        // dichroscope, which only a biaxial crystal shows: the sentence names what it was worked out from.
+        using var run = new CommandRun();
+        string[] edges = ["--edge", "0:1.544/1.553", "--edge", "45:1.544/1.549", "--edge", "90:1.544/1.551", "--edge", "135:1.544/1.553"];
+        var (_, alone, _) = Identify(run, edges);
+        Assert.Contains("Optic character, from the readings alone: ", alone, StringComparison.Ordinal);
+        var (exit, trichroic, error) = Identify(run, [.. edges, "--pleochroism", "trichroic"]);
+        Assert.True(exit == 0, error);
+        Assert.Contains("Optic character, from the refractometer and the dichroscope: ", trichroic, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_biaxial_candidate_s_reason_gives_the_edges_as_read_not_a_uniaxial_reading()
     {
         // Quartz's edges (ω 1.544 constant, ε' up to 1.553: common practice) at three steps: the series reads uniaxial

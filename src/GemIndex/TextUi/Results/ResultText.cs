@@ -186,8 +186,10 @@ internal static class ResultText
 
     private static IEnumerable<string> Series(RotationSeriesResult s, OpticCharacterPosterior? odds)
     {
-        // What the readings alone say of the character, by the section model; the interpretations below give the indices.
-        if (odds is not null) yield return "Optic character: " + GemIndex.Cli.Reports.ReportDerived.CharacterOdds(odds, Percent, s);
+        // What the readings say of the character, by the section model (and the dichroscope, when it entered: said so);
+        // the interpretations below give the indices.
+        if (odds is not null)
+            yield return "Optic character" + (odds.TakesDichroscope ? " (with the dichroscope)" : "") + ": " + GemIndex.Cli.Reports.ReportDerived.CharacterOdds(odds, Percent, s);
         if (s.Interpretations.Count == 0)
         {
             yield return "Optic character: not fixed by the series" + (s.UndeterminedReason.Length > 0 ? ": " + s.UndeterminedReason : "");
