@@ -72,6 +72,9 @@ internal static class BatchIdentification
         try
         {
             if (read.Errors.Count > 0) return (ResultDocument.Error(lineNumber, id, read.AllErrors()), true, unread);
+            // A batch line's id is how its answer is found again: a blank one is refused (a workbook stone's may be blank).
+            if (string.IsNullOrWhiteSpace(id))
+                return (ResultDocument.Error(lineNumber, id, [new BenchFieldError(BenchField.Id, id ?? "", "a string with the stone's reference", "must name the stone (it is blank).")]), true, unread);
             BenchOutcome outcome = BenchIdentification.Identify(identifier, read.Readings, request);
             return outcome.Result is { } result
                 ? (ResultDocument.Line(WithUnread(result, read), request.ExplainTop > 0), false, unread)

@@ -112,12 +112,13 @@ public class IdentifyCommandTests
             """{"id":"C","polariscope":"sparkly"}""",
             """{"id":"D","sg":{"air_ct":1.0,"water_ct":1.2}}""",
             """{"id":"E","sg":"2.65"}""",
-            """{"id":"F","sg":1.2}""");
+            """{"id":"F","sg":1.2}""",
+            """{"id":" ","sg":2.65}""");
         var (exit, output, error) = Identify(run, "--batch", file);
         Assert.Equal(3, exit);
         Assert.Contains("could not be read", error, StringComparison.Ordinal);
         var lines = output.Split('\n', StringSplitOptions.RemoveEmptyEntries).Select(l => JsonDocument.Parse(l).RootElement).ToArray();
-        Assert.Equal(7, lines.Length);
+        Assert.Equal(8, lines.Length);
         Assert.Equal("A", lines[0].GetProperty("id").GetString());
         Assert.Equal(2, lines[1].GetProperty("line").GetInt32());
         Assert.StartsWith("$: not valid JSON", lines[1].GetProperty("error").GetString());
@@ -126,6 +127,8 @@ public class IdentifyCommandTests
         Assert.Equal("sg.water_ct: weight in water is 1.2 ct; allowed: 0 to below the weight in air 1 ct.", lines[4].GetProperty("error").GetString());
         Assert.Equal("sg: must be a number or {\"air_ct\", \"water_ct\", \"water_c\"}, not the text \"2.65\".", lines[5].GetProperty("error").GetString());
         Assert.Equal("F", lines[6].GetProperty("id").GetString());
+        // A reference of blanks is no reference (README: an empty word is an error).
+        Assert.Equal("id: must name the stone (it is blank).", lines[7].GetProperty("error").GetString());
     }
 
     [Fact]
