@@ -147,6 +147,6 @@ internal sealed class ResultsModel
 
     /// <summary>The caution shown on the SG page, or null when no top candidate forbids immersion.</summary>
     public string? ImmersionCaution => Latest?.DoNotImmerse is { Count: > 0 } names
-        ? $"Do not immerse: {BenchWarnings.KeepDryListed(names)} {(names.Count == 1 ? "is" : "are")} possible here. No heavy liquids, and no water unless the stone is known to take it (a porous or soluble stone is harmed): rely on the other tests."
+        ? $"Do not immerse: {BenchWarnings.KeepDryListed(names)} {(names.Count == 1 ? "is" : "are")} possible here. No heavy liquids, and no water unless the stone is known to take it (amber and copal take the brine test; a porous or soluble stone is harmed): rely on the other tests."
         : null;
 }
