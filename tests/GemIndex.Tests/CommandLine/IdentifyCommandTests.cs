@@ -280,6 +280,22 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void A_pale_yellow_quartz_leaves_the_purple_and_brown_quartz_varieties_behind()
+    {
+        // Quartz's edges (ω 1.544, ε' to 1.553: common practice) and SG 2.65, described pale yellow: amethyst is purple
+        // quartz and smoky quartz brown by definition (common practice), so neither holds a share worth listing beside citrine.
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--edge", "0:1.544/1.553", "--edge", "30:1.544/1.552", "--edge", "60:1.544/1.550",
+            "--edge", "90:1.544/1.548", "--sg", "2.65", "--colour", "pale yellow", "--json", "--candidates", "30");
+        Assert.True(exit == 0, error);
+        using var doc = System.Text.Json.JsonDocument.Parse(output);
+        double Share(string name) => doc.RootElement.GetProperty("species").EnumerateArray().SelectMany(s => s.GetProperty("candidates").EnumerateArray())
+            .Where(c => c.GetProperty("name").GetString() == name).Sum(c => c.GetProperty("confidence").GetDouble());
+        Assert.True(Share("amethyst") < 0.03 && Share("smoky quartz") < 0.03, $"amethyst {Share("amethyst")}, smoky {Share("smoky quartz")}");
+        Assert.True(Share("citrine") > 10 * Share("amethyst"));
+    }
+
+    [Fact]
     public void The_optic_character_says_when_the_dichroscope_entered_it()
     {
         // Quartz's edges (ω 1.544 constant, ε' to 1.553: common practice) read alone, then beside three colours in the
