@@ -64,8 +64,9 @@ internal sealed class BenchAssessor(Identifier? identifier)
     {
         string text = form.Text(BenchFields.Weight);
         if (string.IsNullOrWhiteSpace(text)) return;
-        if (!BenchNumber.TryParse(text, out double carats, out string problem)) { errors[BenchFields.Weight] = problem; return; }
-        try { _ = Mass.FromCarats(carats); }
-        catch (QuantityOutOfRangeException e) { errors[BenchFields.Weight] = e.Message; }
+        // The same range as the hydrostatic weights on the command line: a stone weighs something.
+        const string Allowed = "allowed: above 0 to 500000 ct.";
+        if (!BenchNumber.TryParse(text, out double carats, out string problem)) { errors[BenchFields.Weight] = $"{problem.TrimEnd('.')}; {Allowed}"; return; }
+        if (!(carats > 0 && carats <= 500_000)) errors[BenchFields.Weight] = $"weight is {text.Trim()} ct; {Allowed}";
     }
 }

@@ -32,6 +32,22 @@ public class BenchAssessorTests
     }
 
     [Theory]
+    [InlineData("0", "weight is 0 ct; allowed: above 0 to 500000 ct.")]
+    [InlineData("-4.21", "weight is -4.21 ct; allowed: above 0 to 500000 ct.")]
+    [InlineData("600000", "weight is 600000 ct; allowed: above 0 to 500000 ct.")]
+    public void A_stone_s_weight_must_be_above_nothing_and_the_error_gives_the_range(string typed, string expected)
+    {
+        var form = QuartzForm();
+        form.SetText(BenchFields.Weight, typed);
+        BenchAssessment a = Assessor.Assess(form.Snapshot());
+        Assert.Equal(expected, a.Errors[BenchFields.Weight]);
+        // A weight that is not a number names the range too.
+        form.SetText(BenchFields.Weight, "4.2x");
+        Assert.EndsWith("; allowed: above 0 to 500000 ct.", Assessor.Assess(form.Snapshot()).Errors[BenchFields.Weight]);
+        Assert.Equal("quartz", a.Result!.Candidates[0].Material.Name);   // the readings' answer stands
+    }
+
+    [Theory]
     // Entries the reader refuses in whole or in part, and clashes that make it leave a whole test out: a list with one
     // bad line, a step above the contact liquid, a liquid limit beyond what a contact liquid reaches, a heavy liquid
     // without a result beside a good one, an SG typed beside weights, "over the limit" beside high edges, fire by eye
