@@ -102,6 +102,38 @@ public class IdentifyMagnificationTests
     }
 
     [Fact]
+    public void Elongated_bubbles_point_an_amber_to_pressed_amber_and_the_loupe_is_the_next_test()
+    {
+        // Amber's spot 1.54 and SG 1.08, floating in saturated brine (1.13), orange (handbook values from memory); pressed
+        // amber is fragments joined under heat and pressure, with flow structure (the catalogue's source), its bubbles
+        // drawn out (common practice).
+        using var run = new CommandRun();
+        string[] readings = ["--spot", "1.54", "--sg", "1.08", "--heavy-liquid", "1.13 floats", "--uv-long", "strong", "--colour", "orange", "--cut", "cabochon"];
+        double Pressed(params string[] looks) => SpeciesOf(run, [.. readings, .. looks, "--candidates", "20"])
+            .SelectMany(s => s.GetProperty("candidates").EnumerateArray())
+            .Where(c => c.GetProperty("name").GetString() == "pressed amber").Sum(c => c.GetProperty("confidence").GetDouble());
+        Assert.True(Pressed() < 0.3);
+        Assert.True(Pressed("--feature", "elongated_bubbles") > 0.8);
+        var (exit, text, error) = CommandRun.Plain(["identify", .. readings, "--catalogue-dir", run.Folder]);
+        Assert.True(exit == 0, error);
+        Assert.Contains("Next test: loupe or microscope (magnification): look for elongated gas bubbles", text, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_red_spinel_s_chromium_lines_leave_the_flux_grown_synthetic_open()
+    {
+        // Spinel n 1.718, SG 3.60 (handbook values, from memory), red, with the chromium lines near 685 nm and the band
+        // near 540 nm: flux-grown red synthetic spinel is chromium-coloured too and shows them (common practice), so the
+        // lines must not call the stone natural.
+        using var run = new CommandRun();
+        var spinel = SpeciesOf(run, ["--edge", "0:1.718", "--edge", "90:1.718", "--sg", "3.60", "--polariscope", "singly_refractive",
+            "--colour", "red", "--cut", "faceted", "--lines", "686 684 675 540"])[0];
+        Assert.Equal("spinel", spinel.GetProperty("species").GetString());
+        var origins = spinel.GetProperty("origins");
+        Assert.True(origins.GetProperty("synthetic").GetDouble() > 0.1 && origins.GetProperty("natural").GetDouble() < 0.9, origins.ToString());
+    }
+
+    [Fact]
     public void An_alexandrite_s_chromium_and_iron_lines_leave_natural_and_synthetic_open()
     {
         // Chrysoberyl α 1.745, γ 1.754, SG 3.73 (handbook values, from memory), trichroic, a colour change, and the
