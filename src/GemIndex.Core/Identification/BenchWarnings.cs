@@ -127,7 +127,7 @@ public static class BenchWarnings
         // The reason, not the entry's notes (an emerald's chromium lines say nothing of why it must stay dry); one line
         // for all such entries, as for the trade rules.
         if ((keepDry ?? [.. relevant.Where(c => c.Material.DoNotImmerse).Select(c => c.Material.Name)]) is { Count: > 0 } dry)
-            warnings.Add($"Possible {KeepDryListed(dry)}: do not immerse (no heavy liquids, and no water unless the stone is known to take it: amber and copal take the saturated brine test, a doublet's join is looked for in water, a porous stone takes neither) — a porous, soft, filled or organic stone can take in liquid or be harmed, and its SG in a liquid misleads.");
+            warnings.Add($"Possible {KeepDryListed(dry)}: do not immerse (no heavy liquids, and no water unless the stone is known to take it) — a porous, soft, filled or organic stone can take in liquid or be harmed, and its SG in a liquid misleads; amber and copal take the saturated brine test, a doublet's join is looked for in water, a porous stone takes neither.");
         // Entries that share a rule (black and golden coral) are named together, the rule said once.
         foreach (var rule in relevant.Where(c => c.Material.TradeRule is not null).GroupBy(c => c.Material.TradeRule!))
             warnings.Add($"Possible {Listed([.. rule.Select(c => c.Material.Name)])}: {rule.Key.Text}. Check the rules where you buy, sell or ship {(rule.Count() > 1 ? "them" : "it")} (a summary, not legal advice).");

@@ -813,7 +813,8 @@ public class IdentifierTests
         Assert.Equal(["common t", "rare t"], result.KeepDry);
         Assert.Contains(result.Warnings, w => w.StartsWith("Possible common t and rare t: do not immerse", StringComparison.Ordinal));
         // Heavy liquids never; water only where the stone is known to take it (common practice: amber's salt-water float test).
-        Assert.Contains(result.Warnings, w => w.Contains("do not immerse (no heavy liquids, and no water unless the stone is known to take it: amber and copal take the saturated brine test", StringComparison.Ordinal));
+        Assert.Contains(result.Warnings, w => w.Contains("do not immerse (no heavy liquids, and no water unless the stone is known to take it)", StringComparison.Ordinal)
+            && w.EndsWith("amber and copal take the saturated brine test, a doublet's join is looked for in water, a porous stone takes neither.", StringComparison.Ordinal));
 
         // A leading species whose stones to keep dry are a small part of it (a sapphire beside its rare filled and
         // assembled kin) does not ban the routine weighing: the rare porous kind under 5 % is not named.
