@@ -10,8 +10,17 @@ public sealed record NextTestAdvice
     /// The test in plain words ("hand spectroscope (absorption lines)"); for magnification, what to look for and the
     /// lighting ("loupe or microscope (magnification): look for curved striae (diffused light) and round gas bubbles (brightfield or darkfield)").
     /// </summary>
-    public string Description => GemIndex.Core.Bench.BenchTestWords.DisplayOfWire(Test)
+    public string Description => (ByEye ? ByEyeWords : GemIndex.Core.Bench.BenchTestWords.DisplayOfWire(Test))
         + (LookFor.Count > 0 ? ": look for " + string.Join(" and ", LookFor.Select((f, i) => i < Lighting.Count ? $"{f} ({Lighting[i]})" : f)) : "");
+
+    /// <summary>
+    /// For magnification: every feature to look for is a phenomenon seen by eye (play of colour, a star, a cat's-eye),
+    /// so the advice is to look at the stone, not to reach for a microscope.
+    /// </summary>
+    public bool ByEye { get; init; }
+
+    /// <summary>The test's words when <see cref="ByEye"/>.</summary>
+    public const string ByEyeWords = "the stone by eye or with a loupe (phenomena)";
 
     /// <summary>For magnification: the features to look for (their plain names), most telling first; empty otherwise.</summary>
     public IReadOnlyList<string> LookFor { get; init; } = [];

@@ -66,6 +66,7 @@ public static class NextTestAdvisor
                 Expectations = lines,
                 LookFor = [.. l.Features.Select(f => MagnificationVocabulary.Of(f).Name)],
                 Lighting = [.. l.Features.Select(f => MagnificationVocabulary.Of(f).Lighting)],
+                ByEye = l.Features.All(f => MagnificationVocabulary.Of(f).Group == GemIndex.Core.Magnification.FeatureGroup.Phenomenon),
             };
         }
         if (best is not { } chosen || chosen.Gain < minimum) return null;

@@ -488,6 +488,24 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_look_only_for_a_phenomenon_is_advised_by_eye_not_under_the_microscope()
+    {
+        // Invented entries alike but for a play of colour that one of them shows (a precious against a common opal, common
+        // practice): play of colour is seen by eye, turning the stone under light from above.
+        var index = OpticalIndices.SingleIndex(new(1.44, 1.46));
+        Material precious = Make("precious", "a", index, 2.00, 2.20) with
+        {
+            Magnification = new GemIndex.Core.Magnification.MagnificationProfile(OriginClass.Natural,
+                new Dictionary<GemIndex.Core.Magnification.MagnificationFeature, double> { [GemIndex.Core.Magnification.MagnificationFeature.PlayOfColour] = 0.95 }),
+        };
+        Material common = Make("common", "b", index, 2.00, 2.20);
+        var next = Assert.IsType<NextTestAdvice>(NextTestAdvisor.Advise(new BenchSheet { SpecificGravity = new SpecificGravity(2.10, 0.01) }, [(precious, 0.5), (common, 0.5)]));
+        Assert.Equal("magnification", next.Test);
+        Assert.True(next.ByEye);
+        Assert.StartsWith("the stone by eye or with a loupe (phenomena): look for play of colour", next.Description, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void When_only_origin_is_open_the_advice_names_a_look_under_magnification()
     {
         // Natural and synthetic sapphire share every bench reading here; only what is inside tells them apart (nature's
