@@ -20,7 +20,7 @@ public sealed record NextTestAdvice
     public bool ByEye { get; init; }
 
     /// <summary>The test's words when <see cref="ByEye"/>.</summary>
-    public const string ByEyeWords = "the stone by eye or with a loupe (phenomena)";
+    public const string ByEyeWords = "eye or loupe (phenomena)";
 
     /// <summary>For magnification: the features to look for (their plain names), most telling first; empty otherwise.</summary>
     public IReadOnlyList<string> LookFor { get; init; } = [];

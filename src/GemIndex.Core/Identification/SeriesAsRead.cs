@@ -28,6 +28,21 @@ internal static class SeriesAsRead
         double Share(SeriesInterpretation i) => i.Character == OpticCharacter.Biaxial ? odds.Biaxial / 2
             : i.Sign == OpticSign.Positive ? odds.UniaxialPositive : odds.UniaxialNegative;
         var weighed = everyCharacter.Select(i => i with { Weight = Share(i) }).ToList();
+        // A biaxial reading with β at α or γ (2V near 0°) gives the readings a uniaxial crystal of that sign gives: when
+        // another biaxial reading stands apart, it is shown with that uniaxial reading, not as a biaxial one with β = α.
+        (double Positive, double Negative) nearZero = (0, 0);
+        if (weighed.Any(i => i.Character == OpticCharacter.Biaxial && !i.LooksUniaxial))
+            foreach (var b in weighed.Where(i => i.LooksUniaxial).ToList())
+            {
+                int u = weighed.FindIndex(i => i.Character == OpticCharacter.Uniaxial && i.Sign == b.Sign);
+                if (u < 0) continue;
+                string prefix = weighed[u].Sign == OpticSign.Positive ? "uniaxial positive" : "uniaxial negative";
+                string description = weighed[u].Description.StartsWith(prefix + ":", StringComparison.Ordinal)
+                    ? prefix + " (or biaxial, 2V near 0°)" + weighed[u].Description[prefix.Length..] : weighed[u].Description;
+                weighed[u] = weighed[u] with { Weight = weighed[u].Weight + b.Weight, Description = description };
+                nearZero = b.Sign == OpticSign.Positive ? (nearZero.Positive + b.Weight, nearZero.Negative) : (nearZero.Positive, nearZero.Negative + b.Weight);
+                weighed.Remove(b);
+            }
         // Stable: on a tie the analysis' order (uniaxial positive, negative, biaxial) stands.
         var shown = weighed.Where(i => i.Weight >= BenchWarnings.Relevant).OrderByDescending(i => i.Weight).ToList();
         if (shown.Count == 0) shown = [weighed.MaxBy(i => i.Weight)!];
@@ -37,6 +52,6 @@ internal static class SeriesAsRead
             && shown.Any(i => i.Character == OpticCharacter.Uniaxial);
         if (looksUniaxial && odds.Uniaxial + odds.Biaxial > odds.Isotropic)
             shown = [.. shown.OrderByDescending(i => i.Character == OpticCharacter.Uniaxial).ThenByDescending(i => i.Weight)];
-        return analysed with { Character = shown[0].Character, Interpretations = shown, BiaxialLooksUniaxial = looksUniaxial };
+        return analysed with { Character = shown[0].Character, Interpretations = shown, BiaxialLooksUniaxial = looksUniaxial, NearZeroBiaxialShown = nearZero };
     }
 }

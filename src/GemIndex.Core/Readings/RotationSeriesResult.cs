@@ -14,6 +14,13 @@ public sealed record RotationSeriesResult
     /// </summary>
     public bool BiaxialLooksUniaxial { get; init; }
 
+    /// <summary>
+    /// The posterior share of biaxial readings with 2V near 0° shown with the uniaxial reading of their sign (β at α: positive;
+    /// β at γ: negative), when other biaxial readings remain apart; zero otherwise. A display's choice: the numbers are the
+    /// section model's.
+    /// </summary>
+    public (double Positive, double Negative) NearZeroBiaxialShown { get; init; }
+
     /// <summary>Why the character could not be fixed, or empty.</summary>
     public string UndeterminedReason { get; init; } = "";
 

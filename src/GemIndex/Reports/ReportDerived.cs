@@ -137,7 +137,12 @@ internal static class ReportDerived
             return string.Join(", ", new[] { (both, alike), ("singly refractive " + percent(p.Isotropic), p.Isotropic) }
                 .Where(x => x.Item2 > 0).OrderByDescending(x => x.Item2).Select(x => x.Item1));
         }
-        string uniaxial = "uniaxial " + percent(p.Uniaxial) + (p.Uniaxial >= 0.01 ? $" ({Signs(p.UniaxialPositive, p.UniaxialNegative, double.Epsilon, percent)})" : "");
+        // Biaxial readings with 2V near 0° shown with the uniaxial reading of their sign (SeriesAsRead) are counted with it.
+        var (nearPositive, nearNegative) = series?.NearZeroBiaxialShown ?? (0, 0);
+        if (nearPositive + nearNegative > 0)
+            p = p with { UniaxialPositive = p.UniaxialPositive + nearPositive, UniaxialNegative = p.UniaxialNegative + nearNegative, Biaxial = Math.Max(0, p.Biaxial - nearPositive - nearNegative) };
+        string uniaxial = (nearPositive + nearNegative > 0 ? "uniaxial (or biaxial, 2V near 0°) " : "uniaxial ") + percent(p.Uniaxial)
+            + (p.Uniaxial >= 0.01 ? $" ({Signs(p.UniaxialPositive, p.UniaxialNegative, double.Epsilon, percent)})" : "");
         // A character the readings rule out (two edges apart rule out one index) is left out, not shown as "0%".
         return string.Join(", ", new[] { (uniaxial, p.Uniaxial), ("biaxial " + percent(p.Biaxial), p.Biaxial), ("singly refractive " + percent(p.Isotropic), p.Isotropic) }
             .Where(x => x.Item2 > 0).OrderByDescending(x => x.Item2).Select(x => x.Item1));
