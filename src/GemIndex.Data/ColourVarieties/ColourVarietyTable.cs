@@ -6,9 +6,10 @@ namespace GemIndex.Data.ColourVarieties;
 
 /// <summary>
 /// reference-db/colour-varieties.json: the varieties whose trade name is defined by their colour (emerald, aquamarine,
-/// ruby, the sapphires named by colour) and the catalogue entries that carry those names; attached to the shipped
-/// entries by name after the catalogue loads (the SQLite schema does not hold it). Such an entry's colour test takes none
-/// of its species' other colours (docs/ranking.md §2, colour).
+/// ruby, the sapphires, and the quartz, elbaite, chalcedony and jadeite varieties named by colour) and the catalogue
+/// entries that carry those names; attached to the shipped
+/// entries by name after the catalogue loads (the SQLite schema does not hold it). Such an entry's colour test takes neither
+/// its species' other colours nor its hues' neighbours (docs/ranking.md §2, colour).
 /// </summary>
 public sealed class ColourVarietyTable
 {

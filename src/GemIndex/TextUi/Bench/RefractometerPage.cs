@@ -75,9 +75,6 @@ internal sealed class RefractometerPage : BenchPage
                 StoreRequested?.Invoke(_editing, new StepText(Rotation.Text.Trim(), low, high));
                 key.Handled = true;
             };
-        // A space or '/' after a low edge goes on into the high edge's box, which is empty: the two edges typed in one
-        // go stay in sight (the low box is eight wide, and "1.716 1.71" showed as "16 1.71").
-        // While a step is edited its old high edge is in the box: it is selected, so the edge typed next replaces it.
         // In the rotation's box a space or '/' after the rotation goes on to the low edge; after an edge typed there by
         // mistake (a number a refractometer shows, 1.30-2.00), the edge moves to the low edge's box and the high edge is next.
         Rotation.KeyDown += (_, key) =>
@@ -90,6 +87,9 @@ internal sealed class RefractometerPage : BenchPage
             else return;
             key.Handled = true;
         };
+        // A space or '/' after a low edge goes on into the high edge's box, which is empty: the two edges typed in one
+        // go stay in sight (the low box is eight wide, and "1.716 1.71" showed as "16 1.71").
+        // While a step is edited its old high edge is in the box: it is selected, so the edge typed next replaces it.
         Low.KeyDown += (_, key) =>
         {
             if ((key == Key.Space || key.AsRune.Value == '/') && (High.Text.Length == 0 || _editing is not null)
