@@ -38,6 +38,22 @@ public static class LeadingCandidates
     public static bool[] Explained(IReadOnlyList<RankedCandidate> candidates, int count) =>
         Explained([.. candidates.Select(c => c.Material.Species)], count, [.. candidates.Select((c, i) => IsListed(i, c.Confidence))]);
 
+    /// <summary>
+    /// The words for the ranks a list leaves out between its first and its last row (entries below
+    /// <see cref="ListedShare"/> that the species-first order puts before a listed one), or null when the ranks run on:
+    /// "Rank 4 is not listed (below 0.05 %)." A rank missing without a word reads as a row lost.
+    /// </summary>
+    public static string? UnlistedNote(IReadOnlyList<int> listedRanks)
+    {
+        if (listedRanks.Count == 0) return null;
+        var listed = listedRanks.ToHashSet();
+        List<int> missing = [.. Enumerable.Range(1, listedRanks.Max()).Where(r => !listed.Contains(r))];
+        if (missing.Count == 0) return null;
+        string share = (ListedShare * 100).ToString("0.0#", System.Globalization.CultureInfo.InvariantCulture);
+        return missing.Count == 1 ? $"Rank {missing[0]} is not listed (below {share} %)."
+            : $"Ranks {BenchWarnings.Listed([.. missing.Select(r => r.ToString(System.Globalization.CultureInfo.InvariantCulture))])} are not listed (each below {share} %).";
+    }
+
     /// <summary>Whether a candidate at this position with this share is listed when something fits.</summary>
     public static bool IsListed(int position, double confidence) => position == 0 || confidence >= ListedShare;
 

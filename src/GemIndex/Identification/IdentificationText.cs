@@ -72,6 +72,7 @@ internal static class IdentificationText
             o.WriteLine($"{i + 1,2}. {c.Material.Name.PadRight(nameWidth)} {ReportNumbers.Percent(c.Confidence),7} {bar,-20} fit {ReportNumbers.Fixed(c.Fit, "0.00")}  ({c.Material.Species}, {BenchWords.Word(c.Material.Origin)})");
             foreach (var r in c.Reasons) o.WriteLine($"      {GemIndex.Cli.Reports.ReportDerived.Verdict(r)}: {r.Text}");
         }
+        if (LeadingCandidates.UnlistedNote([.. listed.Select(i => i + 1)]) is { } unlisted) o.WriteLine(unlisted);
         o.WriteLine($"Not in the catalogue: {ReportNumbers.Percent(result.NotInCatalogue)}");
         if (result.NextTest is { } next)
         {

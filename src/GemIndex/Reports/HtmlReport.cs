@@ -85,6 +85,7 @@ internal static class HtmlReport
                 $"{Number(ReportNumbers.Percent(c.Confidence))}{Number(ReportNumbers.Fixed(c.Fit, "0.00"))}</tr>");
         h.AppendLine("</table>");
         h.Append("<p>").Append(E(StoneReport.CandidateOrder)).AppendLine("</p>");
+        if (LeadingCandidates.UnlistedNote([.. report.Candidates.Select(c => c.Rank)]) is { } unlisted) h.Append("<p>").Append(E(unlisted)).AppendLine("</p>");
         h.Append("<p>Fit with the entry: ").Append(E(StoneReport.FitMeaning)).AppendLine(".</p>");
         h.Append("<p>Not in the catalogue: ").Append(E(ReportNumbers.Percent(report.NotInCatalogue))).AppendLine("</p>");
         foreach (var c in report.Candidates.Where(c => c.Reasons.Count > 0))

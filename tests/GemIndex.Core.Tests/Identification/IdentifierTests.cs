@@ -487,6 +487,16 @@ public class IdentifierTests
         Assert.Contains("lined: lines at 420, 432, 460 nm", next.Expectations);
     }
 
+    [Theory]
+    [InlineData(new[] { 1, 2, 3 }, null)]
+    [InlineData(new[] { 1, 2, 3, 5 }, "Rank 4 is not listed (below 0.05 %).")]
+    [InlineData(new[] { 1, 2, 3, 5, 8, 10 }, "Ranks 4, 6, 7 and 9 are not listed (each below 0.05 %).")]
+    public void Ranks_a_list_leaves_out_between_its_rows_are_said(int[] listed, string? expected)
+    {
+        // A species-first order may put an entry below the listed share before a listed entry of another species.
+        Assert.Equal(expected, LeadingCandidates.UnlistedNote(listed));
+    }
+
     [Fact]
     public void A_look_only_for_a_phenomenon_is_advised_by_eye_not_under_the_microscope()
     {

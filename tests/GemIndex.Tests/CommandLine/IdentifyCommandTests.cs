@@ -1,5 +1,6 @@
 using System.Text.RegularExpressions;
 using System.Text.Json;
+using GemIndex.Core.Identification;
 
 namespace GemIndex.Tests.CommandLine;
 
@@ -294,6 +295,23 @@ public class IdentifyCommandTests
             .Where(c => c.GetProperty("name").GetString() == name).Sum(c => c.GetProperty("confidence").GetDouble());
         Assert.True(Share("amethyst") < 0.03 && Share("smoky quartz") < 0.03, $"amethyst {Share("amethyst")}, smoky {Share("smoky quartz")}");
         Assert.True(Share("citrine") > 10 * Share("amethyst"));
+    }
+
+    [Fact]
+    public void A_rank_the_list_leaves_out_is_said_not_skipped_in_silence()
+    {
+        // A colourless stone over the limit, SG 5.79 from the weights, singly refractive with strong fire and a negative
+        // thermal probe (cubic zirconia's handbook values, from memory): a second glass below the listed share falls
+        // between the listed glass and strontium titanate.
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--over-limit", "--in-air-ct", "1.62", "--in-water-ct", "1.34", "--polariscope", "singly_refractive",
+            "--pleochroism", "none", "--dispersion", "strong", "--thermal-probe", "negative", "--electrical", "insulating",
+            "--uv-long", "inert", "--uv-short", "inert", "--colour", "colourless", "--cut", "faceted");
+        Assert.True(exit == 0, error);
+        var ranks = Regex.Matches(output, @"^ ?(\d+)\. ", RegexOptions.Multiline).Select(m => int.Parse(m.Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture)).ToList();
+        var missing = Enumerable.Range(1, ranks.Max()).Except(ranks).ToList();
+        Assert.NotEmpty(missing);
+        Assert.Contains(LeadingCandidates.UnlistedNote(ranks)!, output, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -90,6 +90,7 @@ internal sealed class ResultsModel
             rows.Add(new AnswerRow(indent + ResultText.Candidate(listed[i] + 1, names[i][0], used, shown[i].Confidence, bars, rankWidth), listed[i]));
             foreach (string more in names[i].Skip(1)) rows.Add(new AnswerRow(indent + new string(' ', rankWidth + 1) + more, listed[i], PassedOver: true));
         }
+        if (LeadingCandidates.UnlistedNote([.. listed.Select(i => i + 1)]) is { } unlisted) Text(["  " + unlisted]);
         Text([$"  not in the catalogue {ResultText.Percent(r.NotInCatalogue)}"]);
         IReadOnlyList<string> derived = ResultText.Derived(a);
         if (derived.Count > 0) { rows.Add(new AnswerRow("")); Text(["Readings used", .. derived.Select(d => "  " + d)]); }
