@@ -16,7 +16,7 @@ internal sealed class TestsPage : BenchPage
         AddChoice(BenchFields.Electrical);
         AddChoice(BenchFields.UvLong);
         AddChoice(BenchFields.UvShort);
-        AddField(BenchFields.Absorption, "Absorption", 12, "nm, or none");
+        AddField(BenchFields.Absorption, "Absorption", 16, "nm/none");   // four lines in sight at 80 columns
     }
 
     /// <summary>What an opaque stone's polariscope, dichroscope and fire are told instead of their keys.</summary>
