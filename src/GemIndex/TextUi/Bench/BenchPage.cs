@@ -38,7 +38,7 @@ internal class BenchPage : View
     public const string FieldKeys = "Tab next field";
 
     /// <summary>The keys that matter where the cursor is: a text field's, else the page's.</summary>
-    public string KeysHere => Fields.Any(f => f.Edit.HasFocus) ? FieldKeys : Keys;
+    public virtual string KeysHere => Fields.Any(f => f.Edit.HasFocus) ? FieldKeys : Keys;
 
     public List<FormField> Fields { get; } = [];
 

@@ -42,7 +42,12 @@ internal sealed class RefractometerPage : BenchPage
         Add(Rotation, Low, High, Editing, Grid);
         Rotation.TextChanged += (_, _) => ShowNote();   // a rotation typed over the offer is the examiner's own
         Grid.HasFocusChanged += (_, _) => WrapProblems();
-        Grid.ValueChanged += (_, _) => WrapProblems();
+        Grid.ValueChanged += (_, _) =>
+        {
+            // The hint row under the steps takes no key: the selection stops on the last step (Del there had done nothing).
+            if (_stepCount > 0 && Grid.SelectedItem is { } i && i >= _stepCount) Grid.SelectedItem = _stepCount - 1;
+            WrapProblems();
+        };
         AddField(BenchFields.Spot, "Spot reading", 8, "curved stones");
         AddChoice(BenchFields.OverLimit);
         StepField = AddField(RotationStepField, "Rotation step", 8, "°, default 15");
@@ -208,8 +213,15 @@ internal sealed class RefractometerPage : BenchPage
             _rows.Add($"{steps[i].Rotation,7}°  {steps[i].Low,-8}  {steps[i].High,-7}{(errors.ContainsKey(BenchFields.Step(i)) ? FormField.SeeBelow : "")}");   // the reason whole at the page's foot
         if (_rows.Count == 0) _rows.Add("(no steps yet: low high, then Enter)");
         else _rows.Add("(Enter edits, Del removes, ^Z undo)");
-        if (selected is { } s) Grid.SelectedItem = Math.Min(s, _rows.Count - 1);
+        // The selection stays on a step (after Del, the next one, or the last): the hint row below them takes no key.
+        if (selected is { } s) Grid.SelectedItem = Math.Min(s, Math.Max(0, _stepCount - 1));
     }
+
+    /// <summary>The keys where the cursor is: on the step list, what Enter, Del and Ctrl+Z do there.</summary>
+    public override string KeysHere => Grid.HasFocus && _stepCount > 0 ? StepListKeys : base.KeysHere;
+
+    /// <summary>The key line's words while the step list has the cursor.</summary>
+    public const string StepListKeys = "Enter edits the step, Del removes it, ^Z puts it back";
 
     /// <summary>Scrolls the list so that step <paramref name="index"/> is in sight (and selected).</summary>
     public void ShowStep(int index)

@@ -335,6 +335,7 @@ internal sealed class MainWindow : Window
         foreach (ChoiceField c in Pages.SelectMany(p => p.Choices)) c.HasFocusChanged += (_, _) => ShowBars();
         foreach (FormField f in Pages.SelectMany(p => p.Fields)) f.Edit.HasFocusChanged += (_, _) => ShowBars();
         Results.List.HasFocusChanged += (_, _) => ShowBars();
+        Refractometer.Grid.HasFocusChanged += (_, _) => ShowBars();   // the step list's own keys on the key line
     }
 
     /// <summary>A page the examiner asked for (a key, a click): shown, and kept for the next start.</summary>

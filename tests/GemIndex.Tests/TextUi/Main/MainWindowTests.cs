@@ -129,6 +129,29 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void On_the_step_list_the_key_line_says_its_keys_and_Del_after_Del_goes_on_removing_steps()
+    {
+        using IApplication app = Headless.Start();
+        using var window = new MainWindow(_session, TestMaterials.All);
+        _session.Start();
+        window.FillFromModel();
+        SessionToken token = app.Begin(window)!;
+        window.ShowPage(1);
+        window.Refractometer.Low.SetFocus();
+        // Invented quartz-like steps (ω 1.544, ε' to 1.553: common practice).
+        TypeSteps(app, ("1.544", "1.553"), ("1.544", "1.551"), ("1.544", "1.548"), ("1.544", "1.546"));
+        window.Refractometer.Grid.SetFocus();
+        app.InjectKey(Key.End);
+        Assert.Equal(3, window.Refractometer.Grid.SelectedItem);   // the last step, not the hint row under it
+        app.InjectKey(Key.Delete);
+        app.InjectKey(Key.Delete);
+        Assert.Equal(["0", "15"], _session.Form.Steps.Select(s => s.Rotation));
+        app.LayoutAndDraw();
+        Assert.Contains(GemIndex.Cli.TextUi.Bench.RefractometerPage.StepListKeys, app.Driver!.ToString()!);
+        app.End(token);
+    }
+
+    [Fact]
     public void Edges_typed_in_the_rotation_box_go_to_the_edges_and_the_step_is_stored_at_the_offered_rotation()
     {
         using IApplication app = Headless.Start();
