@@ -167,9 +167,10 @@ public static class BenchWarnings
             // colours begin with different hues, writing it down is the advice.
             bool colourWouldHelp = string.IsNullOrWhiteSpace(sheet.Sheet.Colour)
                 && open.Entries.Select(m => string.Join('|', m.Colours.Take(1).SelectMany(ColourWords.PrincipalHues).Order())).Distinct().Count() > 1;
-            if (open.Test is { } helping) advisedTests?.Add(helping.Test);
+            // Varieties named by their colours are told apart by the colour first (rock crystal from amethyst, not by the SG).
+            if (!colourWouldHelp && open.Test is { } helping) advisedTests?.Add(helping.Test);
             warnings.Add($"{Capital(leading[0].Species)}: {Listed([.. open.Entries.Select(m => m.Name)])} are not told apart by these tests; "
-                + (open.Test is { } tells ? $"the {tells.Description} would help." : colourWouldHelp ? "its colour, written down, would help." : "no bench test left here separates them."));
+                + (colourWouldHelp ? "its colour, written down, would help." : open.Test is { } tells ? $"the {tells.Description} would help." : "no bench test left here separates them."));
         }
         if (leading.Count > 0 && LaboratoryCaution(leading[0], sheet) is { } caution) warnings.Add(caution);
         if (relevant.Any(c => c.Material.Origin == OriginClass.Composite))
