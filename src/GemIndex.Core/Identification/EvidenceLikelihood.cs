@@ -265,7 +265,8 @@ public static class EvidenceLikelihood
         {
             string expected = m.OpticCharacter is OpticCharacter.Uniaxial or OpticCharacter.Biaxial
                 ? (m.Pleochroism == PleochroismStrength.None ? "no pleochroism expected"
-                    : $"{m.Pleochroism.ToString().ToLowerInvariant()} pleochroism ({(m.OpticCharacter == OpticCharacter.Biaxial ? "up to three colours" : "two colours at most")}) expected")
+                    : $"{m.Pleochroism.ToString().ToLowerInvariant()} pleochroism ({(m.OpticCharacter == OpticCharacter.Biaxial ? "up to three colours" : "two colours at most")}"
+                      + (m.Pleochroism == PleochroismStrength.Weak ? ", often too faint to see" : "") + ") expected")
                 : m.OpticCharacter switch
                 {
                     OpticCharacter.Aggregate => "none expected (an aggregate: its many crystals' colours mix)",
