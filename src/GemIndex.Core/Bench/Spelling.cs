@@ -18,11 +18,22 @@ public static class Spelling
         string lower = name.Trim().ToLowerInvariant();
         if (lower.Length == 0) return [];
         if (known.Where(k => k.Equals(lower, StringComparison.OrdinalIgnoreCase)).ToList() is [var same]) return [same];
+        if (CommandLineWords.TryGetValue(lower, out string? field) && known.Contains(field)) return [field];
         int most = lower.Length <= 3 ? 1 : MostEdits;
         return [.. known.Where(k => (lower.Length >= ShortestPart && k.StartsWith(lower, StringComparison.OrdinalIgnoreCase))
                                     || (k.Length >= ShortestPart + 1 && lower.StartsWith(k, StringComparison.OrdinalIgnoreCase))
                                     || Edits(lower, k.ToLowerInvariant()) <= most)];
     }
+
+    /// <summary>
+    /// The command line's names of a reading that the batch format names otherwise (--lines, --edge, --feature): a batch
+    /// line written after the options uses them.
+    /// </summary>
+    private static readonly Dictionary<string, string> CommandLineWords = new(StringComparer.Ordinal)
+    {
+        ["lines"] = "absorption_nm", ["edge"] = "refractometer", ["edges"] = "refractometer",
+        ["feature"] = "magnification", ["features"] = "magnification", ["no_feature"] = "magnification",
+    };
 
     /// <summary>The Levenshtein distance: letters changed, added or dropped to turn one name into the other.</summary>
     public static int Edits(string a, string b)
