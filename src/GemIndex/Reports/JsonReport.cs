@@ -124,8 +124,9 @@ internal static class JsonReport
             Number(w, "beta_index", i.Beta);
             Number(w, "highest_index", i.Highest);
             Number(w, "highest_above_liquid_limit", i.AboveLiquidLimit);
-            Number(w, "birefringence", i.Birefringence);
-            Number(w, "birefringence_uncertainty", i.BirefringenceUncertainty);
+            // A difference of two readings carries the subtraction's last bits (0.008999999999999897): to the fourth decimal.
+            Number(w, "birefringence", Math.Round(i.Birefringence, 4));
+            Number(w, "birefringence_uncertainty", Math.Round(i.BirefringenceUncertainty, 4));
             w.WriteString("description", i.Description);
             w.WriteEndObject();
         }

@@ -67,7 +67,7 @@ internal static class ReportDerived
 
     /// <summary>One reading of the series in a line: "uniaxial, sign positive (chance 50%): …".</summary>
     public static string Line(ReportInterpretation i) => i.IsUndetermined
-        ? $"{i.Character} (chance {ReportNumbers.WholePercent(i.Weight)}): {i.Description}"
+        ? $"the edges as read, character left open by the steps: {i.Description}"   // no chance: the odds above give the character
         : $"{i.Character}, sign {i.Sign} (chance {ReportNumbers.WholePercent(i.Weight)}): {i.Description}";
 
     /// <summary>

@@ -111,7 +111,9 @@ public class StoneReportTests
     public void A_reading_whose_character_the_series_leaves_open_names_no_sign()
     {
         var open = new ReportInterpretation("undetermined", "none", 1, 1.617, 1.621, null, 0.004, 0.001, "one step: which edge moves is not seen");
-        Assert.Equal("undetermined (chance 100%): one step: which edge moves is not seen", ReportDerived.Line(open));
+        // No chance beside it: the optic character's odds above it give the character, and "chance 100%" beside
+        // "undetermined" read as a contradiction of them.
+        Assert.Equal("the edges as read, character left open by the steps: one step: which edge moves is not seen", ReportDerived.Line(open));
         var uniaxial = open with { Character = "uniaxial", Sign = "positive" };
         Assert.StartsWith("uniaxial, sign positive (chance 100%)", ReportDerived.Line(uniaxial));
     }
