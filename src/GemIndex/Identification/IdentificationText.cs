@@ -74,6 +74,7 @@ internal static class IdentificationText
         }
         if (LeadingCandidates.UnlistedNote([.. listed.Select(i => i + 1)]) is { } unlisted) o.WriteLine(unlisted);
         o.WriteLine($"Not in the catalogue: {ReportNumbers.Percent(result.NotInCatalogue)}");
+        if (result.NextTest is null && result.NoGoodMatch) o.WriteLine($"Next step: {ReportDerived.NoMatchNextStep}");
         if (result.NextTest is { } next)
         {
             // In words first, as the reports and the text UI say it; the gain in bits for those who weigh it.

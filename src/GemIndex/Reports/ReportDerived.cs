@@ -161,7 +161,12 @@ internal static class ReportDerived
 
     public static string NextTestLine(StoneReport report) => report.NextTest is { } n
         ? $"{n.Description}: it would {Separation(n.GainBits)} {n.SeparatesInWords}."
+        : report.NoGoodMatch ? NoMatchNextStep
         : "None suggested: no remaining test would separate the candidates.";
+
+    /// <summary>What to do next when nothing in the catalogue fits: the readings first, then an assembled stone (common practice).</summary>
+    public const string NoMatchNextStep =
+        "Re-take the readings first: nothing in the catalogue fits them (the refractometer on a clean facet with fresh contact liquid, the SG); then look for an assembled stone (a join or two lustres under the loupe).";
 
     /// <summary>How well the next test separates the leading candidates, in words (1 bit halves the doubt).</summary>
     public static string Separation(double gainBits) => gainBits >= 1 ? "clearly separate" : gainBits >= 0.3 ? "partly separate" : "slightly separate";

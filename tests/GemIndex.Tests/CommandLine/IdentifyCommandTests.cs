@@ -318,6 +318,20 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void A_stone_nothing_fits_is_told_to_re_take_its_readings()
+    {
+        // Invented clashing readings: quartz-like edges (1.544/1.553, common practice) beside diamond's SG 3.52, a singly
+        // refractive polariscope and a positive thermal probe: nothing fits, and no test separates the least bad.
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--edge", "0:1.544/1.553", "--edge", "15:1.544/1.549", "--edge", "30:1.544/1.544",
+            "--edge", "45:1.544/1.548", "--sg", "3.52", "--polariscope", "singly_refractive", "--thermal-probe", "positive",
+            "--colour", "colourless", "--cut", "faceted");
+        Assert.True(exit == 0, error);
+        Assert.Contains("NO GOOD MATCH", output, StringComparison.Ordinal);
+        Assert.Contains("Next step: " + GemIndex.Cli.Reports.ReportDerived.NoMatchNextStep, output, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_rank_the_list_leaves_out_is_said_not_skipped_in_silence()
     {
         // A colourless stone over the limit, SG 5.79 from the weights, singly refractive with strong fire and a negative
