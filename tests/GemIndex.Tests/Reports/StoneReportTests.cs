@@ -118,6 +118,16 @@ public class StoneReportTests
         Assert.StartsWith("uniaxial, sign positive (chance 100%)", ReportDerived.Line(uniaxial));
     }
 
+    [Fact]
+    public void Two_steps_that_leave_the_character_open_give_the_birefringence_as_a_least_value()
+    {
+        // Invented tourmaline-like edges at two steps 15° apart (handbook values from memory): the extremes of the half
+        // turn are unread, so the spread read, 0.020, is the least the birefringence can be.
+        GemIndex.Data.Workbook.StoneSheet two = ReportFixtures.Sheet("""{"id":"t","refractometer":{"method":"facet","readings":[{"rotation_deg":0,"low":1.624,"high":1.644},{"rotation_deg":15,"low":1.624,"high":1.640}]},"sg":3.06}""");
+        var report = StoneReport.Build(two, ReportFixtures.Identify(two));
+        Assert.Equal("at least 0.020 (the steps leave part of the half turn unread)", ReportDerived.Fields(report).Single(f => f.Key == "birefringence").Value);
+    }
+
     [Theory]
     // Bench readings never make a material certain or impossible: no probability above 0 reads 0 %, and none reads 100 %,
     // not even a 1 whose rest underflowed (a ruby's species total printed "100.0 %").

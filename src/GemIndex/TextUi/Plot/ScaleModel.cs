@@ -44,9 +44,10 @@ internal sealed class ScaleModel
             {
                 scales.Add(n => new ReadingScale("lowest index", "0.000", best.Lowest.Value, best.Lowest.StandardUncertainty, WidestIndex,
                     [.. top.Take(n).Select(m => (m.Name, (PropertyRange?)m.Indices.Lowest))], ranks));
-                // A highest index fitted above the liquid is no reading: its birefringence is only a lower bound, not drawn.
+                // A highest index fitted above the liquid is no reading, and steps that leave the character open leave the
+                // extremes unread: either birefringence is only a lower bound, not drawn (a candidate was marked "out" on it).
                 // The birefringence as the answer and the reports give it: the difference of the indices as shown.
-                if (best.Birefringence.Value > 0 && best.AboveLiquidLimit is null)
+                if (best.Birefringence.Value > 0 && best.AboveLiquidLimit is null && best.Character is not null)
                     scales.Add(n => new ReadingScale("birefringence", "0.000", Birefringence.OfShownIndices(best.Highest.Value, best.Lowest.Value), best.Birefringence.StandardUncertainty, WidestBirefringence,
                         [.. top.Take(n).Select(m => (m.Name, m.Birefringence ?? new PropertyRange(0, 0)))], ranks));
             }
