@@ -15,13 +15,24 @@ public sealed record IdentificationResult
     public double? SpeciesConfidence(string species) => Species.FirstOrDefault(s => s.Species == species)?.Confidence;
 
     /// <summary>
-    /// The leading species' mineral group, with its total over every species of the group and the group's species that
-    /// hold at least <see cref="BenchWarnings.Relevant"/>, likeliest first, when two or more do (elbaite and uvite: the
-    /// stone is a tourmaline); else null. The answer's headline names it beside the species.
+    /// The leading species' mineral group, or a group whose species together outweigh the leading species (lazulite 33 %
+    /// beside elbaite, uvite and dravite at 63 %: the stone is likelier a tourmaline), with its total over every species of
+    /// the group and the group's species that hold at least <see cref="BenchWarnings.Relevant"/>, likeliest first, when two
+    /// or more do; else null. The answer's headline names it beside the species.
     /// </summary>
-    public GroupSpecies? LeadingGroup => Species.Count > 0 && Species[0].MineralGroup is { } group
-        && Species.Where(s => s.MineralGroup == group && s.Confidence >= BenchWarnings.Relevant).Select(s => s.Species).ToList() is { Count: >= 2 } held
-        ? new GroupSpecies(group, Species.Where(s => s.MineralGroup == group).Sum(s => s.Confidence), held) : null;
+    public GroupSpecies? LeadingGroup
+    {
+        get
+        {
+            if (Species.Count == 0) return null;
+            GroupSpecies? Of(string group) =>
+                Species.Where(s => s.MineralGroup == group && s.Confidence >= BenchWarnings.Relevant).Select(s => s.Species).ToList() is { Count: >= 2 } held
+                    ? new GroupSpecies(group, Species.Where(s => s.MineralGroup == group).Sum(s => s.Confidence), held) : null;
+            if (Species[0].MineralGroup is { } own) return Of(own);
+            return Species.Select(s => s.MineralGroup).OfType<string>().Distinct().Select(Of).OfType<GroupSpecies>()
+                .Where(g => g.Total > Species[0].Confidence).MaxBy(g => g.Total);
+        }
+    }
 
     /// <summary>Candidates, best first (at most the number asked for).</summary>
     public required IReadOnlyList<RankedCandidate> Candidates { get; init; }

@@ -318,6 +318,17 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void A_mineral_group_that_outweighs_the_leading_species_is_named()
+    {
+        // Invented tourmaline-like edges at two steps (1.624/1.644: handbook values from memory) and SG 3.06: lazulite leads
+        // as one species, the tourmalines hold more together.
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--edge", "0:1.624/1.644", "--edge", "15:1.624/1.640", "--sg", "3.06");
+        Assert.True(exit == 0, error);
+        Assert.Matches(@"Mineral group: tourmaline \d+\.\d % in all \(elbaite, uvite", output);
+    }
+
+    [Fact]
     public void A_stone_nothing_fits_is_told_to_re_take_its_readings()
     {
         // Invented clashing readings: quartz-like edges (1.544/1.553, common practice) beside diamond's SG 3.52, a singly
