@@ -42,7 +42,10 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     public const string ExaminerSetting = BenchFields.Examiner;
 
     private readonly Lock _gate = new();
-    private (long Id, int Version) _lastSaved = (0, -1);
+    // The form's version last saved for each stone, and the last version whose bench settings (examiner, rotation step,
+    // instrument) were written: a save overtaken by a newer one, of its stone or of the bench, writes nothing stale.
+    private readonly Dictionary<long, int> _lastSaved = [];
+    private int _settingsVersion = -1;
     private Task _pending = Task.CompletedTask;
 
     // Each stone as this window last read it: a save writes only what changed since, and only where the workbook
@@ -172,7 +175,7 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
     {
         lock (_gate)
         {
-            if (snapshot.StoneId == _lastSaved.Id && snapshot.Version <= _lastSaved.Version) return null;  // overtaken by a newer save
+            if (_lastSaved.TryGetValue(snapshot.StoneId, out int saved) && snapshot.Version <= saved) return null;  // overtaken by a newer save
             long sequence = ++_saveSequence;
             var (problem, conflicts) = Write(snapshot, assessment);
             return (sequence, problem, conflicts);
@@ -190,12 +193,18 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
                 ?? throw new WorkbookException($"{workbook.Path}: no stone with id {snapshot.StoneId} (deleted elsewhere?)");
             StoneSaveResult saved = workbook.Save(lastRead, BenchModel.ToStoneSheet(snapshot, assessment.Readings));
             _lastRead[snapshot.StoneId] = saved.NextLastRead;
-            // The instrument of the day follows what the user sets, never what an opened stone was read with.
-            if (snapshot.InstrumentChanged(BenchFields.Precision)) Setting(PrecisionSetting, snapshot.Text(BenchFields.Precision));
-            if (snapshot.InstrumentChanged(BenchFields.CalibrationOffset)) Setting(CalibrationSetting, snapshot.Text(BenchFields.CalibrationOffset));
-            Setting(RotationStepSetting, snapshot.Text(RefractometerPage.RotationStepField));
-            Setting(ExaminerSetting, snapshot.Text(BenchFields.Examiner));
-            _lastSaved = (snapshot.StoneId, snapshot.Version);
+            // The bench's settings from the newest form only: a late save of the stone left before (its start, say) must
+            // not put back an examiner or a rotation step typed over since.
+            if (snapshot.Version > _settingsVersion)
+            {
+                _settingsVersion = snapshot.Version;
+                // The instrument of the day follows what the user sets, never what an opened stone was read with.
+                if (snapshot.InstrumentChanged(BenchFields.Precision)) Setting(PrecisionSetting, snapshot.Text(BenchFields.Precision));
+                if (snapshot.InstrumentChanged(BenchFields.CalibrationOffset)) Setting(CalibrationSetting, snapshot.Text(BenchFields.CalibrationOffset));
+                Setting(RotationStepSetting, snapshot.Text(RefractometerPage.RotationStepField));
+                Setting(ExaminerSetting, snapshot.Text(BenchFields.Examiner));
+            }
+            _lastSaved[snapshot.StoneId] = snapshot.Version;
             return saved.IsClean ? (null, []) : (ConflictText(saved.Conflicts), saved.Conflicts);
         }
         catch (Exception e) when (e is WorkbookException or Microsoft.Data.Sqlite.SqliteException or IOException)
