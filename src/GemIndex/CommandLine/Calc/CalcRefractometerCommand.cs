@@ -74,7 +74,9 @@ internal static class CalcRefractometerCommand
         {
             string edge = r.EdgeAngleDegrees is { } d ? $"edge angle {Degrees(d)}" : "no edge (index not below the glass)";
             output.WriteLine($"index {Index(n)} {NoUnit} ↔ {edge}" +
-                (r.OverTheLimit == true ? $": over the limit (above {Index(r.HighestReadableIndex)}), no shadow edge on the scale" : ": readable"));
+                (r.OverTheLimit == true ? $": over the limit (above {Index(r.HighestReadableIndex)}), no shadow edge on the scale"
+                    : n < r.LowestReadableIndex ? $": below the scale (it starts at {Index(r.LowestReadableIndex)}), not readable"
+                    : ": readable"));
         }
         if (r.Standards is { } standards)
         {

@@ -33,6 +33,16 @@ public class CalcRefractometerCommandTests
     }
 
     [Fact]
+    public void An_index_below_the_scale_is_not_readable()
+    {
+        // The default scale starts at 1.30: an index of 1.20 (below any gem but a few organics' spot readings) is off it.
+        var (exit, output, _) = Text("refractometer", "--index", "1.2");
+        Assert.Equal(0, exit);
+        Assert.Contains("below the scale (it starts at 1.3000), not readable", output, StringComparison.Ordinal);
+        Assert.DoesNotContain(": readable", output, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Calibration_offset_is_known_minus_read_averaged_over_the_standards()
     {
         // Worked example of our own: (1.544 − 1.546) and (1.553 − 1.555) both give −0.002, so the offset is −0.002.
