@@ -44,6 +44,14 @@ internal static class CalcReflectanceCommand
 
     private static ReflectanceResult FromReflectance(RefractiveIndex n1, double percent, double uncertaintyPercent)
     {
+        // Checked in the option's own unit first: the Core method works in fractions ("1.2; allowed 0 to 0.36" for 120 %).
+        double highest = Fresnel.AtNormalIncidence(n1, new RefractiveIndex(RefractiveIndex.Maximum)) * 100;
+        Named("--reflectance-percent", () =>
+        {
+            QuantityOutOfRangeException.ThrowIfNotAbove("normal-incidence reflectance", percent, 0, "%");
+            QuantityOutOfRangeException.ThrowIfOutside("normal-incidence reflectance", percent, 0, Math.Floor(highest * 100) / 100, "%");
+            return 0;
+        });
         RefractiveIndex n2 = Named("--reflectance-percent, --reflectance-uncertainty-percent",
             () => Fresnel.IndexFromNormalReflectance(percent / 100, n1, uncertaintyPercent / 100));
         return new ReflectanceResult(n1.Value, n2.Value, n2.StandardUncertainty, 0, null, null, percent);

@@ -5,6 +5,14 @@ namespace GemIndex.Tests.CommandLine.Calc;
 public class CalcReflectanceCommandTests
 {
     [Fact]
+    public void A_reflectance_out_of_range_is_told_in_percent_as_typed()
+    {
+        var (exit, _, error) = Text("reflectance", "--reflectance-percent", "120");
+        Assert.Equal(3, exit);
+        Assert.Contains("--reflectance-percent: normal-incidence reflectance is 120 %; allowed: 0 to 36", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Glass_of_index_1_5_reflects_4_percent_at_normal_incidence()
     {
         // R = 4.0 % for n 1.5 at normal incidence: Hecht, Optics, as quoted in DOMAIN.md §7. Printed to 0.1 %, so ±0.05 %.
@@ -27,7 +35,7 @@ public class CalcReflectanceCommandTests
     public void A_reflectance_of_zero_is_one_line_naming_the_option()
     {
         string line = OneErrorLine("reflectance", "--reflectance-percent", "0");
-        Assert.StartsWith("gemindex calc: --reflectance-percent, --reflectance-uncertainty-percent: normal-incidence reflectance", line, StringComparison.Ordinal);
+        Assert.StartsWith("gemindex calc: --reflectance-percent: normal-incidence reflectance is 0 %", line, StringComparison.Ordinal);
     }
 
     [Fact]
