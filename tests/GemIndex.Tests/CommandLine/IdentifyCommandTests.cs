@@ -290,11 +290,9 @@ public class IdentifyCommandTests
         var (exit, output, error) = Identify(run, "--edge", "0:1.544/1.553", "--edge", "30:1.544/1.552", "--edge", "60:1.544/1.550",
             "--edge", "90:1.544/1.548", "--sg", "2.65", "--colour", "pale yellow", "--json", "--candidates", "30");
         Assert.True(exit == 0, error);
-        using var doc = System.Text.Json.JsonDocument.Parse(output);
-        double Share(string name) => doc.RootElement.GetProperty("species").EnumerateArray().SelectMany(s => s.GetProperty("candidates").EnumerateArray())
-            .Where(c => c.GetProperty("name").GetString() == name).Sum(c => c.GetProperty("confidence").GetDouble());
-        Assert.True(Share("amethyst") < 0.03 && Share("smoky quartz") < 0.03, $"amethyst {Share("amethyst")}, smoky {Share("smoky quartz")}");
-        Assert.True(Share("citrine") > 10 * Share("amethyst"));
+        double amethyst = CandidateShare(output, "amethyst"), smoky = CandidateShare(output, "smoky quartz");
+        Assert.True(amethyst < 0.03 && smoky < 0.03, $"amethyst {amethyst}, smoky {smoky}");
+        Assert.True(CandidateShare(output, "citrine") > 10 * amethyst);
     }
 
     [Fact]
@@ -309,9 +307,7 @@ public class IdentifyCommandTests
         {
             var (exit, output, error) = Identify(run, [.. readings, "--sg", sg]);
             Assert.True(exit == 0, error);
-            using var doc = JsonDocument.Parse(output);
-            return doc.RootElement.GetProperty("species").EnumerateArray().SelectMany(s => s.GetProperty("candidates").EnumerateArray())
-                .Where(c => c.GetProperty("name").GetString() == "flux-grown synthetic emerald").Sum(c => c.GetProperty("confidence").GetDouble());
+            return CandidateShare(output, "flux-grown synthetic emerald");
         }
         Assert.True(Flux("2.66") > 0.8);
         Assert.True(Flux("2.85") < 0.1);
