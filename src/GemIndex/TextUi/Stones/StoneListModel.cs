@@ -74,19 +74,26 @@ internal sealed class StoneListModel
     /// <summary>The colour column's width: 14, and up to 24 on a wide screen ("yellowish green" was cut even at 120 columns).</summary>
     public int ColourWidth { get; private set; } = NarrowestColour;
 
-    /// <summary>The width of the list's rows; the answer column takes what the other columns leave, the colour column a little of a wide screen's.</summary>
+    /// <summary>The reference column's narrowest width, and how much wider it grows once the answer and the colour have theirs (judgement).</summary>
+    public const int NarrowestReference = 18, ReferenceGrowth = 12;
+
+    /// <summary>The reference column's width: 18, and up to 30 on a wide screen (a copy's "… (copy)" and long lot references were cut at any width).</summary>
+    public int ReferenceWidth { get; private set; } = NarrowestReference;
+
+    /// <summary>The width of the list's rows; the answer column takes what the other columns leave, the colour and reference columns a little of a wide screen's.</summary>
     public int Width
     {
         set
         {
             int free = value - OtherColumns;
             ColourWidth = NarrowestColour + Math.Clamp(free - 40, 0, ColourGrowth);
-            AnswerWidth = Math.Max(NarrowestAnswer, free - (ColourWidth - NarrowestColour));
+            ReferenceWidth = NarrowestReference + Math.Clamp(free - 40 - ColourGrowth, 0, ReferenceGrowth);
+            AnswerWidth = Math.Max(NarrowestAnswer, free - (ColourWidth - NarrowestColour) - (ReferenceWidth - NarrowestReference));
         }
     }
 
     /// <summary>The columns' names over the list, in the columns of <see cref="Line"/>.</summary>
-    public string Heading => $"{"Reference",-18} {"Colour".PadRight(ColourWidth)} {"Weight",9} {"Answer".PadRight(AnswerWidth)} Changed (UTC)";
+    public string Heading => $"{"Reference".PadRight(ReferenceWidth)} {"Colour".PadRight(ColourWidth)} {"Weight",9} {"Answer".PadRight(AnswerWidth)} Changed (UTC)";
 
     /// <summary>
     /// The stones whose answers are not known yet (none without an answer function): the shown ones first, in the order
@@ -113,11 +120,11 @@ internal sealed class StoneListModel
 
     /// <summary>One stone's line, with its answer, or <see cref="Pending"/> while it is worked out.</summary>
     public string LineOf(StoneSummary s) =>
-        Line(s, answer is null ? "" : _answers.TryGetValue((s.Id, s.Modified), out string? text) ? text ?? "" : Pending, AnswerWidth, ColourWidth);
+        Line(s, answer is null ? "" : _answers.TryGetValue((s.Id, s.Modified), out string? text) ? text ?? "" : Pending, AnswerWidth, ColourWidth, ReferenceWidth);
 
     /// <summary>One stone: reference, colour, weight, answer, day of the last change (UTC, as the workbook stores it; F3 shows the times).</summary>
-    public static string Line(StoneSummary s, string answer, int answerWidth = NarrowestAnswer, int colourWidth = NarrowestColour) =>
-        $"{Results.ResultText.Clip(s.Reference.Length == 0 ? "(no reference)" : s.Reference, 18),-18} {Results.ResultText.Clip(s.Colour, colourWidth).PadRight(colourWidth)} "
+    public static string Line(StoneSummary s, string answer, int answerWidth = NarrowestAnswer, int colourWidth = NarrowestColour, int referenceWidth = NarrowestReference) =>
+        $"{Results.ResultText.Clip(s.Reference.Length == 0 ? "(no reference)" : s.Reference, referenceWidth).PadRight(referenceWidth)} {Results.ResultText.Clip(s.Colour, colourWidth).PadRight(colourWidth)} "
         + $"{(s.WeightCarats is { } w ? w.ToString("0.00", CultureInfo.InvariantCulture) + " ct" : ""),9} {Results.ResultText.Clip(answer, answerWidth).PadRight(answerWidth)} "
         + s.Modified.ToUniversalTime().ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
 }

@@ -23,7 +23,7 @@ public class StoneListModelTests
 
     [Theory]
     [InlineData(78, 20)]     // 80 columns inside the frame
-    [InlineData(118, 50)]    // 120 columns: a long species name and its share fit, and the colour column has ten more
+    [InlineData(118, 40)]    // 120 columns: a long species name and its share fit; the colour column has ten more, the reference ten
     public void The_answer_column_takes_the_width_the_other_columns_leave(int width, int answerWidth)
     {
         var stone = new StoneSummary(7, "lot 9", "red", 1.2, Noon);
@@ -34,6 +34,20 @@ public class StoneListModelTests
         Assert.Equal(model.Heading.IndexOf("Changed", StringComparison.Ordinal), line.IndexOf("2026-12-03", StringComparison.Ordinal));
         Assert.True(line.Length <= width, $"{line.Length}: {line}");
         Assert.Equal(answerWidth >= 27, line.Contains("pyrope-almandine garnet 88%", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void A_long_reference_is_whole_on_a_wide_screen()
+    {
+        // A copy of a stone is told from it only at the end of its reference ("estate lot A / 6 (copy)"), which was cut at any width.
+        var stone = new StoneSummary(7, "estate lot A / 6 (copy)", "colourless", 1.2, Noon);
+        var wide = new StoneListModel(_ => [stone], _ => "diamond >99%") { Width = 118 };
+        wide.Store(stone, wide.Compute(7)!);
+        Assert.StartsWith("estate lot A / 6 (copy) ", wide.LineOf(stone), StringComparison.Ordinal);
+        Assert.Equal(wide.Heading.IndexOf("Colour", StringComparison.Ordinal), wide.LineOf(stone).IndexOf("colourless", StringComparison.Ordinal));
+        var narrow = new StoneListModel(_ => [stone], _ => "diamond >99%") { Width = 78 };
+        narrow.Store(stone, narrow.Compute(7)!);
+        Assert.True(narrow.LineOf(stone).Length <= 78);
     }
 
     [Fact]
