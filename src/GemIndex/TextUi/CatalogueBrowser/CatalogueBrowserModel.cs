@@ -103,8 +103,9 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
     private static double Closeness(double low, double high, double x, double tolerance) =>
         Outside(low, high, x) / tolerance + Math.Abs(x - (low + high) / 2) / (tolerance * 100);
 
+    // The origin's word too ("synthetic" finds laboratory-grown diamond and cubic zirconia, whose names do not say it).
     private static bool Matches(Material m, string q) =>
-        new[] { m.Name, m.Species, m.Variety, m.Family }.Concat(m.Colours).Any(s => s.Contains(q, StringComparison.OrdinalIgnoreCase));
+        new[] { m.Name, m.Species, m.Variety, m.Family, m.Origin.ToString() }.Concat(m.Colours).Any(s => s.Contains(q, StringComparison.OrdinalIgnoreCase));
 
     /// <summary>The width the names need: the longest shown, or what <paramref name="width"/> leaves beside the numbers.</summary>
     public int NameWidth(int width) => Math.Max(12, Math.Min(Shown.Count == 0 ? 12 : Shown.Max(m => m.Name.Length), width - NumbersWidth));

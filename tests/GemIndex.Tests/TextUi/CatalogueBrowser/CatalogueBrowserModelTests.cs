@@ -15,6 +15,17 @@ public class CatalogueBrowserModelTests
     }
 
     [Fact]
+    public void Searching_an_origin_word_finds_the_entries_of_that_origin_whatever_their_names()
+    {
+        // An invented man-made entry whose names do not say "synthetic" (as with cubic zirconia).
+        var made = TestMaterials.All[0] with { Name = "made stone", Species = "made stone", Variety = "made stone", Family = "simulants", Origin = GemIndex.Core.Catalogue.OriginClass.Synthetic };
+        var model = new CatalogueBrowserModel([.. TestMaterials.All, made]);
+        model.Search("synthetic");
+        Assert.Contains(made, model.Shown);
+        Assert.DoesNotContain(TestMaterials.All[0], model.Shown);
+    }
+
+    [Fact]
     public void A_word_lists_the_species_of_that_name_before_entries_that_only_mention_it()
     {
         // A composite with glass in its variety comes first in the catalogue; the glass species' own entries lead the list.
