@@ -492,6 +492,16 @@ public sealed class StoneWorkbook : IDisposable
     /// </summary>
     private bool ExtendLastEdit(long id, DateTimeOffset now, string field, string before, string after)
     {
+        // Only a change of the same parts continues the last one (typing a value); another step edited, removed or put
+        // back is an entry of its own, with its own time (a removal had carried an earlier step edit's entry to its time).
+        using (var last = _db.CreateCommand())
+        {
+            last.CommandText = "SELECT before, after FROM stone_edit WHERE id = (SELECT max(id) FROM stone_edit WHERE stone_id = $id) AND field = $field";
+            last.Parameters.AddWithValue("$id", id);
+            last.Parameters.AddWithValue("$field", field);
+            using var r = last.ExecuteReader();
+            if (!r.Read() || EditParts.Of(r.GetString(0), r.GetString(1)) != EditParts.Of(before, after)) return false;
+        }
         using var cmd = _db.CreateCommand();
         cmd.CommandText = """
             UPDATE stone_edit SET after = $after, at = $at

@@ -87,6 +87,29 @@ public class StoneWorkbookTests
     }
 
     [Fact]
+    public void A_step_edited_and_another_removed_in_quick_succession_are_two_entries_with_their_own_times()
+    {
+        // Invented peridot-like steps (handbook values from memory). The refractometer's steps are one stored field: a
+        // removal within the merge window had been folded into the earlier edit's entry and carried it to its time.
+        using var dir = new TempDirectory();
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing);
+        EdgeReadingEntry[] steps = [new(0, 1.654, 1.690), new(30, 1.656, 1.689), new(60, 1.664, 1.681), new(90, 1.662, 1.684)];
+        StoneSheet s = wb.Create(Quartz() with { Readings = Quartz().Readings with { Refractometer = new RefractometerReadings { Readings = steps } } });
+        RefractometerReadings With(params EdgeReadingEntry[] e) => new() { Readings = e };
+        s = wb.Save(s, s with { Readings = s.Readings with { Refractometer = With(steps[0], steps[1], new(60, 1.665, 1.681), steps[3]) } }).Stored;
+        s = wb.Save(s, s with { Readings = s.Readings with { Refractometer = With(steps[0], steps[1], new(60, 1.665, 1.681)) } }).Stored;
+        IReadOnlyList<StoneEdit> history = wb.History(s.Id);
+        Assert.Equal(["created", "readings.refractometer", "readings.refractometer"], history.Select(e => e.Field));
+        Assert.True(history[2].At > history[1].At);
+        // Read as a spot instead (an entry), then the spot typed on keystroke by keystroke: one entry for the typing.
+        RefractometerReadings Spot(double value) => new() { Method = "spot", Spot = value };
+        s = wb.Save(s, s with { Readings = s.Readings with { Refractometer = Spot(1.5) } }).Stored;
+        int entries = wb.History(s.Id).Count;
+        foreach (double spot in new[] { 1.54, 1.545 }) s = wb.Save(s, s with { Readings = s.Readings with { Refractometer = Spot(spot) } }).Stored;
+        Assert.Equal(entries + 1, wb.History(s.Id).Count);
+    }
+
+    [Fact]
     public void Saving_without_changes_adds_no_history()
     {
         using var dir = new TempDirectory();
