@@ -93,11 +93,14 @@ public static class ColourWords
     public static double Probability(IReadOnlySet<string> seen, IReadOnlyList<string> listed) => Probability([.. seen], listed);
 
     /// <summary><see cref="Probability(IReadOnlySet{string}, IReadOnlyList{string})"/> with the hues seen as a list, in the set's order.</summary>
+    // Read only: a colour-named entry's neighbours, none (one list for every call on the ranking's hot path).
+    private static readonly List<string> NoNeighbours = [];
+
     internal static double Probability(IReadOnlyList<string> seen, IReadOnlyList<string> listed, bool withNeighbours = true)
     {
         if (listed.Count == 0) return BroadProbability;
         var (total, listedNeighbours) = ListedParts.GetValue(listed, Parts);
-        List<string> neighbours = withNeighbours ? listedNeighbours : [];
+        List<string> neighbours = withNeighbours ? listedNeighbours : NoNeighbours;
         double best = 0;
         for (int i = 0; i < seen.Count; i++)
         {

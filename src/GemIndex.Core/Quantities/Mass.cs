@@ -34,10 +34,13 @@ public readonly record struct Mass
     /// <summary>A mass from grams.</summary>
     public static Mass FromGrams(double grams, double standardUncertaintyGrams = 0) => new(grams, standardUncertaintyGrams);
 
+    /// <summary>The most a mass in carats may be (a judgement: beyond any stone weighed on a gem balance).</summary>
+    public const double MaximumCarats = 500_000;
+
     /// <summary>A mass from metric carats.</summary>
     public static Mass FromCarats(double carats, double standardUncertaintyCarats = 0)
     {
-        QuantityOutOfRangeException.ThrowIfOutside("mass", carats, 0, 500_000, "ct");
+        QuantityOutOfRangeException.ThrowIfOutside("mass", carats, 0, MaximumCarats, "ct");
         QuantityOutOfRangeException.ThrowIfOutside("mass uncertainty", standardUncertaintyCarats, 0, 5000, "ct");
         return new(carats * GramsPerCarat, standardUncertaintyCarats * GramsPerCarat);
     }

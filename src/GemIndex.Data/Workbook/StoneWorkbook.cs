@@ -492,27 +492,31 @@ public sealed class StoneWorkbook : IDisposable
     /// </summary>
     private bool ExtendLastEdit(long id, DateTimeOffset now, string field, string before, string after)
     {
-        // Only a change of the same parts continues the last one (typing a value); another step edited, removed or put
-        // back is an entry of its own, with its own time (a removal had carried an earlier step edit's entry to its time).
+        // The stone's last entry, when it is this field's, recent, and ends where this change begins.
+        long row;
+        string lastBefore;
         using (var last = _db.CreateCommand())
         {
-            last.CommandText = "SELECT before, after FROM stone_edit WHERE id = (SELECT max(id) FROM stone_edit WHERE stone_id = $id) AND field = $field";
+            last.CommandText = """
+                SELECT id, before FROM stone_edit
+                WHERE id = (SELECT max(id) FROM stone_edit WHERE stone_id = $id) AND field = $field AND after = $before AND at >= $since
+                """;
             last.Parameters.AddWithValue("$id", id);
             last.Parameters.AddWithValue("$field", field);
+            last.Parameters.AddWithValue("$before", before);
+            last.Parameters.AddWithValue("$since", Stamp(now - EditMergeWindow));
             using var r = last.ExecuteReader();
-            if (!r.Read() || EditParts.Of(r.GetString(0), r.GetString(1)) != EditParts.Of(before, after)) return false;
+            if (!r.Read()) return false;
+            (row, lastBefore) = (r.GetInt64(0), r.GetString(1));
         }
+        // Only a change of the same parts continues it (typing a value); another step edited or removed is an entry of
+        // its own, with its own time (a removal had carried an earlier step edit's entry to its time).
+        if (EditParts.Of(lastBefore, before) != EditParts.Of(before, after)) return false;
         using var cmd = _db.CreateCommand();
-        cmd.CommandText = """
-            UPDATE stone_edit SET after = $after, at = $at
-            WHERE id = (SELECT max(id) FROM stone_edit WHERE stone_id = $id) AND field = $field AND after = $before AND at >= $since
-            """;
+        cmd.CommandText = "UPDATE stone_edit SET after = $after, at = $at WHERE id = $row";
         cmd.Parameters.AddWithValue("$after", after);
-        cmd.Parameters.AddWithValue("$before", before);
         cmd.Parameters.AddWithValue("$at", Stamp(now));
-        cmd.Parameters.AddWithValue("$id", id);
-        cmd.Parameters.AddWithValue("$field", field);
-        cmd.Parameters.AddWithValue("$since", Stamp(now - EditMergeWindow));
+        cmd.Parameters.AddWithValue("$row", row);
         return cmd.ExecuteNonQuery() == 1;
     }
 

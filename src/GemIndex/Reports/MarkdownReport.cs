@@ -1,4 +1,5 @@
 using GemIndex.Core.Bench;
+using GemIndex.Core.Identification;
 using System.Text;
 
 namespace GemIndex.Cli.Reports;
@@ -52,7 +53,7 @@ internal static class MarkdownReport
         foreach (var c in report.Candidates)
             md.AppendLine($"| {c.Rank} | {Escape(c.Name)} | {Escape(report.SpeciesWithTotal(c.Species))} | {Escape(c.Origin)} | {ReportNumbers.Percent(c.Confidence)} | {ReportNumbers.Fixed(c.Fit, "0.00")} |");
         md.AppendLine().AppendLine(Escape(StoneReport.CandidateOrder)).AppendLine();
-        if (GemIndex.Core.Identification.LeadingCandidates.UnlistedNote([.. report.Candidates.Select(c => c.Rank)]) is { } unlisted) md.AppendLine(Escape(unlisted)).AppendLine();
+        if (LeadingCandidates.UnlistedNote([.. report.Candidates.Select(c => c.Rank)]) is { } unlisted) md.AppendLine(Escape(unlisted)).AppendLine();
         md.Append("Fit with the entry: ").Append(StoneReport.FitMeaning).AppendLine(".").AppendLine();
         md.Append("Not in the catalogue: ").AppendLine(ReportNumbers.Percent(report.NotInCatalogue)).AppendLine();
         foreach (var c in report.Candidates.Where(c => c.Reasons.Count > 0))

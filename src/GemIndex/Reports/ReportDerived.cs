@@ -19,11 +19,12 @@ internal static class ReportDerived
             yield return new("indices", "Refractive indices (most likely reading)",
                 Indices(best.Character == "uniaxial", SignText(report), best.Lowest, best.Highest, best.Beta, best.AboveLiquidLimit));   // ω and ε only under a settled sign
             // The difference of the indices shown on the line above, so the two lines add up; past the liquid, the least.
+            double shown = Core.Optics.Birefringence.OfShownIndices(best.Highest, best.Lowest);
             yield return new("birefringence", "Birefringence", best.AboveLiquidLimit is { } limit
                 ? AtLeast(best.Lowest, limit, best.Highest)
                 // Steps that leave the character open leave the extremes unread too: the spread read is a least value.
-                : best.IsUndetermined ? $"at least {ReportNumbers.Fixed(Core.Optics.Birefringence.OfShownIndices(best.Highest, best.Lowest), "0.000")} (the steps leave part of the half turn unread)"
-                : ReportNumbers.WithUncertainty(Core.Optics.Birefringence.OfShownIndices(best.Highest, best.Lowest), best.BirefringenceUncertainty, "0.000"));
+                : best.IsUndetermined ? $"at least {ReportNumbers.Fixed(shown, "0.000")} (the steps leave part of the half turn unread)"
+                : ReportNumbers.WithUncertainty(shown, best.BirefringenceUncertainty, "0.000"));
             yield return new("optic_sign", "Optic sign", SignText(report));
         }
         if (report.SpecificGravity is { } sg)

@@ -64,9 +64,9 @@ internal sealed class BenchAssessor(Identifier? identifier)
     {
         string text = form.Text(BenchFields.Weight);
         if (string.IsNullOrWhiteSpace(text)) return;
-        // The same range as the hydrostatic weights on the command line: a stone weighs something.
-        const string Allowed = "allowed: above 0 to 500000 ct.";
-        if (!BenchNumber.TryParse(text, out double carats, out string problem)) { errors[BenchFields.Weight] = $"{problem.TrimEnd('.')}; {Allowed}"; return; }
-        if (!(carats > 0 && carats <= 500_000)) errors[BenchFields.Weight] = $"weight is {text.Trim()} ct; {Allowed}";
+        // A mass's range (Mass.MaximumCarats), and above 0 as the hydrostatic weights on the command line: a stone weighs something.
+        string allowed = $"allowed: above 0 to {Mass.MaximumCarats.ToString(System.Globalization.CultureInfo.InvariantCulture)} ct.";
+        if (!BenchNumber.TryParse(text, out double carats, out string problem)) { errors[BenchFields.Weight] = $"{problem.TrimEnd('.')}; {allowed}"; return; }
+        if (!(carats > 0 && carats <= Mass.MaximumCarats)) errors[BenchFields.Weight] = $"weight is {text.Trim()} ct; {allowed}";
     }
 }

@@ -158,27 +158,26 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
         var outcome = save ? Save(snapshot, assessment) : null;
         toUi(() =>
         {
-            // Only the latest save's outcome is shown: a save overtaken by a newer one, or one whose result arrives after a
-            // newer one's, must not clear the newer save's conflict with its "no problem".
+            // Only the newest form's save outcome is shown: a save overtaken by a newer one, or one whose result arrives
+            // after a newer one's, must not clear the newer save's conflict with its "no problem".
             if (outcome is { } o)
                 lock (_shownGate)
-                    if (o.Sequence > _shownSequence) (_shownSequence, SaveProblem, Conflicts) = (o.Sequence, o.Problem, o.Conflicts);
+                    if (o.Version > _shownVersion) (_shownVersion, SaveProblem, Conflicts) = (o.Version, o.Problem, o.Conflicts);
             if (Results.Accept(assessment)) Assessed?.Invoke();
         });
     }
 
-    private readonly object _shownGate = new();
-    private long _saveSequence, _shownSequence;
+    private readonly Lock _shownGate = new();
+    private int _shownVersion = -1;
 
-    /// <summary>Saves the snapshot, numbering the outcome in save order; null when a newer save of the stone went first (its outcome stands).</summary>
-    private (long Sequence, string? Problem, IReadOnlyList<FieldConflict> Conflicts)? Save(BenchSnapshot snapshot, BenchAssessment assessment)
+    /// <summary>Saves the snapshot, its outcome under the form's version (which only grows); null when a newer save of the stone went first (its outcome stands).</summary>
+    private (int Version, string? Problem, IReadOnlyList<FieldConflict> Conflicts)? Save(BenchSnapshot snapshot, BenchAssessment assessment)
     {
         lock (_gate)
         {
             if (_lastSaved.TryGetValue(snapshot.StoneId, out int saved) && snapshot.Version <= saved) return null;  // overtaken by a newer save
-            long sequence = ++_saveSequence;
             var (problem, conflicts) = Write(snapshot, assessment);
-            return (sequence, problem, conflicts);
+            return (snapshot.Version, problem, conflicts);
         }
     }
 
