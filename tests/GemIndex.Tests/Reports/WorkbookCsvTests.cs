@@ -119,8 +119,9 @@ public class WorkbookCsvTests
     [Fact]
     public void A_row_holds_every_reading_the_heavy_liquids_the_instruments_the_lines_and_the_loupe()
     {
-        // Invented readings of a peridot-like stone: two heavy liquids (an SG bound, no SG number), the dichroscope, UV,
-        // the spectroscope and the loupe, each in its column as written at the bench.
+        // Invented readings of a peridot-like stone (its SG between the two liquids and its iron lines near 453, 473 and
+        // 493 nm, handbook values from memory): two heavy liquids (an SG bound, no SG number), the dichroscope, UV, the
+        // spectroscope and the loupe, each in its column as written at the bench.
         StoneSheet stone = ReportFixtures.Sheet("""{"id":"p","heavy_liquids":[{"density":2.89,"result":"sinks"},{"density":3.32,"result":"floats"}],"pleochroism":"dichroic","dispersion":"weak","thermal_probe":"negative","uv_long":"inert","uv_short":"inert","absorption_nm":[453,473,493],"magnification":{"present":["fluid_inclusions"],"absent":["round_bubbles"]}}""");
         var w = new StringWriter();
         WorkbookCsv.Write(w, [(stone, ReportFixtures.Identify(stone))]);

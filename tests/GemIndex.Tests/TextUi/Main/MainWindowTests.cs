@@ -161,7 +161,7 @@ public sealed class MainWindowTests : IDisposable
         SessionToken token = app.Begin(window)!;
         window.ShowPage(1);
         // Tab stops at the rotation's box before the edges: both edges typed there with Enter, then one edge, a space
-        // and the high edge in the high edge's box.
+        // and the high edge in the high edge's box (invented tourmaline-like edges, handbook values from memory).
         window.Refractometer.Rotation.SetFocus();
         window.Refractometer.Rotation.SelectAll();
         Type(app, "1.622 1.642");
