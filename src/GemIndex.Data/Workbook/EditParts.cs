@@ -6,7 +6,8 @@ namespace GemIndex.Data.Workbook;
 /// Which parts of a field a change touched: for a readings field held as JSON (a refractometer's steps, the loupe's marks)
 /// the paths whose values differ ("readings[2].low", "readings.length"); for plain text, nothing more than the field. Two
 /// quick changes of one field merge into one history entry only when they touch the same parts (typing an SG or a spot
-/// reading), never when one edits a step and the next removes another.
+/// reading), never when one edits a step and the next removes another, and never when a step or mark is added or removed
+/// (each is an entry of its own, so a step removed and put back leaves two entries, not one that changed nothing).
 /// </summary>
 internal static class EditParts
 {
@@ -18,6 +19,9 @@ internal static class EditParts
         Differ(b, a, "", paths);
         return string.Join(' ', paths);
     }
+
+    /// <summary>Whether the parts name a list whose length changed: a step or a mark added or removed.</summary>
+    public static bool AddOrRemove(string parts) => parts.Split(' ').Any(p => p.EndsWith(".length", StringComparison.Ordinal));
 
     private static JsonNode? Parse(string text)
     {

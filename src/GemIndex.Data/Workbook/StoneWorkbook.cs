@@ -511,7 +511,8 @@ public sealed class StoneWorkbook : IDisposable
         }
         // Only a change of the same parts continues it (typing a value); another step edited or removed is an entry of
         // its own, with its own time (a removal had carried an earlier step edit's entry to its time).
-        if (EditParts.Of(lastBefore, before) != EditParts.Of(before, after)) return false;
+        string parts = EditParts.Of(before, after);
+        if (EditParts.AddOrRemove(parts) || EditParts.Of(lastBefore, before) != parts) return false;
         using var cmd = _db.CreateCommand();
         cmd.CommandText = "UPDATE stone_edit SET after = $after, at = $at WHERE id = $row";
         cmd.Parameters.AddWithValue("$after", after);

@@ -110,6 +110,22 @@ public class StoneWorkbookTests
     }
 
     [Fact]
+    public void A_step_removed_and_put_back_in_quick_succession_leaves_two_entries()
+    {
+        // Invented peridot-like steps (handbook values from memory). The removal and its undo had merged into one entry
+        // whose before and after were the same: the history then showed nothing of either.
+        using var dir = new TempDirectory();
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing);
+        EdgeReadingEntry[] steps = [new(0, 1.654, 1.690), new(30, 1.656, 1.689), new(60, 1.664, 1.681)];
+        StoneSheet s = wb.Create(Quartz() with { Readings = Quartz().Readings with { Refractometer = new RefractometerReadings { Readings = steps } } });
+        s = wb.Save(s, s with { Readings = s.Readings with { Refractometer = new RefractometerReadings { Readings = [steps[0], steps[2]] } } }).Stored;
+        s = wb.Save(s, s with { Readings = s.Readings with { Refractometer = new RefractometerReadings { Readings = steps } } }).Stored;
+        IReadOnlyList<StoneEdit> history = wb.History(s.Id);
+        Assert.Equal(["created", "readings.refractometer", "readings.refractometer"], history.Select(e => e.Field));
+        Assert.Equal(history[1].Before, history[2].After);
+    }
+
+    [Fact]
     public void Saving_without_changes_adds_no_history()
     {
         using var dir = new TempDirectory();

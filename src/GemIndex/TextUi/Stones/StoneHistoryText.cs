@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text.Json;
+using System.Text.Json.Nodes;
 using GemIndex.Cli.TextUi.Results;
 using GemIndex.Core.Magnification;
 using GemIndex.Data.Workbook;
@@ -44,10 +45,103 @@ internal static class StoneHistoryText
         if (e.Field == ReadingsPrefix + "transparency") return [];
         // A reading is stored as JSON ("readings.colour" holds "\"blue\""): its text is read as JSON too.
         bool reading = e.Field == "readings" || e.Field.StartsWith(ReadingsPrefix, StringComparison.Ordinal);
-        if (Flatten(e.Before, reading) is { } before && Flatten(e.After, reading) is { } after)
-            return before.Keys.Union(after.Keys).Where(k => k != "id" && !(e.Field == "readings" && k == "transparency") && before.GetValueOrDefault(k) != after.GetValueOrDefault(k))
-                .Select(k => Change(PathWords(k.Length == 0 ? e.Field : e.Field + "." + k), before.GetValueOrDefault(k), after.GetValueOrDefault(k)));
+        (string beforeText, string afterText, List<string> steps) = SeriesSteps(e.Field, e.Before, e.After);
+        if (Flatten(beforeText, reading) is { } before && Flatten(afterText, reading) is { } after)
+            return steps.Concat(before.Keys.Union(after.Keys).Where(k => k != "id" && !(e.Field == "readings" && k == "transparency") && before.GetValueOrDefault(k) != after.GetValueOrDefault(k))
+                .Select(k => Change(PathWords(k.Length == 0 ? e.Field : e.Field + "." + k), before.GetValueOrDefault(k), after.GetValueOrDefault(k))));
         return [Change(Label(e.Field), AsRead(e.Field, e.Before), AsRead(e.Field, e.After))];
+    }
+
+    /// <summary>
+    /// A rotation series' steps told by matching them up, not by position: removing step 3 of six shifts the later
+    /// steps, which had read as three edited steps and a sixth cleared. Steps unchanged on both sides are matched in
+    /// order (the longest common run); what is left between two matches is edited pairwise, then removed or added. Each
+    /// step is named by its position and rotation angle ("RI step 3 (60°)"). Returns the texts without the steps, for
+    /// the rest of the comparison, and the steps' sentences.
+    /// </summary>
+    private static (string Before, string After, List<string> Steps) SeriesSteps(string field, string beforeText, string afterText)
+    {
+        string[]? path = field switch { "readings" => ["refractometer", "readings"], ReadingsPrefix + "refractometer" => ["readings"], _ => null };
+        if (path is null || StepsOf(beforeText, path) is not (var beforeRoot, var b) || StepsOf(afterText, path) is not (var afterRoot, var a))
+            return (beforeText, afterText, []);
+        var said = new List<string>();
+        string[] bKeys = [.. b.Select(x => x?.ToJsonString() ?? "")], aKeys = [.. a.Select(x => x?.ToJsonString() ?? "")];
+        // Longest common subsequence of unchanged steps.
+        int[,] run = new int[b.Count + 1, a.Count + 1];
+        for (int i = b.Count - 1; i >= 0; i--)
+            for (int j = a.Count - 1; j >= 0; j--)
+                run[i, j] = bKeys[i] == aKeys[j] ? run[i + 1, j + 1] + 1 : Math.Max(run[i + 1, j], run[i, j + 1]);
+        // The matched pairs (an equal pair always lies on a longest common run), then the end as a last match.
+        var matches = new List<(int B, int A)>();
+        for (int i = 0, j = 0; i < b.Count && j < a.Count;)
+        {
+            if (bKeys[i] == aKeys[j]) matches.Add((i++, j++));
+            else if (run[i + 1, j] >= run[i, j + 1]) i++;
+            else j++;
+        }
+        matches.Add((b.Count, a.Count));
+        int bi = 0, ai = 0;
+        foreach ((int bEnd, int aEnd) in matches)
+        {
+            // Within the gap, a step keeps its rotation angle when edited: pair by angle first, then in order.
+            List<int> bGap = [.. Enumerable.Range(bi, Math.Max(0, bEnd - bi))], aGap = [.. Enumerable.Range(ai, Math.Max(0, aEnd - ai))];
+            var pairs = new List<(int B, int A)>();
+            foreach (int j in aGap.ToList())
+                if (bGap.FindIndex(i => AngleOf(b[i]) is { } angle && angle == AngleOf(a[j])) is var at and >= 0)
+                {
+                    pairs.Add((bGap[at], j));
+                    bGap.RemoveAt(at);
+                    aGap.Remove(j);
+                }
+            int inOrder = Math.Min(bGap.Count, aGap.Count);
+            pairs.AddRange(bGap.Take(inOrder).Zip(aGap.Take(inOrder)));
+            foreach ((int i, int j) in pairs.OrderBy(p => p.A))
+            {
+                string name = StepName(j, a[j]);
+                if (Flatten(bKeys[i], false) is { } x && Flatten(aKeys[j], false) is { } y)
+                    said.AddRange(x.Keys.Union(y.Keys).Where(key => x.GetValueOrDefault(key) != y.GetValueOrDefault(key))
+                        .Select(key => Change($"{name} {PathWords(key)}", x.GetValueOrDefault(key), y.GetValueOrDefault(key))));
+            }
+            said.AddRange(bGap.Skip(inOrder).Select(i => $"{StepName(i, b[i])} removed (was {EdgesOf(b[i])})"));
+            said.AddRange(aGap.Skip(inOrder).Select(j => $"{StepName(j, a[j])} added: {EdgesOf(a[j])}"));
+            (bi, ai) = (bEnd + 1, aEnd + 1);
+        }
+        return (Without(beforeRoot, path), Without(afterRoot, path), said);
+    }
+
+    /// <summary>The step list at <paramref name="path"/> of a JSON object; null when the text has none (then nothing is matched).</summary>
+    private static (JsonNode Root, JsonArray Steps)? StepsOf(string text, string[] path)
+    {
+        if (text.Trim().Length == 0) return (new JsonObject(), []);
+        if (text[0] != '{') return null;
+        try
+        {
+            JsonNode root = JsonNode.Parse(text)!;
+            JsonNode? node = root;
+            foreach (string part in path) node = node is JsonObject o ? o[part] : null;
+            return node is JsonArray steps ? (root, steps) : (root, []);
+        }
+        catch (JsonException) { return null; }
+    }
+
+    private static string Without(JsonNode root, string[] path)
+    {
+        JsonNode? parent = root;
+        foreach (string part in path[..^1]) parent = parent is JsonObject o ? o[part] : null;
+        (parent as JsonObject)?.Remove(path[^1]);
+        return root.ToJsonString();
+    }
+
+    private static double? AngleOf(JsonNode? step) => step?["rotation_deg"] is JsonValue v && v.TryGetValue(out double degrees) ? degrees : null;
+
+    private static string StepName(int index, JsonNode? step) =>
+        AngleOf(step) is { } degrees ? $"RI step {index + 1} ({degrees.ToString("0.#", CultureInfo.InvariantCulture)}°)" : $"RI step {index + 1}";
+
+    private static string EdgesOf(JsonNode? step)
+    {
+        string? Edge(string name) => step?[name] is JsonValue v && v.TryGetValue(out double n) ? AsRead(name, n) : null;
+        string[] edges = [.. new[] { Edge("low"), Edge("high") }.OfType<string>()];
+        return edges.Length == 0 ? "no edges" : string.Join(" / ", edges);
     }
 
     /// <summary>A stored number of a field in <see cref="NumberFormats"/> to the places it is read to; anything else as it is.</summary>

@@ -45,7 +45,7 @@ public class StoneHistoryTextTests
         string[] said = [.. StoneHistoryText.Describe(new StoneEdit(At, "readings", before, after))];
         string[] expected =
         [
-            "RI step 1 high edge changed from '1.553' to '1.552'",
+            "RI step 1 (0°) high edge changed from '1.553' to '1.552'",
             "SG changed from '2.65' to '2.66'",
             "Polariscope set to 'doubly refractive'",
         ];
@@ -59,7 +59,7 @@ public class StoneHistoryTextTests
         // 1.770 is stored as the number 1.77; the history shows it as it was read.
         const string before = """{"id":"b","refractometer":{"method":"facet","readings":[{"rotation_deg":0,"low":1.762}]}}""";
         const string after = """{"id":"b","refractometer":{"method":"facet","readings":[{"rotation_deg":0,"low":1.762,"high":1.77}]}}""";
-        Assert.Equal(["RI step 1 high edge set to '1.770'"], StoneHistoryText.Describe(new StoneEdit(At, "readings", before, after)));
+        Assert.Equal(["RI step 1 (0°) high edge set to '1.770'"], StoneHistoryText.Describe(new StoneEdit(At, "readings", before, after)));
     }
 
     [Fact]
@@ -109,5 +109,25 @@ public class StoneHistoryTextTests
     {
         Assert.Equal(["RI step 2 low edge set to '1.762'"], StoneHistoryText.Describe(new StoneEdit(At, "refractometer.readings[1].low", "", "1.762")));
         Assert.Equal(["SG weight in water (ct) changed from '1.100' to '1.200'"], StoneHistoryText.Describe(new StoneEdit(At, "sg.water_ct", "1.1", "1.2")));
+    }
+
+    [Fact]
+    public void A_step_removed_from_the_middle_of_a_series_is_one_line_naming_it_and_the_later_steps_are_not_told_as_edited()
+    {
+        // Invented peridot-like series (handbook values from memory): removing the 60° step had read as three steps
+        // edited and the last one cleared, since the later steps moved up one place.
+        const string before = """{"method":"facet","readings":[{"rotation_deg":0,"low":1.654,"high":1.69},{"rotation_deg":30,"low":1.656,"high":1.689},{"rotation_deg":60,"low":1.664,"high":1.681},{"rotation_deg":90,"low":1.662,"high":1.684}]}""";
+        const string after = """{"method":"facet","readings":[{"rotation_deg":0,"low":1.654,"high":1.69},{"rotation_deg":30,"low":1.656,"high":1.689},{"rotation_deg":90,"low":1.662,"high":1.684}]}""";
+        Assert.Equal(["RI step 3 (60°) removed (was 1.664 / 1.681)"], StoneHistoryText.Describe(new StoneEdit(At, "readings.refractometer", before, after)));
+        Assert.Equal(["RI step 3 (60°) added: 1.664 / 1.681"], StoneHistoryText.Describe(new StoneEdit(At, "readings.refractometer", after, before)));
+        // A step edited beside a removal elsewhere is still told as edited, named where it now stands.
+        const string edited = """{"method":"facet","readings":[{"rotation_deg":0,"low":1.654,"high":1.69},{"rotation_deg":90,"low":1.662,"high":1.685}]}""";
+        Assert.Equal(["RI step 2 (90°) high edge changed from '1.684' to '1.685'", "RI step 2 (30°) removed (was 1.656 / 1.689)"],
+            StoneHistoryText.Describe(new StoneEdit(At, "readings.refractometer", after, edited)));
+        // Within the whole readings, and the first series typed in.
+        string whole = $$"""{"id":"p","refractometer":{{after}},"sg":3.34}""";
+        Assert.Equal(["RI step 1 (0°) added: 1.654 / 1.690", "RI step 2 (30°) added: 1.656 / 1.689", "RI step 3 (90°) added: 1.662 / 1.684", "RI method set to 'facet'"],
+            StoneHistoryText.Describe(new StoneEdit(At, "readings.refractometer", "", after)));
+        Assert.Equal(["SG changed from '3.34' to '3.35'"], StoneHistoryText.Describe(new StoneEdit(At, "readings", whole, whole.Replace("3.34", "3.35"))));
     }
 }
