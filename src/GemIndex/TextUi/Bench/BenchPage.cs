@@ -86,6 +86,9 @@ internal class BenchPage : View
     /// <summary>Raised with a sentence for the key line when a key typed on the page is not taken.</summary>
     public event Action<string>? KeyNotTaken;
 
+    /// <summary>Says on the key line why a key did nothing.</summary>
+    protected void RaiseKeyNotTaken(string said) => KeyNotTaken?.Invoke(said);
+
     public Label AddNote(string text = "")
     {
         var l = new PlainLabel { Y = NextRow(), Width = Dim.Fill(), Text = text };

@@ -52,11 +52,33 @@ internal sealed class LoupeModel
     /// <summary>Records a feature's state; false when it already had that state (nothing to save).</summary>
     public bool Set(MagnificationFeature feature, FeatureState state)
     {
+        FeatureState before = State(feature);
+        if (!Put(feature, state)) return false;
+        _marked.Push((feature, before));
+        return true;
+    }
+
+    /// <summary>
+    /// Puts back the mark changed last (Ctrl+Z; again: the one before), and returns its feature; null when nothing on
+    /// this stone has been marked since it was opened.
+    /// </summary>
+    public MagnificationFeature? Undo()
+    {
+        if (!_marked.TryPop(out var last)) return null;
+        Put(last.Feature, last.Before);
+        return last.Feature;
+    }
+
+    private bool Put(MagnificationFeature feature, FeatureState state)
+    {
         if (State(feature) == state) return false;
         if (state == FeatureState.NotLookedFor) _states.Remove(feature);
         else _states[feature] = state;
         return true;
     }
+
+    /// <summary>The marks changed since the stone was opened, each with the state it had, last on top.</summary>
+    private readonly Stack<(MagnificationFeature Feature, FeatureState Before)> _marked = new();
 
     /// <summary>The number of features in a state (not counting words outside the vocabulary).</summary>
     public int Count(FeatureState state) => Features.Count(f => State(f.Feature) == state);
@@ -68,6 +90,7 @@ internal sealed class LoupeModel
     public void Load(string presentText, string absentText)
     {
         _states.Clear();
+        _marked.Clear();
         _otherPresent.Clear();
         _otherAbsent.Clear();
         Read(absentText, FeatureState.Absent, _otherAbsent);

@@ -81,6 +81,7 @@ internal sealed class LoupePage : BenchPage
 
     private void OnListKey(object? sender, Key key)
     {
+        if (key == Key.Z.WithCtrl) { PutBack(); key.Handled = true; return; }
         if (key.IsCtrl || key.IsAlt) return;   // the window's keys (Ctrl+L, Ctrl+Q, ...)
         if (key == Key.Delete) Mark(FeatureState.NotLookedFor);
         else if (key == Key.Backspace && Model.Filter.Length > 0) Filter(Model.Filter[..^1]);
@@ -104,6 +105,16 @@ internal sealed class LoupePage : BenchPage
         _rows[row] = Model.Line(Model.Rows[row]);
         Select(row);
         Describe();
+        Marked?.Invoke(this);
+    }
+
+    /// <summary>Ctrl+Z: the mark changed last goes back to what it was, with the cursor on it (the filter cleared if it hid it).</summary>
+    private void PutBack()
+    {
+        if (Model.Undo() is not { } feature) { RaiseKeyNotTaken("Ctrl+Z: no mark changed on this stone since it was opened"); return; }
+        if (Model.RowOf(feature) < 0) Model.SetFilter("");
+        Fill();
+        Select(Model.RowOf(feature));
         Marked?.Invoke(this);
     }
 

@@ -23,7 +23,7 @@ internal static class HelpText
         ("RI: Enter", "store the step being typed; the rotation moves on by the rotation step (set once on the page; 15° until set); past a half turn, which the edges repeat, it fills the widest gap and says 'fills gap' (type 180 over it for a check reading). Both edges may be typed in one go: 1.624 1.644 or 1.624/1.644 (the space or '/' moves on to the high edge's box)"),
         ("RI: Enter on step", "edit that step; Delete removes it, Ctrl+Z puts the step removed last back"),
         ("Choices", "one key picks the answer: n none; w m s v weak, moderate, strong, very strong; i d a x singly refractive, doubly refractive, aggregate, anomalous; b t dichroic, trichroic; + - reacts, does not react; y yes; f c o faceted, cabochon, other cut. Space or Backspace clears; a digit goes on into the field right after the choice when that is an empty text field (it never replaces a value)"),
-        ("Loupe: + - ?", "on the feature under the cursor: + seen, - looked for and not seen, ? not looked for (Delete too); ↑↓ PgUp PgDn move"),
+        ("Loupe: + - ?", "on the feature under the cursor: + seen, - looked for and not seen, ? not looked for (Delete too); ↑↓ PgUp PgDn move; Ctrl+Z puts back the mark changed last (again: the one before)"),
         ("Loupe: typing", "letters find features by name or description (several words: all must match); Backspace edits, Esc clears"),
         ("Mouse", "click a field or a tab; click a choice to cycle it"),
     ];

@@ -45,6 +45,22 @@ public class LoupeModelTests
         Assert.Equal(FeatureState.NotLookedFor, model.State(MagnificationFeature.CurvedStriae));
     }
 
+    [Fact]
+    public void Undo_puts_back_each_mark_in_turn_and_a_stone_opened_forgets_them()
+    {
+        var model = new LoupeModel();
+        model.Set(MagnificationFeature.RoundGasBubbles, FeatureState.Present);
+        model.Set(MagnificationFeature.RoundGasBubbles, FeatureState.Absent);
+        model.Set(MagnificationFeature.CurvedStriae, FeatureState.Present);
+        Assert.Equal(MagnificationFeature.CurvedStriae, model.Undo());
+        Assert.Equal(FeatureState.NotLookedFor, model.State(MagnificationFeature.CurvedStriae));
+        Assert.Equal(MagnificationFeature.RoundGasBubbles, model.Undo());
+        Assert.Equal(FeatureState.Present, model.State(MagnificationFeature.RoundGasBubbles));
+        model.Load("needles_silk", "");
+        Assert.Null(model.Undo());
+        Assert.Equal("needles_silk", model.PresentText);
+    }
+
     [Theory]
     [InlineData("curved_striae round_bubbles", "needles_silk crystals")]
     [InlineData("", "join_plane")]

@@ -1134,6 +1134,31 @@ public sealed class MainWindowTests : IDisposable
     }
 
     [Fact]
+    public void Ctrl_Z_on_the_loupe_page_puts_back_the_marks_in_turn_and_finds_one_the_filter_hid()
+    {
+        var (app, window, token) = Open();
+        app.InjectKey(Key.L.WithCtrl);
+        app.InjectKey(new Key('+'));                                 // curved striae seen
+        app.InjectKey(Key.CursorDown);
+        app.InjectKey(new Key('-'));                                 // angular zoning not seen
+        foreach (char c in "bubb") app.InjectKey(new Key(c));        // the filter now hides both
+        app.InjectKey(Key.Z.WithCtrl);
+        Settle();
+        Assert.Equal(FeatureState.NotLookedFor, window.Loupe.Model.State(MagnificationFeature.AngularGrowthZoning));
+        Assert.Equal(FeatureState.Present, window.Loupe.Model.State(MagnificationFeature.CurvedStriae));
+        Assert.Equal(MagnificationFeature.AngularGrowthZoning, window.Loupe.Current?.Feature?.Feature);   // shown, the filter cleared
+        Assert.Equal("", window.Loupe.Model.Filter);
+        Assert.Equal("curved_striae", _session.Form.Text(BenchFields.FeaturesPresent));
+        Assert.Equal("", _session.Form.Text(BenchFields.FeaturesAbsent));
+        app.InjectKey(Key.Z.WithCtrl);
+        Settle();
+        Assert.Equal("", _session.Form.Text(BenchFields.FeaturesPresent));
+        app.InjectKey(Key.Z.WithCtrl);                               // nothing more to put back: said, nothing changed
+        Assert.Contains("no mark changed", window.KeyLine);
+        Close(app, window, token);
+    }
+
+    [Fact]
     public void The_marks_stored_show_again_when_the_stone_is_reopened_or_the_program_restarted()
     {
         var (app, window, token) = Open();
