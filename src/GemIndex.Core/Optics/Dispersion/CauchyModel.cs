@@ -63,10 +63,10 @@ public sealed record CauchyModel : IDispersionModel
     /// Least-squares fit of the two- or three-term form, linear in A, B, C (MathNet <c>Fit.LinearCombination</c>
     /// with basis 1, 1/λ², 1/λ⁴, solved by QR).
     /// </summary>
-    /// <param name="points">Indices at distinct wavelengths; more points than terms.</param>
+    /// <param name="points">Indices at distinct wavelengths; at least as many points as terms (as many: the curve passes through each).</param>
     /// <param name="terms">2 (A, B) or 3 (A, B, C).</param>
     /// <exception cref="QuantityOutOfRangeException">
-    /// Terms not 2 or 3; no more points than terms; a default point; or fitted coefficients outside the model's ranges.
+    /// Terms not 2 or 3; fewer points than terms; a default point; or fitted coefficients outside the model's ranges.
     /// </exception>
     /// <exception cref="ArgumentException">A wavelength appears twice.</exception>
     public static DispersionFit<CauchyModel> Fit(IReadOnlyList<DispersionPoint> points, int terms = 2)

@@ -20,15 +20,17 @@ internal static class DispersionChecks
     }
 
     /// <summary>
-    /// Refuses a fit with no more points than parameters, or with a wavelength given twice, and returns the points'
+    /// Refuses a fit with fewer points than parameters, or with a wavelength given twice, and returns the points'
     /// wavelengths (µm) and indices.
     /// </summary>
     public static (double[] Micrometres, double[] Indices) FitPoints(IReadOnlyList<DispersionPoint> points, int parameters, string model)
     {
         ArgumentNullException.ThrowIfNull(points);
-        if (points.Count <= parameters)
+        // As many points as parameters is allowed: the curve then passes through each (two indices at B and G give
+        // the trade's nG − nB exactly), with no residual left to judge the readings by.
+        if (points.Count < parameters)
             throw new QuantityOutOfRangeException($"number of points for a {parameters}-parameter {model} fit", points.Count,
-                $"more than {parameters} (the number of parameters)");
+                $"{parameters} or more (the number of parameters)");
         foreach (DispersionPoint p in points)
         {
             Wavelength(p.Wavelength);

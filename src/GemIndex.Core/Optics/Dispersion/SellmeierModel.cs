@@ -45,7 +45,7 @@ public sealed class SellmeierModel : IDispersionModel
     /// The default start is B 1, C 0.01 µm² for the first term, B 0.5, C 0.02 µm² for the second and B 1, C 100 µm²
     /// (an infrared resonance) for the third.
     /// </summary>
-    /// <param name="points">Indices at distinct wavelengths; more points than 2 × terms parameters.</param>
+    /// <param name="points">Indices at distinct wavelengths; at least as many as the 2 × terms parameters (as many: the curve passes through each).</param>
     /// <param name="terms">1 to 3.</param>
     /// <param name="start">Optional starting coefficients with exactly <paramref name="terms"/> terms.</param>
     /// <exception cref="QuantityOutOfRangeException">

@@ -18,7 +18,11 @@ internal static class CalcDispersionCommand
     internal sealed record PointJson(double WavelengthNanometres, double Index, double Residual);
 
     internal sealed record DispersionResult(string Model, CoefficientJson[] Coefficients, PointJson[] Points,
-        double RootMeanSquareResidual, double IndexAtSodiumD, double AbbeNumber, double GMinusB);
+        double RootMeanSquareResidual, double IndexAtSodiumD, double AbbeNumber, double GMinusB)
+    {
+        /// <summary>As many points as coefficients: the curve passes through each, and no residual checks the readings.</summary>
+        public bool ThroughEveryPoint => Points.Length == Coefficients.Length;
+    }
 
     internal sealed record ConversionResult(double Reading, double ReadAtNanometres, double IndexAtSodiumD, double GMinusB,
         double ConvertedIndex, double ConvertedToNanometres);
@@ -104,7 +108,9 @@ internal static class CalcDispersionCommand
             output.WriteLine($"  {c.Name} = {Fixed(c.Value, "0.000000")} {c.Unit}");
         foreach (PointJson p in r.Points)
             output.WriteLine($"  {Nanometres(p.WavelengthNanometres)}: index {Index(p.Index)} {NoUnit}, residual {Fixed(p.Residual, "+0.000000;-0.000000;0.000000")} {NoUnit}");
-        output.WriteLine($"rms residual {Fixed(r.RootMeanSquareResidual, "0.000000")} {NoUnit}");
+        output.WriteLine(r.ThroughEveryPoint
+            ? $"as many points as coefficients: the curve passes through each point, so no residual checks the readings"
+            : $"rms residual {Fixed(r.RootMeanSquareResidual, "0.000000")} {NoUnit}");
         output.WriteLine($"nD (589.3 nm) {Index(r.IndexAtSodiumD)} {NoUnit}; Abbe number {Fixed(r.AbbeNumber, "0.0")} {NoUnit}; " +
             $"nG − nB (430.8 − 686.7 nm) {Index(r.GMinusB)} {NoUnit}");
     }

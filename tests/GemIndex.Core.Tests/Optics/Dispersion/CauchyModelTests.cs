@@ -51,10 +51,15 @@ public class CauchyModelTests
     }
 
     [Fact]
-    public void A_two_term_fit_with_two_points_is_refused()
+    public void A_two_term_fit_through_indices_at_B_and_G_gives_their_difference_and_one_point_is_refused()
     {
-        DispersionPoint[] points = SellmeierModelTests.Points(DispersionModels.FusedSilica, 0.486, 0.656);
-        OutOfRangeAssert.Throws(() => CauchyModel.Fit(points, 2), "number of points for a 2-parameter Cauchy fit", "more than 2");
+        // Indices read at the B and G Fraunhofer lines (686.7 and 430.8 nm): the trade's dispersion is their difference
+        // (nG − nB, DOMAIN.md §4), so the curve through the two must give it back to rounding. Corundum-like values from memory.
+        DispersionPoint[] points = [new(Wavelength.FromNanometres(686.7), 1.757), new(Wavelength.FromNanometres(430.8), 1.775)];
+        DispersionFit<CauchyModel> fit = CauchyModel.Fit(points, 2);
+        Assert.Equal(0.018, TradeDispersion.Of(fit.Model), 1e-9);
+        Assert.All(fit.Residuals, r => Assert.Equal(0, r, 1e-12));
+        OutOfRangeAssert.Throws(() => CauchyModel.Fit(points[..1], 2), "number of points for a 2-parameter Cauchy fit", "2 or more");
     }
 
     [Fact]

@@ -63,8 +63,22 @@ public class CalcDispersionCommandTests
     [Fact]
     public void Too_few_points_for_the_model_is_one_line_naming_the_options()
     {
-        string line = OneErrorLine("dispersion", "--point", "500:1.5", "--point", "600:1.49");
-        Assert.StartsWith("gemindex calc: --point, --terms: number of points for a 2-parameter Cauchy fit is 2", line, StringComparison.Ordinal);
+        string line = OneErrorLine("dispersion", "--point", "500:1.5", "--point", "600:1.49", "--terms", "3");
+        Assert.StartsWith("gemindex calc: --point, --terms: number of points for a 3-parameter Cauchy fit is 2", line, StringComparison.Ordinal);
+        Assert.Contains("allowed: 3 or more", line, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Indices_at_B_and_G_alone_give_the_dispersion_and_say_no_residual_checks_them()
+    {
+        // Two readings through B and G filters (corundum-like, from memory): nG − nB is their difference.
+        var (exit, output, _) = Text("dispersion", "--point", "686.7:1.757", "--point", "430.8:1.775");
+        Assert.Equal(0, exit);
+        Assert.Contains("nG − nB (430.8 − 686.7 nm) 0.018", output, StringComparison.Ordinal);
+        Assert.Contains("the curve passes through each point, so no residual checks the readings", output, StringComparison.Ordinal);
+        Assert.DoesNotContain("rms residual", output, StringComparison.Ordinal);
+        var result = Json("dispersion", "--point", "686.7:1.757", "--point", "430.8:1.775");
+        Assert.Equal(0.018, result.Number("g_minus_b"), 1e-9);
     }
 
     [Fact]
