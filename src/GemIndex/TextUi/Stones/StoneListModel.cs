@@ -54,10 +54,66 @@ internal sealed class StoneListModel
     private IReadOnlyList<StoneSummary> Filtered()
     {
         string q = Query.Trim();
-        if (q.Length == 0) return _all;
-        return [.. _all.Where(s => _textMatches.Contains(s.Id)
-            || (_answers.TryGetValue((s.Id, s.Modified), out string? a) && a is not null && a.Contains(q, StringComparison.OrdinalIgnoreCase)))];
+        IEnumerable<StoneSummary> found = q.Length == 0 ? _all : _all.Where(s => _textMatches.Contains(s.Id)
+            || (AnswerOf(s) is { } a && a.Contains(q, StringComparison.OrdinalIgnoreCase)));
+        return Order switch
+        {
+            StoneOrder.Reference => [.. found.OrderBy(s => s.Reference, ReferenceOrder)],
+            // Stones whose answer is still being worked out go last, and move up as their answers come.
+            StoneOrder.Answer => [.. found.OrderBy(s => AnswerOf(s) is { Length: > 0 } ? 0 : 1).ThenBy(s => AnswerOf(s), ReferenceOrder)],
+            StoneOrder.Weight => [.. found.OrderBy(s => s.WeightCarats is null ? 1 : 0).ThenByDescending(s => s.WeightCarats)],
+            _ => [.. found],   // the workbook's order: changed last first
+        };
     }
+
+    private string? AnswerOf(StoneSummary s) => _answers.GetValueOrDefault((s.Id, s.Modified));
+
+    /// <summary>
+    /// References as a lot numbers them: "lot 2" before "lot 10", case aside. Written out, since the culture's numeric
+    /// ordering depends on the machine's language data (without it, "lot 10" came before "lot 2").
+    /// </summary>
+    private static readonly Comparer<string?> ReferenceOrder = Comparer<string?>.Create((x, y) =>
+    {
+        (string a, string b) = (x ?? "", y ?? "");
+        int i = 0, j = 0;
+        while (i < a.Length && j < b.Length)
+        {
+            if (char.IsAsciiDigit(a[i]) && char.IsAsciiDigit(b[j]))
+            {
+                int iEnd = i, jEnd = j;
+                while (iEnd < a.Length && char.IsAsciiDigit(a[iEnd])) iEnd++;
+                while (jEnd < b.Length && char.IsAsciiDigit(b[jEnd])) jEnd++;
+                ReadOnlySpan<char> m = a.AsSpan(i, iEnd - i).TrimStart('0'), n = b.AsSpan(j, jEnd - j).TrimStart('0');
+                int byNumber = m.Length != n.Length ? m.Length.CompareTo(n.Length) : m.SequenceCompareTo(n);
+                if (byNumber != 0) return byNumber;
+                (i, j) = (iEnd, jEnd);
+                continue;
+            }
+            int byLetter = char.ToLowerInvariant(a[i]).CompareTo(char.ToLowerInvariant(b[j]));
+            if (byLetter != 0) return byLetter;
+            (i, j) = (i + 1, j + 1);
+        }
+        return (a.Length - i).CompareTo(b.Length - j);
+    });
+
+    /// <summary>The order the list is shown in (F4 on the list moves to the next).</summary>
+    public StoneOrder Order { get; private set; }
+
+    /// <summary>Shows the list in the next order: changed, reference, answer, weight, then changed again.</summary>
+    public void NextOrder()
+    {
+        Order = (StoneOrder)(((int)Order + 1) % Enum.GetValues<StoneOrder>().Length);
+        Shown = Filtered();
+    }
+
+    /// <summary>The order in words, for the line over the list.</summary>
+    public string OrderWords => Order switch
+    {
+        StoneOrder.Reference => "reference",
+        StoneOrder.Answer => "answer",
+        StoneOrder.Weight => "weight, heaviest first",
+        _ => "changed, latest first",
+    };
 
     /// <summary>True while a search may still find stones by answers not yet tried (one that could not be worked out counts as tried).</summary>
     public bool AnswersPending => Query.Trim().Length > 0 && _all.Any(s => !_answers.ContainsKey((s.Id, s.Modified)));
@@ -127,4 +183,13 @@ internal sealed class StoneListModel
         $"{Results.ResultText.Clip(s.Reference.Length == 0 ? "(no reference)" : s.Reference, referenceWidth).PadRight(referenceWidth)} {Results.ResultText.Clip(s.Colour, colourWidth).PadRight(colourWidth)} "
         + $"{(s.WeightCarats is { } w ? w.ToString("0.00", CultureInfo.InvariantCulture) + " ct" : ""),9} {Results.ResultText.Clip(answer, answerWidth).PadRight(answerWidth)} "
         + s.Modified.ToUniversalTime().ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
+}
+
+/// <summary>The orders of the stone list.</summary>
+internal enum StoneOrder
+{
+    Changed,
+    Reference,
+    Answer,
+    Weight,
 }

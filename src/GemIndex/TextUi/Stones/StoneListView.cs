@@ -8,7 +8,7 @@ using Terminal.Gui.Views;
 
 namespace GemIndex.Cli.TextUi.Stones;
 
-/// <summary>The workbook's stones: search, Enter opens, Ctrl+N new, Ctrl+D duplicate, Delete deletes (after asking).</summary>
+/// <summary>The workbook's stones: search, Enter opens, Ctrl+N new, Ctrl+D duplicate, F4 sorts, Delete deletes (after asking).</summary>
 internal sealed class StoneListView : FullScreenDialog
 {
     private readonly StoneListModel _model;
@@ -22,9 +22,10 @@ internal sealed class StoneListView : FullScreenDialog
     {
         _model = model;
         _toUi = toUi;
-        Title = "Stones: Enter open ^N new ^D duplicate F3 history Del delete";
+        Title = "Stones: Enter open ^N new ^D duplicate F3 history F4 sort Del delete";
         var label = new PlainLabel { Text = "Search:" };
         Search = new TextField { X = 8, Width = 24 };
+        var order = new PlainLabel { X = Pos.Right(Search) + 2, Width = Dim.Fill(), Text = OrderLine };
         var heading = new PlainLabel { Y = 1, Width = Dim.Fill(), Text = _model.Heading };
         List = new ListView { Y = 2, Width = Dim.Fill(), Height = Dim.Fill() };
         List.SetSource(_rows);
@@ -36,6 +37,7 @@ internal sealed class StoneListView : FullScreenDialog
             else if (key == Key.N.WithCtrl) { WantsNew = true; App!.RequestStop(); }
             else if (key == Key.D.WithCtrl && id is { } d) Reload(select: duplicate(d));   // the copy, to open or rename next
             else if (key == Key.F3 && id is { } h) Main.TextScreen.Show(App!, "Edit history", string.Join('\n', history(h)));
+            else if (key == Key.F4) { _model.NextOrder(); order.Text = OrderLine; ShowMatches(id); }   // the same stone stays selected
             // The last button is the default: Enter keeps the stone; deleting takes Tab or D. The list stays in view after.
             else if (key == Key.Delete && sender == List && id is { } x && MessageBox.Query(App!, "Delete stone",
                          $"Delete '{_model.Shown[List.SelectedItem!.Value].Reference}' and its history?", DeleteButton, "Cancel") == 0) { delete(x); Reload(); }
@@ -44,7 +46,7 @@ internal sealed class StoneListView : FullScreenDialog
         };
         List.KeyDown += keys;      // on the focused views: Enter would otherwise close the dialog first
         Search.KeyDown += keys;
-        Add(label, Search, heading, List);
+        Add(label, Search, order, heading, List);
         // The answer column widens with the screen (a long species name and its share were cut at 18 characters).
         ViewportChanged += (_, _) =>
         {
@@ -58,6 +60,8 @@ internal sealed class StoneListView : FullScreenDialog
     }
 
     public const string DeleteButton = "_Delete";
+
+    private string OrderLine => $"sorted by {_model.OrderWords} (F4)";
 
     public TextField Search { get; }
 
@@ -96,9 +100,9 @@ internal sealed class StoneListView : FullScreenDialog
     }
 
     /// <summary>The rows again, the same stone kept selected, when an answer worked out changes what a search shows.</summary>
-    private void ShowMatches()
+    private void ShowMatches(long? keep = null)
     {
-        long? selected = Selected;
+        long? selected = keep ?? Selected;
         Rows();
         int at = selected is { } id ? _model.Shown.ToList().FindIndex(s => s.Id == id) : -1;
         List.SelectedItem = Math.Max(0, at);

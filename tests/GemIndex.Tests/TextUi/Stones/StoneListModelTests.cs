@@ -123,4 +123,35 @@ public class StoneListModelTests
         Assert.Empty(model.Missing());
         Assert.DoesNotContain(StoneListModel.Pending, model.LineOf(stone), StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void F4_orders_the_list_by_reference_with_lot_numbers_in_order_then_answer_then_weight_then_back_to_changed()
+    {
+        // Invented stones; the workbook lists them changed last first.
+        StoneSummary[] all =
+        [
+            new(3, "lot 10", "blue", 1.2, Noon.AddMinutes(3)),
+            new(2, "Lot 9", "red", null, Noon.AddMinutes(2)),
+            new(1, "lot 2", "green", 3.05, Noon.AddMinutes(1)),
+        ];
+        var model = new StoneListModel(_ => all, id => id switch { 1 => "beryl 95%", 2 => "corundum 90%", _ => "spinel 88%" });
+        Assert.Equal([3L, 2L, 1L], model.Shown.Select(s => s.Id));
+        model.NextOrder();
+        Assert.Equal((StoneOrder.Reference, "reference"), (model.Order, model.OrderWords));
+        Assert.Equal(["lot 2", "Lot 9", "lot 10"], model.Shown.Select(s => s.Reference));
+        model.NextOrder();
+        Assert.Equal(StoneOrder.Answer, model.Order);
+        Assert.Equal([3L, 2L, 1L], model.Shown.Select(s => s.Id));            // no answers yet: as they were
+        Assert.True(model.Store(all[2], model.Compute(1)));                    // an answer come moves its stone up
+        Assert.Equal(1L, model.Shown[0].Id);
+        model.Store(all[0], model.Compute(3));
+        Assert.True(model.Store(all[1], model.Compute(2)));
+        Assert.Equal(["beryl 95%", "corundum 90%", "spinel 88%"], model.Shown.Select(s => model.Compute(s.Id)));
+        model.NextOrder();
+        Assert.Equal([1L, 3L, 2L], model.Shown.Select(s => s.Id));            // heaviest first, no weight last
+        model.Search("lot 1");
+        Assert.Equal(StoneOrder.Weight, model.Order);                          // a search keeps the order
+        model.NextOrder();
+        Assert.Equal((StoneOrder.Changed, "changed, latest first"), (model.Order, model.OrderWords));
+    }
 }

@@ -42,4 +42,23 @@ public sealed class StoneListViewTests : IDisposable
         Assert.Equal(selected, view.Chosen);
         app.End(token);
     }
+
+    [Fact]
+    public void F4_sorts_the_list_keeps_the_stone_selected_and_says_the_order()
+    {
+        foreach (string reference in new[] { "lot 2", "lot 10", "lot 1" }) _workbook.Create(new StoneSheet { Reference = reference });
+        using IApplication app = Headless.Start();
+        var model = new StoneListModel(q => _workbook.List(q));
+        using var view = new StoneListView(model, id => _workbook.Duplicate(id).Id, id => _workbook.Delete(id), _ => [], a => a());
+        SessionToken token = app.Begin(view)!;
+        view.List.SetFocus();
+        view.List.SelectedItem = 1;                                   // "lot 10" (the list opens changed last first)
+        long chosen = model.Shown[1].Id;
+        app.InjectKey(Key.F4);
+        app.LayoutAndDraw();
+        Assert.Equal(["lot 1", "lot 2", "lot 10"], model.Shown.Select(s => s.Reference));
+        Assert.Equal(chosen, model.Shown[view.List.SelectedItem!.Value].Id);
+        Assert.Contains("sorted by reference (F4)", app.Driver!.ToString()!, StringComparison.Ordinal);
+        app.End(token);
+    }
 }
