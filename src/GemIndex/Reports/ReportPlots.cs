@@ -24,11 +24,19 @@ internal static class ReportPlots
         var svg = Open("Shadow edges against rotation");
         Axes(svg);
         foreach (double d in new[] { 0.0, 45, 90, 135, 180 })
-            svg.Append(Text(X(d == 180 ? 179.999 : d) + (d == 180 ? (Width - Left - Right) / 180.0 : 0), Height - Bottom + 16, F(d, "0") + "°", "middle"));
-        for (int i = 0; i <= 4; i++)
         {
-            double index = yMin + (yMax - yMin) * i / 4;
-            svg.Append(Text(Left - 6, Y(index) + 4, F(index, "0.000"), "end"));
+            double x = d == 180 ? Width - Right : X(d);
+            svg.Append(TickLine(x, Height - Bottom, x, Height - Bottom + 4));
+            svg.Append(Text(x, Height - Bottom + 16, F(d, "0") + "°", "middle"));
+        }
+        // Index labels on round values only, each with its tick and a faint grid line (a label at the axis' padded
+        // ends had read as a reading: 1.5386 printed as 1.539 at 1.5386's height).
+        (IReadOnlyList<double> ticks, double step) = PlotSteps.Ticks(yMin, yMax, 6);
+        foreach (double index in ticks)
+        {
+            svg.Append(GridLine(Left, Y(index), Width - Right, Y(index)));
+            svg.Append(TickLine(Left - 4, Y(index), Left, Y(index)));
+            svg.Append(Text(Left - 6, Y(index) + 4, F(index, PlotSteps.Format(step)), "end"));
         }
         foreach (var s in steps)
         {
@@ -55,6 +63,9 @@ internal static class ReportPlots
         int height = Top + row * ranges.Count + Bottom + (anyUsual ? legendRow : 0);
         double X(double v) => nameWidth + (Width - nameWidth - Right) * (v - lo) / (hi - lo);
         var svg = new StringBuilder($"<svg width=\"{Width}\" height=\"{height}\" viewBox=\"0 0 {Width} {height}\" role=\"img\" aria-label=\"{HtmlReport.E(title)}\">");
+        // A scale of round values under the bars, each with its tick and a faint grid line behind the rows.
+        (IReadOnlyList<double> ticks, double step) = PlotSteps.Ticks(lo, hi, 6);
+        foreach (double v in ticks) svg.Append(GridLine(X(v), Top, X(v), Top + row * ranges.Count));
         for (int i = 0; i < ranges.Count; i++)
         {
             var r = ranges[i];
@@ -69,7 +80,11 @@ internal static class ReportPlots
         svg.Append($"<rect x=\"{F(X(reading - uncertainty))}\" y=\"{F(Top)}\" width=\"{F(Math.Max(1, X(reading + uncertainty) - X(reading - uncertainty)))}\" height=\"{F(bottom - Top)}\" fill=\"none\" stroke=\"#111\" stroke-dasharray=\"3 2\"/>");
         svg.Append($"<line x1=\"{F(X(reading))}\" y1=\"{F(Top)}\" x2=\"{F(X(reading))}\" y2=\"{F(bottom)}\" stroke=\"#111\" stroke-width=\"2\"/>");
         svg.Append(Text(X(reading), bottom + 14, $"{title}: {F(reading, "0.000")} ± {F(uncertainty, "0.000")}", "middle"));
-        svg.Append(Text(nameWidth, bottom + 28, F(lo, "0.000"), "start")).Append(Text(Width - Right, bottom + 28, F(hi, "0.000"), "end"));
+        foreach (double v in ticks)
+        {
+            svg.Append(TickLine(X(v), bottom, X(v), bottom + 4));
+            svg.Append(Text(X(v), bottom + 28, F(v, PlotSteps.Format(step)), "middle"));
+        }
         if (anyUsual) svg.Append(Text(nameWidth, bottom + 28 + legendRow, RareExtremesLegend, "start"));
         return svg.Append("</svg>").ToString();
     }
@@ -82,6 +97,12 @@ internal static class ReportPlots
 
     private static void Axes(StringBuilder svg) =>
         svg.Append($"<rect x=\"{Left}\" y=\"{Top}\" width=\"{Width - Left - Right}\" height=\"{Height - Top - Bottom}\" fill=\"none\" stroke=\"#444\"/>");
+
+    private static string TickLine(double x1, double y1, double x2, double y2) =>
+        $"<line x1=\"{F(x1)}\" y1=\"{F(y1)}\" x2=\"{F(x2)}\" y2=\"{F(y2)}\" stroke=\"#444\"/>";
+
+    private static string GridLine(double x1, double y1, double x2, double y2) =>
+        $"<line x1=\"{F(x1)}\" y1=\"{F(y1)}\" x2=\"{F(x2)}\" y2=\"{F(y2)}\" stroke=\"#ddd\" stroke-width=\"0.5\"/>";
 
     private static string Circle(double x, double y, bool filled) =>
         $"<circle cx=\"{F(x)}\" cy=\"{F(y)}\" r=\"3.5\" fill=\"{(filled ? "#111" : "#fff")}\" stroke=\"#111\"/>";

@@ -61,4 +61,41 @@ public class ReportPlotsTests
         Assert.DoesNotContain("<b>", text);
         XElement.Parse(text);   // well-formed
     }
+
+    [Fact]
+    public void Axis_labels_are_round_values_each_drawn_at_its_own_height_or_place()
+    {
+        // A quartz-like series (handbook values from memory): labels at 1.542, 1.546, … had been the padded axis' quarters.
+        XNamespace svg = "";
+        static double Attr(XElement e, string name) => double.Parse(e.Attribute(name)!.Value, System.Globalization.CultureInfo.InvariantCulture);
+        var plot = XElement.Parse(ReportPlots.EdgePlot([new(0, 1.544, 1.553), new(90, 1.544, 1.548)]));
+        var labels = plot.Descendants(svg + "text").Where(t => (string?)t.Attribute("text-anchor") == "end").ToList();
+        double[] values = [.. labels.Select(t => double.Parse(t.Value, System.Globalization.CultureInfo.InvariantCulture))];
+        Assert.InRange(values.Length, 3, 6);
+        double spacing = values[1] - values[0];
+        Assert.Contains(Math.Round(spacing, 9), new[] { 0.001, 0.002, 0.005 });
+        Assert.All(values, v => Assert.True(Math.Abs(v / spacing - Math.Round(v / spacing)) < 1e-6, $"{v} is a multiple of {spacing}"));
+        Assert.All(labels.Select(t => t.Value), v => Assert.Equal(5, v.Length));     // 1.544: the refractometer's places
+        // Equal steps in value are equal steps down the plot (the label's centre is 4 px below its value's height).
+        double[] heights = [.. labels.Select(t => Attr(t, "y"))];
+        double perStep = heights[0] - heights[1];
+        Assert.True(perStep > 0, "a higher index is drawn higher");
+        Assert.All(heights.Zip(heights.Skip(1)), h => Assert.Equal(perStep, h.First - h.Second, 6));
+        // The scale: labels at round SG values, each at its place along the bars.
+        var scale = XElement.Parse(ReportPlots.Scale("SG", 2.65, 0.01, [("quartz", 2.60, 2.70), ("beryl", 2.63, 2.92)]));
+        var under = scale.Descendants(svg + "text").Where(t => (string?)t.Attribute("text-anchor") == "middle" && !t.Value.StartsWith("SG", StringComparison.Ordinal)).ToList();
+        Assert.Equal(["2.6", "2.7", "2.8", "2.9"], under.Select(t => t.Value));   // 2.59 to 2.94 with the padding
+    }
+
+    [Theory]
+    [InlineData(0.0013, 0.002)]
+    [InlineData(0.002, 0.002)]
+    [InlineData(0.0021, 0.005)]
+    [InlineData(0.07, 0.1)]
+    [InlineData(3.0, 5.0)]
+    public void A_spacing_is_the_next_one_two_or_five_times_a_power_of_ten(double needed, double expected)
+    {
+        Assert.Equal(expected, PlotSteps.OneTwoFive(needed), 12);
+        Assert.Equal(expected switch { 0.002 or 0.005 => "0.000", 0.1 => "0.0", _ => "0" }, PlotSteps.Format(expected));
+    }
 }

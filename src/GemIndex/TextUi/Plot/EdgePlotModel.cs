@@ -66,9 +66,7 @@ internal sealed class EdgePlotModel(IReadOnlyList<EdgeReadingEntry> steps, doubl
     public double IndexStep(int rows)
     {
         double needed = (Top - Margin - Bottom) / Math.Max(1, rows - 2);
-        for (double decade = 0.0001; ; decade *= 10)
-            foreach (double m in new[] { 1, 2, 5 })
-                if (m * decade >= needed && m * decade >= 0.0005) return Math.Round(m * decade, 6);
+        return Math.Round(Reports.PlotSteps.OneTwoFive(Math.Max(needed, 0.0005)), 6);
     }
 
     /// <summary>
