@@ -32,6 +32,10 @@ public sealed record RefractometerObservation
         QuantityOutOfRangeException.ThrowIfOutside("light", lightNanometres, 380, 780, "nm");
         QuantityOutOfRangeException.ThrowIfOutside("liquid limit", liquidLimit, 1.5, 2.2);
         double precision = readingPrecision ?? (method == RefractometerMethod.Spot ? DefaultSpotPrecision : DefaultFacetPrecision);
+        // Checked here with the series analysis' own range, so a refused precision is named at its field (a precision
+        // of 1e-9 had passed to the analysis and ended the command with a stack trace).
+        QuantityOutOfRangeException.ThrowIfOutside("reading precision", precision, Readings.RotationSeriesAnalysis.SmallestReadingPrecision,
+            RefractometerProfile.LargestReadingPrecision);
         // The glass index does not enter an identification; the usual high-lead glass, or one just above a denser liquid.
         double glass = Math.Max(RefractometerProfile.Default.GlassIndex.Value, liquidLimit + 0.02);
         Profile = new RefractometerProfile(new RefractiveIndex(glass), new RefractiveIndex(liquidLimit),

@@ -2,6 +2,7 @@ using System.Globalization;
 using GemIndex.Core.Optics;
 using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Quantities;
+using GemIndex.Core.Optics.Refractometer;
 
 namespace GemIndex.Core.Readings;
 
@@ -92,11 +93,17 @@ public static class RotationSeriesAnalysis
         return (lows, highs, MovingEdge.Of(lows, sigma, gap), MovingEdge.Of(highs, sigma, gap));
     }
 
+    /// <summary>
+    /// The finest reading precision a series is analysed with, 0.0001: a tenth of the scale's last printed place; a σ
+    /// below it would make every rounding a contradiction.
+    /// </summary>
+    public const double SmallestReadingPrecision = 0.0001;
+
     /// <summary>The steps with the calibration applied, the reading's σ, the constant-edge band and the largest gap.</summary>
     private static (List<ShadowEdgeStep> Steps, double Sigma, double Band, double Gap) Prepared(IReadOnlyList<ShadowEdgeStep> steps, double readingPrecision, double calibrationOffset)
     {
         QuantityOutOfRangeException.ThrowIfOutside("number of rotation steps", steps.Count, 1, 1000);
-        QuantityOutOfRangeException.ThrowIfOutside("reading precision", readingPrecision, 0.0001, 0.05);
+        QuantityOutOfRangeException.ThrowIfOutside("reading precision", readingPrecision, SmallestReadingPrecision, RefractometerProfile.LargestReadingPrecision);
         QuantityOutOfRangeException.ThrowIfOutside("calibration offset", calibrationOffset, -0.05, 0.05);
         var s = steps.Select(x => new ShadowEdgeStep(x.RotationDegrees, x.Low + calibrationOffset, x.High + calibrationOffset)).ToList();
         return (s, readingPrecision, ConstantBandSigmas * readingPrecision, LargestGap(s.Select(x => x.RotationDegrees)));

@@ -513,6 +513,22 @@ public class IdentifyCommandTests
         Assert.Contains("allowed: 1–50", error, StringComparison.Ordinal);
     }
 
+    [Theory]
+    [InlineData("1e-9")]
+    [InlineData("0.00005")]
+    [InlineData("0.06")]
+    public void A_reading_precision_outside_its_range_is_one_error_line_naming_the_option_and_the_range(string precision)
+    {
+        // A precision of 1e-9 beside facet steps had passed the option's check and ended the command with a stack trace.
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--edge", "0:1.544/1.553", "--precision", precision);
+        Assert.Equal(3, exit);
+        Assert.Equal("", output);
+        Assert.StartsWith("gemindex: --precision: reading precision is", error, StringComparison.Ordinal);
+        Assert.Contains("allowed: 0.0001 to 0.05", error, StringComparison.Ordinal);
+        Assert.DoesNotContain(" at ", error, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void Fifty_candidates_are_allowed()
     {
