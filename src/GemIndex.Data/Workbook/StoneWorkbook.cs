@@ -514,7 +514,9 @@ public sealed class StoneWorkbook : IDisposable
         string parts = EditParts.Of(before, after);
         if (EditParts.AddOrRemove(parts) || EditParts.Of(lastBefore, before) != parts) return false;
         using var cmd = _db.CreateCommand();
-        cmd.CommandText = "UPDATE stone_edit SET after = $after, at = $at WHERE id = $row";
+        // Typing that comes back to where the entry began (3.85 typed over with 3.95, then Ctrl+Z) changed nothing: the
+        // entry goes, rather than read "SG changed from '3.85' to '3.85'".
+        cmd.CommandText = after == lastBefore ? "DELETE FROM stone_edit WHERE id = $row" : "UPDATE stone_edit SET after = $after, at = $at WHERE id = $row";
         cmd.Parameters.AddWithValue("$after", after);
         cmd.Parameters.AddWithValue("$at", Stamp(now));
         cmd.Parameters.AddWithValue("$row", row);

@@ -110,6 +110,21 @@ public class StoneWorkbookTests
     }
 
     [Fact]
+    public void A_value_typed_over_and_put_back_within_the_window_leaves_no_entry()
+    {
+        // An SG of 3.85 typed over with 3.95 and put back (Ctrl+Z) had left "SG changed from '3.85' to '3.85'".
+        using var dir = new TempDirectory();
+        using var wb = StoneWorkbook.Open(dir.File("wb.db"), new SteppingClock(), WorkbookOpening.CreateIfMissing);
+        StoneSheet s = wb.Create(Quartz() with { Notes = "garnet" });
+        int before = wb.History(s.Id).Count;
+        foreach (string typed in new[] { "garnet?", "garnet", "garnet, rhodolite" }) s = wb.Save(s, s with { Notes = typed }).Stored;
+        Assert.Equal(before + 1, wb.History(s.Id).Count);
+        Assert.Equal(("garnet", "garnet, rhodolite"), (wb.History(s.Id)[^1].Before, wb.History(s.Id)[^1].After));
+        s = wb.Save(s, s with { Notes = "garnet" }).Stored;                 // back to where the entry began
+        Assert.Equal(before, wb.History(s.Id).Count);
+    }
+
+    [Fact]
     public void A_step_removed_and_put_back_in_quick_succession_leaves_two_entries()
     {
         // Invented peridot-like steps (handbook values from memory). The removal and its undo had merged into one entry
