@@ -79,14 +79,11 @@ public static class BenchReader
             RefractometerMethod? method = r.Text(BenchField.Method) is null ? null : Word<RefractometerMethod>(BenchField.Method);
             bool anyReading = steps.Count > 0 || spot is not null || over == true;
             bool anyGiven = r.Steps.Count > 0 || r.Text(BenchField.Spot) is not null || over == true;
-            if (!anyGiven)
-            {
-                // Settings with nothing to apply them to: refused, not silently dropped.
-                foreach (string field in new[] { BenchField.Method, BenchField.LiquidLimit, BenchField.LightNm, BenchField.Precision, BenchField.CalibrationOffset })
-                    if (r.Text(field) is { } text && !HasError(field))
-                        Error(field, text, "a value only with a refractometer reading", "is given, but there is no refractometer reading (steps, spot or over the limit) to apply it to.");
+            // The instrument's settings with no reading yet (the liquid typed before the first edge, as at the bench): kept,
+            // checked for their ranges below, and not an error; they apply once a reading comes.
+            if (!anyGiven && new[] { BenchField.Method, BenchField.LiquidLimit, BenchField.LightNm, BenchField.Precision, BenchField.CalibrationOffset }
+                    .All(f => r.Text(f) is null))
                 return null;
-            }
             // A spot reading is one number; rotation steps are facet readings. Read as edges, a "spot" step would be scored
             // as a crystal's constant edge, not as a spot reading's blur between a material's extreme indices.
             if (method == RefractometerMethod.Spot && r.Steps.Count > 0)
@@ -219,8 +216,10 @@ public static class BenchReader
                 if (Number(BenchField.WaterC) is { } c) Checked(BenchField.WaterC, celsius!, () => WaterDensity.At(Temperature.FromCelsius(c)).Temperature);
                 return null;
             }
-            if (celsius is not null && !weighed && Number(BenchField.WaterC) is not null)
-                Error(BenchField.WaterC, celsius, "a temperature only with a hydrostatic weighing", "is given, but there is no hydrostatic weighing to apply it to.");
+            // The water's temperature noted before the stone is weighed (or beside a typed SG): kept and checked for its range,
+            // not an error; it applies once a weighing comes.
+            if (celsius is not null && !weighed && Number(BenchField.WaterC) is { } noted)
+                Checked(BenchField.WaterC, celsius, () => WaterDensity.At(Temperature.FromCelsius(noted)).Temperature);
             if (direct is not null && !typedRefused)
                 return Number(BenchField.Sg) is { } sg ? Checked(BenchField.Sg, direct, () => new SpecificGravity(sg, BenchDefaults.DirectSpecificGravityUncertainty)) : null;
             if (!weighed) return null;

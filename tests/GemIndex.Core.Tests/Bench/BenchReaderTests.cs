@@ -76,6 +76,22 @@ public class BenchReaderTests
     }
 
     [Fact]
+    public void The_instruments_settings_typed_before_any_reading_are_no_error_but_are_still_checked_for_their_range()
+    {
+        // The liquid's limit is set up before the first edge is read: it had been refused as "nothing to apply it to".
+        var first = BenchReader.Read(R((BenchField.LiquidLimit, "1.80"), (BenchField.Precision, "0.001"), (BenchField.Sg, "2.65")));
+        Assert.Empty(first.Errors);
+        Assert.Null(first.Sheet.Refractometer);
+        var beyond = BenchReader.Read(R((BenchField.LiquidLimit, "2.6"), (BenchField.Sg, "2.65")));
+        Assert.Equal([BenchField.LiquidLimit], Fields(beyond));
+        Assert.Contains("allowed: 1.5 to 2.2", beyond.Errors[0].Sentence, StringComparison.Ordinal);
+        // Once a reading comes, the setting applies to it.
+        var read = BenchReader.Read(Steps(R((BenchField.LiquidLimit, "1.80")), "0:1.795"));
+        Assert.Empty(read.Errors);
+        Assert.Equal(1.80, read.Sheet.Refractometer!.LiquidLimit);
+    }
+
+    [Fact]
     public void As_used_by_its_reading_a_stone_keeps_only_what_the_reader_took()
     {
         // An SG typed beside weights (both left out), a heavy liquid without a result beside a good one (the good one kept),
@@ -220,11 +236,23 @@ public class BenchReaderTests
     [InlineData(BenchField.Precision, "0.002")]
     [InlineData(BenchField.CalibrationOffset, "0.001")]
     [InlineData(BenchField.LightNm, "589.3")]
-    public void A_setting_given_with_nothing_to_apply_it_to_is_refused(string field, string value)
+    public void A_setting_given_before_its_reading_is_kept_without_an_error(string field, string value)
+    {
+        // Set up at the bench before the stone is read (the liquid, the light, the water's temperature): it had been
+        // refused as having "nothing to apply it to", a "!" beside a value typed in the natural order.
+        var reading = BenchReader.Read(R((BenchField.Sg, "2.65"), (field, value)));
+        Assert.Empty(reading.Errors);
+        Assert.Equal(2.65, reading.Sheet.SpecificGravity!.Value.Value);
+    }
+
+    [Theory]
+    [InlineData(BenchField.WaterC, "99")]
+    [InlineData(BenchField.Precision, "0.5")]
+    public void A_setting_given_before_its_reading_is_still_checked_for_its_range(string field, string value)
     {
         var reading = BenchReader.Read(R((BenchField.Sg, "2.65"), (field, value)));
         Assert.Equal([field], Fields(reading));
-        Assert.Contains("given, but there is no", reading.Errors[0].Sentence);
+        Assert.Contains("allowed:", reading.Errors[0].Sentence, StringComparison.Ordinal);
     }
 
     [Fact]
