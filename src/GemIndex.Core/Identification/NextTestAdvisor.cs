@@ -164,7 +164,8 @@ public static class NextTestAdvisor
         var done = sheet.Magnification is { } m ? m.Present.Concat(m.Absent).ToHashSet() : [];
         var open = new List<int>();
         for (int f = 0; f < MagnificationVocabulary.All.Count; f++)
-            if (!done.Contains(MagnificationVocabulary.All[f].Feature) && (sheet.Transparency != StoneTransparency.Opaque || MagnificationVocabulary.All[f].SeenOnTheSurface))
+            if (!done.Contains(MagnificationVocabulary.All[f].Feature) && (sheet.Transparency != StoneTransparency.Opaque || MagnificationVocabulary.All[f].SeenOnTheSurface)
+                && !(sheet.Cut == StoneCut.Cabochon && MagnificationVocabulary.NeedFacets.Contains(MagnificationVocabulary.All[f].Feature)))
                 open.Add(f);
         if (open.Count == 0) return null;
         // Of equal gains the first is kept (as MaxBy does).

@@ -146,6 +146,12 @@ public static class MagnificationVocabulary
     /// <summary>The phenomena only a domed surface shows (common practice): a faceted stone shows neither, as if looked for and not seen.</summary>
     public static IReadOnlyList<MagnificationFeature> DomedPhenomena { get; } = [MagnificationFeature.Asterism, MagnificationFeature.Chatoyancy];
 
+    /// <summary>
+    /// The looks that need facets (the back facets' edges seen doubled through the table): never advised for a cabochon,
+    /// which has neither (common practice).
+    /// </summary>
+    public static IReadOnlyList<MagnificationFeature> NeedFacets { get; } = [MagnificationFeature.FacetDoubling];
+
     /// <summary>The words accepted, in table order.</summary>
     public static IReadOnlyList<string> Words => [.. Table.Select(i => i.Word)];
 

@@ -5,6 +5,7 @@ using GemIndex.Core.Catalogue;
 using GemIndex.Core.Gravity;
 using GemIndex.Core.Identification;
 using GemIndex.Core.Magnification;
+using GemIndex.Core.Observations;
 using GemIndex.Core.Optics.Indicatrix;
 
 namespace GemIndex.Core.Tests.Magnification;
@@ -61,5 +62,26 @@ public class FacetDoublingTests
         string Leader(MagnificationObservation look) => engine.Identify(new BenchSheet { SpecificGravity = sg, Magnification = look }).Species[0].Species;
         Assert.Equal("zircon", Leader(new([MagnificationFeature.FacetDoubling], [])));
         Assert.Equal("cubic", Leader(new([], [MagnificationFeature.FacetDoubling])));
+    }
+
+    [Fact]
+    public void Doubling_is_advised_for_a_faceted_stone_and_never_for_a_cabochon()
+    {
+        // Zircon against a cubic stone of the same SG (handbook values from memory): a faceted stone's back facet edges are
+        // the look that parts them; a cabochon has no facets and no table to look through, so the look is another one.
+        Material zircon = Entry("zircon", OpticalIndices.Uniaxial(new(1.925, 1.940), new(1.980, 2.000)), new(0.040, 0.060));
+        Material cubic = Entry("cubic", OpticalIndices.SingleIndex(new(2.15, 2.18), OpticCharacter.Isotropic), null);
+        var sheet = new BenchSheet
+        {
+            SpecificGravity = new SpecificGravity(4.70, 0.01), Cut = StoneCut.Faceted,
+            Refractometer = new RefractometerObservation(RefractometerMethod.Facet, overLimit: true),   // both read over the limit
+            Polariscope = PolariscopeReaction.Anomalous, Pleochroism = PleochroismObservation.None, ThermalProbe = ThermalProbeResult.Negative,
+            Dispersion = DispersionObservation.ByEye(DispersionStrength.Strong), UvLong = FluorescenceStrength.Inert, UvShort = FluorescenceStrength.Inert,
+            AbsorptionLinesNanometres = [],
+        };
+        NextTestAdvice? Advice(BenchSheet s) => NextTestAdvisor.Advise(s, [(zircon, 0.5), (cubic, 0.5)]);
+        Assert.Equal(GemIndex.Core.Bench.BenchField.Magnification, Advice(sheet)!.Test);
+        Assert.Contains("doubling of facet edges", Advice(sheet)!.LookFor);
+        Assert.DoesNotContain("doubling of facet edges", Advice(sheet with { Cut = StoneCut.Cabochon })?.LookFor ?? []);
     }
 }
