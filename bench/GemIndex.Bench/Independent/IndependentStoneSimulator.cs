@@ -51,7 +51,7 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
         bool beyond = random.NextDouble() < beyondRangeShare;
         int beyondWhat = beyond ? random.Next(3) : -1; // 0 index, 1 SG, 2 both
         double quantile = random.NextDouble();
-        double drawn = Draw(species.Indices.Drawn, quantile, beyondWhat is 0 or 2, 0.01);
+        double drawn = Draw(species.Indices.Drawn, quantile, beyondWhat is 0 or 2, 0.01, out int indexSide);
         var principal = Principal(species.Indices, drawn);
         double sgQuantile = species.SgFollowsIndex switch
         {
@@ -59,7 +59,13 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
             < 0 => Clamp01(1 - quantile + Gauss(0.15)),
             _ => random.NextDouble(),
         };
-        double sg = Draw(species.SpecificGravity, sgQuantile, beyondWhat is 1 or 2, 0.05);
+        // An SG beyond the range of a species whose SG follows its index lies on the side its index points to (past the
+        // index's own side when both are beyond): a glass of index 1.46 is never as dense as 4.75 (Gladstone–Dale), nor a
+        // garnet low in the series heavier than its heaviest member. Drawn on a random side, such pairs were stones no
+        // material makes.
+        int? sgSide = species.SgFollowsIndex == 0 ? null
+            : Math.Sign(species.SgFollowsIndex) * (beyondWhat == 2 ? indexSide : quantile >= 0.5 ? 1 : -1);
+        double sg = Draw(species.SpecificGravity, sgQuantile, beyondWhat is 1 or 2, 0.05, out _, sgSide);
         string origin = Pick(species.Origins);
         string hue = Pick(species.Hues);
         // The loupe draws from its own stream, so asking it first leaves the other draws of the seed as they were; its
@@ -84,11 +90,17 @@ internal sealed class IndependentStoneSimulator(Random random, LoupeExaminer? lo
     }
 
     /// <summary>A value at the quantile of the range, or beyond it by 5–30 % of its width (at least of a minimum span) on a random side.</summary>
-    private double Draw(IndexRange range, double quantile, bool beyond, double minimumSpan)
+    /// <remarks>
+    /// The side is drawn even when <paramref name="side"/> fixes it (−1 low, +1 high), so the seed's later draws stay as they were.
+    /// </remarks>
+    private double Draw(IndexRange range, double quantile, bool beyond, double minimumSpan, out int sideTaken, int? side = null)
     {
+        sideTaken = 0;
         if (!beyond) return range.Low + quantile * range.Width;
         double by = (0.05 + 0.25 * random.NextDouble()) * Math.Max(range.Width, minimumSpan);
-        return random.NextDouble() < 0.5 ? range.Low - by : range.High + by;
+        int randomSide = random.NextDouble() < 0.5 ? -1 : 1;
+        sideTaken = side ?? randomSide;
+        return sideTaken < 0 ? range.Low - by : range.High + by;
     }
 
     /// <summary>The principal values from the index drawn (<see cref="PrincipalValues.Drawn"/>) and a birefringence drawn here.</summary>
