@@ -120,6 +120,13 @@ public sealed record Material
     public bool NamedByColour { get; init; }
 
     /// <summary>
+    /// The specific refractivity (n − 1)/ρ the material keeps (<see cref="Optics.GladstoneDale"/>), or null: when set, an
+    /// index read on the stone bounds the SG it may have, and the SG is weighed within those bounds (man-made glass,
+    /// whose catch-all entry spans indices 1.46–1.93 and SG 2.2–6.05 but never a light glass of high index).
+    /// </summary>
+    public PropertyRange? SpecificRefractivity { get; init; }
+
+    /// <summary>
     /// The source of each value, by field name as the family files spell it ("omega", "sg", "uv_long"); a field
     /// missing here has no source. Keys are <see cref="CatalogueFields"/> names.
     /// </summary>

@@ -21,6 +21,10 @@ public sealed record AnalysedSheet
             IsColourless = ColourWords.IsColourless(sheet.Colour);
         }
         if (sheet.Magnification is { IsEmpty: false } look) LogBroadLook = MagnificationEvidence.LogBroad(look);
+        if (sheet.Refractometer is { } read && (read.Spot is not null || read.Steps.Count > 0))
+            // One index for a stone read as singly refractive: the spot, or the mean of every edge (for a doubly refractive
+            // stone a middle value, where an entry that needs one index fits badly anyway).
+            SingleIndex = read.CalibrationOffset + (read.Spot ?? read.Steps.SelectMany(e => e.High is { } h ? new[] { e.Low, h } : [e.Low]).Average());
         if (sheet.Refractometer is { Steps.Count: > 0 } r)
         {
             Series = RotationSeriesAnalysis.ReadAgainst(RotationSeriesAnalysis.Analyse(r.Steps, r.ReadingPrecision, r.CalibrationOffset), r.LiquidLimit);
@@ -46,6 +50,12 @@ public sealed record AnalysedSheet
     // One stone is ranked on one thread, so a plain dictionary under an uncontended lock (cheaper per stone than a
     // concurrent one) keeps the sheet safe to share.
     private readonly Dictionary<(IndicatrixPrior, double, double), SectionLikelihood.Outcome> _outcomes = [];
+
+    /// <summary>
+    /// The index of the stone as one number (the spot, or the mean of the edges read, calibrated), for a material whose
+    /// SG follows its index (<see cref="Catalogue.Material.SpecificRefractivity"/>); null without a reading below the limit.
+    /// </summary>
+    internal double? SingleIndex { get; }
 
     /// <summary>The series as the section model reads it, when there are readings.</summary>
     internal SeriesObservation? Observation { get; }

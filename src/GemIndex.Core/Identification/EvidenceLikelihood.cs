@@ -43,7 +43,7 @@ public static class EvidenceLikelihood
         var s = sheet.Sheet;
         // An aggregate's spot index and SG both follow its mix of minerals: counted as correlated, not independent.
         int gravityGroup = (material.Forms & MaterialForm.Aggregate) != 0 && s.Refractometer?.Spot is not null ? EvidenceAccumulator.AggregateGroup : EvidenceAccumulator.Independent;
-        if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc, gravityGroup);
+        if (s.SpecificGravity is { } sg) SpecificGravity(material, sg.Value, sg.StandardUncertainty, acc, gravityGroup, sheet.SingleIndex);
         // Heavy liquids beside a weighed SG bound the same property: given the SG reading, they say only what the reading
         // leaves open (docs/ranking.md §2, "heavy liquids beside a weighed SG"). Read against it, both are weighed as read.
         if (sheet.LiquidsBesideGravity is { } bounds && LiquidsGivenGravity(material, bounds) is { } given)
@@ -102,17 +102,33 @@ public static class EvidenceLikelihood
                s.Pleochroism is { } d && ShownByAnyOpaqueStone(BenchField.Pleochroism, BenchWords.Word(d)),
                s.Dispersion?.Seen is { } f && ShownByAnyOpaqueStone(BenchField.Dispersion, BenchWords.Word(f)));
 
-    private static void SpecificGravity(Material m, double value, double sigma, EvidenceAccumulator acc, int group)
+    private static void SpecificGravity(Material m, double value, double sigma, EvidenceAccumulator acc, int group, double? index)
     {
         double s = double.Hypot(sigma, SpecificGravityFloor);
         var range = m.SpecificGravity;
+        // A glass's SG follows its index (Gladstone–Dale): given the index read, only the densities its refractivity
+        // allows at that index, within the entry's own range where the two overlap (docs/ranking.md §2, "Glass: index
+        // and SG together"). An entry with a usual part, or whose range the bounds miss, keeps its own range.
+        var given = m.SpecificRefractivity is { } k && index is > 1 && m.SpecificGravityUsual is null
+            ? Overlap(range, Optics.GladstoneDale.Density(index.Value, k)) : null;
+        range = given ?? range;
         double stray = RangeStrays.SpecificGravityShare * value;
         // A reading among the rare extremes of the range is no misfit: the fit's tail is the whole range's.
         acc.Add(BenchField.Sg, UsualPart.Mixed(range, m.SpecificGravityUsual, r => RangeStrays.Density(value, r, s, stray)), BroadDensities.SpecificGravity,
             acc.Fitting ? RangeStrays.Tail(value, range, s, stray) : 1, robust: true, group);
         if (acc.Explaining)
-            acc.Say($"SG {Gravity.SpecificGravity.Text(value, sigma)} {Where(value, range, s, "0.00")}{Usually(value, sigma, range, m.SpecificGravityUsual)}");
+            acc.Say($"SG {Gravity.SpecificGravity.Text(value, sigma)} {Where(value, range, s, "0.00")}{Usually(value, sigma, range, m.SpecificGravityUsual)}"
+                + (given is not null ? $" (at n {index!.Value.ToString("0.000", CultureInfo.InvariantCulture)}: a glass's SG rises with its index)" : ""));
     }
+
+    /// <summary>
+    /// The part of <paramref name="range"/> inside <paramref name="bounds"/>, or null when the two do not meet: the entry's
+    /// index is then far from the reading, which its index test weighs, and its SG keeps its own range (the bounds alone
+    /// had let a lead glass of SG 3.3–4.0 fit an SG of 1.57 read beside an index of 1.35).
+    /// </summary>
+    private static PropertyRange? Overlap(PropertyRange range, PropertyRange bounds) =>
+        range.Maximum < bounds.Minimum || range.Minimum > bounds.Maximum ? null
+            : new(Math.Max(range.Minimum, bounds.Minimum), Math.Min(range.Maximum, bounds.Maximum), "specific gravity");
 
     /// <summary>σ of a heavy liquid's density, doubled for a suspended stone (a judgement, docs/ranking.md §5, other named values).</summary>
     private const double HeavyLiquidSigma = 0.01;

@@ -1,5 +1,6 @@
 using System.Security.Cryptography;
 using GemIndex.Core.Catalogue;
+using GemIndex.Core.Optics;
 using GemIndex.Data.ColourVarieties;
 using GemIndex.Data.Magnification;
 using GemIndex.Data.MineralGroups;
@@ -68,7 +69,17 @@ public static class ShippedCatalogue
     /// by the same tables.
     /// </summary>
     internal static IReadOnlyList<Material> WithRulesAndGroups(IReadOnlyList<Material> materials) =>
-        ColourVarietyTable.Embedded.Attach(MineralGroupTable.Embedded.Attach(TradeRuleTable.Embedded.Attach(materials)));
+        WithGlassRefractivity(ColourVarietyTable.Embedded.Attach(MineralGroupTable.Embedded.Attach(TradeRuleTable.Embedded.Attach(materials))));
+
+    /// <summary>The catalogue's species of man-made glass, whose entries keep its specific refractivity.</summary>
+    public const string ManMadeGlassSpecies = "glass";
+
+    /// <summary>
+    /// Every entry of the man-made glass species, shipped or the user's own, with the specific refractivity of man-made
+    /// glass (<see cref="GladstoneDale.ManMadeGlass"/>): its SG is weighed given the index read (docs/ranking.md §2).
+    /// </summary>
+    internal static IReadOnlyList<Material> WithGlassRefractivity(IReadOnlyList<Material> materials) =>
+        [.. materials.Select(m => m.Species == ManMadeGlassSpecies ? m with { SpecificRefractivity = GladstoneDale.ManMadeGlass } : m)];
 
     private static IReadOnlyList<FamilySource> LoadSources() =>
         [.. typeof(ShippedCatalogue).Assembly.GetManifestResourceNames()

@@ -2,6 +2,7 @@ using GemIndex.Core.Catalogue;
 using GemIndex.Core.Gravity;
 using GemIndex.Core.Identification;
 using GemIndex.Core.Observations;
+using GemIndex.Core.Optics;
 using GemIndex.Core.Optics.Indicatrix;
 using GemIndex.Core.Readings;
 
@@ -309,6 +310,28 @@ public class IdentifierTests
         Assert.True(result.NoGoodMatch);
         Assert.True(result.NotInCatalogue > result.Candidates[0].Confidence);
         Assert.StartsWith("Nothing in the catalogue fits", result.Warnings[0]);
+    }
+
+    [Fact]
+    public void A_glass_whose_SG_its_index_rules_out_is_nothing_fits_while_a_soda_lime_glass_stays_glass()
+    {
+        // A catch-all glass spanning every glass index and SG (as the shipped "glass of another composition" does,
+        // n 1.458-1.930, SG 2.20-6.05): without the Gladstone-Dale relation an impossible pair (n 1.48 with SG 4.60, or
+        // n 1.70 with SG 2.20) fitted it at 1.00 and was named glass.
+        Material anyGlass = Make("glass of another composition", "glass", OpticalIndices.SingleIndex(new(1.458, 1.93), OpticCharacter.Amorphous), 2.20, 6.05)
+            with { SpecificRefractivity = GladstoneDale.ManMadeGlass };
+        var engine = new Identifier([.. Catalogue, anyGlass]);
+        BenchSheet Glass(double n, double sg) => new() { Refractometer = Facet((0, n, n), (90, n, n)), SpecificGravity = new SpecificGravity(sg, 0.01) };
+        Assert.True(engine.Identify(Glass(1.48, 4.60)).NoGoodMatch);
+        Assert.True(engine.Identify(Glass(1.70, 2.20)).NoGoodMatch);
+        // Soda-lime (n 1.518, SG 2.52, the Wikipedia figures glass.json cites) and a dense lead glass (n 1.70, SG 4.2, within
+        // glass.json's dense lead family) are glass.
+        var sodaLime = engine.Identify(Glass(1.518, 2.52));
+        Assert.False(sodaLime.NoGoodMatch);
+        Assert.Equal("glass", sodaLime.Species[0].Species);
+        var lead = engine.Identify(Glass(1.70, 4.20));
+        Assert.False(lead.NoGoodMatch);
+        Assert.Equal("glass of another composition", lead.Candidates[0].Material.Name);
     }
 
     [Fact]
