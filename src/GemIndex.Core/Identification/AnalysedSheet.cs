@@ -35,7 +35,8 @@ public sealed record AnalysedSheet
             var analysed = Series;
             var character = Character;
             SeriesShown = new Lazy<RotationSeriesResult>(() => SeriesAsRead.Weighed(analysed,
-                RotationSeriesAnalysis.EveryCharacter(r.Steps, r.ReadingPrecision, r.CalibrationOffset)?.Select(i => RotationSeriesAnalysis.ReadAgainst(i, r.LiquidLimit)).ToList(),
+                RotationSeriesAnalysis.EveryCharacter(r.Steps, r.ReadingPrecision, r.CalibrationOffset)?
+                    .Select(i => RotationSeriesAnalysis.ReadAgainst(i, r.LiquidLimit, analysed.HighHiddenBy(r.LiquidLimit))).ToList(),
                 character.Value));
         }
     }

@@ -82,6 +82,12 @@ public static class BenchWarnings
         if (sheet.Series is { } series)
         {
             warnings.AddRange(series.Misreadings.Select(m => "Likely misreading: " + m + "."));
+            // Steps with a low edge only, well below the other steps' high edges: the high edge passed the liquid there.
+            if (sheet.Sheet.Refractometer is { } liquid && series.HighHiddenBy(liquid.LiquidLimit))
+                warnings.Add($"High edge not seen at {series.HighHiddenAtDegrees.Count} of {liquid.Steps.Count} steps "
+                    + $"({string.Join(", ", series.HighHiddenAtDegrees.Select(d => d.ToString("0.#", CultureInfo.InvariantCulture) + "°"))}): it lay above the liquid's "
+                    + $"{liquid.LiquidLimit.ToString("0.000", CultureInfo.InvariantCulture)} there, so the highest index is only known to be higher and the birefringence "
+                    + "is a least value; the low edges of those steps are weighed.");
             // Three colours in the dichroscope already say biaxial (common practice): the series then leaves open only
             // what the edges alone give, β and the sign.
             if (series.Character is null && series.UndeterminedReason.Length > 0)

@@ -50,12 +50,26 @@ public static class RotationSeriesAnalysis
         if (gap > MaximumGapForCharacter || both.Count < 2)
             return Partial(both, LargestGapSpan(s.Select(x => x.RotationDegrees)), sigma, misreadings);
 
-        var (lows, highs, lowEdge, highEdge) = Edges(both, sigma, band, gap, misreadings);
+        var lowOnly = LowEdgesOnly(s, both, band);
+        var (lows, highs, lowEdge, highEdge) = Edges(both, lowOnly, sigma, band, gap, misreadings);
         bool lowConstant = Spread(lows) <= band;
         bool highConstant = Spread(highs) <= band;
-        if (lowConstant || highConstant)
-            return Uniaxial(lows, highs, lowEdge, highEdge, lowConstant, highConstant, sigma, gap, misreadings);
-        return Biaxial(lows, highs, lowEdge, highEdge, sigma, band, gap, misreadings);
+        var result = lowConstant || highConstant
+            ? Uniaxial(lows, highs, lowEdge, highEdge, lowConstant, highConstant, sigma, gap, misreadings)
+            : Biaxial(lows, highs, lowEdge, highEdge, sigma, band, gap, misreadings);
+        return result with { HighHiddenAtDegrees = [.. lowOnly.Select(x => x.RotationDegrees)], HighestHighRead = both.Max(x => x.High!.Value) };
+    }
+
+    /// <summary>
+    /// The steps that show only a low edge, well below every high edge read at the other steps (by more than the
+    /// constant-edge band): there the high edge lay past the liquid, or went unread. Their low edge is still a reading of
+    /// the low edge (it had been dropped with the step, so the lowest index and the highest low edge came out of the
+    /// other steps alone). A single edge at the level of the high edges is where the two meet, and stays out.
+    /// </summary>
+    private static List<ShadowEdgeStep> LowEdgesOnly(List<ShadowEdgeStep> s, List<ShadowEdgeStep> both, double band)
+    {
+        double lowestHigh = both.Min(x => x.High!.Value);
+        return [.. s.Where(x => x.High is null && x.Low < lowestHigh - band)];
     }
 
     /// <summary>
@@ -75,7 +89,7 @@ public static class RotationSeriesAnalysis
         if (!s.Any(x => x.High is { } h && h - x.Low > band) || gap > MaximumGapForCharacter || both.Count < 2) return null;
         // The misreadings are the analysis' own to report; here only the readings left after them count.
         var unreported = new List<string>();
-        var (lows, highs, lowEdge, highEdge) = Edges(both, sigma, band, gap, unreported);
+        var (lows, highs, lowEdge, highEdge) = Edges(both, LowEdgesOnly(s, both, band), sigma, band, gap, unreported);
         return
         [
             .. Uniaxial(lows, highs, lowEdge, highEdge, lowConstant: true, highConstant: false, sigma, gap, unreported).Interpretations,
@@ -84,11 +98,14 @@ public static class RotationSeriesAnalysis
         ];
     }
 
-    /// <summary>The low and the high edges of the steps that show both, a lone stray of each left out (and named), and each edge's extremes.</summary>
+    /// <summary>
+    /// The low edges of the steps that show both and of those whose high edge went unseen (<see cref="LowEdgesOnly"/>), the
+    /// high edges of the steps that show both, a lone stray of each left out (and named), and each edge's extremes.
+    /// </summary>
     private static (List<EdgeValue> Lows, List<EdgeValue> Highs, MovingEdge LowEdge, MovingEdge HighEdge) Edges(
-        List<ShadowEdgeStep> both, double sigma, double band, double gap, List<string> misreadings)
+        List<ShadowEdgeStep> both, List<ShadowEdgeStep> lowOnly, double sigma, double band, double gap, List<string> misreadings)
     {
-        var lows = EdgeValues(both, x => x.Low, band, "low", misreadings);
+        var lows = EdgeValues([.. both.Concat(lowOnly).OrderBy(x => x.RotationDegrees)], x => x.Low, band, "low", misreadings);
         var highs = EdgeValues(both, x => x.High!.Value, band, "high", misreadings);
         return (lows, highs, MovingEdge.Of(lows, sigma, gap), MovingEdge.Of(highs, sigma, gap));
     }
@@ -368,19 +385,29 @@ public static class RotationSeriesAnalysis
     /// steps otherwise came out as "γ 1.796" beside a 1.79 liquid, as if read.
     /// </summary>
     public static RotationSeriesResult ReadAgainst(RotationSeriesResult series, double liquidLimit) =>
-        series with { Interpretations = [.. series.Interpretations.Select(i => ReadAgainst(i, liquidLimit))] };
+        series with { Interpretations = [.. series.Interpretations.Select(i => ReadAgainst(i, liquidLimit, series.HighHiddenBy(liquidLimit)))] };
 
     /// <summary>One interpretation as <see cref="ReadAgainst(RotationSeriesResult, double)"/> reads it.</summary>
-    public static SeriesInterpretation ReadAgainst(SeriesInterpretation i, double liquidLimit)
+    /// <param name="i">The interpretation.</param>
+    /// <param name="liquidLimit">The contact liquid's index.</param>
+    /// <param name="highHidden">
+    /// The liquid hid the high edge at some steps (<see cref="RotationSeriesResult.HighHiddenBy"/>): the highest index
+    /// is said as above the liquid whatever the steps that show it give (an epidote read on a 1.79 liquid had been given
+    /// "γ 1.788, birefringence 0.032" from the two steps that showed a high edge, where the readings show at least 0.042).
+    /// </param>
+    public static SeriesInterpretation ReadAgainst(SeriesInterpretation i, double liquidLimit, bool highHidden = false)
     {
-        if (!(i.Highest.Value > liquidLimit) || i.Character is not (OpticCharacter.Uniaxial or OpticCharacter.Biaxial)) return i;
+        if (!(i.Highest.Value > liquidLimit || highHidden) || i.Character is not (OpticCharacter.Uniaxial or OpticCharacter.Biaxial)) return i;
+        // A uniaxial stone whose constant edge is the high one (ω) shows it at every step or at none.
+        if (!(i.Highest.Value > liquidLimit) && i.Character == OpticCharacter.Uniaxial && i.Sign == OpticSign.Negative) return i;
         string name = i.Character == OpticCharacter.Biaxial ? "γ" : "ε";
         string fitted = $"{name} {F(i.Highest.Value)}", birefringence = $"birefringence {Difference(i.Highest.Value, i.Lowest.Value)}";
+        string about = i.Highest.Value > liquidLimit ? $" (about {F(i.Highest.Value)} by the fitted edge)" : "";
         return i with
         {
             AboveLiquidLimit = liquidLimit,
             Description = i.Description
-                .Replace(fitted, $"{name} above the liquid {F(liquidLimit)} (about {F(i.Highest.Value)} by the fitted edge)", StringComparison.Ordinal)
+                .Replace(fitted, $"{name} above the liquid {F(liquidLimit)}{about}", StringComparison.Ordinal)
                 .Replace(birefringence, $"birefringence at least {Difference(liquidLimit, i.Lowest.Value)}", StringComparison.Ordinal),
         };
     }

@@ -40,9 +40,7 @@ internal static class ReportDerived
     public static string Indices(bool uniaxial, string sign, double lowest, double highest, double? beta, double? aboveLiquidLimit = null)
     {
         // A highest index fitted above the contact liquid was never read: it is said as lying above the liquid.
-        string high = aboveLiquidLimit is { } limit
-            ? $"above the liquid {ReportNumbers.Index(limit)} (about {ReportNumbers.Index(highest)})"
-            : ReportNumbers.Index(highest);
+        string high = aboveLiquidLimit is { } limit ? AboveTheLiquid(limit, highest) : ReportNumbers.Index(highest);
         return beta is { } b ? $"α {ReportNumbers.Index(lowest)}, β {ReportNumbers.Index(b)}, γ {high}"
             : lowest == highest ? ReportNumbers.Index(lowest)
             : uniaxial && sign == "positive" ? $"ω {ReportNumbers.Index(lowest)}, ε {high}"
@@ -52,7 +50,16 @@ internal static class ReportDerived
 
     /// <summary>The birefringence of a reading whose highest index lies above the liquid: at least the liquid less the lowest.</summary>
     public static string AtLeast(double lowest, double liquidLimit, double fittedHighest) =>
-        $"at least {ReportNumbers.Index(Core.Optics.Birefringence.OfShownIndices(liquidLimit, lowest))} (about {ReportNumbers.Index(Core.Optics.Birefringence.OfShownIndices(fittedHighest, lowest))} by the fitted edge)";
+        $"at least {ReportNumbers.Index(Core.Optics.Birefringence.OfShownIndices(liquidLimit, lowest))}"
+        + (fittedHighest > liquidLimit ? $" (about {ReportNumbers.Index(Core.Optics.Birefringence.OfShownIndices(fittedHighest, lowest))} by the fitted edge)" : "");
+
+    /// <summary>
+    /// A highest index past the liquid: "above the liquid 1.790", with the fitted edge's value when it lies above the
+    /// liquid ("(about 1.796)"); a high edge unseen at some steps while the steps that show it fit below the liquid gives
+    /// no such value.
+    /// </summary>
+    public static string AboveTheLiquid(double liquidLimit, double fittedHighest) =>
+        $"above the liquid {ReportNumbers.Index(liquidLimit)}" + (fittedHighest > liquidLimit ? $" (about {ReportNumbers.Index(fittedHighest)})" : "");
 
     /// <summary>A reading is called settled when it carries at least this share of the weight (a judgement).</summary>
     private const double SettledShare = 0.9;

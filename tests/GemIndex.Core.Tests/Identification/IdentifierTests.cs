@@ -335,6 +335,19 @@ public class IdentifierTests
     }
 
     [Fact]
+    public void A_high_edge_the_liquid_hid_at_some_steps_is_warned_of_with_the_steps()
+    {
+        // The epidote-like series of RotationSeriesAnalysisTests (indicatrix section of α 1.748, β 1.776, γ 1.796, from
+        // memory), read on a 1.79 liquid.
+        var sheet = new BenchSheet
+        {
+            Refractometer = new RefractometerObservation(RefractometerMethod.Facet,
+                [new(0, 1.775, null), new(30, 1.772, 1.786), new(60, 1.756, 1.788), new(90, 1.748, null), new(120, 1.755, null), new(150, 1.767, null)]),
+        };
+        Assert.Contains(Engine.Identify(sheet).Warnings, w => w.StartsWith("High edge not seen at 4 of 6 steps (0°, 90°, 120°, 150°): it lay above the liquid's 1.790", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void A_sheet_that_says_nothing_is_not_called_nothing_fits_however_many_species_share_it()
     {
         // Sixty glass-like species of equal frequency (invented, for the rule only): with one SG that every one of them and

@@ -57,6 +57,44 @@ public class RotationSeriesAnalysisTests
     }
 
     [Fact]
+    public void Steps_whose_high_edge_the_liquid_hid_keep_their_low_edges_and_leave_the_highest_index_above_the_liquid()
+    {
+        // Epidote-like principal values α 1.748, β 1.776, γ 1.796 (handbook values from memory), the edges worked out by the
+        // indicatrix section for the facet normal (0.3, 0.5, 0.8) every 30° and read on a 1.79 liquid: the high edge
+        // (1.790-1.796) does not show at 0°, 90°, 120° and 150°. The two steps that show it had given α 1.756, γ 1.788 and
+        // a birefringence of 0.032 as if read; the readings show α 1.748 and at least 1.790 − 1.748 = 0.042.
+        ShadowEdgeStep[] steps = [new(0, 1.775, null), new(30, 1.772, 1.786), new(60, 1.756, 1.788), new(90, 1.748, null), new(120, 1.755, null), new(150, 1.767, null)];
+        var analysed = RotationSeriesAnalysis.Analyse(steps, 0.001);
+        Assert.Equal([0.0, 90, 120, 150], analysed.HighHiddenAtDegrees);
+        Assert.True(analysed.HighHiddenBy(1.79));
+        // The biaxial readings (as the front ends show them, weighed by the character's posterior).
+        var biaxial = RotationSeriesAnalysis.EveryCharacter(steps, 0.001)!.Where(i => i.Character == OpticCharacter.Biaxial)
+            .Select(i => RotationSeriesAnalysis.ReadAgainst(i, 1.79, analysed.HighHiddenBy(1.79))).ToList();
+        Assert.Equal(2, biaxial.Count);
+        Assert.All(biaxial, i =>
+        {
+            Assert.Equal(1.79, i.AboveLiquidLimit);
+            Assert.Contains("α 1.748", i.Description);
+            Assert.Contains("γ above the liquid 1.790,", i.Description);   // no fitted value: the steps that show γ fit below the liquid
+            Assert.Contains("birefringence at least 0.042", i.Description);
+        });
+        Assert.Contains(biaxial, i => i.Beta is { } b && Math.Abs(b.Value - 1.775) < 1e-9);   // the highest low edge, a hidden step's
+        // Read against a liquid far above every high edge read, the unseen high edges were missed, not hidden: no "above".
+        Assert.False(analysed.HighHiddenBy(1.85));
+        Assert.All(RotationSeriesAnalysis.ReadAgainst(analysed, 1.85).Interpretations, i => Assert.Null(i.AboveLiquidLimit));
+    }
+
+    [Fact]
+    public void A_single_edge_where_a_uniaxial_stones_edges_meet_is_not_taken_for_a_hidden_high_edge()
+    {
+        // Tourmaline-like ω 1.644, ε 1.624 (handbook values from memory): at 90° the two edges meet and one edge is read.
+        ShadowEdgeStep[] steps = [new(0, 1.624, 1.644), new(30, 1.628, 1.644), new(60, 1.637, 1.644), new(90, 1.644, null), new(120, 1.637, 1.644), new(150, 1.628, 1.644)];
+        var analysed = RotationSeriesAnalysis.Analyse(steps, 0.001);
+        Assert.Empty(analysed.HighHiddenAtDegrees);
+        Assert.All(RotationSeriesAnalysis.ReadAgainst(analysed, 1.79).Interpretations, i => Assert.Null(i.AboveLiquidLimit));
+    }
+
+    [Fact]
     public void Corundum_reads_uniaxial_negative_with_omega_1_770()
     {
         // Corundum ω 1.770, ε 1.762, uniaxial − (common practice, from memory).

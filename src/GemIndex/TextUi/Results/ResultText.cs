@@ -206,7 +206,7 @@ internal static class ResultText
             .Select(i => i.Beta!.Value.Value).Distinct().Order().ToList();
         if (best.Beta is not null && betas.Count > 1)
         {
-            string high = best.AboveLiquidLimit is { } above ? $"above the liquid {Index(above)} (about {Index(best.Highest.Value)})" : Index(best.Highest.Value);
+            string high = best.AboveLiquidLimit is { } above ? GemIndex.Cli.Reports.ReportDerived.AboveTheLiquid(above, best.Highest.Value) : Index(best.Highest.Value);
             yield return $"Refractive indices: α {Index(best.Lowest.Value)}, β {string.Join(" or ", betas.Select(Index))}, γ {high}";
         }
         else
