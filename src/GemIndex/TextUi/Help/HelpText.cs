@@ -11,7 +11,7 @@ internal static class HelpText
         ("F10", "the cursor to the answer and back to the field left (Esc also returns); arrows and PgUp/PgDn scroll it"),
         ("F9, Enter", "on a candidate: its detail: reasons with their numbers, and its catalogue entry"),
         ("F6", "edge plot (two shadow edges against rotation)"),
-        ("Ctrl+R", "scales: lowest index, birefringence and SG as read (with their uncertainty) against the ranges of the best entry of each leading species, then the next entries, each under its rank in the answer"),
+        ("Ctrl+R", "scales: lowest index, birefringence and SG as worked out from the readings (the edges' fitted extremes, which may lie a little past the readings when the steps fall between them; with their uncertainty) against the ranges of the best entry of each leading species, then the next entries, each under its rank in the answer"),
         ("F7", "catalogue browser (a name, an index, an SG, or an index and an SG: 1.544 2.65; one number from 1.30 to 2.5 finds indices first, then SGs)"),
         ("F8", "stones in the workbook (open; search by reference, colour, notes or answer; new, duplicate, delete; F3 there shows a stone's edit history, F4 sorts by change, reference, answer or weight)"),
         ("Ctrl+E", "export the stone's report (Markdown, HTML, JSON) to reports/ beside the workbook; each names the examiner typed once at the foot of F2 Stone (kept in the workbook)"),

@@ -9,7 +9,8 @@ using GemIndex.Core.Readings;
 namespace GemIndex.Cli.TextUi.Plot;
 
 /// <summary>
-/// The scales screen: the lowest index, the birefringence (or a spot reading) and the SG as read, each against the ranges of the top
+/// The scales screen: the lowest index, the birefringence (the series' likeliest reading: the edges' fitted extremes), or a
+/// spot reading, and the SG, each against the ranges of the top
 /// candidates (<see cref="ReadingScale"/>), as many candidates as the height allows (between one and five): the best
 /// entry of each species first, each labelled with its rank in the answer.
 /// </summary>
