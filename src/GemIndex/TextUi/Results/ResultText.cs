@@ -30,6 +30,12 @@ internal static class ResultText
     /// undetermined: the likeliest entry there is the market's most frequent one ("resin-filled emerald"), and the list
     /// must not read as if the bench had found a treatment or a synthetic it cannot tell.
     /// </summary>
+    /// <summary>
+    /// The share of the leading entry's confidence the likeliest natural entry needs to name a stone whose origin is open
+    /// (a judgement of wording, weighing nothing).
+    /// </summary>
+    public const double NaturalNameShare = 0.25;
+
     public static string Short(IdentificationResult r)
     {
         if (r.NoGoodMatch) return "nothing fits";
@@ -39,7 +45,14 @@ internal static class ResultText
         string group = lead.MineralGroup is { } g && g != lead.Species ? $" ({g})" : "";
         string species = $"{lead.Species}{group} {Percent(lead.Confidence)}";
         bool originOpen = Origins(lead).Count > 1;
-        string? entry = r.Candidates.FirstOrDefault(c => c.Material.Species == lead.Species && (!originOpen || c.Material.Origin == OriginClass.Natural))?.Material.Name;
+        // With the origin open the stone is named by its likeliest natural entry ("ruby, origin open", not "heated ruby"),
+        // unless that entry is far less likely than the leader: a light blue topaz led by blue topaz at 67 % had been
+        // named "imperial topaz" (13 %), an orange variety its colour rules out.
+        RankedCandidate? leader = r.Candidates.FirstOrDefault(c => c.Material.Species == lead.Species);
+        RankedCandidate? natural = r.Candidates.FirstOrDefault(c => c.Material.Species == lead.Species && c.Material.Origin == OriginClass.Natural);
+        string? entry = (!originOpen ? leader
+            : natural is { } n && leader is { } l && n.Confidence < NaturalNameShare * l.Confidence ? leader
+            : natural)?.Material.Name;
         string named = entry is null || entry == lead.Species ? species : $"{species}: {entry}";
         return originOpen ? $"{named}, origin open" : named;
     }

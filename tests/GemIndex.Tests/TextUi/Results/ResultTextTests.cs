@@ -398,6 +398,21 @@ public class ResultTextTests
     }
 
     [Fact]
+    public void With_the_origin_open_a_natural_entry_far_less_likely_than_the_leader_does_not_name_the_stone()
+    {
+        // A light blue topaz (invented readings at handbook values): blue topaz leads at 67 %, the likeliest natural entry
+        // is imperial topaz at 13 %, an orange variety the colour rules out; the list had named it.
+        Material Topaz(string name, OriginClass origin) => Corundum(name, origin) with { Species = "topaz" };
+        IdentificationResult r = CorundumAnswer(null) with
+        {
+            Candidates = [new() { Material = Topaz("blue topaz", OriginClass.Treated), Confidence = 0.67, Fit = 1 },
+                          new() { Material = Topaz("imperial topaz", OriginClass.Natural), Confidence = 0.13, Fit = 0.95 }],
+            Species = [new SpeciesResult { Species = "topaz", Confidence = 0.999, Origins = new Dictionary<OriginClass, double> { [OriginClass.Treated] = 0.75, [OriginClass.Natural] = 0.25 } }],
+        };
+        Assert.Equal("topaz >99%: blue topaz, origin open", ResultText.Short(r));
+    }
+
+    [Fact]
     public void A_single_edge_is_one_refractive_index()
     {
         var form = new BenchModel();
