@@ -221,6 +221,24 @@ internal sealed class BenchSession(StoneWorkbook workbook, BenchAssessor assesso
         if ((workbook.Setting(key) ?? "") != value) workbook.SetSetting(key, value);
     }
 
+    /// <summary>
+    /// A copy of the stone as it was typed: the stored stone and its draft, so that entries the reader refuses (an SG typed
+    /// beside a weighing) and the places typed (a weight of 1.230) come along; the copy's draft takes the copy's reference.
+    /// Returns the copy's id.
+    /// </summary>
+    public long Duplicate(long id)
+    {
+        Flush();
+        lock (_gate)
+        {
+            StoneSheet copy = workbook.Duplicate(id);
+            if (workbook.Setting(DraftSetting(id)) is { } json && BenchDraft.Read(json) is { } draft)
+                workbook.SetSetting(DraftSetting(copy.Id),
+                    BenchDraft.Write(new BenchSnapshot(copy.Id, 0, draft.Texts.SetItem(BenchFields.Reference, copy.Reference), draft.Choices, draft.Steps)));
+            return copy.Id;
+        }
+    }
+
     /// <summary>Runs <paramref name="action"/> on the workbook under the lock (for the stone list: duplicate, delete, search).</summary>
     public T WithWorkbook<T>(Func<StoneWorkbook, T> action)
     {

@@ -472,7 +472,7 @@ internal sealed class MainWindow : Window
     private void ShowStones()
     {
         var model = new StoneListModel(q => _session.WithWorkbook(w => w.List(q)), _session.Answer);
-        using var view = new StoneListView(model, id => _session.WithWorkbook(w => w.Duplicate(id).Id), id => _session.WithWorkbook(w => w.Delete(id)),
+        using var view = new StoneListView(model, _session.Duplicate, id => _session.WithWorkbook(w => w.Delete(id)),
             id => _session.WithWorkbook(w => StoneHistoryText.Lines(w.Get(id)?.Reference ?? "", w.History(id))), action => App!.Invoke(action));
         App!.Run(view);
         if (view.WantsNew) NewStone();

@@ -50,6 +50,37 @@ public class BenchSessionTests
     }
 
     [Fact]
+    public async Task A_copy_keeps_the_stone_as_typed_refused_entries_and_places_included()
+    {
+        // A quartz (handbook values from memory) with an SG typed beside a weighing, which the reader refuses together,
+        // and a weight in air typed to the thousandth: the copy had lost both weighings and read 1.23.
+        string path = TempFile();
+        try
+        {
+            using var wb = StoneWorkbook.Open(path, TimeProvider.System, WorkbookOpening.CreateIfMissing);
+            var session = new BenchSession(wb, new BenchAssessor(new Identifier(TestMaterials.All)), a => a());
+            session.Start();
+            long id = session.Form.StoneId;
+            session.Form.SetText(BenchFields.Reference, "Q-15");
+            session.Form.SetText(BenchFields.Sg, "2.65");
+            session.Form.SetText(BenchFields.AirCt, "3.300");
+            session.Form.SetText(BenchFields.WaterCt, "2.054");
+            await session.Changed();
+            long copy = session.Duplicate(id);
+            Assert.NotEqual(id, copy);
+            session.Open(copy);
+            Assert.Equal("Q-15 (copy)", session.Form.Text(BenchFields.Reference));
+            Assert.Equal(("2.65", "3.300", "2.054"), (session.Form.Text(BenchFields.Sg), session.Form.Text(BenchFields.AirCt), session.Form.Text(BenchFields.WaterCt)));
+            Assert.True(session.Flush(TestHost.SaveWait));
+            Assert.Equal("Q-15", wb.Get(id)!.Reference);
+        }
+        finally
+        {
+            foreach (string f in new[] { path, path + "-wal", path + "-shm" }) File.Delete(f);
+        }
+    }
+
+    [Fact]
     public async Task Opening_a_stone_keeps_the_precision_and_offset_it_was_read_with_and_a_new_stone_takes_the_day_s()
     {
         // A stone's indices depend on the offset it was read with: opening it must not rewrite them (a calibration set
