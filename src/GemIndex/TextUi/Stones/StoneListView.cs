@@ -46,6 +46,16 @@ internal sealed class StoneListView : FullScreenDialog
         };
         List.KeyDown += keys;      // on the focused views: Enter would otherwise close the dialog first
         Search.KeyDown += keys;
+        // The list's first row shows selected while the cursor is in the search box (Enter opens it): ↓ moves the
+        // selection on as it goes to the list, as it would in the list (it had only moved the cursor, and Enter then
+        // opened the first row where the second was meant).
+        Search.KeyDown += (_, key) =>
+        {
+            if (key.Handled || key != Key.CursorDown || _model.Shown.Count == 0) return;
+            List.SetFocus();
+            List.SelectedItem = Math.Min((List.SelectedItem ?? -1) + 1, _model.Shown.Count - 1);
+            key.Handled = true;
+        };
         Add(label, Search, order, heading, List);
         // The answer column widens with the screen (a long species name and its share were cut at 18 characters).
         ViewportChanged += (_, _) =>

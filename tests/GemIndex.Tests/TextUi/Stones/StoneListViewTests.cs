@@ -61,4 +61,23 @@ public sealed class StoneListViewTests : IDisposable
         Assert.Contains("sorted by reference (F4)", app.Driver!.ToString()!, StringComparison.Ordinal);
         app.End(token);
     }
+
+    [Fact]
+    public void Down_from_the_search_box_moves_the_selection_to_the_next_stone()
+    {
+        foreach (string reference in new[] { "Q-15", "Q-15 (copy)" }) _workbook.Create(new StoneSheet { Reference = reference });
+        using IApplication app = Headless.Start();
+        var model = new StoneListModel(q => _workbook.List(q));
+        using var view = new StoneListView(model, id => _workbook.Duplicate(id).Id, id => _workbook.Delete(id), _ => [], a => a());
+        SessionToken token = app.Begin(view)!;
+        view.Search.SetFocus();
+        foreach (char c in "Q-15") app.InjectKey(new Key(c));
+        Assert.Equal(0, view.List.SelectedItem);                      // shown selected; Enter here opens it
+        app.InjectKey(Key.CursorDown);
+        Assert.Same(view.List, view.MostFocused);
+        Assert.Equal(1, view.List.SelectedItem);
+        app.InjectKey(Key.Enter);
+        Assert.Equal(model.Shown[1].Id, view.Chosen);
+        app.End(token);
+    }
 }
