@@ -102,6 +102,8 @@ internal static class IdentifyCommand
                 foreach (var e in errors)
                     error.WriteLine(e.Field == "$" ? $"gemindex: {InOptions(e.Sentence).TrimEnd('.')}; 'identify --help' lists the reading options"
                         : $"gemindex: {OptionOf(e.Field)}: {InOptions(e.Sentence)}");
+                // A script that asked for JSON reads the error document on standard output too, as a batch line gives it.
+                if (pr.GetValue(json)) output.WriteLine(ResultDocument.Error(null, pr.GetValue(id), errors));
                 return ExitCodes.BadInput;
             }
             if (pr.GetValue(json)) output.WriteLine(ResultDocument.Line(result, explain: true));

@@ -154,7 +154,8 @@ internal static class ResultDocument
             w.WriteStartObject();
             if (line is { } n) w.WriteNumber("line", n);
             if (id is not null) w.WriteString("id", id);
-            w.WriteString("error", string.Join("; ", errors.Select(e => e.ToString())));
+            // One line of every error, each without its own full stop but the last ("… 1.79; sg: …", not "1.79.; sg").
+            w.WriteString("error", string.Join("; ", errors.Select(e => e.ToString().TrimEnd('.'))) + ".");
             w.WriteStartArray("errors");
             foreach (var e in errors)
             {

@@ -530,6 +530,23 @@ public class IdentifyCommandTests
     }
 
     [Fact]
+    public void With_json_a_stone_that_cannot_be_read_gives_the_error_document_on_standard_output()
+    {
+        // A script reading standard output had found nothing there (the errors went to standard error only).
+        using var run = new CommandRun();
+        var (exit, output, error) = Identify(run, "--json", "--id", "r1", "--sg", "50", "--spot", "1.9");
+        Assert.Equal(3, exit);
+        Assert.Contains("--sg: specific gravity is 50", error, StringComparison.Ordinal);
+        using var doc = JsonDocument.Parse(output);
+        Assert.Equal("r1", doc.RootElement.GetProperty("id").GetString());
+        Assert.False(doc.RootElement.TryGetProperty("line", out _));
+        Assert.Equal(["refractometer.spot", "sg"], doc.RootElement.GetProperty("errors").EnumerateArray().Select(e => e.GetProperty("field").GetString()));
+        // Every error in one line, each without its own full stop but the last.
+        Assert.Equal("refractometer.spot: spot reading is 1.9; allowed: 1.3 to 1.79; sg: specific gravity is 50; allowed: 0.5 to 25.",
+            doc.RootElement.GetProperty("error").GetString());
+    }
+
+    [Fact]
     public void Fifty_candidates_are_allowed()
     {
         using var run = new CommandRun();
