@@ -64,7 +64,7 @@ public sealed class BadValueMatrixTests(ITestOutputHelper log) : IDisposable
             ["calc reflectance"] = ["calc", "reflectance", "--n2", "1.544"],
             ["calc brewster"] = ["calc", "brewster", "--index", "1.544"],
             ["calc prism"] = ["calc", "prism", "--apex", "60", "--deviation", "40"],
-            ["calc dispersion"] = ["calc", "dispersion", "--reading", "1.548", "--wavelength", "486.1", "--nd", "1.544", "--g-minus-b", "0.008"],
+            ["calc dispersion"] = ["calc", "dispersion", "--reading", "1.548", "--wavelength", "486.1", "--g-minus-b", "0.008"],
             ["calc indicatrix"] = ["calc", "indicatrix", "--omega", "1.544", "--epsilon", "1.553"],
             ["calc sg"] = ["calc", "sg", "--in-air", "1.0", "--in-water", "0.62"],
             ["calc carats"] = ["calc", "carats", "--carats", "1"],

@@ -16,7 +16,7 @@ public static class AbbeNumber
         QuantityOutOfRangeException.ThrowIfOutside("index nC", indexC, RefractiveIndex.Minimum, RefractiveIndex.Maximum);
         QuantityOutOfRangeException.ThrowIfOutside("index nF", indexF, RefractiveIndex.Minimum, RefractiveIndex.Maximum);
         if (!(indexF > indexC))
-            throw new QuantityOutOfRangeException("index nF", indexF, FormattableString.Invariant($"above nC ({indexC}) and at most 4"));
+            throw new QuantityOutOfRangeException("index nF", indexF, FormattableString.Invariant($"above nC ({indexC:0.0000}) and at most 4 (an index that rises with wavelength is no normal dispersion)"));
         return (indexD - 1) / (indexF - indexC);
     }
 

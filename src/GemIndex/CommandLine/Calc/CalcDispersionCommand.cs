@@ -9,7 +9,7 @@ namespace GemIndex.Cli.CommandLine.Calc;
 
 /// <summary>
 /// <c>calc dispersion</c>: fit a Cauchy or Sellmeier model to indices at several wavelengths (coefficients,
-/// residuals, nD, Abbe number, nG − nB); or convert a reading at another wavelength to 589.3 nm from nD and nG − nB.
+/// residuals, nD, Abbe number, nG − nB); or convert a reading at another wavelength to 589.3 nm from nG − nB.
 /// </summary>
 internal static class CalcDispersionCommand
 {
@@ -24,8 +24,7 @@ internal static class CalcDispersionCommand
         public bool ThroughEveryPoint => Points.Length == Coefficients.Length;
     }
 
-    internal sealed record ConversionResult(double Reading, double ReadAtNanometres, double IndexAtSodiumD, double GMinusB,
-        double ConvertedIndex, double ConvertedToNanometres);
+    internal sealed record ConversionResult(double Reading, double ReadAtNanometres, double GMinusB, double ConvertedIndex, double ConvertedToNanometres);
 
     public static Command Create()
     {
@@ -40,9 +39,8 @@ internal static class CalcDispersionCommand
         });
         var reading = CalcOptions.Number("--reading", "An index read at --wavelength (no unit): converts it to 589.3 nm");
         var wavelength = CalcOptions.Number("--wavelength", "Wavelength of --reading, in nm");
-        var indexD = CalcOptions.Number("--nd", "The material's index at 589.3 nm (no unit), for the conversion");
         var gMinusB = CalcOptions.Number("--g-minus-b", "The material's dispersion nG − nB (no unit), for the conversion");
-        return CalcBuilder.Command("dispersion", "Fit a dispersion model to indices at several wavelengths, or convert a reading to 589.3 nm", [points, model, terms, reading, wavelength, indexD, gMinusB], pr =>
+        return CalcBuilder.Command("dispersion", "Fit a dispersion model to indices at several wavelengths, or convert a reading to 589.3 nm", [points, model, terms, reading, wavelength, gMinusB], pr =>
         {
             bool fit = pr.GetValue(points) is { Length: > 0 }, convert = pr.GetValue(reading) is not null;
             if (fit == convert) throw Input("give either --point pairs (to fit a model) or --reading (to convert it to 589.3 nm)");
@@ -53,9 +51,9 @@ internal static class CalcDispersionCommand
             }
             else
             {
-                ConversionResult result = Convert(pr.GetValue(reading)!.Value, Required(pr, wavelength), Required(pr, indexD), Required(pr, gMinusB));
+                ConversionResult result = Convert(pr.GetValue(reading)!.Value, Required(pr, wavelength), Required(pr, gMinusB));
                 return CalcAnswer.Of(result, (output, _) => output.WriteLine($"{Index(result.Reading)} {NoUnit} at {Nanometres(result.ReadAtNanometres)} → {Index(result.ConvertedIndex)} {NoUnit} " +
-                    $"at {Nanometres(result.ConvertedToNanometres)} (Cauchy model from nD {Index(result.IndexAtSodiumD)}, nG − nB {Index(result.GMinusB)})"));
+                    $"at {Nanometres(result.ConvertedToNanometres)} (Cauchy model of dispersion nG − nB {Index(result.GMinusB)})"));
             }
         });
     }
@@ -92,13 +90,17 @@ internal static class CalcDispersionCommand
         return new DispersionResult(name, coefficients, rows, rms, indexD, abbe, gb);
     }
 
-    private static ConversionResult Convert(double reading, double nanometres, double indexD, double gMinusB)
+    /// <summary>
+    /// The reading moved to 589.3 nm along a Cauchy curve of the material's nG − nB. The shift depends on the curve's slope
+    /// alone, not on its level, so the material's nD is not asked for (it had been required and then not used).
+    /// </summary>
+    private static ConversionResult Convert(double reading, double nanometres, double gMinusB)
     {
         var n = Named("--reading", () => new RefractiveIndex(reading));
         Wavelength readAt = Named("--wavelength", () => Wavelength.FromNanometres(nanometres));
-        CauchyModel model = Named("--nd, --g-minus-b", () => CauchyModel.FromIndexAndDispersion(new RefractiveIndex(indexD), gMinusB));
+        CauchyModel model = Named("--g-minus-b", () => CauchyModel.FromIndexAndDispersion(n, gMinusB));
         RefractiveIndex converted = Named("--reading, --wavelength", () => ReadingConversion.ToSodiumD(n, readAt, model));
-        return new ConversionResult(n.Value, readAt.Nanometres, indexD, gMinusB, converted.Value, ReferenceWavelengths.D.Nanometres);
+        return new ConversionResult(n.Value, readAt.Nanometres, gMinusB, converted.Value, ReferenceWavelengths.D.Nanometres);
     }
 
     private static void Write(TextWriter output, DispersionResult r)

@@ -20,7 +20,7 @@ public class AbbeNumberTests
 
     [Fact]
     public void An_nF_not_above_nC_is_refused() =>
-        OutOfRangeAssert.Throws(() => AbbeNumber.FromIndices(1.5, 1.50, 1.51), "index nF", "above nC (1.51)");
+        OutOfRangeAssert.Throws(() => AbbeNumber.FromIndices(1.5, 1.50, 1.51), "index nF", "above nC (1.5100)");
 
     [Fact]
     public void An_impossible_index_is_refused() =>

@@ -43,9 +43,23 @@ public class CalcDispersionCommandTests
     }
 
     [Fact]
+    public void A_conversion_depends_on_the_dispersion_alone_and_asks_no_nD()
+    {
+        // Corundum-like nG − nB 0.018 (from memory): a reading of 1.7750 in blue light moves by the Cauchy curve's slope,
+        // B·(1/λ² − 1/λD²) with B = 0.018 / (1/0.4308² − 1/0.6867²) µm², whatever the material's level. The option --nd had
+        // been required and then not used.
+        double b = 0.018 / (1 / (0.4308 * 0.4308) - 1 / (0.6867 * 0.6867));
+        double expected = 1.7750 - b * (1 / (0.4861 * 0.4861) - 1 / (0.5893 * 0.5893));
+        Assert.Equal(expected, Json("dispersion", "--reading", "1.7750", "--wavelength", "486.1", "--g-minus-b", "0.018").Number("converted_index"), 1e-4);
+        var (exit, _, error) = Text("dispersion", "--reading", "1.7750", "--wavelength", "486.1", "--nd", "1.762", "--g-minus-b", "0.018");
+        Assert.NotEqual(0, exit);
+        Assert.Contains("'--nd'", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_reading_at_589_3_nm_converts_to_itself()
     {
-        var result = Json("dispersion", "--reading", "1.7700", "--wavelength", "589.3", "--nd", "1.768", "--g-minus-b", "0.018");
+        var result = Json("dispersion", "--reading", "1.7700", "--wavelength", "589.3", "--g-minus-b", "0.018");
         Assert.Equal(1.77, result.Number("converted_index"), 1e-9);
     }
 
@@ -53,10 +67,10 @@ public class CalcDispersionCommandTests
     public void A_reading_in_blue_light_converts_to_a_lower_index_at_589_3_nm()
     {
         // Normal dispersion: n falls as wavelength rises (DOMAIN.md §4).
-        var (exit, output, _) = Text("dispersion", "--reading", "1.7750", "--wavelength", "486.1", "--nd", "1.762", "--g-minus-b", "0.018");
+        var (exit, output, _) = Text("dispersion", "--reading", "1.7750", "--wavelength", "486.1", "--g-minus-b", "0.018");
         Assert.Equal(0, exit);
         Assert.Contains("1.7750 (no unit) at 486.1 nm →", output, StringComparison.Ordinal);
-        var result = Json("dispersion", "--reading", "1.7750", "--wavelength", "486.1", "--nd", "1.762", "--g-minus-b", "0.018");
+        var result = Json("dispersion", "--reading", "1.7750", "--wavelength", "486.1", "--g-minus-b", "0.018");
         Assert.True(result.Number("converted_index") < 1.775);
     }
 
