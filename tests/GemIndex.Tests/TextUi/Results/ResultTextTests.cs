@@ -83,6 +83,12 @@ public class ResultTextTests
         Assert.Equal("  synthetic 40%, natural 35%, treated 18%", lead[1]);
         Assert.Equal("  These tests cannot separate synthetic, natural and treated corundum: refer a valuable stone to a qualified laboratory.", lead[2]);
         Assert.Equal("or spinel 7%", lead[3]);
+        // Shares that round up together are shown rounded down: 53.6, 35.6 and 10.8 % had read 54, 36 and 11 %, 101 %.
+        IdentificationResult split = CorundumAnswer(null) with
+        {
+            Species = [new SpeciesResult { Species = "corundum", Confidence = 1.0, Origins = new Dictionary<OriginClass, double> { [OriginClass.Treated] = 0.536, [OriginClass.Synthetic] = 0.356, [OriginClass.Natural] = 0.108 } }],
+        };
+        Assert.Equal("  treated 53%, synthetic 35%, natural 10%", ResultText.Lead(split)[1]);
     }
 
     [Theory]
