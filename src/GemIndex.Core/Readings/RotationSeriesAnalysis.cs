@@ -69,8 +69,16 @@ public static class RotationSeriesAnalysis
     private static List<ShadowEdgeStep> LowEdgesOnly(List<ShadowEdgeStep> s, List<ShadowEdgeStep> both, double band)
     {
         double lowestHigh = both.Min(x => x.High!.Value);
-        return [.. s.Where(x => x.High is null && x.Low < lowestHigh - band)];
+        return [.. s.Where(x => x.High is null && OneEdgeIsTheLow(x.Low, lowestHigh, band))];
     }
+
+    /// <summary>
+    /// Whether a step read with one edge, among steps that read two, read its low edge (the high one unseen): its edge
+    /// lies below every high edge read (<paramref name="lowestHighRead"/>) by more than <paramref name="band"/> (the
+    /// constant-edge band, <see cref="ConstantBandSigmas"/> σ); otherwise the two edges meet there. The one rule for
+    /// the analysis and the edge plot.
+    /// </summary>
+    public static bool OneEdgeIsTheLow(double edge, double lowestHighRead, double band) => edge < lowestHighRead - band;
 
     /// <summary>
     /// The readings of a two-edge series as each doubly refractive character would give them, whatever the constant-edge

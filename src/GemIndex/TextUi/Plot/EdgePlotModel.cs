@@ -1,3 +1,4 @@
+using GemIndex.Core.Readings;
 using GemIndex.Data.Batch;
 
 namespace GemIndex.Cli.TextUi.Plot;
@@ -16,18 +17,38 @@ internal sealed class EdgePlotModel(IReadOnlyList<EdgeReadingEntry> steps, doubl
     public IReadOnlyList<(double Rotation, double Index)> High { get; } =
         [.. steps.Where(s => s.High is not null).OrderBy(s => s.RotationDeg).Select(s => (s.RotationDeg, s.High!.Value))];
 
-    /// <summary>Steps whose two edges were read as one value (they meet there: one mark stands for both).</summary>
+    /// <summary>
+    /// Steps whose two edges were read as one value, or read with one edge at the level of the other steps' high edges
+    /// (they meet there: one mark stands for both; a tourmaline's single edge where ω and ε' meet had been drawn as a high
+    /// edge above the liquid).
+    /// </summary>
     public IReadOnlyList<(double Rotation, double Index)> Meeting { get; } =
-        [.. steps.Where(s => s.High is { } h && Math.Abs(h - s.Low) < 0.0005).OrderBy(s => s.RotationDeg).Select(s => (s.RotationDeg, s.Low))];
+        [.. steps.Where(s => s.High is { } h ? Math.Abs(h - s.Low) < 0.0005 : LowestHigh(steps) is { } lowest && !IsLowOnly(s, lowest))
+            .OrderBy(s => s.RotationDeg).Select(s => (s.RotationDeg, s.Low))];
 
     public bool IsEmpty => Low.Count == 0;
 
-    /// <summary>Steps with no high edge while others read one: a high edge unseen there, drawn at the liquid's limit.</summary>
-    public IReadOnlyList<double> HighUnseen { get; } = steps.Any(s => s.High is not null)
-        ? [.. steps.Where(s => s.High is null).Select(s => s.RotationDeg).Order()] : [];
+    /// <summary>
+    /// Steps with only their low edge while others read a high one (<see cref="RotationSeriesAnalysis.OneEdgeIsTheLow"/>):
+    /// a high edge unseen there.
+    /// </summary>
+    public IReadOnlyList<double> HighUnseen { get; } = LowestHigh(steps) is { } lowestHigh
+        ? [.. steps.Where(s => s.High is null && IsLowOnly(s, lowestHigh)).Select(s => s.RotationDeg).Order()] : [];
 
-    /// <summary>The liquid's limit, shown when a high edge went unseen (<see cref="HighUnseen"/>); else null.</summary>
-    public double? LiquidLimit => HighUnseen.Count > 0 ? liquidLimit ?? Core.Bench.BenchDefaults.LiquidLimit : null;
+    /// <summary>
+    /// The liquid's limit, shown (and the unseen high edges drawn at it) when the liquid hid them: the highest high edge
+    /// read lies within <see cref="RotationSeriesResult.HiddenHighReach"/> of it; else null (far below it, an unseen high
+    /// edge was missed, and the window kept to the readings).
+    /// </summary>
+    public double? LiquidLimit => HighUnseen.Count > 0 && (liquidLimit ?? Core.Bench.BenchDefaults.LiquidLimit) is var limit
+        && High.Max(p => p.Index) >= limit - RotationSeriesResult.HiddenHighReach ? limit : null;
+
+    private static double? LowestHigh(IReadOnlyList<EdgeReadingEntry> steps) =>
+        steps.Any(s => s.High is not null) ? steps.Where(s => s.High is not null).Min(s => s.High!.Value) : null;
+
+    /// <summary>A step of one edge read at the facet method's default precision: the low edge, or where the edges meet.</summary>
+    private static bool IsLowOnly(EdgeReadingEntry s, double lowestHigh) =>
+        RotationSeriesAnalysis.OneEdgeIsTheLow(s.Low, lowestHigh, RotationSeriesAnalysis.ConstantBandSigmas * Core.Bench.BenchDefaults.FacetPrecision);
 
     /// <summary>The high edge's runs of consecutive steps that read it: its line is not drawn across a step that did not.</summary>
     public IReadOnlyList<IReadOnlyList<(double Rotation, double Index)>> HighRuns { get; } = Runs(steps);
@@ -36,9 +57,12 @@ internal sealed class EdgePlotModel(IReadOnlyList<EdgeReadingEntry> steps, doubl
     {
         var runs = new List<IReadOnlyList<(double Rotation, double Index)>>();
         var run = new List<(double Rotation, double Index)>();
+        double? lowestHigh = LowestHigh(steps);
         foreach (var s in steps.OrderBy(s => s.RotationDeg))
         {
             if (s.High is { } h) { run.Add((s.RotationDeg, h)); continue; }
+            // Where the two edges meet, the one edge is the high edge's too: its line goes on through it.
+            if (lowestHigh is { } lowest && !IsLowOnly(s, lowest)) { run.Add((s.RotationDeg, s.Low)); continue; }
             if (run.Count > 0) runs.Add(run);
             run = [];
         }

@@ -38,4 +38,23 @@ public class EdgePlotModelTests
         Assert.Empty(single.HighUnseen);
         Assert.Null(single.LiquidLimit);
     }
+
+    [Fact]
+    public void A_single_edge_where_the_edges_meet_is_drawn_as_both_and_keeps_the_window_to_the_readings()
+    {
+        // A tourmaline-like series (ω 1.644, ε 1.624, handbook values from memory): at 90° the two edges meet and one edge is
+        // read. It had been drawn as a high edge above a 1.79 liquid, the window stretched to 1.79 and the 0.020 spread
+        // squashed into two rows.
+        var model = new EdgePlotModel([new(0, 1.624, 1.644), new(30, 1.628, 1.644), new(60, 1.637, 1.644), new(90, 1.644, null),
+            new(120, 1.637, 1.644), new(150, 1.628, 1.644)], 1.79);
+        Assert.Empty(model.HighUnseen);
+        Assert.Null(model.LiquidLimit);
+        Assert.Contains((90.0, 1.644), model.Meeting);
+        Assert.Equal([6], model.HighRuns.Select(r => r.Count));   // the high edge's line goes on through the meeting
+        Assert.True(model.Top < 1.66, $"top {model.Top}");
+        // A high edge unseen far below the liquid (1.85) was missed, not hidden: no liquid line, the window kept to the readings.
+        var missed = new EdgePlotModel([new(0, 1.757, 1.762), new(45, 1.757, 1.782), new(90, 1.757, null), new(135, 1.757, 1.785)], 1.85);
+        Assert.Equal([90.0], missed.HighUnseen);
+        Assert.Null(missed.LiquidLimit);
+    }
 }
