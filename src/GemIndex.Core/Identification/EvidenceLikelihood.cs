@@ -318,8 +318,12 @@ public static class EvidenceLikelihood
     private static double[] NewDispersionRow(DispersionStrength expected)
     {
         var row = new double[5];
-        double sum = 0;
-        for (int i = 0; i < 5; i++) sum += row[i] = DispersionSlip[Math.Min(3, Math.Abs(i - (int)expected))];
+        for (int i = 0; i < 5; i++) row[i] = DispersionSlip[Math.Min(3, Math.Abs(i - (int)expected))];
+        // A weak fire is as often written "none" as "weak" by eye: body colour and a small stone mask it (common practice;
+        // a ruby or a quartz written "none" had been held slightly against). The two share what they hold together.
+        if (expected == DispersionStrength.Weak)
+            row[(int)DispersionStrength.None] = row[(int)DispersionStrength.Weak] = (row[(int)DispersionStrength.None] + row[(int)DispersionStrength.Weak]) / 2;
+        double sum = row.Sum();
         for (int i = 0; i < 5; i++) row[i] /= sum;
         return row;
     }

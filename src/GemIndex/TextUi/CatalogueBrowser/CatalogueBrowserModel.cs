@@ -39,8 +39,11 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
         }
         if (Numbers(q) is { } numbers)
         {
+            // Nearest first; among entries whose ranges hold every value, the commoner at a bench first, then the centred
+            // (spinel, 1.712–1.736, had come after two screens of rarer entries for its textbook 1.718).
             IEnumerable<Material> Near(double? index, double? sg) =>
-                catalogue.Select(m => (m, Distance: Distance(m, index, sg))).Where(p => p.Distance is not null).OrderBy(p => p.Distance).Select(p => p.m);
+                catalogue.Select(m => (m, Distance: Distance(m, index, sg))).Where(p => p.Distance is not null)
+                    .OrderBy(p => p.Distance!.Value.Outside).ThenBy(p => p.m.Frequency).ThenBy(p => p.Distance!.Value.Middle).Select(p => p.m);
             double x = numbers[0];
             // Two numbers are an index and an SG. One below the refractometer's scale (1.30) can only be an SG (amber's
             // 1.08); one from there to 2.5 is read as an index first, then as an SG (opal's 2.15 after the index 2.15).
@@ -76,23 +79,30 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
     /// How far the typed values are from an entry, in tolerances (0 inside a range; then the distance to the range's
     /// middle breaks ties), or null when a value lies beyond its tolerance.
     /// </summary>
-    private static double? Distance(Material m, double? index, double? sg)
+    private static (double Outside, double Middle)? Distance(Material m, double? index, double? sg)
     {
-        double total = 0;
+        (double Outside, double Middle) total = (0, 0);
         if (index is { } n)
         {
             // Within the span of the entry's indices; closeness to the nearer of its lowest and highest index (an edge as read).
             if (Away(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum, n, IndexTolerance) is null) return null;
-            total += Math.Min(Closeness(m.Indices.Lowest.Minimum, m.Indices.Lowest.Maximum, n, IndexTolerance),
-                Closeness(m.Indices.Highest.Minimum, m.Indices.Highest.Maximum, n, IndexTolerance));
+            var lowest = Parts(m.Indices.Lowest.Minimum, m.Indices.Lowest.Maximum, n, IndexTolerance);
+            var highest = Parts(m.Indices.Highest.Minimum, m.Indices.Highest.Maximum, n, IndexTolerance);
+            var nearer = lowest.Outside + lowest.Middle <= highest.Outside + highest.Middle ? lowest : highest;
+            total = (total.Outside + nearer.Outside, total.Middle + nearer.Middle);
         }
         if (sg is { } g)
         {
-            if (Away(m.SpecificGravity.Minimum, m.SpecificGravity.Maximum, g, SgTolerance) is not { } d) return null;
-            total += d;
+            if (Away(m.SpecificGravity.Minimum, m.SpecificGravity.Maximum, g, SgTolerance) is null) return null;
+            var parts = Parts(m.SpecificGravity.Minimum, m.SpecificGravity.Maximum, g, SgTolerance);
+            total = (total.Outside + parts.Outside, total.Middle + parts.Middle);
         }
         return total;
     }
+
+    /// <summary><see cref="Closeness"/> in its two parts: tolerances outside the range, and the tie-breaking hundredths from its middle.</summary>
+    private static (double Outside, double Middle) Parts(double low, double high, double x, double tolerance) =>
+        (Outside(low, high, x) / tolerance, Math.Abs(x - (low + high) / 2) / (tolerance * 100));
 
     private static double? Away(double low, double high, double x, double tolerance) =>
         Outside(low, high, x) > tolerance ? null : Closeness(low, high, x, tolerance);

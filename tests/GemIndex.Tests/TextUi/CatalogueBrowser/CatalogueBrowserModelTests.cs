@@ -131,4 +131,25 @@ public class CatalogueBrowserModelTests
         model.Search("1.544");  // quartz by its index first
         Assert.Equal("quartz", model.Shown[0].Name);
     }
+
+    [Fact]
+    public void Among_entries_that_hold_an_index_the_commoner_at_a_bench_comes_first()
+    {
+        // Spinel 1.712–1.736 (common) beside two rarer entries with an index near 1.718 (taaffeite-like 1.717–1.724 and
+        // kyanite-like α 1.710–1.718, from memory): the textbook spinel index 1.718 had listed spinel after two screens.
+        var spinel = TestMaterials.All[0] with
+        {
+            Name = "red spinel", Species = "spinel", Variety = "red spinel", Frequency = GemIndex.Core.Catalogue.BenchFrequency.Common,
+            Indices = GemIndex.Core.Catalogue.OpticalIndices.SingleIndex(new(1.712, 1.736)),
+        };
+        var taaffeite = spinel with { Name = "taaffeite", Species = "taaffeite", Variety = "taaffeite", Frequency = GemIndex.Core.Catalogue.BenchFrequency.Rare,
+            Indices = GemIndex.Core.Catalogue.OpticalIndices.Uniaxial(new(1.721, 1.724), new(1.717, 1.720)) };
+        var kyanite = spinel with { Name = "kyanite", Species = "kyanite", Variety = "kyanite", Frequency = GemIndex.Core.Catalogue.BenchFrequency.Occasional,
+            Indices = GemIndex.Core.Catalogue.OpticalIndices.Uniaxial(new(1.710, 1.718), new(1.727, 1.734)) };
+        var model = new CatalogueBrowserModel([taaffeite, kyanite, spinel]);
+        model.Search("1.718");
+        Assert.Equal(["red spinel", "kyanite", "taaffeite"], model.Shown.Select(m => m.Name));
+        model.Search("1.709");                                       // outside them all: nearness alone
+        Assert.Equal("kyanite", model.Shown[0].Name);
+    }
 }
