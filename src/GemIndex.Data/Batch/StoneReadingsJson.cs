@@ -73,6 +73,13 @@ public static class StoneReadingsJson
         private void NoteUnknown(JsonElement obj, string path, string kind)
         {
             string[] known = Names[kind];
+            // A name given twice: JSON keeps the last silently ("sg": 2.65, "sg": 3.52 read as a diamond), so it is refused.
+            foreach (var twice in obj.EnumerateObject().GroupBy(p => p.Name, StringComparer.Ordinal).Where(g => g.Count() > 1))
+            {
+                string name = SafeName(twice.First());
+                errors.Add(new BenchFieldError(path.Length == 0 ? name : $"{path}.{name}", string.Join(", ", twice.Select(p => BenchText.Shown(p.Value.GetRawText()))),
+                    "one value", $"is given {twice.Count()} times; give it once."));
+            }
             foreach (var property in obj.EnumerateObject())
             {
                 if (known.Contains(property.Name, StringComparer.Ordinal)) continue;

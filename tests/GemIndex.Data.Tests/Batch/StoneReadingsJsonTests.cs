@@ -108,6 +108,10 @@ public class StoneReadingsJsonTests
     [InlineData("""{"id":"x","absorption_nm":"694"}""", "absorption_nm")]
     [InlineData("""{"id":"x","colour":""}""", "colour")]
     [InlineData("""{"id":"x","colour":"\ud800"}""", "colour")]
+    // A name given twice: JSON keeps the last value silently (an SG of 2.65 then 3.52 had been ranked as a diamond).
+    [InlineData("""{"id":"x","sg":2.65,"sg":3.52}""", "sg")]
+    [InlineData("""{"id":"x","sg":{"air_ct":1.5,"air_ct":1.6,"water_ct":1.0}}""", "sg.air_ct")]
+    [InlineData("""{"id":"x","refractometer":{"readings":[{"rotation_deg":0,"low":1.544,"low":1.545}]}}""", "refractometer.readings[0].low")]
     public void Each_bad_field_is_named(string line, string field)
     {
         Assert.Equal([field], Errors(line));
