@@ -24,6 +24,8 @@ internal static class CatalogueCommand
             string text = r.Tokens.Count == 1 ? r.Tokens[0].Value : "";
             if (text.Length == 0) r.AddError("--catalogue-dir: empty; give a folder, or leave the option out");
             else if (File.Exists(text)) r.AddError($"--catalogue-dir: '{BenchText.Shown(text)}' is a file, not a folder");
+            // A mistyped folder had been created silently, with a catalogue built into it.
+            else if (!Directory.Exists(text)) r.AddError($"--catalogue-dir: no folder '{BenchText.Shown(text)}'; create it first, or check the path");
         });
         return option;
     }

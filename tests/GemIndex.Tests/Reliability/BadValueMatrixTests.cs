@@ -34,7 +34,7 @@ public sealed class BadValueMatrixTests(ITestOutputHelper log) : IDisposable
     [Fact]
     public void Every_bad_value_of_every_option_is_a_clear_error()
     {
-        string catalogueDir = Path.Combine(_folder.Path, "catalogue");
+        string catalogueDir = Directory.CreateDirectory(Path.Combine(_folder.Path, "catalogue")).FullName;   // it must exist
         string workbook = _folder.Workbook("wb.db");
         string batch = _folder.File("stones.jsonl");
         File.WriteAllText(batch, """{"id":"lot 3 / 1","sg":2.65,"refractometer":{"readings":[{"rotation_deg":0,"low":1.544,"high":1.553}]}}""" + "\n");
@@ -90,7 +90,7 @@ public sealed class BadValueMatrixTests(ITestOutputHelper log) : IDisposable
             ["--point"] = ["", "abc", "NaN:NaN", "-1:1.5"],
             ["--facet"] = ["", "abc", "NaN,0,0"],
             ["--stone"] = ["", "no such stone"],
-            ["--catalogue-dir"] = ["", aFile],
+            ["--catalogue-dir"] = ["", aFile, Path.Combine(_folder.Path, "no-such-folder")],
             ["--source"] = ["", aFile, missing],
             ["--readings"] = ["", _folder.Path, missing],
             ["--batch"] = ["", _folder.Path, missing],
