@@ -55,6 +55,8 @@ public static class BenchField
     public const string ThermalProbe = "thermal_probe";
     /// <summary>Electrical conductivity tester.</summary>
     public const string Electrical = "electrical";
+    /// <summary>A reflectance meter's reading, percent of the light reflected at normal incidence (<see cref="Observations.ReflectanceReading"/>).</summary>
+    public const string Reflectance = "reflectance_pct";
     /// <summary>Long-wave UV fluorescence.</summary>
     public const string UvLong = "uv_long";
     /// <summary>Short-wave UV fluorescence.</summary>
@@ -76,7 +78,7 @@ public static class BenchField
     public static IReadOnlyList<string> All { get; } =
     [
         Id, Method, Spot, OverLimit, LiquidLimit, LightNm, Precision, CalibrationOffset, Sg, AirCt, WaterCt, WaterC, HeavyLiquids,
-        Polariscope, Pleochroism, Dispersion, IndexAtB, IndexAtG, ThermalProbe, Electrical, UvLong, UvShort, Absorption, Colour,
+        Polariscope, Pleochroism, Dispersion, IndexAtB, IndexAtG, ThermalProbe, Electrical, Reflectance, UvLong, UvShort, Absorption, Colour,
         Cut, Transparency, FeaturesPresent, FeaturesAbsent,
     ];
 

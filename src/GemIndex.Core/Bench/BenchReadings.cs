@@ -63,6 +63,7 @@ public sealed record BenchReadings
         DropUnless(s.Dispersion is not null, BenchField.Dispersion, BenchField.IndexAtB, BenchField.IndexAtG);
         DropUnless(s.ThermalProbe is not null, BenchField.ThermalProbe);
         DropUnless(s.Electrical is not null, BenchField.Electrical);
+        DropUnless(s.Reflectance is not null, BenchField.Reflectance);
         DropUnless(s.UvLong is not null, BenchField.UvLong);
         DropUnless(s.UvShort is not null, BenchField.UvShort);
         DropUnless(s.AbsorptionLinesNanometres is not null, BenchField.Absorption);

@@ -19,6 +19,8 @@ public enum BenchTest
     ThermalProbe,
     /// <summary>Electrical conductivity tester.</summary>
     Electrical,
+    /// <summary>Reflectance meter.</summary>
+    Reflectance,
     /// <summary>Long-wave UV lamp.</summary>
     UvLong,
     /// <summary>Short-wave UV lamp.</summary>

@@ -16,6 +16,7 @@ public static class BenchTestWords
         (BenchTest.Dispersion, BenchField.Dispersion, "dispersion (fire)"),
         (BenchTest.ThermalProbe, BenchField.ThermalProbe, "thermal probe"),
         (BenchTest.Electrical, BenchField.Electrical, "electrical conductivity tester"),
+        (BenchTest.Reflectance, BenchField.Reflectance, "reflectance meter"),
         (BenchTest.UvLong, BenchField.UvLong, "long-wave UV lamp (365 nm)"),
         (BenchTest.UvShort, BenchField.UvShort, "short-wave UV lamp (254 nm)"),
         (BenchTest.Absorption, BenchField.Absorption, "hand spectroscope (absorption lines)"),

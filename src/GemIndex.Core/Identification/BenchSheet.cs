@@ -37,6 +37,9 @@ public sealed record BenchSheet
     /// <summary>Electrical conductivity tester.</summary>
     public ElectricalResult? Electrical { get; init; }
 
+    /// <summary>A reflectance meter's reading, with the index it gives.</summary>
+    public ReflectanceReading? Reflectance { get; init; }
+
     /// <summary>Long-wave UV (365 nm) fluorescence.</summary>
     public FluorescenceStrength? UvLong { get; init; }
 
@@ -60,7 +63,7 @@ public sealed record BenchSheet
 
     /// <summary>True when the sheet holds at least one test's reading (colour and magnification aside).</summary>
     public bool HasTestReadings => Refractometer is not null || SpecificGravity is not null || HeavyLiquids.Count > 0 || Polariscope is not null
-        || Pleochroism is not null || Dispersion is not null || ThermalProbe is not null || Electrical is not null || UvLong is not null
+        || Pleochroism is not null || Dispersion is not null || ThermalProbe is not null || Electrical is not null || Reflectance is not null || UvLong is not null
         || UvShort is not null || AbsorptionLinesNanometres is not null;
 
     /// <summary>

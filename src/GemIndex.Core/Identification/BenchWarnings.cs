@@ -311,14 +311,15 @@ public static class BenchWarnings
         return $"{Capital(leading.Species)} is also found {string.Join(" and ", hidden)}: {looked}{unseen}; for a valuable stone refer it to a qualified laboratory.";
     }
 
-    /// <summary>"SG, dispersion, the thermal probe or a reflectance or prism method": the tests that go beyond a refractometer's limit, leaving out those already done.</summary>
+    /// <summary>"SG, dispersion, the thermal probe or a reflectance meter (or a prism method)": the tests that go beyond a refractometer's limit, leaving out those already done.</summary>
     private static string OverLimitHelp(BenchSheet s)
     {
         List<string> help = [];
         if (s.SpecificGravity is null) help.Add("SG");   // heavy liquids bound it; a measured SG still parts diamond, YAG and CZ
         if (s.Dispersion is null) help.Add("dispersion");
         if (s.ThermalProbe is null) help.Add("the thermal probe");
-        help.Add("a reflectance or prism method");
+        // The reflectance meter, once read, is done; the prism method is not a reading the tool takes (calc prism works it out).
+        help.Add(s.Reflectance is null ? "a reflectance meter (or a prism method)" : "a prism method");
         return Capital(Listed(help, "or"));
     }
 

@@ -65,6 +65,7 @@ public static class EvidenceLikelihood
         if (s.Dispersion is { } d && !opaque.Fire) Dispersion(material, d, acc);
         if (s.ThermalProbe is { } t) Thermal(material, t, acc);
         if (s.Electrical is { } e) Electrical(material, e, acc);
+        if (s.Reflectance is { } reflectance) Reflectance(material, reflectance, acc);
         if (s.UvLong is { } ul) Fluorescence(BenchField.UvLong, "long-wave UV", material.UvLong, profile.UvLong, ul, acc);
         if (s.UvShort is { } us) Fluorescence(BenchField.UvShort, "short-wave UV", material.UvShort, profile.UvShort, us, acc);
         if (s.AbsorptionLinesNanometres is { } lines) Absorption(profile, lines, acc);
@@ -129,6 +130,21 @@ public static class EvidenceLikelihood
     private static PropertyRange? Overlap(PropertyRange range, PropertyRange bounds) =>
         range.Maximum < bounds.Minimum || range.Minimum > bounds.Maximum ? null
             : new(Math.Max(range.Minimum, bounds.Minimum), Math.Min(range.Maximum, bounds.Maximum), "specific gravity");
+
+    /// <summary>
+    /// A reflectance meter's reading: the index it gives (with its uncertainty) against the entry's indices, lowest to
+    /// highest (the meter reads whatever direction the facet shows); not in the catalogue: the broad index density
+    /// (docs/ranking.md §2). A reading taken beside the refractometer's is a second, independent look at the index.
+    /// </summary>
+    private static void Reflectance(Material m, ReflectanceReading reading, EvidenceAccumulator acc)
+    {
+        var range = new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum);
+        double n = reading.Index.Value, sigma = reading.Index.StandardUncertainty;
+        acc.Add(BenchField.Reflectance, RangeLikelihood.Density(n, range, sigma), BroadDensities.Index,
+            acc.Fitting ? RangeLikelihood.TwoSidedTail(RangeLikelihood.StandardDeviationsOutside(n, range, sigma)) : 1, robust: true);
+        if (acc.Explaining)
+            acc.Say($"reflectance {reading.Percent.ToString("0.0", CultureInfo.InvariantCulture)} % (n about {n.ToString("0.00", CultureInfo.InvariantCulture)} ± {sigma.ToString("0.00", CultureInfo.InvariantCulture)}) {Where(n, range, sigma, "0.000")}");
+    }
 
     /// <summary>σ of a heavy liquid's density, doubled for a suspended stone (a judgement, docs/ranking.md §5, other named values).</summary>
     private const double HeavyLiquidSigma = 0.01;

@@ -25,6 +25,8 @@ public sealed record StoneReadings
     public (double NB, double NG)? DispersionIndices { get; init; }
     public string? ThermalProbe { get; init; }
     public string? Electrical { get; init; }
+    /// <summary>A reflectance meter's reading, percent.</summary>
+    public double? ReflectancePct { get; init; }
     public string? UvLong { get; init; }
     public string? UvShort { get; init; }
     /// <summary>Null: not looked; empty: looked and saw none.</summary>

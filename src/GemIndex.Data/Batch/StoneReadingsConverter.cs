@@ -26,6 +26,7 @@ public static class StoneReadingsConverter
         if (s.SgWeighing is { } w) r = r.With(BenchField.AirCt, Number(w.AirCt)).With(BenchField.WaterCt, Number(w.WaterCt)).With(BenchField.WaterC, Number(w.WaterC));
         if (s.HeavyLiquids.Count > 0) r = r.With(BenchField.HeavyLiquids, BenchSyntax.HeavyLiquids(s.HeavyLiquids.Select(h => $"{Number(h.Density)} {h.Result}")));
         if (s.DispersionIndices is { } d) r = r.With(BenchField.IndexAtB, Number(d.NB)).With(BenchField.IndexAtG, Number(d.NG));
+        r = r.With(BenchField.Reflectance, Number(s.ReflectancePct));
         r = r.With(BenchField.Polariscope, s.Polariscope).With(BenchField.Pleochroism, s.Pleochroism).With(BenchField.Dispersion, s.Dispersion)
             .With(BenchField.ThermalProbe, s.ThermalProbe).With(BenchField.Electrical, s.Electrical).With(BenchField.UvLong, s.UvLong)
             .With(BenchField.UvShort, s.UvShort).With(BenchField.Colour, s.Colour).With(BenchField.Cut, s.Cut).With(BenchField.Transparency, s.Transparency);
@@ -102,6 +103,7 @@ public static class StoneReadingsConverter
             DispersionIndices = nB is { } b && nG is { } g ? (b, g) : null,
             ThermalProbe = r.Text(BenchField.ThermalProbe),
             Electrical = r.Text(BenchField.Electrical),
+            ReflectancePct = Num(BenchField.Reflectance, r.Text(BenchField.Reflectance)),
             UvLong = r.Text(BenchField.UvLong),
             UvShort = r.Text(BenchField.UvShort),
             AbsorptionNm = lines,

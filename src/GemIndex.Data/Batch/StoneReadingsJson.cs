@@ -137,6 +137,7 @@ public static class StoneReadingsJson
             }
             foreach (string word in new[] { BenchField.Polariscope, BenchField.Pleochroism, BenchField.ThermalProbe, BenchField.Electrical, BenchField.UvLong, BenchField.UvShort, BenchField.Colour, BenchField.Cut, BenchField.Transparency })
                 r = r.With(word, Value(root, word, word));
+            r = r.With(BenchField.Reflectance, Num(root, BenchField.Reflectance, BenchField.Reflectance));
             if (Child(root, BenchField.Dispersion) is { } dispersion)
             {
                 if (dispersion.ValueKind == JsonValueKind.Object)
@@ -331,6 +332,7 @@ public static class StoneReadingsJson
             else WriteWord(w, BenchField.Dispersion, r.Dispersion);
             WriteWord(w, BenchField.ThermalProbe, r.ThermalProbe);
             WriteWord(w, BenchField.Electrical, r.Electrical);
+            if (r.ReflectancePct is { } reflectance) w.WriteNumber(BenchField.Reflectance, reflectance);
             WriteWord(w, BenchField.UvLong, r.UvLong);
             WriteWord(w, BenchField.UvShort, r.UvShort);
             if (r.AbsorptionNm is { } lines)

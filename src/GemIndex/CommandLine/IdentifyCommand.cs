@@ -32,6 +32,7 @@ internal static class IdentifyCommand
         ("--dispersion", BenchField.Dispersion, BenchWords.Choices<Core.Observations.DispersionStrength>()),
         ("--thermal-probe", BenchField.ThermalProbe, BenchWords.Choices<Core.Observations.ThermalProbeResult>()),
         ("--electrical", BenchField.Electrical, BenchWords.Choices<Core.Observations.ElectricalResult>()),
+        ("--reflectance", BenchField.Reflectance, $"A reflectance meter's reading, percent at normal incidence ({Core.Observations.ReflectanceReading.LowestPercent.ToString(CultureInfo.InvariantCulture)}–{Core.Observations.ReflectanceReading.HighestPercent.ToString(CultureInfo.InvariantCulture)}): past the refractometer's limit it parts diamond (about 17.2), cubic zirconia (13.5) and moissanite (20.4–20.9)"),
         ("--uv-long", BenchField.UvLong, BenchWords.Choices<Core.Observations.FluorescenceStrength>()),
         ("--uv-short", BenchField.UvShort, BenchWords.Choices<Core.Observations.FluorescenceStrength>()),
         ("--lines", BenchField.Absorption, "Absorption lines seen, nm, separated by spaces or commas (\"none\" if none)"),

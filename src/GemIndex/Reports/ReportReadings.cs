@@ -39,6 +39,8 @@ internal static class ReportReadings
         else AddWord(fields, BenchField.Dispersion, "Dispersion (by eye)", r.Dispersion);
         AddWord(fields, BenchField.ThermalProbe, "Thermal probe", r.ThermalProbe);
         AddWord(fields, BenchField.Electrical, "Electrical conductivity", r.Electrical);
+        if (r.ReflectancePct is { } reflectance && Reflected(reflectance) is { } n)
+            fields.Add(new("reflectance", "Reflectance (meter)", $"{ReportNumbers.Fixed(reflectance, "0.0")} % (index about {ReportNumbers.Fixed(n.Value, "0.00")} ± {ReportNumbers.Fixed(n.StandardUncertainty, "0.00")})"));
         AddWord(fields, BenchField.UvLong, "Long-wave UV (365 nm)", r.UvLong);
         AddWord(fields, BenchField.UvShort, "Short-wave UV (254 nm)", r.UvShort);
         if (r.AbsorptionNm is { } lines)
@@ -51,6 +53,13 @@ internal static class ReportReadings
         foreach (var info in Features(r.FeaturesAbsent))
             fields.Add(new($"feature_not_seen_{info.Word}", $"Looked for, not seen: {info.Name}", info.WhenNotSeen));
         return fields;
+    }
+
+    /// <summary>The index a reflectance reading gives; null for one out of range (refused on reading, so never in a report).</summary>
+    private static Core.Optics.RefractiveIndex? Reflected(double percent)
+    {
+        try { return new Core.Observations.ReflectanceReading(percent).Index; }
+        catch (Core.Quantities.QuantityOutOfRangeException) { return null; }
     }
 
     /// <summary>The vocabulary's entries for the words given (a word the vocabulary does not know was refused on reading).</summary>

@@ -16,7 +16,7 @@ internal static class WorkbookCsv
     [
         "reference", "weight_carats", "colour", "refractive_index_low", "refractive_index_high", "birefringence",
         "optic_character", "specific_gravity", "polariscope", "heavy_liquids", "pleochroism", "dispersion_by_eye",
-        "thermal_probe", "electrical", "uv_long", "uv_short", "absorption_lines_nm", "magnification_seen",
+        "thermal_probe", "electrical", "reflectance_pct", "uv_long", "uv_short", "absorption_lines_nm", "magnification_seen",
         "magnification_not_seen", "species", "species_confidence", "best_candidate", "confidence",
         "no_good_match", "high_above_liquid_limit", "refractometer_method", "refused_entries",
     ];
@@ -94,7 +94,9 @@ internal static class WorkbookCsv
             // result is an SG bound the specific_gravity column cannot hold).
             GemIndex.Core.Bench.BenchSyntax.HeavyLiquids(sheet.Readings.HeavyLiquids.Select(h => $"{ReportNumbers.Gravity(h.Density)} {h.Result}")),
             Word(sheet.Readings.Pleochroism), Word(sheet.Readings.Dispersion), Word(sheet.Readings.ThermalProbe),
-            Word(sheet.Readings.Electrical), Word(sheet.Readings.UvLong), Word(sheet.Readings.UvShort),
+            Word(sheet.Readings.Electrical),
+            sheet.Readings.ReflectancePct is { } reflectance ? ReportNumbers.Fixed(reflectance, "0.0#") : "",
+            Word(sheet.Readings.UvLong), Word(sheet.Readings.UvShort),
             sheet.Readings.AbsorptionNm is not { } lines ? "" : lines.Count == 0 ? GemIndex.Core.Bench.BenchSyntax.NoLines
                 : string.Join(" ", lines.Select(nm => nm.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture))),
             string.Join(" ", sheet.Readings.FeaturesPresent), string.Join(" ", sheet.Readings.FeaturesAbsent),

@@ -773,12 +773,14 @@ public class IdentifierTests
     {
         // Over the limit (common practice: SG, fire, the thermal probe, or a reflectance meter go beyond a refractometer).
         var over = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Facet, overLimit: true) };
-        Assert.Contains(Engine.Identify(over).Warnings, w => w.EndsWith("SG, dispersion, the thermal probe or a reflectance or prism method can go further.", StringComparison.Ordinal));
+        Assert.Contains(Engine.Identify(over).Warnings, w => w.EndsWith("SG, dispersion, the thermal probe or a reflectance meter (or a prism method) can go further.", StringComparison.Ordinal));
         var done = over with { SpecificGravity = new SpecificGravity(3.52, 0.01), ThermalProbe = ThermalProbeResult.Positive, Dispersion = DispersionObservation.ByEye(DispersionStrength.Strong) };
-        Assert.Contains(Engine.Identify(done).Warnings, w => w.EndsWith("higher. A reflectance or prism method can go further.", StringComparison.Ordinal));
+        Assert.Contains(Engine.Identify(done).Warnings, w => w.EndsWith("higher. A reflectance meter (or a prism method) can go further.", StringComparison.Ordinal));
+        // With the reflectance meter read too, only the prism method is left to offer.
+        Assert.Contains(Engine.Identify(done with { Reflectance = new ReflectanceReading(17.2) }).Warnings, w => w.EndsWith("higher. A prism method can go further.", StringComparison.Ordinal));
         // A heavy liquid only bounds the SG: a measured one is still offered (it parts diamond 3.52, YAG 4.55 and CZ 5.8, from memory).
         var sank = over with { HeavyLiquids = [new HeavyLiquidResult(new SpecificGravity(3.32), HeavyLiquidOutcome.Sinks)] };
-        Assert.Contains(Engine.Identify(sank).Warnings, w => w.EndsWith("SG, dispersion, the thermal probe or a reflectance or prism method can go further.", StringComparison.Ordinal));
+        Assert.Contains(Engine.Identify(sank).Warnings, w => w.EndsWith("SG, dispersion, the thermal probe or a reflectance meter (or a prism method) can go further.", StringComparison.Ordinal));
         // Low edges read, the high edge above the liquid: the warning says so rather than "no stone edge".
         var lowOnly = new BenchSheet { Refractometer = new RefractometerObservation(RefractometerMethod.Facet, [new ShadowEdgeStep(0, 1.780), new ShadowEdgeStep(90, 1.781)], overLimit: true) };
         Assert.Contains(Engine.Identify(lowOnly).Warnings, w => w.StartsWith("Over the limit: the high edge lies above the liquid's 1.79; only the low edge was read", StringComparison.Ordinal));

@@ -110,6 +110,7 @@ public class StoneReadingsJsonTests
     [InlineData("""{"id":"x","colour":"\ud800"}""", "colour")]
     // A name given twice: JSON keeps the last value silently (an SG of 2.65 then 3.52 had been ranked as a diamond).
     [InlineData("""{"id":"x","sg":2.65,"sg":3.52}""", "sg")]
+    [InlineData("""{"id":"x","reflectance_pct":"high"}""", "reflectance_pct")]
     [InlineData("""{"id":"x","sg":{"air_ct":1.5,"air_ct":1.6,"water_ct":1.0}}""", "sg.air_ct")]
     [InlineData("""{"id":"x","refractometer":{"readings":[{"rotation_deg":0,"low":1.544,"low":1.545}]}}""", "refractometer.readings[0].low")]
     public void Each_bad_field_is_named(string line, string field)
@@ -185,5 +186,17 @@ public class StoneReadingsJsonTests
     {
         Assert.Equal(edits, Spelling.Edits(a, b));
         Assert.Equal(edits, Spelling.Edits(b, a));
+    }
+
+    [Fact]
+    public void A_reflectance_reading_is_read_stored_and_written_back()
+    {
+        // A diamond's reflectance, 17.2 % (Fresnel at n 2.417, from memory).
+        const string line = """{"id":"d","refractometer":{"method":"facet","over_limit":true},"reflectance_pct":17.2}""";
+        StoneReadings stored = StoneReadingsJson.Parse(line);
+        Assert.Equal(17.2, stored.ReflectancePct);
+        string written = StoneReadingsJson.Write(stored);
+        Assert.Contains("\"reflectance_pct\":17.2", written, StringComparison.Ordinal);
+        Assert.Equal(17.2, StoneReadingsJson.Parse(written).ReflectancePct);
     }
 }

@@ -41,6 +41,8 @@ public class OneReadingPathTests
         S("nephrite", [], ("spot", "1.62"), ("sg", "2.95"), ("polariscope", "aggregate")),
         S("cubic zirconia", [], ("over", "yes"), ("thermal", "negative"), ("sg", "5.80"), ("dispersion", "strong")),
         S("moissanite", [], ("over", "yes"), ("thermal", "positive"), ("electrical", "conductive"), ("sg", "3.22")),
+        // A reflectance meter's reading past the limit (diamond about 17.2 %: Fresnel at n 2.417, from memory).
+        S("diamond by reflectance", [], ("over", "yes"), ("thermal", "positive"), ("reflectance", "17.2")),
         S("chrysoberyl", ["0:1.746/1.755", "90:1.748/1.755"], ("sg", "3.73"), ("colour", "yellow")),
         S("zircon", [], ("over", "yes"), ("sg", "4.69"), ("lines", "653")),
         S("orthoclase", ["0:1.518/1.526", "90:1.520/1.526"], ("sg", "2.57"), ("colour", "colourless")),
@@ -74,7 +76,7 @@ public class OneReadingPathTests
                 "sg" => "--sg", "air" => "--in-air-ct", "water" => "--in-water-ct", "water_c" => "--water-c", "spot" => "--spot",
                 "polariscope" => "--polariscope", "pleochroism" => "--pleochroism", "dispersion" => "--dispersion", "thermal" => "--thermal-probe",
                 "electrical" => "--electrical", "uv_long" => "--uv-long", "colour" => "--colour", "precision" => "--precision", "offset" => "--calibration-offset",
-                "cut" => "--cut",
+                "cut" => "--cut", "reflectance" => "--reflectance",
                 "lines" => "--lines",
                 _ => throw new ArgumentException(field),
             };
@@ -108,6 +110,7 @@ public class OneReadingPathTests
         foreach (var (field, key) in new[] { ("polariscope", "polariscope"), ("pleochroism", "pleochroism"), ("dispersion", "dispersion"), ("thermal", "thermal_probe"),
             ("electrical", "electrical"), ("uv_long", "uv_long"), ("colour", "colour"), ("cut", "cut") })
             if (v.TryGetValue(field, out string? word)) parts.Add($"\"{key}\":\"{word}\"");
+        if (v.TryGetValue("reflectance", out string? reflectance)) parts.Add($"\"reflectance_pct\":{reflectance}");
         if (v.TryGetValue("lines", out string? lines))
             parts.Add("\"absorption_nm\":[" + (lines == "none" ? "" : string.Join(",", lines.Split(' '))) + "]");
         return "{" + string.Join(",", parts) + "}";
@@ -140,7 +143,7 @@ public class OneReadingPathTests
                     {
                         "sg" => BenchFields.Sg, "air" => BenchFields.AirCt, "water" => BenchFields.WaterCt, "water_c" => BenchFields.WaterC,
                         "spot" => BenchFields.Spot, "colour" => BenchFields.Colour, "lines" => BenchFields.Absorption, "liquids" => BenchFields.HeavyLiquids,
-                        "precision" => BenchFields.Precision, "offset" => BenchFields.CalibrationOffset,
+                        "precision" => BenchFields.Precision, "offset" => BenchFields.CalibrationOffset, "reflectance" => BenchFields.Reflectance,
                         _ => throw new ArgumentException(field),
                     }, value);
                     break;

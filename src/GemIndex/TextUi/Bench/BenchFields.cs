@@ -41,6 +41,7 @@ internal static class BenchFields
     public const string IndexAtG = BenchField.IndexAtG;
     public const string ThermalProbe = BenchField.ThermalProbe;
     public const string Electrical = BenchField.Electrical;
+    public const string Reflectance = BenchField.Reflectance;
     public const string UvLong = BenchField.UvLong;
     public const string UvShort = BenchField.UvShort;
     public const string Absorption = BenchField.Absorption;

@@ -12,7 +12,7 @@ internal static class FormReader
     private static readonly string[] TextFields =
     [
         BenchFields.Spot, BenchFields.LiquidLimit, BenchFields.LightNm, BenchFields.Sg, BenchFields.AirCt, BenchFields.WaterCt, BenchFields.WaterC,
-        BenchFields.HeavyLiquids, BenchFields.IndexAtB, BenchFields.IndexAtG, BenchFields.Absorption, BenchFields.Colour,
+        BenchFields.HeavyLiquids, BenchFields.IndexAtB, BenchFields.IndexAtG, BenchFields.Reflectance, BenchFields.Absorption, BenchFields.Colour,
         BenchFields.FeaturesPresent, BenchFields.FeaturesAbsent,
     ];
 

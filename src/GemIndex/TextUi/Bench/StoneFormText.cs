@@ -45,6 +45,7 @@ internal static class StoneFormText
         yield return new(BenchFields.HeavyLiquids, BenchSyntax.HeavyLiquids(r.HeavyLiquids.Select(h => $"{Number(h.Density)} {h.Result}")));
         yield return new(BenchFields.IndexAtB, r.DispersionIndices is { } d ? Index(d.NB) : "");
         yield return new(BenchFields.IndexAtG, r.DispersionIndices is { } g ? Index(g.NG) : "");
+        yield return new(BenchFields.Reflectance, r.ReflectancePct is { } reflectance ? Number(reflectance) : "");
         yield return new(BenchFields.Absorption, r.AbsorptionNm is { } lines ? BenchSyntax.Lines(lines.Select(Number)) : "");
         yield return new(BenchFields.FeaturesPresent, BenchSyntax.Features(r.FeaturesPresent));
         yield return new(BenchFields.FeaturesAbsent, BenchSyntax.Features(r.FeaturesAbsent));

@@ -1,6 +1,6 @@
 namespace GemIndex.Cli.TextUi.Bench;
 
-/// <summary>Polariscope, dichroscope, fire, probes, UV lamps and the spectroscope.</summary>
+/// <summary>Polariscope, dichroscope, fire, probes, the reflectance meter, UV lamps and the spectroscope.</summary>
 internal sealed class TestsPage : BenchPage
 {
     public TestsPage() : base("Tests", "a key picks, Space clears")
@@ -14,6 +14,7 @@ internal sealed class TestsPage : BenchPage
         AddField(BenchFields.IndexAtG, "   RI at G", 8, "430.8 nm");
         AddChoice(BenchFields.ThermalProbe);
         AddChoice(BenchFields.Electrical);
+        AddField(BenchFields.Reflectance, "Reflectance", 8, "%, meter");
         AddChoice(BenchFields.UvLong);
         AddChoice(BenchFields.UvShort);
         AddField(BenchFields.Absorption, "Absorption", 16, "nm/none");   // four lines in sight at 80 columns

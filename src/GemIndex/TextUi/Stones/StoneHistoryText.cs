@@ -26,7 +26,7 @@ internal static class StoneHistoryText
         ["low"] = "low edge", ["high"] = "high edge", ["sg"] = "SG", ["air_ct"] = "weight in air (ct)", ["water_ct"] = "weight in water (ct)",
         ["water_c"] = "water (°C)", ["heavy_liquids"] = "heavy liquid", ["density"] = "density", ["result"] = "result",
         ["polariscope"] = "polariscope", ["pleochroism"] = "pleochroism", ["dispersion"] = "fire", ["nB"] = "RI at B", ["nG"] = "RI at G",
-        ["thermal_probe"] = "thermal probe", ["electrical"] = "conductivity", ["uv_long"] = "UV long wave", ["uv_short"] = "UV short wave",
+        ["thermal_probe"] = "thermal probe", ["electrical"] = "conductivity", ["reflectance_pct"] = "reflectance (%)", ["uv_long"] = "UV long wave", ["uv_short"] = "UV short wave",
         ["absorption_nm"] = "absorption lines (nm)", ["id"] = "reference",
         ["magnification.present"] = "features seen under magnification", ["magnification.absent"] = "features looked for and not seen",
     };
