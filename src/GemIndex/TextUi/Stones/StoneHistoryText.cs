@@ -112,11 +112,12 @@ internal static class StoneHistoryText
     /// <summary>The step list at <paramref name="path"/> of a JSON object; null when the text has none (then nothing is matched).</summary>
     private static (JsonNode Root, JsonArray Steps)? StepsOf(string text, string[] path)
     {
-        if (text.Trim().Length == 0) return (new JsonObject(), []);
-        if (text[0] != '{') return null;
+        string t = text.TrimStart();
+        if (t.Length == 0) return (new JsonObject(), []);
+        if (t[0] != '{') return null;
         try
         {
-            JsonNode root = JsonNode.Parse(text)!;
+            JsonNode root = JsonNode.Parse(t)!;
             JsonNode? node = root;
             foreach (string part in path) node = node is JsonObject o ? o[part] : null;
             return node is JsonArray steps ? (root, steps) : (root, []);
