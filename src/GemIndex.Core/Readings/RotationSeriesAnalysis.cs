@@ -47,10 +47,11 @@ public static class RotationSeriesAnalysis
             return SingleEdge(s, sigma, band, gap, misreadings);
 
         var both = s.Where(x => x.High is not null).ToList();
-        if (gap > MaximumGapForCharacter || both.Count < 2)
-            return Partial(both, LargestGapSpan(s.Select(x => x.RotationDegrees)), sigma, misreadings);
-
         var lowOnly = LowEdgesOnly(s, both, band);
+        if (gap > MaximumGapForCharacter || both.Count < 2)
+            return Partial(both, lowOnly, LargestGapSpan(s.Select(x => x.RotationDegrees)), sigma, misreadings)
+                with { HighHiddenAtDegrees = [.. lowOnly.Select(x => x.RotationDegrees)], HighestHighRead = both.Max(x => x.High!.Value) };
+
         var (lows, highs, lowEdge, highEdge) = Edges(both, lowOnly, sigma, band, gap, misreadings);
         bool lowConstant = Spread(lows) <= band;
         bool highConstant = Spread(highs) <= band;
@@ -172,11 +173,13 @@ public static class RotationSeriesAnalysis
         };
     }
 
-    private static RotationSeriesResult Partial(List<ShadowEdgeStep> both, (double Size, double From, double To) gapSpan, double sigma, List<string> misreadings)
+    private static RotationSeriesResult Partial(List<ShadowEdgeStep> both, List<ShadowEdgeStep> lowOnly, (double Size, double From, double To) gapSpan,
+        double sigma, List<string> misreadings)
     {
         double gap = gapSpan.Size;
         static string Degrees(double d) => d.ToString("0.#", CultureInfo.InvariantCulture) + "°";
-        double lo = both.Min(x => x.Low), hi = both.Max(x => x.High!.Value);
+        // The low edges of the steps whose high edge went unseen count too (LowEdgesOnly).
+        double lo = both.Concat(lowOnly).Min(x => x.Low), hi = both.Max(x => x.High!.Value);
         return new RotationSeriesResult
         {
             Character = null,
@@ -405,6 +408,13 @@ public static class RotationSeriesAnalysis
     /// </param>
     public static SeriesInterpretation ReadAgainst(SeriesInterpretation i, double liquidLimit, bool highHidden = false)
     {
+        // Two edges read where the steps leave the character open: the high one unseen at some steps lay past the liquid.
+        if (i.Character is null && highHidden && i.Description.StartsWith("two edges", StringComparison.Ordinal))
+            return i with
+            {
+                AboveLiquidLimit = liquidLimit,
+                Description = $"two edges, {F(i.Lowest.Value)} and one above the liquid {F(liquidLimit)} at some steps: doubly refractive, birefringence at least {Difference(liquidLimit, i.Lowest.Value)}",
+            };
         if (!(i.Highest.Value > liquidLimit || highHidden) || i.Character is not (OpticCharacter.Uniaxial or OpticCharacter.Biaxial)) return i;
         // A uniaxial stone whose constant edge is the high one (ω) shows it at every step or at none.
         if (!(i.Highest.Value > liquidLimit) && i.Character == OpticCharacter.Uniaxial && i.Sign == OpticSign.Negative) return i;

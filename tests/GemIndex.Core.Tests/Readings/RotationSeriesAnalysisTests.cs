@@ -79,6 +79,12 @@ public class RotationSeriesAnalysisTests
             Assert.Contains("birefringence at least 0.042", i.Description);
         });
         Assert.Contains(biaxial, i => i.Beta is { } b && Math.Abs(b.Value - 1.775) < 1e-9);   // the highest low edge, a hidden step's
+        // The same edges typed at 15° steps leave the character open (a gap of 105°): the two edges are still said with
+        // the lowest low edge and a high one above the liquid.
+        ShadowEdgeStep[] coarse = [.. steps.Select((x, i) => new ShadowEdgeStep(15 * i, x.Low, x.High))];
+        var open = RotationSeriesAnalysis.ReadAgainst(RotationSeriesAnalysis.Analyse(coarse, 0.001), 1.79).Interpretations.Single();
+        Assert.Equal("two edges, 1.748 and one above the liquid 1.790 at some steps: doubly refractive, birefringence at least 0.042", open.Description);
+        Assert.Equal(1.79, open.AboveLiquidLimit);
         // Read against a liquid far above every high edge read, the unseen high edges were missed, not hidden: no "above".
         Assert.False(analysed.HighHiddenBy(1.85));
         Assert.All(RotationSeriesAnalysis.ReadAgainst(analysed, 1.85).Interpretations, i => Assert.Null(i.AboveLiquidLimit));
