@@ -30,6 +30,7 @@ public class StoneReadingsJsonTests
         from absent in Gen.Elements<List<string>>([], ["needles_silk"], ["chevron_growth", "healed_fractures"])
         from cut in Gen.Elements<string?>(null, "faceted", "cabochon", "other")
         from transparency in Gen.Elements<string?>(null, "transparent", "translucent", "opaque")
+        from reflectance in Gen.Elements<double?>(null, 4.6, 17.2, 20.45)
         select new StoneReadings
         {
             Id = id,
@@ -44,6 +45,7 @@ public class StoneReadingsJsonTests
             FeaturesAbsent = absent,
             Cut = cut,
             Transparency = transparency,
+            ReflectancePct = reflectance,
         };
 
     [FsCheck.Xunit.Property(MaxTest = 200)]
