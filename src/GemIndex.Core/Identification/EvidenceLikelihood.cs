@@ -138,6 +138,15 @@ public static class EvidenceLikelihood
     /// </summary>
     private static void Reflectance(Material m, ReflectanceReading reading, EvidenceAccumulator acc)
     {
+        // An opaque material absorbs: its reflectance follows its absorption too, not its index alone (pyrite and hematite
+        // read far above what their indices give), so the reading says nothing of it here.
+        if (m.IsOpaque)
+        {
+            acc.Add(BenchField.Reflectance, BroadDensities.Index, BroadDensities.Index, 1, robust: false);
+            if (acc.Explaining)
+                acc.Say($"reflectance {reading.Percent.ToString("0.0", CultureInfo.InvariantCulture)} %; an opaque, absorbing material's reflectance does not follow its index: not weighed");
+            return;
+        }
         var range = new PropertyRange(m.Indices.Lowest.Minimum, m.Indices.Highest.Maximum);
         double n = reading.Index.Value, sigma = reading.Index.StandardUncertainty;
         acc.Add(BenchField.Reflectance, RangeLikelihood.Density(n, range, sigma), BroadDensities.Index,

@@ -177,8 +177,12 @@ internal static class RefractometerEvidence
         string Range(double a, double b) => a == b ? a.ToString("0.000", CultureInfo.InvariantCulture) : $"{a.ToString("0.000", CultureInfo.InvariantCulture)}–{b.ToString("0.000", CultureInfo.InvariantCulture)}";
         var highs = steps.Where(x => x.High is not null).Select(x => x.High!.Value).ToList();
         string text = $"low edge {Range(steps.Min(x => x.Low), steps.Max(x => x.Low))}";
-        if (highs.Count > 0) text += $", high edge {Range(highs.Min(), highs.Max())}";
-        return text + $" over {steps.Count} steps";
+        string over = steps.Count == 1 ? " at one step" : $" over {steps.Count} steps";
+        if (highs.Count == 0) return text + over;
+        // A high edge seen at only some of the steps is said so ("at 2 of them": it was not seen at the others).
+        return highs.Count < steps.Count
+            ? $"{text}{over}, high edge {Range(highs.Min(), highs.Max())} at {highs.Count} of them"
+            : $"{text}, high edge {Range(highs.Min(), highs.Max())}{over}";
     }
 
     private static string SeriesText(Material m, AnalysedSheet sheet, SeriesObservation series, SectionLikelihood.Outcome outcome, double form)

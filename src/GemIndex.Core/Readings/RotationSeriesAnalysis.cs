@@ -184,7 +184,7 @@ public static class RotationSeriesAnalysis
         {
             Character = null,
             UndeterminedReason = both.Count < 2
-                ? "a single rotation step cannot show which edge moves"
+                ? lowOnly.Count > 0 ? "only one step shows both edges, so the series alone cannot show which edge moves" : "a single rotation step cannot show which edge moves"
                 : $"the steps leave {gap.ToString("0", CultureInfo.InvariantCulture)}° of the half turn unread, from {Degrees(gapSpan.From)} to {Degrees(gapSpan.To)}: read steps in that gap, leaving none over {MaximumGapForCharacter.ToString("0", CultureInfo.InvariantCulture)}°, to fix the optic character",
             Interpretations = [new SeriesInterpretation
             {

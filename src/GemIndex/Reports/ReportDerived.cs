@@ -29,8 +29,10 @@ internal static class ReportDerived
         }
         if (report.SpecificGravity is { } sg)
             yield return new("specific_gravity", "Specific gravity", $"{sg} (standard uncertainty; {report.SpecificGravitySource})");
-        if (report.Interpretations.Count == 0 && report.SpecificGravity is null)
-            yield return new("derived", "Derived", "none: no rotation series and no specific gravity");
+        if (report.Readings.ReflectancePct is { } reflectance && ReportReadings.ReflectanceText(reflectance) is { } said)
+            yield return new("index_from_reflectance", "Index from the reflectance", said);
+        if (report.Interpretations.Count == 0 && report.SpecificGravity is null && report.Readings.ReflectancePct is null)
+            yield return new("derived", "Derived", "none: no rotation series, no specific gravity and no reflectance");
     }
 
     /// <summary>

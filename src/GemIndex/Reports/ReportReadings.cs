@@ -39,8 +39,8 @@ internal static class ReportReadings
         else AddWord(fields, BenchField.Dispersion, "Dispersion (by eye)", r.Dispersion);
         AddWord(fields, BenchField.ThermalProbe, "Thermal probe", r.ThermalProbe);
         AddWord(fields, BenchField.Electrical, "Electrical conductivity", r.Electrical);
-        if (r.ReflectancePct is { } reflectance && Reflected(reflectance) is { } n)
-            fields.Add(new("reflectance", "Reflectance (meter)", $"{ReportNumbers.Fixed(reflectance, "0.0")} % (index about {ReportNumbers.Fixed(n.Value, "0.00")} ± {ReportNumbers.Fixed(n.StandardUncertainty, "0.00")})"));
+        if (r.ReflectancePct is { } reflectance && ReflectanceText(reflectance) is { } said)
+            fields.Add(new("reflectance", "Reflectance (meter)", said));
         AddWord(fields, BenchField.UvLong, "Long-wave UV (365 nm)", r.UvLong);
         AddWord(fields, BenchField.UvShort, "Short-wave UV (254 nm)", r.UvShort);
         if (r.AbsorptionNm is { } lines)
@@ -55,10 +55,17 @@ internal static class ReportReadings
         return fields;
     }
 
-    /// <summary>The index a reflectance reading gives; null for one out of range (refused on reading, so never in a report).</summary>
-    private static Core.Optics.RefractiveIndex? Reflected(double percent)
+    /// <summary>
+    /// A reflectance reading with the index it gives, "17.2 % (index about 2.42 ± 0.04)", for the reports and the text UI;
+    /// null for one out of range (refused on reading, so never shown as used).
+    /// </summary>
+    public static string? ReflectanceText(double percent)
     {
-        try { return new Core.Observations.ReflectanceReading(percent).Index; }
+        try
+        {
+            var n = new Core.Observations.ReflectanceReading(percent).Index;
+            return $"{ReportNumbers.Fixed(percent, "0.0")} % (index about {ReportNumbers.Fixed(n.Value, "0.00")} ± {ReportNumbers.Fixed(n.StandardUncertainty, "0.00")})";
+        }
         catch (Core.Quantities.QuantityOutOfRangeException) { return null; }
     }
 

@@ -49,4 +49,20 @@ public class ReflectanceReadingTests
         Assert.Equal("cubic zirconia", Leader(13.5));
         Assert.Equal("moissanite", Leader(20.6));
     }
+
+    [Fact]
+    public void An_opaque_absorbing_entry_is_not_weighed_by_the_reading()
+    {
+        // A pyrite-like opaque entry (index span invented for the rule): its reflectance follows its absorption, so a reading
+        // within the index span it lists must neither raise nor lower it.
+        Material opaque = new()
+        {
+            Name = "metallic", Species = "metallic", Variety = "metallic", Origin = OriginClass.Natural, CrystalSystem = CrystalSystem.Cubic,
+            Indices = OpticalIndices.SingleIndex(new(2.6, 3.0)), SpecificGravity = new(4.9, 5.2), IsOpaque = true,
+        };
+        var sheet = new AnalysedSheet(new BenchSheet { Reflectance = new ReflectanceReading(20.5) });
+        CandidateEvaluation weighed = EvidenceLikelihood.Evaluate(opaque, sheet, explain: true);
+        Assert.Equal(weighed.LogLikelihoodNotInCatalogue, weighed.LogLikelihood, 12);
+        Assert.Contains(weighed.Contributions, c => c.Text.Contains("not weighed", StringComparison.Ordinal));
+    }
 }

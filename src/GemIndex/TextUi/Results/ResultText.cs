@@ -194,6 +194,8 @@ internal static class ResultText
                 yield return $"{choice.Label}: {choice.Show(word)}"
                     + (r.Transparency == "opaque" && EvidenceLikelihood.ShownByAnyOpaqueStone(field, word) ? " (not weighed: the stone is opaque)" : "");
         if (r.DispersionIndices is { } nb) yield return $"Dispersion: RI at B {Index(nb.NB)}, at G {Index(nb.NG)}";
+        if (r.ReflectancePct is { } reflectance && !refused.ContainsKey(BenchFields.Reflectance) && GemIndex.Cli.Reports.ReportReadings.ReflectanceText(reflectance) is { } said)
+            yield return "Reflectance: " + said;
         if (r.AbsorptionNm is { } lines)
             yield return lines.Count == 0 ? "Absorption: no lines" : "Absorption: " + string.Join(", ", lines.Select(n => n.ToString("0.#", CultureInfo.InvariantCulture))) + " nm";
         if (r.Colour is { } c) yield return $"Colour: {c}";
