@@ -164,7 +164,9 @@ internal static class ReportCommand
                 BenchOutcome outcome = BenchIdentification.Identify(identifier, StoneReadingsConverter.ToReadings(sheet.Readings), Request with { AdviseNextTest = false });
                 foreach (var x in outcome.Reading.Errors)
                     e.WriteLine($"gemindex: stone '{BenchText.Shown(sheet.Reference)}': {x} (row written without a result)");
-                rows.Add((sheet, outcome.Result));
+                // A stone with no usable reading has no answer in its row (the text UI shows none either): ranked on the
+                // catalogue's frequencies alone, its row had named a species and an entry nobody identified.
+                rows.Add((sheet, outcome.Reading.IsEmpty ? null : outcome.Result));
             }
             using var writer = output is null ? null : new StreamWriter(output.FullName);
             WorkbookCsv.Write(writer ?? o, rows, refused);

@@ -345,6 +345,17 @@ public class IdentifierTests
                 [new(0, 1.775, null), new(30, 1.772, 1.786), new(60, 1.756, 1.788), new(90, 1.748, null), new(120, 1.755, null), new(150, 1.767, null)]),
         };
         Assert.Contains(Engine.Identify(sheet).Warnings, w => w.StartsWith("High edge not seen at 4 of 6 steps (0°, 90°, 120°, 150°): it lay above the liquid's 1.790", StringComparison.Ordinal));
+        // With the 60° step left out only one step shows both edges: the steps alone leave the character open (it had read
+        // "a single rotation step"), and the warning says where the section model's reading of the edges points.
+        var fewer = sheet with
+        {
+            Refractometer = new RefractometerObservation(RefractometerMethod.Facet,
+                [new(0, 1.775, null), new(30, 1.772, 1.786), new(90, 1.748, null), new(120, 1.755, null), new(150, 1.767, null)]),
+        };
+        IReadOnlyList<string> warnings = Engine.Identify(fewer).Warnings;
+        Assert.Contains(warnings, w => w.StartsWith("High edge not seen at 4 of 5 steps", StringComparison.Ordinal));
+        Assert.Contains(warnings, w => w.StartsWith("Optic character undetermined: only one step shows both edges", StringComparison.Ordinal)
+            && w.Contains("the edges as read still point to biaxial", StringComparison.Ordinal));
     }
 
     [Fact]

@@ -191,6 +191,27 @@ public sealed class ReportCommandTests : IDisposable
     }
 
     [Fact]
+    public void A_workbook_stone_with_no_usable_reading_has_no_answer_in_its_row()
+    {
+        // Its only entry refused (an SG word): ranked on the catalogue's frequencies alone, its row had named a species.
+        string path = Path.Combine(_dir, "empty.db");
+        using (var wb = GemIndex.Data.Workbook.StoneWorkbook.Open(path, TimeProvider.System, GemIndex.Data.Workbook.WorkbookOpening.CreateIfMissing))
+        {
+            long id = wb.Create(new GemIndex.Data.Workbook.StoneSheet { Reference = "lot 9 / 1" }).Id;
+            var form = new GemIndex.Cli.TextUi.Bench.BenchModel();
+            form.SetText(GemIndex.Cli.TextUi.Bench.BenchFields.Sg, "2.6x");
+            wb.SetSetting(GemIndex.Cli.TextUi.Main.BenchSession.DraftSetting(id), GemIndex.Cli.TextUi.Bench.BenchDraft.Write(form.Snapshot() with { StoneId = id }));
+        }
+        var (exit, csv, err) = Run("report", "workbook", "--workbook", path);
+        Assert.True(exit == 0, err);
+        string[] lines = csv.Split('\n', StringSplitOptions.RemoveEmptyEntries);
+        string[] header = lines[0].TrimEnd('\r').Split(',');
+        string[] row = lines.Single(l => l.StartsWith("lot 9 / 1,", StringComparison.Ordinal)).TrimEnd('\r').Split(',');
+        Assert.Equal("", row[Array.IndexOf(header, "species")]);
+        Assert.Equal("", row[Array.IndexOf(header, "best_candidate")]);
+    }
+
+    [Fact]
     public void The_header_carries_the_date_given_the_examiner_and_the_program_and_catalogue_versions()
     {
         var (exit, stdout, err) = Run("report", "stone", "--readings", Batch(ReportFixtures.QuartzLine), "--date", "2026-03-14", "--examiner", "A. Example");
