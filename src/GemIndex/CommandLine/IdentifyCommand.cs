@@ -108,7 +108,8 @@ internal static class IdentifyCommand
                 return ExitCodes.BadInput;
             }
             if (pr.GetValue(json)) output.WriteLine(ResultDocument.Line(result, explain: true));
-            else IdentificationText.Write(result, output, outcome.Reading.Sheet.Magnification, outcome.Reading.Sheet.Cut, outcome.Reading.Sheet.Transparency);
+            else IdentificationText.Write(result, output, outcome.Reading.Sheet.Magnification, outcome.Reading.Sheet.Cut, outcome.Reading.Sheet.Transparency,
+                reflectanceRead: outcome.Reading.Sheet.Reflectance is not null);
             return ExitCodes.Ok;
         }));
         return command;

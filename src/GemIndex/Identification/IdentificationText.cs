@@ -22,9 +22,12 @@ internal static class IdentificationText
     /// <summary>The line of an opaque stone: what its transparency leaves out of the advice.</summary>
     public const string OpaqueLine = "Transparency: opaque: no polariscope, dichroscope or fire is advised, and under the loupe only what shows on a surface";
 
-    /// <summary>Writes the answer; the features looked for under magnification, when given, are listed with their meaning.</summary>
+    /// <summary>
+    /// Writes the answer; the features looked for under magnification, when given, are listed with their meaning;
+    /// <paramref name="reflectanceRead"/>: a reflectance meter was read (then named among the readings to re-take when nothing fits).
+    /// </summary>
     public static void Write(IdentificationResult result, TextWriter output, MagnificationObservation? magnification = null, StoneCut? cut = null,
-        StoneTransparency? transparency = null)
+        StoneTransparency? transparency = null, bool reflectanceRead = false)
     {
         var o = new StringWriter { NewLine = "\n" };
         if (transparency == StoneTransparency.Opaque) o.WriteLine(OpaqueLine);
@@ -74,7 +77,7 @@ internal static class IdentificationText
         }
         if (LeadingCandidates.UnlistedNote([.. listed.Select(i => i + 1)]) is { } unlisted) o.WriteLine(unlisted);
         o.WriteLine($"Not in the catalogue: {ReportNumbers.Percent(result.NotInCatalogue)}");
-        if (result.NextTest is null && result.NoGoodMatch) o.WriteLine($"Next step: {ReportDerived.NoMatchNextStep}");
+        if (result.NextTest is null && result.NoGoodMatch) o.WriteLine($"Next step: {ReportDerived.NoMatchNextStep(reflectanceRead)}");
         if (result.NextTest is { } next)
         {
             // In words first, as the reports and the text UI say it; the gain in bits for those who weigh it.

@@ -173,12 +173,17 @@ internal static class ReportDerived
 
     public static string NextTestLine(StoneReport report) => report.NextTest is { } n
         ? $"{n.Description}: it would {Separation(n.GainBits)} {n.SeparatesInWords}."
-        : report.NoGoodMatch ? NoMatchNextStep
+        : report.NoGoodMatch ? NoMatchNextStep(report.Readings.ReflectancePct is not null)
         : "None suggested: no remaining test would separate the candidates.";
 
-    /// <summary>What to do next when nothing in the catalogue fits: the readings first, then an assembled stone (common practice).</summary>
-    public const string NoMatchNextStep =
-        "Re-take the readings first: nothing in the catalogue fits them (the refractometer on a clean facet with fresh contact liquid, the SG); then look for an assembled stone (a join or two lustres under the loupe).";
+    /// <summary>
+    /// What to do next when nothing in the catalogue fits: the readings first (the reflectance meter among them when it was
+    /// read: a poor polish or a meter off its standard reads wrong), then an assembled stone (common practice).
+    /// </summary>
+    public static string NoMatchNextStep(bool reflectanceRead) =>
+        "Re-take the readings first: nothing in the catalogue fits them (the refractometer on a clean facet with fresh contact liquid, the SG"
+        + (reflectanceRead ? ", the reflectance meter checked on its standard and read on a well-polished facet" : "")
+        + "); then look for an assembled stone (a join or two lustres under the loupe).";
 
     /// <summary>How well the next test separates the leading candidates, in words (1 bit halves the doubt).</summary>
     public static string Separation(double gainBits) => gainBits >= 1 ? "clearly separate" : gainBits >= 0.3 ? "partly separate" : "slightly separate";

@@ -335,7 +335,10 @@ public class IdentifyCommandTests
             "--colour", "colourless", "--cut", "faceted");
         Assert.True(exit == 0, error);
         Assert.Contains("NO GOOD MATCH", output, StringComparison.Ordinal);
-        Assert.Contains("Next step: " + GemIndex.Cli.Reports.ReportDerived.NoMatchNextStep, output, StringComparison.Ordinal);
+        Assert.Contains("Next step: " + GemIndex.Cli.Reports.ReportDerived.NoMatchNextStep(reflectanceRead: false), output, StringComparison.Ordinal);
+        // A reflectance of diamond's (17.2 %) beside quartz's edges: the meter is named among the readings to re-take.
+        var (_, withMeter, _) = Identify(run, "--edge", "0:1.544/1.553", "--edge", "90:1.544/1.549", "--reflectance", "17.2");
+        Assert.Contains("the reflectance meter checked on its standard", withMeter, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -165,8 +165,11 @@ internal sealed class RefractometerPage : BenchPage
     /// <summary>Ctrl+Z on the list: the step removed last comes back.</summary>
     public event Action? RestoreRequested;
 
-    /// <summary>Puts a step on the edit line (null: an empty new step at <paramref name="nextRotation"/>).</summary>
-    public void BeginStep(int? index, StepText? step, string nextRotation)
+    /// <summary>
+    /// Puts a step on the edit line (null: an empty new step at <paramref name="nextRotation"/>), with the cursor in its
+    /// low edge unless <paramref name="focus"/> is false (a step removed from the list leaves the cursor there).
+    /// </summary>
+    public void BeginStep(int? index, StepText? step, string nextRotation, bool focus = true)
     {
         _editing = index;
         _offeredRotation = step is null ? nextRotation : null;
@@ -175,7 +178,7 @@ internal sealed class RefractometerPage : BenchPage
         Low.Text = step?.Low ?? "";
         High.Text = step?.High ?? "";
         ShowNote();
-        Low.SetFocus();
+        if (focus) Low.SetFocus();
     }
 
     /// <summary>Whether the rotation offered next fills a gap of a half turn already read (the window's model knows).</summary>

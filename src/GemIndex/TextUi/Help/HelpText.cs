@@ -21,7 +21,7 @@ internal static class HelpText
         ("Tab, Shift+Tab", "next / previous field; a field reached by Tab has its text selected, so typing replaces it"),
         ("Ctrl+Z", "in a field: put back the value it held when the cursor came into it (a value replaced by mistake comes back); again: what was typed over it"),
         ("RI: Enter", "store the step being typed; the rotation moves on by the rotation step (set once on the page; 15° until set); past a half turn, which the edges repeat, it fills the widest gap and says 'fills gap' (type 180 over it for a check reading). Both edges may be typed in one go: 1.624 1.644 or 1.624/1.644 (the space or '/' moves on to the high edge's box)"),
-        ("RI: Enter on step", "edit that step; Delete removes it, Ctrl+Z puts the step removed last back"),
+        ("RI: step list", "on a step: Enter edits it, Delete removes it; Ctrl+Z puts the step removed last back (Tab from the high edge reaches the list)"),
         ("Choices", "one key picks the answer: n none; w m s v weak, moderate, strong, very strong; i d a x singly refractive, doubly refractive, aggregate, anomalous; b t dichroic, trichroic; + - reacts, does not react; y yes; f c o faceted, cabochon, other cut. Space or Backspace clears; a digit goes on into the field right after the choice when that is an empty text field (it never replaces a value)"),
         ("Loupe: + - ?", "on the feature under the cursor: + seen, - looked for and not seen, ? not looked for (Delete too); ↑↓ PgUp PgDn move; Ctrl+Z puts back the mark changed last (again: the one before)"),
         ("Loupe: typing", "letters find features by name or description (several words: all must match); Backspace edits, Esc clears"),
@@ -40,6 +40,7 @@ internal static class HelpText
         "Transparency (F2): when the description starts with transparent, translucent or opaque it is a reading; it weighs no material, but an opaque stone is advised no polariscope, dichroscope or fire, and under the loupe only what shows on a surface.",
         "Colour: plain words, as you would say them (yellow, bluish green, blue-green). The last hue named is the colour; an -ish or -y word only tones it (bluish green is a green). A word the tool does not know is named in a warning and given no weight.",
         "SG: type it, or weigh the stone in air and in water. With both filled in neither is used until one is cleared; the SG page says both values and whether they agree.",
+        "Reflectance (F5): a reflectance meter's reading in percent (1 to 30) on a well-polished facet, weighed as the index it gives by Fresnel's law (taken as ± 0.5 points, about ± 0.03 in the index near diamond's). Past the refractometer's limit it parts diamond (about 17.2 %), cubic zirconia (13.5 %) and synthetic moissanite (20.4 to 20.9 %); a poor polish reads low. Opaque, metallic materials are not weighed by it.",
         "Examiner: typed once at the foot of F2 Stone, kept in the workbook and named in every exported report; the export's confirmation says who.",
     ];
 

@@ -311,7 +311,8 @@ internal sealed class MainWindow : Window
         {
             if (_session.Form.Text(RefractometerPage.TypingStep).Length == 0) return;
             _session.Form.SetText(RefractometerPage.TypingStep, "");
-            rf.BeginStep(null, new StepText(rf.Rotation.Text, rf.Low.Text, rf.High.Text), _session.Form.NextRotation());
+            // The cursor stays where the examiner is (the list, after Del): Ctrl+Z there puts the step back.
+            rf.BeginStep(null, new StepText(rf.Rotation.Text, rf.Low.Text, rf.High.Text), _session.Form.NextRotation(), focus: false);
         }
         rf.RemoveRequested += i =>
         {

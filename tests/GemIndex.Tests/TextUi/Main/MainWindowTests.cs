@@ -874,6 +874,17 @@ public sealed class MainWindowTests : IDisposable
         Assert.Equal(["1.553", "1.549"], _session.Form.Steps.Select(s => s.High).ToArray());
         app.InjectKey(Key.Z.WithCtrl);
         Assert.Equal(["1.553", "1.551", "1.549"], _session.Form.Steps.Select(s => s.High).ToArray());
+        // With an edit under way (Enter on a step), a step removed from the list leaves the cursor on the list, so the
+        // Ctrl+Z the key line offers puts the step back (the cursor had jumped to the edit line, where it undid text).
+        app.InjectKey(Key.Enter);                  // edit the selected step: the cursor goes to its edges
+        app.InjectKey(Key.Tab);
+        app.InjectKey(Key.Tab);                    // back to the list
+        Assert.Same(window.Refractometer.Grid, window.MostFocused);
+        app.InjectKey(Key.Delete);
+        Assert.Same(window.Refractometer.Grid, window.MostFocused);
+        Assert.Equal(2, _session.Form.Steps.Count);
+        app.InjectKey(Key.Z.WithCtrl);
+        Assert.Equal(3, _session.Form.Steps.Count);
         Close(app, window, token);
     }
 
