@@ -421,13 +421,24 @@ public static class RotationSeriesAnalysis
         string name = i.Character == OpticCharacter.Biaxial ? "γ" : "ε";
         string fitted = $"{name} {F(i.Highest.Value)}", birefringence = $"birefringence {Difference(i.Highest.Value, i.Lowest.Value)}";
         string about = i.Highest.Value > liquidLimit ? $" (about {F(i.Highest.Value)} by the fitted edge)" : "";
-        return i with
+        string description = i.Description
+            .Replace(fitted, $"{name} above the liquid {F(liquidLimit)}{about}", StringComparison.Ordinal)
+            .Replace(birefringence, $"birefringence at least {Difference(liquidLimit, i.Lowest.Value)}", StringComparison.Ordinal);
+        // A biaxial sign compares γ − β with β − α: with γ only known to lie above the liquid, it is positive whenever
+        // 2β − α lies at or below the liquid, and open otherwise (negative only if γ < 2β − α).
+        if (i.Character == OpticCharacter.Biaxial && i.Beta is { } beta && highHidden)
         {
-            AboveLiquidLimit = liquidLimit,
-            Description = i.Description
-                .Replace(fitted, $"{name} above the liquid {F(liquidLimit)}{about}", StringComparison.Ordinal)
-                .Replace(birefringence, $"birefringence at least {Difference(liquidLimit, i.Lowest.Value)}", StringComparison.Ordinal),
-        };
+            double turn = 2 * beta.Value - i.Lowest.Value;
+            string signed = $"biaxial {(i.Sign == OpticSign.Positive ? "positive" : "negative")}";
+            if (turn <= liquidLimit)
+                return i with { AboveLiquidLimit = liquidLimit, Sign = OpticSign.Positive, Description = description.Replace(signed, "biaxial positive", StringComparison.Ordinal) };
+            return i with
+            {
+                AboveLiquidLimit = liquidLimit, SignOpen = true,
+                Description = description.Replace(signed, $"biaxial, sign open (negative only if γ < {F(turn)})", StringComparison.Ordinal),
+            };
+        }
+        return i with { AboveLiquidLimit = liquidLimit, Description = description };
     }
 
     private static string F(double v) => v.ToString("0.000", CultureInfo.InvariantCulture);

@@ -53,6 +53,12 @@ public sealed record SeriesInterpretation
     /// </summary>
     public double? AboveLiquidLimit { get; init; }
 
+    /// <summary>
+    /// The sign rests on an index the readings do not show: a biaxial reading whose γ lies above the liquid, where
+    /// γ − β against β − α is open (<see cref="Sign"/> is then the fitted edge's, not a reading's).
+    /// </summary>
+    public bool SignOpen { get; init; }
+
     /// <summary>The interpretation in plain words, with numbers.</summary>
     public required string Description { get; init; }
 }

@@ -107,8 +107,11 @@ internal sealed record StoneReport
         new("notes", "Notes", Shown(sheet.Notes)),
     ];
 
+    /// <summary>The sign of a reading whose γ lies above the liquid, where the readings leave it open.</summary>
+    public const string SignOpenWords = "open (γ above the liquid)";
+
     private static ReportInterpretation Interpretation(SeriesInterpretation i) => new(
-        i.Character is { } c ? TextUi.Results.ResultText.Character(c) : ReportInterpretation.Undetermined, Word(i.Sign.ToString()), i.Weight,
+        i.Character is { } c ? TextUi.Results.ResultText.Character(c) : ReportInterpretation.Undetermined, i.SignOpen ? SignOpenWords : Word(i.Sign.ToString()), i.Weight,
         i.Lowest.Value, i.Highest.Value, i.Beta?.Value, i.Birefringence.Value, i.Birefringence.StandardUncertainty, i.Description, i.AboveLiquidLimit);
 
     /// <summary>

@@ -79,6 +79,14 @@ public class RotationSeriesAnalysisTests
             Assert.Contains("birefringence at least 0.042", i.Description);
         });
         Assert.Contains(biaxial, i => i.Beta is { } b && Math.Abs(b.Value - 1.775) < 1e-9);   // the highest low edge, a hidden step's
+        // With γ only known to lie above 1.790, the sign is open: negative only if γ < 2β − α (1.802 for β 1.775).
+        Assert.All(biaxial, i => Assert.True(i.SignOpen));
+        Assert.Contains(biaxial, i => i.Description.StartsWith("biaxial, sign open (negative only if γ < 1.802)", StringComparison.Ordinal));
+        // Where 2β − α lies at or below the liquid, γ above it makes the sign positive (β 1.760 with α 1.748: 1.772).
+        var positive = RotationSeriesAnalysis.ReadAgainst(biaxial[0] with { Beta = new GemIndex.Core.Optics.RefractiveIndex(1.760), SignOpen = false, Sign = OpticSign.Negative,
+            AboveLiquidLimit = null, Description = "biaxial negative x: α 1.748, β 1.760, γ 1.788, birefringence 0.040", Highest = new GemIndex.Core.Optics.RefractiveIndex(1.788) }, 1.79, highHidden: true);
+        Assert.Equal((OpticSign.Positive, false), (positive.Sign, positive.SignOpen));
+        Assert.StartsWith("biaxial positive x", positive.Description, StringComparison.Ordinal);
         // The same edges typed at 15° steps leave the character open (a gap of 105°): the two edges are still said with
         // the lowest low edge and a high one above the liquid.
         ShadowEdgeStep[] coarse = [.. steps.Select((x, i) => new ShadowEdgeStep(15 * i, x.Low, x.High))];

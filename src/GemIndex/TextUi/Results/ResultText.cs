@@ -249,8 +249,10 @@ internal static class ResultText
     /// <summary>The sign in words, or "not fixed" when the series' interpretations that count disagree on it.</summary>
     private static string? Sign(RotationSeriesResult s)
     {
-        List<OpticSign> signs = [.. s.Interpretations.Where(i => i.Weight >= BenchWarnings.Relevant && i.Sign is OpticSign.Positive or OpticSign.Negative)
-            .Select(i => i.Sign).Distinct()];
+        var counted = s.Interpretations.Where(i => i.Weight >= BenchWarnings.Relevant).ToList();
+        // A reading whose sign rests on an index above the liquid leaves the sign open.
+        if (counted.Any(i => i.SignOpen)) return "not fixed (γ lies above the liquid)";
+        List<OpticSign> signs = [.. counted.Where(i => i.Sign is OpticSign.Positive or OpticSign.Negative).Select(i => i.Sign).Distinct()];
         return signs.Count switch
         {
             0 => null,
