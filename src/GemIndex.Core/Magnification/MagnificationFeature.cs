@@ -116,4 +116,7 @@ public enum MagnificationFeature
 
     /// <summary>Growth tubes: straight hollow or fluid-filled channels parallel to the crystal's length (beryl, tourmaline).</summary>
     GrowthTubes,
+
+    /// <summary>Swirl marks: curved, wavy flow lines of a glass (natural or man-made) or a moulded plastic.</summary>
+    SwirlMarks,
 }

@@ -70,12 +70,14 @@ public sealed class MagnificationProfile
                 MagnificationFeature.ColourBanding => 0.15,
                 _ => 0.1,
             },
-            OriginClass.Synthetic when group == FeatureGroup.Growth || feature is MagnificationFeature.RoundGasBubbles
+            // Swirl marks are a glass's flow, not a crystal's growth: no synthetic crystal holds them by default.
+            OriginClass.Synthetic when (group == FeatureGroup.Growth && feature != MagnificationFeature.SwirlMarks) || feature is MagnificationFeature.RoundGasBubbles
                 or MagnificationFeature.ElongatedGasBubbles or MagnificationFeature.FluxResidue or MagnificationFeature.MetalPlatelets
                 or MagnificationFeature.NailHeadSpicules => 0.1,
             OriginClass.Synthetic when natureInclusion => 0.03,
             OriginClass.Imitation when feature is MagnificationFeature.RoundGasBubbles => 0.3,
             OriginClass.Imitation when feature is MagnificationFeature.ElongatedGasBubbles => 0.15,
+            OriginClass.Imitation when feature is MagnificationFeature.SwirlMarks => 0.3,
             OriginClass.Composite when group == FeatureGroup.Composite => 0.6,
             OriginClass.Composite when natureInclusion => 0.2,
             // A stone the catalogue lacks: crystals of every birefringence, half of them plainly doubling (a judgement;

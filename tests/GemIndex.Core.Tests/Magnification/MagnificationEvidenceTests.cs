@@ -25,6 +25,20 @@ public class MagnificationEvidenceTests
     }
 
     [Fact]
+    public void Swirl_marks_seen_favour_a_glass_over_a_crystal_natural_or_synthetic()
+    {
+        // Swirls of flow are a glass's, never a crystal's (common practice): an imitation (glass, plastic) holds them by
+        // default, a natural or synthetic crystal does not, and a listed natural glass (moldavite) may.
+        var swirls = new MagnificationObservation([MagnificationFeature.SwirlMarks], []);
+        var imitation = new MagnificationProfile(OriginClass.Imitation);
+        var synthetic = new MagnificationProfile(OriginClass.Synthetic);
+        Assert.True(MagnificationEvidence.LogLikelihood(swirls, imitation) - MagnificationEvidence.LogLikelihood(swirls, Natural) > Math.Log(10));
+        Assert.True(MagnificationEvidence.LogLikelihood(swirls, imitation) - MagnificationEvidence.LogLikelihood(swirls, synthetic) > Math.Log(10));
+        Assert.Equal(0.3, imitation.ProbabilityOf(MagnificationFeature.SwirlMarks));
+        Assert.Equal(MagnificationProfile.Foreign, synthetic.ProbabilityOf(MagnificationFeature.SwirlMarks));
+    }
+
+    [Fact]
     public void Looked_for_and_not_seen_is_weaker_evidence_than_seen()
     {
         double seen = LogRatio(new([MagnificationFeature.CurvedStriae], []));

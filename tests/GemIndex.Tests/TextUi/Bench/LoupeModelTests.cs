@@ -172,7 +172,8 @@ public class LoupeModelTests
         Assert.DoesNotContain("curved striae", shown);
         Assert.All(model.Rows.Select((r, i) => (r, i)).Where(p => p.r.IsHeading),
             p => Assert.False(p.i + 1 == model.Rows.Count || model.Rows[p.i + 1].IsHeading, "a heading with no feature under it"));
-        Assert.Equal("INCLUSIONS", model.Line(model.Rows[0]));
+        Assert.Contains("swirl marks", shown);                       // "gas bubbles strung along them" in what to look for
+        Assert.Equal("GROWTH", model.Line(model.Rows[0]));
     }
 
     [Fact]

@@ -1116,7 +1116,7 @@ public sealed class MainWindowTests : IDisposable
         Assert.Same(window.Loupe.List, window.MostFocused);
         Assert.Equal(MagnificationFeature.CurvedStriae, window.Loupe.Current?.Feature?.Feature);
         app.InjectKey(new Key('+'));
-        for (int i = 0; i < 5; i++) app.InjectKey(Key.CursorDown);   // four growth features on, then over the INCLUSIONS heading
+        for (int i = 0; i < 6; i++) app.InjectKey(Key.CursorDown);   // five growth features on, then over the INCLUSIONS heading
         Assert.Equal(MagnificationFeature.RoundGasBubbles, window.Loupe.Current?.Feature?.Feature);
         app.InjectKey(new Key('+'));
         Type(app, "silk");                                           // typing finds; the cursor goes to the first match
