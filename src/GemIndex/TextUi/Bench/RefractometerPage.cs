@@ -70,6 +70,8 @@ internal sealed class RefractometerPage : BenchPage
         foreach (TextField box in new[] { Rotation, Low, High })
             box.KeyDown += (_, key) =>
             {
+                // Esc leaves a step being edited as it was stored (Enter on a step had left no way out but to store it).
+                if (key == Key.Esc && _editing is { } edited) { EditCancelled?.Invoke(edited); key.Handled = true; return; }
                 if (key != Key.Enter) return;
                 // Edges typed in the rotation's box (Tab had stopped there) go to the edges' boxes, not into the rotation.
                 if (Low.Text.Trim().Length == 0 && EdgesInRotationBox() is { } typed) MoveToEdges(typed.Low, typed.High);
@@ -159,6 +161,9 @@ internal sealed class RefractometerPage : BenchPage
     public event Action<int?, StepText>? StoreRequested;
 
     public event Action<int>? EditRequested;
+
+    /// <summary>Esc while a step is edited: the step stays as stored, and the cursor goes back to it in the list.</summary>
+    public event Action<int>? EditCancelled;
 
     public event Action<int>? RemoveRequested;
 

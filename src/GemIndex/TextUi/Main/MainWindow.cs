@@ -323,6 +323,15 @@ internal sealed class MainWindow : Window
             rf.ShowSteps(_session.Form.Steps, new Dictionary<string, string>());
             rf.OfferRotation(_session.Form.NextRotation());   // an offer not typed over follows the steps left ("0" when none)
         };
+        rf.EditCancelled += i =>
+        {
+            _session.Form.SetText(RefractometerPage.TypingStep, "");
+            rf.BeginStep(null, _newStepAside, _session.Form.NextRotation(), focus: false);   // a new step set aside comes back
+            _newStepAside = null;
+            _session.Changed();
+            rf.Grid.SetFocus();
+            rf.ShowStep(i);
+        };
         rf.RestoreRequested += () =>
         {
             if (_removedStep is not { } removed) return;
