@@ -268,6 +268,7 @@ start
 wait_for "e2e corundum"
 keys C-l
 wait_for " yes curved striae"
+text "silk"                               # below the first screen of features at 80x24: typing finds it
 wait_for " no  needles and silk"
 keys C-q
 wait_for "EXIT=0" 15
