@@ -860,18 +860,24 @@ public sealed class MainWindowTests : IDisposable
         Close(app, window, token);
     }
 
-    [Fact]
-    public void Esc_leaves_a_step_being_edited_as_it_was_stored()
+    /// <summary>Three quartz-like steps typed on F3 (handbook values from memory), the cursor on the second in the list.</summary>
+    private static void OnTheSecondOfThreeQuartzSteps(IApplication app)
     {
-        // Quartz-like steps (handbook values from memory): Enter on a step put it on the edit line, where Delete cleared
-        // its low edge and no key but Enter (storing it) led out.
-        var (app, window, token) = Open();
         app.InjectKey(Key.F3);
         TypeSteps(app, ("1.544", "1.553"), ("1.544", "1.551"), ("1.544", "1.549"));
         app.InjectKey(Key.Tab);
         app.InjectKey(Key.Tab);            // the list of steps
         app.InjectKey(Key.Home);
         app.InjectKey(Key.CursorDown);     // step 2
+    }
+
+    [Fact]
+    public void Esc_leaves_a_step_being_edited_as_it_was_stored()
+    {
+        // Quartz-like steps (handbook values from memory): Enter on a step put it on the edit line, where Delete cleared
+        // its low edge and no key but Enter (storing it) led out.
+        var (app, window, token) = Open();
+        OnTheSecondOfThreeQuartzSteps(app);
         app.InjectKey(Key.Enter);          // edit it: the cursor goes to its low edge
         app.InjectKey(Key.Delete);
         app.InjectKey(Key.Esc);
@@ -887,12 +893,7 @@ public sealed class MainWindowTests : IDisposable
     public void A_step_removed_by_mistake_comes_back_with_Ctrl_Z()
     {
         var (app, window, token) = Open();
-        app.InjectKey(Key.F3);
-        TypeSteps(app, ("1.544", "1.553"), ("1.544", "1.551"), ("1.544", "1.549"));
-        app.InjectKey(Key.Tab);
-        app.InjectKey(Key.Tab);            // the list of steps
-        app.InjectKey(Key.Home);
-        app.InjectKey(Key.CursorDown);     // step 2
+        OnTheSecondOfThreeQuartzSteps(app);
         app.InjectKey(Key.Delete);
         Assert.Equal(["1.553", "1.549"], _session.Form.Steps.Select(s => s.High).ToArray());
         app.InjectKey(Key.Z.WithCtrl);
