@@ -453,7 +453,7 @@ public static class BenchReader
         private double? Number(string field)
         {
             if (r.Text(field) is not { } text) return null;
-            return Parse(field, "", text);
+            return Parse(field, "", BenchSyntax.NumberText(field, text));
         }
 
         private double? Parse(string field, string part, string text, double? liquidLimit = null)

@@ -9,6 +9,13 @@ namespace GemIndex.Core.Bench;
 /// </summary>
 public static class BenchSyntax
 {
+    /// <summary>
+    /// A field's text as a number is read from it: a reading in percent (<see cref="BenchField.Reflectance"/>) may carry
+    /// its sign as a meter shows it ("17.2%", "17.2 %"); any other text as it is.
+    /// </summary>
+    public static string NumberText(string field, string text) =>
+        field == BenchField.Reflectance && text.TrimEnd().EndsWith('%') ? text.TrimEnd()[..^1] : text;
+
     /// <summary>The word for "looked, saw none" in the absorption field.</summary>
     public const string NoLines = "none";
 

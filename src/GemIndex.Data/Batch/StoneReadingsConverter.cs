@@ -47,7 +47,7 @@ public static class StoneReadingsConverter
         double? Num(string field, string? text)
         {
             if (text is null) return null;
-            if (BenchNumber.TryParse(text, out double v, out string problem)) return v;
+            if (BenchNumber.TryParse(BenchSyntax.NumberText(field, text), out double v, out string problem)) return v;
             if (!lenient) errors.Add(new BenchFieldError(field, BenchText.Shown(text), "a number", problem));
             return null;
         }

@@ -91,6 +91,19 @@ public class BenchReaderTests
         Assert.Equal(1.80, read.Sheet.Refractometer!.LiquidLimit);
     }
 
+    [Theory]
+    [InlineData("17.2")]
+    [InlineData("17.2%")]
+    [InlineData("17.2 %")]
+    public void A_reflectance_reading_may_carry_its_percent_sign(string typed)
+    {
+        // A meter shows "17.2 %" (a diamond's reflectance, Fresnel at n 2.417, from memory); the sign had been "not a number".
+        var reading = BenchReader.Read(R((BenchField.Reflectance, typed)));
+        Assert.Empty(reading.Errors);
+        Assert.Equal(17.2, reading.Sheet.Reflectance!.Value.Percent);
+        Assert.Contains("allowed: 1 to 30 %", Assert.Single(BenchReader.Read(R((BenchField.Reflectance, "high%"))).Errors).Sentence, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void As_used_by_its_reading_a_stone_keeps_only_what_the_reader_took()
     {

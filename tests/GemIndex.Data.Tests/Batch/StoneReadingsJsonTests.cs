@@ -200,5 +200,9 @@ public class StoneReadingsJsonTests
         string written = StoneReadingsJson.Write(stored);
         Assert.Contains("\"reflectance_pct\":17.2", written, StringComparison.Ordinal);
         Assert.Equal(17.2, StoneReadingsJson.Parse(written).ReflectancePct);
+        // Typed with its percent sign at the bench ("17.2 %"), it is stored as the number (it had been left out).
+        var typed = new GemIndex.Core.Bench.BenchReadings().With(GemIndex.Core.Bench.BenchField.Reflectance, "17.2 %");
+        Assert.Equal(17.2, StoneReadingsConverter.FromReadings(typed, lenient: true).ReflectancePct);
+        Assert.Equal(17.2, StoneReadingsConverter.FromReadings(typed, lenient: false).ReflectancePct);
     }
 }
