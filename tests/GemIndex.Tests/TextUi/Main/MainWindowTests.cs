@@ -97,11 +97,7 @@ public sealed class MainWindowTests : IDisposable
     [Fact]
     public void A_rotation_step_set_after_the_first_step_applies_to_the_next_step_offered()
     {
-        using IApplication app = Headless.Start();
-        using var window = new MainWindow(_session, TestMaterials.All);
-        _session.Start();
-        window.FillFromModel();
-        SessionToken token = app.Begin(window)!;
+        var (app, window, token) = Open();
         window.ShowPage(1);
         window.Refractometer.Low.SetFocus();
         Type(app, "1.762");
@@ -125,17 +121,13 @@ public sealed class MainWindowTests : IDisposable
         window.Refractometer.StepField.Edit.SetFocus();
         window.Refractometer.StepField.Edit.Text = "45";
         Assert.Equal("75", window.Refractometer.Rotation.Text);
-        app.End(token);
+        Close(app, window, token);
     }
 
     [Fact]
     public void On_the_step_list_the_key_line_says_its_keys_and_Del_after_Del_goes_on_removing_steps()
     {
-        using IApplication app = Headless.Start();
-        using var window = new MainWindow(_session, TestMaterials.All);
-        _session.Start();
-        window.FillFromModel();
-        SessionToken token = app.Begin(window)!;
+        var (app, window, token) = Open();
         window.ShowPage(1);
         window.Refractometer.Low.SetFocus();
         // Invented quartz-like steps (ω 1.544, ε' to 1.553: common practice).
@@ -148,17 +140,13 @@ public sealed class MainWindowTests : IDisposable
         Assert.Equal(["0", "15"], _session.Form.Steps.Select(s => s.Rotation));
         app.LayoutAndDraw();
         Assert.Contains(GemIndex.Cli.TextUi.Bench.RefractometerPage.StepListKeys, app.Driver!.ToString()!);
-        app.End(token);
+        Close(app, window, token);
     }
 
     [Fact]
     public void Edges_typed_in_the_rotation_box_go_to_the_edges_and_the_step_is_stored_at_the_offered_rotation()
     {
-        using IApplication app = Headless.Start();
-        using var window = new MainWindow(_session, TestMaterials.All);
-        _session.Start();
-        window.FillFromModel();
-        SessionToken token = app.Begin(window)!;
+        var (app, window, token) = Open();
         window.ShowPage(1);
         // Tab stops at the rotation's box before the edges: both edges typed there with Enter, then one edge, a space
         // and the high edge in the high edge's box (invented tourmaline-like edges, handbook values from memory).
@@ -187,17 +175,13 @@ public sealed class MainWindowTests : IDisposable
         app.LayoutAndDraw();
         Assert.Equal(2, _session.Form.Steps.Count);
         Assert.Contains("Step not stored: the low edge is empty", app.Driver!.ToString()!);
-        app.End(token);
+        Close(app, window, token);
     }
 
     [Fact]
     public void A_bad_entry_is_marked_at_its_field_and_the_candidates_stay()
     {
-        using IApplication app = Headless.Start();
-        using var window = new MainWindow(_session, TestMaterials.All);
-        _session.Start();
-        window.FillFromModel();
-        SessionToken token = app.Begin(window)!;
+        var (app, window, token) = Open();
         window.ShowPage(2);
         Type(app, "2.65");
         app.InjectKey(Key.Tab);             // weight in air
@@ -212,7 +196,7 @@ public sealed class MainWindowTests : IDisposable
         Assert.Contains("! Water: '2x' is not a number", screen);
         Assert.Contains("SG 2.65 ± 0.01", screen);
         Assert.Equal("2x", _session.Form.Text(BenchFields.WaterC));
-        app.End(token);
+        Close(app, window, token);
     }
 
     [Fact]
@@ -273,11 +257,7 @@ public sealed class MainWindowTests : IDisposable
     [Fact]
     public void A_mouse_click_on_the_page_bar_changes_page_and_a_click_on_a_choice_cycles_it()
     {
-        using IApplication app = Headless.Start();
-        using var window = new MainWindow(_session, TestMaterials.All);
-        _session.Start();
-        window.FillFromModel();
-        SessionToken token = app.Begin(window)!;
+        var (app, window, token) = Open();
         app.LayoutAndDraw();
         app.InjectSequence(InputInjectionExtensions.LeftButtonClick(new System.Drawing.Point(33, 0)));   // " F5 Tests "
         Assert.Equal(3, window.CurrentPage);
@@ -287,17 +267,13 @@ public sealed class MainWindowTests : IDisposable
         app.InjectSequence(InputInjectionExtensions.LeftButtonClick(at));
         Settle();
         Assert.Equal("singly_refractive", _session.Form.Choice(BenchFields.Polariscope));
-        app.End(token);
+        Close(app, window, token);
     }
 
     [Fact]
     public void The_cut_is_picked_on_the_stone_page_and_reaches_the_answer()
     {
-        using IApplication app = Headless.Start();
-        using var window = new MainWindow(_session, TestMaterials.All);
-        _session.Start();
-        window.FillFromModel();
-        SessionToken token = app.Begin(window)!;
+        var (app, window, token) = Open();
         window.ShowPage(0);
         window.Pages[0].Choices[0].SetFocus();
         app.InjectKey(new Key('f'));
@@ -310,17 +286,13 @@ public sealed class MainWindowTests : IDisposable
         // The answer's readings say it, and the reader counts the star and the cat's-eye as not seen.
         Assert.Contains(window.Results.Rows, r => r.Text.Contains("Cut: faceted", StringComparison.Ordinal));
         Assert.True(_session.Results.Latest!.Readings.Cut == "faceted");
-        app.End(token);
+        Close(app, window, token);
     }
 
     [Fact]
     public void A_choice_is_picked_with_one_letter()
     {
-        using IApplication app = Headless.Start();
-        using var window = new MainWindow(_session, TestMaterials.All);
-        _session.Start();
-        window.FillFromModel();
-        SessionToken token = app.Begin(window)!;
+        var (app, window, token) = Open();
         window.ShowPage(3);
         window.Pages[3].Choices[0].SetFocus();
         app.InjectKey(new Key('d'));
@@ -328,7 +300,7 @@ public sealed class MainWindowTests : IDisposable
         app.LayoutAndDraw();
         Assert.Equal("doubly_refractive", _session.Form.Choice(BenchFields.Polariscope));
         Assert.Contains("[doubly refractive]", app.Driver!.ToString()!);
-        app.End(token);
+        Close(app, window, token);
     }
 
     [Theory]
