@@ -111,7 +111,7 @@ internal sealed class CatalogueBrowserModel(IReadOnlyList<Material> materials)
 
     /// <summary>Tolerances outside the range, plus a hundredth of a tolerance per tolerance from its middle (ties go to the centred entry).</summary>
     private static double Closeness(double low, double high, double x, double tolerance) =>
-        Outside(low, high, x) / tolerance + Math.Abs(x - (low + high) / 2) / (tolerance * 100);
+        Parts(low, high, x, tolerance) is var (outside, middle) ? outside + middle : 0;
 
     // The origin's word too ("synthetic" finds laboratory-grown diamond and cubic zirconia, whose names do not say it).
     private static bool Matches(Material m, string q) =>

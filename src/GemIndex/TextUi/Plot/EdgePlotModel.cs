@@ -22,9 +22,7 @@ internal sealed class EdgePlotModel(IReadOnlyList<EdgeReadingEntry> steps, doubl
     /// (they meet there: one mark stands for both; a tourmaline's single edge where ω and ε' meet had been drawn as a high
     /// edge above the liquid).
     /// </summary>
-    public IReadOnlyList<(double Rotation, double Index)> Meeting { get; } =
-        [.. steps.Where(s => s.High is { } h ? Math.Abs(h - s.Low) < 0.0005 : LowestHigh(steps) is { } lowest && !IsLowOnly(s, lowest))
-            .OrderBy(s => s.RotationDeg).Select(s => (s.RotationDeg, s.Low))];
+    public IReadOnlyList<(double Rotation, double Index)> Meeting { get; } = Meetings(steps, LowestHigh(steps));
 
     public bool IsEmpty => Low.Count == 0;
 
@@ -42,6 +40,10 @@ internal sealed class EdgePlotModel(IReadOnlyList<EdgeReadingEntry> steps, doubl
     /// </summary>
     public double? LiquidLimit => HighUnseen.Count > 0 && (liquidLimit ?? Core.Bench.BenchDefaults.LiquidLimit) is var limit
         && High.Max(p => p.Index) >= limit - RotationSeriesResult.HiddenHighReach ? limit : null;
+
+    private static List<(double Rotation, double Index)> Meetings(IReadOnlyList<EdgeReadingEntry> steps, double? lowestHigh) =>
+        [.. steps.Where(s => s.High is { } h ? Math.Abs(h - s.Low) < 0.0005 : lowestHigh is { } lowest && !IsLowOnly(s, lowest))
+            .OrderBy(s => s.RotationDeg).Select(s => (s.RotationDeg, s.Low))];
 
     private static double? LowestHigh(IReadOnlyList<EdgeReadingEntry> steps) =>
         steps.Any(s => s.High is not null) ? steps.Where(s => s.High is not null).Min(s => s.High!.Value) : null;
